@@ -1,0 +1,81 @@
+/** The validated config, every default filled in and every path absolute. */
+export type Task = 'classification' | 'regression';
+export type MetricName = 'accuracy' | 'rmse' | 'mae' | 'max-abs-error';
+export type Activation = 'tanh' | 'logistic' | 'relu';
+export type Optimizer = 'irprop+' | 'adam' | 'backprop';
+export type Init = 'nguyen-widrow' | 'glorot' | 'he';
+export type GrowthMode = 'fresh' | 'in-place';
+
+export interface DataConfig {
+  /** Absolute path of the CSV file. */
+  path: string;
+  /** Path as written in the config, relative to the config's folder (for messages). */
+  pathAsWritten: string;
+  target: string;
+  /** null: every column but target and ignore. */
+  features: string[] | null;
+  ignore: string[];
+  task: 'auto' | Task;
+  /** Held-out fraction in [0, 1); 0 judges on the training rows. */
+  validation: number;
+  delimiter: string;
+  /** Most distinct values a categorical feature may have. */
+  maxCategories: number;
+  /** What to do with a row whose feature value is empty. */
+  missing: 'error' | 'drop';
+}
+
+export interface TargetConfig {
+  metric: MetricName;
+  /** accuracy: at least this; error metrics: at most this (in the target's units). */
+  threshold: number;
+}
+
+export interface SearchConfig {
+  minWidth: number;
+  maxWidth: number;
+  restarts: number;
+  required: number;
+  maxEpochs: number;
+  seed: number;
+  growth: GrowthMode;
+  activation: Activation;
+  optimizer: Optimizer;
+  /** null: the activation's usual initialisation (Nguyen-Widrow for tanh/logistic, He for ReLU). */
+  init: Init | null;
+  /** Validation metric is checked every this many epochs. */
+  checkEvery: number;
+  /** Epochs of retraining after each pruning step. */
+  pruneEpochs: number;
+  /** Whether to run the prune phase at all. */
+  prune: boolean;
+  /** Overall wall-clock budget in seconds; null = none. */
+  timeBudget: number | null;
+  /** Cap on the number of trainings; null = none. */
+  maxTrainings: number | null;
+  /** Worker threads; null = the machine's available parallelism. */
+  workers: number | null;
+}
+
+export interface GateConfig {
+  /** Absolute path of the baseline file. */
+  baseline: string;
+  baselineAsWritten: string;
+  /** Hard device budget; null = none. */
+  maxWidth: number | null;
+  /** Neurons the width may grow over the baseline before the verdict is fail. */
+  allowedGrowth: number;
+  /** How much worse the metric at the chosen width may get before it is flagged. */
+  metricTolerance: number;
+}
+
+export interface Config {
+  /** Absolute path of the config file. */
+  file: string;
+  /** Absolute workspace root that no path may leave. */
+  root: string;
+  data: DataConfig;
+  target: TargetConfig;
+  search: SearchConfig;
+  gate: GateConfig;
+}

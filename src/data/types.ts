@@ -1,0 +1,80 @@
+import type { Task } from '../config/types.js';
+
+/** How one input column becomes network inputs; enough to run a model on raw rows. */
+export type FeatureEncoding =
+  | { kind: 'numeric'; name: string; mean: number; std: number }
+  | { kind: 'categorical'; name: string; categories: string[] };
+
+export interface TargetEncoding {
+  name: string;
+  task: Task;
+  /** Classification: class labels in index order (stable: sorted by label). */
+  classes: string[] | null;
+  /** Regression: y_encoded = (y - mean) / std; metrics are reported in original units. */
+  mean: number;
+  std: number;
+}
+
+export interface Encoding {
+  /** In input order; a categorical feature takes categories.length consecutive inputs. */
+  features: FeatureEncoding[];
+  target: TargetEncoding;
+}
+
+/**
+ * The data as the networks see it. Arrays are row-major and allocated on
+ * SharedArrayBuffer so worker threads read them without copies.
+ */
+export interface EncodedDataset {
+  task: Task;
+  /** Network inputs after encoding (D). */
+  inputs: number;
+  /** Network output units: classes for 3+ classes, 1 for two classes (logistic), 1 for regression. */
+  outputs: number;
+  trainRows: number;
+  /** 0 when validation is 0; then the target is judged on the training rows. */
+  validationRows: number;
+  xTrain: Float64Array; // trainRows * inputs
+  /** Classification: class index per row; regression: standardised target per row. */
+  yTrain: Float64Array; // trainRows
+  xValidation: Float64Array; // validationRows * inputs
+  yValidation: Float64Array; // validationRows
+  encoding: Encoding;
+}
+
+export interface NumericProfile {
+  kind: 'numeric';
+  mean: number;
+  std: number;
+  min: number;
+  max: number;
+  missing: number;
+}
+
+export interface CategoricalProfile {
+  kind: 'categorical';
+  /** Count per category, keys sorted. */
+  counts: Record<string, number>;
+  missing: number;
+}
+
+/** A summary of the data as used, for comparison with the baseline's. */
+export interface DataProfile {
+  rows: number;
+  /** Rows per class (classification), keys sorted; null for regression. */
+  classes: Record<string, number> | null;
+  /** Every column used (features and target) in file order. */
+  columns: string[];
+  /** Per feature, keyed by column name. */
+  features: Record<string, NumericProfile | CategoricalProfile>;
+}
+
+export interface LoadedData {
+  dataset: EncodedDataset;
+  /** Rows kept after dropping rows with missing values (when allowed). */
+  rows: number;
+  droppedRows: number;
+  /** sha256 hex of the canonical form of the data as used. */
+  fingerprint: string;
+  profile: DataProfile;
+}

@@ -1,0 +1,100 @@
+/**
+ * The training engine's public surface, used by src/search. Pure computation: no I/O,
+ * no clocks, no Math.random. (Contract stub: the engine fills these in.)
+ */
+import type { Activation, Init, Optimizer, TargetConfig } from '../config/types.js';
+import type { EncodedDataset } from '../data/types.js';
+
+export type Head = 'softmax' | 'logistic' | 'linear';
+
+/** A seeded xoshiro128** 1.1 stream. */
+export interface Rng {
+  /** Next 32-bit unsigned integer. */
+  nextUint32(): number;
+  /** Next double in [0, 1) with 53 random bits. */
+  nextDouble(): number;
+}
+
+/** Independent stream for restart `restart` of width `width` under base seed `seed`. */
+export declare function rngFor(seed: number, width: number, restart: number): Rng;
+
+/** An opaque trained or untrained network; weights live in contiguous typed memory. */
+export interface Network {
+  readonly inputs: number;
+  readonly width: number;
+  readonly outputs: number;
+  readonly activation: Activation;
+  readonly head: Head;
+}
+
+/** Plain-JSON form of a network (the witness export's `network` part). */
+export interface NetworkJson {
+  inputs: number;
+  width: number;
+  outputs: number;
+  activation: Activation;
+  head: Head;
+  /** width rows of inputs weights. */
+  hiddenWeights: number[][];
+  hiddenBias: number[];
+  /** outputs rows of width weights. */
+  outputWeights: number[][];
+  outputBias: number[];
+}
+
+export type StopReason = 'reached' | 'stalled' | 'diverged' | 'max-epochs';
+
+export interface TrainOptions {
+  activation: Activation;
+  init: Init | null;
+  optimizer: Optimizer;
+  maxEpochs: number;
+  /** The target is checked on the validation rows (training rows when there are none) every this many epochs. */
+  checkEvery: number;
+  target: TargetConfig;
+  /** Dynamic Node Creation trigger; null: never stop as stalled. */
+  stall: { window: number; threshold: number } | null;
+}
+
+export interface TrainRecord {
+  /** Epochs run by this call. */
+  epochs: number;
+  stop: StopReason;
+  trainLoss: number;
+  /** The target metric on the training rows (original units for regression). */
+  trainMetric: number;
+  /** The target metric on the validation rows (training rows when there are none). */
+  validationMetric: number;
+}
+
+/**
+ * Owns one network and its optimiser state while it trains, grows and shrinks.
+ */
+export interface Trainer {
+  readonly network: Network;
+  /** Train up to `maxEpochs` more epochs (stopping early as the options say). */
+  run(maxEpochs: number): TrainRecord;
+  /** Add a hidden neuron without changing the network's function; resets its optimiser state. */
+  addNeuron(rng: Rng): void;
+  /** Remove hidden neuron j, folding its mean activation (over training rows) into the output biases. */
+  removeNeuron(j: number): void;
+  /** Compensated-ablation loss increase per hidden neuron, in one pass over the training rows. */
+  saliency(): Float64Array;
+  /** The current metrics without training. */
+  evaluate(): TrainRecord;
+  /** A deep copy of the current network. */
+  snapshot(): NetworkJson;
+}
+
+export declare function createTrainer(
+  data: EncodedDataset,
+  width: number,
+  options: TrainOptions,
+  rng: Rng,
+): Trainer;
+
+/** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
+export declare function predict(net: NetworkJson, x: Float64Array, rows: number): Float64Array;
+
+/** True when `value` meets the target (accuracy: >= threshold; error metrics: <= threshold). */
+export declare function meetsTarget(value: number, target: TargetConfig): boolean;
