@@ -1,5 +1,6 @@
 import type { MetricName, Task } from '../config/types.js';
 import type { PruneStep, SearchOutcome, WidthSummary } from '../search/types.js';
+import type { BaselineWidth, DataChanges, HistoryEntry } from '../gate/types.js';
 
 export type Verdict = 'pass' | 'fail' | 'improved' | 'new' | 'inconclusive';
 
@@ -15,7 +16,28 @@ export interface Report {
   reasons: string[];
   width: number | null;
   metric: { name: MetricName; value: number | null; threshold: number };
-  baseline: { width: number | null; metric: number | null } | null;
+  baseline: {
+    width: number | null;
+    metric: number | null;
+    /** The fields below are filled by the gate (src/gate/report.ts). */
+    /** Baseline file as written in the config. */
+    file?: string;
+    /** Success at the baseline's width: restarts that reached the target, restarts run. */
+    reached?: number | null;
+    restarts?: number | null;
+    rows?: number;
+    /** Search time recorded in the baseline file (an input, so not a figure of this run). */
+    searchSeconds?: number | null;
+    toolVersion?: string;
+    /** false when the result-changing settings differ from the baseline's. */
+    sameSettings?: boolean;
+    /** Settings that differ, as `key: before → after`. */
+    settingsChanged?: string[];
+    widths?: BaselineWidth[];
+    history?: HistoryEntry[];
+  } | null;
+  /** Gate settings the verdict was judged with (filled by the gate). */
+  gate?: { maxWidth: number | null; allowedGrowth: number; metricTolerance: number; baselineFile: string } | null;
   data: {
     file: string;
     rows: number;
@@ -36,7 +58,7 @@ export interface Report {
     trainings: number;
     note: string | null;
   } | null;
-  /** Data changes against the baseline (filled by the gate). */
-  changes: unknown;
+  /** Data changes against the baseline (filled by the gate); null without a baseline. */
+  changes: DataChanges | null;
   timing: Record<string, number>;
 }

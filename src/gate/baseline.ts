@@ -1,0 +1,378 @@
+/**
+ * The baseline file: build it from a run, carry its history forward, read it back with
+ * clear errors, and write it atomically. Everything here is pure except readBaseline
+ * and writeBaseline; dates are passed in, never read from a clock.
+ */
+import { readFile } from 'node:fs/promises';
+import type { Config, MetricName } from '../config/types.js';
+import type { LoadedData } from '../data/types.js';
+import { UserError } from '../errors.js';
+import { writeFileAtomic } from '../files/atomic.js';
+import type { SearchResult } from '../search/types.js';
+import { findJsonSyntaxProblem } from './json-position.js';
+import { resultSettings, settingsFingerprint } from './settings.js';
+import {
+  BASELINE_SCHEMA,
+  BASELINE_VERSION,
+  HISTORY_CAP,
+  type Baseline,
+  type BaselineWidth,
+  type HistoryEntry,
+} from './types.js';
+
+/** The facts of one run that a baseline records. */
+export interface RunFacts {
+  result: SearchResult;
+  loaded: Pick<LoadedData, 'fingerprint' | 'profile'>;
+  config: Config;
+}
+
+export interface BaselineMeta {
+  /** When the baseline is written; the shell passes new Date(). */
+  date: Date;
+  /** Commit the data came from, when known. */
+  commit: string | null;
+  toolVersion: string;
+}
+
+/**
+ * Why this run cannot become a baseline, or null when it can. A baseline only ever
+ * records a width that was found: a failed or unfinished search leaves the file as it was.
+ */
+export function whyNotRecordable(result: SearchResult): string | null {
+  if (result.outcome === 'inconclusive') {
+    return 'the search did not finish, so there is no result to record; the baseline file was left unchanged';
+  }
+  if (result.outcome !== 'found' || result.width === null || result.metric === null) {
+    return 'no width reached the target, so there is no result to record; the baseline file was left unchanged';
+  }
+  return null;
+}
+
+/**
+ * The baseline that accepting `current` produces: its headline and curve, with the
+ * previous baseline's history carried forward and this result appended (newest last,
+ * oldest dropped beyond HISTORY_CAP). Throws if the run is not recordable; check
+ * whyNotRecordable first.
+ */
+export function nextBaseline(previous: Baseline | null, current: RunFacts, meta: BaselineMeta): Baseline {
+  const { result, loaded, config } = current;
+  const problem = whyNotRecordable(result);
+  if (problem !== null || result.width === null || result.metric === null) {
+    throw new Error(`nextBaseline called with an unrecordable result: ${problem ?? 'no width'}`);
+  }
+  const width = result.width;
+  const atWidth = result.widths.find((w) => w.width === width) ?? null;
+  const settings = resultSettings(config);
+  const entry: HistoryEntry = {
+    width,
+    metric: result.metric,
+    rows: loaded.profile.rows,
+    data: loaded.fingerprint,
+    commit: commitHash(meta.commit),
+    date: meta.date.toISOString(),
+  };
+  const history = [...(previous?.history ?? []), entry].slice(-HISTORY_CAP);
+  return {
+    schema: BASELINE_SCHEMA,
+    tool: { name: 'neuron-budget', version: meta.toolVersion },
+    result: {
+      width,
+      metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
+      grownWidth: result.grownWidth,
+      reached: atWidth ? atWidth.reached : null,
+      restarts: atWidth ? atWidth.restarts : null,
+      searchSeconds: result.timing.searchSeconds,
+    },
+    widths: result.widths.map(
+      (w): BaselineWidth => ({ width: w.width, restarts: w.restarts, reached: w.reached, best: w.best }),
+    ),
+    data: {
+      file: config.data.pathAsWritten.replace(/\\/g, '/'),
+      rows: loaded.profile.rows,
+      fingerprint: loaded.fingerprint,
+      profile: loaded.profile,
+    },
+    config: { fingerprint: settingsFingerprint(settings), settings },
+    history,
+  };
+}
+
+/** A commit id as the history stores it (lower-case hex), or null when it is not one. */
+function commitHash(commit: string | null): string | null {
+  if (commit === null) return null;
+  const c = commit.trim().toLowerCase();
+  return /^[0-9a-f]{4,64}$/.test(c) ? c : null;
+}
+
+export function serializeBaseline(baseline: Baseline): string {
+  return `${JSON.stringify(baseline, null, 2)}\n`;
+}
+
+/**
+ * Writes the baseline atomically (temp file beside it, then rename). The text is first
+ * read back through the same validation a later run will use, so a value JSON cannot
+ * hold (NaN becomes null) can never produce a baseline that the next run rejects.
+ */
+export async function writeBaseline(path: string, baseline: Baseline): Promise<void> {
+  const text = serializeBaseline(baseline);
+  try {
+    parseBaseline(text, path);
+  } catch (e) {
+    throw new Error(`refusing to write a baseline that would not read back: ${(e as Error).message}`);
+  }
+  await writeFileAtomic(path, text);
+}
+
+/**
+ * Reads a baseline. Missing file → null (the verdict is then `new`). A file that is not
+ * valid JSON, of another schema version, or of the wrong shape → UserError naming the
+ * file (`shown`, the path as the user wrote it), and the line/column or key.
+ */
+export async function readBaseline(path: string, shown: string = path): Promise<Baseline | null> {
+  let text: string;
+  try {
+    text = await readFile(path, 'utf8');
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') return null;
+    if (code === 'EISDIR') throw new UserError(`${shown}: expected a baseline file, found a folder`, { file: shown });
+    throw new UserError(`${shown}: cannot read the baseline file (${code ?? 'unknown error'})`, { file: shown });
+  }
+  return parseBaseline(text, shown);
+}
+
+/** Parses and validates baseline text; `shown` names the file in messages. */
+export function parseBaseline(text: string, shown: string): Baseline {
+  if (text.trim() === '') {
+    throw new UserError(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
+      file: shown,
+    });
+  }
+  const syntax = findJsonSyntaxProblem(text);
+  if (syntax) {
+    throw new UserError(`${shown}:${syntax.line}:${syntax.column}: the baseline is not valid JSON: ${syntax.detail}`, {
+      file: shown,
+      line: syntax.line,
+      column: syntax.column,
+    });
+  }
+  const value: unknown = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+  checkSchemaVersion(value, shown);
+  validateBaselineShape(value, shown);
+  return value;
+}
+
+function checkSchemaVersion(value: unknown, shown: string): void {
+  if (!isObject(value)) {
+    throw new UserError(`${shown}: expected a neuron-budget baseline (a JSON object), found ${describe(value)}`, {
+      file: shown,
+    });
+  }
+  const schema = 'schema' in value ? value['schema'] : MISSING;
+  const match = typeof schema === 'string' ? /^neuron-budget\/baseline@(\d+)$/.exec(schema) : null;
+  if (!match) {
+    throw new UserError(
+      `${shown}: schema: expected "${BASELINE_SCHEMA}", found ${describe(schema)}; this file is not a neuron-budget baseline`,
+      { file: shown, key: 'schema' },
+    );
+  }
+  const version = Number(match[1]);
+  if (version > BASELINE_VERSION) {
+    throw new UserError(
+      `${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`,
+      { file: shown, key: 'schema' },
+    );
+  }
+  if (version !== BASELINE_VERSION) {
+    throw new UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${describe(schema)}`, {
+      file: shown,
+      key: 'schema',
+    });
+  }
+}
+
+// ---- shape validation: mirrors schema/baseline.schema.json ----
+
+const METRICS: readonly MetricName[] = ['accuracy', 'rmse', 'mae', 'max-abs-error'];
+const HEX64 = /^[0-9a-f]{64}$/;
+
+type Check = (v: unknown, key: string) => void;
+
+class ShapeError {
+  constructor(
+    readonly key: string,
+    readonly expected: string,
+    readonly found: unknown,
+  ) {}
+}
+
+function validateBaselineShape(value: unknown, shown: string): asserts value is Baseline {
+  try {
+    baselineCheck(value, '');
+  } catch (e) {
+    if (!(e instanceof ShapeError)) throw e;
+    const found = e.found === MISSING ? 'nothing (the key is missing)' : describe(e.found);
+    throw new UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${found}`, { file: shown, key: e.key });
+  }
+}
+
+const MISSING = Symbol('missing');
+
+const join = (key: string, child: string | number): string =>
+  typeof child === 'number' ? `${key}[${child}]` : key === '' ? child : `${key}.${child}`;
+
+function object(fields: Record<string, Check>): Check {
+  return (v, key) => {
+    if (!isObject(v)) throw new ShapeError(key || '(top level)', 'an object', v);
+    for (const [name, check] of Object.entries(fields)) {
+      check(name in v ? v[name] : MISSING, join(key, name));
+    }
+    for (const name of Object.keys(v)) {
+      if (!(name in fields)) {
+        throw new ShapeError(join(key, name), `no such key (allowed: ${Object.keys(fields).join(', ')})`, v[name]);
+      }
+    }
+  };
+}
+
+function record(check: Check): Check {
+  return (v, key) => {
+    if (!isObject(v)) throw new ShapeError(key, 'an object', v);
+    for (const [name, child] of Object.entries(v)) check(child, join(key, name));
+  };
+}
+
+function list(check: Check, max = Infinity): Check {
+  return (v, key) => {
+    if (!Array.isArray(v)) throw new ShapeError(key, 'a list', v);
+    if (v.length > max) throw new ShapeError(key, `a list of at most ${max} entries`, v.length);
+    v.forEach((child, i) => check(child, join(key, i)));
+  };
+}
+
+const nullable =
+  (check: Check): Check =>
+  (v, key) => {
+    if (v !== null) check(v, key);
+  };
+
+const integer =
+  (min: number): Check =>
+  (v, key) => {
+    if (typeof v !== 'number' || !Number.isInteger(v) || v < min) {
+      throw new ShapeError(key, `an integer of at least ${min}`, v);
+    }
+  };
+
+const finite: Check = (v, key) => {
+  if (typeof v !== 'number' || !Number.isFinite(v)) throw new ShapeError(key, 'a number', v);
+};
+
+const nonNegative: Check = (v, key) => {
+  if (typeof v !== 'number' || !Number.isFinite(v) || v < 0) throw new ShapeError(key, 'a number of at least 0', v);
+};
+
+const text: Check = (v, key) => {
+  if (typeof v !== 'string') throw new ShapeError(key, 'a string', v);
+};
+
+const pattern =
+  (re: RegExp, what: string): Check =>
+  (v, key) => {
+    if (typeof v !== 'string' || !re.test(v)) throw new ShapeError(key, what, v);
+  };
+
+const oneOf =
+  (values: readonly string[]): Check =>
+  (v, key) => {
+    if (typeof v !== 'string' || !values.includes(v)) {
+      throw new ShapeError(key, `one of ${values.map((x) => `"${x}"`).join(', ')}`, v);
+    }
+  };
+
+const isoDate: Check = (v, key) => {
+  if (typeof v !== 'string' || !/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/.test(v) || Number.isNaN(Date.parse(v))) {
+    throw new ShapeError(key, 'an ISO 8601 UTC date-time such as "2026-01-31T12:00:00.000Z"', v);
+  }
+};
+
+const settingValue: Check = (v, key) => {
+  if (v === null || typeof v === 'string' || typeof v === 'boolean') return;
+  if (typeof v === 'number' && Number.isFinite(v)) return;
+  if (Array.isArray(v) && v.every((x) => typeof x === 'string')) return;
+  throw new ShapeError(key, 'a string, number, true/false, null or a list of strings', v);
+};
+
+const featureProfile: Check = (v, key) => {
+  if (!isObject(v)) throw new ShapeError(key, 'an object', v);
+  if (v['kind'] === 'numeric') {
+    object({ kind: text, mean: finite, std: nonNegative, min: finite, max: finite, missing: integer(0) })(v, key);
+  } else if (v['kind'] === 'categorical') {
+    object({ kind: text, counts: record(integer(0)), missing: integer(0) })(v, key);
+  } else {
+    throw new ShapeError(join(key, 'kind'), 'one of "numeric", "categorical"', 'kind' in v ? v['kind'] : MISSING);
+  }
+};
+
+const widthCheck: Check = (v, key) => {
+  object({ width: integer(1), restarts: integer(0), reached: integer(0), best: nullable(finite) })(v, key);
+  const w = v as BaselineWidth;
+  if (w.reached > w.restarts) throw new ShapeError(join(key, 'reached'), `at most restarts (${w.restarts})`, w.reached);
+};
+
+const baselineCheck: Check = object({
+  schema: text,
+  tool: object({ name: oneOf(['neuron-budget']), version: text }),
+  result: object({
+    width: integer(1),
+    metric: object({ name: oneOf(METRICS), value: finite, threshold: finite }),
+    grownWidth: nullable(integer(1)),
+    reached: nullable(integer(0)),
+    restarts: nullable(integer(0)),
+    searchSeconds: nullable(nonNegative),
+  }),
+  widths: list(widthCheck),
+  data: object({
+    file: text,
+    rows: integer(0),
+    fingerprint: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
+    profile: object({
+      rows: integer(0),
+      classes: nullable(record(integer(0))),
+      columns: list(text),
+      features: record(featureProfile),
+    }),
+  }),
+  config: object({
+    fingerprint: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
+    settings: record(settingValue),
+  }),
+  history: list(
+    object({
+      width: integer(1),
+      metric: finite,
+      rows: integer(0),
+      data: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
+      commit: nullable(pattern(/^[0-9a-f]{4,64}$/, 'a commit hash (hex) or null')),
+      date: isoDate,
+    }),
+    HISTORY_CAP,
+  ),
+});
+
+function isObject(v: unknown): v is Record<string, unknown> {
+  return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+
+function describe(v: unknown): string {
+  if (v === MISSING) return 'nothing';
+  if (v === null) return 'null';
+  if (Array.isArray(v)) return 'a list';
+  if (typeof v === 'object') return 'an object';
+  if (typeof v === 'string') {
+    const s = JSON.stringify(v);
+    return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
+  }
+  return String(v);
+}

@@ -1,0 +1,41 @@
+/** The comparison and data changes for one run against the baseline (pure). */
+import type { Config } from '../config/types.js';
+import type { LoadedData } from '../data/types.js';
+import type { SearchResult } from '../search/types.js';
+import { compare, type Comparison } from './compare.js';
+import { dataChanges } from './data-changes.js';
+import { resultSettings } from './settings.js';
+import type { Baseline, DataChanges } from './types.js';
+
+export interface GateOutcome extends Comparison {
+  /** null without a baseline. */
+  changes: DataChanges | null;
+  baseline: Baseline | null;
+}
+
+export function evaluateGate(input: {
+  result: SearchResult;
+  loaded: Pick<LoadedData, 'fingerprint' | 'profile'>;
+  config: Config;
+  baseline: Baseline | null;
+}): GateOutcome {
+  const { result, loaded, config, baseline } = input;
+  const comparison = compare({
+    result,
+    target: config.target,
+    search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth },
+    gate: config.gate,
+    baseline,
+    settings: resultSettings(config),
+  });
+  const changes = baseline
+    ? dataChanges(
+        baseline.data.profile,
+        loaded.profile,
+        { before: baseline.data.fingerprint, after: loaded.fingerprint },
+        { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') },
+      )
+    : null;
+  return { ...comparison, changes, baseline };
+}
+

@@ -1,0 +1,72 @@
+/**
+ * The config settings that change the search's answer, and their fingerprint. Two runs
+ * with different settings answer different questions, so the gate says so rather than
+ * comparing their widths silently. Worker count and time budget are left out: they
+ * change how long the search takes, not what it finds. The data file's path is left out
+ * too: the data are compared by content (fingerprint and profile, see data-changes.ts),
+ * so a renamed file with the same rows is the same question, and a file with other rows
+ * shows up as a data change, which is what the gate exists to measure.
+ */
+import { createHash } from 'node:crypto';
+import type { Config } from '../config/types.js';
+import type { ResultSettings } from './types.js';
+
+export function resultSettings(config: Config): ResultSettings {
+  const d = config.data;
+  const t = config.target;
+  const s = config.search;
+  return {
+    'data.target': d.target,
+    'data.features': d.features === null ? null : [...d.features],
+    // Order of ignored columns does not matter; order of features does (input order).
+    'data.ignore': [...d.ignore].sort(),
+    'data.task': d.task,
+    'data.validation': d.validation,
+    'data.delimiter': d.delimiter,
+    'data.max-categories': d.maxCategories,
+    'data.missing': d.missing,
+    'target.metric': t.metric,
+    'target.threshold': t.threshold,
+    'search.min-width': s.minWidth,
+    'search.max-width': s.maxWidth,
+    'search.restarts': s.restarts,
+    'search.required': s.required,
+    'search.max-epochs': s.maxEpochs,
+    'search.seed': s.seed,
+    'search.growth': s.growth,
+    'search.activation': s.activation,
+    'search.optimizer': s.optimizer,
+    'search.init': s.init,
+    'search.check-every': s.checkEvery,
+    'search.prune': s.prune,
+    'search.prune-epochs': s.pruneEpochs,
+    'search.max-trainings': s.maxTrainings,
+  };
+}
+
+/** sha256 hex of the settings in canonical form (keys sorted). */
+export function settingsFingerprint(settings: ResultSettings): string {
+  const keys = Object.keys(settings).sort();
+  const canonical = JSON.stringify(keys.map((k) => [k, settings[k]]));
+  return createHash('sha256').update(canonical, 'utf8').digest('hex');
+}
+
+/** Settings that differ, as "key: before → after", in key order. */
+export function settingsDifferences(before: ResultSettings, after: ResultSettings): string[] {
+  const keys = [...new Set([...Object.keys(before), ...Object.keys(after)])].sort();
+  const out: string[] = [];
+  for (const k of keys) {
+    const a = show(before[k]);
+    const b = show(after[k]);
+    if (a !== b) out.push(`${k}: ${a} → ${b}`);
+  }
+  return out;
+}
+
+function show(v: ResultSettings[string] | undefined): string {
+  if (v === undefined) return '(not set)';
+  if (v === null) return '(default)';
+  const s = Array.isArray(v) ? `[${v.join(', ')}]` : String(v);
+  // Long feature lists would drown the sentence they appear in.
+  return s.length > 120 ? `${s.slice(0, 117)}...` : s;
+}

@@ -1,0 +1,60 @@
+/**
+ * The gate stage of the job, for src/run.ts: read the baseline, compare, and in
+ * `baseline` mode record the result. The only gate code that touches files.
+ *
+ * A corrupt or future-version baseline is a UserError in both modes (exit 2): `baseline`
+ * does not silently replace a file it cannot read, because that would throw its history
+ * away; the message tells the user to fix or delete it. A search that found no width
+ * leaves the baseline file untouched.
+ */
+import type { Config, GateConfig } from '../config/types.js';
+import type { LoadedData } from '../data/types.js';
+import type { SearchResult } from '../search/types.js';
+import { nextBaseline, readBaseline, whyNotRecordable, writeBaseline } from './baseline.js';
+import { evaluateGate, type GateOutcome } from './evaluate.js';
+
+export interface GateStageInput {
+  mode: 'check' | 'baseline';
+  result: SearchResult;
+  loaded: Pick<LoadedData, 'fingerprint' | 'profile'>;
+  config: Config;
+  /** Absolute baseline path (the --baseline override, else config.gate.baseline). */
+  baselinePath: string;
+  /** The path as the user wrote it, for messages. */
+  baselineShown: string;
+  /** For the history (baseline mode). */
+  commit: string | null;
+  date: Date;
+  toolVersion: string;
+}
+
+export interface GateStageResult {
+  /** Compared against the baseline as it was before this run. */
+  outcome: GateOutcome;
+  /** Absolute path written (baseline mode, recordable result), else null. */
+  written: string | null;
+  /** Baseline mode: why nothing was written, else null. */
+  notWritten: string | null;
+  /** The gate settings in effect (the --baseline override applied), for withGate. */
+  gate: GateConfig;
+}
+
+export async function runGateStage(input: GateStageInput): Promise<GateStageResult> {
+  const previous = await readBaseline(input.baselinePath, input.baselineShown);
+  const config =
+    input.baselinePath === input.config.gate.baseline
+      ? input.config
+      : { ...input.config, gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown } };
+  const outcome = evaluateGate({ result: input.result, loaded: input.loaded, config, baseline: previous });
+  if (input.mode === 'check') return { outcome, written: null, notWritten: null, gate: config.gate };
+
+  const why = whyNotRecordable(input.result);
+  if (why !== null) return { outcome, written: null, notWritten: why, gate: config.gate };
+  const next = nextBaseline(
+    previous,
+    { result: input.result, loaded: input.loaded, config },
+    { date: input.date, commit: input.commit, toolVersion: input.toolVersion },
+  );
+  await writeBaseline(input.baselinePath, next);
+  return { outcome, written: input.baselinePath, notWritten: null, gate: config.gate };
+}

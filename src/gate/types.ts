@@ -1,0 +1,111 @@
+/**
+ * The baseline file and the gate's outputs. The baseline is a committed JSON document;
+ * its shape is also published as schema/baseline.schema.json for editors.
+ */
+import type { MetricName } from '../config/types.js';
+import type { DataProfile } from '../data/types.js';
+
+export const BASELINE_SCHEMA = 'neuron-budget/baseline@1';
+export const BASELINE_VERSION = 1;
+/** Oldest history entries are dropped beyond this many. */
+export const HISTORY_CAP = 100;
+
+/** One width of the recorded search curve. */
+export interface BaselineWidth {
+  width: number;
+  restarts: number;
+  reached: number;
+  /** Best target metric over the restarts; null when every restart diverged. */
+  best: number | null;
+}
+
+/** One accepted result, kept so capacity drift can be drawn over time. */
+export interface HistoryEntry {
+  width: number;
+  metric: number;
+  rows: number;
+  /** Data fingerprint (sha256 hex) of the data the result came from. */
+  data: string;
+  /** Commit the data came from, when the shell knows it. */
+  commit: string | null;
+  /** ISO 8601 date-time, passed in by the shell. */
+  date: string;
+}
+
+/** Settings that change the search's answer, kebab-case keys as in the config file. */
+export type ResultSettings = Record<string, string | number | boolean | null | string[]>;
+
+export interface Baseline {
+  schema: typeof BASELINE_SCHEMA;
+  tool: { name: 'neuron-budget'; version: string };
+  result: {
+    /** Smallest adequate width. */
+    width: number;
+    metric: { name: MetricName; value: number; threshold: number };
+    /** Width at which the growth phase found it, before pruning. */
+    grownWidth: number | null;
+    /** Restarts that reached the target at `width`, and restarts run there (null when not tried by growth). */
+    reached: number | null;
+    restarts: number | null;
+    /** Wall-clock seconds of the search that produced it (informative only). */
+    searchSeconds: number | null;
+  };
+  widths: BaselineWidth[];
+  data: {
+    /** Data file as written in the config. */
+    file: string;
+    rows: number;
+    fingerprint: string;
+    profile: DataProfile;
+  };
+  config: {
+    /** sha256 hex of the canonical JSON of `settings`. */
+    fingerprint: string;
+    settings: ResultSettings;
+  };
+  /** Every accepted result, this one included as the last entry; oldest first. */
+  history: HistoryEntry[];
+}
+
+export type RowChange = { before: number; after: number };
+
+export interface FeatureShift {
+  name: string;
+  meanBefore: number;
+  meanAfter: number;
+  /** Baseline standard deviation the move is measured in. */
+  stdBefore: number;
+  /** |meanAfter − meanBefore| / stdBefore; null when stdBefore is 0. */
+  shiftInStd: number | null;
+  meanMoved: boolean;
+  rangeBefore: [number, number];
+  rangeAfter: [number, number];
+  rangeWidened: boolean;
+}
+
+export interface CategoryChange {
+  feature: string;
+  appeared: string[];
+  vanished: string[];
+}
+
+/** What changed in the data between the baseline and this run. */
+export interface DataChanges {
+  /** false when the data as used are the same (same fingerprint). */
+  changed: boolean;
+  /** The data file as written in the config, when it differs from the baseline's. */
+  file: { before: string; after: string } | null;
+  rows: RowChange;
+  /** Per class, every class in either profile (classification only). */
+  classes: ({ label: string } & RowChange)[] | null;
+  classesAppeared: string[];
+  classesVanished: string[];
+  /** Numeric features whose mean moved by more than half a baseline std or whose range widened. */
+  features: FeatureShift[];
+  /** Categorical features with categories that appeared or vanished. */
+  categories: CategoryChange[];
+  columnsAdded: string[];
+  columnsRemoved: string[];
+}
+
+export type { Verdict } from '../report/types.js';

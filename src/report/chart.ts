@@ -1,0 +1,79 @@
+/**
+ * Mermaid `xychart-beta` blocks. Only numbers computed by neuron-budget and fixed
+ * words written here ever reach a chart, so nothing from the repository can break it;
+ * `chartText` still refuses anything outside a small alphabet as a second line of defence.
+ *
+ * The constructs used: `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
+ * `y-axis "…" a --> b`, `line [n, …]`, `bar [n, …]`. Every series has exactly one value
+ * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
+ * no value is left out of the chart (the table beside it still lists it).
+ */
+import { formatMetric } from './format.js';
+
+const SAFE_TEXT = /^[A-Za-z0-9 .,-]*$/;
+
+export function chartText(s: string): string {
+  if (!SAFE_TEXT.test(s)) throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
+  return `"${s}"`;
+}
+
+export function chartNumber(n: number): string {
+  const s = formatMetric(n);
+  if (!/^-?\d+(\.\d+)?$/.test(s)) throw new Error(`not a chart number: ${n}`);
+  return s;
+}
+
+export interface ChartSeries {
+  kind: 'line' | 'bar';
+  values: number[];
+}
+
+export interface ChartSpec {
+  title: string;
+  xTitle: string;
+  categories: string[];
+  yTitle: string;
+  yRange: [number, number];
+  series: ChartSeries[];
+}
+
+export function renderChart(spec: ChartSpec): string {
+  for (const s of spec.series) {
+    if (s.values.length !== spec.categories.length) {
+      throw new Error('every chart series needs one value per category');
+    }
+  }
+  const lines = [
+    '```mermaid',
+    'xychart-beta',
+    `  title ${chartText(spec.title)}`,
+    `  x-axis ${chartText(spec.xTitle)} [${spec.categories.map(chartText).join(', ')}]`,
+    `  y-axis ${chartText(spec.yTitle)} ${chartNumber(spec.yRange[0])} --> ${chartNumber(spec.yRange[1])}`,
+    ...spec.series.map((s) => `  ${s.kind} [${s.values.map(chartNumber).join(', ')}]`),
+    '```',
+  ];
+  return lines.join('\n');
+}
+
+/** A y-axis range that shows every value and the threshold with a little room. */
+export function metricRange(values: number[], threshold: number, accuracy: boolean): [number, number] {
+  const all = [...values, threshold].filter(Number.isFinite);
+  if (accuracy) {
+    const low = Math.min(...all);
+    // Keep the axis from collapsing when every value is 1.
+    return [Math.min(0.9, Math.max(0, Math.floor(low * 10) / 10)), 1];
+  }
+  const high = Math.max(...all, 0);
+  return [0, niceCeil(high * 1.1)];
+}
+
+export function countRange(values: number[]): [number, number] {
+  const high = Math.max(1, ...values);
+  return [0, Math.ceil(high * 1.15) + 1];
+}
+
+function niceCeil(x: number): number {
+  if (x <= 0) return 1;
+  const step = 10 ** Math.floor(Math.log10(x));
+  return Math.ceil(x / step) * step;
+}

@@ -1,0 +1,177 @@
+/**
+ * Hand-built inputs for the gate and report tests. All values are invented for the
+ * pump-vibration scenario; none are measurements.
+ */
+import type { Config } from '../../src/config/types.js';
+import type { DataProfile, LoadedData } from '../../src/data/types.js';
+import type { Report } from '../../src/report/types.js';
+import type { PruneStep, SearchResult, WidthSummary } from '../../src/search/types.js';
+import { wilsonInterval } from '../../src/search/wilson.js';
+
+export function config(over: {
+  gate?: Partial<Config['gate']>;
+  search?: Partial<Config['search']>;
+  target?: Partial<Config['target']>;
+  data?: Partial<Config['data']>;
+} = {}): Config {
+  return {
+    file: '/repo/neuron-budget.yml',
+    root: '/repo',
+    data: {
+      path: '/repo/examples/pump-vibration/readings.csv',
+      pathAsWritten: 'examples/pump-vibration/readings.csv',
+      target: 'condition',
+      features: null,
+      ignore: ['reading_id'],
+      task: 'auto',
+      validation: 0.25,
+      delimiter: ',',
+      maxCategories: 20,
+      missing: 'error',
+      ...over.data,
+    },
+    target: { metric: 'accuracy', threshold: 0.95, ...over.target },
+    search: {
+      minWidth: 1,
+      maxWidth: 16,
+      restarts: 10,
+      required: 3,
+      maxEpochs: 3000,
+      seed: 1,
+      growth: 'fresh',
+      activation: 'tanh',
+      optimizer: 'irprop+',
+      init: null,
+      checkEvery: 10,
+      pruneEpochs: 200,
+      prune: true,
+      timeBudget: null,
+      maxTrainings: null,
+      workers: null,
+      ...over.search,
+    },
+    gate: {
+      baseline: '/repo/neuron-budget.baseline.json',
+      baselineAsWritten: 'neuron-budget.baseline.json',
+      maxWidth: 8,
+      allowedGrowth: 0,
+      metricTolerance: 0.02,
+      ...over.gate,
+    },
+  };
+}
+
+/** One width summary; `best` is the best metric over the restarts run. */
+export function width(w: number, reached: number, restarts: number, best: number | null, required = 3): WidthSummary {
+  return {
+    width: w,
+    restarts,
+    reached,
+    adequate: reached >= required,
+    best,
+    median: best === null ? null : best - 0.01,
+    wilson: wilsonInterval(reached, restarts),
+    medianEpochs: 400 + 50 * w,
+    diverged: 0,
+  };
+}
+
+/** A found result whose growth phase went up from 1 to `found` (invented curve). */
+export function found(foundWidth: number, metric: number, opts: { pruning?: PruneStep[]; seconds?: number } = {}): SearchResult {
+  const widths: WidthSummary[] = [];
+  for (let w = 1; w <= foundWidth; w++) {
+    const best = w === foundWidth ? metric : Math.min(0.949, 0.55 + 0.06 * w);
+    widths.push(width(w, w === foundWidth ? 4 : 0, 10, Number(best.toFixed(4))));
+  }
+  return {
+    outcome: 'found',
+    width: foundWidth,
+    grownWidth: foundWidth,
+    metric,
+    witness: null,
+    widths,
+    pruning: opts.pruning ?? [],
+    trainings: widths.length * 10,
+    note: null,
+    timing: { searchSeconds: opts.seconds ?? 12.5, growthSeconds: (opts.seconds ?? 12.5) - 1, pruneSeconds: 1 },
+  };
+}
+
+export function notFound(maxWidth: number): SearchResult {
+  const r = found(maxWidth, 0.9);
+  return {
+    ...r,
+    outcome: 'not-found',
+    width: null,
+    grownWidth: null,
+    metric: null,
+    widths: r.widths.map((w) => ({ ...w, reached: 0, adequate: false, wilson: wilsonInterval(0, w.restarts) })),
+  };
+}
+
+export function inconclusive(): SearchResult {
+  const r = found(3, 0.9);
+  return {
+    ...r,
+    outcome: 'inconclusive',
+    width: null,
+    grownWidth: null,
+    metric: null,
+    note: 'the time budget of 60 s ran out after widths 1 to 3',
+  };
+}
+
+export function profile(over: Partial<DataProfile> = {}): DataProfile {
+  return {
+    rows: 1800,
+    classes: { bearing_wear: 450, imbalance: 450, normal: 900 },
+    columns: ['pump_model', 'rms_velocity', 'kurtosis', 'band_1x', 'condition'],
+    features: {
+      pump_model: { kind: 'categorical', counts: { 'P-100': 1000, 'P-200': 800 }, missing: 0 },
+      rms_velocity: { kind: 'numeric', mean: 2.4, std: 0.8, min: 0.6, max: 5.1, missing: 0 },
+      kurtosis: { kind: 'numeric', mean: 3.2, std: 0.9, min: 1.8, max: 8.4, missing: 0 },
+      band_1x: { kind: 'numeric', mean: 1.1, std: 0.4, min: 0.2, max: 2.6, missing: 0 },
+    },
+    ...over,
+  };
+}
+
+export function loaded(p: DataProfile = profile(), fingerprint = 'a'.repeat(64)): Pick<LoadedData, 'fingerprint' | 'profile'> {
+  return { fingerprint, profile: p };
+}
+
+/** The data-stage report the job builds before the gate runs (what runJob fills). */
+export function dataReport(result: SearchResult, cfg: Config, p: DataProfile = profile(), fingerprint = 'a'.repeat(64)): Report {
+  const validationRows = Math.round(p.rows * cfg.data.validation);
+  return {
+    schema: 'neuron-budget/report@1',
+    tool: { name: 'neuron-budget', version: '0.1.0' },
+    verdict: null,
+    reasons: [],
+    width: result.width,
+    metric: { name: cfg.target.metric, value: result.metric, threshold: cfg.target.threshold },
+    baseline: null,
+    data: {
+      file: cfg.data.pathAsWritten,
+      rows: p.rows,
+      droppedRows: 0,
+      trainRows: p.rows - validationRows,
+      validationRows,
+      inputs: 6,
+      outputs: p.classes ? Object.keys(p.classes).length : 1,
+      task: p.classes ? 'classification' : 'regression',
+      fingerprint,
+      classes: p.classes ? Object.entries(p.classes).map(([label, count]) => ({ label, count })) : null,
+    },
+    search: {
+      outcome: result.outcome,
+      grownWidth: result.grownWidth,
+      widths: result.widths,
+      pruning: result.pruning,
+      trainings: result.trainings,
+      note: result.note,
+    },
+    changes: null,
+    timing: { searchSeconds: result.timing.searchSeconds },
+  };
+}
