@@ -1,0 +1,57 @@
+/**
+ * Workspace confinement for every path a user gives (config paths, action inputs).
+ * A gate that runs on pull requests must not read or write outside the checkout, so a
+ * path may not climb out with `../`, be absolute somewhere else, or pass through a
+ * symbolic link that points outside.
+ */
+import { existsSync, realpathSync } from 'node:fs';
+import { dirname, isAbsolute, relative, resolve, sep } from 'node:path';
+import { UserError } from '../errors.js';
+
+export type InsideResult = { ok: true; path: string } | { ok: false; reason: string };
+
+/** True when `child` is `parent` or lies below it (both absolute and normalised). */
+export function isInside(parent: string, child: string): boolean {
+  const rel = relative(parent, child);
+  return rel === '' || (!rel.startsWith('..' + sep) && rel !== '..' && !isAbsolute(rel));
+}
+
+/** The real location of `p`, following links through its longest existing prefix. */
+function realLocation(p: string): string {
+  let existing = p;
+  const rest: string[] = [];
+  while (!existsSync(existing)) {
+    const parent = dirname(existing);
+    if (parent === existing) return p;
+    rest.unshift(existing.slice(parent.length).replace(/^[\\/]+/, ''));
+    existing = parent;
+  }
+  return resolve(realpathSync(existing), ...rest);
+}
+
+/**
+ * Resolves `p` against `baseDir` and checks that the result stays inside `root`.
+ * Returns the absolute path, or the reason it was refused (for the caller to locate).
+ */
+export function checkInside(root: string, baseDir: string, p: string): InsideResult {
+  if (p.trim() === '') return { ok: false, reason: 'expected a path, found an empty string' };
+  if (p.includes('\0')) return { ok: false, reason: 'a path may not contain a NUL character' };
+  const absoluteRoot = resolve(root);
+  const target = resolve(baseDir, p);
+  const where = isAbsolute(p) ? 'is an absolute path outside' : 'leads outside';
+  if (!isInside(absoluteRoot, target)) {
+    return { ok: false, reason: `"${p}" ${where} the workspace ${absoluteRoot}` };
+  }
+  const realRoot = realLocation(absoluteRoot);
+  if (!isInside(realRoot, realLocation(target))) {
+    return { ok: false, reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}` };
+  }
+  return { ok: true, path: target };
+}
+
+/** As checkInside, but throws a UserError (with `key` when given) instead of returning the reason. */
+export function resolveInside(root: string, baseDir: string, p: string, key?: string): string {
+  const result = checkInside(root, baseDir, p);
+  if (!result.ok) throw new UserError(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
+  return result.path;
+}

@@ -1,0 +1,262 @@
+/**
+ * Every config key the validator accepts, with its rule, default and description, as data.
+ * The validator walks this table; a test walks it against schema/neuron-budget.schema.json
+ * so the two cannot drift apart.
+ */
+
+/** Marks a key the user must give. */
+export const REQUIRED = Symbol('required');
+/** Marks a key whose default depends on another key (the description says how). */
+export const DERIVED = Symbol('derived');
+
+export type ValueRule =
+  | { kind: 'integer'; min: number; max: number; nullable?: boolean }
+  | { kind: 'number'; min: number; max: number; exclusiveMin?: boolean; exclusiveMax?: boolean; nullable?: boolean }
+  | { kind: 'enum'; values: readonly string[]; nullable?: boolean }
+  | { kind: 'boolean' }
+  /** A non-empty text value (a column name). */
+  | { kind: 'text' }
+  /** A single character other than a quote or a line break. */
+  | { kind: 'character' }
+  /** A path, relative to the config file's folder, that must stay inside the workspace. */
+  | { kind: 'path' }
+  /** A list of distinct non-empty texts, with at least `minItems` of them. */
+  | { kind: 'text-list'; minItems: number; nullable?: boolean };
+
+export type DefaultValue = string | number | boolean | null | string[] | typeof REQUIRED | typeof DERIVED;
+
+export interface KeySpec {
+  /** Kebab-case name as written in the file. */
+  name: string;
+  rule: ValueRule;
+  default: DefaultValue;
+  description: string;
+}
+
+export interface SectionSpec {
+  name: 'data' | 'target' | 'search' | 'gate';
+  required: boolean;
+  description: string;
+  keys: readonly KeySpec[];
+}
+
+/** Largest width the search may try: the gate is for small networks on small devices. */
+export const WIDTH_LIMIT = 1024;
+const EPOCH_LIMIT = 10_000_000;
+
+export const CONFIG_SPEC: readonly SectionSpec[] = [
+  {
+    name: 'data',
+    required: true,
+    description: 'The CSV file the networks learn from and how to read it.',
+    keys: [
+      {
+        name: 'path',
+        rule: { kind: 'path' },
+        default: REQUIRED,
+        description: 'CSV file with a header row, relative to this config file. Must stay inside the workspace.',
+      },
+      { name: 'target', rule: { kind: 'text' }, default: REQUIRED, description: 'Column to predict.' },
+      {
+        name: 'features',
+        rule: { kind: 'text-list', minItems: 1, nullable: true },
+        default: null,
+        description: 'Columns used as inputs. Default: every column except the target and the ignored ones.',
+      },
+      {
+        name: 'ignore',
+        rule: { kind: 'text-list', minItems: 0 },
+        default: [],
+        description: 'Columns never used as inputs (identifiers, timestamps).',
+      },
+      {
+        name: 'task',
+        rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
+        default: 'auto',
+        description: 'auto: decided from the target column (text or few distinct values: classification).',
+      },
+      {
+        name: 'validation',
+        rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
+        default: 0.25,
+        description:
+          'Fraction of rows held out to judge the target, stratified by class. 0 judges on the training rows.',
+      },
+      {
+        name: 'delimiter',
+        rule: { kind: 'character' },
+        default: ',',
+        description: 'Field separator: one character (write "\\t" in double quotes for a tab).',
+      },
+      {
+        name: 'max-categories',
+        rule: { kind: 'integer', min: 1, max: 10_000 },
+        default: 20,
+        description: 'Most distinct values a text feature may have; each becomes one input.',
+      },
+      {
+        name: 'missing',
+        rule: { kind: 'enum', values: ['error', 'drop'] },
+        default: 'error',
+        description: 'An empty feature value: error stops with its location; drop skips the row and counts it.',
+      },
+    ],
+  },
+  {
+    name: 'target',
+    required: true,
+    description: 'What a network must reach on the validation rows.',
+    keys: [
+      {
+        name: 'metric',
+        rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
+        default: DERIVED,
+        description:
+          'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
+      },
+      {
+        name: 'threshold',
+        rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
+        default: REQUIRED,
+        description:
+          'accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column\'s units.',
+      },
+    ],
+  },
+  {
+    name: 'search',
+    required: false,
+    description: 'How the smallest adequate width is searched for.',
+    keys: [
+      {
+        name: 'min-width',
+        rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
+        default: 1,
+        description: 'First width the growth phase tries.',
+      },
+      {
+        name: 'max-width',
+        rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
+        default: 16,
+        description: 'Last width the growth phase tries; at least min-width.',
+      },
+      {
+        name: 'restarts',
+        rule: { kind: 'integer', min: 1, max: 1000 },
+        default: 10,
+        description: 'Seeded trainings per width.',
+      },
+      {
+        name: 'required',
+        rule: { kind: 'integer', min: 1, max: 1000 },
+        default: 3,
+        description: 'Trainings per width that must reach the target for the width to count as adequate; at most restarts.',
+      },
+      {
+        name: 'max-epochs',
+        rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+        default: 3000,
+        description: 'Epochs after which one training gives up.',
+      },
+      {
+        name: 'seed',
+        rule: { kind: 'integer', min: 0, max: 4_294_967_295 },
+        default: 1,
+        description: 'Base seed of every random choice (split, initial weights); same seed, same result.',
+      },
+      {
+        name: 'growth',
+        rule: { kind: 'enum', values: ['fresh', 'in-place'] },
+        default: 'fresh',
+        description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
+      },
+      {
+        name: 'activation',
+        rule: { kind: 'enum', values: ['tanh', 'logistic', 'relu'] },
+        default: 'tanh',
+        description: 'Hidden-layer activation function.',
+      },
+      {
+        name: 'optimizer',
+        rule: { kind: 'enum', values: ['irprop+', 'adam', 'backprop'] },
+        default: 'irprop+',
+        description: 'irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+      },
+      {
+        name: 'init',
+        rule: { kind: 'enum', values: ['nguyen-widrow', 'glorot', 'he'], nullable: true },
+        default: null,
+        description: 'Initial weights. Default (null): Nguyen-Widrow for tanh and logistic, He for relu.',
+      },
+      {
+        name: 'check-every',
+        rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+        default: 10,
+        description: 'Epochs between checks of the target on the validation rows; at most max-epochs.',
+      },
+      {
+        name: 'prune',
+        rule: { kind: 'boolean' },
+        default: true,
+        description: 'Whether to remove hidden neurons from the adequate network while it still reaches the target.',
+      },
+      {
+        name: 'prune-epochs',
+        rule: { kind: 'integer', min: 0, max: EPOCH_LIMIT },
+        default: 200,
+        description: 'Epochs of retraining after each neuron removed.',
+      },
+      {
+        name: 'time-budget',
+        rule: { kind: 'number', min: 0, max: 31_536_000, exclusiveMin: true, nullable: true },
+        default: null,
+        description: 'Wall-clock seconds the search may take; when spent the verdict is inconclusive. null: no limit.',
+      },
+      {
+        name: 'max-trainings',
+        rule: { kind: 'integer', min: 1, max: 100_000_000, nullable: true },
+        default: null,
+        description: 'Most trainings the search may run; when spent the verdict is inconclusive. null: no limit.',
+      },
+      {
+        name: 'workers',
+        rule: { kind: 'integer', min: 1, max: 256, nullable: true },
+        default: null,
+        description: 'Worker threads. null: one per available CPU core. Results do not depend on it.',
+      },
+    ],
+  },
+  {
+    name: 'gate',
+    required: false,
+    description: 'How the result is judged against the committed baseline and the device budget.',
+    keys: [
+      {
+        name: 'baseline',
+        rule: { kind: 'path' },
+        default: 'neuron-budget.baseline.json',
+        description: 'Baseline file, relative to this config file. Must stay inside the workspace.',
+      },
+      {
+        name: 'max-width',
+        rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT, nullable: true },
+        default: null,
+        description: 'Hard device budget: a smallest adequate width above it fails. null: no budget.',
+      },
+      {
+        name: 'allowed-growth',
+        rule: { kind: 'integer', min: 0, max: WIDTH_LIMIT },
+        default: 0,
+        description: 'Neurons the width may grow over the baseline before the verdict is fail.',
+      },
+      {
+        name: 'metric-tolerance',
+        rule: { kind: 'number', min: 0, max: Number.MAX_VALUE },
+        // 0.02 is common practice for "noticeably worse" with a few hundred validation rows; no source.
+        default: 0.02,
+        description:
+          'How much worse the metric at the chosen width may get against the baseline before it is flagged (accuracy: below 1).',
+      },
+    ],
+  },
+];

@@ -1,0 +1,156 @@
+// End-to-end: the command line's own surface (commands, flags, exit codes, streams) and a
+// data-stage run, through the BUILT dist/cli/index.js.
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, describe, expect, test } from 'vitest';
+import { hasStackTrace, REPO_ROOT, removeCliTempDirs, runCli } from '../helpers/cli.js';
+
+afterAll(removeCliTempDirs);
+
+// Invented rows, just enough for a stratified split: three classes, one text feature.
+const CSV = [
+  'reading_id,pump_model,rms_velocity,kurtosis,condition',
+  ...Array.from({ length: 30 }, (_, i) => {
+    const condition = ['normal', 'imbalance', 'bearing_wear'][i % 3];
+    const model = i % 2 === 0 ? 'P-100' : 'P-200';
+    return `${i + 1},${model},${(1 + (i % 3) + i / 100).toFixed(2)},${(3 + 2 * (i % 3) + i / 50).toFixed(2)},${condition}`;
+  }),
+  '',
+].join('\n');
+const CONFIG = 'data:\n  path: readings.csv\n  target: condition\n  ignore: [reading_id]\n  validation: 0.2\ntarget:\n  threshold: 0.9\n';
+const FILES = { 'neuron-budget.yml': CONFIG, 'readings.csv': CSV };
+
+function expectUsageError(run: { code: number; stdout: string; stderr: string; created: string[] }, ...fragments: string[]): void {
+  expect(run.code, run.stderr).toBe(2);
+  expect(run.stdout).toBe('');
+  expect(hasStackTrace(run.stderr)).toBe(false);
+  const lines = run.stderr.trimEnd().split('\n');
+  expect(lines).toHaveLength(1);
+  expect(lines[0].startsWith('error: ')).toBe(true);
+  for (const f of fragments) expect(lines[0]).toContain(f);
+  expect(run.created).toEqual([]);
+}
+
+describe('help and version', () => {
+  test('--version prints the version from package.json to stdout', async () => {
+    const pkg = JSON.parse(readFileSync(join(REPO_ROOT, 'package.json'), 'utf8')) as { version: string };
+    const run = await runCli(['--version']);
+    expect(run.code).toBe(0);
+    expect(run.stdout).toBe(`${pkg.version}\n`);
+    expect(run.stderr).toBe('');
+  });
+
+  test('--version after a command still prints the version', async () => {
+    const run = await runCli(['check', '--version']);
+    expect(run.code).toBe(0);
+    expect(run.stdout).toMatch(/^\d+\.\d+\.\d+/);
+  });
+
+  test('--help lists both commands and the exit codes, on stdout', async () => {
+    const run = await runCli(['--help']);
+    expect(run.code).toBe(0);
+    expect(run.stderr).toBe('');
+    for (const word of ['check', 'baseline', '--version', 'exit codes']) expect(run.stdout).toContain(word);
+    for (const line of run.stdout.split('\n')) expect(line.length, line).toBeLessThanOrEqual(80);
+  });
+
+  test('check --help lists every option of check', async () => {
+    const run = await runCli(['check', '--help']);
+    expect(run.code).toBe(0);
+    for (const flag of ['--config', '--report', '--model', '--baseline', '--workers']) expect(run.stdout).toContain(flag);
+  });
+
+  test('baseline --help lists only the options of baseline', async () => {
+    const run = await runCli(['baseline', '--help']);
+    expect(run.code).toBe(0);
+    expect(run.stdout).toContain('--baseline');
+    expect(run.stdout).not.toContain('--report');
+  });
+});
+
+describe('usage mistakes exit with code 2 and one line', () => {
+  test('no command', async () => expectUsageError(await runCli([], { files: FILES }), 'command'));
+  test('unknown command suggests the nearest', async () =>
+    expectUsageError(await runCli(['chek'], { files: FILES }), '"chek"', 'did you mean "check"'));
+  test('unknown option suggests the nearest', async () =>
+    expectUsageError(await runCli(['check', '--confg', 'x.yml'], { files: FILES }), '--confg', 'did you mean "--config"'));
+  test('an option of the other command', async () =>
+    expectUsageError(await runCli(['baseline', '--report', 'r.json'], { files: FILES }), 'baseline has no --report'));
+  test('option without its value', async () =>
+    expectUsageError(await runCli(['check', '--report'], { files: FILES }), '--report needs a value'));
+  test('option followed by another option instead of a value', async () =>
+    expectUsageError(await runCli(['check', '--config', '--report', 'r.json'], { files: FILES }), '--config needs a value'));
+  test('empty value with =', async () =>
+    expectUsageError(await runCli(['check', '--report='], { files: FILES }), '--report needs a value'));
+  test('option given twice', async () =>
+    expectUsageError(await runCli(['check', '--report', 'a.json', '--report=b.json'], { files: FILES }), 'given twice'));
+  test.each(['0', '257', 'four', '2.5', '-1', '1e2'])('--workers %s is refused', async (n) =>
+    expectUsageError(await runCli(['check', `--workers=${n}`], { files: FILES }), '--workers', 'from 1 to 256', `"${n}"`));
+  test('stray positional argument', async () =>
+    expectUsageError(await runCli(['check', 'neuron-budget.yml'], { files: FILES }), 'unexpected argument'));
+  test('report below a file instead of a folder', async () =>
+    expectUsageError(await runCli(['check', '--report', 'readings.csv/out.json'], { files: FILES }), 'is not a folder'));
+  test('report path that is a folder', async () =>
+    expectUsageError(await runCli(['check', '--report', 'out'], { files: { ...FILES, 'out/.keep': '' } }), 'is a folder'));
+  test('report into a folder that does not exist', async () =>
+    expectUsageError(await runCli(['check', '--report', 'missing/out.json'], { files: FILES }), 'missing', 'does not exist'));
+});
+
+describe('check on a small table (data stage)', () => {
+  test('prints the data summary to stderr, keeps stdout clean, writes the report JSON', async () => {
+    const run = await runCli(['check', '--report', 'out/report.json'], {
+      files: { ...FILES, 'out/.keep': '' },
+    });
+    expect(run.code, run.stderr).toBe(0);
+    expect(run.stdout).toBe('');
+    expect(run.created).toEqual(['out/report.json']);
+    const report = JSON.parse(run.read('out/report.json')) as {
+      schema: string;
+      verdict: unknown;
+      data: { rows: number; trainRows: number; validationRows: number; inputs: number; task: string; fingerprint: string; classes: { label: string; count: number }[] };
+      timing: Record<string, number>;
+    };
+    expect(report.schema).toBe('neuron-budget/report@1');
+    expect(report.verdict).toBeNull();
+    // Counted from the CSV above: 30 rows, 10 per class; 20% held out is 6 rows.
+    expect(report.data.rows).toBe(30);
+    expect(report.data.trainRows + report.data.validationRows).toBe(30);
+    expect(report.data.validationRows).toBe(6);
+    // Two numeric features plus the two pump models one-hot.
+    expect(report.data.inputs).toBe(4);
+    expect(report.data.task).toBe('classification');
+    expect(report.data.classes).toEqual([
+      { label: 'bearing_wear', count: 10 },
+      { label: 'imbalance', count: 10 },
+      { label: 'normal', count: 10 },
+    ]);
+    expect(report.data.fingerprint).toMatch(/^[0-9a-f]{64}$/);
+    expect(Object.keys(report.timing)).toEqual(['loadSeconds']);
+    for (const shown of ['30 used', '24 training / 6 validation', 'bearing_wear', report.data.fingerprint]) {
+      expect(run.stderr).toContain(shown);
+    }
+  });
+
+  test('two runs give the same report apart from timing', async () => {
+    const strip = (text: string): unknown => ({ ...(JSON.parse(text) as object), timing: null });
+    const a = await runCli(['check', '--report', 'r.json'], { files: FILES });
+    const b = await runCli(['check', '--report=r.json', '--workers', '2'], { files: FILES });
+    expect(a.code).toBe(0);
+    expect(b.code).toBe(0);
+    expect(strip(b.read('r.json'))).toEqual(strip(a.read('r.json')));
+  });
+
+  test('--config in a subfolder: data.path resolves against the config file, the workspace is the current folder', async () => {
+    const run = await runCli(['check', '--config', 'ci/gate.yml', '--report', 'r.json'], {
+      files: { 'ci/gate.yml': CONFIG.replace('path: readings.csv', 'path: ../data/readings.csv'), 'data/readings.csv': CSV },
+    });
+    expect(run.code, run.stderr).toBe(0);
+    expect(JSON.parse(run.read('r.json')).data.file).toBe('data/readings.csv');
+  });
+
+  test('default config is neuron-budget.yml in the current folder', async () => {
+    const run = await runCli(['check'], { files: { 'sub/neuron-budget.yml': CONFIG, 'sub/readings.csv': CSV }, cwd: 'sub' });
+    expect(run.code, run.stderr).toBe(0);
+    expect(run.stderr).toContain('30 used');
+  });
+});
