@@ -1,0 +1,44 @@
+/**
+ * Bad config and data become error annotations on the offending file and line. The runner
+ * shows at most 10 error annotations per step; past that the rest go to the log only.
+ */
+import { isAbsolute, relative, resolve, sep } from 'node:path';
+import type { UserError } from '../errors.js';
+
+export const ANNOTATION_LIMIT = 10;
+
+export interface Annotation {
+  message: string;
+  file?: string;
+  startLine?: number;
+  startColumn?: number;
+}
+
+/**
+ * Annotation paths are relative to the repository root. Job errors name files relative to the
+ * workspace (the job's root); a path outside it is left off.
+ */
+export function annotationPath(file: string, workspace: string): string | undefined {
+  const abs = isAbsolute(file) ? file : resolve(workspace, file);
+  const rel = relative(workspace, abs);
+  if (rel === '' || rel.startsWith('..') || isAbsolute(rel)) return undefined;
+  return rel.split(sep).join('/');
+}
+
+export function toAnnotation(e: UserError, workspace: string): Annotation {
+  const a: Annotation = { message: e.message };
+  const file = e.file ? annotationPath(e.file, workspace) : undefined;
+  if (file) {
+    a.file = file;
+    if (e.line !== undefined && e.line >= 1) {
+      a.startLine = e.line;
+      if (e.column !== undefined && e.column >= 1) a.startColumn = e.column;
+    }
+  }
+  return a;
+}
+
+/** Splits into what is annotated and what only reaches the log. */
+export function withinLimit(list: Annotation[], limit = ANNOTATION_LIMIT): { annotated: Annotation[]; logged: Annotation[] } {
+  return { annotated: list.slice(0, limit), logged: list.slice(limit) };
+}

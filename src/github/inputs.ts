@@ -1,0 +1,122 @@
+/**
+ * The action's inputs: read, validated and turned into absolute paths inside the workspace.
+ * Only `stat`/`realpath` touch the disk here (no file is opened), so a refused path means
+ * nothing was read.
+ */
+import { realpathSync, statSync } from 'node:fs';
+import { isAbsolute, join, relative, resolve, sep } from 'node:path';
+import { resolveInside } from '../config/paths.js';
+import { UserError } from '../errors.js';
+
+/** Reads one input as the runner passes it (`INPUT_<NAME>`, hyphens kept), trimmed. */
+export type InputReader = (name: string) => string;
+
+export interface ActionInputs {
+  /** Real path of GITHUB_WORKSPACE: no path may leave it. */
+  workspace: string;
+  /** Absolute working directory (inside the workspace). */
+  workingDirectory: string;
+  /** Absolute config path (inside the workspace). */
+  configPath: string;
+  /** Config path relative to the workspace, with forward slashes (names the comment and the output folder). */
+  configKey: string;
+  token: string;
+  comment: boolean;
+  updateBaseline: boolean;
+  /** null: every core. */
+  workers: number | null;
+}
+
+const TRUE = ['true', 'True', 'TRUE'];
+const FALSE = ['false', 'False', 'FALSE'];
+
+/** The same spellings `core.getBooleanInput` accepts, with a message that names the input and the value. */
+export function parseBooleanInput(name: string, value: string): boolean {
+  if (TRUE.includes(value)) return true;
+  if (FALSE.includes(value)) return false;
+  throw new UserError(
+    `input ${name}: expected true or false, found ${JSON.stringify(value)}`,
+    { key: name },
+  );
+}
+
+export const MAX_WORKERS = 256;
+
+/** '' means every core; otherwise a whole number from 1 to MAX_WORKERS. */
+export function parseWorkersInput(value: string): number | null {
+  if (value === '') return null;
+  if (!/^[0-9]+$/.test(value) || Number(value) < 1 || Number(value) > MAX_WORKERS) {
+    throw new UserError(
+      `input workers: expected a whole number from 1 to ${MAX_WORKERS}, or empty for every core, found ${JSON.stringify(value)}`,
+      { key: 'workers' },
+    );
+  }
+  return Number(value);
+}
+
+function workspaceRoot(env: NodeJS.ProcessEnv): string {
+  const ws = env['GITHUB_WORKSPACE'];
+  if (!ws) {
+    throw new UserError(
+      'GITHUB_WORKSPACE is not set: run neuron-budget as a step of a GitHub Actions job, after actions/checkout',
+    );
+  }
+  if (!isAbsolute(ws)) {
+    throw new UserError(`GITHUB_WORKSPACE must be an absolute path, found ${JSON.stringify(ws)}`);
+  }
+  try {
+    return realpathSync(ws);
+  } catch {
+    throw new UserError(`GITHUB_WORKSPACE ${ws} does not exist: check out the repository first (actions/checkout)`);
+  }
+}
+
+/** Lexical and symbolic-link confinement, through the shared config helper. */
+function resolveInput(workspace: string, baseDir: string, input: string, written: string): string {
+  return resolveInside(workspace, baseDir, written, `input ${input}`);
+}
+
+export function readInputs(get: InputReader, env: NodeJS.ProcessEnv = process.env): ActionInputs {
+  // Validate the cheap scalar inputs first so a typo is reported before any path is touched.
+  const comment = parseBooleanInput('comment', get('comment') || 'true');
+  const updateBaseline = parseBooleanInput('update-baseline', get('update-baseline') || 'false');
+  const workers = parseWorkersInput(get('workers'));
+  const token = get('github-token');
+
+  const workspace = workspaceRoot(env);
+  const wdWritten = get('working-directory') || '.';
+  const workingDirectory = resolveInput(workspace, workspace, 'working-directory', wdWritten);
+  let st;
+  try {
+    st = statSync(workingDirectory);
+  } catch {
+    throw new UserError(
+      `input working-directory: ${JSON.stringify(wdWritten)} does not exist in the workspace (looked for ${workingDirectory})`,
+      { key: 'working-directory' },
+    );
+  }
+  if (!st.isDirectory()) {
+    throw new UserError(
+      `input working-directory: ${JSON.stringify(wdWritten)} is not a directory (${workingDirectory})`,
+      { key: 'working-directory' },
+    );
+  }
+
+  const configWritten = get('config') || 'neuron-budget.yml';
+  const configPath = resolveInput(workspace, workingDirectory, 'config', configWritten);
+  const configKey = relative(workspace, configPath).split(sep).join('/');
+
+  return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers };
+}
+
+/** A file-system-safe folder name for one config, so two steps with different configs never share files. */
+export function configSlug(configKey: string): string {
+  return configKey.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^\.+/, '_') || 'config';
+}
+
+/** Where the report and the witness go: under RUNNER_TEMP on a runner, else in the workspace. */
+export function outputFolder(inputs: ActionInputs, env: NodeJS.ProcessEnv = process.env): string {
+  const temp = env['RUNNER_TEMP'];
+  const base = temp && isAbsolute(temp) ? join(temp, 'neuron-budget') : join(inputs.workspace, '.neuron-budget');
+  return resolve(base, configSlug(inputs.configKey));
+}

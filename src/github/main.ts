@@ -1,0 +1,227 @@
+/**
+ * The action's shell: inputs → runJob → outputs, job summary, pull-request comment, step result.
+ * Everything GitHub-specific lives here; the job itself knows nothing about the runner.
+ */
+import * as core from '@actions/core';
+import { context } from '@actions/github';
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { isUserError, type UserError } from '../errors.js';
+import { writeFileAtomic } from '../files/atomic.js';
+import type { ProgressEvent } from '../search/types.js';
+import { runJob, type JobResult } from '../run.js';
+import { toAnnotation, withinLimit } from './annotations.js';
+import { commentBody, commentMarker, upsertComment } from './comment.js';
+import { readInputs, outputFolder, type ActionInputs } from './inputs.js';
+import { failureMarkdown, fitSummary } from './markdown.js';
+import { makeClient, retryBaseFromEnv } from './octokit.js';
+import { throttledProgress } from './progress.js';
+
+/** Verdicts that fail the step; the rest pass it. */
+const FAILING = new Set(['fail', 'inconclusive']);
+
+/** Exit codes shared with the command line: 2 bad input, 3 internal error (a bug). */
+const EXIT_BAD_INPUT = 2;
+const EXIT_INTERNAL = 3;
+
+function runUrl(): string | null {
+  const { serverUrl } = context;
+  const repo = process.env['GITHUB_REPOSITORY'];
+  const id = process.env['GITHUB_RUN_ID'];
+  return serverUrl && repo && id ? `${serverUrl}/${repo}/actions/runs/${id}` : null;
+}
+
+async function writeSummary(markdown: string): Promise<void> {
+  try {
+    await core.summary.addRaw(fitSummary(markdown), true).write();
+  } catch (e) {
+    core.warning(`Could not write the job summary: ${(e as Error).message}`);
+  }
+}
+
+/** Beside the report, for workflows that relay the comment themselves (pull requests from forks). */
+async function writeCommentFile(path: string, markdown: string): Promise<void> {
+  try {
+    await writeFileAtomic(path, markdown);
+  } catch (e) {
+    core.warning(`Could not write ${path}: ${(e as Error).message}`);
+  }
+}
+
+function isForkPullRequest(): boolean {
+  const pr = context.payload.pull_request as { head?: { repo?: { id?: number; full_name?: string } | null } } | undefined;
+  const head = pr?.head?.repo;
+  const base = context.payload.repository as { id?: number; full_name?: string } | undefined;
+  if (!head || !base) return false;
+  if (head.id !== undefined && base.id !== undefined) return head.id !== base.id;
+  return head.full_name !== base.full_name;
+}
+
+function forbiddenAdvice(): string {
+  return isForkPullRequest()
+    ? 'This pull request comes from a fork, and GitHub gives workflows started by fork pull requests a read-only token, so no comment can be posted from this job. ' +
+        'To get comments on fork pull requests, use the two-workflow setup in the neuron-budget README ("Pull requests from forks").'
+    : 'The token lacks write access to pull requests. Add `permissions: { contents: read, pull-requests: write }` to the job, or pass a token that has it as `github-token`.';
+}
+
+/**
+ * Posts or updates the sticky comment. Never throws: a comment is a convenience, and the
+ * step's result must come from the verdict alone.
+ */
+async function postComment(inputs: ActionInputs, markdown: string): Promise<void> {
+  if (!inputs.comment) {
+    core.info('Pull-request comment turned off (comment: false); the results are in the job summary and outputs.');
+    return;
+  }
+  if (context.eventName === 'pull_request_target') {
+    core.warning(
+      'neuron-budget does not comment on pull_request_target events. That event runs with a write token and secrets; ' +
+        'checking out and reading the pull request\'s files under it is unsafe. Run neuron-budget on pull_request ' +
+        '(see "Pull requests from forks" in the README).',
+    );
+    return;
+  }
+  if (context.eventName !== 'pull_request') {
+    core.info(`Event ${context.eventName || '(unknown)'}: no pull-request comment; the results are in the job summary and outputs.`);
+    return;
+  }
+  const issueNumber = (context.payload.pull_request as { number?: number } | undefined)?.number;
+  if (!issueNumber) {
+    core.warning('The pull_request event payload has no pull-request number, so no comment was posted.');
+    return;
+  }
+  if (!inputs.token) {
+    core.warning('No github-token was given, so no pull-request comment was posted. The default is the job\'s own token; leave the input unset to use it.');
+    return;
+  }
+  let owner: string;
+  let repo: string;
+  try {
+    ({ owner, repo } = context.repo);
+  } catch {
+    core.warning('GITHUB_REPOSITORY is not set, so no pull-request comment was posted.');
+    return;
+  }
+  const octokit = makeClient({
+    token: inputs.token,
+    baseUrl: process.env['GITHUB_API_URL'] || 'https://api.github.com',
+    retryBaseMs: retryBaseFromEnv(process.env),
+    warn: (m) => core.info(m),
+  });
+  const marker = commentMarker(inputs.configKey);
+  try {
+    const done = await upsertComment(octokit, { owner, repo, issueNumber }, marker, commentBody(marker, markdown, runUrl()));
+    core.info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${done.url}` : ''}`);
+  } catch (e) {
+    const status = (e as { status?: number }).status;
+    const message = (e as Error).message ?? String(e);
+    const advice = status === 403 ? ` ${forbiddenAdvice()}` : '';
+    core.warning(
+      `Could not post the pull-request comment: GitHub answered ${status ?? 'with an error'} (${message}).${advice} ` +
+        'The verdict, job summary and outputs are unaffected.',
+    );
+  }
+}
+
+function setOutputs(result: JobResult, reportPath: string): void {
+  const r = result.report;
+  const str = (v: number | string | null | undefined): string => (v === null || v === undefined ? '' : String(v));
+  core.setOutput('verdict', str(result.verdict));
+  core.setOutput('width', str(r.width));
+  core.setOutput('metric', str(r.metric.value));
+  core.setOutput('baseline-width', str(r.baseline?.width));
+  core.setOutput('report', reportPath);
+  core.setOutput('model', str(result.modelWritten));
+  core.setOutput('baseline', str(result.baselineWritten));
+}
+
+async function failBadInput(e: UserError, inputs: ActionInputs | null): Promise<void> {
+  const workspace = inputs?.workspace ?? process.env['GITHUB_WORKSPACE'] ?? process.cwd();
+  const { annotated, logged } = withinLimit([toAnnotation(e, workspace)]);
+  for (const a of annotated) {
+    core.error(a.message, { title: 'neuron-budget', file: a.file, startLine: a.startLine, startColumn: a.startColumn });
+  }
+  for (const a of logged) core.info(`error: ${a.message}`);
+  process.exitCode = EXIT_BAD_INPUT;
+  const md = failureMarkdown(e.message, 'input');
+  await writeSummary(md);
+  // A stale "pass" must not linger on the pull request while the config is broken.
+  if (inputs) await postComment(inputs, md);
+}
+
+async function failInternal(e: unknown, inputs: ActionInputs | null): Promise<void> {
+  const err = e instanceof Error ? e : new Error(String(e));
+  core.error(`internal error: ${err.message}`, { title: 'neuron-budget' });
+  if (err.stack) core.info(err.stack);
+  process.exitCode = EXIT_INTERNAL;
+  const md = failureMarkdown(err.message, 'internal');
+  await writeSummary(md);
+  if (inputs) await postComment(inputs, md);
+}
+
+export async function run(): Promise<void> {
+  let inputs: ActionInputs | null = null;
+  try {
+    inputs = readInputs((name) => core.getInput(name));
+    const folder = outputFolder(inputs);
+    mkdirSync(folder, { recursive: true });
+    const reportPath = join(folder, 'report.json');
+    const modelPath = join(folder, 'model.json');
+    const mode = inputs.updateBaseline ? 'baseline' : 'check';
+
+    core.info(`neuron-budget: ${mode} with ${inputs.configKey} (workspace ${inputs.workspace})`);
+    let phase: ProgressEvent['phase'] | null = null;
+    const progress = (): ((ev: ProgressEvent) => void) => throttledProgress((line) => core.info(line));
+    let print = progress();
+    core.startGroup('neuron-budget: data and search');
+    let result: JobResult;
+    try {
+      result = await runJob({
+        configPath: inputs.configPath,
+        root: inputs.workspace,
+        mode,
+        baselinePath: null,
+        reportPath,
+        modelPath,
+        workers: inputs.workers,
+        commit: process.env['GITHUB_SHA'] || null,
+        onProgress: (ev) => {
+          if (ev.phase !== phase) {
+            if (phase !== null) {
+              core.endGroup();
+              core.startGroup(`neuron-budget: ${ev.phase} phase`);
+            }
+            phase = ev.phase;
+            print = progress(); // the first line of each phase always shows
+          }
+          print(ev);
+        },
+        log: (line) => core.info(line),
+      });
+    } finally {
+      core.endGroup();
+    }
+
+    setOutputs(result, reportPath);
+    core.info(result.text);
+    // The step's result comes from the verdict alone, decided before any comment traffic.
+    const verdict = result.verdict;
+    if (verdict === null) {
+      core.info('No verdict: this build runs the data stage only.');
+    } else if (FAILING.has(verdict)) {
+      const reason = result.report.reasons[0];
+      core.setFailed(`neuron-budget verdict: ${verdict}${reason ? ` (${reason})` : ''}`);
+    } else {
+      core.info(`neuron-budget verdict: ${verdict}`);
+    }
+    if (result.baselineWritten) core.info(`Baseline written to ${result.baselineWritten}; commit it to accept this result.`);
+
+    // None of these throw: they report trouble as warnings and leave the result alone.
+    await writeCommentFile(join(folder, 'comment.md'), result.markdown);
+    await writeSummary(result.markdown);
+    await postComment(inputs, result.markdown);
+  } catch (e) {
+    if (isUserError(e)) await failBadInput(e, inputs);
+    else await failInternal(e, inputs);
+  }
+}

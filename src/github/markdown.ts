@@ -1,0 +1,29 @@
+/** The few pieces of markdown the shell writes itself (the report layout belongs to src/report/). */
+
+/** The runner refuses a step summary over 1 MiB; leave room for the note. */
+export const SUMMARY_LIMIT = 1_000_000;
+
+/** Escapes text from the repository or an error so it renders as text, never as HTML or markup. */
+export function escapeText(s: string): string {
+  return s.replace(/[&<>"'`|*_[\]\\]/g, (c) => `&#${c.charCodeAt(0)};`);
+}
+
+/** Shown in the summary (and the pull-request comment) when the job could not run. */
+export function failureMarkdown(message: string, kind: 'input' | 'internal'): string {
+  const head =
+    kind === 'input'
+      ? '### neuron-budget could not run: the config or data needs fixing'
+      : '### neuron-budget stopped with an internal error';
+  const tail =
+    kind === 'input'
+      ? 'No verdict was reached, so this change has not been checked. The error is also annotated on the file.'
+      : 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.';
+  return `${head}\n\n<pre>${escapeText(message)}</pre>\n\n${tail}\n`;
+}
+
+export function fitSummary(markdown: string, limit = SUMMARY_LIMIT): string {
+  if (markdown.length <= limit) return markdown;
+  const note = '\n\n_The summary was cut to fit the runner\'s 1 MiB limit; the JSON report (output `report`) has everything._\n';
+  const cut = markdown.slice(0, limit - note.length);
+  return cut.slice(0, Math.max(0, cut.lastIndexOf('\n'))) + note;
+}
