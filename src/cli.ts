@@ -10,9 +10,11 @@
  */
 import { isMainThread } from 'node:worker_threads';
 import { resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { didYouMean } from './config/suggest.js';
 import { isUserError, UserError } from './errors.js';
 import { runJob, type JobOptions } from './run.js';
+import { runSearchWorker } from './search/index.js';
 import type { ProgressEvent } from './search/types.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
 
@@ -158,13 +160,28 @@ function usage(command: Command | null): string {
   ].join('\n');
 }
 
+/** Plain progress lines (logs, CI) are worth one every few seconds, not a flood. */
+const PLAIN_PROGRESS_MS = 5000;
+
 function exitCodesText(): string {
   return 'exit codes: 0 pass, improved or new; 1 fail or inconclusive; 2 bad input';
 }
 
-/** A one-line progress display, redrawn in place on a terminal and silent elsewhere. */
+/** A one-line progress display, redrawn in place on a terminal; elsewhere a plain line every few seconds. */
 function progressPrinter(stream: NodeJS.WriteStream): { onProgress?: (e: ProgressEvent) => void; done: () => void } {
-  if (!stream.isTTY) return { done: () => undefined };
+  if (!stream.isTTY) {
+    let lastLine = performance.now();
+    return {
+      onProgress: (e) => {
+        const now = performance.now();
+        if (now - lastLine < PLAIN_PROGRESS_MS) return;
+        lastLine = now;
+        const best = e.best === null ? '' : `, best so far ${e.best.toFixed(4)}`;
+        stream.write(`progress: ${e.phase}, width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}${best}\n`);
+      },
+      done: () => undefined,
+    };
+  }
   let last = 0;
   let drawn = false;
   return {
@@ -206,6 +223,7 @@ async function main(argv: readonly string[]): Promise<number> {
       reportPath: fromCwd(flags.report),
       modelPath: fromCwd(flags.model),
       workers: invocation.workers,
+      workerEntry: fileURLToPath(import.meta.url),
       log: (line) => {
         progress.done();
         err.write(`${line}\n`);
@@ -234,7 +252,7 @@ async function main(argv: readonly string[]): Promise<number> {
 
 // This file is an entry point only (it runs on import); nothing should import it.
 if (!isMainThread) {
-  /* search worker: wired by the lead */
+  runSearchWorker();
 } else {
   void main(process.argv.slice(2)).then((code) => {
     process.exitCode = code;

@@ -12,7 +12,11 @@ import type { LoadedData } from './data/types.js';
 import { UserError } from './errors.js';
 import { writeFileAtomic } from './files/atomic.js';
 import type { Report, Verdict } from './report/types.js';
-import type { ProgressEvent } from './search/types.js';
+import { readBaseline, runGateStage } from './gate/index.js';
+import { modelDocument, serializeModel } from './model/index.js';
+import { renderMarkdown, renderText, withGate } from './report/index.js';
+import { runSearch } from './search/index.js';
+import type { ProgressEvent, SearchResult } from './search/types.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
 
 export interface JobOptions {
@@ -29,6 +33,8 @@ export interface JobOptions {
   modelPath?: string | null;
   /** Worker threads; null: config, else available parallelism. */
   workers?: number | null;
+  /** File of the running bundle, started again as the search's worker threads; null: search in this thread. */
+  workerEntry?: string | null;
   /** Commit the data came from, for the baseline history. */
   commit?: string | null;
   onProgress?: (event: ProgressEvent) => void;
@@ -58,28 +64,78 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
   // Fail on an unwritable output before minutes of work, not after.
   if (options.reportPath) await checkOutputFolder(options.reportPath, 'report', options.root);
   if (options.modelPath) await checkOutputFolder(options.modelPath, 'model', options.root);
-  if (options.mode === 'baseline') {
-    throw new UserError(
-      'baseline: writing a baseline needs the width search, which this build does not include yet; run "check" to see the data summary',
-    );
-  }
+  const baselinePath = options.baselinePath ?? config.gate.baseline;
+  const baselineShown = options.baselinePath ? displayPath(config.root, options.baselinePath) : config.gate.baselineAsWritten;
+  // A corrupt baseline is the user's to fix before minutes of search, not after.
+  await readBaseline(baselinePath, baselineShown);
 
   const data = await timed(timing, 'loadSeconds', () => loadData(config));
   await checkMetricFitsTask(config, data.dataset.task);
+  options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
 
-  // Search and gate stages go here; they fill report.search, verdict, width, metric and baseline.
-  const report = dataStageReport(config, data, timing);
-  const result: JobResult = {
-    report,
-    verdict: report.verdict,
-    markdown: dataSummaryMarkdown(report),
-    text: dataSummaryText(config, data, report),
-    baselineWritten: null,
-    modelWritten: null,
-    exitCode: 0,
-  };
+  const search = await timed(timing, 'searchSeconds', () =>
+    runSearch(data.dataset, config.search, config.target, {
+      workers: options.workers ?? null,
+      workerEntry: options.workerEntry ?? null,
+      ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    }),
+  );
+  timing.growthSeconds = search.timing.growthSeconds;
+  timing.pruneSeconds = search.timing.pruneSeconds;
+
+  const gate = await runGateStage({
+    mode: options.mode,
+    result: search,
+    loaded: data,
+    config,
+    baselinePath,
+    baselineShown,
+    commit: options.commit ?? null,
+    date: new Date(),
+    toolVersion: TOOL_VERSION,
+  });
+  if (gate.notWritten !== null) options.log?.(`baseline not written: ${gate.notWritten}`);
+  const report = withGate(searchStageReport(dataStageReport(config, data, timing), search), gate.outcome, gate.gate);
+
+  let modelWritten: string | null = null;
+  if (options.modelPath) {
+    if (search.witness === null) {
+      options.log?.('model not written: no network reached the target');
+    } else {
+      const doc = modelDocument(search.witness, data.dataset.encoding, config.target);
+      await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
+      modelWritten = options.modelPath;
+    }
+  }
   if (options.reportPath) await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
-  return result;
+  const verdict = report.verdict;
+  return {
+    report,
+    verdict,
+    markdown: renderMarkdown(report),
+    text: renderText(report),
+    baselineWritten: gate.written,
+    modelWritten,
+    exitCode: verdict === 'fail' || verdict === 'inconclusive' ? 1 : 0,
+  };
+}
+
+/** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
+function searchStageReport(report: Report, search: SearchResult): Report {
+  return {
+    ...report,
+    reasons: [],
+    width: search.width,
+    metric: { ...report.metric, value: search.metric },
+    search: {
+      outcome: search.outcome,
+      grownWidth: search.grownWidth,
+      widths: search.widths,
+      pruning: search.pruning,
+      trainings: search.trainings,
+      note: search.note,
+    },
+  };
 }
 
 /** Writes an output file atomically; a refusal by the file system is the user's to fix, not a bug. */
@@ -148,7 +204,7 @@ function dataStageReport(config: Config, data: LoadedData, timing: Record<string
     schema: 'neuron-budget/report@1',
     tool: { name: TOOL_NAME, version: TOOL_VERSION },
     verdict: null,
-    reasons: ['Data stage only: the width search has not run, so there is no verdict.'],
+    reasons: [],
     width: null,
     metric: { name: config.target.metric, value: null, threshold: config.target.threshold },
     baseline: null,
@@ -211,23 +267,5 @@ function dataSummaryText(config: Config, data: LoadedData, report: Report): stri
   rows.push(['target', `${report.metric.name} ${report.metric.name === 'accuracy' ? '≥' : '≤'} ${report.metric.threshold}`]);
   rows.push(['fingerprint', d.fingerprint]);
   const body = rows.map(([k, v]) => `  ${k.padEnd(12)}${v}`).join('\n');
-  return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}\n  (data stage only: the width search has not run)`;
-}
-
-function dataSummaryMarkdown(report: Report): string {
-  const d = report.data;
-  const lines = [
-    `**${TOOL_NAME}** · data summary (the width search has not run)`,
-    '',
-    '| | |',
-    '|---|---|',
-    `| data | \`${d.file}\` |`,
-    `| rows | ${d.rows}${d.droppedRows > 0 ? ` (${d.droppedRows} dropped)` : ''} |`,
-    `| split | ${d.trainRows} training / ${d.validationRows} validation |`,
-    `| inputs | ${d.inputs} |`,
-    `| task | ${d.task} |`,
-  ];
-  if (d.classes) lines.push(`| classes | ${d.classes.map((c) => `${c.label} ${c.count}`).join(' · ')} |`);
-  lines.push(`| fingerprint | \`${d.fingerprint.slice(0, 16)}…\` |`);
-  return lines.join('\n');
+  return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;
 }

@@ -2,6 +2,7 @@
  * The action's shell: inputs → runJob → outputs, job summary, pull-request comment, step result.
  * Everything GitHub-specific lives here; the job itself knows nothing about the runner.
  */
+import { fileURLToPath } from 'node:url';
 import * as core from '@actions/core';
 import { context } from '@actions/github';
 import { mkdirSync } from 'node:fs';
@@ -184,6 +185,8 @@ export async function run(): Promise<void> {
         reportPath,
         modelPath,
         workers: inputs.workers,
+        // The bundle this runs in is also the search's worker entry.
+        workerEntry: fileURLToPath(import.meta.url),
         commit: process.env['GITHUB_SHA'] || null,
         onProgress: (ev) => {
           if (ev.phase !== phase) {
