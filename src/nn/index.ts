@@ -1,9 +1,19 @@
 /**
  * The training engine's public surface, used by src/search. Pure computation: no I/O,
- * no clocks, no Math.random. (Contract stub: the engine fills these in.)
+ * no clocks, no Math.random.
  */
 import type { Activation, Init, Optimizer, TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
+import type { OptimizerSettings } from './optimizers.js';
+import { rngFor as rngForImpl } from './rng.js';
+import { createTrainer as createTrainerImpl } from './trainer.js';
+import { fromJson } from './network.js';
+import { referenceForward, makeScratch, headCode, headOutputs } from './reference.js';
+import { meetsTarget as meetsTargetImpl } from './metrics.js';
+
+export type { OptimizerSettings } from './optimizers.js';
+export type { Metrics } from './metrics.js';
+export { headFor } from './trainer.js';
 
 export type Head = 'softmax' | 'logistic' | 'linear';
 
@@ -16,7 +26,9 @@ export interface Rng {
 }
 
 /** Independent stream for restart `restart` of width `width` under base seed `seed`. */
-export declare function rngFor(seed: number, width: number, restart: number): Rng;
+export function rngFor(seed: number, width: number, restart: number): Rng {
+  return rngForImpl(seed, width, restart);
+}
 
 /** An opaque trained or untrained network; weights live in contiguous typed memory. */
 export interface Network {
@@ -54,6 +66,8 @@ export interface TrainOptions {
   target: TargetConfig;
   /** Dynamic Node Creation trigger; null: never stop as stalled. */
   stall: { window: number; threshold: number } | null;
+  /** Optional optimiser hyper-parameters (learning rate, momentum, Adam batch size); published defaults otherwise. */
+  optimizerSettings?: OptimizerSettings;
 }
 
 export interface TrainRecord {
@@ -86,15 +100,23 @@ export interface Trainer {
   snapshot(): NetworkJson;
 }
 
-export declare function createTrainer(
-  data: EncodedDataset,
-  width: number,
-  options: TrainOptions,
-  rng: Rng,
-): Trainer;
+export function createTrainer(data: EncodedDataset, width: number, options: TrainOptions, rng: Rng): Trainer {
+  return createTrainerImpl(data, width, options, rng);
+}
 
 /** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
-export declare function predict(net: NetworkJson, x: Float64Array, rows: number): Float64Array;
+export function predict(net: NetworkJson, x: Float64Array, rows: number): Float64Array {
+  const { shape, params } = fromJson(net);
+  const K = shape.outputs;
+  const logits = new Float64Array(rows * K);
+  referenceForward(shape, params, x, rows, logits, null, makeScratch(shape.width, K));
+  const out = new Float64Array(rows * K);
+  const head = headCode(shape.head);
+  for (let p = 0; p < rows; p++) headOutputs(head, K, logits, p * K, out, p * K);
+  return out;
+}
 
 /** True when `value` meets the target (accuracy: >= threshold; error metrics: <= threshold). */
-export declare function meetsTarget(value: number, target: TargetConfig): boolean;
+export function meetsTarget(value: number, target: TargetConfig): boolean {
+  return meetsTargetImpl(value, target);
+}

@@ -1,0 +1,7 @@
+/** The kernels production may run, for tests that must cover each of them. */
+import type { Kernel } from '../../src/nn/kernel.js';
+import { wasmKernel } from '../../src/nn/wasm-kernel.js';
+
+export function productionKernels(): [string, () => Kernel][] {
+  return [['wasm-simd', wasmKernel]];
+}
