@@ -13,7 +13,7 @@ import { meetsTarget as meetsTargetImpl } from './metrics.js';
 
 export type { OptimizerSettings } from './optimizers.js';
 export type { Metrics } from './metrics.js';
-export { headFor } from './trainer.js';
+export { headFor, FLAT_SPOT_OFFSET } from './trainer.js';
 
 export type Head = 'softmax' | 'logistic' | 'linear';
 
@@ -68,6 +68,11 @@ export interface TrainOptions {
   stall: { window: number; threshold: number } | null;
   /** Optional optimiser hyper-parameters (learning rate, momentum, Adam batch size); published defaults otherwise. */
   optimizerSettings?: OptimizerSettings;
+  /**
+   * Flat-spot elimination: added to the tanh/logistic derivative when training, so a
+   * saturated neuron still learns. Default FLAT_SPOT_OFFSET; 0 trains on the exact gradient.
+   */
+  primeOffset?: number;
 }
 
 export interface TrainRecord {

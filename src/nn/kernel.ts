@@ -16,6 +16,11 @@ export interface Kernel {
     start: number,
     end: number,
     grad: Float64Array,
+    /**
+     * Added to the tanh/logistic derivative in the backward pass (flat-spot elimination);
+     * 0 gives the exact gradient.
+     */
+    primeOffset?: number,
   ): number;
   forward(shape: Shape, params: Float64Array, x: Float64Array, rows: number, logits: Float64Array, hidden: Float64Array | null): void;
 }
@@ -34,8 +39,8 @@ export function referenceKernel(): Kernel {
   };
   return {
     name: 'reference-f64',
-    lossAndGradient(shape, params, x, y, start, end, grad) {
-      return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape));
+    lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0) {
+      return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape), primeOffset);
     },
     forward(shape, params, x, rows, logits, hidden) {
       referenceForward(shape, params, x, rows, logits, hidden, sized(shape));

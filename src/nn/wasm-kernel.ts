@@ -36,6 +36,7 @@ interface KernelExports {
     end: number,
     grad: number,
     work: number,
+    off: number,
   ): number;
   forward(act: number, d: number, h: number, k: number, params: number, x: number, rows: number, out: number, hidden: number, work: number): void;
   heapBase(): number;
@@ -188,7 +189,7 @@ export function wasmKernel(): Kernel {
   let hiddenView = mem.subarray(0, 0);
   return {
     name: 'wasm-simd-f64',
-    lossAndGradient(shape: Shape, params: Float64Array, x: Float64Array, y: Float64Array, start: number, end: number, grad: Float64Array): number {
+    lossAndGradient(shape: Shape, params: Float64Array, x: Float64Array, y: Float64Array, start: number, end: number, grad: Float64Array, primeOffset = 0): number {
       const P = params.length;
       if (gVersion !== rt.version || shape !== gShape || x !== gX || y !== gY) {
         [xp, yp] = rt.resident(x, y);
@@ -207,7 +208,7 @@ export function wasmKernel(): Kernel {
       const po = pp / 8;
       if (P <= 64) for (let q = 0; q < P; q++) mem[po + q] = params[q];
       else mem.set(params, po);
-      const loss = ex.lossGrad(act, head, shape.inputs, shape.width, shape.outputs, pp, xp, yp, start, end, gp, wp);
+      const loss = ex.lossGrad(act, head, shape.inputs, shape.width, shape.outputs, pp, xp, yp, start, end, gp, wp, primeOffset);
       if (P <= 64) for (let q = 0; q < P; q++) grad[q] = gradView[q];
       else grad.set(gradView);
       return loss;

@@ -172,6 +172,7 @@ let H: i32 = 0;
 let K: i32 = 0;
 let Hp: i32 = 0;
 let ACT: i32 = 0;
+let OFF: f64 = 0; // added to the activation derivative in the backward pass (flat-spot offset)
 let HEAD: i32 = 0;
 // work area pointers
 let W1p: usize = 0;
@@ -236,10 +237,10 @@ function setup(act: i32, head: i32, d: i32, h: i32, k: i32, params: usize, work:
   let f: v128;
   if (ACT == ACT_TANH) {
     h = tanhV(a);
-    f = f64x2.sub(f64x2.splat(1.0), f64x2.mul(h, h));
+    f = f64x2.add(f64x2.sub(f64x2.splat(1.0), f64x2.mul(h, h)), f64x2.splat(OFF));
   } else if (ACT == ACT_LOGISTIC) {
     h = logisticV(a);
-    f = f64x2.mul(h, f64x2.sub(f64x2.splat(1.0), h));
+    f = f64x2.add(f64x2.mul(h, f64x2.sub(f64x2.splat(1.0), h)), f64x2.splat(OFF));
   } else {
     const pos = f64x2.gt(a, f64x2.splat(0.0));
     h = v128.bitselect(a, f64x2.splat(0.0), pos);
@@ -574,8 +575,10 @@ export function lossGrad(
   end: i32,
   grad: usize,
   work: usize,
+  off: f64,
 ): f64 {
   setup(act, head, d, h, k, params, work);
+  OFF = off;
   memory.fill(GW1, 0, <usize>(8 * D * Hp));
   memory.fill(GB1, 0, <usize>(8 * Hp));
   memory.fill(GW2T, 0, <usize>(8 * K * Hp));
