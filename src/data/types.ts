@@ -77,4 +77,9 @@ export interface LoadedData {
   /** sha256 hex of the canonical form of the data as used. */
   fingerprint: string;
   profile: DataProfile;
+  /**
+   * Which kept rows (0-based, file order) went to training and to validation, both
+   * ascending; dataset row i of xTrain is kept row train[i].
+   */
+  splitRows?: { train: Int32Array; validation: Int32Array };
 }

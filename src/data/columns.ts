@@ -1,0 +1,156 @@
+/**
+ * Which columns are used, and what kind each one is. A column is numeric when at least
+ * half of its cells are numbers (then every cell must be); otherwise it is categorical,
+ * with at most data.max-categories distinct values.
+ */
+import type { Config } from '../config/types.js';
+import { nearest } from '../config/suggest.js';
+import type { ColumnStore } from './column-store.js';
+import type { ReadPlan } from './read-csv.js';
+import { columnLabel, ConfigKeyProblem, dataError, shownValue, type DataFile } from './where.js';
+
+/** Most classes a classification target may have (a practical cap, no source). */
+export const MAX_CLASSES = 1000;
+
+export interface ChosenColumns {
+  plan: ReadPlan;
+  /** Field indices of the features, in input order. */
+  features: number[];
+  target: number;
+}
+
+/** Resolves data.target / data.features / data.ignore against the header. */
+export function chooseColumns(header: string[], config: Config, file: DataFile): ChosenColumns {
+  const data = config.data;
+  const index = new Map(header.map((name, i) => [name, i]));
+  const find = (name: string, key: string): number => {
+    const i = index.get(name);
+    if (i !== undefined) return i;
+    const guess = nearest(name, header);
+    const hint = guess === null ? '.' : ` (did you mean "${guess}"?).`;
+    throw new ConfigKeyProblem(
+      key,
+      `expected a column of ${file.shown}, found "${name}", which its header (line 1) does not have${hint} ` +
+        `The columns are: ${header.join(', ')}`,
+    );
+  };
+  const target = find(data.target, 'data.target');
+  const ignored = new Set<number>();
+  for (const name of data.ignore) {
+    const i = find(name, 'data.ignore');
+    if (i === target) {
+      throw new ConfigKeyProblem('data.ignore', `lists "${name}", which is the target column (data.target)`);
+    }
+    ignored.add(i);
+  }
+  let features: number[];
+  if (data.features === null) {
+    features = header.map((_, i) => i).filter((i) => i !== target && !ignored.has(i));
+  } else {
+    features = [];
+    for (const name of data.features) {
+      const i = find(name, 'data.features');
+      if (i === target) {
+        throw new ConfigKeyProblem('data.features', `lists "${name}", which is the target column (data.target)`);
+      }
+      if (ignored.has(i)) {
+        throw new ConfigKeyProblem('data.features', `lists "${name}", which data.ignore also lists`);
+      }
+      if (features.includes(i)) {
+        throw new ConfigKeyProblem('data.features', `lists "${name}" twice`);
+      }
+      features.push(i);
+    }
+  }
+  if (features.length === 0) {
+    throw new ConfigKeyProblem(
+      data.features === null ? 'data.ignore' : 'data.features',
+      `expected at least one feature column besides the target "${data.target}", found none left in ${file.shown}`,
+    );
+  }
+  const columns = features.map((field) => ({ field, distinctLimit: data.maxCategories }));
+  columns.push({ field: target, distinctLimit: MAX_CLASSES });
+  return { plan: { columns, target: columns.length - 1 }, features, target };
+}
+
+export interface NumericColumn {
+  kind: 'numeric';
+  name: string;
+  column: number;
+  values: Float64Array;
+}
+
+export interface CategoricalColumn {
+  kind: 'categorical';
+  name: string;
+  column: number;
+  /** Sorted (by UTF-16 code units, so the order is the same everywhere). */
+  categories: string[];
+  /** Index into `categories` per row. */
+  codes: Int32Array;
+}
+
+export type TypedColumn = NumericColumn | CategoricalColumn;
+
+export function looksNumeric(store: ColumnStore): boolean {
+  return store.numberCount > 0 && store.numberCount >= store.textCount;
+}
+
+/** Numeric column values, or the first cell that breaks them. */
+export function numericColumn(store: ColumnStore, file: DataFile, role: string): NumericColumn {
+  const text = store.firstText;
+  const odd = store.firstNotFinite;
+  const label = `${columnLabel(store.column, store.name)}${role}`;
+  if (odd !== null && (text === null || odd.line <= text.line)) {
+    const why = odd.overflow
+      ? 'a number too large for a 64-bit float'
+      : 'a value that is not a finite number (NaN and Infinity are not measurements; leave the cell empty if it is missing)';
+    throw dataError(file, odd.line, store.column, `${label}: expected a finite number, found ${shownValue(odd.value)}, ${why}`);
+  }
+  if (text !== null) {
+    throw dataError(
+      file,
+      text.line,
+      store.column,
+      `${label}: expected a number, found ${shownValue(text.value)} (the column holds numbers in ` +
+        `${store.numberCount} of ${store.numberCount + store.textCount} rows; leave a missing value empty)`,
+    );
+  }
+  return { kind: 'numeric', name: store.name, column: store.column, values: store.numbers.subarray(0, store.length) };
+}
+
+export function categoricalColumn(store: ColumnStore, file: DataFile, cap: number): CategoricalColumn {
+  if (store.distinct === null || store.codes === null) {
+    const count = store.distinctCount();
+    const over = store.overflow;
+    const amount = store.distinctCountExact() ? `${count}` : `more than ${cap}`;
+    throw dataError(
+      file,
+      over?.line ?? 1,
+      store.column,
+      `${columnLabel(store.column, store.name)} is text with ${amount} distinct values; a categorical column ` +
+        `may have at most ${cap} (data.max-categories). The value ${shownValue(over?.value ?? '')} on this line ` +
+        `is number ${cap + 1}. An identifier column belongs in data.ignore.`,
+    );
+  }
+  return sortedCategories(store, store.distinct, store.codes);
+}
+
+function sortedCategories(store: ColumnStore, distinct: Map<string, number>, codes: Int32Array): CategoricalColumn {
+  const firstSeen = [...distinct.keys()];
+  const categories = [...firstSeen].sort(compareText);
+  const rank = new Map(categories.map((c, i) => [c, i]));
+  const remap = Int32Array.from(firstSeen, (c) => rank.get(c) ?? -1);
+  const out = new Int32Array(store.length);
+  for (let i = 0; i < store.length; i++) out[i] = remap[codes[i]];
+  return { kind: 'categorical', name: store.name, column: store.column, categories, codes: out };
+}
+
+export function compareText(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+/** The feature column as numeric or categorical, by the rule at the top of this file. */
+export function featureColumn(store: ColumnStore, file: DataFile, cap: number): TypedColumn {
+  return looksNumeric(store) ? numericColumn(store, file, '') : categoricalColumn(store, file, cap);
+}

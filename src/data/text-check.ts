@@ -1,0 +1,139 @@
+/**
+ * A pass-through stream that refuses bytes that are not UTF-8 text (invalid sequences,
+ * NUL bytes) before the CSV parser sees them, and says where they are: the line as an
+ * editor counts it and the field number, tracked with a small quote-aware scan.
+ */
+import { Transform, type TransformCallback } from 'node:stream';
+
+export interface BadBytes {
+  line: number;
+  /** 1-based field number on that line. */
+  column: number;
+  /** The offending bytes, as hex (`0xff`, `0x00`). */
+  bytes: string;
+  why: 'nul' | 'invalid' | 'truncated';
+  /** Header names seen on line 1 (naively split), for naming the column. */
+  header: string[];
+}
+
+export class NotTextError extends Error {
+  constructor(readonly where: BadBytes) {
+    super('bytes that are not UTF-8 text');
+    this.name = 'NotTextError';
+  }
+}
+
+const QUOTE = 0x22;
+const NEWLINE = 0x0a;
+const HEADER_BYTES_KEPT = 65536;
+
+export class TextCheck extends Transform {
+  private line = 1;
+  private field = 0;
+  private inQuotes = false;
+  /** Continuation bytes still expected, and the allowed range of the next one. */
+  private need = 0;
+  private low = 0x80;
+  private high = 0xbf;
+  private headerBytes: number[] = [];
+  private header: string[] | null = null;
+
+  constructor(private readonly delimiter: string) {
+    super();
+  }
+
+  override _transform(chunk: Buffer, _encoding: BufferEncoding, done: TransformCallback): void {
+    let bad: BadBytes | null;
+    try {
+      bad = this.scan(chunk);
+    } catch (error) {
+      done(error as Error); // a bug here must fail the load, not stall the stream
+      return;
+    }
+    if (bad !== null) {
+      done(new NotTextError(bad));
+      return;
+    }
+    done(null, chunk);
+  }
+
+  override _flush(done: TransformCallback): void {
+    if (this.need > 0) {
+      done(new NotTextError(this.where('truncated', 'end of file')));
+      return;
+    }
+    done();
+  }
+
+  private scan(chunk: Buffer): BadBytes | null {
+    // Only a one-byte delimiter is followed for field numbers; otherwise fields count as 1.
+    const delim = this.delimiter.length === 1 ? this.delimiter.charCodeAt(0) : -1;
+    for (let i = 0; i < chunk.length; i++) {
+      const b = chunk[i];
+      if (this.need > 0) {
+        if (b < this.low || b > this.high) return this.where('invalid', hex(b));
+        this.need--;
+        this.low = 0x80;
+        this.high = 0xbf;
+        continue;
+      }
+      if (b < 0x80) {
+        if (b === 0) return this.where('nul', '0x00');
+        if (this.line === 1 && this.header === null) this.keepHeaderByte(b);
+        if (b === NEWLINE) {
+          this.line++;
+          if (!this.inQuotes) this.field = 0;
+        } else if (b === QUOTE) {
+          this.inQuotes = !this.inQuotes;
+        } else if (b === delim && !this.inQuotes) {
+          this.field++;
+        }
+        continue;
+      }
+      if (this.line === 1 && this.header === null) this.keepHeaderByte(b);
+      // Lead bytes and the ranges their first continuation byte may take (no overlongs,
+      // no surrogates, nothing above U+10FFFF): the well-formed table of the Unicode standard.
+      if (b >= 0xc2 && b <= 0xdf) this.expect(1, 0x80, 0xbf);
+      else if (b === 0xe0) this.expect(2, 0xa0, 0xbf);
+      else if ((b >= 0xe1 && b <= 0xec) || b === 0xee || b === 0xef) this.expect(2, 0x80, 0xbf);
+      else if (b === 0xed) this.expect(2, 0x80, 0x9f);
+      else if (b === 0xf0) this.expect(3, 0x90, 0xbf);
+      else if (b >= 0xf1 && b <= 0xf3) this.expect(3, 0x80, 0xbf);
+      else if (b === 0xf4) this.expect(3, 0x80, 0x8f);
+      else return this.where('invalid', hex(b));
+    }
+    return null;
+  }
+
+  private expect(need: number, low: number, high: number): void {
+    this.need = need;
+    this.low = low;
+    this.high = high;
+  }
+
+  private keepHeaderByte(b: number): void {
+    if (b === NEWLINE) {
+      this.header = splitHeader(Buffer.from(this.headerBytes).toString('utf8'), this.delimiter);
+      this.headerBytes = [];
+    } else if (this.headerBytes.length < HEADER_BYTES_KEPT) {
+      this.headerBytes.push(b);
+    }
+  }
+
+  private where(why: BadBytes['why'], bytes: string): BadBytes {
+    return { line: this.line, column: this.field + 1, bytes, why, header: this.header ?? [] };
+  }
+}
+
+function hex(b: number): string {
+  return `0x${b.toString(16).padStart(2, '0')}`;
+}
+
+/** Good enough to name a column in a message; the CSV parser does the real work. */
+function splitHeader(text: string, delimiter: string): string[] {
+  return text
+    .replace(/^\uFEFF/, '')
+    .replace(/\r$/, '')
+    .split(delimiter)
+    .map((s) => s.trim().replace(/^"(.*)"$/, '$1'));
+}
