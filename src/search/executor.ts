@@ -1,0 +1,214 @@
+/**
+ * Where tasks run: in this thread (one worker, and the path tests take from TypeScript
+ * source) or on a pool of worker threads that share the encoded data without copies.
+ * Both run the same task code, so the choice never changes a result.
+ */
+import { Worker } from 'node:worker_threads';
+import type { EncodedDataset } from '../data/types.js';
+import { taskKey } from './growth.js';
+import type { TaskResult } from './growth.js';
+import { GrownTrainers } from './task.js';
+import type { PruneJob, PruneResult, SearchContext } from './task.js';
+import type { TrainingTask } from './types.js';
+
+export interface Executor {
+  readonly size: number;
+  train(task: TrainingTask): Promise<TaskResult>;
+  prune(job: PruneJob): Promise<PruneResult>;
+  /**
+   * Give up a growth task whose answer is no longer needed: drop it if queued, stop its
+   * thread (and start a fresh one) if running. Its promise then never settles.
+   */
+  discard(task: TrainingTask): void;
+  /** Stop every thread; work still running is abandoned. */
+  close(): Promise<void>;
+}
+
+/** Marks a worker thread started by the pool (the bundle checks it to act as the worker). */
+export const WORKER_MARK = 'neuron-budget/search-worker';
+
+export type WorkerRequest =
+  | { type: 'init'; data: EncodedDataset; ctx: SearchContext }
+  | { type: 'train'; id: number; task: TrainingTask }
+  | { type: 'prune'; id: number; job: PruneJob };
+
+export type WorkerReply =
+  | { type: 'done'; id: number; result: TaskResult | PruneResult }
+  | { type: 'error'; id: number; message: string };
+
+const yieldToEventLoop = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
+
+export function inThreadExecutor(data: EncodedDataset, ctx: SearchContext): Executor {
+  const grown = new GrownTrainers();
+  return {
+    size: 1,
+    async train(task) {
+      await yieldToEventLoop();
+      return grown.run(data, ctx, task);
+    },
+    async prune(job) {
+      await yieldToEventLoop();
+      return grown.prune(data, ctx, job);
+    },
+    discard() {},
+    async close() {},
+  };
+}
+
+function isShared(a: Float64Array): boolean {
+  return typeof SharedArrayBuffer !== 'undefined' && a.buffer instanceof SharedArrayBuffer;
+}
+
+function toShared(a: Float64Array): Float64Array {
+  if (isShared(a)) return a;
+  const s = new Float64Array(new SharedArrayBuffer(a.length * Float64Array.BYTES_PER_ELEMENT));
+  s.set(a);
+  return s;
+}
+
+/** The dataset with every array on SharedArrayBuffer (already the case for loaded data), so posting it shares memory. */
+export function shareDataset(data: EncodedDataset): EncodedDataset {
+  return {
+    ...data,
+    xTrain: toShared(data.xTrain),
+    yTrain: toShared(data.yTrain),
+    xValidation: toShared(data.xValidation),
+    yValidation: toShared(data.yValidation),
+  };
+}
+
+interface Pending {
+  resolve: (r: TaskResult | PruneResult) => void;
+  reject: (e: Error) => void;
+}
+
+interface Slot {
+  worker: Worker;
+  busy: number | null;
+}
+
+type Job = { type: 'train'; task: TrainingTask } | { type: 'prune'; job: PruneJob };
+
+/**
+ * A fixed pool of worker threads. `entry` is the file of the running bundle, which acts
+ * as the worker when started with WORKER_MARK (ncc does not follow `new Worker(path)`).
+ */
+export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, size: number, entry: string): Executor {
+  const shared = shareDataset(data);
+  const pending = new Map<number, Pending>();
+  const trainIds = new Map<string, number>();
+  const queue: { id: number; job: Job }[] = [];
+  /** Which thread ran each growth task (it may still hold the trained network). */
+  const ranOn = new Map<string, Worker>();
+  const slots: Slot[] = [];
+  let nextId = 0;
+  let closed = false;
+
+  /** Next queued job for this thread: a prune job of a task it ran comes first, else the oldest job. */
+  const takeFor = (slot: Slot): { id: number; job: Job } | undefined => {
+    let k = queue.findIndex((e) => e.job.type === 'prune' && ranOn.get(taskKey(e.job.job.task)) === slot.worker);
+    // Leave a prune job to its own thread when that thread is idle too.
+    const homeIdleElsewhere = (j: Job): boolean => {
+      if (j.type !== 'prune') return false;
+      const home = ranOn.get(taskKey(j.job.task));
+      return slots.some((o) => o !== slot && o.busy === null && o.worker === home);
+    };
+    if (k < 0) k = queue.findIndex((e) => !homeIdleElsewhere(e.job));
+    return k < 0 ? undefined : queue.splice(k, 1)[0];
+  };
+
+  const pump = (): void => {
+    for (const slot of slots) {
+      if (slot.busy !== null || queue.length === 0) continue;
+      const next = takeFor(slot);
+      if (next === undefined) continue;
+      if (next.job.type === 'train') ranOn.set(taskKey(next.job.task), slot.worker);
+      slot.busy = next.id;
+      const msg: WorkerRequest =
+        next.job.type === 'train'
+          ? { type: 'train', id: next.id, task: next.job.task }
+          : { type: 'prune', id: next.id, job: next.job.job };
+      slot.worker.postMessage(msg);
+    }
+  };
+
+  const settle = (id: number): Pending | undefined => {
+    const p = pending.get(id);
+    pending.delete(id);
+    for (const [key, tid] of trainIds) if (tid === id) trainIds.delete(key);
+    return p;
+  };
+
+  const start = (slot: Slot): void => {
+    const worker = new Worker(entry, { workerData: { role: WORKER_MARK } });
+    slot.worker = worker;
+    slot.busy = null;
+    const current = (): boolean => slot.worker === worker;
+    worker.on('message', (reply: WorkerReply) => {
+      if (!current()) return;
+      slot.busy = null;
+      const p = settle(reply.id);
+      if (p !== undefined) {
+        if (reply.type === 'done') p.resolve(reply.result);
+        else p.reject(new Error(reply.message));
+      }
+      pump();
+    });
+    const fail = (error: Error): void => {
+      if (!current() || closed) return;
+      if (slot.busy !== null) settle(slot.busy)?.reject(error);
+      slot.busy = null;
+    };
+    worker.on('error', fail);
+    worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
+    // The data's SharedArrayBuffers are shared with the thread, not copied.
+    const init: WorkerRequest = { type: 'init', data: shared, ctx };
+    worker.postMessage(init);
+  };
+
+  for (let k = 0; k < size; k++) {
+    const slot = { busy: null } as unknown as Slot;
+    start(slot);
+    slots.push(slot);
+  }
+
+  const submit = <R extends TaskResult | PruneResult>(job: Job): Promise<R> =>
+    new Promise<R>((resolve, reject) => {
+      if (closed) {
+        reject(new Error('search worker pool is closed'));
+        return;
+      }
+      const id = nextId++;
+      pending.set(id, { resolve: resolve as (r: TaskResult | PruneResult) => void, reject });
+      if (job.type === 'train') trainIds.set(taskKey(job.task), id);
+      queue.push({ id, job });
+      pump();
+    });
+
+  return {
+    size,
+    train: (task) => submit<TaskResult>({ type: 'train', task }),
+    prune: (job) => submit<PruneResult>({ type: 'prune', job }),
+    discard(task) {
+      const id = trainIds.get(taskKey(task));
+      if (id === undefined) return;
+      settle(id);
+      const q = queue.findIndex((e) => e.id === id);
+      if (q >= 0) {
+        queue.splice(q, 1);
+        return;
+      }
+      const slot = slots.find((s) => s.busy === id);
+      if (slot === undefined) return;
+      void slot.worker.terminate();
+      start(slot);
+      pump();
+    },
+    async close() {
+      closed = true;
+      queue.length = 0;
+      await Promise.all(slots.map((s) => s.worker.terminate()));
+      pending.clear();
+    },
+  };
+}
