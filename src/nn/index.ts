@@ -6,7 +6,7 @@ import type { Activation, Init, Optimizer, TargetConfig } from '../config/types.
 import type { EncodedDataset } from '../data/types.js';
 import type { OptimizerSettings } from './optimizers.js';
 import { rngFor as rngForImpl } from './rng.js';
-import { createTrainer as createTrainerImpl } from './trainer.js';
+import { createTrainer as createTrainerImpl, trainerFromNetwork as trainerFromNetworkImpl } from './trainer.js';
 import { fromJson } from './network.js';
 import { referenceForward, makeScratch, headCode, headOutputs } from './reference.js';
 import { meetsTarget as meetsTargetImpl } from './metrics.js';
@@ -107,6 +107,14 @@ export interface Trainer {
 
 export function createTrainer(data: EncodedDataset, width: number, options: TrainOptions, rng: Rng): Trainer {
   return createTrainerImpl(data, width, options, rng);
+}
+
+/**
+ * A trainer that continues from an existing network (any width): its weights, with fresh
+ * optimiser and stall state. The prune phase restores refused removals with it.
+ */
+export function trainerFromNetwork(data: EncodedDataset, net: NetworkJson, options: TrainOptions, rng: Rng): Trainer {
+  return trainerFromNetworkImpl(data, net, options, rng);
 }
 
 /** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */

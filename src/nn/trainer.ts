@@ -10,6 +10,7 @@ import { computeMetrics, meetsTarget, metricValue, targetMetric, type Metrics } 
 import {
   defaultInit,
   describe,
+  fromJson,
   initHiddenNeuron,
   initParams,
   layoutOf,
@@ -304,6 +305,37 @@ class NetworkTrainer implements Trainer {
   snapshot(): NetworkJson {
     return toJson(this.shape, this.params);
   }
+
+  /** Takes over the weights of `net` (same shape); optimiser and stall state stay as new. */
+  load(net: NetworkJson): void {
+    const { shape, params } = fromJson(net);
+    const s = this.shape;
+    if (shape.inputs !== s.inputs || shape.width !== s.width || shape.outputs !== s.outputs || shape.head !== s.head || shape.activation !== s.activation) {
+      throw new RangeError(
+        `network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`,
+      );
+    }
+    this.params.set(params);
+  }
+}
+
+/**
+ * A trainer that continues from an existing network: its weights, fresh optimiser and stall
+ * state. Deterministic: the same arguments give the same later runs.
+ */
+export function trainerFromNetwork(
+  data: EncodedDataset,
+  net: NetworkJson,
+  options: TrainOptions,
+  rng: Rng,
+  extras: TrainerExtras = {},
+): Trainer {
+  const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), {
+    ...(options.optimizerSettings ?? {}),
+    ...(extras.optimizerSettings ?? {}),
+  });
+  trainer.load(net);
+  return trainer;
 }
 
 export function createTrainer(

@@ -7,7 +7,7 @@ import { Worker } from 'node:worker_threads';
 import type { EncodedDataset } from '../data/types.js';
 import { taskKey } from './growth.js';
 import type { TaskResult } from './growth.js';
-import { GrownTrainers } from './task.js';
+import { runPruneJob, runTask } from './task.js';
 import type { PruneJob, PruneResult, SearchContext } from './task.js';
 import type { TrainingTask } from './types.js';
 
@@ -39,16 +39,15 @@ export type WorkerReply =
 const yieldToEventLoop = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
 
 export function inThreadExecutor(data: EncodedDataset, ctx: SearchContext): Executor {
-  const grown = new GrownTrainers();
   return {
     size: 1,
     async train(task) {
       await yieldToEventLoop();
-      return grown.run(data, ctx, task);
+      return runTask(data, ctx, task);
     },
     async prune(job) {
       await yieldToEventLoop();
-      return grown.prune(data, ctx, job);
+      return runPruneJob(data, ctx, job);
     },
     discard() {},
     async close() {},
@@ -98,31 +97,14 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
   const pending = new Map<number, Pending>();
   const trainIds = new Map<string, number>();
   const queue: { id: number; job: Job }[] = [];
-  /** Which thread ran each growth task (it may still hold the trained network). */
-  const ranOn = new Map<string, Worker>();
   const slots: Slot[] = [];
   let nextId = 0;
   let closed = false;
 
-  /** Next queued job for this thread: a prune job of a task it ran comes first, else the oldest job. */
-  const takeFor = (slot: Slot): { id: number; job: Job } | undefined => {
-    let k = queue.findIndex((e) => e.job.type === 'prune' && ranOn.get(taskKey(e.job.job.task)) === slot.worker);
-    // Leave a prune job to its own thread when that thread is idle too.
-    const homeIdleElsewhere = (j: Job): boolean => {
-      if (j.type !== 'prune') return false;
-      const home = ranOn.get(taskKey(j.job.task));
-      return slots.some((o) => o !== slot && o.busy === null && o.worker === home);
-    };
-    if (k < 0) k = queue.findIndex((e) => !homeIdleElsewhere(e.job));
-    return k < 0 ? undefined : queue.splice(k, 1)[0];
-  };
-
   const pump = (): void => {
     for (const slot of slots) {
       if (slot.busy !== null || queue.length === 0) continue;
-      const next = takeFor(slot);
-      if (next === undefined) continue;
-      if (next.job.type === 'train') ranOn.set(taskKey(next.job.task), slot.worker);
+      const next = queue.shift()!;
       slot.busy = next.id;
       const msg: WorkerRequest =
         next.job.type === 'train'

@@ -191,7 +191,7 @@ export async function runSearch(
     if (search.prune) {
       pruned = await Promise.all(
         reachedTasks.map(async (t) => {
-          const r = await executor.prune({ task: { width: t.width, restart: t.restart }, network: t.network });
+          const r = await executor.prune({ task: { width: t.width, restart: t.restart }, network: t.network! });
           progress({ phase: 'prune', width: r.width, restart: r.restart, epoch: r.steps.length, best: r.metric });
           return r;
         }),

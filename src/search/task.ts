@@ -5,8 +5,7 @@
  */
 import type { TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
-import * as nn from '../nn/index.js';
-import { createTrainer, meetsTarget, rngFor } from '../nn/index.js';
+import { createTrainer, meetsTarget, rngFor, trainerFromNetwork } from '../nn/index.js';
 import type { NetworkJson, Rng, Trainer, TrainOptions, TrainRecord } from '../nn/index.js';
 import type { GrowthPlan, Segment, TaskResult } from './growth.js';
 import type { PruneStep, TrainingTask } from './types.js';
@@ -96,33 +95,11 @@ export function runTask(data: EncodedDataset, ctx: SearchContext, task: Training
   return growTrainer(data, ctx, task).result;
 }
 
-/**
- * Trainers of growth tasks that reached the target, kept by the thread that ran them so a
- * prune job sent to that thread continues from them instead of replaying the training.
- */
-export class GrownTrainers {
-  private readonly held = new Map<string, Trainer>();
-  run(data: EncodedDataset, ctx: SearchContext, task: TrainingTask): TaskResult {
-    const { trainer, result } = growTrainer(data, ctx, task);
-    if (result.reached) this.held.set(`${task.width}:${task.restart}`, trainer);
-    return result;
-  }
-  prune(data: EncodedDataset, ctx: SearchContext, job: PruneJob): PruneResult {
-    const key = `${job.task.width}:${job.task.restart}`;
-    const grown = this.held.get(key) ?? null;
-    this.held.delete(key);
-    return runPruneJob(data, ctx, job, grown);
-  }
-  has(task: TrainingTask): boolean {
-    return this.held.has(`${task.width}:${task.restart}`);
-  }
-}
-
 export interface PruneJob {
   /** The growth task whose network is pruned. */
   task: TrainingTask;
-  /** That task's network (used when the engine can continue from a network; else the task is replayed). */
-  network: NetworkJson | null;
+  /** That task's trained network. */
+  network: NetworkJson;
 }
 
 export interface PruneResult {
@@ -137,48 +114,21 @@ export interface PruneResult {
   trainings: number;
 }
 
-type FromNetwork = (data: EncodedDataset, net: NetworkJson, options: TrainOptions, rng: Rng) => Trainer;
-
-/** The engine's optional "continue from a network" entry point, when it has one. */
-function engineFromNetwork(): FromNetwork | null {
-  const f = (nn as unknown as Record<string, unknown>)['trainerFromNetwork'];
-  return typeof f === 'function' ? (f as FromNetwork) : null;
-}
-
 /**
  * Shrink one network by compensated ablation: score every hidden neuron by the loss
  * increase of removing it with its mean activation folded into the output biases,
  * remove the least salient, retrain for `pruneEpochs`, and keep the removal only if
  * the network still reaches the target; otherwise restore and try the next candidate.
  */
-export function runPruneJob(
-  data: EncodedDataset,
-  ctx: SearchContext,
-  job: PruneJob,
-  /** The growth task's own trainer, when this thread still holds it (same state as a replay, without the cost). */
-  grown: Trainer | null = null,
-): PruneResult {
+export function runPruneJob(data: EncodedDataset, ctx: SearchContext, job: PruneJob): PruneResult {
   const target = ctx.train.target;
   const retrain: TrainOptions = { ...ctx.train, stall: null };
-  const fromNetwork = engineFromNetwork();
-  const restartRng = (): Rng => rngFor(ctx.seed, job.task.width, job.task.restart);
-  // Removals kept so far, for rebuilding by replay when the engine cannot load a network.
-  const kept: number[] = [];
-
-  let trainer: Trainer;
-  if (fromNetwork !== null && job.network !== null) trainer = fromNetwork(data, job.network, retrain, restartRng());
-  else trainer = grown ?? growTrainer(data, ctx, job.task).trainer;
+  // Every restore starts from a snapshot with fresh optimiser state, so the result does not
+  // depend on which thread ran the growth task.
+  const fromSnapshot = (net: NetworkJson): Trainer =>
+    trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.task.width, job.task.restart));
+  let trainer = fromSnapshot(job.network);
   let trainings = 0;
-
-  const rebuild = (snapshot: NetworkJson): Trainer => {
-    if (fromNetwork !== null) return fromNetwork(data, snapshot, retrain, restartRng());
-    const t = growTrainer(data, ctx, job.task).trainer;
-    for (const j of kept) {
-      t.removeNeuron(j);
-      t.run(ctx.pruneEpochs);
-    }
-    return t;
-  };
 
   const grownWidth = trainer.network.width;
   let metric = trainer.evaluate().validationMetric;
@@ -191,7 +141,7 @@ export function runPruneJob(
     let dirty = false;
     for (const j of order.slice(0, ctx.pruneCandidates)) {
       // Restore lazily: after the last refused candidate nothing trains again, so no rebuild is needed.
-      if (dirty) trainer = rebuild(network);
+      if (dirty) trainer = fromSnapshot(network);
       trainer.removeNeuron(j);
       const rec = trainer.run(ctx.pruneEpochs);
       trainings++;
@@ -199,7 +149,6 @@ export function runPruneJob(
       const ok = Number.isFinite(after) && meetsTarget(after, target);
       steps.push({ restart: job.task.restart, width, neuron: j, metricBefore: metric, metricAfter: after, kept: ok });
       if (ok) {
-        kept.push(j);
         metric = after;
         network = trainer.snapshot();
         removed = true;

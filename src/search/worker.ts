@@ -6,7 +6,7 @@ import { parentPort, workerData } from 'node:worker_threads';
 import type { EncodedDataset } from '../data/types.js';
 import { WORKER_MARK } from './executor.js';
 import type { WorkerReply, WorkerRequest } from './executor.js';
-import { GrownTrainers } from './task.js';
+import { runPruneJob, runTask } from './task.js';
 import type { SearchContext } from './task.js';
 
 /** True when this thread was started by the search pool. */
@@ -19,7 +19,6 @@ export function runSearchWorker(): void {
   if (port === null) throw new Error('runSearchWorker() must run in a worker thread');
   let data: EncodedDataset | null = null;
   let ctx: SearchContext | null = null;
-  const grown = new GrownTrainers();
   port.on('message', (msg: WorkerRequest) => {
     if (msg.type === 'init') {
       data = msg.data;
@@ -29,7 +28,7 @@ export function runSearchWorker(): void {
     let reply: WorkerReply;
     try {
       if (data === null || ctx === null) throw new Error('search worker got a task before its data');
-      const result = msg.type === 'train' ? grown.run(data, ctx, msg.task) : grown.prune(data, ctx, msg.job);
+      const result = msg.type === 'train' ? runTask(data, ctx, msg.task) : runPruneJob(data, ctx, msg.job);
       reply = { type: 'done', id: msg.id, result };
     } catch (e) {
       reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };

@@ -1,6 +1,6 @@
 /** The training run's stop reasons, metrics and records. */
 import { describe, expect, it } from 'vitest';
-import { createTrainer, meetsTarget, predict, rngFor } from '../../src/nn/index.js';
+import { createTrainer, meetsTarget, predict, rngFor, trainerFromNetwork } from '../../src/nn/index.js';
 import { computeMetrics, metricValue, targetMetric } from '../../src/nn/metrics.js';
 import { HEAD_LINEAR, HEAD_LOGISTIC, HEAD_SOFTMAX } from '../../src/nn/reference.js';
 import { Xoshiro128StarStar } from '../../src/nn/rng.js';
@@ -85,5 +85,22 @@ describe('training run', () => {
       const all = computeMetrics(head, K, logits, t, rows, 3.5);
       for (const name of names) expect(targetMetric(name, head, K, logits, t, rows, 3.5)).toBe(metricValue(all, name));
     }
+  });
+});
+
+describe('trainerFromNetwork', () => {
+  it('continues from a snapshot: same function bit for bit, and a shape mismatch is refused', () => {
+    const data = xorDataset();
+    const source = createTrainer(data, 3, options(), rngFor(2, 3, 0));
+    source.run(50);
+    const snap = source.snapshot();
+    const copy = trainerFromNetwork(data, snap, options(), rngFor(9, 9, 9));
+    expect(copy.snapshot()).toEqual(snap);
+    const a = predict(snap, data.xTrain, 4);
+    const b = predict(copy.snapshot(), data.xTrain, 4);
+    expect(Array.from(b)).toEqual(Array.from(a));
+    expect(copy.evaluate().trainLoss).toBe(source.evaluate().trainLoss);
+    const other = dataset('classification', 3, 1, [0, 0, 0, 1, 1, 1], [0, 1]);
+    expect(() => trainerFromNetwork(other, snap, options(), rngFor(1, 1, 1))).toThrow(/does not fit/);
   });
 });
