@@ -96,8 +96,8 @@ describe('usage mistakes exit with code 2 and one line', () => {
     expectUsageError(await runCli(['check', '--report', 'missing/out.json'], { files: FILES }), 'missing', 'does not exist'));
 });
 
-describe('check on a small table (data stage)', () => {
-  test('prints the data summary to stderr, keeps stdout clean, writes the report JSON', async () => {
+describe('check on a small table', () => {
+  test('prints the data summary and the verdict to stderr, keeps stdout clean, writes the report JSON', async () => {
     const run = await runCli(['check', '--report', 'out/report.json'], {
       files: { ...FILES, 'out/.keep': '' },
     });
@@ -111,7 +111,8 @@ describe('check on a small table (data stage)', () => {
       timing: Record<string, number>;
     };
     expect(report.schema).toBe('neuron-budget/report@1');
-    expect(report.verdict).toBeNull();
+    // No baseline in the temp folder: the first result is new.
+    expect(report.verdict).toBe('new');
     // Counted from the CSV above: 30 rows, 10 per class; 20% held out is 6 rows.
     expect(report.data.rows).toBe(30);
     expect(report.data.trainRows + report.data.validationRows).toBe(30);
@@ -125,8 +126,8 @@ describe('check on a small table (data stage)', () => {
       { label: 'normal', count: 10 },
     ]);
     expect(report.data.fingerprint).toMatch(/^[0-9a-f]{64}$/);
-    expect(Object.keys(report.timing)).toEqual(['loadSeconds']);
-    for (const shown of ['30 used', '24 training / 6 validation', 'bearing_wear', report.data.fingerprint]) {
+    expect(Object.keys(report.timing).sort()).toEqual(['growthSeconds', 'loadSeconds', 'pruneSeconds', 'searchSeconds']);
+    for (const shown of ['30 used', '24 training / 6 validation', 'bearing_wear', report.data.fingerprint, 'NEW']) {
       expect(run.stderr).toContain(shown);
     }
   });
