@@ -17,34 +17,12 @@ export function computeMetrics(head: number, K: number, logits: Float64Array, y:
   let loss = 0;
   for (let p = 0; p < rows; p++) loss += rowLoss(head, K, logits, p * K, y[p]);
   loss /= rows;
+  const metric = (name: MetricName): number => targetMetric(name, head, K, logits, y, rows, targetStd);
   if (head === HEAD_LINEAR) {
-    let se = 0;
-    let ae = 0;
-    let maxAe = 0;
-    for (let p = 0; p < rows; p++) {
-      const d = (logits[p] - y[p]) * targetStd;
-      const a = d < 0 ? -d : d;
-      se += d * d;
-      ae += a;
-      if (a > maxAe || a !== a) maxAe = a;
-    }
-    return { loss, accuracy: NaN, rmse: Math.sqrt(se / rows), mae: ae / rows, maxAbsError: maxAe };
+    return { loss, accuracy: NaN, rmse: metric('rmse'), mae: metric('mae'), maxAbsError: metric('max-abs-error') };
   }
-  let correct = 0;
-  for (let p = 0; p < rows; p++) {
-    let cls: number;
-    if (head === HEAD_LOGISTIC) {
-      cls = logits[p] > 0 ? 1 : 0;
-    } else {
-      cls = 0;
-      const o = p * K;
-      for (let k = 1; k < K; k++) if (logits[o + k] > logits[o + cls]) cls = k;
-    }
-    if (cls === y[p]) correct++;
-  }
-  // A network whose logits are NaN has no accuracy.
-  const finite = Number.isFinite(loss);
-  return { loss, accuracy: finite ? correct / rows : NaN, rmse: NaN, mae: NaN, maxAbsError: NaN };
+  // A network whose loss is not finite has no accuracy.
+  return { loss, accuracy: Number.isFinite(loss) ? metric('accuracy') : NaN, rmse: NaN, mae: NaN, maxAbsError: NaN };
 }
 
 /** One metric without building the whole record (used inside the epoch loop). */
