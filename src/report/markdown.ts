@@ -22,7 +22,7 @@ import {
   targetPhrase,
 } from './format.js';
 import type { Report } from './types.js';
-import { overDeviceBudget, VERDICT_LABEL, viewOf, type ReportView, type WidthRow } from './view.js';
+import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf, type ReportView, type WidthRow } from './view.js';
 
 /** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
 export const COMMENT_LIMIT = 65_000;
@@ -77,14 +77,7 @@ function summaryTable(view: ReportView, report: Report): string {
   const c = view.current;
   const metricName = md(view.metricName);
   const dash = '—';
-  const cWidth =
-    c.width === null
-      ? report.search?.outcome === 'inconclusive'
-        ? 'not settled'
-        : report.search
-          ? 'none in range'
-          : dash
-      : `**${c.width}**${view.prunedFrom !== null ? ` (pruned from ${view.prunedFrom})` : ''}`;
+  const cWidth = currentWidthCell(view, report, dash, (w) => `**${w}**`);
   const rowsDelta = b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${formatDelta(c.rows - b.rows)})` : '';
   const rows = [
     '| | Baseline | This change |',

@@ -6,7 +6,7 @@ import type { DataChanges } from '../gate/types.js';
 import { escapeTerminal as plain } from './escape.js';
 import { formatCount, formatDelta, formatMetric, formatSeconds, neurons, successRate, targetPhrase } from './format.js';
 import type { Report } from './types.js';
-import { overDeviceBudget, VERDICT_LABEL, viewOf } from './view.js';
+import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf } from './view.js';
 
 export const TEXT_WIDTH = 80;
 
@@ -21,16 +21,7 @@ export function renderText(report: Report): string {
   const b = view.baseline;
   const c = view.current;
   const dash = '-';
-  const cWidth =
-    c.width === null
-      ? report.search?.outcome === 'inconclusive'
-        ? 'not settled'
-        : report.search
-          ? 'none in range'
-          : dash
-      : view.prunedFrom !== null
-        ? `${c.width} (pruned from ${view.prunedFrom})`
-        : String(c.width);
+  const cWidth = currentWidthCell(view, report, dash);
   const rowsDelta = b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${formatDelta(c.rows - b.rows)})` : '';
   const table: [string, string, string][] = [
     ['', 'baseline', 'this change'],

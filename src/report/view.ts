@@ -90,6 +90,16 @@ export function viewOf(report: Report): ReportView {
 }
 
 /** The width found exceeds gate.max-width. */
+/** This change's width for the summary table: the width and what pruning did, or why there is none. */
+export function currentWidthCell(view: ReportView, report: Report, dash: string, strong: (s: string) => string = (s) => s): string {
+  const c = view.current;
+  if (c.width === null) {
+    if (report.search?.outcome === 'inconclusive') return 'not settled';
+    return report.search ? 'none in range' : dash;
+  }
+  return `${strong(String(c.width))}${view.prunedFrom !== null ? ` (pruned from ${view.prunedFrom})` : ''}`;
+}
+
 export function overDeviceBudget(report: Report): boolean {
   const budget = report.gate?.maxWidth ?? null;
   return budget !== null && report.width !== null && report.width > budget;
