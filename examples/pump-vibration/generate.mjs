@@ -9,63 +9,79 @@
 // writes readings.csv (the committed data a main branch would hold) and readings-pr.csv
 // (the same rows plus readings from a new pump model, as a pull request would bring them).
 // Deterministic: a seeded xoshiro128** stream, no Math.random, fixed number formatting.
+//
+// How the data are shaped (so that the demo shows what the product is for): in normal
+// running every indicator wanders over a wide range (operating point, flow, mounting),
+// and a fault lifts ONE indicator only a little above the top of that range. So each
+// fault signature is a threshold on its own indicator, and a network needs roughly one
+// hidden neuron per signature. The main-branch pumps have three signatures (a handful of
+// neurons); the pull request's new pump model shows its faults in seven, some of them in
+// columns where the older pumps show a different fault (clearly more neurons).
 import { writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 // ---- Knobs -----------------------------------------------------------------------------
 const SEED = 20240611n;
-/** Rows per pump model in the base file. */
-const BASE_ROWS_PER_MODEL = 700;
+/** Rows per pump model in the base file (two models). */
+const BASE_ROWS_PER_MODEL = 600;
 /** Rows the pull request adds, all from the new model. */
 const PR_ROWS = 1500;
-/** Share of each condition among a model's readings (the rest is normal). */
+/** Share of each fault among a layout's readings (the rest is normal). */
 const CONDITION_SHARE = {
   horizontal: { imbalance: 0.2, misalignment: 0.2, bearing_wear: 0.2 },
-  vertical: { imbalance: 0.2, misalignment: 0.2, bearing_wear: 0.2 },
+  vertical: { imbalance: 0.25, misalignment: 0.25, bearing_wear: 0.25 },
 };
-/** Spread of the band levels (log-normal sigma) per layout. Larger → classes overlap more. */
-const BAND_SPREAD = { horizontal: 0.28, vertical: 0.22 };
-/** Spread of kurtosis and crest factor around their means (relative). */
-const SHAPE_SPREAD = 0.18;
-
 /**
- * Mean band levels in mm/s (1x and 2x running speed, bearing band), kurtosis and crest
- * factor per layout and condition, before the model's `scale`. The two horizontal AQ
- * models share one signature. The vertical HX-90 of the pull request runs at twice the
- * speed with its sensor on the motor's axial face, and the bands are fixed in hertz for
- * the 1480 rpm fleet. So, in this invented world, the same columns mean other things for
- * it: imbalance lifts band_2x, misalignment's harmonic lands in the bearing band, and
- * bearing wear shows either as impacts (early: high kurtosis and crest factor) or as
- * looseness at running speed in band_1x (late). A condition listed with two forms picks
- * one at random. Same features, new meanings: the network needs an extra hidden neuron
- * to tell the model families apart and apply each one's rules.
+ * Normal range of each indicator [low, high], drawn log-uniformly. Band levels and
+ * broadband energy are in mm/s before the model's `scale`; casing temperature is a
+ * multiple of the model's `tempBase`; kurtosis and crest factor are as they are.
  */
+const NORMAL_RANGE = {
+  band_1x: [0.6, 1.6],
+  band_2x: [0.3, 0.8],
+  bearing_band: [0.2, 0.5],
+  broadband: [0.3, 0.6],
+  kurtosis: [2.6, 3.6],
+  crest_factor: [2.8, 3.6],
+  casing_temp: [0.85, 1.1],
+};
+/** A raised indicator starts GAP times above the top of its normal range... */
+const GAP = 1.04;
+/** ...and spans RAISE times that start (log-uniformly). Larger GAP or RAISE: easier, fewer neurons. */
+const RAISE = 1.25;
+
 const MODELS = {
   // rpm is for the reader: the signatures below already reflect each model's speed.
-  'AQ-40': { rpm: 1480, scale: 1.0, tempBase: 41 },
-  'AQ-55': { rpm: 1480, scale: 1.35, tempBase: 45 },
-  'HX-90': { rpm: 2960, scale: 1.6, tempBase: 52 },
+  'AQ-40': { rpm: 1480, scale: 1.0, tempBase: 41, layout: 'horizontal' },
+  'AQ-55': { rpm: 1480, scale: 1.35, tempBase: 45, layout: 'horizontal' },
+  'HX-90': { rpm: 2960, scale: 1.6, tempBase: 52, layout: 'vertical' },
 };
+/**
+ * Which indicators each condition raises, per layout. A condition with several forms
+ * picks one with equal odds. The horizontal AQ models have one form per fault. The
+ * vertical HX-90 of the pull request runs at twice the speed with its sensor on the
+ * motor's axial face, and the bands are fixed in hertz for the 1480 rpm fleet, so in this
+ * invented world the same columns mean other things for it: its running speed lands in
+ * band_2x, its misalignment harmonic in the bearing band, and looseness from worn
+ * bearings at half its speed in band_1x. Imbalance may instead excite the motor frame
+ * (broadband), misalignment may show only as heat, and bearing wear shows as impacts
+ * (kurtosis early, crest factor later) or as looseness.
+ */
 const SIGNATURES = {
   horizontal: {
-    normal: { x1: 1.0, x2: 0.45, bearing: 0.3, kurtosis: 3.0, crest: 3.1 },
-    imbalance: { x1: 3.0, x2: 0.55, bearing: 0.33, kurtosis: 3.0, crest: 3.1 },
-    misalignment: { x1: 1.25, x2: 2.1, bearing: 0.36, kurtosis: 3.1, crest: 3.1 },
-    bearing_wear: { x1: 1.05, x2: 0.5, bearing: 1.3, kurtosis: 5.6, crest: 4.6 },
+    normal: [[]],
+    imbalance: [['band_1x']],
+    misalignment: [['band_2x']],
+    bearing_wear: [['bearing_band', 'kurtosis']],
   },
   vertical: {
-    normal: { x1: 1.0, x2: 0.45, bearing: 0.6, kurtosis: 3.0, crest: 3.1 },
-    imbalance: { x1: 1.1, x2: 2.1, bearing: 0.65, kurtosis: 3.0, crest: 3.1 },
-    misalignment: { x1: 1.1, x2: 0.6, bearing: 2.0, kurtosis: 3.1, crest: 3.1 },
-    bearing_wear: [
-      { x1: 1.05, x2: 0.5, bearing: 0.65, kurtosis: 5.6, crest: 4.6 },
-      { x1: 3.0, x2: 0.55, bearing: 0.7, kurtosis: 3.2, crest: 3.2 },
-    ],
+    normal: [[]],
+    imbalance: [['band_2x'], ['broadband']],
+    misalignment: [['bearing_band'], ['casing_temp']],
+    bearing_wear: [['kurtosis'], ['crest_factor'], ['band_1x']],
   },
 };
-
-const layoutOf = (model) => (model === 'HX-90' ? 'vertical' : 'horizontal');
 
 // ---- Seeded random numbers (xoshiro128** 1.1, seeded through SplitMix64) ----------------
 function splitMix64(seed) {
@@ -108,34 +124,40 @@ function gaussian() {
   const u = 1 - uniform(); // (0, 1]
   return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * uniform());
 }
-const logNormal = (mean, sigma) => mean * Math.exp(sigma * gaussian() - (sigma * sigma) / 2);
+const logUniform = (low, high) => low * Math.exp(Math.log(high / low) * uniform());
 
 // ---- One reading -----------------------------------------------------------------------
-function pickCondition(model) {
+function pickCondition(layout) {
   let u = uniform();
-  for (const [condition, share] of Object.entries(CONDITION_SHARE[layoutOf(model)])) {
+  for (const [condition, share] of Object.entries(CONDITION_SHARE[layout])) {
     if (u < share) return condition;
     u -= share;
   }
   return 'normal';
 }
 
+/** One indicator's level: inside its normal range, or just above it when raised. */
+function level(name, raised, factor) {
+  const [low, high] = NORMAL_RANGE[name];
+  const value = raised ? logUniform(high * GAP, high * GAP * RAISE) : logUniform(low, high);
+  return value * factor;
+}
+
 function reading(id, model) {
-  const condition = pickCondition(model);
   const m = MODELS[model];
-  const forms = SIGNATURES[layoutOf(model)][condition];
-  // Some conditions show in one of two ways; pick one with equal odds.
-  const s = Array.isArray(forms) ? forms[uniform() < 0.5 ? 0 : 1] : forms;
-  const spread = BAND_SPREAD[layoutOf(model)];
-  const x1 = logNormal(s.x1 * m.scale, spread);
-  const x2 = logNormal(s.x2 * m.scale, spread);
-  const bearing = logNormal(s.bearing * m.scale, spread);
-  const broadband = logNormal(0.4 * m.scale, 0.2);
+  const condition = pickCondition(m.layout);
+  const forms = SIGNATURES[m.layout][condition];
+  const form = forms[Math.min(forms.length - 1, Math.floor(uniform() * forms.length))];
+  const up = (name) => form.includes(name);
+  const x1 = level('band_1x', up('band_1x'), m.scale);
+  const x2 = level('band_2x', up('band_2x'), m.scale);
+  const bearing = level('bearing_band', up('bearing_band'), m.scale);
+  const broadband = level('broadband', up('broadband'), m.scale);
+  const kurtosis = level('kurtosis', up('kurtosis'), 1);
+  const crest = level('crest_factor', up('crest_factor'), 1);
+  const temperature = level('casing_temp', up('casing_temp'), m.tempBase);
   const rms = Math.sqrt(x1 * x1 + x2 * x2 + bearing * bearing + broadband * broadband);
-  const kurtosis = Math.max(1.8, s.kurtosis * (1 + SHAPE_SPREAD * gaussian()));
-  const crest = Math.max(1.5, s.crest * (1 + SHAPE_SPREAD * gaussian()));
   const peakToPeak = 2 * rms * crest * (1 + 0.05 * gaussian());
-  const temperature = m.tempBase + (condition === 'bearing_wear' ? 5 : 0) + 4 * gaussian();
   return {
     reading_id: `R${String(id).padStart(5, '0')}`,
     pump_model: model,

@@ -2,22 +2,26 @@
  * Golden files of the comment and the terminal text for a failing pull request, so any
  * change to the layout is deliberate.
  *
- * Input: test/report/fixtures/demo-fail.report.json, a JSON report (what `check --report`
- * writes). To regenerate everything after a deliberate layout change, or after replacing
- * the fixture with the real demo's report:
+ * Input: test/report/fixtures/demo-fail.report.json, the real report of the demo's failing
+ * case, made by
+ *
+ *   node dist/cli/index.js baseline --config examples/pump-vibration/neuron-budget.yml
+ *   node dist/cli/index.js check --config examples/pump-vibration/neuron-budget.pr.yml \
+ *     --report test/report/fixtures/demo-fail.report.json
+ *
+ * To regenerate the golden files after a deliberate layout change or a new fixture:
  *
  *   UPDATE_GOLDEN=1 npx vitest run test/report
  *
  * This rewrites test/report/golden/demo-fail.md, test/report/golden/demo-fail.txt and
- * docs/example-comment.md (and creates the fixture from demo-fixture.ts if it is absent).
+ * docs/example-comment.md.
  */
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { renderMarkdown, renderText } from '../../src/report/index.js';
 import type { Report } from '../../src/report/types.js';
-import { demoFailReport } from './demo-fixture.js';
 
 const here = (p: string): string => fileURLToPath(new URL(p, import.meta.url));
 const FIXTURE = here('./fixtures/demo-fail.report.json');
@@ -32,10 +36,6 @@ function write(path: string, text: string): void {
 }
 
 function loadFixture(): Report {
-  if (!existsSync(FIXTURE)) {
-    if (!UPDATE) throw new Error(`${FIXTURE} is missing; run UPDATE_GOLDEN=1 npx vitest run test/report`);
-    write(FIXTURE, `${JSON.stringify(demoFailReport(), null, 2)}\n`);
-  }
   return JSON.parse(readFileSync(FIXTURE, 'utf8')) as Report;
 }
 
