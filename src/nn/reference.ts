@@ -24,11 +24,22 @@ export function headCode(h: Head): number {
   return h === 'linear' ? HEAD_LINEAR : h === 'logistic' ? HEAD_LOGISTIC : HEAD_SOFTMAX;
 }
 
+/**
+ * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
+ * the products of a block's rows are added in row order starting from +0, and that block sum is
+ * then added to the running gradient. The WebAssembly kernel keeps the block sums in registers
+ * and must use the same block size (BLOCK in src/nn/wasm/kernel.as), so that both give the same bits.
+ */
+export const GRAD_BLOCK_ROWS = 32;
+
 /** Scratch memory for one network width, allocated once outside the epoch loop. */
 export interface Scratch {
   a: Float64Array;
   h: Float64Array;
+  /** Hidden deltas of the rows of the current gradient block (GRAD_BLOCK_ROWS × width). */
   dh: Float64Array;
+  /** Block sums of one input's weight gradient (width). */
+  acc: Float64Array;
   z: Float64Array;
   dz: Float64Array;
 }
@@ -37,7 +48,8 @@ export function makeScratch(width: number, outputs: number): Scratch {
   return {
     a: new Float64Array(width),
     h: new Float64Array(width),
-    dh: new Float64Array(width),
+    dh: new Float64Array(GRAD_BLOCK_ROWS * width),
+    acc: new Float64Array(width),
     z: new Float64Array(outputs),
     dz: new Float64Array(outputs),
   };
@@ -145,10 +157,12 @@ export function referenceLossAndGradient(
   const act = activationCode(shape.activation);
   const head = headCode(shape.head);
   const lay = layoutOf(shape);
-  const { a, h, dh, z, dz } = s;
+  const { a, h, dh, acc, z, dz } = s;
   grad.fill(0);
   let loss = 0;
   for (let p = start; p < end; p++) {
+    const q = (p - start) % GRAD_BLOCK_ROWS; // this row's place in its gradient block
+    const qo = q * H;
     hiddenRow(act, D, H, params, lay.b1, x, p, a, h);
     outputRow(H, K, params, lay.w2, lay.b2, h, z);
     loss += headLossAndDelta(head, K, z, y[p], dz);
@@ -156,23 +170,41 @@ export function referenceLossAndGradient(
     for (let j = 0; j < H; j++) {
       const hj = h[j];
       const wo = lay.w2 + j * K;
-      let acc = 0;
+      let sum = 0;
       for (let k = 0; k < K; k++) {
         grad[wo + k] += hj * dz[k];
-        acc += params[wo + k] * dz[k];
+        sum += params[wo + k] * dz[k];
       }
       const fp = act === ACT_TANH ? 1 - hj * hj + primeOffset : act === ACT_LOGISTIC ? hj * (1 - hj) + primeOffset : a[j] > 0 ? 1 : 0;
-      dh[j] = acc * fp;
+      dh[qo + j] = sum * fp;
     }
-    for (let j = 0; j < H; j++) grad[lay.b1 + j] += dh[j];
-    const xo = p * D;
-    for (let i = 0; i < D; i++) {
-      const xi = x[xo + i];
-      const go = i * H;
-      for (let j = 0; j < H; j++) grad[go + j] += xi * dh[j];
-    }
+    for (let j = 0; j < H; j++) grad[lay.b1 + j] += dh[qo + j];
+    if (q === GRAD_BLOCK_ROWS - 1 || p === end - 1) addInputGradient(D, H, x, p - q, q + 1, dh, acc, grad);
   }
   return loss;
+}
+
+/** Adds the block sums Σ_q x[first+q, i]·dh[q, j] (q = 0..n−1 in order, from +0) to the W1 gradient. */
+function addInputGradient(
+  D: number,
+  H: number,
+  x: Float64Array,
+  first: number,
+  n: number,
+  dh: Float64Array,
+  acc: Float64Array,
+  grad: Float64Array,
+): void {
+  for (let i = 0; i < D; i++) {
+    acc.fill(0);
+    for (let q = 0; q < n; q++) {
+      const xi = x[(first + q) * D + i];
+      const qo = q * H;
+      for (let j = 0; j < H; j++) acc[j] += xi * dh[qo + j];
+    }
+    const go = i * H;
+    for (let j = 0; j < H; j++) grad[go + j] += acc[j];
+  }
 }
 
 /**

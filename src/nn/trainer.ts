@@ -137,12 +137,11 @@ class NetworkTrainer implements Trainer {
     for (let e = 1; e <= maxEpochs; e++) {
       let loss = 0;
       if (batch >= N) {
-        loss = kernel.lossAndGradient(shape, this.params, x, y, 0, N, this.grad, this.primeOffset);
+        loss = this.fullBatchEpoch();
         if (!Number.isFinite(loss)) {
           stop = 'diverged';
           break;
         }
-        this.updater.step(this.params, this.grad, loss, N);
       } else {
         for (let start = 0; start < N; start += batch) {
           const end = Math.min(N, start + batch);
@@ -211,6 +210,18 @@ class NetworkTrainer implements Trainer {
   }
 
   /** Every metric on the training rows and on the judged rows (validation, or training when there are none). */
+  /**
+   * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no target
+   * check). Returns the summed loss; a non-finite loss leaves the weights untouched.
+   */
+  fullBatchEpoch(): number {
+    const { data } = this;
+    const N = data.trainRows;
+    const loss = this.kernel.lossAndGradient(this.shape, this.params, data.xTrain, data.yTrain, 0, N, this.grad, this.primeOffset);
+    if (Number.isFinite(loss)) this.updater.step(this.params, this.grad, loss, N);
+    return loss;
+  }
+
   metrics(): { train: Metrics; validation: Metrics } {
     const train = this.trainMetrics();
     return { train, validation: this.validationMetrics() ?? train };
@@ -344,7 +355,7 @@ export function createTrainer(
   options: TrainOptions,
   rng: Rng,
   extras: TrainerExtras = {},
-): Trainer & { readonly parameters: Float64Array; metrics(): { train: Metrics; validation: Metrics } } {
+): Trainer & { readonly parameters: Float64Array; fullBatchEpoch(): number; metrics(): { train: Metrics; validation: Metrics } } {
   return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), {
     ...(options.optimizerSettings ?? {}),
     ...(extras.optimizerSettings ?? {}),

@@ -35,6 +35,8 @@ describe('WebAssembly kernel is bit-identical to the float64 reference', () => {
       [3, 5, 7],
       [7, 8, 13],
       [5, 13, 33],
+      // Crosses several 32-row gradient blocks, from block-aligned and unaligned starts.
+      [6, 9, 101],
       [4, 0, 6],
     ]) {
       const shape: Shape = { inputs: D, width: H, outputs: K, activation, head };
@@ -47,6 +49,7 @@ describe('WebAssembly kernel is bit-identical to the float64 reference', () => {
       for (const [s, e] of [
         [0, N],
         [1, N],
+        [5, N],
         [0, Math.ceil(N / 2)],
       ]) {
         // 0: the exact gradient; 0.1: the flat-spot offset training uses.

@@ -3,13 +3,18 @@
 //
 // Every number this kernel produces is bit-identical to the float64 reference in
 // src/nn/reference.ts: each sum runs over the same terms in the same order (SIMD lanes hold
-// different hidden neurons, never parts of one sum), and tanh, exp and log follow the same
-// operations as src/nn/detmath.ts. Rows are processed four at a time so that each weight
-// loaded from memory serves four rows.
+// different hidden neurons or different rows, never parts of one sum), and tanh, exp and log
+// follow the same operations as src/nn/detmath.ts. Rows are processed four at a time so that
+// each weight loaded from memory serves four rows; the input-weight gradient is summed over
+// blocks of BLOCK rows in registers, and the reference sums it in the same blocks.
 //
 // Parameter layout (canonical, shared with TypeScript): W1 inputs×width, b1 width,
 // W2 width×outputs, b2 outputs. Internally the hidden dimension is padded to an even
 // count Hp and W2 is kept transposed (outputs×Hp) so that pairs of hidden neurons load together.
+// W1 and its gradient are kept in panels: the weights of hidden neurons j..j+3 (j a multiple of
+// four) for all inputs lie together, input by input (D × 4 values, starting at 8·j·D bytes),
+// so the loops over inputs read memory in order; when Hp is not a multiple of four, the last
+// panel holds one pair (D × 2 values).
 
 const LN2_HI: f64 = 6.93147180369123816490e-1;
 const LN2_LO: f64 = 1.90821492927058770002e-10;
@@ -29,6 +34,13 @@ const C13: f64 = 1.6059043836821613e-10;
 const TANH_CLAMP: f64 = 22;
 const ROUND_MAGIC: f64 = 6755399441055744.0;
 const SQRT2: f64 = 1.4142135623730951;
+
+/**
+ * Rows per gradient block: the input-weight gradient of a block's rows is summed in registers
+ * (in row order, from +0) and then added to the running gradient; the reference sums the same way.
+ * Must equal GRAD_BLOCK_ROWS in src/nn/reference.ts.
+ */
+const BLOCK: i32 = 32;
 
 const ACT_TANH: i32 = 0;
 const ACT_LOGISTIC: i32 = 1;
@@ -60,7 +72,8 @@ const HEAD_LOGISTIC: i32 = 1;
 }
 
 @inline function tanhV(x: v128): v128 {
-  const ax = f64x2.min(f64x2.abs(x), f64x2.splat(TANH_CLAMP));
+  // pmin(a, b) is b < a ? b : a: one instruction, and like Math.min it keeps a NaN (a is never −0 here).
+  const ax = f64x2.pmin(f64x2.abs(x), f64x2.splat(TANH_CLAMP));
   const y = f64x2.add(ax, ax);
   // k = y/ln2 rounded to a whole number (ties to even) by adding and removing 1.5·2^52; the low
   // bits of the sum then hold k itself, which builds 2^k directly (k is in [0, 64]; NaN lanes
@@ -72,7 +85,8 @@ const HEAD_LOGISTIC: i32 = 1;
   const s = i64x2.shl(i64x2.add(big, i64x2.splat(1023)), 52);
   const em = f64x2.add(f64x2.mul(s, p), f64x2.sub(s, f64x2.splat(1.0)));
   const t = f64x2.div(em, f64x2.add(em, f64x2.splat(2.0)));
-  return v128.bitselect(f64x2.neg(t), t, f64x2.lt(x, f64x2.splat(0.0)));
+  // x < 0 ? −t : t, by flipping the sign bit where x < 0.
+  return v128.xor(t, v128.and(f64x2.lt(x, f64x2.splat(0.0)), f64x2.splat(-0.0)));
 }
 
 @inline function logisticV(x: v128): v128 {
@@ -183,16 +197,22 @@ let GB1: usize = 0;
 let GW2T: usize = 0;
 let GB2: usize = 0;
 let HB: usize = 0; // 4 × Hp hidden activations of the block
-let FB: usize = 0; // 4 × Hp activation derivatives
-let DB: usize = 0; // 4 × Hp hidden deltas
+let DB: usize = 0; // BLOCK × Hp hidden deltas of the current gradient block
 let ZB: usize = 0; // 4 × K logits
 let DZ: usize = 0; // 4 × K output deltas
 let HT: usize = 0; // Hp × 4 hidden activations of the block, transposed (rows side by side)
 
+/** Byte offset of W1 element (input i, hidden neuron j) in the panel layout. */
+@inline function panelAt(i: i32, j: i32): usize {
+  const j4 = j & ~3;
+  const w = j4 + 4 <= Hp ? 4 : 2;
+  return <usize>(8 * (j4 * D + i * w + (j - j4)));
+}
+
 /** Bytes of work memory a call with this shape needs. */
 export function workBytes(d: i32, h: i32, k: i32): i32 {
   const hp = (h + 1) & ~1;
-  return 8 * (2 * d * hp + 2 * hp + 2 * k * hp + k + 16 * hp + 8 * k) + 64;
+  return 8 * (2 * d * hp + 2 * hp + 2 * k * hp + k + (8 + BLOCK) * hp + 8 * k) + 64;
 }
 
 function setup(act: i32, head: i32, d: i32, h: i32, k: i32, params: usize, work: usize): void {
@@ -210,16 +230,15 @@ function setup(act: i32, head: i32, d: i32, h: i32, k: i32, params: usize, work:
   W2T = p; p += <usize>(8 * K * Hp);
   GW2T = p; p += <usize>(8 * K * Hp);
   HB = p; p += <usize>(32 * Hp);
-  FB = p; p += <usize>(32 * Hp);
-  DB = p; p += <usize>(32 * Hp);
+  DB = p; p += <usize>(8 * BLOCK * Hp);
   ZB = p; p += <usize>(32 * K);
   DZ = p; p += <usize>(32 * K);
   HT = p; p += <usize>(32 * Hp);
   GB2 = p;
   // Pack the canonical parameters into the padded layout.
   for (let i = 0; i < D; i++) {
-    for (let j = 0; j < H; j++) store<f64>(W1p + <usize>(8 * (i * Hp + j)), load<f64>(params + <usize>(8 * (i * H + j))));
-    if (Hp > H) store<f64>(W1p + <usize>(8 * (i * Hp + H)), 0);
+    for (let j = 0; j < H; j++) store<f64>(W1p + panelAt(i, j), load<f64>(params + <usize>(8 * (i * H + j))));
+    if (Hp > H) store<f64>(W1p + panelAt(i, H), 0);
   }
   const b1 = params + <usize>(8 * D * H);
   const w2 = b1 + <usize>(8 * H);
@@ -231,26 +250,26 @@ function setup(act: i32, head: i32, d: i32, h: i32, k: i32, params: usize, work:
   }
 }
 
-/** Activation and its derivative factor for a pair of pre-activations; stores both. */
-@inline function activate(a: v128, hp: usize, fp: usize): void {
+/** Activation of a pair of pre-activations, stored at hp. */
+@inline function activate(a: v128, hp: usize): void {
   let h: v128;
-  let f: v128;
-  if (ACT == ACT_TANH) {
-    h = tanhV(a);
-    f = f64x2.add(f64x2.sub(f64x2.splat(1.0), f64x2.mul(h, h)), f64x2.splat(OFF));
-  } else if (ACT == ACT_LOGISTIC) {
-    h = logisticV(a);
-    f = f64x2.add(f64x2.mul(h, f64x2.sub(f64x2.splat(1.0), h)), f64x2.splat(OFF));
-  } else {
-    const pos = f64x2.gt(a, f64x2.splat(0.0));
-    h = v128.bitselect(a, f64x2.splat(0.0), pos);
-    f = v128.bitselect(f64x2.splat(1.0), f64x2.splat(0.0), pos);
-  }
+  if (ACT == ACT_TANH) h = tanhV(a);
+  else if (ACT == ACT_LOGISTIC) h = logisticV(a);
+  else h = v128.bitselect(a, f64x2.splat(0.0), f64x2.gt(a, f64x2.splat(0.0)));
   v128.store(hp, h);
-  v128.store(fp, f);
 }
 
-/** Hidden activations of four rows (row pointers x0..x3) into HB/FB. */
+/**
+ * Derivative factor of a pair of activations h, plus the flat-spot offset for tanh and logistic
+ * (for ReLU, h > 0 exactly when the pre-activation was).
+ */
+@inline function prime(h: v128): v128 {
+  if (ACT == ACT_TANH) return f64x2.add(f64x2.sub(f64x2.splat(1.0), f64x2.mul(h, h)), f64x2.splat(OFF));
+  if (ACT == ACT_LOGISTIC) return f64x2.add(f64x2.mul(h, f64x2.sub(f64x2.splat(1.0), h)), f64x2.splat(OFF));
+  return v128.bitselect(f64x2.splat(1.0), f64x2.splat(0.0), f64x2.gt(h, f64x2.splat(0.0)));
+}
+
+/** Hidden activations of four rows (row pointers x0..x3) into HB. */
 function hidden4(x0: usize, x1: usize, x2: usize, x3: usize): void {
   const hp8 = <usize>(8 * Hp);
   let j = 0;
@@ -260,7 +279,7 @@ function hidden4(x0: usize, x1: usize, x2: usize, x3: usize): void {
     const bB = v128.load(B1p + jo + 16);
     let a0 = bA, a1 = bA, a2 = bA, a3 = bA;
     let c0 = bB, c1 = bB, c2 = bB, c3 = bB;
-    let w = W1p + jo;
+    let w = W1p + jo * <usize>D;
     for (let i = 0; i < D; i++) {
       const io = <usize>(8 * i);
       // Each row's input is loaded just before use, so few registers are live (V8 has 15 for SIMD).
@@ -278,22 +297,22 @@ function hidden4(x0: usize, x1: usize, x2: usize, x3: usize): void {
       s = v128.load_splat<f64>(x3 + io);
       a3 = f64x2.add(a3, f64x2.mul(s, wA));
       c3 = f64x2.add(c3, f64x2.mul(s, wB));
-      w += hp8;
+      w += 32;
     }
-    activate(a0, HB + jo, FB + jo);
-    activate(c0, HB + jo + 16, FB + jo + 16);
-    activate(a1, HB + hp8 + jo, FB + hp8 + jo);
-    activate(c1, HB + hp8 + jo + 16, FB + hp8 + jo + 16);
-    activate(a2, HB + 2 * hp8 + jo, FB + 2 * hp8 + jo);
-    activate(c2, HB + 2 * hp8 + jo + 16, FB + 2 * hp8 + jo + 16);
-    activate(a3, HB + 3 * hp8 + jo, FB + 3 * hp8 + jo);
-    activate(c3, HB + 3 * hp8 + jo + 16, FB + 3 * hp8 + jo + 16);
+    activate(a0, HB + jo);
+    activate(c0, HB + jo + 16);
+    activate(a1, HB + hp8 + jo);
+    activate(c1, HB + hp8 + jo + 16);
+    activate(a2, HB + 2 * hp8 + jo);
+    activate(c2, HB + 2 * hp8 + jo + 16);
+    activate(a3, HB + 3 * hp8 + jo);
+    activate(c3, HB + 3 * hp8 + jo + 16);
   }
   for (; j < Hp; j += 2) {
     const jo = <usize>(8 * j);
     const bA = v128.load(B1p + jo);
     let a0 = bA, a1 = bA, a2 = bA, a3 = bA;
-    let w = W1p + jo;
+    let w = W1p + jo * <usize>D;
     for (let i = 0; i < D; i++) {
       const io = <usize>(8 * i);
       const wA = v128.load(w);
@@ -301,12 +320,12 @@ function hidden4(x0: usize, x1: usize, x2: usize, x3: usize): void {
       a1 = f64x2.add(a1, f64x2.mul(v128.load_splat<f64>(x1 + io), wA));
       a2 = f64x2.add(a2, f64x2.mul(v128.load_splat<f64>(x2 + io), wA));
       a3 = f64x2.add(a3, f64x2.mul(v128.load_splat<f64>(x3 + io), wA));
-      w += hp8;
+      w += 16;
     }
-    activate(a0, HB + jo, FB + jo);
-    activate(a1, HB + hp8 + jo, FB + hp8 + jo);
-    activate(a2, HB + 2 * hp8 + jo, FB + 2 * hp8 + jo);
-    activate(a3, HB + 3 * hp8 + jo, FB + 3 * hp8 + jo);
+    activate(a0, HB + jo);
+    activate(a1, HB + hp8 + jo);
+    activate(a2, HB + 2 * hp8 + jo);
+    activate(a3, HB + 3 * hp8 + jo);
   }
 }
 
@@ -314,16 +333,16 @@ function hidden4(x0: usize, x1: usize, x2: usize, x3: usize): void {
 function hidden1(x0: usize, r: i32): void {
   const hp8 = <usize>(8 * Hp);
   const hb = HB + <usize>r * hp8;
-  const fb = FB + <usize>r * hp8;
   for (let j = 0; j < Hp; j += 2) {
     const jo = <usize>(8 * j);
     let a0 = v128.load(B1p + jo);
-    let w = W1p + jo;
+    let w = W1p + panelAt(0, j);
+    const step = <usize>((j & ~3) + 4 <= Hp ? 32 : 16);
     for (let i = 0; i < D; i++) {
       a0 = f64x2.add(a0, f64x2.mul(v128.load_splat<f64>(x0 + <usize>(8 * i)), v128.load(w)));
-      w += hp8;
+      w += step;
     }
-    activate(a0, hb + jo, fb + jo);
+    activate(a0, hb + jo);
   }
 }
 
@@ -373,12 +392,10 @@ function headLoss(r: i32, t: f64): f64 {
   return logS(s) - (load<f64>(z + <usize>(8 * ti)) - m);
 }
 
-/** Hidden deltas of slot r, and the gradient of b1, W2 and b2 from that row. */
-function backOutput(r: i32): void {
+/** Hidden deltas of slot r into `db`, and the gradient of b1, W2 and b2 from that row. */
+function backOutput(r: i32, db: usize): void {
   const hp8 = <usize>(8 * Hp);
   const hb = HB + <usize>r * hp8;
-  const fb = FB + <usize>r * hp8;
-  const db = DB + <usize>r * hp8;
   const dz = DZ + <usize>(8 * r * K);
   for (let j = 0; j < Hp; j += 2) {
     const jo = <usize>(8 * j);
@@ -390,7 +407,7 @@ function backOutput(r: i32): void {
       acc = f64x2.add(acc, f64x2.mul(v128.load(W2T + ko), d));
       v128.store(GW2T + ko, f64x2.add(v128.load(GW2T + ko), f64x2.mul(h, d)));
     }
-    const dh = f64x2.mul(acc, v128.load(fb + jo));
+    const dh = f64x2.mul(acc, prime(h));
     v128.store(db + jo, dh);
     v128.store(GB1 + jo, f64x2.add(v128.load(GB1 + jo), dh));
   }
@@ -400,8 +417,8 @@ function backOutput(r: i32): void {
   }
 }
 
-/** Logits of all four block rows: rows travel side by side in the lanes, each sum still runs over j in order. */
-function logits4(params: usize): void {
+/** Logits of all four block rows into zb (4 × K): rows travel side by side in the lanes, each sum still runs over j in order. */
+function logits4(params: usize, zb: usize): void {
   const hp8 = <usize>(8 * Hp);
   for (let j = 0; j < Hp; j += 2) {
     const jo = <usize>(8 * j);
@@ -430,7 +447,7 @@ function logits4(params: usize): void {
       w += k8;
       t += 32;
     }
-    const zk = ZB + <usize>(8 * k);
+    const zk = zb + <usize>(8 * k);
     store<f64>(zk, f64x2.extract_lane(a01, 0));
     store<f64>(zk + k8, f64x2.extract_lane(a01, 1));
     store<f64>(zk + 2 * k8, f64x2.extract_lane(a23, 0));
@@ -438,13 +455,17 @@ function logits4(params: usize): void {
   }
 }
 
-/** Hidden deltas of the four block rows and the gradient of b1, W2 and b2, added in row order. */
-function backOutput4(): void {
+/** Hidden deltas of the four rows into db (four rows of Hp), and the gradient of b1, W2 and b2, added in row order. */
+function backOutput4(db: usize): void {
   const hp8 = <usize>(8 * Hp);
   const k8 = <usize>(8 * K);
   for (let j = 0; j < Hp; j += 2) {
     const jo = <usize>(8 * j);
     let a0 = f64x2.splat(0.0), a1 = a0, a2 = a0, a3 = a0;
+    const h0 = v128.load(HB + jo);
+    const h1 = v128.load(HB + hp8 + jo);
+    const h2 = v128.load(HB + 2 * hp8 + jo);
+    const h3 = v128.load(HB + 3 * hp8 + jo);
     for (let k = 0; k < K; k++) {
       const ko = <usize>k * hp8 + jo;
       const w = v128.load(W2T + ko);
@@ -458,20 +479,20 @@ function backOutput4(): void {
       a2 = f64x2.add(a2, f64x2.mul(w, d2));
       a3 = f64x2.add(a3, f64x2.mul(w, d3));
       let g = v128.load(GW2T + ko);
-      g = f64x2.add(g, f64x2.mul(v128.load(HB + jo), d0));
-      g = f64x2.add(g, f64x2.mul(v128.load(HB + hp8 + jo), d1));
-      g = f64x2.add(g, f64x2.mul(v128.load(HB + 2 * hp8 + jo), d2));
-      g = f64x2.add(g, f64x2.mul(v128.load(HB + 3 * hp8 + jo), d3));
+      g = f64x2.add(g, f64x2.mul(h0, d0));
+      g = f64x2.add(g, f64x2.mul(h1, d1));
+      g = f64x2.add(g, f64x2.mul(h2, d2));
+      g = f64x2.add(g, f64x2.mul(h3, d3));
       v128.store(GW2T + ko, g);
     }
-    const dh0 = f64x2.mul(a0, v128.load(FB + jo));
-    const dh1 = f64x2.mul(a1, v128.load(FB + hp8 + jo));
-    const dh2 = f64x2.mul(a2, v128.load(FB + 2 * hp8 + jo));
-    const dh3 = f64x2.mul(a3, v128.load(FB + 3 * hp8 + jo));
-    v128.store(DB + jo, dh0);
-    v128.store(DB + hp8 + jo, dh1);
-    v128.store(DB + 2 * hp8 + jo, dh2);
-    v128.store(DB + 3 * hp8 + jo, dh3);
+    const dh0 = f64x2.mul(a0, prime(h0));
+    const dh1 = f64x2.mul(a1, prime(h1));
+    const dh2 = f64x2.mul(a2, prime(h2));
+    const dh3 = f64x2.mul(a3, prime(h3));
+    v128.store(db + jo, dh0);
+    v128.store(db + hp8 + jo, dh1);
+    v128.store(db + 2 * hp8 + jo, dh2);
+    v128.store(db + 3 * hp8 + jo, dh3);
     let gb = v128.load(GB1 + jo);
     gb = f64x2.add(gb, dh0);
     gb = f64x2.add(gb, dh1);
@@ -491,69 +512,100 @@ function backOutput4(): void {
   }
 }
 
-/** W1 gradient from four rows, added in row order. */
-function backInput4(x0: usize, x1: usize, x2: usize, x3: usize): void {
+/**
+ * W1 gradient from the n rows of the block (rows at x, x + 8D, ...; deltas in DB): for each
+ * weight, Σ over the rows in row order from +0, kept in a register, then added to GW1. Tiles of
+ * four inputs × four hidden neurons keep eight sums in registers while the rows stream past.
+ */
+function backInputBlock(x: usize, n: i32): void {
   const hp8 = <usize>(8 * Hp);
+  const rowBytes = <usize>(8 * D);
+  const zero = f64x2.splat(0.0);
   let j = 0;
   for (; j + 4 <= Hp; j += 4) {
     const jo = <usize>(8 * j);
-    const dA0 = v128.load(DB + jo), dB0 = v128.load(DB + jo + 16);
-    const dA1 = v128.load(DB + hp8 + jo), dB1 = v128.load(DB + hp8 + jo + 16);
-    const dA2 = v128.load(DB + 2 * hp8 + jo), dB2 = v128.load(DB + 2 * hp8 + jo + 16);
-    const dA3 = v128.load(DB + 3 * hp8 + jo), dB3 = v128.load(DB + 3 * hp8 + jo + 16);
-    let g = GW1 + jo;
-    for (let i = 0; i < D; i++) {
-      const io = <usize>(8 * i);
-      let gA = v128.load(g);
-      let gB = v128.load(g, 16);
-      let s = v128.load_splat<f64>(x0 + io);
-      gA = f64x2.add(gA, f64x2.mul(s, dA0));
-      gB = f64x2.add(gB, f64x2.mul(s, dB0));
-      s = v128.load_splat<f64>(x1 + io);
-      gA = f64x2.add(gA, f64x2.mul(s, dA1));
-      gB = f64x2.add(gB, f64x2.mul(s, dB1));
-      s = v128.load_splat<f64>(x2 + io);
-      gA = f64x2.add(gA, f64x2.mul(s, dA2));
-      gB = f64x2.add(gB, f64x2.mul(s, dB2));
-      s = v128.load_splat<f64>(x3 + io);
-      gA = f64x2.add(gA, f64x2.mul(s, dA3));
-      gB = f64x2.add(gB, f64x2.mul(s, dB3));
-      v128.store(g, gA);
-      v128.store(g, gB, 16);
-      g += hp8;
+    let i = 0;
+    for (; i + 4 <= D; i += 4) {
+      let a0 = zero, b0 = zero, a1 = zero, b1 = zero, a2 = zero, b2 = zero, a3 = zero, b3 = zero;
+      let xr = x + <usize>(8 * i);
+      let dr = DB + jo;
+      for (let q = 0; q < n; q++) {
+        const dA = v128.load(dr);
+        const dB = v128.load(dr, 16);
+        let s = v128.load_splat<f64>(xr);
+        a0 = f64x2.add(a0, f64x2.mul(s, dA));
+        b0 = f64x2.add(b0, f64x2.mul(s, dB));
+        s = v128.load_splat<f64>(xr, 8);
+        a1 = f64x2.add(a1, f64x2.mul(s, dA));
+        b1 = f64x2.add(b1, f64x2.mul(s, dB));
+        s = v128.load_splat<f64>(xr, 16);
+        a2 = f64x2.add(a2, f64x2.mul(s, dA));
+        b2 = f64x2.add(b2, f64x2.mul(s, dB));
+        s = v128.load_splat<f64>(xr, 24);
+        a3 = f64x2.add(a3, f64x2.mul(s, dA));
+        b3 = f64x2.add(b3, f64x2.mul(s, dB));
+        xr += rowBytes;
+        dr += hp8;
+      }
+      const g = GW1 + jo * <usize>D + <usize>(32 * i);
+      v128.store(g, f64x2.add(v128.load(g), a0));
+      v128.store(g, f64x2.add(v128.load(g, 16), b0), 16);
+      v128.store(g, f64x2.add(v128.load(g, 32), a1), 32);
+      v128.store(g, f64x2.add(v128.load(g, 48), b1), 48);
+      v128.store(g, f64x2.add(v128.load(g, 64), a2), 64);
+      v128.store(g, f64x2.add(v128.load(g, 80), b2), 80);
+      v128.store(g, f64x2.add(v128.load(g, 96), a3), 96);
+      v128.store(g, f64x2.add(v128.load(g, 112), b3), 112);
+    }
+    for (; i < D; i++) {
+      let a0 = zero, b0 = zero;
+      let xr = x + <usize>(8 * i);
+      let dr = DB + jo;
+      for (let q = 0; q < n; q++) {
+        const s = v128.load_splat<f64>(xr);
+        a0 = f64x2.add(a0, f64x2.mul(s, v128.load(dr)));
+        b0 = f64x2.add(b0, f64x2.mul(s, v128.load(dr, 16)));
+        xr += rowBytes;
+        dr += hp8;
+      }
+      const g = GW1 + jo * <usize>D + <usize>(32 * i);
+      v128.store(g, f64x2.add(v128.load(g), a0));
+      v128.store(g, f64x2.add(v128.load(g, 16), b0), 16);
     }
   }
   for (; j < Hp; j += 2) {
     const jo = <usize>(8 * j);
-    const d0 = v128.load(DB + jo);
-    const d1 = v128.load(DB + hp8 + jo);
-    const d2 = v128.load(DB + 2 * hp8 + jo);
-    const d3 = v128.load(DB + 3 * hp8 + jo);
-    let g = GW1 + jo;
-    for (let i = 0; i < D; i++) {
-      const io = <usize>(8 * i);
-      let gA = v128.load(g);
-      gA = f64x2.add(gA, f64x2.mul(v128.load_splat<f64>(x0 + io), d0));
-      gA = f64x2.add(gA, f64x2.mul(v128.load_splat<f64>(x1 + io), d1));
-      gA = f64x2.add(gA, f64x2.mul(v128.load_splat<f64>(x2 + io), d2));
-      gA = f64x2.add(gA, f64x2.mul(v128.load_splat<f64>(x3 + io), d3));
-      v128.store(g, gA);
-      g += hp8;
+    let i = 0;
+    for (; i + 4 <= D; i += 4) {
+      let a0 = zero, a1 = zero, a2 = zero, a3 = zero;
+      let xr = x + <usize>(8 * i);
+      let dr = DB + jo;
+      for (let q = 0; q < n; q++) {
+        const dA = v128.load(dr);
+        a0 = f64x2.add(a0, f64x2.mul(v128.load_splat<f64>(xr), dA));
+        a1 = f64x2.add(a1, f64x2.mul(v128.load_splat<f64>(xr, 8), dA));
+        a2 = f64x2.add(a2, f64x2.mul(v128.load_splat<f64>(xr, 16), dA));
+        a3 = f64x2.add(a3, f64x2.mul(v128.load_splat<f64>(xr, 24), dA));
+        xr += rowBytes;
+        dr += hp8;
+      }
+      const g = GW1 + jo * <usize>D + <usize>(16 * i);
+      v128.store(g, f64x2.add(v128.load(g), a0));
+      v128.store(g, f64x2.add(v128.load(g, 16), a1), 16);
+      v128.store(g, f64x2.add(v128.load(g, 32), a2), 32);
+      v128.store(g, f64x2.add(v128.load(g, 48), a3), 48);
     }
-  }
-}
-
-/** W1 gradient from the row in slot r. */
-function backInput1(x0: usize, r: i32): void {
-  const hp8 = <usize>(8 * Hp);
-  const db = DB + <usize>r * hp8;
-  for (let j = 0; j < Hp; j += 2) {
-    const jo = <usize>(8 * j);
-    const d0 = v128.load(db + jo);
-    let g = GW1 + jo;
-    for (let i = 0; i < D; i++) {
-      v128.store(g, f64x2.add(v128.load(g), f64x2.mul(v128.load_splat<f64>(x0 + <usize>(8 * i)), d0)));
-      g += hp8;
+    for (; i < D; i++) {
+      let a0 = zero;
+      let xr = x + <usize>(8 * i);
+      let dr = DB + jo;
+      for (let q = 0; q < n; q++) {
+        a0 = f64x2.add(a0, f64x2.mul(v128.load_splat<f64>(xr), v128.load(dr)));
+        xr += rowBytes;
+        dr += hp8;
+      }
+      const g = GW1 + jo * <usize>D + <usize>(16 * i);
+      v128.store(g, f64x2.add(v128.load(g), a0));
     }
   }
 }
@@ -585,29 +637,31 @@ export function lossGrad(
   memory.fill(GB2, 0, <usize>(8 * K));
   const rowBytes = <usize>(8 * D);
   let loss: f64 = 0;
+  const hp8 = <usize>(8 * Hp);
   let p = start;
-  for (; p + 4 <= end; p += 4) {
-    const x0 = x + <usize>p * rowBytes;
-    const x1 = x0 + rowBytes;
-    const x2 = x1 + rowBytes;
-    const x3 = x2 + rowBytes;
-    hidden4(x0, x1, x2, x3);
-    logits4(params);
-    for (let r = 0; r < 4; r++) loss += headLoss(r, load<f64>(y + <usize>(8 * (p + r))));
-    backOutput4();
-    backInput4(x0, x1, x2, x3);
-  }
-  for (; p < end; p++) {
-    const x0 = x + <usize>p * rowBytes;
-    hidden1(x0, 0);
-    logits(params, 0);
-    loss += headLoss(0, load<f64>(y + <usize>(8 * p)));
-    backOutput(0);
-    backInput1(x0, 0);
+  while (p < end) {
+    const n = end - p < BLOCK ? end - p : BLOCK;
+    const xb = x + <usize>p * rowBytes;
+    let r = 0;
+    for (; r + 4 <= n; r += 4) {
+      const x0 = xb + <usize>r * rowBytes;
+      hidden4(x0, x0 + rowBytes, x0 + 2 * rowBytes, x0 + 3 * rowBytes);
+      logits4(params, ZB);
+      for (let s = 0; s < 4; s++) loss += headLoss(s, load<f64>(y + <usize>(8 * (p + r + s))));
+      backOutput4(DB + <usize>r * hp8);
+    }
+    for (; r < n; r++) {
+      hidden1(xb + <usize>r * rowBytes, 0);
+      logits(params, 0);
+      loss += headLoss(0, load<f64>(y + <usize>(8 * (p + r))));
+      backOutput(0, DB + <usize>r * hp8);
+    }
+    backInputBlock(xb, n);
+    p += n;
   }
   // Unpack the gradient into the canonical layout.
   for (let i = 0; i < D; i++)
-    for (let j = 0; j < H; j++) store<f64>(grad + <usize>(8 * (i * H + j)), load<f64>(GW1 + <usize>(8 * (i * Hp + j))));
+    for (let j = 0; j < H; j++) store<f64>(grad + <usize>(8 * (i * H + j)), load<f64>(GW1 + panelAt(i, j)));
   const gb1 = grad + <usize>(8 * D * H);
   const gw2 = gb1 + <usize>(8 * H);
   const gb2 = gw2 + <usize>(8 * H * K);
@@ -640,15 +694,14 @@ export function forward(
     const x0 = x + <usize>p * rowBytes;
     if (n == 4) {
       hidden4(x0, x0 + rowBytes, x0 + 2 * rowBytes, x0 + 3 * rowBytes);
-      logits4(params);
+      logits4(params, out + <usize>(8 * p * K)); // four rows of K logits, laid out as in `out`
     } else {
       hidden1(x0, 0);
       logits(params, 0);
+      for (let kk = 0; kk < K; kk++) store<f64>(out + <usize>(8 * (p * K + kk)), load<f64>(ZB + <usize>(8 * kk)));
     }
     for (let r = 0; r < n; r++) {
       const row = p + r;
-      for (let kk = 0; kk < K; kk++)
-        store<f64>(out + <usize>(8 * (row * K + kk)), load<f64>(ZB + <usize>(8 * (r * K + kk))));
       if (hidden != 0) {
         for (let j = 0; j < H; j++)
           store<f64>(hidden + <usize>(8 * (row * H + j)), load<f64>(HB + <usize>(8 * (r * Hp + j))));
