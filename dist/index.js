@@ -47336,6 +47336,10 @@ class NetworkTrainer {
             }
             epochs = e;
             if (e % checkEvery === 0 || e === maxEpochs) {
+                if (options.interrupted?.() === true) {
+                    stop = 'interrupted';
+                    break;
+                }
                 const m = this.targetMetricOnJudgedRows();
                 if (meetsTarget(m, options.target)) {
                     stop = 'reached';
@@ -47764,6 +47768,7 @@ function reachedBy(rec, target) {
         return false;
     return rec.stop === 'reached' || (0,nn/* meetsTarget */.ab)(rec.validationMetric, target);
 }
+const never = () => false;
 function divergedReason(width, epochs) {
     return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
@@ -47773,16 +47778,18 @@ function divergedReason(width, epochs) {
  * width up to max-epochs; a neuron is added when the error curve flattens (the stall
  * trigger) or that budget runs out, until the target is reached or max-width is hit.
  */
-function growTrainer(data, ctx, task) {
+function growTrainer(data, ctx, task, cancelled = never) {
     const { plan, train } = ctx;
     const inPlace = plan.growth === 'in-place';
     const rng = (0,nn/* rngFor */.pU)(ctx.seed, task.width, task.restart);
-    const options = inPlace ? { ...train, stall: { ...ctx.stall } } : { ...train, stall: null };
+    const options = { ...train, stall: inPlace ? { ...ctx.stall } : null, interrupted: cancelled };
     const trainer = (0,nn/* createTrainer */.K$)(data, task.width, options, rng);
     const segments = [];
     let epochs = 0;
     for (;;) {
         const rec = trainer.run(train.maxEpochs);
+        if (rec.stop === 'interrupted')
+            return null;
         epochs += rec.epochs;
         const width = trainer.network.width;
         const reached = reachedBy(rec, train.target);
@@ -47810,9 +47817,12 @@ function growTrainer(data, ctx, task) {
         trainer.addNeuron(rng);
     }
 }
-/** Run one growth task; the result is plain JSON (it can cross threads, processes, machines). */
-function runTask(data, ctx, task) {
-    return growTrainer(data, ctx, task).result;
+/**
+ * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
+ * null only when `cancelled` said so (the answer was no longer needed).
+ */
+function runTask(data, ctx, task, cancelled = never) {
+    return growTrainer(data, ctx, task, cancelled)?.result ?? null;
 }
 /**
  * Shrink one network by compensated ablation: score every hidden neuron by the loss
@@ -47894,7 +47904,7 @@ function inThreadExecutor(data, ctx) {
         size: 1,
         async train(task) {
             await yieldToEventLoop();
-            return runTask(data, ctx, task);
+            return runTask(data, ctx, task); // never cancelled here: nothing runs ahead in one thread
         },
         async prune(job) {
             await yieldToEventLoop();
@@ -47969,7 +47979,7 @@ function workerPoolExecutor(data, ctx, size, entry) {
             if (p !== undefined) {
                 if (reply.type === 'done')
                     p.resolve(reply.result);
-                else
+                else if (reply.type === 'error')
                     p.reject(new Error(reply.message));
             }
             pump();
@@ -47984,11 +47994,12 @@ function workerPoolExecutor(data, ctx, size, entry) {
         worker.on('error', fail);
         worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
         // The data's SharedArrayBuffers are shared with the thread, not copied.
-        const init = { type: 'init', data: shared, ctx };
+        const init = { type: 'init', data: shared, ctx, cancel: slot.cancel };
         worker.postMessage(init);
     };
     for (let k = 0; k < size; k++) {
-        const slot = { busy: null };
+        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
+        const slot = { busy: null, cancel };
         start(slot);
         slots.push(slot);
     }
@@ -48018,12 +48029,10 @@ function workerPoolExecutor(data, ctx, size, entry) {
                 queue.splice(q, 1);
                 return;
             }
+            // The thread looks at its flag between slices of epochs and answers 'cancelled'.
             const slot = slots.find((s) => s.busy === id);
-            if (slot === undefined)
-                return;
-            void slot.worker.terminate();
-            start(slot);
-            pump();
+            if (slot !== undefined)
+                Atomics.store(slot.cancel, 0, id);
         },
         async close() {
             closed = true;
@@ -48242,18 +48251,21 @@ function runSearchWorker() {
         throw new Error('runSearchWorker() must run in a worker thread');
     let data = null;
     let ctx = null;
+    let cancel = new Int32Array(1).fill(-1);
     port.on('message', (msg) => {
         if (msg.type === 'init') {
             data = msg.data;
             ctx = msg.ctx;
+            cancel = msg.cancel;
             return;
         }
         let reply;
         try {
             if (data === null || ctx === null)
                 throw new Error('search worker got a task before its data');
-            const result = msg.type === 'train' ? runTask(data, ctx, msg.task) : runPruneJob(data, ctx, msg.job);
-            reply = { type: 'done', id: msg.id, result };
+            const id = msg.id;
+            const result = msg.type === 'train' ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id) : runPruneJob(data, ctx, msg.job);
+            reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
         }
         catch (e) {
             reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };

@@ -15372,6 +15372,10 @@ class NetworkTrainer {
             }
             epochs = e;
             if (e % checkEvery === 0 || e === maxEpochs) {
+                if (options.interrupted?.() === true) {
+                    stop = 'interrupted';
+                    break;
+                }
                 const m = this.targetMetricOnJudgedRows();
                 if (meetsTarget(m, options.target)) {
                     stop = 'reached';
@@ -16566,6 +16570,7 @@ function reachedBy(rec, target) {
         return false;
     return rec.stop === 'reached' || nn_meetsTarget(rec.validationMetric, target);
 }
+const never = () => false;
 function divergedReason(width, epochs) {
     return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
@@ -16575,16 +16580,18 @@ function divergedReason(width, epochs) {
  * width up to max-epochs; a neuron is added when the error curve flattens (the stall
  * trigger) or that budget runs out, until the target is reached or max-width is hit.
  */
-function growTrainer(data, ctx, task) {
+function growTrainer(data, ctx, task, cancelled = never) {
     const { plan, train } = ctx;
     const inPlace = plan.growth === 'in-place';
     const rng = nn_rngFor(ctx.seed, task.width, task.restart);
-    const options = inPlace ? { ...train, stall: { ...ctx.stall } } : { ...train, stall: null };
+    const options = { ...train, stall: inPlace ? { ...ctx.stall } : null, interrupted: cancelled };
     const trainer = nn_createTrainer(data, task.width, options, rng);
     const segments = [];
     let epochs = 0;
     for (;;) {
         const rec = trainer.run(train.maxEpochs);
+        if (rec.stop === 'interrupted')
+            return null;
         epochs += rec.epochs;
         const width = trainer.network.width;
         const reached = reachedBy(rec, train.target);
@@ -16612,9 +16619,12 @@ function growTrainer(data, ctx, task) {
         trainer.addNeuron(rng);
     }
 }
-/** Run one growth task; the result is plain JSON (it can cross threads, processes, machines). */
-function runTask(data, ctx, task) {
-    return growTrainer(data, ctx, task).result;
+/**
+ * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
+ * null only when `cancelled` said so (the answer was no longer needed).
+ */
+function runTask(data, ctx, task, cancelled = never) {
+    return growTrainer(data, ctx, task, cancelled)?.result ?? null;
 }
 /**
  * Shrink one network by compensated ablation: score every hidden neuron by the loss
@@ -16696,7 +16706,7 @@ function inThreadExecutor(data, ctx) {
         size: 1,
         async train(task) {
             await yieldToEventLoop();
-            return runTask(data, ctx, task);
+            return runTask(data, ctx, task); // never cancelled here: nothing runs ahead in one thread
         },
         async prune(job) {
             await yieldToEventLoop();
@@ -16771,7 +16781,7 @@ function workerPoolExecutor(data, ctx, size, entry) {
             if (p !== undefined) {
                 if (reply.type === 'done')
                     p.resolve(reply.result);
-                else
+                else if (reply.type === 'error')
                     p.reject(new Error(reply.message));
             }
             pump();
@@ -16786,11 +16796,12 @@ function workerPoolExecutor(data, ctx, size, entry) {
         worker.on('error', fail);
         worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
         // The data's SharedArrayBuffers are shared with the thread, not copied.
-        const init = { type: 'init', data: shared, ctx };
+        const init = { type: 'init', data: shared, ctx, cancel: slot.cancel };
         worker.postMessage(init);
     };
     for (let k = 0; k < size; k++) {
-        const slot = { busy: null };
+        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
+        const slot = { busy: null, cancel };
         start(slot);
         slots.push(slot);
     }
@@ -16820,12 +16831,10 @@ function workerPoolExecutor(data, ctx, size, entry) {
                 queue.splice(q, 1);
                 return;
             }
+            // The thread looks at its flag between slices of epochs and answers 'cancelled'.
             const slot = slots.find((s) => s.busy === id);
-            if (slot === undefined)
-                return;
-            void slot.worker.terminate();
-            start(slot);
-            pump();
+            if (slot !== undefined)
+                Atomics.store(slot.cancel, 0, id);
         },
         async close() {
             closed = true;
@@ -17044,18 +17053,21 @@ function runSearchWorker() {
         throw new Error('runSearchWorker() must run in a worker thread');
     let data = null;
     let ctx = null;
+    let cancel = new Int32Array(1).fill(-1);
     port.on('message', (msg) => {
         if (msg.type === 'init') {
             data = msg.data;
             ctx = msg.ctx;
+            cancel = msg.cancel;
             return;
         }
         let reply;
         try {
             if (data === null || ctx === null)
                 throw new Error('search worker got a task before its data');
-            const result = msg.type === 'train' ? runTask(data, ctx, msg.task) : runPruneJob(data, ctx, msg.job);
-            reply = { type: 'done', id: msg.id, result };
+            const id = msg.id;
+            const result = msg.type === 'train' ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id) : runPruneJob(data, ctx, msg.job);
+            reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
         }
         catch (e) {
             reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };

@@ -54,7 +54,8 @@ export interface NetworkJson {
   outputBias: number[];
 }
 
-export type StopReason = 'reached' | 'stalled' | 'diverged' | 'max-epochs';
+/** 'interrupted': TrainOptions.interrupted said to give up; the caller discards such a run. */
+export type StopReason = 'reached' | 'stalled' | 'diverged' | 'max-epochs' | 'interrupted';
 
 export interface TrainOptions {
   activation: Activation;
@@ -73,6 +74,11 @@ export interface TrainOptions {
    * saturated neuron still learns. Default FLAT_SPOT_OFFSET; 0 trains on the exact gradient.
    */
   primeOffset?: number;
+  /**
+   * Polled at each target check (every checkEvery epochs); true stops the run as
+   * 'interrupted'. Lets a worker give up a training whose answer is no longer needed.
+   */
+  interrupted?: () => boolean;
 }
 
 export interface TrainRecord {

@@ -157,6 +157,10 @@ class NetworkTrainer implements Trainer {
       }
       epochs = e;
       if (e % checkEvery === 0 || e === maxEpochs) {
+        if (options.interrupted?.() === true) {
+          stop = 'interrupted';
+          break;
+        }
         const m = this.targetMetricOnJudgedRows();
         if (meetsTarget(m, options.target)) {
           stop = 'reached';

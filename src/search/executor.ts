@@ -16,8 +16,8 @@ export interface Executor {
   train(task: TrainingTask): Promise<TaskResult>;
   prune(job: PruneJob): Promise<PruneResult>;
   /**
-   * Give up a growth task whose answer is no longer needed: drop it if queued, stop its
-   * thread (and start a fresh one) if running. Its promise then never settles.
+   * Give up a growth task whose answer is no longer needed: drop it if queued, tell its
+   * thread to stop it if running. Its promise then never settles.
    */
   discard(task: TrainingTask): void;
   /** Stop every thread; work still running is abandoned. */
@@ -28,12 +28,14 @@ export interface Executor {
 export const WORKER_MARK = 'neuron-budget/search-worker';
 
 export type WorkerRequest =
-  | { type: 'init'; data: EncodedDataset; ctx: SearchContext }
+  /** `cancel` holds the id of the task the thread should give up (-1: none). */
+  | { type: 'init'; data: EncodedDataset; ctx: SearchContext; cancel: Int32Array }
   | { type: 'train'; id: number; task: TrainingTask }
   | { type: 'prune'; id: number; job: PruneJob };
 
 export type WorkerReply =
   | { type: 'done'; id: number; result: TaskResult | PruneResult }
+  | { type: 'cancelled'; id: number }
   | { type: 'error'; id: number; message: string };
 
 const yieldToEventLoop = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
@@ -43,7 +45,7 @@ export function inThreadExecutor(data: EncodedDataset, ctx: SearchContext): Exec
     size: 1,
     async train(task) {
       await yieldToEventLoop();
-      return runTask(data, ctx, task);
+      return runTask(data, ctx, task)!; // never cancelled here: nothing runs ahead in one thread
     },
     async prune(job) {
       await yieldToEventLoop();
@@ -84,6 +86,7 @@ interface Pending {
 interface Slot {
   worker: Worker;
   busy: number | null;
+  cancel: Int32Array;
 }
 
 type Job = { type: 'train'; task: TrainingTask } | { type: 'prune'; job: PruneJob };
@@ -132,7 +135,7 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
       const p = settle(reply.id);
       if (p !== undefined) {
         if (reply.type === 'done') p.resolve(reply.result);
-        else p.reject(new Error(reply.message));
+        else if (reply.type === 'error') p.reject(new Error(reply.message));
       }
       pump();
     });
@@ -144,12 +147,13 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
     worker.on('error', fail);
     worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
     // The data's SharedArrayBuffers are shared with the thread, not copied.
-    const init: WorkerRequest = { type: 'init', data: shared, ctx };
+    const init: WorkerRequest = { type: 'init', data: shared, ctx, cancel: slot.cancel };
     worker.postMessage(init);
   };
 
   for (let k = 0; k < size; k++) {
-    const slot = { busy: null } as unknown as Slot;
+    const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
+    const slot = { busy: null, cancel } as unknown as Slot;
     start(slot);
     slots.push(slot);
   }
@@ -180,11 +184,9 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
         queue.splice(q, 1);
         return;
       }
+      // The thread looks at its flag between slices of epochs and answers 'cancelled'.
       const slot = slots.find((s) => s.busy === id);
-      if (slot === undefined) return;
-      void slot.worker.terminate();
-      start(slot);
-      pump();
+      if (slot !== undefined) Atomics.store(slot.cancel, 0, id);
     },
     async close() {
       closed = true;

@@ -38,6 +38,8 @@ function reachedBy(rec: TrainRecord, target: TargetConfig): boolean {
   return rec.stop === 'reached' || meetsTarget(rec.validationMetric, target);
 }
 
+const never = (): boolean => false;
+
 function divergedReason(width: number, epochs: number): string {
   return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
@@ -52,16 +54,18 @@ export function growTrainer(
   data: EncodedDataset,
   ctx: SearchContext,
   task: TrainingTask,
-): { trainer: Trainer; result: TaskResult } {
+  cancelled: () => boolean = never,
+): { trainer: Trainer; result: TaskResult } | null {
   const { plan, train } = ctx;
   const inPlace = plan.growth === 'in-place';
   const rng = rngFor(ctx.seed, task.width, task.restart);
-  const options: TrainOptions = inPlace ? { ...train, stall: { ...ctx.stall } } : { ...train, stall: null };
+  const options: TrainOptions = { ...train, stall: inPlace ? { ...ctx.stall } : null, interrupted: cancelled };
   const trainer = createTrainer(data, task.width, options, rng);
   const segments: Segment[] = [];
   let epochs = 0;
   for (;;) {
     const rec = trainer.run(train.maxEpochs);
+    if (rec.stop === 'interrupted') return null;
     epochs += rec.epochs;
     const width = trainer.network.width;
     const reached = reachedBy(rec, train.target);
@@ -90,9 +94,12 @@ export function growTrainer(
   }
 }
 
-/** Run one growth task; the result is plain JSON (it can cross threads, processes, machines). */
-export function runTask(data: EncodedDataset, ctx: SearchContext, task: TrainingTask): TaskResult {
-  return growTrainer(data, ctx, task).result;
+/**
+ * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
+ * null only when `cancelled` said so (the answer was no longer needed).
+ */
+export function runTask(data: EncodedDataset, ctx: SearchContext, task: TrainingTask, cancelled: () => boolean = never): TaskResult | null {
+  return growTrainer(data, ctx, task, cancelled)?.result ?? null;
 }
 
 export interface PruneJob {

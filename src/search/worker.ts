@@ -19,17 +19,21 @@ export function runSearchWorker(): void {
   if (port === null) throw new Error('runSearchWorker() must run in a worker thread');
   let data: EncodedDataset | null = null;
   let ctx: SearchContext | null = null;
+  let cancel: Int32Array<ArrayBufferLike> = new Int32Array(1).fill(-1);
   port.on('message', (msg: WorkerRequest) => {
     if (msg.type === 'init') {
       data = msg.data;
       ctx = msg.ctx;
+      cancel = msg.cancel;
       return;
     }
     let reply: WorkerReply;
     try {
       if (data === null || ctx === null) throw new Error('search worker got a task before its data');
-      const result = msg.type === 'train' ? runTask(data, ctx, msg.task) : runPruneJob(data, ctx, msg.job);
-      reply = { type: 'done', id: msg.id, result };
+      const id = msg.id;
+      const result =
+        msg.type === 'train' ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id) : runPruneJob(data, ctx, msg.job);
+      reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
     } catch (e) {
       reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };
     }

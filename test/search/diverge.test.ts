@@ -24,7 +24,7 @@ describe('a diverging training', () => {
     const target = { metric: 'rmse', threshold: 0.01 } as const;
     const ctx = searchContext(search, target);
     ctx.train.optimizerSettings = { learningRate: 1e6, momentum: 0.9 };
-    const results = [0, 1, 2].map((restart) => runTask(ds, ctx, { width: 1, restart }));
+    const results = [0, 1, 2].map((restart) => runTask(ds, ctx, { width: 1, restart })!);
     for (const r of results) {
       expect(r.stop).toBe('diverged');
       expect(r.reached).toBe(false);
