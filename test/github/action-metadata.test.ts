@@ -11,7 +11,9 @@ describe('action.yml', () => {
     expect(meta.runs).toEqual({ using: 'node24', main: 'dist/index.js' });
     expect(meta.name).toBe('neuron-budget');
     expect(meta.description.length).toBeGreaterThan(20);
-    expect(meta.branding?.icon).toBeTruthy();
+    // The colours GitHub's metadata syntax allows for branding.
+    expect(['white', 'black', 'yellow', 'blue', 'green', 'orange', 'red', 'purple', 'gray-dark']).toContain(meta.branding?.color);
+    expect(meta.branding?.icon).toMatch(/^[a-z0-9-]+$/);
   });
 
   it('declares the inputs with their defaults, each documented', () => {
