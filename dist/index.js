@@ -43710,7 +43710,7 @@ function describe(v) {
 
 
 async function runGateStage(input) {
-    const previous = await readBaseline(input.baselinePath, input.baselineShown);
+    const previous = input.previous !== undefined ? input.previous : await readBaseline(input.baselinePath, input.baselineShown);
     const config = input.baselinePath === input.config.gate.baseline
         ? input.config
         : { ...input.config, gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown } };
@@ -44628,7 +44628,7 @@ async function runJob(options) {
     const baselinePath = options.baselinePath ?? config.gate.baseline;
     const baselineShown = options.baselinePath ? displayPath(config.root, options.baselinePath) : config.gate.baselineAsWritten;
     // A corrupt baseline is the user's to fix before minutes of search, not after.
-    await readBaseline(baselinePath, baselineShown);
+    const previous = await readBaseline(baselinePath, baselineShown);
     const data = await timed(timing, 'loadSeconds', () => loadData(config));
     await checkMetricFitsTask(config, data.dataset.task);
     options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
@@ -44646,6 +44646,7 @@ async function runJob(options) {
         config,
         baselinePath,
         baselineShown,
+        previous,
         commit: options.commit ?? null,
         date: new Date(),
         toolVersion: TOOL_VERSION,

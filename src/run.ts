@@ -67,7 +67,7 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
   const baselinePath = options.baselinePath ?? config.gate.baseline;
   const baselineShown = options.baselinePath ? displayPath(config.root, options.baselinePath) : config.gate.baselineAsWritten;
   // A corrupt baseline is the user's to fix before minutes of search, not after.
-  await readBaseline(baselinePath, baselineShown);
+  const previous = await readBaseline(baselinePath, baselineShown);
 
   const data = await timed(timing, 'loadSeconds', () => loadData(config));
   await checkMetricFitsTask(config, data.dataset.task);
@@ -90,6 +90,7 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     config,
     baselinePath,
     baselineShown,
+    previous,
     commit: options.commit ?? null,
     date: new Date(),
     toolVersion: TOOL_VERSION,
