@@ -4,7 +4,7 @@
 import { mkdirSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, test } from 'vitest';
-import { hasStackTrace, makeTempDir, removeCliTempDirs, runCli } from '../helpers/cli.js';
+import { expectOneUserError, makeTempDir, removeCliTempDirs, runCli } from '../helpers/cli.js';
 
 afterAll(removeCliTempDirs);
 
@@ -209,15 +209,7 @@ describe('config mistakes through the built command line', () => {
     const files: Record<string, string> = { 'readings.csv': CSV };
     if (c.config !== null) files['neuron-budget.yml'] = c.config;
     const run = await runCli(c.args ?? ['check', '--report', 'out.json'], { files, ...(c.setup ? { setup: c.setup } : {}) });
-    expect(run.code, run.stderr).toBe(2);
-    expect(run.stdout).toBe('');
-    expect(hasStackTrace(run.stderr), run.stderr).toBe(false);
-    expect(run.stderr).not.toContain('    at ');
-    const lines = run.stderr.trimEnd().split('\n');
-    expect(lines, run.stderr).toHaveLength(1);
-    expect(lines[0].startsWith('error: '), run.stderr).toBe(true);
-    if (c.at !== null) expect(lines[0].slice('error: '.length).startsWith(c.at), run.stderr).toBe(true);
-    for (const fragment of c.says) expect(lines[0]).toContain(fragment);
+    expectOneUserError(run, c.at, c.says);
     expect(run.created, 'nothing may be written').toEqual([]);
   });
 

@@ -3,7 +3,7 @@
 // with the file, line and column (or the config key's place), no stack trace, a clean
 // stdout, and no report file written.
 import { afterAll, describe, expect, test } from 'vitest';
-import { hasStackTrace, removeCliTempDirs, runCli } from '../helpers/cli.js';
+import { expectOneUserError, removeCliTempDirs, runCli } from '../helpers/cli.js';
 
 afterAll(removeCliTempDirs);
 
@@ -236,14 +236,7 @@ describe('data mistakes through the built command line', () => {
     const files: Record<string, string | Uint8Array> = { 'neuron-budget.yml': c.config ?? CONFIG, ...c.files };
     if (c.csv !== null) files['readings.csv'] = c.csv;
     const run = await runCli(['check', '--report', 'out.json'], { files });
-    expect(run.code, run.stderr).toBe(2);
-    expect(run.stdout).toBe('');
-    expect(hasStackTrace(run.stderr), run.stderr).toBe(false);
-    expect(run.stderr).not.toContain('    at ');
-    const lines = run.stderr.trimEnd().split('\n');
-    expect(lines, run.stderr).toHaveLength(1);
-    expect(lines[0].startsWith(`error: ${c.at}`), run.stderr).toBe(true);
-    for (const fragment of c.says) expect(lines[0], run.stderr).toContain(fragment);
+    expectOneUserError(run, c.at, c.says);
     expect(run.created, 'nothing may be written').toEqual([]);
   });
 

@@ -3,6 +3,7 @@
  * fresh temp folder that is also the workspace, with the files a test puts there.
  * Shared by every end-to-end test of the command line.
  */
+import { expect } from 'vitest';
 import { execFile } from 'node:child_process';
 import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -123,4 +124,19 @@ export async function runCli(args: readonly string[], options: CliRunOptions = {
 /** The marks of a stack trace; a user error must show none of them. */
 export function hasStackTrace(text: string): boolean {
   return /\n\s+at /.test(text) || /^\s+at .+:\d+:\d+\)?$/m.test(text);
+}
+
+/**
+ * A user error as the command line must report it: exit 2, nothing on stdout, no stack
+ * trace, exactly one line `error: <at>…` that contains every fragment of `says`.
+ */
+export function expectOneUserError(run: CliRun, at: string | null, says: readonly string[]): void {
+  expect(run.code, run.stderr).toBe(2);
+  expect(run.stdout).toBe('');
+  expect(hasStackTrace(run.stderr), run.stderr).toBe(false);
+  expect(run.stderr).not.toContain('    at ');
+  const lines = run.stderr.trimEnd().split('\n');
+  expect(lines, run.stderr).toHaveLength(1);
+  expect(lines[0].startsWith(`error: ${at ?? ''}`), run.stderr).toBe(true);
+  for (const fragment of says) expect(lines[0], run.stderr).toContain(fragment);
 }
