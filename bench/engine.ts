@@ -80,8 +80,19 @@ function makeData(c: Case): EncodedDataset {
     xValidation: new Float64Array(0),
     yValidation: new Float64Array(0),
     encoding: {
-      features: Array.from({ length: c.inputs }, (_, i) => ({ kind: 'numeric' as const, name: `f${i}`, mean: 0, std: 1 })),
-      target: { name: 'y', task: 'classification', classes: Array.from({ length: classes }, (_, k) => `${k}`), mean: 0, std: 1 },
+      features: Array.from({ length: c.inputs }, (_, i) => ({
+        kind: 'numeric' as const,
+        name: `f${i}`,
+        mean: 0,
+        std: 1,
+      })),
+      target: {
+        name: 'y',
+        task: 'classification',
+        classes: Array.from({ length: classes }, (_, k) => `${k}`),
+        mean: 0,
+        std: 1,
+      },
     },
   };
 }
@@ -155,8 +166,12 @@ function fmt(n: number, digits = 2): string {
 
 async function main(): Promise<void> {
   const tf = await loadTfWasm();
-  console.log(`node ${process.version}; tfjs ${tf.version.tfjs} on backend '${tf.getBackend()}' (single thread under Node)`);
-  console.log(`nominal work per epoch: 6·N·(D·H + H·O) flops; wall-clock rates, best of 5 repetitions; ${quick ? 'quick' : 'full'} run`);
+  console.log(
+    `node ${process.version}; tfjs ${tf.version.tfjs} on backend '${tf.getBackend()}' (single thread under Node)`,
+  );
+  console.log(
+    `nominal work per epoch: 6·N·(D·H + H·O) flops; wall-clock rates, best of 5 repetitions; ${quick ? 'quick' : 'full'} run`,
+  );
   console.log('');
   const header = ['shape', 'kernel', 'epochs/s', 'GFLOP/s', 'vs tfjs-wasm'];
   const rows: string[][] = [];
@@ -167,13 +182,20 @@ async function main(): Promise<void> {
     const tfRate = timeTf(tf, c, data);
     const fast = timeEngine(c, data, wasmKernel());
     const plain = timeEngine(c, data, referenceKernel());
-    const line = (k: string, r: number) => [c.name, k, fmt(r), ((r * flops) / 1e9).toFixed(2), (r / tfRate).toFixed(2) + '×'];
+    const line = (k: string, r: number) => [
+      c.name,
+      k,
+      fmt(r),
+      ((r * flops) / 1e9).toFixed(2),
+      (r / tfRate).toFixed(2) + '×',
+    ];
     rows.push(line('engine (wasm simd, production)', fast));
     rows.push(line('engine (typescript reference)', plain));
     rows.push(line('tfjs-backend-wasm', tfRate));
   }
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
-  const show = (r: string[]) => console.log(r.map((v, i) => (i < 2 ? v.padEnd(widths[i]) : v.padStart(widths[i]))).join('  '));
+  const show = (r: string[]) =>
+    console.log(r.map((v, i) => (i < 2 ? v.padEnd(widths[i]) : v.padStart(widths[i]))).join('  '));
   show(header);
   for (const r of rows) show(r);
 }

@@ -55,7 +55,12 @@ export function generated(rows = 100_000, inputs = 30): EncodedDataset {
     xValidation,
     yValidation,
     encoding: {
-      features: Array.from({ length: inputs }, (_, i) => ({ kind: 'numeric' as const, name: `x${i + 1}`, mean: 0, std: 1 })),
+      features: Array.from({ length: inputs }, (_, i) => ({
+        kind: 'numeric' as const,
+        name: `x${i + 1}`,
+        mean: 0,
+        std: 1,
+      })),
       target: { name: 'class', task: 'classification', classes: ['0', '1'], mean: 0, std: 1 },
     },
   };

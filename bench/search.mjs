@@ -10,7 +10,17 @@ const out = mkdtempSync(join(tmpdir(), 'nb-bench-search-'));
 try {
   execFileSync(
     process.execPath,
-    ['node_modules/@vercel/ncc/dist/ncc/cli.js', 'build', 'bench/search.entry.ts', '-o', out, '--quiet', '--transpile-only', '--target', 'es2022'],
+    [
+      'node_modules/@vercel/ncc/dist/ncc/cli.js',
+      'build',
+      'bench/search.entry.ts',
+      '-o',
+      out,
+      '--quiet',
+      '--transpile-only',
+      '--target',
+      'es2022',
+    ],
     { stdio: 'inherit' },
   );
   writeFileSync(join(out, 'package.json'), '{"type":"module"}\n');
@@ -36,8 +46,11 @@ try {
       );
     }
     if (runs.length === 2) {
-      const same = runs[0].width === runs[1].width && runs[0].trainings === runs[1].trainings && runs[0].widths === runs[1].widths;
-      console.log(`${name.padEnd(9)} speed-up 1 → 2 workers: ${(runs[0].seconds / runs[1].seconds).toFixed(2)}×${same ? '' : '  (RESULTS DIFFER: a bug)'}`);
+      const same =
+        runs[0].width === runs[1].width && runs[0].trainings === runs[1].trainings && runs[0].widths === runs[1].widths;
+      console.log(
+        `${name.padEnd(9)} speed-up 1 → 2 workers: ${(runs[0].seconds / runs[1].seconds).toFixed(2)}×${same ? '' : '  (RESULTS DIFFER: a bug)'}`,
+      );
     }
   }
 } finally {

@@ -25,8 +25,16 @@ if (process.argv[2] === '--child') {
     file: join(root, 'neuron-budget.yml'),
     root,
     data: {
-      path: csv, pathAsWritten: 'big.csv', target: 'label', features: null, ignore: [], task: 'auto',
-      validation: 0.25, delimiter: ',', maxCategories: 20, missing: 'error',
+      path: csv,
+      pathAsWritten: 'big.csv',
+      target: 'label',
+      features: null,
+      ignore: [],
+      task: 'auto',
+      validation: 0.25,
+      delimiter: ',',
+      maxCategories: 20,
+      missing: 'error',
     },
     target: { metric: 'accuracy', threshold: 0.95 },
     search: { seed: 1 },
@@ -54,9 +62,13 @@ const rows = Number(process.argv[2] ?? 1_000_000);
 {
   console.error('compiling TypeScript into .build/ ...');
   try {
-    execFileSync(process.execPath, [join(repo, 'node_modules/typescript/bin/tsc'), '-p', repo, '--outDir', join(repo, '.build')], {
-      stdio: 'inherit',
-    });
+    execFileSync(
+      process.execPath,
+      [join(repo, 'node_modules/typescript/bin/tsc'), '-p', repo, '--outDir', join(repo, '.build')],
+      {
+        stdio: 'inherit',
+      },
+    );
   } catch {
     // tsc exits non-zero on type errors elsewhere in the tree but still emits JavaScript.
   }
@@ -104,7 +116,9 @@ if (child.status !== 0) {
 }
 const result = JSON.parse(child.stdout);
 console.log(`file:        ${rows} rows × ${header.length} columns, ${(bytes / 2 ** 20).toFixed(1)} MiB`);
-console.log(`loaded:      ${result.rows} rows → ${result.inputs} inputs; ${result.trainRows} training, ${result.validationRows} validation rows`);
+console.log(
+  `loaded:      ${result.rows} rows → ${result.inputs} inputs; ${result.trainRows} training, ${result.validationRows} validation rows`,
+);
 console.log(`time:        ${result.seconds.toFixed(2)} s (read, check, split, encode, fingerprint, profile)`);
 console.log(`peak memory: ${result.maxRssMiB.toFixed(0)} MiB resident (limit 1536 MiB)`);
 console.log(`fingerprint: ${result.fingerprint}`);

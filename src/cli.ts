@@ -74,7 +74,9 @@ function parseArgs(argv: readonly string[]): Invocation {
   if (first === 'help') {
     const topic = rest[0];
     if (topic !== undefined && !isCommand(topic)) {
-      throw new UsageError(`no help for "${topic}"${didYouMean(topic, Object.keys(COMMANDS))}; commands: ${Object.keys(COMMANDS).join(', ')}`);
+      throw new UsageError(
+        `no help for "${topic}"${didYouMean(topic, Object.keys(COMMANDS))}; commands: ${Object.keys(COMMANDS).join(', ')}`,
+      );
     }
     return { kind: 'help', command: topic ?? null };
   }
@@ -82,7 +84,9 @@ function parseArgs(argv: readonly string[]): Invocation {
     throw new UsageError(`expected a command (${Object.keys(COMMANDS).join(' or ')}) before options, found "${first}"`);
   }
   if (!isCommand(first)) {
-    throw new UsageError(`unknown command "${first}"${didYouMean(first, Object.keys(COMMANDS))}; commands: ${Object.keys(COMMANDS).join(', ')}`);
+    throw new UsageError(
+      `unknown command "${first}"${didYouMean(first, Object.keys(COMMANDS))}; commands: ${Object.keys(COMMANDS).join(', ')}`,
+    );
   }
   const command = first;
   const allowed = COMMANDS[command].flags;
@@ -97,7 +101,9 @@ function parseArgs(argv: readonly string[]): Invocation {
     if (!(allowed as string[]).includes(name)) {
       const elsewhere = Object.hasOwn(FLAGS, name) ? ` (${command} has no --${name})` : '';
       const suggestion = didYouMean(name, allowed).replace(/"([^"]+)"/, '"--$1"');
-      throw new UsageError(`${command}: unknown option --${name}${elsewhere}${suggestion}; see ${TOOL_NAME} ${command} --help`);
+      throw new UsageError(
+        `${command}: unknown option --${name}${elsewhere}${suggestion}; see ${TOOL_NAME} ${command} --help`,
+      );
     }
     const flag = name as FlagName;
     let value: string | undefined;
@@ -240,12 +246,15 @@ async function main(argv: readonly string[]): Promise<number> {
     return result.exitCode;
   } catch (error) {
     if (isUserError(error)) {
-      const pointer = error instanceof UsageError && !error.message.includes('--help') ? `; see ${TOOL_NAME} --help` : '';
+      const pointer =
+        error instanceof UsageError && !error.message.includes('--help') ? `; see ${TOOL_NAME} --help` : '';
       err.write(`error: ${error.message}${pointer}\n`);
       return EXIT_USAGE;
     }
     const stack = error instanceof Error ? (error.stack ?? error.message) : String(error);
-    err.write(`internal error in ${TOOL_NAME} ${TOOL_VERSION} (a bug, not a problem with your files; please report it):\n${stack}\n`);
+    err.write(
+      `internal error in ${TOOL_NAME} ${TOOL_VERSION} (a bug, not a problem with your files; please report it):\n${stack}\n`,
+    );
     return EXIT_INTERNAL;
   }
 }

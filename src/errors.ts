@@ -9,10 +9,7 @@ export class UserError extends Error {
   readonly column: number | undefined;
   readonly key: string | undefined;
 
-  constructor(
-    message: string,
-    where: { file?: string; line?: number; column?: number; key?: string } = {},
-  ) {
+  constructor(message: string, where: { file?: string; line?: number; column?: number; key?: string } = {}) {
     super(message);
     this.name = 'UserError';
     this.file = where.file;

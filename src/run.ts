@@ -65,7 +65,9 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
   if (options.reportPath) await checkOutputFolder(options.reportPath, 'report', options.root);
   if (options.modelPath) await checkOutputFolder(options.modelPath, 'model', options.root);
   const baselinePath = options.baselinePath ?? config.gate.baseline;
-  const baselineShown = options.baselinePath ? displayPath(config.root, options.baselinePath) : config.gate.baselineAsWritten;
+  const baselineShown = options.baselinePath
+    ? displayPath(config.root, options.baselinePath)
+    : config.gate.baselineAsWritten;
   // A corrupt baseline is the user's to fix before minutes of search, not after.
   const previous = await readBaseline(baselinePath, baselineShown);
 
@@ -108,7 +110,8 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
       modelWritten = options.modelPath;
     }
   }
-  if (options.reportPath) await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
+  if (options.reportPath)
+    await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
   const verdict = report.verdict;
   return {
     report,
@@ -174,10 +177,19 @@ async function checkOutputFolder(path: string, what: string, root: string): Prom
   const folder = dirname(path);
   const shown = displayPath(root, folder);
   const info = await stat(folder).catch(() => null);
-  if (info === null) throw new UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, { file: displayPath(root, path) });
-  if (!info.isDirectory()) throw new UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, { file: displayPath(root, path) });
+  if (info === null)
+    throw new UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
+      file: displayPath(root, path),
+    });
+  if (!info.isDirectory())
+    throw new UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
+      file: displayPath(root, path),
+    });
   const target = await stat(path).catch(() => null);
-  if (target?.isDirectory()) throw new UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, { file: displayPath(root, path) });
+  if (target?.isDirectory())
+    throw new UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
+      file: displayPath(root, path),
+    });
 }
 
 /** With data.task auto the task is only known after reading; the metric must suit it. */
@@ -191,7 +203,7 @@ async function checkMetricFitsTask(config: Config, task: Task): Promise<void> {
   const hint =
     task === 'classification'
       ? 'set target.metric to accuracy, or data.task to regression'
-      : 'set target.metric to rmse, mae or max-abs-error (with a threshold in the target\'s units), or data.task to classification';
+      : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
   throw new UserError(
     `${where}: target.metric: the target column "${config.data.target}" was read as ${task}, which cannot be judged by ${metric}; ${hint}`,
     { file: shownConfig, key: 'target.metric', ...(at ? { line: at.line, column: at.column } : {}) },
@@ -219,7 +231,12 @@ function dataStageReport(config: Config, data: LoadedData, timing: Record<string
       outputs: ds.outputs,
       task: ds.task,
       fingerprint: data.fingerprint,
-      classes: classes === null ? null : Object.keys(classes).sort().map((label) => ({ label, count: classes[label] })),
+      classes:
+        classes === null
+          ? null
+          : Object.keys(classes)
+              .sort()
+              .map((label) => ({ label, count: classes[label] })),
     },
     search: null,
     changes: null,
@@ -235,7 +252,9 @@ function inputsLine(data: LoadedData): string {
   const categorical = features.filter((f) => f.kind === 'categorical');
   const parts = [`${numeric} numeric`];
   if (categorical.length > 0) {
-    const oneHot = categorical.map((f) => (f.kind === 'categorical' ? `${f.name} → ${f.categories.length}` : '')).join(', ');
+    const oneHot = categorical
+      .map((f) => (f.kind === 'categorical' ? `${f.name} → ${f.categories.length}` : ''))
+      .join(', ');
     parts.push(`${categorical.length} categorical (${oneHot})`);
   }
   return `${data.dataset.inputs} after encoding: ${parts.join(', ')}`;
@@ -256,16 +275,25 @@ function dataSummaryText(config: Config, data: LoadedData, report: Report): stri
     ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
     ['split', splitLine(config, report)],
     ['inputs', inputsLine(data)],
-    ['task', `${d.task}${d.classes ? `, ${d.classes.length} classes` : ''}; ${d.outputs} network output${d.outputs === 1 ? '' : 's'}`],
+    [
+      'task',
+      `${d.task}${d.classes ? `, ${d.classes.length} classes` : ''}; ${d.outputs} network output${d.outputs === 1 ? '' : 's'}`,
+    ],
   ];
   if (d.classes) {
     const width = Math.max(...d.classes.map((c) => c.label.length));
     d.classes.forEach((c, i) => {
       const share = ((100 * c.count) / d.rows).toFixed(1);
-      rows.push([i === 0 ? 'classes' : '', `${c.label.padEnd(width)}  ${String(c.count).padStart(7)}  ${share.padStart(5)}%`]);
+      rows.push([
+        i === 0 ? 'classes' : '',
+        `${c.label.padEnd(width)}  ${String(c.count).padStart(7)}  ${share.padStart(5)}%`,
+      ]);
     });
   }
-  rows.push(['target', `${report.metric.name} ${report.metric.name === 'accuracy' ? '≥' : '≤'} ${report.metric.threshold}`]);
+  rows.push([
+    'target',
+    `${report.metric.name} ${report.metric.name === 'accuracy' ? '≥' : '≤'} ${report.metric.threshold}`,
+  ]);
   rows.push(['fingerprint', d.fingerprint]);
   const body = rows.map(([k, v]) => `  ${k.padEnd(12)}${v}`).join('\n');
   return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;

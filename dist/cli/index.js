@@ -8754,7 +8754,10 @@ function checkInside(root, baseDir, p) {
     }
     const realRoot = realLocation(absoluteRoot);
     if (!isInside(realRoot, realLocation(target))) {
-        return { ok: false, reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}` };
+        return {
+            ok: false,
+            reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
+        };
     }
     return { ok: true, path: target };
 }
@@ -8851,7 +8854,7 @@ const CONFIG_SPEC = [
                 name: 'threshold',
                 rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
                 default: REQUIRED,
-                description: 'accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column\'s units.',
+                description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
             },
         ],
     },
@@ -9089,7 +9092,10 @@ class ConfigReader {
             const key = /^\s*["']?([^"':\n]*)/.exec(this.text.slice(offset))?.[1]?.trim() ?? '';
             throw this.errorAt(offset, null, `key "${key}" appears twice in the same mapping; keep one`);
         }
-        const reason = first.message.replace(/ at line \d+, column \d+[\s\S]*$/, '').replace(/\s+/g, ' ').trim();
+        const reason = first.message
+            .replace(/ at line \d+, column \d+[\s\S]*$/, '')
+            .replace(/\s+/g, ' ')
+            .trim();
         throw this.errorAt(offset, null, `YAML syntax error: ${reason}`);
     }
     errorAt(offset, key, message) {
@@ -9674,7 +9680,7 @@ function fingerprint(features, target, rows) {
         name: column.name,
         role: 'feature',
         kind: column.kind,
-        write: (hash) => (column.kind === 'numeric' ? numbers(hash, column.values) : categories(hash, column.categories, column.codes)),
+        write: (hash) => column.kind === 'numeric' ? numbers(hash, column.values) : categories(hash, column.categories, column.codes),
     }));
     parts.push({
         name: target.name,
@@ -9735,7 +9741,9 @@ function profileData(features, target, stores, rows) {
     for (const column of features) {
         const lost = missing.get(column.column) ?? 0;
         profiles[column.name] =
-            column.kind === 'numeric' ? numericProfile(column.values, lost) : categoricalProfile(column.categories, column.codes, lost);
+            column.kind === 'numeric'
+                ? numericProfile(column.values, lost)
+                : categoricalProfile(column.categories, column.codes, lost);
     }
     let classes = null;
     if (target.task === 'classification') {
@@ -9747,7 +9755,10 @@ function profileData(features, target, stores, rows) {
             classes[label] = counts[i];
         });
     }
-    const used = [...features.map((c) => ({ name: c.name, column: c.column })), { name: target.name, column: target.column }];
+    const used = [
+        ...features.map((c) => ({ name: c.name, column: c.column })),
+        { name: target.name, column: target.column },
+    ];
     used.sort((a, b) => a.column - b.column);
     return { rows, classes, columns: used.map((c) => c.name), features: profiles };
 }
@@ -12569,7 +12580,9 @@ function groupRows(target) {
     return groups;
 }
 function tooFew(target, group, rows, minimum, validation, file) {
-    const what = target.classes === null ? `the data have ${rows} rows` : `class "${target.classes[group]}" has ${rows} row${rows === 1 ? '' : 's'}`;
+    const what = target.classes === null
+        ? `the data have ${rows} rows`
+        : `class "${target.classes[group]}" has ${rows} row${rows === 1 ? '' : 's'}`;
     const need = validation > 0
         ? target.classes === null
             ? `at least ${minimum} rows (one or more to validate on, two or more to train on)`
@@ -13056,8 +13069,12 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
             }
         }
         else if (b.kind === 'categorical' && a.kind === 'categorical') {
-            const appeared = Object.keys(a.counts).filter((c) => !(c in b.counts)).sort(byCodeUnit);
-            const vanished = Object.keys(b.counts).filter((c) => !(c in a.counts)).sort(byCodeUnit);
+            const appeared = Object.keys(a.counts)
+                .filter((c) => !(c in b.counts))
+                .sort(byCodeUnit);
+            const vanished = Object.keys(b.counts)
+                .filter((c) => !(c in a.counts))
+                .sort(byCodeUnit);
             if (appeared.length > 0 || vanished.length > 0)
                 categories.push({ feature: name, appeared, vanished });
         }
@@ -13268,10 +13285,11 @@ function findJsonSyntaxProblem(text) {
         return { line, column, detail: `expected ${e.expected}, found ${found}` };
     }
 }
-class ScanError {
+class ScanError extends Error {
     offset;
     expected;
     constructor(offset, expected) {
+        super(`expected ${expected} at offset ${offset}`);
         this.offset = offset;
         this.expected = expected;
     }
@@ -13363,7 +13381,12 @@ function nextBaseline(previous, current, meta) {
             restarts: atWidth ? atWidth.restarts : null,
             searchSeconds: result.timing.searchSeconds,
         },
-        widths: result.widths.map((w) => ({ width: w.width, restarts: w.restarts, reached: w.reached, best: w.best })),
+        widths: result.widths.map((w) => ({
+            width: w.width,
+            restarts: w.restarts,
+            reached: w.reached,
+            best: w.best,
+        })),
         data: {
             file: config.data.pathAsWritten.replace(/\\/g, '/'),
             rows: loaded.profile.rows,
@@ -13395,7 +13418,7 @@ async function writeBaseline(path, baseline) {
         parseBaseline(text, path);
     }
     catch (e) {
-        throw new Error(`refusing to write a baseline that would not read back: ${e.message}`);
+        throw new Error(`refusing to write a baseline that would not read back: ${e.message}`, { cause: e });
     }
     await writeFileAtomic(path, text);
 }
@@ -13464,11 +13487,12 @@ function checkSchemaVersion(value, shown) {
 // ---- shape validation: mirrors schema/baseline.schema.json ----
 const METRICS = ['accuracy', 'rmse', 'mae', 'max-abs-error'];
 const HEX64 = /^[0-9a-f]{64}$/;
-class ShapeError {
+class ShapeError extends Error {
     key;
     expected;
     found;
     constructor(key, expected, found) {
+        super(`${key}: expected ${expected}`);
         this.key = key;
         this.expected = expected;
         this.found = found;
@@ -13549,7 +13573,9 @@ const oneOf = (values) => (v, key) => {
     }
 };
 const isoDate = (v, key) => {
-    if (typeof v !== 'string' || !/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/.test(v) || Number.isNaN(Date.parse(v))) {
+    if (typeof v !== 'string' ||
+        !/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/.test(v) ||
+        Number.isNaN(Date.parse(v))) {
         throw new ShapeError(key, 'an ISO 8601 UTC date-time such as "2026-01-31T12:00:00.000Z"', v);
     }
 };
@@ -13633,7 +13659,7 @@ function describe(v) {
         const s = JSON.stringify(v);
         return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
     }
-    return String(v);
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
 ;// CONCATENATED MODULE: ./src/gate/stage.ts
@@ -13643,7 +13669,10 @@ async function runGateStage(input) {
     const previous = input.previous !== undefined ? input.previous : await readBaseline(input.baselinePath, input.baselineShown);
     const config = input.baselinePath === input.config.gate.baseline
         ? input.config
-        : { ...input.config, gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown } };
+        : {
+            ...input.config,
+            gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
+        };
     const outcome = evaluateGate({ result: input.result, loaded: input.loaded, config, baseline: previous });
     if (input.mode === 'check')
         return { outcome, written: null, notWritten: null, gate: config.gate };
@@ -13836,14 +13865,14 @@ function uniform(rng, lo, hi) {
  * Accuracy against Math.*: a few units in the last place (test/nn/detmath.test.ts states the bound).
  */
 /** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
-const LN2_HI = 6.93147180369123816490e-1;
+const LN2_HI = 6.9314718036912381649e-1;
 const LN2_LO = 1.90821492927058770002e-10;
-const INV_LN2 = 1.44269504088896338700e0;
+const INV_LN2 = 1.442695040888963387;
 /** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
 const EXPM1_C = [
-    0.5, 0.16666666666666666, 0.041666666666666664, 0.008333333333333333, 0.001388888888888889,
-    0.0001984126984126984, 0.0000248015873015873, 0.0000027557319223985893, 2.755731922398589e-7,
-    2.505210838544172e-8, 2.08767569878681e-9, 1.6059043836821613e-10,
+    0.5, 0.16666666666666666, 0.041666666666666664, 0.008333333333333333, 0.001388888888888889, 0.0001984126984126984,
+    0.0000248015873015873, 0.0000027557319223985893, 2.755731922398589e-7, 2.505210838544172e-8, 2.08767569878681e-9,
+    1.6059043836821613e-10,
 ];
 const [C2, C3, C4, C5, C6, C7, C8, C9, C10, C11, C12, C13] = EXPM1_C;
 /** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
@@ -14337,7 +14366,13 @@ function referenceLossAndGradient(shape, params, x, y, start, end, grad, s, prim
                 grad[wo + k] += hj * dz[k];
                 sum += params[wo + k] * dz[k];
             }
-            const fp = act === ACT_TANH ? 1 - hj * hj + primeOffset : act === ACT_LOGISTIC ? hj * (1 - hj) + primeOffset : a[j] > 0 ? 1 : 0;
+            const fp = act === ACT_TANH
+                ? 1 - hj * hj + primeOffset
+                : act === ACT_LOGISTIC
+                    ? hj * (1 - hj) + primeOffset
+                    : a[j] > 0
+                        ? 1
+                        : 0;
             dh[qo + j] = sum * fp;
         }
         for (let j = 0; j < H; j++)
@@ -15318,7 +15353,13 @@ class NetworkTrainer {
         }
         if (!(options.checkEvery >= 1))
             throw new RangeError(`checkEvery must be >= 1, got ${options.checkEvery}`);
-        this.shape = { inputs: data.inputs, width, outputs: data.outputs, activation: options.activation, head: headFor(data) };
+        this.shape = {
+            inputs: data.inputs,
+            width,
+            outputs: data.outputs,
+            activation: options.activation,
+            head: headFor(data),
+        };
         this.head = reference_headCode(this.shape.head);
         this.init = options.init ?? defaultInit(options.activation);
         this.params = initParams(this.shape, this.init, rng);
@@ -15534,7 +15575,11 @@ class NetworkTrainer {
     load(net) {
         const { shape, params } = network_fromJson(net);
         const s = this.shape;
-        if (shape.inputs !== s.inputs || shape.width !== s.width || shape.outputs !== s.outputs || shape.head !== s.head || shape.activation !== s.activation) {
+        if (shape.inputs !== s.inputs ||
+            shape.width !== s.width ||
+            shape.outputs !== s.outputs ||
+            shape.head !== s.head ||
+            shape.activation !== s.activation) {
             throw new RangeError(`network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`);
         }
         this.params.set(params);
@@ -15937,7 +15982,7 @@ function renderMarkdown(report, options = {}) {
         if (body.length + 1 <= limit)
             return `${body}\n`;
     }
-    const note = '_The details were left out to keep this comment within GitHub\'s size limit; the JSON report has them all._';
+    const note = "_The details were left out to keep this comment within GitHub's size limit; the JSON report has them all._";
     return `${[head, note, foot].join('\n\n')}\n`;
 }
 function headline(view) {
@@ -16117,7 +16162,7 @@ function changesList(changes, limits) {
         items.push(`Data file: ${escapeMarkdown(changes.file.before)} → ${escapeMarkdown(changes.file.after)}.`);
     const r = changes.rows;
     if (!changes.changed)
-        items.push('The data are the same as the baseline\'s (same fingerprint).');
+        items.push("The data are the same as the baseline's (same fingerprint).");
     else
         items.push(`Rows: ${formatCount(r.before)} → ${formatCount(r.after)} (${formatDelta(r.after - r.before)}).`);
     for (const label of changes.classesAppeared)
@@ -16217,8 +16262,16 @@ function renderText(report) {
         ['smallest adequate width', b?.width == null ? dash : String(b.width), cWidth],
         [`${view.metricName} at that width`, fmt(b?.metric), fmt(c.metric)],
         ['restarts reaching target there', rate(b?.reached, b?.restarts), rate(c.reached, c.restarts)],
-        ['data rows', b?.rows == null ? dash : formatCount(b.rows), c.rows === null ? dash : `${formatCount(c.rows)}${rowsDelta}`],
-        ['search time', formatSeconds(b?.searchSeconds).replace('—', dash), formatSeconds(c.searchSeconds).replace('—', dash)],
+        [
+            'data rows',
+            b?.rows == null ? dash : formatCount(b.rows),
+            c.rows === null ? dash : `${formatCount(c.rows)}${rowsDelta}`,
+        ],
+        [
+            'search time',
+            formatSeconds(b?.searchSeconds).replace('—', dash),
+            formatSeconds(c.searchSeconds).replace('—', dash),
+        ],
     ];
     for (const [name, before, after] of table)
         out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
@@ -16233,7 +16286,9 @@ function renderText(report) {
     if (view.rows.length > 0) {
         out.push('');
         out.push(`${view.metricName} by width (best over restarts; reached/run)`);
-        const head = b ? ['width', 'this change', 'reached', 'baseline', 'reached'] : ['width', 'best', 'reached', 'wilson 95%'];
+        const head = b
+            ? ['width', 'this change', 'reached', 'baseline', 'reached']
+            : ['width', 'best', 'reached', 'wilson 95%'];
         out.push(head.map((h, i) => (i === 0 ? h.padStart(7) : h.padStart(14))).join(''));
         for (const r of view.rows) {
             const cells = [
@@ -16247,7 +16302,7 @@ function renderText(report) {
                 cells.push(r.current ? `${r.current.wilson[0].toFixed(2)}-${r.current.wilson[1].toFixed(2)}` : dash);
             out.push(cells.map((x, i) => (i === 0 ? x : x.padStart(14))).join(''));
         }
-        out.push('  (> marks this change\'s width; the threshold is ' + formatMetric(view.threshold) + ')');
+        out.push("  (> marks this change's width; the threshold is " + formatMetric(view.threshold) + ')');
     }
     if (view.history.length > 0) {
         out.push('');
@@ -16456,9 +16511,23 @@ function restartAtWidth(plan, result, width) {
     const seg = result.segments.find((s) => s.width === width);
     if (seg !== undefined) {
         const diverged = seg.stop === 'diverged';
-        return { restart, reached: false, metric: seg.metric, epochs: seg.epochs, stop: seg.stop, reason: diverged ? result.reason : null };
+        return {
+            restart,
+            reached: false,
+            metric: seg.metric,
+            epochs: seg.epochs,
+            stop: seg.stop,
+            reason: diverged ? result.reason : null,
+        };
     }
-    return { restart, reached: false, metric: Number.NaN, epochs: result.epochs, stop: 'diverged', reason: result.reason };
+    return {
+        restart,
+        reached: false,
+        metric: Number.NaN,
+        epochs: result.epochs,
+        stop: 'diverged',
+        reason: result.reason,
+    };
 }
 /**
  * Walk widths upward and, at each width, restarts in index order, stopping a width as
@@ -16955,7 +17024,8 @@ async function runSearch(data, search, target, options = {}) {
             const key = taskKey(done);
             inflight.delete(key);
             results.set(key, done);
-            if (Number.isFinite(done.metric) && (bestSoFar === null || (up ? done.metric > bestSoFar : done.metric < bestSoFar))) {
+            if (Number.isFinite(done.metric) &&
+                (bestSoFar === null || (up ? done.metric > bestSoFar : done.metric < bestSoFar))) {
                 bestSoFar = done.metric;
             }
             progress({ phase: 'growth', width: done.finalWidth, restart: done.restart, epoch: done.epochs, best: bestSoFar });
@@ -17022,7 +17092,13 @@ async function runSearch(data, search, target, options = {}) {
             width: win.width,
             grownWidth,
             metric: win.metric,
-            witness: { restart: win.restart, seed: search.seed, grownWidth: win.grownWidth, network: win.network, metric: win.metric },
+            witness: {
+                restart: win.restart,
+                seed: search.seed,
+                grownWidth: win.grownWidth,
+                network: win.network,
+                metric: win.metric,
+            },
             widths: decision.widths,
             pruning: pruned.flatMap((r) => r.steps),
             trainings: decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0),
@@ -17066,7 +17142,9 @@ function runSearchWorker() {
             if (data === null || ctx === null)
                 throw new Error('search worker got a task before its data');
             const id = msg.id;
-            const result = msg.type === 'train' ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id) : runPruneJob(data, ctx, msg.job);
+            const result = msg.type === 'train'
+                ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id)
+                : runPruneJob(data, ctx, msg.job);
             reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
         }
         catch (e) {
@@ -17119,7 +17197,9 @@ async function runJob(options) {
     if (options.modelPath)
         await checkOutputFolder(options.modelPath, 'model', options.root);
     const baselinePath = options.baselinePath ?? config.gate.baseline;
-    const baselineShown = options.baselinePath ? displayPath(config.root, options.baselinePath) : config.gate.baselineAsWritten;
+    const baselineShown = options.baselinePath
+        ? displayPath(config.root, options.baselinePath)
+        : config.gate.baselineAsWritten;
     // A corrupt baseline is the user's to fix before minutes of search, not after.
     const previous = await readBaseline(baselinePath, baselineShown);
     const data = await timed(timing, 'loadSeconds', () => loadData(config));
@@ -17225,12 +17305,18 @@ async function checkOutputFolder(path, what, root) {
     const shown = displayPath(root, folder);
     const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
     if (info === null)
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, { file: displayPath(root, path) });
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
+            file: displayPath(root, path),
+        });
     if (!info.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, { file: displayPath(root, path) });
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
+            file: displayPath(root, path),
+        });
     const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
     if (target?.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, { file: displayPath(root, path) });
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
+            file: displayPath(root, path),
+        });
 }
 /** With data.task auto the task is only known after reading; the metric must suit it. */
 async function checkMetricFitsTask(config, task) {
@@ -17243,7 +17329,7 @@ async function checkMetricFitsTask(config, task) {
     const where = at ? `${shownConfig}:${at.line}:${at.column}` : shownConfig;
     const hint = task === 'classification'
         ? 'set target.metric to accuracy, or data.task to regression'
-        : 'set target.metric to rmse, mae or max-abs-error (with a threshold in the target\'s units), or data.task to classification';
+        : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
     throw new errors_UserError(`${where}: target.metric: the target column "${config.data.target}" was read as ${task}, which cannot be judged by ${metric}; ${hint}`, { file: shownConfig, key: 'target.metric', ...(at ? { line: at.line, column: at.column } : {}) });
 }
 function dataStageReport(config, data, timing) {
@@ -17267,7 +17353,11 @@ function dataStageReport(config, data, timing) {
             outputs: ds.outputs,
             task: ds.task,
             fingerprint: data.fingerprint,
-            classes: classes === null ? null : Object.keys(classes).sort().map((label) => ({ label, count: classes[label] })),
+            classes: classes === null
+                ? null
+                : Object.keys(classes)
+                    .sort()
+                    .map((label) => ({ label, count: classes[label] })),
         },
         search: null,
         changes: null,
@@ -17281,7 +17371,9 @@ function inputsLine(data) {
     const categorical = features.filter((f) => f.kind === 'categorical');
     const parts = [`${numeric} numeric`];
     if (categorical.length > 0) {
-        const oneHot = categorical.map((f) => (f.kind === 'categorical' ? `${f.name} → ${f.categories.length}` : '')).join(', ');
+        const oneHot = categorical
+            .map((f) => (f.kind === 'categorical' ? `${f.name} → ${f.categories.length}` : ''))
+            .join(', ');
         parts.push(`${categorical.length} categorical (${oneHot})`);
     }
     return `${data.dataset.inputs} after encoding: ${parts.join(', ')}`;
@@ -17301,16 +17393,25 @@ function dataSummaryText(config, data, report) {
         ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
         ['split', splitLine(config, report)],
         ['inputs', inputsLine(data)],
-        ['task', `${d.task}${d.classes ? `, ${d.classes.length} classes` : ''}; ${d.outputs} network output${d.outputs === 1 ? '' : 's'}`],
+        [
+            'task',
+            `${d.task}${d.classes ? `, ${d.classes.length} classes` : ''}; ${d.outputs} network output${d.outputs === 1 ? '' : 's'}`,
+        ],
     ];
     if (d.classes) {
         const width = Math.max(...d.classes.map((c) => c.label.length));
         d.classes.forEach((c, i) => {
             const share = ((100 * c.count) / d.rows).toFixed(1);
-            rows.push([i === 0 ? 'classes' : '', `${c.label.padEnd(width)}  ${String(c.count).padStart(7)}  ${share.padStart(5)}%`]);
+            rows.push([
+                i === 0 ? 'classes' : '',
+                `${c.label.padEnd(width)}  ${String(c.count).padStart(7)}  ${share.padStart(5)}%`,
+            ]);
         });
     }
-    rows.push(['target', `${report.metric.name} ${report.metric.name === 'accuracy' ? '≥' : '≤'} ${report.metric.threshold}`]);
+    rows.push([
+        'target',
+        `${report.metric.name} ${report.metric.name === 'accuracy' ? '≥' : '≤'} ${report.metric.threshold}`,
+    ]);
     rows.push(['fingerprint', d.fingerprint]);
     const body = rows.map(([k, v]) => `  ${k.padEnd(12)}${v}`).join('\n');
     return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;

@@ -205,4 +205,6 @@ for (let i = 0; i < PR_ROWS; i++) added.push(reading(id++, 'HX-90'));
 const here = dirname(fileURLToPath(import.meta.url));
 writeFileSync(join(here, 'readings.csv'), toCsv(base));
 writeFileSync(join(here, 'readings-pr.csv'), toCsv([...base, ...added]));
-console.error(`wrote readings.csv (${base.length} rows) and readings-pr.csv (${base.length + added.length} rows): invented data`);
+console.error(
+  `wrote readings.csv (${base.length} rows) and readings-pr.csv (${base.length + added.length} rows): invented data`,
+);

@@ -5,17 +5,7 @@
  */
 import { readFile } from 'node:fs/promises';
 import { dirname, relative, resolve, sep } from 'node:path';
-import {
-  isAlias,
-  isMap,
-  isScalar,
-  isSeq,
-  LineCounter,
-  parseDocument,
-  type Document,
-  type Node,
-  type Pair,
-} from 'yaml';
+import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node, type Pair } from 'yaml';
 import { UserError } from '../errors.js';
 import { checkInside, isInside } from './paths.js';
 import { CONFIG_SPEC, DERIVED, REQUIRED, type KeySpec, type SectionSpec, type ValueRule } from './spec.js';
@@ -42,8 +32,10 @@ export async function loadConfig(configPath: string, root: string): Promise<Conf
     if (code === 'ENOENT') {
       throw new UserError(`${shown}: config file not found (looked for ${file})`, { file: shown });
     }
-    if (code === 'EISDIR') throw new UserError(`${shown}: expected a YAML config file, found a folder`, { file: shown });
-    if (code === 'EACCES') throw new UserError(`${shown}: config file cannot be read (permission denied)`, { file: shown });
+    if (code === 'EISDIR')
+      throw new UserError(`${shown}: expected a YAML config file, found a folder`, { file: shown });
+    if (code === 'EACCES')
+      throw new UserError(`${shown}: config file cannot be read (permission denied)`, { file: shown });
     throw error;
   }
   return parseConfig(text, { file, root });
@@ -82,7 +74,11 @@ class ConfigReader {
       );
     }
     if (!isMap(top)) {
-      throw this.error(top, null, `expected a mapping with the sections data, target, search and gate, found ${this.describe(top)}`);
+      throw this.error(
+        top,
+        null,
+        `expected a mapping with the sections data, target, search and gate, found ${this.describe(top)}`,
+      );
     }
     const sections = new Map<string, Found>();
     for (const pair of top.items as Pair<Node, Node | null>[]) {
@@ -116,7 +112,10 @@ class ConfigReader {
       const key = /^\s*["']?([^"':\n]*)/.exec(this.text.slice(offset))?.[1]?.trim() ?? '';
       throw this.errorAt(offset, null, `key "${key}" appears twice in the same mapping; keep one`);
     }
-    const reason = first.message.replace(/ at line \d+, column \d+[\s\S]*$/, '').replace(/\s+/g, ' ').trim();
+    const reason = first.message
+      .replace(/ at line \d+, column \d+[\s\S]*$/, '')
+      .replace(/\s+/g, ' ')
+      .trim();
     throw this.errorAt(offset, null, `YAML syntax error: ${reason}`);
   }
 
@@ -138,14 +137,19 @@ class ConfigReader {
 
   /** Locates a bad value: at the value itself, or at its key when the value is empty. */
   private valueError(found: Found, message: string): UserError {
-    const empty = found.node === null || (isScalar(found.node) && found.node.value === null && found.node.source === '');
+    const empty =
+      found.node === null || (isScalar(found.node) && found.node.value === null && found.node.source === '');
     return this.error(empty ? found.keyNode : found.node, found.key, message);
   }
 
   private keyName(pair: Pair<Node, Node | null>, prefix: string): string {
     const key = pair.key;
     if (!isScalar(key) || (typeof key.value !== 'string' && typeof key.value !== 'number')) {
-      throw this.error(key, null, `expected a key name${prefix ? ` in ${prefix.slice(0, -1)}` : ''}, found ${this.describe(key)}`);
+      throw this.error(
+        key,
+        null,
+        `expected a key name${prefix ? ` in ${prefix.slice(0, -1)}` : ''}, found ${this.describe(key)}`,
+      );
     }
     return String(key.value);
   }
@@ -182,7 +186,11 @@ class ConfigReader {
       return out;
     }
     if (!isMap(section.node)) {
-      throw this.error(section.node, spec.name, `expected a mapping of ${spec.name} settings, found ${this.describe(section.node)}`);
+      throw this.error(
+        section.node,
+        spec.name,
+        `expected a mapping of ${spec.name} settings, found ${this.describe(section.node)}`,
+      );
     }
     const names = spec.keys.map((k) => k.name);
     for (const pair of section.node.items as Pair<Node, Node | null>[]) {
@@ -249,7 +257,10 @@ class ConfigReader {
       case 'text':
       case 'path': {
         if (typeof scalar === 'number' && rule.kind === 'text') {
-          throw this.valueError(found, `expected ${expected}, found the number ${this.describe(node)} (put a column name that looks like a number in quotes)`);
+          throw this.valueError(
+            found,
+            `expected ${expected}, found the number ${this.describe(node)} (put a column name that looks like a number in quotes)`,
+          );
         }
         if (typeof scalar !== 'string' || scalar.trim() === '') throw bad();
         return scalar;
@@ -260,7 +271,8 @@ class ConfigReader {
       }
       case 'text-list': {
         if (node === null || !isSeq(node)) throw bad();
-        if (node.items.length < rule.minItems) throw this.valueError(found, `expected ${expected}, found an empty list`);
+        if (node.items.length < rule.minItems)
+          throw this.valueError(found, `expected ${expected}, found an empty list`);
         const seen = new Set<string>();
         const out: string[] = [];
         for (const raw of node.items as (Node | null)[]) {
@@ -268,7 +280,11 @@ class ConfigReader {
           const v = item !== null && isScalar(item) ? item.value : undefined;
           if (typeof v !== 'string' || v.trim() === '') {
             const hint = typeof v === 'number' ? ' (put a column name that looks like a number in quotes)' : '';
-            throw this.error(item ?? node, found.key, `expected column names as text, found ${this.describe(item)}${hint}`);
+            throw this.error(
+              item ?? node,
+              found.key,
+              `expected column names as text, found ${this.describe(item)}${hint}`,
+            );
           }
           if (seen.has(v)) throw this.error(item, found.key, `column "${v}" is listed twice`);
           seen.add(v);
@@ -299,12 +315,18 @@ class ConfigReader {
       [ignore, 'ignore'],
     ] as const) {
       if (list?.includes(target)) {
-        throw this.valueError(d.get(name)!, `lists the target column "${target}"; the target cannot also be ${name === 'features' ? 'a feature' : 'ignored'}`);
+        throw this.valueError(
+          d.get(name)!,
+          `lists the target column "${target}"; the target cannot also be ${name === 'features' ? 'a feature' : 'ignored'}`,
+        );
       }
     }
     const both = features?.find((f) => ignore.includes(f));
     if (both !== undefined) {
-      throw this.valueError(d.get('ignore')!, `column "${both}" is both in data.features and in data.ignore; keep it in one`);
+      throw this.valueError(
+        d.get('ignore')!,
+        `column "${both}" is both in data.features and in data.ignore; keep it in one`,
+      );
     }
     const data: DataConfig = {
       path: this.insidePath(d.get('path')!, baseDir, pathAsWritten),
@@ -325,12 +347,18 @@ class ConfigReader {
       const fits = data.task === 'classification' ? metric === 'accuracy' : metric !== 'accuracy';
       if (!fits) {
         const expected = data.task === 'classification' ? 'accuracy' : 'rmse, mae or max-abs-error';
-        throw this.valueError(t.get('metric')!, `data.task is ${data.task}, so expected ${expected}, found "${metric}"`);
+        throw this.valueError(
+          t.get('metric')!,
+          `data.task is ${data.task}, so expected ${expected}, found "${metric}"`,
+        );
       }
     }
     const threshold = v<number>(t, 'target', 'threshold');
     if (metric === 'accuracy' && threshold > 1) {
-      throw this.valueError(t.get('threshold')!, `expected an accuracy above 0 and at most 1, found ${threshold} (write 95% as 0.95)`);
+      throw this.valueError(
+        t.get('threshold')!,
+        `expected an accuracy above 0 and at most 1, found ${threshold} (write 95% as 0.95)`,
+      );
     }
     const targetConfig: TargetConfig = { metric, threshold };
 
@@ -367,7 +395,10 @@ class ConfigReader {
     }
     const metricTolerance = v<number>(g, 'gate', 'metric-tolerance');
     if (metric === 'accuracy' && metricTolerance >= 1) {
-      throw this.valueError(g.get('metric-tolerance')!, `expected a tolerance below 1 for accuracy, found ${metricTolerance}`);
+      throw this.valueError(
+        g.get('metric-tolerance')!,
+        `expected a tolerance below 1 for accuracy, found ${metricTolerance}`,
+      );
     }
     const gate: GateConfig = {
       baseline: g.has('baseline')
@@ -395,7 +426,10 @@ class ConfigReader {
     if (relation === 'at least' ? value >= other : value <= other) return;
     const written = section.get(name);
     if (written) {
-      throw this.valueError(written, `expected search.${name} to be ${relation} search.${otherName} (${other}), found ${value}`);
+      throw this.valueError(
+        written,
+        `expected search.${name} to be ${relation} search.${otherName} (${other}), found ${value}`,
+      );
     }
     // Only the other key was written: blame it, against this key's default.
     const otherWritten = section.get(otherName);
@@ -414,7 +448,11 @@ class ConfigReader {
   private defaultInside(baseDir: string, p: string, key: string): string {
     const result = checkInside(this.root, baseDir, p);
     if (!result.ok) {
-      throw this.error(null, key, `the default ${result.reason} (the config file is outside the workspace); set ${key}`);
+      throw this.error(
+        null,
+        key,
+        `the default ${result.reason} (the config file is outside the workspace); set ${key}`,
+      );
     }
     return result.path;
   }
@@ -429,7 +467,8 @@ export function describeRule(rule: ValueRule): string {
     case 'number': {
       const low = rule.exclusiveMin ? `above ${rule.min}` : `of ${rule.min} or more`;
       if (rule.max === Number.MAX_VALUE) return `a number ${low}${orNull}`;
-      if (rule.exclusiveMax) return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
+      if (rule.exclusiveMax)
+        return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
       return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and at most ${rule.max}${orNull}`;
     }
     case 'enum':
@@ -462,7 +501,9 @@ export async function keyPosition(file: string, dottedKey: string): Promise<{ li
     const pair = doc.getIn(parts.slice(0, -1), true);
     const map = parts.length === 1 ? doc.contents : pair;
     if (map && isMap(map)) {
-      const found = (map.items as Pair<Node, Node | null>[]).find((p) => isScalar(p.key) && p.key.value === parts[parts.length - 1]);
+      const found = (map.items as Pair<Node, Node | null>[]).find(
+        (p) => isScalar(p.key) && p.key.value === parts[parts.length - 1],
+      );
       if (found?.key.range) {
         const { line, col } = lines.linePos(found.key.range[0]);
         return { line, column: col };

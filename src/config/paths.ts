@@ -44,7 +44,10 @@ export function checkInside(root: string, baseDir: string, p: string): InsideRes
   }
   const realRoot = realLocation(absoluteRoot);
   if (!isInside(realRoot, realLocation(target))) {
-    return { ok: false, reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}` };
+    return {
+      ok: false,
+      reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
+    };
   }
   return { ok: true, path: target };
 }

@@ -119,7 +119,7 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
         default: REQUIRED,
         description:
-          'accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column\'s units.',
+          "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
       },
     ],
   },
@@ -150,7 +150,8 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         name: 'required',
         rule: { kind: 'integer', min: 1, max: 1000 },
         default: 3,
-        description: 'Trainings per width that must reach the target for the width to count as adequate; at most restarts.',
+        description:
+          'Trainings per width that must reach the target for the width to count as adequate; at most restarts.',
       },
       {
         name: 'max-epochs',

@@ -105,7 +105,12 @@ export function numericColumn(store: ColumnStore, file: DataFile, role: string):
     const why = odd.overflow
       ? 'a number too large for a 64-bit float'
       : 'a value that is not a finite number (NaN and Infinity are not measurements; leave the cell empty if it is missing)';
-    throw dataError(file, odd.line, store.column, `${label}: expected a finite number, found ${shownValue(odd.value)}, ${why}`);
+    throw dataError(
+      file,
+      odd.line,
+      store.column,
+      `${label}: expected a finite number, found ${shownValue(odd.value)}, ${why}`,
+    );
   }
   if (text !== null) {
     throw dataError(

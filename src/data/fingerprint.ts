@@ -25,7 +25,8 @@ export function fingerprint(features: TypedColumn[], target: TargetColumn, rows:
     name: column.name,
     role: 'feature',
     kind: column.kind,
-    write: (hash) => (column.kind === 'numeric' ? numbers(hash, column.values) : categories(hash, column.categories, column.codes)),
+    write: (hash) =>
+      column.kind === 'numeric' ? numbers(hash, column.values) : categories(hash, column.categories, column.codes),
   }));
   parts.push({
     name: target.name,

@@ -15,7 +15,9 @@ export function profileData(
   for (const column of features) {
     const lost = missing.get(column.column) ?? 0;
     profiles[column.name] =
-      column.kind === 'numeric' ? numericProfile(column.values, lost) : categoricalProfile(column.categories, column.codes, lost);
+      column.kind === 'numeric'
+        ? numericProfile(column.values, lost)
+        : categoricalProfile(column.categories, column.codes, lost);
   }
   let classes: Record<string, number> | null = null;
   if (target.task === 'classification') {
@@ -26,7 +28,10 @@ export function profileData(
       (classes as Record<string, number>)[label] = counts[i];
     });
   }
-  const used = [...features.map((c) => ({ name: c.name, column: c.column })), { name: target.name, column: target.column }];
+  const used = [
+    ...features.map((c) => ({ name: c.name, column: c.column })),
+    { name: target.name, column: target.column },
+  ];
   used.sort((a, b) => a.column - b.column);
   return { rows, classes, columns: used.map((c) => c.name), features: profiles };
 }

@@ -65,9 +65,7 @@ export async function readCsvColumns(file: DataFile, options: ReadOptions): Prom
       header = checkHeader(file, record, line);
       const plan = options.plan(header);
       const known = header;
-      stores = plan.columns.map(
-        (c) => new ColumnStore(known[c.field], c.field + 1, c.distinctLimit),
-      );
+      stores = plan.columns.map((c) => new ColumnStore(known[c.field], c.field + 1, c.distinctLimit));
       fields = Int32Array.from(plan.columns, (c) => c.field);
       targetIndex = plan.target;
       return;
@@ -132,7 +130,12 @@ export async function readCsvColumns(file: DataFile, options: ReadOptions): Prom
     },
   });
   try {
-    await pipeline(createReadStream(file.path, { highWaterMark: 1 << 20 }), new TextCheck(options.delimiter), parser, sink);
+    await pipeline(
+      createReadStream(file.path, { highWaterMark: 1 << 20 }),
+      new TextCheck(options.delimiter),
+      parser,
+      sink,
+    );
   } catch (error) {
     throw explain(file, error, nextLine, header);
   }
@@ -239,7 +242,12 @@ function explain(
         : w.why === 'truncated'
           ? 'a UTF-8 character cut off by the end of the file'
           : `the byte ${w.bytes}, which is not valid UTF-8 text`;
-    return dataError(file, w.line, w.column, `${where}: expected UTF-8 text, found ${what}; save the file as CSV (UTF-8)`);
+    return dataError(
+      file,
+      w.line,
+      w.column,
+      `${where}: expected UTF-8 text, found ${what}; save the file as CSV (UTF-8)`,
+    );
   }
   const e = error as CsvParseError;
   const field = typeof e.column === 'number' ? e.column + 1 : 1;

@@ -3,7 +3,7 @@
  * round(rows × validation) of its rows (at least one) to validation, chosen by a seeded
  * Fisher–Yates shuffle. Both parts keep file order.
  */
-import { UserError } from '../errors.js';
+import { type UserError } from '../errors.js';
 import { columnLabel, dataError, type DataFile } from './where.js';
 
 /** SplitMix64 (Steele, Lea & Flood 2014): turns one seed into well-mixed 64-bit words. */
@@ -119,7 +119,10 @@ function tooFew(
   validation: number,
   file: DataFile,
 ): UserError {
-  const what = target.classes === null ? `the data have ${rows} rows` : `class "${target.classes[group]}" has ${rows} row${rows === 1 ? '' : 's'}`;
+  const what =
+    target.classes === null
+      ? `the data have ${rows} rows`
+      : `class "${target.classes[group]}" has ${rows} row${rows === 1 ? '' : 's'}`;
   const need =
     validation > 0
       ? target.classes === null

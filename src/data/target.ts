@@ -117,4 +117,3 @@ function tooManyClasses(store: ColumnStore, file: DataFile) {
       'too many classes for classification; set data.task: regression if it is a measurement',
   );
 }
-

@@ -84,9 +84,12 @@ export function nextBaseline(previous: Baseline | null, current: RunFacts, meta:
       restarts: atWidth ? atWidth.restarts : null,
       searchSeconds: result.timing.searchSeconds,
     },
-    widths: result.widths.map(
-      (w): BaselineWidth => ({ width: w.width, restarts: w.restarts, reached: w.reached, best: w.best }),
-    ),
+    widths: result.widths.map((w): BaselineWidth => ({
+      width: w.width,
+      restarts: w.restarts,
+      reached: w.reached,
+      best: w.best,
+    })),
     data: {
       file: config.data.pathAsWritten.replace(/\\/g, '/'),
       rows: loaded.profile.rows,
@@ -119,7 +122,7 @@ export async function writeBaseline(path: string, baseline: Baseline): Promise<v
   try {
     parseBaseline(text, path);
   } catch (e) {
-    throw new Error(`refusing to write a baseline that would not read back: ${(e as Error).message}`);
+    throw new Error(`refusing to write a baseline that would not read back: ${(e as Error).message}`, { cause: e });
   }
   await writeFileAtomic(path, text);
 }
@@ -145,9 +148,12 @@ export async function readBaseline(path: string, shown: string = path): Promise<
 /** Parses and validates baseline text; `shown` names the file in messages. */
 export function parseBaseline(text: string, shown: string): Baseline {
   if (text.trim() === '') {
-    throw new UserError(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
-      file: shown,
-    });
+    throw new UserError(
+      `${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`,
+      {
+        file: shown,
+      },
+    );
   }
   const syntax = findJsonSyntaxProblem(text);
   if (syntax) {
@@ -199,12 +205,14 @@ const HEX64 = /^[0-9a-f]{64}$/;
 
 type Check = (v: unknown, key: string) => void;
 
-class ShapeError {
+class ShapeError extends Error {
   constructor(
     readonly key: string,
     readonly expected: string,
     readonly found: unknown,
-  ) {}
+  ) {
+    super(`${key}: expected ${expected}`);
+  }
 }
 
 function validateBaselineShape(value: unknown, shown: string): asserts value is Baseline {
@@ -292,7 +300,11 @@ const oneOf =
   };
 
 const isoDate: Check = (v, key) => {
-  if (typeof v !== 'string' || !/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/.test(v) || Number.isNaN(Date.parse(v))) {
+  if (
+    typeof v !== 'string' ||
+    !/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/.test(v) ||
+    Number.isNaN(Date.parse(v))
+  ) {
     throw new ShapeError(key, 'an ISO 8601 UTC date-time such as "2026-01-31T12:00:00.000Z"', v);
   }
 };
@@ -374,5 +386,5 @@ function describe(v: unknown): string {
     const s = JSON.stringify(v);
     return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
   }
-  return String(v);
+  return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }

@@ -63,8 +63,12 @@ export function dataChanges(
         });
       }
     } else if (b.kind === 'categorical' && a.kind === 'categorical') {
-      const appeared = Object.keys(a.counts).filter((c) => !(c in b.counts)).sort(byCodeUnit);
-      const vanished = Object.keys(b.counts).filter((c) => !(c in a.counts)).sort(byCodeUnit);
+      const appeared = Object.keys(a.counts)
+        .filter((c) => !(c in b.counts))
+        .sort(byCodeUnit);
+      const vanished = Object.keys(b.counts)
+        .filter((c) => !(c in a.counts))
+        .sort(byCodeUnit);
       if (appeared.length > 0 || vanished.length > 0) categories.push({ feature: name, appeared, vanished });
     }
   }

@@ -38,4 +38,3 @@ export function evaluateGate(input: {
     : null;
   return { ...comparison, changes, baseline };
 }
-

@@ -7,7 +7,14 @@ export type { GateOutcome } from './evaluate.js';
 export { compare } from './compare.js';
 export type { Comparison, CompareInput } from './compare.js';
 export { dataChanges, MEAN_SHIFT_IN_STD } from './data-changes.js';
-export { nextBaseline, parseBaseline, readBaseline, serializeBaseline, whyNotRecordable, writeBaseline } from './baseline.js';
+export {
+  nextBaseline,
+  parseBaseline,
+  readBaseline,
+  serializeBaseline,
+  whyNotRecordable,
+  writeBaseline,
+} from './baseline.js';
 export type { BaselineMeta, RunFacts } from './baseline.js';
 export { resultSettings, settingsFingerprint, settingsDifferences } from './settings.js';
 export * from './types.js';

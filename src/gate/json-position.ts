@@ -146,11 +146,13 @@ export function findJsonSyntaxProblem(text: string): JsonSyntaxProblem | null {
   }
 }
 
-class ScanError {
+class ScanError extends Error {
   constructor(
     readonly offset: number,
     readonly expected: string,
-  ) {}
+  ) {
+    super(`expected ${expected} at offset ${offset}`);
+  }
 }
 
 /** 1-based line and column as a text editor counts them (column in characters). */

@@ -43,11 +43,15 @@ export interface GateStageResult {
 }
 
 export async function runGateStage(input: GateStageInput): Promise<GateStageResult> {
-  const previous = input.previous !== undefined ? input.previous : await readBaseline(input.baselinePath, input.baselineShown);
+  const previous =
+    input.previous !== undefined ? input.previous : await readBaseline(input.baselinePath, input.baselineShown);
   const config =
     input.baselinePath === input.config.gate.baseline
       ? input.config
-      : { ...input.config, gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown } };
+      : {
+          ...input.config,
+          gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
+        };
   const outcome = evaluateGate({ result: input.result, loaded: input.loaded, config, baseline: previous });
   if (input.mode === 'check') return { outcome, written: null, notWritten: null, gate: config.gate };
 

@@ -39,6 +39,9 @@ export function toAnnotation(e: UserError, workspace: string): Annotation {
 }
 
 /** Splits into what is annotated and what only reaches the log. */
-export function withinLimit(list: Annotation[], limit = ANNOTATION_LIMIT): { annotated: Annotation[]; logged: Annotation[] } {
+export function withinLimit(
+  list: Annotation[],
+  limit = ANNOTATION_LIMIT,
+): { annotated: Annotation[]; logged: Annotation[] } {
   return { annotated: list.slice(0, limit), logged: list.slice(limit) };
 }

@@ -18,7 +18,9 @@ export const ACTIONS_BOT_LOGIN = 'github-actions[bot]';
  */
 export function commentMarker(configKey: string): string {
   const key = configKey
-    .replace(/[^A-Za-z0-9._/-]/g, (c) => encodeURIComponent(c).replace(/[!'()*]/g, (x) => '%' + x.charCodeAt(0).toString(16).toUpperCase()))
+    .replace(/[^A-Za-z0-9._/-]/g, (c) =>
+      encodeURIComponent(c).replace(/[!'()*]/g, (x) => '%' + x.charCodeAt(0).toString(16).toUpperCase()),
+    )
     .replace(/-(?=-)/g, '%2D');
   return `<!-- neuron-budget comment; config: ${key} -->`;
 }
@@ -39,7 +41,10 @@ export function isOurComment(c: CommentRecord, marker: string, botLogin: string 
   if (!user || typeof user.login !== 'string') return false;
   if ((user.type ?? '').toLowerCase() !== 'bot') return false;
   if (user.login.toLowerCase() !== botLogin.toLowerCase()) return false;
-  const firstLine = (c.body ?? '').replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0]!.trim();
+  const firstLine = (c.body ?? '')
+    .replace(/^\uFEFF/, '')
+    .split(/\r?\n/, 1)[0]
+    .trim();
   return firstLine === marker;
 }
 

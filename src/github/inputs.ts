@@ -34,10 +34,7 @@ const FALSE = ['false', 'False', 'FALSE'];
 export function parseBooleanInput(name: string, value: string): boolean {
   if (TRUE.includes(value)) return true;
   if (FALSE.includes(value)) return false;
-  throw new UserError(
-    `input ${name}: expected true or false, found ${JSON.stringify(value)}`,
-    { key: name },
-  );
+  throw new UserError(`input ${name}: expected true or false, found ${JSON.stringify(value)}`, { key: name });
 }
 
 export const MAX_WORKERS = 256;

@@ -50,7 +50,8 @@ async function writeCommentFile(path: string, markdown: string): Promise<void> {
 }
 
 function isForkPullRequest(): boolean {
-  const pr = context.payload.pull_request as { head?: { repo?: { id?: number; full_name?: string } | null } } | undefined;
+  const pr = context.payload.pull_request as
+    { head?: { repo?: { id?: number; full_name?: string } | null } } | undefined;
   const head = pr?.head?.repo;
   const base = context.payload.repository as { id?: number; full_name?: string } | undefined;
   if (!head || !base) return false;
@@ -77,13 +78,15 @@ async function postComment(inputs: ActionInputs, markdown: string): Promise<void
   if (context.eventName === 'pull_request_target') {
     core.warning(
       'neuron-budget does not comment on pull_request_target events. That event runs with a write token and secrets; ' +
-        'checking out and reading the pull request\'s files under it is unsafe. Run neuron-budget on pull_request ' +
+        "checking out and reading the pull request's files under it is unsafe. Run neuron-budget on pull_request " +
         '(see "Pull requests from forks" in the README).',
     );
     return;
   }
   if (context.eventName !== 'pull_request') {
-    core.info(`Event ${context.eventName || '(unknown)'}: no pull-request comment; the results are in the job summary and outputs.`);
+    core.info(
+      `Event ${context.eventName || '(unknown)'}: no pull-request comment; the results are in the job summary and outputs.`,
+    );
     return;
   }
   const issueNumber = (context.payload.pull_request as { number?: number } | undefined)?.number;
@@ -92,7 +95,9 @@ async function postComment(inputs: ActionInputs, markdown: string): Promise<void
     return;
   }
   if (!inputs.token) {
-    core.warning('No github-token was given, so no pull-request comment was posted. The default is the job\'s own token; leave the input unset to use it.');
+    core.warning(
+      "No github-token was given, so no pull-request comment was posted. The default is the job's own token; leave the input unset to use it.",
+    );
     return;
   }
   let owner: string;
@@ -111,7 +116,12 @@ async function postComment(inputs: ActionInputs, markdown: string): Promise<void
   });
   const marker = commentMarker(inputs.configKey);
   try {
-    const done = await upsertComment(octokit, { owner, repo, issueNumber }, marker, commentBody(marker, markdown, runUrl()));
+    const done = await upsertComment(
+      octokit,
+      { owner, repo, issueNumber },
+      marker,
+      commentBody(marker, markdown, runUrl()),
+    );
     core.info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${done.url}` : ''}`);
   } catch (e) {
     const status = (e as { status?: number }).status;
@@ -217,7 +227,8 @@ export async function run(): Promise<void> {
     } else {
       core.info(`neuron-budget verdict: ${verdict}`);
     }
-    if (result.baselineWritten) core.info(`Baseline written to ${result.baselineWritten}; commit it to accept this result.`);
+    if (result.baselineWritten)
+      core.info(`Baseline written to ${result.baselineWritten}; commit it to accept this result.`);
 
     // None of these throw: they report trouble as warnings and leave the result alone.
     await writeCommentFile(join(folder, 'comment.md'), result.markdown);

@@ -23,7 +23,8 @@ export function failureMarkdown(message: string, kind: 'input' | 'internal'): st
 
 export function fitSummary(markdown: string, limit = SUMMARY_LIMIT): string {
   if (markdown.length <= limit) return markdown;
-  const note = '\n\n_The summary was cut to fit the runner\'s 1 MiB limit; the JSON report (output `report`) has everything._\n';
+  const note =
+    "\n\n_The summary was cut to fit the runner's 1 MiB limit; the JSON report (output `report`) has everything._\n";
   const cut = markdown.slice(0, limit - note.length);
   return cut.slice(0, Math.max(0, cut.lastIndexOf('\n'))) + note;
 }

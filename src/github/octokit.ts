@@ -28,7 +28,12 @@ const MAX_WAIT_SECONDS = 120;
 export function makeClient(o: ClientOptions): Octokit {
   const onLimit =
     (kind: string) =>
-    (retryAfter: number, options: { method?: string; url?: string }, _octokit: unknown, retryCount: number): boolean => {
+    (
+      retryAfter: number,
+      options: { method?: string; url?: string },
+      _octokit: unknown,
+      retryCount: number,
+    ): boolean => {
       const what = `${options.method ?? ''} ${options.url ?? ''}`.trim();
       if (retryCount < MAX_LIMIT_RETRIES && retryAfter <= MAX_WAIT_SECONDS) {
         o.warn(`GitHub ${kind} rate limit on ${what}; retrying in ${retryAfter} s (attempt ${retryCount + 2})`);

@@ -63,14 +63,23 @@ export function parseModel(text: string, file = 'model'): ModelDocument {
   const net = d.network;
   if (typeof net !== 'object' || net === null) return bad('network', 'an object');
   const enc = d.encoding;
-  if (typeof enc !== 'object' || enc === null || !Array.isArray(enc.features)) return bad('encoding.features', 'a list');
-  if (inputsOf(enc.features) !== net.inputs) bad('encoding.features', `to encode to ${net.inputs} inputs (network.inputs)`);
-  if (!Array.isArray(net.hiddenWeights) || net.hiddenWeights.length !== net.width) bad('network.hiddenWeights', `${net.width} rows`);
-  if (net.hiddenWeights.some((r) => !Array.isArray(r) || r.length !== net.inputs)) bad('network.hiddenWeights', `rows of ${net.inputs} numbers`);
-  if (!Array.isArray(net.hiddenBias) || net.hiddenBias.length !== net.width) bad('network.hiddenBias', `${net.width} numbers`);
-  if (!Array.isArray(net.outputWeights) || net.outputWeights.length !== net.outputs) bad('network.outputWeights', `${net.outputs} rows`);
-  if (net.outputWeights.some((r) => !Array.isArray(r) || r.length !== net.width)) bad('network.outputWeights', `rows of ${net.width} numbers`);
-  if (!Array.isArray(net.outputBias) || net.outputBias.length !== net.outputs) bad('network.outputBias', `${net.outputs} numbers`);
-  if (d.task === 'classification' && !Array.isArray(enc.target?.classes)) bad('encoding.target.classes', 'a list of class labels');
+  if (typeof enc !== 'object' || enc === null || !Array.isArray(enc.features))
+    return bad('encoding.features', 'a list');
+  if (inputsOf(enc.features) !== net.inputs)
+    bad('encoding.features', `to encode to ${net.inputs} inputs (network.inputs)`);
+  if (!Array.isArray(net.hiddenWeights) || net.hiddenWeights.length !== net.width)
+    bad('network.hiddenWeights', `${net.width} rows`);
+  if (net.hiddenWeights.some((r) => !Array.isArray(r) || r.length !== net.inputs))
+    bad('network.hiddenWeights', `rows of ${net.inputs} numbers`);
+  if (!Array.isArray(net.hiddenBias) || net.hiddenBias.length !== net.width)
+    bad('network.hiddenBias', `${net.width} numbers`);
+  if (!Array.isArray(net.outputWeights) || net.outputWeights.length !== net.outputs)
+    bad('network.outputWeights', `${net.outputs} rows`);
+  if (net.outputWeights.some((r) => !Array.isArray(r) || r.length !== net.width))
+    bad('network.outputWeights', `rows of ${net.width} numbers`);
+  if (!Array.isArray(net.outputBias) || net.outputBias.length !== net.outputs)
+    bad('network.outputBias', `${net.outputs} numbers`);
+  if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
+    bad('encoding.target.classes', 'a list of class labels');
   return d as ModelDocument;
 }

@@ -5,9 +5,7 @@ import type { ModelDocument } from './document.js';
 
 export type Row = Record<string, string>;
 
-export type Prediction =
-  | { label: string; probabilities: Record<string, number> }
-  | { value: number };
+export type Prediction = { label: string; probabilities: Record<string, number> } | { value: number };
 
 /** (x − mean) / std, with a constant training column (std 0) only centred. */
 export function standardise(x: number, mean: number, std: number): number {

@@ -22,7 +22,14 @@ export interface Kernel {
      */
     primeOffset?: number,
   ): number;
-  forward(shape: Shape, params: Float64Array, x: Float64Array, rows: number, logits: Float64Array, hidden: Float64Array | null): void;
+  forward(
+    shape: Shape,
+    params: Float64Array,
+    x: Float64Array,
+    rows: number,
+    logits: Float64Array,
+    hidden: Float64Array | null,
+  ): void;
 }
 
 export function referenceKernel(): Kernel {

@@ -13,7 +13,14 @@ export interface Metrics {
   maxAbsError: number;
 }
 
-export function computeMetrics(head: number, K: number, logits: Float64Array, y: Float64Array, rows: number, targetStd: number): Metrics {
+export function computeMetrics(
+  head: number,
+  K: number,
+  logits: Float64Array,
+  y: Float64Array,
+  rows: number,
+  targetStd: number,
+): Metrics {
   let loss = 0;
   for (let p = 0; p < rows; p++) loss += rowLoss(head, K, logits, p * K, y[p]);
   loss /= rows;

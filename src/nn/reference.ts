@@ -79,7 +79,15 @@ function hiddenRow(
   else for (let j = 0; j < H; j++) h[j] = a[j] > 0 ? a[j] : 0;
 }
 
-function outputRow(H: number, K: number, params: Float64Array, w2: number, b2: number, h: Float64Array, z: Float64Array): void {
+function outputRow(
+  H: number,
+  K: number,
+  params: Float64Array,
+  w2: number,
+  b2: number,
+  h: Float64Array,
+  z: Float64Array,
+): void {
   for (let k = 0; k < K; k++) z[k] = params[b2 + k];
   for (let j = 0; j < H; j++) {
     const hj = h[j];
@@ -175,7 +183,14 @@ export function referenceLossAndGradient(
         grad[wo + k] += hj * dz[k];
         sum += params[wo + k] * dz[k];
       }
-      const fp = act === ACT_TANH ? 1 - hj * hj + primeOffset : act === ACT_LOGISTIC ? hj * (1 - hj) + primeOffset : a[j] > 0 ? 1 : 0;
+      const fp =
+        act === ACT_TANH
+          ? 1 - hj * hj + primeOffset
+          : act === ACT_LOGISTIC
+            ? hj * (1 - hj) + primeOffset
+            : a[j] > 0
+              ? 1
+              : 0;
       dh[qo + j] = sum * fp;
     }
     for (let j = 0; j < H; j++) grad[lay.b1 + j] += dh[qo + j];

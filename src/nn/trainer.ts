@@ -102,7 +102,13 @@ class NetworkTrainer implements Trainer {
       throw new RangeError(`target metric ${options.target.metric} does not fit a ${data.task} task`);
     }
     if (!(options.checkEvery >= 1)) throw new RangeError(`checkEvery must be >= 1, got ${options.checkEvery}`);
-    this.shape = { inputs: data.inputs, width, outputs: data.outputs, activation: options.activation, head: headFor(data) };
+    this.shape = {
+      inputs: data.inputs,
+      width,
+      outputs: data.outputs,
+      activation: options.activation,
+      head: headFor(data),
+    };
     this.head = headCode(this.shape.head);
     this.init = options.init ?? defaultInit(options.activation);
     this.params = initParams(this.shape, this.init, rng);
@@ -184,7 +190,14 @@ class NetworkTrainer implements Trainer {
   private trainMetrics(): Metrics {
     const { data, shape } = this;
     this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
-    return computeMetrics(this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, data.encoding.target.std);
+    return computeMetrics(
+      this.head,
+      shape.outputs,
+      this.logitsTrain,
+      data.yTrain,
+      data.trainRows,
+      data.encoding.target.std,
+    );
   }
 
   private validationMetrics(): Metrics | null {
@@ -207,7 +220,15 @@ class NetworkTrainer implements Trainer {
     const std = data.encoding.target.std;
     if (data.validationRows > 0) {
       this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsValidation, null);
-      return targetMetric(name, this.head, shape.outputs, this.logitsValidation, data.yValidation, data.validationRows, std);
+      return targetMetric(
+        name,
+        this.head,
+        shape.outputs,
+        this.logitsValidation,
+        data.yValidation,
+        data.validationRows,
+        std,
+      );
     }
     this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
     return targetMetric(name, this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, std);
@@ -221,7 +242,16 @@ class NetworkTrainer implements Trainer {
   fullBatchEpoch(): number {
     const { data } = this;
     const N = data.trainRows;
-    const loss = this.kernel.lossAndGradient(this.shape, this.params, data.xTrain, data.yTrain, 0, N, this.grad, this.primeOffset);
+    const loss = this.kernel.lossAndGradient(
+      this.shape,
+      this.params,
+      data.xTrain,
+      data.yTrain,
+      0,
+      N,
+      this.grad,
+      this.primeOffset,
+    );
     if (Number.isFinite(loss)) this.updater.step(this.params, this.grad, loss, N);
     return loss;
   }
@@ -253,7 +283,8 @@ class NetworkTrainer implements Trainer {
 
   removeNeuron(j: number): void {
     const old = this.shape;
-    if (!Number.isInteger(j) || j < 0 || j >= old.width) throw new RangeError(`no hidden neuron ${j} in a network of width ${old.width}`);
+    if (!Number.isInteger(j) || j < 0 || j >= old.width)
+      throw new RangeError(`no hidden neuron ${j} in a network of width ${old.width}`);
     const mean = this.hiddenMeans();
     const lay = layoutOf(old);
     const params = this.params.slice();
@@ -325,7 +356,13 @@ class NetworkTrainer implements Trainer {
   load(net: NetworkJson): void {
     const { shape, params } = fromJson(net);
     const s = this.shape;
-    if (shape.inputs !== s.inputs || shape.width !== s.width || shape.outputs !== s.outputs || shape.head !== s.head || shape.activation !== s.activation) {
+    if (
+      shape.inputs !== s.inputs ||
+      shape.width !== s.width ||
+      shape.outputs !== s.outputs ||
+      shape.head !== s.head ||
+      shape.activation !== s.activation
+    ) {
       throw new RangeError(
         `network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`,
       );
@@ -345,10 +382,17 @@ export function trainerFromNetwork(
   rng: Rng,
   extras: TrainerExtras = {},
 ): Trainer {
-  const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), {
-    ...(options.optimizerSettings ?? {}),
-    ...(extras.optimizerSettings ?? {}),
-  });
+  const trainer = new NetworkTrainer(
+    data,
+    net.width,
+    { ...options, activation: net.activation },
+    rng,
+    extras.kernel ?? defaultKernel(),
+    {
+      ...(options.optimizerSettings ?? {}),
+      ...(extras.optimizerSettings ?? {}),
+    },
+  );
   trainer.load(net);
   return trainer;
 }
@@ -359,7 +403,11 @@ export function createTrainer(
   options: TrainOptions,
   rng: Rng,
   extras: TrainerExtras = {},
-): Trainer & { readonly parameters: Float64Array; fullBatchEpoch(): number; metrics(): { train: Metrics; validation: Metrics } } {
+): Trainer & {
+  readonly parameters: Float64Array;
+  fullBatchEpoch(): number;
+  metrics(): { train: Metrics; validation: Metrics };
+} {
   return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), {
     ...(options.optimizerSettings ?? {}),
     ...(extras.optimizerSettings ?? {}),

@@ -38,7 +38,18 @@ interface KernelExports {
     work: number,
     off: number,
   ): number;
-  forward(act: number, d: number, h: number, k: number, params: number, x: number, rows: number, out: number, hidden: number, work: number): void;
+  forward(
+    act: number,
+    d: number,
+    h: number,
+    k: number,
+    params: number,
+    x: number,
+    rows: number,
+    out: number,
+    hidden: number,
+    work: number,
+  ): void;
   heapBase(): number;
 }
 
@@ -189,7 +200,16 @@ export function wasmKernel(): Kernel {
   let hiddenView = mem.subarray(0, 0);
   return {
     name: 'wasm-simd-f64',
-    lossAndGradient(shape: Shape, params: Float64Array, x: Float64Array, y: Float64Array, start: number, end: number, grad: Float64Array, primeOffset = 0): number {
+    lossAndGradient(
+      shape: Shape,
+      params: Float64Array,
+      x: Float64Array,
+      y: Float64Array,
+      start: number,
+      end: number,
+      grad: Float64Array,
+      primeOffset = 0,
+    ): number {
       const P = params.length;
       if (gVersion !== rt.version || shape !== gShape || x !== gX || y !== gY) {
         [xp, yp] = rt.resident(x, y);
@@ -208,12 +228,33 @@ export function wasmKernel(): Kernel {
       const po = pp / 8;
       if (P <= 64) for (let q = 0; q < P; q++) mem[po + q] = params[q];
       else mem.set(params, po);
-      const loss = ex.lossGrad(act, head, shape.inputs, shape.width, shape.outputs, pp, xp, yp, start, end, gp, wp, primeOffset);
+      const loss = ex.lossGrad(
+        act,
+        head,
+        shape.inputs,
+        shape.width,
+        shape.outputs,
+        pp,
+        xp,
+        yp,
+        start,
+        end,
+        gp,
+        wp,
+        primeOffset,
+      );
       if (P <= 64) for (let q = 0; q < P; q++) grad[q] = gradView[q];
       else grad.set(gradView);
       return loss;
     },
-    forward(shape: Shape, params: Float64Array, x: Float64Array, rows: number, logits: Float64Array, hidden: Float64Array | null): void {
+    forward(
+      shape: Shape,
+      params: Float64Array,
+      x: Float64Array,
+      rows: number,
+      logits: Float64Array,
+      hidden: Float64Array | null,
+    ): void {
       const P = params.length;
       const D = shape.inputs;
       const H = shape.width;

@@ -58,7 +58,8 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
     const body = [head, details(view, report, level, charts.chartWidths), foot].filter((s) => s !== '').join('\n\n');
     if (body.length + 1 <= limit) return `${body}\n`;
   }
-  const note = '_The details were left out to keep this comment within GitHub\'s size limit; the JSON report has them all._';
+  const note =
+    "_The details were left out to keep this comment within GitHub's size limit; the JSON report has them all._";
   return `${[head, note, foot].join('\n\n')}\n`;
 }
 
@@ -78,7 +79,8 @@ function summaryTable(view: ReportView, report: Report): string {
   const metricName = md(view.metricName);
   const dash = '—';
   const cWidth = currentWidthCell(view, report, dash, (w) => `**${w}**`);
-  const rowsDelta = b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${formatDelta(c.rows - b.rows)})` : '';
+  const rowsDelta =
+    b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${formatDelta(c.rows - b.rows)})` : '';
   const rows = [
     '| | Baseline | This change |',
     '|:--|--:|--:|',
@@ -181,7 +183,8 @@ function driftChart(view: ReportView, budget: number | null): string {
 function details(view: ReportView, report: Report, limits: DetailLimits, chartWidths: Set<number>): string {
   const blocks: string[] = [];
   if (view.rows.length > 0) blocks.push(collapsible('Per-width results', widthTable(view, limits, chartWidths)));
-  if (view.history.length > 0) blocks.push(collapsible(`Baseline history (${view.history.length})`, historyTable(view.history, limits)));
+  if (view.history.length > 0)
+    blocks.push(collapsible(`Baseline history (${view.history.length})`, historyTable(view.history, limits)));
   const pruning = report.search?.pruning ?? [];
   if (pruning.length > 0) blocks.push(collapsible(`Pruning steps (${pruning.length})`, pruneTable(pruning, limits)));
   if (report.changes) blocks.push(collapsible('What changed in the data', changesList(report.changes, limits)));
@@ -207,11 +210,13 @@ function widthTable(view: ReportView, limits: DetailLimits, chartWidths: Set<num
       c ? successRate(c.reached, c.restarts) : '—',
       c ? `${c.wilson[0].toFixed(2)}–${c.wilson[1].toFixed(2)}` : '—',
     ];
-    if (hasBaseline) cells.push(num(r.baseline?.best), r.baseline ? successRate(r.baseline.reached, r.baseline.restarts) : '—');
+    if (hasBaseline)
+      cells.push(num(r.baseline?.best), r.baseline ? successRate(r.baseline.reached, r.baseline.restarts) : '—');
     else cells.push(c ? formatCount(c.medianEpochs) : '—');
     return `| ${cells.join(' | ')} |`;
   });
-  const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
+  const omitted =
+    keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
   return `${header}\n${lines.join('\n')}${omitted}\n\nReached: restarts that reached the target out of restarts run. Wilson 95%: interval for the success rate.`;
 }
 
@@ -239,7 +244,8 @@ function pruneTable(steps: PruneStep[], limits: DetailLimits): string {
     (s) =>
       `| ${s.restart} | ${s.width} | ${s.neuron} | ${num(s.metricBefore)} | ${num(s.metricAfter)} | ${s.kept ? 'removed' : 'kept (needed)'} |`,
   );
-  const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
+  const omitted =
+    steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
   return `| Restart | Width before | Neuron | Metric before | Metric after | Outcome |\n|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}`;
 }
 
@@ -247,13 +253,15 @@ function changesList(changes: DataChanges, limits: DetailLimits): string {
   const items: string[] = [];
   if (changes.file) items.push(`Data file: ${md(changes.file.before)} → ${md(changes.file.after)}.`);
   const r = changes.rows;
-  if (!changes.changed) items.push('The data are the same as the baseline\'s (same fingerprint).');
+  if (!changes.changed) items.push("The data are the same as the baseline's (same fingerprint).");
   else items.push(`Rows: ${formatCount(r.before)} → ${formatCount(r.after)} (${formatDelta(r.after - r.before)}).`);
   for (const label of changes.classesAppeared) items.push(`New class ${md(label)}.`);
   for (const label of changes.classesVanished) items.push(`Class ${md(label)} no longer appears.`);
   for (const c of changes.classes ?? []) {
     if (c.before !== c.after) {
-      items.push(`Class ${md(c.label)}: ${formatCount(c.before)} → ${formatCount(c.after)} rows (${formatDelta(c.after - c.before)}).`);
+      items.push(
+        `Class ${md(c.label)}: ${formatCount(c.before)} → ${formatCount(c.after)} rows (${formatDelta(c.after - c.before)}).`,
+      );
     }
   }
   for (const name of changes.columnsAdded) items.push(`Column added: ${md(name)}.`);
@@ -265,19 +273,23 @@ function changesList(changes: DataChanges, limits: DetailLimits): string {
       parts.push(`mean ${num(f.meanBefore)} → ${num(f.meanAfter)}${by}`);
     }
     if (f.rangeWidened) {
-      parts.push(`range ${num(f.rangeBefore[0])} to ${num(f.rangeBefore[1])} widened to ${num(f.rangeAfter[0])} to ${num(f.rangeAfter[1])}`);
+      parts.push(
+        `range ${num(f.rangeBefore[0])} to ${num(f.rangeBefore[1])} widened to ${num(f.rangeAfter[0])} to ${num(f.rangeAfter[1])}`,
+      );
     }
     items.push(`Feature ${md(f.name)}: ${parts.join('; ')}.`);
   }
   for (const c of changes.categories) {
     if (c.appeared.length > 0) items.push(`Feature ${md(c.feature)}: new categories ${c.appeared.map(md).join(', ')}.`);
-    if (c.vanished.length > 0) items.push(`Feature ${md(c.feature)}: categories gone ${c.vanished.map(md).join(', ')}.`);
+    if (c.vanished.length > 0)
+      items.push(`Feature ${md(c.feature)}: categories gone ${c.vanished.map(md).join(', ')}.`);
   }
   if (changes.changed && items.length === (changes.file ? 2 : 1)) {
     items.push('No class, column or feature moved beyond the thresholds.');
   }
   const shown = items.slice(0, limits.changeItems);
-  const omitted = items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
+  const omitted =
+    items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
   return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation or its range widened.`;
 }
 
@@ -319,4 +331,3 @@ function num(v: number | null | undefined): string {
 function capital(s: string): string {
   return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
 }
-

@@ -22,16 +22,26 @@ export function renderText(report: Report): string {
   const c = view.current;
   const dash = '-';
   const cWidth = currentWidthCell(view, report, dash);
-  const rowsDelta = b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${formatDelta(c.rows - b.rows)})` : '';
+  const rowsDelta =
+    b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${formatDelta(c.rows - b.rows)})` : '';
   const table: [string, string, string][] = [
     ['', 'baseline', 'this change'],
     ['smallest adequate width', b?.width == null ? dash : String(b.width), cWidth],
     [`${view.metricName} at that width`, fmt(b?.metric), fmt(c.metric)],
     ['restarts reaching target there', rate(b?.reached, b?.restarts), rate(c.reached, c.restarts)],
-    ['data rows', b?.rows == null ? dash : formatCount(b.rows), c.rows === null ? dash : `${formatCount(c.rows)}${rowsDelta}`],
-    ['search time', formatSeconds(b?.searchSeconds).replace('—', dash), formatSeconds(c.searchSeconds).replace('—', dash)],
+    [
+      'data rows',
+      b?.rows == null ? dash : formatCount(b.rows),
+      c.rows === null ? dash : `${formatCount(c.rows)}${rowsDelta}`,
+    ],
+    [
+      'search time',
+      formatSeconds(b?.searchSeconds).replace('—', dash),
+      formatSeconds(c.searchSeconds).replace('—', dash),
+    ],
   ];
-  for (const [name, before, after] of table) out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
+  for (const [name, before, after] of table)
+    out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
   out.push('');
   const terms = [`target: ${targetPhrase(view.metricName, view.threshold)}`];
   if (report.gate) {
@@ -44,7 +54,9 @@ export function renderText(report: Report): string {
   if (view.rows.length > 0) {
     out.push('');
     out.push(`${view.metricName} by width (best over restarts; reached/run)`);
-    const head = b ? ['width', 'this change', 'reached', 'baseline', 'reached'] : ['width', 'best', 'reached', 'wilson 95%'];
+    const head = b
+      ? ['width', 'this change', 'reached', 'baseline', 'reached']
+      : ['width', 'best', 'reached', 'wilson 95%'];
     out.push(head.map((h, i) => (i === 0 ? h.padStart(7) : h.padStart(14))).join(''));
     for (const r of view.rows) {
       const cells = [
@@ -56,7 +68,7 @@ export function renderText(report: Report): string {
       else cells.push(r.current ? `${r.current.wilson[0].toFixed(2)}-${r.current.wilson[1].toFixed(2)}` : dash);
       out.push(cells.map((x, i) => (i === 0 ? x : x.padStart(14))).join(''));
     }
-    out.push('  (> marks this change\'s width; the threshold is ' + formatMetric(view.threshold) + ')');
+    out.push("  (> marks this change's width; the threshold is " + formatMetric(view.threshold) + ')');
   }
 
   if (view.history.length > 0) {
@@ -71,7 +83,9 @@ export function renderText(report: Report): string {
   if (pruning.length > 0) {
     const removed = pruning.filter((s) => s.kept).length;
     out.push('');
-    out.push(`pruning: ${pruning.length} step${pruning.length === 1 ? '' : 's'}, ${removed} neuron${removed === 1 ? '' : 's'} removed`);
+    out.push(
+      `pruning: ${pruning.length} step${pruning.length === 1 ? '' : 's'}, ${removed} neuron${removed === 1 ? '' : 's'} removed`,
+    );
   }
 
   if (report.changes) {
@@ -81,9 +95,16 @@ export function renderText(report: Report): string {
   }
 
   out.push('');
-  out.push(...wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
+  out.push(
+    ...wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''),
+  );
   if (overDeviceBudget(report)) {
-    out.push(...wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
+    out.push(
+      ...wrap(
+        'A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.',
+        '',
+      ),
+    );
   }
   out.push(...wrap('A passing gate is not a safety sign-off for a device.', ''));
   return `${out.join('\n')}\n`;
@@ -93,23 +114,37 @@ function changeLines(ch: DataChanges): string[] {
   const lines: string[] = [];
   if (ch.file) lines.push(`data file ${plain(ch.file.before)} -> ${plain(ch.file.after)}`);
   if (!ch.changed) lines.push('same data as the baseline (same fingerprint)');
-  else lines.push(`rows ${formatCount(ch.rows.before)} -> ${formatCount(ch.rows.after)} (${ascii(formatDelta(ch.rows.after - ch.rows.before))})`);
+  else
+    lines.push(
+      `rows ${formatCount(ch.rows.before)} -> ${formatCount(ch.rows.after)} (${ascii(formatDelta(ch.rows.after - ch.rows.before))})`,
+    );
   for (const l of ch.classesAppeared) lines.push(`new class ${plain(l)}`);
   for (const l of ch.classesVanished) lines.push(`class ${plain(l)} no longer appears`);
   for (const c of ch.classes ?? []) {
-    if (c.before !== c.after) lines.push(`class ${plain(c.label)}: ${formatCount(c.before)} -> ${formatCount(c.after)} rows (${ascii(formatDelta(c.after - c.before))})`);
+    if (c.before !== c.after)
+      lines.push(
+        `class ${plain(c.label)}: ${formatCount(c.before)} -> ${formatCount(c.after)} rows (${ascii(formatDelta(c.after - c.before))})`,
+      );
   }
   for (const n of ch.columnsAdded) lines.push(`column added: ${plain(n)}`);
   for (const n of ch.columnsRemoved) lines.push(`column removed: ${plain(n)}`);
   for (const f of ch.features) {
     const parts: string[] = [];
-    if (f.meanMoved) parts.push(`mean ${fmt(f.meanBefore)} -> ${fmt(f.meanAfter)}${f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} std)`}`);
-    if (f.rangeWidened) parts.push(`range ${fmt(f.rangeBefore[0])}..${fmt(f.rangeBefore[1])} -> ${fmt(f.rangeAfter[0])}..${fmt(f.rangeAfter[1])}`);
+    if (f.meanMoved)
+      parts.push(
+        `mean ${fmt(f.meanBefore)} -> ${fmt(f.meanAfter)}${f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} std)`}`,
+      );
+    if (f.rangeWidened)
+      parts.push(
+        `range ${fmt(f.rangeBefore[0])}..${fmt(f.rangeBefore[1])} -> ${fmt(f.rangeAfter[0])}..${fmt(f.rangeAfter[1])}`,
+      );
     lines.push(`feature ${plain(f.name)}: ${parts.join('; ')}`);
   }
   for (const c of ch.categories) {
-    if (c.appeared.length > 0) lines.push(`feature ${plain(c.feature)}: new categories ${c.appeared.map(plain).join(', ')}`);
-    if (c.vanished.length > 0) lines.push(`feature ${plain(c.feature)}: categories gone ${c.vanished.map(plain).join(', ')}`);
+    if (c.appeared.length > 0)
+      lines.push(`feature ${plain(c.feature)}: new categories ${c.appeared.map(plain).join(', ')}`);
+    if (c.vanished.length > 0)
+      lines.push(`feature ${plain(c.feature)}: categories gone ${c.vanished.map(plain).join(', ')}`);
   }
   return lines;
 }

@@ -91,7 +91,12 @@ export function viewOf(report: Report): ReportView {
 
 /** The width found exceeds gate.max-width. */
 /** This change's width for the summary table: the width and what pruning did, or why there is none. */
-export function currentWidthCell(view: ReportView, report: Report, dash: string, strong: (s: string) => string = (s) => s): string {
+export function currentWidthCell(
+  view: ReportView,
+  report: Report,
+  dash: string,
+  strong: (s: string) => string = (s) => s,
+): string {
   const c = view.current;
   if (c.width === null) {
     if (report.search?.outcome === 'inconclusive') return 'not settled';

@@ -99,9 +99,23 @@ export function restartAtWidth(plan: GrowthPlan, result: TaskResult, width: numb
   const seg = result.segments.find((s) => s.width === width);
   if (seg !== undefined) {
     const diverged = seg.stop === 'diverged';
-    return { restart, reached: false, metric: seg.metric, epochs: seg.epochs, stop: seg.stop, reason: diverged ? result.reason : null };
+    return {
+      restart,
+      reached: false,
+      metric: seg.metric,
+      epochs: seg.epochs,
+      stop: seg.stop,
+      reason: diverged ? result.reason : null,
+    };
   }
-  return { restart, reached: false, metric: Number.NaN, epochs: result.epochs, stop: 'diverged', reason: result.reason };
+  return {
+    restart,
+    reached: false,
+    metric: Number.NaN,
+    epochs: result.epochs,
+    stop: 'diverged',
+    reason: result.reason,
+  };
 }
 
 export type GrowthDecision =

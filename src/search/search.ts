@@ -145,7 +145,10 @@ export async function runSearch(
       const key = taskKey(done);
       inflight.delete(key);
       results.set(key, done);
-      if (Number.isFinite(done.metric) && (bestSoFar === null || (up ? done.metric > bestSoFar : done.metric < bestSoFar))) {
+      if (
+        Number.isFinite(done.metric) &&
+        (bestSoFar === null || (up ? done.metric > bestSoFar : done.metric < bestSoFar))
+      ) {
         bestSoFar = done.metric;
       }
       progress({ phase: 'growth', width: done.finalWidth, restart: done.restart, epoch: done.epochs, best: bestSoFar });
@@ -166,7 +169,12 @@ export async function runSearch(
         note = stoppedNote(plan, why, decision.deciding, decision.trainings);
       } else if (decision.capHit !== null) {
         outcome = 'inconclusive';
-        note = stoppedNote(plan, `The cap of ${search.maxTrainings} trainings was reached`, decision.capHit.width, decision.trainings);
+        note = stoppedNote(
+          plan,
+          `The cap of ${search.maxTrainings} trainings was reached`,
+          decision.capHit.width,
+          decision.trainings,
+        );
       } else {
         note = notFoundNote(plan, target, decision.widths);
       }
@@ -186,7 +194,9 @@ export async function runSearch(
 
     // Prune phase: shrink every network that reached the target at the adequate width.
     const grownWidth = decision.adequateWidth;
-    const reachedTasks = decision.reachedAtAdequate.map((r) => results.get(taskKey(taskFor(plan, grownWidth, r.restart)))!);
+    const reachedTasks = decision.reachedAtAdequate.map((r) =>
+      results.get(taskKey(taskFor(plan, grownWidth, r.restart)))!,
+    );
     let pruned: PruneResult[];
     if (search.prune) {
       pruned = await Promise.all(
@@ -213,7 +223,13 @@ export async function runSearch(
       width: win.width,
       grownWidth,
       metric: win.metric,
-      witness: { restart: win.restart, seed: search.seed, grownWidth: win.grownWidth, network: win.network, metric: win.metric },
+      witness: {
+        restart: win.restart,
+        seed: search.seed,
+        grownWidth: win.grownWidth,
+        network: win.network,
+        metric: win.metric,
+      },
       widths: decision.widths,
       pruning: pruned.flatMap((r) => r.steps),
       trainings: decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0),

@@ -6,7 +6,7 @@
 import type { TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
 import { createTrainer, meetsTarget, rngFor, trainerFromNetwork } from '../nn/index.js';
-import type { NetworkJson, Rng, Trainer, TrainOptions, TrainRecord } from '../nn/index.js';
+import type { NetworkJson, Trainer, TrainOptions, TrainRecord } from '../nn/index.js';
 import type { GrowthPlan, Segment, TaskResult } from './growth.js';
 import type { PruneStep, TrainingTask } from './types.js';
 
@@ -98,7 +98,12 @@ export function growTrainer(
  * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
  * null only when `cancelled` said so (the answer was no longer needed).
  */
-export function runTask(data: EncodedDataset, ctx: SearchContext, task: TrainingTask, cancelled: () => boolean = never): TaskResult | null {
+export function runTask(
+  data: EncodedDataset,
+  ctx: SearchContext,
+  task: TrainingTask,
+  cancelled: () => boolean = never,
+): TaskResult | null {
   return growTrainer(data, ctx, task, cancelled)?.result ?? null;
 }
 

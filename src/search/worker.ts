@@ -32,7 +32,9 @@ export function runSearchWorker(): void {
       if (data === null || ctx === null) throw new Error('search worker got a task before its data');
       const id = msg.id;
       const result =
-        msg.type === 'train' ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id) : runPruneJob(data, ctx, msg.job);
+        msg.type === 'train'
+          ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id)
+          : runPruneJob(data, ctx, msg.job);
       reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
     } catch (e) {
       reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };

@@ -208,7 +208,10 @@ describe('config mistakes through the built command line', () => {
   test.each(cases)('$name', async (c) => {
     const files: Record<string, string> = { 'readings.csv': CSV };
     if (c.config !== null) files['neuron-budget.yml'] = c.config;
-    const run = await runCli(c.args ?? ['check', '--report', 'out.json'], { files, ...(c.setup ? { setup: c.setup } : {}) });
+    const run = await runCli(c.args ?? ['check', '--report', 'out.json'], {
+      files,
+      ...(c.setup ? { setup: c.setup } : {}),
+    });
     expectOneUserError(run, c.at, c.says);
     expect(run.created, 'nothing may be written').toEqual([]);
   });

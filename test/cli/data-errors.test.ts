@@ -10,7 +10,8 @@ afterAll(removeCliTempDirs);
 const CONFIG = ['data:', '  path: readings.csv', '  target: condition', 'target:', '  threshold: 0.9', ''].join('\n');
 
 /** Adds lines under `data:` (after `target:`), keeping line 2 = path and line 3 = target. */
-const withData = (...lines: string[]): string => CONFIG.replace('  target: condition\n', `  target: condition\n${lines.join('\n')}\n`);
+const withData = (...lines: string[]): string =>
+  CONFIG.replace('  target: condition\n', `  target: condition\n${lines.join('\n')}\n`);
 
 const REGRESSION = (...lines: string[]): string =>
   withData('  task: regression', ...lines).replace('  threshold: 0.9', '  metric: rmse\n  threshold: 0.5');
@@ -173,7 +174,12 @@ const cases: Case[] = [
   },
   {
     name: 'bytes that are not UTF-8',
-    csv: Buffer.concat([Buffer.from(table().slice(0, -1)), Buffer.from('\n9,P-'), Buffer.from([0xc3, 0x28]), Buffer.from(',1,3,normal\n')]),
+    csv: Buffer.concat([
+      Buffer.from(table().slice(0, -1)),
+      Buffer.from('\n9,P-'),
+      Buffer.from([0xc3, 0x28]),
+      Buffer.from(',1,3,normal\n'),
+    ]),
     at: 'readings.csv:10:2:',
     says: ['column 2 "pump_model"', '0x28', 'not valid UTF-8'],
   },
@@ -225,7 +231,11 @@ const cases: Case[] = [
   },
   {
     name: 'line numbers count quoted line breaks',
-    csv: table(['1,"P-100\r\nrev B",1.0,3.0,normal', ...ROWS.slice(1, 4), '', '5,P-100,1.1,oops,normal', ...ROWS.slice(5)], HEADER, '\r\n'),
+    csv: table(
+      ['1,"P-100\r\nrev B",1.0,3.0,normal', ...ROWS.slice(1, 4), '', '5,P-100,1.1,oops,normal', ...ROWS.slice(5)],
+      HEADER,
+      '\r\n',
+    ),
     at: 'readings.csv:8:4:',
     says: ['column 4 "kurtosis"', 'found "oops"'],
   },
@@ -245,7 +255,9 @@ describe('data mistakes through the built command line', () => {
   });
 
   test('the unbroken table passes the data stage and writes the report (the cases above can fail)', async () => {
-    const run = await runCli(['check', '--report', 'out.json'], { files: { 'neuron-budget.yml': CONFIG, 'readings.csv': table() } });
+    const run = await runCli(['check', '--report', 'out.json'], {
+      files: { 'neuron-budget.yml': CONFIG, 'readings.csv': table() },
+    });
     expect(run.stderr).not.toContain('error:');
     expect(run.created).toContain('out.json');
     const report = JSON.parse(run.read('out.json')) as { data: { rows: number } };

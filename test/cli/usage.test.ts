@@ -17,10 +17,14 @@ const CSV = [
   }),
   '',
 ].join('\n');
-const CONFIG = 'data:\n  path: readings.csv\n  target: condition\n  ignore: [reading_id]\n  validation: 0.2\ntarget:\n  threshold: 0.9\n';
+const CONFIG =
+  'data:\n  path: readings.csv\n  target: condition\n  ignore: [reading_id]\n  validation: 0.2\ntarget:\n  threshold: 0.9\n';
 const FILES = { 'neuron-budget.yml': CONFIG, 'readings.csv': CSV };
 
-function expectUsageError(run: { code: number; stdout: string; stderr: string; created: string[] }, ...fragments: string[]): void {
+function expectUsageError(
+  run: { code: number; stdout: string; stderr: string; created: string[] },
+  ...fragments: string[]
+): void {
   expect(run.code, run.stderr).toBe(2);
   expect(run.stdout).toBe('');
   expect(hasStackTrace(run.stderr)).toBe(false);
@@ -57,7 +61,8 @@ describe('help and version', () => {
   test('check --help lists every option of check', async () => {
     const run = await runCli(['check', '--help']);
     expect(run.code).toBe(0);
-    for (const flag of ['--config', '--report', '--model', '--baseline', '--workers']) expect(run.stdout).toContain(flag);
+    for (const flag of ['--config', '--report', '--model', '--baseline', '--workers'])
+      expect(run.stdout).toContain(flag);
   });
 
   test('baseline --help lists only the options of baseline', async () => {
@@ -73,27 +78,53 @@ describe('usage mistakes exit with code 2 and one line', () => {
   test('unknown command suggests the nearest', async () =>
     expectUsageError(await runCli(['chek'], { files: FILES }), '"chek"', 'did you mean "check"'));
   test('unknown option suggests the nearest', async () =>
-    expectUsageError(await runCli(['check', '--confg', 'x.yml'], { files: FILES }), '--confg', 'did you mean "--config"'));
+    expectUsageError(
+      await runCli(['check', '--confg', 'x.yml'], { files: FILES }),
+      '--confg',
+      'did you mean "--config"',
+    ));
   test('an option of the other command', async () =>
     expectUsageError(await runCli(['baseline', '--report', 'r.json'], { files: FILES }), 'baseline has no --report'));
   test('option without its value', async () =>
     expectUsageError(await runCli(['check', '--report'], { files: FILES }), '--report needs a value'));
   test('option followed by another option instead of a value', async () =>
-    expectUsageError(await runCli(['check', '--config', '--report', 'r.json'], { files: FILES }), '--config needs a value'));
+    expectUsageError(
+      await runCli(['check', '--config', '--report', 'r.json'], { files: FILES }),
+      '--config needs a value',
+    ));
   test('empty value with =', async () =>
     expectUsageError(await runCli(['check', '--report='], { files: FILES }), '--report needs a value'));
   test('option given twice', async () =>
-    expectUsageError(await runCli(['check', '--report', 'a.json', '--report=b.json'], { files: FILES }), 'given twice'));
+    expectUsageError(
+      await runCli(['check', '--report', 'a.json', '--report=b.json'], { files: FILES }),
+      'given twice',
+    ));
   test.each(['0', '257', 'four', '2.5', '-1', '1e2'])('--workers %s is refused', async (n) =>
-    expectUsageError(await runCli(['check', `--workers=${n}`], { files: FILES }), '--workers', 'from 1 to 256', `"${n}"`));
+    expectUsageError(
+      await runCli(['check', `--workers=${n}`], { files: FILES }),
+      '--workers',
+      'from 1 to 256',
+      `"${n}"`,
+    ),
+  );
   test('stray positional argument', async () =>
     expectUsageError(await runCli(['check', 'neuron-budget.yml'], { files: FILES }), 'unexpected argument'));
   test('report below a file instead of a folder', async () =>
-    expectUsageError(await runCli(['check', '--report', 'readings.csv/out.json'], { files: FILES }), 'is not a folder'));
+    expectUsageError(
+      await runCli(['check', '--report', 'readings.csv/out.json'], { files: FILES }),
+      'is not a folder',
+    ));
   test('report path that is a folder', async () =>
-    expectUsageError(await runCli(['check', '--report', 'out'], { files: { ...FILES, 'out/.keep': '' } }), 'is a folder'));
+    expectUsageError(
+      await runCli(['check', '--report', 'out'], { files: { ...FILES, 'out/.keep': '' } }),
+      'is a folder',
+    ));
   test('report into a folder that does not exist', async () =>
-    expectUsageError(await runCli(['check', '--report', 'missing/out.json'], { files: FILES }), 'missing', 'does not exist'));
+    expectUsageError(
+      await runCli(['check', '--report', 'missing/out.json'], { files: FILES }),
+      'missing',
+      'does not exist',
+    ));
 });
 
 describe('check on a small table', () => {
@@ -107,7 +138,15 @@ describe('check on a small table', () => {
     const report = JSON.parse(run.read('out/report.json')) as {
       schema: string;
       verdict: unknown;
-      data: { rows: number; trainRows: number; validationRows: number; inputs: number; task: string; fingerprint: string; classes: { label: string; count: number }[] };
+      data: {
+        rows: number;
+        trainRows: number;
+        validationRows: number;
+        inputs: number;
+        task: string;
+        fingerprint: string;
+        classes: { label: string; count: number }[];
+      };
       timing: Record<string, number>;
     };
     expect(report.schema).toBe('neuron-budget/report@1');
@@ -126,7 +165,12 @@ describe('check on a small table', () => {
       { label: 'normal', count: 10 },
     ]);
     expect(report.data.fingerprint).toMatch(/^[0-9a-f]{64}$/);
-    expect(Object.keys(report.timing).sort()).toEqual(['growthSeconds', 'loadSeconds', 'pruneSeconds', 'searchSeconds']);
+    expect(Object.keys(report.timing).sort()).toEqual([
+      'growthSeconds',
+      'loadSeconds',
+      'pruneSeconds',
+      'searchSeconds',
+    ]);
     for (const shown of ['30 used', '24 training / 6 validation', 'bearing_wear', report.data.fingerprint, 'NEW']) {
       expect(run.stderr).toContain(shown);
     }
@@ -143,14 +187,20 @@ describe('check on a small table', () => {
 
   test('--config in a subfolder: data.path resolves against the config file, the workspace is the current folder', async () => {
     const run = await runCli(['check', '--config', 'ci/gate.yml', '--report', 'r.json'], {
-      files: { 'ci/gate.yml': CONFIG.replace('path: readings.csv', 'path: ../data/readings.csv'), 'data/readings.csv': CSV },
+      files: {
+        'ci/gate.yml': CONFIG.replace('path: readings.csv', 'path: ../data/readings.csv'),
+        'data/readings.csv': CSV,
+      },
     });
     expect(run.code, run.stderr).toBe(0);
     expect(JSON.parse(run.read('r.json')).data.file).toBe('data/readings.csv');
   });
 
   test('default config is neuron-budget.yml in the current folder', async () => {
-    const run = await runCli(['check'], { files: { 'sub/neuron-budget.yml': CONFIG, 'sub/readings.csv': CSV }, cwd: 'sub' });
+    const run = await runCli(['check'], {
+      files: { 'sub/neuron-budget.yml': CONFIG, 'sub/readings.csv': CSV },
+      cwd: 'sub',
+    });
     expect(run.code, run.stderr).toBe(0);
     expect(run.stderr).toContain('30 used');
   });

@@ -46,17 +46,27 @@ function validatorAccepts(config: unknown): boolean {
 describe('the schema and the validator describe the same keys', () => {
   test('sections: the same names, and the same required ones', () => {
     expect(Object.keys(schema.properties!).sort()).toEqual(CONFIG_SPEC.map((s) => s.name).sort());
-    expect([...schema.required!].sort()).toEqual(CONFIG_SPEC.filter((s) => s.required).map((s) => s.name).sort());
+    expect([...schema.required!].sort()).toEqual(
+      CONFIG_SPEC.filter((s) => s.required)
+        .map((s) => s.name)
+        .sort(),
+    );
     expect(schema.additionalProperties).toBe(false);
   });
 
-  test.each(CONFIG_SPEC.map((s) => [s.name, s] as const))('section %s: every key in both, none extra', (_name, section) => {
-    const props = schema.properties![section.name];
-    expect(props.additionalProperties).toBe(false);
-    expect(Object.keys(props.properties!).sort()).toEqual(section.keys.map((k) => k.name).sort());
-    const required = section.keys.filter((k) => k.default === REQUIRED).map((k) => k.name).sort();
-    expect([...(props.required ?? [])].sort()).toEqual(required);
-  });
+  test.each(CONFIG_SPEC.map((s) => [s.name, s] as const))(
+    'section %s: every key in both, none extra',
+    (_name, section) => {
+      const props = schema.properties![section.name];
+      expect(props.additionalProperties).toBe(false);
+      expect(Object.keys(props.properties!).sort()).toEqual(section.keys.map((k) => k.name).sort());
+      const required = section.keys
+        .filter((k) => k.default === REQUIRED)
+        .map((k) => k.name)
+        .sort();
+      expect([...(props.required ?? [])].sort()).toEqual(required);
+    },
+  );
 
   const allKeys = CONFIG_SPEC.flatMap((s) => s.keys.map((k) => [`${s.name}.${k.name}`, s.name, k] as const));
   test.each(allKeys)('%s: same default, a description, same enum and range', (_full, sectionName, key) => {
@@ -84,7 +94,13 @@ function probes(key: KeySpec): unknown[] {
     case 'integer':
       return [...common, r.min, r.max, r.min - 1, r.max + 1, r.min + 0.5];
     case 'number':
-      return [...common, r.min, r.min + 0.001, r.min - 0.001, ...(r.max === Number.MAX_VALUE ? [1e9] : [r.max, r.max - 0.001, r.max + 0.001])];
+      return [
+        ...common,
+        r.min,
+        r.min + 0.001,
+        r.min - 0.001,
+        ...(r.max === Number.MAX_VALUE ? [1e9] : [r.max, r.max - 0.001, r.max + 0.001]),
+      ];
     case 'enum':
       return [...common, ...r.values, `${r.values[0]}x`, 3];
     case 'boolean':
@@ -108,7 +124,14 @@ function base(): Record<string, Record<string, unknown>> {
   return {
     data: { path: 'readings.csv', target: 'condition' },
     target: { metric: 'rmse', threshold: 0.5 },
-    search: { 'min-width': 1, 'max-width': 1024, restarts: 1000, required: 1, 'max-epochs': 10_000_000, 'check-every': 1 },
+    search: {
+      'min-width': 1,
+      'max-width': 1024,
+      restarts: 1000,
+      required: 1,
+      'max-epochs': 10_000_000,
+      'check-every': 1,
+    },
     gate: {},
   };
 }
@@ -128,7 +151,9 @@ describe('ajv and the validator agree on boundary values of every key', () => {
       }
       const bySchema = validateWithSchema(config);
       const byValidator = validatorAccepts(config);
-      expect(byValidator, `${sectionName}.${key.name} = ${JSON.stringify(value)}: schema says ${bySchema}`).toBe(bySchema);
+      expect(byValidator, `${sectionName}.${key.name} = ${JSON.stringify(value)}: schema says ${bySchema}`).toBe(
+        bySchema,
+      );
       tried++;
     }
     expect(tried).toBeGreaterThan(4);
@@ -136,13 +161,26 @@ describe('ajv and the validator agree on boundary values of every key', () => {
 
   test('rules between keys that the schema states: metric and task, accuracy threshold and tolerance', () => {
     const cases: [Record<string, Record<string, unknown>>, boolean][] = [
-      [{ data: { path: 'a.csv', target: 'c', task: 'classification' }, target: { metric: 'rmse', threshold: 0.5 } }, false],
-      [{ data: { path: 'a.csv', target: 'c', task: 'regression' }, target: { metric: 'accuracy', threshold: 0.5 } }, false],
+      [
+        { data: { path: 'a.csv', target: 'c', task: 'classification' }, target: { metric: 'rmse', threshold: 0.5 } },
+        false,
+      ],
+      [
+        { data: { path: 'a.csv', target: 'c', task: 'regression' }, target: { metric: 'accuracy', threshold: 0.5 } },
+        false,
+      ],
       [{ data: { path: 'a.csv', target: 'c', task: 'regression' }, target: { threshold: 5 } }, true],
       [{ data: { path: 'a.csv', target: 'c' }, target: { threshold: 5 } }, false],
       [{ data: { path: 'a.csv', target: 'c' }, target: { metric: 'mae', threshold: 5 } }, true],
       [{ data: { path: 'a.csv', target: 'c' }, target: { threshold: 0.9 }, gate: { 'metric-tolerance': 1 } }, false],
-      [{ data: { path: 'a.csv', target: 'c' }, target: { metric: 'mae', threshold: 0.9 }, gate: { 'metric-tolerance': 1 } }, true],
+      [
+        {
+          data: { path: 'a.csv', target: 'c' },
+          target: { metric: 'mae', threshold: 0.9 },
+          gate: { 'metric-tolerance': 1 },
+        },
+        true,
+      ],
     ];
     for (const [config, valid] of cases) {
       expect(validateWithSchema(config), JSON.stringify(config)).toBe(valid);
@@ -169,7 +207,8 @@ describe('shipped configs', () => {
       config[section.name] = {};
       for (const key of section.keys) {
         const d = key.default;
-        config[section.name][key.name] = d === REQUIRED || d === DERIVED ? probes(key).find((v) => v !== null && typeof v === typeof '' ) : d;
+        config[section.name][key.name] =
+          d === REQUIRED || d === DERIVED ? probes(key).find((v) => v !== null && typeof v === typeof '') : d;
       }
     }
     config.data = { ...config.data, path: 'readings.csv', target: 'condition', features: ['rms_velocity'] };

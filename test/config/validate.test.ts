@@ -191,29 +191,128 @@ describe('each rule names the key, what was expected, what was found, and where'
     ['seed above 32 bits', `${MINIMAL}search:\n  seed: 4294967296\n`, 'search.seed', 'found 4294967296', '4294967296'],
     ['infinite number', `${MINIMAL}search:\n  time-budget: .inf\n`, 'search.time-budget', 'found Infinity', '.inf'],
     ['time budget 0', `${MINIMAL}search:\n  time-budget: 0\n`, 'search.time-budget', 'above 0', '0'],
-    ['validation negative', MINIMAL.replace('target: condition\n', 'target: condition\n  validation: -0.1\n'), 'data.validation', 'found -0.1', '-0.1'],
-    ['validation 1', MINIMAL.replace('target: condition\n', 'target: condition\n  validation: 1\n'), 'data.validation', 'below 1', '1'],
+    [
+      'validation negative',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  validation: -0.1\n'),
+      'data.validation',
+      'found -0.1',
+      '-0.1',
+    ],
+    [
+      'validation 1',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  validation: 1\n'),
+      'data.validation',
+      'below 1',
+      '1',
+    ],
     ['boolean as text', `${MINIMAL}search:\n  prune: "true"\n`, 'search.prune', 'true or false', '"true"'],
     ['enum typo', `${MINIMAL}search:\n  optimizer: irprop\n`, 'search.optimizer', 'did you mean "irprop+"', 'irprop'],
     ['enum of wrong type', `${MINIMAL}search:\n  growth: 3\n`, 'search.growth', 'one of fresh, in-place', '3'],
     ['threshold zero', MINIMAL.replace('threshold: 0.95', 'threshold: 0'), 'target.threshold', 'above 0', '0'],
     ['accuracy above 1', MINIMAL.replace('threshold: 0.95', 'threshold: 95'), 'target.threshold', 'at most 1', '95'],
-    ['metric for the other task', MINIMAL.replace('target: condition\n', 'target: condition\n  task: regression\n').replace('  threshold', '  metric: accuracy\n  threshold'), 'target.metric', 'rmse, mae or max-abs-error', 'accuracy'],
-    ['features not a list', MINIMAL.replace('target: condition\n', 'target: condition\n  features: rms\n'), 'data.features', 'a list of column names', 'rms'],
-    ['features empty', MINIMAL.replace('target: condition\n', 'target: condition\n  features: []\n'), 'data.features', 'empty list', '[]'],
-    ['feature twice', MINIMAL.replace('target: condition\n', 'target: condition\n  features: [a, b, a]\n'), 'data.features', 'listed twice', 'a]'],
-    ['numeric column name', MINIMAL.replace('target: condition\n', 'target: condition\n  ignore: [id, 7]\n'), 'data.ignore', 'in quotes', '7]'],
-    ['target ignored', MINIMAL.replace('target: condition\n', 'target: condition\n  ignore: [condition]\n'), 'data.ignore', 'target', '[condition]'],
-    ['feature also ignored', MINIMAL.replace('target: condition\n', 'target: condition\n  features: [a, b]\n  ignore: [b]\n'), 'data.ignore', '"b"', '[b]'],
+    [
+      'metric for the other task',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  task: regression\n').replace(
+        '  threshold',
+        '  metric: accuracy\n  threshold',
+      ),
+      'target.metric',
+      'rmse, mae or max-abs-error',
+      'accuracy',
+    ],
+    [
+      'features not a list',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  features: rms\n'),
+      'data.features',
+      'a list of column names',
+      'rms',
+    ],
+    [
+      'features empty',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  features: []\n'),
+      'data.features',
+      'empty list',
+      '[]',
+    ],
+    [
+      'feature twice',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  features: [a, b, a]\n'),
+      'data.features',
+      'listed twice',
+      'a]',
+    ],
+    [
+      'numeric column name',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  ignore: [id, 7]\n'),
+      'data.ignore',
+      'in quotes',
+      '7]',
+    ],
+    [
+      'target ignored',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  ignore: [condition]\n'),
+      'data.ignore',
+      'target',
+      '[condition]',
+    ],
+    [
+      'feature also ignored',
+      MINIMAL.replace('target: condition\n', 'target: condition\n  features: [a, b]\n  ignore: [b]\n'),
+      'data.ignore',
+      '"b"',
+      '[b]',
+    ],
     ['target as a number', MINIMAL.replace('target: condition', 'target: 12'), 'data.target', 'in quotes', '12'],
     ['empty path', MINIMAL.replace('path: readings.csv', 'path: ""'), 'data.path', 'found ""', '""'],
-    ['delimiter is a quote', MINIMAL.replace('target: condition\n', "target: condition\n  delimiter: '\"'\n"), 'data.delimiter', 'single character', `'"'`],
-    ['max-width below min-width', `${MINIMAL}search:\n  min-width: 4\n  max-width: 3\n`, 'search.max-width', 'at least search.min-width (4)', '3'],
-    ['min-width above default max-width', `${MINIMAL}search:\n  min-width: 20\n`, 'search.min-width', 'at most search.max-width (16, the default)', '20'],
-    ['required above restarts', `${MINIMAL}search:\n  restarts: 2\n  required: 3\n`, 'search.required', 'at most search.restarts (2)', '3'],
-    ['restarts below default required', `${MINIMAL}search:\n  restarts: 2\n`, 'search.restarts', 'at least search.required (3, the default)', '2'],
-    ['check-every above max-epochs', `${MINIMAL}search:\n  max-epochs: 5\n  check-every: 6\n`, 'search.check-every', 'at most search.max-epochs (5)', '6'],
-    ['device budget below min-width', `${MINIMAL}search:\n  min-width: 3\ngate:\n  max-width: 2\n`, 'gate.max-width', 'over the budget', '2'],
+    [
+      'delimiter is a quote',
+      MINIMAL.replace('target: condition\n', "target: condition\n  delimiter: '\"'\n"),
+      'data.delimiter',
+      'single character',
+      `'"'`,
+    ],
+    [
+      'max-width below min-width',
+      `${MINIMAL}search:\n  min-width: 4\n  max-width: 3\n`,
+      'search.max-width',
+      'at least search.min-width (4)',
+      '3',
+    ],
+    [
+      'min-width above default max-width',
+      `${MINIMAL}search:\n  min-width: 20\n`,
+      'search.min-width',
+      'at most search.max-width (16, the default)',
+      '20',
+    ],
+    [
+      'required above restarts',
+      `${MINIMAL}search:\n  restarts: 2\n  required: 3\n`,
+      'search.required',
+      'at most search.restarts (2)',
+      '3',
+    ],
+    [
+      'restarts below default required',
+      `${MINIMAL}search:\n  restarts: 2\n`,
+      'search.restarts',
+      'at least search.required (3, the default)',
+      '2',
+    ],
+    [
+      'check-every above max-epochs',
+      `${MINIMAL}search:\n  max-epochs: 5\n  check-every: 6\n`,
+      'search.check-every',
+      'at most search.max-epochs (5)',
+      '6',
+    ],
+    [
+      'device budget below min-width',
+      `${MINIMAL}search:\n  min-width: 3\ngate:\n  max-width: 2\n`,
+      'gate.max-width',
+      'over the budget',
+      '2',
+    ],
     ['accuracy tolerance of 1', `${MINIMAL}gate:\n  metric-tolerance: 1\n`, 'gate.metric-tolerance', 'below 1', '1'],
     ['empty value', `${MINIMAL}search:\n  seed:\n`, 'search.seed', 'found nothing', 'seed:'],
     ['section as a list', `${MINIMAL}search: [1, 2]\n`, 'search', 'found a list', '[1, 2]'],
@@ -226,7 +325,10 @@ describe('each rule names the key, what was expected, what was found, and where'
     expect(e.key).toBe(key);
     expect(e.message).toContain(`${key}: `);
     expect(e.message).toContain(fragment);
-    expect(textAt(text, e.line!, e.column!).startsWith(token), `${e.message} → "${textAt(text, e.line!, e.column!)}"`).toBe(true);
+    expect(
+      textAt(text, e.line!, e.column!).startsWith(token),
+      `${e.message} → "${textAt(text, e.line!, e.column!)}"`,
+    ).toBe(true);
   });
 
   test('a key far from every valid one gets no suggestion', () => {
@@ -266,7 +368,9 @@ describe('paths stay inside the workspace', () => {
   });
 
   test('absolute inside the workspace is allowed, outside is refused', () => {
-    expect(parse(MINIMAL.replace('path: readings.csv', `path: ${join(root, 'x.csv')}`)).data.path).toBe(join(root, 'x.csv'));
+    expect(parse(MINIMAL.replace('path: readings.csv', `path: ${join(root, 'x.csv')}`)).data.path).toBe(
+      join(root, 'x.csv'),
+    );
     const e = failure(MINIMAL.replace('path: readings.csv', 'path: /etc/passwd'));
     expect(e.key).toBe('data.path');
     expect(e.message).toContain('absolute path outside the workspace');
@@ -293,9 +397,9 @@ describe('paths stay inside the workspace', () => {
 
   test('a config file outside the workspace cannot use the default baseline', () => {
     const outsideFile = join(tmpdir(), 'elsewhere', 'neuron-budget.yml');
-    expect(() => parseConfig(MINIMAL.replace('path: readings.csv', `path: ${join(root, 'r.csv')}`), { file: outsideFile, root })).toThrow(
-      /gate\.baseline/,
-    );
+    expect(() =>
+      parseConfig(MINIMAL.replace('path: readings.csv', `path: ${join(root, 'r.csv')}`), { file: outsideFile, root }),
+    ).toThrow(/gate\.baseline/);
   });
 });
 

@@ -18,7 +18,12 @@ function csv(rows: string[][], eol = '\n'): string {
 }
 
 async function print(content: string, extra: Record<string, unknown> = {}): Promise<string> {
-  const config = withFile(tempDir(), 'd.csv', content, { target: 'condition', validation: 0, ignore: ['reading_id'], ...extra });
+  const config = withFile(tempDir(), 'd.csv', content, {
+    target: 'condition',
+    validation: 0,
+    ignore: ['reading_id'],
+    ...extra,
+  });
   return (await loadData(config)).fingerprint;
 }
 

@@ -9,7 +9,11 @@ export function tempDir(): string {
   return mkdtempSync(join(tmpdir(), 'nb-data-'));
 }
 
-export function makeConfig(root: string, data: Partial<DataConfig> & { path: string; target: string }, seed = 1): Config {
+export function makeConfig(
+  root: string,
+  data: Partial<DataConfig> & { path: string; target: string },
+  seed = 1,
+): Config {
   return testConfig(root, { data, search: { seed } });
 }
 

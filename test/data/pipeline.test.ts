@@ -81,7 +81,10 @@ describe('encoding', () => {
   });
 
   it('reads another delimiter, a BOM, CRLF and quoted fields', async () => {
-    const data = await load('\uFEFFa;"b c";y\r\n"1,5";x;p\r\n"2,5";"x; y";q\r\n', { delimiter: ';', task: 'classification' });
+    const data = await load('\uFEFFa;"b c";y\r\n"1,5";x;p\r\n"2,5";"x; y";q\r\n', {
+      delimiter: ';',
+      task: 'classification',
+    });
     expect(data.profile.columns).toEqual(['a', 'b c', 'y']);
     expect(data.profile.features['b c']).toEqual({ kind: 'categorical', counts: { x: 1, 'x; y': 1 }, missing: 0 });
     // "1,5" (a decimal comma) is not plain decimal notation, so column a is text.

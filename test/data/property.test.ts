@@ -27,11 +27,7 @@ function quote(value: string, delimiter: string): string {
 }
 
 function writeCsv(t: Table): { text: string; header: string[] } {
-  const header = [
-    ...t.numeric.map((_, i) => `num ${i}`),
-    ...t.categorical.map((_, i) => `cat,${i}`),
-    'target',
-  ];
+  const header = [...t.numeric.map((_, i) => `num ${i}`), ...t.categorical.map((_, i) => `cat,${i}`), 'target'];
   const lines = [header.map((h) => quote(h, t.delimiter)).join(t.delimiter)];
   for (let r = 0; r < t.labels.length; r++) {
     const cells = [
@@ -49,7 +45,10 @@ function writeCsv(t: Table): { text: string; header: string[] } {
 const category = fc
   .tuple(
     fc.constantFrom('k', 'Z', 'é', '東'),
-    fc.string({ unit: fc.constantFrom('a', 'b', ' ', ',', ';', '"', '\n', '\r\n', '\t', '|', 'ß', '🙂'), maxLength: 6 }),
+    fc.string({
+      unit: fc.constantFrom('a', 'b', ' ', ',', ';', '"', '\n', '\r\n', '\t', '|', 'ß', '🙂'),
+      maxLength: 6,
+    }),
   )
   .map(([a, b]) => (a + b).trimEnd());
 
@@ -80,9 +79,9 @@ const table: fc.Arbitrary<Table> = fc
         maxLength: s.numericColumns,
       }),
       categorical: fc.array(
-        fc.uniqueArray(category, { minLength: 1, maxLength: 4 }).chain((pool) =>
-          fc.array(fc.constantFrom(...pool), { minLength: s.rows, maxLength: s.rows }),
-        ),
+        fc
+          .uniqueArray(category, { minLength: 1, maxLength: 4 })
+          .chain((pool) => fc.array(fc.constantFrom(...pool), { minLength: s.rows, maxLength: s.rows })),
         { minLength: s.categoricalColumns, maxLength: s.categoricalColumns },
       ),
       // Regression targets: distinct values, so `task: regression` is a real choice.
@@ -138,7 +137,9 @@ describe('round trip', () => {
                 expect(Math.abs(back - original)).toBeLessThanOrEqual(scale * 1e-12);
                 offset += 1;
               } else {
-                const hot = Array.from(part.x.subarray(i * d.inputs + offset, i * d.inputs + offset + e.categories.length));
+                const hot = Array.from(
+                  part.x.subarray(i * d.inputs + offset, i * d.inputs + offset + e.categories.length),
+                );
                 expect(hot.filter((v) => v === 1).length).toBe(1);
                 expect(hot.filter((v) => v !== 0 && v !== 1).length).toBe(0);
                 expect(e.categories[hot.indexOf(1)]).toBe(t.categorical[c++][row]);
@@ -164,7 +165,10 @@ const GOOD = 'a,b,y\n1,x,p\n2,y,q\n3,x,p\n4,y,q\n5,x,p\n6,y,q\n';
 
 const malformed = fc.oneof(
   // Random text from CSV-significant characters.
-  fc.string({ unit: fc.constantFrom('a', '1', '.', ',', '"', '\n', '\r', ' ', '\0', 'e', '-', 'NaN', 'y'), maxLength: 80 }),
+  fc.string({
+    unit: fc.constantFrom('a', '1', '.', ',', '"', '\n', '\r', ' ', '\0', 'e', '-', 'NaN', 'y'),
+    maxLength: 80,
+  }),
   // Random bytes.
   fc.uint8Array({ maxLength: 120 }).map((b) => Buffer.from(b)),
   // A valid file with a few characters inserted or removed.
@@ -185,7 +189,9 @@ const malformed = fc.oneof(
   // Valid UTF-8 bytes with one invalid byte spliced in.
   fc
     .record({ at: fc.nat({ max: GOOD.length }), byte: fc.integer({ min: 0x80, max: 0xff }) })
-    .map(({ at, byte }) => Buffer.concat([Buffer.from(GOOD.slice(0, at)), Buffer.from([byte]), Buffer.from(GOOD.slice(at))])),
+    .map(({ at, byte }) =>
+      Buffer.concat([Buffer.from(GOOD.slice(0, at)), Buffer.from([byte]), Buffer.from(GOOD.slice(at))]),
+    ),
 );
 
 describe('malformed input', () => {
@@ -195,7 +201,7 @@ describe('malformed input', () => {
         const config = withFile(tempDir(), 'bad.csv', content, {
           target: 'y',
           validation: 0.25,
-          missing: missing as 'error' | 'drop',
+          missing: missing,
         });
         try {
           const data = await loadData(config);

@@ -62,7 +62,14 @@ describe('baseline file', () => {
     expect(b.config.settings).not.toHaveProperty('search.workers');
     expect(b.config.settings).not.toHaveProperty('search.time-budget');
     expect(b.history).toEqual([
-      { width: 5, metric: 0.9625, rows: 1800, data: 'a'.repeat(64), commit: 'abc1234', date: '2026-01-01T09:30:00.000Z' },
+      {
+        width: 5,
+        metric: 0.9625,
+        rows: 1800,
+        data: 'a'.repeat(64),
+        commit: 'abc1234',
+        date: '2026-01-01T09:30:00.000Z',
+      },
     ]);
   });
 
@@ -99,13 +106,19 @@ describe('history', () => {
       const rows = 1000 + 100 * k;
       const fp = k.toString(16).padStart(64, '0');
       const w = 3 + Math.floor(k / 4);
-      b = nextBaseline(b, { result: found(w, 0.96), loaded: loaded(profile({ rows }), fp), config: config() }, meta(k, `c0ffee${k}`));
+      b = nextBaseline(
+        b,
+        { result: found(w, 0.96), loaded: loaded(profile({ rows }), fp), config: config() },
+        meta(k, `c0ffee${k}`),
+      );
     }
     expect(b!.history).toHaveLength(10);
     expect(b!.history.map((h) => h.rows)).toEqual([1100, 1200, 1300, 1400, 1500, 1600, 1700, 1800, 1900, 2000]);
     expect(b!.history.map((h) => h.width)).toEqual([3, 3, 3, 4, 4, 4, 4, 5, 5, 5]);
     expect(b!.history.map((h) => h.commit)).toEqual(Array.from({ length: 10 }, (_, i) => `c0ffee${i + 1}`));
-    expect(b!.history.map((h) => h.date.slice(0, 10))).toEqual(Array.from({ length: 10 }, (_, i) => `2026-01-${String(i + 1).padStart(2, '0')}`));
+    expect(b!.history.map((h) => h.date.slice(0, 10))).toEqual(
+      Array.from({ length: 10 }, (_, i) => `2026-01-${String(i + 1).padStart(2, '0')}`),
+    );
     expect(b!.history.at(-1)!.data).toBe(b!.data.fingerprint);
     expect(validate(b)).toBe(true);
   });
@@ -137,14 +150,18 @@ describe('reading a broken baseline', () => {
     const e = errorOf(() => parseBaseline(text, file));
     const line = text.split('\n').findIndex((l) => l.includes('"width": 5,,')) + 1;
     const column = text.split('\n')[line - 1].indexOf(',,') + 2;
-    expect(e.message).toBe(`${file}:${line}:${column}: the baseline is not valid JSON: expected a key in double quotes, found ","`);
+    expect(e.message).toBe(
+      `${file}:${line}:${column}: the baseline is not valid JSON: expected a key in double quotes, found ","`,
+    );
     expect([e.file, e.line, e.column]).toEqual([file, line, column]);
   });
 
   it('reports a truncated file at its end', () => {
     const text = serializeBaseline(sample()).slice(0, 120);
     const e = errorOf(() => parseBaseline(text, file));
-    expect(e.message).toMatch(/^neuron-budget\.baseline\.json:\d+:\d+: the baseline is not valid JSON: expected .*, found (the end of the file|a line break)/);
+    expect(e.message).toMatch(
+      /^neuron-budget\.baseline\.json:\d+:\d+: the baseline is not valid JSON: expected .*, found (the end of the file|a line break)/,
+    );
   });
 
   it('says an empty file is empty', () => {
@@ -154,7 +171,9 @@ describe('reading a broken baseline', () => {
   it('says a baseline from a newer neuron-budget needs a newer neuron-budget', () => {
     const text = serializeBaseline(sample()).replace('neuron-budget/baseline@1', 'neuron-budget/baseline@2');
     const e = errorOf(() => parseBaseline(text, file));
-    expect(e.message).toMatch(/^neuron-budget\.baseline\.json: schema: this baseline was written by a newer neuron-budget \(baseline@2\)/);
+    expect(e.message).toMatch(
+      /^neuron-budget\.baseline\.json: schema: this baseline was written by a newer neuron-budget \(baseline@2\)/,
+    );
     expect(e.key).toBe('schema');
   });
 
@@ -162,19 +181,45 @@ describe('reading a broken baseline', () => {
     expect(errorOf(() => parseBaseline('{"name": "something else"}', file)).message).toBe(
       `${file}: schema: expected "neuron-budget/baseline@1", found nothing; this file is not a neuron-budget baseline`,
     );
-    expect(errorOf(() => parseBaseline('[1, 2]', file)).message).toMatch(/expected a neuron-budget baseline \(a JSON object\), found a list/);
+    expect(errorOf(() => parseBaseline('[1, 2]', file)).message).toMatch(
+      /expected a neuron-budget baseline \(a JSON object\), found a list/,
+    );
   });
 
   const shapeCases: [string, (b: Record<string, any>) => void, string][] = [
     ['result.width', (b) => (b.result.width = 'five'), 'result.width: expected an integer of at least 1, found "five"'],
     ['result.width', (b) => (b.result.width = 0), 'result.width: expected an integer of at least 1, found 0'],
-    ['result.metric.name', (b) => (b.result.metric.name = 'f1'), 'result.metric.name: expected one of "accuracy", "rmse", "mae", "max-abs-error", found "f1"'],
-    ['history[0].date', (b) => (b.history[0].date = 'yesterday'), 'history[0].date: expected an ISO 8601 UTC date-time'],
+    [
+      'result.metric.name',
+      (b) => (b.result.metric.name = 'f1'),
+      'result.metric.name: expected one of "accuracy", "rmse", "mae", "max-abs-error", found "f1"',
+    ],
+    [
+      'history[0].date',
+      (b) => (b.history[0].date = 'yesterday'),
+      'history[0].date: expected an ISO 8601 UTC date-time',
+    ],
     ['history', (b) => delete b.history, 'history: expected a list, found nothing (the key is missing)'],
-    ['widths[2].reached', (b) => (b.widths[2].reached = 11), 'widths[2].reached: expected at most restarts (10), found 11'],
-    ['data.fingerprint', (b) => (b.data.fingerprint = 'xyz'), 'data.fingerprint: expected a sha256 fingerprint (64 hex digits), found "xyz"'],
-    ['data.profile.features.kurtosis.kind', (b) => (b.data.profile.features.kurtosis.kind = 'text'), 'data.profile.features.kurtosis.kind: expected one of "numeric", "categorical", found "text"'],
-    ['result.extra', (b) => (b.result.extra = 1), 'result.extra: expected no such key (allowed: width, metric, grownWidth, reached, restarts, searchSeconds), found 1'],
+    [
+      'widths[2].reached',
+      (b) => (b.widths[2].reached = 11),
+      'widths[2].reached: expected at most restarts (10), found 11',
+    ],
+    [
+      'data.fingerprint',
+      (b) => (b.data.fingerprint = 'xyz'),
+      'data.fingerprint: expected a sha256 fingerprint (64 hex digits), found "xyz"',
+    ],
+    [
+      'data.profile.features.kurtosis.kind',
+      (b) => (b.data.profile.features.kurtosis.kind = 'text'),
+      'data.profile.features.kurtosis.kind: expected one of "numeric", "categorical", found "text"',
+    ],
+    [
+      'result.extra',
+      (b) => (b.result.extra = 1),
+      'result.extra: expected no such key (allowed: width, metric, grownWidth, reached, restarts, searchSeconds), found 1',
+    ],
   ];
 
   it.each(shapeCases)('names the key %s of a wrong shape, and ajv rejects it too', (key, mutate, message) => {
@@ -191,24 +236,31 @@ describe('reading a broken baseline', () => {
     const dir = tempDir();
     writeFileSync(join(dir, file), '{ "schema": ');
     await expect(readBaseline(join(dir, file), file)).rejects.toThrow(/^neuron-budget\.baseline\.json:1:13: /);
-    await expect(readBaseline(dir, 'baselines/')).rejects.toThrow('baselines/: expected a baseline file, found a folder');
+    await expect(readBaseline(dir, 'baselines/')).rejects.toThrow(
+      'baselines/: expected a baseline file, found a folder',
+    );
   });
 });
 
 describe('JSON syntax locator agrees with JSON.parse (the reference)', () => {
   it('on random JSON values and random corruptions of them', () => {
     fc.assert(
-      fc.property(fc.json(), fc.nat(), fc.constantFrom('', ',', '}', ']', '"', ':', 'x', '\n', '0', '-', '.', 'e', '\\'), (json, at, insert) => {
-        const pos = json.length === 0 ? 0 : at % (json.length + 1);
-        const text = json.slice(0, pos) + insert + json.slice(pos);
-        let parses = true;
-        try {
-          JSON.parse(text);
-        } catch {
-          parses = false;
-        }
-        expect(findJsonSyntaxProblem(text) === null).toBe(parses);
-      }),
+      fc.property(
+        fc.json(),
+        fc.nat(),
+        fc.constantFrom('', ',', '}', ']', '"', ':', 'x', '\n', '0', '-', '.', 'e', '\\'),
+        (json, at, insert) => {
+          const pos = json.length === 0 ? 0 : at % (json.length + 1);
+          const text = json.slice(0, pos) + insert + json.slice(pos);
+          let parses = true;
+          try {
+            JSON.parse(text);
+          } catch {
+            parses = false;
+          }
+          expect(findJsonSyntaxProblem(text) === null).toBe(parses);
+        },
+      ),
       { numRuns: 3000, seed: 42 },
     );
   });
@@ -220,12 +272,20 @@ describe('writing guards', () => {
     const path = join(dir, 'neuron-budget.baseline.json');
     await writeBaseline(path, sample());
     const before = readFileSync(path, 'utf8');
-    const broken = nextBaseline(null, {
-      result: found(5, 0.96),
-      loaded: loaded(profile({ features: { x: { kind: 'numeric', mean: Number.NaN, std: 0, min: 0, max: 0, missing: 0 } } })),
-      config: config(),
-    }, meta(2));
-    await expect(writeBaseline(path, broken)).rejects.toThrow(/refusing to write a baseline.*data\.profile\.features\.x\.mean: expected a number, found null/);
+    const broken = nextBaseline(
+      null,
+      {
+        result: found(5, 0.96),
+        loaded: loaded(
+          profile({ features: { x: { kind: 'numeric', mean: Number.NaN, std: 0, min: 0, max: 0, missing: 0 } } }),
+        ),
+        config: config(),
+      },
+      meta(2),
+    );
+    await expect(writeBaseline(path, broken)).rejects.toThrow(
+      /refusing to write a baseline.*data\.profile\.features\.x\.mean: expected a number, found null/,
+    );
     expect(readFileSync(path, 'utf8')).toBe(before);
     expect(readdirSync(dir)).toEqual(['neuron-budget.baseline.json']);
   });
@@ -244,7 +304,8 @@ describe('the hand validator and the JSON Schema agree (ajv as the reference)', 
   function paths(v: Json, at: (string | number)[] = []): (string | number)[][] {
     const out: (string | number)[][] = [at];
     if (Array.isArray(v)) v.forEach((c, i) => out.push(...paths(c, [...at, i])));
-    else if (v !== null && typeof v === 'object') for (const [k, c] of Object.entries(v)) out.push(...paths(c, [...at, k]));
+    else if (v !== null && typeof v === 'object')
+      for (const [k, c] of Object.entries(v)) out.push(...paths(c, [...at, k]));
     return out;
   }
 
@@ -252,29 +313,36 @@ describe('the hand validator and the JSON Schema agree (ajv as the reference)', 
     const valid = JSON.parse(serializeBaseline(sample())) as Json;
     const all = paths(valid).filter((p) => p.length > 0);
     fc.assert(
-      fc.property(fc.nat(all.length - 1), fc.option(fc.oneof(fc.constantFrom(-1, 0, 1, 2.5, 101, '', 'x', null, true, [], {}), fc.jsonValue({ maxDepth: 2 })), { nil: undefined }), (i, replacement) => {
-        const doc = structuredClone(valid) as Record<string | number, Json>;
-        const path = all[i];
-        let parent: Record<string | number, Json> = doc;
-        for (const key of path.slice(0, -1)) parent = parent[key] as Record<string | number, Json>;
-        const last = path[path.length - 1];
-        if (replacement === undefined) {
-          if (Array.isArray(parent)) parent.splice(Number(last), 1);
-          else delete parent[last];
-        } else parent[last] = replacement as Json;
-        let ours = true;
-        let message = '';
-        try {
-          parseBaseline(JSON.stringify(doc), 'b.json');
-        } catch (e) {
-          ours = false;
-          message = (e as Error).message;
-        }
-        const schemaSays = validate(doc);
-        // The one rule JSON Schema cannot express: reached ≤ restarts.
-        if (schemaSays && !ours && /expected at most restarts/.test(message)) return;
-        expect(ours, `${path.join('.')} = ${JSON.stringify(replacement)}: ${message}`).toBe(schemaSays);
-      }),
+      fc.property(
+        fc.nat(all.length - 1),
+        fc.option(
+          fc.oneof(fc.constantFrom(-1, 0, 1, 2.5, 101, '', 'x', null, true, [], {}), fc.jsonValue({ maxDepth: 2 })),
+          { nil: undefined },
+        ),
+        (i, replacement) => {
+          const doc = structuredClone(valid) as Record<string | number, Json>;
+          const path = all[i];
+          let parent: Record<string | number, Json> = doc;
+          for (const key of path.slice(0, -1)) parent = parent[key] as Record<string | number, Json>;
+          const last = path[path.length - 1];
+          if (replacement === undefined) {
+            if (Array.isArray(parent)) parent.splice(Number(last), 1);
+            else delete parent[last];
+          } else parent[last] = replacement as Json;
+          let ours = true;
+          let message = '';
+          try {
+            parseBaseline(JSON.stringify(doc), 'b.json');
+          } catch (e) {
+            ours = false;
+            message = (e as Error).message;
+          }
+          const schemaSays = validate(doc);
+          // The one rule JSON Schema cannot express: reached ≤ restarts.
+          if (schemaSays && !ours && /expected at most restarts/.test(message)) return;
+          expect(ours, `${path.join('.')} = ${JSON.stringify(replacement)}: ${message}`).toBe(schemaSays);
+        },
+      ),
       { numRuns: 3000, seed: 11 },
     );
   });

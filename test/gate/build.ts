@@ -33,7 +33,11 @@ export function width(w: number, reached: number, restarts: number, best: number
 }
 
 /** A found result whose growth phase went up from 1 to `found` (invented curve). */
-export function found(foundWidth: number, metric: number, opts: { pruning?: PruneStep[]; seconds?: number } = {}): SearchResult {
+export function found(
+  foundWidth: number,
+  metric: number,
+  opts: { pruning?: PruneStep[]; seconds?: number } = {},
+): SearchResult {
   const widths: WidthSummary[] = [];
   for (let w = 1; w <= foundWidth; w++) {
     const best = w === foundWidth ? metric : Math.min(0.949, 0.55 + 0.06 * w);
@@ -92,12 +96,20 @@ export function profile(over: Partial<DataProfile> = {}): DataProfile {
   };
 }
 
-export function loaded(p: DataProfile = profile(), fingerprint = 'a'.repeat(64)): Pick<LoadedData, 'fingerprint' | 'profile'> {
+export function loaded(
+  p: DataProfile = profile(),
+  fingerprint = 'a'.repeat(64),
+): Pick<LoadedData, 'fingerprint' | 'profile'> {
   return { fingerprint, profile: p };
 }
 
 /** The data-stage report the job builds before the gate runs (what runJob fills). */
-export function dataReport(result: SearchResult, cfg: Config, p: DataProfile = profile(), fingerprint = 'a'.repeat(64)): Report {
+export function dataReport(
+  result: SearchResult,
+  cfg: Config,
+  p: DataProfile = profile(),
+  fingerprint = 'a'.repeat(64),
+): Report {
   const validationRows = Math.round(p.rows * cfg.data.validation);
   return {
     schema: 'neuron-budget/report@1',

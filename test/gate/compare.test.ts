@@ -10,11 +10,15 @@ import { config, found, inconclusive, loaded, notFound } from './build.js';
 const DATE = new Date('2026-03-01T10:00:00.000Z');
 
 function baselineAt(width: number, metric: number, cfg: Config = config()): Baseline {
-  return nextBaseline(null, { result: found(width, metric), loaded: loaded(), config: cfg }, {
-    date: DATE,
-    commit: null,
-    toolVersion: '0.1.0',
-  });
+  return nextBaseline(
+    null,
+    { result: found(width, metric), loaded: loaded(), config: cfg },
+    {
+      date: DATE,
+      commit: null,
+      toolVersion: '0.1.0',
+    },
+  );
 }
 
 function input(result: SearchResult, baseline: Baseline | null, cfg: Config = config()): CompareInput {
@@ -44,14 +48,18 @@ const cases: Case[] = [
     result: found(5, 0.96),
     baseline: null,
     verdict: 'new',
-    reasons: ['Needs 5 hidden neurons; there is no baseline yet to compare with, so record this result as the baseline.'],
+    reasons: [
+      'Needs 5 hidden neurons; there is no baseline yet to compare with, so record this result as the baseline.',
+    ],
   },
   {
     name: 'no baseline yet, width equal to the device budget (boundary: not over)',
     result: found(8, 0.96),
     baseline: null,
     verdict: 'new',
-    reasons: ['Needs 8 hidden neurons; there is no baseline yet to compare with, so record this result as the baseline.'],
+    reasons: [
+      'Needs 8 hidden neurons; there is no baseline yet to compare with, so record this result as the baseline.',
+    ],
   },
   {
     name: 'no baseline yet, one over the device budget',
@@ -113,7 +121,10 @@ const cases: Case[] = [
     result: found(10, 0.96),
     baseline: baselineAt(5, 0.96),
     verdict: 'fail',
-    reasons: ['Needs 10 hidden neurons; the device budget is 8.', "Needs 10 hidden neurons, 5 more than the baseline's 5; no growth is allowed."],
+    reasons: [
+      'Needs 10 hidden neurons; the device budget is 8.',
+      "Needs 10 hidden neurons, 5 more than the baseline's 5; no growth is allowed.",
+    ],
   },
   {
     name: 'no device budget set: a large width alone does not fail',
@@ -207,9 +218,13 @@ describe('compare: settings that change the question', () => {
 
   it('treats the order of ignored columns as the same question but the order of features as a different one', () => {
     const base = baselineAt(5, 0.96, config({ data: { ignore: ['a', 'b'], features: ['x', 'y'] } }));
-    const sameIgnore = compare(input(found(5, 0.96), base, config({ data: { ignore: ['b', 'a'], features: ['x', 'y'] } })));
+    const sameIgnore = compare(
+      input(found(5, 0.96), base, config({ data: { ignore: ['b', 'a'], features: ['x', 'y'] } })),
+    );
     expect(sameIgnore.settingsChanged).toEqual([]);
-    const swapped = compare(input(found(5, 0.96), base, config({ data: { ignore: ['a', 'b'], features: ['y', 'x'] } })));
+    const swapped = compare(
+      input(found(5, 0.96), base, config({ data: { ignore: ['a', 'b'], features: ['y', 'x'] } })),
+    );
     expect(swapped.settingsChanged).toEqual(['data.features: [x, y] → [y, x]']);
   });
 

@@ -12,7 +12,11 @@ function numeric(mean: number, std: number, min: number, max: number) {
 describe('data changes', () => {
   it('reports rows overall and per class, and classes that appeared or vanished', () => {
     const before = profile();
-    const after: DataProfile = { ...profile(), rows: 2000, classes: { imbalance: 500, misalignment: 100, normal: 1400 } };
+    const after: DataProfile = {
+      ...profile(),
+      rows: 2000,
+      classes: { imbalance: 500, misalignment: 100, normal: 1400 },
+    };
     const ch = dataChanges(before, after, fp);
     expect(ch.changed).toBe(true);
     expect(ch.rows).toEqual({ before: 1800, after: 2000 });
@@ -39,7 +43,9 @@ describe('data changes', () => {
 
   it('flags a widened range on either side, not a narrowed one', () => {
     const before = profile({ features: { lo: numeric(1, 1, 0, 2), hi: numeric(1, 1, 0, 2), in: numeric(1, 1, 0, 2) } });
-    const after = profile({ features: { lo: numeric(1, 1, -0.5, 2), hi: numeric(1, 1, 0, 2.5), in: numeric(1, 1, 0.5, 1.5) } });
+    const after = profile({
+      features: { lo: numeric(1, 1, -0.5, 2), hi: numeric(1, 1, 0, 2.5), in: numeric(1, 1, 0.5, 1.5) },
+    });
     const ch = dataChanges(before, after, fp);
     expect(ch.features.map((f) => [f.name, f.rangeWidened, f.meanMoved])).toEqual([
       ['hi', true, false],
@@ -50,7 +56,11 @@ describe('data changes', () => {
   });
 
   it('counts any mean move of a constant feature as moved (its std is 0)', () => {
-    const ch = dataChanges(profile({ features: { c: numeric(3, 0, 3, 3) } }), profile({ features: { c: numeric(3.1, 0.2, 3, 3.4) } }), fp);
+    const ch = dataChanges(
+      profile({ features: { c: numeric(3, 0, 3, 3) } }),
+      profile({ features: { c: numeric(3.1, 0.2, 3, 3.4) } }),
+      fp,
+    );
     expect(ch.features[0]).toMatchObject({ name: 'c', meanMoved: true, shiftInStd: null, rangeWidened: true });
   });
 
@@ -72,7 +82,14 @@ describe('data changes', () => {
   it('says nothing changed for the same profile and fingerprint', () => {
     const ch = dataChanges(profile(), profile(), { before: fp.before, after: fp.before });
     expect(ch.changed).toBe(false);
-    expect([ch.features, ch.categories, ch.columnsAdded, ch.columnsRemoved, ch.classesAppeared, ch.classesVanished]).toEqual([[], [], [], [], [], []]);
+    expect([
+      ch.features,
+      ch.categories,
+      ch.columnsAdded,
+      ch.columnsRemoved,
+      ch.classesAppeared,
+      ch.classesVanished,
+    ]).toEqual([[], [], [], [], [], []]);
   });
 
   it('names a data file that moved, and nothing when it did not', () => {

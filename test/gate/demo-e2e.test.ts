@@ -41,7 +41,12 @@ describe('demo, end to end through dist/cli/index.js', () => {
     async () => {
       const files = demoFiles();
       expect(Object.keys(files)).toEqual(
-        expect.arrayContaining([`${DEMO}/neuron-budget.yml`, `${DEMO}/neuron-budget.pr.yml`, `${DEMO}/readings.csv`, `${DEMO}/readings-pr.csv`]),
+        expect.arrayContaining([
+          `${DEMO}/neuron-budget.yml`,
+          `${DEMO}/neuron-budget.pr.yml`,
+          `${DEMO}/readings.csv`,
+          `${DEMO}/readings-pr.csv`,
+        ]),
       );
 
       const base = await runCli(['baseline', '--config', `${DEMO}/neuron-budget.yml`], { files, timeoutMs: TIMEOUT });
@@ -71,7 +76,11 @@ describe('demo, end to end through dist/cli/index.js', () => {
       const rows = report.changes!.rows;
       expect(rows.after).toBeGreaterThan(rows.before);
       expect(rows.before).toBe(baseline.data.rows);
-      expect(pr.stderr).toMatch(new RegExp(`rows ${rows.before.toLocaleString('en-US')} -> ${rows.after.toLocaleString('en-US')} \\(\\+${(rows.after - rows.before).toLocaleString('en-US')}\\)`));
+      expect(pr.stderr).toMatch(
+        new RegExp(
+          `rows ${rows.before.toLocaleString('en-US')} -> ${rows.after.toLocaleString('en-US')} \\(\\+${(rows.after - rows.before).toLocaleString('en-US')}\\)`,
+        ),
+      );
       // A failing check never touches the baseline.
       expect(pr.read(baselinePath)).toBe(baselineText);
 

@@ -6,7 +6,11 @@ import { runGateStage, type GateStageInput } from '../../src/gate/stage.js';
 import type { SearchResult } from '../../src/search/types.js';
 import { config, found, loaded, notFound, profile } from './build.js';
 
-function setup(): { dir: string; path: string; input: (mode: 'check' | 'baseline', result: SearchResult, day?: number) => GateStageInput } {
+function setup(): {
+  dir: string;
+  path: string;
+  input: (mode: 'check' | 'baseline', result: SearchResult, day?: number) => GateStageInput;
+} {
   const dir = mkdtempSync(join(tmpdir(), 'nb-stage-'));
   const path = join(dir, 'neuron-budget.baseline.json');
   const cfg = config({ gate: { baseline: path } });
@@ -62,7 +66,9 @@ describe('gate stage', () => {
     const s = setup();
     writeFileSync(s.path, '{"schema": "neuron-budget/baseline@1", ');
     for (const mode of ['check', 'baseline'] as const) {
-      await expect(runGateStage(s.input(mode, found(4, 0.96)))).rejects.toThrow(/^neuron-budget\.baseline\.json:1:\d+: the baseline is not valid JSON/);
+      await expect(runGateStage(s.input(mode, found(4, 0.96)))).rejects.toThrow(
+        /^neuron-budget\.baseline\.json:1:\d+: the baseline is not valid JSON/,
+      );
     }
     expect(readFileSync(s.path, 'utf8')).toBe('{"schema": "neuron-budget/baseline@1", ');
   });
@@ -72,7 +78,11 @@ describe('gate stage: --baseline override', () => {
   it('names the override in the gate settings it returns', async () => {
     const s = setup();
     const other = join(s.dir, 'other.json');
-    const out = await runGateStage({ ...s.input('baseline', found(3, 0.96)), baselinePath: other, baselineShown: 'other.json' });
+    const out = await runGateStage({
+      ...s.input('baseline', found(3, 0.96)),
+      baselinePath: other,
+      baselineShown: 'other.json',
+    });
     expect(out.written).toBe(other);
     expect(out.gate.baseline).toBe(other);
     expect(out.gate.baselineAsWritten).toBe('other.json');

@@ -12,7 +12,9 @@ describe('action.yml', () => {
     expect(meta.name).toBe('neuron-budget');
     expect(meta.description.length).toBeGreaterThan(20);
     // The colours GitHub's metadata syntax allows for branding.
-    expect(['white', 'black', 'yellow', 'blue', 'green', 'orange', 'red', 'purple', 'gray-dark']).toContain(meta.branding?.color);
+    expect(['white', 'black', 'yellow', 'blue', 'green', 'orange', 'red', 'purple', 'gray-dark']).toContain(
+      meta.branding?.color,
+    );
     expect(meta.branding?.icon).toMatch(/^[a-z0-9-]+$/);
   });
 
@@ -37,7 +39,8 @@ describe('action.yml', () => {
     const source = readFileSync(join(repoRoot, 'src', 'github', 'main.ts'), 'utf8');
     const set = [...source.matchAll(/core\.setOutput\('([^']+)'/g)].map((m) => m[1]).sort();
     expect(Object.keys(meta.outputs).sort()).toEqual(set);
-    for (const [name, spec] of Object.entries(meta.outputs)) expect(spec.description?.length ?? 0, name).toBeGreaterThan(10);
+    for (const [name, spec] of Object.entries(meta.outputs))
+      expect(spec.description?.length ?? 0, name).toBeGreaterThan(10);
   });
 
   it('every input is read by the shell under its exact name', () => {
@@ -56,9 +59,9 @@ describe('workflows', () => {
 
   it('ci tests on Node 20 and 24 and builds', () => {
     const ci = wf('ci.yml');
-    const job = Object.values(ci.jobs)[0]!;
+    const job = Object.values(ci.jobs)[0];
     expect(job.strategy?.matrix?.node).toEqual([20, 24]);
-    const runs = job.steps.map((s) => String(s['run'] ?? ''));
+    const runs = job.steps.map((s) => (typeof s['run'] === 'string' ? s['run'] : ''));
     expect(runs.some((r) => r.includes('npm ci'))).toBe(true);
     expect(runs.some((r) => r.includes('npm test'))).toBe(true);
     expect(runs.some((r) => r.includes('npm run build'))).toBe(true);
@@ -67,10 +70,12 @@ describe('workflows', () => {
 
   it('self-test runs the action itself on the base demo and, expecting failure, on the variant', () => {
     const st = wf('self-test.yml');
-    const steps = Object.values(st.jobs)[0]!.steps;
+    const steps = Object.values(st.jobs)[0].steps;
     const uses = steps.filter((s) => s['uses'] === './');
     expect(uses).toHaveLength(2);
-    const variant = uses.find((s) => String((s['with'] as Record<string, string>)['config']).endsWith('neuron-budget.pr.yml'))!;
+    const variant = uses.find((s) =>
+      String((s['with'] as Record<string, string>)['config']).endsWith('neuron-budget.pr.yml'),
+    )!;
     expect(variant['continue-on-error']).toBe(true);
     const checks = steps.map((s) => JSON.stringify(s)).join('\n');
     expect(checks).toContain('steps.variant.outputs.verdict');

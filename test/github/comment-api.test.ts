@@ -39,7 +39,7 @@ describe('upsertComment against the stand-in API', () => {
     const huge = Array.from({ length: 9000 }, (_, i) => `| ${i} | ${'x'.repeat(10)} |`).join('\n');
     const res = await upsertComment(client(), where, marker, commentBody(marker, huge, null));
     expect(res.action).toBe('created');
-    const posted = api.all(where.issueNumber)[0]!.body;
+    const posted = api.all(where.issueNumber)[0].body;
     expect(posted.length).toBeLessThanOrEqual(65_536);
     expect(api.requests.map((q) => q.status)).toEqual([200, 201]);
   });

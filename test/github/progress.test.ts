@@ -7,7 +7,11 @@ describe('progress lines', () => {
   it('print the first event, then at most one per interval', () => {
     let t = 0;
     const lines: string[] = [];
-    const on = throttledProgress((l) => lines.push(l), 5000, () => t);
+    const on = throttledProgress(
+      (l) => lines.push(l),
+      5000,
+      () => t,
+    );
     const ev = { phase: 'growth' as const, width: 3, restart: 0, epoch: 10, best: 0.5 };
     on(ev);
     for (t = 100; t < 4900; t += 100) on({ ...ev, epoch: t });
@@ -21,8 +25,17 @@ describe('progress lines', () => {
 
 describe('annotations', () => {
   it('name files relative to the repository root and keep line and column', () => {
-    const e = new UserError('neuron-budget.yml:12:13: search.restarts: expected an integer', { file: 'models/neuron-budget.yml', line: 12, column: 13 });
-    expect(toAnnotation(e, '/ws')).toEqual({ message: e.message, file: 'models/neuron-budget.yml', startLine: 12, startColumn: 13 });
+    const e = new UserError('neuron-budget.yml:12:13: search.restarts: expected an integer', {
+      file: 'models/neuron-budget.yml',
+      line: 12,
+      column: 13,
+    });
+    expect(toAnnotation(e, '/ws')).toEqual({
+      message: e.message,
+      file: 'models/neuron-budget.yml',
+      startLine: 12,
+      startColumn: 13,
+    });
     expect(annotationPath('/ws/a/b.csv', '/ws')).toBe('a/b.csv');
     expect(annotationPath('/elsewhere/b.csv', '/ws')).toBe(undefined);
     expect(toAnnotation(new UserError('no file'), '/ws')).toEqual({ message: 'no file' });

@@ -55,11 +55,11 @@ function makeAjv(): Ajv {
 
 const ajv = makeAjv();
 const compiled = new Map<string, ValidateFunction>();
-function validator(op: string, part: 'request' | string): ValidateFunction {
+function validator(op: string, part: string): ValidateFunction {
   const key = `${op} ${part}`;
   let v = compiled.get(key);
   if (!v) {
-    const spec = fixture.operations[op]!;
+    const spec = fixture.operations[op];
     const schema = part === 'request' ? spec.requestBody : spec.responses[part];
     if (!schema) throw new Error(`no schema for ${key} in the fixture`);
     v = ajv.compile(rebase(schema) as object);
@@ -133,7 +133,11 @@ export class StandIn {
 
   /** Seeds a comment as if someone had posted it earlier; `user` overrides the example's author. */
   seed(issue: number, body: string, user: Record<string, unknown> | 'bot'): Comment {
-    const c = this.record(issue, body, user === 'bot' ? BOT_USER : { ...fixture.examples['issue-comment']!['user'] as object, ...user });
+    const c = this.record(
+      issue,
+      body,
+      user === 'bot' ? BOT_USER : { ...(fixture.examples['issue-comment']['user'] as object), ...user },
+    );
     return c;
   }
 
@@ -159,7 +163,7 @@ export class StandIn {
 
   private record(issue: number, body: string, user: Record<string, unknown>): Comment {
     const id = this.nextId++;
-    const example = fixture.examples['issue-comment']!;
+    const example = fixture.examples['issue-comment'];
     const { owner, repo } = this.opts;
     const when = new Date(Date.UTC(2026, 10, 2, 8, 0, id % 60)).toISOString().replace('.000', '');
     const c: Comment = {
@@ -186,7 +190,13 @@ export class StandIn {
     if (!v(value)) this.schemaFailures.push(`${what}: ${ajv.errorsText(v.errors)}`);
   }
 
-  private send(res: ServerResponse, log: LoggedRequest, status: number, body: unknown, headers: Record<string, string> = {}): void {
+  private send(
+    res: ServerResponse,
+    log: LoggedRequest,
+    status: number,
+    body: unknown,
+    headers: Record<string, string> = {},
+  ): void {
     log.status = status;
     res.writeHead(status, { 'content-type': 'application/json; charset=utf-8', ...headers });
     res.end(body === undefined ? '' : JSON.stringify(body));
@@ -220,10 +230,20 @@ export class StandIn {
     const fault = this.faults.find((f) => f.method === method && f.times > 0);
     if (fault && (list || one)) {
       fault.times--;
-      const errBody = { message: fault.message, documentation_url: 'https://docs.github.com/rest', status: String(fault.status) };
+      const errBody = {
+        message: fault.message,
+        documentation_url: 'https://docs.github.com/rest',
+        status: String(fault.status),
+      };
       if (fault.status === 403 || fault.status === 404) {
-        const op = method === 'POST' ? 'issues/create-comment' : method === 'GET' ? 'issues/list-comments' : 'issues/update-comment';
-        if (fixture.operations[op]!.responses[String(fault.status)]) this.check(op, String(fault.status), errBody, `${method} ${fault.status} response`);
+        const op =
+          method === 'POST'
+            ? 'issues/create-comment'
+            : method === 'GET'
+              ? 'issues/list-comments'
+              : 'issues/update-comment';
+        if (fixture.operations[op].responses[String(fault.status)])
+          this.check(op, String(fault.status), errBody, `${method} ${fault.status} response`);
       }
       return this.send(res, log, fault.status, errBody, fault.headers);
     }
@@ -238,7 +258,7 @@ export class StandIn {
       const link = (p: number, rel: string): string => {
         const q = new URLSearchParams(u.searchParams);
         q.set('page', String(p));
-        return `<${this.url}${u.pathname}?${q}>; rel="${rel}"`;
+        return `<${this.url}${u.pathname}?${q.toString()}>; rel="${rel}"`;
       };
       const links: string[] = [];
       if (page < last) links.push(link(page + 1, 'next'), link(last, 'last'));
@@ -249,10 +269,16 @@ export class StandIn {
     if (list && method === 'POST') {
       this.check('issues/create-comment', 'request', body, 'POST comment request body');
       if (typeof (body as { body?: unknown })?.body !== 'string') {
-        return this.send(res, log, 422, { message: 'Validation Failed', documentation_url: 'https://docs.github.com/rest' });
+        return this.send(res, log, 422, {
+          message: 'Validation Failed',
+          documentation_url: 'https://docs.github.com/rest',
+        });
       }
       if ((body as { body: string }).body.length > 65_536) {
-        return this.send(res, log, 422, { message: 'Body is too long (maximum is 65536 characters)', documentation_url: 'https://docs.github.com/rest' });
+        return this.send(res, log, 422, {
+          message: 'Body is too long (maximum is 65536 characters)',
+          documentation_url: 'https://docs.github.com/rest',
+        });
       }
       const c = this.record(Number(list[1]), (body as { body: string }).body, BOT_USER);
       this.check('issues/create-comment', '201', c, 'POST comment response');
@@ -262,9 +288,13 @@ export class StandIn {
       this.check('issues/update-comment', 'request', body, 'PATCH comment request body');
       const id = Number(one[1]);
       const c = [...this.comments.values()].flat().find((x) => x.id === id);
-      if (!c) return this.send(res, log, 404, { message: 'Not Found', documentation_url: 'https://docs.github.com/rest' });
+      if (!c)
+        return this.send(res, log, 404, { message: 'Not Found', documentation_url: 'https://docs.github.com/rest' });
       if ((body as { body: string }).body.length > 65_536) {
-        return this.send(res, log, 422, { message: 'Body is too long (maximum is 65536 characters)', documentation_url: 'https://docs.github.com/rest' });
+        return this.send(res, log, 422, {
+          message: 'Body is too long (maximum is 65536 characters)',
+          documentation_url: 'https://docs.github.com/rest',
+        });
       }
       c.body = (body as { body: string }).body;
       c['updated_at'] = new Date(Date.UTC(2026, 10, 3, 9, 0, 0)).toISOString().replace('.000', '');

@@ -4,7 +4,15 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { EncodedDataset } from '../../src/data/types.js';
 import { isUserError } from '../../src/errors.js';
-import { encodeRows, MODEL_SCHEMA, modelDocument, parseModel, predictRows, scoreRows, serializeModel } from '../../src/model/index.js';
+import {
+  encodeRows,
+  MODEL_SCHEMA,
+  modelDocument,
+  parseModel,
+  predictRows,
+  scoreRows,
+  serializeModel,
+} from '../../src/model/index.js';
 import { runSearch } from '../../src/search/index.js';
 import { exact, iris, parity, searchConfig, shared } from '../search/fixtures.js';
 
@@ -43,7 +51,12 @@ describe('witness export', () => {
     const rows: Record<string, string>[] = [];
     for (let m = 0; m < 8; m++) {
       const bits = [(m >> 2) & 1, (m >> 1) & 1, m & 1];
-      rows.push({ x1: bits[0] ? '1' : '-1', x2: bits[1] ? '1' : '-1', x3: bits[2] ? '1' : '-1', class: String((bits[0] + bits[1] + bits[2]) % 2) });
+      rows.push({
+        x1: bits[0] ? '1' : '-1',
+        x2: bits[1] ? '1' : '-1',
+        x3: bits[2] ? '1' : '-1',
+        class: String((bits[0] + bits[1] + bits[2]) % 2),
+      });
     }
     // Parity is the published check (Rumelhart, Hinton & Williams 1986): every row must be right.
     expect(scoreRows(model, rows)).toBe(1);
@@ -108,7 +121,17 @@ describe('raw-row encoding matches the data pipeline', () => {
     const root = process.cwd();
     const csv = join(root, 'examples/pump-vibration/readings.csv');
     const config = parseConfig(
-      ['data:', `  path: examples/pump-vibration/readings.csv`, '  target: condition', '  ignore: [reading_id]', '  validation: 0', 'target:', '  metric: accuracy', '  threshold: 0.9', ''].join('\n'),
+      [
+        'data:',
+        `  path: examples/pump-vibration/readings.csv`,
+        '  target: condition',
+        '  ignore: [reading_id]',
+        '  validation: 0',
+        'target:',
+        '  metric: accuracy',
+        '  threshold: 0.9',
+        '',
+      ].join('\n'),
       { file: join(root, 'nb-test.yml'), root },
     );
     const loaded = await loadData(config);
@@ -123,7 +146,17 @@ describe('raw-row encoding matches the data pipeline', () => {
       target: { metric: 'accuracy', threshold: 0.9, value: 0 },
       origin: { seed: 1, restart: 0, grownWidth: 1 },
       encoding: ds.encoding,
-      network: { inputs: ds.inputs, width: 1, outputs: ds.outputs, activation: 'tanh', head: 'softmax', hiddenWeights: [], hiddenBias: [], outputWeights: [], outputBias: [] },
+      network: {
+        inputs: ds.inputs,
+        width: 1,
+        outputs: ds.outputs,
+        activation: 'tanh',
+        head: 'softmax',
+        hiddenWeights: [],
+        hiddenBias: [],
+        outputWeights: [],
+        outputBias: [],
+      },
     } as unknown as Parameters<typeof encodeRows>[0];
     expect(Array.from(encodeRows(fake, rows))).toEqual(Array.from(ds.xTrain));
   });

@@ -10,7 +10,13 @@ import { referenceKernel } from '../../src/nn/kernel.js';
 import { createTrainer } from '../../src/nn/trainer.js';
 import { wasmKernel } from '../../src/nn/wasm-kernel.js';
 
-function data(task: 'classification' | 'regression', inputs: number, outputs: number, rows: number, seed: number): EncodedDataset {
+function data(
+  task: 'classification' | 'regression',
+  inputs: number,
+  outputs: number,
+  rows: number,
+  seed: number,
+): EncodedDataset {
   const rng = rngFor(seed, inputs, rows);
   const x = new Float64Array(rows * inputs).map(() => 2 * rng.nextDouble() - 1);
   const y = new Float64Array(rows).map((_, p) => {
@@ -59,9 +65,24 @@ for (const [kernelName, kernel] of [
 ] as const) {
   const runs: [string, EncodedDataset, number, TrainOptions][] = [];
   for (let r = 0; r < 10; r++) runs.push([`xor r${r}`, xor, 2, base({})]);
-  runs.push(['softmax logistic adam', data('classification', 5, 3, 61, 1), 4, base({ activation: 'logistic', optimizer: 'adam', optimizerSettings: { learningRate: 0.01, batchSize: 16 } })]);
-  runs.push(['regression relu backprop', data('regression', 3, 1, 45, 2), 5, base({ activation: 'relu', optimizer: 'backprop', target: { metric: 'rmse', threshold: 0 } })]);
-  runs.push(['regression tanh irprop', data('regression', 4, 1, 50, 3), 3, base({ target: { metric: 'max-abs-error', threshold: 0 } })]);
+  runs.push([
+    'softmax logistic adam',
+    data('classification', 5, 3, 61, 1),
+    4,
+    base({ activation: 'logistic', optimizer: 'adam', optimizerSettings: { learningRate: 0.01, batchSize: 16 } }),
+  ]);
+  runs.push([
+    'regression relu backprop',
+    data('regression', 3, 1, 45, 2),
+    5,
+    base({ activation: 'relu', optimizer: 'backprop', target: { metric: 'rmse', threshold: 0 } }),
+  ]);
+  runs.push([
+    'regression tanh irprop',
+    data('regression', 4, 1, 50, 3),
+    3,
+    base({ target: { metric: 'max-abs-error', threshold: 0 } }),
+  ]);
   for (const [name, d, width, opts] of runs) {
     const t = createTrainer(d, width, opts, rngFor(7, width, lines.length % 13), { kernel: kernel() });
     const rec = t.run(300);
@@ -70,7 +91,9 @@ for (const [kernelName, kernel] of [
     if (t.network.width > 1) t.removeNeuron(0);
     const rec2 = t.run(50);
     const w = (t as unknown as { parameters: Float64Array }).parameters;
-    const sha = createHash('sha256').update(new Uint8Array(w.buffer, w.byteOffset, w.byteLength)).digest('hex');
+    const sha = createHash('sha256')
+      .update(new Uint8Array(w.buffer, w.byteOffset, w.byteLength))
+      .digest('hex');
     lines.push(`${kernelName} ${name}: ${rec.stop}/${rec.epochs} ${rec2.stop}/${rec2.epochs} ${sha}`);
   }
 }

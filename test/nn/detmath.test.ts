@@ -47,7 +47,9 @@ describe('deterministic elementary functions vs Math.*', () => {
 
   it('log and log1p within 6.7e-16 relative, including subnormals', () => {
     expect(worstRel(detLog, Math.log, [...positive, 5e-324, 2.2e-308, 1, 2, 0.5, 1e308])).toBeLessThan(6.7e-16);
-    expect(worstRel(detLog1p, Math.log1p, [...narrow.map(Math.abs), ...positive.filter((v) => v < 1e10)])).toBeLessThan(6.7e-16);
+    expect(worstRel(detLog1p, Math.log1p, [...narrow.map(Math.abs), ...positive.filter((v) => v < 1e10)])).toBeLessThan(
+      6.7e-16,
+    );
     expect(detLog(0)).toBe(-Infinity);
     expect(Number.isNaN(detLog(-1))).toBe(true);
   });

@@ -24,7 +24,9 @@ function problem(activation: Activation, head: Head, K: number, seed: number) {
   for (let q = 0; q < params.length; q++) params[q] += rng.nextDouble() - 0.5;
   const N = 7;
   const x = new Float64Array(N * 3).map(() => 2 * rng.nextDouble() - 1);
-  const y = new Float64Array(N).map((_, p) => (head === 'linear' ? 2 * rng.nextDouble() - 1 : p % (head === 'softmax' ? K : 2)));
+  const y = new Float64Array(N).map((_, p) =>
+    head === 'linear' ? 2 * rng.nextDouble() - 1 : p % (head === 'softmax' ? K : 2),
+  );
   return { shape, params, x, y, N };
 }
 
@@ -66,7 +68,7 @@ describe.each(kernels)('gradients of the %s kernel vs central finite differences
     const kernel = make();
     const broken: Kernel = {
       name: 'broken',
-      forward: kernel.forward,
+      forward: (...args) => kernel.forward(...args),
       lossAndGradient(shape, params, x, y, start, end, grad) {
         const loss = kernel.lossAndGradient(shape, params, x, y, start, end, grad);
         grad[2] += 1e-4;

@@ -23,7 +23,12 @@ export function dataset(
     xValidation: Float64Array.from(validation?.x ?? []),
     yValidation: Float64Array.from(validation?.y ?? []),
     encoding: {
-      features: Array.from({ length: inputs }, (_, i) => ({ kind: 'numeric' as const, name: `f${i}`, mean: 0, std: 1 })),
+      features: Array.from({ length: inputs }, (_, i) => ({
+        kind: 'numeric' as const,
+        name: `f${i}`,
+        mean: 0,
+        std: 1,
+      })),
       target: { name: 'target', task, classes, mean: 0, std: 1 },
     },
   };

@@ -21,7 +21,12 @@ function bitsEqual(a: Float64Array, b: Float64Array): boolean {
 
 const cases: [Activation, Head, number][] = [];
 for (const act of ['tanh', 'logistic', 'relu'] as Activation[])
-  for (const [head, K] of [['linear', 1], ['logistic', 1], ['softmax', 2], ['softmax', 4]] as [Head, number][])
+  for (const [head, K] of [
+    ['linear', 1],
+    ['logistic', 1],
+    ['softmax', 2],
+    ['softmax', 4],
+  ] as [Head, number][])
     cases.push([act, head, K]);
 
 describe('WebAssembly kernel is bit-identical to the float64 reference', () => {
@@ -43,7 +48,9 @@ describe('WebAssembly kernel is bit-identical to the float64 reference', () => {
       const params = initParams(shape, 'glorot', rng);
       for (let q = 0; q < params.length; q++) params[q] += 3 * (rng.nextDouble() - 0.5);
       const x = new Float64Array(N * D).map(() => 6 * (rng.nextDouble() - 0.5));
-      const y = new Float64Array(N).map(() => (head === 'linear' ? rng.nextDouble() * 4 - 2 : Math.floor(rng.nextDouble() * (head === 'softmax' ? K : 2))));
+      const y = new Float64Array(N).map(() =>
+        head === 'linear' ? rng.nextDouble() * 4 - 2 : Math.floor(rng.nextDouble() * (head === 'softmax' ? K : 2)),
+      );
       const g1 = new Float64Array(params.length);
       const g2 = new Float64Array(params.length);
       for (const [s, e] of [

@@ -60,7 +60,12 @@ function sse(out: Float64Array, y: Float64Array): number {
 describe('adding a neuron', () => {
   it.each(['tanh', 'logistic', 'relu'] as const)('leaves every output bit-identical (%s)', (activation) => {
     const data = regressionData(37, 3, 1);
-    const t = createTrainer(data, 3, options({ activation, target: { metric: 'rmse', threshold: 0 } }), rngFor(4, 3, 0));
+    const t = createTrainer(
+      data,
+      3,
+      options({ activation, target: { metric: 'rmse', threshold: 0 } }),
+      rngFor(4, 3, 0),
+    );
     t.run(25);
     const before = predict(t.snapshot(), data.xTrain, data.trainRows);
     const lossBefore = t.evaluate().trainLoss;
@@ -134,7 +139,12 @@ describe('removing a neuron with mean compensation', () => {
 
   it('resets the stall window and keeps training afterwards', () => {
     const data = regressionData(30, 2, 3);
-    const t = createTrainer(data, 3, options({ target: { metric: 'rmse', threshold: 0 }, stall: { window: 5, threshold: 0.5 } }), rngFor(1, 3, 0));
+    const t = createTrainer(
+      data,
+      3,
+      options({ target: { metric: 'rmse', threshold: 0 }, stall: { window: 5, threshold: 0.5 } }),
+      rngFor(1, 3, 0),
+    );
     expect(t.run(1000).stop).toBe('stalled');
     t.removeNeuron(1);
     const rec = t.run(1000);

@@ -77,15 +77,25 @@ function tfjsReference(c: Case): { loss: number; outputs: Float32Array; grad: Fl
     const act = (a: tf.Tensor) =>
       shape.activation === 'tanh' ? tf.tanh(a) : shape.activation === 'logistic' ? tf.sigmoid(a) : tf.relu(a);
     const logits = (ww1: tf.Tensor, bb1: tf.Tensor, ww2: tf.Tensor, bb2: tf.Tensor) =>
-      tf.add(tf.matMul(act(tf.add(tf.matMul(xt, ww1 as tf.Tensor2D), bb1)) as tf.Tensor2D, ww2 as tf.Tensor2D), bb2) as tf.Tensor2D;
+      tf.add(
+        tf.matMul(act(tf.add(tf.matMul(xt, ww1 as tf.Tensor2D), bb1)) as tf.Tensor2D, ww2 as tf.Tensor2D),
+        bb2,
+      ) as tf.Tensor2D;
     const SUM = tf.Reduction.SUM;
     const lossFn = (ww1: tf.Tensor, bb1: tf.Tensor, ww2: tf.Tensor, bb2: tf.Tensor): tf.Scalar => {
       const z = logits(ww1, bb1, ww2, bb2);
       if (shape.head === 'linear') {
         return tf.mul(0.5, tf.losses.meanSquaredError(tf.tensor2d(f32(y), [N, 1]), z, undefined, SUM)) as tf.Scalar;
       }
-      if (shape.head === 'logistic') return tf.losses.sigmoidCrossEntropy(tf.tensor2d(f32(y), [N, 1]), z, undefined, 0, SUM) as tf.Scalar;
-      return tf.losses.softmaxCrossEntropy(tf.oneHot(tf.tensor1d(Int32Array.from(y), 'int32'), K), z, undefined, 0, SUM) as tf.Scalar;
+      if (shape.head === 'logistic')
+        return tf.losses.sigmoidCrossEntropy(tf.tensor2d(f32(y), [N, 1]), z, undefined, 0, SUM) as tf.Scalar;
+      return tf.losses.softmaxCrossEntropy(
+        tf.oneHot(tf.tensor1d(Int32Array.from(y), 'int32'), K),
+        z,
+        undefined,
+        0,
+        SUM,
+      ) as tf.Scalar;
     };
     const { value, grads } = tf.valueAndGrads(lossFn)([w1, b1, w2, b2]);
     const z = logits(w1, b1, w2, b2);

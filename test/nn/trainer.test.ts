@@ -15,8 +15,8 @@ describe('training run', () => {
       const rec = t.run(2000);
       if (rec.stop === 'reached') hit = { t, rec };
     }
-    expect(hit).not.toBeNull();
-    const { t, rec } = hit!;
+    if (hit === null) throw new Error('no seed reached the target');
+    const { t, rec } = hit;
     expect(rec.validationMetric).toBe(1);
     const out = predict(t.snapshot(), xorDataset().xTrain, 4);
     expect(Array.from(out, (p) => (p > 0.5 ? 1 : 0))).toEqual([0, 1, 1, 0]);
@@ -81,7 +81,9 @@ describe('training run', () => {
     ] as const) {
       const rows = 50;
       const logits = new Float64Array(rows * K).map(() => 4 * rng.nextDouble() - 2);
-      const t = new Float64Array(rows).map(() => (head === HEAD_LINEAR ? rng.nextDouble() : Math.floor(rng.nextDouble() * (K === 1 ? 2 : K))));
+      const t = new Float64Array(rows).map(() =>
+        head === HEAD_LINEAR ? rng.nextDouble() : Math.floor(rng.nextDouble() * (K === 1 ? 2 : K)),
+      );
       const all = computeMetrics(head, K, logits, t, rows, 3.5);
       for (const name of names) expect(targetMetric(name, head, K, logits, t, rows, 3.5)).toBe(metricValue(all, name));
     }

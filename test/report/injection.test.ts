@@ -46,11 +46,15 @@ function hostileReport() {
       rms_velocity: { kind: 'numeric', mean: 1, std: 1, min: 0, max: 2, missing: 0 },
     },
   });
-  const baseline = nextBaseline(null, { result: found(3, 0.96), loaded: loaded(before), config: cfgBefore }, {
-    date: new Date('2026-01-01T00:00:00.000Z'),
-    commit: null,
-    toolVersion: '0.1.0',
-  });
+  const baseline = nextBaseline(
+    null,
+    { result: found(3, 0.96), loaded: loaded(before), config: cfgBefore },
+    {
+      date: new Date('2026-01-01T00:00:00.000Z'),
+      commit: null,
+      toolVersion: '0.1.0',
+    },
+  );
   const features: DataProfile['features'] = {
     pump_model: { kind: 'categorical', counts: Object.fromEntries(HOSTILE.map((h) => [h, 1])), missing: 0 },
   };
@@ -99,11 +103,14 @@ const CHART_LINES = [
 function checkChart(block: string): void {
   const lines = block.split('\n');
   for (const line of lines) {
-    expect(CHART_LINES.some((re) => re.test(line)), `chart line outside the allowed grammar: ${JSON.stringify(line)}`).toBe(true);
+    expect(
+      CHART_LINES.some((re) => re.test(line)),
+      `chart line outside the allowed grammar: ${JSON.stringify(line)}`,
+    ).toBe(true);
   }
   expect(lines[1]).toBe('xychart-beta');
   const categories = (lines.find((l) => l.startsWith('  x-axis'))!.match(/"[^"]*"/g) ?? []).length - 1;
-  for (const series of lines.filter((l) => /^  (line|bar) /.test(l))) {
+  for (const series of lines.filter((l) => /^ {2}(line|bar) /.test(l))) {
     expect(series.split(',').length, 'one value per category').toBe(categories);
   }
 }
@@ -121,7 +128,7 @@ describe('injection', () => {
     for (const h of HOSTILE) expect(md).toContain(escapeMarkdown(h));
   });
 
-  it('leaves no live HTML: the only tags are the renderer\'s own details/summary', () => {
+  it("leaves no live HTML: the only tags are the renderer's own details/summary", () => {
     const tags = rest.match(/<\/?[A-Za-z][^>]*>/g) ?? [];
     expect(new Set(tags)).toEqual(new Set(['<details>', '<summary>', '</summary>', '</details>']));
     // Every <details> opens and closes in order.
@@ -159,7 +166,7 @@ describe('injection', () => {
     }
   });
 
-  it('keeps block structure: no line starts a heading, quote, list or fence except the renderer\'s own', () => {
+  it("keeps block structure: no line starts a heading, quote, list or fence except the renderer's own", () => {
     for (const line of rest.split('\n')) {
       if (/^(#{1,6} |> |```|\d+\. )/.test(line)) {
         expect(line, line).toMatch(/^### neuron-budget: |^#### /);
@@ -187,7 +194,10 @@ describe('escapeMarkdown', () => {
       fc.property(fc.string({ unit: 'grapheme', maxLength: 60 }), (s) => {
         const out = escapeMarkdown(s);
         expect(out).toMatch(/^(?:[A-Za-z0-9 ,;'"/%=?]|&#\d+;|[^\u0000-\u007f])*$/u);
-        const clean = !/[\u0000-\u001f\u007f-\u009f\u200b-\u200f\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff\u00ad\uff20\ufe6b]/u.test(s);
+        const clean =
+          !/[\u0000-\u001f\u007f-\u009f\u200b-\u200f\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff\u00ad\uff20\ufe6b]/u.test(
+            s,
+          );
         if (clean) expect(decode(out).replace(/\u200b/g, '')).toBe(s);
       }),
       { numRuns: 2000, seed: 7 },

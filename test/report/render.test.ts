@@ -11,7 +11,12 @@ import { config, dataReport, found, inconclusive, loaded, notFound, profile, wid
 /** GitHub's limit on a comment body. */
 const GITHUB_LIMIT = 65_536;
 
-function gated(result: ReturnType<typeof found>, baseline: Baseline | null, p: DataProfile = profile(), cfg = config()): Report {
+function gated(
+  result: ReturnType<typeof found>,
+  baseline: Baseline | null,
+  p: DataProfile = profile(),
+  cfg = config(),
+): Report {
   const outcome = evaluateGate({ result, loaded: loaded(p, 'b'.repeat(64)), config: cfg, baseline });
   return withGate(dataReport(result, cfg, p, 'b'.repeat(64)), outcome, cfg.gate);
 }
@@ -26,17 +31,33 @@ function mermaidBlocks(md: string): string[] {
 
 describe('JSON report (withGate)', () => {
   it('fills verdict, reasons, baseline, gate settings and changes, and survives JSON', () => {
-    const base = nextBaseline(null, { result: found(4, 0.96), loaded: loaded(), config: config() }, {
-      date: new Date('2026-02-01T00:00:00.000Z'),
-      commit: 'abcdef0',
-      toolVersion: '0.1.0',
-    });
+    const base = nextBaseline(
+      null,
+      { result: found(4, 0.96), loaded: loaded(), config: config() },
+      {
+        date: new Date('2026-02-01T00:00:00.000Z'),
+        commit: 'abcdef0',
+        toolVersion: '0.1.0',
+      },
+    );
     const r = gated(found(5, 0.97), base, profile({ rows: 2000 }));
     expect(r.verdict).toBe('fail');
     expect(r.reasons[0]).toBe("Needs 5 hidden neurons, 1 more than the baseline's 4; no growth is allowed.");
-    expect(r.baseline).toMatchObject({ width: 4, metric: 0.96, reached: 4, restarts: 10, rows: 1800, sameSettings: true });
+    expect(r.baseline).toMatchObject({
+      width: 4,
+      metric: 0.96,
+      reached: 4,
+      restarts: 10,
+      rows: 1800,
+      sameSettings: true,
+    });
     expect(r.baseline!.history).toHaveLength(1);
-    expect(r.gate).toEqual({ maxWidth: 8, allowedGrowth: 0, metricTolerance: 0.02, baselineFile: 'neuron-budget.baseline.json' });
+    expect(r.gate).toEqual({
+      maxWidth: 8,
+      allowedGrowth: 0,
+      metricTolerance: 0.02,
+      baselineFile: 'neuron-budget.baseline.json',
+    });
     expect(r.changes!.rows).toEqual({ before: 1800, after: 2000 });
     expect(JSON.parse(JSON.stringify(r))).toEqual(r);
   });
@@ -68,11 +89,15 @@ describe('comment', () => {
   });
 
   it('shows every chart number in the per-width table too (a chart that fails to render loses nothing)', () => {
-    const base = nextBaseline(null, { result: found(3, 0.97), loaded: loaded(), config: config() }, {
-      date: new Date('2026-02-01T00:00:00.000Z'),
-      commit: null,
-      toolVersion: '0.1.0',
-    });
+    const base = nextBaseline(
+      null,
+      { result: found(3, 0.97), loaded: loaded(), config: config() },
+      {
+        date: new Date('2026-02-01T00:00:00.000Z'),
+        commit: null,
+        toolVersion: '0.1.0',
+      },
+    );
     const md = renderMarkdown(gated(found(6, 0.96), base));
     const details = md.slice(md.indexOf('<summary>Per-width results'));
     const [current, baseline] = mermaidBlocks(md);
@@ -80,10 +105,15 @@ describe('comment', () => {
       [current, 1],
       [baseline, 4],
     ] as const) {
-      const widths = block.match(/x-axis "[^"]*" \[(.*)\]/)![1].split(', ').map((s) => Number(s.replace(/"/g, '')));
+      const widths = block
+        .match(/x-axis "[^"]*" \[(.*)\]/)![1]
+        .split(', ')
+        .map((s) => Number(s.replace(/"/g, '')));
       const values = block.match(/ {2}bar \[(.*)\]/)![1].split(', ');
       widths.forEach((w, i) => {
-        const row = details.split('\n').find((l) => new RegExp(`^\\| (\\*\\*)?${w}(\\*\\*)?( \\([a-z, ]+\\))? \\|`).test(l))!;
+        const row = details
+          .split('\n')
+          .find((l) => new RegExp(`^\\| (\\*\\*)?${w}(\\*\\*)?( \\([a-z, ]+\\))? \\|`).test(l))!;
         expect(row.split(' | ')[column].trim(), `width ${w}`).toBe(values[i]);
       });
     }
@@ -104,11 +134,15 @@ describe('comment', () => {
   });
 
   it('puts a blank line after every </summary> so GitHub renders the Markdown inside', () => {
-    const base = nextBaseline(null, { result: found(3, 0.97), loaded: loaded(), config: config() }, {
-      date: new Date('2026-02-01T00:00:00.000Z'),
-      commit: null,
-      toolVersion: '0.1.0',
-    });
+    const base = nextBaseline(
+      null,
+      { result: found(3, 0.97), loaded: loaded(), config: config() },
+      {
+        date: new Date('2026-02-01T00:00:00.000Z'),
+        commit: null,
+        toolVersion: '0.1.0',
+      },
+    );
     const md = renderMarkdown(gated({ ...found(6, 0.96), pruning: [step(6, 1)] }, base, profile({ rows: 1900 })));
     const count = md.split('</summary>').length - 1;
     expect(count).toBe(4);
@@ -121,11 +155,15 @@ describe('capacity drift', () => {
     let b: Baseline | null = null;
     const widths = [2, 2, 3, 3, 3, 4, 4, 5, 5, 6];
     widths.forEach((w, k) => {
-      b = nextBaseline(b, { result: found(w, 0.96), loaded: loaded(profile({ rows: 1000 + 100 * k })), config: config() }, {
-        date: new Date(Date.UTC(2026, 0, k + 1)),
-        commit: null,
-        toolVersion: '0.1.0',
-      });
+      b = nextBaseline(
+        b,
+        { result: found(w, 0.96), loaded: loaded(profile({ rows: 1000 + 100 * k })), config: config() },
+        {
+          date: new Date(Date.UTC(2026, 0, k + 1)),
+          commit: null,
+          toolVersion: '0.1.0',
+        },
+      );
     });
     expect(b!.history).toHaveLength(10);
     const r = gated(found(7, 0.96), b, profile({ rows: 2100 }), config({ gate: { allowedGrowth: 1 } }));
@@ -136,7 +174,10 @@ describe('capacity drift', () => {
     expect(drift).toContain('line [8, 8, 8, 8, 8, 8, 8, 8, 8, 8, 8]');
     // The history table lists the same ten entries with their rows.
     const history = md.slice(md.indexOf('Baseline history (10)'));
-    for (let k = 0; k < 10; k++) expect(history).toContain(`| ${k + 1} | 2026&#45;01&#45;${String(k + 1).padStart(2, '0')} | — | ${(1000 + 100 * k).toLocaleString('en-US')} | ${widths[k]} |`);
+    for (let k = 0; k < 10; k++)
+      expect(history).toContain(
+        `| ${k + 1} | 2026&#45;01&#45;${String(k + 1).padStart(2, '0')} | — | ${(1000 + 100 * k).toLocaleString('en-US')} | ${widths[k]} |`,
+      );
     expect(renderText(r)).toContain('width 2 -> 2 -> 3 -> 3 -> 3 -> 4 -> 4 -> 5 -> 5 -> 6 -> now 7');
   });
 });
@@ -147,18 +188,26 @@ function step(w: number, i: number): PruneStep {
 
 describe('length cap', () => {
   it('a huge per-width table, history, pruning and data-change list stay under the limit with headline and table intact', () => {
-    const base = nextBaseline(null, { result: found(900, 0.96), loaded: loaded(), config: config({ search: { maxWidth: 2000 } }) }, {
-      date: new Date('2026-02-01T00:00:00.000Z'),
-      commit: null,
-      toolVersion: '0.1.0',
-    });
+    const base = nextBaseline(
+      null,
+      { result: found(900, 0.96), loaded: loaded(), config: config({ search: { maxWidth: 2000 } }) },
+      {
+        date: new Date('2026-02-01T00:00:00.000Z'),
+        commit: null,
+        toolVersion: '0.1.0',
+      },
+    );
     let b: Baseline = base;
     for (let k = 0; k < 120; k++) {
-      b = nextBaseline(b, { result: found(900, 0.96), loaded: loaded(), config: config({ search: { maxWidth: 2000 } }) }, {
-        date: new Date(Date.UTC(2026, 1, 1, 0, k)),
-        commit: 'deadbeef'.repeat(5),
-        toolVersion: '0.1.0',
-      });
+      b = nextBaseline(
+        b,
+        { result: found(900, 0.96), loaded: loaded(), config: config({ search: { maxWidth: 2000 } }) },
+        {
+          date: new Date(Date.UTC(2026, 1, 1, 0, k)),
+          commit: 'deadbeef'.repeat(5),
+          toolVersion: '0.1.0',
+        },
+      );
     }
     const result = found(1500, 0.96);
     result.widths = Array.from({ length: 1500 }, (_, i) => width(i + 1, i === 1499 ? 5 : 0, 10, 0.5 + i / 3100));
@@ -187,11 +236,15 @@ describe('length cap', () => {
 
 describe('terminal text', () => {
   it('fits 80 columns and carries the same facts as the comment', () => {
-    const base = nextBaseline(null, { result: found(4, 0.9622), loaded: loaded(), config: config() }, {
-      date: new Date('2026-02-01T00:00:00.000Z'),
-      commit: null,
-      toolVersion: '0.1.0',
-    });
+    const base = nextBaseline(
+      null,
+      { result: found(4, 0.9622), loaded: loaded(), config: config() },
+      {
+        date: new Date('2026-02-01T00:00:00.000Z'),
+        commit: null,
+        toolVersion: '0.1.0',
+      },
+    );
     const r = gated({ ...found(9, 0.9583), pruning: [step(10, 1), step(9, 2)] }, base, profile({ rows: 2400 }));
     const text = renderText(r);
     for (const line of text.split('\n')) expect(line.length, line).toBeLessThanOrEqual(TEXT_WIDTH);

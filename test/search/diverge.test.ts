@@ -18,7 +18,10 @@ describe('a diverging training', () => {
       yTrain: shared(xs.map((x) => 3 * x)),
       xValidation: shared([]),
       yValidation: shared([]),
-      encoding: { features: [{ kind: 'numeric', name: 'x', mean: 0, std: 1 }], target: { name: 'y', task: 'regression', classes: null, mean: 0, std: 1 } },
+      encoding: {
+        features: [{ kind: 'numeric', name: 'x', mean: 0, std: 1 }],
+        target: { name: 'y', task: 'regression', classes: null, mean: 0, std: 1 },
+      },
     };
     const search = searchConfig({ optimizer: 'backprop', maxWidth: 1, restarts: 3, required: 1, maxEpochs: 500 });
     const target = { metric: 'rmse', threshold: 0.01 } as const;
@@ -32,6 +35,7 @@ describe('a diverging training', () => {
     }
     const d = decideGrowth(growthPlan(search), target, (t) => results[t.restart]);
     expect(d).toMatchObject({ kind: 'decided', adequateWidth: null });
-    if (d.kind === 'decided') expect(d.widths[0]).toMatchObject({ restarts: 3, reached: 0, diverged: 3, best: null, median: null });
+    if (d.kind === 'decided')
+      expect(d.widths[0]).toMatchObject({ restarts: 3, reached: 0, diverged: 3, best: null, median: null });
   });
 });

@@ -85,7 +85,12 @@ describe('the adequacy decision', () => {
   it('stops at the cap on trainings with the width it got to', () => {
     const p = plan({ maxTrainings: 12 });
     const d = decideGrowth(p, accuracy, (t) => fresh(t.width, t.restart, false));
-    expect(d).toMatchObject({ kind: 'decided', adequateWidth: null, trainings: 12, capHit: { width: 2, restartsRun: 4 } });
+    expect(d).toMatchObject({
+      kind: 'decided',
+      adequateWidth: null,
+      trainings: 12,
+      capHit: { width: 2, restartsRun: 4 },
+    });
   });
 
   it('merging is independent of arrival order and of results past the decision point', () => {

@@ -14,7 +14,17 @@ beforeAll(() => {
   const out = mkdtempSync(join(tmpdir(), 'nb-pool-'));
   execFileSync(
     process.execPath,
-    ['node_modules/@vercel/ncc/dist/ncc/cli.js', 'build', 'test/search/pool-entry.ts', '-o', out, '--quiet', '--transpile-only', '--target', 'es2022'],
+    [
+      'node_modules/@vercel/ncc/dist/ncc/cli.js',
+      'build',
+      'test/search/pool-entry.ts',
+      '-o',
+      out,
+      '--quiet',
+      '--transpile-only',
+      '--target',
+      'es2022',
+    ],
     { stdio: 'inherit' },
   );
   writeFileSync(join(out, 'package.json'), '{"type":"module"}\n');
@@ -23,19 +33,26 @@ beforeAll(() => {
 
 function run(name: string, workers: number): string {
   // Run from the repository root: the demo's config paths are relative to it.
-  return execFileSync(process.execPath, [bundle, name, String(workers)], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] });
+  return execFileSync(process.execPath, [bundle, name, String(workers)], {
+    encoding: 'utf8',
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
 }
 
 describe('worker pool: the same result on 1, 2 and 4 threads', () => {
   // demo: the invented pump-vibration example through the real config and data pipeline.
   for (const name of ['demo', 'iris', 'parity4', 'parity3-inplace']) {
-    it(name, () => {
-      const one = run(name, 1);
-      const parsed = JSON.parse(one) as { outcome: string; width: number };
-      expect(parsed.outcome).toBe('found');
-      expect(run(name, 1)).toBe(one);
-      expect(run(name, 2)).toBe(one);
-      expect(run(name, 4)).toBe(one);
-    }, 300_000);
+    it(
+      name,
+      () => {
+        const one = run(name, 1);
+        const parsed = JSON.parse(one) as { outcome: string; width: number };
+        expect(parsed.outcome).toBe('found');
+        expect(run(name, 1)).toBe(one);
+        expect(run(name, 2)).toBe(one);
+        expect(run(name, 4)).toBe(one);
+      },
+      300_000,
+    );
   }
 });

@@ -128,7 +128,9 @@ describe('budgets and outcomes', () => {
     expect(r.trainings).toBe(10);
     // Width 1 fails for certain after 8 failures (more than 10 − 3); width 2 then gets 2 restarts.
     expect(r.widths).toHaveLength(1);
-    expect(r.note).toBe('The cap of 10 trainings was reached while deciding width 2, after 10 trainings; width 1 was not adequate.');
+    expect(r.note).toBe(
+      'The cap of 10 trainings was reached while deciding width 2, after 10 trainings; width 1 was not adequate.',
+    );
   });
 
   it('inconclusive when the time budget runs out (clock injected)', async () => {

@@ -9,15 +9,20 @@ describe('growth task', () => {
     [2, 3, 7],
     [3, 0, 10],
     [1, 1, 250],
-  ])('width %i restart %i, check every %i: the same record as the engine run it wraps', (width, restart, checkEvery) => {
-    const data = parity(3);
-    const ctx = searchContext(searchConfig({ maxEpochs: 900, checkEvery }), exact);
-    const sliced = runTask(data, ctx, { width, restart })!;
-    const whole = createTrainer(data, width, { ...ctx.train, stall: null }, rngFor(ctx.seed, width, restart)).run(900);
-    expect(sliced.epochs).toBe(whole.epochs);
-    expect(sliced.stop).toBe(whole.stop);
-    expect(Object.is(sliced.metric, whole.validationMetric)).toBe(true);
-  });
+  ])(
+    'width %i restart %i, check every %i: the same record as the engine run it wraps',
+    (width, restart, checkEvery) => {
+      const data = parity(3);
+      const ctx = searchContext(searchConfig({ maxEpochs: 900, checkEvery }), exact);
+      const sliced = runTask(data, ctx, { width, restart })!;
+      const whole = createTrainer(data, width, { ...ctx.train, stall: null }, rngFor(ctx.seed, width, restart)).run(
+        900,
+      );
+      expect(sliced.epochs).toBe(whole.epochs);
+      expect(sliced.stop).toBe(whole.stop);
+      expect(Object.is(sliced.metric, whole.validationMetric)).toBe(true);
+    },
+  );
 
   it('gives up at the next target check once cancelled, and only then', () => {
     const data = parity(3);
