@@ -11,11 +11,11 @@ import { createRequire } from 'node:module';
 import { dirname } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import type { EncodedDataset } from '../src/data/types.js';
-import type { Kernel } from '../src/nn/kernel.js';
-import { referenceKernel } from '../src/nn/kernel.js';
-import { rngFor } from '../src/nn/index.js';
+import type { Kernel } from '../src/nn/kernel/kernel.js';
+import { referenceKernel } from '../src/nn/kernel/kernel.js';
+import { rngFor } from '../src/common/random.js';
 import { createTrainer } from '../src/nn/trainer.js';
-import { wasmKernel } from '../src/nn/wasm-kernel.js';
+import { wasmKernel } from '../src/nn/kernel/wasm.js';
 
 interface Case {
   name: string;

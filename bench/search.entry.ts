@@ -12,7 +12,7 @@ import type { SearchConfig, TargetConfig } from '../src/config/types.js';
 import { loadConfig } from '../src/config/index.js';
 import { loadData } from '../src/data/index.js';
 import type { EncodedDataset } from '../src/data/types.js';
-import { rngFor } from '../src/nn/index.js';
+import { rngFor } from '../src/common/random.js';
 import { runSearch, runSearchWorker } from '../src/search/index.js';
 
 function sharedArray(length: number): Float64Array {

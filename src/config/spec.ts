@@ -26,8 +26,15 @@ export type ValueRule =
 export type DefaultValue = string | number | boolean | null | string[] | typeof REQUIRED | typeof DERIVED;
 
 export interface KeySpec {
-  /** Kebab-case name as written in the file. */
+  /** Kebab-case name as written in the file; the typed config calls it by its camelCase form. */
   name: string;
+  /**
+   * Whether the key changes the search's answer. Two runs that differ in such a key answer
+   * different questions, so the gate says so (gate/settings.ts). Keys that only change how long
+   * the search takes (workers, time budget), where the data file lives (the data are compared by
+   * content), or how the answer is judged (gate) do not.
+   */
+  changesResult: boolean;
   rule: ValueRule;
   default: DefaultValue;
   description: string;
@@ -41,7 +48,7 @@ export interface SectionSpec {
 }
 
 /** Largest width the search may try: the gate is for small networks on small devices. */
-export const WIDTH_LIMIT = 1024;
+const WIDTH_LIMIT = 1024;
 const EPOCH_LIMIT = 10_000_000;
 
 export const CONFIG_SPEC: readonly SectionSpec[] = [
@@ -52,31 +59,42 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
     keys: [
       {
         name: 'path',
+        changesResult: false,
         rule: { kind: 'path' },
         default: REQUIRED,
         description: 'CSV file with a header row, relative to this config file. Must stay inside the workspace.',
       },
-      { name: 'target', rule: { kind: 'text' }, default: REQUIRED, description: 'Column to predict.' },
+      {
+        name: 'target',
+        changesResult: true,
+        rule: { kind: 'text' },
+        default: REQUIRED,
+        description: 'Column to predict.',
+      },
       {
         name: 'features',
+        changesResult: true,
         rule: { kind: 'text-list', minItems: 1, nullable: true },
         default: null,
         description: 'Columns used as inputs. Default: every column except the target and the ignored ones.',
       },
       {
         name: 'ignore',
+        changesResult: true,
         rule: { kind: 'text-list', minItems: 0 },
         default: [],
         description: 'Columns never used as inputs (identifiers, timestamps).',
       },
       {
         name: 'task',
+        changesResult: true,
         rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
         default: 'auto',
         description: 'auto: decided from the target column (text or few distinct values: classification).',
       },
       {
         name: 'validation',
+        changesResult: true,
         rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
         default: 0.25,
         description:
@@ -84,18 +102,21 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
       },
       {
         name: 'delimiter',
+        changesResult: true,
         rule: { kind: 'character' },
         default: ',',
         description: 'Field separator: one character (write "\\t" in double quotes for a tab).',
       },
       {
         name: 'max-categories',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: 10_000 },
         default: 20,
         description: 'Most distinct values a text feature may have; each becomes one input.',
       },
       {
         name: 'missing',
+        changesResult: true,
         rule: { kind: 'enum', values: ['error', 'drop'] },
         default: 'error',
         description: 'An empty feature value: error stops with its location; drop skips the row and counts it.',
@@ -109,6 +130,7 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
     keys: [
       {
         name: 'metric',
+        changesResult: true,
         rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
         default: DERIVED,
         description:
@@ -116,6 +138,7 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
       },
       {
         name: 'threshold',
+        changesResult: true,
         rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
         default: REQUIRED,
         description:
@@ -130,24 +153,28 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
     keys: [
       {
         name: 'min-width',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
         default: 1,
         description: 'First width the growth phase tries.',
       },
       {
         name: 'max-width',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
         default: 16,
         description: 'Last width the growth phase tries; at least min-width.',
       },
       {
         name: 'restarts',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: 1000 },
         default: 10,
         description: 'Seeded trainings per width.',
       },
       {
         name: 'required',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: 1000 },
         default: 3,
         description:
@@ -155,72 +182,84 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
       },
       {
         name: 'max-epochs',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
         default: 3000,
         description: 'Epochs after which one training gives up.',
       },
       {
         name: 'seed',
+        changesResult: true,
         rule: { kind: 'integer', min: 0, max: 4_294_967_295 },
         default: 1,
         description: 'Base seed of every random choice (split, initial weights); same seed, same result.',
       },
       {
         name: 'growth',
+        changesResult: true,
         rule: { kind: 'enum', values: ['fresh', 'in-place'] },
         default: 'fresh',
         description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
       },
       {
         name: 'activation',
+        changesResult: true,
         rule: { kind: 'enum', values: ['tanh', 'logistic', 'relu'] },
         default: 'tanh',
         description: 'Hidden-layer activation function.',
       },
       {
         name: 'optimizer',
+        changesResult: true,
         rule: { kind: 'enum', values: ['irprop+', 'adam', 'backprop'] },
         default: 'irprop+',
         description: 'irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
       },
       {
         name: 'init',
+        changesResult: true,
         rule: { kind: 'enum', values: ['nguyen-widrow', 'glorot', 'he'], nullable: true },
         default: null,
         description: 'Initial weights. Default (null): Nguyen-Widrow for tanh and logistic, He for relu.',
       },
       {
         name: 'check-every',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
         default: 10,
         description: 'Epochs between checks of the target on the validation rows; at most max-epochs.',
       },
       {
         name: 'prune',
+        changesResult: true,
         rule: { kind: 'boolean' },
         default: true,
         description: 'Whether to remove hidden neurons from the adequate network while it still reaches the target.',
       },
       {
         name: 'prune-epochs',
+        changesResult: true,
         rule: { kind: 'integer', min: 0, max: EPOCH_LIMIT },
         default: 200,
         description: 'Epochs of retraining after each neuron removed.',
       },
       {
         name: 'time-budget',
+        changesResult: false,
         rule: { kind: 'number', min: 0, max: 31_536_000, exclusiveMin: true, nullable: true },
         default: null,
         description: 'Wall-clock seconds the search may take; when spent the verdict is inconclusive. null: no limit.',
       },
       {
         name: 'max-trainings',
+        changesResult: true,
         rule: { kind: 'integer', min: 1, max: 100_000_000, nullable: true },
         default: null,
         description: 'Most trainings the search may run; when spent the verdict is inconclusive. null: no limit.',
       },
       {
         name: 'workers',
+        changesResult: false,
         rule: { kind: 'integer', min: 1, max: 256, nullable: true },
         default: null,
         description: 'Worker threads. null: one per available CPU core. Results do not depend on it.',
@@ -234,24 +273,28 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
     keys: [
       {
         name: 'baseline',
+        changesResult: false,
         rule: { kind: 'path' },
         default: 'neuron-budget.baseline.json',
         description: 'Baseline file, relative to this config file. Must stay inside the workspace.',
       },
       {
         name: 'max-width',
+        changesResult: false,
         rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT, nullable: true },
         default: null,
         description: 'Hard device budget: a smallest adequate width above it fails. null: no budget.',
       },
       {
         name: 'allowed-growth',
+        changesResult: false,
         rule: { kind: 'integer', min: 0, max: WIDTH_LIMIT },
         default: 0,
         description: 'Neurons the width may grow over the baseline before the verdict is fail.',
       },
       {
         name: 'metric-tolerance',
+        changesResult: false,
         rule: { kind: 'number', min: 0, max: Number.MAX_VALUE },
         // 0.02 is common practice for "noticeably worse" with a few hundred validation rows; no source.
         default: 0.02,
@@ -261,3 +304,51 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
     ],
   },
 ];
+
+/** "an integer from 1 to 1000", "one of tanh, logistic, relu", … for messages. */
+export function describeRule(rule: ValueRule): string {
+  const orNull = 'nullable' in rule && rule.nullable ? ', or null' : '';
+  switch (rule.kind) {
+    case 'integer':
+      return `an integer from ${rule.min} to ${rule.max}${orNull}`;
+    case 'number': {
+      const low = rule.exclusiveMin ? `above ${rule.min}` : `of ${rule.min} or more`;
+      if (rule.max === Number.MAX_VALUE) return `a number ${low}${orNull}`;
+      if (rule.exclusiveMax)
+        return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
+      return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and at most ${rule.max}${orNull}`;
+    }
+    case 'enum':
+      return `one of ${rule.values.join(', ')}${orNull}`;
+    case 'boolean':
+      return 'true or false';
+    case 'text':
+      return 'a column name (text)';
+    case 'character':
+      return 'a single character other than a quote or a line break';
+    case 'path':
+      return 'a path relative to the config file';
+    case 'text-list':
+      return `a list of column names${rule.minItems > 0 ? ` (at least ${rule.minItems})` : ''}${orNull}`;
+  }
+}
+
+/** `min-width` → `minWidth`: how the typed config names a key. */
+export function fieldName(key: string): string {
+  return key.replace(/-([a-z])/g, (_, c: string) => c.toUpperCase());
+}
+
+/**
+ * A section's documented defaults by typed field name (required and derived keys left out), for
+ * code that builds a config without a file (tests, benchmarks).
+ * @testOnly
+ */
+export function sectionDefaults(section: SectionSpec['name']): Record<string, unknown> {
+  const spec = CONFIG_SPEC.find((s) => s.name === section);
+  const out: Record<string, unknown> = {};
+  for (const key of spec?.keys ?? []) {
+    if (key.default === REQUIRED || key.default === DERIVED) continue;
+    out[fieldName(key.name)] = Array.isArray(key.default) ? [...key.default] : key.default;
+  }
+  return out;
+}

@@ -1,6 +1,10 @@
-/** The validated config, every default filled in and every path absolute. */
-export type Task = 'classification' | 'regression';
-export type MetricName = 'accuracy' | 'rmse' | 'mae' | 'max-abs-error';
+/**
+ * The validated config, every default filled in and every path absolute. Each section has one
+ * field per key of src/config/spec.ts, named in camelCase (spec.ts is the only list of keys).
+ */
+import type { MetricName, Task } from '../common/metric.js';
+
+export type { MetricName, Task } from '../common/metric.js';
 export type Activation = 'tanh' | 'logistic' | 'relu';
 export type Optimizer = 'irprop+' | 'adam' | 'backprop';
 export type Init = 'nguyen-widrow' | 'glorot' | 'he';
@@ -69,6 +73,12 @@ export interface GateConfig {
   metricTolerance: number;
 }
 
+/** Where a key is written in the config file. */
+export interface KeyPosition {
+  line: number;
+  column: number;
+}
+
 export interface Config {
   /** Absolute path of the config file. */
   file: string;
@@ -78,4 +88,8 @@ export interface Config {
   target: TargetConfig;
   search: SearchConfig;
   gate: GateConfig;
+  /** Where each written section and key is (dotted key, e.g. `target.metric`), from the one parse. */
+  positions: ReadonlyMap<string, KeyPosition>;
+  /** Whether target.metric was written; if not, it follows the task found in the data. */
+  metricGiven: boolean;
 }

@@ -4,7 +4,7 @@
  * with at most data.max-categories distinct values.
  */
 import type { Config } from '../config/types.js';
-import { nearest } from '../config/suggest.js';
+import { nearest } from '../common/suggest.js';
 import type { ColumnStore } from './column-store.js';
 import type { ReadPlan } from './read-csv.js';
 import { columnLabel, ConfigKeyProblem, dataError, shownValue, type DataFile } from './where.js';

@@ -9,12 +9,12 @@ import type { TypedColumn } from './columns.js';
 import type { Split } from './split.js';
 import type { TargetColumn } from './target.js';
 
-export function sharedFloat64(length: number): Float64Array {
+function sharedFloat64(length: number): Float64Array {
   return new Float64Array(new SharedArrayBuffer(length * Float64Array.BYTES_PER_ELEMENT));
 }
 
 /** Mean and population standard deviation over the given rows (two passes, for accuracy). */
-export function meanAndStd(values: Float64Array, rows: Int32Array): { mean: number; std: number } {
+function meanAndStd(values: Float64Array, rows: Int32Array): { mean: number; std: number } {
   if (rows.length === 0) return { mean: 0, std: 0 };
   let sum = 0;
   for (let i = 0; i < rows.length; i++) sum += values[rows[i]];

@@ -4,9 +4,9 @@
  * and profile.ts for each step.
  */
 import { stat } from 'node:fs/promises';
-import { displayPath, keyPosition } from '../config/index.js';
+import { displayPath } from '../common/paths.js';
+import { configKeyError } from '../config/index.js';
 import type { Config } from '../config/types.js';
-import { UserError } from '../errors.js';
 import { chooseColumns, featureColumn } from './columns.js';
 import { encodeDataset } from './encode.js';
 import { fingerprint } from './fingerprint.js';
@@ -23,7 +23,7 @@ export async function loadData(config: Config): Promise<LoadedData> {
   try {
     return await load(config);
   } catch (error) {
-    if (error instanceof ConfigKeyProblem) throw await atConfigKey(config, error.key, error.detail);
+    if (error instanceof ConfigKeyProblem) throw configKeyError(config, error.key, error.detail);
     throw error;
   }
 }
@@ -74,17 +74,4 @@ async function checkExists(file: DataFile): Promise<void> {
     throw new ConfigKeyProblem('data.path', `expected a CSV file, found nothing at ${file.shown}`);
   }
   if (!isFile) throw new ConfigKeyProblem('data.path', `expected a CSV file, found a folder at ${file.shown}`);
-}
-
-/** A UserError at the key's place in the config file (line and column when it is written there). */
-async function atConfigKey(config: Config, key: string, detail: string): Promise<UserError> {
-  const shown = displayPath(config.root, config.file);
-  const at = await keyPosition(config.file, key);
-  const where = at === null ? shown : `${shown}:${at.line}:${at.column}`;
-  return new UserError(`${where}: ${key}: ${detail}`, {
-    file: config.file,
-    line: at?.line,
-    column: at?.column,
-    key,
-  });
 }

@@ -10,7 +10,7 @@ import { parse } from 'csv-parse';
 import { ColumnStore } from './column-store.js';
 import { NotTextError, TextCheck } from './text-check.js';
 import { columnLabel, dataError, shownValue, type DataFile } from './where.js';
-import { UserError } from '../errors.js';
+import { UserError } from '../common/errors.js';
 
 export interface ColumnRequest {
   /** 0-based field index in the file. */

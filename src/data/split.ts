@@ -3,61 +3,9 @@
  * round(rows × validation) of its rows (at least one) to validation, chosen by a seeded
  * Fisher–Yates shuffle. Both parts keep file order.
  */
-import { type UserError } from '../errors.js';
+import { type UserError } from '../common/errors.js';
+import { shuffle, xoshiroFromSeed } from '../common/random.js';
 import { columnLabel, dataError, type DataFile } from './where.js';
-
-/** SplitMix64 (Steele, Lea & Flood 2014): turns one seed into well-mixed 64-bit words. */
-export function splitMix64(seed: bigint): () => bigint {
-  let state = BigInt.asUintN(64, seed);
-  return () => {
-    state = BigInt.asUintN(64, state + 0x9e3779b97f4a7c15n);
-    let z = state;
-    z = BigInt.asUintN(64, (z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n);
-    z = BigInt.asUintN(64, (z ^ (z >> 27n)) * 0x94d049bb133111ebn);
-    return z ^ (z >> 31n);
-  };
-}
-
-/** xoshiro128** 1.1 (Blackman & Vigna): 32-bit outputs using only 32-bit operations. */
-export function xoshiro128ss(s0: number, s1: number, s2: number, s3: number): () => number {
-  let a = s0 >>> 0;
-  let b = s1 >>> 0;
-  let c = s2 >>> 0;
-  let d = s3 >>> 0;
-  return () => {
-    const r = Math.imul(b, 5);
-    const result = Math.imul((r << 7) | (r >>> 25), 9) >>> 0;
-    const t = b << 9;
-    c ^= a;
-    d ^= b;
-    b ^= c;
-    a ^= d;
-    c ^= t;
-    d = (d << 11) | (d >>> 21);
-    return result;
-  };
-}
-
-/** Uniform doubles in [0, 1) with 53 random bits, seeded through SplitMix64. */
-export function seededUniform(seed: bigint): () => number {
-  const mix = splitMix64(seed);
-  const r0 = mix();
-  const r1 = mix();
-  const lo = (x: bigint): number => Number(x & 0xffffffffn);
-  const hi = (x: bigint): number => Number(x >> 32n);
-  const next = xoshiro128ss(lo(r0), hi(r0), lo(r1), hi(r1));
-  return () => ((next() >>> 5) * 67108864 + (next() >>> 6)) / 9007199254740992;
-}
-
-/** Fisher–Yates shuffle in place. */
-export function shuffle(items: Int32Array, uniform: () => number): void {
-  for (let i = items.length - 1; i > 0; i--) {
-    const j = Math.floor(uniform() * (i + 1));
-    const t = items[i];
-    items[i] = items[j];
-    items[j] = t;
-  }
-}
 
 // Keeps the split's stream apart from the training streams drawn from the same seed.
 const SPLIT_STREAM = 0x73706c6974n; // "split"
@@ -79,7 +27,7 @@ export interface SplitTarget {
 
 export function splitRows(target: SplitTarget, validation: number, seed: number, file: DataFile): Split {
   const groups = groupRows(target);
-  const uniform = seededUniform(BigInt(seed) ^ SPLIT_STREAM);
+  const rng = xoshiroFromSeed(BigInt(seed) ^ SPLIT_STREAM);
   const train: number[] = [];
   const held: number[] = [];
   groups.forEach((rows, g) => {
@@ -92,7 +40,7 @@ export function splitRows(target: SplitTarget, validation: number, seed: number,
     } else if (target.classIndex === null && rows.length < 2) {
       throw tooFew(target, g, rows.length, 2, validation, file);
     }
-    shuffle(rows, uniform);
+    shuffle(rows, rng);
     for (let i = 0; i < rows.length; i++) (i < take ? held : train).push(rows[i]);
   });
   const ascending = (xs: number[]): Int32Array => Int32Array.from(xs).sort();

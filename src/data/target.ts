@@ -9,7 +9,7 @@ import { categoricalColumn, looksNumeric, MAX_CLASSES, numericColumn } from './c
 import { columnLabel, dataError, shownValue, type DataFile } from './where.js';
 
 /** Distinct numeric values up to which `task: auto` still means classification (a rule of thumb, no source). */
-export const AUTO_MAX_CLASSES = 10;
+const AUTO_MAX_CLASSES = 10;
 
 export type TargetColumn =
   | {

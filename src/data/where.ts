@@ -1,5 +1,5 @@
 /** Where in the data file something is, for messages a user can follow in a text editor. */
-import { UserError } from '../errors.js';
+import { UserError } from '../common/errors.js';
 
 export interface DataFile {
   /** Absolute path (for UserError.file). */

@@ -4,11 +4,13 @@
  * and writeBaseline; dates are passed in, never read from a clock.
  */
 import { readFile } from 'node:fs/promises';
-import type { Config, MetricName } from '../config/types.js';
+import type { Config } from '../config/types.js';
 import type { LoadedData } from '../data/types.js';
-import { UserError } from '../errors.js';
+import { UserError } from '../common/errors.js';
 import { writeFileAtomic } from '../files/atomic.js';
 import type { SearchResult } from '../search/types.js';
+import baselineSchema from '../../schema/baseline.schema.json' with { type: 'json' };
+import { schemaValidator, SchemaProblem, type JsonSchema } from '../common/json-schema.js';
 import { findJsonSyntaxProblem } from './json-position.js';
 import { resultSettings, settingsFingerprint } from './settings.js';
 import {
@@ -198,180 +200,25 @@ function checkSchemaVersion(value: unknown, shown: string): void {
   }
 }
 
-// ---- shape validation: mirrors schema/baseline.schema.json ----
+// ---- shape: schema/baseline.schema.json is the one definition ----
 
-const METRICS: readonly MetricName[] = ['accuracy', 'rmse', 'mae', 'max-abs-error'];
-const HEX64 = /^[0-9a-f]{64}$/;
-
-type Check = (v: unknown, key: string) => void;
-
-class ShapeError extends Error {
-  constructor(
-    readonly key: string,
-    readonly expected: string,
-    readonly found: unknown,
-  ) {
-    super(`${key}: expected ${expected}`);
-  }
-}
+const checkShape = schemaValidator(baselineSchema as unknown as JsonSchema);
 
 function validateBaselineShape(value: unknown, shown: string): asserts value is Baseline {
   try {
-    baselineCheck(value, '');
+    checkShape(value);
+    // The one rule JSON Schema cannot say: a width cannot have more successes than tries.
+    (value as Baseline).widths.forEach((w, i) => {
+      if (w.reached > w.restarts)
+        throw new SchemaProblem(`widths[${i}].reached`, `at most restarts (${w.restarts})`, String(w.reached));
+    });
   } catch (e) {
-    if (!(e instanceof ShapeError)) throw e;
-    const found = e.found === MISSING ? 'nothing (the key is missing)' : describe(e.found);
-    throw new UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${found}`, { file: shown, key: e.key });
+    if (!(e instanceof SchemaProblem)) throw e;
+    throw new UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
   }
 }
 
 const MISSING = Symbol('missing');
-
-const join = (key: string, child: string | number): string =>
-  typeof child === 'number' ? `${key}[${child}]` : key === '' ? child : `${key}.${child}`;
-
-function object(fields: Record<string, Check>): Check {
-  return (v, key) => {
-    if (!isObject(v)) throw new ShapeError(key || '(top level)', 'an object', v);
-    for (const [name, check] of Object.entries(fields)) {
-      check(name in v ? v[name] : MISSING, join(key, name));
-    }
-    for (const name of Object.keys(v)) {
-      if (!(name in fields)) {
-        throw new ShapeError(join(key, name), `no such key (allowed: ${Object.keys(fields).join(', ')})`, v[name]);
-      }
-    }
-  };
-}
-
-function record(check: Check): Check {
-  return (v, key) => {
-    if (!isObject(v)) throw new ShapeError(key, 'an object', v);
-    for (const [name, child] of Object.entries(v)) check(child, join(key, name));
-  };
-}
-
-function list(check: Check, max = Infinity): Check {
-  return (v, key) => {
-    if (!Array.isArray(v)) throw new ShapeError(key, 'a list', v);
-    if (v.length > max) throw new ShapeError(key, `a list of at most ${max} entries`, v.length);
-    v.forEach((child, i) => check(child, join(key, i)));
-  };
-}
-
-const nullable =
-  (check: Check): Check =>
-  (v, key) => {
-    if (v !== null) check(v, key);
-  };
-
-const integer =
-  (min: number): Check =>
-  (v, key) => {
-    if (typeof v !== 'number' || !Number.isInteger(v) || v < min) {
-      throw new ShapeError(key, `an integer of at least ${min}`, v);
-    }
-  };
-
-const finite: Check = (v, key) => {
-  if (typeof v !== 'number' || !Number.isFinite(v)) throw new ShapeError(key, 'a number', v);
-};
-
-const nonNegative: Check = (v, key) => {
-  if (typeof v !== 'number' || !Number.isFinite(v) || v < 0) throw new ShapeError(key, 'a number of at least 0', v);
-};
-
-const text: Check = (v, key) => {
-  if (typeof v !== 'string') throw new ShapeError(key, 'a string', v);
-};
-
-const pattern =
-  (re: RegExp, what: string): Check =>
-  (v, key) => {
-    if (typeof v !== 'string' || !re.test(v)) throw new ShapeError(key, what, v);
-  };
-
-const oneOf =
-  (values: readonly string[]): Check =>
-  (v, key) => {
-    if (typeof v !== 'string' || !values.includes(v)) {
-      throw new ShapeError(key, `one of ${values.map((x) => `"${x}"`).join(', ')}`, v);
-    }
-  };
-
-const isoDate: Check = (v, key) => {
-  if (
-    typeof v !== 'string' ||
-    !/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/.test(v) ||
-    Number.isNaN(Date.parse(v))
-  ) {
-    throw new ShapeError(key, 'an ISO 8601 UTC date-time such as "2026-01-31T12:00:00.000Z"', v);
-  }
-};
-
-const settingValue: Check = (v, key) => {
-  if (v === null || typeof v === 'string' || typeof v === 'boolean') return;
-  if (typeof v === 'number' && Number.isFinite(v)) return;
-  if (Array.isArray(v) && v.every((x) => typeof x === 'string')) return;
-  throw new ShapeError(key, 'a string, number, true/false, null or a list of strings', v);
-};
-
-const featureProfile: Check = (v, key) => {
-  if (!isObject(v)) throw new ShapeError(key, 'an object', v);
-  if (v['kind'] === 'numeric') {
-    object({ kind: text, mean: finite, std: nonNegative, min: finite, max: finite, missing: integer(0) })(v, key);
-  } else if (v['kind'] === 'categorical') {
-    object({ kind: text, counts: record(integer(0)), missing: integer(0) })(v, key);
-  } else {
-    throw new ShapeError(join(key, 'kind'), 'one of "numeric", "categorical"', 'kind' in v ? v['kind'] : MISSING);
-  }
-};
-
-const widthCheck: Check = (v, key) => {
-  object({ width: integer(1), restarts: integer(0), reached: integer(0), best: nullable(finite) })(v, key);
-  const w = v as BaselineWidth;
-  if (w.reached > w.restarts) throw new ShapeError(join(key, 'reached'), `at most restarts (${w.restarts})`, w.reached);
-};
-
-const baselineCheck: Check = object({
-  schema: text,
-  tool: object({ name: oneOf(['neuron-budget']), version: text }),
-  result: object({
-    width: integer(1),
-    metric: object({ name: oneOf(METRICS), value: finite, threshold: finite }),
-    grownWidth: nullable(integer(1)),
-    reached: nullable(integer(0)),
-    restarts: nullable(integer(0)),
-    searchSeconds: nullable(nonNegative),
-  }),
-  widths: list(widthCheck),
-  data: object({
-    file: text,
-    rows: integer(0),
-    fingerprint: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
-    profile: object({
-      rows: integer(0),
-      classes: nullable(record(integer(0))),
-      columns: list(text),
-      features: record(featureProfile),
-    }),
-  }),
-  config: object({
-    fingerprint: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
-    settings: record(settingValue),
-  }),
-  history: list(
-    object({
-      width: integer(1),
-      metric: finite,
-      rows: integer(0),
-      data: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
-      commit: nullable(pattern(/^[0-9a-f]{4,64}$/, 'a commit hash (hex) or null')),
-      date: isoDate,
-    }),
-    HISTORY_CAP,
-  ),
-});
 
 function isObject(v: unknown): v is Record<string, unknown> {
   return typeof v === 'object' && v !== null && !Array.isArray(v);

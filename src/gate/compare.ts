@@ -8,11 +8,11 @@
  * width is what the device pays for and the target threshold already bounds the metric.
  */
 import type { GateConfig, MetricName } from '../config/types.js';
-import type { Verdict } from '../report/types.js';
-import { formatMetric, higherIsBetter, neurons, targetPhrase } from '../report/format.js';
+import { formatMetric, neurons, targetPhrase } from '../common/format.js';
+import { higherIsBetter } from '../common/metric.js';
 import type { SearchResult } from '../search/types.js';
 import { settingsDifferences } from './settings.js';
-import type { Baseline, ResultSettings } from './types.js';
+import type { Baseline, ResultSettings, Verdict } from './types.js';
 
 export interface CompareInput {
   result: Pick<SearchResult, 'outcome' | 'width' | 'metric' | 'note' | 'widths'>;

@@ -156,7 +156,7 @@ class ScanError extends Error {
 }
 
 /** 1-based line and column as a text editor counts them (column in characters). */
-export function lineAndColumn(text: string, offset: number): { line: number; column: number } {
+function lineAndColumn(text: string, offset: number): { line: number; column: number } {
   let line = 1;
   let lineStart = 0;
   for (let k = 0; k < offset && k < text.length; k++) {

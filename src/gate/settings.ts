@@ -9,39 +9,23 @@
  */
 import { createHash } from 'node:crypto';
 import type { Config } from '../config/types.js';
+import { CONFIG_SPEC, fieldName } from '../config/spec.js';
 import type { ResultSettings } from './types.js';
 
 export function resultSettings(config: Config): ResultSettings {
-  const d = config.data;
-  const t = config.target;
-  const s = config.search;
-  return {
-    'data.target': d.target,
-    'data.features': d.features === null ? null : [...d.features],
-    // Order of ignored columns does not matter; order of features does (input order).
-    'data.ignore': [...d.ignore].sort(),
-    'data.task': d.task,
-    'data.validation': d.validation,
-    'data.delimiter': d.delimiter,
-    'data.max-categories': d.maxCategories,
-    'data.missing': d.missing,
-    'target.metric': t.metric,
-    'target.threshold': t.threshold,
-    'search.min-width': s.minWidth,
-    'search.max-width': s.maxWidth,
-    'search.restarts': s.restarts,
-    'search.required': s.required,
-    'search.max-epochs': s.maxEpochs,
-    'search.seed': s.seed,
-    'search.growth': s.growth,
-    'search.activation': s.activation,
-    'search.optimizer': s.optimizer,
-    'search.init': s.init,
-    'search.check-every': s.checkEvery,
-    'search.prune': s.prune,
-    'search.prune-epochs': s.pruneEpochs,
-    'search.max-trainings': s.maxTrainings,
-  };
+  const out: ResultSettings = {};
+  for (const section of CONFIG_SPEC) {
+    const values = config[section.name] as unknown as Record<string, ResultSettings[string]>;
+    for (const key of section.keys) {
+      if (!key.changesResult) continue;
+      const value = values[fieldName(key.name)];
+      out[`${section.name}.${key.name}`] = Array.isArray(value) ? [...value] : value;
+    }
+  }
+  // The order of ignored columns does not matter; the order of features does (input order).
+  const ignore = out['data.ignore'];
+  if (Array.isArray(ignore)) ignore.sort();
+  return out;
 }
 
 /** sha256 hex of the settings in canonical form (keys sorted). */

@@ -10,7 +10,7 @@
 import type { Config, GateConfig } from '../config/types.js';
 import type { LoadedData } from '../data/types.js';
 import type { SearchResult } from '../search/types.js';
-import { nextBaseline, readBaseline, whyNotRecordable, writeBaseline } from './baseline.js';
+import { nextBaseline, whyNotRecordable, writeBaseline } from './baseline.js';
 import { evaluateGate, type GateOutcome } from './evaluate.js';
 import type { Baseline } from './types.js';
 
@@ -23,8 +23,8 @@ export interface GateStageInput {
   baselinePath: string;
   /** The path as the user wrote it, for messages. */
   baselineShown: string;
-  /** The baseline as read before the search (null: none); undefined: read it now. */
-  previous?: Baseline | null;
+  /** The baseline as read before the search (null: none). */
+  previous: Baseline | null;
   /** For the history (baseline mode). */
   commit: string | null;
   date: Date;
@@ -43,8 +43,7 @@ export interface GateStageResult {
 }
 
 export async function runGateStage(input: GateStageInput): Promise<GateStageResult> {
-  const previous =
-    input.previous !== undefined ? input.previous : await readBaseline(input.baselinePath, input.baselineShown);
+  const previous = input.previous;
   const config =
     input.baselinePath === input.config.gate.baseline
       ? input.config

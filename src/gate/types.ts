@@ -108,4 +108,5 @@ export interface DataChanges {
   columnsRemoved: string[];
 }
 
-export type { Verdict } from '../report/types.js';
+/** The gate's answer: pass, fail, improved, new (no baseline yet) or inconclusive (budget ran out). */
+export type Verdict = 'pass' | 'fail' | 'improved' | 'new' | 'inconclusive';

@@ -2,10 +2,11 @@
  * Bad config and data become error annotations on the offending file and line. The runner
  * shows at most 10 error annotations per step; past that the rest go to the log only.
  */
-import { isAbsolute, relative, resolve, sep } from 'node:path';
-import type { UserError } from '../errors.js';
+import { isAbsolute, resolve } from 'node:path';
+import { relativeInside } from '../common/paths.js';
+import type { UserError } from '../common/errors.js';
 
-export const ANNOTATION_LIMIT = 10;
+const ANNOTATION_LIMIT = 10;
 
 export interface Annotation {
   message: string;
@@ -17,12 +18,12 @@ export interface Annotation {
 /**
  * Annotation paths are relative to the repository root. Job errors name files relative to the
  * workspace (the job's root); a path outside it is left off.
+ * @testOnly
  */
 export function annotationPath(file: string, workspace: string): string | undefined {
   const abs = isAbsolute(file) ? file : resolve(workspace, file);
-  const rel = relative(workspace, abs);
-  if (rel === '' || rel.startsWith('..') || isAbsolute(rel)) return undefined;
-  return rel.split(sep).join('/');
+  const rel = relativeInside(workspace, abs);
+  return rel === null || rel === '' ? undefined : rel;
 }
 
 export function toAnnotation(e: UserError, workspace: string): Annotation {

@@ -6,11 +6,11 @@ import type { getOctokit } from '@actions/github';
 
 export type Octokit = ReturnType<typeof getOctokit>;
 
-/** GitHub rejects longer comment bodies with 422. */
+/** GitHub rejects longer comment bodies with 422. @testOnly */
 export const COMMENT_LIMIT = 65_536;
 
 /** The login the default `github.token` posts as. */
-export const ACTIONS_BOT_LOGIN = 'github-actions[bot]';
+const ACTIONS_BOT_LOGIN = 'github-actions[bot]';
 
 /**
  * One marker per config, so two steps checking two configs keep two comments. `--` cannot
@@ -35,6 +35,7 @@ export interface CommentRecord {
  * Ours when the marker is the body's first line (a quote starts with "> ") AND the author is
  * the Actions bot account (a bot type cannot be taken by a person; the login is compared
  * without regard to case). A deleted author (`user: null`) is never ours.
+ * @testOnly
  */
 export function isOurComment(c: CommentRecord, marker: string, botLogin: string = ACTIONS_BOT_LOGIN): boolean {
   const user = c.user;

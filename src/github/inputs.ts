@@ -5,8 +5,10 @@
  */
 import { realpathSync, statSync } from 'node:fs';
 import { isAbsolute, join, relative, resolve, sep } from 'node:path';
-import { resolveInside } from '../config/paths.js';
-import { UserError } from '../errors.js';
+import { resolveInside } from '../common/paths.js';
+import { quote } from '../common/escape.js';
+import { UserError } from '../common/errors.js';
+import { MAX_WORKERS, parseWorkerCount } from '../common/workers.js';
 
 /** Reads one input as the runner passes it (`INPUT_<NAME>`, hyphens kept), trimmed. */
 export type InputReader = (name: string) => string;
@@ -30,25 +32,24 @@ export interface ActionInputs {
 const TRUE = ['true', 'True', 'TRUE'];
 const FALSE = ['false', 'False', 'FALSE'];
 
-/** The same spellings `core.getBooleanInput` accepts, with a message that names the input and the value. */
+/** The same spellings `core.getBooleanInput` accepts, with a message that names the input and the value. @testOnly */
 export function parseBooleanInput(name: string, value: string): boolean {
   if (TRUE.includes(value)) return true;
   if (FALSE.includes(value)) return false;
-  throw new UserError(`input ${name}: expected true or false, found ${JSON.stringify(value)}`, { key: name });
+  throw new UserError(`input ${name}: expected true or false, found ${quote(value)}`, { key: name });
 }
 
-export const MAX_WORKERS = 256;
-
-/** '' means every core; otherwise a whole number from 1 to MAX_WORKERS. */
+/** '' means every core; otherwise a whole number from 1 to MAX_WORKERS. @testOnly */
 export function parseWorkersInput(value: string): number | null {
   if (value === '') return null;
-  if (!/^[0-9]+$/.test(value) || Number(value) < 1 || Number(value) > MAX_WORKERS) {
+  const n = parseWorkerCount(value);
+  if (n === null) {
     throw new UserError(
-      `input workers: expected a whole number from 1 to ${MAX_WORKERS}, or empty for every core, found ${JSON.stringify(value)}`,
+      `input workers: expected a whole number from 1 to ${MAX_WORKERS}, or empty for every core, found ${quote(value)}`,
       { key: 'workers' },
     );
   }
-  return Number(value);
+  return n;
 }
 
 function workspaceRoot(env: NodeJS.ProcessEnv): string {
@@ -59,7 +60,7 @@ function workspaceRoot(env: NodeJS.ProcessEnv): string {
     );
   }
   if (!isAbsolute(ws)) {
-    throw new UserError(`GITHUB_WORKSPACE must be an absolute path, found ${JSON.stringify(ws)}`);
+    throw new UserError(`GITHUB_WORKSPACE must be an absolute path, found ${quote(ws)}`);
   }
   try {
     return realpathSync(ws);
@@ -88,15 +89,14 @@ export function readInputs(get: InputReader, env: NodeJS.ProcessEnv = process.en
     st = statSync(workingDirectory);
   } catch {
     throw new UserError(
-      `input working-directory: ${JSON.stringify(wdWritten)} does not exist in the workspace (looked for ${workingDirectory})`,
+      `input working-directory: ${quote(wdWritten)} does not exist in the workspace (looked for ${workingDirectory})`,
       { key: 'working-directory' },
     );
   }
   if (!st.isDirectory()) {
-    throw new UserError(
-      `input working-directory: ${JSON.stringify(wdWritten)} is not a directory (${workingDirectory})`,
-      { key: 'working-directory' },
-    );
+    throw new UserError(`input working-directory: ${quote(wdWritten)} is not a directory (${workingDirectory})`, {
+      key: 'working-directory',
+    });
   }
 
   const configWritten = get('config') || 'neuron-budget.yml';
@@ -106,7 +106,7 @@ export function readInputs(get: InputReader, env: NodeJS.ProcessEnv = process.en
   return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers };
 }
 
-/** A file-system-safe folder name for one config, so two steps with different configs never share files. */
+/** A file-system-safe folder name for one config, so two steps with different configs never share files. @testOnly */
 export function configSlug(configKey: string): string {
   return configKey.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^\.+/, '_') || 'config';
 }

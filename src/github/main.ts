@@ -7,7 +7,9 @@ import * as core from '@actions/core';
 import { context } from '@actions/github';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { isUserError, type UserError } from '../errors.js';
+import { escapeText } from '../common/escape.js';
+import { isUserError, MAX_MESSAGE, type UserError } from '../common/errors.js';
+import { EXIT } from '../common/exit-codes.js';
 import { writeFileAtomic } from '../files/atomic.js';
 import type { ProgressEvent } from '../search/types.js';
 import { runJob, type JobResult } from '../run.js';
@@ -16,14 +18,11 @@ import { commentBody, commentMarker, upsertComment } from './comment.js';
 import { readInputs, outputFolder, type ActionInputs } from './inputs.js';
 import { failureMarkdown, fitSummary } from './markdown.js';
 import { makeClient, retryBaseFromEnv } from './octokit.js';
-import { throttledProgress } from './progress.js';
+import { throttledProgress } from '../report/progress.js';
+import { logUntrusted } from './log.js';
 
 /** Verdicts that fail the step; the rest pass it. */
 const FAILING = new Set(['fail', 'inconclusive']);
-
-/** Exit codes shared with the command line: 2 bad input, 3 internal error (a bug). */
-const EXIT_BAD_INPUT = 2;
-const EXIT_INTERNAL = 3;
 
 function runUrl(): string | null {
   const { serverUrl } = context;
@@ -45,7 +44,7 @@ async function writeCommentFile(path: string, markdown: string): Promise<void> {
   try {
     await writeFileAtomic(path, markdown);
   } catch (e) {
-    core.warning(`Could not write ${path}: ${(e as Error).message}`);
+    core.warning(`Could not write ${escapeText(path)}: ${escapeText((e as Error).message)}`);
   }
 }
 
@@ -152,8 +151,8 @@ async function failBadInput(e: UserError, inputs: ActionInputs | null): Promise<
   for (const a of annotated) {
     core.error(a.message, { title: 'neuron-budget', file: a.file, startLine: a.startLine, startColumn: a.startColumn });
   }
-  for (const a of logged) core.info(`error: ${a.message}`);
-  process.exitCode = EXIT_BAD_INPUT;
+  for (const a of logged) logUntrusted(`error: ${a.message}`);
+  process.exitCode = EXIT.badInput;
   const md = failureMarkdown(e.message, 'input');
   await writeSummary(md);
   // A stale "pass" must not linger on the pull request while the config is broken.
@@ -162,9 +161,9 @@ async function failBadInput(e: UserError, inputs: ActionInputs | null): Promise<
 
 async function failInternal(e: unknown, inputs: ActionInputs | null): Promise<void> {
   const err = e instanceof Error ? e : new Error(String(e));
-  core.error(`internal error: ${err.message}`, { title: 'neuron-budget' });
-  if (err.stack) core.info(err.stack);
-  process.exitCode = EXIT_INTERNAL;
+  core.error(`internal error: ${escapeText(err.message, MAX_MESSAGE)}`, { title: 'neuron-budget' });
+  if (err.stack) logUntrusted(err.stack);
+  process.exitCode = EXIT.internal;
   const md = failureMarkdown(err.message, 'internal');
   await writeSummary(md);
   if (inputs) await postComment(inputs, md);
@@ -180,7 +179,9 @@ export async function run(): Promise<void> {
     const modelPath = join(folder, 'model.json');
     const mode = inputs.updateBaseline ? 'baseline' : 'check';
 
-    core.info(`neuron-budget: ${mode} with ${inputs.configKey} (workspace ${inputs.workspace})`);
+    core.info(
+      `neuron-budget: ${mode} with ${escapeText(inputs.configKey)} (workspace ${escapeText(inputs.workspace)})`,
+    );
     let phase: ProgressEvent['phase'] | null = null;
     const progress = (): ((ev: ProgressEvent) => void) => throttledProgress((line) => core.info(line));
     let print = progress();
@@ -209,26 +210,24 @@ export async function run(): Promise<void> {
           }
           print(ev);
         },
-        log: (line) => core.info(line),
+        log: (line) => logUntrusted(line),
       });
     } finally {
       core.endGroup();
     }
 
     setOutputs(result, reportPath);
-    core.info(result.text);
+    logUntrusted(result.text);
     // The step's result comes from the verdict alone, decided before any comment traffic.
     const verdict = result.verdict;
-    if (verdict === null) {
-      core.info('No verdict: this build runs the data stage only.');
-    } else if (FAILING.has(verdict)) {
+    if (FAILING.has(verdict)) {
       const reason = result.report.reasons[0];
-      core.setFailed(`neuron-budget verdict: ${verdict}${reason ? ` (${reason})` : ''}`);
+      core.setFailed(`neuron-budget verdict: ${verdict}${reason ? ` (${escapeText(reason, MAX_MESSAGE)})` : ''}`);
     } else {
       core.info(`neuron-budget verdict: ${verdict}`);
     }
     if (result.baselineWritten)
-      core.info(`Baseline written to ${result.baselineWritten}; commit it to accept this result.`);
+      core.info(`Baseline written to ${escapeText(result.baselineWritten)}; commit it to accept this result.`);
 
     // None of these throw: they report trouble as warnings and leave the result alone.
     await writeCommentFile(join(folder, 'comment.md'), result.markdown);

@@ -1,12 +1,9 @@
 /** The few pieces of markdown the shell writes itself (the report layout belongs to src/report/). */
+import { escapeMarkdown } from '../common/escape.js';
+import { MAX_MESSAGE } from '../common/errors.js';
 
 /** The runner refuses a step summary over 1 MiB; leave room for the note. */
-export const SUMMARY_LIMIT = 1_000_000;
-
-/** Escapes text from the repository or an error so it renders as text, never as HTML or markup. */
-export function escapeText(s: string): string {
-  return s.replace(/[&<>"'`|*_[\]\\]/g, (c) => `&#${c.charCodeAt(0)};`);
-}
+const SUMMARY_LIMIT = 1_000_000;
 
 /** Shown in the summary (and the pull-request comment) when the job could not run. */
 export function failureMarkdown(message: string, kind: 'input' | 'internal'): string {
@@ -18,7 +15,7 @@ export function failureMarkdown(message: string, kind: 'input' | 'internal'): st
     kind === 'input'
       ? 'No verdict was reached, so this change has not been checked. The error is also annotated on the file.'
       : 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.';
-  return `${head}\n\n<pre>${escapeText(message)}</pre>\n\n${tail}\n`;
+  return `${head}\n\n<pre>${escapeMarkdown(message, MAX_MESSAGE)}</pre>\n\n${tail}\n`;
 }
 
 export function fitSummary(markdown: string, limit = SUMMARY_LIMIT): string {

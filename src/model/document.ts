@@ -6,7 +6,7 @@ import type { MetricName, TargetConfig, Task } from '../config/types.js';
 import type { Encoding, FeatureEncoding } from '../data/types.js';
 import type { NetworkJson } from '../nn/index.js';
 import type { Witness } from '../search/types.js';
-import { UserError } from '../errors.js';
+import { UserError } from '../common/errors.js';
 
 export const MODEL_SCHEMA = 'neuron-budget/model@1';
 

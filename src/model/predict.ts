@@ -1,5 +1,5 @@
 /** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
-import { UserError } from '../errors.js';
+import { UserError } from '../common/errors.js';
 import { predict } from '../nn/index.js';
 import type { ModelDocument } from './document.js';
 

@@ -1,6 +1,6 @@
 /** Metrics of a network's logits against encoded targets. Regression errors are in the target's original units. */
-import type { MetricName, TargetConfig } from '../config/types.js';
-import { HEAD_LINEAR, HEAD_LOGISTIC, rowLoss } from './reference.js';
+import type { MetricName } from '../config/types.js';
+import { HEAD_LINEAR, HEAD_LOGISTIC, rowLoss } from './kernel/reference.js';
 
 export interface Metrics {
   /** Mean per-row loss (cross-entropy for classification, ½·squared error in standardised units for regression). */
@@ -85,10 +85,4 @@ export function metricValue(m: Metrics, name: MetricName): number {
     case 'max-abs-error':
       return m.maxAbsError;
   }
-}
-
-/** True when `value` meets the target (accuracy: >= threshold; error metrics: <= threshold). NaN never does. */
-export function meetsTarget(value: number, target: TargetConfig): boolean {
-  if (!(value === value)) return false;
-  return target.metric === 'accuracy' ? value >= target.threshold : value <= target.threshold;
 }

@@ -1,53 +1,21 @@
-/**
- * Network shape, parameter layout and initialisation.
- *
- * All parameters live in one Float64Array, in this order:
- *   W1  inputs × width  (row i holds input i's weights to every hidden neuron)
- *   b1  width
- *   W2  width × outputs (row j holds hidden neuron j's weights to every output)
- *   b2  outputs
- * Rows are contiguous so the forward and backward loops run along memory.
- */
+/** Initialisation, resizing and the JSON form of a network (its parameter layout is in kernel/layout.ts). */
 import type { Activation, Init } from '../config/types.js';
-import type { Head, Network, NetworkJson, Rng } from './index.js';
-import { detExp, detLog } from './detmath.js';
-
-export interface Shape {
-  readonly inputs: number;
-  readonly width: number;
-  readonly outputs: number;
-  readonly activation: Activation;
-  readonly head: Head;
-}
-
-export interface Layout {
-  w1: number;
-  b1: number;
-  w2: number;
-  b2: number;
-  size: number;
-}
-
-export function layoutOf(s: { inputs: number; width: number; outputs: number }): Layout {
-  const w1 = 0;
-  const b1 = s.inputs * s.width;
-  const w2 = b1 + s.width;
-  const b2 = w2 + s.width * s.outputs;
-  return { w1, b1, w2, b2, size: b2 + s.outputs };
-}
+import type { Network, NetworkJson, Rng } from './types.js';
+import { layoutOf, type Layout, type Shape } from './kernel/layout.js';
+import { detExp, detLog } from './kernel/detmath.js';
 
 /** The activation's usual initialisation. */
 export function defaultInit(activation: Activation): Init {
   return activation === 'relu' ? 'he' : 'nguyen-widrow';
 }
 
-/** Nguyen-Widrow scale β = 0.7 · H^(1/n) (Nguyen & Widrow 1990). */
+/** Nguyen-Widrow scale β = 0.7 · H^(1/n) (Nguyen & Widrow 1990). @testOnly */
 export function nguyenWidrowBeta(width: number, inputs: number): number {
   return 0.7 * detExp(detLog(width) / inputs);
 }
 
 /** Standard normal draw by the Marsaglia polar method (no trigonometry, so it stays deterministic). */
-export function gaussian(rng: Rng): number {
+function gaussian(rng: Rng): number {
   for (;;) {
     const u = 2 * rng.nextDouble() - 1;
     const v = 2 * rng.nextDouble() - 1;

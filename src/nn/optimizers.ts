@@ -5,11 +5,11 @@
 import type { Optimizer } from '../config/types.js';
 
 /** iRprop+ defaults (Riedmiller & Braun 1993; Igel & Hüsken 2003). */
-export const IRPROP_DEFAULTS = { etaPlus: 1.2, etaMinus: 0.5, delta0: 0.1, deltaMin: 1e-6, deltaMax: 50 } as const;
+const IRPROP_DEFAULTS = { etaPlus: 1.2, etaMinus: 0.5, delta0: 0.1, deltaMin: 1e-6, deltaMax: 50 } as const;
 /** Adam defaults (Kingma & Ba 2015). */
-export const ADAM_DEFAULTS = { learningRate: 0.001, beta1: 0.9, beta2: 0.999, epsilon: 1e-8 } as const;
+const ADAM_DEFAULTS = { learningRate: 0.001, beta1: 0.9, beta2: 0.999, epsilon: 1e-8 } as const;
 /** Backpropagation with momentum: ε 0.1, α 0.9, the values of Rumelhart, Hinton & Williams' 1986 symmetry run (from memory). */
-export const BACKPROP_DEFAULTS = { learningRate: 0.1, momentum: 0.9 } as const;
+const BACKPROP_DEFAULTS = { learningRate: 0.1, momentum: 0.9 } as const;
 
 export interface OptimizerSettings {
   /** Adam and backprop step size (on the mean gradient). */
@@ -39,7 +39,7 @@ function remap(old: Float64Array, map: Int32Array, newSize: number, fresh: numbe
   return out;
 }
 
-/** iRprop+ (Igel & Hüsken): on a sign change, revert the last step only if the error rose. */
+/** iRprop+ (Igel & Hüsken): on a sign change, revert the last step only if the error rose. @testOnly */
 export class IRpropPlus implements Updater {
   readonly kind = 'irprop+' as const;
   private delta: Float64Array;
@@ -112,7 +112,7 @@ export class IRpropPlus implements Updater {
 }
 
 /** Adam (Kingma & Ba 2015), Algorithm 1, on the mean gradient of the batch. */
-export class Adam implements Updater {
+class Adam implements Updater {
   readonly kind = 'adam' as const;
   private m: Float64Array;
   private v: Float64Array;
@@ -161,7 +161,7 @@ export class Adam implements Updater {
 }
 
 /** Backpropagation with momentum: Δw(t) = −ε ∂E/∂w + α Δw(t−1), on the mean gradient (Rumelhart, Hinton & Williams 1986). */
-export class Momentum implements Updater {
+class Momentum implements Updater {
   readonly kind = 'backprop' as const;
   private prevStep: Float64Array;
   constructor(

@@ -3,24 +3,25 @@
  */
 import type { Init } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
-import type { Head, NetworkJson, Rng, StopReason, TrainOptions, TrainRecord, Trainer } from './index.js';
-import { defaultKernel } from './select.js';
-import type { Kernel } from './kernel.js';
-import { computeMetrics, meetsTarget, metricValue, targetMetric, type Metrics } from './metrics.js';
+import type { Head, NetworkJson, Rng, StopReason, TrainOptions, TrainRecord, Trainer } from './types.js';
+import { defaultKernel } from './kernel/select.js';
+import type { Kernel } from './kernel/kernel.js';
+import { computeMetrics, metricValue, targetMetric, type Metrics } from './metrics.js';
+import { meetsThreshold } from '../common/metric.js';
 import {
   defaultInit,
   describe,
   fromJson,
   initHiddenNeuron,
   initParams,
-  layoutOf,
   resizeIndexMap,
   resizeParams,
   toJson,
-  type Shape,
 } from './network.js';
+import { layoutOf, type Shape } from './kernel/layout.js';
 import { makeUpdater, type OptimizerSettings, type Updater } from './optimizers.js';
-import { headCode, rowLoss } from './reference.js';
+import { headCode, rowLoss } from './kernel/reference.js';
+import { StallDetector } from './stall.js';
 
 /**
  * Flat-spot elimination (Fahlman 1988, "An empirical study of learning speed in
@@ -42,37 +43,6 @@ export interface TrainerExtras {
   optimizerSettings?: OptimizerSettings;
   /** Compute kernel; default: the fastest available. */
   kernel?: Kernel;
-}
-
-/** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
-class StallDetector {
-  private readonly ring: Float64Array;
-  private count = 0;
-  private minSoFar = Infinity;
-  private errorAtStart = NaN;
-  constructor(
-    private readonly window: number,
-    private readonly threshold: number,
-  ) {
-    this.ring = new Float64Array(window + 1);
-  }
-  reset(): void {
-    this.count = 0;
-    this.minSoFar = Infinity;
-    this.errorAtStart = NaN;
-  }
-  /** Records the error of the current epoch; true when the error has flattened. */
-  record(error: number): boolean {
-    if (error < this.minSoFar) this.minSoFar = error;
-    const s = this.count++;
-    const w = this.window;
-    this.ring[s % (w + 1)] = this.minSoFar;
-    if (s === 0) this.errorAtStart = this.minSoFar;
-    if (s < w) return false;
-    const drop = this.ring[(s - w) % (w + 1)] - this.minSoFar;
-    if (!(this.errorAtStart > 0)) return !(drop > 0);
-    return drop / this.errorAtStart < this.threshold;
-  }
 }
 
 class NetworkTrainer implements Trainer {
@@ -168,7 +138,7 @@ class NetworkTrainer implements Trainer {
           break;
         }
         const m = this.targetMetricOnJudgedRows();
-        if (meetsTarget(m, options.target)) {
+        if (meetsThreshold(m, options.target)) {
           stop = 'reached';
           break;
         }
@@ -268,7 +238,7 @@ class NetworkTrainer implements Trainer {
     const validationMetric = metricValue(validation, metric);
     let stop: StopReason = 'max-epochs';
     if (!Number.isFinite(train.loss)) stop = 'diverged';
-    else if (meetsTarget(validationMetric, this.options.target)) stop = 'reached';
+    else if (meetsThreshold(validationMetric, this.options.target)) stop = 'reached';
     return { epochs: 0, stop, trainLoss: train.loss, trainMetric, validationMetric };
   }
 

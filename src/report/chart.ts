@@ -8,16 +8,16 @@
  * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
  * no value is left out of the chart (the table beside it still lists it).
  */
-import { formatMetric } from './format.js';
+import { formatMetric } from '../common/format.js';
 
 const SAFE_TEXT = /^[A-Za-z0-9 .,-]*$/;
 
-export function chartText(s: string): string {
+function chartText(s: string): string {
   if (!SAFE_TEXT.test(s)) throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
   return `"${s}"`;
 }
 
-export function chartNumber(n: number): string {
+function chartNumber(n: number): string {
   const s = formatMetric(n);
   if (!/^-?\d+(\.\d+)?$/.test(s)) throw new Error(`not a chart number: ${n}`);
   return s;

@@ -4,9 +4,9 @@
  */
 import type { GateConfig } from '../config/types.js';
 import type { GateOutcome } from '../gate/evaluate.js';
-import type { Report } from './types.js';
+import type { Report, ReportDraft } from './types.js';
 
-export function withGate(report: Report, outcome: GateOutcome, gate: GateConfig): Report {
+export function withGate(report: ReportDraft, outcome: GateOutcome, gate: GateConfig): Report {
   const b = outcome.baseline;
   return {
     ...report,

@@ -10,17 +10,17 @@
 import type { DataChanges, HistoryEntry } from '../gate/types.js';
 import type { PruneStep } from '../search/types.js';
 import { countRange, metricRange, renderChart } from './chart.js';
-import { escapeMarkdown as md } from './escape.js';
+import { escapeMarkdown as md } from '../common/escape.js';
+import { higherIsBetter } from '../common/metric.js';
 import {
   formatCount,
   formatDelta,
   formatMetric,
   formatSeconds,
-  higherIsBetter,
   neurons,
   successRate,
   targetPhrase,
-} from './format.js';
+} from '../common/format.js';
 import type { Report } from './types.js';
 import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf, type ReportView, type WidthRow } from './view.js';
 
@@ -64,7 +64,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
 }
 
 function headline(view: ReportView): string {
-  const label = view.verdict === null ? 'DATA ONLY' : VERDICT_LABEL[view.verdict];
+  const label = VERDICT_LABEL[view.verdict];
   const lines = [`### neuron-budget: ${label}. ${md(view.headline)}`];
   if (view.otherReasons.length > 0) {
     lines.push('');
@@ -280,9 +280,10 @@ function changesList(changes: DataChanges, limits: DetailLimits): string {
     items.push(`Feature ${md(f.name)}: ${parts.join('; ')}.`);
   }
   for (const c of changes.categories) {
-    if (c.appeared.length > 0) items.push(`Feature ${md(c.feature)}: new categories ${c.appeared.map(md).join(', ')}.`);
+    if (c.appeared.length > 0)
+      items.push(`Feature ${md(c.feature)}: new categories ${c.appeared.map((s) => md(s)).join(', ')}.`);
     if (c.vanished.length > 0)
-      items.push(`Feature ${md(c.feature)}: categories gone ${c.vanished.map(md).join(', ')}.`);
+      items.push(`Feature ${md(c.feature)}: categories gone ${c.vanished.map((s) => md(s)).join(', ')}.`);
   }
   if (changes.changed && items.length === (changes.file ? 2 : 1)) {
     items.push('No class, column or feature moved beyond the thresholds.');

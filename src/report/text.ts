@@ -3,8 +3,16 @@
  * (long repository names are the one thing that may run over; they are never cut).
  */
 import type { DataChanges } from '../gate/types.js';
-import { escapeTerminal as plain } from './escape.js';
-import { formatCount, formatDelta, formatMetric, formatSeconds, neurons, successRate, targetPhrase } from './format.js';
+import { escapeText as plain } from '../common/escape.js';
+import {
+  formatCount,
+  formatDelta,
+  formatMetric,
+  formatSeconds,
+  neurons,
+  successRate,
+  targetPhrase,
+} from '../common/format.js';
 import type { Report } from './types.js';
 import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf } from './view.js';
 
@@ -13,7 +21,7 @@ export const TEXT_WIDTH = 80;
 export function renderText(report: Report): string {
   const view = viewOf(report);
   const out: string[] = [];
-  const label = view.verdict === null ? 'DATA ONLY' : VERDICT_LABEL[view.verdict];
+  const label = VERDICT_LABEL[view.verdict];
   out.push(...wrap(`neuron-budget: ${label}. ${plain(view.headline)}`, ''));
   for (const r of view.otherReasons) out.push(...wrap(plain(r), '  - ', '    '));
   out.push('');
@@ -142,15 +150,15 @@ function changeLines(ch: DataChanges): string[] {
   }
   for (const c of ch.categories) {
     if (c.appeared.length > 0)
-      lines.push(`feature ${plain(c.feature)}: new categories ${c.appeared.map(plain).join(', ')}`);
+      lines.push(`feature ${plain(c.feature)}: new categories ${c.appeared.map((s) => plain(s)).join(', ')}`);
     if (c.vanished.length > 0)
-      lines.push(`feature ${plain(c.feature)}: categories gone ${c.vanished.map(plain).join(', ')}`);
+      lines.push(`feature ${plain(c.feature)}: categories gone ${c.vanished.map((s) => plain(s)).join(', ')}`);
   }
   return lines;
 }
 
 /** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
-export function wrap(text: string, first: string, rest: string = first): string[] {
+function wrap(text: string, first: string, rest: string = first): string[] {
   const words = text.split(/ +/).filter((w) => w !== '');
   const lines: string[] = [];
   let line = first;

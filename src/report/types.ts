@@ -2,7 +2,8 @@ import type { MetricName, Task } from '../config/types.js';
 import type { PruneStep, SearchOutcome, WidthSummary } from '../search/types.js';
 import type { BaselineWidth, DataChanges, HistoryEntry } from '../gate/types.js';
 
-export type Verdict = 'pass' | 'fail' | 'improved' | 'new' | 'inconclusive';
+export type { Verdict } from '../gate/types.js';
+import type { Verdict } from '../gate/types.js';
 
 /**
  * The JSON report (CLI --report, action output `report`). Everything outside `timing`
@@ -11,15 +12,13 @@ export type Verdict = 'pass' | 'fail' | 'improved' | 'new' | 'inconclusive';
 export interface Report {
   schema: 'neuron-budget/report@1';
   tool: { name: 'neuron-budget'; version: string };
-  /** null only while the search has not run (data stage only). */
-  verdict: Verdict | null;
+  verdict: Verdict;
   reasons: string[];
   width: number | null;
   metric: { name: MetricName; value: number | null; threshold: number };
   baseline: {
     width: number | null;
     metric: number | null;
-    /** The fields below are filled by the gate (src/gate/report.ts). */
     /** Baseline file as written in the config. */
     file?: string;
     /** Success at the baseline's width: restarts that reached the target, restarts run. */
@@ -62,3 +61,6 @@ export interface Report {
   changes: DataChanges | null;
   timing: Record<string, number>;
 }
+
+/** The report while it is being assembled: everything but the gate's verdict. */
+export type ReportDraft = Omit<Report, 'verdict'>;

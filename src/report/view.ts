@@ -23,7 +23,7 @@ export interface WidthRow {
 }
 
 export interface ReportView {
-  verdict: Verdict | null;
+  verdict: Verdict;
   headline: string;
   otherReasons: string[];
   metricName: MetricName;
@@ -60,7 +60,7 @@ export function viewOf(report: Report): ReportView {
   const searchSeconds = report.timing['searchSeconds'];
   return {
     verdict: report.verdict,
-    headline: report.reasons[0] ?? (report.verdict === null ? 'Data loaded; no search was run.' : ''),
+    headline: report.reasons[0] ?? '',
     otherReasons: report.reasons.slice(1),
     metricName: report.metric.name,
     threshold: report.metric.threshold,

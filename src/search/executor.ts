@@ -25,7 +25,7 @@ export interface Executor {
 }
 
 /** Marks a worker thread started by the pool (the bundle checks it to act as the worker). */
-export const WORKER_MARK = 'neuron-budget/search-worker';
+const WORKER_MARK = 'neuron-budget/search-worker';
 
 export type WorkerRequest =
   /** `cancel` holds the id of the task the thread should give up (-1: none). */
@@ -124,13 +124,10 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
     return p;
   };
 
-  const start = (slot: Slot): void => {
-    const worker = new Worker(entry, { workerData: { role: WORKER_MARK } });
-    slot.worker = worker;
-    slot.busy = null;
-    const current = (): boolean => slot.worker === worker;
-    worker.on('message', (reply: WorkerReply) => {
-      if (!current()) return;
+  const startSlot = (): Slot => {
+    const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
+    const slot: Slot = { worker: new Worker(entry, { workerData: { role: WORKER_MARK } }), busy: null, cancel };
+    slot.worker.on('message', (reply: WorkerReply) => {
       slot.busy = null;
       const p = settle(reply.id);
       if (p !== undefined) {
@@ -140,23 +137,18 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
       pump();
     });
     const fail = (error: Error): void => {
-      if (!current() || closed) return;
+      if (closed) return;
       if (slot.busy !== null) settle(slot.busy)?.reject(error);
       slot.busy = null;
     };
-    worker.on('error', fail);
-    worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
+    slot.worker.on('error', fail);
+    slot.worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
     // The data's SharedArrayBuffers are shared with the thread, not copied.
-    const init: WorkerRequest = { type: 'init', data: shared, ctx, cancel: slot.cancel };
-    worker.postMessage(init);
+    const init: WorkerRequest = { type: 'init', data: shared, ctx, cancel };
+    slot.worker.postMessage(init);
+    return slot;
   };
-
-  for (let k = 0; k < size; k++) {
-    const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
-    const slot = { busy: null, cancel } as unknown as Slot;
-    start(slot);
-    slots.push(slot);
-  }
+  for (let k = 0; k < size; k++) slots.push(startSlot());
 
   const submit = <R extends TaskResult | PruneResult>(job: Job): Promise<R> =>
     new Promise<R>((resolve, reject) => {

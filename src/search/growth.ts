@@ -7,6 +7,7 @@
 import type { GrowthMode, TargetConfig } from '../config/types.js';
 import type { NetworkJson, StopReason } from '../nn/index.js';
 import type { TrainingOutcome, TrainingTask, WidthSummary } from './types.js';
+import { isBetter } from '../common/metric.js';
 import { wilsonInterval } from './wilson.js';
 
 export interface GrowthPlan {
@@ -195,10 +196,7 @@ export function decideGrowth(plan: GrowthPlan, target: TargetConfig, lookup: Res
   return { kind: 'decided', adequateWidth: null, widths, reachedAtAdequate: [], trainings: used.size, capHit: null };
 }
 
-export function higherIsBetter(target: TargetConfig): boolean {
-  return target.metric === 'accuracy';
-}
-
+/** @testOnly */
 export function median(values: readonly number[]): number | null {
   if (values.length === 0) return null;
   const s = [...values].sort((a, b) => a - b);
@@ -213,9 +211,8 @@ export function summarizeWidth(
   target: TargetConfig,
 ): WidthSummary {
   const finite = seen.map((s) => s.metric).filter((m) => Number.isFinite(m));
-  const up = higherIsBetter(target);
   let best: number | null = null;
-  for (const m of finite) if (best === null || (up ? m > best : m < best)) best = m;
+  for (const m of finite) if (best === null || isBetter(target.metric, m, best)) best = m;
   const reached = seen.filter((s) => s.reached).length;
   return {
     width,
@@ -236,6 +233,14 @@ export function summarizeWidth(
  */
 export function mergeOutcomes(plan: GrowthPlan, target: TargetConfig, results: Iterable<TaskResult>): GrowthDecision {
   const byKey = new Map<string, TaskResult>();
-  for (const r of results) byKey.set(taskKey(r), r);
+  for (const r of results) {
+    const key = taskKey(r);
+    const seen = byKey.get(key);
+    // Every task is a pure function of (data, settings, task): two copies that differ mean mixed inputs.
+    if (seen !== undefined && JSON.stringify(seen) !== JSON.stringify(r)) {
+      throw new Error(`two different results for the task at width ${r.width}, restart ${r.restart}`);
+    }
+    byKey.set(key, r);
+  }
   return decideGrowth(plan, target, (t) => byKey.get(taskKey(t)));
 }

@@ -13,6 +13,6 @@ export {
 } from './task.js';
 export type { SearchContext, PruneJob, PruneResult } from './task.js';
 export { wilsonInterval } from './wilson.js';
-export { runSearchWorker, isSearchWorker } from './worker.js';
-export { shareDataset, WORKER_MARK } from './executor.js';
+export { runSearchWorker } from './worker.js';
+export { shareDataset } from './executor.js';
 export type * from './types.js';

@@ -9,7 +9,9 @@ import type { EncodedDataset } from '../data/types.js';
 import type { TrainOptions } from '../nn/index.js';
 import { inThreadExecutor, workerPoolExecutor } from './executor.js';
 import type { Executor } from './executor.js';
-import { decideGrowth, higherIsBetter, planTasks, taskFor, taskKey } from './growth.js';
+import { targetShort } from '../common/format.js';
+import { isBetter } from '../common/metric.js';
+import { decideGrowth, planTasks, taskFor, taskKey } from './growth.js';
 import type { GrowthDecision, GrowthPlan, TaskResult } from './growth.js';
 import { DEFAULT_PRUNE_CANDIDATES, DEFAULT_STALL, pickWitness } from './task.js';
 import type { PruneResult, SearchContext } from './task.js';
@@ -75,15 +77,11 @@ function span(from: number, to: number): string {
   return from === to ? `width ${from}` : `widths ${from}–${to}`;
 }
 
-function targetText(target: TargetConfig): string {
-  return `${target.metric} ${higherIsBetter(target) ? '≥' : '≤'} ${target.threshold}`;
-}
-
 function notFoundNote(plan: GrowthPlan, target: TargetConfig, widths: WidthSummary[]): string {
   const best = widths.map((w) => `${w.width}: ${fmt(w.best)}`).join(', ');
   return (
     `No width from ${plan.minWidth} to ${plan.maxWidth} had ${plan.required} of ${plan.restarts} restarts reach ` +
-    `${targetText(target)}; best validation ${target.metric} per width: ${best}.`
+    `${targetShort(target.metric, target.threshold)}; best validation ${target.metric} per width: ${best}.`
   );
 }
 
@@ -112,7 +110,6 @@ export async function runSearch(
   const executor: Executor =
     size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
   const deadline = search.timeBudget === null ? Number.POSITIVE_INFINITY : t0 + search.timeBudget * 1000;
-  const up = higherIsBetter(target);
   let bestSoFar: number | null = null;
   const progress = (e: ProgressEvent): void => options.onProgress?.(e);
 
@@ -145,10 +142,7 @@ export async function runSearch(
       const key = taskKey(done);
       inflight.delete(key);
       results.set(key, done);
-      if (
-        Number.isFinite(done.metric) &&
-        (bestSoFar === null || (up ? done.metric > bestSoFar : done.metric < bestSoFar))
-      ) {
+      if (Number.isFinite(done.metric) && (bestSoFar === null || isBetter(target.metric, done.metric, bestSoFar))) {
         bestSoFar = done.metric;
       }
       progress({ phase: 'growth', width: done.finalWidth, restart: done.restart, epoch: done.epochs, best: bestSoFar });

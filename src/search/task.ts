@@ -5,7 +5,9 @@
  */
 import type { TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
-import { createTrainer, meetsTarget, rngFor, trainerFromNetwork } from '../nn/index.js';
+import { meetsThreshold } from '../common/metric.js';
+import { rngFor } from '../common/random.js';
+import { createTrainer, trainerFromNetwork } from '../nn/index.js';
 import type { NetworkJson, Trainer, TrainOptions, TrainRecord } from '../nn/index.js';
 import type { GrowthPlan, Segment, TaskResult } from './growth.js';
 import type { PruneStep, TrainingTask } from './types.js';
@@ -35,7 +37,7 @@ export const DEFAULT_PRUNE_CANDIDATES = 3;
 
 function reachedBy(rec: TrainRecord, target: TargetConfig): boolean {
   if (rec.stop === 'diverged') return false;
-  return rec.stop === 'reached' || meetsTarget(rec.validationMetric, target);
+  return rec.stop === 'reached' || meetsThreshold(rec.validationMetric, target);
 }
 
 const never = (): boolean => false;
@@ -45,17 +47,18 @@ function divergedReason(width: number, epochs: number): string {
 }
 
 /**
- * Train the task's network and keep the trainer (the prune phase may continue from it).
+ * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
+ * null only when `cancelled` said so (the answer was no longer needed).
  * In-place growth (Dynamic Node Creation) starts at the task's width and gives every
  * width up to max-epochs; a neuron is added when the error curve flattens (the stall
  * trigger) or that budget runs out, until the target is reached or max-width is hit.
  */
-export function growTrainer(
+export function runTask(
   data: EncodedDataset,
   ctx: SearchContext,
   task: TrainingTask,
   cancelled: () => boolean = never,
-): { trainer: Trainer; result: TaskResult } | null {
+): TaskResult | null {
   const { plan, train } = ctx;
   const inPlace = plan.growth === 'in-place';
   const rng = rngFor(ctx.seed, task.width, task.restart);
@@ -74,37 +77,21 @@ export function growTrainer(
     if (done) {
       const diverged = rec.stop === 'diverged';
       return {
-        trainer,
-        result: {
-          width: task.width,
-          restart: task.restart,
-          reached,
-          stop: reached ? 'reached' : rec.stop,
-          epochs,
-          metric: rec.validationMetric,
-          finalWidth: width,
-          segments,
-          network: reached ? trainer.snapshot() : null,
-          reason: diverged ? divergedReason(width, epochs) : null,
-        },
+        width: task.width,
+        restart: task.restart,
+        reached,
+        stop: reached ? 'reached' : rec.stop,
+        epochs,
+        metric: rec.validationMetric,
+        finalWidth: width,
+        segments,
+        network: reached ? trainer.snapshot() : null,
+        reason: diverged ? divergedReason(width, epochs) : null,
       };
     }
     // Stalled (or out of epochs at this width): add a neuron that leaves the function unchanged and keep training.
     trainer.addNeuron(rng);
   }
-}
-
-/**
- * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
- * null only when `cancelled` said so (the answer was no longer needed).
- */
-export function runTask(
-  data: EncodedDataset,
-  ctx: SearchContext,
-  task: TrainingTask,
-  cancelled: () => boolean = never,
-): TaskResult | null {
-  return growTrainer(data, ctx, task, cancelled)?.result ?? null;
 }
 
 export interface PruneJob {
@@ -158,7 +145,7 @@ export function runPruneJob(data: EncodedDataset, ctx: SearchContext, job: Prune
       const rec = trainer.run(ctx.pruneEpochs);
       trainings++;
       const after = rec.stop === 'diverged' ? Number.NaN : trainer.evaluate().validationMetric;
-      const ok = Number.isFinite(after) && meetsTarget(after, target);
+      const ok = Number.isFinite(after) && meetsThreshold(after, target);
       steps.push({ restart: job.task.restart, width, neuron: j, metricBefore: metric, metricAfter: after, kept: ok });
       if (ok) {
         metric = after;

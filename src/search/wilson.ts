@@ -4,7 +4,7 @@
  */
 
 /** Two-sided 95% normal quantile. */
-export const Z95 = 1.959964;
+const Z95 = 1.959964;
 
 export function wilsonInterval(successes: number, trials: number, z: number = Z95): [number, number] {
   if (trials <= 0) return [0, 1];

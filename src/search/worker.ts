@@ -2,17 +2,11 @@
  * The worker-thread side of the pool. A bundle calls runSearchWorker() when it starts
  * as a worker (`!isMainThread`); the thread then answers task messages until terminated.
  */
-import { parentPort, workerData } from 'node:worker_threads';
+import { parentPort } from 'node:worker_threads';
 import type { EncodedDataset } from '../data/types.js';
-import { WORKER_MARK } from './executor.js';
 import type { WorkerReply, WorkerRequest } from './executor.js';
 import { runPruneJob, runTask } from './task.js';
 import type { SearchContext } from './task.js';
-
-/** True when this thread was started by the search pool. */
-export function isSearchWorker(): boolean {
-  return parentPort !== null && (workerData as { role?: unknown } | null)?.role === WORKER_MARK;
-}
 
 export function runSearchWorker(): void {
   const port = parentPort;

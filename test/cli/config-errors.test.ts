@@ -109,10 +109,11 @@ const cases: Case[] = [
     says: ['target', 'target.threshold'],
   },
   {
+    // data.task is auto, so the threshold is known to be an accuracy only once the data are read.
     name: 'accuracy threshold written as a percentage',
     config: GOOD.replace('threshold: 0.9', 'threshold: 95'),
-    at: 'neuron-budget.yml:5:14:',
-    says: ['target.threshold', 'found 95'],
+    at: 'neuron-budget.yml:5:3:',
+    says: ['target.threshold', 'found 95', 'read as classification'],
   },
   {
     name: 'metric that does not suit the task',

@@ -170,9 +170,20 @@ describe('ajv and the validator agree on boundary values of every key', () => {
         false,
       ],
       [{ data: { path: 'a.csv', target: 'c', task: 'regression' }, target: { threshold: 5 } }, true],
-      [{ data: { path: 'a.csv', target: 'c' }, target: { threshold: 5 } }, false],
+      // With data.task auto and no metric, the metric follows the task found in the data: a threshold
+      // of 5 may be an rmse, so the file is valid; the data stage checks it against the task it finds.
+      [{ data: { path: 'a.csv', target: 'c' }, target: { threshold: 5 } }, true],
+      [{ data: { path: 'a.csv', target: 'c', task: 'classification' }, target: { threshold: 5 } }, false],
       [{ data: { path: 'a.csv', target: 'c' }, target: { metric: 'mae', threshold: 5 } }, true],
-      [{ data: { path: 'a.csv', target: 'c' }, target: { threshold: 0.9 }, gate: { 'metric-tolerance': 1 } }, false],
+      [{ data: { path: 'a.csv', target: 'c' }, target: { threshold: 0.9 }, gate: { 'metric-tolerance': 1 } }, true],
+      [
+        {
+          data: { path: 'a.csv', target: 'c', task: 'classification' },
+          target: { threshold: 0.9 },
+          gate: { 'metric-tolerance': 1 },
+        },
+        false,
+      ],
       [
         {
           data: { path: 'a.csv', target: 'c' },

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, test } from 'vitest';
 import { loadConfig, parseConfig } from '../../src/config/index.js';
-import { UserError } from '../../src/errors.js';
+import { UserError } from '../../src/common/errors.js';
 
 const root = mkdtempSync(join(tmpdir(), 'neuron-budget-config-'));
 afterAll(() => rmSync(root, { recursive: true, force: true }));
@@ -209,7 +209,13 @@ describe('each rule names the key, what was expected, what was found, and where'
     ['enum typo', `${MINIMAL}search:\n  optimizer: irprop\n`, 'search.optimizer', 'did you mean "irprop+"', 'irprop'],
     ['enum of wrong type', `${MINIMAL}search:\n  growth: 3\n`, 'search.growth', 'one of fresh, in-place', '3'],
     ['threshold zero', MINIMAL.replace('threshold: 0.95', 'threshold: 0'), 'target.threshold', 'above 0', '0'],
-    ['accuracy above 1', MINIMAL.replace('threshold: 0.95', 'threshold: 95'), 'target.threshold', 'at most 1', '95'],
+    [
+      'accuracy above 1',
+      MINIMAL.replace('threshold: 0.95', 'metric: accuracy\n  threshold: 95'),
+      'target.threshold',
+      'at most 1',
+      '95',
+    ],
     [
       'metric for the other task',
       MINIMAL.replace('target: condition\n', 'target: condition\n  task: regression\n').replace(
@@ -313,7 +319,13 @@ describe('each rule names the key, what was expected, what was found, and where'
       'over the budget',
       '2',
     ],
-    ['accuracy tolerance of 1', `${MINIMAL}gate:\n  metric-tolerance: 1\n`, 'gate.metric-tolerance', 'below 1', '1'],
+    [
+      'accuracy tolerance of 1',
+      `${MINIMAL.replace('threshold: 0.95', 'metric: accuracy\n  threshold: 0.95')}gate:\n  metric-tolerance: 1\n`,
+      'gate.metric-tolerance',
+      'below 1',
+      '1',
+    ],
     ['empty value', `${MINIMAL}search:\n  seed:\n`, 'search.seed', 'found nothing', 'seed:'],
     ['section as a list', `${MINIMAL}search: [1, 2]\n`, 'search', 'found a list', '[1, 2]'],
     ['unknown key', `${MINIMAL}search:\n  restart: 3\n`, 'search.restart', 'did you mean "restarts"', 'restart:'],

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { loadData } from '../../src/data/index.js';
-import { UserError } from '../../src/errors.js';
+import { UserError } from '../../src/common/errors.js';
 import { tempDir, withFile } from './make-config.js';
 
 type Extra = Record<string, unknown>;

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { loadData } from '../../src/data/index.js';
-import { UserError } from '../../src/errors.js';
+import { UserError } from '../../src/common/errors.js';
 import { tempDir, withFile } from './make-config.js';
 
 interface Table {

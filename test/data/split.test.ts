@@ -1,21 +1,22 @@
 import { describe, expect, it } from 'vitest';
-import { seededUniform, splitMix64, splitRows, xoshiro128ss } from '../../src/data/split.js';
+import { SplitMix64, Xoshiro128StarStar, xoshiroFromSeed } from '../../src/common/random.js';
+import { splitRows } from '../../src/data/split.js';
 
 const FILE = { path: '/x/d.csv', shown: 'd.csv' };
 
 describe('seeded generators', () => {
   it('xoshiro128** matches the reference implementation (Blackman & Vigna, v1.1)', () => {
     // First outputs for state [1, 2, 3, 4], as produced by the authors' reference C code.
-    const next = xoshiro128ss(1, 2, 3, 4);
-    const got = Array.from({ length: 10 }, () => next());
+    const g = new Xoshiro128StarStar(1, 2, 3, 4);
+    const got = Array.from({ length: 10 }, () => g.nextUint32());
     expect(got).toEqual([
       11520, 0, 5927040, 70819200, 2031721883, 1637235492, 1287239034, 3734860849, 3729100597, 4258142804,
     ]);
   });
 
   it('SplitMix64 (Steele, Lea & Flood 2014) gives the widely used vector for seed 1234567', () => {
-    const next = splitMix64(1234567n);
-    const got = Array.from({ length: 5 }, () => next());
+    const g = new SplitMix64(1234567n);
+    const got = Array.from({ length: 5 }, () => g.next());
     expect(got).toEqual([
       6457827717110365317n,
       3203168211198807973n,
@@ -26,7 +27,8 @@ describe('seeded generators', () => {
   });
 
   it('gives doubles in [0, 1) with a plausible mean', () => {
-    const u = seededUniform(7n);
+    const g = xoshiroFromSeed(7n);
+    const u = () => g.nextDouble();
     let sum = 0;
     let outside = 0;
     for (let i = 0; i < 100_000; i++) {

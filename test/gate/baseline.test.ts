@@ -14,7 +14,7 @@ import {
 } from '../../src/gate/baseline.js';
 import { findJsonSyntaxProblem } from '../../src/gate/json-position.js';
 import { HISTORY_CAP, type Baseline } from '../../src/gate/types.js';
-import { UserError } from '../../src/errors.js';
+import { UserError } from '../../src/common/errors.js';
 import { config, found, inconclusive, loaded, notFound, profile } from './build.js';
 
 const schema = JSON.parse(readFileSync(new URL('../../schema/baseline.schema.json', import.meta.url), 'utf8'));

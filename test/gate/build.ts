@@ -5,7 +5,7 @@
 import type { Config } from '../../src/config/types.js';
 import { testConfig, type ConfigOverrides } from '../helpers/config.js';
 import type { DataProfile, LoadedData } from '../../src/data/types.js';
-import type { Report } from '../../src/report/types.js';
+import type { ReportDraft } from '../../src/report/types.js';
 import type { PruneStep, SearchResult, WidthSummary } from '../../src/search/types.js';
 import { wilsonInterval } from '../../src/search/wilson.js';
 
@@ -109,12 +109,11 @@ export function dataReport(
   cfg: Config,
   p: DataProfile = profile(),
   fingerprint = 'a'.repeat(64),
-): Report {
+): ReportDraft {
   const validationRows = Math.round(p.rows * cfg.data.validation);
   return {
     schema: 'neuron-budget/report@1',
     tool: { name: 'neuron-budget', version: '0.1.0' },
-    verdict: null,
     reasons: [],
     width: result.width,
     metric: { name: cfg.target.metric, value: result.metric, threshold: cfg.target.threshold },

@@ -1,7 +1,8 @@
-import { mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { parseBaseline } from '../../src/gate/baseline.js';
 import { runGateStage, type GateStageInput } from '../../src/gate/stage.js';
 import type { SearchResult } from '../../src/search/types.js';
 import { config, found, loaded, notFound, profile } from './build.js';
@@ -24,6 +25,8 @@ function setup(): {
       config: cfg,
       baselinePath: path,
       baselineShown: 'neuron-budget.baseline.json',
+      // As the job does: the baseline as it is on disk before this run.
+      previous: existsSync(path) ? parseBaseline(readFileSync(path, 'utf8'), 'neuron-budget.baseline.json') : null,
       commit: null,
       date: new Date(Date.UTC(2026, 2, day)),
       toolVersion: '0.1.0',
@@ -66,7 +69,7 @@ describe('gate stage', () => {
     const s = setup();
     writeFileSync(s.path, '{"schema": "neuron-budget/baseline@1", ');
     for (const mode of ['check', 'baseline'] as const) {
-      await expect(runGateStage(s.input(mode, found(4, 0.96)))).rejects.toThrow(
+      await expect((async () => runGateStage(s.input(mode, found(4, 0.96))))()).rejects.toThrow(
         /^neuron-budget\.baseline\.json:1:\d+: the baseline is not valid JSON/,
       );
     }

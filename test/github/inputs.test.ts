@@ -2,7 +2,7 @@ import { mkdirSync, mkdtempSync, realpathSync, symlinkSync, writeFileSync } from
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { UserError } from '../../src/errors.js';
+import { UserError } from '../../src/common/errors.js';
 import { configSlug, outputFolder, parseBooleanInput, parseWorkersInput, readInputs } from '../../src/github/inputs.js';
 
 function workspace(): string {

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { EncodedDataset } from '../../src/data/types.js';
-import { isUserError } from '../../src/errors.js';
+import { isUserError } from '../../src/common/errors.js';
 import {
   encodeRows,
   MODEL_SCHEMA,

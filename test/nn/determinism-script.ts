@@ -5,10 +5,11 @@
  */
 import { createHash } from 'node:crypto';
 import type { EncodedDataset } from '../../src/data/types.js';
-import { rngFor, type TrainOptions } from '../../src/nn/index.js';
-import { referenceKernel } from '../../src/nn/kernel.js';
+import { type TrainOptions } from '../../src/nn/index.js';
+import { rngFor } from '../../src/common/random.js';
+import { referenceKernel } from '../../src/nn/kernel/kernel.js';
 import { createTrainer } from '../../src/nn/trainer.js';
-import { wasmKernel } from '../../src/nn/wasm-kernel.js';
+import { wasmKernel } from '../../src/nn/kernel/wasm.js';
 
 function data(
   task: 'classification' | 'regression',

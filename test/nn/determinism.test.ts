@@ -15,7 +15,7 @@ const root = join(import.meta.dirname, '..', '..');
 const work = mkdtempSync(join(tmpdir(), 'nb-determinism-'));
 afterAll(() => rmSync(work, { recursive: true, force: true }));
 
-/** Transpiles src/nn and the script to plain JavaScript (type-only imports vanish). */
+/** Transpiles src/nn, the ground floor (src/common) and the script to plain JavaScript (type-only imports vanish). */
 function build(): string {
   const files: string[] = [];
   const walk = (dir: string) => {
@@ -26,6 +26,7 @@ function build(): string {
     }
   };
   walk(join(root, 'src', 'nn'));
+  walk(join(root, 'src', 'common'));
   files.push(join(root, 'test', 'nn', 'determinism-script.ts'));
   for (const f of files) {
     const out = join(work, relative(root, f)).replace(/\.ts$/, '.js');

@@ -5,9 +5,10 @@
 import { describe, expect, it } from 'vitest';
 import type { Activation } from '../../src/config/types.js';
 import type { Head } from '../../src/nn/index.js';
-import { referenceKernel, type Kernel } from '../../src/nn/kernel.js';
-import { initParams, type Shape } from '../../src/nn/network.js';
-import { Xoshiro128StarStar } from '../../src/nn/rng.js';
+import { referenceKernel, type Kernel } from '../../src/nn/kernel/kernel.js';
+import { initParams } from '../../src/nn/network.js';
+import { type Shape } from '../../src/nn/kernel/layout.js';
+import { Xoshiro128StarStar } from '../../src/common/random.js';
 import { productionKernels } from './kernels.js';
 
 const ACTIVATIONS: Activation[] = ['tanh', 'logistic', 'relu'];

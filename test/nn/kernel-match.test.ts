@@ -6,10 +6,11 @@
 import { describe, expect, it } from 'vitest';
 import type { Activation } from '../../src/config/types.js';
 import type { Head } from '../../src/nn/index.js';
-import { referenceKernel } from '../../src/nn/kernel.js';
-import { initParams, type Shape } from '../../src/nn/network.js';
-import { Xoshiro128StarStar } from '../../src/nn/rng.js';
-import { wasmKernel } from '../../src/nn/wasm-kernel.js';
+import { referenceKernel } from '../../src/nn/kernel/kernel.js';
+import { initParams } from '../../src/nn/network.js';
+import { type Shape } from '../../src/nn/kernel/layout.js';
+import { Xoshiro128StarStar } from '../../src/common/random.js';
+import { wasmKernel } from '../../src/nn/kernel/wasm.js';
 
 function bitsEqual(a: Float64Array, b: Float64Array): boolean {
   if (a.length !== b.length) return false;

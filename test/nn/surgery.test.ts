@@ -7,10 +7,12 @@
  * zero there; derived, not taken from a paper). The least-squares layer is solved in the test.
  */
 import { describe, expect, it } from 'vitest';
-import { createTrainer, predict, rngFor } from '../../src/nn/index.js';
-import { referenceKernel } from '../../src/nn/kernel.js';
-import { fromJson, initParams, layoutOf, nguyenWidrowBeta } from '../../src/nn/network.js';
-import { Xoshiro128StarStar } from '../../src/nn/rng.js';
+import { createTrainer, predict } from '../../src/nn/index.js';
+import { rngFor } from '../../src/common/random.js';
+import { referenceKernel } from '../../src/nn/kernel/kernel.js';
+import { fromJson, initParams, nguyenWidrowBeta } from '../../src/nn/network.js';
+import { layoutOf } from '../../src/nn/kernel/layout.js';
+import { Xoshiro128StarStar } from '../../src/common/random.js';
 import { dataset, options } from './helpers.js';
 
 function regressionData(rows: number, inputs: number, seed: number) {

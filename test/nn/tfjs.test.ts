@@ -9,10 +9,10 @@ import * as tf from '@tensorflow/tfjs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Activation } from '../../src/config/types.js';
 import type { Head } from '../../src/nn/index.js';
-import { referenceKernel, type Kernel } from '../../src/nn/kernel.js';
-import { layoutOf, type Shape } from '../../src/nn/network.js';
-import { headCode, headOutputs } from '../../src/nn/reference.js';
-import { Xoshiro128StarStar } from '../../src/nn/rng.js';
+import { referenceKernel, type Kernel } from '../../src/nn/kernel/kernel.js';
+import { layoutOf, type Shape } from '../../src/nn/kernel/layout.js';
+import { headCode, headOutputs } from '../../src/nn/kernel/reference.js';
+import { Xoshiro128StarStar } from '../../src/common/random.js';
 import { productionKernels } from './kernels.js';
 
 beforeAll(async () => {

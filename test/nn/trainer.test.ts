@@ -1,9 +1,11 @@
 /** The training run's stop reasons, metrics and records. */
 import { describe, expect, it } from 'vitest';
-import { createTrainer, meetsTarget, predict, rngFor, trainerFromNetwork } from '../../src/nn/index.js';
+import { createTrainer, predict, trainerFromNetwork } from '../../src/nn/index.js';
+import { meetsThreshold } from '../../src/common/metric.js';
+import { rngFor } from '../../src/common/random.js';
 import { computeMetrics, metricValue, targetMetric } from '../../src/nn/metrics.js';
-import { HEAD_LINEAR, HEAD_LOGISTIC, HEAD_SOFTMAX } from '../../src/nn/reference.js';
-import { Xoshiro128StarStar } from '../../src/nn/rng.js';
+import { HEAD_LINEAR, HEAD_LOGISTIC, HEAD_SOFTMAX } from '../../src/nn/kernel/reference.js';
+import { Xoshiro128StarStar } from '../../src/common/random.js';
 import { dataset, options, xorDataset } from './helpers.js';
 
 describe('training run', () => {
@@ -53,12 +55,12 @@ describe('training run', () => {
     expect(before.trainMetric).toBeCloseTo(maxAbs, 12);
   });
 
-  it('meetsTarget: accuracy at least, errors at most, NaN never', () => {
-    expect(meetsTarget(0.95, { metric: 'accuracy', threshold: 0.95 })).toBe(true);
-    expect(meetsTarget(0.94, { metric: 'accuracy', threshold: 0.95 })).toBe(false);
-    expect(meetsTarget(0.2, { metric: 'rmse', threshold: 0.2 })).toBe(true);
-    expect(meetsTarget(0.21, { metric: 'mae', threshold: 0.2 })).toBe(false);
-    expect(meetsTarget(NaN, { metric: 'max-abs-error', threshold: 1 })).toBe(false);
+  it('meetsThreshold: accuracy at least, errors at most, NaN never', () => {
+    expect(meetsThreshold(0.95, { metric: 'accuracy', threshold: 0.95 })).toBe(true);
+    expect(meetsThreshold(0.94, { metric: 'accuracy', threshold: 0.95 })).toBe(false);
+    expect(meetsThreshold(0.2, { metric: 'rmse', threshold: 0.2 })).toBe(true);
+    expect(meetsThreshold(0.21, { metric: 'mae', threshold: 0.2 })).toBe(false);
+    expect(meetsThreshold(NaN, { metric: 'max-abs-error', threshold: 1 })).toBe(false);
   });
 
   it('validation rows judge the target when there are any', () => {

@@ -6,7 +6,8 @@
  * derived lower bound (no shortcut connections); that case must not reach the target.
  */
 import { describe, expect, it } from 'vitest';
-import { createTrainer, rngFor } from '../../src/nn/index.js';
+import { createTrainer } from '../../src/nn/index.js';
+import { rngFor } from '../../src/common/random.js';
 import { options, xorDataset } from './helpers.js';
 
 describe('XOR', () => {

@@ -7,7 +7,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluateGate } from '../../src/gate/index.js';
 import { nextBaseline } from '../../src/gate/baseline.js';
-import { escapeMarkdown, escapeTerminal, renderMarkdown, renderText, withGate } from '../../src/report/index.js';
+import { escapeMarkdown, escapeText } from '../../src/common/escape.js';
+import { renderMarkdown, renderText, withGate } from '../../src/report/index.js';
 import type { DataProfile } from '../../src/data/types.js';
 import { config, dataReport, found, loaded, profile } from '../gate/build.js';
 
@@ -195,7 +196,7 @@ describe('escapeMarkdown', () => {
         const out = escapeMarkdown(s);
         expect(out).toMatch(/^(?:[A-Za-z0-9 ,;'"/%=?]|&#\d+;|[^\u0000-\u007f])*$/u);
         const clean =
-          !/[\u0000-\u001f\u007f-\u009f\u200b-\u200f\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff\u00ad\uff20\ufe6b]/u.test(
+          !/[\u0000-\u001f\u007f-\u009f\u061c\u180e\u200b-\u200f\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff\u00ad\uff20\ufe6b]/u.test(
             s,
           );
         if (clean) expect(decode(out).replace(/\u200b/g, '')).toBe(s);
@@ -211,8 +212,9 @@ describe('escapeMarkdown', () => {
     expect(decode(escapeMarkdown('WWW.x.org'))).toBe('WWW\u200b.x.org');
   });
 
-  it('terminal: replaces control characters, keeps the rest', () => {
-    expect(escapeTerminal('a\u001b[31mb\u202ec')).toBe('a?[31mb?c');
-    expect(escapeTerminal('Pumpe Nr. 3 – Lager')).toBe('Pumpe Nr. 3 – Lager');
+  it('terminal and log: shows control characters escaped, breaks "::", keeps the rest', () => {
+    expect(escapeText('a\u001b[31mb\u202ec')).toBe('a\\x1b[31mb\\u202ec');
+    expect(escapeText('pos\n::error file=evil.yml,line=1::X')).toBe('pos\\n:\\x3aerror file=evil.yml,line=1:\\x3aX');
+    expect(escapeText('Pumpe Nr. 3 – Lager')).toBe('Pumpe Nr. 3 – Lager');
   });
 });

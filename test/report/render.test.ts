@@ -274,15 +274,6 @@ describe('charts: edge cases', () => {
     const md = renderMarkdown(gated(r, null, profile(), config({ target: { threshold: 1 } })));
     expect(mermaidBlocks(md)[0]).toContain('y-axis "accuracy" 0.9 --> 1');
   });
-
-  it('renders a data-stage-only report (no search yet) without charts', () => {
-    const r = { ...dataReport(found(2, 1), config()), search: null, width: null, reasons: ['Data stage only.'] };
-    r.metric = { ...r.metric, value: null };
-    const md = renderMarkdown(r);
-    expect(md.split('\n')[0]).toBe('### neuron-budget: DATA ONLY. Data stage only&#46;');
-    expect(mermaidBlocks(md)).toEqual([]);
-    expect(renderText(r).split('\n')[0]).toBe('neuron-budget: DATA ONLY. Data stage only.');
-  });
 });
 
 describe('footer over the device budget', () => {

@@ -104,6 +104,14 @@ describe('the adequacy decision', () => {
       { seed: 7, numRuns: 50 },
     );
   });
+
+  it('merging accepts an identical duplicate and refuses two different results for one task', () => {
+    const p = plan({ maxWidth: 3 });
+    const all = planTasks(p).map((t) => fresh(t.width, t.restart, t.width >= 2));
+    expect(mergeOutcomes(p, accuracy, [...all, all[0]])).toEqual(mergeOutcomes(p, accuracy, all));
+    const changed = { ...all[0], metric: all[0].metric + 0.01 };
+    expect(() => mergeOutcomes(p, accuracy, [...all, changed])).toThrow(/two different results .* width 1, restart 0/);
+  });
 });
 
 describe('in-place growth mapped onto widths', () => {

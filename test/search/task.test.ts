@@ -1,6 +1,7 @@
 /** One growth task: it equals one run of the engine, and a pool can call it off mid-way. */
 import { describe, expect, it } from 'vitest';
-import { createTrainer, rngFor } from '../../src/nn/index.js';
+import { createTrainer } from '../../src/nn/index.js';
+import { rngFor } from '../../src/common/random.js';
 import { runTask, searchContext } from '../../src/search/index.js';
 import { exact, parity, searchConfig } from './fixtures.js';
 

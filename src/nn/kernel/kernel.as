@@ -1,12 +1,12 @@
 // The training kernel in AssemblyScript, compiled to WebAssembly with 128-bit SIMD (f64x2).
-// scripts/build-kernel.mjs compiles this file; src/nn/wasm/kernel-bytes.ts holds the result.
+// scripts/build-kernel.mjs compiles this file; kernel-bytes.ts beside it holds the result.
 //
 // Every number this kernel produces is bit-identical to the float64 reference in
-// src/nn/reference.ts: each sum runs over the same terms in the same order (SIMD lanes hold
+// reference.ts: each sum runs over the same terms in the same order (SIMD lanes hold
 // different hidden neurons or different rows, never parts of one sum), and tanh, exp and log
-// follow the same operations as src/nn/detmath.ts. Rows are processed four at a time so that
+// follow the same operations as detmath.ts, with the constants of constants.ts. Rows are processed four at a time so that
 // each weight loaded from memory serves four rows; the input-weight gradient is summed over
-// blocks of BLOCK rows in registers, and the reference sums it in the same blocks.
+// blocks of GRAD_BLOCK_ROWS rows in registers, and the reference sums it in the same blocks.
 //
 // Parameter layout (canonical, shared with TypeScript): W1 inputs×width, b1 width,
 // W2 width×outputs, b2 outputs. Internally the hidden dimension is padded to an even
@@ -16,9 +16,10 @@
 // so the loops over inputs read memory in order; when Hp is not a multiple of four, the last
 // panel holds one pair (D × 2 values).
 
-const LN2_HI: f64 = 6.93147180369123816490e-1;
-const LN2_LO: f64 = 1.90821492927058770002e-10;
-const INV_LN2: f64 = 1.44269504088896338700e0;
+// ---- generated constants: begin (written by scripts/build-kernel.mjs from constants.ts; do not edit)
+const LN2_HI: f64 = 0.6931471803691238;
+const LN2_LO: f64 = 1.9082149292705877e-10;
+const INV_LN2: f64 = 1.4426950408889634;
 const C2: f64 = 0.5;
 const C3: f64 = 0.16666666666666666;
 const C4: f64 = 0.041666666666666664;
@@ -32,20 +33,16 @@ const C11: f64 = 2.505210838544172e-8;
 const C12: f64 = 2.08767569878681e-9;
 const C13: f64 = 1.6059043836821613e-10;
 const TANH_CLAMP: f64 = 22;
-const ROUND_MAGIC: f64 = 6755399441055744.0;
+const ROUND_MAGIC: f64 = 6755399441055744;
 const SQRT2: f64 = 1.4142135623730951;
-
-/**
- * Rows per gradient block: the input-weight gradient of a block's rows is summed in registers
- * (in row order, from +0) and then added to the running gradient; the reference sums the same way.
- * Must equal GRAD_BLOCK_ROWS in src/nn/reference.ts.
- */
-const BLOCK: i32 = 32;
-
+const GRAD_BLOCK_ROWS: i32 = 32;
 const ACT_TANH: i32 = 0;
 const ACT_LOGISTIC: i32 = 1;
+const ACT_RELU: i32 = 2;
 const HEAD_LINEAR: i32 = 0;
 const HEAD_LOGISTIC: i32 = 1;
+const HEAD_SOFTMAX: i32 = 2;
+// ---- generated constants: end
 
 // ---- elementary functions (same operation sequence as detmath.ts) ----
 
@@ -197,7 +194,7 @@ let GB1: usize = 0;
 let GW2T: usize = 0;
 let GB2: usize = 0;
 let HB: usize = 0; // 4 × Hp hidden activations of the block
-let DB: usize = 0; // BLOCK × Hp hidden deltas of the current gradient block
+let DB: usize = 0; // GRAD_BLOCK_ROWS × Hp hidden deltas of the current gradient block
 let ZB: usize = 0; // 4 × K logits
 let DZ: usize = 0; // 4 × K output deltas
 let HT: usize = 0; // Hp × 4 hidden activations of the block, transposed (rows side by side)
@@ -212,7 +209,7 @@ let HT: usize = 0; // Hp × 4 hidden activations of the block, transposed (rows 
 /** Bytes of work memory a call with this shape needs. */
 export function workBytes(d: i32, h: i32, k: i32): i32 {
   const hp = (h + 1) & ~1;
-  return 8 * (2 * d * hp + 2 * hp + 2 * k * hp + k + (8 + BLOCK) * hp + 8 * k) + 64;
+  return 8 * (2 * d * hp + 2 * hp + 2 * k * hp + k + (8 + GRAD_BLOCK_ROWS) * hp + 8 * k) + 64;
 }
 
 function setup(act: i32, head: i32, d: i32, h: i32, k: i32, params: usize, work: usize): void {
@@ -230,7 +227,7 @@ function setup(act: i32, head: i32, d: i32, h: i32, k: i32, params: usize, work:
   W2T = p; p += <usize>(8 * K * Hp);
   GW2T = p; p += <usize>(8 * K * Hp);
   HB = p; p += <usize>(32 * Hp);
-  DB = p; p += <usize>(8 * BLOCK * Hp);
+  DB = p; p += <usize>(8 * GRAD_BLOCK_ROWS * Hp);
   ZB = p; p += <usize>(32 * K);
   DZ = p; p += <usize>(32 * K);
   HT = p; p += <usize>(32 * Hp);
@@ -640,7 +637,7 @@ export function lossGrad(
   const hp8 = <usize>(8 * Hp);
   let p = start;
   while (p < end) {
-    const n = end - p < BLOCK ? end - p : BLOCK;
+    const n = end - p < GRAD_BLOCK_ROWS ? end - p : GRAD_BLOCK_ROWS;
     const xb = x + <usize>p * rowBytes;
     let r = 0;
     for (; r + 4 <= n; r += 4) {

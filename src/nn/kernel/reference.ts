@@ -5,17 +5,21 @@
  *   logistic softplus(z) − t·z           (binary cross-entropy on the logit)
  *   softmax  log Σ_k e^{z_k} − z_t        (cross-entropy)
  */
-import type { Activation } from '../config/types.js';
-import type { Head } from './index.js';
+import type { Activation } from '../../config/types.js';
 import { detExp, detLog, detLogistic, detSoftplus, detTanh } from './detmath.js';
-import { layoutOf, type Shape } from './network.js';
+import { layoutOf, type Head, type Shape } from './layout.js';
 
-export const ACT_TANH = 0;
-export const ACT_LOGISTIC = 1;
-export const ACT_RELU = 2;
-export const HEAD_LINEAR = 0;
-export const HEAD_LOGISTIC = 1;
-export const HEAD_SOFTMAX = 2;
+import {
+  ACT_LOGISTIC,
+  ACT_RELU,
+  ACT_TANH,
+  GRAD_BLOCK_ROWS,
+  HEAD_LINEAR,
+  HEAD_LOGISTIC,
+  HEAD_SOFTMAX,
+} from './constants.js';
+
+export { HEAD_LINEAR, HEAD_LOGISTIC, HEAD_SOFTMAX } from './constants.js';
 
 export function activationCode(a: Activation): number {
   return a === 'tanh' ? ACT_TANH : a === 'logistic' ? ACT_LOGISTIC : ACT_RELU;
@@ -23,14 +27,6 @@ export function activationCode(a: Activation): number {
 export function headCode(h: Head): number {
   return h === 'linear' ? HEAD_LINEAR : h === 'logistic' ? HEAD_LOGISTIC : HEAD_SOFTMAX;
 }
-
-/**
- * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
- * the products of a block's rows are added in row order starting from +0, and that block sum is
- * then added to the running gradient. The WebAssembly kernel keeps the block sums in registers
- * and must use the same block size (BLOCK in src/nn/wasm/kernel.as), so that both give the same bits.
- */
-export const GRAD_BLOCK_ROWS = 32;
 
 /** Scratch memory for one network width, allocated once outside the epoch loop. */
 export interface Scratch {
@@ -100,7 +96,7 @@ function outputRow(
  * Loss of one row from its logits z; writes dLoss/dz into dz. `t` is the class index
  * (classification) or the standardised target (regression).
  */
-export function headLossAndDelta(head: number, K: number, z: Float64Array, t: number, dz: Float64Array): number {
+function headLossAndDelta(head: number, K: number, z: Float64Array, t: number, dz: Float64Array): number {
   if (head === HEAD_LINEAR) {
     const d = z[0] - t;
     dz[0] = d;

@@ -1,6 +1,6 @@
 /** "Did you mean …?" help for misspelt names (config keys, flags, commands, columns). */
 
-/** Levenshtein distance (insert, delete, substitute; each costs 1). */
+/** Levenshtein distance (insert, delete, substitute; each costs 1). @testOnly */
 export function editDistance(a: string, b: string): number {
   if (a === b) return 0;
   if (a.length === 0) return b.length;

@@ -1,8 +1,9 @@
-/** Search progress for the step log: one line at most every few seconds, so long searches stay readable. */
+/** Search progress as one plain line, at most one every few seconds, for the step log and for a terminal that is not interactive. */
 import type { ProgressEvent } from '../search/types.js';
 
-export const PROGRESS_INTERVAL_MS = 5000;
+const PROGRESS_INTERVAL_MS = 5000;
 
+/** @testOnly */
 export function progressLine(e: ProgressEvent): string {
   const best = e.best === null ? 'none yet' : String(Number(e.best.toPrecision(4)));
   return `${e.phase}: width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}, best so far ${best}`;

@@ -3,8 +3,8 @@
  * (Blackman & Vigna's xoshiro128starstar.c; vectors as listed with the rand_xoshiro crate's tests).
  */
 import { describe, expect, it } from 'vitest';
-import { rngFor } from '../../src/nn/index.js';
-import { SplitMix64, Xoshiro128StarStar, xoshiroFromSeed } from '../../src/nn/rng.js';
+import { rngFor } from '../../src/common/random.js';
+import { SplitMix64, Xoshiro128StarStar, xoshiroFromSeed } from '../../src/common/random.js';
 
 /** First ten outputs of the reference implementation, version 1.1, from state [1, 2, 3, 4]. */
 const V11 = [11520, 0, 5927040, 70819200, 2031721883, 1637235492, 1287239034, 3734860849, 3729100597, 4258142804];

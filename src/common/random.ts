@@ -1,21 +1,29 @@
 /**
  * Seeded random numbers: xoshiro128** version 1.1 (Blackman & Vigna), seeded through
  * SplitMix64 (Steele, Lea & Flood). Only 32-bit integer operations in the hot path, so every
- * engine produces the same stream.
+ * engine produces the same stream. Every random choice in neuron-budget (the data split, the
+ * initial weights) draws from here.
  */
-import type { Rng } from './index.js';
+
+/** A seeded xoshiro128** 1.1 stream. */
+export interface Rng {
+  /** Next 32-bit unsigned integer. */
+  nextUint32(): number;
+  /** Next double in [0, 1) with 53 random bits. */
+  nextDouble(): number;
+}
 
 const MASK64 = (1n << 64n) - 1n;
 const GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
 
 /** One SplitMix64 output step: advances `state` by the golden gamma and mixes it. */
-export function splitMix64Mix(z: bigint): bigint {
+function splitMix64Mix(z: bigint): bigint {
   z = ((z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n) & MASK64;
   z = ((z ^ (z >> 27n)) * 0x94d049bb133111ebn) & MASK64;
   return z ^ (z >> 31n);
 }
 
-/** A SplitMix64 generator over 64-bit unsigned BigInts (used for seeding only). */
+/** A SplitMix64 generator over 64-bit unsigned BigInts (used for seeding only). @testOnly */
 export class SplitMix64 {
   private state: bigint;
   constructor(seed: bigint) {
@@ -27,7 +35,7 @@ export class SplitMix64 {
   }
 }
 
-/** xoshiro128** 1.1: the scrambler reads s[1] (version 1.0 wrongly read s[0]). */
+/** xoshiro128** 1.1: the scrambler reads s[1] (version 1.0 wrongly read s[0]). @testOnly */
 export class Xoshiro128StarStar implements Rng {
   private a: number;
   private b: number;
@@ -100,7 +108,12 @@ export function rngFor(seed: number, width: number, restart: number): Xoshiro128
   return xoshiroFromSeed(h);
 }
 
-/** Uniform double in [lo, hi). */
-export function uniform(rng: Rng, lo: number, hi: number): number {
-  return lo + (hi - lo) * rng.nextDouble();
+/** Fisher–Yates shuffle in place. */
+export function shuffle(items: Int32Array, rng: Rng): void {
+  for (let i = items.length - 1; i > 0; i--) {
+    const j = Math.floor(rng.nextDouble() * (i + 1));
+    const t = items[i];
+    items[i] = items[j];
+    items[j] = t;
+  }
 }

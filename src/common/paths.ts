@@ -6,14 +6,29 @@
  */
 import { existsSync, realpathSync } from 'node:fs';
 import { dirname, isAbsolute, relative, resolve, sep } from 'node:path';
-import { UserError } from '../errors.js';
+import { UserError } from './errors.js';
 
 export type InsideResult = { ok: true; path: string } | { ok: false; reason: string };
 
-/** True when `child` is `parent` or lies below it (both absolute and normalised). */
+/** True when `child` is `parent` or lies below it (both absolute and normalised). @testOnly */
 export function isInside(parent: string, child: string): boolean {
-  const rel = relative(parent, child);
-  return rel === '' || (!rel.startsWith('..' + sep) && rel !== '..' && !isAbsolute(rel));
+  return relativeInside(parent, child) !== null;
+}
+
+/**
+ * `child` relative to `parent` with forward slashes ('' for `parent` itself), or null when it
+ * lies outside. A name that merely starts with two dots (`..x`) is inside.
+ */
+export function relativeInside(parent: string, child: string): string | null {
+  const rel = relative(resolve(parent), resolve(child));
+  if (rel === '..' || rel.startsWith('..' + sep) || isAbsolute(rel)) return null;
+  return rel.split(sep).join('/');
+}
+
+/** How a file is named in messages: relative to the workspace root when inside it, forward slashes. */
+export function displayPath(root: string, file: string): string {
+  const rel = relativeInside(root, file);
+  return rel === null ? resolve(file) : rel || '.';
 }
 
 /** The real location of `p`, following links through its longest existing prefix. */

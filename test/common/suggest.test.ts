@@ -1,7 +1,7 @@
 // "Did you mean" suggestions: the edit distance and the nearest-name rule.
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
-import { didYouMean, editDistance, nearest } from '../../src/config/suggest.js';
+import { didYouMean, editDistance, nearest } from '../../src/common/suggest.js';
 
 describe('editDistance (Levenshtein 1966)', () => {
   test('textbook examples', () => {

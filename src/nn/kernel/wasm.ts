@@ -4,9 +4,10 @@
  * trainer in it; calls are synchronous, so they share one work area.
  */
 import type { Kernel } from './kernel.js';
-import type { Shape } from './network.js';
+import type { Shape } from './layout.js';
 import { activationCode, headCode } from './reference.js';
-import { KERNEL_BASE64 } from './wasm/kernel-bytes.js';
+import { createHash } from 'node:crypto';
+import { KERNEL_BASE64, KERNEL_SHA256 } from './kernel-bytes.js';
 
 /** The slice of the WebAssembly API used here (the project's type libraries do not declare it). */
 interface WasmMemory {
@@ -145,8 +146,11 @@ function decode(b64: string): Uint8Array {
 /** The per-thread kernel module, or null where this engine has no WebAssembly SIMD. */
 function getRuntime(): Runtime | null {
   if (runtime !== undefined) return runtime;
+  const bytes = decode(KERNEL_BASE64);
+  // The bytes are what the reproducibility check vouched for, or the build is broken: never run others.
+  const sha = createHash('sha256').update(bytes).digest('hex');
+  if (sha !== KERNEL_SHA256) throw new Error(`kernel bytes have sha256 ${sha}, expected ${KERNEL_SHA256}`);
   try {
-    const bytes = decode(KERNEL_BASE64);
     if (wasmApi === undefined || !wasmApi.validate(bytes)) {
       runtime = null;
     } else {
@@ -163,123 +167,153 @@ export function wasmAvailable(): boolean {
   return getRuntime() !== null;
 }
 
+/**
+ * Where one gradient call's operands live in wasm memory. Kept while nothing moved (same shape,
+ * same data, same memory), so the epoch loop allocates nothing and resolves nothing.
+ */
+class GradientPlan {
+  version = -1;
+  shape: Shape | null = null;
+  x: Float64Array | null = null;
+  y: Float64Array | null = null;
+  xAt = 0;
+  yAt = 0;
+  paramsAt = 0;
+  gradAt = 0;
+  workAt = 0;
+  activation = 0;
+  head = 0;
+  memory: Float64Array;
+  grad: Float64Array;
+  constructor(memory: Float64Array) {
+    this.memory = memory;
+    this.grad = memory.subarray(0, 0);
+  }
+  current(rt: Runtime, shape: Shape, x: Float64Array, y: Float64Array): boolean {
+    return this.version === rt.version && shape === this.shape && x === this.x && y === this.y;
+  }
+  plan(rt: Runtime, shape: Shape, x: Float64Array, y: Float64Array, size: number): void {
+    [this.xAt, this.yAt] = rt.resident(x, y);
+    this.paramsAt = rt.scratch(16 * size + 128 + rt.ex.workBytes(shape.inputs, shape.width, shape.outputs));
+    this.gradAt = align(this.paramsAt + 8 * size);
+    this.workAt = align(this.gradAt + 8 * size);
+    this.memory = rt.view();
+    this.grad = this.memory.subarray(this.gradAt / 8, this.gradAt / 8 + size);
+    this.activation = activationCode(shape.activation);
+    this.head = headCode(shape.head);
+    this.version = rt.version;
+    this.shape = shape;
+    this.x = x;
+    this.y = y;
+  }
+}
+
+/** The same for one forward call: inputs, logits and (optionally) hidden activations. */
+class ForwardPlan {
+  version = -1;
+  shape: Shape | null = null;
+  x: Float64Array | null = null;
+  rows = -1;
+  hiddenBytes = -1;
+  xAt = 0;
+  paramsAt = 0;
+  logitsAt = 0;
+  hiddenAt = 0;
+  workAt = 0;
+  memory: Float64Array;
+  logits: Float64Array;
+  hidden: Float64Array;
+  constructor(memory: Float64Array) {
+    this.memory = memory;
+    this.logits = memory.subarray(0, 0);
+    this.hidden = memory.subarray(0, 0);
+  }
+  current(rt: Runtime, shape: Shape, x: Float64Array, rows: number, hiddenBytes: number): boolean {
+    return (
+      this.version === rt.version &&
+      shape === this.shape &&
+      x === this.x &&
+      rows === this.rows &&
+      hiddenBytes === this.hiddenBytes
+    );
+  }
+  plan(rt: Runtime, shape: Shape, x: Float64Array, rows: number, hiddenBytes: number, size: number): void {
+    const { inputs: D, width: H, outputs: K } = shape;
+    this.xAt = rt.residentOne(x);
+    const logitBytes = 8 * rows * K;
+    this.paramsAt = rt.scratch(8 * size + logitBytes + hiddenBytes + 256 + rt.ex.workBytes(D, H, K));
+    this.logitsAt = align(this.paramsAt + 8 * size);
+    this.hiddenAt = align(this.logitsAt + logitBytes);
+    this.workAt = align(this.hiddenAt + hiddenBytes);
+    this.memory = rt.view();
+    this.logits = this.memory.subarray(this.logitsAt / 8, this.logitsAt / 8 + rows * K);
+    this.hidden = this.memory.subarray(this.hiddenAt / 8, this.hiddenAt / 8 + rows * H);
+    this.version = rt.version;
+    this.shape = shape;
+    this.x = x;
+    this.rows = rows;
+    this.hiddenBytes = hiddenBytes;
+  }
+}
+
 /** A kernel backed by the shared WebAssembly module; throws when WebAssembly SIMD is unavailable. */
 export function wasmKernel(): Kernel {
   const rt = getRuntime();
   if (rt === null) throw new Error('WebAssembly SIMD is not available in this JavaScript engine');
   const ex = rt.ex;
-  // Offsets of the last gradient call, reused while nothing moved (the epoch loop must not allocate).
   // Gradient and forward calls share the scratch area above the cached data; each call rewrites
   // everything it reads there, so they may overlap.
-  let gVersion = -1;
-  let gShape: Shape | null = null;
-  let gX: Float64Array | null = null;
-  let gY: Float64Array | null = null;
-  let xp = 0;
-  let yp = 0;
-  let pp = 0;
-  let gp = 0;
-  let wp = 0;
-  let mem = rt.view();
-  let gradView = mem.subarray(0, 0);
-  let act = 0;
-  let head = 0;
-  // The same for the last forward call.
-  let fVersion = -1;
-  let fShape: Shape | null = null;
-  let fX: Float64Array | null = null;
-  let fRows = -1;
-  let fHidBytes = -1;
-  let fx = 0;
-  let fp = 0;
-  let op = 0;
-  let hp = 0;
-  let fw = 0;
-  let fmem = mem;
-  let logitsView = mem.subarray(0, 0);
-  let hiddenView = mem.subarray(0, 0);
+  const g = new GradientPlan(rt.view());
+  const f = new ForwardPlan(rt.view());
   return {
     name: 'wasm-simd-f64',
-    lossAndGradient(
-      shape: Shape,
-      params: Float64Array,
-      x: Float64Array,
-      y: Float64Array,
-      start: number,
-      end: number,
-      grad: Float64Array,
-      primeOffset = 0,
-    ): number {
+    lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0): number {
       const P = params.length;
-      if (gVersion !== rt.version || shape !== gShape || x !== gX || y !== gY) {
-        [xp, yp] = rt.resident(x, y);
-        pp = rt.scratch(16 * P + 128 + ex.workBytes(shape.inputs, shape.width, shape.outputs));
-        gp = align(pp + 8 * P);
-        wp = align(gp + 8 * P);
-        mem = rt.view();
-        gradView = mem.subarray(gp / 8, gp / 8 + P);
-        act = activationCode(shape.activation);
-        head = headCode(shape.head);
-        gVersion = rt.version;
-        gShape = shape;
-        gX = x;
-        gY = y;
-      }
-      const po = pp / 8;
+      if (!g.current(rt, shape, x, y)) g.plan(rt, shape, x, y, P);
+      const mem = g.memory;
+      const po = g.paramsAt / 8;
       if (P <= 64) for (let q = 0; q < P; q++) mem[po + q] = params[q];
       else mem.set(params, po);
+      const { inputs, width, outputs } = shape;
       const loss = ex.lossGrad(
-        act,
-        head,
-        shape.inputs,
-        shape.width,
-        shape.outputs,
-        pp,
-        xp,
-        yp,
+        g.activation,
+        g.head,
+        inputs,
+        width,
+        outputs,
+        g.paramsAt,
+        g.xAt,
+        g.yAt,
         start,
         end,
-        gp,
-        wp,
+        g.gradAt,
+        g.workAt,
         primeOffset,
       );
-      if (P <= 64) for (let q = 0; q < P; q++) grad[q] = gradView[q];
-      else grad.set(gradView);
+      const view = g.grad;
+      if (P <= 64) for (let q = 0; q < P; q++) grad[q] = view[q];
+      else grad.set(view);
       return loss;
     },
-    forward(
-      shape: Shape,
-      params: Float64Array,
-      x: Float64Array,
-      rows: number,
-      logits: Float64Array,
-      hidden: Float64Array | null,
-    ): void {
-      const P = params.length;
-      const D = shape.inputs;
-      const H = shape.width;
-      const K = shape.outputs;
-      const hidBytes = hidden ? 8 * rows * H : 0;
-      if (fVersion !== rt.version || shape !== fShape || x !== fX || rows !== fRows || hidBytes !== fHidBytes) {
-        fx = rt.residentOne(x);
-        const outBytes = 8 * rows * K;
-        fp = rt.scratch(8 * P + outBytes + hidBytes + 256 + ex.workBytes(D, H, K));
-        op = align(fp + 8 * P);
-        hp = align(op + outBytes);
-        fw = align(hp + hidBytes);
-        fmem = rt.view();
-        logitsView = fmem.subarray(op / 8, op / 8 + rows * K);
-        hiddenView = fmem.subarray(hp / 8, hp / 8 + rows * H);
-        fVersion = rt.version;
-        fShape = shape;
-        fX = x;
-        fRows = rows;
-        fHidBytes = hidBytes;
-      }
-      fmem.set(params, fp / 8);
-      ex.forward(activationCode(shape.activation), D, H, K, fp, fx, rows, op, hidden ? hp : 0, fw);
-      logits.set(logitsView);
-      if (hidden) hidden.set(hiddenView);
+    forward(shape, params, x, rows, logits, hidden): void {
+      const hiddenBytes = hidden ? 8 * rows * shape.width : 0;
+      if (!f.current(rt, shape, x, rows, hiddenBytes)) f.plan(rt, shape, x, rows, hiddenBytes, params.length);
+      f.memory.set(params, f.paramsAt / 8);
+      const { inputs, width, outputs } = shape;
+      ex.forward(
+        activationCode(shape.activation),
+        inputs,
+        width,
+        outputs,
+        f.paramsAt,
+        f.xAt,
+        rows,
+        f.logitsAt,
+        hidden ? f.hiddenAt : 0,
+        f.workAt,
+      );
+      logits.set(f.logits);
+      if (hidden) hidden.set(f.hidden);
     },
   };
 }

@@ -8,24 +8,26 @@
  * Accuracy against Math.*: a few units in the last place (test/nn/detmath.test.ts states the bound).
  */
 
-/** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
-export const LN2_HI = 6.9314718036912381649e-1;
-export const LN2_LO = 1.90821492927058770002e-10;
-export const INV_LN2 = 1.442695040888963387;
-
-/** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
-export const EXPM1_C = [
-  0.5, 0.16666666666666666, 0.041666666666666664, 0.008333333333333333, 0.001388888888888889, 0.0001984126984126984,
-  0.0000248015873015873, 0.0000027557319223985893, 2.755731922398589e-7, 2.505210838544172e-8, 2.08767569878681e-9,
-  1.6059043836821613e-10,
-] as const;
-const [C2, C3, C4, C5, C6, C7, C8, C9, C10, C11, C12, C13] = EXPM1_C;
-
-/** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
-export const ROUND_MAGIC = 6755399441055744;
-
-/** |x| beyond this has tanh(x) === ±1 in double precision. */
-export const TANH_CLAMP = 22;
+import {
+  C10,
+  C11,
+  C12,
+  C13,
+  C2,
+  C3,
+  C4,
+  C5,
+  C6,
+  C7,
+  C8,
+  C9,
+  INV_LN2,
+  LN2_HI,
+  LN2_LO,
+  ROUND_MAGIC,
+  SQRT2,
+  TANH_CLAMP,
+} from './constants.js';
 
 const f64 = new Float64Array(1);
 const u32 = new Uint32Array(f64.buffer);
@@ -84,19 +86,6 @@ export function detExp(x: number): number {
   return m * pow2(k);
 }
 
-/** e^x - 1, accurate near 0. */
-export function detExpm1(x: number): number {
-  if (x !== x) return x;
-  if (x > 709.782712893384) return Infinity;
-  if (x < -40) return -1;
-  const k = Math.floor(x * INV_LN2 + 0.5);
-  const r = x - k * LN2_HI - k * LN2_LO;
-  const p = expm1Poly(r);
-  if (k > 1023) return (1 + p) * pow2(1023) * pow2(k - 1023);
-  const s = pow2(k);
-  return s * p + (s - 1);
-}
-
 /** Powers of two 2^0..2^64 for the tanh reduction (k never leaves that range). */
 const POW2_TANH = new Float64Array(65);
 for (let k = 0; k <= 64; k++) POW2_TANH[k] = pow2(k);
@@ -122,8 +111,6 @@ export function detTanh(x: number): number {
 export function detLogistic(x: number): number {
   return 0.5 + 0.5 * detTanh(0.5 * x);
 }
-
-const SQRT2 = 1.4142135623730951;
 
 /** Natural logarithm. */
 export function detLog(x: number): number {
@@ -163,7 +150,7 @@ export function detLog(x: number): number {
   return e * LN2_HI + (logm + e * LN2_LO);
 }
 
-/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. */
+/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. @testOnly */
 export function detLog1p(u: number): number {
   const w = 1 + u;
   if (w === 1) return u;

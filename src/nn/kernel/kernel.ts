@@ -3,7 +3,7 @@
  * a forward pass. Two implementations share this shape: the float64 reference in plain
  * TypeScript and the WebAssembly SIMD kernel (float64 too), which is the production path.
  */
-import type { Shape } from './network.js';
+import type { Shape } from './layout.js';
 import { makeScratch, referenceForward, referenceLossAndGradient, type Scratch } from './reference.js';
 
 export interface Kernel {

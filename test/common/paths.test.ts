@@ -3,8 +3,8 @@ import { mkdirSync, mkdtempSync, realpathSync, rmSync, symlinkSync } from 'node:
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, test } from 'vitest';
-import { checkInside, isInside, resolveInside } from '../../src/config/paths.js';
-import { UserError } from '../../src/errors.js';
+import { checkInside, isInside, resolveInside } from '../../src/common/paths.js';
+import { UserError } from '../../src/common/errors.js';
 
 const root = realpathSync(mkdtempSync(join(tmpdir(), 'neuron-budget-paths-')));
 const outside = realpathSync(mkdtempSync(join(tmpdir(), 'neuron-budget-paths-out-')));

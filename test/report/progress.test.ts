@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { progressLine, throttledProgress } from '../../src/github/progress.js';
+import { progressLine, throttledProgress } from '../../src/report/progress.js';
 import { annotationPath, toAnnotation, withinLimit } from '../../src/github/annotations.js';
-import { UserError } from '../../src/errors.js';
+import { UserError } from '../../src/common/errors.js';
 
 describe('progress lines', () => {
   it('print the first event, then at most one per interval', () => {

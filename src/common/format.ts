@@ -1,10 +1,5 @@
-/** Number and word formatting shared by the gate's reasons and every renderer. Locale-free. */
-import type { MetricName } from '../config/types.js';
-
-/** Accuracy is better when higher; the error metrics when lower. */
-export function higherIsBetter(metric: MetricName): boolean {
-  return metric === 'accuracy';
-}
+/** Number and word formatting shared by the search's notes, the gate's reasons and every renderer. Locale-free. */
+import { comparator, higherIsBetter, type MetricName } from './metric.js';
 
 /**
  * A metric value with up to 4 decimals, trailing zeros trimmed (0.95, 0.9625, 0.9615),
@@ -44,6 +39,11 @@ export function formatSeconds(seconds: number | null | undefined): string {
 
 export function neurons(n: number): string {
   return n === 1 ? '1 hidden neuron' : `${formatCount(n)} hidden neurons`;
+}
+
+/** "accuracy ≥ 0.95" / "rmse ≤ 0.3". */
+export function targetShort(metric: MetricName, threshold: number): string {
+  return `${metric} ${comparator(metric)} ${formatMetric(threshold)}`;
 }
 
 /** "accuracy of at least 0.95" / "rmse of at most 0.3". */

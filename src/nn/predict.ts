@@ -1,0 +1,16 @@
+/** Running a network on encoded rows. */
+import { headCode, headOutputs, makeScratch, referenceForward } from './kernel/reference.js';
+import { fromJson } from './network.js';
+import type { NetworkJson } from './types.js';
+
+/** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
+export function predict(net: NetworkJson, x: Float64Array, rows: number): Float64Array {
+  const { shape, params } = fromJson(net);
+  const K = shape.outputs;
+  const logits = new Float64Array(rows * K);
+  referenceForward(shape, params, x, rows, logits, null, makeScratch(shape.width, K));
+  const out = new Float64Array(rows * K);
+  const head = headCode(shape.head);
+  for (let p = 0; p < rows; p++) headOutputs(head, K, logits, p * K, out, p * K);
+  return out;
+}
