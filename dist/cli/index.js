@@ -2668,7 +2668,7 @@ __webpack_unused_export__ = publicApi.parse;
 __webpack_unused_export__ = publicApi.parseAllDocuments;
 exports.Tp = publicApi.parseDocument;
 __webpack_unused_export__ = publicApi.stringify;
-__webpack_unused_export__ = visit.visit;
+exports.YR = visit.visit;
 __webpack_unused_export__ = visit.visitAsync;
 
 
@@ -8627,9 +8627,169 @@ const external_node_worker_threads_namespaceObject = __WEBPACK_EXTERNAL_createRe
 const external_node_path_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:path");
 ;// CONCATENATED MODULE: external "node:url"
 const external_node_url_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
-;// CONCATENATED MODULE: ./src/config/suggest.ts
+;// CONCATENATED MODULE: ./src/common/escape.ts
+/**
+ * The one sanitiser for strings from the repository (column names, class labels, categories,
+ * paths, YAML values, and sentences that quote them). A data file is written by whoever opens
+ * the pull request, so its strings are hostile until shown otherwise.
+ *
+ * - `escapeText`: for logs, the terminal and messages. Control characters (C0, DEL, C1) and
+ *   invisible or bidirectional formatting characters are shown escaped (`\n`, `\x1b`,
+ *   `\u202e`), never raw, so a string can neither start a line nor move the cursor; and `::`
+ *   is broken up, so even a line that starts with a repository string cannot be read by the
+ *   Actions runner as a workflow command (`::error …::`).
+ * - `quote`: a value inside a message: clipped, escaped, in double quotes.
+ * - `escapeMarkdown`: for the pull-request comment and the job summary.
+ * - `clip`: shortens a string to a bounded number of characters with an ellipsis.
+ */
+/** Most characters of one repository string shown on any screen. */
+const MAX_SHOWN = 200;
+/** Most characters of one value quoted inside a message. */
+const MAX_QUOTED = 80;
+const ELLIPSIS = '…';
+const ZWSP = '&#8203;';
+/** Invisible and bidirectional formatting characters that could disguise text. */
+const INVISIBLE = /[\u00ad\u061c\u180e\u200b-\u200f\u2028\u2029\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff]/u;
+const SHORT_ESCAPES = { 0x0a: '\\n', 0x0d: '\\r', 0x09: '\\t' };
+/** At most `max` characters (code points), the last of them an ellipsis when cut. */
+function clip(s, max = MAX_SHOWN) {
+    if (s.length <= max)
+        return s;
+    const chars = Array.from(s.slice(0, max + 1));
+    return chars.length > max ? `${chars.slice(0, max - 1).join('')}${ELLIPSIS}` : s;
+}
+function hex(c, width) {
+    return c.toString(16).padStart(width, '0');
+}
+/** Is this code point one that `escapeText` shows escaped? */
+function needsEscape(c, ch) {
+    return c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch);
+}
+/** Text for logs, the terminal and messages: clipped, control and invisible characters escaped, `::` broken. */
+function escapeText(raw, max = MAX_SHOWN) {
+    const s = clip(raw, max);
+    let out = '';
+    for (const ch of s) {
+        const c = ch.codePointAt(0) ?? 0;
+        if (!needsEscape(c, ch))
+            out += ch;
+        else if (SHORT_ESCAPES[c] !== undefined)
+            out += SHORT_ESCAPES[c];
+        else if (c < 0x100)
+            out += `\\x${hex(c, 2)}`;
+        else
+            out += `\\u${hex(c, 4)}`;
+    }
+    // The runner reads a line that starts with "::" as a command; "::" never survives whole.
+    return out.replace(/::/g, ':\\x3a');
+}
+/** A repository value inside a message: `"name"`, clipped and escaped. */
+function quote(raw, max = MAX_QUOTED) {
+    return `"${escapeText(raw, max).replace(/"/g, '\\"')}"`;
+}
+/** Whole lines of text (our own line breaks kept), each escaped as `escapeText` does. */
+function escapeLines(text) {
+    return text
+        .split('\n')
+        .map((line) => escapeText(line, Number.MAX_SAFE_INTEGER))
+        .join('\n');
+}
+/** Space , ; ' " / % = ? */
+const PLAIN = new Set([0x20, 0x2c, 0x3b, 0x27, 0x22, 0x2f, 0x25, 0x3d, 0x3f]);
+/**
+ * Markdown: every ASCII character other than letters, digits, space and , ; ' " / % = ?
+ * (which mean nothing to Markdown in the middle of a line, where these strings always go)
+ * becomes a numeric character reference, which GitHub-flavoured Markdown shows as literal
+ * text and never reads as syntax (emphasis, links, images, HTML, code, table pipes,
+ * headings, lists). GitHub turns some plain text into links after rendering (@-mentions,
+ * #123 references, URLs, www. addresses, :emoji:; GitHub behaviour as we know it, not
+ * checked against GitHub here), so a zero-width space follows every "@", "#" and ":" and
+ * precedes the dot of "www.", which breaks those patterns without changing what a reader
+ * sees. Line breaks become spaces, so a string never leaves its line or table cell.
+ */
+function escapeMarkdown(raw, max = MAX_SHOWN) {
+    const s = clip(raw, max);
+    let out = '';
+    for (let i = 0; i < s.length; i++) {
+        const c = s.charCodeAt(i);
+        if ((c >= 0x30 && c <= 0x39) || (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a) || PLAIN.has(c)) {
+            out += s[i];
+        }
+        else if (c === 0x0a || c === 0x0d || c === 0x09) {
+            out += ' ';
+        }
+        else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
+            out += '&#65533;';
+        }
+        else if (c < 0x80) {
+            if (c === 0x2e && /www$/i.test(s.slice(Math.max(0, i - 3), i)))
+                out += ZWSP;
+            out += `&#${c};`;
+            if (c === 0x40 || c === 0x23 || c === 0x3a)
+                out += ZWSP;
+        }
+        else if (INVISIBLE.test(s[i])) {
+            out += '&#65533;';
+        }
+        else if (c === 0xff20 || c === 0xfe6b) {
+            // Full-width and small commercial at: GitHub does not mention on them, but keep them inert anyway.
+            out += `&#${c};${ZWSP}`;
+        }
+        else {
+            out += s[i];
+        }
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/common/errors.ts
+/**
+ * An error the user caused (bad config, bad data, bad arguments). The shells print
+ * `message` without a stack trace, exit with code 2, and (in the action) turn
+ * `file`/`line`/`column` into an error annotation.
+ *
+ * Messages quote repository strings (column names, values, paths), so the whole message is
+ * passed through the one sanitiser here: whoever builds a message cannot forget it.
+ */
+
+/** Longest message shown; the values inside are clipped where they are quoted, this bounds the rest. */
+const MAX_MESSAGE = 2000;
+class errors_UserError extends Error {
+    file;
+    line;
+    column;
+    key;
+    constructor(message, where = {}) {
+        super(escapeText(message, MAX_MESSAGE));
+        this.name = 'UserError';
+        this.file = where.file;
+        this.line = where.line;
+        this.column = where.column;
+        this.key = where.key;
+    }
+}
+function isUserError(e) {
+    return e instanceof errors_UserError;
+}
+
+;// CONCATENATED MODULE: ./src/common/exit-codes.ts
+/** Exit codes, the same for the command line and the action. */
+const EXIT = {
+    /** pass, improved or new. */
+    ok: 0,
+    /** fail or inconclusive: the gate says no. */
+    gate: 1,
+    /** Bad input or usage: a message names the file, line and column or key; nothing was written. */
+    badInput: 2,
+    /** A bug in neuron-budget (never for anything a user can put in a file). */
+    internal: 3,
+};
+
+;// CONCATENATED MODULE: external "node:util"
+const external_node_util_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:util");
+;// CONCATENATED MODULE: ./src/common/suggest.ts
 /** "Did you mean …?" help for misspelt names (config keys, flags, commands, columns). */
-/** Levenshtein distance (insert, delete, substitute; each costs 1). */
+/** Levenshtein distance (insert, delete, substitute; each costs 1). @testOnly */
 function editDistance(a, b) {
     if (a === b)
         return 0;
@@ -8679,37 +8839,218 @@ function didYouMean(name, candidates) {
     return match === null ? '' : ` (did you mean "${match}"?)`;
 }
 
-;// CONCATENATED MODULE: ./src/errors.ts
-/**
- * An error the user caused (bad config, bad data, bad arguments). The shells print
- * `message` without a stack trace, exit with code 2, and (in the action) turn
- * `file`/`line`/`column` into an error annotation.
- */
-class errors_UserError extends Error {
-    file;
-    line;
-    column;
-    key;
-    constructor(message, where = {}) {
-        super(message);
-        this.name = 'UserError';
-        this.file = where.file;
-        this.line = where.line;
-        this.column = where.column;
-        this.key = where.key;
-    }
-}
-function isUserError(e) {
-    return e instanceof errors_UserError;
+;// CONCATENATED MODULE: ./src/common/workers.ts
+/** The worker-thread count a user may ask for, read the same way by the command line and the action. */
+const MAX_WORKERS = 256;
+/** A whole number from 1 to MAX_WORKERS, or null when `text` is not one. */
+function parseWorkerCount(text) {
+    if (!/^[0-9]+$/.test(text))
+        return null;
+    const n = Number(text);
+    return n >= 1 && n <= MAX_WORKERS ? n : null;
 }
 
-;// CONCATENATED MODULE: external "node:fs/promises"
-const promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
-// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
-var dist = __nccwpck_require__(8815);
+;// CONCATENATED MODULE: ./package.json
+const package_namespaceObject = {"rE":"0.1.0"};
+;// CONCATENATED MODULE: ./src/version.ts
+/** The tool's version, taken from package.json when the bundle is built (ncc inlines the JSON). */
+
+const TOOL_NAME = 'neuron-budget';
+const TOOL_VERSION = package_namespaceObject.rE;
+
+;// CONCATENATED MODULE: ./src/cli/args.ts
+/**
+ * The command line's grammar: commands, their options and positional arguments, parsed with
+ * Node's util.parseArgs and checked with messages that say what was expected and what was found.
+ */
+
+
+
+
+
+
+const DEFAULT_CONFIG = 'neuron-budget.yml';
+const FLAGS = {
+    config: { value: 'FILE', help: `config file (default: ${DEFAULT_CONFIG} in the current folder)` },
+    report: { value: 'FILE', help: 'also write the full result as JSON to FILE' },
+    model: { value: 'FILE', help: 'write the smallest network found (weights and encoding) to FILE' },
+    baseline: { value: 'FILE', help: 'baseline file to use instead of the one named in the config' },
+    workers: { value: 'N', help: `worker threads, 1 to ${MAX_WORKERS} (default: config, else one per core)` },
+};
+const COMMANDS = {
+    check: {
+        summary: 'search the smallest adequate width and compare it with the baseline',
+        flags: ['config', 'report', 'model', 'baseline', 'workers'],
+    },
+    baseline: {
+        summary: 'search the smallest adequate width and write it as the new baseline',
+        flags: ['config', 'baseline'],
+    },
+};
+/** A mistake on the command line: exit 2, one line, with a pointer to --help. */
+class UsageError extends errors_UserError {
+}
+function isCommand(s) {
+    return Object.hasOwn(COMMANDS, s);
+}
+const commandList = (sep) => Object.keys(COMMANDS).join(sep);
+/** Parses argv (without node and script) into what to do. Throws UsageError. */
+function parseInvocation(argv) {
+    if (argv.includes('--help') || argv.includes('-h'))
+        return { kind: 'help', command: argv.find(isCommand) ?? null };
+    if (argv.includes('--version') || argv.includes('-V'))
+        return { kind: 'version' };
+    const [first, ...rest] = argv;
+    if (first === undefined)
+        throw new UsageError(`a command is needed: ${commandList(' or ')}`);
+    if (first === 'help') {
+        const topic = rest[0];
+        if (topic !== undefined && !isCommand(topic)) {
+            throw new UsageError(`no help for ${quote(topic)}${didYouMean(topic, Object.keys(COMMANDS))}; commands: ${commandList(', ')}`);
+        }
+        return { kind: 'help', command: topic ?? null };
+    }
+    if (first.startsWith('-'))
+        throw new UsageError(`expected a command (${commandList(' or ')}) before options, found ${quote(first)}`);
+    if (!isCommand(first)) {
+        throw new UsageError(`unknown command ${quote(first)}${didYouMean(first, Object.keys(COMMANDS))}; commands: ${commandList(', ')}`);
+    }
+    const command = first;
+    const flags = readFlags(command, rest);
+    let workers = null;
+    if (flags.workers !== undefined) {
+        workers = parseWorkerCount(flags.workers);
+        if (workers === null) {
+            throw new UsageError(`${command}: --workers: expected an integer from 1 to ${MAX_WORKERS}, found ${quote(flags.workers)}`);
+        }
+    }
+    return { kind: 'run', command, flags, workers };
+}
+function readFlags(command, args) {
+    const allowed = COMMANDS[command].flags;
+    const options = Object.fromEntries(Object.keys(FLAGS).map((f) => [f, { type: 'string' }]));
+    // Not strict: unknown options and missing values get our own messages below.
+    const { tokens } = (0,external_node_util_namespaceObject.parseArgs)({ args, options, strict: false, allowPositionals: true, tokens: true });
+    const flags = {};
+    for (const token of tokens) {
+        if (token.kind === 'positional') {
+            throw new UsageError(`${command}: unexpected argument ${quote(token.value)}; options are written --name VALUE`);
+        }
+        if (token.kind !== 'option')
+            continue;
+        const name = token.name;
+        if (!allowed.includes(name)) {
+            const elsewhere = Object.hasOwn(FLAGS, name) ? ` (${command} has no --${name})` : '';
+            const suggestion = didYouMean(name, allowed).replace(/"([^"]+)"/, '"--$1"');
+            throw new UsageError(`${command}: unknown option ${quote(`--${name}`)}${elsewhere}${suggestion}; see ${TOOL_NAME} ${command} --help`);
+        }
+        const flag = name;
+        // `--config --report x`: the next option is not this one's value.
+        const value = !token.inlineValue && token.value?.startsWith('--') ? undefined : token.value;
+        if (value === undefined || value === '')
+            throw new UsageError(`${command}: --${flag} needs a value (${FLAGS[flag].value})`);
+        if (flags[flag] !== undefined)
+            throw new UsageError(`${command}: --${flag} is given twice`);
+        flags[flag] = value;
+    }
+    return flags;
+}
+
+;// CONCATENATED MODULE: ./src/report/progress.ts
+const PROGRESS_INTERVAL_MS = 5000;
+/** @testOnly */
+function progressLine(e) {
+    const best = e.best === null ? 'none yet' : String(Number(e.best.toPrecision(4)));
+    return `${e.phase}: width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}, best so far ${best}`;
+}
+/**
+ * Returns a progress handler that prints through `print`, at most once per `intervalMs`
+ * (the first event always prints). `now` is injectable for tests.
+ */
+function throttledProgress(print, intervalMs = PROGRESS_INTERVAL_MS, now = Date.now) {
+    let last = -Infinity;
+    return (e) => {
+        const t = now();
+        if (t - last < intervalMs)
+            return;
+        last = t;
+        print(progressLine(e));
+    };
+}
+
+;// CONCATENATED MODULE: ./src/cli/progress.ts
+/** Search progress on stderr: one line redrawn in place on a terminal; elsewhere a plain line every few seconds. */
+
+function progressPrinter(stream) {
+    if (!stream.isTTY) {
+        // The same throttled line the action logs: the first event at once, then one every few seconds.
+        const print = throttledProgress((line) => stream.write(`progress: ${line}\n`));
+        return { onProgress: print, done: () => undefined };
+    }
+    let last = 0;
+    let drawn = false;
+    return {
+        onProgress: (e) => {
+            const now = performance.now();
+            if (now - last < 100)
+                return; // display only: at most ten redraws a second
+            last = now;
+            const best = e.best === null ? '' : ` · best ${e.best.toFixed(4)}`;
+            stream.write(`\r\x1b[2K${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`);
+            drawn = true;
+        },
+        done: () => {
+            if (drawn)
+                stream.write('\r\x1b[2K');
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/cli/usage.ts
+/** The help text of the command line. */
+
+
+function usage(command) {
+    if (command !== null) {
+        const spec = COMMANDS[command];
+        const lines = [
+            `${TOOL_NAME} ${command}: ${spec.summary}`,
+            '',
+            `usage: ${TOOL_NAME} ${command} [options]`,
+            '',
+            'options:',
+            ...spec.flags.map((f) => `  --${`${f} ${FLAGS[f].value}`.padEnd(16)}${FLAGS[f].help}`),
+            '',
+            exitCodesText(),
+        ];
+        return lines.join('\n');
+    }
+    return [
+        `${TOOL_NAME} ${TOOL_VERSION}: finds the smallest hidden-layer width that reaches`,
+        'your target, and checks it against a committed baseline and a device budget.',
+        '',
+        'usage:',
+        ...Object.keys(COMMANDS).map((c) => `  ${TOOL_NAME} ${c.padEnd(9)} [options]`),
+        `  ${TOOL_NAME} COMMAND --help   options of one command`,
+        `  ${TOOL_NAME} --version`,
+        '',
+        'commands:',
+        ...Object.entries(COMMANDS).map(([c, s]) => `  ${c.padEnd(10)}${s.summary}`),
+        '',
+        'The current folder is the workspace. Paths in the config file resolve against',
+        "the config file's folder and must stay inside the workspace.",
+        'Messages go to stderr; stdout carries only --help and --version.',
+        '',
+        exitCodesText(),
+    ].join('\n');
+}
+function exitCodesText() {
+    return 'exit codes: 0 pass, improved or new; 1 fail or inconclusive; 2 bad input';
+}
+
 ;// CONCATENATED MODULE: external "node:fs"
 const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
-;// CONCATENATED MODULE: ./src/config/paths.ts
+;// CONCATENATED MODULE: ./src/common/paths.ts
 /**
  * Workspace confinement for every path a user gives (config paths, action inputs).
  * A gate that runs on pull requests must not read or write outside the checkout, so a
@@ -8719,10 +9060,24 @@ const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import
 
 
 
-/** True when `child` is `parent` or lies below it (both absolute and normalised). */
+/** True when `child` is `parent` or lies below it (both absolute and normalised). @testOnly */
 function isInside(parent, child) {
-    const rel = (0,external_node_path_namespaceObject.relative)(parent, child);
-    return rel === '' || (!rel.startsWith('..' + external_node_path_namespaceObject.sep) && rel !== '..' && !(0,external_node_path_namespaceObject.isAbsolute)(rel));
+    return relativeInside(parent, child) !== null;
+}
+/**
+ * `child` relative to `parent` with forward slashes ('' for `parent` itself), or null when it
+ * lies outside. A name that merely starts with two dots (`..x`) is inside.
+ */
+function relativeInside(parent, child) {
+    const rel = (0,external_node_path_namespaceObject.relative)((0,external_node_path_namespaceObject.resolve)(parent), (0,external_node_path_namespaceObject.resolve)(child));
+    if (rel === '..' || rel.startsWith('..' + external_node_path_namespaceObject.sep) || (0,external_node_path_namespaceObject.isAbsolute)(rel))
+        return null;
+    return rel.split(external_node_path_namespaceObject.sep).join('/');
+}
+/** How a file is named in messages: relative to the workspace root when inside it, forward slashes. */
+function displayPath(root, file) {
+    const rel = relativeInside(root, file);
+    return rel === null ? (0,external_node_path_namespaceObject.resolve)(file) : rel || '.';
 }
 /** The real location of `p`, following links through its longest existing prefix. */
 function realLocation(p) {
@@ -8769,6 +9124,109 @@ function resolveInside(root, baseDir, p, key) {
     return result.path;
 }
 
+;// CONCATENATED MODULE: external "node:fs/promises"
+const promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
+;// CONCATENATED MODULE: ./src/common/metric.ts
+/**
+ * The target metrics and what "better" and "meets the target" mean for each: one definition,
+ * used by the engine, the search, the gate and every screen.
+ */
+const ERROR_METRICS = ['rmse', 'mae', 'max-abs-error'];
+/** Accuracy is better when higher; the error metrics when lower. */
+function higherIsBetter(metric) {
+    return metric === 'accuracy';
+}
+/** True when `value` meets the target (accuracy: ≥ threshold; error metrics: ≤ threshold). NaN never does. */
+function meetsThreshold(value, target) {
+    if (!(value === value))
+        return false;
+    return higherIsBetter(target.metric) ? value >= target.threshold : value <= target.threshold;
+}
+/** True when `a` is strictly better than `b` for this metric; a finite value beats NaN. */
+function isBetter(metric, a, b) {
+    if (!(a === a))
+        return false;
+    if (!(b === b))
+        return true;
+    return higherIsBetter(metric) ? a > b : a < b;
+}
+/** The metrics that can judge a task. */
+function metricsFor(task) {
+    return task === 'classification' ? ['accuracy'] : ERROR_METRICS;
+}
+function metricFitsTask(metric, task) {
+    return metricsFor(task).includes(metric);
+}
+/** The metric used when the config names none. */
+function defaultMetric(task) {
+    return task === 'regression' ? 'rmse' : 'accuracy';
+}
+/** "≥" for accuracy, "≤" for the error metrics. */
+function comparator(metric) {
+    return higherIsBetter(metric) ? '≥' : '≤';
+}
+
+;// CONCATENATED MODULE: ./src/common/format.ts
+/** Number and word formatting shared by the search's notes, the gate's reasons and every renderer. Locale-free. */
+
+/**
+ * A metric value with up to 4 decimals, trailing zeros trimmed (0.95, 0.9625, 0.9615),
+ * never in exponent form so it is also a valid Mermaid number.
+ */
+function formatMetric(value) {
+    if (!Number.isFinite(value))
+        return String(value);
+    const abs = Math.abs(value);
+    const decimals = abs >= 1000 ? 1 : abs >= 100 ? 2 : 4;
+    let s = value.toFixed(decimals);
+    if (s.includes('e'))
+        s = BigInt(Math.round(value)).toString();
+    if (s.includes('.'))
+        s = s.replace(/0+$/, '').replace(/\.$/, '');
+    return s === '-0' ? '0' : s;
+}
+/** Whole numbers with thin grouping commas: 12,345. */
+function formatCount(n) {
+    const s = String(Math.trunc(Math.abs(n)));
+    const grouped = s.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+    return n < 0 ? `-${grouped}` : grouped;
+}
+/** Signed difference: +12, −3, 0. */
+function formatDelta(n) {
+    if (n > 0)
+        return `+${formatCount(n)}`;
+    if (n < 0)
+        return `−${formatCount(-n)}`;
+    return '0';
+}
+function formatSeconds(seconds) {
+    if (seconds === null || seconds === undefined || !Number.isFinite(seconds))
+        return '—';
+    if (seconds < 10)
+        return `${seconds.toFixed(2)} s`;
+    if (seconds < 120)
+        return `${seconds.toFixed(1)} s`;
+    const m = Math.floor(seconds / 60);
+    return `${m} min ${Math.round(seconds - m * 60)} s`;
+}
+function neurons(n) {
+    return n === 1 ? '1 hidden neuron' : `${formatCount(n)} hidden neurons`;
+}
+/** "accuracy ≥ 0.95" / "rmse ≤ 0.3". */
+function targetShort(metric, threshold) {
+    return `${metric} ${comparator(metric)} ${formatMetric(threshold)}`;
+}
+/** "accuracy of at least 0.95" / "rmse of at most 0.3". */
+function targetPhrase(metric, threshold) {
+    return `${metric} of ${higherIsBetter(metric) ? 'at least' : 'at most'} ${formatMetric(threshold)}`;
+}
+function successRate(reached, restarts) {
+    if (reached === null || reached === undefined || restarts === null || restarts === undefined || restarts === 0) {
+        return '—';
+    }
+    return `${reached}/${restarts}`;
+}
+
 ;// CONCATENATED MODULE: ./src/config/spec.ts
 /**
  * Every config key the validator accepts, with its rule, default and description, as data.
@@ -8790,49 +9248,63 @@ const CONFIG_SPEC = [
         keys: [
             {
                 name: 'path',
+                changesResult: false,
                 rule: { kind: 'path' },
                 default: REQUIRED,
                 description: 'CSV file with a header row, relative to this config file. Must stay inside the workspace.',
             },
-            { name: 'target', rule: { kind: 'text' }, default: REQUIRED, description: 'Column to predict.' },
+            {
+                name: 'target',
+                changesResult: true,
+                rule: { kind: 'text' },
+                default: REQUIRED,
+                description: 'Column to predict.',
+            },
             {
                 name: 'features',
+                changesResult: true,
                 rule: { kind: 'text-list', minItems: 1, nullable: true },
                 default: null,
                 description: 'Columns used as inputs. Default: every column except the target and the ignored ones.',
             },
             {
                 name: 'ignore',
+                changesResult: true,
                 rule: { kind: 'text-list', minItems: 0 },
                 default: [],
                 description: 'Columns never used as inputs (identifiers, timestamps).',
             },
             {
                 name: 'task',
+                changesResult: true,
                 rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
                 default: 'auto',
                 description: 'auto: decided from the target column (text or few distinct values: classification).',
             },
             {
                 name: 'validation',
+                changesResult: true,
                 rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
                 default: 0.25,
                 description: 'Fraction of rows held out to judge the target, stratified by class. 0 judges on the training rows.',
             },
             {
                 name: 'delimiter',
+                changesResult: true,
                 rule: { kind: 'character' },
                 default: ',',
                 description: 'Field separator: one character (write "\\t" in double quotes for a tab).',
             },
             {
                 name: 'max-categories',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: 10_000 },
                 default: 20,
                 description: 'Most distinct values a text feature may have; each becomes one input.',
             },
             {
                 name: 'missing',
+                changesResult: true,
                 rule: { kind: 'enum', values: ['error', 'drop'] },
                 default: 'error',
                 description: 'An empty feature value: error stops with its location; drop skips the row and counts it.',
@@ -8846,12 +9318,14 @@ const CONFIG_SPEC = [
         keys: [
             {
                 name: 'metric',
+                changesResult: true,
                 rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
                 default: DERIVED,
                 description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
             },
             {
                 name: 'threshold',
+                changesResult: true,
                 rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
                 default: REQUIRED,
                 description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
@@ -8865,96 +9339,112 @@ const CONFIG_SPEC = [
         keys: [
             {
                 name: 'min-width',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
                 default: 1,
                 description: 'First width the growth phase tries.',
             },
             {
                 name: 'max-width',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
                 default: 16,
                 description: 'Last width the growth phase tries; at least min-width.',
             },
             {
                 name: 'restarts',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: 1000 },
                 default: 10,
                 description: 'Seeded trainings per width.',
             },
             {
                 name: 'required',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: 1000 },
                 default: 3,
                 description: 'Trainings per width that must reach the target for the width to count as adequate; at most restarts.',
             },
             {
                 name: 'max-epochs',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
                 default: 3000,
                 description: 'Epochs after which one training gives up.',
             },
             {
                 name: 'seed',
+                changesResult: true,
                 rule: { kind: 'integer', min: 0, max: 4_294_967_295 },
                 default: 1,
                 description: 'Base seed of every random choice (split, initial weights); same seed, same result.',
             },
             {
                 name: 'growth',
+                changesResult: true,
                 rule: { kind: 'enum', values: ['fresh', 'in-place'] },
                 default: 'fresh',
                 description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
             },
             {
                 name: 'activation',
+                changesResult: true,
                 rule: { kind: 'enum', values: ['tanh', 'logistic', 'relu'] },
                 default: 'tanh',
                 description: 'Hidden-layer activation function.',
             },
             {
                 name: 'optimizer',
+                changesResult: true,
                 rule: { kind: 'enum', values: ['irprop+', 'adam', 'backprop'] },
                 default: 'irprop+',
                 description: 'irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
             },
             {
                 name: 'init',
+                changesResult: true,
                 rule: { kind: 'enum', values: ['nguyen-widrow', 'glorot', 'he'], nullable: true },
                 default: null,
                 description: 'Initial weights. Default (null): Nguyen-Widrow for tanh and logistic, He for relu.',
             },
             {
                 name: 'check-every',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
                 default: 10,
                 description: 'Epochs between checks of the target on the validation rows; at most max-epochs.',
             },
             {
                 name: 'prune',
+                changesResult: true,
                 rule: { kind: 'boolean' },
                 default: true,
                 description: 'Whether to remove hidden neurons from the adequate network while it still reaches the target.',
             },
             {
                 name: 'prune-epochs',
+                changesResult: true,
                 rule: { kind: 'integer', min: 0, max: EPOCH_LIMIT },
                 default: 200,
                 description: 'Epochs of retraining after each neuron removed.',
             },
             {
                 name: 'time-budget',
+                changesResult: false,
                 rule: { kind: 'number', min: 0, max: 31_536_000, exclusiveMin: true, nullable: true },
                 default: null,
                 description: 'Wall-clock seconds the search may take; when spent the verdict is inconclusive. null: no limit.',
             },
             {
                 name: 'max-trainings',
+                changesResult: true,
                 rule: { kind: 'integer', min: 1, max: 100_000_000, nullable: true },
                 default: null,
                 description: 'Most trainings the search may run; when spent the verdict is inconclusive. null: no limit.',
             },
             {
                 name: 'workers',
+                changesResult: false,
                 rule: { kind: 'integer', min: 1, max: 256, nullable: true },
                 default: null,
                 description: 'Worker threads. null: one per available CPU core. Results do not depend on it.',
@@ -8968,24 +9458,28 @@ const CONFIG_SPEC = [
         keys: [
             {
                 name: 'baseline',
+                changesResult: false,
                 rule: { kind: 'path' },
                 default: 'neuron-budget.baseline.json',
                 description: 'Baseline file, relative to this config file. Must stay inside the workspace.',
             },
             {
                 name: 'max-width',
+                changesResult: false,
                 rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT, nullable: true },
                 default: null,
                 description: 'Hard device budget: a smallest adequate width above it fails. null: no budget.',
             },
             {
                 name: 'allowed-growth',
+                changesResult: false,
                 rule: { kind: 'integer', min: 0, max: WIDTH_LIMIT },
                 default: 0,
                 description: 'Neurons the width may grow over the baseline before the verdict is fail.',
             },
             {
                 name: 'metric-tolerance',
+                changesResult: false,
                 rule: { kind: 'number', min: 0, max: Number.MAX_VALUE },
                 // 0.02 is common practice for "noticeably worse" with a few hundred validation rows; no source.
                 default: 0.02,
@@ -8994,69 +9488,202 @@ const CONFIG_SPEC = [
         ],
     },
 ];
-
-;// CONCATENATED MODULE: ./src/config/index.ts
+/** "an integer from 1 to 1000", "one of tanh, logistic, relu", … for messages. */
+function describeRule(rule) {
+    const orNull = 'nullable' in rule && rule.nullable ? ', or null' : '';
+    switch (rule.kind) {
+        case 'integer':
+            return `an integer from ${rule.min} to ${rule.max}${orNull}`;
+        case 'number': {
+            const low = rule.exclusiveMin ? `above ${rule.min}` : `of ${rule.min} or more`;
+            if (rule.max === Number.MAX_VALUE)
+                return `a number ${low}${orNull}`;
+            if (rule.exclusiveMax)
+                return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
+            return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and at most ${rule.max}${orNull}`;
+        }
+        case 'enum':
+            return `one of ${rule.values.join(', ')}${orNull}`;
+        case 'boolean':
+            return 'true or false';
+        case 'text':
+            return 'a column name (text)';
+        case 'character':
+            return 'a single character other than a quote or a line break';
+        case 'path':
+            return 'a path relative to the config file';
+        case 'text-list':
+            return `a list of column names${rule.minItems > 0 ? ` (at least ${rule.minItems})` : ''}${orNull}`;
+    }
+}
+/** `min-width` → `minWidth`: how the typed config names a key. */
+function fieldName(key) {
+    return key.replace(/-([a-z])/g, (_, c) => c.toUpperCase());
+}
 /**
- * Reads and validates the YAML config into a typed Config with every default filled in.
- * Every error is a UserError that names the file, the line and column, and the key, and
- * says what was expected and what was found.
+ * A section's documented defaults by typed field name (required and derived keys left out), for
+ * code that builds a config without a file (tests, benchmarks).
+ * @testOnly
+ */
+function sectionDefaults(section) {
+    const spec = CONFIG_SPEC.find((s) => s.name === section);
+    const out = {};
+    for (const key of spec?.keys ?? []) {
+        if (key.default === REQUIRED || key.default === DERIVED)
+            continue;
+        out[fieldName(key.name)] = Array.isArray(key.default) ? [...key.default] : key.default;
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/config/build.ts
+/**
+ * From checked values to the typed Config: every key of spec.ts becomes a field of its section
+ * (camelCase), paths become absolute inside the workspace, and the rules between keys are
+ * checked (each error points at the key that was written).
  */
 
 
 
 
 
-
-
-
-/** How a file is named in messages: relative to the workspace root when inside it, forward slashes. */
-function displayPath(root, file) {
-    const absolute = (0,external_node_path_namespaceObject.resolve)(file);
-    if (!isInside((0,external_node_path_namespaceObject.resolve)(root), absolute))
-        return absolute;
-    return (0,external_node_path_namespaceObject.relative)((0,external_node_path_namespaceObject.resolve)(root), absolute).split(external_node_path_namespaceObject.sep).join('/') || '.';
-}
-async function loadConfig(configPath, root) {
-    const file = (0,external_node_path_namespaceObject.resolve)(root, configPath);
-    const shown = displayPath(root, file);
-    let text;
-    try {
-        text = await (0,promises_namespaceObject.readFile)(file, 'utf8');
-    }
-    catch (error) {
-        const code = error.code;
-        if (code === 'ENOENT') {
-            throw new errors_UserError(`${shown}: config file not found (looked for ${file})`, { file: shown });
+function buildConfig(reader, written, file, root) {
+    const baseDir = (0,external_node_path_namespaceObject.dirname)(file);
+    const sections = {};
+    for (const spec of CONFIG_SPEC) {
+        const found = written.values.get(spec.name) ?? new Map();
+        const section = {};
+        for (const key of spec.keys) {
+            const at = found.get(key.name);
+            const value = reader.value(at, key);
+            const field = fieldName(key.name);
+            if (key.rule.kind === 'path' && typeof value === 'string') {
+                section[field] = insidePath(reader, at, root, baseDir, value, `${spec.name}.${key.name}`);
+                section[`${field}AsWritten`] = value;
+            }
+            else {
+                section[field] = value;
+            }
         }
-        if (code === 'EISDIR')
-            throw new errors_UserError(`${shown}: expected a YAML config file, found a folder`, { file: shown });
-        if (code === 'EACCES')
-            throw new errors_UserError(`${shown}: config file cannot be read (permission denied)`, { file: shown });
-        throw error;
+        sections[spec.name] = section;
     }
-    return parseConfig(text, { file, root });
+    const config = {
+        file,
+        root,
+        data: sections['data'],
+        target: sections['target'],
+        search: sections['search'],
+        gate: sections['gate'],
+        positions: reader.positions(written),
+        metricGiven: written.values.get('target')?.has('metric') ?? false,
+    };
+    checkRules(reader, written, config);
+    return config;
 }
-/** Validates config text as if it were the file `file` (absolute) inside workspace `root`. */
-function parseConfig(text, where) {
-    // Editors do not count a byte-order mark as a column; neither do we.
-    return new ConfigReader(text.replace(/^\uFEFF/, ''), (0,external_node_path_namespaceObject.resolve)(where.file), (0,external_node_path_namespaceObject.resolve)(where.root)).read();
+function insidePath(reader, found, root, baseDir, p, key) {
+    const result = checkInside(root, baseDir, p);
+    if (result.ok)
+        return result.path;
+    if (found)
+        throw reader.valueError(found, `${result.reason}; paths must stay inside the workspace`);
+    throw reader.error(null, key, `the default ${result.reason} (the config file is outside the workspace); set ${key}`);
 }
+/** The rules between keys, each reported at the key the user wrote. */
+function checkRules(reader, written, config) {
+    const at = (section, key) => written.values.get(section)?.get(key);
+    const { data, target, search, gate } = config;
+    for (const [list, name] of [
+        [data.features, 'features'],
+        [data.ignore, 'ignore'],
+    ]) {
+        if (list?.includes(data.target)) {
+            const role = name === 'features' ? 'a feature' : 'ignored';
+            throw reader.valueError(at('data', name), `lists the target column ${quote(data.target)}; the target cannot also be ${role}`);
+        }
+    }
+    const both = data.features?.find((f) => data.ignore.includes(f));
+    if (both !== undefined) {
+        throw reader.valueError(at('data', 'ignore'), `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`);
+    }
+    if (!config.metricGiven)
+        target.metric = defaultMetric(data.task === 'regression' ? 'regression' : 'classification');
+    if (config.metricGiven && data.task !== 'auto' && !metricFitsTask(target.metric, data.task)) {
+        throw reader.valueError(at('target', 'metric'), `data.task is ${data.task}, so expected ${metricsFor(data.task)
+            .join(', ')
+            .replace(/, (?=[^,]*$)/, ' or ')}, found "${target.metric}"`);
+    }
+    const thresholdAt = at('target', 'threshold');
+    if (config.metricGiven || data.task === 'classification')
+        checkThreshold(reader, thresholdAt, target.metric, target.threshold);
+    const searchFound = written.sections.get('search');
+    const ordered = (name, relation, otherName) => {
+        const value = search[fieldName(name)];
+        const other = search[fieldName(otherName)];
+        if (relation === 'at least' ? value >= other : value <= other)
+            return;
+        const mine = at('search', name);
+        if (mine)
+            throw reader.valueError(mine, `expected search.${name} to be ${relation} search.${otherName} (${other}), found ${value}`);
+        // Only the other key was written: blame it, against this key's default.
+        const reverse = relation === 'at least' ? 'at most' : 'at least';
+        const message = `expected search.${otherName} to be ${reverse} search.${name} (${value}, the default), found ${other}`;
+        const theirs = at('search', otherName);
+        if (theirs)
+            throw reader.valueError(theirs, message);
+        throw reader.error(searchFound?.keyNode ?? null, `search.${otherName}`, message);
+    };
+    ordered('max-width', 'at least', 'min-width');
+    ordered('required', 'at most', 'restarts');
+    ordered('check-every', 'at most', 'max-epochs');
+    if (gate.maxWidth !== null && gate.maxWidth < search.minWidth) {
+        throw reader.valueError(at('gate', 'max-width'), `expected at least search.min-width (${search.minWidth}), found ${gate.maxWidth}; every width tried would be over the budget`);
+    }
+    const accuracyKnown = config.metricGiven || data.task === 'classification';
+    if (accuracyKnown && target.metric === 'accuracy' && gate.metricTolerance >= 1) {
+        throw reader.valueError(at('gate', 'metric-tolerance'), `expected a tolerance below 1 for accuracy, found ${gate.metricTolerance}`);
+    }
+}
+/** An accuracy threshold must be a fraction; error thresholds are in the target's own units. */
+function checkThreshold(reader, found, metric, threshold) {
+    if (metric === 'accuracy' && threshold > 1) {
+        throw reader.valueError(found, `expected an accuracy above 0 and at most 1, found ${threshold} (write 95% as 0.95)`);
+    }
+}
+
+// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
+var dist = __nccwpck_require__(8815);
+;// CONCATENATED MODULE: ./src/config/reader.ts
+/**
+ * The YAML side of the config: parses the text once, walks it against the key list in spec.ts,
+ * and checks each value against its rule. Every error names the file, the line and column, and
+ * the key, and says what was expected and what was found. Where each key is written is kept, so
+ * errors found later (after the data are read) still point at the right line.
+ */
+
+
+
+
+
+/** YAML tags a config may carry: the core schema's plain types. Anything else is refused. */
+const CORE_TAGS = new Set(['str', 'int', 'float', 'bool', 'null', 'seq', 'map'].map((t) => `tag:yaml.org,2002:${t}`));
+const NUMBER_TAGS = new Set(['tag:yaml.org,2002:int', 'tag:yaml.org,2002:float']);
+const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 class ConfigReader {
     text;
-    file;
-    root;
-    lines = new dist/* LineCounter */.HN();
     shown;
+    lines = new dist/* LineCounter */.HN();
     doc;
-    constructor(text, file, root) {
+    constructor(text, 
+    /** The file as named in messages. */
+    shown) {
         this.text = text;
-        this.file = file;
-        this.root = root;
-        this.shown = displayPath(root, file);
+        this.shown = shown;
         this.doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter: this.lines, uniqueKeys: true, prettyErrors: false });
     }
+    /** Checks the syntax and the sections and keys against spec.ts; values are checked by `value`. */
     read() {
         this.checkSyntax();
+        this.checkTags();
         const top = this.doc.contents;
         if (top === null || ((0,dist/* isScalar */.jn)(top) && top.value === null)) {
             throw this.error(null, null, 'the config file is empty; expected a mapping with the sections data, target, search and gate');
@@ -9077,7 +9704,21 @@ class ConfigReader {
         const values = new Map();
         for (const spec of CONFIG_SPEC)
             values.set(spec.name, this.readSection(spec, sections.get(spec.name)));
-        return this.build(values, sections);
+        return { sections, values };
+    }
+    /** Where every written section and key is (dotted key → line and column of the key). */
+    positions(written) {
+        const out = new Map();
+        const add = (found) => {
+            const { line, col } = this.lines.linePos(found.keyNode.range?.[0] ?? 0);
+            out.set(found.key, { line, column: col });
+        };
+        for (const found of written.sections.values())
+            add(found);
+        for (const section of written.values.values())
+            for (const found of section.values())
+                add(found);
+        return out;
     }
     // ---- syntax and locations -------------------------------------------------------
     checkSyntax() {
@@ -9090,13 +9731,39 @@ class ConfigReader {
         }
         if (first.code === 'DUPLICATE_KEY') {
             const key = /^\s*["']?([^"':\n]*)/.exec(this.text.slice(offset))?.[1]?.trim() ?? '';
-            throw this.errorAt(offset, null, `key "${key}" appears twice in the same mapping; keep one`);
+            throw this.errorAt(offset, null, `key ${quote(key)} appears twice in the same mapping; keep one`);
         }
         const reason = first.message
             .replace(/ at line \d+, column \d+[\s\S]*$/, '')
             .replace(/\s+/g, ' ')
             .trim();
         throw this.errorAt(offset, null, `YAML syntax error: ${reason}`);
+    }
+    /**
+     * Refuses tags outside the core schema (`!custom`, `!!binary`, `!!set`, …), which would
+     * otherwise pass silently as plain text. `!!float 1` and `!!int 3` are numbers, as written.
+     */
+    checkTags() {
+        (0,dist/* visit */.YR)(this.doc, {
+            Node: (_key, node) => {
+                if (!(0,dist/* isScalar */.jn)(node) && !(0,dist/* isMap */.jh)(node) && !(0,dist/* isSeq */.oP)(node))
+                    return;
+                const tag = node.tag;
+                if (tag === undefined)
+                    return;
+                if (!CORE_TAGS.has(tag)) {
+                    const shown = tag.startsWith('tag:yaml.org,2002:') ? `!!${tag.slice('tag:yaml.org,2002:'.length)}` : tag;
+                    throw this.error(node, null, `unsupported YAML tag ${quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`);
+                }
+                if ((0,dist/* isScalar */.jn)(node) && NUMBER_TAGS.has(tag) && typeof node.value === 'string') {
+                    const text = node.value.trim();
+                    if (!DECIMAL.test(text)) {
+                        throw this.error(node, null, `the tag ${tag.endsWith('int') ? '!!int' : '!!float'} needs a number, found ${quote(node.value)}`);
+                    }
+                    node.value = Number(text);
+                }
+            },
+        });
     }
     errorAt(offset, key, message) {
         const { line, col } = this.lines.linePos(Math.min(offset, this.text.length));
@@ -9141,10 +9808,9 @@ class ConfigReader {
             if (v === null)
                 return node.source === '' || node.source === undefined ? 'nothing' : `null`;
             if (typeof v === 'string')
-                return JSON.stringify(v);
+                return quote(v);
             if (typeof v === 'number' || typeof v === 'boolean' || typeof v === 'bigint')
                 return String(v);
-            return 'a value of an unsupported type';
         }
         return 'a value of an unsupported type';
     }
@@ -9154,8 +9820,7 @@ class ConfigReader {
         if (!section || section.node === null || ((0,dist/* isScalar */.jn)(section.node) && section.node.value === null)) {
             if (spec.required) {
                 const missing = spec.keys.filter((k) => k.default === REQUIRED).map((k) => `${spec.name}.${k.name}`);
-                const at = section ? section.keyNode : null;
-                throw this.error(at, spec.name, `section is required (with ${missing.join(' and ')}); ${spec.description}`);
+                throw this.error(section?.keyNode ?? null, spec.name, `section is required (with ${missing.join(' and ')}); ${spec.description}`);
             }
             return out;
         }
@@ -9178,10 +9843,8 @@ class ConfigReader {
         }
         return out;
     }
-    /** The value of one key checked against its rule, or its default. */
-    value(section, sectionName, name) {
-        const spec = CONFIG_SPEC.find((s) => s.name === sectionName).keys.find((k) => k.name === name);
-        const found = section.get(name);
+    /** The value of one key checked against its rule, or its default (undefined for required and derived keys). */
+    value(found, spec) {
         if (!found) {
             if (spec.default === REQUIRED || spec.default === DERIVED)
                 return undefined;
@@ -9254,7 +9917,7 @@ class ConfigReader {
                         throw this.error(item ?? node, found.key, `expected column names as text, found ${this.describe(item)}${hint}`);
                     }
                     if (seen.has(v))
-                        throw this.error(item, found.key, `column "${v}" is listed twice`);
+                        throw this.error(item, found.key, `column ${quote(v)} is listed twice`);
                     seen.add(v);
                     out.push(v);
                 }
@@ -9262,181 +9925,95 @@ class ConfigReader {
             }
         }
     }
-    // ---- the typed config and the rules between keys ---------------------------------
-    build(values, sections) {
-        const d = values.get('data');
-        const t = values.get('target');
-        const s = values.get('search');
-        const g = values.get('gate');
-        const v = (section, sectionName, name) => this.value(section, sectionName, name);
-        const baseDir = (0,external_node_path_namespaceObject.dirname)(this.file);
-        const pathAsWritten = v(d, 'data', 'path');
-        const target = v(d, 'data', 'target');
-        const features = v(d, 'data', 'features');
-        const ignore = v(d, 'data', 'ignore');
-        for (const [list, name] of [
-            [features, 'features'],
-            [ignore, 'ignore'],
-        ]) {
-            if (list?.includes(target)) {
-                throw this.valueError(d.get(name), `lists the target column "${target}"; the target cannot also be ${name === 'features' ? 'a feature' : 'ignored'}`);
-            }
-        }
-        const both = features?.find((f) => ignore.includes(f));
-        if (both !== undefined) {
-            throw this.valueError(d.get('ignore'), `column "${both}" is both in data.features and in data.ignore; keep it in one`);
-        }
-        const data = {
-            path: this.insidePath(d.get('path'), baseDir, pathAsWritten),
-            pathAsWritten,
-            target,
-            features,
-            ignore,
-            task: v(d, 'data', 'task'),
-            validation: v(d, 'data', 'validation'),
-            delimiter: v(d, 'data', 'delimiter'),
-            maxCategories: v(d, 'data', 'max-categories'),
-            missing: v(d, 'data', 'missing'),
-        };
-        const metricGiven = v(t, 'target', 'metric');
-        const metric = metricGiven ?? (data.task === 'regression' ? 'rmse' : 'accuracy');
-        if (metricGiven !== undefined && data.task !== 'auto') {
-            const fits = data.task === 'classification' ? metric === 'accuracy' : metric !== 'accuracy';
-            if (!fits) {
-                const expected = data.task === 'classification' ? 'accuracy' : 'rmse, mae or max-abs-error';
-                throw this.valueError(t.get('metric'), `data.task is ${data.task}, so expected ${expected}, found "${metric}"`);
-            }
-        }
-        const threshold = v(t, 'target', 'threshold');
-        if (metric === 'accuracy' && threshold > 1) {
-            throw this.valueError(t.get('threshold'), `expected an accuracy above 0 and at most 1, found ${threshold} (write 95% as 0.95)`);
-        }
-        const targetConfig = { metric, threshold };
-        const search = {
-            minWidth: v(s, 'search', 'min-width'),
-            maxWidth: v(s, 'search', 'max-width'),
-            restarts: v(s, 'search', 'restarts'),
-            required: v(s, 'search', 'required'),
-            maxEpochs: v(s, 'search', 'max-epochs'),
-            seed: v(s, 'search', 'seed'),
-            growth: v(s, 'search', 'growth'),
-            activation: v(s, 'search', 'activation'),
-            optimizer: v(s, 'search', 'optimizer'),
-            init: v(s, 'search', 'init'),
-            checkEvery: v(s, 'search', 'check-every'),
-            pruneEpochs: v(s, 'search', 'prune-epochs'),
-            prune: v(s, 'search', 'prune'),
-            timeBudget: v(s, 'search', 'time-budget'),
-            maxTrainings: v(s, 'search', 'max-trainings'),
-            workers: v(s, 'search', 'workers'),
-        };
-        const searchFound = sections.get('search');
-        this.ordered(s, searchFound, 'max-width', search.maxWidth, 'at least', 'min-width', search.minWidth);
-        this.ordered(s, searchFound, 'required', search.required, 'at most', 'restarts', search.restarts);
-        this.ordered(s, searchFound, 'check-every', search.checkEvery, 'at most', 'max-epochs', search.maxEpochs);
-        const baselineAsWritten = v(g, 'gate', 'baseline');
-        const gateMaxWidth = v(g, 'gate', 'max-width');
-        if (gateMaxWidth !== null && gateMaxWidth < search.minWidth) {
-            throw this.valueError(g.get('max-width'), `expected at least search.min-width (${search.minWidth}), found ${gateMaxWidth}; every width tried would be over the budget`);
-        }
-        const metricTolerance = v(g, 'gate', 'metric-tolerance');
-        if (metric === 'accuracy' && metricTolerance >= 1) {
-            throw this.valueError(g.get('metric-tolerance'), `expected a tolerance below 1 for accuracy, found ${metricTolerance}`);
-        }
-        const gate = {
-            baseline: g.has('baseline')
-                ? this.insidePath(g.get('baseline'), baseDir, baselineAsWritten)
-                : this.defaultInside(baseDir, baselineAsWritten, 'gate.baseline'),
-            baselineAsWritten,
-            maxWidth: gateMaxWidth,
-            allowedGrowth: v(g, 'gate', 'allowed-growth'),
-            metricTolerance,
-        };
-        return { file: this.file, root: this.root, data, target: targetConfig, search, gate };
-    }
-    /** search.`name` must be at least / at most search.`otherName`; the error points at whichever was written. */
-    ordered(section, sectionFound, name, value, relation, otherName, other) {
-        if (relation === 'at least' ? value >= other : value <= other)
-            return;
-        const written = section.get(name);
-        if (written) {
-            throw this.valueError(written, `expected search.${name} to be ${relation} search.${otherName} (${other}), found ${value}`);
-        }
-        // Only the other key was written: blame it, against this key's default.
-        const otherWritten = section.get(otherName);
-        const reverse = relation === 'at least' ? 'at most' : 'at least';
-        const message = `expected search.${otherName} to be ${reverse} search.${name} (${value}, the default), found ${other}`;
-        if (otherWritten)
-            throw this.valueError(otherWritten, message);
-        throw this.error(sectionFound?.keyNode ?? null, `search.${otherName}`, message);
-    }
-    insidePath(found, baseDir, p) {
-        const result = checkInside(this.root, baseDir, p);
-        if (!result.ok)
-            throw this.valueError(found, `${result.reason}; paths must stay inside the workspace`);
-        return result.path;
-    }
-    defaultInside(baseDir, p, key) {
-        const result = checkInside(this.root, baseDir, p);
-        if (!result.ok) {
-            throw this.error(null, key, `the default ${result.reason} (the config file is outside the workspace); set ${key}`);
-        }
-        return result.path;
-    }
 }
-/** "an integer from 1 to 1000", "one of tanh, logistic, relu", … for messages. */
-function describeRule(rule) {
-    const orNull = 'nullable' in rule && rule.nullable ? ', or null' : '';
-    switch (rule.kind) {
-        case 'integer':
-            return `an integer from ${rule.min} to ${rule.max}${orNull}`;
-        case 'number': {
-            const low = rule.exclusiveMin ? `above ${rule.min}` : `of ${rule.min} or more`;
-            if (rule.max === Number.MAX_VALUE)
-                return `a number ${low}${orNull}`;
-            if (rule.exclusiveMax)
-                return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
-            return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and at most ${rule.max}${orNull}`;
+
+;// CONCATENATED MODULE: ./src/config/index.ts
+/**
+ * The config stage: the YAML file → a typed Config with every default filled in (reader.ts
+ * walks the YAML against spec.ts, build.ts makes the typed config and checks the rules between
+ * keys). Errors found after the data are read point at the key through the positions kept here.
+ */
+
+
+
+
+
+
+
+
+
+
+/** A config is a few dozen lines; anything this big is not one (and parsing it could take minutes). @testOnly */
+const MAX_CONFIG_BYTES = 256 * 1024;
+async function loadConfig(configPath, root) {
+    const file = (0,external_node_path_namespaceObject.resolve)(root, configPath);
+    const shown = displayPath(root, file);
+    let text;
+    try {
+        const info = await (0,promises_namespaceObject.stat)(file);
+        if (info.isFile() && info.size > MAX_CONFIG_BYTES) {
+            throw new errors_UserError(`${shown}: the config file has ${formatCount(info.size)} bytes; a config may have at most ${formatCount(MAX_CONFIG_BYTES)} (is this the right file?)`, { file: shown });
         }
-        case 'enum':
-            return `one of ${rule.values.join(', ')}${orNull}`;
-        case 'boolean':
-            return 'true or false';
-        case 'text':
-            return 'a column name (text)';
-        case 'character':
-            return 'a single character other than a quote or a line break';
-        case 'path':
-            return 'a path relative to the config file';
-        case 'text-list':
-            return `a list of column names${rule.minItems > 0 ? ` (at least ${rule.minItems})` : ''}${orNull}`;
+        text = await (0,promises_namespaceObject.readFile)(file, 'utf8');
     }
+    catch (error) {
+        if (error instanceof errors_UserError)
+            throw error;
+        const code = error.code;
+        if (code === 'ENOENT')
+            throw new errors_UserError(`${shown}: config file not found (looked for ${file})`, { file: shown });
+        if (code === 'EISDIR')
+            throw new errors_UserError(`${shown}: expected a YAML config file, found a folder`, { file: shown });
+        if (code === 'EACCES')
+            throw new errors_UserError(`${shown}: config file cannot be read (permission denied)`, { file: shown });
+        throw error;
+    }
+    return parseConfig(text, { file, root });
+}
+/** Validates config text as if it were the file `file` (absolute) inside workspace `root`. @testOnly */
+function parseConfig(text, where) {
+    const file = (0,external_node_path_namespaceObject.resolve)(where.file);
+    const root = (0,external_node_path_namespaceObject.resolve)(where.root);
+    // Editors do not count a byte-order mark as a column; neither do we.
+    const reader = new ConfigReader(text.replace(/^\uFEFF/, ''), displayPath(root, file));
+    return buildConfig(reader, reader.read(), file, root);
 }
 /**
- * Where a dotted key (`target.metric`) is written in a config file, for errors found after
- * validation (when the data show the metric does not suit the task). Falls back to the
- * enclosing section, then to null.
+ * A UserError about a config key found after validation (the data showed the problem): at the
+ * key's line and column when it is written, else at its section's, else at the file.
  */
-async function keyPosition(file, dottedKey) {
-    const text = await (0,promises_namespaceObject.readFile)(file, 'utf8').catch(() => null);
-    if (text === null)
-        return null;
-    const lines = new dist/* LineCounter */.HN();
-    const doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter: lines });
-    const parts = dottedKey.split('.');
-    while (parts.length > 0) {
-        const pair = doc.getIn(parts.slice(0, -1), true);
-        const map = parts.length === 1 ? doc.contents : pair;
-        if (map && (0,dist/* isMap */.jh)(map)) {
-            const found = map.items.find((p) => (0,dist/* isScalar */.jn)(p.key) && p.key.value === parts[parts.length - 1]);
-            if (found?.key.range) {
-                const { line, col } = lines.linePos(found.key.range[0]);
-                return { line, column: col };
-            }
+function configKeyError(config, key, detail) {
+    const shown = displayPath(config.root, config.file);
+    const at = config.positions.get(key) ?? config.positions.get(key.split('.')[0]) ?? null;
+    const where = at === null ? shown : `${shown}:${at.line}:${at.column}`;
+    return new errors_UserError(`${where}: ${key}: ${detail}`, {
+        file: shown,
+        key,
+        ...(at ? { line: at.line, column: at.column } : {}),
+    });
+}
+/**
+ * With data.task auto the task is only known after reading: the metric follows it unless the
+ * config names one, and a named metric must suit it.
+ */
+function settleMetric(config, task) {
+    const target = config.target;
+    if (!config.metricGiven) {
+        const metric = defaultMetric(task);
+        if (metric === 'accuracy' && target.threshold > 1) {
+            throw configKeyError(config, 'target.threshold', `the target column ${quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
         }
-        parts.pop();
+        if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
+            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
+        }
+        return { ...config, target: { ...target, metric } };
     }
-    return null;
+    if (metricFitsTask(target.metric, task))
+        return config;
+    const hint = task === 'classification'
+        ? 'set target.metric to accuracy, or data.task to regression'
+        : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
+    throw configKeyError(config, 'target.metric', `the target column ${quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
 }
 
 ;// CONCATENATED MODULE: ./src/data/where.ts
@@ -12017,14 +12594,14 @@ const NumberKind = {
 };
 // Decimal notation: optional sign, digits with an optional fraction, optional exponent.
 // Hex, binary, `1_000` and the like are text, even though Number() would accept some.
-const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+const numbers_DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 const NON_FINITE = /^[+-]?(?:nan|inf|infinity)$/i;
 /** Reads `text` (already trimmed); the value is in `parsed.value` when Finite. */
 function classifyNumber(text, parsed) {
     const c = text.charCodeAt(0);
     // Fast rejection of obvious text: a number starts with a digit, sign or dot.
     const couldBeNumber = (c >= 48 && c <= 57) || c === 45 || c === 43 || c === 46;
-    if (couldBeNumber && DECIMAL.test(text)) {
+    if (couldBeNumber && numbers_DECIMAL.test(text)) {
         const value = Number(text);
         if (!Number.isFinite(value))
             return NumberKind.Overflow;
@@ -12216,7 +12793,7 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
             const b = chunk[i];
             if (this.need > 0) {
                 if (b < this.low || b > this.high)
-                    return this.where('invalid', hex(b));
+                    return this.where('invalid', text_check_hex(b));
                 this.need--;
                 this.low = 0x80;
                 this.high = 0xbf;
@@ -12259,7 +12836,7 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
             else if (b === 0xf4)
                 this.expect(3, 0x80, 0x8f);
             else
-                return this.where('invalid', hex(b));
+                return this.where('invalid', text_check_hex(b));
         }
         return null;
     }
@@ -12281,7 +12858,7 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
         return { line: this.line, column: this.field + 1, bytes, why, header: this.header ?? [] };
     }
 }
-function hex(b) {
+function text_check_hex(b) {
     return `0x${b.toString(16).padStart(2, '0')}`;
 }
 /** Good enough to name a column in a message; the CSV parser does the real work. */
@@ -12489,62 +13066,117 @@ recordLine, header) {
     return error;
 }
 
-;// CONCATENATED MODULE: ./src/data/split.ts
-
-/** SplitMix64 (Steele, Lea & Flood 2014): turns one seed into well-mixed 64-bit words. */
-function splitMix64(seed) {
-    let state = BigInt.asUintN(64, seed);
-    return () => {
-        state = BigInt.asUintN(64, state + 0x9e3779b97f4a7c15n);
-        let z = state;
-        z = BigInt.asUintN(64, (z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n);
-        z = BigInt.asUintN(64, (z ^ (z >> 27n)) * 0x94d049bb133111ebn);
-        return z ^ (z >> 31n);
-    };
+;// CONCATENATED MODULE: ./src/common/random.ts
+/**
+ * Seeded random numbers: xoshiro128** version 1.1 (Blackman & Vigna), seeded through
+ * SplitMix64 (Steele, Lea & Flood). Only 32-bit integer operations in the hot path, so every
+ * engine produces the same stream. Every random choice in neuron-budget (the data split, the
+ * initial weights) draws from here.
+ */
+const MASK64 = (1n << 64n) - 1n;
+const GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
+/** One SplitMix64 output step: advances `state` by the golden gamma and mixes it. */
+function splitMix64Mix(z) {
+    z = ((z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n) & MASK64;
+    z = ((z ^ (z >> 27n)) * 0x94d049bb133111ebn) & MASK64;
+    return z ^ (z >> 31n);
 }
-/** xoshiro128** 1.1 (Blackman & Vigna): 32-bit outputs using only 32-bit operations. */
-function xoshiro128ss(s0, s1, s2, s3) {
-    let a = s0 >>> 0;
-    let b = s1 >>> 0;
-    let c = s2 >>> 0;
-    let d = s3 >>> 0;
-    return () => {
-        const r = Math.imul(b, 5);
+/** A SplitMix64 generator over 64-bit unsigned BigInts (used for seeding only). @testOnly */
+class SplitMix64 {
+    state;
+    constructor(seed) {
+        this.state = BigInt.asUintN(64, seed);
+    }
+    next() {
+        this.state = (this.state + GOLDEN_GAMMA) & MASK64;
+        return splitMix64Mix(this.state);
+    }
+}
+/** xoshiro128** 1.1: the scrambler reads s[1] (version 1.0 wrongly read s[0]). @testOnly */
+class Xoshiro128StarStar {
+    a;
+    b;
+    c;
+    d;
+    constructor(s0, s1, s2, s3) {
+        this.a = s0 | 0;
+        this.b = s1 | 0;
+        this.c = s2 | 0;
+        this.d = s3 | 0;
+        if ((this.a | this.b | this.c | this.d) === 0) {
+            throw new RangeError('xoshiro128** state must not be all zero');
+        }
+    }
+    /** The four state words as unsigned 32-bit integers. */
+    state() {
+        return [this.a >>> 0, this.b >>> 0, this.c >>> 0, this.d >>> 0];
+    }
+    nextUint32() {
+        const r = Math.imul(this.b, 5);
         const result = Math.imul((r << 7) | (r >>> 25), 9) >>> 0;
-        const t = b << 9;
-        c ^= a;
-        d ^= b;
-        b ^= c;
-        a ^= d;
-        c ^= t;
-        d = (d << 11) | (d >>> 21);
+        const t = this.b << 9;
+        this.c ^= this.a;
+        this.d ^= this.b;
+        this.b ^= this.c;
+        this.a ^= this.d;
+        this.c ^= t;
+        this.d = (this.d << 11) | (this.d >>> 21);
         return result;
-    };
+    }
+    nextDouble() {
+        const hi = this.nextUint32() >>> 5;
+        const lo = this.nextUint32() >>> 6;
+        return (hi * 67108864 + lo) / 9007199254740992;
+    }
 }
-/** Uniform doubles in [0, 1) with 53 random bits, seeded through SplitMix64. */
-function seededUniform(seed) {
-    const mix = splitMix64(seed);
-    const r0 = mix();
-    const r1 = mix();
-    const lo = (x) => Number(x & 0xffffffffn);
-    const hi = (x) => Number(x >> 32n);
-    const next = xoshiro128ss(lo(r0), hi(r0), lo(r1), hi(r1));
-    return () => ((next() >>> 5) * 67108864 + (next() >>> 6)) / 9007199254740992;
+/**
+ * Our seeding convention: a SplitMix64 generator started at `seed`; its first two outputs
+ * r0, r1 give the state words [lo(r0), hi(r0), lo(r1), hi(r1)].
+ */
+function xoshiroFromSeed(seed) {
+    const sm = new SplitMix64(seed);
+    for (;;) {
+        const r0 = sm.next();
+        const r1 = sm.next();
+        const w = [r0 & 0xffffffffn, r0 >> 32n, r1 & 0xffffffffn, r1 >> 32n].map(Number);
+        // An all-zero state is a fixed point; draw again in the (2^-128) case it happens.
+        if ((w[0] | w[1] | w[2] | w[3]) !== 0)
+            return new Xoshiro128StarStar(w[0], w[1], w[2], w[3]);
+    }
+}
+function toUint64(n, what) {
+    if (!Number.isSafeInteger(n))
+        throw new RangeError(`${what} must be a safe integer, got ${n}`);
+    return BigInt.asUintN(64, BigInt(n));
+}
+/**
+ * The stream for restart `restart` of width `width` under base seed `seed`. The three numbers
+ * are chained through the SplitMix64 mixer so that neighbouring triples give unrelated streams.
+ */
+function rngFor(seed, width, restart) {
+    let h = splitMix64Mix((toUint64(seed, 'seed') + GOLDEN_GAMMA) & MASK64);
+    h = splitMix64Mix(((h ^ toUint64(width, 'width')) + GOLDEN_GAMMA * 2n) & MASK64);
+    h = splitMix64Mix(((h ^ toUint64(restart, 'restart')) + GOLDEN_GAMMA * 3n) & MASK64);
+    return xoshiroFromSeed(h);
 }
 /** Fisher–Yates shuffle in place. */
-function shuffle(items, uniform) {
+function shuffle(items, rng) {
     for (let i = items.length - 1; i > 0; i--) {
-        const j = Math.floor(uniform() * (i + 1));
+        const j = Math.floor(rng.nextDouble() * (i + 1));
         const t = items[i];
         items[i] = items[j];
         items[j] = t;
     }
 }
+
+;// CONCATENATED MODULE: ./src/data/split.ts
+
+
 // Keeps the split's stream apart from the training streams drawn from the same seed.
 const SPLIT_STREAM = 0x73706c6974n; // "split"
 function splitRows(target, validation, seed, file) {
     const groups = groupRows(target);
-    const uniform = seededUniform(BigInt(seed) ^ SPLIT_STREAM);
+    const rng = xoshiroFromSeed(BigInt(seed) ^ SPLIT_STREAM);
     const train = [];
     const held = [];
     groups.forEach((rows, g) => {
@@ -12559,7 +13191,7 @@ function splitRows(target, validation, seed, file) {
         else if (target.classIndex === null && rows.length < 2) {
             throw tooFew(target, g, rows.length, 2, validation, file);
         }
-        shuffle(rows, uniform);
+        shuffle(rows, rng);
         for (let i = 0; i < rows.length; i++)
             (i < take ? held : train).push(rows[i]);
     });
@@ -12697,7 +13329,7 @@ async function loadData(config) {
     }
     catch (error) {
         if (error instanceof ConfigKeyProblem)
-            throw await atConfigKey(config, error.key, error.detail);
+            throw configKeyError(config, error.key, error.detail);
         throw error;
     }
 }
@@ -12744,18 +13376,6 @@ async function checkExists(file) {
     if (!isFile)
         throw new ConfigKeyProblem('data.path', `expected a CSV file, found a folder at ${file.shown}`);
 }
-/** A UserError at the key's place in the config file (line and column when it is written there). */
-async function atConfigKey(config, key, detail) {
-    const shown = displayPath(config.root, config.file);
-    const at = await keyPosition(config.file, key);
-    const where = at === null ? shown : `${shown}:${at.line}:${at.column}`;
-    return new errors_UserError(`${where}: ${key}: ${detail}`, {
-        file: config.file,
-        line: at?.line,
-        column: at?.column,
-        key,
-    });
-}
 
 ;// CONCATENATED MODULE: ./src/files/atomic.ts
 /**
@@ -12787,63 +13407,57 @@ async function writeFileAtomic(path, text) {
     }
 }
 
-;// CONCATENATED MODULE: ./src/report/format.ts
-/** Accuracy is better when higher; the error metrics when lower. */
-function higherIsBetter(metric) {
-    return metric === 'accuracy';
-}
+;// CONCATENATED MODULE: ./src/files/output.ts
 /**
- * A metric value with up to 4 decimals, trailing zeros trimmed (0.95, 0.9625, 0.9615),
- * never in exponent form so it is also a valid Mermaid number.
+ * Output files a user asked for (report, model): checked before minutes of work, written
+ * atomically after. A refusal by the file system is the user's to fix, not a bug.
  */
-function formatMetric(value) {
-    if (!Number.isFinite(value))
-        return String(value);
-    const abs = Math.abs(value);
-    const decimals = abs >= 1000 ? 1 : abs >= 100 ? 2 : 4;
-    let s = value.toFixed(decimals);
-    if (s.includes('e'))
-        s = BigInt(Math.round(value)).toString();
-    if (s.includes('.'))
-        s = s.replace(/0+$/, '').replace(/\.$/, '');
-    return s === '-0' ? '0' : s;
-}
-/** Whole numbers with thin grouping commas: 12,345. */
-function formatCount(n) {
-    const s = String(Math.trunc(Math.abs(n)));
-    const grouped = s.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
-    return n < 0 ? `-${grouped}` : grouped;
-}
-/** Signed difference: +12, −3, 0. */
-function formatDelta(n) {
-    if (n > 0)
-        return `+${formatCount(n)}`;
-    if (n < 0)
-        return `−${formatCount(-n)}`;
-    return '0';
-}
-function formatSeconds(seconds) {
-    if (seconds === null || seconds === undefined || !Number.isFinite(seconds))
-        return '—';
-    if (seconds < 10)
-        return `${seconds.toFixed(2)} s`;
-    if (seconds < 120)
-        return `${seconds.toFixed(1)} s`;
-    const m = Math.floor(seconds / 60);
-    return `${m} min ${Math.round(seconds - m * 60)} s`;
-}
-function neurons(n) {
-    return n === 1 ? '1 hidden neuron' : `${formatCount(n)} hidden neurons`;
-}
-/** "accuracy of at least 0.95" / "rmse of at most 0.3". */
-function targetPhrase(metric, threshold) {
-    return `${metric} of ${higherIsBetter(metric) ? 'at least' : 'at most'} ${formatMetric(threshold)}`;
-}
-function successRate(reached, restarts) {
-    if (reached === null || reached === undefined || restarts === null || restarts === undefined || restarts === 0) {
-        return '—';
+
+
+
+
+
+/** Writes an output file atomically; a refusal by the file system is the user's to fix, not a bug. */
+async function writeOutput(path, text, what, root) {
+    try {
+        await writeFileAtomic(path, text);
     }
-    return `${reached}/${restarts}`;
+    catch (error) {
+        const code = error.code;
+        const reasons = {
+            EACCES: 'permission denied',
+            EPERM: 'permission denied',
+            EROFS: 'the file system is read-only',
+            ENOSPC: 'no space left on the device',
+            EISDIR: 'it is a folder',
+            ENOENT: 'its folder does not exist',
+            ENOTDIR: 'a part of the path is not a folder',
+        };
+        const reason = code === undefined ? undefined : reasons[code];
+        if (reason === undefined)
+            throw error;
+        const shown = displayPath(root, path);
+        throw new errors_UserError(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
+    }
+}
+/** Fails early when `path` cannot be an output file (its folder is missing, or it is a folder). */
+async function checkOutputFolder(path, what, root) {
+    const folder = (0,external_node_path_namespaceObject.dirname)(path);
+    const shown = displayPath(root, folder);
+    const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
+    if (info === null)
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
+            file: displayPath(root, path),
+        });
+    if (!info.isDirectory())
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
+            file: displayPath(root, path),
+        });
+    const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
+    if (target?.isDirectory())
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
+            file: displayPath(root, path),
+        });
 }
 
 ;// CONCATENATED MODULE: ./src/gate/settings.ts
@@ -12857,37 +13471,23 @@ function successRate(reached, restarts) {
  * shows up as a data change, which is what the gate exists to measure.
  */
 
+
 function resultSettings(config) {
-    const d = config.data;
-    const t = config.target;
-    const s = config.search;
-    return {
-        'data.target': d.target,
-        'data.features': d.features === null ? null : [...d.features],
-        // Order of ignored columns does not matter; order of features does (input order).
-        'data.ignore': [...d.ignore].sort(),
-        'data.task': d.task,
-        'data.validation': d.validation,
-        'data.delimiter': d.delimiter,
-        'data.max-categories': d.maxCategories,
-        'data.missing': d.missing,
-        'target.metric': t.metric,
-        'target.threshold': t.threshold,
-        'search.min-width': s.minWidth,
-        'search.max-width': s.maxWidth,
-        'search.restarts': s.restarts,
-        'search.required': s.required,
-        'search.max-epochs': s.maxEpochs,
-        'search.seed': s.seed,
-        'search.growth': s.growth,
-        'search.activation': s.activation,
-        'search.optimizer': s.optimizer,
-        'search.init': s.init,
-        'search.check-every': s.checkEvery,
-        'search.prune': s.prune,
-        'search.prune-epochs': s.pruneEpochs,
-        'search.max-trainings': s.maxTrainings,
-    };
+    const out = {};
+    for (const section of CONFIG_SPEC) {
+        const values = config[section.name];
+        for (const key of section.keys) {
+            if (!key.changesResult)
+                continue;
+            const value = values[fieldName(key.name)];
+            out[`${section.name}.${key.name}`] = Array.isArray(value) ? [...value] : value;
+        }
+    }
+    // The order of ignored columns does not matter; the order of features does (input order).
+    const ignore = out['data.ignore'];
+    if (Array.isArray(ignore))
+        ignore.sort();
+    return out;
 }
 /** sha256 hex of the settings in canonical form (keys sorted). */
 function settingsFingerprint(settings) {
@@ -12918,6 +13518,7 @@ function show(v) {
 }
 
 ;// CONCATENATED MODULE: ./src/gate/compare.ts
+
 
 
 function compare(input) {
@@ -13115,6 +13716,263 @@ function evaluateGate(input) {
         ? dataChanges(baseline.data.profile, loaded.profile, { before: baseline.data.fingerprint, after: loaded.fingerprint }, { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') })
         : null;
     return { ...comparison, changes, baseline };
+}
+
+;// CONCATENATED MODULE: ./schema/baseline.schema.json
+const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@1"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","reached","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric at that width."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Width found by the growth phase, before pruning."},"reached":{"type":["integer","null"],"minimum":0,"description":"Restarts that reached the target at `width` (null when growth did not try it)."},"restarts":{"type":["integer","null"],"minimum":0,"description":"Restarts run at `width`."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","reached","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0},"reached":{"type":"integer","minimum":0,"description":"At most `restarts`."},"best":{"type":["number","null"],"description":"Best metric over the restarts; null when every restart diverged."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
+;// CONCATENATED MODULE: ./src/common/json-schema.ts
+/**
+ * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
+ * file format has one definition: the schema editors read is the one the tool enforces. Only
+ * the keywords our schemas use are understood (type, const, enum, properties, required,
+ * additionalProperties, items, minItems, maxItems, minimum, maximum, pattern, maxLength, $ref
+ * into $defs, anyOf, oneOf); a schema that uses any other keyword is refused when it is loaded,
+ * so a schema cannot silently say more than is checked.
+ *
+ * The first problem is reported as `key: expected …, found …`, with the key written as a path
+ * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
+ */
+class SchemaProblem extends Error {
+    key;
+    expected;
+    found;
+    constructor(
+    /** Where, as a path (`result.width`, `history[0]`); '(top level)' for the document itself. */
+    key, expected, 
+    /** What was found, described for a reader. */
+    found) {
+        super(`${key}: expected ${expected}, found ${found}`);
+        this.key = key;
+        this.expected = expected;
+        this.found = found;
+        this.name = 'SchemaProblem';
+    }
+}
+const KNOWN = new Set([
+    'title',
+    'description',
+    'type',
+    'const',
+    'enum',
+    'properties',
+    'required',
+    'additionalProperties',
+    'items',
+    'minItems',
+    'maxItems',
+    'minimum',
+    'maximum',
+    'pattern',
+    'maxLength',
+    '$ref',
+    'anyOf',
+    'oneOf',
+    '$defs',
+    '$schema',
+    '$id',
+    '$comment',
+]);
+/** A validator for documents of one schema. Throws when the schema uses a keyword it does not check. */
+function schemaValidator(root) {
+    checkKeywords(root, '#');
+    const patterns = new Map();
+    const regex = (p) => {
+        let re = patterns.get(p);
+        if (re === undefined)
+            patterns.set(p, (re = new RegExp(p, 'u')));
+        return re;
+    };
+    const resolve = (node) => {
+        if (node.$ref === undefined)
+            return node;
+        const m = /^#\/\$defs\/(.+)$/.exec(node.$ref);
+        const target = m ? root.$defs?.[m[1]] : undefined;
+        if (target === undefined)
+            throw new Error(`schema: unresolved $ref ${node.$ref}`);
+        return { ...target, ...(node.title ? { title: node.title } : {}) };
+    };
+    const check = (raw, value, key) => {
+        const node = resolve(raw);
+        const fail = (expected, found = value) => {
+            throw new SchemaProblem(key || '(top level)', node.title ?? expected, describe(found));
+        };
+        if (node.const !== undefined && value !== node.const)
+            fail(JSON.stringify(node.const));
+        if (node.enum !== undefined && !node.enum.includes(value))
+            fail(`one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`);
+        if (node.type !== undefined) {
+            const types = Array.isArray(node.type) ? node.type : [node.type];
+            if (value === null && types.includes('null'))
+                return;
+            if (!types.some((t) => hasType(value, t)))
+                fail(typePhrase(node, types.filter((t) => t !== 'null')));
+        }
+        if (typeof value === 'number') {
+            if (node.minimum !== undefined && value < node.minimum)
+                fail(typePhrase(node, types(node)));
+            if (node.maximum !== undefined && value > node.maximum)
+                fail(typePhrase(node, types(node)));
+        }
+        if (typeof value === 'string') {
+            if (node.maxLength !== undefined && value.length > node.maxLength)
+                fail(`a string of at most ${node.maxLength} characters`);
+            if (node.pattern !== undefined && !regex(node.pattern).test(value))
+                fail(`a string matching ${node.pattern}`);
+        }
+        if (Array.isArray(value)) {
+            if (node.maxItems !== undefined && value.length > node.maxItems)
+                fail(`a list of at most ${node.maxItems} entries`, value.length);
+            if (node.minItems !== undefined && value.length < node.minItems)
+                fail(`a list of at least ${node.minItems} entries`, value.length);
+            if (node.items !== undefined)
+                value.forEach((v, i) => check(node.items, v, `${key}[${i}]`));
+        }
+        if (isObject(value)) {
+            const props = node.properties ?? {};
+            for (const name of node.required ?? []) {
+                if (!Object.hasOwn(value, name))
+                    throw new SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
+            }
+            for (const [name, child] of Object.entries(value)) {
+                if (Object.hasOwn(props, name))
+                    check(props[name], child, join(key, name));
+                else if (node.additionalProperties === false) {
+                    throw new SchemaProblem(join(key, name), `no such key (allowed: ${Object.keys(props).join(', ')})`, describe(child));
+                }
+                else if (typeof node.additionalProperties === 'object')
+                    check(node.additionalProperties, child, join(key, name));
+            }
+        }
+        if (node.anyOf !== undefined) {
+            if (!node.anyOf.some((branch) => passes(branch, value, key)))
+                fail(node.anyOf.map((b) => expectedOf(resolve(b))).join(' or '));
+        }
+        if (node.oneOf !== undefined) {
+            // Our oneOf branches are told apart by a `kind` constant: check the branch the document names.
+            const kinds = node.oneOf.map((b) => resolve(b).properties?.['kind']?.const);
+            if (!kinds.includes(undefined) && isObject(value)) {
+                const at = kinds.indexOf(value['kind']);
+                if (at < 0)
+                    throw new SchemaProblem(join(key, 'kind'), `one of ${kinds.map((k) => JSON.stringify(k)).join(', ')}`, describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING));
+                check(node.oneOf[at], value, key);
+            }
+            else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
+                fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
+            }
+        }
+    };
+    const passes = (node, value, key) => {
+        try {
+            check(node, value, key);
+            return true;
+        }
+        catch (e) {
+            if (e instanceof SchemaProblem)
+                return false;
+            throw e;
+        }
+    };
+    return (value) => check(root, value, '');
+}
+const MISSING = Symbol('missing');
+const MISSING_KEY = 'nothing (the key is missing)';
+function checkKeywords(node, where) {
+    for (const [k, v] of Object.entries(node)) {
+        if (!KNOWN.has(k))
+            throw new Error(`schema: keyword ${k} at ${where} is not checked by schemaValidator`);
+        if (k === 'properties' || k === '$defs')
+            for (const [name, child] of Object.entries(v))
+                checkKeywords(child, `${where}/${k}/${name}`);
+        if ((k === 'items' || k === 'additionalProperties') && typeof v === 'object')
+            checkKeywords(v, `${where}/${k}`);
+        if (k === 'anyOf' || k === 'oneOf')
+            v.forEach((child, i) => checkKeywords(child, `${where}/${k}/${i}`));
+    }
+}
+function types(node) {
+    const t = node.type === undefined ? [] : Array.isArray(node.type) ? node.type : [node.type];
+    return t.filter((x) => x !== 'null');
+}
+function hasType(value, type) {
+    switch (type) {
+        case 'object':
+            return isObject(value);
+        case 'array':
+            return Array.isArray(value);
+        case 'string':
+            return typeof value === 'string';
+        case 'number':
+            return typeof value === 'number' && Number.isFinite(value);
+        case 'integer':
+            return typeof value === 'number' && Number.isInteger(value);
+        case 'boolean':
+            return typeof value === 'boolean';
+        case 'null':
+            return value === null;
+    }
+}
+/** "an integer of at least 1", "a number", "a list", … */
+function typePhrase(node, ts) {
+    const bound = () => {
+        const parts = [];
+        if (node.minimum !== undefined && node.maximum !== undefined)
+            return ` from ${node.minimum} to ${node.maximum}`;
+        if (node.minimum !== undefined)
+            parts.push(` of at least ${node.minimum}`);
+        if (node.maximum !== undefined)
+            parts.push(` of at most ${node.maximum}`);
+        return parts.join('');
+    };
+    const one = (t) => {
+        switch (t) {
+            case 'object':
+                return 'an object';
+            case 'array':
+                return 'a list';
+            case 'string':
+                return 'a string';
+            case 'number':
+                return `a number${bound()}`;
+            case 'integer':
+                return `an integer${bound()}`;
+            case 'boolean':
+                return 'true or false';
+            case 'null':
+                return 'null';
+        }
+    };
+    return ts.length === 0 ? 'a value' : ts.map(one).join(' or ');
+}
+function expectedOf(node) {
+    if (node.title !== undefined)
+        return node.title;
+    if (node.const !== undefined)
+        return JSON.stringify(node.const);
+    if (node.enum !== undefined)
+        return `one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`;
+    return typePhrase(node, types(node));
+}
+function join(key, child) {
+    return key === '' ? child : `${key}.${child}`;
+}
+function isObject(v) {
+    return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+/** A found value for a message: short, and never a repository string in full. */
+function describe(v) {
+    if (v === MISSING)
+        return 'nothing';
+    if (v === null)
+        return 'null';
+    if (Array.isArray(v))
+        return 'a list';
+    if (typeof v === 'object')
+        return 'an object';
+    if (typeof v === 'string') {
+        const s = JSON.stringify(v);
+        return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
+    }
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
 ;// CONCATENATED MODULE: ./src/gate/json-position.ts
@@ -13333,6 +14191,8 @@ const HISTORY_CAP = 100;
 
 
 
+
+
 /**
  * Why this run cannot become a baseline, or null when it can. A baseline only ever
  * records a width that was found: a failed or unfinished search leaves the file as it was.
@@ -13463,191 +14323,50 @@ function parseBaseline(text, shown) {
     return value;
 }
 function checkSchemaVersion(value, shown) {
-    if (!isObject(value)) {
-        throw new errors_UserError(`${shown}: expected a neuron-budget baseline (a JSON object), found ${describe(value)}`, {
+    if (!baseline_isObject(value)) {
+        throw new errors_UserError(`${shown}: expected a neuron-budget baseline (a JSON object), found ${baseline_describe(value)}`, {
             file: shown,
         });
     }
-    const schema = 'schema' in value ? value['schema'] : MISSING;
+    const schema = 'schema' in value ? value['schema'] : baseline_MISSING;
     const match = typeof schema === 'string' ? /^neuron-budget\/baseline@(\d+)$/.exec(schema) : null;
     if (!match) {
-        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
+        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
     }
     const version = Number(match[1]);
     if (version > BASELINE_VERSION) {
         throw new errors_UserError(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
     }
     if (version !== BASELINE_VERSION) {
-        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${describe(schema)}`, {
+        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
             file: shown,
             key: 'schema',
         });
     }
 }
-// ---- shape validation: mirrors schema/baseline.schema.json ----
-const METRICS = ['accuracy', 'rmse', 'mae', 'max-abs-error'];
-const HEX64 = /^[0-9a-f]{64}$/;
-class ShapeError extends Error {
-    key;
-    expected;
-    found;
-    constructor(key, expected, found) {
-        super(`${key}: expected ${expected}`);
-        this.key = key;
-        this.expected = expected;
-        this.found = found;
-    }
-}
+// ---- shape: schema/baseline.schema.json is the one definition ----
+const checkShape = schemaValidator(baseline_schema_namespaceObject);
 function validateBaselineShape(value, shown) {
     try {
-        baselineCheck(value, '');
+        checkShape(value);
+        // The one rule JSON Schema cannot say: a width cannot have more successes than tries.
+        value.widths.forEach((w, i) => {
+            if (w.reached > w.restarts)
+                throw new SchemaProblem(`widths[${i}].reached`, `at most restarts (${w.restarts})`, String(w.reached));
+        });
     }
     catch (e) {
-        if (!(e instanceof ShapeError))
+        if (!(e instanceof SchemaProblem))
             throw e;
-        const found = e.found === MISSING ? 'nothing (the key is missing)' : describe(e.found);
-        throw new errors_UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${found}`, { file: shown, key: e.key });
+        throw new errors_UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
     }
 }
-const MISSING = Symbol('missing');
-const join = (key, child) => typeof child === 'number' ? `${key}[${child}]` : key === '' ? child : `${key}.${child}`;
-function object(fields) {
-    return (v, key) => {
-        if (!isObject(v))
-            throw new ShapeError(key || '(top level)', 'an object', v);
-        for (const [name, check] of Object.entries(fields)) {
-            check(name in v ? v[name] : MISSING, join(key, name));
-        }
-        for (const name of Object.keys(v)) {
-            if (!(name in fields)) {
-                throw new ShapeError(join(key, name), `no such key (allowed: ${Object.keys(fields).join(', ')})`, v[name]);
-            }
-        }
-    };
-}
-function record(check) {
-    return (v, key) => {
-        if (!isObject(v))
-            throw new ShapeError(key, 'an object', v);
-        for (const [name, child] of Object.entries(v))
-            check(child, join(key, name));
-    };
-}
-function list(check, max = Infinity) {
-    return (v, key) => {
-        if (!Array.isArray(v))
-            throw new ShapeError(key, 'a list', v);
-        if (v.length > max)
-            throw new ShapeError(key, `a list of at most ${max} entries`, v.length);
-        v.forEach((child, i) => check(child, join(key, i)));
-    };
-}
-const nullable = (check) => (v, key) => {
-    if (v !== null)
-        check(v, key);
-};
-const integer = (min) => (v, key) => {
-    if (typeof v !== 'number' || !Number.isInteger(v) || v < min) {
-        throw new ShapeError(key, `an integer of at least ${min}`, v);
-    }
-};
-const finite = (v, key) => {
-    if (typeof v !== 'number' || !Number.isFinite(v))
-        throw new ShapeError(key, 'a number', v);
-};
-const nonNegative = (v, key) => {
-    if (typeof v !== 'number' || !Number.isFinite(v) || v < 0)
-        throw new ShapeError(key, 'a number of at least 0', v);
-};
-const baseline_text = (v, key) => {
-    if (typeof v !== 'string')
-        throw new ShapeError(key, 'a string', v);
-};
-const pattern = (re, what) => (v, key) => {
-    if (typeof v !== 'string' || !re.test(v))
-        throw new ShapeError(key, what, v);
-};
-const oneOf = (values) => (v, key) => {
-    if (typeof v !== 'string' || !values.includes(v)) {
-        throw new ShapeError(key, `one of ${values.map((x) => `"${x}"`).join(', ')}`, v);
-    }
-};
-const isoDate = (v, key) => {
-    if (typeof v !== 'string' ||
-        !/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d+)?Z$/.test(v) ||
-        Number.isNaN(Date.parse(v))) {
-        throw new ShapeError(key, 'an ISO 8601 UTC date-time such as "2026-01-31T12:00:00.000Z"', v);
-    }
-};
-const settingValue = (v, key) => {
-    if (v === null || typeof v === 'string' || typeof v === 'boolean')
-        return;
-    if (typeof v === 'number' && Number.isFinite(v))
-        return;
-    if (Array.isArray(v) && v.every((x) => typeof x === 'string'))
-        return;
-    throw new ShapeError(key, 'a string, number, true/false, null or a list of strings', v);
-};
-const featureProfile = (v, key) => {
-    if (!isObject(v))
-        throw new ShapeError(key, 'an object', v);
-    if (v['kind'] === 'numeric') {
-        object({ kind: baseline_text, mean: finite, std: nonNegative, min: finite, max: finite, missing: integer(0) })(v, key);
-    }
-    else if (v['kind'] === 'categorical') {
-        object({ kind: baseline_text, counts: record(integer(0)), missing: integer(0) })(v, key);
-    }
-    else {
-        throw new ShapeError(join(key, 'kind'), 'one of "numeric", "categorical"', 'kind' in v ? v['kind'] : MISSING);
-    }
-};
-const widthCheck = (v, key) => {
-    object({ width: integer(1), restarts: integer(0), reached: integer(0), best: nullable(finite) })(v, key);
-    const w = v;
-    if (w.reached > w.restarts)
-        throw new ShapeError(join(key, 'reached'), `at most restarts (${w.restarts})`, w.reached);
-};
-const baselineCheck = object({
-    schema: baseline_text,
-    tool: object({ name: oneOf(['neuron-budget']), version: baseline_text }),
-    result: object({
-        width: integer(1),
-        metric: object({ name: oneOf(METRICS), value: finite, threshold: finite }),
-        grownWidth: nullable(integer(1)),
-        reached: nullable(integer(0)),
-        restarts: nullable(integer(0)),
-        searchSeconds: nullable(nonNegative),
-    }),
-    widths: list(widthCheck),
-    data: object({
-        file: baseline_text,
-        rows: integer(0),
-        fingerprint: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
-        profile: object({
-            rows: integer(0),
-            classes: nullable(record(integer(0))),
-            columns: list(baseline_text),
-            features: record(featureProfile),
-        }),
-    }),
-    config: object({
-        fingerprint: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
-        settings: record(settingValue),
-    }),
-    history: list(object({
-        width: integer(1),
-        metric: finite,
-        rows: integer(0),
-        data: pattern(HEX64, 'a sha256 fingerprint (64 hex digits)'),
-        commit: nullable(pattern(/^[0-9a-f]{4,64}$/, 'a commit hash (hex) or null')),
-        date: isoDate,
-    }), HISTORY_CAP),
-});
-function isObject(v) {
+const baseline_MISSING = Symbol('missing');
+function baseline_isObject(v) {
     return typeof v === 'object' && v !== null && !Array.isArray(v);
 }
-function describe(v) {
-    if (v === MISSING)
+function baseline_describe(v) {
+    if (v === baseline_MISSING)
         return 'nothing';
     if (v === null)
         return 'null';
@@ -13666,7 +14385,7 @@ function describe(v) {
 
 
 async function runGateStage(input) {
-    const previous = input.previous !== undefined ? input.previous : await readBaseline(input.baselinePath, input.baselineShown);
+    const previous = input.previous;
     const config = input.baselinePath === input.config.gate.baseline
         ? input.config
         : {
@@ -13762,99 +14481,50 @@ function parseModel(text, file = 'model') {
     return d;
 }
 
-;// CONCATENATED MODULE: ./src/nn/rng.ts
-const MASK64 = (1n << 64n) - 1n;
-const GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
-/** One SplitMix64 output step: advances `state` by the golden gamma and mixes it. */
-function splitMix64Mix(z) {
-    z = ((z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n) & MASK64;
-    z = ((z ^ (z >> 27n)) * 0x94d049bb133111ebn) & MASK64;
-    return z ^ (z >> 31n);
-}
-/** A SplitMix64 generator over 64-bit unsigned BigInts (used for seeding only). */
-class SplitMix64 {
-    state;
-    constructor(seed) {
-        this.state = BigInt.asUintN(64, seed);
-    }
-    next() {
-        this.state = (this.state + GOLDEN_GAMMA) & MASK64;
-        return splitMix64Mix(this.state);
-    }
-}
-/** xoshiro128** 1.1: the scrambler reads s[1] (version 1.0 wrongly read s[0]). */
-class Xoshiro128StarStar {
-    a;
-    b;
-    c;
-    d;
-    constructor(s0, s1, s2, s3) {
-        this.a = s0 | 0;
-        this.b = s1 | 0;
-        this.c = s2 | 0;
-        this.d = s3 | 0;
-        if ((this.a | this.b | this.c | this.d) === 0) {
-            throw new RangeError('xoshiro128** state must not be all zero');
-        }
-    }
-    /** The four state words as unsigned 32-bit integers. */
-    state() {
-        return [this.a >>> 0, this.b >>> 0, this.c >>> 0, this.d >>> 0];
-    }
-    nextUint32() {
-        const r = Math.imul(this.b, 5);
-        const result = Math.imul((r << 7) | (r >>> 25), 9) >>> 0;
-        const t = this.b << 9;
-        this.c ^= this.a;
-        this.d ^= this.b;
-        this.b ^= this.c;
-        this.a ^= this.d;
-        this.c ^= t;
-        this.d = (this.d << 11) | (this.d >>> 21);
-        return result;
-    }
-    nextDouble() {
-        const hi = this.nextUint32() >>> 5;
-        const lo = this.nextUint32() >>> 6;
-        return (hi * 67108864 + lo) / 9007199254740992;
-    }
-}
+;// CONCATENATED MODULE: ./src/nn/kernel/constants.ts
 /**
- * Our seeding convention: a SplitMix64 generator started at `seed`; its first two outputs
- * r0, r1 give the state words [lo(r0), hi(r0), lo(r1), hi(r1)].
+ * The numbers both kernels must share to give the same bits: the constants of the elementary
+ * functions (detmath.ts), the gradient block size and the activation and head codes. This file is
+ * the one source: scripts/build-kernel.mjs writes them into kernel.as (between its "generated
+ * constants" markers) and `build-kernel.mjs --check` fails when kernel.as or its bytes disagree.
+ * Plain numeric literals only, so the script can read them without a TypeScript compiler.
  */
-function xoshiroFromSeed(seed) {
-    const sm = new SplitMix64(seed);
-    for (;;) {
-        const r0 = sm.next();
-        const r1 = sm.next();
-        const w = [r0 & 0xffffffffn, r0 >> 32n, r1 & 0xffffffffn, r1 >> 32n].map(Number);
-        // An all-zero state is a fixed point; draw again in the (2^-128) case it happens.
-        if ((w[0] | w[1] | w[2] | w[3]) !== 0)
-            return new Xoshiro128StarStar(w[0], w[1], w[2], w[3]);
-    }
-}
-function toUint64(n, what) {
-    if (!Number.isSafeInteger(n))
-        throw new RangeError(`${what} must be a safe integer, got ${n}`);
-    return BigInt.asUintN(64, BigInt(n));
-}
+/** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
+const LN2_HI = 6.9314718036912381649e-1;
+const LN2_LO = 1.90821492927058770002e-10;
+const INV_LN2 = 1.442695040888963387;
+/** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
+const C2 = 0.5;
+const C3 = 0.16666666666666666;
+const C4 = 0.041666666666666664;
+const C5 = 0.008333333333333333;
+const C6 = 0.001388888888888889;
+const C7 = 0.0001984126984126984;
+const C8 = 0.0000248015873015873;
+const C9 = 0.0000027557319223985893;
+const C10 = 2.755731922398589e-7;
+const C11 = 2.505210838544172e-8;
+const C12 = 2.08767569878681e-9;
+const C13 = 1.6059043836821613e-10;
+/** |x| beyond this has tanh(x) === ±1 in double precision. */
+const TANH_CLAMP = 22;
+/** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
+const ROUND_MAGIC = 6755399441055744;
+const SQRT2 = 1.4142135623730951;
 /**
- * The stream for restart `restart` of width `width` under base seed `seed`. The three numbers
- * are chained through the SplitMix64 mixer so that neighbouring triples give unrelated streams.
+ * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
+ * the products of a block's rows are added in row order starting from +0, and that block sum is
+ * then added to the running gradient, in both kernels.
  */
-function rngFor(seed, width, restart) {
-    let h = splitMix64Mix((toUint64(seed, 'seed') + GOLDEN_GAMMA) & MASK64);
-    h = splitMix64Mix(((h ^ toUint64(width, 'width')) + GOLDEN_GAMMA * 2n) & MASK64);
-    h = splitMix64Mix(((h ^ toUint64(restart, 'restart')) + GOLDEN_GAMMA * 3n) & MASK64);
-    return xoshiroFromSeed(h);
-}
-/** Uniform double in [lo, hi). */
-function uniform(rng, lo, hi) {
-    return lo + (hi - lo) * rng.nextDouble();
-}
+const GRAD_BLOCK_ROWS = 32;
+const ACT_TANH = 0;
+const ACT_LOGISTIC = 1;
+const ACT_RELU = 2;
+const constants_HEAD_LINEAR = 0;
+const constants_HEAD_LOGISTIC = 1;
+const HEAD_SOFTMAX = 2;
 
-;// CONCATENATED MODULE: ./src/nn/detmath.ts
+;// CONCATENATED MODULE: ./src/nn/kernel/detmath.ts
 /**
  * Elementary functions whose results we control. ECMAScript leaves Math.exp, Math.tanh and
  * Math.log implementation-approximated, so their last bits may change between Node versions;
@@ -13864,21 +14534,7 @@ function uniform(rng, lo, hi) {
  *
  * Accuracy against Math.*: a few units in the last place (test/nn/detmath.test.ts states the bound).
  */
-/** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
-const LN2_HI = 6.9314718036912381649e-1;
-const LN2_LO = 1.90821492927058770002e-10;
-const INV_LN2 = 1.442695040888963387;
-/** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
-const EXPM1_C = [
-    0.5, 0.16666666666666666, 0.041666666666666664, 0.008333333333333333, 0.001388888888888889, 0.0001984126984126984,
-    0.0000248015873015873, 0.0000027557319223985893, 2.755731922398589e-7, 2.505210838544172e-8, 2.08767569878681e-9,
-    1.6059043836821613e-10,
-];
-const [C2, C3, C4, C5, C6, C7, C8, C9, C10, C11, C12, C13] = EXPM1_C;
-/** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
-const ROUND_MAGIC = 6755399441055744;
-/** |x| beyond this has tanh(x) === ±1 in double precision. */
-const TANH_CLAMP = 22;
+
 const f64 = new Float64Array(1);
 const u32 = new Uint32Array(f64.buffer);
 const HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0; // little-endian: high word at index 1
@@ -13936,22 +14592,6 @@ function detmath_detExp(x) {
         return m * pow2(k + 1000) * pow2(-1000);
     return m * pow2(k);
 }
-/** e^x - 1, accurate near 0. */
-function detExpm1(x) {
-    if (x !== x)
-        return x;
-    if (x > 709.782712893384)
-        return Infinity;
-    if (x < -40)
-        return -1;
-    const k = Math.floor(x * INV_LN2 + 0.5);
-    const r = x - k * LN2_HI - k * LN2_LO;
-    const p = expm1Poly(r);
-    if (k > 1023)
-        return (1 + p) * pow2(1023) * pow2(k - 1023);
-    const s = pow2(k);
-    return s * p + (s - 1);
-}
 /** Powers of two 2^0..2^64 for the tanh reduction (k never leaves that range). */
 const POW2_TANH = new Float64Array(65);
 for (let k = 0; k <= 64; k++)
@@ -13976,7 +14616,6 @@ function detTanh(x) {
 function detmath_detLogistic(x) {
     return 0.5 + 0.5 * detTanh(0.5 * x);
 }
-const SQRT2 = 1.4142135623730951;
 /** Natural logarithm. */
 function detLog(x) {
     if (x !== x || x < 0)
@@ -14017,7 +14656,7 @@ function detLog(x) {
     const logm = 2 * s + 2 * s * series;
     return e * LN2_HI + (logm + e * LN2_LO);
 }
-/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. */
+/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. @testOnly */
 function detLog1p(u) {
     const w = 1 + u;
     if (w === 1)
@@ -14029,8 +14668,7 @@ function detSoftplus(z) {
     return (z > 0 ? z : 0) + detLog1p(detmath_detExp(z > 0 ? -z : z));
 }
 
-;// CONCATENATED MODULE: ./src/nn/network.ts
-
+;// CONCATENATED MODULE: ./src/nn/kernel/layout.ts
 function layoutOf(s) {
     const w1 = 0;
     const b1 = s.inputs * s.width;
@@ -14038,208 +14676,18 @@ function layoutOf(s) {
     const b2 = w2 + s.width * s.outputs;
     return { w1, b1, w2, b2, size: b2 + s.outputs };
 }
-/** The activation's usual initialisation. */
-function defaultInit(activation) {
-    return activation === 'relu' ? 'he' : 'nguyen-widrow';
-}
-/** Nguyen-Widrow scale β = 0.7 · H^(1/n) (Nguyen & Widrow 1990). */
-function nguyenWidrowBeta(width, inputs) {
-    return 0.7 * detmath_detExp(detLog(width) / inputs);
-}
-/** Standard normal draw by the Marsaglia polar method (no trigonometry, so it stays deterministic). */
-function gaussian(rng) {
-    for (;;) {
-        const u = 2 * rng.nextDouble() - 1;
-        const v = 2 * rng.nextDouble() - 1;
-        const s = u * u + v * v;
-        if (s > 0 && s < 1)
-            return u * Math.sqrt((-2 * detLog(s)) / s);
-    }
-}
-/**
- * Draws hidden neuron j's input weights and bias into `params` (layout `lay`, `width` hidden
- * neurons), as `init` prescribes for a layer of `width` neurons.
- */
-function initHiddenNeuron(params, lay, inputs, width, j, init, rng) {
-    if (init === 'nguyen-widrow') {
-        const beta = nguyenWidrowBeta(width, inputs);
-        let norm2 = 0;
-        for (let i = 0; i < inputs; i++) {
-            const w = rng.nextDouble() - 0.5;
-            params[lay.w1 + i * width + j] = w;
-            norm2 += w * w;
-        }
-        const scale = norm2 > 0 ? beta / Math.sqrt(norm2) : 0;
-        for (let i = 0; i < inputs; i++)
-            params[lay.w1 + i * width + j] *= scale;
-        params[lay.b1 + j] = beta * (2 * rng.nextDouble() - 1);
-    }
-    else if (init === 'glorot') {
-        const limit = Math.sqrt(6 / (inputs + width));
-        for (let i = 0; i < inputs; i++)
-            params[lay.w1 + i * width + j] = limit * (2 * rng.nextDouble() - 1);
-        params[lay.b1 + j] = 0;
-    }
-    else {
-        const std = Math.sqrt(2 / inputs);
-        for (let i = 0; i < inputs; i++)
-            params[lay.w1 + i * width + j] = std * gaussian(rng);
-        params[lay.b1 + j] = 0;
-    }
-}
-/** A freshly initialised parameter vector. Draw order: hidden neurons 0..H-1, then output weights row by row. */
-function initParams(shape, init, rng) {
-    const lay = layoutOf(shape);
-    const params = new Float64Array(lay.size);
-    const { inputs, width, outputs } = shape;
-    for (let j = 0; j < width; j++)
-        initHiddenNeuron(params, lay, inputs, width, j, init, rng);
-    if (init === 'nguyen-widrow') {
-        // Output weights: small uniform values, U(-0.5, 0.5); output biases 0.
-        for (let q = 0; q < width * outputs; q++)
-            params[lay.w2 + q] = rng.nextDouble() - 0.5;
-    }
-    else if (init === 'glorot') {
-        const limit = Math.sqrt(6 / (width + outputs));
-        for (let q = 0; q < width * outputs; q++)
-            params[lay.w2 + q] = limit * (2 * rng.nextDouble() - 1);
-    }
-    else {
-        const std = Math.sqrt(2 / width);
-        for (let q = 0; q < width * outputs; q++)
-            params[lay.w2 + q] = std * gaussian(rng);
-    }
-    return params;
-}
-/**
- * The parameters of `shape` with hidden neuron `j` removed (removeAt) or a zeroed neuron
- * appended (remove < 0). Returned in the layout of the new width.
- */
-function resizeParams(params, shape, removeAt) {
-    const { inputs, width, outputs } = shape;
-    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
-    const from = layoutOf(shape);
-    const to = layoutOf({ inputs, width: newWidth, outputs });
-    const out = new Float64Array(to.size);
-    const keep = (j) => (removeAt >= 0 && j > removeAt ? j - 1 : j);
-    for (let j = 0; j < width; j++) {
-        if (j === removeAt)
-            continue;
-        const jj = keep(j);
-        for (let i = 0; i < inputs; i++)
-            out[to.w1 + i * newWidth + jj] = params[from.w1 + i * width + j];
-        out[to.b1 + jj] = params[from.b1 + j];
-        for (let k = 0; k < outputs; k++)
-            out[to.w2 + jj * outputs + k] = params[from.w2 + j * outputs + k];
-    }
-    for (let k = 0; k < outputs; k++)
-        out[to.b2 + k] = params[from.b2 + k];
-    return out;
-}
-/** Maps old parameter indices to new ones for a resize (−1: dropped); new parameters have no source. */
-function resizeIndexMap(shape, removeAt) {
-    const { inputs, width, outputs } = shape;
-    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
-    const from = layoutOf(shape);
-    const to = layoutOf({ inputs, width: newWidth, outputs });
-    const map = new Int32Array(from.size).fill(-1);
-    for (let j = 0; j < width; j++) {
-        if (j === removeAt)
-            continue;
-        const jj = removeAt >= 0 && j > removeAt ? j - 1 : j;
-        for (let i = 0; i < inputs; i++)
-            map[from.w1 + i * width + j] = to.w1 + i * newWidth + jj;
-        map[from.b1 + j] = to.b1 + jj;
-        for (let k = 0; k < outputs; k++)
-            map[from.w2 + j * outputs + k] = to.w2 + jj * outputs + k;
-    }
-    for (let k = 0; k < outputs; k++)
-        map[from.b2 + k] = to.b2 + k;
-    return map;
-}
-function toJson(shape, params) {
-    const { inputs, width, outputs } = shape;
-    const lay = layoutOf(shape);
-    const hiddenWeights = [];
-    for (let j = 0; j < width; j++) {
-        const row = [];
-        for (let i = 0; i < inputs; i++)
-            row.push(params[lay.w1 + i * width + j]);
-        hiddenWeights.push(row);
-    }
-    const outputWeights = [];
-    for (let k = 0; k < outputs; k++) {
-        const row = [];
-        for (let j = 0; j < width; j++)
-            row.push(params[lay.w2 + j * outputs + k]);
-        outputWeights.push(row);
-    }
-    return {
-        inputs,
-        width,
-        outputs,
-        activation: shape.activation,
-        head: shape.head,
-        hiddenWeights,
-        hiddenBias: Array.from(params.subarray(lay.b1, lay.b1 + width)),
-        outputWeights,
-        outputBias: Array.from(params.subarray(lay.b2, lay.b2 + outputs)),
-    };
-}
-function network_fromJson(net) {
-    const shape = {
-        inputs: net.inputs,
-        width: net.width,
-        outputs: net.outputs,
-        activation: net.activation,
-        head: net.head,
-    };
-    const lay = layoutOf(shape);
-    const params = new Float64Array(lay.size);
-    for (let j = 0; j < net.width; j++) {
-        for (let i = 0; i < net.inputs; i++)
-            params[lay.w1 + i * net.width + j] = net.hiddenWeights[j][i];
-        params[lay.b1 + j] = net.hiddenBias[j];
-    }
-    for (let k = 0; k < net.outputs; k++) {
-        for (let j = 0; j < net.width; j++)
-            params[lay.w2 + j * net.outputs + k] = net.outputWeights[k][j];
-        params[lay.b2 + k] = net.outputBias[k];
-    }
-    return { shape, params };
-}
-function network_describe(shape) {
-    return {
-        inputs: shape.inputs,
-        width: shape.width,
-        outputs: shape.outputs,
-        activation: shape.activation,
-        head: shape.head,
-    };
-}
 
-;// CONCATENATED MODULE: ./src/nn/reference.ts
+;// CONCATENATED MODULE: ./src/nn/kernel/reference.ts
 
 
-const ACT_TANH = 0;
-const ACT_LOGISTIC = 1;
-const ACT_RELU = 2;
-const HEAD_LINEAR = 0;
-const HEAD_LOGISTIC = 1;
-const HEAD_SOFTMAX = 2;
+
+
 function activationCode(a) {
     return a === 'tanh' ? ACT_TANH : a === 'logistic' ? ACT_LOGISTIC : ACT_RELU;
 }
 function reference_headCode(h) {
-    return h === 'linear' ? HEAD_LINEAR : h === 'logistic' ? HEAD_LOGISTIC : HEAD_SOFTMAX;
+    return h === 'linear' ? constants_HEAD_LINEAR : h === 'logistic' ? constants_HEAD_LOGISTIC : HEAD_SOFTMAX;
 }
-/**
- * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
- * the products of a block's rows are added in row order starting from +0, and that block sum is
- * then added to the running gradient. The WebAssembly kernel keeps the block sums in registers
- * and must use the same block size (BLOCK in src/nn/wasm/kernel.as), so that both give the same bits.
- */
-const GRAD_BLOCK_ROWS = 32;
 function reference_makeScratch(width, outputs) {
     return {
         a: new Float64Array(width),
@@ -14286,12 +14734,12 @@ function outputRow(H, K, params, w2, b2, h, z) {
  * (classification) or the standardised target (regression).
  */
 function headLossAndDelta(head, K, z, t, dz) {
-    if (head === HEAD_LINEAR) {
+    if (head === constants_HEAD_LINEAR) {
         const d = z[0] - t;
         dz[0] = d;
         return 0.5 * d * d;
     }
-    if (head === HEAD_LOGISTIC) {
+    if (head === constants_HEAD_LOGISTIC) {
         dz[0] = detmath_detLogistic(z[0]) - t;
         return detSoftplus(z[0]) - t * z[0];
     }
@@ -14419,11 +14867,11 @@ function reference_referenceForward(shape, params, x, rows, logits, hidden, s) {
 }
 /** Per-row loss from logits (no gradient). */
 function rowLoss(head, K, z, zo, t) {
-    if (head === HEAD_LINEAR) {
+    if (head === constants_HEAD_LINEAR) {
         const d = z[zo] - t;
         return 0.5 * d * d;
     }
-    if (head === HEAD_LOGISTIC)
+    if (head === constants_HEAD_LOGISTIC)
         return detSoftplus(z[zo]) - t * z[zo];
     let m = z[zo];
     for (let k = 1; k < K; k++)
@@ -14435,7 +14883,7 @@ function rowLoss(head, K, z, zo, t) {
     return detLog(s) - (z[zo + t] - m);
 }
 
-;// CONCATENATED MODULE: ./src/nn/kernel.ts
+;// CONCATENATED MODULE: ./src/nn/kernel/kernel.ts
 
 function referenceKernel() {
     let scratch = reference_makeScratch(0, 0);
@@ -14460,8 +14908,8 @@ function referenceKernel() {
     };
 }
 
-;// CONCATENATED MODULE: ./src/nn/wasm/kernel-bytes.ts
-// Generated by scripts/build-kernel.mjs from src/nn/wasm/kernel.as; do not edit.
+;// CONCATENATED MODULE: ./src/nn/kernel/kernel-bytes.ts
+// Generated by scripts/build-kernel.mjs from kernel.as; do not edit.
 // 26261 bytes, sha256 959f4fe35dd125349b485cc52d95df3dcc03a007f35d02a8bc673ac3e4733362
 const KERNEL_SHA256 = '959f4fe35dd125349b485cc52d95df3dcc03a007f35d02a8bc673ac3e4733362';
 const KERNEL_BASE64 = 'AGFzbQEAAAABTwpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AYAJ/fAF8YAN/f38Bf2ANf39/f39/f39/f39/fAF8YAAB' +
@@ -14816,7 +15264,8 @@ const KERNEL_BASE64 = 'AGFzbQEAAAABTwpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AY
     '8gH98AEhCiADIAhqIQMgBCAHaiEEIAVBAWohBQwBCwsjCiAJIwBsaiACQQR0aiIDIAP9AAQAIAr98AH9CwQAIAJBAWohAgwBCwsg' +
     'BkECaiEGDAELCws=';
 
-;// CONCATENATED MODULE: ./src/nn/wasm-kernel.ts
+;// CONCATENATED MODULE: ./src/nn/kernel/wasm.ts
+
 
 
 const wasmApi = globalThis.WebAssembly;
@@ -14905,8 +15354,12 @@ function decode(b64) {
 function getRuntime() {
     if (runtime !== undefined)
         return runtime;
+    const bytes = decode(KERNEL_BASE64);
+    // The bytes are what the reproducibility check vouched for, or the build is broken: never run others.
+    const sha = (0,external_node_crypto_namespaceObject.createHash)('sha256').update(bytes).digest('hex');
+    if (sha !== KERNEL_SHA256)
+        throw new Error(`kernel bytes have sha256 ${sha}, expected ${KERNEL_SHA256}`);
     try {
-        const bytes = decode(KERNEL_BASE64);
         if (wasmApi === undefined || !wasmApi.validate(bytes)) {
             runtime = null;
         }
@@ -14923,106 +15376,139 @@ function getRuntime() {
 function wasmAvailable() {
     return getRuntime() !== null;
 }
+/**
+ * Where one gradient call's operands live in wasm memory. Kept while nothing moved (same shape,
+ * same data, same memory), so the epoch loop allocates nothing and resolves nothing.
+ */
+class GradientPlan {
+    version = -1;
+    shape = null;
+    x = null;
+    y = null;
+    xAt = 0;
+    yAt = 0;
+    paramsAt = 0;
+    gradAt = 0;
+    workAt = 0;
+    activation = 0;
+    head = 0;
+    memory;
+    grad;
+    constructor(memory) {
+        this.memory = memory;
+        this.grad = memory.subarray(0, 0);
+    }
+    current(rt, shape, x, y) {
+        return this.version === rt.version && shape === this.shape && x === this.x && y === this.y;
+    }
+    plan(rt, shape, x, y, size) {
+        [this.xAt, this.yAt] = rt.resident(x, y);
+        this.paramsAt = rt.scratch(16 * size + 128 + rt.ex.workBytes(shape.inputs, shape.width, shape.outputs));
+        this.gradAt = align(this.paramsAt + 8 * size);
+        this.workAt = align(this.gradAt + 8 * size);
+        this.memory = rt.view();
+        this.grad = this.memory.subarray(this.gradAt / 8, this.gradAt / 8 + size);
+        this.activation = activationCode(shape.activation);
+        this.head = reference_headCode(shape.head);
+        this.version = rt.version;
+        this.shape = shape;
+        this.x = x;
+        this.y = y;
+    }
+}
+/** The same for one forward call: inputs, logits and (optionally) hidden activations. */
+class ForwardPlan {
+    version = -1;
+    shape = null;
+    x = null;
+    rows = -1;
+    hiddenBytes = -1;
+    xAt = 0;
+    paramsAt = 0;
+    logitsAt = 0;
+    hiddenAt = 0;
+    workAt = 0;
+    memory;
+    logits;
+    hidden;
+    constructor(memory) {
+        this.memory = memory;
+        this.logits = memory.subarray(0, 0);
+        this.hidden = memory.subarray(0, 0);
+    }
+    current(rt, shape, x, rows, hiddenBytes) {
+        return (this.version === rt.version &&
+            shape === this.shape &&
+            x === this.x &&
+            rows === this.rows &&
+            hiddenBytes === this.hiddenBytes);
+    }
+    plan(rt, shape, x, rows, hiddenBytes, size) {
+        const { inputs: D, width: H, outputs: K } = shape;
+        this.xAt = rt.residentOne(x);
+        const logitBytes = 8 * rows * K;
+        this.paramsAt = rt.scratch(8 * size + logitBytes + hiddenBytes + 256 + rt.ex.workBytes(D, H, K));
+        this.logitsAt = align(this.paramsAt + 8 * size);
+        this.hiddenAt = align(this.logitsAt + logitBytes);
+        this.workAt = align(this.hiddenAt + hiddenBytes);
+        this.memory = rt.view();
+        this.logits = this.memory.subarray(this.logitsAt / 8, this.logitsAt / 8 + rows * K);
+        this.hidden = this.memory.subarray(this.hiddenAt / 8, this.hiddenAt / 8 + rows * H);
+        this.version = rt.version;
+        this.shape = shape;
+        this.x = x;
+        this.rows = rows;
+        this.hiddenBytes = hiddenBytes;
+    }
+}
 /** A kernel backed by the shared WebAssembly module; throws when WebAssembly SIMD is unavailable. */
 function wasmKernel() {
     const rt = getRuntime();
     if (rt === null)
         throw new Error('WebAssembly SIMD is not available in this JavaScript engine');
     const ex = rt.ex;
-    // Offsets of the last gradient call, reused while nothing moved (the epoch loop must not allocate).
     // Gradient and forward calls share the scratch area above the cached data; each call rewrites
     // everything it reads there, so they may overlap.
-    let gVersion = -1;
-    let gShape = null;
-    let gX = null;
-    let gY = null;
-    let xp = 0;
-    let yp = 0;
-    let pp = 0;
-    let gp = 0;
-    let wp = 0;
-    let mem = rt.view();
-    let gradView = mem.subarray(0, 0);
-    let act = 0;
-    let head = 0;
-    // The same for the last forward call.
-    let fVersion = -1;
-    let fShape = null;
-    let fX = null;
-    let fRows = -1;
-    let fHidBytes = -1;
-    let fx = 0;
-    let fp = 0;
-    let op = 0;
-    let hp = 0;
-    let fw = 0;
-    let fmem = mem;
-    let logitsView = mem.subarray(0, 0);
-    let hiddenView = mem.subarray(0, 0);
+    const g = new GradientPlan(rt.view());
+    const f = new ForwardPlan(rt.view());
     return {
         name: 'wasm-simd-f64',
         lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0) {
             const P = params.length;
-            if (gVersion !== rt.version || shape !== gShape || x !== gX || y !== gY) {
-                [xp, yp] = rt.resident(x, y);
-                pp = rt.scratch(16 * P + 128 + ex.workBytes(shape.inputs, shape.width, shape.outputs));
-                gp = align(pp + 8 * P);
-                wp = align(gp + 8 * P);
-                mem = rt.view();
-                gradView = mem.subarray(gp / 8, gp / 8 + P);
-                act = activationCode(shape.activation);
-                head = reference_headCode(shape.head);
-                gVersion = rt.version;
-                gShape = shape;
-                gX = x;
-                gY = y;
-            }
-            const po = pp / 8;
+            if (!g.current(rt, shape, x, y))
+                g.plan(rt, shape, x, y, P);
+            const mem = g.memory;
+            const po = g.paramsAt / 8;
             if (P <= 64)
                 for (let q = 0; q < P; q++)
                     mem[po + q] = params[q];
             else
                 mem.set(params, po);
-            const loss = ex.lossGrad(act, head, shape.inputs, shape.width, shape.outputs, pp, xp, yp, start, end, gp, wp, primeOffset);
+            const { inputs, width, outputs } = shape;
+            const loss = ex.lossGrad(g.activation, g.head, inputs, width, outputs, g.paramsAt, g.xAt, g.yAt, start, end, g.gradAt, g.workAt, primeOffset);
+            const view = g.grad;
             if (P <= 64)
                 for (let q = 0; q < P; q++)
-                    grad[q] = gradView[q];
+                    grad[q] = view[q];
             else
-                grad.set(gradView);
+                grad.set(view);
             return loss;
         },
         forward(shape, params, x, rows, logits, hidden) {
-            const P = params.length;
-            const D = shape.inputs;
-            const H = shape.width;
-            const K = shape.outputs;
-            const hidBytes = hidden ? 8 * rows * H : 0;
-            if (fVersion !== rt.version || shape !== fShape || x !== fX || rows !== fRows || hidBytes !== fHidBytes) {
-                fx = rt.residentOne(x);
-                const outBytes = 8 * rows * K;
-                fp = rt.scratch(8 * P + outBytes + hidBytes + 256 + ex.workBytes(D, H, K));
-                op = align(fp + 8 * P);
-                hp = align(op + outBytes);
-                fw = align(hp + hidBytes);
-                fmem = rt.view();
-                logitsView = fmem.subarray(op / 8, op / 8 + rows * K);
-                hiddenView = fmem.subarray(hp / 8, hp / 8 + rows * H);
-                fVersion = rt.version;
-                fShape = shape;
-                fX = x;
-                fRows = rows;
-                fHidBytes = hidBytes;
-            }
-            fmem.set(params, fp / 8);
-            ex.forward(activationCode(shape.activation), D, H, K, fp, fx, rows, op, hidden ? hp : 0, fw);
-            logits.set(logitsView);
+            const hiddenBytes = hidden ? 8 * rows * shape.width : 0;
+            if (!f.current(rt, shape, x, rows, hiddenBytes))
+                f.plan(rt, shape, x, rows, hiddenBytes, params.length);
+            f.memory.set(params, f.paramsAt / 8);
+            const { inputs, width, outputs } = shape;
+            ex.forward(activationCode(shape.activation), inputs, width, outputs, f.paramsAt, f.xAt, rows, f.logitsAt, hidden ? f.hiddenAt : 0, f.workAt);
+            logits.set(f.logits);
             if (hidden)
-                hidden.set(hiddenView);
+                hidden.set(f.hidden);
         },
     };
 }
 
-;// CONCATENATED MODULE: ./src/nn/select.ts
+;// CONCATENATED MODULE: ./src/nn/kernel/select.ts
 /** Picks the compute kernel a new trainer runs: the WebAssembly SIMD kernel, else the float64 reference (same bits). */
 
 
@@ -15038,7 +15524,7 @@ function computeMetrics(head, K, logits, y, rows, targetStd) {
         loss += rowLoss(head, K, logits, p * K, y[p]);
     loss /= rows;
     const metric = (name) => targetMetric(name, head, K, logits, y, rows, targetStd);
-    if (head === HEAD_LINEAR) {
+    if (head === constants_HEAD_LINEAR) {
         return { loss, accuracy: NaN, rmse: metric('rmse'), mae: metric('mae'), maxAbsError: metric('max-abs-error') };
     }
     // A network whose loss is not finite has no accuracy.
@@ -15047,12 +15533,12 @@ function computeMetrics(head, K, logits, y, rows, targetStd) {
 /** One metric without building the whole record (used inside the epoch loop). */
 function targetMetric(name, head, K, logits, y, rows, targetStd) {
     if (name === 'accuracy') {
-        if (head === HEAD_LINEAR)
+        if (head === constants_HEAD_LINEAR)
             return NaN;
         let correct = 0;
         for (let p = 0; p < rows; p++) {
             let cls = 0;
-            if (head === HEAD_LOGISTIC) {
+            if (head === constants_HEAD_LOGISTIC) {
                 const z = logits[p];
                 if (z !== z)
                     return NaN;
@@ -15072,7 +15558,7 @@ function targetMetric(name, head, K, logits, y, rows, targetStd) {
         }
         return correct / rows;
     }
-    if (head !== HEAD_LINEAR)
+    if (head !== constants_HEAD_LINEAR)
         return NaN;
     let se = 0;
     let ae = 0;
@@ -15099,11 +15585,188 @@ function metricValue(m, name) {
             return m.maxAbsError;
     }
 }
-/** True when `value` meets the target (accuracy: >= threshold; error metrics: <= threshold). NaN never does. */
-function meetsTarget(value, target) {
-    if (!(value === value))
-        return false;
-    return target.metric === 'accuracy' ? value >= target.threshold : value <= target.threshold;
+
+;// CONCATENATED MODULE: ./src/nn/network.ts
+
+
+/** The activation's usual initialisation. */
+function defaultInit(activation) {
+    return activation === 'relu' ? 'he' : 'nguyen-widrow';
+}
+/** Nguyen-Widrow scale β = 0.7 · H^(1/n) (Nguyen & Widrow 1990). @testOnly */
+function nguyenWidrowBeta(width, inputs) {
+    return 0.7 * detmath_detExp(detLog(width) / inputs);
+}
+/** Standard normal draw by the Marsaglia polar method (no trigonometry, so it stays deterministic). */
+function gaussian(rng) {
+    for (;;) {
+        const u = 2 * rng.nextDouble() - 1;
+        const v = 2 * rng.nextDouble() - 1;
+        const s = u * u + v * v;
+        if (s > 0 && s < 1)
+            return u * Math.sqrt((-2 * detLog(s)) / s);
+    }
+}
+/**
+ * Draws hidden neuron j's input weights and bias into `params` (layout `lay`, `width` hidden
+ * neurons), as `init` prescribes for a layer of `width` neurons.
+ */
+function initHiddenNeuron(params, lay, inputs, width, j, init, rng) {
+    if (init === 'nguyen-widrow') {
+        const beta = nguyenWidrowBeta(width, inputs);
+        let norm2 = 0;
+        for (let i = 0; i < inputs; i++) {
+            const w = rng.nextDouble() - 0.5;
+            params[lay.w1 + i * width + j] = w;
+            norm2 += w * w;
+        }
+        const scale = norm2 > 0 ? beta / Math.sqrt(norm2) : 0;
+        for (let i = 0; i < inputs; i++)
+            params[lay.w1 + i * width + j] *= scale;
+        params[lay.b1 + j] = beta * (2 * rng.nextDouble() - 1);
+    }
+    else if (init === 'glorot') {
+        const limit = Math.sqrt(6 / (inputs + width));
+        for (let i = 0; i < inputs; i++)
+            params[lay.w1 + i * width + j] = limit * (2 * rng.nextDouble() - 1);
+        params[lay.b1 + j] = 0;
+    }
+    else {
+        const std = Math.sqrt(2 / inputs);
+        for (let i = 0; i < inputs; i++)
+            params[lay.w1 + i * width + j] = std * gaussian(rng);
+        params[lay.b1 + j] = 0;
+    }
+}
+/** A freshly initialised parameter vector. Draw order: hidden neurons 0..H-1, then output weights row by row. */
+function initParams(shape, init, rng) {
+    const lay = layoutOf(shape);
+    const params = new Float64Array(lay.size);
+    const { inputs, width, outputs } = shape;
+    for (let j = 0; j < width; j++)
+        initHiddenNeuron(params, lay, inputs, width, j, init, rng);
+    if (init === 'nguyen-widrow') {
+        // Output weights: small uniform values, U(-0.5, 0.5); output biases 0.
+        for (let q = 0; q < width * outputs; q++)
+            params[lay.w2 + q] = rng.nextDouble() - 0.5;
+    }
+    else if (init === 'glorot') {
+        const limit = Math.sqrt(6 / (width + outputs));
+        for (let q = 0; q < width * outputs; q++)
+            params[lay.w2 + q] = limit * (2 * rng.nextDouble() - 1);
+    }
+    else {
+        const std = Math.sqrt(2 / width);
+        for (let q = 0; q < width * outputs; q++)
+            params[lay.w2 + q] = std * gaussian(rng);
+    }
+    return params;
+}
+/**
+ * The parameters of `shape` with hidden neuron `j` removed (removeAt) or a zeroed neuron
+ * appended (remove < 0). Returned in the layout of the new width.
+ */
+function resizeParams(params, shape, removeAt) {
+    const { inputs, width, outputs } = shape;
+    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
+    const from = layoutOf(shape);
+    const to = layoutOf({ inputs, width: newWidth, outputs });
+    const out = new Float64Array(to.size);
+    const keep = (j) => (removeAt >= 0 && j > removeAt ? j - 1 : j);
+    for (let j = 0; j < width; j++) {
+        if (j === removeAt)
+            continue;
+        const jj = keep(j);
+        for (let i = 0; i < inputs; i++)
+            out[to.w1 + i * newWidth + jj] = params[from.w1 + i * width + j];
+        out[to.b1 + jj] = params[from.b1 + j];
+        for (let k = 0; k < outputs; k++)
+            out[to.w2 + jj * outputs + k] = params[from.w2 + j * outputs + k];
+    }
+    for (let k = 0; k < outputs; k++)
+        out[to.b2 + k] = params[from.b2 + k];
+    return out;
+}
+/** Maps old parameter indices to new ones for a resize (−1: dropped); new parameters have no source. */
+function resizeIndexMap(shape, removeAt) {
+    const { inputs, width, outputs } = shape;
+    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
+    const from = layoutOf(shape);
+    const to = layoutOf({ inputs, width: newWidth, outputs });
+    const map = new Int32Array(from.size).fill(-1);
+    for (let j = 0; j < width; j++) {
+        if (j === removeAt)
+            continue;
+        const jj = removeAt >= 0 && j > removeAt ? j - 1 : j;
+        for (let i = 0; i < inputs; i++)
+            map[from.w1 + i * width + j] = to.w1 + i * newWidth + jj;
+        map[from.b1 + j] = to.b1 + jj;
+        for (let k = 0; k < outputs; k++)
+            map[from.w2 + j * outputs + k] = to.w2 + jj * outputs + k;
+    }
+    for (let k = 0; k < outputs; k++)
+        map[from.b2 + k] = to.b2 + k;
+    return map;
+}
+function toJson(shape, params) {
+    const { inputs, width, outputs } = shape;
+    const lay = layoutOf(shape);
+    const hiddenWeights = [];
+    for (let j = 0; j < width; j++) {
+        const row = [];
+        for (let i = 0; i < inputs; i++)
+            row.push(params[lay.w1 + i * width + j]);
+        hiddenWeights.push(row);
+    }
+    const outputWeights = [];
+    for (let k = 0; k < outputs; k++) {
+        const row = [];
+        for (let j = 0; j < width; j++)
+            row.push(params[lay.w2 + j * outputs + k]);
+        outputWeights.push(row);
+    }
+    return {
+        inputs,
+        width,
+        outputs,
+        activation: shape.activation,
+        head: shape.head,
+        hiddenWeights,
+        hiddenBias: Array.from(params.subarray(lay.b1, lay.b1 + width)),
+        outputWeights,
+        outputBias: Array.from(params.subarray(lay.b2, lay.b2 + outputs)),
+    };
+}
+function network_fromJson(net) {
+    const shape = {
+        inputs: net.inputs,
+        width: net.width,
+        outputs: net.outputs,
+        activation: net.activation,
+        head: net.head,
+    };
+    const lay = layoutOf(shape);
+    const params = new Float64Array(lay.size);
+    for (let j = 0; j < net.width; j++) {
+        for (let i = 0; i < net.inputs; i++)
+            params[lay.w1 + i * net.width + j] = net.hiddenWeights[j][i];
+        params[lay.b1 + j] = net.hiddenBias[j];
+    }
+    for (let k = 0; k < net.outputs; k++) {
+        for (let j = 0; j < net.width; j++)
+            params[lay.w2 + j * net.outputs + k] = net.outputWeights[k][j];
+        params[lay.b2 + k] = net.outputBias[k];
+    }
+    return { shape, params };
+}
+function network_describe(shape) {
+    return {
+        inputs: shape.inputs,
+        width: shape.width,
+        outputs: shape.outputs,
+        activation: shape.activation,
+        head: shape.head,
+    };
 }
 
 ;// CONCATENATED MODULE: ./src/nn/optimizers.ts
@@ -15120,7 +15783,7 @@ function remap(old, map, newSize, fresh) {
             out[map[q]] = old[q];
     return out;
 }
-/** iRprop+ (Igel & Hüsken): on a sign change, revert the last step only if the error rose. */
+/** iRprop+ (Igel & Hüsken): on a sign change, revert the last step only if the error rose. @testOnly */
 class IRpropPlus {
     kind = 'irprop+';
     delta;
@@ -15270,26 +15933,8 @@ function makeUpdater(kind, size, settings) {
     return new Momentum(size, settings.learningRate ?? BACKPROP_DEFAULTS.learningRate, settings.momentum ?? BACKPROP_DEFAULTS.momentum);
 }
 
-;// CONCATENATED MODULE: ./src/nn/trainer.ts
-
-
-
-
-
-/**
- * Flat-spot elimination (Fahlman 1988, "An empirical study of learning speed in
- * back-propagation networks", CMU-CS-88-162; 0.1 is the sigmoid-prime offset of the
- * Cascade-Correlation reference code): a saturated tanh or logistic neuron has a derivative of
- * exactly 0 in floating point and would never move again. Measured on XOR (width 2, tanh,
- * iRprop+, 2,000 epochs, 100 seeds): 50 reach 100% with the exact gradient, 85 with it.
- */
-const FLAT_SPOT_OFFSET = 0.1;
-/** The output head the dataset calls for. */
-function headFor(data) {
-    if (data.task === 'regression')
-        return 'linear';
-    return data.outputs === 1 ? 'logistic' : 'softmax';
-}
+;// CONCATENATED MODULE: ./src/nn/stall.ts
+/** When a training's error has flattened: the trigger of in-place growth. */
 /** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
 class StallDetector {
     window;
@@ -15324,6 +15969,30 @@ class StallDetector {
             return !(drop > 0);
         return drop / this.errorAtStart < this.threshold;
     }
+}
+
+;// CONCATENATED MODULE: ./src/nn/trainer.ts
+
+
+
+
+
+
+
+
+/**
+ * Flat-spot elimination (Fahlman 1988, "An empirical study of learning speed in
+ * back-propagation networks", CMU-CS-88-162; 0.1 is the sigmoid-prime offset of the
+ * Cascade-Correlation reference code): a saturated tanh or logistic neuron has a derivative of
+ * exactly 0 in floating point and would never move again. Measured on XOR (width 2, tanh,
+ * iRprop+, 2,000 epochs, 100 seeds): 50 reach 100% with the exact gradient, 85 with it.
+ */
+const FLAT_SPOT_OFFSET = 0.1;
+/** The output head the dataset calls for. */
+function headFor(data) {
+    if (data.task === 'regression')
+        return 'linear';
+    return data.outputs === 1 ? 'logistic' : 'softmax';
 }
 class NetworkTrainer {
     data;
@@ -15418,7 +16087,7 @@ class NetworkTrainer {
                     break;
                 }
                 const m = this.targetMetricOnJudgedRows();
-                if (meetsTarget(m, options.target)) {
+                if (meetsThreshold(m, options.target)) {
                     stop = 'reached';
                     break;
                 }
@@ -15485,7 +16154,7 @@ class NetworkTrainer {
         let stop = 'max-epochs';
         if (!Number.isFinite(train.loss))
             stop = 'diverged';
-        else if (meetsTarget(validationMetric, this.options.target))
+        else if (meetsThreshold(validationMetric, this.options.target))
             stop = 'reached';
         return { epochs: 0, stop, trainLoss: train.loss, trainMetric, validationMetric };
     }
@@ -15604,29 +16273,12 @@ function createTrainer(data, width, options, rng, extras = {}) {
     });
 }
 
-;// CONCATENATED MODULE: ./src/nn/index.ts
+;// CONCATENATED MODULE: ./src/nn/predict.ts
+/** Running a network on encoded rows. */
 
 
-
-
-
-
-/** Independent stream for restart `restart` of width `width` under base seed `seed`. */
-function nn_rngFor(seed, width, restart) {
-    return rngFor(seed, width, restart);
-}
-function nn_createTrainer(data, width, options, rng) {
-    return createTrainer(data, width, options, rng);
-}
-/**
- * A trainer that continues from an existing network (any width): its weights, with fresh
- * optimiser and stall state. The prune phase restores refused removals with it.
- */
-function nn_trainerFromNetwork(data, net, options, rng) {
-    return trainerFromNetwork(data, net, options, rng);
-}
 /** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
-function nn_predict(net, x, rows) {
+function predict_predict(net, x, rows) {
     const { shape, params } = fromJson(net);
     const K = shape.outputs;
     const logits = new Float64Array(rows * K);
@@ -15637,10 +16289,10 @@ function nn_predict(net, x, rows) {
         headOutputs(head, K, logits, p * K, out, p * K);
     return out;
 }
-/** True when `value` meets the target (accuracy: >= threshold; error metrics: <= threshold). */
-function nn_meetsTarget(value, target) {
-    return meetsTarget(value, target);
-}
+
+;// CONCATENATED MODULE: ./src/nn/index.ts
+
+
 
 ;// CONCATENATED MODULE: ./src/model/predict.ts
 /** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
@@ -15748,6 +16400,116 @@ function scoreRows(model, rows) {
 
 
 
+;// CONCATENATED MODULE: ./src/report/assemble.ts
+
+
+/** The report with the data stage's facts; verdict and search come later. */
+function dataStageReport(config, data, timing) {
+    const ds = data.dataset;
+    const classes = data.profile.classes;
+    return {
+        schema: 'neuron-budget/report@1',
+        tool: { name: TOOL_NAME, version: TOOL_VERSION },
+        reasons: [],
+        width: null,
+        metric: { name: config.target.metric, value: null, threshold: config.target.threshold },
+        baseline: null,
+        data: {
+            file: displayPath(config.root, config.data.path),
+            rows: data.rows,
+            droppedRows: data.droppedRows,
+            trainRows: ds.trainRows,
+            validationRows: ds.validationRows,
+            inputs: ds.inputs,
+            outputs: ds.outputs,
+            task: ds.task,
+            fingerprint: data.fingerprint,
+            classes: classes === null
+                ? null
+                : Object.keys(classes)
+                    .sort()
+                    .map((label) => ({ label, count: classes[label] })),
+        },
+        search: null,
+        changes: null,
+        timing: { ...timing },
+    };
+}
+/** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
+function searchStageReport(report, search) {
+    return {
+        ...report,
+        reasons: [],
+        width: search.width,
+        metric: { ...report.metric, value: search.metric },
+        search: {
+            outcome: search.outcome,
+            grownWidth: search.grownWidth,
+            widths: search.widths,
+            pruning: search.pruning,
+            trainings: search.trainings,
+            note: search.note,
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/report/data-summary.ts
+
+
+
+
+/** Class labels are padded into a column; a longer one is clipped so one label cannot widen every line. */
+const LABEL_SHOWN = 40;
+function inputsLine(data) {
+    const features = data.dataset.encoding.features;
+    const numeric = features.filter((f) => f.kind === 'numeric').length;
+    const categorical = features.filter((f) => f.kind === 'categorical');
+    const parts = [`${numeric} numeric`];
+    if (categorical.length > 0) {
+        const oneHot = categorical
+            .map((f) => (f.kind === 'categorical' ? `${escapeText(f.name, 60)} → ${f.categories.length}` : ''))
+            .join(', ');
+        parts.push(`${categorical.length} categorical (${oneHot})`);
+    }
+    return `${data.dataset.inputs} after encoding: ${parts.join(', ')}`;
+}
+function splitLine(config, report) {
+    const d = report.data;
+    if (d.validationRows === 0)
+        return `${d.trainRows} training rows, judged on themselves (data.validation is 0)`;
+    const how = d.task === 'classification' ? 'stratified by class, ' : '';
+    return `${d.trainRows} training / ${d.validationRows} validation (${how}seed ${config.search.seed})`;
+}
+function dataSummaryText(config, data, report) {
+    const d = report.data;
+    const rows = [
+        ['config', escapeText(displayPath(config.root, config.file))],
+        ['data', escapeText(d.file)],
+        ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
+        ['split', splitLine(config, report)],
+        ['inputs', inputsLine(data)],
+        [
+            'task',
+            `${d.task}${d.classes ? `, ${d.classes.length} classes` : ''}; ${d.outputs} network output${d.outputs === 1 ? '' : 's'}`,
+        ],
+    ];
+    if (d.classes) {
+        const labels = d.classes.map((c) => escapeText(c.label, LABEL_SHOWN));
+        const width = Math.max(...labels.map((l) => l.length));
+        d.classes.forEach((c, i) => {
+            const share = ((100 * c.count) / d.rows).toFixed(1);
+            rows.push([
+                i === 0 ? 'classes' : '',
+                `${labels[i].padEnd(width)}  ${String(c.count).padStart(7)}  ${share.padStart(5)}%`,
+            ]);
+        });
+    }
+    rows.push(['target', targetShort(report.metric.name, report.metric.threshold)]);
+    rows.push(['fingerprint', d.fingerprint]);
+    const body = rows.map(([k, v]) => `  ${k.padEnd(12)}${v}`).join('\n');
+    return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;
+}
+
 ;// CONCATENATED MODULE: ./src/report/chart.ts
 /**
  * Mermaid `xychart-beta` blocks. Only numbers computed by neuron-budget and fixed
@@ -15811,83 +16573,6 @@ function niceCeil(x) {
     return Math.ceil(x / step) * step;
 }
 
-;// CONCATENATED MODULE: ./src/report/escape.ts
-/**
- * Makes strings from the repository (column names, class labels, paths, values, and
- * sentences that quote them) safe to show.
- *
- * Markdown: every ASCII character other than letters, digits, space and , ; ' " / % = ?
- * (which mean nothing to Markdown in the middle of a line, where these strings always
- * go) becomes a numeric character reference, which GitHub-flavoured Markdown shows as
- * literal text and never reads as syntax (emphasis, links, images, HTML, code, table
- * pipes, headings, lists).
- * GitHub turns some plain text into links after rendering (@-mentions, #123 references,
- * URLs, www. addresses, :emoji:; GitHub behaviour as we know it, not checked against
- * GitHub here), so a zero-width space follows every "@", "#" and ":"
- * and before the dot of "www.", which breaks those patterns without changing what a reader sees.
- * Line breaks become spaces, so a string never leaves its line or table cell.
- */
-const ZWSP = '&#8203;';
-/** Bidirectional and invisible formatting characters that could disguise text. */
-const INVISIBLE = /[\u200b-\u200f\u2028\u2029\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff\u00ad]/u;
-const MAX_SHOWN = 200;
-/** Space , ; ' " / % = ? */
-const PLAIN = new Set([0x20, 0x2c, 0x3b, 0x27, 0x22, 0x2f, 0x25, 0x3d, 0x3f]);
-function escapeMarkdown(raw) {
-    const s = clip(raw);
-    let out = '';
-    for (let i = 0; i < s.length; i++) {
-        const c = s.charCodeAt(i);
-        if ((c >= 0x30 && c <= 0x39) || (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a) || PLAIN.has(c)) {
-            out += s[i];
-        }
-        else if (c === 0x0a || c === 0x0d || c === 0x09) {
-            out += ' ';
-        }
-        else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
-            out += '&#65533;';
-        }
-        else if (c < 0x80) {
-            if (c === 0x2e && /www$/i.test(s.slice(Math.max(0, i - 3), i)))
-                out += ZWSP;
-            out += `&#${c};`;
-            if (c === 0x40 || c === 0x23 || c === 0x3a)
-                out += ZWSP;
-        }
-        else if (INVISIBLE.test(s[i])) {
-            out += '&#65533;';
-        }
-        else if (c === 0xff20 || c === 0xfe6b) {
-            // Full-width and small commercial at: GitHub does not mention on them, but keep them inert anyway.
-            out += `&#${c};${ZWSP}`;
-        }
-        else {
-            out += s[i];
-        }
-    }
-    return out;
-}
-/** Plain text for a terminal: control characters (escape sequences) and invisible formatting become "?". */
-function escapeTerminal(raw) {
-    const s = clip(raw);
-    let out = '';
-    for (const ch of s) {
-        const c = ch.codePointAt(0) ?? 0;
-        if (c === 0x0a || c === 0x0d || c === 0x09)
-            out += ' ';
-        else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch))
-            out += '?';
-        else
-            out += ch;
-    }
-    return out;
-}
-/** Long names are shortened so one pathological column cannot swamp the report. */
-function clip(s) {
-    const chars = Array.from(s);
-    return chars.length > MAX_SHOWN ? `${chars.slice(0, MAX_SHOWN - 3).join('')}...` : s;
-}
-
 ;// CONCATENATED MODULE: ./src/report/view.ts
 const VERDICT_LABEL = {
     pass: 'PASS',
@@ -15912,7 +16597,7 @@ function viewOf(report) {
     const searchSeconds = report.timing['searchSeconds'];
     return {
         verdict: report.verdict,
-        headline: report.reasons[0] ?? (report.verdict === null ? 'Data loaded; no search was run.' : ''),
+        headline: report.reasons[0] ?? '',
         otherReasons: report.reasons.slice(1),
         metricName: report.metric.name,
         threshold: report.metric.threshold,
@@ -15961,6 +16646,7 @@ function overDeviceBudget(report) {
 
 
 
+
 /** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
 const COMMENT_LIMIT = 65_000;
 /** Most widths a chart shows; longer curves keep the widest (where the answer lies). */
@@ -15986,7 +16672,7 @@ function renderMarkdown(report, options = {}) {
     return `${[head, note, foot].join('\n\n')}\n`;
 }
 function headline(view) {
-    const label = view.verdict === null ? 'DATA ONLY' : VERDICT_LABEL[view.verdict];
+    const label = VERDICT_LABEL[view.verdict];
     const lines = [`### neuron-budget: ${label}. ${escapeMarkdown(view.headline)}`];
     if (view.otherReasons.length > 0) {
         lines.push('');
@@ -16191,9 +16877,9 @@ function changesList(changes, limits) {
     }
     for (const c of changes.categories) {
         if (c.appeared.length > 0)
-            items.push(`Feature ${escapeMarkdown(c.feature)}: new categories ${c.appeared.map(escapeMarkdown).join(', ')}.`);
+            items.push(`Feature ${escapeMarkdown(c.feature)}: new categories ${c.appeared.map((s) => escapeMarkdown(s)).join(', ')}.`);
         if (c.vanished.length > 0)
-            items.push(`Feature ${escapeMarkdown(c.feature)}: categories gone ${c.vanished.map(escapeMarkdown).join(', ')}.`);
+            items.push(`Feature ${escapeMarkdown(c.feature)}: categories gone ${c.vanished.map((s) => escapeMarkdown(s)).join(', ')}.`);
     }
     if (changes.changed && items.length === (changes.file ? 2 : 1)) {
         items.push('No class, column or feature moved beyond the thresholds.');
@@ -16247,10 +16933,10 @@ const TEXT_WIDTH = 80;
 function renderText(report) {
     const view = viewOf(report);
     const out = [];
-    const label = view.verdict === null ? 'DATA ONLY' : VERDICT_LABEL[view.verdict];
-    out.push(...wrap(`neuron-budget: ${label}. ${escapeTerminal(view.headline)}`, ''));
+    const label = VERDICT_LABEL[view.verdict];
+    out.push(...wrap(`neuron-budget: ${label}. ${escapeText(view.headline)}`, ''));
     for (const r of view.otherReasons)
-        out.push(...wrap(escapeTerminal(r), '  - ', '    '));
+        out.push(...wrap(escapeText(r), '  - ', '    '));
     out.push('');
     const b = view.baseline;
     const c = view.current;
@@ -16282,7 +16968,7 @@ function renderText(report) {
         terms.push(`allowed growth: ${report.gate.allowedGrowth}`);
     }
     out.push(...wrap(`${terms.join('; ')}.`, ''));
-    out.push(...wrap(`data: ${escapeTerminal(report.data.file)}`, ''));
+    out.push(...wrap(`data: ${escapeText(report.data.file)}`, ''));
     if (view.rows.length > 0) {
         out.push('');
         out.push(`${view.metricName} by width (best over restarts; reached/run)`);
@@ -16335,36 +17021,36 @@ function renderText(report) {
 function changeLines(ch) {
     const lines = [];
     if (ch.file)
-        lines.push(`data file ${escapeTerminal(ch.file.before)} -> ${escapeTerminal(ch.file.after)}`);
+        lines.push(`data file ${escapeText(ch.file.before)} -> ${escapeText(ch.file.after)}`);
     if (!ch.changed)
         lines.push('same data as the baseline (same fingerprint)');
     else
         lines.push(`rows ${formatCount(ch.rows.before)} -> ${formatCount(ch.rows.after)} (${ascii(formatDelta(ch.rows.after - ch.rows.before))})`);
     for (const l of ch.classesAppeared)
-        lines.push(`new class ${escapeTerminal(l)}`);
+        lines.push(`new class ${escapeText(l)}`);
     for (const l of ch.classesVanished)
-        lines.push(`class ${escapeTerminal(l)} no longer appears`);
+        lines.push(`class ${escapeText(l)} no longer appears`);
     for (const c of ch.classes ?? []) {
         if (c.before !== c.after)
-            lines.push(`class ${escapeTerminal(c.label)}: ${formatCount(c.before)} -> ${formatCount(c.after)} rows (${ascii(formatDelta(c.after - c.before))})`);
+            lines.push(`class ${escapeText(c.label)}: ${formatCount(c.before)} -> ${formatCount(c.after)} rows (${ascii(formatDelta(c.after - c.before))})`);
     }
     for (const n of ch.columnsAdded)
-        lines.push(`column added: ${escapeTerminal(n)}`);
+        lines.push(`column added: ${escapeText(n)}`);
     for (const n of ch.columnsRemoved)
-        lines.push(`column removed: ${escapeTerminal(n)}`);
+        lines.push(`column removed: ${escapeText(n)}`);
     for (const f of ch.features) {
         const parts = [];
         if (f.meanMoved)
             parts.push(`mean ${fmt(f.meanBefore)} -> ${fmt(f.meanAfter)}${f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} std)`}`);
         if (f.rangeWidened)
             parts.push(`range ${fmt(f.rangeBefore[0])}..${fmt(f.rangeBefore[1])} -> ${fmt(f.rangeAfter[0])}..${fmt(f.rangeAfter[1])}`);
-        lines.push(`feature ${escapeTerminal(f.name)}: ${parts.join('; ')}`);
+        lines.push(`feature ${escapeText(f.name)}: ${parts.join('; ')}`);
     }
     for (const c of ch.categories) {
         if (c.appeared.length > 0)
-            lines.push(`feature ${escapeTerminal(c.feature)}: new categories ${c.appeared.map(escapeTerminal).join(', ')}`);
+            lines.push(`feature ${escapeText(c.feature)}: new categories ${c.appeared.map((s) => escapeText(s)).join(', ')}`);
         if (c.vanished.length > 0)
-            lines.push(`feature ${escapeTerminal(c.feature)}: categories gone ${c.vanished.map(escapeTerminal).join(', ')}`);
+            lines.push(`feature ${escapeText(c.feature)}: categories gone ${c.vanished.map((s) => escapeText(s)).join(', ')}`);
     }
     return lines;
 }
@@ -16436,7 +17122,6 @@ function withGate(report, outcome, gate) {
 
 
 
-
 ;// CONCATENATED MODULE: external "node:os"
 const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
 ;// CONCATENATED MODULE: external "node:perf_hooks"
@@ -16464,6 +17149,7 @@ function wilsonInterval(successes, trials, z = Z95) {
 }
 
 ;// CONCATENATED MODULE: ./src/search/growth.ts
+
 
 function taskKey(task) {
     return `${task.width}:${task.restart}`;
@@ -16583,9 +17269,7 @@ function decideGrowth(plan, target, lookup) {
     }
     return { kind: 'decided', adequateWidth: null, widths, reachedAtAdequate: [], trainings: used.size, capHit: null };
 }
-function growth_higherIsBetter(target) {
-    return target.metric === 'accuracy';
-}
+/** @testOnly */
 function median(values) {
     if (values.length === 0)
         return null;
@@ -16595,10 +17279,9 @@ function median(values) {
 }
 function summarizeWidth(width, seen, adequate, target) {
     const finite = seen.map((s) => s.metric).filter((m) => Number.isFinite(m));
-    const up = growth_higherIsBetter(target);
     let best = null;
     for (const m of finite)
-        if (best === null || (up ? m > best : m < best))
+        if (best === null || isBetter(target.metric, m, best))
             best = m;
     const reached = seen.filter((s) => s.reached).length;
     return {
@@ -16619,12 +17302,21 @@ function summarizeWidth(width, seen, adequate, target) {
  */
 function mergeOutcomes(plan, target, results) {
     const byKey = new Map();
-    for (const r of results)
-        byKey.set(taskKey(r), r);
+    for (const r of results) {
+        const key = taskKey(r);
+        const seen = byKey.get(key);
+        // Every task is a pure function of (data, settings, task): two copies that differ mean mixed inputs.
+        if (seen !== undefined && JSON.stringify(seen) !== JSON.stringify(r)) {
+            throw new Error(`two different results for the task at width ${r.width}, restart ${r.restart}`);
+        }
+        byKey.set(key, r);
+    }
     return decideGrowth(plan, target, (t) => byKey.get(taskKey(t)));
 }
 
 ;// CONCATENATED MODULE: ./src/search/task.ts
+
+
 
 /**
  * Dynamic Node Creation trigger (Ash 1989): window 100 epochs, relative slope 0.05.
@@ -16637,24 +17329,25 @@ const DEFAULT_PRUNE_CANDIDATES = 3;
 function reachedBy(rec, target) {
     if (rec.stop === 'diverged')
         return false;
-    return rec.stop === 'reached' || nn_meetsTarget(rec.validationMetric, target);
+    return rec.stop === 'reached' || meetsThreshold(rec.validationMetric, target);
 }
 const never = () => false;
 function divergedReason(width, epochs) {
     return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
 /**
- * Train the task's network and keep the trainer (the prune phase may continue from it).
+ * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
+ * null only when `cancelled` said so (the answer was no longer needed).
  * In-place growth (Dynamic Node Creation) starts at the task's width and gives every
  * width up to max-epochs; a neuron is added when the error curve flattens (the stall
  * trigger) or that budget runs out, until the target is reached or max-width is hit.
  */
-function growTrainer(data, ctx, task, cancelled = never) {
+function runTask(data, ctx, task, cancelled = never) {
     const { plan, train } = ctx;
     const inPlace = plan.growth === 'in-place';
-    const rng = nn_rngFor(ctx.seed, task.width, task.restart);
+    const rng = rngFor(ctx.seed, task.width, task.restart);
     const options = { ...train, stall: inPlace ? { ...ctx.stall } : null, interrupted: cancelled };
-    const trainer = nn_createTrainer(data, task.width, options, rng);
+    const trainer = createTrainer(data, task.width, options, rng);
     const segments = [];
     let epochs = 0;
     for (;;) {
@@ -16669,31 +17362,21 @@ function growTrainer(data, ctx, task, cancelled = never) {
         if (done) {
             const diverged = rec.stop === 'diverged';
             return {
-                trainer,
-                result: {
-                    width: task.width,
-                    restart: task.restart,
-                    reached,
-                    stop: reached ? 'reached' : rec.stop,
-                    epochs,
-                    metric: rec.validationMetric,
-                    finalWidth: width,
-                    segments,
-                    network: reached ? trainer.snapshot() : null,
-                    reason: diverged ? divergedReason(width, epochs) : null,
-                },
+                width: task.width,
+                restart: task.restart,
+                reached,
+                stop: reached ? 'reached' : rec.stop,
+                epochs,
+                metric: rec.validationMetric,
+                finalWidth: width,
+                segments,
+                network: reached ? trainer.snapshot() : null,
+                reason: diverged ? divergedReason(width, epochs) : null,
             };
         }
         // Stalled (or out of epochs at this width): add a neuron that leaves the function unchanged and keep training.
         trainer.addNeuron(rng);
     }
-}
-/**
- * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
- * null only when `cancelled` said so (the answer was no longer needed).
- */
-function runTask(data, ctx, task, cancelled = never) {
-    return growTrainer(data, ctx, task, cancelled)?.result ?? null;
 }
 /**
  * Shrink one network by compensated ablation: score every hidden neuron by the loss
@@ -16706,7 +17389,7 @@ function runPruneJob(data, ctx, job) {
     const retrain = { ...ctx.train, stall: null };
     // Every restore starts from a snapshot with fresh optimiser state, so the result does not
     // depend on which thread ran the growth task.
-    const fromSnapshot = (net) => nn_trainerFromNetwork(data, net, retrain, nn_rngFor(ctx.seed, job.task.width, job.task.restart));
+    const fromSnapshot = (net) => trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.task.width, job.task.restart));
     let trainer = fromSnapshot(job.network);
     let trainings = 0;
     const grownWidth = trainer.network.width;
@@ -16726,7 +17409,7 @@ function runPruneJob(data, ctx, job) {
             const rec = trainer.run(ctx.pruneEpochs);
             trainings++;
             const after = rec.stop === 'diverged' ? Number.NaN : trainer.evaluate().validationMetric;
-            const ok = Number.isFinite(after) && nn_meetsTarget(after, target);
+            const ok = Number.isFinite(after) && meetsThreshold(after, target);
             steps.push({ restart: job.task.restart, width, neuron: j, metricBefore: metric, metricAfter: after, kept: ok });
             if (ok) {
                 metric = after;
@@ -16768,7 +17451,7 @@ function pickWitness(results) {
 
 
 /** Marks a worker thread started by the pool (the bundle checks it to act as the worker). */
-const executor_WORKER_MARK = 'neuron-budget/search-worker';
+const WORKER_MARK = 'neuron-budget/search-worker';
 const yieldToEventLoop = () => new Promise((resolve) => setImmediate(resolve));
 function inThreadExecutor(data, ctx) {
     return {
@@ -16837,14 +17520,10 @@ function workerPoolExecutor(data, ctx, size, entry) {
                 trainIds.delete(key);
         return p;
     };
-    const start = (slot) => {
-        const worker = new external_node_worker_threads_namespaceObject.Worker(entry, { workerData: { role: executor_WORKER_MARK } });
-        slot.worker = worker;
-        slot.busy = null;
-        const current = () => slot.worker === worker;
-        worker.on('message', (reply) => {
-            if (!current())
-                return;
+    const startSlot = () => {
+        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
+        const slot = { worker: new external_node_worker_threads_namespaceObject.Worker(entry, { workerData: { role: WORKER_MARK } }), busy: null, cancel };
+        slot.worker.on('message', (reply) => {
             slot.busy = null;
             const p = settle(reply.id);
             if (p !== undefined) {
@@ -16856,24 +17535,21 @@ function workerPoolExecutor(data, ctx, size, entry) {
             pump();
         });
         const fail = (error) => {
-            if (!current() || closed)
+            if (closed)
                 return;
             if (slot.busy !== null)
                 settle(slot.busy)?.reject(error);
             slot.busy = null;
         };
-        worker.on('error', fail);
-        worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
+        slot.worker.on('error', fail);
+        slot.worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
         // The data's SharedArrayBuffers are shared with the thread, not copied.
-        const init = { type: 'init', data: shared, ctx, cancel: slot.cancel };
-        worker.postMessage(init);
+        const init = { type: 'init', data: shared, ctx, cancel };
+        slot.worker.postMessage(init);
+        return slot;
     };
-    for (let k = 0; k < size; k++) {
-        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
-        const slot = { busy: null, cancel };
-        start(slot);
-        slots.push(slot);
-    }
+    for (let k = 0; k < size; k++)
+        slots.push(startSlot());
     const submit = (job) => new Promise((resolve, reject) => {
         if (closed) {
             reject(new Error('search worker pool is closed'));
@@ -16924,6 +17600,8 @@ function workerPoolExecutor(data, ctx, size, entry) {
 
 
 
+
+
 function growthPlan(search) {
     return {
         growth: search.growth,
@@ -16964,13 +17642,10 @@ function search_fmt(x) {
 function span(from, to) {
     return from === to ? `width ${from}` : `widths ${from}–${to}`;
 }
-function targetText(target) {
-    return `${target.metric} ${growth_higherIsBetter(target) ? '≥' : '≤'} ${target.threshold}`;
-}
 function notFoundNote(plan, target, widths) {
     const best = widths.map((w) => `${w.width}: ${search_fmt(w.best)}`).join(', ');
     return (`No width from ${plan.minWidth} to ${plan.maxWidth} had ${plan.required} of ${plan.restarts} restarts reach ` +
-        `${targetText(target)}; best validation ${target.metric} per width: ${best}.`);
+        `${targetShort(target.metric, target.threshold)}; best validation ${target.metric} per width: ${best}.`);
 }
 function stoppedNote(plan, why, atWidth, trainings) {
     const below = atWidth > plan.minWidth
@@ -16989,7 +17664,6 @@ async function runSearch(data, search, target, options = {}) {
     const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
     const executor = size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
     const deadline = search.timeBudget === null ? Number.POSITIVE_INFINITY : t0 + search.timeBudget * 1000;
-    const up = growth_higherIsBetter(target);
     let bestSoFar = null;
     const progress = (e) => options.onProgress?.(e);
     try {
@@ -17024,8 +17698,7 @@ async function runSearch(data, search, target, options = {}) {
             const key = taskKey(done);
             inflight.delete(key);
             results.set(key, done);
-            if (Number.isFinite(done.metric) &&
-                (bestSoFar === null || (up ? done.metric > bestSoFar : done.metric < bestSoFar))) {
+            if (Number.isFinite(done.metric) && (bestSoFar === null || isBetter(target.metric, done.metric, bestSoFar))) {
                 bestSoFar = done.metric;
             }
             progress({ phase: 'growth', width: done.finalWidth, restart: done.restart, epoch: done.epochs, best: bestSoFar });
@@ -17118,11 +17791,6 @@ async function runSearch(data, search, target, options = {}) {
  */
 
 
-
-/** True when this thread was started by the search pool. */
-function isSearchWorker() {
-    return parentPort !== null && workerData?.role === WORKER_MARK;
-}
 function runSearchWorker() {
     const port = external_node_worker_threads_namespaceObject.parentPort;
     if (port === null)
@@ -17163,20 +17831,12 @@ function runSearchWorker() {
 
 
 
-;// CONCATENATED MODULE: ./package.json
-const package_namespaceObject = {"rE":"0.1.0"};
-;// CONCATENATED MODULE: ./src/version.ts
-/** The tool's version, taken from package.json when the bundle is built (ncc inlines the JSON). */
-
-const TOOL_NAME = 'neuron-budget';
-const TOOL_VERSION = package_namespaceObject.rE;
-
 ;// CONCATENATED MODULE: ./src/run.ts
 /**
- * The main job shared by the command line and the action: config → data → search →
- * gate → report. Each stage is one function that adds to the job state; for now the job
- * stops after the data stage (the search and gate stages slot in after `dataStage`).
+ * The main job shared by the command line and the action: config → data → search → gate →
+ * report. This file only orchestrates; each stage lives in its folder.
  */
+
 
 
 
@@ -17190,20 +17850,20 @@ const TOOL_VERSION = package_namespaceObject.rE;
 
 async function runJob(options) {
     const timing = {};
-    const config = await loadConfig(options.configPath, options.root);
+    const loaded = await loadConfig(options.configPath, options.root);
     // Fail on an unwritable output before minutes of work, not after.
     if (options.reportPath)
         await checkOutputFolder(options.reportPath, 'report', options.root);
     if (options.modelPath)
         await checkOutputFolder(options.modelPath, 'model', options.root);
-    const baselinePath = options.baselinePath ?? config.gate.baseline;
+    const baselinePath = options.baselinePath ?? loaded.gate.baseline;
     const baselineShown = options.baselinePath
-        ? displayPath(config.root, options.baselinePath)
-        : config.gate.baselineAsWritten;
+        ? displayPath(loaded.root, options.baselinePath)
+        : loaded.gate.baselineAsWritten;
     // A corrupt baseline is the user's to fix before minutes of search, not after.
     const previous = await readBaseline(baselinePath, baselineShown);
-    const data = await timed(timing, 'loadSeconds', () => loadData(config));
-    await checkMetricFitsTask(config, data.dataset.task);
+    const data = await timed(timing, 'loadSeconds', () => loadData(loaded));
+    const config = settleMetric(loaded, data.dataset.task);
     options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
     const search = await timed(timing, 'searchSeconds', () => runSearch(data.dataset, config.search, config.target, {
         workers: options.workers ?? null,
@@ -17238,8 +17898,9 @@ async function runJob(options) {
             modelWritten = options.modelPath;
         }
     }
-    if (options.reportPath)
+    if (options.reportPath) {
         await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
+    }
     const verdict = report.verdict;
     return {
         report,
@@ -17248,48 +17909,8 @@ async function runJob(options) {
         text: renderText(report),
         baselineWritten: gate.written,
         modelWritten,
-        exitCode: verdict === 'fail' || verdict === 'inconclusive' ? 1 : 0,
+        exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
     };
-}
-/** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-function searchStageReport(report, search) {
-    return {
-        ...report,
-        reasons: [],
-        width: search.width,
-        metric: { ...report.metric, value: search.metric },
-        search: {
-            outcome: search.outcome,
-            grownWidth: search.grownWidth,
-            widths: search.widths,
-            pruning: search.pruning,
-            trainings: search.trainings,
-            note: search.note,
-        },
-    };
-}
-/** Writes an output file atomically; a refusal by the file system is the user's to fix, not a bug. */
-async function writeOutput(path, text, what, root) {
-    try {
-        await writeFileAtomic(path, text);
-    }
-    catch (error) {
-        const code = error.code;
-        const reasons = {
-            EACCES: 'permission denied',
-            EPERM: 'permission denied',
-            EROFS: 'the file system is read-only',
-            ENOSPC: 'no space left on the device',
-            EISDIR: 'it is a folder',
-            ENOENT: 'its folder does not exist',
-            ENOTDIR: 'a part of the path is not a folder',
-        };
-        const reason = code === undefined ? undefined : reasons[code];
-        if (reason === undefined)
-            throw error;
-        const shown = displayPath(root, path);
-        throw new errors_UserError(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
-    }
 }
 async function timed(timing, name, work) {
     const start = performance.now();
@@ -17299,122 +17920,6 @@ async function timed(timing, name, work) {
     finally {
         timing[name] = Math.round(performance.now() - start) / 1000;
     }
-}
-async function checkOutputFolder(path, what, root) {
-    const folder = (0,external_node_path_namespaceObject.dirname)(path);
-    const shown = displayPath(root, folder);
-    const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
-    if (info === null)
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
-            file: displayPath(root, path),
-        });
-    if (!info.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
-            file: displayPath(root, path),
-        });
-    const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
-    if (target?.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
-            file: displayPath(root, path),
-        });
-}
-/** With data.task auto the task is only known after reading; the metric must suit it. */
-async function checkMetricFitsTask(config, task) {
-    const metric = config.target.metric;
-    const fits = task === 'classification' ? metric === 'accuracy' : metric !== 'accuracy';
-    if (fits)
-        return;
-    const shownConfig = displayPath(config.root, config.file);
-    const at = await keyPosition(config.file, 'target.metric');
-    const where = at ? `${shownConfig}:${at.line}:${at.column}` : shownConfig;
-    const hint = task === 'classification'
-        ? 'set target.metric to accuracy, or data.task to regression'
-        : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
-    throw new errors_UserError(`${where}: target.metric: the target column "${config.data.target}" was read as ${task}, which cannot be judged by ${metric}; ${hint}`, { file: shownConfig, key: 'target.metric', ...(at ? { line: at.line, column: at.column } : {}) });
-}
-function dataStageReport(config, data, timing) {
-    const ds = data.dataset;
-    const classes = data.profile.classes;
-    return {
-        schema: 'neuron-budget/report@1',
-        tool: { name: TOOL_NAME, version: TOOL_VERSION },
-        verdict: null,
-        reasons: [],
-        width: null,
-        metric: { name: config.target.metric, value: null, threshold: config.target.threshold },
-        baseline: null,
-        data: {
-            file: displayPath(config.root, config.data.path),
-            rows: data.rows,
-            droppedRows: data.droppedRows,
-            trainRows: ds.trainRows,
-            validationRows: ds.validationRows,
-            inputs: ds.inputs,
-            outputs: ds.outputs,
-            task: ds.task,
-            fingerprint: data.fingerprint,
-            classes: classes === null
-                ? null
-                : Object.keys(classes)
-                    .sort()
-                    .map((label) => ({ label, count: classes[label] })),
-        },
-        search: null,
-        changes: null,
-        timing: { ...timing },
-    };
-}
-// ---- data-stage rendering (moves to src/report once the full renderers cover it) -------
-function inputsLine(data) {
-    const features = data.dataset.encoding.features;
-    const numeric = features.filter((f) => f.kind === 'numeric').length;
-    const categorical = features.filter((f) => f.kind === 'categorical');
-    const parts = [`${numeric} numeric`];
-    if (categorical.length > 0) {
-        const oneHot = categorical
-            .map((f) => (f.kind === 'categorical' ? `${f.name} → ${f.categories.length}` : ''))
-            .join(', ');
-        parts.push(`${categorical.length} categorical (${oneHot})`);
-    }
-    return `${data.dataset.inputs} after encoding: ${parts.join(', ')}`;
-}
-function splitLine(config, report) {
-    const d = report.data;
-    if (d.validationRows === 0)
-        return `${d.trainRows} training rows, judged on themselves (data.validation is 0)`;
-    const how = d.task === 'classification' ? 'stratified by class, ' : '';
-    return `${d.trainRows} training / ${d.validationRows} validation (${how}seed ${config.search.seed})`;
-}
-function dataSummaryText(config, data, report) {
-    const d = report.data;
-    const rows = [
-        ['config', displayPath(config.root, config.file)],
-        ['data', d.file],
-        ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
-        ['split', splitLine(config, report)],
-        ['inputs', inputsLine(data)],
-        [
-            'task',
-            `${d.task}${d.classes ? `, ${d.classes.length} classes` : ''}; ${d.outputs} network output${d.outputs === 1 ? '' : 's'}`,
-        ],
-    ];
-    if (d.classes) {
-        const width = Math.max(...d.classes.map((c) => c.label.length));
-        d.classes.forEach((c, i) => {
-            const share = ((100 * c.count) / d.rows).toFixed(1);
-            rows.push([
-                i === 0 ? 'classes' : '',
-                `${c.label.padEnd(width)}  ${String(c.count).padStart(7)}  ${share.padStart(5)}%`,
-            ]);
-        });
-    }
-    rows.push([
-        'target',
-        `${report.metric.name} ${report.metric.name === 'accuracy' ? '≥' : '≤'} ${report.metric.threshold}`,
-    ]);
-    rows.push(['fingerprint', d.fingerprint]);
-    const body = rows.map(([k, v]) => `  ${k.padEnd(12)}${v}`).join('\n');
-    return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;
 }
 
 ;// CONCATENATED MODULE: ./src/cli.ts
@@ -17436,184 +17941,21 @@ function dataSummaryText(config, data, report) {
 
 
 
-const EXIT_USAGE = 2;
-const EXIT_INTERNAL = 3;
-const DEFAULT_CONFIG = 'neuron-budget.yml';
-const FLAGS = {
-    config: { name: 'config', value: 'FILE', help: `config file (default: ${DEFAULT_CONFIG} in the current folder)` },
-    report: { name: 'report', value: 'FILE', help: 'also write the full result as JSON to FILE' },
-    model: { name: 'model', value: 'FILE', help: 'write the smallest network found (weights and encoding) to FILE' },
-    baseline: { name: 'baseline', value: 'FILE', help: 'baseline file to use instead of the one named in the config' },
-    workers: { name: 'workers', value: 'N', help: 'worker threads, 1 to 256 (default: config, else one per core)' },
-};
-const COMMANDS = {
-    check: {
-        summary: 'search the smallest adequate width and compare it with the baseline',
-        flags: ['config', 'report', 'model', 'baseline', 'workers'],
-    },
-    baseline: {
-        summary: 'search the smallest adequate width and write it as the new baseline',
-        flags: ['config', 'baseline'],
-    },
-};
-/** A mistake on the command line: exit 2, one line, with a pointer to --help. */
-class UsageError extends errors_UserError {
-}
-function isCommand(s) {
-    return Object.hasOwn(COMMANDS, s);
-}
-/** Parses argv (without node and script) into what to do. Throws UsageError. */
-function parseArgs(argv) {
-    if (argv.includes('--help') || argv.includes('-h')) {
-        const command = argv.find(isCommand) ?? null;
-        return { kind: 'help', command };
-    }
-    if (argv.includes('--version') || argv.includes('-V'))
-        return { kind: 'version' };
-    const [first, ...rest] = argv;
-    if (first === undefined)
-        throw new UsageError(`a command is needed: ${Object.keys(COMMANDS).join(' or ')}`);
-    if (first === 'help') {
-        const topic = rest[0];
-        if (topic !== undefined && !isCommand(topic)) {
-            throw new UsageError(`no help for "${topic}"${didYouMean(topic, Object.keys(COMMANDS))}; commands: ${Object.keys(COMMANDS).join(', ')}`);
-        }
-        return { kind: 'help', command: topic ?? null };
-    }
-    if (first.startsWith('-')) {
-        throw new UsageError(`expected a command (${Object.keys(COMMANDS).join(' or ')}) before options, found "${first}"`);
-    }
-    if (!isCommand(first)) {
-        throw new UsageError(`unknown command "${first}"${didYouMean(first, Object.keys(COMMANDS))}; commands: ${Object.keys(COMMANDS).join(', ')}`);
-    }
-    const command = first;
-    const allowed = COMMANDS[command].flags;
-    const flags = {};
-    for (let i = 0; i < rest.length; i++) {
-        const arg = rest[i];
-        if (!arg.startsWith('--') || arg === '--') {
-            throw new UsageError(`${command}: unexpected argument "${arg}"; options are written --name VALUE`);
-        }
-        const eq = arg.indexOf('=');
-        const name = arg.slice(2, eq === -1 ? undefined : eq);
-        if (!allowed.includes(name)) {
-            const elsewhere = Object.hasOwn(FLAGS, name) ? ` (${command} has no --${name})` : '';
-            const suggestion = didYouMean(name, allowed).replace(/"([^"]+)"/, '"--$1"');
-            throw new UsageError(`${command}: unknown option --${name}${elsewhere}${suggestion}; see ${TOOL_NAME} ${command} --help`);
-        }
-        const flag = name;
-        let value;
-        if (eq !== -1)
-            value = arg.slice(eq + 1);
-        else {
-            value = rest[i + 1];
-            if (value !== undefined && value.startsWith('--'))
-                value = undefined;
-            else
-                i++;
-        }
-        if (value === undefined || value === '') {
-            throw new UsageError(`${command}: --${flag} needs a value (${FLAGS[flag].value})`);
-        }
-        if (flags[flag] !== undefined)
-            throw new UsageError(`${command}: --${flag} is given twice`);
-        flags[flag] = value;
-    }
-    let workers = null;
-    if (flags.workers !== undefined) {
-        const text = flags.workers;
-        const n = /^[0-9]+$/.test(text) ? Number(text) : NaN;
-        if (!Number.isInteger(n) || n < 1 || n > 256) {
-            throw new UsageError(`${command}: --workers: expected an integer from 1 to 256, found "${text}"`);
-        }
-        workers = n;
-    }
-    return { kind: 'run', command, flags, workers };
-}
-function usage(command) {
-    if (command !== null) {
-        const spec = COMMANDS[command];
-        const lines = [
-            `${TOOL_NAME} ${command}: ${spec.summary}`,
-            '',
-            `usage: ${TOOL_NAME} ${command} [options]`,
-            '',
-            'options:',
-            ...spec.flags.map((f) => `  --${`${f} ${FLAGS[f].value}`.padEnd(16)}${FLAGS[f].help}`),
-            '',
-            exitCodesText(),
-        ];
-        return lines.join('\n');
-    }
-    return [
-        `${TOOL_NAME} ${TOOL_VERSION}: finds the smallest hidden-layer width that reaches`,
-        'your target, and checks it against a committed baseline and a device budget.',
-        '',
-        'usage:',
-        ...Object.keys(COMMANDS).map((c) => `  ${TOOL_NAME} ${c.padEnd(9)} [options]`),
-        `  ${TOOL_NAME} COMMAND --help   options of one command`,
-        `  ${TOOL_NAME} --version`,
-        '',
-        'commands:',
-        ...Object.entries(COMMANDS).map(([c, s]) => `  ${c.padEnd(10)}${s.summary}`),
-        '',
-        'The current folder is the workspace. Paths in the config file resolve against',
-        "the config file's folder and must stay inside the workspace.",
-        'Messages go to stderr; stdout carries only --help and --version.',
-        '',
-        exitCodesText(),
-    ].join('\n');
-}
-/** Plain progress lines (logs, CI) are worth one every few seconds, not a flood. */
-const PLAIN_PROGRESS_MS = 5000;
-function exitCodesText() {
-    return 'exit codes: 0 pass, improved or new; 1 fail or inconclusive; 2 bad input';
-}
-/** A one-line progress display, redrawn in place on a terminal; elsewhere a plain line every few seconds. */
-function progressPrinter(stream) {
-    if (!stream.isTTY) {
-        let lastLine = performance.now();
-        return {
-            onProgress: (e) => {
-                const now = performance.now();
-                if (now - lastLine < PLAIN_PROGRESS_MS)
-                    return;
-                lastLine = now;
-                const best = e.best === null ? '' : `, best so far ${e.best.toFixed(4)}`;
-                stream.write(`progress: ${e.phase}, width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}${best}\n`);
-            },
-            done: () => undefined,
-        };
-    }
-    let last = 0;
-    let drawn = false;
-    return {
-        onProgress: (e) => {
-            const now = performance.now();
-            if (now - last < 100)
-                return; // display only: at most ten redraws a second
-            last = now;
-            const best = e.best === null ? '' : ` · best ${e.best.toFixed(4)}`;
-            stream.write(`\r\x1b[2K${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`);
-            drawn = true;
-        },
-        done: () => {
-            if (drawn)
-                stream.write('\r\x1b[2K');
-        },
-    };
-}
+
+
+
+
 async function main(argv) {
     const err = process.stderr;
     try {
-        const invocation = parseArgs(argv);
+        const invocation = parseInvocation(argv);
         if (invocation.kind === 'help') {
             process.stdout.write(`${usage(invocation.command)}\n`);
-            return 0;
+            return EXIT.ok;
         }
         if (invocation.kind === 'version') {
             process.stdout.write(`${TOOL_VERSION}\n`);
-            return 0;
+            return EXIT.ok;
         }
         const root = process.cwd();
         const { flags } = invocation;
@@ -17630,7 +17972,7 @@ async function main(argv) {
             workerEntry: (0,external_node_url_namespaceObject.fileURLToPath)(import.meta.url),
             log: (line) => {
                 progress.done();
-                err.write(`${line}\n`);
+                err.write(`${escapeLines(line)}\n`);
             },
             ...(progress.onProgress ? { onProgress: progress.onProgress } : {}),
         };
@@ -17641,18 +17983,18 @@ async function main(argv) {
         finally {
             progress.done();
         }
-        err.write(`${result.text}\n`);
+        err.write(`${escapeLines(result.text)}\n`);
         return result.exitCode;
     }
     catch (error) {
         if (isUserError(error)) {
             const pointer = error instanceof UsageError && !error.message.includes('--help') ? `; see ${TOOL_NAME} --help` : '';
             err.write(`error: ${error.message}${pointer}\n`);
-            return EXIT_USAGE;
+            return EXIT.badInput;
         }
         const stack = error instanceof Error ? (error.stack ?? error.message) : String(error);
-        err.write(`internal error in ${TOOL_NAME} ${TOOL_VERSION} (a bug, not a problem with your files; please report it):\n${stack}\n`);
-        return EXIT_INTERNAL;
+        err.write(`internal error in ${TOOL_NAME} ${TOOL_VERSION} (a bug, not a problem with your files; please report it):\n${escapeLines(stack)}\n`);
+        return EXIT.internal;
     }
 }
 // This file is an entry point only (it runs on import); nothing should import it.
