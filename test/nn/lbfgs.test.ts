@@ -5,78 +5,21 @@
  * with SciPy 1.17.1, script in test/nn/reference/lbfgsb_reference.py).
  */
 import { describe, expect, it } from 'vitest';
-import { Lbfgs, LBFGS_DEFAULTS, type LbfgsOptions, type Objective } from '../../src/nn/lbfgs.js';
+import { Lbfgs, LBFGS_DEFAULTS, type Objective } from '../../src/nn/lbfgs.js';
 import { StrongWolfeLineSearch } from '../../src/nn/line-search.js';
-import { referenceKernel } from '../../src/nn/kernel.js';
-import { targetMetric } from '../../src/nn/metrics.js';
-import { initParams, type Shape } from '../../src/nn/network.js';
-import { HEAD_LOGISTIC } from '../../src/nn/reference.js';
+import { initParams } from '../../src/nn/network.js';
 import { rngFor } from '../../src/nn/rng.js';
-
-/**
- * Extended Rosenbrock (Moré, Garbow & Hillstrom 1981, ACM TOMS 7(1), problem 21): for each pair,
- * 100(x₂ − x₁²)² + (1 − x₁)². Two variables give the classic Rosenbrock function.
- */
-const rosenbrock: Objective = (x, g) => {
-  let f = 0;
-  for (let i = 0; i < x.length; i += 2) {
-    const a = x[i];
-    const t = x[i + 1] - a * a;
-    const u = 1 - a;
-    f += 100 * t * t + u * u;
-    g[i] = -400 * a * t - 2 * u;
-    g[i + 1] = 200 * t;
-  }
-  return f;
-};
-
-/** The standard start (−1.2, 1, −1.2, 1, …) of that problem (Nocedal & Wright 2006 section 2.1 for n = 2; MGH for all n). */
-function rosenbrockStart(n: number): Float64Array {
-  const x = new Float64Array(n);
-  for (let i = 0; i < n; i += 2) {
-    x[i] = -1.2;
-    x[i + 1] = 1;
-  }
-  return x;
-}
-
-/** Tight tolerances: converge on the gradient alone, to near rounding level. */
-const TIGHT: Partial<LbfgsOptions> = { gradientTolerance: 1e-10, lossTolerance: 0 };
-
-interface Run {
-  status: string;
-  /** Calls that took a step or ended the run. */
-  calls: number;
-  evaluations: number;
-  opt: Lbfgs;
-}
-
-/** Iterates until the status is no longer 'progress' or the evaluation budget is spent. */
-function minimise(x: Float64Array, f: Objective, options: Partial<LbfgsOptions>, budget = 100_000): Run {
-  const opt = new Lbfgs(x.length, options);
-  let evaluations = 0;
-  let calls = 0;
-  let status = 'progress';
-  while (status === 'progress' && evaluations < budget) {
-    const r = opt.iterate(x, f, budget - evaluations);
-    evaluations += r.evaluations;
-    calls++;
-    status = r.status;
-  }
-  return { status, calls, evaluations, opt };
-}
-
-function maxAbsDiff(a: ArrayLike<number>, b: ArrayLike<number>): number {
-  let m = 0;
-  for (let i = 0; i < a.length; i++) m = Math.max(m, Math.abs(a[i] - b[i]));
-  return m;
-}
-
-function dot(a: Float64Array, b: Float64Array): number {
-  let s = 0;
-  for (let i = 0; i < a.length; i++) s += a[i] * b[i];
-  return s;
-}
+import {
+  dot,
+  maxAbsDiff,
+  minimise,
+  rosenbrock,
+  rosenbrockStart,
+  TIGHT,
+  XOR_SHAPE,
+  xorAccuracy,
+  xorObjective,
+} from './optim-problems.js';
 
 describe('L-BFGS on Rosenbrock', () => {
   // SciPy's L-BFGS-B (same memory m = 10, gtol 1e-10, ftol 0) from the same start: 39 iterations,
@@ -110,22 +53,6 @@ describe('L-BFGS on Rosenbrock', () => {
     });
   }
 });
-
-/** The XOR network of the engine: 2-2-1, tanh hidden, logistic head, inputs in {−1, 1}. */
-const XOR_SHAPE: Shape = { inputs: 2, width: 2, outputs: 1, activation: 'tanh', head: 'logistic' };
-const XOR_X = Float64Array.from([-1, -1, -1, 1, 1, -1, 1, 1]);
-const XOR_Y = Float64Array.from([0, 1, 1, 0]);
-
-function xorObjective(): Objective {
-  const kernel = referenceKernel();
-  return (p, g) => kernel.lossAndGradient(XOR_SHAPE, p, XOR_X, XOR_Y, 0, 4, g, 0);
-}
-
-function xorAccuracy(p: Float64Array): number {
-  const logits = new Float64Array(4);
-  referenceKernel().forward(XOR_SHAPE, p, XOR_X, 4, logits, null);
-  return targetMetric('accuracy', HEAD_LOGISTIC, 1, logits, XOR_Y, 4, 1);
-}
 
 describe('strong Wolfe line search', () => {
   it("φ'(α) = ∇f(x + αd)ᵀd agrees with a central difference of φ (relative 1e-6)", () => {
@@ -287,183 +214,5 @@ describe('L-BFGS on the XOR network (reference kernel, exact gradient)', () => {
     }
     expect(solved).toEqual(SCIPY_XOR_SOLVED);
     expect(solved.filter((r) => r < 10)).toEqual([1, 5, 6, 7, 9]);
-  });
-});
-
-describe('L-BFGS contract', () => {
-  it('is deterministic: two runs from the same start give bit-identical parameters', () => {
-    const runs = [0, 1].map(() => {
-      const p = initParams(XOR_SHAPE, 'nguyen-widrow', rngFor(1, 2, 3));
-      minimise(p, xorObjective(), {}, 500);
-      const x = rosenbrockStart(10);
-      minimise(x, rosenbrock, TIGHT);
-      return [...p, ...x];
-    });
-    expect(new Uint8Array(Float64Array.from(runs[0]).buffer)).toEqual(
-      new Uint8Array(Float64Array.from(runs[1]).buffer),
-    );
-  });
-
-  it('never evaluates a point twice and reports every evaluation it makes', () => {
-    const seen = new Set<string>();
-    let calls = 0;
-    let repeats = 0;
-    const counted: Objective = (x, g) => {
-      calls++;
-      const key = Array.from(x).join(',');
-      if (seen.has(key)) repeats++;
-      seen.add(key);
-      return rosenbrock(x, g);
-    };
-    const run = minimise(rosenbrockStart(2), counted, TIGHT);
-    expect(run.status).toBe('converged');
-    expect(calls).toBe(run.evaluations);
-    expect(repeats).toBe(0);
-  });
-
-  it('uses an evaluation handed over by setPoint instead of repeating it', () => {
-    let calls = 0;
-    const counted: Objective = (x, g) => {
-      calls++;
-      return rosenbrock(x, g);
-    };
-    const x = rosenbrockStart(2);
-    const g = new Float64Array(2);
-    const opt = new Lbfgs(2);
-    opt.setPoint(x, rosenbrock(x, g), g);
-    const r = opt.iterate(x, counted, 100);
-    expect(r.evaluations).toBe(calls);
-    expect(calls).toBeGreaterThanOrEqual(1);
-    expect(r.loss).toBeLessThan(24.2); // f(−1.2, 1) = 24.2
-  });
-
-  it('respects the evaluation budget of every call', () => {
-    for (const budget of [1, 2, 3, 5]) {
-      let calls = 0;
-      const counted: Objective = (x, g) => {
-        calls++;
-        return rosenbrock(x, g);
-      };
-      const x = rosenbrockStart(2);
-      const opt = new Lbfgs(2);
-      let lastLoss = Infinity;
-      for (let k = 0; k < 100; k++) {
-        const before = calls;
-        const r = opt.iterate(x, counted, budget);
-        expect(calls - before).toBe(r.evaluations);
-        expect(r.evaluations).toBeLessThanOrEqual(budget);
-        expect(r.loss).toBeLessThanOrEqual(lastLoss);
-        lastLoss = r.loss;
-        if (r.status !== 'progress') break;
-      }
-      expect(lastLoss, `budget ${budget}`).toBeLessThan(24.2);
-    }
-  });
-
-  it('treats a NaN loss at a trial point as a step too long and never accepts it', () => {
-    // √(1 + x²) summed: Newton-like steps overshoot it badly; beyond |x| > 2 the loss is NaN.
-    let nanCalls = 0;
-    const f: Objective = (x, g) => {
-      let s = 0;
-      for (let i = 0; i < x.length; i++) {
-        if (Math.abs(x[i]) > 2) {
-          nanCalls++;
-          g.fill(NaN);
-          return NaN;
-        }
-        const r = Math.sqrt(1 + x[i] * x[i]);
-        s += r;
-        g[i] = x[i] / r;
-      }
-      return s;
-    };
-    const x = Float64Array.from([1.5, -1.9, 0.7]);
-    const opt = new Lbfgs(3, TIGHT);
-    let last = Infinity;
-    let status = 'progress';
-    for (let k = 0; k < 100 && status === 'progress'; k++) {
-      const r = opt.iterate(x, f, 100);
-      expect(Number.isFinite(r.loss)).toBe(true);
-      expect(r.loss).toBeLessThanOrEqual(last);
-      last = r.loss;
-      status = r.status;
-    }
-    expect(nanCalls).toBeGreaterThan(0);
-    expect(status).toBe('converged');
-    expect(maxAbsDiff(x, [0, 0, 0])).toBeLessThan(1e-9);
-  });
-
-  it("reports 'stuck' and keeps x when no step lowers the loss (gradient of the wrong sign)", () => {
-    const wrong: Objective = (x, g) => {
-      const f = rosenbrock(x, g);
-      for (let q = 0; q < g.length; q++) g[q] = -g[q];
-      return f;
-    };
-    const x = rosenbrockStart(2);
-    const start = x.slice();
-    const r = new Lbfgs(2).iterate(x, wrong, 1000);
-    expect(r.status).toBe('stuck');
-    expect(Array.from(x)).toEqual(Array.from(start));
-    expect(r.loss).toBe(rosenbrock(start, new Float64Array(2)));
-    expect(r.evaluations).toBeLessThanOrEqual(1 + LBFGS_DEFAULTS.maxLineSearchEvaluations);
-  });
-
-  it("reports 'converged' without a step at a stationary point", () => {
-    const x = Float64Array.from([1, 1]);
-    const r = new Lbfgs(2).iterate(x, rosenbrock, 10);
-    expect(r).toEqual({ evaluations: 1, loss: 0, status: 'converged' });
-  });
-
-  it('after resize, evaluates the new point once and keeps minimising at the new size', () => {
-    const opt = new Lbfgs(2, TIGHT);
-    const x2 = rosenbrockStart(2);
-    for (let k = 0; k < 5; k++) opt.iterate(x2, rosenbrock, 100);
-    expect(opt.pairs).toBeGreaterThan(0);
-    const map = Int32Array.from([0, 1]);
-    opt.resize(map, 4);
-    expect(opt.pairs).toBe(0);
-    const x4 = Float64Array.from([x2[0], x2[1], -1.2, 1]);
-    let calls = 0;
-    const counted: Objective = (x, g) => {
-      calls++;
-      return rosenbrock(x, g);
-    };
-    let status = 'progress';
-    let evaluations = 0;
-    while (status === 'progress') {
-      const r = opt.iterate(x4, counted, 1000);
-      evaluations += r.evaluations;
-      status = r.status;
-    }
-    expect(calls).toBe(evaluations);
-    expect(status).toBe('converged');
-    expect(maxAbsDiff(x4, [1, 1, 1, 1])).toBeLessThan(1e-6);
-  });
-
-  it('drops its history and re-evaluates when the caller changed x behind its back', () => {
-    const opt = new Lbfgs(2);
-    const x = rosenbrockStart(2);
-    for (let k = 0; k < 3; k++) opt.iterate(x, rosenbrock, 100);
-    expect(opt.pairs).toBeGreaterThan(0);
-    x[0] = 0.5;
-    const r = opt.iterate(x, rosenbrock, 100);
-    expect(r.evaluations).toBeGreaterThanOrEqual(2); // the new point, then at least one trial
-    expect(opt.pairs).toBeLessThanOrEqual(1);
-    expect(r.loss).toBeLessThan(rosenbrock(Float64Array.from([0.5, 1]), new Float64Array(2)));
-  });
-});
-
-describe('determinism by construction', () => {
-  it('the optimiser uses no elementary function whose last bits an engine may choose', async () => {
-    const { readFileSync } = await import('node:fs');
-    for (const file of ['src/nn/lbfgs.ts', 'src/nn/line-search.ts']) {
-      const src = readFileSync(file, 'utf8');
-      const used = [...src.matchAll(/Math\.(\w+)/g)].map((m) => m[1]);
-      // sqrt is correctly rounded by IEEE 754; min and max only compare.
-      expect(
-        used.filter((fn) => !['sqrt', 'min', 'max'].includes(fn)),
-        file,
-      ).toEqual([]);
-    }
   });
 });
