@@ -31,8 +31,10 @@ export interface LbfgsOptions {
 /**
  * memory 10, gradientTolerance 1e-5, lossTolerance 2.22e-9 (factr 1e7 × machine epsilon, same
  * formula) and 20 line-search evaluations are SciPy's L-BFGS-B defaults (scipy.optimize
- * fmin_l_bfgs_b: m, pgtol, factr, maxls). c1 = 1e-4 and c2 = 0.9 are the values Nocedal &
- * Wright recommend for quasi-Newton methods (section 3.1), also SciPy's line_search defaults.
+ * fmin_l_bfgs_b: m, pgtol, factr, maxls; checked in its documentation). c1 = 1e-4 and c2 = 0.9
+ * are the values Nocedal & Wright recommend for quasi-Newton methods (section 3.1, from memory),
+ * and SciPy's line_search defaults (checked). Nocedal & Wright suggest m between 3 and 20 (from
+ * memory); 10 is SciPy's choice.
  */
 export const LBFGS_DEFAULTS: Readonly<LbfgsOptions> = {
   memory: 10,
