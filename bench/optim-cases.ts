@@ -5,13 +5,14 @@
  * 2 × 97 points, inputs scaled by 1/6.5). Exported for reuse by a fuller benchmark; run by
  * bench/optim.mjs.
  */
-import { referenceKernel, type Kernel } from '../src/nn/kernel.js';
+import { referenceKernel, type Kernel } from '../src/nn/kernel/kernel.js';
 import { Lbfgs } from '../src/nn/lbfgs.js';
 import { targetMetric } from '../src/nn/metrics.js';
-import { initParams, type Shape } from '../src/nn/network.js';
+import { initParams } from '../src/nn/network.js';
+import { type Shape } from '../src/nn/kernel/layout.js';
 import { IRpropPlus } from '../src/nn/optimizers.js';
-import { HEAD_LOGISTIC } from '../src/nn/reference.js';
-import { rngFor } from '../src/nn/rng.js';
+import { HEAD_LOGISTIC } from '../src/nn/kernel/reference.js';
+import { rngFor } from '../src/common/random.js';
 
 export interface OptimCase {
   name: string;

@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { Lbfgs, LBFGS_DEFAULTS, type Objective } from '../../src/nn/lbfgs.js';
 import { initParams } from '../../src/nn/network.js';
-import { rngFor } from '../../src/nn/rng.js';
+import { rngFor } from '../../src/common/random.js';
 import { maxAbsDiff, minimise, rosenbrock, rosenbrockStart, TIGHT, XOR_SHAPE, xorObjective } from './optim-problems.js';
 
 describe('L-BFGS contract', () => {

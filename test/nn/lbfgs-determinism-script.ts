@@ -4,10 +4,11 @@
  * lbfgs-determinism.test.ts on a transpiled copy of src/nn.
  */
 import { createHash } from 'node:crypto';
-import { referenceKernel } from '../../src/nn/kernel.js';
+import { referenceKernel } from '../../src/nn/kernel/kernel.js';
 import { Lbfgs, type Objective } from '../../src/nn/lbfgs.js';
-import { initParams, type Shape } from '../../src/nn/network.js';
-import { rngFor } from '../../src/nn/rng.js';
+import { initParams } from '../../src/nn/network.js';
+import { type Shape } from '../../src/nn/kernel/layout.js';
+import { rngFor } from '../../src/common/random.js';
 
 function run(name: string, x: Float64Array, f: Objective, budget: number): string {
   const opt = new Lbfgs(x.length);

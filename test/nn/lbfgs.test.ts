@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { Lbfgs, LBFGS_DEFAULTS, type Objective } from '../../src/nn/lbfgs.js';
 import { StrongWolfeLineSearch } from '../../src/nn/line-search.js';
 import { initParams } from '../../src/nn/network.js';
-import { rngFor } from '../../src/nn/rng.js';
+import { rngFor } from '../../src/common/random.js';
 import {
   dot,
   maxAbsDiff,

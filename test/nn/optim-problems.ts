@@ -1,9 +1,9 @@
 /** Test problems and a driver shared by the L-BFGS tests. */
 import { Lbfgs, type LbfgsOptions, type Objective } from '../../src/nn/lbfgs.js';
-import { referenceKernel } from '../../src/nn/kernel.js';
+import { referenceKernel } from '../../src/nn/kernel/kernel.js';
 import { targetMetric } from '../../src/nn/metrics.js';
-import type { Shape } from '../../src/nn/network.js';
-import { HEAD_LOGISTIC } from '../../src/nn/reference.js';
+import type { Shape } from '../../src/nn/kernel/layout.js';
+import { HEAD_LOGISTIC } from '../../src/nn/kernel/reference.js';
 
 /**
  * Extended Rosenbrock (Moré, Garbow & Hillstrom 1981, ACM TOMS 7(1), problem 21): for each pair,
