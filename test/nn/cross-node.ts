@@ -37,7 +37,11 @@ export function node24(): string {
 export function runUnderBothNodes(script: string): { here: string; there: string } {
   const work = mkdtempSync(join(tmpdir(), 'nb-cross-node-'));
   try {
-    for (const f of [...tsFiles(join(root, 'src', 'nn')), ...tsFiles(join(root, 'src', 'common')), join(root, script)]) {
+    for (const f of [
+      ...tsFiles(join(root, 'src', 'nn')),
+      ...tsFiles(join(root, 'src', 'common')),
+      join(root, script),
+    ]) {
       const out = join(work, relative(root, f)).replace(/\.ts$/, '.js');
       mkdirSync(dirname(out), { recursive: true });
       const js = ts.transpileModule(readFileSync(f, 'utf8'), {
