@@ -35,6 +35,7 @@ export interface LbfgsOptions {
  * are the values Nocedal & Wright recommend for quasi-Newton methods (section 3.1, from memory),
  * and SciPy's line_search defaults (checked). Nocedal & Wright suggest m between 3 and 20 (from
  * memory); 10 is SciPy's choice.
+ * @testOnly
  */
 export const LBFGS_DEFAULTS: Readonly<LbfgsOptions> = {
   memory: 10,
@@ -52,7 +53,7 @@ export const LBFGS_DEFAULTS: Readonly<LbfgsOptions> = {
  * curvature condition (budget ran out) or lost to rounding, where 1/sᵀy would be noise and the
  * inverse-Hessian approximation could stop being positive definite.
  */
-export const PAIR_COSINE_MIN = 2.220446049250313e-16;
+const PAIR_COSINE_MIN = 2.220446049250313e-16;
 
 export interface LbfgsResult {
   /** Objective evaluations this call used (full passes over the rows). */

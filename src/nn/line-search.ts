@@ -38,15 +38,15 @@ export interface LineSearchSettings {
  * both ends, so the bracket shrinks by a fixed factor whatever the cubic says. 0.1 is common
  * practice with no published source.
  */
-export const BRACKET_MARGIN = 0.1;
+const BRACKET_MARGIN = 0.1;
 
 /**
  * Extrapolation bounds while no bracket exists: the next step lies in
  * [α_i + 1.1·(α_i − α_{i−1}), α_i + 4·(α_i − α_{i−1})], the factors of the Moré–Thuente line
  * search (MINPACK-2 dcsrch; from memory).
  */
-export const EXTRAPOLATE_MIN = 1.1;
-export const EXTRAPOLATE_MAX = 4;
+const EXTRAPOLATE_MIN = 1.1;
+const EXTRAPOLATE_MAX = 4;
 
 const EPSILON = 2.220446049250313e-16;
 
@@ -58,7 +58,7 @@ function finite(v: number): boolean {
  * The minimiser of the cubic through (a, fa, ga) and (b, fb, gb) (Nocedal & Wright eq. 3.59);
  * NaN when the cubic has no local minimiser or the data are not finite.
  */
-export function cubicMinimizer(a: number, fa: number, ga: number, b: number, fb: number, gb: number): number {
+function cubicMinimizer(a: number, fa: number, ga: number, b: number, fb: number, gb: number): number {
   const d1 = ga + gb - (3 * (fa - fb)) / (a - b);
   const disc = d1 * d1 - ga * gb;
   if (!(disc >= 0)) return NaN;
@@ -69,7 +69,7 @@ export function cubicMinimizer(a: number, fa: number, ga: number, b: number, fb:
 }
 
 /** Trial step inside the bracket (lo, hi): the cubic minimiser kept BRACKET_MARGIN away from both ends. */
-export function bracketedStep(
+function bracketedStep(
   aLo: number,
   fLo: number,
   gLo: number,
@@ -90,7 +90,7 @@ export function bracketedStep(
 }
 
 /** Next step while the function still falls steeply: the cubic's minimiser beyond α_i, within the extrapolation bounds. */
-export function extrapolatedStep(aPrev: number, fPrev: number, gPrev: number, a: number, f: number, g: number): number {
+function extrapolatedStep(aPrev: number, fPrev: number, gPrev: number, a: number, f: number, g: number): number {
   const span = a - aPrev;
   const lower = a + EXTRAPOLATE_MIN * span;
   const upper = a + EXTRAPOLATE_MAX * span;
