@@ -18,9 +18,11 @@ const OPERATIONS = [
   { id: 'issues/list-comments', method: 'get', path: '/repos/{owner}/{repo}/issues/{issue_number}/comments' },
   { id: 'issues/create-comment', method: 'post', path: '/repos/{owner}/{repo}/issues/{issue_number}/comments' },
   { id: 'issues/update-comment', method: 'patch', path: '/repos/{owner}/{repo}/issues/comments/{comment_id}' },
+  // Who the token belongs to, so the action can recognise its own comment under a personal token.
+  { id: 'users/get-authenticated', method: 'get', path: '/user' },
 ];
 // Examples served by the stand-in server as realistic comment records.
-const EXAMPLES = ['issue-comment'];
+const EXAMPLES = ['issue-comment', 'private-user'];
 
 let spec;
 let version;

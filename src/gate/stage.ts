@@ -5,12 +5,14 @@
  * A corrupt or future-version baseline is a UserError in both modes (exit 2): `baseline`
  * does not silently replace a file it cannot read, because that would throw its history
  * away; the message tells the user to fix or delete it. A search that found no width
- * leaves the baseline file untouched.
+ * leaves the baseline file untouched. So does a baseline file that changed while the search
+ * ran (another `baseline` run): recording over it would lose that run's entry (exit 2).
  */
 import type { Config, GateConfig } from '../config/types.js';
 import type { LoadedData } from '../data/types.js';
 import type { SearchResult } from '../search/types.js';
-import { nextBaseline, whyNotRecordable, writeBaseline } from './baseline.js';
+import { nextBaseline, whyNotRecordable } from './baseline.js';
+import { updateBaseline } from './baseline-update.js';
 import { evaluateGate, type GateOutcome } from './evaluate.js';
 import type { Baseline } from './types.js';
 
@@ -61,6 +63,7 @@ export async function runGateStage(input: GateStageInput): Promise<GateStageResu
     { result: input.result, loaded: input.loaded, config },
     { date: input.date, commit: input.commit, toolVersion: input.toolVersion },
   );
-  await writeBaseline(input.baselinePath, next);
+  // Only if the file still holds what `previous` was read from: never drop another run's entry.
+  await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
   return { outcome, written: input.baselinePath, notWritten: null, gate: config.gate };
 }

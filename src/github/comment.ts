@@ -1,16 +1,16 @@
 /**
  * The one sticky pull-request comment: found by a hidden marker on its first line and by its
- * author (the Actions bot), then updated, or created when there is none.
+ * author (the token's own identity), then updated, or created when there is none.
  */
-import type { getOctokit } from '@actions/github';
-
-export type Octokit = ReturnType<typeof getOctokit>;
+import { createMayHaveHappened } from './api-failure.js';
+import { ACTIONS_BOT, type Identity } from './identity.js';
+import type { Octokit } from './octokit.js';
 
 /** GitHub rejects longer comment bodies with 422. @testOnly */
 export const COMMENT_LIMIT = 65_536;
 
-/** The login the default `github.token` posts as. */
-const ACTIONS_BOT_LOGIN = 'github-actions[bot]';
+/** Creates sent at most: each one after the last failed in a way that may have created the comment. */
+const MAX_CREATES = 3;
 
 /**
  * One marker per config, so two steps checking two configs keep two comments. `--` cannot
@@ -33,15 +33,16 @@ export interface CommentRecord {
 
 /**
  * Ours when the marker is the body's first line (a quote starts with "> ") AND the author is
- * the Actions bot account (a bot type cannot be taken by a person; the login is compared
- * without regard to case). A deleted author (`user: null`) is never ours.
+ * the token's identity: the same login (compared without regard to case) and the same account
+ * type, so a person cannot pass for the bot nor the bot for a person. A deleted author
+ * (`user: null`) is never ours.
  * @testOnly
  */
-export function isOurComment(c: CommentRecord, marker: string, botLogin: string = ACTIONS_BOT_LOGIN): boolean {
+export function isOurComment(c: CommentRecord, marker: string, identity: Identity = ACTIONS_BOT): boolean {
   const user = c.user;
   if (!user || typeof user.login !== 'string') return false;
-  if ((user.type ?? '').toLowerCase() !== 'bot') return false;
-  if (user.login.toLowerCase() !== botLogin.toLowerCase()) return false;
+  if ((user.type ?? '').toLowerCase() !== identity.type.toLowerCase()) return false;
+  if (user.login.toLowerCase() !== identity.login.toLowerCase()) return false;
   const firstLine = (c.body ?? '')
     .replace(/^\uFEFF/, '')
     .split(/\r?\n/, 1)[0]
@@ -73,25 +74,59 @@ export interface UpsertResult {
   url: string | null;
 }
 
+export interface Where {
+  owner: string;
+  repo: string;
+  issueNumber: number;
+}
+
+/**
+ * Updates our comment, or creates it. A create is not idempotent: when one fails in a way
+ * that may still have created the comment (a 5xx, a timeout, a lost connection), the
+ * comments are listed again and ours, if it is there now, is the one kept.
+ */
 export async function upsertComment(
   octokit: Octokit,
-  where: { owner: string; repo: string; issueNumber: number },
+  where: Where,
   marker: string,
   body: string,
+  identity: Identity = ACTIONS_BOT,
+  log: (line: string) => void = () => undefined,
 ): Promise<UpsertResult> {
   const { owner, repo, issueNumber } = where;
+  for (let creates = 0; ;) {
+    const ours = await findOurs(octokit, where, marker, identity);
+    if (ours) {
+      if (creates > 0 && ours.body === body) return { action: 'created', id: ours.id, url: ours.html_url ?? null };
+      const res = await octokit.rest.issues.updateComment({ owner, repo, comment_id: ours.id, body });
+      return { action: creates > 0 ? 'created' : 'updated', id: res.data.id, url: res.data.html_url ?? null };
+    }
+    try {
+      creates++;
+      const res = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body });
+      return { action: 'created', id: res.data.id, url: res.data.html_url ?? null };
+    } catch (e) {
+      if (!createMayHaveHappened(e) || creates >= MAX_CREATES) throw e;
+      log(
+        `Creating the comment failed (${(e as Error).message}); it may have been created all the same, ` +
+          'so the comments are listed again before another try.',
+      );
+    }
+  }
+}
+
+/** The oldest of ours, so a stray duplicate (two runs racing without a concurrency group) never wins. */
+async function findOurs(
+  octokit: Octokit,
+  { owner, repo, issueNumber }: Where,
+  marker: string,
+  identity: Identity,
+): Promise<(CommentRecord & { html_url?: string }) | undefined> {
   const comments = await octokit.paginate(octokit.rest.issues.listComments, {
     owner,
     repo,
     issue_number: issueNumber,
     per_page: 100,
   });
-  // The oldest of ours, so a stray duplicate (two runs racing without a concurrency group) never wins.
-  const ours = comments.find((c) => isOurComment(c, marker));
-  if (ours) {
-    const res = await octokit.rest.issues.updateComment({ owner, repo, comment_id: ours.id, body });
-    return { action: 'updated', id: res.data.id, url: res.data.html_url ?? null };
-  }
-  const res = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body });
-  return { action: 'created', id: res.data.id, url: res.data.html_url ?? null };
+  return comments.find((c) => isOurComment(c, marker, identity));
 }

@@ -14,10 +14,12 @@ import { writeFileAtomic } from '../files/atomic.js';
 import type { ProgressEvent } from '../search/types.js';
 import { runJob, type JobResult } from '../run.js';
 import { toAnnotation, withinLimit } from './annotations.js';
+import { describeFailure, isApiFailure } from './api-failure.js';
 import { commentBody, commentMarker, upsertComment } from './comment.js';
+import { tokenIdentity } from './identity.js';
 import { readInputs, outputFolder, type ActionInputs } from './inputs.js';
 import { failureMarkdown, fitSummary } from './markdown.js';
-import { makeClient, retryBaseFromEnv } from './octokit.js';
+import { commentBudgetFromEnv, makeClient, requestTimeoutFromEnv, retryBaseFromEnv } from './octokit.js';
 import { throttledProgress } from '../report/progress.js';
 import { logUntrusted } from './log.js';
 
@@ -35,7 +37,7 @@ async function writeSummary(markdown: string): Promise<void> {
   try {
     await core.summary.addRaw(fitSummary(markdown), true).write();
   } catch (e) {
-    core.warning(`Could not write the job summary: ${(e as Error).message}`);
+    core.warning(`Could not write the job summary: ${escapeText((e as Error).message)}`);
   }
 }
 
@@ -62,7 +64,7 @@ function forbiddenAdvice(): string {
   return isForkPullRequest()
     ? 'This pull request comes from a fork, and GitHub gives workflows started by fork pull requests a read-only token, so no comment can be posted from this job. ' +
         'To get comments on fork pull requests, use the two-workflow setup in the neuron-budget README ("Pull requests from forks").'
-    : 'The token lacks write access to pull requests. Add `permissions: { contents: read, pull-requests: write }` to the job, or pass a token that has it as `github-token`.';
+    : 'The token may not write to pull requests. Add `permissions: { contents: read, pull-requests: write }` to the job, or pass a token that has it as `github-token`.';
 }
 
 /**
@@ -107,28 +109,38 @@ async function postComment(inputs: ActionInputs, markdown: string): Promise<void
     core.warning('GITHUB_REPOSITORY is not set, so no pull-request comment was posted.');
     return;
   }
+  const budgetMs = commentBudgetFromEnv(process.env);
+  const budget = { signal: AbortSignal.timeout(budgetMs), endsAt: Date.now() + budgetMs };
   const octokit = makeClient({
     token: inputs.token,
     baseUrl: process.env['GITHUB_API_URL'] || 'https://api.github.com',
     retryBaseMs: retryBaseFromEnv(process.env),
-    warn: (m) => core.info(m),
+    requestTimeoutMs: requestTimeoutFromEnv(process.env),
+    budget,
+    log: (m) => core.info(escapeText(m, MAX_MESSAGE)),
   });
   const marker = commentMarker(inputs.configKey);
   try {
+    const identity = await tokenIdentity(octokit);
+    core.info(`Looking for an earlier neuron-budget comment by ${escapeText(identity.login)} (${identity.how}).`);
     const done = await upsertComment(
       octokit,
       { owner, repo, issueNumber },
       marker,
       commentBody(marker, markdown, runUrl()),
+      identity,
+      (m) => core.info(escapeText(m, MAX_MESSAGE)),
     );
-    core.info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${done.url}` : ''}`);
+    core.info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${escapeText(done.url)}` : ''}`);
   } catch (e) {
-    const status = (e as { status?: number }).status;
-    const message = (e as Error).message ?? String(e);
-    const advice = status === 403 ? ` ${forbiddenAdvice()}` : '';
+    const why = isApiFailure(e)
+      ? describeFailure(e, forbiddenAdvice(), Math.round(budgetMs / 100) / 10)
+      : `It failed with an unexpected error: ${(e as Error).message ?? String(e)}.`;
     core.warning(
-      `Could not post the pull-request comment: GitHub answered ${status ?? 'with an error'} (${message}).${advice} ` +
-        'The verdict, job summary and outputs are unaffected.',
+      escapeText(
+        `Could not post the pull-request comment. ${why} The verdict, job summary and outputs are unaffected.`,
+        2000,
+      ),
     );
   }
 }

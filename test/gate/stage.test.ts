@@ -1,9 +1,11 @@
-import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { parseBaseline } from '../../src/gate/baseline.js';
+import { isUserError } from '../../src/common/errors.js';
+import { parseBaseline, readBaseline } from '../../src/gate/baseline.js';
 import { runGateStage, type GateStageInput } from '../../src/gate/stage.js';
+import { acquireLock } from '../../src/files/lock.js';
 import type { SearchResult } from '../../src/search/types.js';
 import { config, found, loaded, notFound, profile } from './build.js';
 
@@ -75,6 +77,74 @@ describe('gate stage', () => {
     }
     expect(readFileSync(s.path, 'utf8')).toBe('{"schema": "neuron-budget/baseline@1", ');
   });
+});
+
+describe('gate stage: two baseline runs at once', () => {
+  const refusal = (e: unknown): string => {
+    expect(isUserError(e), String(e)).toBe(true);
+    return (e as Error).message;
+  };
+
+  it('a baseline file written by another run during the search is kept, and this run refuses (exit 2)', async () => {
+    const s = setup();
+    await runGateStage(s.input('baseline', found(4, 0.96), 1));
+    // This run read the file before its search...
+    const previous = await readBaseline(s.path);
+    // ...and meanwhile another run recorded its result.
+    await runGateStage(s.input('baseline', found(5, 0.96), 2));
+    const theirs = readFileSync(s.path, 'utf8');
+    const message = refusal(
+      await runGateStage({ ...s.input('baseline', found(3, 0.96), 3), previous }).catch((e: unknown) => e),
+    );
+    expect(message).toMatch(/^neuron-budget\.baseline\.json: the baseline file changed while this run was searching/);
+    expect(message).toContain('Run `neuron-budget baseline` again');
+    expect(readFileSync(s.path, 'utf8')).toBe(theirs);
+    expect(JSON.parse(theirs).history.map((h: { width: number }) => h.width)).toEqual([4, 5]);
+    expect(readdirSync(s.dir)).toEqual(['neuron-budget.baseline.json']);
+  });
+
+  it('a file created or removed during the search is also a change', async () => {
+    const s = setup();
+    await runGateStage(s.input('baseline', found(4, 0.96), 1));
+    const created = refusal(
+      await runGateStage({ ...s.input('baseline', found(3, 0.96), 2), previous: null }).catch((e: unknown) => e),
+    );
+    expect(created).toContain('the baseline file was created while this run was searching');
+    const previous = await readBaseline(s.path);
+    rmSync(s.path);
+    const removed = refusal(
+      await runGateStage({ ...s.input('baseline', found(3, 0.96), 2), previous }).catch((e: unknown) => e),
+    );
+    expect(removed).toContain('the baseline file was removed while this run was searching');
+    expect(readdirSync(s.dir)).toEqual([]);
+  });
+
+  it('the same content written in another layout is no change: the result is recorded', async () => {
+    const s = setup();
+    await runGateStage(s.input('baseline', found(4, 0.96), 1));
+    const previous = await readBaseline(s.path);
+    writeFileSync(s.path, JSON.stringify(JSON.parse(readFileSync(s.path, 'utf8'))));
+    await runGateStage({ ...s.input('baseline', found(3, 0.96), 2), previous });
+    expect(JSON.parse(readFileSync(s.path, 'utf8')).history).toHaveLength(2);
+  });
+
+  it('a lock held by a live writer past the wait: refused with the lock file named, nothing written', async () => {
+    const s = setup();
+    const held = await acquireLock(s.path);
+    try {
+      const message = refusal(
+        await runGateStage({ ...s.input('baseline', found(4, 0.96), 1), previous: null }).catch((e: unknown) => e),
+      );
+      expect(message).toMatch(
+        new RegExp(
+          `^neuron-budget\\.baseline\\.json: another neuron-budget run is writing this baseline \\(lock file \\.neuron-budget\\.baseline\\.json\\.neuron-budget\\.lock, held by process ${process.pid}`,
+        ),
+      );
+    } finally {
+      await held.release();
+    }
+    expect(readdirSync(s.dir)).toEqual([]);
+  }, 30_000);
 });
 
 describe('gate stage: --baseline override', () => {

@@ -41,6 +41,29 @@ describe('isOurComment', () => {
   });
 });
 
+describe('isOurComment under a personal token', () => {
+  const marker = commentMarker('neuron-budget.yml');
+  const me = { login: 'pump-ci', type: 'User', how: 'test' };
+  it("takes the token account's own marked comment, whatever the login's case", () => {
+    expect(
+      isOurComment({ id: 1, body: `${marker}\nreport`, user: { login: 'Pump-CI', type: 'User' } }, marker, me),
+    ).toBe(true);
+  });
+  it("never takes another person's, the bot's, or the account's own quote of the marker", () => {
+    expect(isOurComment({ id: 1, body: `${marker}\nx`, user: { login: 'reviewer', type: 'User' } }, marker, me)).toBe(
+      false,
+    );
+    expect(isOurComment({ id: 1, body: `${marker}\nx`, user: bot }, marker, me)).toBe(false);
+    // Same login, but filed as a bot: not the person the token belongs to.
+    expect(isOurComment({ id: 1, body: `${marker}\nx`, user: { login: 'pump-ci', type: 'Bot' } }, marker, me)).toBe(
+      false,
+    );
+    expect(
+      isOurComment({ id: 1, body: `> ${marker}\n> quoted`, user: { login: 'pump-ci', type: 'User' } }, marker, me),
+    ).toBe(false);
+  });
+});
+
 describe('commentBody', () => {
   const marker = commentMarker('neuron-budget.yml');
   it('puts the marker first and keeps a short report whole', () => {

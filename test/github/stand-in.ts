@@ -1,6 +1,8 @@
 /**
- * A stand-in for the three GitHub REST operations the action calls (list, create and update
- * issue comments), on 127.0.0.1. Every request body and every response body it sends is
+ * A stand-in for the four GitHub REST operations the action calls (who the token is; list,
+ * create and update issue comments), on 127.0.0.1, with the failures a real network shows:
+ * canned error answers, a create that happens but answers an error, and an API that accepts
+ * connections and never answers. Every request body and every response body it sends is
  * validated against the schemas extracted from GitHub's official REST API description
  * (test/fixtures/github/rest-schemas.json, written by scripts/extract-rest-schemas.mjs), so a
  * request the real API would reject, or a stand-in that drifts from the real shapes, shows up
@@ -80,16 +82,24 @@ export interface LoggedRequest {
   query: Record<string, string>;
   body: unknown;
   authorization: string | undefined;
+  /** 0 while unanswered; stays 0 when the stand-in never answers. */
   status: number;
+  /** When the request arrived (Date.now()), to measure the waits between attempts. */
+  at: number;
 }
 
-/** A canned failure answered instead of the real operation, `times` times. */
+/**
+ * A canned failure on the comment operations, `times` times: answered instead of the real
+ * operation, or (`performed`) after carrying the operation out, as when a server does the
+ * work and a proxy in front of it then answers with an error.
+ */
 export interface Fault {
   method: string;
   status: number;
   times: number;
   message: string;
   headers?: Record<string, string>;
+  performed?: boolean;
 }
 
 export interface StandInOptions {
@@ -97,6 +107,11 @@ export interface StandInOptions {
   repo: string;
   /** Largest page the stand-in serves whatever per_page asks, to force several pages. */
   pageCap?: number;
+  /**
+   * The account behind the token, as GET /user reports it (a personal access token); its
+   * comments are authored by it. Unset: the job's token, which GET /user refuses with 403.
+   */
+  tokenUser?: { login: string; id: number };
 }
 
 const BOT_USER = {
@@ -121,12 +136,16 @@ const BOT_USER = {
 };
 
 export class StandIn {
+  /** Accept every connection and never answer (the requests are still logged). */
+  hang = false;
   readonly requests: LoggedRequest[] = [];
   readonly schemaFailures: string[] = [];
   readonly comments = new Map<number, Comment[]>();
   readonly faults: Fault[] = [];
   private nextId = 9_100;
   private server: Server | null = null;
+  /** A performed fault in progress: send() answers it instead of the real result. */
+  private override: Fault | null = null;
   url = '';
 
   constructor(private readonly opts: StandInOptions) {}
@@ -158,7 +177,29 @@ export class StandIn {
   }
 
   async stop(): Promise<void> {
-    if (this.server) await new Promise<void>((ok) => this.server!.close(() => ok()));
+    if (!this.server) return;
+    const closed = new Promise<void>((ok) => this.server!.close(() => ok()));
+    this.server.closeAllConnections(); // held requests of a hanging stand-in
+    await closed;
+  }
+
+  /** Requests to the comment operations only (not GET /user), as "METHOD status". */
+  commentTraffic(): string[] {
+    return this.requests.filter((q) => q.path !== '/user').map((q) => `${q.method} ${q.status}`);
+  }
+
+  /** The author of comments the action creates: the token's user, or the Actions bot. */
+  private author(): Record<string, unknown> {
+    const u = this.opts.tokenUser;
+    if (!u) return BOT_USER;
+    return {
+      ...(fixture.examples['issue-comment']['user'] as object),
+      login: u.login,
+      id: u.id,
+      url: `https://api.github.com/users/${u.login}`,
+      html_url: `https://github.com/${u.login}`,
+      type: 'User',
+    };
   }
 
   private record(issue: number, body: string, user: Record<string, unknown>): Comment {
@@ -197,9 +238,33 @@ export class StandIn {
     body: unknown,
     headers: Record<string, string> = {},
   ): void {
+    const f = this.override;
+    if (f) {
+      this.override = null;
+      status = f.status;
+      body = { message: f.message, documentation_url: 'https://docs.github.com/rest', status: String(f.status) };
+      headers = f.headers ?? {};
+    }
     log.status = status;
     res.writeHead(status, { 'content-type': 'application/json; charset=utf-8', ...headers });
     res.end(body === undefined ? '' : JSON.stringify(body));
+  }
+
+  /** GET /user: the token's user, or the 403 GitHub gives the job's token (an integration). */
+  private whoAmI(res: ServerResponse, log: LoggedRequest): void {
+    const u = this.opts.tokenUser;
+    if (!u) {
+      const body = {
+        message: 'Resource not accessible by integration',
+        documentation_url: 'https://docs.github.com/rest/users/users#get-the-authenticated-user',
+        status: '403',
+      };
+      this.check('users/get-authenticated', '403', body, 'GET /user 403 response');
+      return this.send(res, log, 403, body);
+    }
+    const body = { ...fixture.examples['private-user'], login: u.login, id: u.id, type: 'User' };
+    this.check('users/get-authenticated', '200', body, 'GET /user response');
+    return this.send(res, log, 200, body);
   }
 
   private handle(req: IncomingMessage, res: ServerResponse, raw: string): void {
@@ -220,15 +285,21 @@ export class StandIn {
       body,
       authorization: req.headers.authorization,
       status: 0,
+      at: Date.now(),
     };
     this.requests.push(log);
+    if (this.hang) return; // the socket stays open and silent until stop()
+    if (u.pathname === '/user' && method === 'GET') return this.whoAmI(res, log);
     const { owner, repo } = this.opts;
     const base = `/repos/${owner}/${repo}`;
     const list = new RegExp(`^${base.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}/issues/(\\d+)/comments$`).exec(u.pathname);
     const one = new RegExp(`^${base.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}/issues/comments/(\\d+)$`).exec(u.pathname);
 
     const fault = this.faults.find((f) => f.method === method && f.times > 0);
-    if (fault && (list || one)) {
+    if (fault?.performed && (list || one)) {
+      fault.times--;
+      this.override = fault;
+    } else if (fault && (list || one)) {
       fault.times--;
       const errBody = {
         message: fault.message,
@@ -280,7 +351,7 @@ export class StandIn {
           documentation_url: 'https://docs.github.com/rest',
         });
       }
-      const c = this.record(Number(list[1]), (body as { body: string }).body, BOT_USER);
+      const c = this.record(Number(list[1]), (body as { body: string }).body, this.author());
       this.check('issues/create-comment', '201', c, 'POST comment response');
       return this.send(res, log, 201, c, { location: c['url'] as string });
     }
