@@ -5,6 +5,19 @@
 export { costShapeOf, deviceCost, objectBytes, storedObjects, LUT_ENTRIES } from './cost.js';
 export type { CostShape, CType, DeviceCost, StoredObject } from './cost.js';
 export {
+  activationRanges,
+  activationTable,
+  dequantizeValue,
+  foldZeroPoint,
+  quantizeLayer,
+  quantizeNetwork,
+  quantizeValue,
+  rangeParams,
+} from './quantize.js';
+export type { Calibration, Int8Feature, Int8Network, QuantParams } from './quantize.js';
+export { categoryIndex, inputCode, int8Forward, rawFeatureRows } from './int8-forward.js';
+export type { Int8Result, Int8Trace } from './int8-forward.js';
+export {
   multiplyByQuantizedMultiplier,
   quantizeMultiplier,
   roundHalfAway,
@@ -12,3 +25,5 @@ export {
   saturatingRoundingDoublingHighMul,
 } from './fixed-point.js';
 export type { QuantizedMultiplier } from './fixed-point.js';
+export { checkInt8Network } from './int8-check.js';
+export type { Int8Problem } from './int8-check.js';
