@@ -27,3 +27,6 @@ export {
 export type { QuantizedMultiplier } from './fixed-point.js';
 export { checkInt8Network } from './int8-check.js';
 export type { Int8Problem } from './int8-check.js';
+export { DEFAULT_C_NAME, exportC } from './export-c.js';
+export type { CFiles, FirmwareModel, Provenance } from './export-c.js';
+export { checkCName, commentText, floatLiteral } from './c-text.js';
