@@ -108,7 +108,7 @@ function checkCompiled(t: Trained): { rows: number; worst: number } {
 }
 
 const compiled =
-  CC === null ? 'compiled C (SKIPPED: no gcc or cc on PATH; .ci/run installs one)' : `compiled C (${CC})`;
+  CC === null ? 'compiled C (SKIPPED: no gcc or cc on PATH; install a C compiler to run these)' : `compiled C (${CC})`;
 
 describe.skipIf(CC === null)(compiled, () => {
   it('Iris, three species (softmax head): every row', async () => {
