@@ -139,7 +139,7 @@ async function postComment(inputs: ActionInputs, markdown: string): Promise<void
     core.warning(
       escapeText(
         `Could not post the pull-request comment. ${why} The verdict, job summary and outputs are unaffected.`,
-        2000,
+        MAX_MESSAGE,
       ),
     );
   }

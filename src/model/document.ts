@@ -7,8 +7,19 @@ import type { Encoding, FeatureEncoding } from '../data/types.js';
 import type { NetworkJson } from '../nn/index.js';
 import type { Witness } from '../search/types.js';
 import { UserError } from '../common/errors.js';
+import {
+  checkInt8Network,
+  costShapeOf,
+  deviceCost,
+  quantizeNetwork,
+  type Calibration,
+  type DeviceCost,
+  type Int8Network,
+} from '../device/index.js';
 
-export const MODEL_SCHEMA = 'neuron-budget/model@1';
+export const MODEL_SCHEMA = 'neuron-budget/model@2';
+/** The previous version (no cost, no int8 network): still read, as int8 null. */
+const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
 
 export interface ModelDocument {
   schema: typeof MODEL_SCHEMA;
@@ -22,9 +33,22 @@ export interface ModelDocument {
   /** Raw row → inputs: features in input order (numeric: (x − mean) / std; categorical: one-hot in this order). */
   encoding: Encoding;
   network: NetworkJson;
+  /** What the network costs on the device (src/device/cost.ts). */
+  cost: DeviceCost;
+  /** The int8 form (src/device/quantize.ts); null when no calibration rows were given. */
+  int8: Int8Network | null;
 }
 
-export function modelDocument(witness: Witness, encoding: Encoding, target: TargetConfig): ModelDocument {
+/**
+ * The witness as a document. With `calibration` (the encoded training rows) it carries the
+ * int8 form too.
+ */
+export function modelDocument(
+  witness: Witness,
+  encoding: Encoding,
+  target: TargetConfig,
+  calibration: Calibration | null = null,
+): ModelDocument {
   return {
     schema: MODEL_SCHEMA,
     task: encoding.target.task,
@@ -33,6 +57,8 @@ export function modelDocument(witness: Witness, encoding: Encoding, target: Targ
     origin: { seed: witness.seed, restart: witness.restart, grownWidth: witness.grownWidth },
     encoding: structuredClone(encoding),
     network: structuredClone(witness.network),
+    cost: deviceCost(costShapeOf(witness.network, encoding)),
+    int8: calibration === null ? null : quantizeNetwork(witness.network, encoding, calibration),
   };
 }
 
@@ -57,8 +83,8 @@ export function parseModel(text: string, file = 'model'): ModelDocument {
     throw new UserError(`${file}: key "${key}" should be ${expected}`, { file, key });
   };
   if (typeof doc !== 'object' || doc === null) return bad('(root)', 'an object');
-  const d = doc as Partial<ModelDocument>;
-  if (d.schema !== MODEL_SCHEMA) bad('schema', `"${MODEL_SCHEMA}"`);
+  const d = doc as Omit<Partial<ModelDocument>, 'schema'> & { schema?: unknown };
+  if (d.schema !== MODEL_SCHEMA && d.schema !== MODEL_SCHEMA_V1) bad('schema', `"${MODEL_SCHEMA}"`);
   if (d.task !== 'classification' && d.task !== 'regression') bad('task', '"classification" or "regression"');
   const net = d.network;
   if (typeof net !== 'object' || net === null) return bad('network', 'an object');
@@ -81,5 +107,12 @@ export function parseModel(text: string, file = 'model'): ModelDocument {
     bad('network.outputBias', `${net.outputs} numbers`);
   if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
     bad('encoding.target.classes', 'a list of class labels');
-  return d as ModelDocument;
+  if (d.schema === MODEL_SCHEMA_V1) {
+    return { ...(d as ModelDocument), schema: MODEL_SCHEMA, cost: deviceCost(costShapeOf(net, enc)), int8: null };
+  }
+  if (d.int8 !== null) {
+    const problem = checkInt8Network(d.int8, net, enc);
+    if (problem) bad(problem.key, problem.expected);
+  }
+  return { ...(d as ModelDocument), cost: deviceCost(costShapeOf(net, enc)) };
 }
