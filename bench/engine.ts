@@ -79,6 +79,9 @@ function makeData(c: Case): EncodedDataset {
     yTrain: y,
     xValidation: new Float64Array(0),
     yValidation: new Float64Array(0),
+    judgingRows: 0,
+    xJudging: new Float64Array(0),
+    yJudging: new Float64Array(0),
     encoding: {
       features: Array.from({ length: c.inputs }, (_, i) => ({
         kind: 'numeric' as const,
@@ -107,6 +110,8 @@ function timeEngine(c: Case, data: EncodedDataset, kernel: Kernel): number {
     checkEvery: 1e9,
     target: { metric: 'accuracy' as const, threshold: 2 },
     stall: null,
+    patience: 1e9,
+    weightDecay: 0,
   };
   const t = createTrainer(data, c.width, opts, rngFor(1, c.width, 0), { kernel });
   // The epoch Trainer.run repeats: forward, backward, iRprop+ step (its periodic target check

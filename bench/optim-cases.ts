@@ -86,7 +86,7 @@ export const OPTIM_CASES: readonly OptimCase[] = [
   twoSpirals(16, 5000),
 ];
 
-export type OptimizerChoice = { kind: 'lbfgs' } | { kind: 'irprop+'; primeOffset: number };
+export type OptimizerChoice = { kind: 'lbfgs' } | { kind: 'irprop+' };
 
 export interface CaseResult {
   runs: number;
@@ -113,8 +113,7 @@ export function runOnce(c: OptimCase, choice: OptimizerChoice, restart: number):
   let evaluations = 0;
   if (choice.kind === 'lbfgs') {
     const opt = new Lbfgs(params.length);
-    const objective = (p: Float64Array, g: Float64Array) =>
-      kernel.lossAndGradient(c.shape, p, c.x, c.y, 0, c.rows, g, 0);
+    const objective = (p: Float64Array, g: Float64Array) => kernel.lossAndGradient(c.shape, p, c.x, c.y, 0, c.rows, g);
     let status = 'progress';
     while (best < 1 && status === 'progress' && evaluations < c.maxEvaluations) {
       const r = opt.iterate(params, objective, c.maxEvaluations - evaluations);
@@ -125,7 +124,7 @@ export function runOnce(c: OptimCase, choice: OptimizerChoice, restart: number):
   } else {
     const opt = new IRpropPlus(params.length);
     while (best < 1 && evaluations < c.maxEvaluations) {
-      const loss = kernel.lossAndGradient(c.shape, params, c.x, c.y, 0, c.rows, grad, choice.primeOffset);
+      const loss = kernel.lossAndGradient(c.shape, params, c.x, c.y, 0, c.rows, grad);
       evaluations++;
       opt.step(params, grad, loss, c.rows);
       best = Math.max(best, accuracyOf(kernel, c, params, logits));

@@ -29,8 +29,7 @@ const runsArg = process.argv.find((a) => a.startsWith('--runs='));
 const runs = runsArg ? Number(runsArg.slice(7)) : 20;
 const choices = [
   ['L-BFGS (exact gradient)', { kind: 'lbfgs' }],
-  ['iRprop+ (exact gradient)', { kind: 'irprop+', primeOffset: 0 }],
-  ['iRprop+ (derivative offset 0.1)', { kind: 'irprop+', primeOffset: 0.1 }],
+  ['iRprop+', { kind: 'irprop+' }],
 ];
 const pad = (s, n) => String(s).padEnd(n);
 console.log(`${runs} runs per row (restarts 0..${runs - 1}); evaluations = full passes over the rows\n`);

@@ -54,6 +54,9 @@ export function generated(rows = 100_000, inputs = 30): EncodedDataset {
     yTrain,
     xValidation,
     yValidation,
+    judgingRows: 0,
+    xJudging: new Float64Array(0),
+    yJudging: new Float64Array(0),
     encoding: {
       features: Array.from({ length: inputs }, (_, i) => ({
         kind: 'numeric' as const,
@@ -75,7 +78,9 @@ const generatedSearch: SearchConfig = {
   seed: 1,
   growth: 'fresh',
   activation: 'tanh',
-  optimizer: 'irprop+',
+  optimizer: 'lbfgs',
+  patience: 200,
+  weightDecay: 0.0001,
   init: null,
   checkEvery: 10,
   pruneEpochs: 100,

@@ -76,6 +76,7 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     runSearch(data.dataset, config.search, config.target, {
       workers: options.workers ?? null,
       workerEntry: options.workerEntry ?? null,
+      judgingFolded: data.judgingFolded,
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     }),
   );
@@ -95,14 +96,20 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     toolVersion: TOOL_VERSION,
   });
   if (gate.notWritten !== null) options.log?.(`baseline not written: ${gate.notWritten}`);
-  const report = withGate(searchStageReport(dataStageReport(config, data, timing), search), gate.outcome, gate.gate);
+  const report = withGate(
+    searchStageReport(dataStageReport(config, data, timing), search, config.search.required),
+    gate.outcome,
+    gate.gate,
+  );
 
   let modelWritten: string | null = null;
   if (options.modelPath) {
     if (search.witness === null) {
-      options.log?.('model not written: no network reached the target');
+      options.log?.('model not written: no network met the target');
     } else {
-      const doc = modelDocument(search.witness, data.dataset.encoding, config.target);
+      const backing = { on: search.judging.on, adequate: search.width !== null };
+      const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
+      const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration);
       await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
       modelWritten = options.modelPath;
     }

@@ -8,7 +8,7 @@ import { quote } from '../common/escape.js';
 import { checkInside } from '../common/paths.js';
 import { defaultMetric, metricFitsTask, metricsFor, type MetricName } from '../common/metric.js';
 import type { ConfigReader, Found, WrittenKeys } from './reader.js';
-import { CONFIG_SPEC, fieldName } from './spec.js';
+import { CONFIG_SPEC, derivedJudging, fieldName } from './spec.js';
 import type { Config } from './types.js';
 
 type Section = Record<string, unknown>;
@@ -82,6 +82,15 @@ function checkRules(reader: ConfigReader, written: WrittenKeys, config: Config):
     throw reader.valueError(
       at('data', 'ignore')!,
       `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`,
+    );
+  }
+
+  if (data.judging === undefined) data.judging = derivedJudging(data.validation);
+  if (data.validation + data.judging >= 1) {
+    const found = at('data', 'judging') ?? at('data', 'validation')!;
+    throw reader.valueError(
+      found,
+      `expected data.validation + data.judging below 1 (some rows must be left to train on), found ${data.validation} + ${data.judging}`,
     );
   }
 

@@ -98,7 +98,15 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
         default: 0.25,
         description:
-          'Fraction of rows held out to judge the target, stratified by class. 0 judges on the training rows.',
+          'Fraction of rows (per class) held out to steer training: when a training stops, and whether a pruning step is kept. 0 steers on the training rows.',
+      },
+      {
+        name: 'judging',
+        changesResult: true,
+        rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
+        default: DERIVED,
+        description:
+          'Fraction of rows (per class) held out to judge whether a network meets the target; they never steer training. Default: 0.2 (at most half of what validation leaves), or 0 when data.validation is 0 (then the target is judged on the training rows). 0 with validation above 0 judges on the validation rows, which is optimistic.',
       },
       {
         name: 'delimiter',
@@ -211,9 +219,18 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
       {
         name: 'optimizer',
         changesResult: true,
-        rule: { kind: 'enum', values: ['irprop+', 'adam', 'backprop'] },
-        default: 'irprop+',
-        description: 'irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+        rule: { kind: 'enum', values: ['lbfgs', 'irprop+', 'adam', 'backprop'] },
+        default: 'lbfgs',
+        description:
+          'lbfgs (full-batch L-BFGS with a strong Wolfe line search), irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+      },
+      {
+        name: 'weight-decay',
+        changesResult: true,
+        rule: { kind: 'number', min: 0, max: 1000 },
+        default: 0.0001,
+        description:
+          'L2 penalty on the weights (not the biases): the summed loss gains weight-decay/2 × the sum of squared weights. 0 turns it off.',
       },
       {
         name: 'init',
@@ -227,7 +244,15 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         changesResult: true,
         rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
         default: 10,
-        description: 'Epochs between checks of the target on the validation rows; at most max-epochs.',
+        description: 'Epochs between checks of the validation rows; at most max-epochs.',
+      },
+      {
+        name: 'patience',
+        changesResult: true,
+        rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+        default: 200,
+        description:
+          'A training stops when its validation loss has not improved (by 0.1%) for this many epochs: early stopping, and the bound on polishing a network that met the target.',
       },
       {
         name: 'prune',
@@ -351,4 +376,12 @@ export function sectionDefaults(section: SectionSpec['name']): Record<string, un
     out[fieldName(key.name)] = Array.isArray(key.default) ? [...key.default] : key.default;
   }
   return out;
+}
+
+/** The judging fraction when validation rows are held out (common practice for a hold-out test set; no single source). */
+export const DEFAULT_JUDGING = 0.2;
+
+/** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
+export function derivedJudging(validation: number): number {
+  return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
 }

@@ -6,7 +6,7 @@ import type { MetricName, Task } from '../common/metric.js';
 
 export type { MetricName, Task } from '../common/metric.js';
 export type Activation = 'tanh' | 'logistic' | 'relu';
-export type Optimizer = 'irprop+' | 'adam' | 'backprop';
+export type Optimizer = 'lbfgs' | 'irprop+' | 'adam' | 'backprop';
 export type Init = 'nguyen-widrow' | 'glorot' | 'he';
 export type GrowthMode = 'fresh' | 'in-place';
 
@@ -20,8 +20,10 @@ export interface DataConfig {
   features: string[] | null;
   ignore: string[];
   task: 'auto' | Task;
-  /** Held-out fraction in [0, 1); 0 judges on the training rows. */
+  /** Fraction held out to steer training, in [0, 1); 0 steers on the training rows. */
   validation: number;
+  /** Fraction held out to judge the target, in [0, 1); 0 judges on the validation rows (training rows when validation is 0). */
+  judging: number;
   delimiter: string;
   /** Most distinct values a categorical feature may have. */
   maxCategories: number;
@@ -47,8 +49,12 @@ export interface SearchConfig {
   optimizer: Optimizer;
   /** null: the activation's usual initialisation (Nguyen-Widrow for tanh/logistic, He for ReLU). */
   init: Init | null;
-  /** Validation metric is checked every this many epochs. */
+  /** The validation (steering) rows are checked every this many epochs. */
   checkEvery: number;
+  /** Epochs without a real improvement of the validation loss before a training stops. */
+  patience: number;
+  /** L2 penalty λ on the weights. */
+  weightDecay: number;
   /** Epochs of retraining after each pruning step. */
   pruneEpochs: number;
   /** Whether to run the prune phase at all. */

@@ -76,6 +76,7 @@ export function encodeDataset(features: TypedColumn[], target: TargetColumn, spl
 
   const train = fill(split.train);
   const validation = fill(split.validation);
+  const judging = fill(split.judging);
   return {
     task: target.task,
     inputs,
@@ -86,6 +87,9 @@ export function encodeDataset(features: TypedColumn[], target: TargetColumn, spl
     yTrain: train.y,
     xValidation: validation.x,
     yValidation: validation.y,
+    judgingRows: split.judging.length,
+    xJudging: judging.x,
+    yJudging: judging.y,
     encoding: { features: encodings, target: targetEncoding },
   };
 }

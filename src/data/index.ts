@@ -52,7 +52,7 @@ async function load(config: Config): Promise<LoadedData> {
       name: target.name,
       column: target.column,
     },
-    config.data.validation,
+    { validation: config.data.validation, judging: config.data.judging },
     config.search.seed,
     file,
   );
@@ -63,6 +63,7 @@ async function load(config: Config): Promise<LoadedData> {
     fingerprint: fingerprint(typed, target, table.rows),
     profile: profileData(typed, target, table.columns, table.rows),
     splitRows: split,
+    judgingFolded: split.judgingFolded,
   };
 }
 

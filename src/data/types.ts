@@ -32,13 +32,20 @@ export interface EncodedDataset {
   /** Network output units: classes for 3+ classes, 1 for two classes (logistic), 1 for regression. */
   outputs: number;
   trainRows: number;
-  /** 0 when validation is 0; then the target is judged on the training rows. */
+  /** Rows that steer training; 0 when data.validation is 0 (then the training rows steer). */
   validationRows: number;
+  /**
+   * Rows that judge whether a network meets the target, never seen by training; 0 when
+   * data.judging is 0 (then the validation rows judge, or the training rows when there are none).
+   */
+  judgingRows: number;
   xTrain: Float64Array; // trainRows * inputs
   /** Classification: class index per row; regression: standardised target per row. */
   yTrain: Float64Array; // trainRows
   xValidation: Float64Array; // validationRows * inputs
   yValidation: Float64Array; // validationRows
+  xJudging: Float64Array; // judgingRows * inputs
+  yJudging: Float64Array; // judgingRows
   encoding: Encoding;
 }
 
@@ -81,5 +88,7 @@ export interface LoadedData {
    * Which kept rows (0-based, file order) went to training and to validation, both
    * ascending; dataset row i of xTrain is kept row train[i].
    */
-  splitRows?: { train: Int32Array; validation: Int32Array };
+  splitRows?: { train: Int32Array; validation: Int32Array; judging: Int32Array };
+  /** data.judging asked for judging rows but a class was too small: judged on the validation rows. */
+  judgingFolded: boolean;
 }

@@ -82,14 +82,15 @@ export function nextBaseline(previous: Baseline | null, current: RunFacts, meta:
       width,
       metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
       grownWidth: result.grownWidth,
-      reached: atWidth ? atWidth.reached : null,
-      restarts: atWidth ? atWidth.restarts : null,
+      met: atWidth ? atWidth.met : 0,
+      restarts: atWidth ? atWidth.restarts : 0,
       searchSeconds: result.timing.searchSeconds,
     },
     widths: result.widths.map((w): BaselineWidth => ({
       width: w.width,
       restarts: w.restarts,
-      reached: w.reached,
+      met: w.met,
+      adequate: w.adequate,
       best: w.best,
     })),
     data: {
@@ -192,6 +193,12 @@ function checkSchemaVersion(value: unknown, shown: string): void {
       { file: shown, key: 'schema' },
     );
   }
+  if (version < BASELINE_VERSION) {
+    throw new UserError(
+      `${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`,
+      { file: shown, key: 'schema' },
+    );
+  }
   if (version !== BASELINE_VERSION) {
     throw new UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${describe(schema)}`, {
       file: shown,
@@ -207,11 +214,6 @@ const checkShape = schemaValidator(baselineSchema as unknown as JsonSchema);
 function validateBaselineShape(value: unknown, shown: string): asserts value is Baseline {
   try {
     checkShape(value);
-    // The one rule JSON Schema cannot say: a width cannot have more successes than tries.
-    (value as Baseline).widths.forEach((w, i) => {
-      if (w.reached > w.restarts)
-        throw new SchemaProblem(`widths[${i}].reached`, `at most restarts (${w.restarts})`, String(w.reached));
-    });
   } catch (e) {
     if (!(e instanceof SchemaProblem)) throw e;
     throw new UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });

@@ -15,10 +15,10 @@ import { settingsDifferences } from './settings.js';
 import type { Baseline, ResultSettings, Verdict } from './types.js';
 
 export interface CompareInput {
-  result: Pick<SearchResult, 'outcome' | 'width' | 'metric' | 'note' | 'widths'>;
+  result: Pick<SearchResult, 'outcome' | 'width' | 'metric' | 'notes' | 'widths'>;
   target: { metric: MetricName; threshold: number };
-  /** The search range actually searched. */
-  search: { minWidth: number; maxWidth: number };
+  /** The search range actually searched, and the networks a width needs. */
+  search: { minWidth: number; maxWidth: number; required: number };
   gate: Pick<GateConfig, 'maxWidth' | 'allowedGrowth' | 'metricTolerance'>;
   baseline: Baseline | null;
   /** This run's result-changing settings (see settings.ts). */
@@ -43,7 +43,7 @@ export function compare(input: CompareInput): Comparison {
   }
 
   if (result.outcome === 'inconclusive') {
-    const how = result.note ? ` ${sentence(result.note)}` : '';
+    const how = result.notes.length > 0 ? ` ${result.notes.map(sentence).join(' ')}` : '';
     return {
       verdict: 'inconclusive',
       reasons: [`The search ran out of budget before it could decide the smallest adequate width.${how}`, ...flags],
@@ -53,11 +53,13 @@ export function compare(input: CompareInput): Comparison {
 
   if (result.outcome !== 'found' || result.width === null || result.metric === null) {
     const best = bestSeen(result.widths, target.metric);
-    const bestText = best ? `; the best was ${formatMetric(best.value)} at width ${best.width}` : '';
+    const bestText = best ? `; the best network reached ${formatMetric(best.value)} (width ${best.width})` : '';
+    const networks = search.required === 1 ? 'a network that meets' : `${search.required} networks that meet`;
     return {
       verdict: 'fail',
       reasons: [
-        `No width from ${search.minWidth} to ${search.maxWidth} reaches ${targetPhrase(target.metric, target.threshold)}${bestText}.`,
+        `No width from ${search.minWidth} to ${search.maxWidth} has ${networks} ${targetPhrase(target.metric, target.threshold)}${bestText}.`,
+        ...result.notes.map(sentence),
         ...flags,
       ],
       settingsChanged,

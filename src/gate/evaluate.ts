@@ -23,7 +23,7 @@ export function evaluateGate(input: {
   const comparison = compare({
     result,
     target: config.target,
-    search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth },
+    search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth, required: config.search.required },
     gate: config.gate,
     baseline,
     settings: resultSettings(config),

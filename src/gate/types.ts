@@ -5,17 +5,20 @@
 import type { MetricName } from '../config/types.js';
 import type { DataProfile } from '../data/types.js';
 
-export const BASELINE_SCHEMA = 'neuron-budget/baseline@1';
-export const BASELINE_VERSION = 1;
+export const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
+export const BASELINE_VERSION = 2;
 /** Oldest history entries are dropped beyond this many. */
 export const HISTORY_CAP = 100;
 
 /** One width of the recorded search curve. */
 export interface BaselineWidth {
   width: number;
+  /** Fresh restarts run at this width. */
   restarts: number;
-  reached: number;
-  /** Best target metric over the restarts; null when every restart diverged. */
+  /** Networks of this width that met the target (fresh and pruned). */
+  met: number;
+  adequate: boolean;
+  /** Best judged metric over the networks of this width; null when none finished. */
   best: number | null;
 }
 
@@ -44,9 +47,9 @@ export interface Baseline {
     metric: { name: MetricName; value: number; threshold: number };
     /** Width at which the growth phase found it, before pruning. */
     grownWidth: number | null;
-    /** Restarts that reached the target at `width`, and restarts run there (null when not tried by growth). */
-    reached: number | null;
-    restarts: number | null;
+    /** Networks of `width` that met the target (fresh and pruned), and fresh restarts run there. */
+    met: number;
+    restarts: number;
     /** Wall-clock seconds of the search that produced it (informative only). */
     searchSeconds: number | null;
   };

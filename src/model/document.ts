@@ -5,7 +5,7 @@
 import type { MetricName, TargetConfig, Task } from '../config/types.js';
 import type { Encoding, FeatureEncoding } from '../data/types.js';
 import type { NetworkJson } from '../nn/index.js';
-import type { Witness } from '../search/types.js';
+import type { JudgingRows, Witness } from '../search/types.js';
 import { UserError } from '../common/errors.js';
 import {
   checkInt8Network,
@@ -26,10 +26,28 @@ export interface ModelDocument {
   task: Task;
   /** Hidden neurons. */
   width: number;
-  /** What the network reached on the validation rows (training rows when there were none). */
-  target: { metric: MetricName; threshold: number; value: number };
+  /** What the network reached, on which rows, and how its width is backed. */
+  target: {
+    metric: MetricName;
+    threshold: number;
+    /** The metric on the rows that judged it. */
+    value: number;
+    /** Which rows judged it: judging rows (never seen in training), or validation or training rows when there were none. */
+    on: JudgingRows['on'];
+    /** It met the target there. */
+    met: boolean;
+    /** Its width is adequate: enough networks of that width met the target (see the README). */
+    adequate: boolean;
+  };
   /** Where it came from: enough to train it again with the same config and data. */
-  origin: { seed: number; restart: number; grownWidth: number };
+  origin: {
+    seed: number;
+    /** The fresh training it started as: its width and restart (restarts count from 1). */
+    width: number;
+    restart: number;
+    /** 'fresh': trained at this width; 'pruned': pruned down to it from origin.width. */
+    how: 'fresh' | 'pruned';
+  };
   /** Raw row → inputs: features in input order (numeric: (x − mean) / std; categorical: one-hot in this order). */
   encoding: Encoding;
   network: NetworkJson;
@@ -47,14 +65,22 @@ export function modelDocument(
   witness: Witness,
   encoding: Encoding,
   target: TargetConfig,
+  backing: { on: JudgingRows['on']; adequate: boolean },
   calibration: Calibration | null = null,
 ): ModelDocument {
   return {
     schema: MODEL_SCHEMA,
     task: encoding.target.task,
     width: witness.network.width,
-    target: { metric: target.metric, threshold: target.threshold, value: witness.metric },
-    origin: { seed: witness.seed, restart: witness.restart, grownWidth: witness.grownWidth },
+    target: {
+      metric: target.metric,
+      threshold: target.threshold,
+      value: witness.judged,
+      on: backing.on,
+      met: witness.met,
+      adequate: backing.adequate,
+    },
+    origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
     encoding: structuredClone(encoding),
     network: structuredClone(witness.network),
     cost: deviceCost(costShapeOf(witness.network, encoding)),
@@ -108,7 +134,17 @@ export function parseModel(text: string, file = 'model'): ModelDocument {
   if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
     bad('encoding.target.classes', 'a list of class labels');
   if (d.schema === MODEL_SCHEMA_V1) {
-    return { ...(d as ModelDocument), schema: MODEL_SCHEMA, cost: deviceCost(costShapeOf(net, enc)), int8: null };
+    // Version 1 recorded only the validation value and the grown width; what it reached is kept.
+    const v1 = d as unknown as { target: { metric: MetricName; threshold: number; value: number } };
+    const old = d as unknown as { origin: { seed: number; restart: number; grownWidth: number } };
+    return {
+      ...(d as ModelDocument),
+      schema: MODEL_SCHEMA,
+      target: { ...v1.target, on: 'validation', met: true, adequate: true },
+      origin: { seed: old.origin.seed, width: old.origin.grownWidth, restart: old.origin.restart + 1, how: 'fresh' },
+      cost: deviceCost(costShapeOf(net, enc)),
+      int8: null,
+    };
   }
   if (d.int8 !== null) {
     const problem = checkInt8Network(d.int8, net, enc);

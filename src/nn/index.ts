@@ -5,5 +5,5 @@
 export type * from './types.js';
 export type { OptimizerSettings } from './optimizers.js';
 export type { Metrics } from './metrics.js';
-export { createTrainer, trainerFromNetwork, headFor, FLAT_SPOT_OFFSET } from './trainer.js';
-export { predict } from './predict.js';
+export { createTrainer, trainerFromNetwork, headFor } from './trainer.js';
+export { metricOn, predict } from './predict.js';

@@ -4,6 +4,9 @@
  */
 import type { Optimizer } from '../config/types.js';
 
+/** The optimisers that step along one gradient evaluation (L-BFGS lives in lbfgs.ts). */
+export type FirstOrderOptimizer = Exclude<Optimizer, 'lbfgs'>;
+
 /** iRprop+ defaults (Riedmiller & Braun 1993; Igel & Hüsken 2003). */
 const IRPROP_DEFAULTS = { etaPlus: 1.2, etaMinus: 0.5, delta0: 0.1, deltaMin: 1e-6, deltaMax: 50 } as const;
 /** Adam defaults (Kingma & Ba 2015). */
@@ -21,7 +24,7 @@ export interface OptimizerSettings {
 }
 
 export interface Updater {
-  readonly kind: Optimizer;
+  readonly kind: FirstOrderOptimizer;
   /**
    * One update from the gradient of the loss summed over `rows` rows, whose summed loss
    * before the update is `loss`.
@@ -193,7 +196,7 @@ class Momentum implements Updater {
   }
 }
 
-export function makeUpdater(kind: Optimizer, size: number, settings: OptimizerSettings): Updater {
+export function makeUpdater(kind: FirstOrderOptimizer, size: number, settings: OptimizerSettings): Updater {
   if (kind === 'irprop+') return new IRpropPlus(size);
   if (kind === 'adam') return new Adam(size, settings.learningRate ?? ADAM_DEFAULTS.learningRate);
   return new Momentum(

@@ -1,5 +1,8 @@
 /** Running a network on encoded rows. */
+import type { MetricName } from '../common/metric.js';
 import { headCode, headOutputs, makeScratch, referenceForward } from './kernel/reference.js';
+import { defaultKernel } from './kernel/select.js';
+import { targetMetric } from './metrics.js';
 import { fromJson } from './network.js';
 import type { NetworkJson } from './types.js';
 
@@ -13,4 +16,20 @@ export function predict(net: NetworkJson, x: Float64Array, rows: number): Float6
   const head = headCode(shape.head);
   for (let p = 0; p < rows; p++) headOutputs(head, K, logits, p * K, out, p * K);
   return out;
+}
+
+/** The network's `metric` on encoded rows (regression errors in the target's units, via its std). */
+export function metricOn(
+  net: NetworkJson,
+  x: Float64Array,
+  y: Float64Array,
+  rows: number,
+  metric: MetricName,
+  targetStd: number,
+): number {
+  if (rows === 0) return Number.NaN;
+  const { shape, params } = fromJson(net);
+  const logits = new Float64Array(rows * shape.outputs);
+  defaultKernel().forward(shape, params, x, rows, logits, null);
+  return targetMetric(metric, headCode(shape.head), shape.outputs, logits, y, rows, targetStd);
 }

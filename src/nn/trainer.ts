@@ -1,36 +1,35 @@
 /**
  * One network and its optimiser state while it trains, grows and shrinks.
+ *
+ * Training follows the exact gradient of the loss it reports (plus the L2 penalty on the weights,
+ * when there is one). The steering rows (validation rows, or the training rows when there are
+ * none) decide when a training stops: when their loss has not really improved for `patience`
+ * epochs, when the optimiser has converged, or at max-epochs. The network handed back is the one
+ * with the lowest steering loss among those that met the target on the steering rows (or, when
+ * none did, among all checked): early stopping with the best weights restored. The judging rows
+ * are never read here.
  */
+import { meetsThreshold } from '../common/metric.js';
 import type { Init } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
-import type { Head, NetworkJson, Rng, StopReason, TrainOptions, TrainRecord, Trainer } from './types.js';
-import { defaultKernel } from './kernel/select.js';
 import type { Kernel } from './kernel/kernel.js';
-import { computeMetrics, metricValue, targetMetric, type Metrics } from './metrics.js';
-import { meetsThreshold } from '../common/metric.js';
-import {
-  defaultInit,
-  describe,
-  fromJson,
-  initHiddenNeuron,
-  initParams,
-  resizeIndexMap,
-  resizeParams,
-  toJson,
-} from './network.js';
-import { layoutOf, type Shape } from './kernel/layout.js';
-import { makeUpdater, type OptimizerSettings, type Updater } from './optimizers.js';
-import { headCode, rowLoss } from './kernel/reference.js';
+import { layoutOf, type Layout, type Shape } from './kernel/layout.js';
+import { headCode } from './kernel/reference.js';
+import { defaultKernel } from './kernel/select.js';
+import type { Objective } from './lbfgs.js';
+import { computeMetrics, metricValue, type Metrics } from './metrics.js';
+import { defaultInit, describe, fromJson, initParams, toJson } from './network.js';
+import type { OptimizerSettings } from './optimizers.js';
 import { StallDetector } from './stall.js';
+import { makeStepper, type StepResult, type Stepper } from './steppers.js';
+import { saliencies, withNeuronAdded, withNeuronRemoved, type Resized } from './surgery.js';
+import type { Head, NetworkJson, Rng, StopReason, TrainOptions, TrainRecord, Trainer } from './types.js';
 
 /**
- * Flat-spot elimination (Fahlman 1988, "An empirical study of learning speed in
- * back-propagation networks", CMU-CS-88-162; 0.1 is the sigmoid-prime offset of the
- * Cascade-Correlation reference code): a saturated tanh or logistic neuron has a derivative of
- * exactly 0 in floating point and would never move again. Measured on XOR (width 2, tanh,
- * iRprop+, 2,000 epochs, 100 seeds): 50 reach 100% with the exact gradient, 85 with it.
+ * A steering loss counts as improved when it falls by more than this fraction of the last
+ * improved value; smaller gains do not reset the patience (an engineering choice, no source).
  */
-export const FLAT_SPOT_OFFSET = 0.1;
+export const MIN_IMPROVEMENT = 1e-3;
 
 /** The output head the dataset calls for. */
 export function headFor(data: Pick<EncodedDataset, 'task' | 'outputs'>): Head {
@@ -47,16 +46,25 @@ export interface TrainerExtras {
 
 class NetworkTrainer implements Trainer {
   private shape: Shape;
+  private layout: Layout;
   private params: Float64Array;
   private grad: Float64Array;
-  private updater: Updater;
+  /** The best network checked so far, and the best that met the target (see the header). */
+  private best: Float64Array;
+  private bestMet: Float64Array;
+  private readonly stepper: Stepper;
   private readonly init: Init;
   private readonly stall: StallDetector | null;
   private readonly head: number;
   private readonly logitsTrain: Float64Array;
-  private readonly logitsValidation: Float64Array;
+  private readonly logitsSteer: Float64Array;
   private readonly batch: number;
-  private readonly primeOffset: number;
+  private batchStart = 0;
+  private batchEnd = 0;
+  /** The loss over all training rows with the weight penalty, and its gradient: what the optimiser minimises. */
+  private readonly objective: Objective;
+  /** The same over rows [batchStart, batchEnd) (mini-batch Adam). */
+  private readonly batchObjective: Objective;
 
   constructor(
     private readonly data: EncodedDataset,
@@ -72,6 +80,7 @@ class NetworkTrainer implements Trainer {
       throw new RangeError(`target metric ${options.target.metric} does not fit a ${data.task} task`);
     }
     if (!(options.checkEvery >= 1)) throw new RangeError(`checkEvery must be >= 1, got ${options.checkEvery}`);
+    if (!(options.weightDecay >= 0)) throw new RangeError(`weightDecay must be >= 0, got ${options.weightDecay}`);
     this.shape = {
       inputs: data.inputs,
       width,
@@ -79,82 +88,125 @@ class NetworkTrainer implements Trainer {
       activation: options.activation,
       head: headFor(data),
     };
+    this.layout = layoutOf(this.shape);
     this.head = headCode(this.shape.head);
     this.init = options.init ?? defaultInit(options.activation);
     this.params = initParams(this.shape, this.init, rng);
     this.grad = new Float64Array(this.params.length);
-    this.updater = makeUpdater(options.optimizer, this.params.length, settings);
-    this.primeOffset = options.primeOffset ?? FLAT_SPOT_OFFSET;
+    this.best = new Float64Array(this.params.length);
+    this.bestMet = new Float64Array(this.params.length);
+    this.stepper = makeStepper(options.optimizer, this.params.length, settings);
     this.stall = options.stall ? new StallDetector(options.stall.window, options.stall.threshold) : null;
     this.logitsTrain = new Float64Array(data.trainRows * data.outputs);
-    this.logitsValidation = new Float64Array(data.validationRows * data.outputs);
+    const steerRows = data.validationRows > 0 ? data.validationRows : data.trainRows;
+    this.logitsSteer = new Float64Array(steerRows * data.outputs);
     const b = settings.batchSize ?? 0;
     this.batch = options.optimizer === 'adam' && b > 0 && b < data.trainRows ? b : data.trainRows;
+    this.objective = (x, g) => this.penalised(x, g, this.lossOver(x, g, 0, this.data.trainRows));
+    this.batchObjective = (x, g) => this.penalised(x, g, this.lossOver(x, g, this.batchStart, this.batchEnd));
   }
 
   get network() {
     return describe(this.shape);
   }
 
-  /** The live parameter vector (layout in network.ts); for tests and benchmarks. */
+  /** The live parameter vector (layout in kernel/layout.ts); for tests and benchmarks. */
   get parameters(): Float64Array {
     return this.params;
   }
 
+  private lossOver(x: Float64Array, g: Float64Array, start: number, end: number): number {
+    return this.kernel.lossAndGradient(this.shape, x, this.data.xTrain, this.data.yTrain, start, end, g);
+  }
+
+  /** Adds (λ/2)·Σw² over the weights (not the biases) to `loss` and λw to their gradient. */
+  private penalised(x: Float64Array, g: Float64Array, loss: number): number {
+    const lambda = this.options.weightDecay;
+    if (lambda === 0) return loss;
+    const { w1, b1, w2, b2 } = this.layout;
+    let squares = 0;
+    for (let q = w1; q < b1; q++) {
+      squares += x[q] * x[q];
+      g[q] += lambda * x[q];
+    }
+    for (let q = w2; q < b2; q++) {
+      squares += x[q] * x[q];
+      g[q] += lambda * x[q];
+    }
+    return loss + 0.5 * lambda * squares;
+  }
+
+  /** One epoch: a full-batch optimiser step, or one pass of mini-batch Adam steps. */
+  private epoch(budget: number): StepResult {
+    const N = this.data.trainRows;
+    if (this.batch >= N) return this.stepper.step(this.params, this.objective, this.grad, budget, N);
+    let loss = 0;
+    for (let start = 0; start < N; start += this.batch) {
+      this.batchStart = start;
+      this.batchEnd = Math.min(N, start + this.batch);
+      const part = this.stepper.step(this.params, this.batchObjective, this.grad, 1, this.batchEnd - start).loss;
+      loss += part;
+      if (!Number.isFinite(part)) break;
+    }
+    return { evaluations: 1, loss, status: 'progress' };
+  }
+
   run(maxEpochs: number): TrainRecord {
-    const { data, kernel, shape, options } = this;
-    const N = data.trainRows;
-    const x = data.xTrain;
-    const y = data.yTrain;
-    const batch = this.batch;
-    const checkEvery = options.checkEvery;
+    const { options } = this;
     let stop: StopReason = 'max-epochs';
     let epochs = 0;
-    for (let e = 1; e <= maxEpochs; e++) {
-      let loss = 0;
-      if (batch >= N) {
-        loss = this.fullBatchEpoch();
-        if (!Number.isFinite(loss)) {
-          stop = 'diverged';
-          break;
-        }
-      } else {
-        for (let start = 0; start < N; start += batch) {
-          const end = Math.min(N, start + batch);
-          const part = kernel.lossAndGradient(shape, this.params, x, y, start, end, this.grad, this.primeOffset);
-          loss += part;
-          if (!Number.isFinite(part)) break;
-          this.updater.step(this.params, this.grad, part, end - start);
-        }
-        if (!Number.isFinite(loss)) {
-          stop = 'diverged';
-          break;
-        }
+    let nextCheck = options.checkEvery;
+    let reference = Infinity;
+    let lastImprovement = 0;
+    let bestLoss = Infinity;
+    let bestMetLoss = Infinity;
+    this.stall?.reset();
+    while (epochs < maxEpochs) {
+      const step = this.epoch(maxEpochs - epochs);
+      epochs += step.evaluations;
+      if (!Number.isFinite(step.loss)) {
+        stop = 'diverged';
+        break;
       }
-      epochs = e;
-      if (e % checkEvery === 0 || e === maxEpochs) {
-        if (options.interrupted?.() === true) {
-          stop = 'interrupted';
-          break;
-        }
-        const m = this.targetMetricOnJudgedRows();
-        if (meetsThreshold(m, options.target)) {
-          stop = 'reached';
-          break;
-        }
-        if (!Number.isFinite(m)) {
-          stop = 'diverged';
-          break;
-        }
+      const stalled = this.stall !== null && this.stall.record(step.loss / this.data.trainRows);
+      const ended = step.status !== 'progress';
+      if (epochs < nextCheck && epochs < maxEpochs && !ended && !stalled) continue;
+      nextCheck = epochs + options.checkEvery;
+      if (options.interrupted?.() === true) {
+        stop = 'interrupted';
+        break;
       }
-      if (this.stall !== null && this.stall.record(loss / N)) {
+      const steer = this.steeringMetrics();
+      const metric = metricValue(steer, options.target.metric);
+      if (!Number.isFinite(steer.loss) || !Number.isFinite(metric)) {
+        stop = 'diverged';
+        break;
+      }
+      if (steer.loss < reference * (1 - MIN_IMPROVEMENT)) {
+        reference = steer.loss;
+        lastImprovement = epochs;
+      }
+      if (steer.loss < bestLoss) {
+        bestLoss = steer.loss;
+        this.best.set(this.params);
+      }
+      if (meetsThreshold(metric, options.target) && steer.loss < bestMetLoss) {
+        bestMetLoss = steer.loss;
+        this.bestMet.set(this.params);
+      }
+      if (ended || stalled || epochs - lastImprovement >= options.patience) {
         stop = 'stalled';
         break;
       }
     }
+    if (stop !== 'diverged' && stop !== 'interrupted') {
+      if (bestMetLoss < Infinity) this.params.set(this.bestMet);
+      else if (bestLoss < Infinity) this.params.set(this.best);
+    }
     const rec = this.evaluate();
-    if (stop !== 'diverged' && !Number.isFinite(rec.trainLoss)) stop = 'diverged';
-    return { ...rec, epochs, stop };
+    if (stop === 'diverged' || stop === 'interrupted') return { ...rec, epochs, stop };
+    if (!Number.isFinite(rec.trainLoss)) return { ...rec, epochs, stop: 'diverged' };
+    return { ...rec, epochs, stop: rec.stop === 'reached' ? 'reached' : stop };
   }
 
   private trainMetrics(): Metrics {
@@ -170,152 +222,68 @@ class NetworkTrainer implements Trainer {
     );
   }
 
-  private validationMetrics(): Metrics | null {
+  /** Metrics on the steering rows: the validation rows, or the training rows when there are none. */
+  private steeringMetrics(): Metrics {
     const { data, shape } = this;
-    if (data.validationRows === 0) return null;
-    this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsValidation, null);
+    if (data.validationRows === 0) return this.trainMetrics();
+    this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsSteer, null);
     return computeMetrics(
       this.head,
       shape.outputs,
-      this.logitsValidation,
+      this.logitsSteer,
       data.yValidation,
       data.validationRows,
       data.encoding.target.std,
     );
   }
 
-  private targetMetricOnJudgedRows(): number {
-    const { data, shape } = this;
-    const name = this.options.target.metric;
-    const std = data.encoding.target.std;
-    if (data.validationRows > 0) {
-      this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsValidation, null);
-      return targetMetric(
-        name,
-        this.head,
-        shape.outputs,
-        this.logitsValidation,
-        data.yValidation,
-        data.validationRows,
-        std,
-      );
-    }
-    this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
-    return targetMetric(name, this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, std);
-  }
-
-  /** Every metric on the training rows and on the judged rows (validation, or training when there are none). */
   /**
-   * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no target
-   * check). Returns the summed loss; a non-finite loss leaves the weights untouched.
+   * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no check).
+   * Returns the loss; a non-finite loss leaves the weights untouched. For the engine benchmark.
    */
   fullBatchEpoch(): number {
-    const { data } = this;
-    const N = data.trainRows;
-    const loss = this.kernel.lossAndGradient(
-      this.shape,
-      this.params,
-      data.xTrain,
-      data.yTrain,
-      0,
-      N,
-      this.grad,
-      this.primeOffset,
-    );
-    if (Number.isFinite(loss)) this.updater.step(this.params, this.grad, loss, N);
-    return loss;
+    return this.stepper.step(this.params, this.objective, this.grad, 1, this.data.trainRows).loss;
   }
 
+  /** Metrics on the training rows and on the steering rows. */
   metrics(): { train: Metrics; validation: Metrics } {
-    const train = this.trainMetrics();
-    return { train, validation: this.validationMetrics() ?? train };
+    return { train: this.trainMetrics(), validation: this.steeringMetrics() };
   }
 
   evaluate(): TrainRecord {
     const { train, validation } = this.metrics();
     const metric = this.options.target.metric;
     const trainMetric = metricValue(train, metric);
-    const validationMetric = metricValue(validation, metric);
+    const steeringMetric = metricValue(validation, metric);
     let stop: StopReason = 'max-epochs';
     if (!Number.isFinite(train.loss)) stop = 'diverged';
-    else if (meetsThreshold(validationMetric, this.options.target)) stop = 'reached';
-    return { epochs: 0, stop, trainLoss: train.loss, trainMetric, validationMetric };
+    else if (meetsThreshold(steeringMetric, this.options.target)) stop = 'reached';
+    return { epochs: 0, stop, trainLoss: train.loss, trainMetric, steeringMetric };
   }
 
   addNeuron(rng: Rng): void {
-    const old = this.shape;
-    const map = resizeIndexMap(old, -1);
-    const params = resizeParams(this.params, old, -1);
-    const shape: Shape = { ...old, width: old.width + 1 };
-    initHiddenNeuron(params, layoutOf(shape), shape.inputs, shape.width, old.width, this.init, rng);
-    this.replace(shape, params, map);
+    this.replace(withNeuronAdded(this.shape, this.params, this.init, rng));
   }
 
   removeNeuron(j: number): void {
-    const old = this.shape;
-    if (!Number.isInteger(j) || j < 0 || j >= old.width)
-      throw new RangeError(`no hidden neuron ${j} in a network of width ${old.width}`);
-    const mean = this.hiddenMeans();
-    const lay = layoutOf(old);
-    const params = this.params.slice();
-    for (let k = 0; k < old.outputs; k++) params[lay.b2 + k] += params[lay.w2 + j * old.outputs + k] * mean[j];
-    const map = resizeIndexMap(old, j);
-    const shape: Shape = { ...old, width: old.width - 1 };
-    this.replace(shape, resizeParams(params, old, j), map);
-    const to = layoutOf(shape);
-    this.updater.resetRange(to.b2, to.b2 + shape.outputs);
+    this.replace(withNeuronRemoved(this.kernel, this.shape, this.params, this.data, j));
+    // The output biases absorbed the removed neuron: what the optimiser learnt about them is stale.
+    this.stepper.resetRange(this.layout.b2, this.layout.b2 + this.shape.outputs);
   }
 
-  private replace(shape: Shape, params: Float64Array, map: Int32Array): void {
-    this.shape = shape;
-    this.params = params;
-    this.grad = new Float64Array(params.length);
-    this.updater.resize(map, params.length);
+  private replace(r: Resized): void {
+    this.shape = r.shape;
+    this.layout = layoutOf(r.shape);
+    this.params = r.params;
+    this.grad = new Float64Array(r.params.length);
+    this.best = new Float64Array(r.params.length);
+    this.bestMet = new Float64Array(r.params.length);
+    this.stepper.resize(r.map, r.params.length);
     this.stall?.reset();
   }
 
-  /** Hidden activations of every training row (rows × width) and their logits. */
-  private hiddenActivations(): Float64Array {
-    const { data, shape } = this;
-    const hidden = new Float64Array(data.trainRows * shape.width);
-    this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, hidden);
-    return hidden;
-  }
-
-  private hiddenMeans(): Float64Array {
-    const H = this.shape.width;
-    const N = this.data.trainRows;
-    const hidden = this.hiddenActivations();
-    const mean = new Float64Array(H);
-    for (let p = 0; p < N; p++) for (let j = 0; j < H; j++) mean[j] += hidden[p * H + j];
-    for (let j = 0; j < H; j++) mean[j] /= N;
-    return mean;
-  }
-
   saliency(): Float64Array {
-    const { shape, data } = this;
-    const H = shape.width;
-    const K = shape.outputs;
-    const N = data.trainRows;
-    const hidden = this.hiddenActivations();
-    const logits = this.logitsTrain;
-    const mean = new Float64Array(H);
-    for (let p = 0; p < N; p++) for (let j = 0; j < H; j++) mean[j] += hidden[p * H + j];
-    for (let j = 0; j < H; j++) mean[j] /= N;
-    const lay = layoutOf(shape);
-    const out = new Float64Array(H);
-    const z = new Float64Array(K);
-    const y = data.yTrain;
-    for (let p = 0; p < N; p++) {
-      const base = rowLoss(this.head, K, logits, p * K, y[p]);
-      for (let j = 0; j < H; j++) {
-        const d = hidden[p * H + j] - mean[j];
-        for (let k = 0; k < K; k++) z[k] = logits[p * K + k] - d * this.params[lay.w2 + j * K + k];
-        out[j] += rowLoss(this.head, K, z, 0, y[p]) - base;
-      }
-    }
-    for (let j = 0; j < H; j++) out[j] /= N;
-    return out;
+    return saliencies(this.kernel, this.shape, this.params, this.data, this.head);
   }
 
   snapshot(): NetworkJson {
@@ -326,19 +294,18 @@ class NetworkTrainer implements Trainer {
   load(net: NetworkJson): void {
     const { shape, params } = fromJson(net);
     const s = this.shape;
-    if (
-      shape.inputs !== s.inputs ||
-      shape.width !== s.width ||
-      shape.outputs !== s.outputs ||
-      shape.head !== s.head ||
-      shape.activation !== s.activation
-    ) {
+    const same = (['inputs', 'width', 'outputs', 'head', 'activation'] as const).every((k) => shape[k] === s[k]);
+    if (!same) {
       throw new RangeError(
         `network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`,
       );
     }
     this.params.set(params);
   }
+}
+
+function settingsOf(options: TrainOptions, extras: TrainerExtras): OptimizerSettings {
+  return { ...(options.optimizerSettings ?? {}), ...(extras.optimizerSettings ?? {}) };
 }
 
 /**
@@ -358,10 +325,7 @@ export function trainerFromNetwork(
     { ...options, activation: net.activation },
     rng,
     extras.kernel ?? defaultKernel(),
-    {
-      ...(options.optimizerSettings ?? {}),
-      ...(extras.optimizerSettings ?? {}),
-    },
+    settingsOf(options, extras),
   );
   trainer.load(net);
   return trainer;
@@ -378,8 +342,5 @@ export function createTrainer(
   fullBatchEpoch(): number;
   metrics(): { train: Metrics; validation: Metrics };
 } {
-  return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), {
-    ...(options.optimizerSettings ?? {}),
-    ...(extras.optimizerSettings ?? {}),
-  });
+  return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
 }

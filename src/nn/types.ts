@@ -32,7 +32,11 @@ export interface NetworkJson {
   outputBias: number[];
 }
 
-/** 'interrupted': TrainOptions.interrupted said to give up; the caller discards such a run. */
+/**
+ * 'reached': the steering rows met the target when training stopped; 'stalled': the steering loss
+ * stopped improving (or the optimiser converged) without meeting it; 'interrupted':
+ * TrainOptions.interrupted said to give up, and the caller discards such a run.
+ */
 export type StopReason = 'reached' | 'stalled' | 'diverged' | 'max-epochs' | 'interrupted';
 
 export interface TrainOptions {
@@ -40,34 +44,39 @@ export interface TrainOptions {
   init: Init | null;
   optimizer: Optimizer;
   maxEpochs: number;
-  /** The target is checked on the validation rows (training rows when there are none) every this many epochs. */
+  /** The steering rows are checked every this many epochs (an epoch is one pass over the training rows). */
   checkEvery: number;
+  /** The target the steering rows are checked against (they steer; they do not judge). */
   target: TargetConfig;
-  /** Dynamic Node Creation trigger; null: never stop as stalled. */
+  /**
+   * Epochs without a real improvement of the steering loss (by MIN_IMPROVEMENT, relative) after
+   * which a training stops, whether or not the target was met: early stopping on the validation
+   * rows, and the bound on polishing a network that met the target.
+   */
+  patience: number;
+  /** L2 penalty λ on the weights (not the biases): the loss gains (λ/2)·Σw², summed over all rows' loss. */
+  weightDecay: number;
+  /** Dynamic Node Creation trigger; null: never stop for it. */
   stall: { window: number; threshold: number } | null;
   /** Optional optimiser hyper-parameters (learning rate, momentum, Adam batch size); published defaults otherwise. */
   optimizerSettings?: OptimizerSettings;
   /**
-   * Flat-spot elimination: added to the tanh/logistic derivative when training, so a
-   * saturated neuron still learns. Default FLAT_SPOT_OFFSET; 0 trains on the exact gradient.
-   */
-  primeOffset?: number;
-  /**
-   * Polled at each target check (every checkEvery epochs); true stops the run as
-   * 'interrupted'. Lets a worker give up a training whose answer is no longer needed.
+   * Polled at each check (every checkEvery epochs); true stops the run as 'interrupted'. Lets a
+   * worker give up a training whose answer is no longer needed, or whose time ran out.
    */
   interrupted?: () => boolean;
 }
 
 export interface TrainRecord {
-  /** Epochs run by this call. */
+  /** Epochs run by this call (an L-BFGS epoch is one evaluation of the loss and its gradient). */
   epochs: number;
   stop: StopReason;
+  /** Mean loss on the training rows, without the weight penalty. */
   trainLoss: number;
   /** The target metric on the training rows (original units for regression). */
   trainMetric: number;
-  /** The target metric on the validation rows (training rows when there are none). */
-  validationMetric: number;
+  /** The target metric on the steering rows (validation rows; training rows when there are none). */
+  steeringMetric: number;
 }
 
 /**

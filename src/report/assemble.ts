@@ -5,16 +5,16 @@
 import type { Config } from '../config/types.js';
 import type { LoadedData } from '../data/types.js';
 import { displayPath } from '../common/paths.js';
-import type { SearchResult } from '../search/types.js';
+import type { SearchResult, TrainingTask } from '../search/types.js';
 import { TOOL_NAME, TOOL_VERSION } from '../version.js';
-import type { ReportDraft } from './types.js';
+import type { ReportDraft, ReportSource, ReportWitness } from './types.js';
 
 /** The report with the data stage's facts; verdict and search come later. */
 export function dataStageReport(config: Config, data: LoadedData, timing: Record<string, number>): ReportDraft {
   const ds = data.dataset;
   const classes = data.profile.classes;
   return {
-    schema: 'neuron-budget/report@1',
+    schema: 'neuron-budget/report@2',
     tool: { name: TOOL_NAME, version: TOOL_VERSION },
     reasons: [],
     width: null,
@@ -26,6 +26,7 @@ export function dataStageReport(config: Config, data: LoadedData, timing: Record
       droppedRows: data.droppedRows,
       trainRows: ds.trainRows,
       validationRows: ds.validationRows,
+      judgingRows: ds.judgingRows,
       inputs: ds.inputs,
       outputs: ds.outputs,
       task: ds.task,
@@ -44,7 +45,7 @@ export function dataStageReport(config: Config, data: LoadedData, timing: Record
 }
 
 /** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-export function searchStageReport(report: ReportDraft, search: SearchResult): ReportDraft {
+export function searchStageReport(report: ReportDraft, search: SearchResult, required: number): ReportDraft {
   return {
     ...report,
     reasons: [],
@@ -53,10 +54,33 @@ export function searchStageReport(report: ReportDraft, search: SearchResult): Re
     search: {
       outcome: search.outcome,
       grownWidth: search.grownWidth,
+      required,
       widths: search.widths,
-      pruning: search.pruning,
+      pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
       trainings: search.trainings,
-      note: search.note,
+      notes: search.notes,
+      judging: search.judging,
+      witness: witnessOf(search),
     },
+  };
+}
+
+/** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
+export function shownSource(task: TrainingTask): ReportSource {
+  return { width: task.width, restart: task.restart + 1 };
+}
+
+function witnessOf(search: SearchResult): ReportWitness | null {
+  const w = search.witness;
+  if (w === null) return null;
+  return {
+    width: w.network.width,
+    how: w.how,
+    source: shownSource(w.source),
+    judged: w.judged,
+    steering: w.steering,
+    train: w.train,
+    met: w.met,
+    adequate: search.width !== null,
   };
 }

@@ -24,11 +24,19 @@ function inputsLine(data: LoadedData): string {
   return `${data.dataset.inputs} after encoding: ${parts.join(', ')}`;
 }
 
-function splitLine(config: Config, report: ReportDraft): string {
+function splitLine(config: Config, report: ReportDraft, data: LoadedData): string {
   const d = report.data;
-  if (d.validationRows === 0) return `${d.trainRows} training rows, judged on themselves (data.validation is 0)`;
-  const how = d.task === 'classification' ? 'stratified by class, ' : '';
-  return `${d.trainRows} training / ${d.validationRows} validation (${how}seed ${config.search.seed})`;
+  const how = `${d.task === 'classification' ? 'stratified by class, ' : ''}seed ${config.search.seed}`;
+  if (d.validationRows === 0 && d.judgingRows === 0) {
+    return `${d.trainRows} training rows, steered and judged on themselves (data.validation is 0)`;
+  }
+  const parts = [`${d.trainRows} training`];
+  if (d.validationRows > 0) parts.push(`${d.validationRows} validation`);
+  if (d.judgingRows > 0) parts.push(`${d.judgingRows} judging`);
+  const folded = data.judgingFolded ? '; a class is too small for judging rows, so the validation rows judge' : '';
+  const optimistic =
+    d.judgingRows === 0 && !data.judgingFolded ? '; judged on the validation rows (data.judging is 0)' : '';
+  return `${parts.join(' / ')} (${how})${folded}${optimistic}`;
 }
 
 export function dataSummaryText(config: Config, data: LoadedData, report: ReportDraft): string {
@@ -37,7 +45,7 @@ export function dataSummaryText(config: Config, data: LoadedData, report: Report
     ['config', plain(displayPath(config.root, config.file))],
     ['data', plain(d.file)],
     ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
-    ['split', splitLine(config, report)],
+    ['split', splitLine(config, report, data)],
     ['inputs', inputsLine(data)],
     [
       'task',

@@ -17,7 +17,7 @@ export function withGate(report: ReportDraft, outcome: GateOutcome, gate: GateCo
           width: b.result.width,
           metric: b.result.metric.value,
           file: gate.baselineAsWritten,
-          reached: b.result.reached,
+          met: b.result.met,
           restarts: b.result.restarts,
           rows: b.data.rows,
           searchSeconds: b.result.searchSeconds,

@@ -8,20 +8,12 @@
  * When the comment would exceed the limit, only the details are shortened.
  */
 import type { DataChanges, HistoryEntry } from '../gate/types.js';
-import type { PruneStep } from '../search/types.js';
+import type { WidthSummary } from '../search/types.js';
 import { countRange, metricRange, renderChart } from './chart.js';
 import { escapeMarkdown as md } from '../common/escape.js';
 import { higherIsBetter } from '../common/metric.js';
-import {
-  formatCount,
-  formatDelta,
-  formatMetric,
-  formatSeconds,
-  neurons,
-  successRate,
-  targetPhrase,
-} from '../common/format.js';
-import type { Report } from './types.js';
+import { formatCount, formatDelta, formatMetric, formatSeconds, neurons, targetPhrase } from '../common/format.js';
+import type { Report, ReportPruneStep } from './types.js';
 import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf, type ReportView, type WidthRow } from './view.js';
 
 /** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
@@ -86,7 +78,7 @@ function summaryTable(view: ReportView, report: Report): string {
     '|:--|--:|--:|',
     `| Smallest adequate width | ${b?.width ?? dash} | ${cWidth} |`,
     `| ${capital(metricName)} at that width (network kept) | ${num(b?.metric)} | ${num(c.metric)} |`,
-    `| Restarts reaching the target there | ${successRate(b?.reached, b?.restarts)} | ${successRate(c.reached, c.restarts)} |`,
+    `| Networks meeting the target there | ${b?.met ?? '—'} | ${c.met ?? '—'} |`,
     `| Data rows | ${b?.rows == null ? dash : formatCount(b.rows)} | ${c.rows === null ? dash : formatCount(c.rows)}${rowsDelta} |`,
     `| Search time | ${formatSeconds(b?.searchSeconds)} | ${formatSeconds(c.searchSeconds)} |`,
   ];
@@ -97,7 +89,8 @@ function summaryTable(view: ReportView, report: Report): string {
     terms.push(`allowed growth over the baseline: ${gate.allowedGrowth}`);
   }
   terms.push(`data: ${md(report.data.file)}`);
-  return `${rows.join('\n')}\n\n${terms.join(' · ')}.`;
+  const backing = view.backing === null ? '' : `\n\n${md(view.backing, 400)}`;
+  return `${rows.join('\n')}${backing}\n\n${terms.join(' · ')}.`;
 }
 
 interface ChartPart {
@@ -199,25 +192,24 @@ function collapsible(summary: string, body: string): string {
 function widthTable(view: ReportView, limits: DetailLimits, chartWidths: Set<number>): string {
   const hasBaseline = view.baseline !== null;
   const header = hasBaseline
-    ? '| Width | This change: best | Reached | Wilson 95% | Baseline: best | Reached |\n|--:|--:|--:|--:|--:|--:|'
-    : '| Width | Best | Reached | Wilson 95% | Median epochs |\n|--:|--:|--:|--:|--:|';
+    ? '| Width | This change: best | Met | Wilson 95% | Baseline: best | Met |\n|--:|--:|--:|--:|--:|--:|'
+    : '| Width | Best | Met | Wilson 95% | Median epochs |\n|--:|--:|--:|--:|--:|';
   const keep = pickRows(view.rows, limits.widthRows, (r) => chartWidths.has(r.width) || r.width === view.current.width);
   const lines = keep.kept.map((r) => {
     const c = r.current;
     const cells = [
       mark(r.width, view),
       num(c?.best),
-      c ? successRate(c.reached, c.restarts) : '—',
+      c ? metCell(c) : '—',
       c ? `${c.wilson[0].toFixed(2)}–${c.wilson[1].toFixed(2)}` : '—',
     ];
-    if (hasBaseline)
-      cells.push(num(r.baseline?.best), r.baseline ? successRate(r.baseline.reached, r.baseline.restarts) : '—');
+    if (hasBaseline) cells.push(num(r.baseline?.best), r.baseline ? String(r.baseline.met) : '—');
     else cells.push(c ? formatCount(c.medianEpochs) : '—');
     return `| ${cells.join(' | ')} |`;
   });
   const omitted =
     keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
-  return `${header}\n${lines.join('\n')}${omitted}\n\nReached: restarts that reached the target out of restarts run. Wilson 95%: interval for the success rate.`;
+  return `${header}\n${lines.join('\n')}${omitted}\n\nMet: networks of that width that met the target (fresh restarts + networks pruned down to it). Wilson 95%: interval for the fresh restarts' success rate.`;
 }
 
 function mark(width: number, view: ReportView): string {
@@ -237,12 +229,12 @@ function historyTable(history: HistoryEntry[], limits: DetailLimits): string {
   return `| # | Date | Commit | Rows | Width | Metric |\n|--:|:--|:--|--:|--:|--:|\n${lines.join('\n')}${omitted}`;
 }
 
-function pruneTable(steps: PruneStep[], limits: DetailLimits): string {
+function pruneTable(steps: ReportPruneStep[], limits: DetailLimits): string {
   if (limits.pruneRows === 0) return `_${steps.length} steps left out for length; the JSON report lists them._`;
   const shown = steps.slice(0, limits.pruneRows);
   const lines = shown.map(
     (s) =>
-      `| ${s.restart} | ${s.width} | ${s.neuron} | ${num(s.metricBefore)} | ${num(s.metricAfter)} | ${s.kept ? 'removed' : 'kept (needed)'} |`,
+      `| ${s.source.width}/${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back (needed)'} |`,
   );
   const omitted =
     steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
@@ -331,4 +323,9 @@ function num(v: number | null | undefined): string {
 
 function capital(s: string): string {
   return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
+}
+
+/** "4 (1 + 3)": networks of the width that met the target, fresh + pruned when both occur. */
+function metCell(w: WidthSummary): string {
+  return w.metBy.pruned > 0 && w.metBy.fresh > 0 ? `${w.met} (${w.metBy.fresh} + ${w.metBy.pruned})` : String(w.met);
 }

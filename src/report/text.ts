@@ -4,15 +4,7 @@
  */
 import type { DataChanges } from '../gate/types.js';
 import { escapeText as plain } from '../common/escape.js';
-import {
-  formatCount,
-  formatDelta,
-  formatMetric,
-  formatSeconds,
-  neurons,
-  successRate,
-  targetPhrase,
-} from '../common/format.js';
+import { formatCount, formatDelta, formatMetric, formatSeconds, neurons, targetPhrase } from '../common/format.js';
 import type { Report } from './types.js';
 import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf } from './view.js';
 
@@ -36,7 +28,7 @@ export function renderText(report: Report): string {
     ['', 'baseline', 'this change'],
     ['smallest adequate width', b?.width == null ? dash : String(b.width), cWidth],
     [`${view.metricName} at that width`, fmt(b?.metric), fmt(c.metric)],
-    ['restarts reaching target there', rate(b?.reached, b?.restarts), rate(c.reached, c.restarts)],
+    ['networks meeting target there', b?.met == null ? dash : String(b.met), c.met === null ? dash : String(c.met)],
     [
       'data rows',
       b?.rows == null ? dash : formatCount(b.rows),
@@ -50,6 +42,10 @@ export function renderText(report: Report): string {
   ];
   for (const [name, before, after] of table)
     out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
+  if (view.backing !== null) {
+    out.push('');
+    out.push(...wrap(view.backing, ''));
+  }
   out.push('');
   const terms = [`target: ${targetPhrase(view.metricName, view.threshold)}`];
   if (report.gate) {
@@ -61,18 +57,16 @@ export function renderText(report: Report): string {
 
   if (view.rows.length > 0) {
     out.push('');
-    out.push(`${view.metricName} by width (best over restarts; reached/run)`);
-    const head = b
-      ? ['width', 'this change', 'reached', 'baseline', 'reached']
-      : ['width', 'best', 'reached', 'wilson 95%'];
+    out.push(`${view.metricName} by width (best network; networks that met the target)`);
+    const head = b ? ['width', 'this change', 'met', 'baseline', 'met'] : ['width', 'best', 'met', 'wilson 95%'];
     out.push(head.map((h, i) => (i === 0 ? h.padStart(7) : h.padStart(14))).join(''));
     for (const r of view.rows) {
       const cells = [
         `${r.width === c.width ? '>' : ' '}${String(r.width).padStart(6)}`,
         fmt(r.current?.best),
-        r.current ? rate(r.current.reached, r.current.restarts) : dash,
+        r.current ? String(r.current.met) : dash,
       ];
-      if (b) cells.push(fmt(r.baseline?.best), r.baseline ? rate(r.baseline.reached, r.baseline.restarts) : dash);
+      if (b) cells.push(fmt(r.baseline?.best), r.baseline ? String(r.baseline.met) : dash);
       else cells.push(r.current ? `${r.current.wilson[0].toFixed(2)}-${r.current.wilson[1].toFixed(2)}` : dash);
       out.push(cells.map((x, i) => (i === 0 ? x : x.padStart(14))).join(''));
     }
@@ -89,7 +83,7 @@ export function renderText(report: Report): string {
 
   const pruning = report.search?.pruning ?? [];
   if (pruning.length > 0) {
-    const removed = pruning.filter((s) => s.kept).length;
+    const removed = pruning.filter((s) => s.accepted).length;
     out.push('');
     out.push(
       `pruning: ${pruning.length} step${pruning.length === 1 ? '' : 's'}, ${removed} neuron${removed === 1 ? '' : 's'} removed`,
@@ -178,10 +172,6 @@ function wrap(text: string, first: string, rest: string = first): string[] {
 
 function fmt(v: number | null | undefined): string {
   return v === null || v === undefined ? '-' : formatMetric(v);
-}
-
-function rate(reached: number | null | undefined, restarts: number | null | undefined): string {
-  return successRate(reached, restarts).replace('—', '-');
 }
 
 function ascii(s: string): string {

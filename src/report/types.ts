@@ -1,5 +1,5 @@
 import type { MetricName, Task } from '../config/types.js';
-import type { PruneStep, SearchOutcome, WidthSummary } from '../search/types.js';
+import type { JudgingRows, SearchOutcome, WidthSummary } from '../search/types.js';
 import type { BaselineWidth, DataChanges, HistoryEntry } from '../gate/types.js';
 
 export type { Verdict } from '../gate/types.js';
@@ -10,19 +10,20 @@ import type { Verdict } from '../gate/types.js';
  * is identical for identical inputs, whatever the machine.
  */
 export interface Report {
-  schema: 'neuron-budget/report@1';
+  schema: 'neuron-budget/report@2';
   tool: { name: 'neuron-budget'; version: string };
   verdict: Verdict;
   reasons: string[];
   width: number | null;
+  /** The witness's metric on the rows that judged it (`search.judging`), after its training was polished. */
   metric: { name: MetricName; value: number | null; threshold: number };
   baseline: {
     width: number | null;
     metric: number | null;
     /** Baseline file as written in the config. */
     file?: string;
-    /** Success at the baseline's width: restarts that reached the target, restarts run. */
-    reached?: number | null;
+    /** Networks of the baseline's width that met the target, and the fresh restarts run there. */
+    met?: number | null;
     restarts?: number | null;
     rows?: number;
     /** Search time recorded in the baseline file (an input, so not a figure of this run). */
@@ -43,6 +44,7 @@ export interface Report {
     droppedRows: number;
     trainRows: number;
     validationRows: number;
+    judgingRows: number;
     inputs: number;
     outputs: number;
     task: Task;
@@ -50,12 +52,19 @@ export interface Report {
     classes: { label: string; count: number }[] | null;
   };
   search: {
-    outcome: SearchOutcome | null;
+    outcome: SearchOutcome;
+    /** Smallest width adequate on fresh restarts alone (where growth stopped); null if none. */
     grownWidth: number | null;
+    /** Networks of one width that must meet the target for the width to be adequate (search.required). */
+    required: number;
     widths: WidthSummary[];
-    pruning: PruneStep[];
+    pruning: ReportPruneStep[];
     trainings: number;
-    note: string | null;
+    /** Why no width is adequate, or how far an unfinished search got. */
+    notes: string[];
+    judging: JudgingRows;
+    /** The network behind `width` (or, when none is adequate, the best that met the target), or null. */
+    witness: ReportWitness | null;
   } | null;
   /** Data changes against the baseline (filled by the gate); null without a baseline. */
   changes: DataChanges | null;
@@ -64,3 +73,35 @@ export interface Report {
 
 /** The report while it is being assembled: everything but the gate's verdict. */
 export type ReportDraft = Omit<Report, 'verdict'>;
+
+/** A training as screens and files name it: its width and its restart, counted from 1. */
+export interface ReportSource {
+  width: number;
+  restart: number;
+}
+
+export interface ReportPruneStep {
+  source: ReportSource;
+  /** Width before the removal. */
+  width: number;
+  /** The neuron removed (0-based index in the network before the step). */
+  neuron: number;
+  steeringBefore: number;
+  steeringAfter: number;
+  /** true: the removal was kept; false: it was undone (the steering rows no longer met the target). */
+  accepted: boolean;
+  judged: number | null;
+}
+
+export interface ReportWitness {
+  width: number;
+  how: 'fresh' | 'pruned';
+  source: ReportSource;
+  /** On the judging rows (the figure that decides), the steering rows and the training rows. */
+  judged: number;
+  steering: number;
+  train: number;
+  met: boolean;
+  /** Its width is adequate (false only when no width is: then it is the best network that met the target). */
+  adequate: boolean;
+}

@@ -10,7 +10,8 @@ import type { Report, Verdict } from './types.js';
 export interface SideFacts {
   width: number | null;
   metric: number | null;
-  reached: number | null;
+  /** Networks of that width that met the target, and fresh restarts run there. */
+  met: number | null;
   restarts: number | null;
   rows: number | null;
   searchSeconds: number | null;
@@ -32,6 +33,8 @@ export interface ReportView {
   baseline: SideFacts | null;
   /** This change's width was found by pruning below the grown width. */
   prunedFrom: number | null;
+  /** How this change's width is backed, in one sentence (the same on every screen); null without a width. */
+  backing: string | null;
   rows: WidthRow[];
   history: HistoryEntry[];
   baselineFile: string | null;
@@ -67,7 +70,7 @@ export function viewOf(report: Report): ReportView {
     current: {
       width: report.width,
       metric: report.metric.value,
-      reached: at ? at.reached : null,
+      met: at ? at.met : null,
       restarts: at ? at.restarts : null,
       rows: report.data.rows,
       searchSeconds: typeof searchSeconds === 'number' ? searchSeconds : null,
@@ -76,13 +79,14 @@ export function viewOf(report: Report): ReportView {
       ? {
           width: b.width,
           metric: b.metric,
-          reached: b.reached ?? null,
+          met: b.met ?? null,
           restarts: b.restarts ?? null,
           rows: b.rows ?? null,
           searchSeconds: b.searchSeconds ?? null,
         }
       : null,
     prunedFrom: grown !== null && report.width !== null && grown !== report.width ? grown : null,
+    backing: at ? backingSentence(at, report) : null,
     rows: [...byWidth.values()].sort((x, y) => x.width - y.width),
     history: b?.history ?? [],
     baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
@@ -108,4 +112,20 @@ export function currentWidthCell(
 export function overDeviceBudget(report: Report): boolean {
   const budget = report.gate?.maxWidth ?? null;
   return budget !== null && report.width !== null && report.width > budget;
+}
+
+/**
+ * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
+ * wider networks); 3 are required." One definition of the backing, shown by every screen.
+ */
+export function backingSentence(w: WidthSummary, report: Report): string {
+  const judging = report.search?.judging.on ?? 'judging';
+  const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
+  const parts: string[] = [];
+  if (w.restarts > 0) parts.push(`${w.metBy.fresh} of ${w.restarts} fresh restart${w.restarts === 1 ? '' : 's'}`);
+  if (w.metBy.pruned > 0) parts.push(`${w.metBy.pruned} pruned from wider networks`);
+  const required = report.search?.required ?? null;
+  const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
+  const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
+  return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
 }

@@ -6,14 +6,14 @@
 import { Worker } from 'node:worker_threads';
 import type { EncodedDataset } from '../data/types.js';
 import { taskKey } from './growth.js';
-import type { TaskResult } from './growth.js';
 import { runPruneJob, runTask } from './task.js';
 import type { PruneJob, PruneResult, SearchContext } from './task.js';
-import type { TrainingTask } from './types.js';
+import type { TaskResult, TrainingTask } from './types.js';
 
 export interface Executor {
   readonly size: number;
-  train(task: TrainingTask): Promise<TaskResult>;
+  /** The task's result; null when it gave up because the search's time ran out. */
+  train(task: TrainingTask): Promise<TaskResult | null>;
   prune(job: PruneJob): Promise<PruneResult>;
   /**
    * Give up a growth task whose answer is no longer needed: drop it if queued, tell its
@@ -45,7 +45,8 @@ export function inThreadExecutor(data: EncodedDataset, ctx: SearchContext): Exec
     size: 1,
     async train(task) {
       await yieldToEventLoop();
-      return runTask(data, ctx, task)!; // never cancelled here: nothing runs ahead in one thread
+      // Never discarded here (nothing runs ahead in one thread); null only when the time ran out.
+      return runTask(data, ctx, task);
     },
     async prune(job) {
       await yieldToEventLoop();
@@ -74,12 +75,14 @@ export function shareDataset(data: EncodedDataset): EncodedDataset {
     xTrain: toShared(data.xTrain),
     yTrain: toShared(data.yTrain),
     xValidation: toShared(data.xValidation),
+    xJudging: toShared(data.xJudging),
+    yJudging: toShared(data.yJudging),
     yValidation: toShared(data.yValidation),
   };
 }
 
 interface Pending {
-  resolve: (r: TaskResult | PruneResult) => void;
+  resolve: (r: TaskResult | PruneResult | null) => void;
   reject: (e: Error) => void;
 }
 
@@ -132,7 +135,8 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
       const p = settle(reply.id);
       if (p !== undefined) {
         if (reply.type === 'done') p.resolve(reply.result);
-        else if (reply.type === 'error') p.reject(new Error(reply.message));
+        else if (reply.type === 'cancelled') p.resolve(null);
+        else p.reject(new Error(reply.message));
       }
       pump();
     });
@@ -150,14 +154,14 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
   };
   for (let k = 0; k < size; k++) slots.push(startSlot());
 
-  const submit = <R extends TaskResult | PruneResult>(job: Job): Promise<R> =>
+  const submit = <R extends TaskResult | PruneResult | null>(job: Job): Promise<R> =>
     new Promise<R>((resolve, reject) => {
       if (closed) {
         reject(new Error('search worker pool is closed'));
         return;
       }
       const id = nextId++;
-      pending.set(id, { resolve: resolve as (r: TaskResult | PruneResult) => void, reject });
+      pending.set(id, { resolve: resolve as (r: TaskResult | PruneResult | null) => void, reject });
       if (job.type === 'train') trainIds.set(taskKey(job.task), id);
       queue.push({ id, job });
       pump();
@@ -165,7 +169,7 @@ export function workerPoolExecutor(data: EncodedDataset, ctx: SearchContext, siz
 
   return {
     size,
-    train: (task) => submit<TaskResult>({ type: 'train', task }),
+    train: (task) => submit<TaskResult | null>({ type: 'train', task }),
     prune: (job) => submit<PruneResult>({ type: 'prune', job }),
     discard(task) {
       const id = trainIds.get(taskKey(task));

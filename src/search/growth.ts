@@ -1,47 +1,17 @@
 /**
- * The growth phase as pure functions: the canonical task order, and the decision that
- * walks outcomes in (width, restart) order. Whatever ran beyond the decision point is
- * ignored, so the answer never depends on how many threads or machines produced the
- * outcomes, or in which order they arrived.
+ * The growth phase as pure functions: the canonical task order, and the decision that walks
+ * outcomes in (width, restart) order. Whatever ran beyond the decision point is ignored, so the
+ * answer never depends on how many threads or machines produced the outcomes, or in which order
+ * they arrived.
+ *
+ * Growth walks widths upward and, at each width, restarts in index order, until `required` fresh
+ * restarts of one width met the target (then that width is adequate on fresh networks alone, and
+ * no wider width can be the answer) or max-width is passed. A width stops early once its answer by
+ * fresh restarts is certain: `required` of them met, or more than `restarts − required` did not.
+ * Networks that met at narrower widths are kept: pruning may still make those widths adequate.
  */
-import type { GrowthMode, TargetConfig } from '../config/types.js';
 import type { NetworkJson, StopReason } from '../nn/index.js';
-import type { TrainingOutcome, TrainingTask, WidthSummary } from './types.js';
-import { isBetter } from '../common/metric.js';
-import { wilsonInterval } from './wilson.js';
-
-export interface GrowthPlan {
-  growth: GrowthMode;
-  minWidth: number;
-  maxWidth: number;
-  restarts: number;
-  required: number;
-  /** Cap on growth trainings; null = none. */
-  maxTrainings: number | null;
-}
-
-/** The network's state at the end of its time at one width. */
-export interface Segment {
-  width: number;
-  /** Epochs since the restart began (cumulative over widths for in-place growth). */
-  epochs: number;
-  metric: number;
-  stop: StopReason;
-}
-
-/**
- * What one growth task produced. `width` is the task's width (the starting width for
- * in-place growth); `finalWidth` is the width of the network it ended with.
- */
-export interface TaskResult extends TrainingOutcome {
-  finalWidth: number;
-  /** One entry per width the network passed through (one for fresh growth). */
-  segments: Segment[];
-  /** The trained network, kept when it reached the target (it may be pruned or become the witness). */
-  network: NetworkJson | null;
-  /** Why a diverged training failed; null otherwise. */
-  reason: string | null;
-}
+import type { GrowthPlan, Judged, TaskResult, TrainingTask } from './types.js';
 
 export function taskKey(task: TrainingTask): string {
   return `${task.width}:${task.restart}`;
@@ -66,56 +36,79 @@ export function taskFor(plan: GrowthPlan, width: number, restart: number): Train
 }
 
 /** How restart i fares at width w, derived from its task's result. */
-export interface RestartAtWidth {
+export interface RestartAtWidth extends Judged {
   restart: number;
-  reached: boolean;
-  metric: number;
   epochs: number;
   stop: StopReason;
   reason: string | null;
+  /** The network, when it met the target at this width. */
+  network: NetworkJson | null;
+  /** The growth task it came from. */
+  task: TrainingTask;
 }
 
 /**
- * In-place growth maps onto widths like this: restart i counts as reaching the target
- * at width w when its network reached it at a width no larger than w (a network of
- * fewer neurons that reaches the target is also a width-w network: give the extra
- * neurons zero outgoing weights). Otherwise its metric and epochs at w are those at the
- * end of its time at w; a restart that diverged before w counts as a diverged failure.
+ * In-place growth maps onto widths like this: restart i counts as meeting the target at width w
+ * when its network met it at a width no larger than w (a network of fewer neurons that meets the
+ * target is also a width-w network: give the extra neurons zero outgoing weights). Otherwise its
+ * figures at w are those at the end of its time at w; a restart that diverged before w counts as
+ * a diverged failure.
  */
 export function restartAtWidth(plan: GrowthPlan, result: TaskResult, width: number): RestartAtWidth {
-  const restart = result.restart;
+  const task = { width: result.width, restart: result.restart };
+  const base = { restart: result.restart, task };
+  const judged = (j: Judged): Judged => ({
+    train: j.train,
+    steering: j.steering,
+    judged: j.judged,
+    reached: j.reached,
+    met: j.met,
+  });
   if (plan.growth !== 'in-place') {
     return {
-      restart,
-      reached: result.reached,
-      metric: result.metric,
+      ...base,
+      ...judged(result),
       epochs: result.epochs,
       stop: result.stop,
       reason: result.reason,
+      network: result.network,
     };
   }
-  if (result.reached && result.finalWidth <= width) {
-    return { restart, reached: true, metric: result.metric, epochs: result.epochs, stop: 'reached', reason: null };
+  if (result.met && result.finalWidth <= width) {
+    return {
+      ...base,
+      ...judged(result),
+      epochs: result.epochs,
+      stop: result.stop,
+      reason: null,
+      network: result.network,
+    };
   }
   const seg = result.segments.find((s) => s.width === width);
   if (seg !== undefined) {
     const diverged = seg.stop === 'diverged';
     return {
-      restart,
-      reached: false,
-      metric: seg.metric,
+      ...base,
+      ...judged(seg),
+      met: false,
       epochs: seg.epochs,
       stop: seg.stop,
       reason: diverged ? result.reason : null,
+      network: null,
     };
   }
+  const nan = Number.NaN;
   return {
-    restart,
+    ...base,
+    train: nan,
+    steering: nan,
+    judged: nan,
     reached: false,
-    metric: Number.NaN,
+    met: false,
     epochs: result.epochs,
     stop: 'diverged',
     reason: result.reason,
+    network: null,
   };
 }
 
@@ -126,17 +119,17 @@ export type GrowthDecision =
       task: TrainingTask;
       /** The width being decided. */
       deciding: number;
-      /** Widths decided so far. */
-      widths: WidthSummary[];
+      /** What was decided so far (the width being decided last, with the restarts it has). */
+      tried: { width: number; restarts: RestartAtWidth[] }[];
+      /** Growth trainings used so far. */
       trainings: number;
     }
   | {
       kind: 'decided';
-      /** Smallest adequate width, or null (none up to max-width, or the cap was hit). */
-      adequateWidth: number | null;
-      widths: WidthSummary[];
-      /** Restarts run at the adequate width that reached the target, in restart order. */
-      reachedAtAdequate: RestartAtWidth[];
+      /** The first width whose fresh restarts alone are adequate; null when none up to max-width (or the cap was hit). */
+      grownWidth: number | null;
+      /** Per width tried, in width order: the restarts run there, in restart order. */
+      tried: { width: number; restarts: RestartAtWidth[] }[];
       /** Growth trainings the decision used. */
       trainings: number;
       /** Set when the cap on trainings stopped the walk: the width and restarts it got to. */
@@ -145,13 +138,9 @@ export type GrowthDecision =
 
 export type ResultLookup = (task: TrainingTask) => TaskResult | undefined;
 
-/**
- * Walk widths upward and, at each width, restarts in index order, stopping a width as
- * soon as its answer is certain: `required` successes, or more than `restarts - required`
- * failures. Pure: the same outcomes give the same decision.
- */
-export function decideGrowth(plan: GrowthPlan, target: TargetConfig, lookup: ResultLookup): GrowthDecision {
-  const widths: WidthSummary[] = [];
+/** Walk the widths as the header says. Pure: the same outcomes give the same decision. */
+export function decideGrowth(plan: GrowthPlan, lookup: ResultLookup): GrowthDecision {
+  const tried: { width: number; restarts: RestartAtWidth[] }[] = [];
   const used = new Set<string>();
   const allowedFailures = plan.restarts - plan.required;
   for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
@@ -163,75 +152,39 @@ export function decideGrowth(plan: GrowthPlan, target: TargetConfig, lookup: Res
       const task = taskFor(plan, w, i);
       const key = taskKey(task);
       if (!used.has(key) && plan.maxTrainings !== null && used.size >= plan.maxTrainings) {
+        if (seen.length > 0) tried.push({ width: w, restarts: seen });
         return {
           kind: 'decided',
-          adequateWidth: null,
-          widths,
-          reachedAtAdequate: [],
+          grownWidth: null,
+          tried,
           trainings: used.size,
           capHit: { width: w, restartsRun: seen.length },
         };
       }
       const result = lookup(task);
-      if (result === undefined) return { kind: 'need', task, deciding: w, widths, trainings: used.size };
+      if (result === undefined) {
+        const sofar = seen.length > 0 ? [...tried, { width: w, restarts: seen }] : tried;
+        return { kind: 'need', task, deciding: w, tried: sofar, trainings: used.size };
+      }
       used.add(key);
       const at = restartAtWidth(plan, result, w);
       seen.push(at);
-      if (at.reached) successes++;
+      if (at.met) successes++;
       else failures++;
     }
-    const summary = summarizeWidth(w, seen, successes >= plan.required, target);
-    widths.push(summary);
-    if (summary.adequate) {
-      return {
-        kind: 'decided',
-        adequateWidth: w,
-        widths,
-        reachedAtAdequate: seen.filter((s) => s.reached),
-        trainings: used.size,
-        capHit: null,
-      };
-    }
+    tried.push({ width: w, restarts: seen });
+    if (successes >= plan.required)
+      return { kind: 'decided', grownWidth: w, tried, trainings: used.size, capHit: null };
   }
-  return { kind: 'decided', adequateWidth: null, widths, reachedAtAdequate: [], trainings: used.size, capHit: null };
-}
-
-/** @testOnly */
-export function median(values: readonly number[]): number | null {
-  if (values.length === 0) return null;
-  const s = [...values].sort((a, b) => a - b);
-  const mid = s.length >> 1;
-  return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
-}
-
-export function summarizeWidth(
-  width: number,
-  seen: readonly RestartAtWidth[],
-  adequate: boolean,
-  target: TargetConfig,
-): WidthSummary {
-  const finite = seen.map((s) => s.metric).filter((m) => Number.isFinite(m));
-  let best: number | null = null;
-  for (const m of finite) if (best === null || isBetter(target.metric, m, best)) best = m;
-  const reached = seen.filter((s) => s.reached).length;
-  return {
-    width,
-    restarts: seen.length,
-    reached,
-    adequate,
-    best,
-    median: median(finite),
-    wilson: wilsonInterval(reached, seen.length),
-    medianEpochs: median(seen.map((s) => s.epochs)) ?? 0,
-    diverged: seen.filter((s) => s.stop === 'diverged').length,
-  };
+  return { kind: 'decided', grownWidth: null, tried, trainings: used.size, capHit: null };
 }
 
 /**
  * Merge growth results from anywhere (threads, processes, machines) into the decision.
- * Duplicates must agree; extra results past the decision point are ignored.
+ * Identical duplicates are fine; two different results for one task are refused; extra results
+ * past the decision point are ignored.
  */
-export function mergeOutcomes(plan: GrowthPlan, target: TargetConfig, results: Iterable<TaskResult>): GrowthDecision {
+export function mergeOutcomes(plan: GrowthPlan, results: Iterable<TaskResult>): GrowthDecision {
   const byKey = new Map<string, TaskResult>();
   for (const r of results) {
     const key = taskKey(r);
@@ -242,5 +195,5 @@ export function mergeOutcomes(plan: GrowthPlan, target: TargetConfig, results: I
     }
     byKey.set(key, r);
   }
-  return decideGrowth(plan, target, (t) => byKey.get(taskKey(t)));
+  return decideGrowth(plan, (t) => byKey.get(taskKey(t)));
 }

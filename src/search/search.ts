@@ -1,21 +1,33 @@
 /**
- * The growth-and-prune search: find the smallest hidden width whose networks reach the
- * target, and hold a trained network (the witness) that proves it.
+ * The growth-and-prune search: find the smallest hidden width at which enough networks meet the
+ * target (tally.ts has the one definition), and hold a trained network (the witness) that shows it.
+ *
+ * 1. Growth (growth.ts): fresh seeded restarts, width by width upward, until one width is
+ *    adequate on fresh restarts alone.
+ * 2. Prune (task.ts): every network that met the target at that width or below is shrunk one
+ *    neuron at a time while the steering rows still meet the target; each smaller network that
+ *    also meets it on the judging rows counts for its width.
+ * 3. Tally: the smallest width with `required` networks that met the target is the answer.
  */
 import { availableParallelism } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import type { SearchConfig, TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
 import type { TrainOptions } from '../nn/index.js';
-import { inThreadExecutor, workerPoolExecutor } from './executor.js';
-import type { Executor } from './executor.js';
-import { targetShort } from '../common/format.js';
+import { inThreadExecutor, workerPoolExecutor, type Executor } from './executor.js';
+import { decideGrowth, planTasks, taskKey, type GrowthDecision, type RestartAtWidth } from './growth.js';
+import { judgingRowsOf } from './judge.js';
+import { notFoundNotes, stoppedGrowingNote, stoppedPruningNote } from './notes.js';
+import { tally } from './tally.js';
+import {
+  DEFAULT_PRUNE_CANDIDATES,
+  DEFAULT_STALL,
+  type PruneJob,
+  type PruneResult,
+  type SearchContext,
+} from './task.js';
 import { isBetter } from '../common/metric.js';
-import { decideGrowth, planTasks, taskFor, taskKey } from './growth.js';
-import type { GrowthDecision, GrowthPlan, TaskResult } from './growth.js';
-import { DEFAULT_PRUNE_CANDIDATES, DEFAULT_STALL, pickWitness } from './task.js';
-import type { PruneResult, SearchContext } from './task.js';
-import type { ProgressEvent, SearchResult, WidthSummary } from './types.js';
+import type { GrowthPlan, ProgressEvent, SearchResult, TaskResult } from './types.js';
 
 export interface SearchOptions {
   /** Worker threads; null/undefined: search.workers, else the machine's available parallelism. */
@@ -26,10 +38,12 @@ export interface SearchOptions {
    */
   workerEntry?: string | null;
   onProgress?: (event: ProgressEvent) => void;
-  /** Milliseconds clock, for the time budget and `timing` (tests may inject one). */
+  /** Milliseconds clock for `timing` (tests may inject one). The time budget reads Date.now(). */
   now?: () => number;
   stall?: { window: number; threshold: number };
   pruneCandidates?: number;
+  /** The data split asked for judging rows but folded them into the validation rows (small data). */
+  judgingFolded?: boolean;
 }
 
 export function growthPlan(search: SearchConfig): GrowthPlan {
@@ -38,7 +52,7 @@ export function growthPlan(search: SearchConfig): GrowthPlan {
     minWidth: search.minWidth,
     maxWidth: search.maxWidth,
     restarts: search.restarts,
-    // A width is only adequate with a network to show for it: at least one restart must reach.
+    // A width is only adequate with a network to show for it: at least one must meet the target.
     required: Math.max(1, search.required),
     maxTrainings: search.maxTrainings,
   };
@@ -51,6 +65,8 @@ export function searchContext(search: SearchConfig, target: TargetConfig, option
     optimizer: search.optimizer,
     maxEpochs: search.maxEpochs,
     checkEvery: search.checkEvery,
+    patience: search.patience,
+    weightDecay: search.weightDecay,
     target: { ...target },
     stall: null,
   };
@@ -61,6 +77,7 @@ export function searchContext(search: SearchConfig, target: TargetConfig, option
     stall: { ...(options.stall ?? DEFAULT_STALL) },
     pruneEpochs: search.pruneEpochs,
     pruneCandidates: options.pruneCandidates ?? DEFAULT_PRUNE_CANDIDATES,
+    deadline: search.timeBudget === null ? null : Date.now() + search.timeBudget * 1000,
   };
 }
 
@@ -69,28 +86,71 @@ export function workerCount(search: SearchConfig, options: SearchOptions): numbe
   return Math.max(1, Math.floor(n));
 }
 
-function fmt(x: number | null): string {
-  return x === null || !Number.isFinite(x) ? 'none' : String(Number(x.toPrecision(4)));
+/** Resolves when the deadline passes (never without one); the timer does not keep the process alive. */
+function timeUp(deadline: number | null): Promise<'time'> {
+  if (deadline === null) return new Promise(() => undefined);
+  return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
 }
 
-function span(from: number, to: number): string {
-  return from === to ? `width ${from}` : `widths ${from}–${to}`;
+/** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
+async function grow(
+  ctx: SearchContext,
+  executor: Executor,
+  target: TargetConfig,
+  progress: (e: ProgressEvent) => void,
+): Promise<{ decision: GrowthDecision; results: Map<string, TaskResult>; outOfTime: boolean }> {
+  const plan = ctx.plan;
+  const canon = planTasks(plan);
+  const position = new Map(canon.map((t, k) => [taskKey(t), k]));
+  const results = new Map<string, TaskResult>();
+  const inflight = new Map<string, Promise<TaskResult | null>>();
+  const clock = timeUp(ctx.deadline);
+  let best: number | null = null;
+  for (;;) {
+    const decision = decideGrowth(plan, (t) => results.get(taskKey(t)));
+    // Tasks before the first undecided one that are still running can no longer matter.
+    const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
+    for (const key of [...inflight.keys()]) {
+      if ((position.get(key) ?? 0) < frontier) {
+        const [w, i] = key.split(':').map(Number);
+        executor.discard({ width: w, restart: i });
+        inflight.delete(key);
+      }
+    }
+    if (decision.kind === 'decided') return { decision, results, outOfTime: false };
+    if (ctx.deadline !== null && Date.now() >= ctx.deadline) return { decision, results, outOfTime: true };
+    for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
+      const key = taskKey(canon[k]);
+      if (results.has(key) || inflight.has(key)) continue;
+      inflight.set(key, executor.train(canon[k]));
+    }
+    const keyed = [...inflight.entries()].map(([key, p]) => p.then((r) => ({ key, r })));
+    const done = await Promise.race([...keyed, clock]);
+    if (done === 'time') return { decision, results, outOfTime: true };
+    inflight.delete(done.key);
+    // A task handed back without a result gave up because the time ran out.
+    if (done.r === null) return { decision, results, outOfTime: true };
+    results.set(done.key, done.r);
+    if (Number.isFinite(done.r.judged) && (best === null || isBetter(target.metric, done.r.judged, best)))
+      best = done.r.judged;
+    progress({ phase: 'growth', width: done.r.finalWidth, restart: done.r.restart, epoch: done.r.epochs, best });
+  }
 }
 
-function notFoundNote(plan: GrowthPlan, target: TargetConfig, widths: WidthSummary[]): string {
-  const best = widths.map((w) => `${w.width}: ${fmt(w.best)}`).join(', ');
-  return (
-    `No width from ${plan.minWidth} to ${plan.maxWidth} had ${plan.required} of ${plan.restarts} restarts reach ` +
-    `${targetShort(target.metric, target.threshold)}; best validation ${target.metric} per width: ${best}.`
-  );
-}
-
-function stoppedNote(plan: GrowthPlan, why: string, atWidth: number, trainings: number): string {
-  const below =
-    atWidth > plan.minWidth
-      ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate`
-      : '';
-  return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
+/** Every network that met the target at the grown width or below, once each, in (width, restart) order. */
+function pruneSources(tried: { width: number; restarts: RestartAtWidth[] }[], grownWidth: number | null): PruneJob[] {
+  const jobs: PruneJob[] = [];
+  const seen = new Set<string>();
+  for (const { width, restarts } of tried) {
+    if (grownWidth !== null && width > grownWidth) continue;
+    for (const r of restarts) {
+      const key = taskKey(r.task);
+      if (!r.met || r.network === null || seen.has(key)) continue;
+      seen.add(key);
+      jobs.push({ source: r.task, network: r.network });
+    }
+  }
+  return jobs;
 }
 
 /** Run the whole search. Outside `timing`, the result depends only on the data, the config and the code. */
@@ -109,125 +169,85 @@ export async function runSearch(
   const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
   const executor: Executor =
     size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
-  const deadline = search.timeBudget === null ? Number.POSITIVE_INFINITY : t0 + search.timeBudget * 1000;
-  let bestSoFar: number | null = null;
   const progress = (e: ProgressEvent): void => options.onProgress?.(e);
+  const judging = judgingRowsOf(data, options.judgingFolded ?? false);
+  const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
+  const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
 
   try {
-    // Growth phase: keep every thread busy with tasks in canonical order from the first undecided one.
-    const canon = planTasks(plan);
-    const position = new Map(canon.map((t, k) => [taskKey(t), k]));
-    const results = new Map<string, TaskResult>();
-    const inflight = new Map<string, Promise<TaskResult>>();
-    let decision: GrowthDecision;
-    for (;;) {
-      decision = decideGrowth(plan, target, (t) => results.get(taskKey(t)));
-      // Tasks before the first undecided one that are still running can no longer matter.
-      const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
-      for (const key of [...inflight.keys()]) {
-        if ((position.get(key) ?? 0) < frontier) {
-          const [w, i] = key.split(':').map(Number);
-          executor.discard({ width: w, restart: i });
-          inflight.delete(key);
-        }
-      }
-      if (decision.kind === 'decided') break;
-      if (now() >= deadline) break;
-      for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
-        const key = taskKey(canon[k]);
-        if (results.has(key) || inflight.has(key)) continue;
-        inflight.set(key, executor.train(canon[k]));
-      }
-      const done = await Promise.race([...inflight.values()]);
-      const key = taskKey(done);
-      inflight.delete(key);
-      results.set(key, done);
-      if (Number.isFinite(done.metric) && (bestSoFar === null || isBetter(target.metric, done.metric, bestSoFar))) {
-        bestSoFar = done.metric;
-      }
-      progress({ phase: 'growth', width: done.finalWidth, restart: done.restart, epoch: done.epochs, best: bestSoFar });
-    }
+    const grown = await grow(ctx, executor, target, progress);
     const growthEnd = now();
-    const timing = (pruneEnd: number) => ({
-      searchSeconds: (pruneEnd - t0) / 1000,
+    const timing = (end: number) => ({
+      searchSeconds: (end - t0) / 1000,
       growthSeconds: (growthEnd - t0) / 1000,
-      pruneSeconds: (pruneEnd - growthEnd) / 1000,
+      pruneSeconds: (end - growthEnd) / 1000,
     });
+    const base = { grownWidth: null, metric: null, witness: null, pruning: [], judging };
 
-    if (decision.kind === 'need' || decision.capHit !== null || decision.adequateWidth === null) {
-      let outcome: SearchResult['outcome'] = 'not-found';
-      let note: string;
-      if (decision.kind === 'need') {
-        outcome = 'inconclusive';
-        const why = `The time budget of ${search.timeBudget} s ran out`;
-        note = stoppedNote(plan, why, decision.deciding, decision.trainings);
-      } else if (decision.capHit !== null) {
-        outcome = 'inconclusive';
-        note = stoppedNote(
-          plan,
-          `The cap of ${search.maxTrainings} trainings was reached`,
-          decision.capHit.width,
-          decision.trainings,
-        );
-      } else {
-        note = notFoundNote(plan, target, decision.widths);
-      }
+    const decision = grown.decision;
+    if (decision.kind === 'need') {
       return {
-        outcome,
+        ...base,
+        outcome: 'inconclusive',
         width: null,
-        grownWidth: null,
-        metric: null,
-        witness: null,
-        widths: decision.widths,
-        pruning: [],
+        widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
         trainings: decision.trainings,
-        note,
+        notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings)],
+        timing: timing(now()),
+      };
+    }
+    if (decision.capHit !== null) {
+      const why = `The cap of ${search.maxTrainings} trainings was reached`;
+      return {
+        ...base,
+        outcome: 'inconclusive',
+        width: null,
+        widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
+        trainings: decision.trainings,
+        notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings)],
         timing: timing(now()),
       };
     }
 
-    // Prune phase: shrink every network that reached the target at the adequate width.
-    const grownWidth = decision.adequateWidth;
-    const reachedTasks = decision.reachedAtAdequate.map((r) =>
-      results.get(taskKey(taskFor(plan, grownWidth, r.restart)))!,
+    // Prune phase: shrink every network that met the target at the grown width or below.
+    const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+    const pruned: PruneResult[] = await Promise.all(
+      jobs.map(async (job) => {
+        const r = await executor.prune(job);
+        const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
+        progress({ phase: 'prune', width: last, restart: job.source.restart, epoch: r.steps.length, best: null });
+        return r;
+      }),
     );
-    let pruned: PruneResult[];
-    if (search.prune) {
-      pruned = await Promise.all(
-        reachedTasks.map(async (t) => {
-          const r = await executor.prune({ task: { width: t.width, restart: t.restart }, network: t.network! });
-          progress({ phase: 'prune', width: r.width, restart: r.restart, epoch: r.steps.length, best: r.metric });
-          return r;
-        }),
-      );
-    } else {
-      pruned = reachedTasks.map((t) => ({
-        restart: t.restart,
-        grownWidth: t.finalWidth,
-        width: t.finalWidth,
-        metric: t.metric,
-        network: t.network!,
-        steps: [],
-        trainings: 0,
-      }));
+    const trainings = decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0);
+    const t = tally(plan, target, decision.tried, pruned, ctx.seed);
+    const steps = pruned.flatMap((r) => r.steps);
+    if (pruned.some((r) => r.interrupted) && decision.grownWidth !== null) {
+      return {
+        ...base,
+        outcome: 'inconclusive',
+        grownWidth: decision.grownWidth,
+        width: null,
+        witness: t.witness,
+        widths: t.widths,
+        pruning: steps,
+        trainings,
+        notes: [stoppedPruningNote(budgetWhy, decision.grownWidth, trainings)],
+        timing: timing(now()),
+      };
     }
-    const win = pickWitness(pruned)!;
+    const found = t.width !== null && t.witness !== null;
     return {
-      outcome: 'found',
-      width: win.width,
-      grownWidth,
-      metric: win.metric,
-      witness: {
-        restart: win.restart,
-        seed: search.seed,
-        grownWidth: win.grownWidth,
-        network: win.network,
-        metric: win.metric,
-      },
-      widths: decision.widths,
-      pruning: pruned.flatMap((r) => r.steps),
-      trainings: decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0),
-      note: null,
+      outcome: found ? 'found' : 'not-found',
+      width: found ? t.width : null,
+      grownWidth: decision.grownWidth,
+      metric: found ? t.witness!.judged : null,
+      witness: t.witness,
+      widths: t.widths,
+      pruning: steps,
+      trainings,
+      notes: found ? [] : notFoundNotes(plan, target, t.widths, judgedOn),
+      judging,
       timing: timing(now()),
     };
   } finally {

@@ -1,16 +1,16 @@
 /**
  * One unit of work, runnable in any thread: a growth task (one seeded training, or one
- * network grown in place) or a prune job (shrinking one network that reached the target).
- * Everything here is a pure function of (data, context, task): no clocks, no shared state.
+ * network grown in place) or a prune job (shrinking one network that met the target).
+ * Everything here is a pure function of (data, context, task): no shared state, and the clock is
+ * read only through `cancelled`, which can only end a task early (the caller then discards it).
  */
+import { rngFor } from '../common/random.js';
 import type { TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
-import { meetsThreshold } from '../common/metric.js';
-import { rngFor } from '../common/random.js';
 import { createTrainer, trainerFromNetwork } from '../nn/index.js';
-import type { NetworkJson, Trainer, TrainOptions, TrainRecord } from '../nn/index.js';
-import type { GrowthPlan, Segment, TaskResult } from './growth.js';
-import type { PruneStep, TrainingTask } from './types.js';
+import type { NetworkJson, Trainer, TrainOptions } from '../nn/index.js';
+import { judge } from './judge.js';
+import type { GrowthPlan, Judged, PruneStep, Segment, TaskResult, TrainingTask } from './types.js';
 
 /** Everything a thread needs besides the data; plain JSON so it can be posted to a worker. */
 export interface SearchContext {
@@ -23,6 +23,8 @@ export interface SearchContext {
   pruneEpochs: number;
   /** Least-salient neurons tried per prune step before pruning stops. */
   pruneCandidates: number;
+  /** Wall-clock time (Date.now()) at which running work gives up; null: no time budget. */
+  deadline: number | null;
 }
 
 /**
@@ -35,23 +37,24 @@ export const DEFAULT_STALL = { window: 100, threshold: 0.05 } as const;
 /** Engineering choice: try the three least salient neurons before giving up a prune step. */
 export const DEFAULT_PRUNE_CANDIDATES = 3;
 
-function reachedBy(rec: TrainRecord, target: TargetConfig): boolean {
-  if (rec.stop === 'diverged') return false;
-  return rec.stop === 'reached' || meetsThreshold(rec.validationMetric, target);
-}
-
 const never = (): boolean => false;
 
 function divergedReason(width: number, epochs: number): string {
   return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
 
+/** Gives up when the caller says so or the search's time is up. */
+export function stopWhen(ctx: SearchContext, cancelled: () => boolean): () => boolean {
+  const deadline = ctx.deadline;
+  return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
+}
+
 /**
  * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
- * null only when `cancelled` said so (the answer was no longer needed).
- * In-place growth (Dynamic Node Creation) starts at the task's width and gives every
- * width up to max-epochs; a neuron is added when the error curve flattens (the stall
- * trigger) or that budget runs out, until the target is reached or max-width is hit.
+ * null only when `cancelled` (or the time budget) said to give up.
+ * In-place growth (Dynamic Node Creation) starts at the task's width and gives every width up to
+ * max-epochs; a neuron is added when the error curve flattens (the stall trigger) or that budget
+ * runs out, until the target is met or max-width is hit.
  */
 export function runTask(
   data: EncodedDataset,
@@ -62,7 +65,11 @@ export function runTask(
   const { plan, train } = ctx;
   const inPlace = plan.growth === 'in-place';
   const rng = rngFor(ctx.seed, task.width, task.restart);
-  const options: TrainOptions = { ...train, stall: inPlace ? { ...ctx.stall } : null, interrupted: cancelled };
+  const options: TrainOptions = {
+    ...train,
+    stall: inPlace ? { ...ctx.stall } : null,
+    interrupted: stopWhen(ctx, cancelled),
+  };
   const trainer = createTrainer(data, task.width, options, rng);
   const segments: Segment[] = [];
   let epochs = 0;
@@ -71,68 +78,78 @@ export function runTask(
     if (rec.stop === 'interrupted') return null;
     epochs += rec.epochs;
     const width = trainer.network.width;
-    const reached = reachedBy(rec, train.target);
-    segments.push({ width, epochs, metric: rec.validationMetric, stop: reached ? 'reached' : rec.stop });
-    const done = reached || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
+    const network = rec.stop === 'diverged' ? null : trainer.snapshot();
+    const judged = judge(data, network, rec, train.target);
+    segments.push({ width, epochs, stop: rec.stop, ...judged });
+    const done = judged.met || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
     if (done) {
-      const diverged = rec.stop === 'diverged';
       return {
         width: task.width,
         restart: task.restart,
-        reached,
-        stop: reached ? 'reached' : rec.stop,
+        ...judged,
+        stop: rec.stop,
         epochs,
-        metric: rec.validationMetric,
         finalWidth: width,
         segments,
-        network: reached ? trainer.snapshot() : null,
-        reason: diverged ? divergedReason(width, epochs) : null,
+        network: judged.met ? network : null,
+        reason: rec.stop === 'diverged' ? divergedReason(width, epochs) : null,
       };
     }
-    // Stalled (or out of epochs at this width): add a neuron that leaves the function unchanged and keep training.
+    // Out of patience or epochs at this width: add a neuron that leaves the function unchanged and keep training.
     trainer.addNeuron(rng);
   }
 }
 
 export interface PruneJob {
   /** The growth task whose network is pruned. */
-  task: TrainingTask;
-  /** That task's trained network. */
+  source: TrainingTask;
+  /** That task's network, which met the target. */
+  network: NetworkJson;
+}
+
+/** A network one removal smaller than the one before it in its chain, kept because the steering rows still met the target. */
+export interface ChainLink extends Judged {
+  width: number;
   network: NetworkJson;
 }
 
 export interface PruneResult {
-  restart: number;
-  /** Width of the network before pruning. */
-  grownWidth: number;
-  width: number;
-  metric: number;
-  network: NetworkJson;
+  source: TrainingTask;
+  /** The smaller networks, widest first. */
+  chain: ChainLink[];
   steps: PruneStep[];
   /** Retrainings run (one per removal tried). */
   trainings: number;
+  /** The time budget ran out before the chain ended. */
+  interrupted: boolean;
 }
 
 /**
- * Shrink one network by compensated ablation: score every hidden neuron by the loss
- * increase of removing it with its mean activation folded into the output biases,
- * remove the least salient, retrain for `pruneEpochs`, and keep the removal only if
- * the network still reaches the target; otherwise restore and try the next candidate.
+ * Shrink one network by compensated ablation: score every hidden neuron by the loss increase of
+ * removing it with its mean activation folded into the output biases, remove the least salient,
+ * retrain for at most `pruneEpochs`, and keep the removal only if the steering rows still meet the
+ * target; otherwise restore and try the next candidate. Each kept network is judged on the judging
+ * rows (that decides whether it counts for its width), but the judging rows never decide whether a
+ * removal is kept.
  */
-export function runPruneJob(data: EncodedDataset, ctx: SearchContext, job: PruneJob): PruneResult {
-  const target = ctx.train.target;
-  const retrain: TrainOptions = { ...ctx.train, stall: null };
+export function runPruneJob(
+  data: EncodedDataset,
+  ctx: SearchContext,
+  job: PruneJob,
+  cancelled: () => boolean = never,
+): PruneResult {
+  const target: TargetConfig = ctx.train.target;
+  const retrain: TrainOptions = { ...ctx.train, stall: null, interrupted: stopWhen(ctx, cancelled) };
   // Every restore starts from a snapshot with fresh optimiser state, so the result does not
   // depend on which thread ran the growth task.
   const fromSnapshot = (net: NetworkJson): Trainer =>
-    trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.task.width, job.task.restart));
+    trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.source.width, job.source.restart));
   let trainer = fromSnapshot(job.network);
-  let trainings = 0;
-
-  const grownWidth = trainer.network.width;
-  let metric = trainer.evaluate().validationMetric;
-  let network = trainer.snapshot();
+  let steering = trainer.evaluate().steeringMetric;
+  let network = job.network;
+  const chain: ChainLink[] = [];
   const steps: PruneStep[] = [];
+  let trainings = 0;
   while (trainer.network.width > 1) {
     const width = trainer.network.width;
     const order = leastSalientFirst(trainer.saliency());
@@ -143,13 +160,24 @@ export function runPruneJob(data: EncodedDataset, ctx: SearchContext, job: Prune
       if (dirty) trainer = fromSnapshot(network);
       trainer.removeNeuron(j);
       const rec = trainer.run(ctx.pruneEpochs);
+      if (rec.stop === 'interrupted') return { source: job.source, chain, steps, trainings, interrupted: true };
       trainings++;
-      const after = rec.stop === 'diverged' ? Number.NaN : trainer.evaluate().validationMetric;
-      const ok = Number.isFinite(after) && meetsThreshold(after, target);
-      steps.push({ restart: job.task.restart, width, neuron: j, metricBefore: metric, metricAfter: after, kept: ok });
-      if (ok) {
-        metric = after;
-        network = trainer.snapshot();
+      const smaller = rec.stop === 'diverged' ? null : trainer.snapshot();
+      const judged = judge(data, smaller, rec, target);
+      const accepted = smaller !== null && judged.reached;
+      steps.push({
+        source: job.source,
+        width,
+        neuron: j,
+        steeringBefore: steering,
+        steeringAfter: judged.steering,
+        accepted,
+        judged: accepted ? judged.judged : null,
+      });
+      if (accepted && smaller !== null) {
+        steering = judged.steering;
+        network = smaller;
+        chain.push({ width: width - 1, network: smaller, ...judged });
         removed = true;
         break;
       }
@@ -157,7 +185,7 @@ export function runPruneJob(data: EncodedDataset, ctx: SearchContext, job: Prune
     }
     if (!removed) break;
   }
-  return { restart: job.task.restart, grownWidth, width: network.width, metric, network, steps, trainings };
+  return { source: job.source, chain, steps, trainings, interrupted: false };
 }
 
 /** Neuron indices by ascending saliency; ties (and NaN) resolved by index so the order is total. */
@@ -166,13 +194,4 @@ export function leastSalientFirst(saliency: Float64Array): number[] {
   const key = (j: number): number => (Number.isFinite(saliency[j]) ? saliency[j] : Number.POSITIVE_INFINITY);
   idx.sort((a, b) => key(a) - key(b) || a - b);
   return idx;
-}
-
-/** Smallest pruned network wins; ties go to the lowest restart index. */
-export function pickWitness(results: readonly PruneResult[]): PruneResult | null {
-  let best: PruneResult | null = null;
-  for (const r of results) {
-    if (best === null || r.width < best.width || (r.width === best.width && r.restart < best.restart)) best = r;
-  }
-  return best;
 }

@@ -1,72 +1,110 @@
+import type { GrowthMode } from '../config/types.js';
 import type { NetworkJson, StopReason } from '../nn/index.js';
 
 /** One (width, restart) training: the unit of work that can run anywhere and be merged. */
 export interface TrainingTask {
   width: number;
+  /** 0-based internally (it seeds the restart's random stream); screens show it from 1. */
   restart: number;
 }
 
-export interface TrainingOutcome extends TrainingTask {
+/** How one trained network did: on the steering rows (which stopped its training) and on the judging rows. */
+export interface Judged {
+  /** The target metric on the training rows. */
+  train: number;
+  /** The target metric on the steering rows (validation rows, or training rows when there are none). */
+  steering: number;
+  /** The target metric on the judging rows: the figure that decides. NaN when the training diverged. */
+  judged: number;
+  /** The steering rows met the target (training stopped there, or was polished to it). */
   reached: boolean;
-  stop: StopReason;
-  epochs: number;
-  /** Target metric on the validation rows (training rows when there are none). */
-  metric: number;
+  /** The judging rows met the target: this network counts toward its width's adequacy. */
+  met: boolean;
 }
 
 export interface WidthSummary {
   width: number;
-  /** Restarts run before the answer was certain. */
+  /** Fresh restarts run at this width before its answer was certain (0 when growth never tried it). */
   restarts: number;
+  /** Fresh restarts whose steering rows met the target. */
   reached: number;
+  /** Networks of this width that met the target on the judging rows, from any source. */
+  met: number;
+  /** `met` by source: fresh restarts at this width, and networks pruned down to it from a larger width. */
+  metBy: { fresh: number; pruned: number };
+  /** At least `required` networks of this width met the target. */
   adequate: boolean;
-  /** Best and median target metric over the restarts run (null if every restart diverged). */
+  /** Best judged metric over the networks of this width (fresh and pruned); null if none finished. */
   best: number | null;
+  /** Best metric on the training rows over the same networks (tells "does not fit" from "does not generalise"). */
+  bestTrain: number | null;
+  /** Median judged metric of the fresh restarts (null when none ran or all diverged). */
   median: number | null;
-  /** Wilson 95% interval of the success rate. */
+  /** Wilson 95% interval of the fresh restarts' rate of meeting the target. */
   wilson: [number, number];
-  /** Median epochs of the restarts run. */
+  /** Median epochs of the fresh restarts run. */
   medianEpochs: number;
-  /** Restarts that diverged, with the reason. */
+  /** Fresh restarts that diverged. */
   diverged: number;
 }
 
+/** One neuron removal tried while pruning a network. */
 export interface PruneStep {
-  restart: number;
+  /** The network being pruned: the growth task it came from. */
+  source: TrainingTask;
   /** Width before this step. */
   width: number;
   /** Index of the neuron removed (in the network before the step). */
   neuron: number;
-  metricBefore: number;
-  metricAfter: number;
-  kept: boolean;
+  /** Steering metric before and after the removal and retraining. */
+  steeringBefore: number;
+  steeringAfter: number;
+  /** The removal was kept (the steering rows still met the target); otherwise it was undone. */
+  accepted: boolean;
+  /** Judged metric of the smaller network when the removal was kept, else null. */
+  judged: number | null;
 }
 
 export type SearchOutcome = 'found' | 'not-found' | 'inconclusive';
 
-export interface Witness {
-  restart: number;
+/** A network that backs a width, and how. */
+export interface Witness extends Judged {
+  /** The growth task the network came from (the pruned one, when pruned). */
+  source: TrainingTask;
   seed: number;
-  /** Width at which growth found it. */
-  grownWidth: number;
+  /** 'fresh': trained at this width; 'pruned': pruned down to it from `source.width`. */
+  how: 'fresh' | 'pruned';
   network: NetworkJson;
-  metric: number;
+}
+
+/** Which rows judged the target, and how many. */
+export interface JudgingRows {
+  on: 'judging' | 'validation' | 'training';
+  rows: number;
+  /** data.judging asked for judging rows but a class was too small: the validation rows judged instead. */
+  folded: boolean;
 }
 
 export interface SearchResult {
   outcome: SearchOutcome;
-  /** Smallest adequate width (after pruning); null unless found. */
+  /** Smallest adequate width; null unless found. */
   width: number | null;
-  /** Adequate width found by the growth phase; null unless found. */
+  /** Smallest width whose fresh restarts alone were adequate (where growth stopped); null if none. */
   grownWidth: number | null;
-  /** The witness's target metric; null unless found. */
+  /** The witness's judged metric; null unless found. */
   metric: number | null;
+  /**
+   * The network shown for the result: at the smallest adequate width when found; otherwise the
+   * best network that met the target at any width (its width then is not adequate), or null.
+   */
   witness: Witness | null;
   widths: WidthSummary[];
   pruning: PruneStep[];
+  /** Trainings the answer used: growth restarts and pruning retrainings. */
   trainings: number;
-  /** For inconclusive: how far the search got, in one sentence. */
-  note: string | null;
+  /** Sentences on why no width is adequate, or how far an unfinished search got; empty when found. */
+  notes: string[];
+  judging: JudgingRows;
   /** Wall-clock figures only. */
   timing: { searchSeconds: number; growthSeconds: number; pruneSeconds: number };
 }
@@ -74,8 +112,45 @@ export interface SearchResult {
 export interface ProgressEvent {
   phase: 'growth' | 'prune';
   width: number;
+  /** 0-based, as in TrainingTask. */
   restart: number;
   epoch: number;
-  /** Best target metric seen so far (null before any). */
+  /** Best judged metric seen so far (null before any). */
   best: number | null;
+}
+
+export type { StopReason };
+
+export interface GrowthPlan {
+  growth: GrowthMode;
+  minWidth: number;
+  maxWidth: number;
+  restarts: number;
+  required: number;
+  /** Cap on growth trainings; null = none. */
+  maxTrainings: number | null;
+}
+
+/** The network's state at the end of its time at one width (in-place growth passes through several). */
+export interface Segment extends Judged {
+  width: number;
+  /** Epochs since the restart began (cumulative over widths for in-place growth). */
+  epochs: number;
+  stop: StopReason;
+}
+
+/**
+ * What one growth task produced. `width` is the task's width (the starting width for in-place
+ * growth); `finalWidth` is the width of the network it ended with.
+ */
+export interface TaskResult extends TrainingTask, Judged {
+  stop: StopReason;
+  epochs: number;
+  finalWidth: number;
+  /** One entry per width the network passed through (one for fresh growth). */
+  segments: Segment[];
+  /** The trained network, kept when it met the target (it may be pruned or become the witness). */
+  network: NetworkJson | null;
+  /** Why a diverged training failed; null otherwise. */
+  reason: string | null;
 }

@@ -142,6 +142,7 @@ describe('check on a small table', () => {
         rows: number;
         trainRows: number;
         validationRows: number;
+        judgingRows: number;
         inputs: number;
         task: string;
         fingerprint: string;
@@ -149,13 +150,15 @@ describe('check on a small table', () => {
       };
       timing: Record<string, number>;
     };
-    expect(report.schema).toBe('neuron-budget/report@1');
+    expect(report.schema).toBe('neuron-budget/report@2');
     // No baseline in the temp folder: the first result is new.
     expect(report.verdict).toBe('new');
-    // Counted from the CSV above: 30 rows, 10 per class; 20% held out is 6 rows.
+    // Counted from the CSV above: 30 rows, 10 per class; 20% held out to validate is 6 rows, and
+    // the judging rows (data.judging's default, 0.2) are 6 more.
     expect(report.data.rows).toBe(30);
-    expect(report.data.trainRows + report.data.validationRows).toBe(30);
+    expect(report.data.trainRows + report.data.validationRows + report.data.judgingRows).toBe(30);
     expect(report.data.validationRows).toBe(6);
+    expect(report.data.judgingRows).toBe(6);
     // Two numeric features plus the two pump models one-hot.
     expect(report.data.inputs).toBe(4);
     expect(report.data.task).toBe('classification');
@@ -171,7 +174,13 @@ describe('check on a small table', () => {
       'pruneSeconds',
       'searchSeconds',
     ]);
-    for (const shown of ['30 used', '24 training / 6 validation', 'bearing_wear', report.data.fingerprint, 'NEW']) {
+    for (const shown of [
+      '30 used',
+      '18 training / 6 validation / 6 judging',
+      'bearing_wear',
+      report.data.fingerprint,
+      'NEW',
+    ]) {
       expect(run.stderr).toContain(shown);
     }
   });

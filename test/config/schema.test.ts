@@ -145,6 +145,9 @@ describe('ajv and the validator agree on boundary values of every key', () => {
       config[sectionName][key.name] = value;
       // Keep rules between keys out of the way of the probe.
       if (sectionName === 'data' && key.name === 'task') delete config.target.metric;
+      // validation + judging must stay below 1: a rule the schema cannot state, checked on its own below.
+      if (sectionName === 'data' && key.name === 'validation') config.data.judging = 0;
+      if (sectionName === 'data' && key.name === 'judging') config.data.validation = 0;
       if (sectionName === 'target' && key.name === 'metric' && value === 'accuracy') config.target.threshold = 0.5;
       if (sectionName === 'data' && (key.name === 'features' || key.name === 'ignore') && Array.isArray(value)) {
         config.data.target = 'target_column';
@@ -198,6 +201,18 @@ describe('ajv and the validator agree on boundary values of every key', () => {
       expect(validatorAccepts(config), JSON.stringify(config)).toBe(valid);
     }
   });
+
+  test('a rule the schema cannot state: data.validation + data.judging below 1, checked by the validator', () => {
+    const config = (validation: number, judging?: number) => ({
+      data: { path: 'a.csv', target: 'c', validation, ...(judging === undefined ? {} : { judging }) },
+      target: { threshold: 0.9 },
+    });
+    expect(validatorAccepts(config(0.5, 0.49))).toBe(true);
+    expect(validatorAccepts(config(0.5, 0.5))).toBe(false);
+    expect(validateWithSchema(config(0.5, 0.5))).toBe(true);
+    // Without data.judging it follows validation and never breaks the rule.
+    expect(validatorAccepts(config(0.95))).toBe(true);
+  });
 });
 
 describe('shipped configs', () => {
@@ -219,7 +234,11 @@ describe('shipped configs', () => {
       for (const key of section.keys) {
         const d = key.default;
         config[section.name][key.name] =
-          d === REQUIRED || d === DERIVED ? probes(key).find((v) => v !== null && typeof v === typeof '') : d;
+          d === DERIVED && key.rule.kind === 'number'
+            ? 0.2
+            : d === REQUIRED || d === DERIVED
+              ? probes(key).find((v) => v !== null && typeof v === typeof '')
+              : d;
       }
     }
     config.data = { ...config.data, path: 'readings.csv', target: 'condition', features: ['rms_velocity'] };

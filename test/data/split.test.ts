@@ -63,7 +63,7 @@ describe('stratified split', () => {
       const classIndex = labels(counts);
       const split = splitRows(
         { classIndex, classes: counts.map((_, i) => `c${i}`), rows: classIndex.length, name: 'y', column: 1 },
-        validation,
+        { validation, judging: 0 },
         seed,
         FILE,
       );
@@ -89,22 +89,32 @@ describe('stratified split', () => {
   it('is the same for the same seed and differs for another', () => {
     const classIndex = labels([60, 40]);
     const target = { classIndex, classes: ['a', 'b'], rows: 100, name: 'y', column: 1 };
-    const a = splitRows(target, 0.25, 9, FILE);
-    const b = splitRows(target, 0.25, 9, FILE);
-    const c = splitRows(target, 0.25, 10, FILE);
+    const a = splitRows(target, { validation: 0.25, judging: 0 }, 9, FILE);
+    const b = splitRows(target, { validation: 0.25, judging: 0 }, 9, FILE);
+    const c = splitRows(target, { validation: 0.25, judging: 0 }, 10, FILE);
     expect([...a.validation]).toEqual([...b.validation]);
     expect([...a.validation]).not.toEqual([...c.validation]);
   });
 
   it('holds nothing back with validation 0', () => {
     const classIndex = labels([1, 5]);
-    const split = splitRows({ classIndex, classes: ['a', 'b'], rows: 6, name: 'y', column: 1 }, 0, 1, FILE);
+    const split = splitRows(
+      { classIndex, classes: ['a', 'b'], rows: 6, name: 'y', column: 1 },
+      { validation: 0, judging: 0 },
+      1,
+      FILE,
+    );
     expect(split.validation.length).toBe(0);
     expect(split.train.length).toBe(6);
   });
 
   it('splits regression rows without classes', () => {
-    const split = splitRows({ classIndex: null, classes: null, rows: 101, name: 'y', column: 1 }, 0.2, 1, FILE);
+    const split = splitRows(
+      { classIndex: null, classes: null, rows: 101, name: 'y', column: 1 },
+      { validation: 0.2, judging: 0 },
+      1,
+      FILE,
+    );
     expect(split.validation.length).toBe(20);
     expect(split.train.length).toBe(81);
   });
@@ -112,7 +122,42 @@ describe('stratified split', () => {
   it('refuses a class too small to split, naming it', () => {
     const classIndex = labels([1, 20]);
     expect(() =>
-      splitRows({ classIndex, classes: ['rare', 'common'], rows: 21, name: 'y', column: 3 }, 0.25, 1, FILE),
+      splitRows(
+        { classIndex, classes: ['rare', 'common'], rows: 21, name: 'y', column: 3 },
+        { validation: 0.25, judging: 0 },
+        1,
+        FILE,
+      ),
     ).toThrow(/d\.csv:1:3: .*class "rare" has 1 row/);
+  });
+
+  it('three ways: judging rows come out of the training rows, the validation rows stay the same', () => {
+    const classIndex = labels([120, 60, 20]);
+    const target = { classIndex, classes: ['a', 'b', 'c'], rows: 200, name: 'y', column: 1 };
+    const two = splitRows(target, { validation: 0.25, judging: 0 }, 3, FILE);
+    const three = splitRows(target, { validation: 0.25, judging: 0.2 }, 3, FILE);
+    expect([...three.validation]).toEqual([...two.validation]);
+    expect(three.judgingFolded).toBe(false);
+    const judged = [0, 0, 0];
+    for (const r of three.judging) judged[classIndex[r]]++;
+    expect(judged).toEqual([24, 12, 4]);
+    // No row in two parts, none lost.
+    const all = [...three.train, ...three.validation, ...three.judging].sort((a, b) => a - b);
+    expect(all).toEqual(Array.from({ length: 200 }, (_, i) => i));
+    const trainSet = new Set(two.train);
+    for (const r of three.judging) expect(trainSet.has(r)).toBe(true);
+  });
+
+  it('folds the judging rows into the validation rows when a class is too small for three parts', () => {
+    const classIndex = labels([2, 40]);
+    const split = splitRows(
+      { classIndex, classes: ['rare', 'common'], rows: 42, name: 'y', column: 1 },
+      { validation: 0.25, judging: 0.2 },
+      1,
+      FILE,
+    );
+    expect(split.judgingFolded).toBe(true);
+    expect(split.judging.length).toBe(0);
+    expect(split.validation.length).toBe(1 + 10);
   });
 });

@@ -348,6 +348,9 @@ function fakeModel(weights: number[], names?: string[]): ModelDocument {
       yTrain: Float64Array.of(0),
       xValidation: new Float64Array(0),
       yValidation: new Float64Array(0),
+      judgingRows: 0,
+      xJudging: new Float64Array(0),
+      yJudging: new Float64Array(0),
       encoding: {
         features,
         target: { name: names ? names[3] : 'y', task: 'classification', classes, mean: 0, std: 1 },

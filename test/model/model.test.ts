@@ -28,7 +28,9 @@ describe('witness export', () => {
     const { dataset, validationRows } = iris();
     const target = { metric: 'accuracy', threshold: 0.95 } as const;
     const r = await runSearch(dataset, searchConfig(), target);
-    const model = roundTrip(serializeModel(modelDocument(r.witness!, dataset.encoding, target)));
+    const model = roundTrip(
+      serializeModel(modelDocument(r.witness!, dataset.encoding, target, { on: 'judging', adequate: true })),
+    );
     expect(model.schema).toBe(MODEL_SCHEMA);
     expect(model.width).toBe(r.width);
     expect(model.encoding.target.classes).toEqual(['setosa', 'versicolor', 'virginica']);
@@ -46,7 +48,9 @@ describe('witness export', () => {
     const ds = parity(3);
     const r = await runSearch(ds, searchConfig({ minWidth: 8, maxWidth: 8 }), exact);
     expect(r.width).toBeLessThan(8);
-    const model = roundTrip(serializeModel(modelDocument(r.witness!, ds.encoding, exact)));
+    const model = roundTrip(
+      serializeModel(modelDocument(r.witness!, ds.encoding, exact, { on: 'judging', adequate: true })),
+    );
     expect(model.network.width).toBe(r.width);
     const rows: Record<string, string>[] = [];
     for (let m = 0; m < 8; m++) {
@@ -78,6 +82,9 @@ describe('witness export', () => {
       yTrain: shared(ys.map((y) => (y - mean) / std)),
       xValidation: shared([]),
       yValidation: shared([]),
+      judgingRows: 0,
+      xJudging: new Float64Array(0),
+      yJudging: new Float64Array(0),
       encoding: {
         features: [{ kind: 'numeric', name: 'x', mean: 0, std: 1 }],
         target: { name: 'y', task: 'regression', classes: null, mean, std },
@@ -86,7 +93,9 @@ describe('witness export', () => {
     const target = { metric: 'rmse', threshold: 0.02 } as const;
     const r = await runSearch(ds, searchConfig({ maxWidth: 6 }), target);
     expect(r.outcome).toBe('found');
-    const model = roundTrip(serializeModel(modelDocument(r.witness!, ds.encoding, target)));
+    const model = roundTrip(
+      serializeModel(modelDocument(r.witness!, ds.encoding, target, { on: 'judging', adequate: true })),
+    );
     const rows = xs.map((x, i) => ({ x: String(x), y: String(ys[i]) }));
     const rmse = scoreRows(model, rows);
     expect(rmse).toBeLessThanOrEqual(0.02);

@@ -41,9 +41,18 @@ describe('the model schema', () => {
 
   it('a model of the previous version is read as this one, without an int8 form', async () => {
     const doc = (await written())[0];
-    const { cost: _cost, int8: _int8, ...v1 } = { ...doc, schema: 'neuron-budget/model@1' };
+    const { cost: _cost, int8: _int8, ...rest } = doc;
+    // Version 1 had no judging rows and recorded the grown width and a 0-based restart.
+    const v1 = {
+      ...rest,
+      schema: 'neuron-budget/model@1',
+      target: { metric: doc.target.metric, threshold: doc.target.threshold, value: doc.target.value },
+      origin: { seed: doc.origin.seed, restart: 2, grownWidth: doc.width },
+    };
     const back = parseModel(JSON.stringify(v1), 'old.json');
     expect(back.schema).toBe(MODEL_SCHEMA);
+    expect(back.origin).toEqual({ seed: doc.origin.seed, width: doc.width, restart: 3, how: 'fresh' });
+    expect(back.target.on).toBe('validation');
     expect(back.int8).toBeNull();
     expect(back.cost).toEqual(doc.cost);
     expect(valid(back)).toBe(true);

@@ -36,6 +36,9 @@ function data(
     yTrain: y,
     xValidation: new Float64Array(0),
     yValidation: new Float64Array(0),
+    judgingRows: 0,
+    xJudging: new Float64Array(0),
+    yJudging: new Float64Array(0),
     encoding: { features: [], target: { name: 't', task, classes: null, mean: 0, std: 2 } },
   };
 }
@@ -55,6 +58,8 @@ function base(over: Partial<TrainOptions>): TrainOptions {
     checkEvery: 1,
     target: { metric: 'accuracy', threshold: 1 },
     stall: null,
+    patience: 200,
+    weightDecay: 0,
     ...over,
   };
 }

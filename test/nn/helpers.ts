@@ -22,6 +22,9 @@ export function dataset(
     yTrain: Float64Array.from(y),
     xValidation: Float64Array.from(validation?.x ?? []),
     yValidation: Float64Array.from(validation?.y ?? []),
+    judgingRows: 0,
+    xJudging: new Float64Array(0),
+    yJudging: new Float64Array(0),
     encoding: {
       features: Array.from({ length: inputs }, (_, i) => ({
         kind: 'numeric' as const,
@@ -48,6 +51,8 @@ export function options(overrides: Partial<TrainOptions> = {}): TrainOptions {
     checkEvery: 1,
     target: { metric: 'accuracy', threshold: 1 },
     stall: null,
+    patience: 200,
+    weightDecay: 0,
     ...overrides,
   };
 }

@@ -35,7 +35,7 @@ const y = new Float64Array(rows).map((_, p) => (x[p * 3] * x[p * 3 + 1] + x[p * 
 for (const activation of ['tanh', 'logistic'] as const) {
   for (let r = 0; r < 4; r++) {
     const shape: Shape = { inputs: 3, width: 3, outputs: 1, activation, head: 'logistic' };
-    const f: Objective = (p, g) => kernel.lossAndGradient(shape, p, x, y, 0, rows, g, 0);
+    const f: Objective = (p, g) => kernel.lossAndGradient(shape, p, x, y, 0, rows, g);
     lines.push(run(`${activation} r${r}`, initParams(shape, 'nguyen-widrow', rngFor(1, 3, r)), f, 300));
   }
 }
@@ -45,7 +45,7 @@ lines.push(
   run(
     'softmax',
     initParams(softmax, 'nguyen-widrow', rngFor(1, 4, 0)),
-    (p, g) => kernel.lossAndGradient(softmax, p, x, y3, 0, rows, g, 0),
+    (p, g) => kernel.lossAndGradient(softmax, p, x, y3, 0, rows, g),
     300,
   ),
 );

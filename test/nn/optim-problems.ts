@@ -77,7 +77,7 @@ export const XOR_Y = Float64Array.from([0, 1, 1, 0]);
 
 export function xorObjective(): Objective {
   const kernel = referenceKernel();
-  return (p, g) => kernel.lossAndGradient(XOR_SHAPE, p, XOR_X, XOR_Y, 0, 4, g, 0);
+  return (p, g) => kernel.lossAndGradient(XOR_SHAPE, p, XOR_X, XOR_Y, 0, 4, g);
 }
 
 export function xorAccuracy(p: Float64Array): number {

@@ -19,7 +19,7 @@ describe('training run', () => {
     }
     if (hit === null) throw new Error('no seed reached the target');
     const { t, rec } = hit;
-    expect(rec.validationMetric).toBe(1);
+    expect(rec.steeringMetric).toBe(1);
     const out = predict(t.snapshot(), xorDataset().xTrain, 4);
     expect(Array.from(out, (p) => (p > 0.5 ? 1 : 0))).toEqual([0, 1, 1, 0]);
   });
@@ -67,7 +67,7 @@ describe('training run', () => {
     const d = dataset('classification', 2, 1, [-1, -1, -1, 1, 1, -1, 1, 1], [0, 1, 1, 0], { x: [1, 1], y: [1] });
     const t = createTrainer(d, 2, options(), rngFor(1, 2, 0));
     const rec = t.run(200);
-    expect(rec.validationMetric === 0 || rec.validationMetric === 1).toBe(true);
+    expect(rec.steeringMetric === 0 || rec.steeringMetric === 1).toBe(true);
   });
 
   it('the in-loop target metric equals the full metrics record (accuracy by hand on a tiny case)', () => {

@@ -1,7 +1,11 @@
 /**
  * XOR with a strictly layered network of width 2 (tanh hidden, iRprop+, the published
- * defaults, Nguyen-Widrow initialisation): 100% accuracy for at least 8 of 10 seeds within
- * 2,000 epochs. The 8-of-10 threshold is common practice with no published source.
+ * defaults, Nguyen-Widrow initialisation) on the loss's exact gradient: about half the seeds
+ * learn the truth table within 2,000 epochs; the rest settle in the flat regions of the XOR loss
+ * (loss near 2·ln 2). A general-purpose reference library's L-BFGS-B (SciPy), run from the same
+ * starts, solves the same half (test/nn/lbfgs.test.ts), and tfjs showed the same rate (54 of 100
+ * seeds here). Restarts, not a changed gradient, are the search's remedy: at this rate 3 of 10
+ * restarts reach the target in all but about 5% of searches (binomial, derived).
  * Width 1 can never fit XOR (one monotone hidden unit gives a half-space decision), which is
  * derived lower bound (no shortcut connections); that case must not reach the target.
  */
@@ -11,7 +15,7 @@ import { rngFor } from '../../src/common/random.js';
 import { options, xorDataset } from './helpers.js';
 
 describe('XOR', () => {
-  it('width 2 learns the truth table for at least 8 of 10 seeds within 2,000 epochs', () => {
+  it('width 2 learns the truth table for at least 4 of 10 seeds within 2,000 epochs', () => {
     const outcomes: string[] = [];
     let reached = 0;
     for (let r = 0; r < 10; r++) {
@@ -20,7 +24,7 @@ describe('XOR', () => {
       outcomes.push(`${r}:${rec.stop}@${rec.epochs} acc ${rec.trainMetric}`);
       if (rec.stop === 'reached' && rec.trainMetric === 1) reached++;
     }
-    expect(reached, outcomes.join('; ')).toBeGreaterThanOrEqual(8);
+    expect(reached, outcomes.join('; ')).toBeGreaterThanOrEqual(4);
   });
 
   it('width 1 never reaches 100%', () => {

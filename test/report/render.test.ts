@@ -46,7 +46,7 @@ describe('JSON report (withGate)', () => {
     expect(r.baseline).toMatchObject({
       width: 4,
       metric: 0.96,
-      reached: 4,
+      met: 4,
       restarts: 10,
       rows: 1800,
       sameSettings: true,
@@ -83,7 +83,7 @@ describe('comment', () => {
     expect(lines[0]).toBe('### neuron-budget: FAIL. Needs 9 hidden neurons; the device budget is 8&#46;');
     expect(md).toContain('| Smallest adequate width | — | **9** |');
     expect(md).toContain('| Accuracy at that width (network kept) | — | 0.96 |');
-    expect(md).toContain('| Restarts reaching the target there | — | 4/10 |');
+    expect(md).toContain('| Networks meeting the target there | — | 4 |');
     expect(md).toContain('| Data rows | — | 1,800 |');
     expect(md).toContain('| Search time | — | 12.5 s |');
   });
@@ -183,7 +183,16 @@ describe('capacity drift', () => {
 });
 
 function step(w: number, i: number): PruneStep {
-  return { restart: i % 10, width: w, neuron: i % w, metricBefore: 0.96, metricAfter: 0.95, kept: i % 2 === 0 };
+  const accepted = i % 2 === 0;
+  return {
+    source: { width: w, restart: i % 10 },
+    width: w,
+    neuron: i % w,
+    steeringBefore: 0.96,
+    steeringAfter: 0.95,
+    accepted,
+    judged: accepted ? 0.95 : null,
+  };
 }
 
 describe('length cap', () => {
@@ -265,7 +274,7 @@ describe('charts: edge cases', () => {
     const md = renderMarkdown(gated(r, null));
     const [chart] = mermaidBlocks(md);
     expect(chart).toContain('x-axis "hidden neurons" ["1", "3", "4"]');
-    expect(md).toMatch(/\n\| 2 \| — \| 0\/10 \|/);
+    expect(md).toMatch(/\n\| 2 \| — \| 0 \|/);
   });
 
   it('never draws a collapsed y-axis when every value is 1', () => {

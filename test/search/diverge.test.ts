@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { EncodedDataset } from '../../src/data/types.js';
-import { decideGrowth, runTask, searchContext, growthPlan } from '../../src/search/index.js';
+import { decideGrowth, runTask, searchContext, growthPlan, tally } from '../../src/search/index.js';
 import { searchConfig, shared } from './fixtures.js';
 
 describe('a diverging training', () => {
@@ -18,6 +18,9 @@ describe('a diverging training', () => {
       yTrain: shared(xs.map((x) => 3 * x)),
       xValidation: shared([]),
       yValidation: shared([]),
+      judgingRows: 0,
+      xJudging: new Float64Array(0),
+      yJudging: new Float64Array(0),
       encoding: {
         features: [{ kind: 'numeric', name: 'x', mean: 0, std: 1 }],
         target: { name: 'y', task: 'regression', classes: null, mean: 0, std: 1 },
@@ -33,9 +36,11 @@ describe('a diverging training', () => {
       expect(r.reached).toBe(false);
       expect(r.reason).toMatch(/diverged/);
     }
-    const d = decideGrowth(growthPlan(search), target, (t) => results[t.restart]);
-    expect(d).toMatchObject({ kind: 'decided', adequateWidth: null });
-    if (d.kind === 'decided')
-      expect(d.widths[0]).toMatchObject({ restarts: 3, reached: 0, diverged: 3, best: null, median: null });
+    const d = decideGrowth(growthPlan(search), (t) => results[t.restart]);
+    expect(d).toMatchObject({ kind: 'decided', grownWidth: null });
+    if (d.kind !== 'decided') throw new Error('undecided');
+    const t = tally(growthPlan(search), target, d.tried, [], 1);
+    expect(t.widths[0]).toMatchObject({ restarts: 3, reached: 0, met: 0, diverged: 3, best: null, median: null });
+    expect(t.width).toBeNull();
   });
 });

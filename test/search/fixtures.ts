@@ -28,6 +28,9 @@ export function binaryDataset(x: number[][], y: number[]): EncodedDataset {
     yTrain: shared(y),
     xValidation: shared([]),
     yValidation: shared([]),
+    judgingRows: 0,
+    xJudging: new Float64Array(0),
+    yJudging: new Float64Array(0),
     encoding: classEncoding(
       Array.from({ length: inputs }, (_, i) => `x${i + 1}`),
       ['0', '1'],
@@ -112,6 +115,9 @@ export function iris(): IrisSplit {
       yTrain: shared(label(train)),
       xValidation: shared(enc(valid)),
       yValidation: shared(label(valid)),
+      judgingRows: 0,
+      xJudging: new Float64Array(0),
+      yJudging: new Float64Array(0),
       encoding: { features, target: { name: 'class', task: 'classification', classes, mean: 0, std: 1 } },
     },
     validationRows: valid.map((r) => {

@@ -1,25 +1,31 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import type { TargetConfig } from '../../src/config/types.js';
 import { decideGrowth, mergeOutcomes, planTasks, restartAtWidth, taskKey } from '../../src/search/growth.js';
-import type { GrowthPlan, TaskResult } from '../../src/search/growth.js';
+import type { GrowthDecision, RestartAtWidth } from '../../src/search/growth.js';
+import type { GrowthPlan, TaskResult } from '../../src/search/types.js';
 
-const accuracy: TargetConfig = { metric: 'accuracy', threshold: 0.9 };
-
-function fresh(width: number, restart: number, reached: boolean, metric = reached ? 1 : 0.5): TaskResult {
+/** A finished growth task whose network met the target (on the judging rows) or not. */
+function fresh(width: number, restart: number, met: boolean, metric = met ? 1 : 0.5): TaskResult {
+  const judged = { train: metric, steering: metric, judged: metric, reached: met, met };
   return {
     width,
     restart,
-    reached,
-    stop: reached ? 'reached' : 'max-epochs',
+    ...judged,
+    stop: met ? 'reached' : 'stalled',
     epochs: 100 + restart,
-    metric,
     finalWidth: width,
-    segments: [{ width, epochs: 100 + restart, metric, stop: reached ? 'reached' : 'max-epochs' }],
+    segments: [{ width, epochs: 100 + restart, stop: met ? 'reached' : 'stalled', ...judged }],
     network: null,
     reason: null,
   };
 }
+
+function decided(d: GrowthDecision): Extract<GrowthDecision, { kind: 'decided' }> {
+  if (d.kind !== 'decided') throw new Error('undecided');
+  return d;
+}
+
+const at = (d: GrowthDecision, w: number): RestartAtWidth[] => decided(d).tried.find((t) => t.width === w)!.restarts;
 
 const plan = (over: Partial<GrowthPlan> = {}): GrowthPlan => ({
   growth: 'fresh',
@@ -36,23 +42,24 @@ describe('the adequacy decision', () => {
     const p = plan({ maxWidth: 1 });
     // successes at restarts 1, 4, 6 → certain after restart 6 (7 restarts run)
     const wins = new Set([1, 4, 6, 8, 9]);
-    const d = decideGrowth(p, accuracy, (t) => fresh(t.width, t.restart, wins.has(t.restart)));
-    expect(d.kind).toBe('decided');
-    if (d.kind !== 'decided') return;
-    expect(d.adequateWidth).toBe(1);
-    expect(d.widths[0].restarts).toBe(7);
-    expect(d.widths[0].reached).toBe(3);
-    expect(d.reachedAtAdequate.map((r) => r.restart)).toEqual([1, 4, 6]);
-    expect(d.trainings).toBe(7);
+    const d = decideGrowth(p, (t) => fresh(t.width, t.restart, wins.has(t.restart)));
+    expect(decided(d).grownWidth).toBe(1);
+    expect(at(d, 1)).toHaveLength(7);
+    expect(
+      at(d, 1)
+        .filter((r) => r.met)
+        .map((r) => r.restart),
+    ).toEqual([1, 4, 6]);
+    expect(decided(d).trainings).toBe(7);
   });
 
   it('stops a width after more than restarts − required failures', () => {
     const p = plan({ maxWidth: 2 });
-    const d = decideGrowth(p, accuracy, (t) => fresh(t.width, t.restart, t.width === 2));
-    if (d.kind !== 'decided') throw new Error('undecided');
-    expect(d.widths[0]).toMatchObject({ width: 1, restarts: 8, reached: 0, adequate: false });
-    expect(d.widths[1]).toMatchObject({ width: 2, restarts: 3, reached: 3, adequate: true });
-    expect(d.trainings).toBe(11);
+    const d = decideGrowth(p, (t) => fresh(t.width, t.restart, t.width === 2));
+    expect(at(d, 1).map((r) => r.met)).toEqual(Array(8).fill(false));
+    expect(at(d, 2).map((r) => r.met)).toEqual([true, true, true]);
+    expect(decided(d).grownWidth).toBe(2);
+    expect(decided(d).trainings).toBe(11);
   });
 
   it('accepts exactly the restart sequences with at least 3 of 10 successes; P(accept) matches the binomial', () => {
@@ -61,12 +68,11 @@ describe('the adequacy decision', () => {
     const p = plan({ maxWidth: 1 });
     const accept = { 0.1: 0, 0.2: 0, 0.5: 0 } as Record<number, number>;
     for (let mask = 0; mask < 1 << 10; mask++) {
-      const d = decideGrowth(p, accuracy, (t) => fresh(t.width, t.restart, ((mask >> t.restart) & 1) === 1));
-      if (d.kind !== 'decided') throw new Error('undecided');
+      const d = decided(decideGrowth(p, (t) => fresh(t.width, t.restart, ((mask >> t.restart) & 1) === 1)));
       let ones = 0;
       for (let i = 0; i < 10; i++) ones += (mask >> i) & 1;
-      expect(d.adequateWidth === 1).toBe(ones >= 3);
-      if (d.adequateWidth === 1) {
+      expect(d.grownWidth === 1).toBe(ones >= 3);
+      if (d.grownWidth === 1) {
         for (const q of [0.1, 0.2, 0.5]) accept[q] += q ** ones * (1 - q) ** (10 - ones);
       }
     }
@@ -78,16 +84,16 @@ describe('the adequacy decision', () => {
   it('asks for the first missing task in canonical order', () => {
     const p = plan();
     const have = new Map([[taskKey({ width: 1, restart: 0 }), fresh(1, 0, false)]]);
-    const d = decideGrowth(p, accuracy, (t) => have.get(taskKey(t)));
+    const d = decideGrowth(p, (t) => have.get(taskKey(t)));
     expect(d).toMatchObject({ kind: 'need', task: { width: 1, restart: 1 }, deciding: 1 });
   });
 
   it('stops at the cap on trainings with the width it got to', () => {
     const p = plan({ maxTrainings: 12 });
-    const d = decideGrowth(p, accuracy, (t) => fresh(t.width, t.restart, false));
+    const d = decideGrowth(p, (t) => fresh(t.width, t.restart, false));
     expect(d).toMatchObject({
       kind: 'decided',
-      adequateWidth: null,
+      grownWidth: null,
       trainings: 12,
       capHit: { width: 2, restartsRun: 4 },
     });
@@ -96,10 +102,10 @@ describe('the adequacy decision', () => {
   it('merging is independent of arrival order and of results past the decision point', () => {
     const p = plan({ maxWidth: 5 });
     const all = planTasks(p).map((t) => fresh(t.width, t.restart, (t.width * 7 + t.restart * 3) % 5 < t.width - 1));
-    const reference = JSON.stringify(mergeOutcomes(p, accuracy, all));
+    const reference = JSON.stringify(mergeOutcomes(p, all));
     fc.assert(
       fc.property(fc.shuffledSubarray(all, { minLength: all.length, maxLength: all.length }), (perm) => {
-        expect(JSON.stringify(mergeOutcomes(p, accuracy, perm))).toBe(reference);
+        expect(JSON.stringify(mergeOutcomes(p, perm))).toBe(reference);
       }),
       { seed: 7, numRuns: 50 },
     );
@@ -108,42 +114,41 @@ describe('the adequacy decision', () => {
   it('merging accepts an identical duplicate and refuses two different results for one task', () => {
     const p = plan({ maxWidth: 3 });
     const all = planTasks(p).map((t) => fresh(t.width, t.restart, t.width >= 2));
-    expect(mergeOutcomes(p, accuracy, [...all, all[0]])).toEqual(mergeOutcomes(p, accuracy, all));
-    const changed = { ...all[0], metric: all[0].metric + 0.01 };
-    expect(() => mergeOutcomes(p, accuracy, [...all, changed])).toThrow(/two different results .* width 1, restart 0/);
+    expect(mergeOutcomes(p, [...all, all[0]])).toEqual(mergeOutcomes(p, all));
+    const changed = { ...all[0], judged: all[0].judged + 0.01 };
+    expect(() => mergeOutcomes(p, [...all, changed])).toThrow(/two different results .* width 1, restart 0/);
   });
 });
 
 describe('in-place growth mapped onto widths', () => {
   const p = plan({ growth: 'in-place', minWidth: 1, maxWidth: 5 });
   // Restart grown 1 → 2 → 3, reaching the target at width 3.
+  const j = (m: number, met: boolean) => ({ train: m, steering: m, judged: m, reached: met, met });
   const grown: TaskResult = {
     width: 1,
     restart: 0,
-    reached: true,
+    ...j(0.95, true),
     stop: 'reached',
     epochs: 350,
-    metric: 0.95,
     finalWidth: 3,
     segments: [
-      { width: 1, epochs: 120, metric: 0.6, stop: 'stalled' },
-      { width: 2, epochs: 240, metric: 0.8, stop: 'stalled' },
-      { width: 3, epochs: 350, metric: 0.95, stop: 'reached' },
+      { width: 1, epochs: 120, stop: 'stalled', ...j(0.6, false) },
+      { width: 2, epochs: 240, stop: 'stalled', ...j(0.8, false) },
+      { width: 3, epochs: 350, stop: 'reached', ...j(0.95, true) },
     ],
     network: null,
     reason: null,
   };
   it('counts a restart as reaching every width at or above the one it reached at', () => {
-    expect(restartAtWidth(p, grown, 2)).toMatchObject({ reached: false, metric: 0.8, epochs: 240, stop: 'stalled' });
-    expect(restartAtWidth(p, grown, 3)).toMatchObject({ reached: true, metric: 0.95, epochs: 350 });
-    expect(restartAtWidth(p, grown, 5)).toMatchObject({ reached: true, metric: 0.95, epochs: 350 });
+    expect(restartAtWidth(p, grown, 2)).toMatchObject({ met: false, judged: 0.8, epochs: 240, stop: 'stalled' });
+    expect(restartAtWidth(p, grown, 3)).toMatchObject({ met: true, judged: 0.95, epochs: 350 });
+    expect(restartAtWidth(p, grown, 5)).toMatchObject({ met: true, judged: 0.95, epochs: 350 });
   });
   it('has one task per restart and reuses it across widths', () => {
     expect(planTasks(p)).toHaveLength(10);
-    const d = decideGrowth(p, accuracy, (t) => ({ ...grown, restart: t.restart }));
-    if (d.kind !== 'decided') throw new Error('undecided');
-    expect(d.adequateWidth).toBe(3);
-    expect(d.widths.map((w) => w.restarts)).toEqual([8, 8, 3]);
+    const d = decided(decideGrowth(p, (t) => ({ ...grown, restart: t.restart })));
+    expect(d.grownWidth).toBe(3);
+    expect(d.tried.map((w) => w.restarts.length)).toEqual([8, 8, 3]);
     expect(d.trainings).toBe(8);
   });
 });

@@ -21,7 +21,7 @@ describe('growth task', () => {
       );
       expect(sliced.epochs).toBe(whole.epochs);
       expect(sliced.stop).toBe(whole.stop);
-      expect(Object.is(sliced.metric, whole.validationMetric)).toBe(true);
+      expect(Object.is(sliced.steering, whole.steeringMetric)).toBe(true);
     },
   );
 

@@ -183,7 +183,6 @@ let H: i32 = 0;
 let K: i32 = 0;
 let Hp: i32 = 0;
 let ACT: i32 = 0;
-let OFF: f64 = 0; // added to the activation derivative in the backward pass (flat-spot offset)
 let HEAD: i32 = 0;
 // work area pointers
 let W1p: usize = 0;
@@ -257,12 +256,12 @@ function setup(act: i32, head: i32, d: i32, h: i32, k: i32, params: usize, work:
 }
 
 /**
- * Derivative factor of a pair of activations h, plus the flat-spot offset for tanh and logistic
+ * Derivative of the activation at a pair of activations h: the exact derivative, nothing added
  * (for ReLU, h > 0 exactly when the pre-activation was).
  */
 @inline function prime(h: v128): v128 {
-  if (ACT == ACT_TANH) return f64x2.add(f64x2.sub(f64x2.splat(1.0), f64x2.mul(h, h)), f64x2.splat(OFF));
-  if (ACT == ACT_LOGISTIC) return f64x2.add(f64x2.mul(h, f64x2.sub(f64x2.splat(1.0), h)), f64x2.splat(OFF));
+  if (ACT == ACT_TANH) return f64x2.sub(f64x2.splat(1.0), f64x2.mul(h, h));
+  if (ACT == ACT_LOGISTIC) return f64x2.mul(h, f64x2.sub(f64x2.splat(1.0), h));
   return v128.bitselect(f64x2.splat(1.0), f64x2.splat(0.0), f64x2.gt(h, f64x2.splat(0.0)));
 }
 
@@ -624,10 +623,8 @@ export function lossGrad(
   end: i32,
   grad: usize,
   work: usize,
-  off: f64,
 ): f64 {
   setup(act, head, d, h, k, params, work);
-  OFF = off;
   memory.fill(GW1, 0, <usize>(8 * D * Hp));
   memory.fill(GB1, 0, <usize>(8 * Hp));
   memory.fill(GW2T, 0, <usize>(8 * K * Hp));

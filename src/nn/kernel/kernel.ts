@@ -16,11 +16,6 @@ export interface Kernel {
     start: number,
     end: number,
     grad: Float64Array,
-    /**
-     * Added to the tanh/logistic derivative in the backward pass (flat-spot elimination);
-     * 0 gives the exact gradient.
-     */
-    primeOffset?: number,
   ): number;
   forward(
     shape: Shape,
@@ -46,8 +41,8 @@ export function referenceKernel(): Kernel {
   };
   return {
     name: 'reference-f64',
-    lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0) {
-      return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape), primeOffset);
+    lossAndGradient(shape, params, x, y, start, end, grad) {
+      return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape));
     },
     forward(shape, params, x, rows, logits, hidden) {
       referenceForward(shape, params, x, rows, logits, hidden, sized(shape));

@@ -153,7 +153,6 @@ export function referenceLossAndGradient(
   end: number,
   grad: Float64Array,
   s: Scratch,
-  primeOffset = 0,
 ): number {
   const D = shape.inputs;
   const H = shape.width;
@@ -179,14 +178,7 @@ export function referenceLossAndGradient(
         grad[wo + k] += hj * dz[k];
         sum += params[wo + k] * dz[k];
       }
-      const fp =
-        act === ACT_TANH
-          ? 1 - hj * hj + primeOffset
-          : act === ACT_LOGISTIC
-            ? hj * (1 - hj) + primeOffset
-            : a[j] > 0
-              ? 1
-              : 0;
+      const fp = act === ACT_TANH ? 1 - hj * hj : act === ACT_LOGISTIC ? hj * (1 - hj) : a[j] > 0 ? 1 : 0;
       dh[qo + j] = sum * fp;
     }
     for (let j = 0; j < H; j++) grad[lay.b1 + j] += dh[qo + j];

@@ -37,7 +37,6 @@ interface KernelExports {
     end: number,
     grad: number,
     work: number,
-    off: number,
   ): number;
   forward(
     act: number,
@@ -267,7 +266,7 @@ export function wasmKernel(): Kernel {
   const f = new ForwardPlan(rt.view());
   return {
     name: 'wasm-simd-f64',
-    lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0): number {
+    lossAndGradient(shape, params, x, y, start, end, grad): number {
       const P = params.length;
       if (!g.current(rt, shape, x, y)) g.plan(rt, shape, x, y, P);
       const mem = g.memory;
@@ -288,7 +287,6 @@ export function wasmKernel(): Kernel {
         end,
         g.gradAt,
         g.workAt,
-        primeOffset,
       );
       const view = g.grad;
       if (P <= 64) for (let q = 0; q < P; q++) grad[q] = view[q];
