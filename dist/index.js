@@ -1077,1536 +1077,6 @@ function ContentType (type) {
 
 /***/ }),
 
-/***/ 3251:
-/***/ (function(module) {
-
-/**
-  * This file contains the Bottleneck library (MIT), compiled to ES2017, and without Clustering support.
-  * https://github.com/SGrondin/bottleneck
-  */
-(function (global, factory) {
-	 true ? module.exports = factory() :
-	0;
-}(this, (function () { 'use strict';
-
-	var commonjsGlobal = typeof globalThis !== 'undefined' ? globalThis : typeof window !== 'undefined' ? window : typeof global !== 'undefined' ? global : typeof self !== 'undefined' ? self : {};
-
-	function getCjsExportFromNamespace (n) {
-		return n && n['default'] || n;
-	}
-
-	var load = function(received, defaults, onto = {}) {
-	  var k, ref, v;
-	  for (k in defaults) {
-	    v = defaults[k];
-	    onto[k] = (ref = received[k]) != null ? ref : v;
-	  }
-	  return onto;
-	};
-
-	var overwrite = function(received, defaults, onto = {}) {
-	  var k, v;
-	  for (k in received) {
-	    v = received[k];
-	    if (defaults[k] !== void 0) {
-	      onto[k] = v;
-	    }
-	  }
-	  return onto;
-	};
-
-	var parser = {
-		load: load,
-		overwrite: overwrite
-	};
-
-	var DLList;
-
-	DLList = class DLList {
-	  constructor(incr, decr) {
-	    this.incr = incr;
-	    this.decr = decr;
-	    this._first = null;
-	    this._last = null;
-	    this.length = 0;
-	  }
-
-	  push(value) {
-	    var node;
-	    this.length++;
-	    if (typeof this.incr === "function") {
-	      this.incr();
-	    }
-	    node = {
-	      value,
-	      prev: this._last,
-	      next: null
-	    };
-	    if (this._last != null) {
-	      this._last.next = node;
-	      this._last = node;
-	    } else {
-	      this._first = this._last = node;
-	    }
-	    return void 0;
-	  }
-
-	  shift() {
-	    var value;
-	    if (this._first == null) {
-	      return;
-	    } else {
-	      this.length--;
-	      if (typeof this.decr === "function") {
-	        this.decr();
-	      }
-	    }
-	    value = this._first.value;
-	    if ((this._first = this._first.next) != null) {
-	      this._first.prev = null;
-	    } else {
-	      this._last = null;
-	    }
-	    return value;
-	  }
-
-	  first() {
-	    if (this._first != null) {
-	      return this._first.value;
-	    }
-	  }
-
-	  getArray() {
-	    var node, ref, results;
-	    node = this._first;
-	    results = [];
-	    while (node != null) {
-	      results.push((ref = node, node = node.next, ref.value));
-	    }
-	    return results;
-	  }
-
-	  forEachShift(cb) {
-	    var node;
-	    node = this.shift();
-	    while (node != null) {
-	      (cb(node), node = this.shift());
-	    }
-	    return void 0;
-	  }
-
-	  debug() {
-	    var node, ref, ref1, ref2, results;
-	    node = this._first;
-	    results = [];
-	    while (node != null) {
-	      results.push((ref = node, node = node.next, {
-	        value: ref.value,
-	        prev: (ref1 = ref.prev) != null ? ref1.value : void 0,
-	        next: (ref2 = ref.next) != null ? ref2.value : void 0
-	      }));
-	    }
-	    return results;
-	  }
-
-	};
-
-	var DLList_1 = DLList;
-
-	var Events;
-
-	Events = class Events {
-	  constructor(instance) {
-	    this.instance = instance;
-	    this._events = {};
-	    if ((this.instance.on != null) || (this.instance.once != null) || (this.instance.removeAllListeners != null)) {
-	      throw new Error("An Emitter already exists for this object");
-	    }
-	    this.instance.on = (name, cb) => {
-	      return this._addListener(name, "many", cb);
-	    };
-	    this.instance.once = (name, cb) => {
-	      return this._addListener(name, "once", cb);
-	    };
-	    this.instance.removeAllListeners = (name = null) => {
-	      if (name != null) {
-	        return delete this._events[name];
-	      } else {
-	        return this._events = {};
-	      }
-	    };
-	  }
-
-	  _addListener(name, status, cb) {
-	    var base;
-	    if ((base = this._events)[name] == null) {
-	      base[name] = [];
-	    }
-	    this._events[name].push({cb, status});
-	    return this.instance;
-	  }
-
-	  listenerCount(name) {
-	    if (this._events[name] != null) {
-	      return this._events[name].length;
-	    } else {
-	      return 0;
-	    }
-	  }
-
-	  async trigger(name, ...args) {
-	    var e, promises;
-	    try {
-	      if (name !== "debug") {
-	        this.trigger("debug", `Event triggered: ${name}`, args);
-	      }
-	      if (this._events[name] == null) {
-	        return;
-	      }
-	      this._events[name] = this._events[name].filter(function(listener) {
-	        return listener.status !== "none";
-	      });
-	      promises = this._events[name].map(async(listener) => {
-	        var e, returned;
-	        if (listener.status === "none") {
-	          return;
-	        }
-	        if (listener.status === "once") {
-	          listener.status = "none";
-	        }
-	        try {
-	          returned = typeof listener.cb === "function" ? listener.cb(...args) : void 0;
-	          if (typeof (returned != null ? returned.then : void 0) === "function") {
-	            return (await returned);
-	          } else {
-	            return returned;
-	          }
-	        } catch (error) {
-	          e = error;
-	          {
-	            this.trigger("error", e);
-	          }
-	          return null;
-	        }
-	      });
-	      return ((await Promise.all(promises))).find(function(x) {
-	        return x != null;
-	      });
-	    } catch (error) {
-	      e = error;
-	      {
-	        this.trigger("error", e);
-	      }
-	      return null;
-	    }
-	  }
-
-	};
-
-	var Events_1 = Events;
-
-	var DLList$1, Events$1, Queues;
-
-	DLList$1 = DLList_1;
-
-	Events$1 = Events_1;
-
-	Queues = class Queues {
-	  constructor(num_priorities) {
-	    var i;
-	    this.Events = new Events$1(this);
-	    this._length = 0;
-	    this._lists = (function() {
-	      var j, ref, results;
-	      results = [];
-	      for (i = j = 1, ref = num_priorities; (1 <= ref ? j <= ref : j >= ref); i = 1 <= ref ? ++j : --j) {
-	        results.push(new DLList$1((() => {
-	          return this.incr();
-	        }), (() => {
-	          return this.decr();
-	        })));
-	      }
-	      return results;
-	    }).call(this);
-	  }
-
-	  incr() {
-	    if (this._length++ === 0) {
-	      return this.Events.trigger("leftzero");
-	    }
-	  }
-
-	  decr() {
-	    if (--this._length === 0) {
-	      return this.Events.trigger("zero");
-	    }
-	  }
-
-	  push(job) {
-	    return this._lists[job.options.priority].push(job);
-	  }
-
-	  queued(priority) {
-	    if (priority != null) {
-	      return this._lists[priority].length;
-	    } else {
-	      return this._length;
-	    }
-	  }
-
-	  shiftAll(fn) {
-	    return this._lists.forEach(function(list) {
-	      return list.forEachShift(fn);
-	    });
-	  }
-
-	  getFirst(arr = this._lists) {
-	    var j, len, list;
-	    for (j = 0, len = arr.length; j < len; j++) {
-	      list = arr[j];
-	      if (list.length > 0) {
-	        return list;
-	      }
-	    }
-	    return [];
-	  }
-
-	  shiftLastFrom(priority) {
-	    return this.getFirst(this._lists.slice(priority).reverse()).shift();
-	  }
-
-	};
-
-	var Queues_1 = Queues;
-
-	var BottleneckError;
-
-	BottleneckError = class BottleneckError extends Error {};
-
-	var BottleneckError_1 = BottleneckError;
-
-	var BottleneckError$1, DEFAULT_PRIORITY, Job, NUM_PRIORITIES, parser$1;
-
-	NUM_PRIORITIES = 10;
-
-	DEFAULT_PRIORITY = 5;
-
-	parser$1 = parser;
-
-	BottleneckError$1 = BottleneckError_1;
-
-	Job = class Job {
-	  constructor(task, args, options, jobDefaults, rejectOnDrop, Events, _states, Promise) {
-	    this.task = task;
-	    this.args = args;
-	    this.rejectOnDrop = rejectOnDrop;
-	    this.Events = Events;
-	    this._states = _states;
-	    this.Promise = Promise;
-	    this.options = parser$1.load(options, jobDefaults);
-	    this.options.priority = this._sanitizePriority(this.options.priority);
-	    if (this.options.id === jobDefaults.id) {
-	      this.options.id = `${this.options.id}-${this._randomIndex()}`;
-	    }
-	    this.promise = new this.Promise((_resolve, _reject) => {
-	      this._resolve = _resolve;
-	      this._reject = _reject;
-	    });
-	    this.retryCount = 0;
-	  }
-
-	  _sanitizePriority(priority) {
-	    var sProperty;
-	    sProperty = ~~priority !== priority ? DEFAULT_PRIORITY : priority;
-	    if (sProperty < 0) {
-	      return 0;
-	    } else if (sProperty > NUM_PRIORITIES - 1) {
-	      return NUM_PRIORITIES - 1;
-	    } else {
-	      return sProperty;
-	    }
-	  }
-
-	  _randomIndex() {
-	    return Math.random().toString(36).slice(2);
-	  }
-
-	  doDrop({error, message = "This job has been dropped by Bottleneck"} = {}) {
-	    if (this._states.remove(this.options.id)) {
-	      if (this.rejectOnDrop) {
-	        this._reject(error != null ? error : new BottleneckError$1(message));
-	      }
-	      this.Events.trigger("dropped", {args: this.args, options: this.options, task: this.task, promise: this.promise});
-	      return true;
-	    } else {
-	      return false;
-	    }
-	  }
-
-	  _assertStatus(expected) {
-	    var status;
-	    status = this._states.jobStatus(this.options.id);
-	    if (!(status === expected || (expected === "DONE" && status === null))) {
-	      throw new BottleneckError$1(`Invalid job status ${status}, expected ${expected}. Please open an issue at https://github.com/SGrondin/bottleneck/issues`);
-	    }
-	  }
-
-	  doReceive() {
-	    this._states.start(this.options.id);
-	    return this.Events.trigger("received", {args: this.args, options: this.options});
-	  }
-
-	  doQueue(reachedHWM, blocked) {
-	    this._assertStatus("RECEIVED");
-	    this._states.next(this.options.id);
-	    return this.Events.trigger("queued", {args: this.args, options: this.options, reachedHWM, blocked});
-	  }
-
-	  doRun() {
-	    if (this.retryCount === 0) {
-	      this._assertStatus("QUEUED");
-	      this._states.next(this.options.id);
-	    } else {
-	      this._assertStatus("EXECUTING");
-	    }
-	    return this.Events.trigger("scheduled", {args: this.args, options: this.options});
-	  }
-
-	  async doExecute(chained, clearGlobalState, run, free) {
-	    var error, eventInfo, passed;
-	    if (this.retryCount === 0) {
-	      this._assertStatus("RUNNING");
-	      this._states.next(this.options.id);
-	    } else {
-	      this._assertStatus("EXECUTING");
-	    }
-	    eventInfo = {args: this.args, options: this.options, retryCount: this.retryCount};
-	    this.Events.trigger("executing", eventInfo);
-	    try {
-	      passed = (await (chained != null ? chained.schedule(this.options, this.task, ...this.args) : this.task(...this.args)));
-	      if (clearGlobalState()) {
-	        this.doDone(eventInfo);
-	        await free(this.options, eventInfo);
-	        this._assertStatus("DONE");
-	        return this._resolve(passed);
-	      }
-	    } catch (error1) {
-	      error = error1;
-	      return this._onFailure(error, eventInfo, clearGlobalState, run, free);
-	    }
-	  }
-
-	  doExpire(clearGlobalState, run, free) {
-	    var error, eventInfo;
-	    if (this._states.jobStatus(this.options.id === "RUNNING")) {
-	      this._states.next(this.options.id);
-	    }
-	    this._assertStatus("EXECUTING");
-	    eventInfo = {args: this.args, options: this.options, retryCount: this.retryCount};
-	    error = new BottleneckError$1(`This job timed out after ${this.options.expiration} ms.`);
-	    return this._onFailure(error, eventInfo, clearGlobalState, run, free);
-	  }
-
-	  async _onFailure(error, eventInfo, clearGlobalState, run, free) {
-	    var retry, retryAfter;
-	    if (clearGlobalState()) {
-	      retry = (await this.Events.trigger("failed", error, eventInfo));
-	      if (retry != null) {
-	        retryAfter = ~~retry;
-	        this.Events.trigger("retry", `Retrying ${this.options.id} after ${retryAfter} ms`, eventInfo);
-	        this.retryCount++;
-	        return run(retryAfter);
-	      } else {
-	        this.doDone(eventInfo);
-	        await free(this.options, eventInfo);
-	        this._assertStatus("DONE");
-	        return this._reject(error);
-	      }
-	    }
-	  }
-
-	  doDone(eventInfo) {
-	    this._assertStatus("EXECUTING");
-	    this._states.next(this.options.id);
-	    return this.Events.trigger("done", eventInfo);
-	  }
-
-	};
-
-	var Job_1 = Job;
-
-	var BottleneckError$2, LocalDatastore, parser$2;
-
-	parser$2 = parser;
-
-	BottleneckError$2 = BottleneckError_1;
-
-	LocalDatastore = class LocalDatastore {
-	  constructor(instance, storeOptions, storeInstanceOptions) {
-	    this.instance = instance;
-	    this.storeOptions = storeOptions;
-	    this.clientId = this.instance._randomIndex();
-	    parser$2.load(storeInstanceOptions, storeInstanceOptions, this);
-	    this._nextRequest = this._lastReservoirRefresh = this._lastReservoirIncrease = Date.now();
-	    this._running = 0;
-	    this._done = 0;
-	    this._unblockTime = 0;
-	    this.ready = this.Promise.resolve();
-	    this.clients = {};
-	    this._startHeartbeat();
-	  }
-
-	  _startHeartbeat() {
-	    var base;
-	    if ((this.heartbeat == null) && (((this.storeOptions.reservoirRefreshInterval != null) && (this.storeOptions.reservoirRefreshAmount != null)) || ((this.storeOptions.reservoirIncreaseInterval != null) && (this.storeOptions.reservoirIncreaseAmount != null)))) {
-	      return typeof (base = (this.heartbeat = setInterval(() => {
-	        var amount, incr, maximum, now, reservoir;
-	        now = Date.now();
-	        if ((this.storeOptions.reservoirRefreshInterval != null) && now >= this._lastReservoirRefresh + this.storeOptions.reservoirRefreshInterval) {
-	          this._lastReservoirRefresh = now;
-	          this.storeOptions.reservoir = this.storeOptions.reservoirRefreshAmount;
-	          this.instance._drainAll(this.computeCapacity());
-	        }
-	        if ((this.storeOptions.reservoirIncreaseInterval != null) && now >= this._lastReservoirIncrease + this.storeOptions.reservoirIncreaseInterval) {
-	          ({
-	            reservoirIncreaseAmount: amount,
-	            reservoirIncreaseMaximum: maximum,
-	            reservoir
-	          } = this.storeOptions);
-	          this._lastReservoirIncrease = now;
-	          incr = maximum != null ? Math.min(amount, maximum - reservoir) : amount;
-	          if (incr > 0) {
-	            this.storeOptions.reservoir += incr;
-	            return this.instance._drainAll(this.computeCapacity());
-	          }
-	        }
-	      }, this.heartbeatInterval))).unref === "function" ? base.unref() : void 0;
-	    } else {
-	      return clearInterval(this.heartbeat);
-	    }
-	  }
-
-	  async __publish__(message) {
-	    await this.yieldLoop();
-	    return this.instance.Events.trigger("message", message.toString());
-	  }
-
-	  async __disconnect__(flush) {
-	    await this.yieldLoop();
-	    clearInterval(this.heartbeat);
-	    return this.Promise.resolve();
-	  }
-
-	  yieldLoop(t = 0) {
-	    return new this.Promise(function(resolve, reject) {
-	      return setTimeout(resolve, t);
-	    });
-	  }
-
-	  computePenalty() {
-	    var ref;
-	    return (ref = this.storeOptions.penalty) != null ? ref : (15 * this.storeOptions.minTime) || 5000;
-	  }
-
-	  async __updateSettings__(options) {
-	    await this.yieldLoop();
-	    parser$2.overwrite(options, options, this.storeOptions);
-	    this._startHeartbeat();
-	    this.instance._drainAll(this.computeCapacity());
-	    return true;
-	  }
-
-	  async __running__() {
-	    await this.yieldLoop();
-	    return this._running;
-	  }
-
-	  async __queued__() {
-	    await this.yieldLoop();
-	    return this.instance.queued();
-	  }
-
-	  async __done__() {
-	    await this.yieldLoop();
-	    return this._done;
-	  }
-
-	  async __groupCheck__(time) {
-	    await this.yieldLoop();
-	    return (this._nextRequest + this.timeout) < time;
-	  }
-
-	  computeCapacity() {
-	    var maxConcurrent, reservoir;
-	    ({maxConcurrent, reservoir} = this.storeOptions);
-	    if ((maxConcurrent != null) && (reservoir != null)) {
-	      return Math.min(maxConcurrent - this._running, reservoir);
-	    } else if (maxConcurrent != null) {
-	      return maxConcurrent - this._running;
-	    } else if (reservoir != null) {
-	      return reservoir;
-	    } else {
-	      return null;
-	    }
-	  }
-
-	  conditionsCheck(weight) {
-	    var capacity;
-	    capacity = this.computeCapacity();
-	    return (capacity == null) || weight <= capacity;
-	  }
-
-	  async __incrementReservoir__(incr) {
-	    var reservoir;
-	    await this.yieldLoop();
-	    reservoir = this.storeOptions.reservoir += incr;
-	    this.instance._drainAll(this.computeCapacity());
-	    return reservoir;
-	  }
-
-	  async __currentReservoir__() {
-	    await this.yieldLoop();
-	    return this.storeOptions.reservoir;
-	  }
-
-	  isBlocked(now) {
-	    return this._unblockTime >= now;
-	  }
-
-	  check(weight, now) {
-	    return this.conditionsCheck(weight) && (this._nextRequest - now) <= 0;
-	  }
-
-	  async __check__(weight) {
-	    var now;
-	    await this.yieldLoop();
-	    now = Date.now();
-	    return this.check(weight, now);
-	  }
-
-	  async __register__(index, weight, expiration) {
-	    var now, wait;
-	    await this.yieldLoop();
-	    now = Date.now();
-	    if (this.conditionsCheck(weight)) {
-	      this._running += weight;
-	      if (this.storeOptions.reservoir != null) {
-	        this.storeOptions.reservoir -= weight;
-	      }
-	      wait = Math.max(this._nextRequest - now, 0);
-	      this._nextRequest = now + wait + this.storeOptions.minTime;
-	      return {
-	        success: true,
-	        wait,
-	        reservoir: this.storeOptions.reservoir
-	      };
-	    } else {
-	      return {
-	        success: false
-	      };
-	    }
-	  }
-
-	  strategyIsBlock() {
-	    return this.storeOptions.strategy === 3;
-	  }
-
-	  async __submit__(queueLength, weight) {
-	    var blocked, now, reachedHWM;
-	    await this.yieldLoop();
-	    if ((this.storeOptions.maxConcurrent != null) && weight > this.storeOptions.maxConcurrent) {
-	      throw new BottleneckError$2(`Impossible to add a job having a weight of ${weight} to a limiter having a maxConcurrent setting of ${this.storeOptions.maxConcurrent}`);
-	    }
-	    now = Date.now();
-	    reachedHWM = (this.storeOptions.highWater != null) && queueLength === this.storeOptions.highWater && !this.check(weight, now);
-	    blocked = this.strategyIsBlock() && (reachedHWM || this.isBlocked(now));
-	    if (blocked) {
-	      this._unblockTime = now + this.computePenalty();
-	      this._nextRequest = this._unblockTime + this.storeOptions.minTime;
-	      this.instance._dropAllQueued();
-	    }
-	    return {
-	      reachedHWM,
-	      blocked,
-	      strategy: this.storeOptions.strategy
-	    };
-	  }
-
-	  async __free__(index, weight) {
-	    await this.yieldLoop();
-	    this._running -= weight;
-	    this._done += weight;
-	    this.instance._drainAll(this.computeCapacity());
-	    return {
-	      running: this._running
-	    };
-	  }
-
-	};
-
-	var LocalDatastore_1 = LocalDatastore;
-
-	var BottleneckError$3, States;
-
-	BottleneckError$3 = BottleneckError_1;
-
-	States = class States {
-	  constructor(status1) {
-	    this.status = status1;
-	    this._jobs = {};
-	    this.counts = this.status.map(function() {
-	      return 0;
-	    });
-	  }
-
-	  next(id) {
-	    var current, next;
-	    current = this._jobs[id];
-	    next = current + 1;
-	    if ((current != null) && next < this.status.length) {
-	      this.counts[current]--;
-	      this.counts[next]++;
-	      return this._jobs[id]++;
-	    } else if (current != null) {
-	      this.counts[current]--;
-	      return delete this._jobs[id];
-	    }
-	  }
-
-	  start(id) {
-	    var initial;
-	    initial = 0;
-	    this._jobs[id] = initial;
-	    return this.counts[initial]++;
-	  }
-
-	  remove(id) {
-	    var current;
-	    current = this._jobs[id];
-	    if (current != null) {
-	      this.counts[current]--;
-	      delete this._jobs[id];
-	    }
-	    return current != null;
-	  }
-
-	  jobStatus(id) {
-	    var ref;
-	    return (ref = this.status[this._jobs[id]]) != null ? ref : null;
-	  }
-
-	  statusJobs(status) {
-	    var k, pos, ref, results, v;
-	    if (status != null) {
-	      pos = this.status.indexOf(status);
-	      if (pos < 0) {
-	        throw new BottleneckError$3(`status must be one of ${this.status.join(', ')}`);
-	      }
-	      ref = this._jobs;
-	      results = [];
-	      for (k in ref) {
-	        v = ref[k];
-	        if (v === pos) {
-	          results.push(k);
-	        }
-	      }
-	      return results;
-	    } else {
-	      return Object.keys(this._jobs);
-	    }
-	  }
-
-	  statusCounts() {
-	    return this.counts.reduce(((acc, v, i) => {
-	      acc[this.status[i]] = v;
-	      return acc;
-	    }), {});
-	  }
-
-	};
-
-	var States_1 = States;
-
-	var DLList$2, Sync;
-
-	DLList$2 = DLList_1;
-
-	Sync = class Sync {
-	  constructor(name, Promise) {
-	    this.schedule = this.schedule.bind(this);
-	    this.name = name;
-	    this.Promise = Promise;
-	    this._running = 0;
-	    this._queue = new DLList$2();
-	  }
-
-	  isEmpty() {
-	    return this._queue.length === 0;
-	  }
-
-	  async _tryToRun() {
-	    var args, cb, error, reject, resolve, returned, task;
-	    if ((this._running < 1) && this._queue.length > 0) {
-	      this._running++;
-	      ({task, args, resolve, reject} = this._queue.shift());
-	      cb = (await (async function() {
-	        try {
-	          returned = (await task(...args));
-	          return function() {
-	            return resolve(returned);
-	          };
-	        } catch (error1) {
-	          error = error1;
-	          return function() {
-	            return reject(error);
-	          };
-	        }
-	      })());
-	      this._running--;
-	      this._tryToRun();
-	      return cb();
-	    }
-	  }
-
-	  schedule(task, ...args) {
-	    var promise, reject, resolve;
-	    resolve = reject = null;
-	    promise = new this.Promise(function(_resolve, _reject) {
-	      resolve = _resolve;
-	      return reject = _reject;
-	    });
-	    this._queue.push({task, args, resolve, reject});
-	    this._tryToRun();
-	    return promise;
-	  }
-
-	};
-
-	var Sync_1 = Sync;
-
-	var version = "2.19.5";
-	var version$1 = {
-		version: version
-	};
-
-	var version$2 = /*#__PURE__*/Object.freeze({
-		version: version,
-		default: version$1
-	});
-
-	var require$$2 = () => console.log('You must import the full version of Bottleneck in order to use this feature.');
-
-	var require$$3 = () => console.log('You must import the full version of Bottleneck in order to use this feature.');
-
-	var require$$4 = () => console.log('You must import the full version of Bottleneck in order to use this feature.');
-
-	var Events$2, Group, IORedisConnection$1, RedisConnection$1, Scripts$1, parser$3;
-
-	parser$3 = parser;
-
-	Events$2 = Events_1;
-
-	RedisConnection$1 = require$$2;
-
-	IORedisConnection$1 = require$$3;
-
-	Scripts$1 = require$$4;
-
-	Group = (function() {
-	  class Group {
-	    constructor(limiterOptions = {}) {
-	      this.deleteKey = this.deleteKey.bind(this);
-	      this.limiterOptions = limiterOptions;
-	      parser$3.load(this.limiterOptions, this.defaults, this);
-	      this.Events = new Events$2(this);
-	      this.instances = {};
-	      this.Bottleneck = Bottleneck_1;
-	      this._startAutoCleanup();
-	      this.sharedConnection = this.connection != null;
-	      if (this.connection == null) {
-	        if (this.limiterOptions.datastore === "redis") {
-	          this.connection = new RedisConnection$1(Object.assign({}, this.limiterOptions, {Events: this.Events}));
-	        } else if (this.limiterOptions.datastore === "ioredis") {
-	          this.connection = new IORedisConnection$1(Object.assign({}, this.limiterOptions, {Events: this.Events}));
-	        }
-	      }
-	    }
-
-	    key(key = "") {
-	      var ref;
-	      return (ref = this.instances[key]) != null ? ref : (() => {
-	        var limiter;
-	        limiter = this.instances[key] = new this.Bottleneck(Object.assign(this.limiterOptions, {
-	          id: `${this.id}-${key}`,
-	          timeout: this.timeout,
-	          connection: this.connection
-	        }));
-	        this.Events.trigger("created", limiter, key);
-	        return limiter;
-	      })();
-	    }
-
-	    async deleteKey(key = "") {
-	      var deleted, instance;
-	      instance = this.instances[key];
-	      if (this.connection) {
-	        deleted = (await this.connection.__runCommand__(['del', ...Scripts$1.allKeys(`${this.id}-${key}`)]));
-	      }
-	      if (instance != null) {
-	        delete this.instances[key];
-	        await instance.disconnect();
-	      }
-	      return (instance != null) || deleted > 0;
-	    }
-
-	    limiters() {
-	      var k, ref, results, v;
-	      ref = this.instances;
-	      results = [];
-	      for (k in ref) {
-	        v = ref[k];
-	        results.push({
-	          key: k,
-	          limiter: v
-	        });
-	      }
-	      return results;
-	    }
-
-	    keys() {
-	      return Object.keys(this.instances);
-	    }
-
-	    async clusterKeys() {
-	      var cursor, end, found, i, k, keys, len, next, start;
-	      if (this.connection == null) {
-	        return this.Promise.resolve(this.keys());
-	      }
-	      keys = [];
-	      cursor = null;
-	      start = `b_${this.id}-`.length;
-	      end = "_settings".length;
-	      while (cursor !== 0) {
-	        [next, found] = (await this.connection.__runCommand__(["scan", cursor != null ? cursor : 0, "match", `b_${this.id}-*_settings`, "count", 10000]));
-	        cursor = ~~next;
-	        for (i = 0, len = found.length; i < len; i++) {
-	          k = found[i];
-	          keys.push(k.slice(start, -end));
-	        }
-	      }
-	      return keys;
-	    }
-
-	    _startAutoCleanup() {
-	      var base;
-	      clearInterval(this.interval);
-	      return typeof (base = (this.interval = setInterval(async() => {
-	        var e, k, ref, results, time, v;
-	        time = Date.now();
-	        ref = this.instances;
-	        results = [];
-	        for (k in ref) {
-	          v = ref[k];
-	          try {
-	            if ((await v._store.__groupCheck__(time))) {
-	              results.push(this.deleteKey(k));
-	            } else {
-	              results.push(void 0);
-	            }
-	          } catch (error) {
-	            e = error;
-	            results.push(v.Events.trigger("error", e));
-	          }
-	        }
-	        return results;
-	      }, this.timeout / 2))).unref === "function" ? base.unref() : void 0;
-	    }
-
-	    updateSettings(options = {}) {
-	      parser$3.overwrite(options, this.defaults, this);
-	      parser$3.overwrite(options, options, this.limiterOptions);
-	      if (options.timeout != null) {
-	        return this._startAutoCleanup();
-	      }
-	    }
-
-	    disconnect(flush = true) {
-	      var ref;
-	      if (!this.sharedConnection) {
-	        return (ref = this.connection) != null ? ref.disconnect(flush) : void 0;
-	      }
-	    }
-
-	  }
-	  Group.prototype.defaults = {
-	    timeout: 1000 * 60 * 5,
-	    connection: null,
-	    Promise: Promise,
-	    id: "group-key"
-	  };
-
-	  return Group;
-
-	}).call(commonjsGlobal);
-
-	var Group_1 = Group;
-
-	var Batcher, Events$3, parser$4;
-
-	parser$4 = parser;
-
-	Events$3 = Events_1;
-
-	Batcher = (function() {
-	  class Batcher {
-	    constructor(options = {}) {
-	      this.options = options;
-	      parser$4.load(this.options, this.defaults, this);
-	      this.Events = new Events$3(this);
-	      this._arr = [];
-	      this._resetPromise();
-	      this._lastFlush = Date.now();
-	    }
-
-	    _resetPromise() {
-	      return this._promise = new this.Promise((res, rej) => {
-	        return this._resolve = res;
-	      });
-	    }
-
-	    _flush() {
-	      clearTimeout(this._timeout);
-	      this._lastFlush = Date.now();
-	      this._resolve();
-	      this.Events.trigger("batch", this._arr);
-	      this._arr = [];
-	      return this._resetPromise();
-	    }
-
-	    add(data) {
-	      var ret;
-	      this._arr.push(data);
-	      ret = this._promise;
-	      if (this._arr.length === this.maxSize) {
-	        this._flush();
-	      } else if ((this.maxTime != null) && this._arr.length === 1) {
-	        this._timeout = setTimeout(() => {
-	          return this._flush();
-	        }, this.maxTime);
-	      }
-	      return ret;
-	    }
-
-	  }
-	  Batcher.prototype.defaults = {
-	    maxTime: null,
-	    maxSize: null,
-	    Promise: Promise
-	  };
-
-	  return Batcher;
-
-	}).call(commonjsGlobal);
-
-	var Batcher_1 = Batcher;
-
-	var require$$4$1 = () => console.log('You must import the full version of Bottleneck in order to use this feature.');
-
-	var require$$8 = getCjsExportFromNamespace(version$2);
-
-	var Bottleneck, DEFAULT_PRIORITY$1, Events$4, Job$1, LocalDatastore$1, NUM_PRIORITIES$1, Queues$1, RedisDatastore$1, States$1, Sync$1, parser$5,
-	  splice = [].splice;
-
-	NUM_PRIORITIES$1 = 10;
-
-	DEFAULT_PRIORITY$1 = 5;
-
-	parser$5 = parser;
-
-	Queues$1 = Queues_1;
-
-	Job$1 = Job_1;
-
-	LocalDatastore$1 = LocalDatastore_1;
-
-	RedisDatastore$1 = require$$4$1;
-
-	Events$4 = Events_1;
-
-	States$1 = States_1;
-
-	Sync$1 = Sync_1;
-
-	Bottleneck = (function() {
-	  class Bottleneck {
-	    constructor(options = {}, ...invalid) {
-	      var storeInstanceOptions, storeOptions;
-	      this._addToQueue = this._addToQueue.bind(this);
-	      this._validateOptions(options, invalid);
-	      parser$5.load(options, this.instanceDefaults, this);
-	      this._queues = new Queues$1(NUM_PRIORITIES$1);
-	      this._scheduled = {};
-	      this._states = new States$1(["RECEIVED", "QUEUED", "RUNNING", "EXECUTING"].concat(this.trackDoneStatus ? ["DONE"] : []));
-	      this._limiter = null;
-	      this.Events = new Events$4(this);
-	      this._submitLock = new Sync$1("submit", this.Promise);
-	      this._registerLock = new Sync$1("register", this.Promise);
-	      storeOptions = parser$5.load(options, this.storeDefaults, {});
-	      this._store = (function() {
-	        if (this.datastore === "redis" || this.datastore === "ioredis" || (this.connection != null)) {
-	          storeInstanceOptions = parser$5.load(options, this.redisStoreDefaults, {});
-	          return new RedisDatastore$1(this, storeOptions, storeInstanceOptions);
-	        } else if (this.datastore === "local") {
-	          storeInstanceOptions = parser$5.load(options, this.localStoreDefaults, {});
-	          return new LocalDatastore$1(this, storeOptions, storeInstanceOptions);
-	        } else {
-	          throw new Bottleneck.prototype.BottleneckError(`Invalid datastore type: ${this.datastore}`);
-	        }
-	      }).call(this);
-	      this._queues.on("leftzero", () => {
-	        var ref;
-	        return (ref = this._store.heartbeat) != null ? typeof ref.ref === "function" ? ref.ref() : void 0 : void 0;
-	      });
-	      this._queues.on("zero", () => {
-	        var ref;
-	        return (ref = this._store.heartbeat) != null ? typeof ref.unref === "function" ? ref.unref() : void 0 : void 0;
-	      });
-	    }
-
-	    _validateOptions(options, invalid) {
-	      if (!((options != null) && typeof options === "object" && invalid.length === 0)) {
-	        throw new Bottleneck.prototype.BottleneckError("Bottleneck v2 takes a single object argument. Refer to https://github.com/SGrondin/bottleneck#upgrading-to-v2 if you're upgrading from Bottleneck v1.");
-	      }
-	    }
-
-	    ready() {
-	      return this._store.ready;
-	    }
-
-	    clients() {
-	      return this._store.clients;
-	    }
-
-	    channel() {
-	      return `b_${this.id}`;
-	    }
-
-	    channel_client() {
-	      return `b_${this.id}_${this._store.clientId}`;
-	    }
-
-	    publish(message) {
-	      return this._store.__publish__(message);
-	    }
-
-	    disconnect(flush = true) {
-	      return this._store.__disconnect__(flush);
-	    }
-
-	    chain(_limiter) {
-	      this._limiter = _limiter;
-	      return this;
-	    }
-
-	    queued(priority) {
-	      return this._queues.queued(priority);
-	    }
-
-	    clusterQueued() {
-	      return this._store.__queued__();
-	    }
-
-	    empty() {
-	      return this.queued() === 0 && this._submitLock.isEmpty();
-	    }
-
-	    running() {
-	      return this._store.__running__();
-	    }
-
-	    done() {
-	      return this._store.__done__();
-	    }
-
-	    jobStatus(id) {
-	      return this._states.jobStatus(id);
-	    }
-
-	    jobs(status) {
-	      return this._states.statusJobs(status);
-	    }
-
-	    counts() {
-	      return this._states.statusCounts();
-	    }
-
-	    _randomIndex() {
-	      return Math.random().toString(36).slice(2);
-	    }
-
-	    check(weight = 1) {
-	      return this._store.__check__(weight);
-	    }
-
-	    _clearGlobalState(index) {
-	      if (this._scheduled[index] != null) {
-	        clearTimeout(this._scheduled[index].expiration);
-	        delete this._scheduled[index];
-	        return true;
-	      } else {
-	        return false;
-	      }
-	    }
-
-	    async _free(index, job, options, eventInfo) {
-	      var e, running;
-	      try {
-	        ({running} = (await this._store.__free__(index, options.weight)));
-	        this.Events.trigger("debug", `Freed ${options.id}`, eventInfo);
-	        if (running === 0 && this.empty()) {
-	          return this.Events.trigger("idle");
-	        }
-	      } catch (error1) {
-	        e = error1;
-	        return this.Events.trigger("error", e);
-	      }
-	    }
-
-	    _run(index, job, wait) {
-	      var clearGlobalState, free, run;
-	      job.doRun();
-	      clearGlobalState = this._clearGlobalState.bind(this, index);
-	      run = this._run.bind(this, index, job);
-	      free = this._free.bind(this, index, job);
-	      return this._scheduled[index] = {
-	        timeout: setTimeout(() => {
-	          return job.doExecute(this._limiter, clearGlobalState, run, free);
-	        }, wait),
-	        expiration: job.options.expiration != null ? setTimeout(function() {
-	          return job.doExpire(clearGlobalState, run, free);
-	        }, wait + job.options.expiration) : void 0,
-	        job: job
-	      };
-	    }
-
-	    _drainOne(capacity) {
-	      return this._registerLock.schedule(() => {
-	        var args, index, next, options, queue;
-	        if (this.queued() === 0) {
-	          return this.Promise.resolve(null);
-	        }
-	        queue = this._queues.getFirst();
-	        ({options, args} = next = queue.first());
-	        if ((capacity != null) && options.weight > capacity) {
-	          return this.Promise.resolve(null);
-	        }
-	        this.Events.trigger("debug", `Draining ${options.id}`, {args, options});
-	        index = this._randomIndex();
-	        return this._store.__register__(index, options.weight, options.expiration).then(({success, wait, reservoir}) => {
-	          var empty;
-	          this.Events.trigger("debug", `Drained ${options.id}`, {success, args, options});
-	          if (success) {
-	            queue.shift();
-	            empty = this.empty();
-	            if (empty) {
-	              this.Events.trigger("empty");
-	            }
-	            if (reservoir === 0) {
-	              this.Events.trigger("depleted", empty);
-	            }
-	            this._run(index, next, wait);
-	            return this.Promise.resolve(options.weight);
-	          } else {
-	            return this.Promise.resolve(null);
-	          }
-	        });
-	      });
-	    }
-
-	    _drainAll(capacity, total = 0) {
-	      return this._drainOne(capacity).then((drained) => {
-	        var newCapacity;
-	        if (drained != null) {
-	          newCapacity = capacity != null ? capacity - drained : capacity;
-	          return this._drainAll(newCapacity, total + drained);
-	        } else {
-	          return this.Promise.resolve(total);
-	        }
-	      }).catch((e) => {
-	        return this.Events.trigger("error", e);
-	      });
-	    }
-
-	    _dropAllQueued(message) {
-	      return this._queues.shiftAll(function(job) {
-	        return job.doDrop({message});
-	      });
-	    }
-
-	    stop(options = {}) {
-	      var done, waitForExecuting;
-	      options = parser$5.load(options, this.stopDefaults);
-	      waitForExecuting = (at) => {
-	        var finished;
-	        finished = () => {
-	          var counts;
-	          counts = this._states.counts;
-	          return (counts[0] + counts[1] + counts[2] + counts[3]) === at;
-	        };
-	        return new this.Promise((resolve, reject) => {
-	          if (finished()) {
-	            return resolve();
-	          } else {
-	            return this.on("done", () => {
-	              if (finished()) {
-	                this.removeAllListeners("done");
-	                return resolve();
-	              }
-	            });
-	          }
-	        });
-	      };
-	      done = options.dropWaitingJobs ? (this._run = function(index, next) {
-	        return next.doDrop({
-	          message: options.dropErrorMessage
-	        });
-	      }, this._drainOne = () => {
-	        return this.Promise.resolve(null);
-	      }, this._registerLock.schedule(() => {
-	        return this._submitLock.schedule(() => {
-	          var k, ref, v;
-	          ref = this._scheduled;
-	          for (k in ref) {
-	            v = ref[k];
-	            if (this.jobStatus(v.job.options.id) === "RUNNING") {
-	              clearTimeout(v.timeout);
-	              clearTimeout(v.expiration);
-	              v.job.doDrop({
-	                message: options.dropErrorMessage
-	              });
-	            }
-	          }
-	          this._dropAllQueued(options.dropErrorMessage);
-	          return waitForExecuting(0);
-	        });
-	      })) : this.schedule({
-	        priority: NUM_PRIORITIES$1 - 1,
-	        weight: 0
-	      }, () => {
-	        return waitForExecuting(1);
-	      });
-	      this._receive = function(job) {
-	        return job._reject(new Bottleneck.prototype.BottleneckError(options.enqueueErrorMessage));
-	      };
-	      this.stop = () => {
-	        return this.Promise.reject(new Bottleneck.prototype.BottleneckError("stop() has already been called"));
-	      };
-	      return done;
-	    }
-
-	    async _addToQueue(job) {
-	      var args, blocked, error, options, reachedHWM, shifted, strategy;
-	      ({args, options} = job);
-	      try {
-	        ({reachedHWM, blocked, strategy} = (await this._store.__submit__(this.queued(), options.weight)));
-	      } catch (error1) {
-	        error = error1;
-	        this.Events.trigger("debug", `Could not queue ${options.id}`, {args, options, error});
-	        job.doDrop({error});
-	        return false;
-	      }
-	      if (blocked) {
-	        job.doDrop();
-	        return true;
-	      } else if (reachedHWM) {
-	        shifted = strategy === Bottleneck.prototype.strategy.LEAK ? this._queues.shiftLastFrom(options.priority) : strategy === Bottleneck.prototype.strategy.OVERFLOW_PRIORITY ? this._queues.shiftLastFrom(options.priority + 1) : strategy === Bottleneck.prototype.strategy.OVERFLOW ? job : void 0;
-	        if (shifted != null) {
-	          shifted.doDrop();
-	        }
-	        if ((shifted == null) || strategy === Bottleneck.prototype.strategy.OVERFLOW) {
-	          if (shifted == null) {
-	            job.doDrop();
-	          }
-	          return reachedHWM;
-	        }
-	      }
-	      job.doQueue(reachedHWM, blocked);
-	      this._queues.push(job);
-	      await this._drainAll();
-	      return reachedHWM;
-	    }
-
-	    _receive(job) {
-	      if (this._states.jobStatus(job.options.id) != null) {
-	        job._reject(new Bottleneck.prototype.BottleneckError(`A job with the same id already exists (id=${job.options.id})`));
-	        return false;
-	      } else {
-	        job.doReceive();
-	        return this._submitLock.schedule(this._addToQueue, job);
-	      }
-	    }
-
-	    submit(...args) {
-	      var cb, fn, job, options, ref, ref1, task;
-	      if (typeof args[0] === "function") {
-	        ref = args, [fn, ...args] = ref, [cb] = splice.call(args, -1);
-	        options = parser$5.load({}, this.jobDefaults);
-	      } else {
-	        ref1 = args, [options, fn, ...args] = ref1, [cb] = splice.call(args, -1);
-	        options = parser$5.load(options, this.jobDefaults);
-	      }
-	      task = (...args) => {
-	        return new this.Promise(function(resolve, reject) {
-	          return fn(...args, function(...args) {
-	            return (args[0] != null ? reject : resolve)(args);
-	          });
-	        });
-	      };
-	      job = new Job$1(task, args, options, this.jobDefaults, this.rejectOnDrop, this.Events, this._states, this.Promise);
-	      job.promise.then(function(args) {
-	        return typeof cb === "function" ? cb(...args) : void 0;
-	      }).catch(function(args) {
-	        if (Array.isArray(args)) {
-	          return typeof cb === "function" ? cb(...args) : void 0;
-	        } else {
-	          return typeof cb === "function" ? cb(args) : void 0;
-	        }
-	      });
-	      return this._receive(job);
-	    }
-
-	    schedule(...args) {
-	      var job, options, task;
-	      if (typeof args[0] === "function") {
-	        [task, ...args] = args;
-	        options = {};
-	      } else {
-	        [options, task, ...args] = args;
-	      }
-	      job = new Job$1(task, args, options, this.jobDefaults, this.rejectOnDrop, this.Events, this._states, this.Promise);
-	      this._receive(job);
-	      return job.promise;
-	    }
-
-	    wrap(fn) {
-	      var schedule, wrapped;
-	      schedule = this.schedule.bind(this);
-	      wrapped = function(...args) {
-	        return schedule(fn.bind(this), ...args);
-	      };
-	      wrapped.withOptions = function(options, ...args) {
-	        return schedule(options, fn, ...args);
-	      };
-	      return wrapped;
-	    }
-
-	    async updateSettings(options = {}) {
-	      await this._store.__updateSettings__(parser$5.overwrite(options, this.storeDefaults));
-	      parser$5.overwrite(options, this.instanceDefaults, this);
-	      return this;
-	    }
-
-	    currentReservoir() {
-	      return this._store.__currentReservoir__();
-	    }
-
-	    incrementReservoir(incr = 0) {
-	      return this._store.__incrementReservoir__(incr);
-	    }
-
-	  }
-	  Bottleneck.default = Bottleneck;
-
-	  Bottleneck.Events = Events$4;
-
-	  Bottleneck.version = Bottleneck.prototype.version = require$$8.version;
-
-	  Bottleneck.strategy = Bottleneck.prototype.strategy = {
-	    LEAK: 1,
-	    OVERFLOW: 2,
-	    OVERFLOW_PRIORITY: 4,
-	    BLOCK: 3
-	  };
-
-	  Bottleneck.BottleneckError = Bottleneck.prototype.BottleneckError = BottleneckError_1;
-
-	  Bottleneck.Group = Bottleneck.prototype.Group = Group_1;
-
-	  Bottleneck.RedisConnection = Bottleneck.prototype.RedisConnection = require$$2;
-
-	  Bottleneck.IORedisConnection = Bottleneck.prototype.IORedisConnection = require$$3;
-
-	  Bottleneck.Batcher = Bottleneck.prototype.Batcher = Batcher_1;
-
-	  Bottleneck.prototype.jobDefaults = {
-	    priority: DEFAULT_PRIORITY$1,
-	    weight: 1,
-	    expiration: null,
-	    id: "<no-id>"
-	  };
-
-	  Bottleneck.prototype.storeDefaults = {
-	    maxConcurrent: null,
-	    minTime: 0,
-	    highWater: null,
-	    strategy: Bottleneck.prototype.strategy.LEAK,
-	    penalty: null,
-	    reservoir: null,
-	    reservoirRefreshInterval: null,
-	    reservoirRefreshAmount: null,
-	    reservoirIncreaseInterval: null,
-	    reservoirIncreaseAmount: null,
-	    reservoirIncreaseMaximum: null
-	  };
-
-	  Bottleneck.prototype.localStoreDefaults = {
-	    Promise: Promise,
-	    timeout: null,
-	    heartbeatInterval: 250
-	  };
-
-	  Bottleneck.prototype.redisStoreDefaults = {
-	    Promise: Promise,
-	    timeout: null,
-	    heartbeatInterval: 5000,
-	    clientTimeout: 10000,
-	    Redis: null,
-	    clientOptions: {},
-	    clusterNodes: null,
-	    clearDatastore: false,
-	    connection: null
-	  };
-
-	  Bottleneck.prototype.instanceDefaults = {
-	    datastore: "local",
-	    connection: null,
-	    id: "<no-id>",
-	    rejectOnDrop: true,
-	    trackDoneStatus: false,
-	    Promise: Promise
-	  };
-
-	  Bottleneck.prototype.stopDefaults = {
-	    enqueueErrorMessage: "This limiter has been stopped and cannot accept new jobs.",
-	    dropWaitingJobs: true,
-	    dropErrorMessage: "This limiter has been stopped."
-	  };
-
-	  return Bottleneck;
-
-	}).call(commonjsGlobal);
-
-	var Bottleneck_1 = Bottleneck;
-
-	var lib = Bottleneck_1;
-
-	return lib;
-
-})));
-
-
-/***/ }),
-
 /***/ 770:
 /***/ ((module, __unused_webpack_exports, __nccwpck_require__) => {
 
@@ -30984,9 +29454,9 @@ module.exports = {
 /* harmony export */   Xo: () => (/* binding */ formatSeconds),
 /* harmony export */   aL: () => (/* binding */ targetShort),
 /* harmony export */   gI: () => (/* binding */ formatMetric),
-/* harmony export */   nO: () => (/* binding */ neurons),
-/* harmony export */   sE: () => (/* binding */ successRate)
+/* harmony export */   nO: () => (/* binding */ neurons)
 /* harmony export */ });
+/* unused harmony export successRate */
 /* harmony import */ var _metric_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8457);
 /** Number and word formatting shared by the search's notes, the gate's reasons and every renderer. Locale-free. */
 
@@ -31219,7 +29689,7 @@ function shuffle(items, rng) {
 
 /***/ }),
 
-/***/ 7432:
+/***/ 606:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -39049,19 +37519,47 @@ const EXIT = {
 var external_node_crypto_ = __nccwpck_require__(7598);
 ;// CONCATENATED MODULE: external "node:fs/promises"
 const promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
+;// CONCATENATED MODULE: ./src/files/process.ts
+/** Whether a process of this machine still runs, for telling a dead writer's leftovers from a live one's. */
+/**
+ * True only when `pid` certainly names no running process here (ESRCH). A process of
+ * another user (EPERM) runs; anything unclear counts as running, so nothing live is touched.
+ */
+function processIsGone(pid) {
+    if (!Number.isSafeInteger(pid) || pid <= 0)
+        return false;
+    try {
+        process.kill(pid, 0);
+        return false;
+    }
+    catch (e) {
+        return e.code === 'ESRCH';
+    }
+}
+
 ;// CONCATENATED MODULE: ./src/files/atomic.ts
 /**
  * Writes a file so that readers see either the old content or the whole new content,
  * never a half-written file: write a temp file in the same folder, then rename it over
  * the target (rename is atomic within one file system, which is why the temp file must
  * live beside the target rather than in the OS temp folder).
+ *
+ * A writer killed between the two steps leaves its temp file behind. The names follow one
+ * pattern, `.NAME.PID.HEX.neuron-budget.tmp`, which users can ignore in git
+ * (`*.neuron-budget.tmp`), and the next write of the same target removes those whose
+ * writer is gone.
  */
 
 
 
+
+const TEMP_SUFFIX = '.neuron-budget.tmp';
+/** A temp file this old is stale whatever its PID says (a PID can be reused, or belong to another machine). @testOnly */
+const STALE_TEMP_AGE_MS = 60 * 60 * 1000;
 async function writeFileAtomic(path, text) {
+    await removeStaleTempFiles(path);
     // The random suffix only names the temp file; it never reaches any output.
-    const temp = (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}.${process.pid}.${(0,external_node_crypto_.randomBytes)(6).toString('hex')}.tmp`);
+    const temp = (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}.${process.pid}.${(0,external_node_crypto_.randomBytes)(6).toString('hex')}${TEMP_SUFFIX}`);
     let handle = null;
     try {
         handle = await (0,promises_namespaceObject.open)(temp, 'wx');
@@ -39077,6 +37575,51 @@ async function writeFileAtomic(path, text) {
         await (0,promises_namespaceObject.rm)(temp, { force: true }).catch(() => undefined);
         throw error;
     }
+}
+function escapeRegExp(s) {
+    return s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}
+/**
+ * Removes the temp files that earlier writes of `path` left behind: only names of exactly
+ * our pattern for this target, and only when their writer process is gone (on this machine)
+ * or the file is older than STALE_TEMP_AGE_MS. Never throws: a leftover it cannot remove
+ * must not stop the write. Returns the names removed.
+ * @testOnly
+ */
+async function removeStaleTempFiles(path, now = Date.now()) {
+    const folder = (0,external_node_path_namespaceObject.dirname)(path);
+    // A bare `.tmp` ending is the name neuron-budget 0.1.0 gave them: an upgrade cleans those up too.
+    const pattern = new RegExp(`^\\.${escapeRegExp((0,external_node_path_namespaceObject.basename)(path))}\\.(\\d{1,10})\\.[0-9a-f]{12}(?:${escapeRegExp(TEMP_SUFFIX)}|\\.tmp)$`);
+    let names;
+    try {
+        names = await (0,promises_namespaceObject.readdir)(folder);
+    }
+    catch {
+        return [];
+    }
+    const removed = [];
+    for (const name of names) {
+        const m = pattern.exec(name);
+        if (!m)
+            continue;
+        const pid = Number(m[1]);
+        if (pid === process.pid)
+            continue; // a write of this process may be under way
+        const full = (0,external_node_path_namespaceObject.join)(folder, name);
+        try {
+            const info = await (0,promises_namespaceObject.stat)(full);
+            if (!info.isFile())
+                continue;
+            if (!processIsGone(pid) && now - info.mtimeMs < STALE_TEMP_AGE_MS)
+                continue;
+            await (0,promises_namespaceObject.rm)(full, { force: true });
+            removed.push(name);
+        }
+        catch {
+            // Gone already (another run cleaned it) or not ours to touch: leave it.
+        }
+    }
+    return removed;
 }
 
 ;// CONCATENATED MODULE: ./src/common/paths.ts
@@ -39216,7 +37759,14 @@ const CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
                 default: 0.25,
-                description: 'Fraction of rows held out to judge the target, stratified by class. 0 judges on the training rows.',
+                description: 'Fraction of rows (per class) held out to steer training: when a training stops, and whether a pruning step is kept. 0 steers on the training rows.',
+            },
+            {
+                name: 'judging',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
+                default: DERIVED,
+                description: 'Fraction of rows (per class) held out to judge whether a network meets the target; they never steer training. Default: 0.2 (at most half of what validation leaves), or 0 when data.validation is 0 (then the target is judged on the training rows). 0 with validation above 0 judges on the validation rows, which is optimistic.',
             },
             {
                 name: 'delimiter',
@@ -39326,9 +37876,16 @@ const CONFIG_SPEC = [
             {
                 name: 'optimizer',
                 changesResult: true,
-                rule: { kind: 'enum', values: ['irprop+', 'adam', 'backprop'] },
-                default: 'irprop+',
-                description: 'irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+                rule: { kind: 'enum', values: ['lbfgs', 'irprop+', 'adam', 'backprop'] },
+                default: 'lbfgs',
+                description: 'lbfgs (full-batch L-BFGS with a strong Wolfe line search), irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+            },
+            {
+                name: 'weight-decay',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: 1000 },
+                default: 0.0001,
+                description: 'L2 penalty on the weights (not the biases): the summed loss gains weight-decay/2 × the sum of squared weights. 0 turns it off.',
             },
             {
                 name: 'init',
@@ -39342,7 +37899,14 @@ const CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
                 default: 10,
-                description: 'Epochs between checks of the target on the validation rows; at most max-epochs.',
+                description: 'Epochs between checks of the validation rows; at most max-epochs.',
+            },
+            {
+                name: 'patience',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+                default: 200,
+                description: 'A training stops when its validation loss has not improved (by 0.1%) for this many epochs: early stopping, and the bound on polishing a network that met the target.',
             },
             {
                 name: 'prune',
@@ -39465,6 +38029,12 @@ function sectionDefaults(section) {
     }
     return out;
 }
+/** The judging fraction when validation rows are held out (common practice for a hold-out test set; no single source). */
+const DEFAULT_JUDGING = 0.2;
+/** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
+function derivedJudging(validation) {
+    return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
+}
 
 ;// CONCATENATED MODULE: ./src/config/build.ts
 /**
@@ -39534,6 +38104,12 @@ function checkRules(reader, written, config) {
     const both = data.features?.find((f) => data.ignore.includes(f));
     if (both !== undefined) {
         throw reader.valueError(at('data', 'ignore'), `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`);
+    }
+    if (data.judging === undefined)
+        data.judging = derivedJudging(data.validation);
+    if (data.validation + data.judging >= 1) {
+        const found = at('data', 'judging') ?? at('data', 'validation');
+        throw reader.valueError(found, `expected data.validation + data.judging below 1 (some rows must be left to train on), found ${data.validation} + ${data.judging}`);
     }
     if (!config.metricGiven)
         target.metric = (0,common_metric/* defaultMetric */.ml)(data.task === 'regression' ? 'regression' : 'classification');
@@ -40206,6 +38782,7 @@ function encodeDataset(features, target, split) {
     };
     const train = fill(split.train);
     const validation = fill(split.validation);
+    const judging = fill(split.judging);
     return {
         task: target.task,
         inputs,
@@ -40216,6 +38793,9 @@ function encodeDataset(features, target, split) {
         yTrain: train.y,
         xValidation: validation.x,
         yValidation: validation.y,
+        judgingRows: split.judging.length,
+        xJudging: judging.x,
+        yJudging: judging.y,
         encoding: { features: encodings, target: targetEncoding },
     };
 }
@@ -43049,33 +41629,68 @@ recordLine, header) {
 // EXTERNAL MODULE: ./src/common/random.ts
 var random = __nccwpck_require__(4554);
 ;// CONCATENATED MODULE: ./src/data/split.ts
+/**
+ * Deterministic three-way split, stratified by class, chosen by a seeded Fisher–Yates
+ * shuffle of each class's rows:
+ * - validation rows (round(rows × data.validation) per class, at least one) steer training:
+ *   when a training stops, which restart is kept, whether a pruning step is accepted;
+ * - judging rows (round(rows × data.judging) per class, at least one) decide whether a network
+ *   meets the target, and never steer anything;
+ * - the rest train.
+ * The validation rows are the first of each shuffled class, so they are the same rows whatever
+ * data.judging is. Every part keeps file order.
+ *
+ * Small data: when some class has too few rows for three parts, the judging part is dropped and
+ * networks are judged on the validation rows (`judgingFolded`); the report says so, because a
+ * figure chosen on the rows that judge it is optimistic.
+ */
+
 
 
 // Keeps the split's stream apart from the training streams drawn from the same seed.
 const SPLIT_STREAM = 0x73706c6974n; // "split"
-function splitRows(target, validation, seed, file) {
+/** Rows each part takes from a group of `n`, or null when the group is too small for them. */
+function partSizes(n, f, minTrain) {
+    let validation = f.validation > 0 ? Math.max(1, Math.round(n * f.validation)) : 0;
+    let judging = f.judging > 0 ? Math.max(1, Math.round(n * f.judging)) : 0;
+    if (n < minTrain + Math.sign(validation) + Math.sign(judging))
+        return null;
+    // Keep enough to train on; the larger held-out part gives way first, and neither below one row.
+    while (n - validation - judging < minTrain) {
+        if (validation >= judging && validation > 1)
+            validation--;
+        else
+            judging--;
+    }
+    return { validation, judging };
+}
+function splitRows(target, fractions, seed, file) {
     const groups = groupRows(target);
+    const minTrain = target.classIndex === null ? 2 : 1;
+    let f = fractions;
+    let judgingFolded = false;
+    if (f.judging > 0 && groups.some((rows) => partSizes(rows.length, f, minTrain) === null)) {
+        f = { ...f, judging: 0 };
+        judgingFolded = true;
+    }
+    const sizes = groups.map((rows, g) => {
+        const s = partSizes(rows.length, f, minTrain);
+        if (s === null)
+            throw tooFew(target, g, rows.length, minTrain, f, file);
+        return s;
+    });
     const rng = (0,random/* xoshiroFromSeed */.ID)(BigInt(seed) ^ SPLIT_STREAM);
     const train = [];
-    const held = [];
+    const validation = [];
+    const judging = [];
     groups.forEach((rows, g) => {
-        const minimum = target.classIndex === null ? 3 : 2;
-        let take = 0;
-        if (validation > 0) {
-            if (rows.length < minimum)
-                throw tooFew(target, g, rows.length, minimum, validation, file);
-            // At least one validation row per class, and enough left to train on.
-            take = Math.min(Math.max(1, Math.round(rows.length * validation)), rows.length - (minimum - 1));
-        }
-        else if (target.classIndex === null && rows.length < 2) {
-            throw tooFew(target, g, rows.length, 2, validation, file);
-        }
         (0,random/* shuffle */.k4)(rows, rng);
+        const { validation: v, judging: j } = sizes[g];
         for (let i = 0; i < rows.length; i++)
-            (i < take ? held : train).push(rows[i]);
+            (i < v ? validation : i < v + j ? judging : train).push(rows[i]);
     });
     const ascending = (xs) => Int32Array.from(xs).sort();
-    return { train: ascending(train), validation: ascending(held) };
+    return { train: ascending(train), validation: ascending(validation), judging: ascending(judging), judgingFolded };
 }
 function groupRows(target) {
     if (target.classIndex === null)
@@ -43090,16 +41705,16 @@ function groupRows(target) {
     });
     return groups;
 }
-function tooFew(target, group, rows, minimum, validation, file) {
+function tooFew(target, group, rows, minTrain, f, file) {
     const what = target.classes === null
         ? `the data have ${rows} rows`
-        : `class "${target.classes[group]}" has ${rows} row${rows === 1 ? '' : 's'}`;
-    const need = validation > 0
-        ? target.classes === null
-            ? `at least ${minimum} rows (one or more to validate on, two or more to train on)`
-            : `at least ${minimum} rows per class (one to train on, one to validate on)`
-        : 'at least 2 rows to train on';
-    return dataError(file, 1, target.column, `${columnLabel(target.column, target.name)} (the target): ${what}; with validation ${validation} the split needs ${need}`);
+        : `class ${quote(target.classes[group])} has ${rows} row${rows === 1 ? '' : 's'}`;
+    const parts = [`${minTrain} to train on`];
+    if (f.validation > 0)
+        parts.push('1 to validate on');
+    const minimum = minTrain + (f.validation > 0 ? 1 : 0);
+    const per = target.classes === null ? '' : ' per class';
+    return dataError(file, 1, target.column, `${columnLabel(target.column, target.name)} (the target): ${what}; with validation ${f.validation} the split needs at least ${minimum} rows${per} (${parts.join(', ')})`);
 }
 
 ;// CONCATENATED MODULE: ./src/data/target.ts
@@ -43234,7 +41849,7 @@ async function load(config) {
         rows: table.rows,
         name: target.name,
         column: target.column,
-    }, config.data.validation, config.search.seed, file);
+    }, { validation: config.data.validation, judging: config.data.judging }, config.search.seed, file);
     return {
         dataset: encodeDataset(typed, target, split),
         rows: table.rows,
@@ -43242,6 +41857,7 @@ async function load(config) {
         fingerprint: fingerprint(typed, target, table.rows),
         profile: profileData(typed, target, table.columns, table.rows),
         splitRows: split,
+        judgingFolded: split.judgingFolded,
     };
 }
 async function checkExists(file) {
@@ -43378,7 +41994,7 @@ function compare(input) {
         flags.push(`The settings that shape the result differ from the baseline's (${settingsChanged.join('; ')}), so this compares answers to different questions.`);
     }
     if (result.outcome === 'inconclusive') {
-        const how = result.note ? ` ${sentence(result.note)}` : '';
+        const how = result.notes.length > 0 ? ` ${result.notes.map(sentence).join(' ')}` : '';
         return {
             verdict: 'inconclusive',
             reasons: [`The search ran out of budget before it could decide the smallest adequate width.${how}`, ...flags],
@@ -43387,11 +42003,13 @@ function compare(input) {
     }
     if (result.outcome !== 'found' || result.width === null || result.metric === null) {
         const best = bestSeen(result.widths, target.metric);
-        const bestText = best ? `; the best was ${(0,format/* formatMetric */.gI)(best.value)} at width ${best.width}` : '';
+        const bestText = best ? `; the best network reached ${(0,format/* formatMetric */.gI)(best.value)} (width ${best.width})` : '';
+        const networks = search.required === 1 ? 'a network that meets' : `${search.required} networks that meet`;
         return {
             verdict: 'fail',
             reasons: [
-                `No width from ${search.minWidth} to ${search.maxWidth} reaches ${(0,format/* targetPhrase */.Lx)(target.metric, target.threshold)}${bestText}.`,
+                `No width from ${search.minWidth} to ${search.maxWidth} has ${networks} ${(0,format/* targetPhrase */.Lx)(target.metric, target.threshold)}${bestText}.`,
+                ...result.notes.map(sentence),
                 ...flags,
             ],
             settingsChanged,
@@ -43556,7 +42174,7 @@ function evaluateGate(input) {
     const comparison = compare({
         result,
         target: config.target,
-        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth },
+        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth, required: config.search.required },
         gate: config.gate,
         baseline,
         settings: resultSettings(config),
@@ -43568,7 +42186,7 @@ function evaluateGate(input) {
 }
 
 ;// CONCATENATED MODULE: ./schema/baseline.schema.json
-const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@1"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","reached","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric at that width."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Width found by the growth phase, before pruning."},"reached":{"type":["integer","null"],"minimum":0,"description":"Restarts that reached the target at `width` (null when growth did not try it)."},"restarts":{"type":["integer","null"],"minimum":0,"description":"Restarts run at `width`."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","reached","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0},"reached":{"type":"integer","minimum":0,"description":"At most `restarts`."},"best":{"type":["number","null"],"description":"Best metric over the restarts; null when every restart diverged."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
+const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
 ;// CONCATENATED MODULE: ./src/common/json-schema.ts
 /**
  * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
@@ -44023,8 +42641,8 @@ function describeChar(text, offset) {
 }
 
 ;// CONCATENATED MODULE: ./src/gate/types.ts
-const BASELINE_SCHEMA = 'neuron-budget/baseline@1';
-const BASELINE_VERSION = 1;
+const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
+const BASELINE_VERSION = 2;
 /** Oldest history entries are dropped beyond this many. */
 const HISTORY_CAP = 100;
 
@@ -44086,14 +42704,15 @@ function nextBaseline(previous, current, meta) {
             width,
             metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
             grownWidth: result.grownWidth,
-            reached: atWidth ? atWidth.reached : null,
-            restarts: atWidth ? atWidth.restarts : null,
+            met: atWidth ? atWidth.met : 0,
+            restarts: atWidth ? atWidth.restarts : 0,
             searchSeconds: result.timing.searchSeconds,
         },
         widths: result.widths.map((w) => ({
             width: w.width,
             restarts: w.restarts,
-            reached: w.reached,
+            met: w.met,
+            adequate: w.adequate,
             best: w.best,
         })),
         data: {
@@ -44186,6 +42805,9 @@ function checkSchemaVersion(value, shown) {
     if (version > BASELINE_VERSION) {
         throw new errors_UserError(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
     }
+    if (version < BASELINE_VERSION) {
+        throw new errors_UserError(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
+    }
     if (version !== BASELINE_VERSION) {
         throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
             file: shown,
@@ -44198,11 +42820,6 @@ const checkShape = schemaValidator(baseline_schema_namespaceObject);
 function validateBaselineShape(value, shown) {
     try {
         checkShape(value);
-        // The one rule JSON Schema cannot say: a width cannot have more successes than tries.
-        value.widths.forEach((w, i) => {
-            if (w.reached > w.restarts)
-                throw new SchemaProblem(`widths[${i}].reached`, `at most restarts (${w.restarts})`, String(w.reached));
-        });
     }
     catch (e) {
         if (!(e instanceof SchemaProblem))
@@ -44230,7 +42847,201 @@ function baseline_describe(v) {
     return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
+// EXTERNAL MODULE: external "node:os"
+var external_node_os_ = __nccwpck_require__(8161);
+;// CONCATENATED MODULE: external "node:timers/promises"
+const external_node_timers_promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:timers/promises");
+;// CONCATENATED MODULE: ./src/files/lock.ts
+/**
+ * An exclusive lock beside a file, `.NAME.neuron-budget.lock`, for a read-compare-write that
+ * must not interleave with another process's. Created with O_EXCL, so exactly one process
+ * holds it; it records who holds it, so a lock whose holder died can be taken over:
+ *
+ * - its process is gone (same machine, by PID), or
+ * - it is older than STALE_LOCK_AGE_MS (any machine; the section it guards takes
+ *   milliseconds), or
+ * - it is unreadable and older than a few seconds (a holder killed between create and write).
+ */
+
+
+
+
+
+
+const LOCK_SUFFIX = '.neuron-budget.lock';
+/** A lock this old is stale, whoever holds it. @testOnly */
+const STALE_LOCK_AGE_MS = 10 * 60 * 1000;
+/** A lock file without readable content (its holder died before writing it) is stale after this. */
+const EMPTY_LOCK_AGE_MS = 5_000;
+function lockPathFor(path) {
+    return (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}${LOCK_SUFFIX}`);
+}
+/** The lock is held by a live process and was not released in time. */
+class LockBusy extends Error {
+    lockPath;
+    owner;
+    constructor(lockPath, owner) {
+        super(`${lockPath} is held${owner ? ` by process ${owner.pid}` : ''}`);
+        this.lockPath = lockPath;
+        this.owner = owner;
+        this.name = 'LockBusy';
+    }
+}
+async function acquireLock(path, options = {}) {
+    const lockPath = lockPathFor(path);
+    const waitMs = options.waitMs ?? 10_000;
+    const pollMs = options.pollMs ?? 25;
+    const record = {
+        pid: process.pid,
+        host: (0,external_node_os_.hostname)(),
+        token: (0,external_node_crypto_.randomBytes)(8).toString('hex'),
+        since: new Date().toISOString(),
+    };
+    const text = `${JSON.stringify(record)}\n`;
+    const started = Date.now();
+    for (;;) {
+        try {
+            const handle = await (0,promises_namespaceObject.open)(lockPath, 'wx');
+            try {
+                await handle.writeFile(text, 'utf8');
+            }
+            finally {
+                await handle.close();
+            }
+            return { release: () => releaseLock(lockPath, text) };
+        }
+        catch (e) {
+            if (e.code !== 'EEXIST')
+                throw e;
+        }
+        const held = await inspect(lockPath);
+        if (held === null)
+            continue; // released between our try and the look
+        if (held.stale) {
+            // Re-read just before removing: never remove a lock someone else took over meanwhile.
+            const again = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+            if (again === held.text)
+                await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+            continue;
+        }
+        if (Date.now() - started >= waitMs)
+            throw new LockBusy(lockPath, held.owner);
+        await (0,external_node_timers_promises_namespaceObject.setTimeout)(pollMs);
+    }
+}
+/** Removes the lock only while it is still ours. */
+async function releaseLock(lockPath, text) {
+    const now = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+    if (now === text)
+        await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+}
+async function inspect(lockPath) {
+    let text;
+    let age;
+    try {
+        text = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8');
+        age = Date.now() - (await (0,promises_namespaceObject.stat)(lockPath)).mtimeMs;
+    }
+    catch (e) {
+        if (e.code === 'ENOENT')
+            return null;
+        throw e;
+    }
+    const owner = parseOwner(text);
+    if (age >= STALE_LOCK_AGE_MS)
+        return { text, stale: true, owner };
+    if (owner === null)
+        return { text, stale: age >= EMPTY_LOCK_AGE_MS, owner };
+    const here = owner.host === (0,external_node_os_.hostname)();
+    return { text, stale: here && processIsGone(owner.pid), owner };
+}
+/** The holder as the file says, or null. The file sits in a checkout: only plain values pass. */
+function parseOwner(text) {
+    let v;
+    try {
+        v = JSON.parse(text);
+    }
+    catch {
+        return null;
+    }
+    if (typeof v !== 'object' || v === null)
+        return null;
+    const r = v;
+    if (typeof r.pid !== 'number' || !Number.isSafeInteger(r.pid) || r.pid <= 0)
+        return null;
+    const host = typeof r.host === 'string' && /^[A-Za-z0-9._-]{1,255}$/.test(r.host) ? r.host : null;
+    const since = typeof r.since === 'string' && !Number.isNaN(Date.parse(r.since)) ? new Date(r.since).toISOString() : null;
+    return { pid: r.pid, host, since };
+}
+
+;// CONCATENATED MODULE: ./src/gate/baseline-update.ts
+/**
+ * Records an accepted result in the baseline file without losing another run's. A run reads
+ * the baseline before its search and builds the next one from it; if a second run wrote the
+ * file in between, writing ours would silently drop that run's history entry. So the write
+ * happens under an exclusive lock beside the file, after reading the file again: unchanged,
+ * ours is written; changed, nothing is written and the user is told to run again (exit 2).
+ */
+
+
+
+
+/**
+ * Writes `next` to `path` if the file still holds `expected` (null: no file), else throws a
+ * UserError naming the file (`shown`, as the user wrote it).
+ */
+async function updateBaseline(path, shown, expected, next) {
+    const lock = await lockOrRefuse(path, shown);
+    try {
+        const now = await readBaseline(path, shown);
+        if (!sameBaseline(expected, now)) {
+            const what = now === null ? 'was removed' : expected === null ? 'was created' : 'changed';
+            throw new errors_UserError(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
+                'so this result was not recorded, to keep that change. Run `neuron-budget baseline` again to record it on top.', { file: shown });
+        }
+        await writeBaseline(path, next);
+    }
+    finally {
+        await lock.release();
+    }
+}
+async function lockOrRefuse(path, shown) {
+    try {
+        return await acquireLock(path);
+    }
+    catch (e) {
+        if (!(e instanceof LockBusy))
+            throw e;
+        const lockShown = displayLockPath(shown, path);
+        const who = e.owner
+            ? ` by process ${e.owner.pid}${e.owner.host ? ` on ${e.owner.host}` : ''}${e.owner.since ? ` since ${e.owner.since}` : ''}`
+            : '';
+        throw new errors_UserError(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
+            'Run `neuron-budget baseline` again when it has finished; if none is running, delete the lock file.', { file: shown });
+    }
+}
+/** The lock file's path in the same form as the baseline's as the user wrote it. */
+function displayLockPath(shown, path) {
+    return `${shown.slice(0, shown.lastIndexOf('/') + 1)}${(0,external_node_path_namespaceObject.basename)(lockPathFor(path))}`;
+}
+/** Same content; key order and formatting of the file do not matter to a reader. */
+function sameBaseline(a, b) {
+    if (a === null || b === null)
+        return a === b;
+    return canonical(a) === canonical(b);
+}
+function canonical(v) {
+    if (Array.isArray(v))
+        return `[${v.map(canonical).join(',')}]`;
+    if (v !== null && typeof v === 'object') {
+        const keys = Object.keys(v).sort();
+        return `{${keys.map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(',')}}`;
+    }
+    return JSON.stringify(v);
+}
+
 ;// CONCATENATED MODULE: ./src/gate/stage.ts
+
 
 
 async function runGateStage(input) {
@@ -44248,7 +43059,8 @@ async function runGateStage(input) {
     if (why !== null)
         return { outcome, written: null, notWritten: why, gate: config.gate };
     const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
-    await writeBaseline(input.baselinePath, next);
+    // Only if the file still holds what `previous` was read from: never drop another run's entry.
+    await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
     return { outcome, written: input.baselinePath, notWritten: null, gate: config.gate };
 }
 
@@ -44265,18 +43077,988 @@ async function runGateStage(input) {
 
 
 
+;// CONCATENATED MODULE: ./src/device/cost.ts
+const C_TYPE_BYTES = { float: 4, int8_t: 1, int32_t: 4 };
+/** Entries of the activation lookup table (indexed by an int8 pre-activation). */
+const cost_LUT_ENTRIES = 256;
+/** The constant objects each path of the exported C declares, in declaration order. */
+function cost_storedObjects(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const float32 = [];
+    const int8 = [];
+    if (s.numericFeatures > 0) {
+        float32.push({ suffix: 'f_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        float32.push({ suffix: 'f_in_std', type: 'float', count: s.numericFeatures, role: 'feature deviations' });
+    }
+    float32.push({ suffix: 'f_w1', type: 'float', count: H * D, role: 'hidden weights' }, { suffix: 'f_b1', type: 'float', count: H, role: 'hidden biases' }, { suffix: 'f_w2', type: 'float', count: K * H, role: 'output weights' }, { suffix: 'f_b2', type: 'float', count: K, role: 'output biases' });
+    if (s.regression)
+        float32.push({ suffix: 'f_target', type: 'float', count: 2, role: 'target mean and deviation' });
+    if (s.numericFeatures > 0) {
+        int8.push({ suffix: 'q_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        int8.push({ suffix: 'q_in_mul', type: 'float', count: s.numericFeatures, role: '1 / (deviation · input scale)' });
+    }
+    int8.push({ suffix: 'q_in_zero', type: 'int8_t', count: 1, role: 'input zero-point', scalar: true });
+    if (s.categoricalFeatures > 0)
+        int8.push({ suffix: 'q_in_one', type: 'int8_t', count: 1, role: 'code of a one-hot 1', scalar: true });
+    int8.push({ suffix: 'q_w1', type: 'int8_t', count: H * D, role: 'hidden weights' }, { suffix: 'q_b1', type: 'int32_t', count: H, role: 'hidden biases (zero-point folded in)' }, { suffix: 'q_m0', type: 'int32_t', count: H, role: 'requantisation multipliers M0' }, { suffix: 'q_shift', type: 'int8_t', count: H, role: 'requantisation shifts n' }, { suffix: 'q_act_zero', type: 'int8_t', count: 1, role: 'pre-activation zero-point', scalar: true }, { suffix: 'q_lut', type: 'int8_t', count: cost_LUT_ENTRIES, role: 'activation lookup table' }, { suffix: 'q_w2', type: 'int8_t', count: K * H, role: 'output weights' }, { suffix: 'q_b2', type: 'int32_t', count: K, role: 'output biases (zero-point folded in)' }, { suffix: 'q_out_scale', type: 'float', count: K, role: 'output dequantisation scales' });
+    return { float32, int8 };
+}
+function objectBytes(o) {
+    return o.count * C_TYPE_BYTES[o.type];
+}
+function sumBytes(objects) {
+    return objects.reduce((n, o) => n + objectBytes(o), 0);
+}
+function cost_deviceCost(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const stored = cost_storedObjects(s);
+    return {
+        parameters: D * H + H + H * K + K,
+        macs: D * H + H * K,
+        flashBytes: { float32: sumBytes(stored.float32), int8: sumBytes(stored.int8) },
+        ramBytes: { float32: 4 * (D + H), int8: D + H },
+    };
+}
+/** The cost shape of a network of `width` hidden neurons on data encoded as `encoding`. */
+function cost_costShapeOf(net, encoding) {
+    return {
+        inputs: net.inputs,
+        width: net.width,
+        outputs: net.outputs,
+        numericFeatures: encoding.features.filter((f) => f.kind === 'numeric').length,
+        categoricalFeatures: encoding.features.filter((f) => f.kind === 'categorical').length,
+        regression: encoding.target.task === 'regression',
+    };
+}
+
+// EXTERNAL MODULE: ./src/nn/kernel/detmath.ts
+var detmath = __nccwpck_require__(415);
+;// CONCATENATED MODULE: ./src/device/fixed-point.ts
+/**
+ * The integer arithmetic of the int8 inference, written so that this TypeScript and the
+ * exported C compute the same integers. Every value here is an integer held exactly in a
+ * double (all magnitudes stay below 2^53), so no step depends on JavaScript's number type.
+ *
+ * Requantisation follows Jacob et al. 2018, "Quantization and Training of Neural Networks for
+ * Efficient Integer-Arithmetic-Only Inference", section 2.2: the real multiplier M (eq. 5) is
+ * written M = 2^−n · M0 with M0 in [0.5, 1) (eq. 6), M0 held as a 32-bit fixed-point integer.
+ * The fixed-point multiply and the rounding shift are the documented rules of the
+ * general-purpose gemmlowp library (fixedpoint/fixedpoint.h): SaturatingRoundingDoublingHighMul
+ * and RoundingDivideByPOT.
+ * @testOnly
+ */
+const INT32_MIN = (/* unused pure expression or super */ null && (-2147483648));
+/** @testOnly */
+const INT32_MAX = 2147483647;
+const TWO_15 = 32768;
+const TWO_30 = 1073741824;
+const TWO_31 = 2147483648;
+/** Largest right shift RoundingDivideByPOT takes (gemmlowp asserts exponent ≤ 31). */
+const fixed_point_MAX_SHIFT = 31;
+/**
+ * Round to nearest, ties away from zero. Exact for every double: trunc(x) and x − trunc(x)
+ * are both exact, so no addition of 0.5 can round the wrong way.
+ */
+function roundHalfAway(x) {
+    const i = Math.trunc(x);
+    const f = x - i;
+    const r = f >= 0.5 ? i + 1 : f <= -0.5 ? i - 1 : i;
+    return r === 0 ? 0 : r; // no −0 in the JSON
+}
+function fixed_point_clamp(x, lo, hi) {
+    return x < lo ? lo : x > hi ? hi : x;
+}
+/**
+ * gemmlowp's SaturatingRoundingDoublingHighMul for int32 a, b: (a·b + nudge) / 2^31 truncated
+ * toward zero, nudge = 2^30 when a·b ≥ 0 and 1 − 2^30 otherwise (so a tie rounds toward +∞);
+ * INT32_MIN · INT32_MIN saturates to INT32_MAX.
+ *
+ * a·b reaches 2^62, beyond a double's 53 bits, so the product is split: b = bh·2^16 + bl,
+ * a·bh = ph·2^15 + pl, and a·b + nudge = ph·2^31 + r with every part exact.
+ */
+function saturatingRoundingDoublingHighMul(a, b) {
+    if (a === INT32_MIN && b === INT32_MIN)
+        return INT32_MAX;
+    const bh = b >> 16; // signed high half
+    const bl = b & 0xffff; // unsigned low half
+    const p = a * bh; // |p| ≤ 2^46: exact
+    const q = a * bl; // |q| < 2^47: exact
+    const ph = Math.floor(p / TWO_15);
+    const pl = p - ph * TWO_15; // in [0, 2^15)
+    const negative = (a < 0 && b > 0) || (a > 0 && b < 0);
+    const nudge = negative ? 1 - TWO_30 : TWO_30;
+    const r = pl * 65536 + q + nudge; // |r| < 2^48: exact
+    const rh = Math.floor(r / TWO_31);
+    const rl = r - rh * TWO_31; // in [0, 2^31)
+    const floor = ph + rh; // floor((a·b + nudge) / 2^31)
+    const truncated = floor < 0 && rl !== 0 ? floor + 1 : floor;
+    return truncated === 0 ? 0 : truncated;
+}
+/**
+ * gemmlowp's RoundingDivideByPOT: x / 2^exponent rounded to nearest, ties away from zero,
+ * for int32 x and 0 ≤ exponent ≤ 31.
+ */
+function roundingDivideByPot(x, exponent) {
+    const mask = 2 ** exponent - 1;
+    const remainder = x & mask;
+    const threshold = Math.floor(mask / 2) + (x < 0 ? 1 : 0);
+    return (x >> exponent) + (remainder > threshold ? 1 : 0);
+}
+/**
+ * M = 2^−n · M0, M0 in [0.5, 1), M0 stored as round(M0 · 2^31) (eq. 6). Two limits, both exact
+ * in their effect on an int32 accumulator acc: for M < 2^−32, |acc · M| < 1/2 always rounds to
+ * 0, so the multiplier is 0; for M ≥ 2^31 every nonzero acc saturates an int8, and so does
+ * 2^30 · 2^31 (the left shift capped at 31), which stands in for it.
+ */
+function quantizeMultiplier(m) {
+    if (!(m > 0) || !Number.isFinite(m))
+        return { multiplier: 0, shift: 0 };
+    let n = 0;
+    let f = m;
+    while (f < 0.5 && n <= fixed_point_MAX_SHIFT + 1) {
+        f *= 2; // exact
+        n++;
+    }
+    while (f >= 1 && n >= -fixed_point_MAX_SHIFT - 1) {
+        f /= 2; // exact
+        n--;
+    }
+    if (n > fixed_point_MAX_SHIFT)
+        return { multiplier: 0, shift: 0 };
+    let m0 = roundHalfAway(f * TWO_31);
+    if (m0 === TWO_31) {
+        m0 = TWO_30;
+        n--;
+    }
+    if (n < -fixed_point_MAX_SHIFT)
+        return { multiplier: TWO_30, shift: -fixed_point_MAX_SHIFT };
+    return { multiplier: m0, shift: n };
+}
+/**
+ * acc · M for an int32 acc: a left shift (saturating to int32) when shift < 0, then the
+ * fixed-point multiply by M0, then the rounding right shift when shift > 0.
+ */
+function fixed_point_multiplyByQuantizedMultiplier(acc, q) {
+    if (q.multiplier === 0)
+        return 0;
+    let x = acc;
+    if (q.shift < 0)
+        x = fixed_point_clamp(acc * 2 ** -q.shift, INT32_MIN, INT32_MAX); // power-of-two product: exact
+    const high = saturatingRoundingDoublingHighMul(x, q.multiplier);
+    return q.shift > 0 ? roundingDivideByPot(high, q.shift) : high;
+}
+
+;// CONCATENATED MODULE: ./src/device/quantize.ts
+
+
+
+/** Largest |int32 bias|; with at most MAX_QUANT_INPUTS terms of |q_w·q_x| ≤ 127·128 the accumulator stays in int32. */
+const quantize_BIAS_LIMIT = 2 ** 30;
+const MAX_QUANT_INPUTS = 16384;
+const INT8_MIN = -128;
+const INT8_MAX = 127;
+/**
+ * Pre-activation range and activation codes per activation. The calibrated range is
+ * R = max |a| over the calibration rows (ReLU: max a), clipped where the activation is within
+ * half an output step of its limit (beyond that every pre-activation gives the same code):
+ *   tanh      a in [−R, R], S_a = R/127, Z_a = 0; h in [−tanh R, tanh R], S_h = tanh(R)/127, Z_h = 0
+ *             (odd function: symmetric codes). Clip: atanh(1 − 1/254) = ln(507)/2 ≈ 3.11.
+ *   logistic  a in [−R, R], S_a = R/127, Z_a = 0; h in [0, σ(R)] (widened to hold 0),
+ *             S_h = σ(R)/255, Z_h = −128. Clip: σ(a) = 1 − 1/510 at a = ln(509) ≈ 6.23.
+ *   relu      a in [0, R], S_a = R/255, Z_a = −128 (a negative pre-activation clamps to code
+ *             −128, which is relu's 0); h = a: S_h = S_a, Z_h = −128.
+ * The output range is the image of the pre-activation range, so it needs no calibration of its own.
+ */
+function activationRanges(activation, calibrated) {
+    if (activation === 'relu') {
+        const r = calibrated > 0 && Number.isFinite(calibrated) ? calibrated : 1;
+        const s = r / 255;
+        return { preActivation: { scale: s, zeroPoint: INT8_MIN }, activation: { scale: s, zeroPoint: INT8_MIN } };
+    }
+    const clip = activation === 'tanh' ? (0,detmath/* detLog */.Ep)(507) / 2 : (0,detmath/* detLog */.Ep)(509);
+    const r = calibrated > 0 && calibrated < clip ? calibrated : clip;
+    const preActivation = { scale: r / 127, zeroPoint: 0 };
+    if (activation === 'tanh')
+        return { preActivation, activation: { scale: (0,detmath/* detTanh */.hL)(r) / 127, zeroPoint: 0 } };
+    return { preActivation, activation: { scale: (0,detmath/* detLogistic */.U1)(r) / 255, zeroPoint: INT8_MIN } };
+}
+function activate(activation, a) {
+    if (activation === 'tanh')
+        return (0,detmath/* detTanh */.hL)(a);
+    if (activation === 'logistic')
+        return (0,detmath/* detLogistic */.U1)(a);
+    return a > 0 ? a : 0;
+}
+/** q = clamp(Z + round(r / S)) into int8. */
+function quantizeValue(r, p) {
+    return fixed_point_clamp(p.zeroPoint + roundHalfAway(r / p.scale), INT8_MIN, INT8_MAX);
+}
+/** r = S · (q − Z) (the paper's eq. 1). */
+function dequantizeValue(q, p) {
+    return p.scale * (q - p.zeroPoint);
+}
+/**
+ * The asymmetric int8 parameters of the range [lo, hi], widened to hold 0, with the
+ * zero-point rounded to an integer so that real 0 is exactly representable.
+ */
+function rangeParams(lo, hi) {
+    let a = Math.min(lo, 0);
+    let b = Math.max(hi, 0);
+    if (!(b > a)) {
+        a = 0;
+        b = 1;
+    }
+    const scale = (b - a) / 255;
+    return { scale, zeroPoint: fixed_point_clamp(roundHalfAway(INT8_MIN - a / scale), INT8_MIN, INT8_MAX) };
+}
+/** The table of activation codes for every int8 pre-activation code. */
+function activationTable(activation, pre, out) {
+    const table = [];
+    for (let q = INT8_MIN; q < INT8_MIN + cost_LUT_ENTRIES; q++) {
+        table.push(quantizeValue(activate(activation, dequantizeValue(q, pre)), out));
+    }
+    return table;
+}
+/**
+ * One layer's symmetric per-output-channel weights and int32 biases. The scale is at least
+ * |bias| / (S_in · BIAS_LIMIT), so the bias always fits (coarser weights only when they are
+ * negligible beside the bias); an all-zero channel gets scale 1.
+ */
+function quantizeLayer(weights, bias, inputScale) {
+    const scales = [];
+    const qWeights = [];
+    const qBias = [];
+    weights.forEach((row, j) => {
+        let maxAbs = 0;
+        for (const w of row)
+            maxAbs = Math.max(maxAbs, Math.abs(w));
+        let s = Math.max(maxAbs / INT8_MAX, Math.abs(bias[j]) / (inputScale * quantize_BIAS_LIMIT));
+        if (!(s > 0) || !Number.isFinite(s))
+            s = 1;
+        scales.push(s);
+        qWeights.push(row.map((w) => fixed_point_clamp(roundHalfAway(w / s), -INT8_MAX, INT8_MAX)));
+        qBias.push(fixed_point_clamp(roundHalfAway(bias[j] / (inputScale * s)), -quantize_BIAS_LIMIT, quantize_BIAS_LIMIT));
+    });
+    return { weights: qWeights, scales, bias: qBias };
+}
+/** bias − Z · Σ weights: the accumulator then sums weight · code directly (the paper's section 2.3). */
+function quantize_foldZeroPoint(bias, weights, zero) {
+    return bias.map((b, j) => b - zero * weights[j].reduce((s, w) => s + w, 0));
+}
+function checkFinite(net) {
+    const all = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!all.every(Number.isFinite))
+        throw new RangeError('cannot quantise a network with non-finite weights');
+}
+/** Largest |a| (ReLU: largest a) of the hidden pre-activations over the calibration rows, in float64. */
+function calibratePreActivation(net, cal) {
+    const D = net.inputs;
+    let extreme = 0;
+    for (let p = 0; p < cal.rows; p++) {
+        for (let j = 0; j < net.width; j++) {
+            let a = net.hiddenBias[j];
+            const w = net.hiddenWeights[j];
+            for (let i = 0; i < D; i++)
+                a += cal.x[p * D + i] * w[i];
+            const v = net.activation === 'relu' ? a : Math.abs(a);
+            if (v > extreme)
+                extreme = v;
+        }
+    }
+    return extreme;
+}
+function inputRange(cal, D) {
+    let lo = 0;
+    let hi = 0;
+    for (let q = 0; q < cal.rows * D; q++) {
+        const v = cal.x[q];
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    return rangeParams(lo, hi);
+}
+/** The int8 form of `net`, its activation ranges calibrated on `calibration` (the training rows). */
+function quantizeNetwork(net, encoding, calibration) {
+    const D = net.inputs;
+    const H = net.width;
+    const K = net.outputs;
+    if (D > MAX_QUANT_INPUTS || H > MAX_QUANT_INPUTS) {
+        throw new RangeError(`int8 quantisation takes at most ${MAX_QUANT_INPUTS} inputs and hidden neurons`);
+    }
+    if (calibration.rows < 1)
+        throw new RangeError('int8 quantisation needs at least one calibration row');
+    checkFinite(net);
+    const encoded = encoding.features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
+    if (encoded !== D)
+        throw new RangeError(`the encoding gives ${encoded} inputs, the network takes ${D}`);
+    const input = inputRange(calibration, D);
+    const features = encoding.features.map((f) => f.kind === 'numeric'
+        ? {
+            kind: 'numeric',
+            mean: Math.fround(f.mean),
+            multiplier: Math.fround(1 / ((f.std > 0 ? f.std : 1) * input.scale)),
+        }
+        : { kind: 'categorical', categories: f.categories.length });
+    const hidden = quantizeLayer(net.hiddenWeights, net.hiddenBias, input.scale);
+    const ranges = activationRanges(net.activation, calibratePreActivation(net, calibration));
+    const multipliers = hidden.scales.map((s) => quantizeMultiplier((input.scale * s) / ranges.preActivation.scale));
+    const t = encoding.target;
+    const regression = t.task === 'regression';
+    const outBias = net.outputBias.map((b) => (regression ? b + t.mean / t.std : b));
+    const S_h = ranges.activation.scale;
+    const output = quantizeLayer(net.outputWeights, outBias, S_h);
+    return {
+        inputs: D,
+        width: H,
+        outputs: K,
+        activation: net.activation,
+        head: net.head,
+        input: { ...input, one: quantizeValue(1, input), features },
+        hidden: {
+            weights: hidden.weights,
+            weightScales: hidden.scales,
+            bias: hidden.bias,
+            multiplier: multipliers.map((m) => m.multiplier),
+            shift: multipliers.map((m) => m.shift),
+            preActivation: ranges.preActivation,
+            activation: ranges.activation,
+            table: activationTable(net.activation, ranges.preActivation, ranges.activation),
+        },
+        output: {
+            weights: output.weights,
+            weightScales: output.scales,
+            bias: output.bias,
+            scale: output.scales.map((s) => Math.fround(S_h * s * (regression ? t.std : 1))),
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/device/int8-forward.ts
+/**
+ * The int8 inference exactly as the exported C runs it (export-c.ts, NAME_predict_int8), so
+ * that both give the same bits. The only float operations are the ones the C performs, each
+ * rounded to float32 with Math.fround: the centring of a raw numeric feature (x − mean), its
+ * scaling into quantisation steps (· multiplier), the int32 accumulator's conversion to float
+ * and the output's dequantisation (· scale). Everything else is integer arithmetic.
+ *
+ * None of these float steps is a product feeding a sum, so a C compiler that contracts
+ * a·b + c into a fused multiply-add cannot change them; they need IEEE 754 single precision
+ * with each assignment rounded to float (FLT_EVAL_METHOD 0, or a compiler that honours C99's
+ * rounding on assignment, as GCC does in its ISO modes).
+ */
+
+
+
+/** A raw value's clamp before it is rounded to an integer (keeps the C's float → int conversion defined). */
+const int8_forward_INPUT_STEP_LIMIT = 512;
+/** The requantised pre-activation's clamp before its zero-point is added (keeps the C's sum in int32). */
+const int8_forward_PRE_ACTIVATION_LIMIT = 255;
+/**
+ * A value in input quantisation steps to its int8 code: clamp t to ±512 (NaN to −512), round
+ * half away from zero through truncation (t − trunc(t) is exact in float32), add Z, clamp.
+ */
+function inputCode(t, zeroPoint) {
+    let v = t;
+    if (!(v > -int8_forward_INPUT_STEP_LIMIT))
+        v = -int8_forward_INPUT_STEP_LIMIT;
+    else if (v > int8_forward_INPUT_STEP_LIMIT)
+        v = int8_forward_INPUT_STEP_LIMIT;
+    let i = Math.trunc(v);
+    const f = Math.fround(v - i);
+    if (f >= 0.5)
+        i++;
+    else if (f <= -0.5)
+        i--;
+    return clamp(zeroPoint + i, -128, 127);
+}
+/** A categorical feature's raw value as a category index: a whole number in [0, n), else −1 (all zeros). */
+function categoryIndex(v, n) {
+    if (v >= 0 && v < n) {
+        const c = Math.trunc(v);
+        if (c === v)
+            return c;
+    }
+    return -1;
+}
+/**
+ * Run the int8 network on `rows` rows of raw features (rows × features, float32 values).
+ * With `trace`, also records the input and hidden codes of every row.
+ */
+function int8Forward(q, features, rows, trace = null) {
+    const F = q.input.features.length;
+    const D = q.inputs;
+    const H = q.width;
+    const K = q.outputs;
+    const b1 = foldZeroPoint(q.hidden.bias, q.hidden.weights, q.input.zeroPoint);
+    const b2 = foldZeroPoint(q.output.bias, q.output.weights, q.hidden.activation.zeroPoint);
+    const requant = q.hidden.multiplier.map((multiplier, j) => ({ multiplier, shift: q.hidden.shift[j] }));
+    const zx = q.input.zeroPoint;
+    const za = q.hidden.preActivation.zeroPoint;
+    const xq = new Int32Array(D);
+    const hq = new Int32Array(H);
+    const classes = new Int32Array(rows);
+    const outputs = new Float32Array(rows * K);
+    for (let p = 0; p < rows; p++) {
+        let c = 0;
+        for (let f = 0; f < F; f++) {
+            const v = Math.fround(features[p * F + f]);
+            const e = q.input.features[f];
+            if (e.kind === 'numeric') {
+                const d = Math.fround(v - e.mean);
+                xq[c++] = inputCode(Math.fround(d * e.multiplier), zx);
+            }
+            else {
+                const k = categoryIndex(v, e.categories);
+                for (let j = 0; j < e.categories; j++)
+                    xq[c + j] = j === k ? q.input.one : zx;
+                c += e.categories;
+            }
+        }
+        for (let j = 0; j < H; j++) {
+            const w = q.hidden.weights[j];
+            let acc = b1[j];
+            for (let i = 0; i < D; i++)
+                acc += w[i] * xq[i];
+            const r = clamp(multiplyByQuantizedMultiplier(acc, requant[j]), -int8_forward_PRE_ACTIVATION_LIMIT, int8_forward_PRE_ACTIVATION_LIMIT);
+            const code = clamp(za + r, -128, 127);
+            hq[j] = q.hidden.table[code + 128];
+            if (trace)
+                trace.preActivation[p * H + j] = code;
+        }
+        if (trace) {
+            trace.inputs.set(xq, p * D);
+            trace.hidden.set(hq, p * H);
+        }
+        let best = 0;
+        for (let k = 0; k < K; k++) {
+            const w = q.output.weights[k];
+            let acc = b2[k];
+            for (let j = 0; j < H; j++)
+                acc += w[j] * hq[j];
+            const z = Math.fround(Math.fround(acc) * q.output.scale[k]);
+            outputs[p * K + k] = z;
+            if (z > outputs[p * K + best])
+                best = k;
+        }
+        classes[p] = q.head === 'softmax' ? best : q.head === 'logistic' ? (outputs[p * K] > 0 ? 1 : 0) : 0;
+    }
+    return { classes, outputs };
+}
+/**
+ * Raw CSV rows as the device's raw features (rows × features, float32): a numeric feature's
+ * number, a categorical feature's category index (−1 for a category the model has not seen,
+ * which encodes as all zeros, as encodeRows does).
+ */
+function rawFeatureRows(encoding, rows) {
+    const F = encoding.features.length;
+    const out = new Float32Array(rows.length * F);
+    rows.forEach((row, r) => {
+        encoding.features.forEach((f, i) => {
+            const cell = row[f.name];
+            if (cell === undefined)
+                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
+            const text = cell.trim();
+            if (f.kind === 'categorical') {
+                out[r * F + i] = f.categories.indexOf(text);
+                return;
+            }
+            const v = text === '' ? Number.NaN : Number(text);
+            if (!Number.isFinite(v)) {
+                throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
+            }
+            out[r * F + i] = v;
+        });
+    });
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/int8-check.ts
+
+
+
+const isInt = (v, lo, hi) => Number.isInteger(v) && v >= lo && v <= hi;
+const isF32 = (v) => typeof v === 'number' && Number.isFinite(v) && Math.fround(v) === v;
+const isPositive = (v) => typeof v === 'number' && Number.isFinite(v) && v > 0;
+function list(v, n, ok) {
+    return Array.isArray(v) && v.length === n && v.every(ok);
+}
+function matrix(v, rows, cols, ok) {
+    return Array.isArray(v) && v.length === rows && v.every((r) => list(r, cols, ok));
+}
+const obj = (v) => typeof v === 'object' && v !== null && !Array.isArray(v) ? v : null;
+function quantParams(v) {
+    const p = obj(v);
+    return p !== null && isPositive(p.scale) && isInt(p.zeroPoint, -128, 127);
+}
+function int8_check_checkInt8Network(value, shape, encoding) {
+    const { inputs: D, width: H, outputs: K } = shape;
+    const q = obj(value);
+    if (q === null)
+        return { key: 'int8', expected: 'an object or null' };
+    if (q.inputs !== D || q.width !== H || q.outputs !== K) {
+        return { key: 'int8', expected: `the shape of the network (${D} inputs, ${H} hidden, ${K} outputs)` };
+    }
+    const input = obj(q.input);
+    if (input === null || !quantParams(input) || !isInt(input.one, -128, 127)) {
+        return { key: 'int8.input', expected: 'a scale, an int8 zero-point and an int8 one-hot code' };
+    }
+    const features = input.features;
+    const fine = Array.isArray(features) &&
+        features.length === encoding.features.length &&
+        features.every((f, i) => {
+            const e = encoding.features[i];
+            const g = obj(f);
+            if (g === null || g.kind !== e.kind)
+                return false;
+            if (e.kind === 'categorical')
+                return g.categories === e.categories.length;
+            return isF32(g.mean) && isF32(g.multiplier);
+        });
+    if (!fine)
+        return { key: 'int8.input.features', expected: 'one entry per feature of the encoding, of its kind' };
+    const hidden = obj(q.hidden);
+    if (hidden === null)
+        return { key: 'int8.hidden', expected: 'an object' };
+    const checks = [
+        ['weights', matrix(hidden.weights, H, D, (w) => isInt(w, -127, 127)), `${H} rows of ${D} integers in [-127, 127]`],
+        ['weightScales', list(hidden.weightScales, H, isPositive), `${H} positive numbers`],
+        ['bias', list(hidden.bias, H, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${H} integers within ±2^30`],
+        ['multiplier', list(hidden.multiplier, H, (m) => isInt(m, 0, 2 ** 31 - 1)), `${H} integers in [0, 2^31)`],
+        ['shift', list(hidden.shift, H, (n) => isInt(n, -MAX_SHIFT, MAX_SHIFT)), `${H} integers in [-31, 31]`],
+        ['preActivation', quantParams(hidden.preActivation), 'a scale and an int8 zero-point'],
+        ['activation', quantParams(hidden.activation), 'a scale and an int8 zero-point'],
+        ['table', list(hidden.table, LUT_ENTRIES, (t) => isInt(t, -128, 127)), `${LUT_ENTRIES} integers in [-128, 127]`],
+    ];
+    for (const [key, ok, expected] of checks)
+        if (!ok)
+            return { key: `int8.hidden.${key}`, expected };
+    const output = obj(q.output);
+    if (output === null)
+        return { key: 'int8.output', expected: 'an object' };
+    const outChecks = [
+        ['weights', matrix(output.weights, K, H, (w) => isInt(w, -127, 127)), `${K} rows of ${H} integers in [-127, 127]`],
+        ['weightScales', list(output.weightScales, K, isPositive), `${K} positive numbers`],
+        ['bias', list(output.bias, K, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${K} integers within ±2^30`],
+        ['scale', list(output.scale, K, isF32), `${K} finite float32 numbers`],
+    ];
+    for (const [key, ok, expected] of outChecks)
+        if (!ok)
+            return { key: `int8.output.${key}`, expected };
+    return null;
+}
+
+;// CONCATENATED MODULE: ./src/device/c-text.ts
+/**
+ * Pieces of C source text: checked identifiers, safe comment text and exact float32 literals.
+ * Names from a repository (features, categories, classes, config paths) are untrusted: they
+ * only ever reach the C inside comments, through `commentText`.
+ */
+
+/** Letters, digits and underscores, a letter first (a leading underscore is reserved in C), at most 31 (C99's portable length). */
+const C_NAME = /^[A-Za-z][A-Za-z0-9_]{0,30}$/;
+/**
+ * The NAME of NAME.h, NAME.c and NAME_predict; a clear error for anything that is not a plain C
+ * identifier (the value shown JSON-escaped, so no control character reaches a log line).
+ */
+function c_text_checkCName(name, key = '--name') {
+    if (!C_NAME.test(name)) {
+        const shown = JSON.stringify(name.length > 40 ? `${name.slice(0, 40)}…` : name).replace(/[\u007f-\u009f\u2028\u2029]/g, '?');
+        throw new UserError(`${key}: expected a C identifier (a letter, then up to 30 letters, digits or underscores), found ${shown}`, { key });
+    }
+    return name;
+}
+/** Longest untrusted text kept in a comment, in characters, before the escapes. */
+const COMMENT_CLIP = 64;
+/**
+ * Untrusted text made safe inside a C block comment: clipped to `max` characters (with "..."),
+ * every character outside printable ASCII, and the backslash, written as <U+XXXX> (no line
+ * break, control character or line splice survives), "??" broken so no trigraph forms, and
+ * every "*\/" and "/*" broken with a space.
+ */
+function c_text_commentText(text, max = COMMENT_CLIP) {
+    const chars = Array.from(text);
+    const clipped = chars.length > max ? [...chars.slice(0, max), '.', '.', '.'] : chars;
+    let out = '';
+    for (const ch of clipped) {
+        const code = ch.codePointAt(0) ?? 0;
+        const printable = code >= 0x20 && code <= 0x7e && ch !== '\\';
+        out += printable ? ch : `<U+${code.toString(16).toUpperCase().padStart(4, '0')}>`;
+    }
+    out = out.replace(/\?\?/g, '?<U+003F>');
+    let before;
+    do {
+        before = out;
+        out = out.replace(/\*\//g, '* /').replace(/\/\*/g, '/ *');
+    } while (out !== before);
+    return out;
+}
+const f32 = new Float32Array(1);
+const u32 = new Uint32Array(f32.buffer);
+/** A float32 value as a C99 hexadecimal float literal with an f suffix: exact by construction. */
+function c_text_floatLiteral(x) {
+    if (!Number.isFinite(x) || Math.fround(x) !== x) {
+        throw new RangeError(`not a finite float32 value: ${x}`);
+    }
+    f32[0] = x;
+    const bits = u32[0];
+    const sign = bits >>> 31 ? '-' : '';
+    const exp = (bits >>> 23) & 0xff;
+    const mant = bits & 0x7fffff;
+    if (exp === 0 && mant === 0)
+        return `${sign}0x0p+0f`;
+    // 23 fraction bits shifted to 24 fill six hex digits.
+    const digits = (mant << 1).toString(16).padStart(6, '0').replace(/0+$/, '');
+    const frac = digits === '' ? '' : `.${digits}`;
+    const e = exp === 0 ? -126 : exp - 127;
+    return `${sign}0x${exp === 0 ? 0 : 1}${frac}p${e < 0 ? '-' : '+'}${Math.abs(e)}f`;
+}
+/** An int8 or int32 constant as a C literal (INT32_MIN would need a cast; the scheme never stores it). */
+function c_text_intLiteral(v) {
+    if (!Number.isInteger(v) || v <= -2147483648 || v > 2147483647)
+        throw new RangeError(`not an int32 literal: ${v}`);
+    return String(v);
+}
+
+;// CONCATENATED MODULE: ./src/device/c-code.ts
+
+function encodeStatements(model, name, int8Path) {
+    const out = [];
+    let offset = 0;
+    let m = 0;
+    model.encoding.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            out.push(int8Path
+                ? `  {\n    const float d = features[${i}] - ${name}_q_in_mean[${m}];\n    const float t = d * ${name}_q_in_mul[${m}];\n    xq[${offset}] = ${name}_input_code(t);\n  }`
+                : `  x[${offset}] = (features[${i}] - ${name}_f_in_mean[${m}]) / ${name}_f_in_std[${m}];`);
+            m++;
+            offset++;
+        }
+        else {
+            const n = f.categories.length;
+            out.push(`  c = ${name}_category(features[${i}], ${n});`, int8Path
+                ? `  for (j = 0; j < ${n}; j++) xq[${offset} + j] = j == c ? ${name}_q_in_one : ${name}_q_in_zero;`
+                : `  for (j = 0; j < ${n}; j++) x[${offset} + j] = j == c ? 1.0f : 0.0f;`);
+            offset += n;
+        }
+    });
+    return out;
+}
+function c_code_helpers(name, hasNumeric, hasCategorical) {
+    const out = [];
+    if (hasCategorical) {
+        out.push(`/* A raw categorical value as a category index: a whole number in [0, n), else -1. */`, `static int ${name}_category(float v, int n) {`, `  if (v >= 0.0f && v < (float)n) {`, `    const int c = (int)v;`, `    if ((float)c == v) return c;`, `  }`, `  return -1;`, `}`, ``);
+    }
+    if (hasNumeric) {
+        out.push(`/* Input steps to an int8 code: clamp, round half away from zero (t - trunc(t) is exact), add the zero-point. */`, `static int8_t ${name}_input_code(float t) {`, `  int32_t i;`, `  float f;`, `  if (!(t > -${INPUT_STEP_LIMIT}.0f)) t = -${INPUT_STEP_LIMIT}.0f;`, `  else if (t > ${INPUT_STEP_LIMIT}.0f) t = ${INPUT_STEP_LIMIT}.0f;`, `  i = (int32_t)t;`, `  f = t - (float)i;`, `  if (f >= 0.5f) i++;`, `  else if (f <= -0.5f) i--;`, `  i += ${name}_q_in_zero;`, `  return (int8_t)(i < -128 ? -128 : i > 127 ? 127 : i);`, `}`, ``);
+    }
+    out.push(`/*`, ` * acc * M with M = m0 * 2^-31 * 2^-shift: a saturating left shift when shift < 0, the fixed-point`, ` * multiply (nudge, then division by 2^31 truncating toward zero) and a rounding right shift (ties`, ` * away from zero) when shift > 0: gemmlowp's SaturatingRoundingDoublingHighMul and RoundingDivideByPOT.`, ` */`, `static int32_t ${name}_requantize(int32_t acc, int32_t m0, int shift) {`, `  int64_t x = acc;`, `  int64_t ab;`, `  int32_t high, mask, remainder, threshold, floor_shift;`, `  if (m0 == 0) return 0;`, `  if (shift < 0) {`, `    x *= (int64_t)1 << -shift;`, `    if (x > INT32_MAX) x = INT32_MAX;`, `    if (x < INT32_MIN) x = INT32_MIN;`, `  }`, `  if (x == INT32_MIN && m0 == INT32_MIN) return INT32_MAX;`, `  ab = x * (int64_t)m0;`, `  high = (int32_t)((ab + (ab >= 0 ? ((int64_t)1 << 30) : (1 - ((int64_t)1 << 30)))) / ((int64_t)1 << 31));`, `  if (shift <= 0) return high;`, `  mask = (int32_t)(((int64_t)1 << shift) - 1);`, `  remainder = (int32_t)((uint32_t)high & (uint32_t)mask);`, `  threshold = (mask >> 1) + (high < 0 ? 1 : 0);`, `  floor_shift = high >= 0 ? (high >> shift) : ~((~high) >> shift);`, `  return floor_shift + (remainder > threshold ? 1 : 0);`, `}`, ``);
+    return out;
+}
+function c_code_floatPath(model, name) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const activation = net.activation === 'tanh'
+        ? 'tanhf(a)'
+        : net.activation === 'logistic'
+            ? '1.0f / (1.0f + expf(-a))'
+            : 'a > 0.0f ? a : 0.0f';
+    const out = [
+        `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  float x[${N}_INPUTS];`,
+        `  float h[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...encodeStatements(model, name, false),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    float a = ${name}_f_b1[j];`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) a += ${name}_f_w1[j][i] * x[i];`,
+        `    h[j] = ${activation};`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    float z = ${name}_f_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) z += ${name}_f_w2[k][j] * h[j];`,
+        `    outputs[k] = z;`,
+        `  }`,
+    ];
+    if (net.head === 'softmax') {
+        out.push(`  {`, `    float m = outputs[0], s = 0.0f;`, `    int best = 0;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > m) m = outputs[k];`, `    for (k = 0; k < ${N}_OUTPUTS; k++) {`, `      outputs[k] = expf(outputs[k] - m);`, `      s += outputs[k];`, `    }`, `    for (k = 0; k < ${N}_OUTPUTS; k++) outputs[k] /= s;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `    return best;`, `  }`);
+    }
+    else if (net.head === 'logistic') {
+        out.push(`  outputs[0] = 1.0f / (1.0f + expf(-outputs[0]));`, `  return outputs[0] > 0.5f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  outputs[0] = outputs[0] * ${name}_f_target[1] + ${name}_f_target[0];`, `  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+function c_code_int8Path(model, name) {
+    const N = name.toUpperCase();
+    const head = model.network.head;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const out = [
+        `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  int8_t xq[${N}_INPUTS];`,
+        `  int8_t hq[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...(head === 'softmax' ? [`  int best = 0;`] : []),
+        ...encodeStatements(model, name, true),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    int32_t acc = ${name}_q_b1[j], r;`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) acc += (int32_t)${name}_q_w1[j][i] * (int32_t)xq[i];`,
+        `    r = ${name}_requantize(acc, ${name}_q_m0[j], ${name}_q_shift[j]);`,
+        `    if (r < -${PRE_ACTIVATION_LIMIT}) r = -${PRE_ACTIVATION_LIMIT};`,
+        `    else if (r > ${PRE_ACTIVATION_LIMIT}) r = ${PRE_ACTIVATION_LIMIT};`,
+        `    r += ${name}_q_act_zero;`,
+        `    if (r < -128) r = -128;`,
+        `    else if (r > 127) r = 127;`,
+        `    hq[j] = ${name}_q_lut[r + 128];`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    int32_t acc = ${name}_q_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) acc += (int32_t)${name}_q_w2[k][j] * (int32_t)hq[j];`,
+        `    outputs[k] = (float)acc * ${name}_q_out_scale[k];`,
+        `  }`,
+    ];
+    if (head === 'softmax') {
+        out.push(`  for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `  return best;`);
+    }
+    else if (head === 'logistic') {
+        out.push(`  return outputs[0] > 0.0f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/export-c.ts
+/**
+ * Firmware export: a model as C99 source, NAME.h and NAME.c, with a float32 and an int8 path.
+ * No dynamic allocation, nothing beyond the C standard library (math.h on the float path).
+ * The constant objects are exactly those cost.ts counts (`storedObjects`), and the int8 path
+ * does exactly what int8-forward.ts simulates, operation for operation.
+ */
+
+
+
+
+
+const DEFAULT_C_NAME = 'nb_model';
+const q = (s) => `"${commentText(s)}"`;
+function checkModel(model) {
+    const net = model.network;
+    const int8 = model.int8;
+    if (int8 === null) {
+        throw new UserError('model: no int8 network (key "int8" is null); write the model again with this version');
+    }
+    const values = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!values.every(Number.isFinite))
+        throw new UserError('model: network weights must be finite numbers');
+    if (int8.inputs !== net.inputs || int8.width !== net.width || int8.outputs !== net.outputs) {
+        throw new UserError('model: the int8 network does not have the shape of the float network', { key: 'int8' });
+    }
+    return int8;
+}
+function headerText(model, name, p) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const enc = model.encoding;
+    const classes = enc.target.classes ?? [];
+    const regression = model.task === 'regression';
+    const act = net.activation;
+    const lines = [
+        `/*`,
+        ` * ${name}.h: a neural network for the device, written by neuron-budget ${commentText(p.toolVersion, 32)}.`,
+        ` * Do not edit: export it again from the model file instead.`,
+        ` *`,
+        ` * Data fingerprint: ${commentText(p.dataFingerprint, 80)}`,
+        ` * Config: ${commentText(p.config, 120)}`,
+        ` * Network: ${net.inputs} inputs after encoding, ${net.width} hidden neurons (${act}), ${net.outputs} output${net.outputs === 1 ? '' : 's'} (${net.head} head).`,
+        ` *`,
+        ` * features[] holds the raw values, in this order:`,
+    ];
+    enc.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            lines.push(` *   [${i}] ${q(f.name)}: a number, standardised on the device`);
+        }
+        else {
+            lines.push(` *   [${i}] ${q(f.name)}: the category's index, one-hot encoded on the device:`);
+            f.categories.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        }
+    });
+    if (enc.features.some((f) => f.kind === 'categorical')) {
+        lines.push(` * A category index that is not a whole number in range encodes as no category (all zeros).`);
+    }
+    lines.push(` *`);
+    if (regression) {
+        lines.push(` * Both functions return 0 and write the prediction of ${q(enc.target.name)}, in its own units, to outputs[0].`);
+    }
+    else {
+        lines.push(` * Both functions return the class index of ${q(enc.target.name)}:`);
+        classes.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        lines.push(` * ${name}_predict: the float32 network; outputs[] gets ${net.head === 'softmax' ? 'the probability of each class, in class order' : 'the probability of class 1'}.`, ` * ${name}_predict_int8: the int8 network; outputs[] gets the dequantised logit${net.outputs === 1 ? ' of class 1 (class 1 when it is above 0)' : ' of each class (the largest wins)'}.`);
+    }
+    lines.push(` * The int8 path is integer arithmetic apart from the input scaling and the output's dequantisation;`, ` * its outputs equal neuron-budget's simulation of it bit for bit on IEEE 754 single precision with`, ` * each assignment rounded to float (FLT_EVAL_METHOD 0, or GCC in an ISO mode such as -std=c99).`, ` * The float path runs the trained network in float32 arithmetic; it needs tanhf and expf (link -lm).`, ` */`, `#ifndef ${N}_H`, `#define ${N}_H`, ``, `#ifdef __cplusplus`, `extern "C" {`, `#endif`, ``, `#define ${N}_FEATURES ${enc.features.length}`, `#define ${N}_OUTPUTS ${net.outputs}`, `#define ${N}_INPUTS ${net.inputs}`, `#define ${N}_HIDDEN ${net.width}`);
+    if (!regression)
+        lines.push(`#define ${N}_CLASSES ${classes.length}`);
+    lines.push(``, `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, ``, `#ifdef __cplusplus`, `}`, `#endif`, ``, `#endif`, ``);
+    return lines.join('\n');
+}
+/** Values wrapped into lines of at most ~100 characters, indented. */
+function wrap(values, indent) {
+    const lines = [];
+    let line = '';
+    for (const v of values) {
+        if (line !== '' && line.length + v.length + 2 > 100 - indent.length) {
+            lines.push(`${indent}${line},`);
+            line = '';
+        }
+        line = line === '' ? v : `${line}, ${v}`;
+    }
+    if (line !== '')
+        lines.push(`${indent}${line}`);
+    return lines.join('\n');
+}
+function literal(type, v) {
+    return type === 'float' ? floatLiteral(v) : intLiteral(v);
+}
+function declare(name, o, values) {
+    const decl = `static const ${o.type} ${name}_${o.suffix}`;
+    const flat = values.flat();
+    if (flat.length !== o.count)
+        throw new Error(`internal: ${o.suffix} has ${flat.length} values, expected ${o.count}`);
+    const cells = (row, indent) => wrap(row.map((v) => literal(o.type, v)), indent);
+    if (o.scalar)
+        return `${decl} = ${literal(o.type, flat[0])};`;
+    if (isMatrix(values)) {
+        const rows = values.map((r) => `  {\n${cells(r, '    ')}\n  }`);
+        return `${decl}[${values.length}][${values[0].length}] = {\n${rows.join(',\n')}\n};`;
+    }
+    return `${decl}[${o.count}] = {\n${cells(flat, '  ')}\n};`;
+}
+function isMatrix(values) {
+    return Array.isArray(values[0]);
+}
+/** The values of each stored object, keyed by suffix. */
+function objectValues(model, int8) {
+    const net = model.network;
+    const enc = model.encoding;
+    const numeric = enc.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const qNumeric = int8.input.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const f = (v) => Math.fround(v);
+    const rows = (m) => m.map((r) => r.map(f));
+    return {
+        f_in_mean: numeric.map((e) => f(e.mean)),
+        f_in_std: numeric.map((e) => f(e.std > 0 ? e.std : 1)),
+        f_w1: rows(net.hiddenWeights),
+        f_b1: net.hiddenBias.map(f),
+        f_w2: rows(net.outputWeights),
+        f_b2: net.outputBias.map(f),
+        f_target: [f(enc.target.mean), f(enc.target.std)],
+        q_in_mean: qNumeric.map((e) => e.mean),
+        q_in_mul: qNumeric.map((e) => e.multiplier),
+        q_in_zero: [int8.input.zeroPoint],
+        q_in_one: [int8.input.one],
+        q_w1: int8.hidden.weights,
+        q_b1: foldZeroPoint(int8.hidden.bias, int8.hidden.weights, int8.input.zeroPoint),
+        q_m0: int8.hidden.multiplier,
+        q_shift: int8.hidden.shift,
+        q_act_zero: [int8.hidden.preActivation.zeroPoint],
+        q_lut: int8.hidden.table,
+        q_w2: int8.output.weights,
+        q_b2: foldZeroPoint(int8.output.bias, int8.output.weights, int8.hidden.activation.zeroPoint),
+        q_out_scale: int8.output.scale,
+    };
+}
+function sourceText(model, int8, name, p) {
+    const stored = storedObjects(costShapeOf(model.network, model.encoding));
+    const values = objectValues(model, int8);
+    const numeric = model.encoding.features.some((f) => f.kind === 'numeric');
+    const categorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const s = int8.hidden;
+    return [
+        `/*`,
+        ` * ${name}.c: written by neuron-budget ${commentText(p.toolVersion, 32)}; see ${name}.h. Do not edit.`,
+        ` *`,
+        ` * int8 scheme: input scale ${int8.input.scale.toPrecision(6)}, zero-point ${int8.input.zeroPoint};`,
+        ` * pre-activation scale ${s.preActivation.scale.toPrecision(6)}, zero-point ${s.preActivation.zeroPoint};`,
+        ` * hidden activation scale ${s.activation.scale.toPrecision(6)}, zero-point ${s.activation.zeroPoint};`,
+        ` * symmetric per-neuron int8 weights, int32 biases (zero-points folded in), ${model.network.activation} by table.`,
+        ` */`,
+        `#include "${name}.h"`,
+        `#include <math.h>`,
+        `#include <stdint.h>`,
+        ``,
+        `/* float32 network */`,
+        ...stored.float32.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        `/* int8 network */`,
+        ...stored.int8.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        ...helpers(name, numeric, categorical),
+        ...floatPath(model, name),
+        ...int8Path(model, name),
+    ].join('\n');
+}
+/** NAME.h and NAME.c for `model`; `name` must be a C identifier. */
+function exportC(model, name, provenance) {
+    checkCName(name);
+    const int8 = checkModel(model);
+    return {
+        headerFile: `${name}.h`,
+        sourceFile: `${name}.c`,
+        header: headerText(model, name, provenance),
+        source: sourceText(model, int8, name, provenance),
+    };
+}
+
+;// CONCATENATED MODULE: ./src/device/index.ts
+/**
+ * Device reality: what a network costs on a microcontroller, its int8 form, and firmware
+ * source for both forms. Pure functions; no I/O.
+ */
+
+
+
+
+
+
+
+
 ;// CONCATENATED MODULE: ./src/model/document.ts
 
-const MODEL_SCHEMA = 'neuron-budget/model@1';
-function modelDocument(witness, encoding, target) {
+
+const MODEL_SCHEMA = 'neuron-budget/model@2';
+/** The previous version (no cost, no int8 network): still read, as int8 null. */
+const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
+/**
+ * The witness as a document. With `calibration` (the encoded training rows) it carries the
+ * int8 form too.
+ */
+function modelDocument(witness, encoding, target, backing, calibration = null) {
     return {
         schema: MODEL_SCHEMA,
         task: encoding.target.task,
         width: witness.network.width,
-        target: { metric: target.metric, threshold: target.threshold, value: witness.metric },
-        origin: { seed: witness.seed, restart: witness.restart, grownWidth: witness.grownWidth },
+        target: {
+            metric: target.metric,
+            threshold: target.threshold,
+            value: witness.judged,
+            on: backing.on,
+            met: witness.met,
+            adequate: backing.adequate,
+        },
+        origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
         encoding: structuredClone(encoding),
         network: structuredClone(witness.network),
+        cost: cost_deviceCost(cost_costShapeOf(witness.network, encoding)),
+        int8: calibration === null ? null : quantizeNetwork(witness.network, encoding, calibration),
     };
 }
 /** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
@@ -44301,7 +44083,7 @@ function parseModel(text, file = 'model') {
     if (typeof doc !== 'object' || doc === null)
         return bad('(root)', 'an object');
     const d = doc;
-    if (d.schema !== MODEL_SCHEMA)
+    if (d.schema !== MODEL_SCHEMA && d.schema !== MODEL_SCHEMA_V1)
         bad('schema', `"${MODEL_SCHEMA}"`);
     if (d.task !== 'classification' && d.task !== 'regression')
         bad('task', '"classification" or "regression"');
@@ -44327,11 +44109,29 @@ function parseModel(text, file = 'model') {
         bad('network.outputBias', `${net.outputs} numbers`);
     if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
         bad('encoding.target.classes', 'a list of class labels');
-    return d;
+    if (d.schema === MODEL_SCHEMA_V1) {
+        // Version 1 recorded only the validation value and the grown width; what it reached is kept.
+        const v1 = d;
+        const old = d;
+        return {
+            ...d,
+            schema: MODEL_SCHEMA,
+            target: { ...v1.target, on: 'validation', met: true, adequate: true },
+            origin: { seed: old.origin.seed, width: old.origin.grownWidth, restart: old.origin.restart + 1, how: 'fresh' },
+            cost: deviceCost(costShapeOf(net, enc)),
+            int8: null,
+        };
+    }
+    if (d.int8 !== null) {
+        const problem = checkInt8Network(d.int8, net, enc);
+        if (problem)
+            bad(problem.key, problem.expected);
+    }
+    return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
 }
 
-// EXTERNAL MODULE: ./src/nn/index.ts + 14 modules
-var nn = __nccwpck_require__(7340);
+// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
+var nn = __nccwpck_require__(6575);
 ;// CONCATENATED MODULE: ./src/model/predict.ts
 /** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
 
@@ -44454,7 +44254,7 @@ function dataStageReport(config, data, timing) {
     const ds = data.dataset;
     const classes = data.profile.classes;
     return {
-        schema: 'neuron-budget/report@1',
+        schema: 'neuron-budget/report@2',
         tool: { name: TOOL_NAME, version: TOOL_VERSION },
         reasons: [],
         width: null,
@@ -44466,6 +44266,7 @@ function dataStageReport(config, data, timing) {
             droppedRows: data.droppedRows,
             trainRows: ds.trainRows,
             validationRows: ds.validationRows,
+            judgingRows: ds.judgingRows,
             inputs: ds.inputs,
             outputs: ds.outputs,
             task: ds.task,
@@ -44482,7 +44283,7 @@ function dataStageReport(config, data, timing) {
     };
 }
 /** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-function searchStageReport(report, search) {
+function searchStageReport(report, search, required) {
     return {
         ...report,
         reasons: [],
@@ -44491,11 +44292,33 @@ function searchStageReport(report, search) {
         search: {
             outcome: search.outcome,
             grownWidth: search.grownWidth,
+            required,
             widths: search.widths,
-            pruning: search.pruning,
+            pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
             trainings: search.trainings,
-            note: search.note,
+            notes: search.notes,
+            judging: search.judging,
+            witness: witnessOf(search),
         },
+    };
+}
+/** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
+function shownSource(task) {
+    return { width: task.width, restart: task.restart + 1 };
+}
+function witnessOf(search) {
+    const w = search.witness;
+    if (w === null)
+        return null;
+    return {
+        width: w.network.width,
+        how: w.how,
+        source: shownSource(w.source),
+        judged: w.judged,
+        steering: w.steering,
+        train: w.train,
+        met: w.met,
+        adequate: search.width !== null,
     };
 }
 
@@ -44519,12 +44342,20 @@ function inputsLine(data) {
     }
     return `${data.dataset.inputs} after encoding: ${parts.join(', ')}`;
 }
-function splitLine(config, report) {
+function splitLine(config, report, data) {
     const d = report.data;
-    if (d.validationRows === 0)
-        return `${d.trainRows} training rows, judged on themselves (data.validation is 0)`;
-    const how = d.task === 'classification' ? 'stratified by class, ' : '';
-    return `${d.trainRows} training / ${d.validationRows} validation (${how}seed ${config.search.seed})`;
+    const how = `${d.task === 'classification' ? 'stratified by class, ' : ''}seed ${config.search.seed}`;
+    if (d.validationRows === 0 && d.judgingRows === 0) {
+        return `${d.trainRows} training rows, steered and judged on themselves (data.validation is 0)`;
+    }
+    const parts = [`${d.trainRows} training`];
+    if (d.validationRows > 0)
+        parts.push(`${d.validationRows} validation`);
+    if (d.judgingRows > 0)
+        parts.push(`${d.judgingRows} judging`);
+    const folded = data.judgingFolded ? '; a class is too small for judging rows, so the validation rows judge' : '';
+    const optimistic = d.judgingRows === 0 && !data.judgingFolded ? '; judged on the validation rows (data.judging is 0)' : '';
+    return `${parts.join(' / ')} (${how})${folded}${optimistic}`;
 }
 function dataSummaryText(config, data, report) {
     const d = report.data;
@@ -44532,7 +44363,7 @@ function dataSummaryText(config, data, report) {
         ['config', escapeText(displayPath(config.root, config.file))],
         ['data', escapeText(d.file)],
         ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
-        ['split', splitLine(config, report)],
+        ['split', splitLine(config, report, data)],
         ['inputs', inputsLine(data)],
         [
             'task',
@@ -44650,7 +44481,7 @@ function viewOf(report) {
         current: {
             width: report.width,
             metric: report.metric.value,
-            reached: at ? at.reached : null,
+            met: at ? at.met : null,
             restarts: at ? at.restarts : null,
             rows: report.data.rows,
             searchSeconds: typeof searchSeconds === 'number' ? searchSeconds : null,
@@ -44659,13 +44490,14 @@ function viewOf(report) {
             ? {
                 width: b.width,
                 metric: b.metric,
-                reached: b.reached ?? null,
+                met: b.met ?? null,
                 restarts: b.restarts ?? null,
                 rows: b.rows ?? null,
                 searchSeconds: b.searchSeconds ?? null,
             }
             : null,
         prunedFrom: grown !== null && report.width !== null && grown !== report.width ? grown : null,
+        backing: at ? backingSentence(at, report) : null,
         rows: [...byWidth.values()].sort((x, y) => x.width - y.width),
         history: b?.history ?? [],
         baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
@@ -44685,6 +44517,23 @@ function currentWidthCell(view, report, dash, strong = (s) => s) {
 function overDeviceBudget(report) {
     const budget = report.gate?.maxWidth ?? null;
     return budget !== null && report.width !== null && report.width > budget;
+}
+/**
+ * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
+ * wider networks); 3 are required." One definition of the backing, shown by every screen.
+ */
+function backingSentence(w, report) {
+    const judging = report.search?.judging.on ?? 'judging';
+    const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
+    const parts = [];
+    if (w.restarts > 0)
+        parts.push(`${w.metBy.fresh} of ${w.restarts} fresh restart${w.restarts === 1 ? '' : 's'}`);
+    if (w.metBy.pruned > 0)
+        parts.push(`${w.metBy.pruned} pruned from wider networks`);
+    const required = report.search?.required ?? null;
+    const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
+    const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
+    return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
 }
 
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
@@ -44739,7 +44588,7 @@ function summaryTable(view, report) {
         '|:--|--:|--:|',
         `| Smallest adequate width | ${b?.width ?? dash} | ${cWidth} |`,
         `| ${capital(metricName)} at that width (network kept) | ${num(b?.metric)} | ${num(c.metric)} |`,
-        `| Restarts reaching the target there | ${(0,format/* successRate */.sE)(b?.reached, b?.restarts)} | ${(0,format/* successRate */.sE)(c.reached, c.restarts)} |`,
+        `| Networks meeting the target there | ${b?.met ?? '—'} | ${c.met ?? '—'} |`,
         `| Data rows | ${b?.rows == null ? dash : (0,format/* formatCount */.B4)(b.rows)} | ${c.rows === null ? dash : (0,format/* formatCount */.B4)(c.rows)}${rowsDelta} |`,
         `| Search time | ${(0,format/* formatSeconds */.Xo)(b?.searchSeconds)} | ${(0,format/* formatSeconds */.Xo)(c.searchSeconds)} |`,
     ];
@@ -44750,7 +44599,8 @@ function summaryTable(view, report) {
         terms.push(`allowed growth over the baseline: ${gate.allowedGrowth}`);
     }
     terms.push(`data: ${escapeMarkdown(report.data.file)}`);
-    return `${rows.join('\n')}\n\n${terms.join(' · ')}.`;
+    const backing = view.backing === null ? '' : `\n\n${escapeMarkdown(view.backing, 400)}`;
+    return `${rows.join('\n')}${backing}\n\n${terms.join(' · ')}.`;
 }
 function chartSection(view, report) {
     const chartWidths = new Set();
@@ -44843,25 +44693,25 @@ function collapsible(summary, body) {
 function widthTable(view, limits, chartWidths) {
     const hasBaseline = view.baseline !== null;
     const header = hasBaseline
-        ? '| Width | This change: best | Reached | Wilson 95% | Baseline: best | Reached |\n|--:|--:|--:|--:|--:|--:|'
-        : '| Width | Best | Reached | Wilson 95% | Median epochs |\n|--:|--:|--:|--:|--:|';
+        ? '| Width | This change: best | Met | Wilson 95% | Baseline: best | Met |\n|--:|--:|--:|--:|--:|--:|'
+        : '| Width | Best | Met | Wilson 95% | Median epochs |\n|--:|--:|--:|--:|--:|';
     const keep = pickRows(view.rows, limits.widthRows, (r) => chartWidths.has(r.width) || r.width === view.current.width);
     const lines = keep.kept.map((r) => {
         const c = r.current;
         const cells = [
             mark(r.width, view),
             num(c?.best),
-            c ? (0,format/* successRate */.sE)(c.reached, c.restarts) : '—',
+            c ? metCell(c) : '—',
             c ? `${c.wilson[0].toFixed(2)}–${c.wilson[1].toFixed(2)}` : '—',
         ];
         if (hasBaseline)
-            cells.push(num(r.baseline?.best), r.baseline ? (0,format/* successRate */.sE)(r.baseline.reached, r.baseline.restarts) : '—');
+            cells.push(num(r.baseline?.best), r.baseline ? String(r.baseline.met) : '—');
         else
             cells.push(c ? (0,format/* formatCount */.B4)(c.medianEpochs) : '—');
         return `| ${cells.join(' | ')} |`;
     });
     const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
-    return `${header}\n${lines.join('\n')}${omitted}\n\nReached: restarts that reached the target out of restarts run. Wilson 95%: interval for the success rate.`;
+    return `${header}\n${lines.join('\n')}${omitted}\n\nMet: networks of that width that met the target (fresh restarts + networks pruned down to it). Wilson 95%: interval for the fresh restarts' success rate.`;
 }
 function mark(width, view) {
     const tags = [];
@@ -44884,7 +44734,7 @@ function pruneTable(steps, limits) {
     if (limits.pruneRows === 0)
         return `_${steps.length} steps left out for length; the JSON report lists them._`;
     const shown = steps.slice(0, limits.pruneRows);
-    const lines = shown.map((s) => `| ${s.restart} | ${s.width} | ${s.neuron} | ${num(s.metricBefore)} | ${num(s.metricAfter)} | ${s.kept ? 'removed' : 'kept (needed)'} |`);
+    const lines = shown.map((s) => `| ${s.source.width}/${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back (needed)'} |`);
     const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
     return `| Restart | Width before | Neuron | Metric before | Metric after | Outcome |\n|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}`;
 }
@@ -44970,6 +44820,10 @@ function num(v) {
 function capital(s) {
     return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
 }
+/** "4 (1 + 3)": networks of the width that met the target, fresh + pruned when both occur. */
+function metCell(w) {
+    return w.metBy.pruned > 0 && w.metBy.fresh > 0 ? `${w.met} (${w.metBy.fresh} + ${w.metBy.pruned})` : String(w.met);
+}
 
 ;// CONCATENATED MODULE: ./src/report/text.ts
 
@@ -44980,9 +44834,9 @@ function renderText(report) {
     const view = viewOf(report);
     const out = [];
     const label = VERDICT_LABEL[view.verdict];
-    out.push(...wrap(`neuron-budget: ${label}. ${escapeText(view.headline)}`, ''));
+    out.push(...text_wrap(`neuron-budget: ${label}. ${escapeText(view.headline)}`, ''));
     for (const r of view.otherReasons)
-        out.push(...wrap(escapeText(r), '  - ', '    '));
+        out.push(...text_wrap(escapeText(r), '  - ', '    '));
     out.push('');
     const b = view.baseline;
     const c = view.current;
@@ -44993,7 +44847,7 @@ function renderText(report) {
         ['', 'baseline', 'this change'],
         ['smallest adequate width', b?.width == null ? dash : String(b.width), cWidth],
         [`${view.metricName} at that width`, fmt(b?.metric), fmt(c.metric)],
-        ['restarts reaching target there', rate(b?.reached, b?.restarts), rate(c.reached, c.restarts)],
+        ['networks meeting target there', b?.met == null ? dash : String(b.met), c.met === null ? dash : String(c.met)],
         [
             'data rows',
             b?.rows == null ? dash : (0,format/* formatCount */.B4)(b.rows),
@@ -45007,29 +44861,31 @@ function renderText(report) {
     ];
     for (const [name, before, after] of table)
         out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
+    if (view.backing !== null) {
+        out.push('');
+        out.push(...text_wrap(view.backing, ''));
+    }
     out.push('');
     const terms = [`target: ${(0,format/* targetPhrase */.Lx)(view.metricName, view.threshold)}`];
     if (report.gate) {
         terms.push(report.gate.maxWidth === null ? 'no device budget' : `device budget: ${(0,format/* neurons */.nO)(report.gate.maxWidth)}`);
         terms.push(`allowed growth: ${report.gate.allowedGrowth}`);
     }
-    out.push(...wrap(`${terms.join('; ')}.`, ''));
-    out.push(...wrap(`data: ${escapeText(report.data.file)}`, ''));
+    out.push(...text_wrap(`${terms.join('; ')}.`, ''));
+    out.push(...text_wrap(`data: ${escapeText(report.data.file)}`, ''));
     if (view.rows.length > 0) {
         out.push('');
-        out.push(`${view.metricName} by width (best over restarts; reached/run)`);
-        const head = b
-            ? ['width', 'this change', 'reached', 'baseline', 'reached']
-            : ['width', 'best', 'reached', 'wilson 95%'];
+        out.push(`${view.metricName} by width (best network; networks that met the target)`);
+        const head = b ? ['width', 'this change', 'met', 'baseline', 'met'] : ['width', 'best', 'met', 'wilson 95%'];
         out.push(head.map((h, i) => (i === 0 ? h.padStart(7) : h.padStart(14))).join(''));
         for (const r of view.rows) {
             const cells = [
                 `${r.width === c.width ? '>' : ' '}${String(r.width).padStart(6)}`,
                 fmt(r.current?.best),
-                r.current ? rate(r.current.reached, r.current.restarts) : dash,
+                r.current ? String(r.current.met) : dash,
             ];
             if (b)
-                cells.push(fmt(r.baseline?.best), r.baseline ? rate(r.baseline.reached, r.baseline.restarts) : dash);
+                cells.push(fmt(r.baseline?.best), r.baseline ? String(r.baseline.met) : dash);
             else
                 cells.push(r.current ? `${r.current.wilson[0].toFixed(2)}-${r.current.wilson[1].toFixed(2)}` : dash);
             out.push(cells.map((x, i) => (i === 0 ? x : x.padStart(14))).join(''));
@@ -45042,11 +44898,11 @@ function renderText(report) {
         const widths = view.history.slice(-20).map((h) => String(h.width));
         if (c.width !== null)
             widths.push(`now ${c.width}`);
-        out.push(...wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
+        out.push(...text_wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
     }
     const pruning = report.search?.pruning ?? [];
     if (pruning.length > 0) {
-        const removed = pruning.filter((s) => s.kept).length;
+        const removed = pruning.filter((s) => s.accepted).length;
         out.push('');
         out.push(`pruning: ${pruning.length} step${pruning.length === 1 ? '' : 's'}, ${removed} neuron${removed === 1 ? '' : 's'} removed`);
     }
@@ -45054,14 +44910,14 @@ function renderText(report) {
         out.push('');
         out.push('data changes since the baseline:');
         for (const line of changeLines(report.changes))
-            out.push(...wrap(line, '  - ', '    '));
+            out.push(...text_wrap(line, '  - ', '    '));
     }
     out.push('');
-    out.push(...wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
+    out.push(...text_wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
     if (overDeviceBudget(report)) {
-        out.push(...wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
+        out.push(...text_wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
     }
-    out.push(...wrap('A passing gate is not a safety sign-off for a device.', ''));
+    out.push(...text_wrap('A passing gate is not a safety sign-off for a device.', ''));
     return `${out.join('\n')}\n`;
 }
 function changeLines(ch) {
@@ -45101,7 +44957,7 @@ function changeLines(ch) {
     return lines;
 }
 /** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
-function wrap(text, first, rest = first) {
+function text_wrap(text, first, rest = first) {
     const words = text.split(/ +/).filter((w) => w !== '');
     const lines = [];
     let line = first;
@@ -45122,9 +44978,6 @@ function wrap(text, first, rest = first) {
 function fmt(v) {
     return v === null || v === undefined ? '-' : (0,format/* formatMetric */.gI)(v);
 }
-function rate(reached, restarts) {
-    return (0,format/* successRate */.sE)(reached, restarts).replace('—', '-');
-}
 function ascii(s) {
     return s.replace('−', '-');
 }
@@ -45141,7 +44994,7 @@ function withGate(report, outcome, gate) {
                 width: b.result.width,
                 metric: b.result.metric.value,
                 file: gate.baselineAsWritten,
-                reached: b.result.reached,
+                met: b.result.met,
                 restarts: b.result.restarts,
                 rows: b.data.rows,
                 searchSeconds: b.result.searchSeconds,
@@ -45168,8 +45021,8 @@ function withGate(report, outcome, gate) {
 
 
 
-// EXTERNAL MODULE: ./src/search/index.ts + 7 modules
-var src_search = __nccwpck_require__(3665);
+// EXTERNAL MODULE: ./src/search/index.ts + 9 modules
+var src_search = __nccwpck_require__(9324);
 ;// CONCATENATED MODULE: ./src/run.ts
 /**
  * The main job shared by the command line and the action: config → data → search → gate →
@@ -45207,6 +45060,7 @@ async function runJob(options) {
     const search = await timed(timing, 'searchSeconds', () => (0,src_search/* runSearch */._d)(data.dataset, config.search, config.target, {
         workers: options.workers ?? null,
         workerEntry: options.workerEntry ?? null,
+        judgingFolded: data.judgingFolded,
         ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     }));
     timing.growthSeconds = search.timing.growthSeconds;
@@ -45225,14 +45079,16 @@ async function runJob(options) {
     });
     if (gate.notWritten !== null)
         options.log?.(`baseline not written: ${gate.notWritten}`);
-    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search), gate.outcome, gate.gate);
+    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required), gate.outcome, gate.gate);
     let modelWritten = null;
     if (options.modelPath) {
         if (search.witness === null) {
-            options.log?.('model not written: no network reached the target');
+            options.log?.('model not written: no network met the target');
         }
         else {
-            const doc = modelDocument(search.witness, data.dataset.encoding, config.target);
+            const backing = { on: search.judging.on, adequate: search.width !== null };
+            const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
+            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration);
             await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
             modelWritten = options.modelPath;
         }
@@ -45297,11 +45153,135 @@ function withinLimit(list, limit = ANNOTATION_LIMIT) {
     return { annotated: list.slice(0, limit), logged: list.slice(limit) };
 }
 
+;// CONCATENATED MODULE: ./src/github/api-failure.ts
+/**
+ * Why a GitHub request failed, in the terms a warning must use: the real cause, not the
+ * status a library happens to put on it (a refused connection is not "GitHub answered 500").
+ */
+class ApiFailure extends Error {
+    kind;
+    what;
+    status;
+    detail;
+    attempts;
+    limit;
+    gaveUp;
+    constructor(kind, 
+    /** "GET /repos/o/r/issues/1/comments": what was being asked. */
+    what, 
+    /** The HTTP status when one came, else null. */
+    status, 
+    /** GitHub's own message, or the network error's. */
+    detail, 
+    /** Requests sent for this operation, the failed one included. */
+    attempts, 
+    /** Rate limits: which limit ("secondary rate limit"). */
+    limit = '', 
+    /** Rate limits: why we stopped waiting for it. */
+    gaveUp = '') {
+        super(`${what}: ${brief(kind, status, detail)}`);
+        this.kind = kind;
+        this.what = what;
+        this.status = status;
+        this.detail = detail;
+        this.attempts = attempts;
+        this.limit = limit;
+        this.gaveUp = gaveUp;
+        this.name = 'ApiFailure';
+    }
+}
+function brief(kind, status, detail) {
+    if (kind === 'timeout')
+        return `no answer within ${detail}`;
+    if (kind === 'no-response')
+        return `no response (${detail})`;
+    if (kind === 'budget')
+        return `out of time while ${detail}`;
+    return `GitHub answered ${status} (${detail})`;
+}
+function isApiFailure(e) {
+    return e instanceof ApiFailure;
+}
+/**
+ * A failure after which a create may still have happened on the server: the request got
+ * there but its answer was lost or was an error. A rate limit or a refusal means it did not.
+ */
+function createMayHaveHappened(e) {
+    return isApiFailure(e) && (e.kind === 'server-error' || e.kind === 'timeout' || e.kind === 'no-response');
+}
+const plural = (n, one, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+/**
+ * One sentence per cause. `permissionAdvice` explains a 403 (fork pull request or missing
+ * `pull-requests: write`); the shell knows which.
+ */
+function describeFailure(f, permissionAdvice, budgetSeconds) {
+    const tries = plural(f.attempts, 'attempt');
+    switch (f.kind) {
+        case 'permission':
+            return `GitHub refused ${f.what} with 403 (${f.detail}). ${permissionAdvice}`;
+        case 'auth':
+            return `GitHub did not accept the token for ${f.what} (401: ${f.detail}). Check the github-token input.`;
+        case 'rate-limit':
+            return `GitHub's ${f.limit || 'rate limit'} on ${f.what} did not clear: ${f.gaveUp || tries} (${f.status}: ${f.detail}).`;
+        case 'timeout':
+            return `GitHub did not answer ${f.what} within ${f.detail} (${tries}).`;
+        case 'no-response':
+            return `No response came from GitHub for ${f.what}: ${f.detail} (${tries}).`;
+        case 'server-error':
+            return `GitHub answered ${f.what} with the server error ${f.status} (${f.detail}; ${tries}).`;
+        case 'refused':
+            return `GitHub answered ${f.what} with ${f.status} (${f.detail}).`;
+        case 'budget':
+            return `The comment step used up its ${budgetSeconds} s budget while ${f.detail}${f.what ? ` (${f.what})` : ''}.`;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/github/identity.ts
+/**
+ * Who the token posts as, so the action recognises its own comment under any token: the
+ * authenticated user where GitHub tells it (GET /user, personal access tokens), else the
+ * Actions bot (the job's GITHUB_TOKEN cannot call GET /user and gets a 403).
+ */
+
+/** The login the default `github.token` posts as. */
+const ACTIONS_BOT = {
+    login: 'github-actions[bot]',
+    type: 'Bot',
+    how: "the job's token, which cannot read GET /user",
+};
+/** GitHub logins: letters, digits and single hyphens, at most 39 characters; apps add "[bot]". */
+const LOGIN = /^[A-Za-z0-9](?:[A-Za-z0-9]|-(?=[A-Za-z0-9])){0,38}(?:\[bot\])?$/;
+async function tokenIdentity(octokit) {
+    let data;
+    try {
+        ({ data } = await octokit.rest.users.getAuthenticated());
+    }
+    catch (e) {
+        // Only a plain refusal means "an integration token"; a timeout or a server error says nothing about who we are.
+        if (isApiFailure(e) && e.kind === 'permission')
+            return ACTIONS_BOT;
+        throw e;
+    }
+    const login = typeof data.login === 'string' ? data.login : '';
+    const type = typeof data.type === 'string' ? data.type : '';
+    if (!LOGIN.test(login) || (type !== 'User' && type !== 'Bot')) {
+        // The answer goes into log lines and comparisons; refuse anything that is not a GitHub login.
+        throw new ApiFailure('refused', 'GET /user', 200, 'the answer does not name a GitHub account', 1);
+    }
+    return { login, type, how: "the token's own account, from GET /user" };
+}
+
 ;// CONCATENATED MODULE: ./src/github/comment.ts
+/**
+ * The one sticky pull-request comment: found by a hidden marker on its first line and by its
+ * author (the token's own identity), then updated, or created when there is none.
+ */
+
+
 /** GitHub rejects longer comment bodies with 422. @testOnly */
 const comment_COMMENT_LIMIT = 65_536;
-/** The login the default `github.token` posts as. */
-const ACTIONS_BOT_LOGIN = 'github-actions[bot]';
+/** Creates sent at most: each one after the last failed in a way that may have created the comment. */
+const MAX_CREATES = 3;
 /**
  * One marker per config, so two steps checking two configs keep two comments. `--` cannot
  * appear inside an HTML comment, hence the rewrite.
@@ -45314,17 +45294,18 @@ function commentMarker(configKey) {
 }
 /**
  * Ours when the marker is the body's first line (a quote starts with "> ") AND the author is
- * the Actions bot account (a bot type cannot be taken by a person; the login is compared
- * without regard to case). A deleted author (`user: null`) is never ours.
+ * the token's identity: the same login (compared without regard to case) and the same account
+ * type, so a person cannot pass for the bot nor the bot for a person. A deleted author
+ * (`user: null`) is never ours.
  * @testOnly
  */
-function isOurComment(c, marker, botLogin = ACTIONS_BOT_LOGIN) {
+function isOurComment(c, marker, identity = ACTIONS_BOT) {
     const user = c.user;
     if (!user || typeof user.login !== 'string')
         return false;
-    if ((user.type ?? '').toLowerCase() !== 'bot')
+    if ((user.type ?? '').toLowerCase() !== identity.type.toLowerCase())
         return false;
-    if (user.login.toLowerCase() !== botLogin.toLowerCase())
+    if (user.login.toLowerCase() !== identity.login.toLowerCase())
         return false;
     const firstLine = (c.body ?? '')
         .replace(/^\uFEFF/, '')
@@ -45352,22 +45333,43 @@ function commentBody(marker, markdown, runUrl, limit = comment_COMMENT_LIMIT) {
     const body = cut + note;
     return body.length <= limit ? body : body.slice(0, limit);
 }
-async function upsertComment(octokit, where, marker, body) {
+/**
+ * Updates our comment, or creates it. A create is not idempotent: when one fails in a way
+ * that may still have created the comment (a 5xx, a timeout, a lost connection), the
+ * comments are listed again and ours, if it is there now, is the one kept.
+ */
+async function upsertComment(octokit, where, marker, body, identity = ACTIONS_BOT, log = () => undefined) {
     const { owner, repo, issueNumber } = where;
+    for (let creates = 0;;) {
+        const ours = await findOurs(octokit, where, marker, identity);
+        if (ours) {
+            if (creates > 0 && ours.body === body)
+                return { action: 'created', id: ours.id, url: ours.html_url ?? null };
+            const res = await octokit.rest.issues.updateComment({ owner, repo, comment_id: ours.id, body });
+            return { action: creates > 0 ? 'created' : 'updated', id: res.data.id, url: res.data.html_url ?? null };
+        }
+        try {
+            creates++;
+            const res = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body });
+            return { action: 'created', id: res.data.id, url: res.data.html_url ?? null };
+        }
+        catch (e) {
+            if (!createMayHaveHappened(e) || creates >= MAX_CREATES)
+                throw e;
+            log(`Creating the comment failed (${e.message}); it may have been created all the same, ` +
+                'so the comments are listed again before another try.');
+        }
+    }
+}
+/** The oldest of ours, so a stray duplicate (two runs racing without a concurrency group) never wins. */
+async function findOurs(octokit, { owner, repo, issueNumber }, marker, identity) {
     const comments = await octokit.paginate(octokit.rest.issues.listComments, {
         owner,
         repo,
         issue_number: issueNumber,
         per_page: 100,
     });
-    // The oldest of ours, so a stray duplicate (two runs racing without a concurrency group) never wins.
-    const ours = comments.find((c) => isOurComment(c, marker));
-    if (ours) {
-        const res = await octokit.rest.issues.updateComment({ owner, repo, comment_id: ours.id, body });
-        return { action: 'updated', id: res.data.id, url: res.data.html_url ?? null };
-    }
-    const res = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body });
-    return { action: 'created', id: res.data.id, url: res.data.html_url ?? null };
+    return comments.find((c) => isOurComment(c, marker, identity));
 }
 
 ;// CONCATENATED MODULE: ./src/common/workers.ts
@@ -45493,370 +45495,185 @@ function fitSummary(markdown, limit = SUMMARY_LIMIT) {
     return cut.slice(0, Math.max(0, cut.lastIndexOf('\n'))) + note;
 }
 
-// EXTERNAL MODULE: ./node_modules/bottleneck/light.js
-var light = __nccwpck_require__(3251);
-;// CONCATENATED MODULE: ./node_modules/@octokit/plugin-retry/dist-bundle/index.js
-// pkg/dist-src/version.js
-var plugin_retry_dist_bundle_VERSION = "0.0.0-development";
-
-// pkg/dist-src/error-request.js
-function isRequestError(error) {
-  return error.request !== void 0;
-}
-async function errorRequest(state, octokit, error, options) {
-  if (!isRequestError(error) || !error?.request.request) {
-    throw error;
-  }
-  if (error.status >= 400 && !state.doNotRetry.includes(error.status)) {
-    const retries = options.request.retries != null ? options.request.retries : state.retries;
-    const retryAfter = Math.pow((options.request.retryCount || 0) + 1, 2);
-    throw octokit.retry.retryRequest(error, retries, retryAfter);
-  }
-  throw error;
-}
-
-// pkg/dist-src/wrap-request.js
-
-
-async function wrapRequest(state, octokit, request, options) {
-  const limiter = new light();
-  limiter.on("failed", function(error, info) {
-    const maxRetries = ~~error.request.request?.retries;
-    const after = ~~error.request.request?.retryAfter;
-    options.request.retryCount = info.retryCount + 1;
-    if (maxRetries > info.retryCount) {
-      return after * state.retryAfterBaseValue;
-    }
-  });
-  return limiter.schedule(
-    requestWithGraphqlErrorHandling.bind(null, state, octokit, request),
-    options
-  );
-}
-async function requestWithGraphqlErrorHandling(state, octokit, request, options) {
-  const response = await request(options);
-  if (response.data && response.data.errors && response.data.errors.length > 0 && /Something went wrong while executing your query/.test(
-    response.data.errors[0].message
-  )) {
-    const error = new RequestError(response.data.errors[0].message, 500, {
-      request: options,
-      response
-    });
-    return errorRequest(state, octokit, error, options);
-  }
-  return response;
-}
-
-// pkg/dist-src/index.js
-function retry(octokit, octokitOptions) {
-  const state = Object.assign(
-    {
-      enabled: true,
-      retryAfterBaseValue: 1e3,
-      doNotRetry: [400, 401, 403, 404, 410, 422, 451],
-      retries: 3
-    },
-    octokitOptions.retry
-  );
-  const retryPlugin = {
-    retry: {
-      retryRequest: (error, retries, retryAfter) => {
-        error.request.request = Object.assign({}, error.request.request, {
-          retries,
-          retryAfter
-        });
-        return error;
-      }
-    }
-  };
-  if (state.enabled) {
-    octokit.hook.error("request", errorRequest.bind(null, state, retryPlugin));
-    octokit.hook.wrap("request", wrapRequest.bind(null, state, retryPlugin));
-  }
-  return retryPlugin;
-}
-retry.VERSION = plugin_retry_dist_bundle_VERSION;
-
-
-;// CONCATENATED MODULE: ./node_modules/@octokit/plugin-throttling/dist-bundle/index.js
-// pkg/dist-src/index.js
-
-
-// pkg/dist-src/version.js
-var plugin_throttling_dist_bundle_VERSION = "0.0.0-development";
-
-// pkg/dist-src/wrap-request.js
-var dist_bundle_noop = () => Promise.resolve();
-function dist_bundle_wrapRequest(state, request, options) {
-  return state.retryLimiter.schedule(doRequest, state, request, options);
-}
-async function doRequest(state, request, options) {
-  const { pathname } = new URL(options.url, "http://github.test");
-  const isAuth = isAuthRequest(options.method, pathname);
-  const isWrite = !isAuth && options.method !== "GET" && options.method !== "HEAD";
-  const isSearch = options.method === "GET" && pathname.startsWith("/search/");
-  const isGraphQL = pathname.startsWith("/graphql");
-  const retryCount = ~~request.retryCount;
-  const jobOptions = retryCount > 0 ? { priority: 0, weight: 0 } : {};
-  if (state.clustering) {
-    jobOptions.expiration = 1e3 * 60;
-  }
-  if (isWrite || isGraphQL) {
-    await state.write.key(state.id).schedule(jobOptions, dist_bundle_noop);
-  }
-  if (isWrite && state.triggersNotification(pathname)) {
-    await state.notifications.key(state.id).schedule(jobOptions, dist_bundle_noop);
-  }
-  if (isSearch) {
-    await state.search.key(state.id).schedule(jobOptions, dist_bundle_noop);
-  }
-  const req = (isAuth ? state.auth : state.global).key(state.id).schedule(jobOptions, request, options);
-  if (isGraphQL) {
-    const res = await req;
-    if (res.data.errors != null && res.data.errors.some((error) => error.type === "RATE_LIMITED")) {
-      const error = Object.assign(new Error("GraphQL Rate Limit Exceeded"), {
-        response: res,
-        data: res.data
-      });
-      throw error;
-    }
-  }
-  return req;
-}
-function isAuthRequest(method, pathname) {
-  return method === "PATCH" && // https://docs.github.com/en/rest/apps/apps?apiVersion=2022-11-28#create-a-scoped-access-token
-  /^\/applications\/[^/]+\/token\/scoped$/.test(pathname) || method === "POST" && // https://docs.github.com/en/rest/apps/oauth-applications?apiVersion=2022-11-28#reset-a-token
-  (/^\/applications\/[^/]+\/token$/.test(pathname) || // https://docs.github.com/en/rest/apps/apps?apiVersion=2022-11-28#create-an-installation-access-token-for-an-app
-  /^\/app\/installations\/[^/]+\/access_tokens$/.test(pathname) || // https://docs.github.com/en/apps/oauth-apps/building-oauth-apps/authorizing-oauth-apps
-  pathname === "/login/oauth/access_token");
-}
-
-// pkg/dist-src/generated/triggers-notification-paths.js
-var triggers_notification_paths_default = [
-  "/orgs/{org}/invitations",
-  "/orgs/{org}/invitations/{invitation_id}",
-  "/orgs/{org}/teams/{team_slug}/discussions",
-  "/orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments",
-  "/repos/{owner}/{repo}/collaborators/{username}",
-  "/repos/{owner}/{repo}/commits/{commit_sha}/comments",
-  "/repos/{owner}/{repo}/issues",
-  "/repos/{owner}/{repo}/issues/{issue_number}/comments",
-  "/repos/{owner}/{repo}/issues/{issue_number}/sub_issue",
-  "/repos/{owner}/{repo}/issues/{issue_number}/sub_issues/priority",
-  "/repos/{owner}/{repo}/pulls",
-  "/repos/{owner}/{repo}/pulls/{pull_number}/comments",
-  "/repos/{owner}/{repo}/pulls/{pull_number}/comments/{comment_id}/replies",
-  "/repos/{owner}/{repo}/pulls/{pull_number}/merge",
-  "/repos/{owner}/{repo}/pulls/{pull_number}/requested_reviewers",
-  "/repos/{owner}/{repo}/pulls/{pull_number}/reviews",
-  "/repos/{owner}/{repo}/releases",
-  "/teams/{team_id}/discussions",
-  "/teams/{team_id}/discussions/{discussion_number}/comments"
-];
-
-// pkg/dist-src/route-matcher.js
-function routeMatcher(paths) {
-  const regexes = paths.map(
-    (path) => path.split("/").map((c) => c.startsWith("{") ? "(?:.+?)" : c).join("/")
-  );
-  const regex2 = `^(?:${regexes.map((r) => `(?:${r})`).join("|")})[^/]*$`;
-  return new RegExp(regex2, "i");
-}
-
-// pkg/dist-src/index.js
-var regex = routeMatcher(triggers_notification_paths_default);
-var triggersNotification = regex.test.bind(regex);
-var groups = {};
-var createGroups = function(Bottleneck, common) {
-  groups.global = new Bottleneck.Group({
-    id: "octokit-global",
-    maxConcurrent: 10,
-    ...common
-  });
-  groups.auth = new Bottleneck.Group({
-    id: "octokit-auth",
-    maxConcurrent: 1,
-    ...common
-  });
-  groups.search = new Bottleneck.Group({
-    id: "octokit-search",
-    maxConcurrent: 1,
-    minTime: 2e3,
-    ...common
-  });
-  groups.write = new Bottleneck.Group({
-    id: "octokit-write",
-    maxConcurrent: 1,
-    minTime: 1e3,
-    ...common
-  });
-  groups.notifications = new Bottleneck.Group({
-    id: "octokit-notifications",
-    maxConcurrent: 1,
-    minTime: 3e3,
-    ...common
-  });
-};
-function throttling(octokit, octokitOptions) {
-  const {
-    enabled = true,
-    Bottleneck = light,
-    id = "no-id",
-    timeout = 1e3 * 60 * 2,
-    // Redis TTL: 2 minutes
-    connection
-  } = octokitOptions.throttle || {};
-  if (!enabled) {
-    return {};
-  }
-  const common = { timeout };
-  if (typeof connection !== "undefined") {
-    common.connection = connection;
-  }
-  const state = Object.assign(
-    {
-      clustering: connection != null,
-      triggersNotification,
-      fallbackSecondaryRateRetryAfter: 60,
-      retryAfterBaseValue: 1e3,
-      id
-    },
-    octokitOptions.throttle
-  );
-  if (typeof state.onSecondaryRateLimit !== "function" || typeof state.onRateLimit !== "function") {
-    throw new Error(`octokit/plugin-throttling error:
-        You must pass the onSecondaryRateLimit and onRateLimit error handlers.
-        See https://octokit.github.io/rest.js/#throttling
-
-        const octokit = new Octokit({
-          throttle: {
-            onSecondaryRateLimit: (retryAfter, options) => {/* ... */},
-            onRateLimit: (retryAfter, options) => {/* ... */}
-          }
-        })
-    `);
-  }
-  let initialized = false;
-  const initializeBottleneck = () => {
-    if (initialized) {
-      return;
-    }
-    initialized = true;
-    if (groups.global == null) {
-      createGroups(Bottleneck, common);
-    }
-    state.global = state.global ?? groups.global;
-    state.auth = state.auth ?? groups.auth;
-    state.search = state.search ?? groups.search;
-    state.write = state.write ?? groups.write;
-    state.notifications = state.notifications ?? groups.notifications;
-    state.retryLimiter = state.retryLimiter ?? new Bottleneck();
-    const events = {};
-    const emitter = new Bottleneck.Events(events);
-    events.on("secondary-limit", state.onSecondaryRateLimit);
-    events.on("rate-limit", state.onRateLimit);
-    events.on(
-      "error",
-      (e) => octokit.log.warn("Error in throttling-plugin limit handler", e)
-    );
-    state.retryLimiter.on("failed", async function(error, info) {
-      const [state2, request, options] = info.args;
-      const { pathname } = new URL(options.url, "http://github.test");
-      const shouldRetryGraphQL = pathname.startsWith("/graphql") && error.status !== 401;
-      if (!(shouldRetryGraphQL || error.status === 403 || error.status === 429)) {
-        return;
-      }
-      const retryCount = ~~request.retryCount;
-      request.retryCount = retryCount;
-      options.request.retryCount = retryCount;
-      const { wantRetry, retryAfter = 0 } = await (async function() {
-        if (/\bsecondary rate\b/i.test(error.message)) {
-          const retryAfter2 = Number(error.response.headers["retry-after"]) || state2.fallbackSecondaryRateRetryAfter;
-          const wantRetry2 = await emitter.trigger(
-            "secondary-limit",
-            retryAfter2,
-            options,
-            octokit,
-            retryCount
-          );
-          return { wantRetry: wantRetry2, retryAfter: retryAfter2 };
-        }
-        if (error.response.headers != null && error.response.headers["x-ratelimit-remaining"] === "0" || (error.response.data?.errors ?? []).some(
-          (error2) => error2.type === "RATE_LIMITED"
-        )) {
-          const rateLimitReset = new Date(
-            ~~error.response.headers["x-ratelimit-reset"] * 1e3
-          ).getTime();
-          const retryAfter2 = Math.max(
-            // Add one second so we retry _after_ the reset time
-            // https://docs.github.com/en/rest/overview/resources-in-the-rest-api?apiVersion=2022-11-28#exceeding-the-rate-limit
-            Math.ceil((rateLimitReset - Date.now()) / 1e3) + 1,
-            0
-          );
-          const wantRetry2 = await emitter.trigger(
-            "rate-limit",
-            retryAfter2,
-            options,
-            octokit,
-            retryCount
-          );
-          return { wantRetry: wantRetry2, retryAfter: retryAfter2 };
-        }
-        return {};
-      })();
-      if (wantRetry) {
-        request.retryCount++;
-        return retryAfter * state2.retryAfterBaseValue;
-      }
-    });
-  };
-  octokit.hook.wrap("request", (request, options) => {
-    initializeBottleneck();
-    return dist_bundle_wrapRequest(state, request, options);
-  });
-  return {};
-}
-throttling.VERSION = plugin_throttling_dist_bundle_VERSION;
-throttling.triggersNotification = triggersNotification;
-
-
 ;// CONCATENATED MODULE: ./src/github/octokit.ts
 /**
- * The REST client: `@actions/github` with the retry plugin (5xx and other transient failures,
- * growing delays) and the throttling plugin (primary and secondary rate limits).
+ * The REST client: `@actions/github` with our own request policy in place of generic retry
+ * plugins, because the policy must know things they do not:
+ *
+ * - every attempt has its own timeout, and the whole comment step a budget (one AbortSignal);
+ * - a create (POST) is never repeated here: it may have happened although its answer was an
+ *   error, so only the caller, after listing again, may send it again;
+ * - a rate limit waits as long as GitHub asks (`Retry-After` on 429 as on 403), within limits;
+ * - every failure leaves as an ApiFailure naming its real cause.
  */
 
 
-
-/** Status codes a retry cannot fix. 403 is left to the throttling plugin, which retries only rate limits. */
-const DO_NOT_RETRY = [400, 401, 403, 404, 410, 422, 451];
+/** Attempts for a request that may be repeated (GET, PATCH) after a server error, timeout or lost connection. */
+const MAX_ATTEMPTS = 4;
 /** Retries after a rate limit; a CI step should not wait longer than this for one comment. */
 const MAX_LIMIT_RETRIES = 2;
 const MAX_WAIT_SECONDS = 120;
+/** GitHub's documented advice when a secondary limit comes without Retry-After: wait at least a minute. */
+const SECONDARY_FALLBACK_SECONDS = 60;
+/** Methods whose repetition cannot do more than the first try (PATCH here always sends the same body). */
+const REPEATABLE = new Set(['GET', 'HEAD', 'PATCH', 'PUT', 'DELETE']);
 function makeClient(o) {
-    const onLimit = (kind) => (retryAfter, options, _octokit, retryCount) => {
-        const what = `${options.method ?? ''} ${options.url ?? ''}`.trim();
-        if (retryCount < MAX_LIMIT_RETRIES && retryAfter <= MAX_WAIT_SECONDS) {
-            o.warn(`GitHub ${kind} rate limit on ${what}; retrying in ${retryAfter} s (attempt ${retryCount + 2})`);
-            return true;
+    const octokit = getOctokit(o.token, { baseUrl: o.baseUrl });
+    octokit.hook.wrap('request', async (request, options) => {
+        const parsed = octokit.request.endpoint.parse(options);
+        const what = `${parsed.method} ${new URL(parsed.url).pathname}`;
+        let attempts = 0;
+        let limitRetries = 0;
+        for (;;) {
+            if (o.budget.signal.aborted)
+                throw new ApiFailure('budget', what, null, 'waiting to send a request', attempts);
+            attempts++;
+            const timeout = AbortSignal.timeout(o.requestTimeoutMs);
+            const signal = AbortSignal.any([timeout, o.budget.signal]);
+            let why;
+            // In place, not a copy: the layers below were bound to this very object, and a request
+            // called with a new one would silently drop it (before-after-hook binds the options).
+            options.request = { ...options.request, signal };
+            try {
+                return await request(options);
+            }
+            catch (e) {
+                why = classify(e, o, timeout);
+            }
+            const fail = (gaveUp = '') => new ApiFailure(why.kind, what, why.status, why.detail, attempts, why.note, gaveUp);
+            if (why.kind === 'rate-limit') {
+                const seconds = why.waitSeconds;
+                const ms = seconds * o.retryBaseMs;
+                if (limitRetries >= MAX_LIMIT_RETRIES)
+                    throw fail(`still limited after ${attempts} attempts`);
+                if (seconds > MAX_WAIT_SECONDS)
+                    throw fail(`GitHub asked to wait ${seconds} s, too long for a CI step`);
+                if (Date.now() + ms >= o.budget.endsAt)
+                    throw fail(`GitHub asked to wait ${seconds} s, more than the comment step has left`);
+                limitRetries++;
+                o.log(`GitHub ${why.note} on ${what}; waiting ${seconds} s as GitHub asked, then attempt ${attempts + 1}`);
+                await pause(ms, o.budget.signal, what, attempts, `waiting ${seconds} s as GitHub asked`);
+                continue;
+            }
+            const transient = why.kind === 'server-error' || why.kind === 'timeout' || why.kind === 'no-response';
+            if (!transient || !REPEATABLE.has(parsed.method) || attempts >= MAX_ATTEMPTS)
+                throw fail();
+            const delay = attempts * attempts;
+            o.log(`${describeBriefly(why)} on ${what}; retrying in ${delay} s (attempt ${attempts + 1} of ${MAX_ATTEMPTS})`);
+            await pause(delay * o.retryBaseMs, o.budget.signal, what, attempts, 'waiting to retry');
         }
-        o.warn(`GitHub ${kind} rate limit on ${what}; giving up after ${retryCount + 1} attempts`);
-        return false;
-    };
-    return getOctokit(o.token, {
-        baseUrl: o.baseUrl,
-        retry: { doNotRetry: DO_NOT_RETRY, retries: 3, retryAfterBaseValue: o.retryBaseMs },
-        throttle: {
-            retryAfterBaseValue: o.retryBaseMs,
-            onRateLimit: onLimit('primary'),
-            onSecondaryRateLimit: onLimit('secondary'),
-        },
-    }, retry, throttling);
+    });
+    return octokit;
 }
-/** Reads the test-only delay unit; anything unusable falls back to the plugins' default. */
+function classify(e, o, timeout) {
+    const base = { note: '', waitSeconds: 0 };
+    if (o.budget.signal.aborted)
+        return { ...base, kind: 'budget', status: null, detail: 'waiting for an answer' };
+    if (timeout.aborted)
+        return { ...base, kind: 'timeout', status: null, detail: `${seconds(o.requestTimeoutMs)} s per request` };
+    const err = (typeof e === 'object' && e !== null ? e : {});
+    if (typeof err.status !== 'number')
+        throw e; // not an HTTP failure: a bug, not GitHub's doing
+    const response = err.response;
+    const detail = octokit_clip(messageOf(response?.data) ?? (typeof err.message === 'string' ? err.message : 'no message'));
+    // A RequestError without a response: the request never got an answer (the library files it as 500).
+    if (!response)
+        return { ...base, kind: 'no-response', status: null, detail };
+    const status = err.status;
+    const headers = response.headers ?? {};
+    if (status === 429) {
+        return { kind: 'rate-limit', status, detail, note: 'rate limit (429)', waitSeconds: waitFrom(headers, 60) };
+    }
+    if (status === 403 && /\bsecondary rate limit/i.test(detail)) {
+        return {
+            kind: 'rate-limit',
+            status,
+            detail,
+            note: 'secondary rate limit',
+            waitSeconds: waitFrom(headers, SECONDARY_FALLBACK_SECONDS),
+        };
+    }
+    if (status === 403 && headers['x-ratelimit-remaining'] === '0') {
+        return { kind: 'rate-limit', status, detail, note: 'primary rate limit', waitSeconds: waitFrom(headers, 60) };
+    }
+    if (status === 403)
+        return { ...base, kind: 'permission', status, detail };
+    if (status === 401)
+        return { ...base, kind: 'auth', status, detail };
+    if (status >= 500)
+        return { ...base, kind: 'server-error', status, detail };
+    return { ...base, kind: 'refused', status, detail };
+}
+/** Seconds to wait: Retry-After (seconds or an HTTP date), else the limit's reset time, else `fallback`. */
+function waitFrom(headers, fallback) {
+    const after = headers['retry-after']?.trim();
+    if (after) {
+        if (/^\d+$/.test(after))
+            return Number(after);
+        const at = Date.parse(after);
+        if (!Number.isNaN(at))
+            return Math.max(0, Math.ceil((at - Date.now()) / 1000));
+    }
+    const reset = Number(headers['x-ratelimit-reset']);
+    // One second past the reset, so the retry lands after it.
+    if (Number.isFinite(reset) && reset > 0)
+        return Math.max(0, Math.ceil(reset - Date.now() / 1000) + 1);
+    return fallback;
+}
+function messageOf(data) {
+    if (typeof data === 'object' && data !== null && typeof data.message === 'string')
+        return data.message;
+    return typeof data === 'string' && data.trim() !== '' ? data : null;
+}
+/** GitHub's texts end up in warnings; a long HTML error page must not. */
+function octokit_clip(s, max = 200) {
+    const one = s.replace(/\s+/g, ' ').trim();
+    return one.length > max ? `${one.slice(0, max - 1)}…` : one;
+}
+function seconds(ms) {
+    return String(Math.round(ms / 100) / 10);
+}
+function describeBriefly(c) {
+    if (c.kind === 'server-error')
+        return `GitHub answered ${c.status}`;
+    if (c.kind === 'timeout')
+        return `No answer within ${c.detail}`;
+    return `No response (${c.detail})`;
+}
+/** Sleeps `ms`; the budget's end cuts it short with a budget failure. */
+function pause(ms, signal, what, attempts, doing) {
+    return new Promise((resolve, reject) => {
+        const stop = () => {
+            clearTimeout(timer);
+            reject(new ApiFailure('budget', what, null, doing, attempts));
+        };
+        const timer = setTimeout(() => {
+            signal.removeEventListener('abort', stop);
+            resolve();
+        }, ms);
+        if (signal.aborted)
+            stop();
+        else
+            signal.addEventListener('abort', stop, { once: true });
+    });
+}
+/** Reads a test-only number of milliseconds from the environment; anything unusable gives `fallback`. */
+function msFromEnv(env, name, fallback, max) {
+    const raw = env[name];
+    const v = raw === undefined || raw.trim() === '' ? NaN : Number(raw);
+    return Number.isFinite(v) && v >= 0 && v <= max ? v : fallback;
+}
+/** Unit of the back-off delays (NEURON_BUDGET_RETRY_BASE_MS, tests only); default 1000. */
 function retryBaseFromEnv(env) {
-    const v = Number(env['NEURON_BUDGET_RETRY_BASE_MS']);
-    return Number.isFinite(v) && v >= 0 && v <= 60_000 ? v : 1000;
+    return msFromEnv(env, 'NEURON_BUDGET_RETRY_BASE_MS', 1000, 60_000);
+}
+/** Per-request timeout (NEURON_BUDGET_REQUEST_TIMEOUT_MS, tests only); default 30 s. */
+function requestTimeoutFromEnv(env) {
+    return Math.max(1, msFromEnv(env, 'NEURON_BUDGET_REQUEST_TIMEOUT_MS', 30_000, 600_000));
+}
+/** The comment step's whole budget (NEURON_BUDGET_COMMENT_BUDGET_MS, tests only); default 2 minutes. */
+function commentBudgetFromEnv(env) {
+    return Math.max(1, msFromEnv(env, 'NEURON_BUDGET_COMMENT_BUDGET_MS', 120_000, 3_600_000));
 }
 
 ;// CONCATENATED MODULE: ./src/report/progress.ts
@@ -45921,6 +45738,8 @@ function logUntrusted(text) {
 
 
 
+
+
 /** Verdicts that fail the step; the rest pass it. */
 const FAILING = new Set(['fail', 'inconclusive']);
 function runUrl() {
@@ -45934,7 +45753,7 @@ async function writeSummary(markdown) {
         await summary.addRaw(fitSummary(markdown), true).write();
     }
     catch (e) {
-        warning(`Could not write the job summary: ${e.message}`);
+        warning(`Could not write the job summary: ${escapeText(e.message)}`);
     }
 }
 /** Beside the report, for workflows that relay the comment themselves (pull requests from forks). */
@@ -45960,7 +45779,7 @@ function forbiddenAdvice() {
     return isForkPullRequest()
         ? 'This pull request comes from a fork, and GitHub gives workflows started by fork pull requests a read-only token, so no comment can be posted from this job. ' +
             'To get comments on fork pull requests, use the two-workflow setup in the neuron-budget README ("Pull requests from forks").'
-        : 'The token lacks write access to pull requests. Add `permissions: { contents: read, pull-requests: write }` to the job, or pass a token that has it as `github-token`.';
+        : 'The token may not write to pull requests. Add `permissions: { contents: read, pull-requests: write }` to the job, or pass a token that has it as `github-token`.';
 }
 /**
  * Posts or updates the sticky comment. Never throws: a comment is a convenience, and the
@@ -45999,23 +45818,28 @@ async function postComment(inputs, markdown) {
         warning('GITHUB_REPOSITORY is not set, so no pull-request comment was posted.');
         return;
     }
+    const budgetMs = commentBudgetFromEnv(process.env);
+    const budget = { signal: AbortSignal.timeout(budgetMs), endsAt: Date.now() + budgetMs };
     const octokit = makeClient({
         token: inputs.token,
         baseUrl: process.env['GITHUB_API_URL'] || 'https://api.github.com',
         retryBaseMs: retryBaseFromEnv(process.env),
-        warn: (m) => info(m),
+        requestTimeoutMs: requestTimeoutFromEnv(process.env),
+        budget,
+        log: (m) => info(escapeText(m, MAX_MESSAGE)),
     });
     const marker = commentMarker(inputs.configKey);
     try {
-        const done = await upsertComment(octokit, { owner, repo, issueNumber }, marker, commentBody(marker, markdown, runUrl()));
-        info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${done.url}` : ''}`);
+        const identity = await tokenIdentity(octokit);
+        info(`Looking for an earlier neuron-budget comment by ${escapeText(identity.login)} (${identity.how}).`);
+        const done = await upsertComment(octokit, { owner, repo, issueNumber }, marker, commentBody(marker, markdown, runUrl()), identity, (m) => info(escapeText(m, MAX_MESSAGE)));
+        info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${escapeText(done.url)}` : ''}`);
     }
     catch (e) {
-        const status = e.status;
-        const message = e.message ?? String(e);
-        const advice = status === 403 ? ` ${forbiddenAdvice()}` : '';
-        warning(`Could not post the pull-request comment: GitHub answered ${status ?? 'with an error'} (${message}).${advice} ` +
-            'The verdict, job summary and outputs are unaffected.');
+        const why = isApiFailure(e)
+            ? describeFailure(e, forbiddenAdvice(), Math.round(budgetMs / 100) / 10)
+            : `It failed with an unexpected error: ${e.message ?? String(e)}.`;
+        warning(escapeText(`Could not post the pull-request comment. ${why} The verdict, job summary and outputs are unaffected.`, MAX_MESSAGE));
     }
 }
 function setOutputs(result, reportPath) {
@@ -46134,8 +45958,8 @@ async function run() {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7432);
-/* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(3665);
+/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(606);
+/* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9324);
 /**
  * Entry of the action bundle (dist/index.js). The same bundle is also the entry of the search's
  * worker threads, since the bundler does not follow `new Worker(path)`.
@@ -46155,205 +45979,21 @@ __webpack_async_result__();
 
 /***/ }),
 
-/***/ 7340:
+/***/ 6575:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
   K$: () => (/* reexport */ createTrainer),
+  Oc: () => (/* reexport */ metricOn),
   Y$: () => (/* reexport */ trainerFromNetwork)
 });
 
-// UNUSED EXPORTS: FLAT_SPOT_OFFSET, headFor, predict
+// UNUSED EXPORTS: headFor, predict
 
-;// CONCATENATED MODULE: ./src/nn/kernel/constants.ts
-/**
- * The numbers both kernels must share to give the same bits: the constants of the elementary
- * functions (detmath.ts), the gradient block size and the activation and head codes. This file is
- * the one source: scripts/build-kernel.mjs writes them into kernel.as (between its "generated
- * constants" markers) and `build-kernel.mjs --check` fails when kernel.as or its bytes disagree.
- * Plain numeric literals only, so the script can read them without a TypeScript compiler.
- */
-/** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
-const LN2_HI = 6.9314718036912381649e-1;
-const LN2_LO = 1.90821492927058770002e-10;
-const INV_LN2 = 1.442695040888963387;
-/** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
-const C2 = 0.5;
-const C3 = 0.16666666666666666;
-const C4 = 0.041666666666666664;
-const C5 = 0.008333333333333333;
-const C6 = 0.001388888888888889;
-const C7 = 0.0001984126984126984;
-const C8 = 0.0000248015873015873;
-const C9 = 0.0000027557319223985893;
-const C10 = 2.755731922398589e-7;
-const C11 = 2.505210838544172e-8;
-const C12 = 2.08767569878681e-9;
-const C13 = 1.6059043836821613e-10;
-/** |x| beyond this has tanh(x) === ±1 in double precision. */
-const TANH_CLAMP = 22;
-/** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
-const ROUND_MAGIC = 6755399441055744;
-const SQRT2 = 1.4142135623730951;
-/**
- * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
- * the products of a block's rows are added in row order starting from +0, and that block sum is
- * then added to the running gradient, in both kernels.
- */
-const GRAD_BLOCK_ROWS = 32;
-const ACT_TANH = 0;
-const ACT_LOGISTIC = 1;
-const ACT_RELU = 2;
-const constants_HEAD_LINEAR = 0;
-const constants_HEAD_LOGISTIC = 1;
-const HEAD_SOFTMAX = 2;
-
-;// CONCATENATED MODULE: ./src/nn/kernel/detmath.ts
-/**
- * Elementary functions whose results we control. ECMAScript leaves Math.exp, Math.tanh and
- * Math.log implementation-approximated, so their last bits may change between Node versions;
- * these use only +, -, *, / and exact bit operations, which IEEE 754 fixes, so every engine
- * gives the same bits. The WebAssembly kernel evaluates tanh with the very same sequence of
- * operations and constants, so both paths agree bit for bit.
- *
- * Accuracy against Math.*: a few units in the last place (test/nn/detmath.test.ts states the bound).
- */
-
-const f64 = new Float64Array(1);
-const u32 = new Uint32Array(f64.buffer);
-const HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0; // little-endian: high word at index 1
-/** 2^k for integer k in [-1022, 1023], built from its bits. */
-function pow2(k) {
-    u32[1 - HI] = 0;
-    u32[HI] = (k + 1023) << 20;
-    return f64[0];
-}
-/** expm1(r) for |r| <= ~0.35 by Horner's rule. */
-function expm1Poly(r) {
-    let q = C12 + r * C13;
-    q = C11 + r * q;
-    q = C10 + r * q;
-    q = C9 + r * q;
-    q = C8 + r * q;
-    q = C7 + r * q;
-    q = C6 + r * q;
-    q = C5 + r * q;
-    q = C4 + r * q;
-    q = C3 + r * q;
-    q = C2 + r * q;
-    q = 1 + r * q;
-    return r * q;
-}
-/**
- * The same polynomial by Estrin's scheme: more operations run side by side, which is what the
- * SIMD kernel needs for speed (tanh uses this form in both paths).
- */
-function expm1PolyEstrin(r) {
-    const r2 = r * r;
-    const r4 = r2 * r2;
-    const r8 = r4 * r4;
-    const b0 = 1 + C2 * r + (C3 + C4 * r) * r2;
-    const b1 = C5 + C6 * r + (C7 + C8 * r) * r2;
-    const b2 = C9 + C10 * r + (C11 + C12 * r) * r2;
-    const c0 = b0 + b1 * r4;
-    const c1 = b2 + C13 * r4;
-    return r * (c0 + c1 * r8);
-}
-/** e^x. */
-function detmath_detExp(x) {
-    if (x !== x)
-        return x;
-    if (x > 709.782712893384)
-        return Infinity;
-    if (x < -745.1332191019412)
-        return 0;
-    const k = Math.floor(x * INV_LN2 + 0.5);
-    const r = x - k * LN2_HI - k * LN2_LO;
-    const m = 1 + expm1Poly(r);
-    if (k > 1023)
-        return m * pow2(1023) * pow2(k - 1023);
-    if (k < -1022)
-        return m * pow2(k + 1000) * pow2(-1000);
-    return m * pow2(k);
-}
-/** Powers of two 2^0..2^64 for the tanh reduction (k never leaves that range). */
-const POW2_TANH = new Float64Array(65);
-for (let k = 0; k <= 64; k++)
-    POW2_TANH[k] = pow2(k);
-/**
- * tanh(x) = expm1(2|x|) / (expm1(2|x|) + 2) with the sign of x. Branch-free apart from the
- * clamp, so the SIMD kernel can evaluate the same operations lane by lane.
- */
-function detTanh(x) {
-    const ax = Math.min(x < 0 ? -x : x, TANH_CLAMP);
-    const y = ax + ax;
-    // Round y/ln2 to the nearest whole number (ties to even) by adding and removing 1.5·2^52.
-    const k = y * INV_LN2 + ROUND_MAGIC - ROUND_MAGIC;
-    const r = y - k * LN2_HI - k * LN2_LO;
-    const p = expm1PolyEstrin(r);
-    const s = POW2_TANH[k];
-    const em = s * p + (s - 1);
-    const t = em / (em + 2);
-    return x < 0 ? -t : t;
-}
-/** Logistic function through tanh, so it inherits tanh's determinism: 1/(1+e^-x) = (1 + tanh(x/2))/2. */
-function detmath_detLogistic(x) {
-    return 0.5 + 0.5 * detTanh(0.5 * x);
-}
-/** Natural logarithm. */
-function detLog(x) {
-    if (x !== x || x < 0)
-        return NaN;
-    if (x === 0)
-        return -Infinity;
-    if (x === Infinity)
-        return Infinity;
-    let e = 0;
-    if (x < 2.2250738585072014e-308) {
-        x *= 18014398509481984; // 2^54: lift subnormals into the normal range
-        e = -54;
-    }
-    f64[0] = x;
-    const hi = u32[HI];
-    e += ((hi >>> 20) & 0x7ff) - 1023;
-    u32[HI] = (hi & 0x000fffff) | 0x3ff00000; // mantissa in [1, 2)
-    let m = f64[0];
-    if (m > SQRT2) {
-        m *= 0.5;
-        e += 1;
-    }
-    const f = m - 1;
-    const s = f / (2 + f);
-    const s2 = s * s;
-    // 2 atanh(s) = 2 (s + s^3/3 + ... + s^23/23); |s| <= 0.1716 so the tail is below 1e-18.
-    let q = 1 / 21 + s2 * (1 / 23);
-    q = 1 / 19 + s2 * q;
-    q = 1 / 17 + s2 * q;
-    q = 1 / 15 + s2 * q;
-    q = 1 / 13 + s2 * q;
-    q = 1 / 11 + s2 * q;
-    q = 1 / 9 + s2 * q;
-    q = 1 / 7 + s2 * q;
-    q = 1 / 5 + s2 * q;
-    q = 1 / 3 + s2 * q;
-    const series = s2 * q;
-    const logm = 2 * s + 2 * s * series;
-    return e * LN2_HI + (logm + e * LN2_LO);
-}
-/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. @testOnly */
-function detLog1p(u) {
-    const w = 1 + u;
-    if (w === 1)
-        return u;
-    return detLog(w) + (u - (w - 1)) / w;
-}
-/** log(1 + e^z) without overflow. */
-function detSoftplus(z) {
-    return (z > 0 ? z : 0) + detLog1p(detmath_detExp(z > 0 ? -z : z));
-}
-
+// EXTERNAL MODULE: ./src/common/metric.ts
+var common_metric = __nccwpck_require__(8457);
 ;// CONCATENATED MODULE: ./src/nn/kernel/layout.ts
 function layoutOf(s) {
     const w1 = 0;
@@ -46363,22 +46003,26 @@ function layoutOf(s) {
     return { w1, b1, w2, b2, size: b2 + s.outputs };
 }
 
+// EXTERNAL MODULE: ./src/nn/kernel/detmath.ts
+var detmath = __nccwpck_require__(415);
+// EXTERNAL MODULE: ./src/nn/kernel/constants.ts
+var constants = __nccwpck_require__(6137);
 ;// CONCATENATED MODULE: ./src/nn/kernel/reference.ts
 
 
 
 
 function activationCode(a) {
-    return a === 'tanh' ? ACT_TANH : a === 'logistic' ? ACT_LOGISTIC : ACT_RELU;
+    return a === 'tanh' ? constants/* ACT_TANH */.Js : a === 'logistic' ? constants/* ACT_LOGISTIC */.UE : constants/* ACT_RELU */.Yw;
 }
 function reference_headCode(h) {
-    return h === 'linear' ? constants_HEAD_LINEAR : h === 'logistic' ? constants_HEAD_LOGISTIC : HEAD_SOFTMAX;
+    return h === 'linear' ? constants/* HEAD_LINEAR */.hK : h === 'logistic' ? constants/* HEAD_LOGISTIC */.U6 : constants/* HEAD_SOFTMAX */.Wj;
 }
 function reference_makeScratch(width, outputs) {
     return {
         a: new Float64Array(width),
         h: new Float64Array(width),
-        dh: new Float64Array(GRAD_BLOCK_ROWS * width),
+        dh: new Float64Array(constants/* GRAD_BLOCK_ROWS */.Zw * width),
         acc: new Float64Array(width),
         z: new Float64Array(outputs),
         dz: new Float64Array(outputs),
@@ -46395,12 +46039,12 @@ function hiddenRow(act, D, H, params, b1, x, p, a, h) {
         for (let j = 0; j < H; j++)
             a[j] += xi * params[wo + j];
     }
-    if (act === ACT_TANH)
+    if (act === constants/* ACT_TANH */.Js)
         for (let j = 0; j < H; j++)
-            h[j] = detTanh(a[j]);
-    else if (act === ACT_LOGISTIC)
+            h[j] = (0,detmath/* detTanh */.hL)(a[j]);
+    else if (act === constants/* ACT_LOGISTIC */.UE)
         for (let j = 0; j < H; j++)
-            h[j] = detmath_detLogistic(a[j]);
+            h[j] = (0,detmath/* detLogistic */.U1)(a[j]);
     else
         for (let j = 0; j < H; j++)
             h[j] = a[j] > 0 ? a[j] : 0;
@@ -46420,14 +46064,14 @@ function outputRow(H, K, params, w2, b2, h, z) {
  * (classification) or the standardised target (regression).
  */
 function headLossAndDelta(head, K, z, t, dz) {
-    if (head === constants_HEAD_LINEAR) {
+    if (head === constants/* HEAD_LINEAR */.hK) {
         const d = z[0] - t;
         dz[0] = d;
         return 0.5 * d * d;
     }
-    if (head === constants_HEAD_LOGISTIC) {
-        dz[0] = detmath_detLogistic(z[0]) - t;
-        return detSoftplus(z[0]) - t * z[0];
+    if (head === constants/* HEAD_LOGISTIC */.U6) {
+        dz[0] = (0,detmath/* detLogistic */.U1)(z[0]) - t;
+        return (0,detmath/* detSoftplus */.cY)(z[0]) - t * z[0];
     }
     let m = z[0];
     for (let k = 1; k < K; k++)
@@ -46435,7 +46079,7 @@ function headLossAndDelta(head, K, z, t, dz) {
             m = z[k];
     let s = 0;
     for (let k = 0; k < K; k++) {
-        const e = detmath_detExp(z[k] - m);
+        const e = (0,detmath/* detExp */.Xv)(z[k] - m);
         dz[k] = e;
         s += e;
     }
@@ -46443,7 +46087,7 @@ function headLossAndDelta(head, K, z, t, dz) {
     for (let k = 0; k < K; k++)
         dz[k] *= inv;
     dz[t] -= 1;
-    return detLog(s) - (z[t] - m);
+    return (0,detmath/* detLog */.Ep)(s) - (z[t] - m);
 }
 /** Head outputs (probabilities or standardised values) from logits. */
 function reference_headOutputs(head, K, z, zo, out, oo) {
@@ -46474,7 +46118,7 @@ function reference_headOutputs(head, K, z, zo, out, oo) {
  * Sum over rows [start, end) of the per-row loss; the summed gradient goes into `grad`
  * (overwritten). No allocation.
  */
-function referenceLossAndGradient(shape, params, x, y, start, end, grad, s, primeOffset = 0) {
+function referenceLossAndGradient(shape, params, x, y, start, end, grad, s) {
     const D = shape.inputs;
     const H = shape.width;
     const K = shape.outputs;
@@ -46485,7 +46129,7 @@ function referenceLossAndGradient(shape, params, x, y, start, end, grad, s, prim
     grad.fill(0);
     let loss = 0;
     for (let p = start; p < end; p++) {
-        const q = (p - start) % GRAD_BLOCK_ROWS; // this row's place in its gradient block
+        const q = (p - start) % constants/* GRAD_BLOCK_ROWS */.Zw; // this row's place in its gradient block
         const qo = q * H;
         hiddenRow(act, D, H, params, lay.b1, x, p, a, h);
         outputRow(H, K, params, lay.w2, lay.b2, h, z);
@@ -46500,18 +46144,12 @@ function referenceLossAndGradient(shape, params, x, y, start, end, grad, s, prim
                 grad[wo + k] += hj * dz[k];
                 sum += params[wo + k] * dz[k];
             }
-            const fp = act === ACT_TANH
-                ? 1 - hj * hj + primeOffset
-                : act === ACT_LOGISTIC
-                    ? hj * (1 - hj) + primeOffset
-                    : a[j] > 0
-                        ? 1
-                        : 0;
+            const fp = act === constants/* ACT_TANH */.Js ? 1 - hj * hj : act === constants/* ACT_LOGISTIC */.UE ? hj * (1 - hj) : a[j] > 0 ? 1 : 0;
             dh[qo + j] = sum * fp;
         }
         for (let j = 0; j < H; j++)
             grad[lay.b1 + j] += dh[qo + j];
-        if (q === GRAD_BLOCK_ROWS - 1 || p === end - 1)
+        if (q === constants/* GRAD_BLOCK_ROWS */.Zw - 1 || p === end - 1)
             addInputGradient(D, H, x, p - q, q + 1, dh, acc, grad);
     }
     return loss;
@@ -46553,20 +46191,20 @@ function reference_referenceForward(shape, params, x, rows, logits, hidden, s) {
 }
 /** Per-row loss from logits (no gradient). */
 function rowLoss(head, K, z, zo, t) {
-    if (head === constants_HEAD_LINEAR) {
+    if (head === constants/* HEAD_LINEAR */.hK) {
         const d = z[zo] - t;
         return 0.5 * d * d;
     }
-    if (head === constants_HEAD_LOGISTIC)
-        return detSoftplus(z[zo]) - t * z[zo];
+    if (head === constants/* HEAD_LOGISTIC */.U6)
+        return (0,detmath/* detSoftplus */.cY)(z[zo]) - t * z[zo];
     let m = z[zo];
     for (let k = 1; k < K; k++)
         if (z[zo + k] > m)
             m = z[zo + k];
     let s = 0;
     for (let k = 0; k < K; k++)
-        s += detmath_detExp(z[zo + k] - m);
-    return detLog(s) - (z[zo + t] - m);
+        s += (0,detmath/* detExp */.Xv)(z[zo + k] - m);
+    return (0,detmath/* detLog */.Ep)(s) - (z[zo + t] - m);
 }
 
 ;// CONCATENATED MODULE: ./src/nn/kernel/kernel.ts
@@ -46585,8 +46223,8 @@ function referenceKernel() {
     };
     return {
         name: 'reference-f64',
-        lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0) {
-            return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape), primeOffset);
+        lossAndGradient(shape, params, x, y, start, end, grad) {
+            return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape));
         },
         forward(shape, params, x, rows, logits, hidden) {
             reference_referenceForward(shape, params, x, rows, logits, hidden, sized(shape));
@@ -46598,359 +46236,357 @@ function referenceKernel() {
 var external_node_crypto_ = __nccwpck_require__(7598);
 ;// CONCATENATED MODULE: ./src/nn/kernel/kernel-bytes.ts
 // Generated by scripts/build-kernel.mjs from kernel.as; do not edit.
-// 26261 bytes, sha256 959f4fe35dd125349b485cc52d95df3dcc03a007f35d02a8bc673ac3e4733362
-const KERNEL_SHA256 = '959f4fe35dd125349b485cc52d95df3dcc03a007f35d02a8bc673ac3e4733362';
-const KERNEL_BASE64 = 'AGFzbQEAAAABTwpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AYAJ/fAF8YAN/f38Bf2ANf39/f39/f39/f39/fAF8YAAB' +
-    'f2AKf39/f39/f39/fwADDw4DAQACBAAFAgYHCAkAAQUDAQABBmcTfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC3wBRAAAAAAAAAAA' +
-    'C38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALBzYFCXdvcmtC' +
-    'eXRlcwAICGxvc3NHcmFkAAkHZm9yd2FyZAALCGhlYXBCYXNlAAoGbWVtb3J5AgAKgcsBDqkEACAAJAQgASQGIAIkACADJAEgBCQC' +
-    'IANBAWpBfnEkAyAGQQ9qQXBxIgAkByMDIwBBA3RsIgEgAGoiACQKIAAgAWoiACQIIwNBA3QiASAAaiIAJAsgACABaiIAJAkjAyMC' +
-    'QQN0bCIBIABqIgAkDCAAIAFqIgAkDiMDQQV0IgEgAGoiACQPIAAjA0EIdGoiACQQIwJBBXQiAiAAaiIAJBEgACACaiIAJBIgACAB' +
-    'aiQNQQAhAANAIAAjAEgEQEEAIQEDQCABIwFIBEAjByABQXxxIgIjAGxBBEECIwMgAkEEak4bIABsaiABIAJrakEDdGogBSAAIwFs' +
-    'IAFqQQN0aisDADkDACABQQFqIQEMAQsLIwMjAUoEQCMHIwEiAUF8cSICIwBsQQRBAiMDIAJBBGpOGyAAbGogASACa2pBA3RqRAAA' +
-    'AAAAAAAAOQMACyAAQQFqIQAMAQsLIAUjASMAQQN0bGoiASMBQQN0aiECQQAhAANAIAAjAUgEQCAAQQN0IgMjCGogASADaisDADkD' +
-    'ACAAQQFqIQAMAQsLIwMjAUoEQCMIIwFBA3RqRAAAAAAAAAAAOQMAC0EAIQADQCAAIwJIBEBBACEBA0AgASMBSARAIwkgACMDbCAB' +
-    'akEDdGogAiABIwJsIABqQQN0aisDADkDACABQQFqIQEMAQsLIwMjAUoEQCMJIwEgACMDbGpBA3RqRAAAAAAAAAAAOQMACyAAQQFq' +
-    'IQAMAQsLC7kDAgZ/BHsjA0EDdCEDA0AgAiMDSARAIAJBA3QiBSMOav0ABAAhCSMOIANBAXRqIAVq/QAEACEKIw4gA0EDbGogBWr9' +
-    'AAQAIQsjEiACQQV0aiIGIAkjDiADaiAFav0ABAAiCP0NAAECAwQFBgcQERITFBUWF/0LBAAgBiAKIAv9DQABAgMEBQYHEBESExQV' +
-    'Fhf9CwQQIAYgCSAI/Q0ICQoLDA0ODxgZGhscHR4f/QsEICAGIAogC/0NCAkKCwwNDg8YGRobHB0eH/0LBDAgAkECaiECDAELCyAA' +
-    'IwEjACMBbGpBA3RqIgYjAiMBQQN0bGohBSMCQQN0IQcDQCAEIwJIBEAgBSAEQQN0IgBq/QoDACIIIQkgACAGaiEDIxIhAkEAIQAD' +
-    'QCAAIwFIBEAgCCAC/QAEACAD/QoDACIK/fIB/fABIQggCSAC/QAEECAK/fIB/fABIQkgAyAHaiEDIAJBIGohAiAAQQFqIQAMAQsL' +
-    'IAEgBEEDdGoiACAI/SEAOQMAIAAgB2ogCP0hATkDACAAIAdBAXRqIAn9IQA5AwAgACAHQQNsaiAJ/SEBOQMAIARBAWohBAwBCwsL' +
-    'kQECBX8BfCMOIQIjECEDIAAjASMAIwFsakEDdGoiBCMCIwFBA3RsaiEFA0AgASMCSARAIAUgAUEDdGorAwAhBkEAIQADQCAAIwFI' +
-    'BEAgBiACIABBA3RqKwMAIAQgACMCbCABakEDdGorAwCioCEGIABBAWohAAwBCwsgAyABQQN0aiAGOQMAIAFBAWohAQwBCwsLnwMC' +
-    'An4CfCAAIABiIABEAAAAAAAAAABjcgRARAAAAAAAAPh/DwsgAEQAAAAAAAAAAGEEQEQAAAAAAADw/w8LIABEAAAAAAAA8H9hBEBE' +
-    'AAAAAAAA8H8PCyAARAAAAAAAABAAYwR8QkohASAARAAAAAAAAFBDogUgAAu9IgJCNIhC/w+DQv8HfSABfCEBIAJC/////////weD' +
-    'QoCAgICAgID4P4S/IgBEzTt/Zp6g9j9kBHwgAUIBfCEBIABEAAAAAAAA4D+iBSAAC0QAAAAAAADwv6AiACAARAAAAAAAAABAoKMi' +
-    'AyADoiEAIAG5IgREAADg/kIu5j+iIAMgA6AiAyADIAAgACAAIAAgACAAIAAgACAAIAAgAERkIQtZyEKmP6JEGIZhGIZhqD+gokQo' +
-    'r6G8hvKqP6CiRB4eHh4eHq4/oKJEERERERERsT+gokQUO7ETO7GzP6CiREYXXXTRRbc/oKJEHMdxHMdxvD+gokSSJEmSJEnCP6Ci' +
-    'RJqZmZmZmck/oKJEVVVVVVVV1T+goqKgIAREdjx5Ne856j2ioKALgokBAg17Bn8jA0EDdCEWA0AjAyATQQRqTgRAIBNBA3QiEiMI' +
-    'av0ABAAiBiEPIAYiByEQIwggEmr9AAQQIgQhDiAEIgUhDSMHIBIjAGxqIRVBACEUA0AgFCMASARAIAYgFEEDdCIRIABq/QoDACII' +
-    'IBX9AAQAIgr98gH98AEhBiAOIAggFf0ABBAiCf3yAf3wASEOIA8gASARav0KAwAiCCAK/fIB/fABIQ8gBSAIIAn98gH98AEhBSAH' +
-    'IAIgEWr9CgMAIgggCv3yAf3wASEHIA0gCCAJ/fIB/fABIQ0gECADIBFq/QoDACIIIAr98gH98AEhECAEIAggCf3yAf3wASEEIBVB' +
-    'IGohFSAUQQFqIRQMAQsLIw4gEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAG/fIBIgz97AH9DAAAAAAAADZAAAAAAAAA' +
-    'NkD99gEiBiAG/fABIgj9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4' +
-    'Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEh' +
-    'CP0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAK/QwAAAAA' +
-    'AADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8g' +
-    'Cv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqgASo/GqABGqAB' +
-    'Kj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94' +
-    't09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9DAltqBNGEuY9' +
-    'CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABA' +
-    'AAAAAAAAAED98AH98wEgDP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgBv0MAAAAAAAA' +
-    'AAAAAAAAAAAAACAG/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAb97AH9DAAAAAAAADZAAAAAAAAANkD99gEiCCAI/fABIgn9DP6C' +
-    'K2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiDP0MAAAAAAAAOEMAAAAAAAA4Q/3xASEIIAkgCP0MAADg/kIu' +
-    '5j8AAOD+Qi7mP/3yAf3xASAI/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgsgC/3yASIKIAr98gEhCSAM/Qz/AwAAAAAAAP8DAAAA' +
-    'AAAA/c4BQTT9ywEiCCAL/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAv98gH98AH9DFVVVVVVVcU/VVVVVVVV' +
-    'xT/9DFVVVVVVVaU/VVVVVVVVpT8gC/3yAf3wASAK/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAv9' +
-    '8gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gC/3yAf3wASAK/fIB/fABIAn98gH98AH9DDTHVqXjHcc+' +
-    'NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gC/3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAL/fIB' +
-    '/fABIAr98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gCf3yAf3wASAJIAn98gH98gH98AH98gH98gEgCP0MAAAAAAAA8D8AAAAAAADw' +
-    'P/3xAf3wASIIIAj9DAAAAAAAAABAAAAAAAAAAED98AH98wEgBv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA' +
-    '/U79UQv9CwQAIw4gEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAO/fIBIgz97AH9DAAAAAAAADZAAAAAAAAANkD99gEi' +
-    'BiAG/fABIgj9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEG' +
-    'IAggBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCP0MAAAA' +
-    'AAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAK/QwAAAAAAADwPwAA' +
-    'AAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCv3yAf3w' +
-    'ASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqg' +
-    'ARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4g' +
-    'Cv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9DAltqBNGEuY9CW2oE0YS' +
-    '5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAA' +
-    'AED98AH98wEgDP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgDv0MAAAAAAAAAAAAAAAA' +
-    'AAAAACAO/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA797AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG/fABIgj9DP6CK2VHFfc/' +
-    '/oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+' +
-    'Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCCAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4B' +
-    'QTT9ywEiBiAK/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVV' +
-    'VVVVVaU/VVVVVVVVpT8gCv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9' +
-    'DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMd' +
-    'xz79DFyfeLdPfpI+XJ94t09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn9' +
-    '8gH98AH9DAltqBNGEuY9CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3w' +
-    'ASIGIAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgDv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9' +
-    'CwQQIw4gFmogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAP/fIBIgz97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG' +
-    '/fABIgj9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAgg' +
-    'Bv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCP0MAAAAAAAA' +
-    '4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAK/QwAAAAAAADwPwAAAAAA' +
-    'APA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCv3yAf3wASAJ' +
-    '/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqg' +
-    'Afo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCv3y' +
-    'Af3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9DAltqBNGEuY9CW2oE0YS5j0g' +
-    'CP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAAAED9' +
-    '8AH98wEgDP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgD/0MAAAAAAAAAAAAAAAAAAAA' +
-    'ACAP/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA/97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG/fABIgj9DP6CK2VHFfc//oIr' +
-    'ZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+Qi7m' +
-    'P/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCCAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9' +
-    'ywEiBiAK/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVV' +
-    'VaU/VVVVVVVVpT8gCv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqg' +
-    'ARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79' +
-    'DFyfeLdPfpI+XJ94t09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH9' +
-    '8AH9DAltqBNGEuY9CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIG' +
-    'IAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgD/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQA' +
-    'Iw4gFmogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAF/fIBIgv97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAK/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAJ/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAn98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAJ/fIB/fABIAj98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgC/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgBf0MAAAAAAAAAAAAAAAAAAAAACAF' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAX97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG/fABIgj9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCCAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BiAK/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgBf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQQIw4g' +
-    'FkEBdGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAH/fIBIgr97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgB/0MAAAAAAAAAAAAAAAAAAAAACAH' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAf97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhBiAK/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAn98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAJ/fIB/fABIAj98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgB/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQAIw4g' +
-    'FkEBdGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAN/fIBIgr97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgDf0MAAAAAAAAAAAAAAAAAAAAACAN' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA397AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgDf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQQIw4g' +
-    'FkEDbGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAQ/fIBIgr97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgEP0MAAAAAAAAAAAAAAAAAAAAACAQ' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIBD97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgEP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQAIw4g' +
-    'FkEDbGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAE/fIBIgn97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBCAE/fAB' +
-    'IgX9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCP0MAAAAAAAAOEMAAAAAAAA4Q/3xASEEIAUgBP0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAE/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgcgB/3yASIGIAb98gEhBf0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAI/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBCAH/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAf98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gB/3yAf3wASAG/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAf98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gB/3yAf3wASAG/fIB/fABIAX98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gB/3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAH/fIB/fABIAb98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBf3y' +
-    'Af3wASAFIAX98gH98gH98AH98gH98gEgBP0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIEIAT9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgBP0MAAAAAAAAAAAAAAAAAAAAACAE' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAT97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgBP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQQIBNB' +
-    'BGohEwwBCwsDQCATIwNIBEAgE0EDdCISIwhq/QAEACIEIRAgBCIFIQ0jByASIwBsaiEUQQAhFQNAIBUjAEgEQCAQIBVBA3QiESAA' +
-    'av0KAwAgFP0ABAAiBv3yAf3wASEQIAUgASARav0KAwAgBv3yAf3wASEFIA0gAiARav0KAwAgBv3yAf3wASENIAQgAyARav0KAwAg' +
-    'Bv3yAf3wASEEIBRBEGohFCAVQQFqIRUMAQsLIw4gEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAQ/fIBIgv97AH9DAAA' +
-    'AAAAADZAAAAAAAAANkD99gEiBiAG/fABIgf9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAA' +
-    'AAAAOEMAAAAAAAA4Q/3xASEGIAcgBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkg' +
-    'Cf3yASIIIAj98gEhB/0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAK/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9' +
-    'ywEiBiAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVV' +
-    'VaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAn98gH98AH9DBqg' +
-    'ARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAf98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79' +
-    'DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAJ/fIB/fABIAj98gH9' +
-    '8AH9DAltqBNGEuY9CW2oE0YS5j0gB/3yAf3wASAHIAf98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIG' +
-    'IAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgC/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3w' +
-    'AQUgEP0MAAAAAAAAAAAAAAAAAAAAACAQ/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIBD97AH9DAAAAAAAADZAAAAAAAAANkD99gEi' +
-    'BiAG/fABIgf9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEG' +
-    'IAcgBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhByAK/Qz/' +
-    'AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVV' +
-    'VVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFW' +
-    'PxdswRZswVY/IAn98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAf98gH9' +
-    '8AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y' +
-    '2Pjv2O4hPiAJ/fIB/fABIAj98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gB/3yAf3wASAHIAf98gH98gH98AH98gH98gEgBv0MAAAA' +
-    'AAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgEP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAA' +
-    'AAAAgAAAAAAAAACA/U79UQv9CwQAIw4gFmogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAF/fIBIgr97AH9DAAAAAAA' +
-    'ADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3y' +
-    'ASIHIAf98gEhBv0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUg' +
-    'Bf0MAAAAAAAAAAAAAAAAAAAAACAF/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAX97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG' +
-    '/fABIgf9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAcg' +
-    'Bv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhByAK/Qz/AwAA' +
-    'AAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVV' +
-    'VcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxds' +
-    'wRZswVY/IAn98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAf98gH98AH9' +
-    'DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv' +
-    '2O4hPiAJ/fIB/fABIAj98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gB/3yAf3wASAHIAf98gH98gH98AH98gH98gEgBv0MAAAAAAAA' +
-    '8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgBf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAA' +
-    'gAAAAAAAAACA/U79UQv9CwQAIw4gFkEBdGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAN/fIBIgr97AH9DAAAAAAA' +
-    'ADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3y' +
-    'ASIHIAf98gEhBv0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUg' +
-    'Df0MAAAAAAAAAAAAAAAAAAAAACAN/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA397AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF' +
-    '/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYg' +
-    'Bf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAA' +
-    'AAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVV' +
-    'VcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxds' +
-    'wRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9' +
-    'DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv' +
-    '2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA' +
-    '8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH98wEgDf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAA' +
-    'gAAAAAAAAACA/U79UQv9CwQAIw4gFkEDbGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAE/fIBIgn97AH9DAAAAAAA' +
-    'ADZAAAAAAAAANkD99gEiBCAE/fABIgX9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCP0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3xASEEIAUgBP0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAE/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgcgB/3y' +
-    'ASIGIAb98gEhBf0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAI/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BCAH/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAf98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gB/3yAf3wASAG/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAf98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gB/3yAf3wASAG/fIB/fABIAX98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gB/3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAH/fIB/fABIAb98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBf3yAf3wASAFIAX98gH98gH98AH98gH98gEgBP0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIEIAT9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgCf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUg' +
-    'BP0MAAAAAAAAAAAAAAAAAAAAACAE/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAT97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF' +
-    '/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYg' +
-    'Bf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAA' +
-    'AAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVV' +
-    'VcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxds' +
-    'wRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9' +
-    'DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv' +
-    '2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA' +
-    '8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH98wEgBP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAA' +
-    'gAAAAAAAAACA/U79UQv9CwQAIBNBAmohEwwBCwsLmwwCBXsGfyMOIQkDQCAHIwNIBEAgB0EDdCIKIwhq/QAEACEBIwcgByAHQXxx' +
-    'IgZrIAYjAGxqQQN0aiEIQSBBECMDIAZBBGpOGyELQQAhBgNAIAYjAEgEQCABIAAgBkEDdGr9CgMAIAj9AAQA/fIB/fABIQEgCCAL' +
-    'aiEIIAZBAWohBgwBCwsgCSAKaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAH98gEiAf3sAf0MAAAAAAAANkAAAAAAAAA2' +
-    'QP32ASICIAL98AEiAv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASID/QwAAAAAAAA4QwAAAAAAADhD' +
-    '/fEBIQQgAiAE/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiAiAC/fIBIgQgBP3yASEF' +
-    '/QwAAAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAP9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIDIAL9DAAAAAAA' +
-    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gAv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAC' +
-    '/fIB/fABIAT98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gAv3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
-    'P/0MGqABGqAB+j4aoAEaoAH6PiAC/fIB/fABIAT98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
-    'T36SPiAC/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAL98gH98AEgBP3yAf3wAf0MCW2oE0YS5j0J' +
-    'bagTRhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAD/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgIgAv0MAAAAAAAAAEAA' +
-    'AAAAAAAAQP3wAf3zASAB/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAB/QwAAAAAAAAA' +
-    'AAAAAAAAAAAAIAH9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgAf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASICIAL98AEiAv0M/oIr' +
-    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASID/QwAAAAAAAA4QwAAAAAAADhD/fEBIQQgAiAE/QwAAOD+Qi7m' +
-    'PwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiAiAC/fIBIgQgBP3yASEFIAP9DP8DAAAAAAAA/wMAAAAA' +
-    'AAD9zgFBNP3LASIDIAL9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gAv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXF' +
-    'P/0MVVVVVVVVpT9VVVVVVVWlPyAC/fIB/fABIAT98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gAv3y' +
-    'Af3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAC/fIB/fABIAT98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40' +
-    'x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAC/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAL98gH9' +
-    '8AEgBP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAD/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/fEB/fABIgIgAv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAB/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9' +
-    'Tv1RC/0LBAAgB0ECaiEHDAELCwu/CAMDfAN/BnsjAiAAQQN0bCIAIxBqIQcjESAAaiEGIwZFBEAgBiAHKwMAIAGhIgE5AwAgAUQA' +
-    'AAAAAADgP6IgAaIPCyMGQQFGBEAgBysDACIDRAAAAAAAAOA/ov0UIg397AH9DAAAAAAAADZAAAAAAAAANkD99gEiCCAI/fABIgn9' +
-    'DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEIIAkgCP0MAADg' +
-    '/kIu5j8AAOD+Qi7mP/3yAf3xASAI/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIMIAz98gEhCSAGIAv9DP8DAAAAAAAA' +
-    '/wMAAAAAAAD9zgFBNP3LASIIIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9V' +
-    'VVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAz98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzB' +
-    'Vj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAz98gH98AEgCf3yAf3wAf0MNMdW' +
-    'peMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+' +
-    'IAr98gH98AEgDP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAJ/fIB/fABIAkgCf3yAf3yAf3wAf3yAf3yASAI/QwAAAAAAADwPwAA' +
-    'AAAAAPA//fEB/fABIgggCP0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAA' +
-    'AAAAAID9Tv1R/SEARAAAAAAAAOA/okQAAAAAAADgP6AgAaE5AwAgA0QAAAAAAAAAACADRAAAAAAAAAAAZCIAGyADmiADIAAbEAci' +
-    'AkQAAAAAAADwP6AiBEQAAAAAAADwP2IEfCAEEAMgAiAERAAAAAAAAPC/oKEgBKOgBSACC6AgASADoqEPCyAHKwMAIQNBASEAA0Ag' +
-    'ACMCSARAIAcgAEEDdGorAwAiAiADZARAIAIhAwsgAEEBaiEADAELC0EAIQADQCAAIwJIBEAgAEEDdCIFIAdqKwMAIAOhEAchAiAF' +
-    'IAZqIAI5AwAgBCACoCEEIABBAWohAAwBCwtEAAAAAAAA8D8gBKMhAkEAIQADQCAAIwJIBEAgBiAAQQN0aiIFIAUrAwAgAqI5AwAg' +
-    'AEEBaiEADAELCyAGIAH8AkEDdCIFaiIAIAArAwBEAAAAAAAA8L+gOQMAIAQQAyAFIAdqKwMAIAOhoQv5AgIBfgF8IAAgAGIEQCAA' +
-    'DwsgAETvOfr+Qi6GQGQEQEQAAAAAAADwfw8LIABEUjAt1RBJh8BjBEBEAAAAAAAAAAAPCyAAIABE/oIrZUcV9z+iRAAAAAAAAOA/' +
-    'oJwiAEQAAOD+Qi7mP6KhIABEdjx5Ne856j2ioSICIAIgAiACIAIgAiACIAIgAiACIAIgAiACRAltqBNGEuY9okSY2Pjv2O4hPqCi' +
-    'RORE9WdF5lo+oKJEXJ94t09+kj6gokQ0x1al4x3HPqCiRBqgARqgAfo+oKJEGqABGqABKj+gokQXbMEWbMFWP6CiRBEREREREYE/' +
-    'oKJEVVVVVVVVpT+gokRVVVVVVVXFP6CiRAAAAAAAAOA/oKJEAAAAAAAA8D+gokQAAAAAAADwP6AhAiAA/AYiAUL/B1UEQCACRAAA' +
-    'AAAAAOB/oiABQjSGv6IPCyABQoJ4UwRAIAIgAULnD3xCNIa/okQAAAAAAABwAaIPCyACIAFC/wd8QjSGv6ILNgAgAUEBakF+cSIB' +
-    'IABBAXRsIAFBAXRqIAJBAXQgAWxqIAJqIAFBKGxqIAJBA3RqQQN0QUBrC4kIAgN7B38gACABIAIgAyAEIAUgCxAAIAwkBSMKQQAj' +
-    'AEEDdCIDIwNs/AsAIwtBACMDQQN0IhT8CwAjDEEAIwJBA3QiACMDbPwLACMNQQAgAPwLAEQAAAAAAAAAACEMA0AgCCAJSARAQSAg' +
-    'CSAIayIAIABBIE4bIQEgBiADIAhsaiETQQAhAANAIABBBGogAUwEQCATIAAgA2xqIgIgAiADaiACIANBAXRqIAIgA0EDbGoQBCAF' +
-    'IxAQAUEAIQIDQCACQQRIBEAgDCACIAcgACAIaiACakEDdGorAwAQBqAhDCACQQFqIQIMAQsLIw8gACAUbGoQDCAAQQRqIQAMAQsL' +
-    'A0AgACABSARAIBMgACADbGoQBSAFEAIgDEEAIAcgACAIakEDdGorAwAQBqAhDCMPIAAgFGxqIREjA0EDdCEQIw4hBCMRIRJBACEL' +
-    'A0AgCyMDSARA/QwAAAAAAAAAAAAAAAAAAAAAIQ4gBCALQQN0IhVq/QAEACENQQAhAgNAIAIjAkgEQCAOIAIgEGwgFWoiFiMJav0A' +
-    'BAAgEiACQQN0av0KAwAiD/3yAf3wASEOIwwgFmoiFiAW/QAEACANIA/98gH98AH9CwQAIAJBAWohAgwBCwsgESAVaiAOAnv9DAAA' +
-    'AAAAAPA/AAAAAAAA8D8gDSAN/fIB/fEBIwX9FCIO/fABIwRFDQAaIA39DAAAAAAAAPA/AAAAAAAA8D8gDf3xAf3yASAO/fABIwRB' +
-    'AUYNABr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAAAAAAAAAAAAAAAgDf0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIg39CwQA' +
-    'IwsgFWoiAiAC/QAEACAN/fAB/QsEACALQQJqIQsMAQsLQQAhAgNAIAIjAkgEQCACQQN0IgQjDWoiCyALKwMAIAQgEmorAwCgOQMA' +
-    'IAJBAWohAgwBCwsgAEEBaiEADAELCyATIAEQDSABIAhqIQgMAQsLQQAhAQNAIAEjAEgEQEEAIQADQCAAIwFIBEAgCiABIwFsIABq' +
-    'QQN0aiMKIABBfHEiAiMAbEEEQQIjAyACQQRqThsgAWxqIAAgAmtqQQN0aisDADkDACAAQQFqIQAMAQsLIAFBAWohAQwBCwsgCiMB' +
-    'IwBBA3RsaiIBIwFBA3QiAGoiAiMCIABsaiEDQQAhAANAIAAjAUgEQCAAQQN0IgQgAWojCyAEaisDADkDACAAQQFqIQAMAQsLQQAh' +
-    'AANAIAAjAkgEQEEAIQEDQCABIwFIBEAgAiABIwJsIABqQQN0aiMMIAAjA2wgAWpBA3RqKwMAOQMAIAFBAWohAQwBCwsgAyAAQQN0' +
-    'IgFqIw0gAWorAwA5AwAgAEEBaiEADAELCyAMCwUAQYAIC5UCAQF/IABBACABIAIgAyAEIAkQACMAQQN0IQlBACEAA0AgACAGSARA' +
-    'IAUgACAJbGohAUEEQQEgBiAAa0EEThsiA0EERgRAIAEgASAJaiABIAlBAXRqIAEgCUEDbGoQBCAEIAcjAiAAQQN0bGoQAQUgARAF' +
-    'IAQQAkEAIQEDQCABIwJIBEAgByAAIwJsIAFqQQN0aiMQIAFBA3RqKwMAOQMAIAFBAWohAQwBCwsLQQAhAQNAIAEgA0gEQCAIBEAg' +
-    'ACABaiEKQQAhAgNAIAIjAUgEQCAIIAojAWwgAmpBA3RqIw4gASMDbCACakEDdGorAwA5AwAgAkEBaiECDAELCwsgAUEBaiEBDAEL' +
-    'CyAAIANqIQAMAQsLC5kJAgx7B38jA0EDdCEQIwJBA3QhDQNAIA8jA0gEQP0MAAAAAAAAAAAAAAAAAAAAACEB/QwAAAAAAAAAAAAA' +
-    'AAAAAAAAIQL9DAAAAAAAAAAAAAAAAAAAAAAhA/0MAAAAAAAAAAAAAAAAAAAAACEEIA9BA3QiESMOav0ABAAhByMOIBBqIBFq/QAE' +
-    'ACEIIw4gEEEBdGogEWr9AAQAIQojDiAQQQNsaiARav0ABAAhC0EAIQ4DQCAOIwJIBEAgASAOIBBsIBFqIhMjCWr9AAQAIgwjESAO' +
-    'QQN0aiIS/QoDACIJ/fIB/fABIQEgAiAMIA0gEmr9CgMAIgX98gH98AEhAiADIAwgEiANQQF0av0KAwAiBv3yAf3wASEDIAQgDCAS' +
-    'IA1BA2xq/QoDACIM/fIB/fABIQQjDCATaiISIBL9AAQAIAcgCf3yAf3wASAIIAX98gH98AEgCiAG/fIB/fABIAsgDP3yAf3wAf0L' +
-    'BAAgDkEBaiEODAELCyAAIBFqIAECe/0MAAAAAAAA8D8AAAAAAADwPyAHIAf98gH98QEjBf0UIgH98AEjBEUNABogB/0MAAAAAAAA' +
-    '8D8AAAAAAADwPyAH/fEB/fIBIAH98AEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAH/QwAAAAA' +
-    'AAAAAAAAAAAAAAAA/Ur9Ugv98gEiAf0LBAAgACAQaiARaiACAnv9DAAAAAAAAPA/AAAAAAAA8D8gCCAI/fIB/fEBIwX9FCIC/fAB' +
-    'IwRFDQAaIAj9DAAAAAAAAPA/AAAAAAAA8D8gCP3xAf3yASAC/fABIwRBAUYNABr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAAAA' +
-    'AAAAAAAAAAAgCP0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIgL9CwQAIAAgEEEBdGogEWogAwJ7/QwAAAAAAADwPwAAAAAAAPA/' +
-    'IAogCv3yAf3xASMF/RQiA/3wASMERQ0AGiAK/QwAAAAAAADwPwAAAAAAAPA/IAr98QH98gEgA/3wASMEQQFGDQAa/QwAAAAAAADw' +
-    'PwAAAAAAAPA//QwAAAAAAAAAAAAAAAAAAAAAIAr9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SC/3yASID/QsEACAAIBBBA2xqIBFqIAQC' +
-    'e/0MAAAAAAAA8D8AAAAAAADwPyALIAv98gH98QEjBf0UIgT98AEjBEUNABogC/0MAAAAAAAA8D8AAAAAAADwPyAL/fEB/fIBIAT9' +
-    '8AEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAL/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEi' +
-    'BP0LBAAjCyARaiIOIA79AAQAIAH98AEgAv3wASAD/fABIAT98AH9CwQAIA9BAmohDwwBCwtBACEAA0AgACMCSARAIABBA3QiDiMN' +
-    'aiIPIA8rAwAjESAOaiIOKwMAoCANIA5qKwMAoCAOIA1BAXRqKwMAoCAOIA1BA2xqKwMAoDkDACAAQQFqIQAMAQsLC4wKAgh/C3sj' +
-    'A0EDdCEHIwBBA3QhCANAIwMgBkEEak4EQCAGQQN0IQlBACEDA0AjACADQQRqTgRA/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAA' +
-    'AAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACEN/QwAAAAAAAAAAAAAAAAAAAAAIQv9DAAAAAAAAAAAAAAAAAAAAAAhDv0M' +
-    'AAAAAAAAAAAAAAAAAAAAACEP/QwAAAAAAAAAAAAAAAAAAAAAIRD9DAAAAAAAAAAAAAAAAAAAAAAhESAAIANBA3RqIQIjDyAJaiEE' +
-    'QQAhBQNAIAEgBUoEQCAKIAL9CgMAIhMgBP0ABAAiEv3yAf3wASEKIAwgEyAE/QAEECIT/fIB/fABIQwgDSAC/QoDCCIUIBL98gH9' +
-    '8AEhDSALIBQgE/3yAf3wASELIA4gAv0KAxAiFCAS/fIB/fABIQ4gDyAUIBP98gH98AEhDyAQIAL9CgMYIhQgEv3yAf3wASEQIBEg' +
-    'FCAT/fIB/fABIREgAiAIaiECIAQgB2ohBCAFQQFqIQUMAQsLIwogCSMAbGogA0EFdGoiAiAC/QAEACAK/fAB/QsEACACIAL9AAQQ' +
-    'IAz98AH9CwQQIAIgAv0ABCAgDf3wAf0LBCAgAiAC/QAEMCAL/fAB/QsEMCACIAL9AARAIA798AH9CwRAIAIgAv0ABFAgD/3wAf0L' +
-    'BFAgAiAC/QAEYCAQ/fAB/QsEYCACIAL9AARwIBH98AH9CwRwIANBBGohAwwBCwsDQCADIwBIBED9DAAAAAAAAAAAAAAAAAAAAAAh' +
-    'Cv0MAAAAAAAAAAAAAAAAAAAAACELIAAgA0EDdGohBCMPIAlqIQJBACEFA0AgASAFSgRAIAogBP0KAwAiDCAC/QAEAP3yAf3wASEK' +
-    'IAsgDCAC/QAEEP3yAf3wASELIAQgCGohBCACIAdqIQIgBUEBaiEFDAELCyMKIAkjAGxqIANBBXRqIgIgAv0ABAAgCv3wAf0LBAAg' +
-    'AiAC/QAEECAL/fAB/QsEECADQQFqIQMMAQsLIAZBBGohBgwBCwsDQCAGIwNIBEAgBkEDdCEJQQAhAgNAIwAgAkEEak4EQP0MAAAA' +
-    'AAAAAAAAAAAAAAAAACEL/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACEN' +
-    'IAAgAkEDdGohAyMPIAlqIQRBACEFA0AgASAFSgRAIAsgA/0KAwAgBP0ABAAiDv3yAf3wASELIAogA/0KAwggDv3yAf3wASEKIAwg' +
-    'A/0KAxAgDv3yAf3wASEMIA0gA/0KAxggDv3yAf3wASENIAMgCGohAyAEIAdqIQQgBUEBaiEFDAELCyMKIAkjAGxqIAJBBHRqIgMg' +
-    'A/0ABAAgC/3wAf0LBAAgAyAD/QAEECAK/fAB/QsEECADIAP9AAQgIAz98AH9CwQgIAMgA/0ABDAgDf3wAf0LBDAgAkEEaiECDAEL' +
-    'CwNAIAIjAEgEQP0MAAAAAAAAAAAAAAAAAAAAACEKIAAgAkEDdGohAyMPIAlqIQRBACEFA0AgASAFSgRAIAogA/0KAwAgBP0ABAD9' +
-    '8gH98AEhCiADIAhqIQMgBCAHaiEEIAVBAWohBQwBCwsjCiAJIwBsaiACQQR0aiIDIAP9AAQAIAr98AH9CwQAIAJBAWohAgwBCwsg' +
-    'BkECaiEGDAELCws=';
+// 26165 bytes, sha256 33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e
+const KERNEL_SHA256 = '33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e';
+const KERNEL_BASE64 = 'AGFzbQEAAAABTgpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AYAJ/fAF8YAN/f38Bf2AMf39/f39/f39/f39/AXxgAAF/' +
+    'YAp/f39/f39/f39/AAMPDgMBAAIEAAUCBgcICQABBQMBAAEGWxJ/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38B' +
+    'QQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAsHNgUJd29ya0J5dGVzAAgIbG9zc0dy' +
+    'YWQACQdmb3J3YXJkAAsIaGVhcEJhc2UACgZtZW1vcnkCAAquygEOqQQAIAAkBCABJAUgAiQAIAMkASAEJAIgA0EBakF+cSQDIAZB' +
+    'D2pBcHEiACQGIwMjAEEDdGwiASAAaiIAJAkgACABaiIAJAcjA0EDdCIBIABqIgAkCiAAIAFqIgAkCCMDIwJBA3RsIgEgAGoiACQL' +
+    'IAAgAWoiACQNIwNBBXQiASAAaiIAJA4gACMDQQh0aiIAJA8jAkEFdCICIABqIgAkECAAIAJqIgAkESAAIAFqJAxBACEAA0AgACMA' +
+    'SARAQQAhAQNAIAEjAUgEQCMGIAFBfHEiAiMAbEEEQQIjAyACQQRqThsgAGxqIAEgAmtqQQN0aiAFIAAjAWwgAWpBA3RqKwMAOQMA' +
+    'IAFBAWohAQwBCwsjAyMBSgRAIwYjASIBQXxxIgIjAGxBBEECIwMgAkEEak4bIABsaiABIAJrakEDdGpEAAAAAAAAAAA5AwALIABB' +
+    'AWohAAwBCwsgBSMBIwBBA3RsaiIBIwFBA3RqIQJBACEAA0AgACMBSARAIABBA3QiAyMHaiABIANqKwMAOQMAIABBAWohAAwBCwsj' +
+    'AyMBSgRAIwcjAUEDdGpEAAAAAAAAAAA5AwALQQAhAANAIAAjAkgEQEEAIQEDQCABIwFIBEAjCCAAIwNsIAFqQQN0aiACIAEjAmwg' +
+    'AGpBA3RqKwMAOQMAIAFBAWohAQwBCwsjAyMBSgRAIwgjASAAIwNsakEDdGpEAAAAAAAAAAA5AwALIABBAWohAAwBCwsLuQMCBn8E' +
+    'eyMDQQN0IQMDQCACIwNIBEAgAkEDdCIFIw1q/QAEACEJIw0gA0EBdGogBWr9AAQAIQojDSADQQNsaiAFav0ABAAhCyMRIAJBBXRq' +
+    'IgYgCSMNIANqIAVq/QAEACII/Q0AAQIDBAUGBxAREhMUFRYX/QsEACAGIAogC/0NAAECAwQFBgcQERITFBUWF/0LBBAgBiAJIAj9' +
+    'DQgJCgsMDQ4PGBkaGxwdHh/9CwQgIAYgCiAL/Q0ICQoLDA0ODxgZGhscHR4f/QsEMCACQQJqIQIMAQsLIAAjASMAIwFsakEDdGoi' +
+    'BiMCIwFBA3RsaiEFIwJBA3QhBwNAIAQjAkgEQCAFIARBA3QiAGr9CgMAIgghCSAAIAZqIQMjESECQQAhAANAIAAjAUgEQCAIIAL9' +
+    'AAQAIAP9CgMAIgr98gH98AEhCCAJIAL9AAQQIAr98gH98AEhCSADIAdqIQMgAkEgaiECIABBAWohAAwBCwsgASAEQQN0aiIAIAj9' +
+    'IQA5AwAgACAHaiAI/SEBOQMAIAAgB0EBdGogCf0hADkDACAAIAdBA2xqIAn9IQE5AwAgBEEBaiEEDAELCwuRAQIFfwF8Iw0hAiMP' +
+    'IQMgACMBIwAjAWxqQQN0aiIEIwIjAUEDdGxqIQUDQCABIwJIBEAgBSABQQN0aisDACEGQQAhAANAIAAjAUgEQCAGIAIgAEEDdGor' +
+    'AwAgBCAAIwJsIAFqQQN0aisDAKKgIQYgAEEBaiEADAELCyADIAFBA3RqIAY5AwAgAUEBaiEBDAELCwufAwICfgJ8IAAgAGIgAEQA' +
+    'AAAAAAAAAGNyBEBEAAAAAAAA+H8PCyAARAAAAAAAAAAAYQRARAAAAAAAAPD/DwsgAEQAAAAAAADwf2EEQEQAAAAAAADwfw8LIABE' +
+    'AAAAAAAAEABjBHxCSiEBIABEAAAAAAAAUEOiBSAAC70iAkI0iEL/D4NC/wd9IAF8IQEgAkL/////////B4NCgICAgICAgPg/hL8i' +
+    'AETNO39mnqD2P2QEfCABQgF8IQEgAEQAAAAAAADgP6IFIAALRAAAAAAAAPC/oCIAIABEAAAAAAAAAECgoyIDIAOiIQAgAbkiBEQA' +
+    'AOD+Qi7mP6IgAyADoCIDIAMgACAAIAAgACAAIAAgACAAIAAgACAARGQhC1nIQqY/okQYhmEYhmGoP6CiRCivobyG8qo/oKJEHh4e' +
+    'Hh4erj+gokQRERERERGxP6CiRBQ7sRM7sbM/oKJERhdddNFFtz+gokQcx3Ecx3G8P6CiRJIkSZIkScI/oKJEmpmZmZmZyT+gokRV' +
+    'VVVVVVXVP6CioqAgBER2PHk17znqPaKgoAuCiQECDXsGfyMDQQN0IRYDQCMDIBNBBGpOBEAgE0EDdCISIwdq/QAEACIGIQ8gBiIH' +
+    'IRAjByASav0ABBAiBCEOIAQiBSENIwYgEiMAbGohFUEAIRQDQCAUIwBIBEAgBiAUQQN0IhEgAGr9CgMAIgggFf0ABAAiCv3yAf3w' +
+    'ASEGIA4gCCAV/QAEECIJ/fIB/fABIQ4gDyABIBFq/QoDACIIIAr98gH98AEhDyAFIAggCf3yAf3wASEFIAcgAiARav0KAwAiCCAK' +
+    '/fIB/fABIQcgDSAIIAn98gH98AEhDSAQIAMgEWr9CgMAIgggCv3yAf3wASEQIAQgCCAJ/fIB/fABIQQgFUEgaiEVIBRBAWohFAwB' +
+    'CwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAb98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEi' +
+    'CP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwA' +
+    'AOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAA' +
+    'AAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9' +
+    'DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH9' +
+    '8AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4a' +
+    'oAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB' +
+    '/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB' +
+    '/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3z' +
+    'ASAM/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAG/QwAAAAAAAAAAAAAAAAAAAAAIAb9' +
+    'DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitlRxX3' +
+    'P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIM/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY//fIB' +
+    '/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCyAL/fIBIgogCv3yASEJIAz9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASII' +
+    'IAv9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gC/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9V' +
+    'VVVVVVWlPyAL/fIB/fABIAr98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gC/3yAf3wAf0MGqABGqAB' +
+    'Kj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAL/fIB/fABIAr98gH98AEgCf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94' +
+    't09+kj5cn3i3T36SPiAL/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAv98gH98AEgCv3yAf3wAf0M' +
+    'CW2oE0YS5j0JbagTRhLmPSAJ/fIB/fABIAkgCf3yAf3yAf3wAf3yAf3yASAI/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgggCP0M' +
+    'AAAAAAAAAEAAAAAAAAAAQP3wAf3zASAG/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAS' +
+    'aiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA798gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIr' +
+    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7m' +
+    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA/' +
+    '/QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAA' +
+    'AOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBER' +
+    'EREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6' +
+    'PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVn' +
+    'ReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAgg' +
+    'CP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwA' +
+    'AAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAO/QwAAAAAAAAAAAAAAAAAAAAAIA79DAAAAAAA' +
+    'AAAAAAAAAAAAAAD9Sv1SCwUgDv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0M' +
+    'AAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9' +
+    'DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAA' +
+    'AAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWl' +
+    'PyAK/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEa' +
+    'oAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5c' +
+    'n3i3T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS' +
+    '5j0JbagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAA' +
+    'AEAAAAAAAAAAQP3wAf3zASAO/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWaiASaiME' +
+    'BHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA/98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA//QwA' +
+    'AAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/' +
+    'AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBERERER' +
+    'EYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK' +
+    '/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVnReZa' +
+    'PuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAggCP3y' +
+    'Af3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwAAAAA' +
+    'AAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAP/QwAAAAAAAAAAAAAAAAAAAAAIA/9DAAAAAAAAAAA' +
+    'AAAAAAAAAAD9Sv1SCwUgD/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAA' +
+    'AAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8' +
+    'eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAA' +
+    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK' +
+    '/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
+    'P/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
+    'T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0J' +
+    'bagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
+    'AAAAAAAAQP3wAf3zASAP/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB' +
+    '/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAL/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAAAAAAAAAAIAX9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB' +
+    '/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQF0aiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAf98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAH/QwAAAAAAAAAAAAAAAAAAAAAIAf9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgB/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEGIAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB' +
+    '/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAH/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQF0aiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAAAAAAAAAAIA39DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQNsaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAAAAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQNsaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIEIAT98AEiBf0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEBIQQgBSAE/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB/fABIAb98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAH/fIB' +
+    '/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAH/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAF/fIB/fABIAUgBf3yAf3y' +
+    'Af3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAJ/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAAAAAAAAAAIAT9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAgE0EEaiETDAELCwNAIBMj' +
+    'A0gEQCATQQN0IhIjB2r9AAQAIgQhECAEIgUhDSMGIBIjAGxqIRRBACEVA0AgFSMASARAIBAgFUEDdCIRIABq/QoDACAU/QAEACIG' +
+    '/fIB/fABIRAgBSABIBFq/QoDACAG/fIB/fABIQUgDSACIBFq/QoDACAG/fIB/fABIQ0gBCADIBFq/QoDACAG/fIB/fABIQQgFEEQ' +
+    'aiEUIBVBAWohFQwBCwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2' +
+    'QP32ASIGIAb98AEiB/0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD' +
+    '/fEBIQYgByAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEH' +
+    '/QwAAAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAn9DAAAAAAA' +
+    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ' +
+    '/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
+    'P/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
+    'T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0J' +
+    'bagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
+    'AAAAAAAAQP3wAf3zASAL/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAA' +
+    'AAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIr' +
+    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7m' +
+    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAA' +
+    'AAD9zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXF' +
+    'P/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3y' +
+    'Af3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40' +
+    'x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH9' +
+    '8AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA/' +
+    '/fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9' +
+    'Tv1RC/0LBAAjDSAWaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIAX9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEg' +
+    'CP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAjDSAWQQF0aiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIA39DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
+    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAjDSAWQQNsaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIEIAT98AEiBf0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQQgBSAE/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB' +
+    '/fABIAb98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAH/fIB/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAH/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAJ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIAT9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
+    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAgE0ECaiETDAELCwubDAIFewZ/Iw0hCQNAIAcjA0gEQCAHQQN0IgojB2r9AAQAIQEjBiAHIAdBfHEiBmsgBiMAbGpBA3Rq' +
+    'IQhBIEEQIwMgBkEEak4bIQtBACEGA0AgBiMASARAIAEgACAGQQN0av0KAwAgCP0ABAD98gH98AEhASAIIAtqIQggBkEBaiEGDAEL' +
+    'CyAJIApqIwQEeyMEQQFGBHv9DAAAAAAAAOA/AAAAAAAA4D8gAf3yASIB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC' +
+    '/Qz+gitlRxX3P/6CK2VHFfc//fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA' +
+    '4P5CLuY/AADg/kIu5j/98gH98QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQX9DAAAAAAAAOA/AAAA' +
+    'AAAA4D/9DAAAAAAAAOA/AAAAAAAA4D8gA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMgAv0MAAAAAAAA8D8AAAAAAADwP/0M' +
+    'AAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VVVVVVVaU/IAL98gH98AEgBP3yAf3w' +
+    'Af0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEqPxqgARqgASo//QwaoAEaoAH6Phqg' +
+    'ARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3T36SPlyfeLdPfpI+IAL98gH98AH9' +
+    'DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJbagTRhLmPQltqBNGEuY9IAX98gH9' +
+    '8AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMB' +
+    'IAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH98gH98AEFIAH9DAAAAAAAAAAAAAAAAAAAAAAgAf0M' +
+    'AAAAAAAAAAAAAAAAAAAAAP1K/VILBSAB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC/Qz+gitlRxX3P/6CK2VHFfc/' +
+    '/fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA4P5CLuY/AADg/kIu5j/98gH9' +
+    '8QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQUgA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMg' +
+    'Av0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VV' +
+    'VVVVVaU/IAL98gH98AEgBP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEq' +
+    'PxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3' +
+    'T36SPlyfeLdPfpI+IAL98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJ' +
+    'bagTRhLmPQltqBNGEuY9IAX98gH98AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwA' +
+    'AAAAAAAAQAAAAAAAAABA/fAB/fMBIAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VEL/QsEACAHQQJq' +
+    'IQcMAQsLC78IAwN8A38GeyMCIABBA3RsIgAjD2ohByMQIABqIQYjBUUEQCAGIAcrAwAgAaEiATkDACABRAAAAAAAAOA/oiABog8L' +
+    'IwVBAUYEQCAHKwMAIgNEAAAAAAAA4D+i/RQiDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitl' +
+    'RxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY/' +
+    '/fIB/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgwgDP3yASEJIAYgC/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0' +
+    '/csBIgggCv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAK/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVV' +
+    'VVWlP1VVVVVVVaU/IAr98gH98AEgDP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAK/fIB/fAB/Qwa' +
+    'oAEaoAEqPxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAr98gH98AEgDP3yAf3wASAJ/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+' +
+    '/Qxcn3i3T36SPlyfeLdPfpI+IAr98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gCv3yAf3wASAM/fIB' +
+    '/fAB/QwJbagTRhLmPQltqBNGEuY9IAn98gH98AEgCSAJ/fIB/fIB/fAB/fIB/fIBIAj9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEi' +
+    'CCAI/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMBIA39DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH9IQBE' +
+    'AAAAAAAA4D+iRAAAAAAAAOA/oCABoTkDACADRAAAAAAAAAAAIANEAAAAAAAAAABkIgAbIAOaIAMgABsQByICRAAAAAAAAPA/oCIE' +
+    'RAAAAAAAAPA/YgR8IAQQAyACIAREAAAAAAAA8L+goSAEo6AFIAILoCABIAOioQ8LIAcrAwAhA0EBIQADQCAAIwJIBEAgByAAQQN0' +
+    'aisDACICIANkBEAgAiEDCyAAQQFqIQAMAQsLQQAhAANAIAAjAkgEQCAAQQN0IgUgB2orAwAgA6EQByECIAUgBmogAjkDACAEIAKg' +
+    'IQQgAEEBaiEADAELC0QAAAAAAADwPyAEoyECQQAhAANAIAAjAkgEQCAGIABBA3RqIgUgBSsDACACojkDACAAQQFqIQAMAQsLIAYg' +
+    'AfwCQQN0IgVqIgAgACsDAEQAAAAAAADwv6A5AwAgBBADIAUgB2orAwAgA6GhC/kCAgF+AXwgACAAYgRAIAAPCyAARO85+v5CLoZA' +
+    'ZARARAAAAAAAAPB/DwsgAERSMC3VEEmHwGMEQEQAAAAAAAAAAA8LIAAgAET+gitlRxX3P6JEAAAAAAAA4D+gnCIARAAA4P5CLuY/' +
+    'oqEgAER2PHk17znqPaKhIgIgAiACIAIgAiACIAIgAiACIAIgAiACIAJECW2oE0YS5j2iRJjY+O/Y7iE+oKJE5ET1Z0XmWj6gokRc' +
+    'n3i3T36SPqCiRDTHVqXjHcc+oKJEGqABGqAB+j6gokQaoAEaoAEqP6CiRBdswRZswVY/oKJEERERERERgT+gokRVVVVVVVWlP6Ci' +
+    'RFVVVVVVVcU/oKJEAAAAAAAA4D+gokQAAAAAAADwP6CiRAAAAAAAAPA/oCECIAD8BiIBQv8HVQRAIAJEAAAAAAAA4H+iIAFCNIa/' +
+    'og8LIAFCgnhTBEAgAiABQucPfEI0hr+iRAAAAAAAAHABog8LIAIgAUL/B3xCNIa/ogs2ACABQQFqQX5xIgEgAEEBdGwgAUEBdGog' +
+    'AkEBdCABbGogAmogAUEobGogAkEDdGpBA3RBQGsL7gcDA3sHfwF8IAAgASACIAMgBCAFIAsQACMJQQAjAEEDdCIDIwNs/AsAIwpB' +
+    'ACMDQQN0IhP8CwAjC0EAIwJBA3QiACMDbPwLACMMQQAgAPwLAANAIAggCUgEQEEgIAkgCGsiACAAQSBOGyEBIAYgAyAIbGohEkEA' +
+    'IQADQCAAQQRqIAFMBEAgEiAAIANsaiICIAIgA2ogAiADQQF0aiACIANBA2xqEAQgBSMPEAFBACECA0AgAkEESARAIBYgAiAHIAAg' +
+    'CGogAmpBA3RqKwMAEAagIRYgAkEBaiECDAELCyMOIAAgE2xqEAwgAEEEaiEADAELCwNAIAAgAUgEQCASIAAgA2xqEAUgBRACIBZB' +
+    'ACAHIAAgCGpBA3RqKwMAEAagIRYjDiAAIBNsaiEQIwNBA3QhDyMNIQQjECERQQAhCwNAIAsjA0gEQP0MAAAAAAAAAAAAAAAAAAAA' +
+    'ACEMIAQgC0EDdCIUav0ABAAhDUEAIQIDQCACIwJIBEAgDCACIA9sIBRqIhUjCGr9AAQAIBEgAkEDdGr9CgMAIg798gH98AEhDCML' +
+    'IBVqIhUgFf0ABAAgDSAO/fIB/fAB/QsEACACQQFqIQIMAQsLIBAgFGogDAJ7/QwAAAAAAADwPwAAAAAAAPA/IA0gDf3yAf3xASME' +
+    'RQ0AGiAN/QwAAAAAAADwPwAAAAAAAPA/IA398QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAA' +
+    'ACAN/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiDP0LBAAjCiAUaiICIAL9AAQAIAz98AH9CwQAIAtBAmohCwwBCwtBACECA0Ag' +
+    'AiMCSARAIAJBA3QiBCMMaiILIAsrAwAgBCARaisDAKA5AwAgAkEBaiECDAELCyAAQQFqIQAMAQsLIBIgARANIAEgCGohCAwBCwtB' +
+    'ACEBA0AgASMASARAQQAhAANAIAAjAUgEQCAKIAEjAWwgAGpBA3RqIwkgAEF8cSICIwBsQQRBAiMDIAJBBGpOGyABbGogACACa2pB' +
+    'A3RqKwMAOQMAIABBAWohAAwBCwsgAUEBaiEBDAELCyAKIwEjAEEDdGxqIgEjAUEDdCIAaiICIwIgAGxqIQNBACEAA0AgACMBSARA' +
+    'IABBA3QiBCABaiMKIARqKwMAOQMAIABBAWohAAwBCwtBACEAA0AgACMCSARAQQAhAQNAIAEjAUgEQCACIAEjAmwgAGpBA3RqIwsg' +
+    'ACMDbCABakEDdGorAwA5AwAgAUEBaiEBDAELCyADIABBA3QiAWojDCABaisDADkDACAAQQFqIQAMAQsLIBYLBQBBgAgLlQIBAX8g' +
+    'AEEAIAEgAiADIAQgCRAAIwBBA3QhCUEAIQADQCAAIAZIBEAgBSAAIAlsaiEBQQRBASAGIABrQQROGyIDQQRGBEAgASABIAlqIAEg' +
+    'CUEBdGogASAJQQNsahAEIAQgByMCIABBA3RsahABBSABEAUgBBACQQAhAQNAIAEjAkgEQCAHIAAjAmwgAWpBA3RqIw8gAUEDdGor' +
+    'AwA5AwAgAUEBaiEBDAELCwtBACEBA0AgASADSARAIAgEQCAAIAFqIQpBACECA0AgAiMBSARAIAggCiMBbCACakEDdGojDSABIwNs' +
+    'IAJqQQN0aisDADkDACACQQFqIQIMAQsLCyABQQFqIQEMAQsLIAAgA2ohAAwBCwsL4QgCDHsHfyMDQQN0IRAjAkEDdCENA0AgDyMD' +
+    'SARA/QwAAAAAAAAAAAAAAAAAAAAAIQH9DAAAAAAAAAAAAAAAAAAAAAAhAv0MAAAAAAAAAAAAAAAAAAAAACED/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIQQgD0EDdCIRIw1q/QAEACEIIw0gEGogEWr9AAQAIQkjDSAQQQF0aiARav0ABAAhCiMNIBBBA2xqIBFq/QAEACELQQAh' +
+    'DgNAIA4jAkgEQCABIA4gEGwgEWoiEyMIav0ABAAiDCMQIA5BA3RqIhL9CgMAIgX98gH98AEhASACIAwgDSASav0KAwAiBv3yAf3w' +
+    'ASECIAMgDCASIA1BAXRq/QoDACIH/fIB/fABIQMgBCAMIBIgDUEDbGr9CgMAIgz98gH98AEhBCMLIBNqIhIgEv0ABAAgCCAF/fIB' +
+    '/fABIAkgBv3yAf3wASAKIAf98gH98AEgCyAM/fIB/fAB/QsEACAOQQFqIQ4MAQsLIAAgEWogAQJ7/QwAAAAAAADwPwAAAAAAAPA/' +
+    'IAggCP3yAf3xASMERQ0AGiAI/QwAAAAAAADwPwAAAAAAAPA/IAj98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAA' +
+    'AAAAAAAAAAAAAAAAACAI/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiAf0LBAAgACAQaiARaiACAnv9DAAAAAAAAPA/AAAAAAAA' +
+    '8D8gCSAJ/fIB/fEBIwRFDQAaIAn9DAAAAAAAAPA/AAAAAAAA8D8gCf3xAf3yASMEQQFGDQAa/QwAAAAAAADwPwAAAAAAAPA//QwA' +
+    'AAAAAAAAAAAAAAAAAAAAIAn9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SC/3yASIC/QsEACAAIBBBAXRqIBFqIAMCe/0MAAAAAAAA8D8A' +
+    'AAAAAADwPyAKIAr98gH98QEjBEUNABogCv0MAAAAAAAA8D8AAAAAAADwPyAK/fEB/fIBIwRBAUYNABr9DAAAAAAAAPA/AAAAAAAA' +
+    '8D/9DAAAAAAAAAAAAAAAAAAAAAAgCv0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIgP9CwQAIAAgEEEDbGogEWogBAJ7/QwAAAAA' +
+    'AADwPwAAAAAAAPA/IAsgC/3yAf3xASMERQ0AGiAL/QwAAAAAAADwPwAAAAAAAPA/IAv98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8A' +
+    'AAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAL/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiBP0LBAAjCiARaiIOIA79AAQAIAH9' +
+    '8AEgAv3wASAD/fABIAT98AH9CwQAIA9BAmohDwwBCwtBACEAA0AgACMCSARAIABBA3QiDiMMaiIPIA8rAwAjECAOaiIOKwMAoCAN' +
+    'IA5qKwMAoCAOIA1BAXRqKwMAoCAOIA1BA2xqKwMAoDkDACAAQQFqIQAMAQsLC4wKAgh/C3sjA0EDdCEHIwBBA3QhCANAIwMgBkEE' +
+    'ak4EQCAGQQN0IQlBACEDA0AjACADQQRqTgRA/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAA' +
+    'AAAAAAAAAAAAACEN/QwAAAAAAAAAAAAAAAAAAAAAIQv9DAAAAAAAAAAAAAAAAAAAAAAhDv0MAAAAAAAAAAAAAAAAAAAAACEP/QwA' +
+    'AAAAAAAAAAAAAAAAAAAAIRD9DAAAAAAAAAAAAAAAAAAAAAAhESAAIANBA3RqIQIjDiAJaiEEQQAhBQNAIAEgBUoEQCAKIAL9CgMA' +
+    'IhMgBP0ABAAiEv3yAf3wASEKIAwgEyAE/QAEECIT/fIB/fABIQwgDSAC/QoDCCIUIBL98gH98AEhDSALIBQgE/3yAf3wASELIA4g' +
+    'Av0KAxAiFCAS/fIB/fABIQ4gDyAUIBP98gH98AEhDyAQIAL9CgMYIhQgEv3yAf3wASEQIBEgFCAT/fIB/fABIREgAiAIaiECIAQg' +
+    'B2ohBCAFQQFqIQUMAQsLIwkgCSMAbGogA0EFdGoiAiAC/QAEACAK/fAB/QsEACACIAL9AAQQIAz98AH9CwQQIAIgAv0ABCAgDf3w' +
+    'Af0LBCAgAiAC/QAEMCAL/fAB/QsEMCACIAL9AARAIA798AH9CwRAIAIgAv0ABFAgD/3wAf0LBFAgAiAC/QAEYCAQ/fAB/QsEYCAC' +
+    'IAL9AARwIBH98AH9CwRwIANBBGohAwwBCwsDQCADIwBIBED9DAAAAAAAAAAAAAAAAAAAAAAhCv0MAAAAAAAAAAAAAAAAAAAAACEL' +
+    'IAAgA0EDdGohBCMOIAlqIQJBACEFA0AgASAFSgRAIAogBP0KAwAiDCAC/QAEAP3yAf3wASEKIAsgDCAC/QAEEP3yAf3wASELIAQg' +
+    'CGohBCACIAdqIQIgBUEBaiEFDAELCyMJIAkjAGxqIANBBXRqIgIgAv0ABAAgCv3wAf0LBAAgAiAC/QAEECAL/fAB/QsEECADQQFq' +
+    'IQMMAQsLIAZBBGohBgwBCwsDQCAGIwNIBEAgBkEDdCEJQQAhAgNAIwAgAkEEak4EQP0MAAAAAAAAAAAAAAAAAAAAACEL/QwAAAAA' +
+    'AAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACENIAAgAkEDdGohAyMOIAlqIQRBACEF' +
+    'A0AgASAFSgRAIAsgA/0KAwAgBP0ABAAiDv3yAf3wASELIAogA/0KAwggDv3yAf3wASEKIAwgA/0KAxAgDv3yAf3wASEMIA0gA/0K' +
+    'AxggDv3yAf3wASENIAMgCGohAyAEIAdqIQQgBUEBaiEFDAELCyMJIAkjAGxqIAJBBHRqIgMgA/0ABAAgC/3wAf0LBAAgAyAD/QAE' +
+    'ECAK/fAB/QsEECADIAP9AAQgIAz98AH9CwQgIAMgA/0ABDAgDf3wAf0LBDAgAkEEaiECDAELCwNAIAIjAEgEQP0MAAAAAAAAAAAA' +
+    'AAAAAAAAACEKIAAgAkEDdGohAyMOIAlqIQRBACEFA0AgASAFSgRAIAogA/0KAwAgBP0ABAD98gH98AEhCiADIAhqIQMgBCAHaiEE' +
+    'IAVBAWohBQwBCwsjCSAJIwBsaiACQQR0aiIDIAP9AAQAIAr98AH9CwQAIAJBAWohAgwBCwsgBkECaiEGDAELCws=';
 
 ;// CONCATENATED MODULE: ./src/nn/kernel/wasm.ts
 
@@ -47161,7 +46797,7 @@ function wasmKernel() {
     const f = new ForwardPlan(rt.view());
     return {
         name: 'wasm-simd-f64',
-        lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0) {
+        lossAndGradient(shape, params, x, y, start, end, grad) {
             const P = params.length;
             if (!g.current(rt, shape, x, y))
                 g.plan(rt, shape, x, y, P);
@@ -47173,7 +46809,7 @@ function wasmKernel() {
             else
                 mem.set(params, po);
             const { inputs, width, outputs } = shape;
-            const loss = ex.lossGrad(g.activation, g.head, inputs, width, outputs, g.paramsAt, g.xAt, g.yAt, start, end, g.gradAt, g.workAt, primeOffset);
+            const loss = ex.lossGrad(g.activation, g.head, inputs, width, outputs, g.paramsAt, g.xAt, g.yAt, start, end, g.gradAt, g.workAt);
             const view = g.grad;
             if (P <= 64)
                 for (let q = 0; q < P; q++)
@@ -47212,7 +46848,7 @@ function computeMetrics(head, K, logits, y, rows, targetStd) {
         loss += rowLoss(head, K, logits, p * K, y[p]);
     loss /= rows;
     const metric = (name) => targetMetric(name, head, K, logits, y, rows, targetStd);
-    if (head === constants_HEAD_LINEAR) {
+    if (head === constants/* HEAD_LINEAR */.hK) {
         return { loss, accuracy: NaN, rmse: metric('rmse'), mae: metric('mae'), maxAbsError: metric('max-abs-error') };
     }
     // A network whose loss is not finite has no accuracy.
@@ -47221,12 +46857,12 @@ function computeMetrics(head, K, logits, y, rows, targetStd) {
 /** One metric without building the whole record (used inside the epoch loop). */
 function targetMetric(name, head, K, logits, y, rows, targetStd) {
     if (name === 'accuracy') {
-        if (head === constants_HEAD_LINEAR)
+        if (head === constants/* HEAD_LINEAR */.hK)
             return NaN;
         let correct = 0;
         for (let p = 0; p < rows; p++) {
             let cls = 0;
-            if (head === constants_HEAD_LOGISTIC) {
+            if (head === constants/* HEAD_LOGISTIC */.U6) {
                 const z = logits[p];
                 if (z !== z)
                     return NaN;
@@ -47246,7 +46882,7 @@ function targetMetric(name, head, K, logits, y, rows, targetStd) {
         }
         return correct / rows;
     }
-    if (head !== constants_HEAD_LINEAR)
+    if (head !== constants/* HEAD_LINEAR */.hK)
         return NaN;
     let se = 0;
     let ae = 0;
@@ -47274,8 +46910,6 @@ function metricValue(m, name) {
     }
 }
 
-// EXTERNAL MODULE: ./src/common/metric.ts
-var common_metric = __nccwpck_require__(8457);
 ;// CONCATENATED MODULE: ./src/nn/network.ts
 
 
@@ -47285,7 +46919,7 @@ function defaultInit(activation) {
 }
 /** Nguyen-Widrow scale β = 0.7 · H^(1/n) (Nguyen & Widrow 1990). @testOnly */
 function nguyenWidrowBeta(width, inputs) {
-    return 0.7 * detmath_detExp(detLog(width) / inputs);
+    return 0.7 * (0,detmath/* detExp */.Xv)((0,detmath/* detLog */.Ep)(width) / inputs);
 }
 /** Standard normal draw by the Marsaglia polar method (no trigonometry, so it stays deterministic). */
 function gaussian(rng) {
@@ -47294,7 +46928,7 @@ function gaussian(rng) {
         const v = 2 * rng.nextDouble() - 1;
         const s = u * u + v * v;
         if (s > 0 && s < 1)
-            return u * Math.sqrt((-2 * detLog(s)) / s);
+            return u * Math.sqrt((-2 * (0,detmath/* detLog */.Ep)(s)) / s);
     }
 }
 /**
@@ -47457,6 +47091,543 @@ function describe(shape) {
         activation: shape.activation,
         head: shape.head,
     };
+}
+
+;// CONCATENATED MODULE: ./src/nn/stall.ts
+/** When a training's error has flattened: the trigger of in-place growth. */
+/** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
+class StallDetector {
+    window;
+    threshold;
+    ring;
+    count = 0;
+    minSoFar = Infinity;
+    errorAtStart = NaN;
+    constructor(window, threshold) {
+        this.window = window;
+        this.threshold = threshold;
+        this.ring = new Float64Array(window + 1);
+    }
+    reset() {
+        this.count = 0;
+        this.minSoFar = Infinity;
+        this.errorAtStart = NaN;
+    }
+    /** Records the error of the current epoch; true when the error has flattened. */
+    record(error) {
+        if (error < this.minSoFar)
+            this.minSoFar = error;
+        const s = this.count++;
+        const w = this.window;
+        this.ring[s % (w + 1)] = this.minSoFar;
+        if (s === 0)
+            this.errorAtStart = this.minSoFar;
+        if (s < w)
+            return false;
+        const drop = this.ring[(s - w) % (w + 1)] - this.minSoFar;
+        if (!(this.errorAtStart > 0))
+            return !(drop > 0);
+        return drop / this.errorAtStart < this.threshold;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/nn/line-search.ts
+/**
+ * A line search for the strong Wolfe conditions (Nocedal & Wright, Numerical Optimization,
+ * 2nd ed. 2006: Algorithm 3.5 with the zoom of Algorithm 3.6, trial steps by the cubic
+ * interpolation of section 3.5, eq. 3.59):
+ *   sufficient decrease  φ(α) ≤ φ(0) + c1·α·φ'(0)
+ *   curvature            |φ'(α)| ≤ c2·|φ'(0)|
+ * where φ(α) = f(x0 + α·d). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so the
+ * same inputs give the same bits on every engine. No allocation after construction.
+ */
+/**
+ * A trial step from interpolation must stay at least this fraction of the bracket away from
+ * both ends, so the bracket shrinks by a fixed factor whatever the cubic says. 0.1 is common
+ * practice with no published source.
+ */
+const BRACKET_MARGIN = 0.1;
+/**
+ * Extrapolation bounds while no bracket exists: the next step lies in
+ * [α_i + 1.1·(α_i − α_{i−1}), α_i + 4·(α_i − α_{i−1})], the factors of the Moré–Thuente line
+ * search (MINPACK-2 dcsrch; from memory).
+ */
+const EXTRAPOLATE_MIN = 1.1;
+const EXTRAPOLATE_MAX = 4;
+const EPSILON = 2.220446049250313e-16;
+function finite(v) {
+    return v - v === 0;
+}
+/**
+ * The minimiser of the cubic through (a, fa, ga) and (b, fb, gb) (Nocedal & Wright eq. 3.59);
+ * NaN when the cubic has no local minimiser or the data are not finite.
+ */
+function cubicMinimizer(a, fa, ga, b, fb, gb) {
+    const d1 = ga + gb - (3 * (fa - fb)) / (a - b);
+    const disc = d1 * d1 - ga * gb;
+    if (!(disc >= 0))
+        return NaN;
+    const root = Math.sqrt(disc);
+    const d2 = b > a ? root : -root;
+    const alpha = b - ((b - a) * (gb + d2 - d1)) / (gb - ga + 2 * d2);
+    return finite(alpha) ? alpha : NaN;
+}
+/** Trial step inside the bracket (lo, hi): the cubic minimiser kept BRACKET_MARGIN away from both ends. */
+function bracketedStep(aLo, fLo, gLo, aHi, fHi, gHi, hiFinite) {
+    const left = aLo < aHi ? aLo : aHi;
+    const right = aLo < aHi ? aHi : aLo;
+    const margin = BRACKET_MARGIN * (right - left);
+    // Without finite values at the far end there is nothing to interpolate: bisect.
+    const c = hiFinite ? cubicMinimizer(aLo, fLo, gLo, aHi, fHi, gHi) : NaN;
+    if (c !== c)
+        return 0.5 * (aLo + aHi);
+    if (c < left + margin)
+        return left + margin;
+    if (c > right - margin)
+        return right - margin;
+    return c;
+}
+/** Next step while the function still falls steeply: the cubic's minimiser beyond α_i, within the extrapolation bounds. */
+function extrapolatedStep(aPrev, fPrev, gPrev, a, f, g) {
+    const span = a - aPrev;
+    const lower = a + EXTRAPOLATE_MIN * span;
+    const upper = a + EXTRAPOLATE_MAX * span;
+    const c = cubicMinimizer(aPrev, fPrev, gPrev, a, f, g);
+    if (c !== c || c > upper)
+        return upper;
+    return c < lower ? lower : c;
+}
+class StrongWolfeLineSearch {
+    settings;
+    /** The best point of the last search (valid when it reported `moved`) and its gradient. */
+    point;
+    gradient;
+    /** Loss, step and directional derivative φ'(α) at `point`. */
+    loss = NaN;
+    alpha = 0;
+    slope = NaN;
+    /** The point, gradient, loss and φ'(α) of the most recent evaluate(). */
+    trialPoint;
+    trialGradient;
+    trialLoss = NaN;
+    trialSlope = NaN;
+    constructor(size, settings) {
+        this.settings = settings;
+        this.point = new Float64Array(size);
+        this.gradient = new Float64Array(size);
+        this.trialPoint = new Float64Array(size);
+        this.trialGradient = new Float64Array(size);
+    }
+    resize(size) {
+        this.point = new Float64Array(size);
+        this.gradient = new Float64Array(size);
+        this.trialPoint = new Float64Array(size);
+        this.trialGradient = new Float64Array(size);
+    }
+    /** φ(α) at x0 + α·d (into trialPoint/trialGradient); sets trialSlope = ∇f(x0 + α·d)ᵀd. */
+    evaluate(x0, d, alpha, objective) {
+        const xt = this.trialPoint;
+        const gt = this.trialGradient;
+        const n = xt.length;
+        for (let q = 0; q < n; q++)
+            xt[q] = x0[q] + alpha * d[q];
+        const f = objective(xt, gt);
+        let slope = 0;
+        for (let q = 0; q < n; q++)
+            slope += gt[q] * d[q];
+        this.trialLoss = f;
+        this.trialSlope = slope;
+        return f;
+    }
+    /** The trial just evaluated becomes the best point (buffers swap, nothing is copied). */
+    keepTrial(alpha) {
+        const p = this.point;
+        const g = this.gradient;
+        this.point = this.trialPoint;
+        this.gradient = this.trialGradient;
+        this.trialPoint = p;
+        this.trialGradient = g;
+        this.loss = this.trialLoss;
+        this.slope = this.trialSlope;
+        this.alpha = alpha;
+    }
+    /**
+     * Searches along the descent direction d from x0, whose loss is f0 and whose directional
+     * derivative is slope0 < 0, starting with step alpha1. Uses at most `budget` evaluations.
+     * A non-finite loss or slope at a trial point counts as a step that is too long.
+     */
+    search(x0, f0, slope0, d, alpha1, objective, budget) {
+        const { c1, c2 } = this.settings;
+        const limit = Math.min(budget, this.settings.maxEvaluations);
+        const curvature = -c2 * slope0;
+        this.loss = f0;
+        this.slope = slope0;
+        this.alpha = 0;
+        let evaluations = 0;
+        const end = (status) => ({
+            status: status === 'failed' && evaluations >= budget ? 'budget' : status,
+            evaluations,
+            moved: this.alpha > 0,
+        });
+        // Algorithm 3.5: widen the step until the bracket [lo, hi] holds a Wolfe point. The best
+        // point so far (lo) is α = 0 at first, then always the lowest loss satisfying Armijo.
+        let aPrev = 0;
+        let fPrev = f0;
+        let gPrev = slope0;
+        let a = alpha1;
+        let aHi;
+        let fHi;
+        let gHi;
+        let hiFinite;
+        for (let i = 1;; i++) {
+            if (evaluations >= limit)
+                return end('failed');
+            const f = this.evaluate(x0, d, a, objective);
+            const g = this.trialSlope;
+            evaluations++;
+            const ok = finite(f) && finite(g);
+            if (!ok || f > f0 + c1 * a * slope0 || (i > 1 && f >= fPrev)) {
+                aHi = a;
+                fHi = f;
+                gHi = g;
+                hiFinite = ok;
+                break;
+            }
+            if ((g < 0 ? -g : g) <= curvature) {
+                this.keepTrial(a);
+                return end('wolfe');
+            }
+            if (g >= 0) {
+                // The minimum lies between the previous step and this one; this one is the lower.
+                aHi = aPrev;
+                fHi = fPrev;
+                gHi = gPrev;
+                hiFinite = true;
+                this.keepTrial(a);
+                break;
+            }
+            this.keepTrial(a);
+            const next = extrapolatedStep(aPrev, fPrev, gPrev, a, f, g);
+            aPrev = a;
+            fPrev = f;
+            gPrev = g;
+            a = next;
+        }
+        // Algorithm 3.6 (zoom): lo is this.alpha with this.loss and this.slope.
+        for (;;) {
+            if (evaluations >= limit)
+                return end('failed');
+            const aLo = this.alpha;
+            const width = aHi > aLo ? aHi - aLo : aLo - aHi;
+            if (width <= EPSILON * (aHi > aLo ? aHi : aLo))
+                return end('failed');
+            const aj = bracketedStep(aLo, this.loss, this.slope, aHi, fHi, gHi, hiFinite);
+            const f = this.evaluate(x0, d, aj, objective);
+            const g = this.trialSlope;
+            evaluations++;
+            const ok = finite(f) && finite(g);
+            if (!ok || f > f0 + c1 * aj * slope0 || f >= this.loss) {
+                aHi = aj;
+                fHi = f;
+                gHi = g;
+                hiFinite = ok;
+                continue;
+            }
+            if ((g < 0 ? -g : g) <= curvature) {
+                this.keepTrial(aj);
+                return end('wolfe');
+            }
+            if (g * (aHi - aLo) >= 0) {
+                aHi = aLo;
+                fHi = this.loss;
+                gHi = this.slope;
+                hiFinite = true;
+            }
+            this.keepTrial(aj);
+        }
+    }
+}
+
+;// CONCATENATED MODULE: ./src/nn/lbfgs.ts
+/**
+ * Full-batch limited-memory BFGS (Liu & Nocedal 1989; Nocedal & Wright, Numerical Optimization,
+ * 2nd ed. 2006, Algorithm 7.5), with the two-loop recursion of Algorithm 7.4, the initial
+ * Hessian H0 = γ·I with γ = sᵀy / yᵀy of the newest pair (eq. 7.20), and a strong Wolfe line
+ * search (line-search.ts). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so a run
+ * gives the same bits on every engine. All work arrays are allocated in the constructor or
+ * on resize, none inside an iteration.
+ */
+
+/**
+ * memory 10, gradientTolerance 1e-5, lossTolerance 2.22e-9 (factr 1e7 × machine epsilon, same
+ * formula) and 20 line-search evaluations are SciPy's L-BFGS-B defaults (scipy.optimize
+ * fmin_l_bfgs_b: m, pgtol, factr, maxls; checked in its documentation). c1 = 1e-4 and c2 = 0.9
+ * are the values Nocedal & Wright recommend for quasi-Newton methods (section 3.1, from memory),
+ * and SciPy's line_search defaults (checked). Nocedal & Wright suggest m between 3 and 20 (from
+ * memory); 10 is SciPy's choice.
+ * @testOnly
+ */
+const LBFGS_DEFAULTS = {
+    memory: 10,
+    c1: 1e-4,
+    c2: 0.9,
+    gradientTolerance: 1e-5,
+    lossTolerance: 2.220446049250313e-9,
+    maxLineSearchEvaluations: 20,
+};
+/**
+ * A pair is kept only when sᵀy > ε·‖s‖·‖y‖ (ε the machine epsilon): the cosine between s and
+ * y must exceed the rounding level of the dot product itself. A strong Wolfe step always
+ * gives sᵀy ≥ (1 − c2)·|∇fᵀs| > 0, so this only drops pairs from steps accepted without the
+ * curvature condition (budget ran out) or lost to rounding, where 1/sᵀy would be noise and the
+ * inverse-Hessian approximation could stop being positive definite.
+ */
+const PAIR_COSINE_MIN = 2.220446049250313e-16;
+function dot(a, ao, b, bo, n) {
+    let s = 0;
+    for (let q = 0; q < n; q++)
+        s += a[ao + q] * b[bo + q];
+    return s;
+}
+class Lbfgs {
+    options;
+    stats = { iterations: 0, evaluations: 0, skippedPairs: 0, restarts: 0 };
+    n;
+    m;
+    /** Ring of pairs: pair i occupies [i·n, (i+1)·n) of s and y. */
+    s;
+    y;
+    rho;
+    coef;
+    count = 0;
+    newest = -1;
+    gamma = 1;
+    d;
+    /** The point whose loss and gradient are cached, so an iteration starts without evaluating. */
+    x;
+    g;
+    f = NaN;
+    known = false;
+    search;
+    constructor(size, options = {}) {
+        const o = { ...LBFGS_DEFAULTS, ...options };
+        if (!Number.isInteger(o.memory) || o.memory < 1)
+            throw new RangeError(`memory must be a whole number >= 1, got ${o.memory}`);
+        if (!(0 < o.c1 && o.c1 < o.c2 && o.c2 < 1))
+            throw new RangeError(`need 0 < c1 < c2 < 1, got c1 ${o.c1}, c2 ${o.c2}`);
+        if (!(o.maxLineSearchEvaluations >= 1))
+            throw new RangeError('maxLineSearchEvaluations must be >= 1');
+        this.options = o;
+        this.n = size;
+        this.m = o.memory;
+        this.s = new Float64Array(this.m * size);
+        this.y = new Float64Array(this.m * size);
+        this.rho = new Float64Array(this.m);
+        this.coef = new Float64Array(this.m);
+        this.d = new Float64Array(size);
+        this.x = new Float64Array(size);
+        this.g = new Float64Array(size);
+        this.search = new StrongWolfeLineSearch(size, {
+            c1: o.c1,
+            c2: o.c2,
+            maxEvaluations: o.maxLineSearchEvaluations,
+        });
+    }
+    /**
+     * Hands over an evaluation the caller already made at x, so the next iteration need not repeat
+     * it. The curvature pairs stay; call reset() as well if x is unrelated to the previous point.
+     */
+    setPoint(x, loss, grad) {
+        this.x.set(x);
+        this.g.set(grad);
+        this.f = loss;
+        this.known = true;
+    }
+    /**
+     * One iteration from x (updated in place): direction by the two-loop recursion, then a strong
+     * Wolfe line search. Uses at most maxEvaluations evaluations (one more at the start when no
+     * loss is known for x). If the caller changed x since the last call, the history is dropped
+     * and x is evaluated afresh. x never gets worse: on 'stuck' it holds the best point found.
+     */
+    iterate(x, objective, maxEvaluations) {
+        let evaluations = 0;
+        if (!(maxEvaluations >= 1))
+            return { evaluations, loss: this.known ? this.f : NaN, status: 'progress' };
+        if (!this.known || !this.isCurrent(x)) {
+            if (this.known)
+                this.reset();
+            this.x.set(x);
+            this.f = objective(this.x, this.g);
+            this.known = true;
+            evaluations++;
+            this.stats.evaluations++;
+        }
+        const n = this.n;
+        const f0 = this.f;
+        const gInf = this.gradientInfNorm();
+        if (!(f0 - f0 === 0) || !(gInf - gInf === 0))
+            return { evaluations, loss: f0, status: 'stuck' };
+        if (gInf <= this.options.gradientTolerance)
+            return { evaluations, loss: f0, status: 'converged' };
+        this.stats.iterations++;
+        for (;;) {
+            let quasiNewton = this.count > 0;
+            this.direction();
+            let slope0 = dot(this.g, 0, this.d, 0, n);
+            if (!(slope0 < 0) && quasiNewton) {
+                // Rounding made the quasi-Newton direction useless: fall back on steepest descent.
+                this.reset();
+                quasiNewton = false;
+                this.direction();
+                slope0 = dot(this.g, 0, this.d, 0, n);
+            }
+            if (!(slope0 < 0))
+                return { evaluations, loss: this.f, status: 'stuck' };
+            const budget = maxEvaluations - evaluations;
+            if (budget < 1)
+                return { evaluations, loss: this.f, status: 'progress' };
+            // Quasi-Newton steps are well scaled, so α = 1 comes first (Nocedal & Wright, section 3.5).
+            // Without curvature information the first trial moves the parameters by a Euclidean length
+            // of 1 (as Liu & Nocedal's LBFGS code does, from memory): the summed loss's gradient grows
+            // with the row count, so α = 1 on −∇f would make the step depend on the data size, while a
+            // unit move is on the scale of Nguyen–Widrow initial weights.
+            const alpha1 = this.count > 0 ? 1 : 1 / Math.sqrt(dot(this.d, 0, this.d, 0, n));
+            const fOld = this.f;
+            const r = this.search.search(this.x, fOld, slope0, this.d, alpha1, objective, budget);
+            evaluations += r.evaluations;
+            this.stats.evaluations += r.evaluations;
+            if (r.moved)
+                this.accept(x, r.status !== 'failed');
+            if (r.status === 'wolfe') {
+                const fNew = this.f;
+                const scale = Math.max(fOld < 0 ? -fOld : fOld, fNew < 0 ? -fNew : fNew, 1);
+                const converged = this.gradientInfNorm() <= this.options.gradientTolerance ||
+                    (this.options.lossTolerance > 0 && (fOld - fNew) / scale <= this.options.lossTolerance);
+                return { evaluations, loss: this.f, status: converged ? 'converged' : 'progress' };
+            }
+            if (r.status === 'budget')
+                return { evaluations, loss: this.f, status: 'progress' };
+            // The line search failed. With curvature pairs, they may be what misleads: drop them and
+            // try steepest descent from the best point so far. Without, there is nowhere to go.
+            if (!quasiNewton)
+                return { evaluations, loss: this.f, status: 'stuck' };
+            this.reset();
+            this.stats.restarts++;
+        }
+    }
+    /** Forgets the curvature pairs (after the parameter vector changed meaning); the cached point stays. */
+    reset() {
+        this.count = 0;
+        this.newest = -1;
+        this.gamma = 1;
+    }
+    /**
+     * Carries over to a resized parameter vector (map[old] = new index, −1 dropped). Removing or
+     * adding a neuron changes the function, so old pairs are not secants of the new one: the
+     * history is dropped and the next iteration evaluates the new point.
+     */
+    resize(_map, newSize) {
+        this.reset();
+        this.known = false;
+        this.f = NaN;
+        if (newSize === this.n)
+            return;
+        this.n = newSize;
+        this.s = new Float64Array(this.m * newSize);
+        this.y = new Float64Array(this.m * newSize);
+        this.d = new Float64Array(newSize);
+        this.x = new Float64Array(newSize);
+        this.g = new Float64Array(newSize);
+        this.search.resize(newSize);
+    }
+    /** Curvature pairs currently held. */
+    get pairs() {
+        return this.count;
+    }
+    isCurrent(x) {
+        const c = this.x;
+        if (x.length !== c.length)
+            return false;
+        for (let q = 0; q < c.length; q++)
+            if (x[q] !== c[q])
+                return false;
+        return true;
+    }
+    gradientInfNorm() {
+        const g = this.g;
+        let m = 0;
+        for (let q = 0; q < g.length; q++) {
+            const a = g[q] < 0 ? -g[q] : g[q];
+            if (a > m || a !== a)
+                m = a;
+        }
+        return m;
+    }
+    /** d = −H·g by the two-loop recursion (Algorithm 7.4), newest pair first; −g without pairs. */
+    direction() {
+        const { n, m, s, y, rho, coef, d, g } = this;
+        for (let q = 0; q < n; q++)
+            d[q] = g[q];
+        for (let k = 0; k < this.count; k++) {
+            const i = (this.newest - k + m) % m;
+            const a = rho[i] * dot(s, i * n, d, 0, n);
+            coef[i] = a;
+            const o = i * n;
+            for (let q = 0; q < n; q++)
+                d[q] -= a * y[o + q];
+        }
+        const gamma = this.gamma;
+        for (let q = 0; q < n; q++)
+            d[q] *= gamma;
+        for (let k = this.count - 1; k >= 0; k--) {
+            const i = (this.newest - k + m) % m;
+            const b = rho[i] * dot(y, i * n, d, 0, n);
+            const c = coef[i] - b;
+            const o = i * n;
+            for (let q = 0; q < n; q++)
+                d[q] += c * s[o + q];
+        }
+        for (let q = 0; q < n; q++)
+            d[q] = -d[q];
+    }
+    /** Moves to the line search's best point; stores the pair s = x₊ − x, y = g₊ − g when asked and acceptable. */
+    accept(out, storePair) {
+        const { n, m } = this;
+        const xn = this.search.point;
+        const gn = this.search.gradient;
+        if (storePair) {
+            let sy = 0;
+            let ss = 0;
+            let yy = 0;
+            for (let q = 0; q < n; q++) {
+                const sq = xn[q] - this.x[q];
+                const yq = gn[q] - this.g[q];
+                sy += sq * yq;
+                ss += sq * sq;
+                yy += yq * yq;
+            }
+            if (sy > PAIR_COSINE_MIN * Math.sqrt(ss) * Math.sqrt(yy)) {
+                const i = (this.newest + 1) % m;
+                const o = i * n;
+                for (let q = 0; q < n; q++) {
+                    this.s[o + q] = xn[q] - this.x[q];
+                    this.y[o + q] = gn[q] - this.g[q];
+                }
+                this.rho[i] = 1 / sy;
+                this.gamma = sy / yy;
+                this.newest = i;
+                if (this.count < m)
+                    this.count++;
+            }
+            else {
+                this.stats.skippedPairs++;
+            }
+        }
+        this.x.set(xn);
+        this.g.set(gn);
+        this.f = this.search.loss;
+        out.set(xn);
+    }
 }
 
 ;// CONCATENATED MODULE: ./src/nn/optimizers.ts
@@ -47623,45 +47794,135 @@ function makeUpdater(kind, size, settings) {
     return new Momentum(size, settings.learningRate ?? BACKPROP_DEFAULTS.learningRate, settings.momentum ?? BACKPROP_DEFAULTS.momentum);
 }
 
-;// CONCATENATED MODULE: ./src/nn/stall.ts
-/** When a training's error has flattened: the trigger of in-place growth. */
-/** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
-class StallDetector {
-    window;
-    threshold;
-    ring;
-    count = 0;
-    minSoFar = Infinity;
-    errorAtStart = NaN;
-    constructor(window, threshold) {
-        this.window = window;
-        this.threshold = threshold;
-        this.ring = new Float64Array(window + 1);
+;// CONCATENATED MODULE: ./src/nn/steppers.ts
+
+
+/** A first-order update: evaluate once, then step along the gradient. */
+class FirstOrder {
+    updater;
+    result = { evaluations: 1, loss: 0, status: 'progress' };
+    constructor(updater) {
+        this.updater = updater;
     }
-    reset() {
-        this.count = 0;
-        this.minSoFar = Infinity;
-        this.errorAtStart = NaN;
+    step(params, objective, grad, _budget, rows) {
+        const loss = objective(params, grad);
+        // A non-finite loss leaves the weights untouched; the trainer stops the run as diverged.
+        if (Number.isFinite(loss))
+            this.updater.step(params, grad, loss, rows);
+        this.result.loss = loss;
+        return this.result;
     }
-    /** Records the error of the current epoch; true when the error has flattened. */
-    record(error) {
-        if (error < this.minSoFar)
-            this.minSoFar = error;
-        const s = this.count++;
-        const w = this.window;
-        this.ring[s % (w + 1)] = this.minSoFar;
-        if (s === 0)
-            this.errorAtStart = this.minSoFar;
-        if (s < w)
-            return false;
-        const drop = this.ring[(s - w) % (w + 1)] - this.minSoFar;
-        if (!(this.errorAtStart > 0))
-            return !(drop > 0);
-        return drop / this.errorAtStart < this.threshold;
+    resize(map, newSize) {
+        this.updater.resize(map, newSize);
     }
+    resetRange(from, to) {
+        this.updater.resetRange(from, to);
+    }
+}
+/** L-BFGS: each step is one iteration with its strong Wolfe line search. */
+class QuasiNewton {
+    lbfgs;
+    constructor(size) {
+        this.lbfgs = new Lbfgs(size);
+    }
+    step(params, objective, _grad, budget) {
+        return this.lbfgs.iterate(params, objective, budget);
+    }
+    resize(map, newSize) {
+        this.lbfgs.resize(map, newSize);
+    }
+    resetRange() {
+        // The curvature pairs describe the whole vector: after surgery they no longer hold.
+        this.lbfgs.reset();
+    }
+}
+function makeStepper(optimizer, size, settings) {
+    return optimizer === 'lbfgs' ? new QuasiNewton(size) : new FirstOrder(makeUpdater(optimizer, size, settings));
+}
+
+;// CONCATENATED MODULE: ./src/nn/surgery.ts
+
+
+
+/** Hidden activations of every training row (rows × width); the logits go into `logits`. */
+function hiddenActivations(kernel, shape, params, data, logits) {
+    const hidden = new Float64Array(data.trainRows * shape.width);
+    kernel.forward(shape, params, data.xTrain, data.trainRows, logits, hidden);
+    return hidden;
+}
+function columnMeans(hidden, rows, width) {
+    const mean = new Float64Array(width);
+    for (let p = 0; p < rows; p++)
+        for (let j = 0; j < width; j++)
+            mean[j] += hidden[p * width + j];
+    for (let j = 0; j < width; j++)
+        mean[j] /= rows;
+    return mean;
+}
+/** Appends a hidden neuron with fresh input weights (as `init` draws them) and zero outgoing weights. */
+function withNeuronAdded(shape, params, init, rng) {
+    const map = resizeIndexMap(shape, -1);
+    const grown = resizeParams(params, shape, -1);
+    const next = { ...shape, width: shape.width + 1 };
+    initHiddenNeuron(grown, layoutOf(next), next.inputs, next.width, shape.width, init, rng);
+    return { shape: next, params: grown, map };
+}
+/** Removes hidden neuron j, folding its mean activation over the training rows into the output biases. */
+function withNeuronRemoved(kernel, shape, params, data, j) {
+    if (!Number.isInteger(j) || j < 0 || j >= shape.width) {
+        throw new RangeError(`no hidden neuron ${j} in a network of width ${shape.width}`);
+    }
+    const logits = new Float64Array(data.trainRows * shape.outputs);
+    const mean = columnMeans(hiddenActivations(kernel, shape, params, data, logits), data.trainRows, shape.width);
+    const lay = layoutOf(shape);
+    const folded = params.slice();
+    for (let k = 0; k < shape.outputs; k++)
+        folded[lay.b2 + k] += folded[lay.w2 + j * shape.outputs + k] * mean[j];
+    return {
+        shape: { ...shape, width: shape.width - 1 },
+        params: resizeParams(folded, shape, j),
+        map: resizeIndexMap(shape, j),
+    };
+}
+/** Compensated-ablation loss increase per hidden neuron (mean per training row), in one pass. */
+function saliencies(kernel, shape, params, data, head) {
+    const H = shape.width;
+    const K = shape.outputs;
+    const N = data.trainRows;
+    const logits = new Float64Array(N * K);
+    const hidden = hiddenActivations(kernel, shape, params, data, logits);
+    const mean = columnMeans(hidden, N, H);
+    const lay = layoutOf(shape);
+    const out = new Float64Array(H);
+    const z = new Float64Array(K);
+    const y = data.yTrain;
+    for (let p = 0; p < N; p++) {
+        const base = rowLoss(head, K, logits, p * K, y[p]);
+        for (let j = 0; j < H; j++) {
+            const d = hidden[p * H + j] - mean[j];
+            for (let k = 0; k < K; k++)
+                z[k] = logits[p * K + k] - d * params[lay.w2 + j * K + k];
+            out[j] += rowLoss(head, K, z, 0, y[p]) - base;
+        }
+    }
+    for (let j = 0; j < H; j++)
+        out[j] /= N;
+    return out;
 }
 
 ;// CONCATENATED MODULE: ./src/nn/trainer.ts
+/**
+ * One network and its optimiser state while it trains, grows and shrinks.
+ *
+ * Training follows the exact gradient of the loss it reports (plus the L2 penalty on the weights,
+ * when there is one). The steering rows (validation rows, or the training rows when there are
+ * none) decide when a training stops: when their loss has not really improved for `patience`
+ * epochs, when the optimiser has converged, or at max-epochs. The network handed back is the one
+ * with the lowest steering loss among those that met the target on the steering rows (or, when
+ * none did, among all checked): early stopping with the best weights restored. The judging rows
+ * are never read here.
+ */
+
 
 
 
@@ -47671,13 +47932,10 @@ class StallDetector {
 
 
 /**
- * Flat-spot elimination (Fahlman 1988, "An empirical study of learning speed in
- * back-propagation networks", CMU-CS-88-162; 0.1 is the sigmoid-prime offset of the
- * Cascade-Correlation reference code): a saturated tanh or logistic neuron has a derivative of
- * exactly 0 in floating point and would never move again. Measured on XOR (width 2, tanh,
- * iRprop+, 2,000 epochs, 100 seeds): 50 reach 100% with the exact gradient, 85 with it.
+ * A steering loss counts as improved when it falls by more than this fraction of the last
+ * improved value; smaller gains do not reset the patience (an engineering choice, no source).
  */
-const FLAT_SPOT_OFFSET = 0.1;
+const MIN_IMPROVEMENT = 1e-3;
 /** The output head the dataset calls for. */
 function headFor(data) {
     if (data.task === 'regression')
@@ -47689,16 +47947,25 @@ class NetworkTrainer {
     options;
     kernel;
     shape;
+    layout;
     params;
     grad;
-    updater;
+    /** The best network checked so far, and the best that met the target (see the header). */
+    best;
+    bestMet;
+    stepper;
     init;
     stall;
     head;
     logitsTrain;
-    logitsValidation;
+    logitsSteer;
     batch;
-    primeOffset;
+    batchStart = 0;
+    batchEnd = 0;
+    /** The loss over all training rows with the weight penalty, and its gradient: what the optimiser minimises. */
+    objective;
+    /** The same over rows [batchStart, batchEnd) (mini-batch Adam). */
+    batchObjective;
     constructor(data, width, options, rng, kernel, settings) {
         this.data = data;
         this.options = options;
@@ -47712,6 +47979,8 @@ class NetworkTrainer {
         }
         if (!(options.checkEvery >= 1))
             throw new RangeError(`checkEvery must be >= 1, got ${options.checkEvery}`);
+        if (!(options.weightDecay >= 0))
+            throw new RangeError(`weightDecay must be >= 0, got ${options.weightDecay}`);
         this.shape = {
             inputs: data.inputs,
             width,
@@ -47719,213 +47988,184 @@ class NetworkTrainer {
             activation: options.activation,
             head: headFor(data),
         };
+        this.layout = layoutOf(this.shape);
         this.head = reference_headCode(this.shape.head);
         this.init = options.init ?? defaultInit(options.activation);
         this.params = initParams(this.shape, this.init, rng);
         this.grad = new Float64Array(this.params.length);
-        this.updater = makeUpdater(options.optimizer, this.params.length, settings);
-        this.primeOffset = options.primeOffset ?? FLAT_SPOT_OFFSET;
+        this.best = new Float64Array(this.params.length);
+        this.bestMet = new Float64Array(this.params.length);
+        this.stepper = makeStepper(options.optimizer, this.params.length, settings);
         this.stall = options.stall ? new StallDetector(options.stall.window, options.stall.threshold) : null;
         this.logitsTrain = new Float64Array(data.trainRows * data.outputs);
-        this.logitsValidation = new Float64Array(data.validationRows * data.outputs);
+        const steerRows = data.validationRows > 0 ? data.validationRows : data.trainRows;
+        this.logitsSteer = new Float64Array(steerRows * data.outputs);
         const b = settings.batchSize ?? 0;
         this.batch = options.optimizer === 'adam' && b > 0 && b < data.trainRows ? b : data.trainRows;
+        this.objective = (x, g) => this.penalised(x, g, this.lossOver(x, g, 0, this.data.trainRows));
+        this.batchObjective = (x, g) => this.penalised(x, g, this.lossOver(x, g, this.batchStart, this.batchEnd));
     }
     get network() {
         return describe(this.shape);
     }
-    /** The live parameter vector (layout in network.ts); for tests and benchmarks. */
+    /** The live parameter vector (layout in kernel/layout.ts); for tests and benchmarks. */
     get parameters() {
         return this.params;
     }
+    lossOver(x, g, start, end) {
+        return this.kernel.lossAndGradient(this.shape, x, this.data.xTrain, this.data.yTrain, start, end, g);
+    }
+    /** Adds (λ/2)·Σw² over the weights (not the biases) to `loss` and λw to their gradient. */
+    penalised(x, g, loss) {
+        const lambda = this.options.weightDecay;
+        if (lambda === 0)
+            return loss;
+        const { w1, b1, w2, b2 } = this.layout;
+        let squares = 0;
+        for (let q = w1; q < b1; q++) {
+            squares += x[q] * x[q];
+            g[q] += lambda * x[q];
+        }
+        for (let q = w2; q < b2; q++) {
+            squares += x[q] * x[q];
+            g[q] += lambda * x[q];
+        }
+        return loss + 0.5 * lambda * squares;
+    }
+    /** One epoch: a full-batch optimiser step, or one pass of mini-batch Adam steps. */
+    epoch(budget) {
+        const N = this.data.trainRows;
+        if (this.batch >= N)
+            return this.stepper.step(this.params, this.objective, this.grad, budget, N);
+        let loss = 0;
+        for (let start = 0; start < N; start += this.batch) {
+            this.batchStart = start;
+            this.batchEnd = Math.min(N, start + this.batch);
+            const part = this.stepper.step(this.params, this.batchObjective, this.grad, 1, this.batchEnd - start).loss;
+            loss += part;
+            if (!Number.isFinite(part))
+                break;
+        }
+        return { evaluations: 1, loss, status: 'progress' };
+    }
     run(maxEpochs) {
-        const { data, kernel, shape, options } = this;
-        const N = data.trainRows;
-        const x = data.xTrain;
-        const y = data.yTrain;
-        const batch = this.batch;
-        const checkEvery = options.checkEvery;
+        const { options } = this;
         let stop = 'max-epochs';
         let epochs = 0;
-        for (let e = 1; e <= maxEpochs; e++) {
-            let loss = 0;
-            if (batch >= N) {
-                loss = this.fullBatchEpoch();
-                if (!Number.isFinite(loss)) {
-                    stop = 'diverged';
-                    break;
-                }
+        let nextCheck = options.checkEvery;
+        let reference = Infinity;
+        let lastImprovement = 0;
+        let bestLoss = Infinity;
+        let bestMetLoss = Infinity;
+        this.stall?.reset();
+        while (epochs < maxEpochs) {
+            const step = this.epoch(maxEpochs - epochs);
+            epochs += step.evaluations;
+            if (!Number.isFinite(step.loss)) {
+                stop = 'diverged';
+                break;
             }
-            else {
-                for (let start = 0; start < N; start += batch) {
-                    const end = Math.min(N, start + batch);
-                    const part = kernel.lossAndGradient(shape, this.params, x, y, start, end, this.grad, this.primeOffset);
-                    loss += part;
-                    if (!Number.isFinite(part))
-                        break;
-                    this.updater.step(this.params, this.grad, part, end - start);
-                }
-                if (!Number.isFinite(loss)) {
-                    stop = 'diverged';
-                    break;
-                }
+            const stalled = this.stall !== null && this.stall.record(step.loss / this.data.trainRows);
+            const ended = step.status !== 'progress';
+            if (epochs < nextCheck && epochs < maxEpochs && !ended && !stalled)
+                continue;
+            nextCheck = epochs + options.checkEvery;
+            if (options.interrupted?.() === true) {
+                stop = 'interrupted';
+                break;
             }
-            epochs = e;
-            if (e % checkEvery === 0 || e === maxEpochs) {
-                if (options.interrupted?.() === true) {
-                    stop = 'interrupted';
-                    break;
-                }
-                const m = this.targetMetricOnJudgedRows();
-                if ((0,common_metric/* meetsThreshold */.M0)(m, options.target)) {
-                    stop = 'reached';
-                    break;
-                }
-                if (!Number.isFinite(m)) {
-                    stop = 'diverged';
-                    break;
-                }
+            const steer = this.steeringMetrics();
+            const metric = metricValue(steer, options.target.metric);
+            if (!Number.isFinite(steer.loss) || !Number.isFinite(metric)) {
+                stop = 'diverged';
+                break;
             }
-            if (this.stall !== null && this.stall.record(loss / N)) {
+            if (steer.loss < reference * (1 - MIN_IMPROVEMENT)) {
+                reference = steer.loss;
+                lastImprovement = epochs;
+            }
+            if (steer.loss < bestLoss) {
+                bestLoss = steer.loss;
+                this.best.set(this.params);
+            }
+            if ((0,common_metric/* meetsThreshold */.M0)(metric, options.target) && steer.loss < bestMetLoss) {
+                bestMetLoss = steer.loss;
+                this.bestMet.set(this.params);
+            }
+            if (ended || stalled || epochs - lastImprovement >= options.patience) {
                 stop = 'stalled';
                 break;
             }
         }
+        if (stop !== 'diverged' && stop !== 'interrupted') {
+            if (bestMetLoss < Infinity)
+                this.params.set(this.bestMet);
+            else if (bestLoss < Infinity)
+                this.params.set(this.best);
+        }
         const rec = this.evaluate();
-        if (stop !== 'diverged' && !Number.isFinite(rec.trainLoss))
-            stop = 'diverged';
-        return { ...rec, epochs, stop };
+        if (stop === 'diverged' || stop === 'interrupted')
+            return { ...rec, epochs, stop };
+        if (!Number.isFinite(rec.trainLoss))
+            return { ...rec, epochs, stop: 'diverged' };
+        return { ...rec, epochs, stop: rec.stop === 'reached' ? 'reached' : stop };
     }
     trainMetrics() {
         const { data, shape } = this;
         this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
         return computeMetrics(this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, data.encoding.target.std);
     }
-    validationMetrics() {
+    /** Metrics on the steering rows: the validation rows, or the training rows when there are none. */
+    steeringMetrics() {
         const { data, shape } = this;
         if (data.validationRows === 0)
-            return null;
-        this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsValidation, null);
-        return computeMetrics(this.head, shape.outputs, this.logitsValidation, data.yValidation, data.validationRows, data.encoding.target.std);
+            return this.trainMetrics();
+        this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsSteer, null);
+        return computeMetrics(this.head, shape.outputs, this.logitsSteer, data.yValidation, data.validationRows, data.encoding.target.std);
     }
-    targetMetricOnJudgedRows() {
-        const { data, shape } = this;
-        const name = this.options.target.metric;
-        const std = data.encoding.target.std;
-        if (data.validationRows > 0) {
-            this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsValidation, null);
-            return targetMetric(name, this.head, shape.outputs, this.logitsValidation, data.yValidation, data.validationRows, std);
-        }
-        this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
-        return targetMetric(name, this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, std);
-    }
-    /** Every metric on the training rows and on the judged rows (validation, or training when there are none). */
     /**
-     * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no target
-     * check). Returns the summed loss; a non-finite loss leaves the weights untouched.
+     * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no check).
+     * Returns the loss; a non-finite loss leaves the weights untouched. For the engine benchmark.
      */
     fullBatchEpoch() {
-        const { data } = this;
-        const N = data.trainRows;
-        const loss = this.kernel.lossAndGradient(this.shape, this.params, data.xTrain, data.yTrain, 0, N, this.grad, this.primeOffset);
-        if (Number.isFinite(loss))
-            this.updater.step(this.params, this.grad, loss, N);
-        return loss;
+        return this.stepper.step(this.params, this.objective, this.grad, 1, this.data.trainRows).loss;
     }
+    /** Metrics on the training rows and on the steering rows. */
     metrics() {
-        const train = this.trainMetrics();
-        return { train, validation: this.validationMetrics() ?? train };
+        return { train: this.trainMetrics(), validation: this.steeringMetrics() };
     }
     evaluate() {
         const { train, validation } = this.metrics();
         const metric = this.options.target.metric;
         const trainMetric = metricValue(train, metric);
-        const validationMetric = metricValue(validation, metric);
+        const steeringMetric = metricValue(validation, metric);
         let stop = 'max-epochs';
         if (!Number.isFinite(train.loss))
             stop = 'diverged';
-        else if ((0,common_metric/* meetsThreshold */.M0)(validationMetric, this.options.target))
+        else if ((0,common_metric/* meetsThreshold */.M0)(steeringMetric, this.options.target))
             stop = 'reached';
-        return { epochs: 0, stop, trainLoss: train.loss, trainMetric, validationMetric };
+        return { epochs: 0, stop, trainLoss: train.loss, trainMetric, steeringMetric };
     }
     addNeuron(rng) {
-        const old = this.shape;
-        const map = resizeIndexMap(old, -1);
-        const params = resizeParams(this.params, old, -1);
-        const shape = { ...old, width: old.width + 1 };
-        initHiddenNeuron(params, layoutOf(shape), shape.inputs, shape.width, old.width, this.init, rng);
-        this.replace(shape, params, map);
+        this.replace(withNeuronAdded(this.shape, this.params, this.init, rng));
     }
     removeNeuron(j) {
-        const old = this.shape;
-        if (!Number.isInteger(j) || j < 0 || j >= old.width)
-            throw new RangeError(`no hidden neuron ${j} in a network of width ${old.width}`);
-        const mean = this.hiddenMeans();
-        const lay = layoutOf(old);
-        const params = this.params.slice();
-        for (let k = 0; k < old.outputs; k++)
-            params[lay.b2 + k] += params[lay.w2 + j * old.outputs + k] * mean[j];
-        const map = resizeIndexMap(old, j);
-        const shape = { ...old, width: old.width - 1 };
-        this.replace(shape, resizeParams(params, old, j), map);
-        const to = layoutOf(shape);
-        this.updater.resetRange(to.b2, to.b2 + shape.outputs);
+        this.replace(withNeuronRemoved(this.kernel, this.shape, this.params, this.data, j));
+        // The output biases absorbed the removed neuron: what the optimiser learnt about them is stale.
+        this.stepper.resetRange(this.layout.b2, this.layout.b2 + this.shape.outputs);
     }
-    replace(shape, params, map) {
-        this.shape = shape;
-        this.params = params;
-        this.grad = new Float64Array(params.length);
-        this.updater.resize(map, params.length);
+    replace(r) {
+        this.shape = r.shape;
+        this.layout = layoutOf(r.shape);
+        this.params = r.params;
+        this.grad = new Float64Array(r.params.length);
+        this.best = new Float64Array(r.params.length);
+        this.bestMet = new Float64Array(r.params.length);
+        this.stepper.resize(r.map, r.params.length);
         this.stall?.reset();
     }
-    /** Hidden activations of every training row (rows × width) and their logits. */
-    hiddenActivations() {
-        const { data, shape } = this;
-        const hidden = new Float64Array(data.trainRows * shape.width);
-        this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, hidden);
-        return hidden;
-    }
-    hiddenMeans() {
-        const H = this.shape.width;
-        const N = this.data.trainRows;
-        const hidden = this.hiddenActivations();
-        const mean = new Float64Array(H);
-        for (let p = 0; p < N; p++)
-            for (let j = 0; j < H; j++)
-                mean[j] += hidden[p * H + j];
-        for (let j = 0; j < H; j++)
-            mean[j] /= N;
-        return mean;
-    }
     saliency() {
-        const { shape, data } = this;
-        const H = shape.width;
-        const K = shape.outputs;
-        const N = data.trainRows;
-        const hidden = this.hiddenActivations();
-        const logits = this.logitsTrain;
-        const mean = new Float64Array(H);
-        for (let p = 0; p < N; p++)
-            for (let j = 0; j < H; j++)
-                mean[j] += hidden[p * H + j];
-        for (let j = 0; j < H; j++)
-            mean[j] /= N;
-        const lay = layoutOf(shape);
-        const out = new Float64Array(H);
-        const z = new Float64Array(K);
-        const y = data.yTrain;
-        for (let p = 0; p < N; p++) {
-            const base = rowLoss(this.head, K, logits, p * K, y[p]);
-            for (let j = 0; j < H; j++) {
-                const d = hidden[p * H + j] - mean[j];
-                for (let k = 0; k < K; k++)
-                    z[k] = logits[p * K + k] - d * this.params[lay.w2 + j * K + k];
-                out[j] += rowLoss(this.head, K, z, 0, y[p]) - base;
-            }
-        }
-        for (let j = 0; j < H; j++)
-            out[j] /= N;
-        return out;
+        return saliencies(this.kernel, this.shape, this.params, this.data, this.head);
     }
     snapshot() {
         return toJson(this.shape, this.params);
@@ -47934,37 +48174,32 @@ class NetworkTrainer {
     load(net) {
         const { shape, params } = network_fromJson(net);
         const s = this.shape;
-        if (shape.inputs !== s.inputs ||
-            shape.width !== s.width ||
-            shape.outputs !== s.outputs ||
-            shape.head !== s.head ||
-            shape.activation !== s.activation) {
+        const same = ['inputs', 'width', 'outputs', 'head', 'activation'].every((k) => shape[k] === s[k]);
+        if (!same) {
             throw new RangeError(`network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`);
         }
         this.params.set(params);
     }
+}
+function settingsOf(options, extras) {
+    return { ...(options.optimizerSettings ?? {}), ...(extras.optimizerSettings ?? {}) };
 }
 /**
  * A trainer that continues from an existing network: its weights, fresh optimiser and stall
  * state. Deterministic: the same arguments give the same later runs.
  */
 function trainerFromNetwork(data, net, options, rng, extras = {}) {
-    const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), {
-        ...(options.optimizerSettings ?? {}),
-        ...(extras.optimizerSettings ?? {}),
-    });
+    const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
     trainer.load(net);
     return trainer;
 }
 function createTrainer(data, width, options, rng, extras = {}) {
-    return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), {
-        ...(options.optimizerSettings ?? {}),
-        ...(extras.optimizerSettings ?? {}),
-    });
+    return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
 }
 
 ;// CONCATENATED MODULE: ./src/nn/predict.ts
-/** Running a network on encoded rows. */
+
+
 
 
 /** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
@@ -47979,6 +48214,15 @@ function predict(net, x, rows) {
         headOutputs(head, K, logits, p * K, out, p * K);
     return out;
 }
+/** The network's `metric` on encoded rows (regression errors in the target's units, via its std). */
+function metricOn(net, x, y, rows, metric, targetStd) {
+    if (rows === 0)
+        return Number.NaN;
+    const { shape, params } = network_fromJson(net);
+    const logits = new Float64Array(rows * shape.outputs);
+    defaultKernel().forward(shape, params, x, rows, logits, null);
+    return targetMetric(metric, reference_headCode(shape.head), shape.outputs, logits, y, rows, targetStd);
+}
 
 ;// CONCATENATED MODULE: ./src/nn/index.ts
 
@@ -47987,7 +48231,240 @@ function predict(net, x, rows) {
 
 /***/ }),
 
-/***/ 3665:
+/***/ 6137:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   $q: () => (/* binding */ SQRT2),
+/* harmony export */   BN: () => (/* binding */ ROUND_MAGIC),
+/* harmony export */   BP: () => (/* binding */ C10),
+/* harmony export */   C2: () => (/* binding */ C2),
+/* harmony export */   C3: () => (/* binding */ C3),
+/* harmony export */   C4: () => (/* binding */ C4),
+/* harmony export */   C5: () => (/* binding */ C5),
+/* harmony export */   C6: () => (/* binding */ C6),
+/* harmony export */   C7: () => (/* binding */ C7),
+/* harmony export */   C8: () => (/* binding */ C8),
+/* harmony export */   C9: () => (/* binding */ C9),
+/* harmony export */   D8: () => (/* binding */ INV_LN2),
+/* harmony export */   Ir: () => (/* binding */ C11),
+/* harmony export */   Js: () => (/* binding */ ACT_TANH),
+/* harmony export */   KK: () => (/* binding */ TANH_CLAMP),
+/* harmony export */   P$: () => (/* binding */ C12),
+/* harmony export */   U6: () => (/* binding */ HEAD_LOGISTIC),
+/* harmony export */   UE: () => (/* binding */ ACT_LOGISTIC),
+/* harmony export */   Wj: () => (/* binding */ HEAD_SOFTMAX),
+/* harmony export */   Yw: () => (/* binding */ ACT_RELU),
+/* harmony export */   Zw: () => (/* binding */ GRAD_BLOCK_ROWS),
+/* harmony export */   hK: () => (/* binding */ HEAD_LINEAR),
+/* harmony export */   l4: () => (/* binding */ LN2_LO),
+/* harmony export */   n2: () => (/* binding */ LN2_HI),
+/* harmony export */   ub: () => (/* binding */ C13)
+/* harmony export */ });
+/**
+ * The numbers both kernels must share to give the same bits: the constants of the elementary
+ * functions (detmath.ts), the gradient block size and the activation and head codes. This file is
+ * the one source: scripts/build-kernel.mjs writes them into kernel.as (between its "generated
+ * constants" markers) and `build-kernel.mjs --check` fails when kernel.as or its bytes disagree.
+ * Plain numeric literals only, so the script can read them without a TypeScript compiler.
+ */
+/** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
+const LN2_HI = 6.9314718036912381649e-1;
+const LN2_LO = 1.90821492927058770002e-10;
+const INV_LN2 = 1.442695040888963387;
+/** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
+const C2 = 0.5;
+const C3 = 0.16666666666666666;
+const C4 = 0.041666666666666664;
+const C5 = 0.008333333333333333;
+const C6 = 0.001388888888888889;
+const C7 = 0.0001984126984126984;
+const C8 = 0.0000248015873015873;
+const C9 = 0.0000027557319223985893;
+const C10 = 2.755731922398589e-7;
+const C11 = 2.505210838544172e-8;
+const C12 = 2.08767569878681e-9;
+const C13 = 1.6059043836821613e-10;
+/** |x| beyond this has tanh(x) === ±1 in double precision. */
+const TANH_CLAMP = 22;
+/** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
+const ROUND_MAGIC = 6755399441055744;
+const SQRT2 = 1.4142135623730951;
+/**
+ * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
+ * the products of a block's rows are added in row order starting from +0, and that block sum is
+ * then added to the running gradient, in both kernels.
+ */
+const GRAD_BLOCK_ROWS = 32;
+const ACT_TANH = 0;
+const ACT_LOGISTIC = 1;
+const ACT_RELU = 2;
+const HEAD_LINEAR = 0;
+const HEAD_LOGISTIC = 1;
+const HEAD_SOFTMAX = 2;
+
+
+/***/ }),
+
+/***/ 415:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Ep: () => (/* binding */ detLog),
+/* harmony export */   U1: () => (/* binding */ detLogistic),
+/* harmony export */   Xv: () => (/* binding */ detExp),
+/* harmony export */   cY: () => (/* binding */ detSoftplus),
+/* harmony export */   hL: () => (/* binding */ detTanh)
+/* harmony export */ });
+/* unused harmony export detLog1p */
+/* harmony import */ var _constants_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6137);
+/**
+ * Elementary functions whose results we control. ECMAScript leaves Math.exp, Math.tanh and
+ * Math.log implementation-approximated, so their last bits may change between Node versions;
+ * these use only +, -, *, / and exact bit operations, which IEEE 754 fixes, so every engine
+ * gives the same bits. The WebAssembly kernel evaluates tanh with the very same sequence of
+ * operations and constants, so both paths agree bit for bit.
+ *
+ * Accuracy against Math.*: a few units in the last place (test/nn/detmath.test.ts states the bound).
+ */
+
+const f64 = new Float64Array(1);
+const u32 = new Uint32Array(f64.buffer);
+const HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0; // little-endian: high word at index 1
+/** 2^k for integer k in [-1022, 1023], built from its bits. */
+function pow2(k) {
+    u32[1 - HI] = 0;
+    u32[HI] = (k + 1023) << 20;
+    return f64[0];
+}
+/** expm1(r) for |r| <= ~0.35 by Horner's rule. */
+function expm1Poly(r) {
+    let q = _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C12 */ .P$ + r * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C13 */ .ub;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C11 */ .Ir + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C10 */ .BP + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C9 + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C8 + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C7 + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C6 + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C5 + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C4 + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C3 + r * q;
+    q = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C2 + r * q;
+    q = 1 + r * q;
+    return r * q;
+}
+/**
+ * The same polynomial by Estrin's scheme: more operations run side by side, which is what the
+ * SIMD kernel needs for speed (tanh uses this form in both paths).
+ */
+function expm1PolyEstrin(r) {
+    const r2 = r * r;
+    const r4 = r2 * r2;
+    const r8 = r4 * r4;
+    const b0 = 1 + _constants_js__WEBPACK_IMPORTED_MODULE_0__.C2 * r + (_constants_js__WEBPACK_IMPORTED_MODULE_0__.C3 + _constants_js__WEBPACK_IMPORTED_MODULE_0__.C4 * r) * r2;
+    const b1 = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C5 + _constants_js__WEBPACK_IMPORTED_MODULE_0__.C6 * r + (_constants_js__WEBPACK_IMPORTED_MODULE_0__.C7 + _constants_js__WEBPACK_IMPORTED_MODULE_0__.C8 * r) * r2;
+    const b2 = _constants_js__WEBPACK_IMPORTED_MODULE_0__.C9 + _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C10 */ .BP * r + (_constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C11 */ .Ir + _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C12 */ .P$ * r) * r2;
+    const c0 = b0 + b1 * r4;
+    const c1 = b2 + _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .C13 */ .ub * r4;
+    return r * (c0 + c1 * r8);
+}
+/** e^x. */
+function detExp(x) {
+    if (x !== x)
+        return x;
+    if (x > 709.782712893384)
+        return Infinity;
+    if (x < -745.1332191019412)
+        return 0;
+    const k = Math.floor(x * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .INV_LN2 */ .D8 + 0.5);
+    const r = x - k * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .LN2_HI */ .n2 - k * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .LN2_LO */ .l4;
+    const m = 1 + expm1Poly(r);
+    if (k > 1023)
+        return m * pow2(1023) * pow2(k - 1023);
+    if (k < -1022)
+        return m * pow2(k + 1000) * pow2(-1000);
+    return m * pow2(k);
+}
+/** Powers of two 2^0..2^64 for the tanh reduction (k never leaves that range). */
+const POW2_TANH = new Float64Array(65);
+for (let k = 0; k <= 64; k++)
+    POW2_TANH[k] = pow2(k);
+/**
+ * tanh(x) = expm1(2|x|) / (expm1(2|x|) + 2) with the sign of x. Branch-free apart from the
+ * clamp, so the SIMD kernel can evaluate the same operations lane by lane.
+ */
+function detTanh(x) {
+    const ax = Math.min(x < 0 ? -x : x, _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .TANH_CLAMP */ .KK);
+    const y = ax + ax;
+    // Round y/ln2 to the nearest whole number (ties to even) by adding and removing 1.5·2^52.
+    const k = y * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .INV_LN2 */ .D8 + _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .ROUND_MAGIC */ .BN - _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .ROUND_MAGIC */ .BN;
+    const r = y - k * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .LN2_HI */ .n2 - k * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .LN2_LO */ .l4;
+    const p = expm1PolyEstrin(r);
+    const s = POW2_TANH[k];
+    const em = s * p + (s - 1);
+    const t = em / (em + 2);
+    return x < 0 ? -t : t;
+}
+/** Logistic function through tanh, so it inherits tanh's determinism: 1/(1+e^-x) = (1 + tanh(x/2))/2. */
+function detLogistic(x) {
+    return 0.5 + 0.5 * detTanh(0.5 * x);
+}
+/** Natural logarithm. */
+function detLog(x) {
+    if (x !== x || x < 0)
+        return NaN;
+    if (x === 0)
+        return -Infinity;
+    if (x === Infinity)
+        return Infinity;
+    let e = 0;
+    if (x < 2.2250738585072014e-308) {
+        x *= 18014398509481984; // 2^54: lift subnormals into the normal range
+        e = -54;
+    }
+    f64[0] = x;
+    const hi = u32[HI];
+    e += ((hi >>> 20) & 0x7ff) - 1023;
+    u32[HI] = (hi & 0x000fffff) | 0x3ff00000; // mantissa in [1, 2)
+    let m = f64[0];
+    if (m > _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .SQRT2 */ .$q) {
+        m *= 0.5;
+        e += 1;
+    }
+    const f = m - 1;
+    const s = f / (2 + f);
+    const s2 = s * s;
+    // 2 atanh(s) = 2 (s + s^3/3 + ... + s^23/23); |s| <= 0.1716 so the tail is below 1e-18.
+    let q = 1 / 21 + s2 * (1 / 23);
+    q = 1 / 19 + s2 * q;
+    q = 1 / 17 + s2 * q;
+    q = 1 / 15 + s2 * q;
+    q = 1 / 13 + s2 * q;
+    q = 1 / 11 + s2 * q;
+    q = 1 / 9 + s2 * q;
+    q = 1 / 7 + s2 * q;
+    q = 1 / 5 + s2 * q;
+    q = 1 / 3 + s2 * q;
+    const series = s2 * q;
+    const logm = 2 * s + 2 * s * series;
+    return e * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .LN2_HI */ .n2 + (logm + e * _constants_js__WEBPACK_IMPORTED_MODULE_0__/* .LN2_LO */ .l4);
+}
+/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. @testOnly */
+function detLog1p(u) {
+    const w = 1 + u;
+    if (w === 1)
+        return u;
+    return detLog(w) + (u - (w - 1)) / w;
+}
+/** log(1 + e^z) without overflow. */
+function detSoftplus(z) {
+    return (z > 0 ? z : 0) + detLog1p(detExp(z > 0 ? -z : z));
+}
+
+
+/***/ }),
+
+/***/ 9324:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -47997,41 +48474,15 @@ __nccwpck_require__.d(__webpack_exports__, {
   g9: () => (/* reexport */ runSearchWorker)
 });
 
-// UNUSED EXPORTS: DEFAULT_PRUNE_CANDIDATES, DEFAULT_STALL, decideGrowth, growthPlan, leastSalientFirst, mergeOutcomes, pickWitness, planTasks, restartAtWidth, runPruneJob, runTask, searchContext, shareDataset, summarizeWidth, taskKey, wilsonInterval, workerCount
+// UNUSED EXPORTS: DEFAULT_PRUNE_CANDIDATES, DEFAULT_STALL, decideGrowth, growthPlan, leastSalientFirst, mergeOutcomes, planTasks, restartAtWidth, runPruneJob, runTask, searchContext, shareDataset, tally, taskKey, wilsonInterval, workerCount
 
-;// CONCATENATED MODULE: external "node:os"
-const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
+// EXTERNAL MODULE: external "node:os"
+var external_node_os_ = __nccwpck_require__(8161);
 // EXTERNAL MODULE: external "node:perf_hooks"
 var external_node_perf_hooks_ = __nccwpck_require__(643);
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./src/common/metric.ts
-var common_metric = __nccwpck_require__(8457);
-;// CONCATENATED MODULE: ./src/search/wilson.ts
-/**
- * Wilson score interval for a binomial success rate (Wilson 1927). Used to show how
- * sure the k-of-n restart count at a width is.
- */
-/** Two-sided 95% normal quantile. */
-const Z95 = 1.959964;
-function wilsonInterval(successes, trials, z = Z95) {
-    if (trials <= 0)
-        return [0, 1];
-    const n = trials;
-    const p = successes / n;
-    const z2 = z * z;
-    const denom = 1 + z2 / n;
-    const centre = (p + z2 / (2 * n)) / denom;
-    const half = (z * Math.sqrt((p * (1 - p)) / n + z2 / (4 * n * n))) / denom;
-    // Clamp the rounding dust at the ends so 0/n starts at exactly 0 and n/n ends at exactly 1.
-    const lo = successes === 0 ? 0 : Math.max(0, centre - half);
-    const hi = successes === n ? 1 : Math.min(1, centre + half);
-    return [lo, hi];
-}
-
 ;// CONCATENATED MODULE: ./src/search/growth.ts
-
-
 function taskKey(task) {
     return `${task.width}:${task.restart}`;
 }
@@ -48054,55 +48505,72 @@ function taskFor(plan, width, restart) {
     return plan.growth === 'in-place' ? { width: plan.minWidth, restart } : { width, restart };
 }
 /**
- * In-place growth maps onto widths like this: restart i counts as reaching the target
- * at width w when its network reached it at a width no larger than w (a network of
- * fewer neurons that reaches the target is also a width-w network: give the extra
- * neurons zero outgoing weights). Otherwise its metric and epochs at w are those at the
- * end of its time at w; a restart that diverged before w counts as a diverged failure.
+ * In-place growth maps onto widths like this: restart i counts as meeting the target at width w
+ * when its network met it at a width no larger than w (a network of fewer neurons that meets the
+ * target is also a width-w network: give the extra neurons zero outgoing weights). Otherwise its
+ * figures at w are those at the end of its time at w; a restart that diverged before w counts as
+ * a diverged failure.
  */
 function restartAtWidth(plan, result, width) {
-    const restart = result.restart;
+    const task = { width: result.width, restart: result.restart };
+    const base = { restart: result.restart, task };
+    const judged = (j) => ({
+        train: j.train,
+        steering: j.steering,
+        judged: j.judged,
+        reached: j.reached,
+        met: j.met,
+    });
     if (plan.growth !== 'in-place') {
         return {
-            restart,
-            reached: result.reached,
-            metric: result.metric,
+            ...base,
+            ...judged(result),
             epochs: result.epochs,
             stop: result.stop,
             reason: result.reason,
+            network: result.network,
         };
     }
-    if (result.reached && result.finalWidth <= width) {
-        return { restart, reached: true, metric: result.metric, epochs: result.epochs, stop: 'reached', reason: null };
+    if (result.met && result.finalWidth <= width) {
+        return {
+            ...base,
+            ...judged(result),
+            epochs: result.epochs,
+            stop: result.stop,
+            reason: null,
+            network: result.network,
+        };
     }
     const seg = result.segments.find((s) => s.width === width);
     if (seg !== undefined) {
         const diverged = seg.stop === 'diverged';
         return {
-            restart,
-            reached: false,
-            metric: seg.metric,
+            ...base,
+            ...judged(seg),
+            met: false,
             epochs: seg.epochs,
             stop: seg.stop,
             reason: diverged ? result.reason : null,
+            network: null,
         };
     }
+    const nan = Number.NaN;
     return {
-        restart,
+        ...base,
+        train: nan,
+        steering: nan,
+        judged: nan,
         reached: false,
-        metric: Number.NaN,
+        met: false,
         epochs: result.epochs,
         stop: 'diverged',
         reason: result.reason,
+        network: null,
     };
 }
-/**
- * Walk widths upward and, at each width, restarts in index order, stopping a width as
- * soon as its answer is certain: `required` successes, or more than `restarts - required`
- * failures. Pure: the same outcomes give the same decision.
- */
-function decideGrowth(plan, target, lookup) {
-    const widths = [];
+/** Walk the widths as the header says. Pure: the same outcomes give the same decision. */
+function decideGrowth(plan, lookup) {
+    const tried = [];
     const used = new Set();
     const allowedFailures = plan.restarts - plan.required;
     for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
@@ -48115,73 +48583,41 @@ function decideGrowth(plan, target, lookup) {
             const task = taskFor(plan, w, i);
             const key = taskKey(task);
             if (!used.has(key) && plan.maxTrainings !== null && used.size >= plan.maxTrainings) {
+                if (seen.length > 0)
+                    tried.push({ width: w, restarts: seen });
                 return {
                     kind: 'decided',
-                    adequateWidth: null,
-                    widths,
-                    reachedAtAdequate: [],
+                    grownWidth: null,
+                    tried,
                     trainings: used.size,
                     capHit: { width: w, restartsRun: seen.length },
                 };
             }
             const result = lookup(task);
-            if (result === undefined)
-                return { kind: 'need', task, deciding: w, widths, trainings: used.size };
+            if (result === undefined) {
+                const sofar = seen.length > 0 ? [...tried, { width: w, restarts: seen }] : tried;
+                return { kind: 'need', task, deciding: w, tried: sofar, trainings: used.size };
+            }
             used.add(key);
             const at = restartAtWidth(plan, result, w);
             seen.push(at);
-            if (at.reached)
+            if (at.met)
                 successes++;
             else
                 failures++;
         }
-        const summary = summarizeWidth(w, seen, successes >= plan.required, target);
-        widths.push(summary);
-        if (summary.adequate) {
-            return {
-                kind: 'decided',
-                adequateWidth: w,
-                widths,
-                reachedAtAdequate: seen.filter((s) => s.reached),
-                trainings: used.size,
-                capHit: null,
-            };
-        }
+        tried.push({ width: w, restarts: seen });
+        if (successes >= plan.required)
+            return { kind: 'decided', grownWidth: w, tried, trainings: used.size, capHit: null };
     }
-    return { kind: 'decided', adequateWidth: null, widths, reachedAtAdequate: [], trainings: used.size, capHit: null };
-}
-/** @testOnly */
-function median(values) {
-    if (values.length === 0)
-        return null;
-    const s = [...values].sort((a, b) => a - b);
-    const mid = s.length >> 1;
-    return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
-}
-function summarizeWidth(width, seen, adequate, target) {
-    const finite = seen.map((s) => s.metric).filter((m) => Number.isFinite(m));
-    let best = null;
-    for (const m of finite)
-        if (best === null || (0,common_metric/* isBetter */.LK)(target.metric, m, best))
-            best = m;
-    const reached = seen.filter((s) => s.reached).length;
-    return {
-        width,
-        restarts: seen.length,
-        reached,
-        adequate,
-        best,
-        median: median(finite),
-        wilson: wilsonInterval(reached, seen.length),
-        medianEpochs: median(seen.map((s) => s.epochs)) ?? 0,
-        diverged: seen.filter((s) => s.stop === 'diverged').length,
-    };
+    return { kind: 'decided', grownWidth: null, tried, trainings: used.size, capHit: null };
 }
 /**
  * Merge growth results from anywhere (threads, processes, machines) into the decision.
- * Duplicates must agree; extra results past the decision point are ignored.
+ * Identical duplicates are fine; two different results for one task are refused; extra results
+ * past the decision point are ignored.
  */
-function mergeOutcomes(plan, target, results) {
+function mergeOutcomes(plan, results) {
     const byKey = new Map();
     for (const r of results) {
         const key = taskKey(r);
@@ -48192,14 +48628,59 @@ function mergeOutcomes(plan, target, results) {
         }
         byKey.set(key, r);
     }
-    return decideGrowth(plan, target, (t) => byKey.get(taskKey(t)));
+    return decideGrowth(plan, (t) => byKey.get(taskKey(t)));
 }
 
 // EXTERNAL MODULE: ./src/common/random.ts
 var random = __nccwpck_require__(4554);
-// EXTERNAL MODULE: ./src/nn/index.ts + 14 modules
-var nn = __nccwpck_require__(7340);
+// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
+var nn = __nccwpck_require__(6575);
+// EXTERNAL MODULE: ./src/common/metric.ts
+var metric = __nccwpck_require__(8457);
+;// CONCATENATED MODULE: ./src/search/judge.ts
+/**
+ * Whether a trained network meets the target: decided on the judging rows alone, which no
+ * training ever reads (they do not stop a training, pick a restart or accept a pruning step).
+ * Without judging rows the validation rows judge, and without those the training rows.
+ */
+
+
+function judgingRowsOf(data, folded) {
+    if (data.judgingRows > 0)
+        return { on: 'judging', rows: data.judgingRows, folded };
+    if (data.validationRows > 0)
+        return { on: 'validation', rows: data.validationRows, folded };
+    return { on: 'training', rows: data.trainRows, folded };
+}
+/** The judged metric of `net`. */
+function judgedMetric(data, net, target) {
+    const std = data.encoding.target.std;
+    if (data.judgingRows > 0)
+        return (0,nn/* metricOn */.Oc)(net, data.xJudging, data.yJudging, data.judgingRows, target.metric, std);
+    if (data.validationRows > 0)
+        return (0,nn/* metricOn */.Oc)(net, data.xValidation, data.yValidation, data.validationRows, target.metric, std);
+    return (0,nn/* metricOn */.Oc)(net, data.xTrain, data.yTrain, data.trainRows, target.metric, std);
+}
+/** The record of a finished training, with the judged metric added. */
+function judge(data, net, rec, target) {
+    const diverged = rec.stop === 'diverged' || net === null;
+    const judged = diverged ? Number.NaN : judgedMetric(data, net, target);
+    return {
+        train: rec.trainMetric,
+        steering: rec.steeringMetric,
+        judged,
+        reached: !diverged && (0,metric/* meetsThreshold */.M0)(rec.steeringMetric, target),
+        met: !diverged && (0,metric/* meetsThreshold */.M0)(judged, target),
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/search/task.ts
+/**
+ * One unit of work, runnable in any thread: a growth task (one seeded training, or one
+ * network grown in place) or a prune job (shrinking one network that met the target).
+ * Everything here is a pure function of (data, context, task): no shared state, and the clock is
+ * read only through `cancelled`, which can only end a task early (the caller then discards it).
+ */
 
 
 
@@ -48211,27 +48692,31 @@ var nn = __nccwpck_require__(7340);
 const DEFAULT_STALL = { window: 100, threshold: 0.05 };
 /** Engineering choice: try the three least salient neurons before giving up a prune step. */
 const DEFAULT_PRUNE_CANDIDATES = 3;
-function reachedBy(rec, target) {
-    if (rec.stop === 'diverged')
-        return false;
-    return rec.stop === 'reached' || (0,common_metric/* meetsThreshold */.M0)(rec.validationMetric, target);
-}
 const never = () => false;
 function divergedReason(width, epochs) {
     return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
+/** Gives up when the caller says so or the search's time is up. */
+function stopWhen(ctx, cancelled) {
+    const deadline = ctx.deadline;
+    return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
+}
 /**
  * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
- * null only when `cancelled` said so (the answer was no longer needed).
- * In-place growth (Dynamic Node Creation) starts at the task's width and gives every
- * width up to max-epochs; a neuron is added when the error curve flattens (the stall
- * trigger) or that budget runs out, until the target is reached or max-width is hit.
+ * null only when `cancelled` (or the time budget) said to give up.
+ * In-place growth (Dynamic Node Creation) starts at the task's width and gives every width up to
+ * max-epochs; a neuron is added when the error curve flattens (the stall trigger) or that budget
+ * runs out, until the target is met or max-width is hit.
  */
 function runTask(data, ctx, task, cancelled = never) {
     const { plan, train } = ctx;
     const inPlace = plan.growth === 'in-place';
     const rng = (0,random/* rngFor */.pU)(ctx.seed, task.width, task.restart);
-    const options = { ...train, stall: inPlace ? { ...ctx.stall } : null, interrupted: cancelled };
+    const options = {
+        ...train,
+        stall: inPlace ? { ...ctx.stall } : null,
+        interrupted: stopWhen(ctx, cancelled),
+    };
     const trainer = (0,nn/* createTrainer */.K$)(data, task.width, options, rng);
     const segments = [];
     let epochs = 0;
@@ -48241,46 +48726,47 @@ function runTask(data, ctx, task, cancelled = never) {
             return null;
         epochs += rec.epochs;
         const width = trainer.network.width;
-        const reached = reachedBy(rec, train.target);
-        segments.push({ width, epochs, metric: rec.validationMetric, stop: reached ? 'reached' : rec.stop });
-        const done = reached || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
+        const network = rec.stop === 'diverged' ? null : trainer.snapshot();
+        const judged = judge(data, network, rec, train.target);
+        segments.push({ width, epochs, stop: rec.stop, ...judged });
+        const done = judged.met || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
         if (done) {
-            const diverged = rec.stop === 'diverged';
             return {
                 width: task.width,
                 restart: task.restart,
-                reached,
-                stop: reached ? 'reached' : rec.stop,
+                ...judged,
+                stop: rec.stop,
                 epochs,
-                metric: rec.validationMetric,
                 finalWidth: width,
                 segments,
-                network: reached ? trainer.snapshot() : null,
-                reason: diverged ? divergedReason(width, epochs) : null,
+                network: judged.met ? network : null,
+                reason: rec.stop === 'diverged' ? divergedReason(width, epochs) : null,
             };
         }
-        // Stalled (or out of epochs at this width): add a neuron that leaves the function unchanged and keep training.
+        // Out of patience or epochs at this width: add a neuron that leaves the function unchanged and keep training.
         trainer.addNeuron(rng);
     }
 }
 /**
- * Shrink one network by compensated ablation: score every hidden neuron by the loss
- * increase of removing it with its mean activation folded into the output biases,
- * remove the least salient, retrain for `pruneEpochs`, and keep the removal only if
- * the network still reaches the target; otherwise restore and try the next candidate.
+ * Shrink one network by compensated ablation: score every hidden neuron by the loss increase of
+ * removing it with its mean activation folded into the output biases, remove the least salient,
+ * retrain for at most `pruneEpochs`, and keep the removal only if the steering rows still meet the
+ * target; otherwise restore and try the next candidate. Each kept network is judged on the judging
+ * rows (that decides whether it counts for its width), but the judging rows never decide whether a
+ * removal is kept.
  */
-function runPruneJob(data, ctx, job) {
+function runPruneJob(data, ctx, job, cancelled = never) {
     const target = ctx.train.target;
-    const retrain = { ...ctx.train, stall: null };
+    const retrain = { ...ctx.train, stall: null, interrupted: stopWhen(ctx, cancelled) };
     // Every restore starts from a snapshot with fresh optimiser state, so the result does not
     // depend on which thread ran the growth task.
-    const fromSnapshot = (net) => (0,nn/* trainerFromNetwork */.Y$)(data, net, retrain, (0,random/* rngFor */.pU)(ctx.seed, job.task.width, job.task.restart));
+    const fromSnapshot = (net) => (0,nn/* trainerFromNetwork */.Y$)(data, net, retrain, (0,random/* rngFor */.pU)(ctx.seed, job.source.width, job.source.restart));
     let trainer = fromSnapshot(job.network);
-    let trainings = 0;
-    const grownWidth = trainer.network.width;
-    let metric = trainer.evaluate().validationMetric;
-    let network = trainer.snapshot();
+    let steering = trainer.evaluate().steeringMetric;
+    let network = job.network;
+    const chain = [];
     const steps = [];
+    let trainings = 0;
     while (trainer.network.width > 1) {
         const width = trainer.network.width;
         const order = leastSalientFirst(trainer.saliency());
@@ -48292,13 +48778,25 @@ function runPruneJob(data, ctx, job) {
                 trainer = fromSnapshot(network);
             trainer.removeNeuron(j);
             const rec = trainer.run(ctx.pruneEpochs);
+            if (rec.stop === 'interrupted')
+                return { source: job.source, chain, steps, trainings, interrupted: true };
             trainings++;
-            const after = rec.stop === 'diverged' ? Number.NaN : trainer.evaluate().validationMetric;
-            const ok = Number.isFinite(after) && (0,common_metric/* meetsThreshold */.M0)(after, target);
-            steps.push({ restart: job.task.restart, width, neuron: j, metricBefore: metric, metricAfter: after, kept: ok });
-            if (ok) {
-                metric = after;
-                network = trainer.snapshot();
+            const smaller = rec.stop === 'diverged' ? null : trainer.snapshot();
+            const judged = judge(data, smaller, rec, target);
+            const accepted = smaller !== null && judged.reached;
+            steps.push({
+                source: job.source,
+                width,
+                neuron: j,
+                steeringBefore: steering,
+                steeringAfter: judged.steering,
+                accepted,
+                judged: accepted ? judged.judged : null,
+            });
+            if (accepted && smaller !== null) {
+                steering = judged.steering;
+                network = smaller;
+                chain.push({ width: width - 1, network: smaller, ...judged });
                 removed = true;
                 break;
             }
@@ -48307,7 +48805,7 @@ function runPruneJob(data, ctx, job) {
         if (!removed)
             break;
     }
-    return { restart: job.task.restart, grownWidth, width: network.width, metric, network, steps, trainings };
+    return { source: job.source, chain, steps, trainings, interrupted: false };
 }
 /** Neuron indices by ascending saliency; ties (and NaN) resolved by index so the order is total. */
 function leastSalientFirst(saliency) {
@@ -48315,15 +48813,6 @@ function leastSalientFirst(saliency) {
     const key = (j) => (Number.isFinite(saliency[j]) ? saliency[j] : Number.POSITIVE_INFINITY);
     idx.sort((a, b) => key(a) - key(b) || a - b);
     return idx;
-}
-/** Smallest pruned network wins; ties go to the lowest restart index. */
-function pickWitness(results) {
-    let best = null;
-    for (const r of results) {
-        if (best === null || r.width < best.width || (r.width === best.width && r.restart < best.restart))
-            best = r;
-    }
-    return best;
 }
 
 ;// CONCATENATED MODULE: ./src/search/executor.ts
@@ -48343,7 +48832,8 @@ function inThreadExecutor(data, ctx) {
         size: 1,
         async train(task) {
             await yieldToEventLoop();
-            return runTask(data, ctx, task); // never cancelled here: nothing runs ahead in one thread
+            // Never discarded here (nothing runs ahead in one thread); null only when the time ran out.
+            return runTask(data, ctx, task);
         },
         async prune(job) {
             await yieldToEventLoop();
@@ -48370,6 +48860,8 @@ function shareDataset(data) {
         xTrain: toShared(data.xTrain),
         yTrain: toShared(data.yTrain),
         xValidation: toShared(data.xValidation),
+        xJudging: toShared(data.xJudging),
+        yJudging: toShared(data.yJudging),
         yValidation: toShared(data.yValidation),
     };
 }
@@ -48414,7 +48906,9 @@ function workerPoolExecutor(data, ctx, size, entry) {
             if (p !== undefined) {
                 if (reply.type === 'done')
                     p.resolve(reply.result);
-                else if (reply.type === 'error')
+                else if (reply.type === 'cancelled')
+                    p.resolve(null);
+                else
                     p.reject(new Error(reply.message));
             }
             pump();
@@ -48477,11 +48971,225 @@ function workerPoolExecutor(data, ctx, size, entry) {
 
 // EXTERNAL MODULE: ./src/common/format.ts
 var format = __nccwpck_require__(6950);
+;// CONCATENATED MODULE: ./src/search/notes.ts
+/**
+ * Why no width is adequate, in sentences a reviewer can act on, read off the per-width curve:
+ * - networks met the target, but too few of one width (say how many, and how many are required);
+ * - the networks fit the training rows but not the judging rows: too few rows or too much noise;
+ * - more neurons still help: the curve still improves at max-width, which is too small;
+ * - the curve is flat and even the training rows are not fitted: the features may not carry the target.
+ * And how far a search got when its budget ran out.
+ */
+
+
+/** Widths at the top of the range whose best is compared with the rest to tell a rising curve. */
+const TOP_WIDTHS = 3;
+/**
+ * A curve still rises when its best over the top widths beats the best before them by more than
+ * this (accuracy points, or this fraction of an error metric's value); an engineering choice.
+ */
+const RISE = 0.005;
+function span(from, to) {
+    return from === to ? `width ${from}` : `widths ${from}–${to}`;
+}
+function bestAt(widths, target, pickTrain = false) {
+    let best = null;
+    for (const w of widths) {
+        const v = pickTrain ? w.bestTrain : w.best;
+        if (v !== null && (best === null || (0,metric/* isBetter */.LK)(target.metric, v, best.value)))
+            best = { width: w.width, value: v };
+    }
+    return best;
+}
+function rises(widths, target) {
+    if (widths.length <= TOP_WIDTHS)
+        return null;
+    const top = bestAt(widths.slice(-TOP_WIDTHS), target);
+    const before = bestAt(widths.slice(0, -TOP_WIDTHS), target);
+    if (top === null || before === null)
+        return null;
+    const margin = (0,metric/* higherIsBetter */.i2)(target.metric) ? RISE : RISE * Math.abs(before.value);
+    const gain = (0,metric/* higherIsBetter */.i2)(target.metric) ? top.value - before.value : before.value - top.value;
+    return gain > margin ? { from: before, to: top } : null;
+}
+function notFoundNotes(plan, target, widths, judgedOn) {
+    const notes = [];
+    const name = target.metric;
+    const withMet = widths.filter((w) => w.met > 0);
+    if (withMet.length > 0) {
+        const shown = withMet
+            .slice(0, 3)
+            .map((w) => `${w.met === 1 ? '1 network' : `${w.met} networks`} of width ${w.width}`)
+            .join(', ');
+        notes.push(`Some networks met ${(0,format/* targetShort */.aL)(name, target.threshold)} (${shown}), but a width needs ${plan.required} to be adequate.`);
+    }
+    const train = bestAt(widths, target, true);
+    const judged = bestAt(widths, target);
+    const rising = rises(widths, target);
+    if (rising !== null) {
+        notes.push(`More neurons still help: the best ${judgedOn} ${name} improved from ${(0,format/* formatMetric */.gI)(rising.from.value)} (width ${rising.from.width}) to ${(0,format/* formatMetric */.gI)(rising.to.value)} (width ${rising.to.width}); search.max-width (${plan.maxWidth}) is too small for this target.`);
+    }
+    else if (train !== null && (0,metric/* meetsThreshold */.M0)(train.value, target)) {
+        notes.push(`The networks fit the training rows (${name} ${(0,format/* formatMetric */.gI)(train.value)} at width ${train.width}) but not the ${judgedOn} rows (best ${judged === null ? 'none' : (0,format/* formatMetric */.gI)(judged.value)}): the data hold too few rows, or too much noise, for this target.`);
+    }
+    else {
+        const best = train === null ? 'no network trained' : `the best training ${name} was ${(0,format/* formatMetric */.gI)(train.value)}`;
+        notes.push(`Even the training rows are not fitted (${best}) and more neurons did not help from ${span(plan.minWidth, plan.maxWidth)}: the features may not carry the target.`);
+    }
+    return notes;
+}
+/** The growth phase stopped (time budget, training cap) before a width was adequate. */
+function stoppedGrowingNote(plan, why, atWidth, trainings) {
+    const below = atWidth > plan.minWidth
+        ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate on fresh restarts`
+        : '';
+    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
+}
+/** The time ran out while pruning: the grown width is proven, smaller ones are not settled. */
+function stoppedPruningNote(why, grownWidth, trainings) {
+    return `${why} while pruning, after ${trainings} trainings: ${(0,format/* neurons */.nO)(grownWidth)} are enough (proven by fresh restarts), but whether fewer would do was not settled.`;
+}
+
+;// CONCATENATED MODULE: ./src/search/wilson.ts
+/**
+ * Wilson score interval for a binomial success rate (Wilson 1927). Used to show how
+ * sure the k-of-n restart count at a width is.
+ */
+/** Two-sided 95% normal quantile. */
+const Z95 = 1.959964;
+function wilsonInterval(successes, trials, z = Z95) {
+    if (trials <= 0)
+        return [0, 1];
+    const n = trials;
+    const p = successes / n;
+    const z2 = z * z;
+    const denom = 1 + z2 / n;
+    const centre = (p + z2 / (2 * n)) / denom;
+    const half = (z * Math.sqrt((p * (1 - p)) / n + z2 / (4 * n * n))) / denom;
+    // Clamp the rounding dust at the ends so 0/n starts at exactly 0 and n/n ends at exactly 1.
+    const lo = successes === 0 ? 0 : Math.max(0, centre - half);
+    const hi = successes === n ? 1 : Math.min(1, centre + half);
+    return [lo, hi];
+}
+
+;// CONCATENATED MODULE: ./src/search/tally.ts
+/**
+ * The one definition of an adequate width, applied: a width is adequate when at least `required`
+ * distinct networks of that width met the target on the judging rows, counting fresh restarts at
+ * that width and networks pruned down to it from a larger width. The headline is the smallest
+ * adequate width; its witness is the network of that width that did best on the steering rows
+ * (the judging rows decide whether a network counts, never which one is shown).
+ */
+
+
+function median(values) {
+    if (values.length === 0)
+        return null;
+    const s = [...values].sort((a, b) => a - b);
+    const mid = s.length >> 1;
+    return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
+}
+function bestOf(values, target) {
+    let best = null;
+    for (const v of values)
+        if (Number.isFinite(v) && (best === null || (0,metric/* isBetter */.LK)(target.metric, v, best)))
+            best = v;
+    return best;
+}
+/** Better witness first: steering metric, then fresh before pruned, then narrower source, then lower restart. */
+function beats(a, b, target) {
+    if ((0,metric/* isBetter */.LK)(target.metric, a.steering, b.steering))
+        return true;
+    if ((0,metric/* isBetter */.LK)(target.metric, b.steering, a.steering))
+        return false;
+    if (a.how !== b.how)
+        return a.how === 'fresh';
+    if (a.source.width !== b.source.width)
+        return a.source.width < b.source.width;
+    return a.source.restart < b.source.restart;
+}
+function pick(candidates, target) {
+    let best = null;
+    for (const c of candidates)
+        if (c.met && (best === null || beats(c, best, target)))
+            best = c;
+    return best;
+}
+function tally(plan, target, tried, pruned, seed) {
+    const fresh = new Map(tried.map((t) => [t.width, t.restarts]));
+    const links = new Map();
+    for (const r of pruned) {
+        for (const link of r.chain) {
+            const list = links.get(link.width) ?? [];
+            list.push({ ...link, source: r.source, how: 'pruned' });
+            links.set(link.width, list);
+        }
+    }
+    const widthList = [...new Set([...fresh.keys(), ...links.keys()])].sort((a, b) => a - b);
+    const widths = [];
+    const candidatesAt = new Map();
+    for (const w of widthList) {
+        const runs = fresh.get(w) ?? [];
+        const prunedHere = links.get(w) ?? [];
+        const freshCandidates = runs
+            .filter((r) => r.met && r.network !== null)
+            .map((r) => ({ ...r, width: w, network: r.network, source: r.task, how: 'fresh' }));
+        candidatesAt.set(w, [...freshCandidates, ...prunedHere]);
+        const freshMet = freshCandidates.length;
+        const prunedMet = prunedHere.filter((c) => c.met).length;
+        const all = [...runs, ...prunedHere];
+        widths.push({
+            width: w,
+            restarts: runs.length,
+            reached: runs.filter((r) => r.reached).length,
+            met: freshMet + prunedMet,
+            metBy: { fresh: freshMet, pruned: prunedMet },
+            adequate: freshMet + prunedMet >= plan.required,
+            best: bestOf(all.map((r) => r.judged), target),
+            bestTrain: bestOf(all.map((r) => r.train), target),
+            median: median(runs.map((r) => r.judged).filter(Number.isFinite)),
+            wilson: wilsonInterval(freshMet, runs.length),
+            medianEpochs: median(runs.map((r) => r.epochs)) ?? 0,
+            diverged: runs.filter((r) => r.stop === 'diverged').length,
+        });
+    }
+    const width = widths.find((w) => w.adequate)?.width ?? null;
+    let chosen = null;
+    if (width !== null)
+        chosen = pick(candidatesAt.get(width) ?? [], target);
+    else
+        for (const w of widthList)
+            chosen ??= pick(candidatesAt.get(w) ?? [], target);
+    return { widths, width, witness: chosen === null ? null : witnessOf(chosen, seed) };
+}
+function witnessOf(c, seed) {
+    return {
+        source: c.source,
+        seed,
+        how: c.how,
+        network: c.network,
+        train: c.train,
+        steering: c.steering,
+        judged: c.judged,
+        reached: c.reached,
+        met: c.met,
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/search/search.ts
 /**
- * The growth-and-prune search: find the smallest hidden width whose networks reach the
- * target, and hold a trained network (the witness) that proves it.
+ * The growth-and-prune search: find the smallest hidden width at which enough networks meet the
+ * target (tally.ts has the one definition), and hold a trained network (the witness) that shows it.
+ *
+ * 1. Growth (growth.ts): fresh seeded restarts, width by width upward, until one width is
+ *    adequate on fresh restarts alone.
+ * 2. Prune (task.ts): every network that met the target at that width or below is shrunk one
+ *    neuron at a time while the steering rows still meet the target; each smaller network that
+ *    also meets it on the judging rows counts for its width.
+ * 3. Tally: the smallest width with `required` networks that met the target is the answer.
  */
+
+
 
 
 
@@ -48495,7 +49203,7 @@ function growthPlan(search) {
         minWidth: search.minWidth,
         maxWidth: search.maxWidth,
         restarts: search.restarts,
-        // A width is only adequate with a network to show for it: at least one restart must reach.
+        // A width is only adequate with a network to show for it: at least one must meet the target.
         required: Math.max(1, search.required),
         maxTrainings: search.maxTrainings,
     };
@@ -48507,6 +49215,8 @@ function searchContext(search, target, options = {}) {
         optimizer: search.optimizer,
         maxEpochs: search.maxEpochs,
         checkEvery: search.checkEvery,
+        patience: search.patience,
+        weightDecay: search.weightDecay,
         target: { ...target },
         stall: null,
     };
@@ -48517,28 +49227,79 @@ function searchContext(search, target, options = {}) {
         stall: { ...(options.stall ?? DEFAULT_STALL) },
         pruneEpochs: search.pruneEpochs,
         pruneCandidates: options.pruneCandidates ?? DEFAULT_PRUNE_CANDIDATES,
+        deadline: search.timeBudget === null ? null : Date.now() + search.timeBudget * 1000,
     };
 }
 function workerCount(search, options) {
-    const n = options.workers ?? search.workers ?? (0,external_node_os_namespaceObject.availableParallelism)();
+    const n = options.workers ?? search.workers ?? (0,external_node_os_.availableParallelism)();
     return Math.max(1, Math.floor(n));
 }
-function fmt(x) {
-    return x === null || !Number.isFinite(x) ? 'none' : String(Number(x.toPrecision(4)));
+/** Resolves when the deadline passes (never without one); the timer does not keep the process alive. */
+function timeUp(deadline) {
+    if (deadline === null)
+        return new Promise(() => undefined);
+    return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
 }
-function span(from, to) {
-    return from === to ? `width ${from}` : `widths ${from}–${to}`;
+/** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
+async function grow(ctx, executor, target, progress) {
+    const plan = ctx.plan;
+    const canon = planTasks(plan);
+    const position = new Map(canon.map((t, k) => [taskKey(t), k]));
+    const results = new Map();
+    const inflight = new Map();
+    const clock = timeUp(ctx.deadline);
+    let best = null;
+    for (;;) {
+        const decision = decideGrowth(plan, (t) => results.get(taskKey(t)));
+        // Tasks before the first undecided one that are still running can no longer matter.
+        const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
+        for (const key of [...inflight.keys()]) {
+            if ((position.get(key) ?? 0) < frontier) {
+                const [w, i] = key.split(':').map(Number);
+                executor.discard({ width: w, restart: i });
+                inflight.delete(key);
+            }
+        }
+        if (decision.kind === 'decided')
+            return { decision, results, outOfTime: false };
+        if (ctx.deadline !== null && Date.now() >= ctx.deadline)
+            return { decision, results, outOfTime: true };
+        for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
+            const key = taskKey(canon[k]);
+            if (results.has(key) || inflight.has(key))
+                continue;
+            inflight.set(key, executor.train(canon[k]));
+        }
+        const keyed = [...inflight.entries()].map(([key, p]) => p.then((r) => ({ key, r })));
+        const done = await Promise.race([...keyed, clock]);
+        if (done === 'time')
+            return { decision, results, outOfTime: true };
+        inflight.delete(done.key);
+        // A task handed back without a result gave up because the time ran out.
+        if (done.r === null)
+            return { decision, results, outOfTime: true };
+        results.set(done.key, done.r);
+        if (Number.isFinite(done.r.judged) && (best === null || (0,metric/* isBetter */.LK)(target.metric, done.r.judged, best)))
+            best = done.r.judged;
+        progress({ phase: 'growth', width: done.r.finalWidth, restart: done.r.restart, epoch: done.r.epochs, best });
+    }
 }
-function notFoundNote(plan, target, widths) {
-    const best = widths.map((w) => `${w.width}: ${fmt(w.best)}`).join(', ');
-    return (`No width from ${plan.minWidth} to ${plan.maxWidth} had ${plan.required} of ${plan.restarts} restarts reach ` +
-        `${(0,format/* targetShort */.aL)(target.metric, target.threshold)}; best validation ${target.metric} per width: ${best}.`);
-}
-function stoppedNote(plan, why, atWidth, trainings) {
-    const below = atWidth > plan.minWidth
-        ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate`
-        : '';
-    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
+/** Every network that met the target at the grown width or below, once each, in (width, restart) order. */
+function pruneSources(tried, grownWidth) {
+    const jobs = [];
+    const seen = new Set();
+    for (const { width, restarts } of tried) {
+        if (grownWidth !== null && width > grownWidth)
+            continue;
+        for (const r of restarts) {
+            const key = taskKey(r.task);
+            if (!r.met || r.network === null || seen.has(key))
+                continue;
+            seen.add(key);
+            jobs.push({ source: r.task, network: r.network });
+        }
+    }
+    return jobs;
 }
 /** Run the whole search. Outside `timing`, the result depends only on the data, the config and the code. */
 async function runSearch(data, search, target, options = {}) {
@@ -48550,119 +49311,80 @@ async function runSearch(data, search, target, options = {}) {
     // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
     const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
     const executor = size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
-    const deadline = search.timeBudget === null ? Number.POSITIVE_INFINITY : t0 + search.timeBudget * 1000;
-    let bestSoFar = null;
     const progress = (e) => options.onProgress?.(e);
+    const judging = judgingRowsOf(data, options.judgingFolded ?? false);
+    const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
+    const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
     try {
-        // Growth phase: keep every thread busy with tasks in canonical order from the first undecided one.
-        const canon = planTasks(plan);
-        const position = new Map(canon.map((t, k) => [taskKey(t), k]));
-        const results = new Map();
-        const inflight = new Map();
-        let decision;
-        for (;;) {
-            decision = decideGrowth(plan, target, (t) => results.get(taskKey(t)));
-            // Tasks before the first undecided one that are still running can no longer matter.
-            const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
-            for (const key of [...inflight.keys()]) {
-                if ((position.get(key) ?? 0) < frontier) {
-                    const [w, i] = key.split(':').map(Number);
-                    executor.discard({ width: w, restart: i });
-                    inflight.delete(key);
-                }
-            }
-            if (decision.kind === 'decided')
-                break;
-            if (now() >= deadline)
-                break;
-            for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
-                const key = taskKey(canon[k]);
-                if (results.has(key) || inflight.has(key))
-                    continue;
-                inflight.set(key, executor.train(canon[k]));
-            }
-            const done = await Promise.race([...inflight.values()]);
-            const key = taskKey(done);
-            inflight.delete(key);
-            results.set(key, done);
-            if (Number.isFinite(done.metric) && (bestSoFar === null || (0,common_metric/* isBetter */.LK)(target.metric, done.metric, bestSoFar))) {
-                bestSoFar = done.metric;
-            }
-            progress({ phase: 'growth', width: done.finalWidth, restart: done.restart, epoch: done.epochs, best: bestSoFar });
-        }
+        const grown = await grow(ctx, executor, target, progress);
         const growthEnd = now();
-        const timing = (pruneEnd) => ({
-            searchSeconds: (pruneEnd - t0) / 1000,
+        const timing = (end) => ({
+            searchSeconds: (end - t0) / 1000,
             growthSeconds: (growthEnd - t0) / 1000,
-            pruneSeconds: (pruneEnd - growthEnd) / 1000,
+            pruneSeconds: (end - growthEnd) / 1000,
         });
-        if (decision.kind === 'need' || decision.capHit !== null || decision.adequateWidth === null) {
-            let outcome = 'not-found';
-            let note;
-            if (decision.kind === 'need') {
-                outcome = 'inconclusive';
-                const why = `The time budget of ${search.timeBudget} s ran out`;
-                note = stoppedNote(plan, why, decision.deciding, decision.trainings);
-            }
-            else if (decision.capHit !== null) {
-                outcome = 'inconclusive';
-                note = stoppedNote(plan, `The cap of ${search.maxTrainings} trainings was reached`, decision.capHit.width, decision.trainings);
-            }
-            else {
-                note = notFoundNote(plan, target, decision.widths);
-            }
+        const base = { grownWidth: null, metric: null, witness: null, pruning: [], judging };
+        const decision = grown.decision;
+        if (decision.kind === 'need') {
             return {
-                outcome,
+                ...base,
+                outcome: 'inconclusive',
                 width: null,
-                grownWidth: null,
-                metric: null,
-                witness: null,
-                widths: decision.widths,
-                pruning: [],
+                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
                 trainings: decision.trainings,
-                note,
+                notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings)],
                 timing: timing(now()),
             };
         }
-        // Prune phase: shrink every network that reached the target at the adequate width.
-        const grownWidth = decision.adequateWidth;
-        const reachedTasks = decision.reachedAtAdequate.map((r) => results.get(taskKey(taskFor(plan, grownWidth, r.restart))));
-        let pruned;
-        if (search.prune) {
-            pruned = await Promise.all(reachedTasks.map(async (t) => {
-                const r = await executor.prune({ task: { width: t.width, restart: t.restart }, network: t.network });
-                progress({ phase: 'prune', width: r.width, restart: r.restart, epoch: r.steps.length, best: r.metric });
-                return r;
-            }));
+        if (decision.capHit !== null) {
+            const why = `The cap of ${search.maxTrainings} trainings was reached`;
+            return {
+                ...base,
+                outcome: 'inconclusive',
+                width: null,
+                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
+                trainings: decision.trainings,
+                notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings)],
+                timing: timing(now()),
+            };
         }
-        else {
-            pruned = reachedTasks.map((t) => ({
-                restart: t.restart,
-                grownWidth: t.finalWidth,
-                width: t.finalWidth,
-                metric: t.metric,
-                network: t.network,
-                steps: [],
-                trainings: 0,
-            }));
+        // Prune phase: shrink every network that met the target at the grown width or below.
+        const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+        const pruned = await Promise.all(jobs.map(async (job) => {
+            const r = await executor.prune(job);
+            const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
+            progress({ phase: 'prune', width: last, restart: job.source.restart, epoch: r.steps.length, best: null });
+            return r;
+        }));
+        const trainings = decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0);
+        const t = tally(plan, target, decision.tried, pruned, ctx.seed);
+        const steps = pruned.flatMap((r) => r.steps);
+        if (pruned.some((r) => r.interrupted) && decision.grownWidth !== null) {
+            return {
+                ...base,
+                outcome: 'inconclusive',
+                grownWidth: decision.grownWidth,
+                width: null,
+                witness: t.witness,
+                widths: t.widths,
+                pruning: steps,
+                trainings,
+                notes: [stoppedPruningNote(budgetWhy, decision.grownWidth, trainings)],
+                timing: timing(now()),
+            };
         }
-        const win = pickWitness(pruned);
+        const found = t.width !== null && t.witness !== null;
         return {
-            outcome: 'found',
-            width: win.width,
-            grownWidth,
-            metric: win.metric,
-            witness: {
-                restart: win.restart,
-                seed: search.seed,
-                grownWidth: win.grownWidth,
-                network: win.network,
-                metric: win.metric,
-            },
-            widths: decision.widths,
-            pruning: pruned.flatMap((r) => r.steps),
-            trainings: decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0),
-            note: null,
+            outcome: found ? 'found' : 'not-found',
+            width: found ? t.width : null,
+            grownWidth: decision.grownWidth,
+            metric: found ? t.witness.judged : null,
+            witness: t.witness,
+            widths: t.widths,
+            pruning: steps,
+            trainings,
+            notes: found ? [] : notFoundNotes(plan, target, t.widths, judgedOn),
+            judging,
             timing: timing(now()),
         };
     }
@@ -48711,6 +49433,7 @@ function runSearchWorker() {
 
 ;// CONCATENATED MODULE: ./src/search/index.ts
 /** The growth-and-prune search: public surface. */
+
 
 
 
@@ -48837,6 +49560,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:http2")
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:net");
+
+/***/ }),
+
+/***/ 8161:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
 
 /***/ }),
 

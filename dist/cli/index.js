@@ -9286,7 +9286,14 @@ const CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
                 default: 0.25,
-                description: 'Fraction of rows held out to judge the target, stratified by class. 0 judges on the training rows.',
+                description: 'Fraction of rows (per class) held out to steer training: when a training stops, and whether a pruning step is kept. 0 steers on the training rows.',
+            },
+            {
+                name: 'judging',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
+                default: DERIVED,
+                description: 'Fraction of rows (per class) held out to judge whether a network meets the target; they never steer training. Default: 0.2 (at most half of what validation leaves), or 0 when data.validation is 0 (then the target is judged on the training rows). 0 with validation above 0 judges on the validation rows, which is optimistic.',
             },
             {
                 name: 'delimiter',
@@ -9396,9 +9403,16 @@ const CONFIG_SPEC = [
             {
                 name: 'optimizer',
                 changesResult: true,
-                rule: { kind: 'enum', values: ['irprop+', 'adam', 'backprop'] },
-                default: 'irprop+',
-                description: 'irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+                rule: { kind: 'enum', values: ['lbfgs', 'irprop+', 'adam', 'backprop'] },
+                default: 'lbfgs',
+                description: 'lbfgs (full-batch L-BFGS with a strong Wolfe line search), irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+            },
+            {
+                name: 'weight-decay',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: 1000 },
+                default: 0.0001,
+                description: 'L2 penalty on the weights (not the biases): the summed loss gains weight-decay/2 × the sum of squared weights. 0 turns it off.',
             },
             {
                 name: 'init',
@@ -9412,7 +9426,14 @@ const CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
                 default: 10,
-                description: 'Epochs between checks of the target on the validation rows; at most max-epochs.',
+                description: 'Epochs between checks of the validation rows; at most max-epochs.',
+            },
+            {
+                name: 'patience',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+                default: 200,
+                description: 'A training stops when its validation loss has not improved (by 0.1%) for this many epochs: early stopping, and the bound on polishing a network that met the target.',
             },
             {
                 name: 'prune',
@@ -9535,6 +9556,12 @@ function sectionDefaults(section) {
     }
     return out;
 }
+/** The judging fraction when validation rows are held out (common practice for a hold-out test set; no single source). */
+const DEFAULT_JUDGING = 0.2;
+/** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
+function derivedJudging(validation) {
+    return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
+}
 
 ;// CONCATENATED MODULE: ./src/config/build.ts
 /**
@@ -9604,6 +9631,12 @@ function checkRules(reader, written, config) {
     const both = data.features?.find((f) => data.ignore.includes(f));
     if (both !== undefined) {
         throw reader.valueError(at('data', 'ignore'), `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`);
+    }
+    if (data.judging === undefined)
+        data.judging = derivedJudging(data.validation);
+    if (data.validation + data.judging >= 1) {
+        const found = at('data', 'judging') ?? at('data', 'validation');
+        throw reader.valueError(found, `expected data.validation + data.judging below 1 (some rows must be left to train on), found ${data.validation} + ${data.judging}`);
     }
     if (!config.metricGiven)
         target.metric = defaultMetric(data.task === 'regression' ? 'regression' : 'classification');
@@ -10224,6 +10257,7 @@ function encodeDataset(features, target, split) {
     };
     const train = fill(split.train);
     const validation = fill(split.validation);
+    const judging = fill(split.judging);
     return {
         task: target.task,
         inputs,
@@ -10234,6 +10268,9 @@ function encodeDataset(features, target, split) {
         yTrain: train.y,
         xValidation: validation.x,
         yValidation: validation.y,
+        judgingRows: split.judging.length,
+        xJudging: judging.x,
+        yJudging: judging.y,
         encoding: { features: encodings, target: targetEncoding },
     };
 }
@@ -13170,33 +13207,68 @@ function shuffle(items, rng) {
 }
 
 ;// CONCATENATED MODULE: ./src/data/split.ts
+/**
+ * Deterministic three-way split, stratified by class, chosen by a seeded Fisher–Yates
+ * shuffle of each class's rows:
+ * - validation rows (round(rows × data.validation) per class, at least one) steer training:
+ *   when a training stops, which restart is kept, whether a pruning step is accepted;
+ * - judging rows (round(rows × data.judging) per class, at least one) decide whether a network
+ *   meets the target, and never steer anything;
+ * - the rest train.
+ * The validation rows are the first of each shuffled class, so they are the same rows whatever
+ * data.judging is. Every part keeps file order.
+ *
+ * Small data: when some class has too few rows for three parts, the judging part is dropped and
+ * networks are judged on the validation rows (`judgingFolded`); the report says so, because a
+ * figure chosen on the rows that judge it is optimistic.
+ */
+
 
 
 // Keeps the split's stream apart from the training streams drawn from the same seed.
 const SPLIT_STREAM = 0x73706c6974n; // "split"
-function splitRows(target, validation, seed, file) {
+/** Rows each part takes from a group of `n`, or null when the group is too small for them. */
+function partSizes(n, f, minTrain) {
+    let validation = f.validation > 0 ? Math.max(1, Math.round(n * f.validation)) : 0;
+    let judging = f.judging > 0 ? Math.max(1, Math.round(n * f.judging)) : 0;
+    if (n < minTrain + Math.sign(validation) + Math.sign(judging))
+        return null;
+    // Keep enough to train on; the larger held-out part gives way first, and neither below one row.
+    while (n - validation - judging < minTrain) {
+        if (validation >= judging && validation > 1)
+            validation--;
+        else
+            judging--;
+    }
+    return { validation, judging };
+}
+function splitRows(target, fractions, seed, file) {
     const groups = groupRows(target);
+    const minTrain = target.classIndex === null ? 2 : 1;
+    let f = fractions;
+    let judgingFolded = false;
+    if (f.judging > 0 && groups.some((rows) => partSizes(rows.length, f, minTrain) === null)) {
+        f = { ...f, judging: 0 };
+        judgingFolded = true;
+    }
+    const sizes = groups.map((rows, g) => {
+        const s = partSizes(rows.length, f, minTrain);
+        if (s === null)
+            throw tooFew(target, g, rows.length, minTrain, f, file);
+        return s;
+    });
     const rng = xoshiroFromSeed(BigInt(seed) ^ SPLIT_STREAM);
     const train = [];
-    const held = [];
+    const validation = [];
+    const judging = [];
     groups.forEach((rows, g) => {
-        const minimum = target.classIndex === null ? 3 : 2;
-        let take = 0;
-        if (validation > 0) {
-            if (rows.length < minimum)
-                throw tooFew(target, g, rows.length, minimum, validation, file);
-            // At least one validation row per class, and enough left to train on.
-            take = Math.min(Math.max(1, Math.round(rows.length * validation)), rows.length - (minimum - 1));
-        }
-        else if (target.classIndex === null && rows.length < 2) {
-            throw tooFew(target, g, rows.length, 2, validation, file);
-        }
         shuffle(rows, rng);
+        const { validation: v, judging: j } = sizes[g];
         for (let i = 0; i < rows.length; i++)
-            (i < take ? held : train).push(rows[i]);
+            (i < v ? validation : i < v + j ? judging : train).push(rows[i]);
     });
     const ascending = (xs) => Int32Array.from(xs).sort();
-    return { train: ascending(train), validation: ascending(held) };
+    return { train: ascending(train), validation: ascending(validation), judging: ascending(judging), judgingFolded };
 }
 function groupRows(target) {
     if (target.classIndex === null)
@@ -13211,16 +13283,16 @@ function groupRows(target) {
     });
     return groups;
 }
-function tooFew(target, group, rows, minimum, validation, file) {
+function tooFew(target, group, rows, minTrain, f, file) {
     const what = target.classes === null
         ? `the data have ${rows} rows`
-        : `class "${target.classes[group]}" has ${rows} row${rows === 1 ? '' : 's'}`;
-    const need = validation > 0
-        ? target.classes === null
-            ? `at least ${minimum} rows (one or more to validate on, two or more to train on)`
-            : `at least ${minimum} rows per class (one to train on, one to validate on)`
-        : 'at least 2 rows to train on';
-    return dataError(file, 1, target.column, `${columnLabel(target.column, target.name)} (the target): ${what}; with validation ${validation} the split needs ${need}`);
+        : `class ${quote(target.classes[group])} has ${rows} row${rows === 1 ? '' : 's'}`;
+    const parts = [`${minTrain} to train on`];
+    if (f.validation > 0)
+        parts.push('1 to validate on');
+    const minimum = minTrain + (f.validation > 0 ? 1 : 0);
+    const per = target.classes === null ? '' : ' per class';
+    return dataError(file, 1, target.column, `${columnLabel(target.column, target.name)} (the target): ${what}; with validation ${f.validation} the split needs at least ${minimum} rows${per} (${parts.join(', ')})`);
 }
 
 ;// CONCATENATED MODULE: ./src/data/target.ts
@@ -13355,7 +13427,7 @@ async function load(config) {
         rows: table.rows,
         name: target.name,
         column: target.column,
-    }, config.data.validation, config.search.seed, file);
+    }, { validation: config.data.validation, judging: config.data.judging }, config.search.seed, file);
     return {
         dataset: encodeDataset(typed, target, split),
         rows: table.rows,
@@ -13363,6 +13435,7 @@ async function load(config) {
         fingerprint: fingerprint(typed, target, table.rows),
         profile: profileData(typed, target, table.columns, table.rows),
         splitRows: split,
+        judgingFolded: split.judgingFolded,
     };
 }
 async function checkExists(file) {
@@ -13377,19 +13450,47 @@ async function checkExists(file) {
         throw new ConfigKeyProblem('data.path', `expected a CSV file, found a folder at ${file.shown}`);
 }
 
+;// CONCATENATED MODULE: ./src/files/process.ts
+/** Whether a process of this machine still runs, for telling a dead writer's leftovers from a live one's. */
+/**
+ * True only when `pid` certainly names no running process here (ESRCH). A process of
+ * another user (EPERM) runs; anything unclear counts as running, so nothing live is touched.
+ */
+function processIsGone(pid) {
+    if (!Number.isSafeInteger(pid) || pid <= 0)
+        return false;
+    try {
+        process.kill(pid, 0);
+        return false;
+    }
+    catch (e) {
+        return e.code === 'ESRCH';
+    }
+}
+
 ;// CONCATENATED MODULE: ./src/files/atomic.ts
 /**
  * Writes a file so that readers see either the old content or the whole new content,
  * never a half-written file: write a temp file in the same folder, then rename it over
  * the target (rename is atomic within one file system, which is why the temp file must
  * live beside the target rather than in the OS temp folder).
+ *
+ * A writer killed between the two steps leaves its temp file behind. The names follow one
+ * pattern, `.NAME.PID.HEX.neuron-budget.tmp`, which users can ignore in git
+ * (`*.neuron-budget.tmp`), and the next write of the same target removes those whose
+ * writer is gone.
  */
 
 
 
+
+const TEMP_SUFFIX = '.neuron-budget.tmp';
+/** A temp file this old is stale whatever its PID says (a PID can be reused, or belong to another machine). @testOnly */
+const STALE_TEMP_AGE_MS = 60 * 60 * 1000;
 async function writeFileAtomic(path, text) {
+    await removeStaleTempFiles(path);
     // The random suffix only names the temp file; it never reaches any output.
-    const temp = (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}.${process.pid}.${(0,external_node_crypto_namespaceObject.randomBytes)(6).toString('hex')}.tmp`);
+    const temp = (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}.${process.pid}.${(0,external_node_crypto_namespaceObject.randomBytes)(6).toString('hex')}${TEMP_SUFFIX}`);
     let handle = null;
     try {
         handle = await (0,promises_namespaceObject.open)(temp, 'wx');
@@ -13405,6 +13506,51 @@ async function writeFileAtomic(path, text) {
         await (0,promises_namespaceObject.rm)(temp, { force: true }).catch(() => undefined);
         throw error;
     }
+}
+function escapeRegExp(s) {
+    return s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}
+/**
+ * Removes the temp files that earlier writes of `path` left behind: only names of exactly
+ * our pattern for this target, and only when their writer process is gone (on this machine)
+ * or the file is older than STALE_TEMP_AGE_MS. Never throws: a leftover it cannot remove
+ * must not stop the write. Returns the names removed.
+ * @testOnly
+ */
+async function removeStaleTempFiles(path, now = Date.now()) {
+    const folder = (0,external_node_path_namespaceObject.dirname)(path);
+    // A bare `.tmp` ending is the name neuron-budget 0.1.0 gave them: an upgrade cleans those up too.
+    const pattern = new RegExp(`^\\.${escapeRegExp((0,external_node_path_namespaceObject.basename)(path))}\\.(\\d{1,10})\\.[0-9a-f]{12}(?:${escapeRegExp(TEMP_SUFFIX)}|\\.tmp)$`);
+    let names;
+    try {
+        names = await (0,promises_namespaceObject.readdir)(folder);
+    }
+    catch {
+        return [];
+    }
+    const removed = [];
+    for (const name of names) {
+        const m = pattern.exec(name);
+        if (!m)
+            continue;
+        const pid = Number(m[1]);
+        if (pid === process.pid)
+            continue; // a write of this process may be under way
+        const full = (0,external_node_path_namespaceObject.join)(folder, name);
+        try {
+            const info = await (0,promises_namespaceObject.stat)(full);
+            if (!info.isFile())
+                continue;
+            if (!processIsGone(pid) && now - info.mtimeMs < STALE_TEMP_AGE_MS)
+                continue;
+            await (0,promises_namespaceObject.rm)(full, { force: true });
+            removed.push(name);
+        }
+        catch {
+            // Gone already (another run cleaned it) or not ours to touch: leave it.
+        }
+    }
+    return removed;
 }
 
 ;// CONCATENATED MODULE: ./src/files/output.ts
@@ -13529,7 +13675,7 @@ function compare(input) {
         flags.push(`The settings that shape the result differ from the baseline's (${settingsChanged.join('; ')}), so this compares answers to different questions.`);
     }
     if (result.outcome === 'inconclusive') {
-        const how = result.note ? ` ${sentence(result.note)}` : '';
+        const how = result.notes.length > 0 ? ` ${result.notes.map(sentence).join(' ')}` : '';
         return {
             verdict: 'inconclusive',
             reasons: [`The search ran out of budget before it could decide the smallest adequate width.${how}`, ...flags],
@@ -13538,11 +13684,13 @@ function compare(input) {
     }
     if (result.outcome !== 'found' || result.width === null || result.metric === null) {
         const best = bestSeen(result.widths, target.metric);
-        const bestText = best ? `; the best was ${formatMetric(best.value)} at width ${best.width}` : '';
+        const bestText = best ? `; the best network reached ${formatMetric(best.value)} (width ${best.width})` : '';
+        const networks = search.required === 1 ? 'a network that meets' : `${search.required} networks that meet`;
         return {
             verdict: 'fail',
             reasons: [
-                `No width from ${search.minWidth} to ${search.maxWidth} reaches ${targetPhrase(target.metric, target.threshold)}${bestText}.`,
+                `No width from ${search.minWidth} to ${search.maxWidth} has ${networks} ${targetPhrase(target.metric, target.threshold)}${bestText}.`,
+                ...result.notes.map(sentence),
                 ...flags,
             ],
             settingsChanged,
@@ -13707,7 +13855,7 @@ function evaluateGate(input) {
     const comparison = compare({
         result,
         target: config.target,
-        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth },
+        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth, required: config.search.required },
         gate: config.gate,
         baseline,
         settings: resultSettings(config),
@@ -13719,7 +13867,7 @@ function evaluateGate(input) {
 }
 
 ;// CONCATENATED MODULE: ./schema/baseline.schema.json
-const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@1"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","reached","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric at that width."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Width found by the growth phase, before pruning."},"reached":{"type":["integer","null"],"minimum":0,"description":"Restarts that reached the target at `width` (null when growth did not try it)."},"restarts":{"type":["integer","null"],"minimum":0,"description":"Restarts run at `width`."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","reached","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0},"reached":{"type":"integer","minimum":0,"description":"At most `restarts`."},"best":{"type":["number","null"],"description":"Best metric over the restarts; null when every restart diverged."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
+const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
 ;// CONCATENATED MODULE: ./src/common/json-schema.ts
 /**
  * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
@@ -14174,8 +14322,8 @@ function describeChar(text, offset) {
 }
 
 ;// CONCATENATED MODULE: ./src/gate/types.ts
-const BASELINE_SCHEMA = 'neuron-budget/baseline@1';
-const BASELINE_VERSION = 1;
+const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
+const BASELINE_VERSION = 2;
 /** Oldest history entries are dropped beyond this many. */
 const HISTORY_CAP = 100;
 
@@ -14237,14 +14385,15 @@ function nextBaseline(previous, current, meta) {
             width,
             metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
             grownWidth: result.grownWidth,
-            reached: atWidth ? atWidth.reached : null,
-            restarts: atWidth ? atWidth.restarts : null,
+            met: atWidth ? atWidth.met : 0,
+            restarts: atWidth ? atWidth.restarts : 0,
             searchSeconds: result.timing.searchSeconds,
         },
         widths: result.widths.map((w) => ({
             width: w.width,
             restarts: w.restarts,
-            reached: w.reached,
+            met: w.met,
+            adequate: w.adequate,
             best: w.best,
         })),
         data: {
@@ -14337,6 +14486,9 @@ function checkSchemaVersion(value, shown) {
     if (version > BASELINE_VERSION) {
         throw new errors_UserError(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
     }
+    if (version < BASELINE_VERSION) {
+        throw new errors_UserError(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
+    }
     if (version !== BASELINE_VERSION) {
         throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
             file: shown,
@@ -14349,11 +14501,6 @@ const checkShape = schemaValidator(baseline_schema_namespaceObject);
 function validateBaselineShape(value, shown) {
     try {
         checkShape(value);
-        // The one rule JSON Schema cannot say: a width cannot have more successes than tries.
-        value.widths.forEach((w, i) => {
-            if (w.reached > w.restarts)
-                throw new SchemaProblem(`widths[${i}].reached`, `at most restarts (${w.restarts})`, String(w.reached));
-        });
     }
     catch (e) {
         if (!(e instanceof SchemaProblem))
@@ -14381,7 +14528,201 @@ function baseline_describe(v) {
     return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
+;// CONCATENATED MODULE: external "node:os"
+const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
+;// CONCATENATED MODULE: external "node:timers/promises"
+const external_node_timers_promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:timers/promises");
+;// CONCATENATED MODULE: ./src/files/lock.ts
+/**
+ * An exclusive lock beside a file, `.NAME.neuron-budget.lock`, for a read-compare-write that
+ * must not interleave with another process's. Created with O_EXCL, so exactly one process
+ * holds it; it records who holds it, so a lock whose holder died can be taken over:
+ *
+ * - its process is gone (same machine, by PID), or
+ * - it is older than STALE_LOCK_AGE_MS (any machine; the section it guards takes
+ *   milliseconds), or
+ * - it is unreadable and older than a few seconds (a holder killed between create and write).
+ */
+
+
+
+
+
+
+const LOCK_SUFFIX = '.neuron-budget.lock';
+/** A lock this old is stale, whoever holds it. @testOnly */
+const STALE_LOCK_AGE_MS = 10 * 60 * 1000;
+/** A lock file without readable content (its holder died before writing it) is stale after this. */
+const EMPTY_LOCK_AGE_MS = 5_000;
+function lockPathFor(path) {
+    return (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}${LOCK_SUFFIX}`);
+}
+/** The lock is held by a live process and was not released in time. */
+class LockBusy extends Error {
+    lockPath;
+    owner;
+    constructor(lockPath, owner) {
+        super(`${lockPath} is held${owner ? ` by process ${owner.pid}` : ''}`);
+        this.lockPath = lockPath;
+        this.owner = owner;
+        this.name = 'LockBusy';
+    }
+}
+async function acquireLock(path, options = {}) {
+    const lockPath = lockPathFor(path);
+    const waitMs = options.waitMs ?? 10_000;
+    const pollMs = options.pollMs ?? 25;
+    const record = {
+        pid: process.pid,
+        host: (0,external_node_os_namespaceObject.hostname)(),
+        token: (0,external_node_crypto_namespaceObject.randomBytes)(8).toString('hex'),
+        since: new Date().toISOString(),
+    };
+    const text = `${JSON.stringify(record)}\n`;
+    const started = Date.now();
+    for (;;) {
+        try {
+            const handle = await (0,promises_namespaceObject.open)(lockPath, 'wx');
+            try {
+                await handle.writeFile(text, 'utf8');
+            }
+            finally {
+                await handle.close();
+            }
+            return { release: () => releaseLock(lockPath, text) };
+        }
+        catch (e) {
+            if (e.code !== 'EEXIST')
+                throw e;
+        }
+        const held = await inspect(lockPath);
+        if (held === null)
+            continue; // released between our try and the look
+        if (held.stale) {
+            // Re-read just before removing: never remove a lock someone else took over meanwhile.
+            const again = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+            if (again === held.text)
+                await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+            continue;
+        }
+        if (Date.now() - started >= waitMs)
+            throw new LockBusy(lockPath, held.owner);
+        await (0,external_node_timers_promises_namespaceObject.setTimeout)(pollMs);
+    }
+}
+/** Removes the lock only while it is still ours. */
+async function releaseLock(lockPath, text) {
+    const now = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+    if (now === text)
+        await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+}
+async function inspect(lockPath) {
+    let text;
+    let age;
+    try {
+        text = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8');
+        age = Date.now() - (await (0,promises_namespaceObject.stat)(lockPath)).mtimeMs;
+    }
+    catch (e) {
+        if (e.code === 'ENOENT')
+            return null;
+        throw e;
+    }
+    const owner = parseOwner(text);
+    if (age >= STALE_LOCK_AGE_MS)
+        return { text, stale: true, owner };
+    if (owner === null)
+        return { text, stale: age >= EMPTY_LOCK_AGE_MS, owner };
+    const here = owner.host === (0,external_node_os_namespaceObject.hostname)();
+    return { text, stale: here && processIsGone(owner.pid), owner };
+}
+/** The holder as the file says, or null. The file sits in a checkout: only plain values pass. */
+function parseOwner(text) {
+    let v;
+    try {
+        v = JSON.parse(text);
+    }
+    catch {
+        return null;
+    }
+    if (typeof v !== 'object' || v === null)
+        return null;
+    const r = v;
+    if (typeof r.pid !== 'number' || !Number.isSafeInteger(r.pid) || r.pid <= 0)
+        return null;
+    const host = typeof r.host === 'string' && /^[A-Za-z0-9._-]{1,255}$/.test(r.host) ? r.host : null;
+    const since = typeof r.since === 'string' && !Number.isNaN(Date.parse(r.since)) ? new Date(r.since).toISOString() : null;
+    return { pid: r.pid, host, since };
+}
+
+;// CONCATENATED MODULE: ./src/gate/baseline-update.ts
+/**
+ * Records an accepted result in the baseline file without losing another run's. A run reads
+ * the baseline before its search and builds the next one from it; if a second run wrote the
+ * file in between, writing ours would silently drop that run's history entry. So the write
+ * happens under an exclusive lock beside the file, after reading the file again: unchanged,
+ * ours is written; changed, nothing is written and the user is told to run again (exit 2).
+ */
+
+
+
+
+/**
+ * Writes `next` to `path` if the file still holds `expected` (null: no file), else throws a
+ * UserError naming the file (`shown`, as the user wrote it).
+ */
+async function updateBaseline(path, shown, expected, next) {
+    const lock = await lockOrRefuse(path, shown);
+    try {
+        const now = await readBaseline(path, shown);
+        if (!sameBaseline(expected, now)) {
+            const what = now === null ? 'was removed' : expected === null ? 'was created' : 'changed';
+            throw new errors_UserError(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
+                'so this result was not recorded, to keep that change. Run `neuron-budget baseline` again to record it on top.', { file: shown });
+        }
+        await writeBaseline(path, next);
+    }
+    finally {
+        await lock.release();
+    }
+}
+async function lockOrRefuse(path, shown) {
+    try {
+        return await acquireLock(path);
+    }
+    catch (e) {
+        if (!(e instanceof LockBusy))
+            throw e;
+        const lockShown = displayLockPath(shown, path);
+        const who = e.owner
+            ? ` by process ${e.owner.pid}${e.owner.host ? ` on ${e.owner.host}` : ''}${e.owner.since ? ` since ${e.owner.since}` : ''}`
+            : '';
+        throw new errors_UserError(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
+            'Run `neuron-budget baseline` again when it has finished; if none is running, delete the lock file.', { file: shown });
+    }
+}
+/** The lock file's path in the same form as the baseline's as the user wrote it. */
+function displayLockPath(shown, path) {
+    return `${shown.slice(0, shown.lastIndexOf('/') + 1)}${(0,external_node_path_namespaceObject.basename)(lockPathFor(path))}`;
+}
+/** Same content; key order and formatting of the file do not matter to a reader. */
+function sameBaseline(a, b) {
+    if (a === null || b === null)
+        return a === b;
+    return canonical(a) === canonical(b);
+}
+function canonical(v) {
+    if (Array.isArray(v))
+        return `[${v.map(canonical).join(',')}]`;
+    if (v !== null && typeof v === 'object') {
+        const keys = Object.keys(v).sort();
+        return `{${keys.map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(',')}}`;
+    }
+    return JSON.stringify(v);
+}
+
 ;// CONCATENATED MODULE: ./src/gate/stage.ts
+
 
 
 async function runGateStage(input) {
@@ -14399,7 +14740,8 @@ async function runGateStage(input) {
     if (why !== null)
         return { outcome, written: null, notWritten: why, gate: config.gate };
     const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
-    await writeBaseline(input.baselinePath, next);
+    // Only if the file still holds what `previous` was read from: never drop another run's entry.
+    await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
     return { outcome, written: input.baselinePath, notWritten: null, gate: config.gate };
 }
 
@@ -14416,69 +14758,58 @@ async function runGateStage(input) {
 
 
 
-;// CONCATENATED MODULE: ./src/model/document.ts
-
-const MODEL_SCHEMA = 'neuron-budget/model@1';
-function modelDocument(witness, encoding, target) {
+;// CONCATENATED MODULE: ./src/device/cost.ts
+const C_TYPE_BYTES = { float: 4, int8_t: 1, int32_t: 4 };
+/** Entries of the activation lookup table (indexed by an int8 pre-activation). */
+const cost_LUT_ENTRIES = 256;
+/** The constant objects each path of the exported C declares, in declaration order. */
+function cost_storedObjects(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const float32 = [];
+    const int8 = [];
+    if (s.numericFeatures > 0) {
+        float32.push({ suffix: 'f_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        float32.push({ suffix: 'f_in_std', type: 'float', count: s.numericFeatures, role: 'feature deviations' });
+    }
+    float32.push({ suffix: 'f_w1', type: 'float', count: H * D, role: 'hidden weights' }, { suffix: 'f_b1', type: 'float', count: H, role: 'hidden biases' }, { suffix: 'f_w2', type: 'float', count: K * H, role: 'output weights' }, { suffix: 'f_b2', type: 'float', count: K, role: 'output biases' });
+    if (s.regression)
+        float32.push({ suffix: 'f_target', type: 'float', count: 2, role: 'target mean and deviation' });
+    if (s.numericFeatures > 0) {
+        int8.push({ suffix: 'q_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        int8.push({ suffix: 'q_in_mul', type: 'float', count: s.numericFeatures, role: '1 / (deviation · input scale)' });
+    }
+    int8.push({ suffix: 'q_in_zero', type: 'int8_t', count: 1, role: 'input zero-point', scalar: true });
+    if (s.categoricalFeatures > 0)
+        int8.push({ suffix: 'q_in_one', type: 'int8_t', count: 1, role: 'code of a one-hot 1', scalar: true });
+    int8.push({ suffix: 'q_w1', type: 'int8_t', count: H * D, role: 'hidden weights' }, { suffix: 'q_b1', type: 'int32_t', count: H, role: 'hidden biases (zero-point folded in)' }, { suffix: 'q_m0', type: 'int32_t', count: H, role: 'requantisation multipliers M0' }, { suffix: 'q_shift', type: 'int8_t', count: H, role: 'requantisation shifts n' }, { suffix: 'q_act_zero', type: 'int8_t', count: 1, role: 'pre-activation zero-point', scalar: true }, { suffix: 'q_lut', type: 'int8_t', count: cost_LUT_ENTRIES, role: 'activation lookup table' }, { suffix: 'q_w2', type: 'int8_t', count: K * H, role: 'output weights' }, { suffix: 'q_b2', type: 'int32_t', count: K, role: 'output biases (zero-point folded in)' }, { suffix: 'q_out_scale', type: 'float', count: K, role: 'output dequantisation scales' });
+    return { float32, int8 };
+}
+function objectBytes(o) {
+    return o.count * C_TYPE_BYTES[o.type];
+}
+function sumBytes(objects) {
+    return objects.reduce((n, o) => n + objectBytes(o), 0);
+}
+function cost_deviceCost(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const stored = cost_storedObjects(s);
     return {
-        schema: MODEL_SCHEMA,
-        task: encoding.target.task,
-        width: witness.network.width,
-        target: { metric: target.metric, threshold: target.threshold, value: witness.metric },
-        origin: { seed: witness.seed, restart: witness.restart, grownWidth: witness.grownWidth },
-        encoding: structuredClone(encoding),
-        network: structuredClone(witness.network),
+        parameters: D * H + H + H * K + K,
+        macs: D * H + H * K,
+        flashBytes: { float32: sumBytes(stored.float32), int8: sumBytes(stored.int8) },
+        ramBytes: { float32: 4 * (D + H), int8: D + H },
     };
 }
-/** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
-function serializeModel(doc) {
-    return `${JSON.stringify(doc, null, 2)}\n`;
-}
-function inputsOf(features) {
-    return features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
-}
-/** Parse and check a model file; a bad file gets a message naming the file and the key. */
-function parseModel(text, file = 'model') {
-    let doc;
-    try {
-        doc = JSON.parse(text);
-    }
-    catch (e) {
-        throw new UserError(`${file}: not valid JSON (${e instanceof Error ? e.message : String(e)})`, { file });
-    }
-    const bad = (key, expected) => {
-        throw new UserError(`${file}: key "${key}" should be ${expected}`, { file, key });
+/** The cost shape of a network of `width` hidden neurons on data encoded as `encoding`. */
+function cost_costShapeOf(net, encoding) {
+    return {
+        inputs: net.inputs,
+        width: net.width,
+        outputs: net.outputs,
+        numericFeatures: encoding.features.filter((f) => f.kind === 'numeric').length,
+        categoricalFeatures: encoding.features.filter((f) => f.kind === 'categorical').length,
+        regression: encoding.target.task === 'regression',
     };
-    if (typeof doc !== 'object' || doc === null)
-        return bad('(root)', 'an object');
-    const d = doc;
-    if (d.schema !== MODEL_SCHEMA)
-        bad('schema', `"${MODEL_SCHEMA}"`);
-    if (d.task !== 'classification' && d.task !== 'regression')
-        bad('task', '"classification" or "regression"');
-    const net = d.network;
-    if (typeof net !== 'object' || net === null)
-        return bad('network', 'an object');
-    const enc = d.encoding;
-    if (typeof enc !== 'object' || enc === null || !Array.isArray(enc.features))
-        return bad('encoding.features', 'a list');
-    if (inputsOf(enc.features) !== net.inputs)
-        bad('encoding.features', `to encode to ${net.inputs} inputs (network.inputs)`);
-    if (!Array.isArray(net.hiddenWeights) || net.hiddenWeights.length !== net.width)
-        bad('network.hiddenWeights', `${net.width} rows`);
-    if (net.hiddenWeights.some((r) => !Array.isArray(r) || r.length !== net.inputs))
-        bad('network.hiddenWeights', `rows of ${net.inputs} numbers`);
-    if (!Array.isArray(net.hiddenBias) || net.hiddenBias.length !== net.width)
-        bad('network.hiddenBias', `${net.width} numbers`);
-    if (!Array.isArray(net.outputWeights) || net.outputWeights.length !== net.outputs)
-        bad('network.outputWeights', `${net.outputs} rows`);
-    if (net.outputWeights.some((r) => !Array.isArray(r) || r.length !== net.width))
-        bad('network.outputWeights', `rows of ${net.width} numbers`);
-    if (!Array.isArray(net.outputBias) || net.outputBias.length !== net.outputs)
-        bad('network.outputBias', `${net.outputs} numbers`);
-    if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
-        bad('encoding.target.classes', 'a list of class labels');
-    return d;
 }
 
 ;// CONCATENATED MODULE: ./src/nn/kernel/constants.ts
@@ -14668,6 +14999,1003 @@ function detSoftplus(z) {
     return (z > 0 ? z : 0) + detLog1p(detmath_detExp(z > 0 ? -z : z));
 }
 
+;// CONCATENATED MODULE: ./src/device/fixed-point.ts
+/**
+ * The integer arithmetic of the int8 inference, written so that this TypeScript and the
+ * exported C compute the same integers. Every value here is an integer held exactly in a
+ * double (all magnitudes stay below 2^53), so no step depends on JavaScript's number type.
+ *
+ * Requantisation follows Jacob et al. 2018, "Quantization and Training of Neural Networks for
+ * Efficient Integer-Arithmetic-Only Inference", section 2.2: the real multiplier M (eq. 5) is
+ * written M = 2^−n · M0 with M0 in [0.5, 1) (eq. 6), M0 held as a 32-bit fixed-point integer.
+ * The fixed-point multiply and the rounding shift are the documented rules of the
+ * general-purpose gemmlowp library (fixedpoint/fixedpoint.h): SaturatingRoundingDoublingHighMul
+ * and RoundingDivideByPOT.
+ * @testOnly
+ */
+const INT32_MIN = (/* unused pure expression or super */ null && (-2147483648));
+/** @testOnly */
+const INT32_MAX = 2147483647;
+const TWO_15 = 32768;
+const TWO_30 = 1073741824;
+const TWO_31 = 2147483648;
+/** Largest right shift RoundingDivideByPOT takes (gemmlowp asserts exponent ≤ 31). */
+const fixed_point_MAX_SHIFT = 31;
+/**
+ * Round to nearest, ties away from zero. Exact for every double: trunc(x) and x − trunc(x)
+ * are both exact, so no addition of 0.5 can round the wrong way.
+ */
+function roundHalfAway(x) {
+    const i = Math.trunc(x);
+    const f = x - i;
+    const r = f >= 0.5 ? i + 1 : f <= -0.5 ? i - 1 : i;
+    return r === 0 ? 0 : r; // no −0 in the JSON
+}
+function fixed_point_clamp(x, lo, hi) {
+    return x < lo ? lo : x > hi ? hi : x;
+}
+/**
+ * gemmlowp's SaturatingRoundingDoublingHighMul for int32 a, b: (a·b + nudge) / 2^31 truncated
+ * toward zero, nudge = 2^30 when a·b ≥ 0 and 1 − 2^30 otherwise (so a tie rounds toward +∞);
+ * INT32_MIN · INT32_MIN saturates to INT32_MAX.
+ *
+ * a·b reaches 2^62, beyond a double's 53 bits, so the product is split: b = bh·2^16 + bl,
+ * a·bh = ph·2^15 + pl, and a·b + nudge = ph·2^31 + r with every part exact.
+ */
+function saturatingRoundingDoublingHighMul(a, b) {
+    if (a === INT32_MIN && b === INT32_MIN)
+        return INT32_MAX;
+    const bh = b >> 16; // signed high half
+    const bl = b & 0xffff; // unsigned low half
+    const p = a * bh; // |p| ≤ 2^46: exact
+    const q = a * bl; // |q| < 2^47: exact
+    const ph = Math.floor(p / TWO_15);
+    const pl = p - ph * TWO_15; // in [0, 2^15)
+    const negative = (a < 0 && b > 0) || (a > 0 && b < 0);
+    const nudge = negative ? 1 - TWO_30 : TWO_30;
+    const r = pl * 65536 + q + nudge; // |r| < 2^48: exact
+    const rh = Math.floor(r / TWO_31);
+    const rl = r - rh * TWO_31; // in [0, 2^31)
+    const floor = ph + rh; // floor((a·b + nudge) / 2^31)
+    const truncated = floor < 0 && rl !== 0 ? floor + 1 : floor;
+    return truncated === 0 ? 0 : truncated;
+}
+/**
+ * gemmlowp's RoundingDivideByPOT: x / 2^exponent rounded to nearest, ties away from zero,
+ * for int32 x and 0 ≤ exponent ≤ 31.
+ */
+function roundingDivideByPot(x, exponent) {
+    const mask = 2 ** exponent - 1;
+    const remainder = x & mask;
+    const threshold = Math.floor(mask / 2) + (x < 0 ? 1 : 0);
+    return (x >> exponent) + (remainder > threshold ? 1 : 0);
+}
+/**
+ * M = 2^−n · M0, M0 in [0.5, 1), M0 stored as round(M0 · 2^31) (eq. 6). Two limits, both exact
+ * in their effect on an int32 accumulator acc: for M < 2^−32, |acc · M| < 1/2 always rounds to
+ * 0, so the multiplier is 0; for M ≥ 2^31 every nonzero acc saturates an int8, and so does
+ * 2^30 · 2^31 (the left shift capped at 31), which stands in for it.
+ */
+function quantizeMultiplier(m) {
+    if (!(m > 0) || !Number.isFinite(m))
+        return { multiplier: 0, shift: 0 };
+    let n = 0;
+    let f = m;
+    while (f < 0.5 && n <= fixed_point_MAX_SHIFT + 1) {
+        f *= 2; // exact
+        n++;
+    }
+    while (f >= 1 && n >= -fixed_point_MAX_SHIFT - 1) {
+        f /= 2; // exact
+        n--;
+    }
+    if (n > fixed_point_MAX_SHIFT)
+        return { multiplier: 0, shift: 0 };
+    let m0 = roundHalfAway(f * TWO_31);
+    if (m0 === TWO_31) {
+        m0 = TWO_30;
+        n--;
+    }
+    if (n < -fixed_point_MAX_SHIFT)
+        return { multiplier: TWO_30, shift: -fixed_point_MAX_SHIFT };
+    return { multiplier: m0, shift: n };
+}
+/**
+ * acc · M for an int32 acc: a left shift (saturating to int32) when shift < 0, then the
+ * fixed-point multiply by M0, then the rounding right shift when shift > 0.
+ */
+function fixed_point_multiplyByQuantizedMultiplier(acc, q) {
+    if (q.multiplier === 0)
+        return 0;
+    let x = acc;
+    if (q.shift < 0)
+        x = fixed_point_clamp(acc * 2 ** -q.shift, INT32_MIN, INT32_MAX); // power-of-two product: exact
+    const high = saturatingRoundingDoublingHighMul(x, q.multiplier);
+    return q.shift > 0 ? roundingDivideByPot(high, q.shift) : high;
+}
+
+;// CONCATENATED MODULE: ./src/device/quantize.ts
+
+
+
+/** Largest |int32 bias|; with at most MAX_QUANT_INPUTS terms of |q_w·q_x| ≤ 127·128 the accumulator stays in int32. */
+const quantize_BIAS_LIMIT = 2 ** 30;
+const MAX_QUANT_INPUTS = 16384;
+const INT8_MIN = -128;
+const INT8_MAX = 127;
+/**
+ * Pre-activation range and activation codes per activation. The calibrated range is
+ * R = max |a| over the calibration rows (ReLU: max a), clipped where the activation is within
+ * half an output step of its limit (beyond that every pre-activation gives the same code):
+ *   tanh      a in [−R, R], S_a = R/127, Z_a = 0; h in [−tanh R, tanh R], S_h = tanh(R)/127, Z_h = 0
+ *             (odd function: symmetric codes). Clip: atanh(1 − 1/254) = ln(507)/2 ≈ 3.11.
+ *   logistic  a in [−R, R], S_a = R/127, Z_a = 0; h in [0, σ(R)] (widened to hold 0),
+ *             S_h = σ(R)/255, Z_h = −128. Clip: σ(a) = 1 − 1/510 at a = ln(509) ≈ 6.23.
+ *   relu      a in [0, R], S_a = R/255, Z_a = −128 (a negative pre-activation clamps to code
+ *             −128, which is relu's 0); h = a: S_h = S_a, Z_h = −128.
+ * The output range is the image of the pre-activation range, so it needs no calibration of its own.
+ */
+function activationRanges(activation, calibrated) {
+    if (activation === 'relu') {
+        const r = calibrated > 0 && Number.isFinite(calibrated) ? calibrated : 1;
+        const s = r / 255;
+        return { preActivation: { scale: s, zeroPoint: INT8_MIN }, activation: { scale: s, zeroPoint: INT8_MIN } };
+    }
+    const clip = activation === 'tanh' ? detLog(507) / 2 : detLog(509);
+    const r = calibrated > 0 && calibrated < clip ? calibrated : clip;
+    const preActivation = { scale: r / 127, zeroPoint: 0 };
+    if (activation === 'tanh')
+        return { preActivation, activation: { scale: detTanh(r) / 127, zeroPoint: 0 } };
+    return { preActivation, activation: { scale: detmath_detLogistic(r) / 255, zeroPoint: INT8_MIN } };
+}
+function activate(activation, a) {
+    if (activation === 'tanh')
+        return detTanh(a);
+    if (activation === 'logistic')
+        return detmath_detLogistic(a);
+    return a > 0 ? a : 0;
+}
+/** q = clamp(Z + round(r / S)) into int8. */
+function quantizeValue(r, p) {
+    return fixed_point_clamp(p.zeroPoint + roundHalfAway(r / p.scale), INT8_MIN, INT8_MAX);
+}
+/** r = S · (q − Z) (the paper's eq. 1). */
+function dequantizeValue(q, p) {
+    return p.scale * (q - p.zeroPoint);
+}
+/**
+ * The asymmetric int8 parameters of the range [lo, hi], widened to hold 0, with the
+ * zero-point rounded to an integer so that real 0 is exactly representable.
+ */
+function rangeParams(lo, hi) {
+    let a = Math.min(lo, 0);
+    let b = Math.max(hi, 0);
+    if (!(b > a)) {
+        a = 0;
+        b = 1;
+    }
+    const scale = (b - a) / 255;
+    return { scale, zeroPoint: fixed_point_clamp(roundHalfAway(INT8_MIN - a / scale), INT8_MIN, INT8_MAX) };
+}
+/** The table of activation codes for every int8 pre-activation code. */
+function activationTable(activation, pre, out) {
+    const table = [];
+    for (let q = INT8_MIN; q < INT8_MIN + cost_LUT_ENTRIES; q++) {
+        table.push(quantizeValue(activate(activation, dequantizeValue(q, pre)), out));
+    }
+    return table;
+}
+/**
+ * One layer's symmetric per-output-channel weights and int32 biases. The scale is at least
+ * |bias| / (S_in · BIAS_LIMIT), so the bias always fits (coarser weights only when they are
+ * negligible beside the bias); an all-zero channel gets scale 1.
+ */
+function quantizeLayer(weights, bias, inputScale) {
+    const scales = [];
+    const qWeights = [];
+    const qBias = [];
+    weights.forEach((row, j) => {
+        let maxAbs = 0;
+        for (const w of row)
+            maxAbs = Math.max(maxAbs, Math.abs(w));
+        let s = Math.max(maxAbs / INT8_MAX, Math.abs(bias[j]) / (inputScale * quantize_BIAS_LIMIT));
+        if (!(s > 0) || !Number.isFinite(s))
+            s = 1;
+        scales.push(s);
+        qWeights.push(row.map((w) => fixed_point_clamp(roundHalfAway(w / s), -INT8_MAX, INT8_MAX)));
+        qBias.push(fixed_point_clamp(roundHalfAway(bias[j] / (inputScale * s)), -quantize_BIAS_LIMIT, quantize_BIAS_LIMIT));
+    });
+    return { weights: qWeights, scales, bias: qBias };
+}
+/** bias − Z · Σ weights: the accumulator then sums weight · code directly (the paper's section 2.3). */
+function quantize_foldZeroPoint(bias, weights, zero) {
+    return bias.map((b, j) => b - zero * weights[j].reduce((s, w) => s + w, 0));
+}
+function checkFinite(net) {
+    const all = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!all.every(Number.isFinite))
+        throw new RangeError('cannot quantise a network with non-finite weights');
+}
+/** Largest |a| (ReLU: largest a) of the hidden pre-activations over the calibration rows, in float64. */
+function calibratePreActivation(net, cal) {
+    const D = net.inputs;
+    let extreme = 0;
+    for (let p = 0; p < cal.rows; p++) {
+        for (let j = 0; j < net.width; j++) {
+            let a = net.hiddenBias[j];
+            const w = net.hiddenWeights[j];
+            for (let i = 0; i < D; i++)
+                a += cal.x[p * D + i] * w[i];
+            const v = net.activation === 'relu' ? a : Math.abs(a);
+            if (v > extreme)
+                extreme = v;
+        }
+    }
+    return extreme;
+}
+function inputRange(cal, D) {
+    let lo = 0;
+    let hi = 0;
+    for (let q = 0; q < cal.rows * D; q++) {
+        const v = cal.x[q];
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    return rangeParams(lo, hi);
+}
+/** The int8 form of `net`, its activation ranges calibrated on `calibration` (the training rows). */
+function quantizeNetwork(net, encoding, calibration) {
+    const D = net.inputs;
+    const H = net.width;
+    const K = net.outputs;
+    if (D > MAX_QUANT_INPUTS || H > MAX_QUANT_INPUTS) {
+        throw new RangeError(`int8 quantisation takes at most ${MAX_QUANT_INPUTS} inputs and hidden neurons`);
+    }
+    if (calibration.rows < 1)
+        throw new RangeError('int8 quantisation needs at least one calibration row');
+    checkFinite(net);
+    const encoded = encoding.features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
+    if (encoded !== D)
+        throw new RangeError(`the encoding gives ${encoded} inputs, the network takes ${D}`);
+    const input = inputRange(calibration, D);
+    const features = encoding.features.map((f) => f.kind === 'numeric'
+        ? {
+            kind: 'numeric',
+            mean: Math.fround(f.mean),
+            multiplier: Math.fround(1 / ((f.std > 0 ? f.std : 1) * input.scale)),
+        }
+        : { kind: 'categorical', categories: f.categories.length });
+    const hidden = quantizeLayer(net.hiddenWeights, net.hiddenBias, input.scale);
+    const ranges = activationRanges(net.activation, calibratePreActivation(net, calibration));
+    const multipliers = hidden.scales.map((s) => quantizeMultiplier((input.scale * s) / ranges.preActivation.scale));
+    const t = encoding.target;
+    const regression = t.task === 'regression';
+    const outBias = net.outputBias.map((b) => (regression ? b + t.mean / t.std : b));
+    const S_h = ranges.activation.scale;
+    const output = quantizeLayer(net.outputWeights, outBias, S_h);
+    return {
+        inputs: D,
+        width: H,
+        outputs: K,
+        activation: net.activation,
+        head: net.head,
+        input: { ...input, one: quantizeValue(1, input), features },
+        hidden: {
+            weights: hidden.weights,
+            weightScales: hidden.scales,
+            bias: hidden.bias,
+            multiplier: multipliers.map((m) => m.multiplier),
+            shift: multipliers.map((m) => m.shift),
+            preActivation: ranges.preActivation,
+            activation: ranges.activation,
+            table: activationTable(net.activation, ranges.preActivation, ranges.activation),
+        },
+        output: {
+            weights: output.weights,
+            weightScales: output.scales,
+            bias: output.bias,
+            scale: output.scales.map((s) => Math.fround(S_h * s * (regression ? t.std : 1))),
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/device/int8-forward.ts
+/**
+ * The int8 inference exactly as the exported C runs it (export-c.ts, NAME_predict_int8), so
+ * that both give the same bits. The only float operations are the ones the C performs, each
+ * rounded to float32 with Math.fround: the centring of a raw numeric feature (x − mean), its
+ * scaling into quantisation steps (· multiplier), the int32 accumulator's conversion to float
+ * and the output's dequantisation (· scale). Everything else is integer arithmetic.
+ *
+ * None of these float steps is a product feeding a sum, so a C compiler that contracts
+ * a·b + c into a fused multiply-add cannot change them; they need IEEE 754 single precision
+ * with each assignment rounded to float (FLT_EVAL_METHOD 0, or a compiler that honours C99's
+ * rounding on assignment, as GCC does in its ISO modes).
+ */
+
+
+
+/** A raw value's clamp before it is rounded to an integer (keeps the C's float → int conversion defined). */
+const int8_forward_INPUT_STEP_LIMIT = 512;
+/** The requantised pre-activation's clamp before its zero-point is added (keeps the C's sum in int32). */
+const int8_forward_PRE_ACTIVATION_LIMIT = 255;
+/**
+ * A value in input quantisation steps to its int8 code: clamp t to ±512 (NaN to −512), round
+ * half away from zero through truncation (t − trunc(t) is exact in float32), add Z, clamp.
+ */
+function inputCode(t, zeroPoint) {
+    let v = t;
+    if (!(v > -int8_forward_INPUT_STEP_LIMIT))
+        v = -int8_forward_INPUT_STEP_LIMIT;
+    else if (v > int8_forward_INPUT_STEP_LIMIT)
+        v = int8_forward_INPUT_STEP_LIMIT;
+    let i = Math.trunc(v);
+    const f = Math.fround(v - i);
+    if (f >= 0.5)
+        i++;
+    else if (f <= -0.5)
+        i--;
+    return clamp(zeroPoint + i, -128, 127);
+}
+/** A categorical feature's raw value as a category index: a whole number in [0, n), else −1 (all zeros). */
+function categoryIndex(v, n) {
+    if (v >= 0 && v < n) {
+        const c = Math.trunc(v);
+        if (c === v)
+            return c;
+    }
+    return -1;
+}
+/**
+ * Run the int8 network on `rows` rows of raw features (rows × features, float32 values).
+ * With `trace`, also records the input and hidden codes of every row.
+ */
+function int8Forward(q, features, rows, trace = null) {
+    const F = q.input.features.length;
+    const D = q.inputs;
+    const H = q.width;
+    const K = q.outputs;
+    const b1 = foldZeroPoint(q.hidden.bias, q.hidden.weights, q.input.zeroPoint);
+    const b2 = foldZeroPoint(q.output.bias, q.output.weights, q.hidden.activation.zeroPoint);
+    const requant = q.hidden.multiplier.map((multiplier, j) => ({ multiplier, shift: q.hidden.shift[j] }));
+    const zx = q.input.zeroPoint;
+    const za = q.hidden.preActivation.zeroPoint;
+    const xq = new Int32Array(D);
+    const hq = new Int32Array(H);
+    const classes = new Int32Array(rows);
+    const outputs = new Float32Array(rows * K);
+    for (let p = 0; p < rows; p++) {
+        let c = 0;
+        for (let f = 0; f < F; f++) {
+            const v = Math.fround(features[p * F + f]);
+            const e = q.input.features[f];
+            if (e.kind === 'numeric') {
+                const d = Math.fround(v - e.mean);
+                xq[c++] = inputCode(Math.fround(d * e.multiplier), zx);
+            }
+            else {
+                const k = categoryIndex(v, e.categories);
+                for (let j = 0; j < e.categories; j++)
+                    xq[c + j] = j === k ? q.input.one : zx;
+                c += e.categories;
+            }
+        }
+        for (let j = 0; j < H; j++) {
+            const w = q.hidden.weights[j];
+            let acc = b1[j];
+            for (let i = 0; i < D; i++)
+                acc += w[i] * xq[i];
+            const r = clamp(multiplyByQuantizedMultiplier(acc, requant[j]), -int8_forward_PRE_ACTIVATION_LIMIT, int8_forward_PRE_ACTIVATION_LIMIT);
+            const code = clamp(za + r, -128, 127);
+            hq[j] = q.hidden.table[code + 128];
+            if (trace)
+                trace.preActivation[p * H + j] = code;
+        }
+        if (trace) {
+            trace.inputs.set(xq, p * D);
+            trace.hidden.set(hq, p * H);
+        }
+        let best = 0;
+        for (let k = 0; k < K; k++) {
+            const w = q.output.weights[k];
+            let acc = b2[k];
+            for (let j = 0; j < H; j++)
+                acc += w[j] * hq[j];
+            const z = Math.fround(Math.fround(acc) * q.output.scale[k]);
+            outputs[p * K + k] = z;
+            if (z > outputs[p * K + best])
+                best = k;
+        }
+        classes[p] = q.head === 'softmax' ? best : q.head === 'logistic' ? (outputs[p * K] > 0 ? 1 : 0) : 0;
+    }
+    return { classes, outputs };
+}
+/**
+ * Raw CSV rows as the device's raw features (rows × features, float32): a numeric feature's
+ * number, a categorical feature's category index (−1 for a category the model has not seen,
+ * which encodes as all zeros, as encodeRows does).
+ */
+function rawFeatureRows(encoding, rows) {
+    const F = encoding.features.length;
+    const out = new Float32Array(rows.length * F);
+    rows.forEach((row, r) => {
+        encoding.features.forEach((f, i) => {
+            const cell = row[f.name];
+            if (cell === undefined)
+                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
+            const text = cell.trim();
+            if (f.kind === 'categorical') {
+                out[r * F + i] = f.categories.indexOf(text);
+                return;
+            }
+            const v = text === '' ? Number.NaN : Number(text);
+            if (!Number.isFinite(v)) {
+                throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
+            }
+            out[r * F + i] = v;
+        });
+    });
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/int8-check.ts
+
+
+
+const isInt = (v, lo, hi) => Number.isInteger(v) && v >= lo && v <= hi;
+const isF32 = (v) => typeof v === 'number' && Number.isFinite(v) && Math.fround(v) === v;
+const isPositive = (v) => typeof v === 'number' && Number.isFinite(v) && v > 0;
+function list(v, n, ok) {
+    return Array.isArray(v) && v.length === n && v.every(ok);
+}
+function matrix(v, rows, cols, ok) {
+    return Array.isArray(v) && v.length === rows && v.every((r) => list(r, cols, ok));
+}
+const obj = (v) => typeof v === 'object' && v !== null && !Array.isArray(v) ? v : null;
+function quantParams(v) {
+    const p = obj(v);
+    return p !== null && isPositive(p.scale) && isInt(p.zeroPoint, -128, 127);
+}
+function int8_check_checkInt8Network(value, shape, encoding) {
+    const { inputs: D, width: H, outputs: K } = shape;
+    const q = obj(value);
+    if (q === null)
+        return { key: 'int8', expected: 'an object or null' };
+    if (q.inputs !== D || q.width !== H || q.outputs !== K) {
+        return { key: 'int8', expected: `the shape of the network (${D} inputs, ${H} hidden, ${K} outputs)` };
+    }
+    const input = obj(q.input);
+    if (input === null || !quantParams(input) || !isInt(input.one, -128, 127)) {
+        return { key: 'int8.input', expected: 'a scale, an int8 zero-point and an int8 one-hot code' };
+    }
+    const features = input.features;
+    const fine = Array.isArray(features) &&
+        features.length === encoding.features.length &&
+        features.every((f, i) => {
+            const e = encoding.features[i];
+            const g = obj(f);
+            if (g === null || g.kind !== e.kind)
+                return false;
+            if (e.kind === 'categorical')
+                return g.categories === e.categories.length;
+            return isF32(g.mean) && isF32(g.multiplier);
+        });
+    if (!fine)
+        return { key: 'int8.input.features', expected: 'one entry per feature of the encoding, of its kind' };
+    const hidden = obj(q.hidden);
+    if (hidden === null)
+        return { key: 'int8.hidden', expected: 'an object' };
+    const checks = [
+        ['weights', matrix(hidden.weights, H, D, (w) => isInt(w, -127, 127)), `${H} rows of ${D} integers in [-127, 127]`],
+        ['weightScales', list(hidden.weightScales, H, isPositive), `${H} positive numbers`],
+        ['bias', list(hidden.bias, H, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${H} integers within ±2^30`],
+        ['multiplier', list(hidden.multiplier, H, (m) => isInt(m, 0, 2 ** 31 - 1)), `${H} integers in [0, 2^31)`],
+        ['shift', list(hidden.shift, H, (n) => isInt(n, -MAX_SHIFT, MAX_SHIFT)), `${H} integers in [-31, 31]`],
+        ['preActivation', quantParams(hidden.preActivation), 'a scale and an int8 zero-point'],
+        ['activation', quantParams(hidden.activation), 'a scale and an int8 zero-point'],
+        ['table', list(hidden.table, LUT_ENTRIES, (t) => isInt(t, -128, 127)), `${LUT_ENTRIES} integers in [-128, 127]`],
+    ];
+    for (const [key, ok, expected] of checks)
+        if (!ok)
+            return { key: `int8.hidden.${key}`, expected };
+    const output = obj(q.output);
+    if (output === null)
+        return { key: 'int8.output', expected: 'an object' };
+    const outChecks = [
+        ['weights', matrix(output.weights, K, H, (w) => isInt(w, -127, 127)), `${K} rows of ${H} integers in [-127, 127]`],
+        ['weightScales', list(output.weightScales, K, isPositive), `${K} positive numbers`],
+        ['bias', list(output.bias, K, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${K} integers within ±2^30`],
+        ['scale', list(output.scale, K, isF32), `${K} finite float32 numbers`],
+    ];
+    for (const [key, ok, expected] of outChecks)
+        if (!ok)
+            return { key: `int8.output.${key}`, expected };
+    return null;
+}
+
+;// CONCATENATED MODULE: ./src/device/c-text.ts
+/**
+ * Pieces of C source text: checked identifiers, safe comment text and exact float32 literals.
+ * Names from a repository (features, categories, classes, config paths) are untrusted: they
+ * only ever reach the C inside comments, through `commentText`.
+ */
+
+/** Letters, digits and underscores, a letter first (a leading underscore is reserved in C), at most 31 (C99's portable length). */
+const C_NAME = /^[A-Za-z][A-Za-z0-9_]{0,30}$/;
+/**
+ * The NAME of NAME.h, NAME.c and NAME_predict; a clear error for anything that is not a plain C
+ * identifier (the value shown JSON-escaped, so no control character reaches a log line).
+ */
+function c_text_checkCName(name, key = '--name') {
+    if (!C_NAME.test(name)) {
+        const shown = JSON.stringify(name.length > 40 ? `${name.slice(0, 40)}…` : name).replace(/[\u007f-\u009f\u2028\u2029]/g, '?');
+        throw new UserError(`${key}: expected a C identifier (a letter, then up to 30 letters, digits or underscores), found ${shown}`, { key });
+    }
+    return name;
+}
+/** Longest untrusted text kept in a comment, in characters, before the escapes. */
+const COMMENT_CLIP = 64;
+/**
+ * Untrusted text made safe inside a C block comment: clipped to `max` characters (with "..."),
+ * every character outside printable ASCII, and the backslash, written as <U+XXXX> (no line
+ * break, control character or line splice survives), "??" broken so no trigraph forms, and
+ * every "*\/" and "/*" broken with a space.
+ */
+function c_text_commentText(text, max = COMMENT_CLIP) {
+    const chars = Array.from(text);
+    const clipped = chars.length > max ? [...chars.slice(0, max), '.', '.', '.'] : chars;
+    let out = '';
+    for (const ch of clipped) {
+        const code = ch.codePointAt(0) ?? 0;
+        const printable = code >= 0x20 && code <= 0x7e && ch !== '\\';
+        out += printable ? ch : `<U+${code.toString(16).toUpperCase().padStart(4, '0')}>`;
+    }
+    out = out.replace(/\?\?/g, '?<U+003F>');
+    let before;
+    do {
+        before = out;
+        out = out.replace(/\*\//g, '* /').replace(/\/\*/g, '/ *');
+    } while (out !== before);
+    return out;
+}
+const f32 = new Float32Array(1);
+const c_text_u32 = new Uint32Array(f32.buffer);
+/** A float32 value as a C99 hexadecimal float literal with an f suffix: exact by construction. */
+function c_text_floatLiteral(x) {
+    if (!Number.isFinite(x) || Math.fround(x) !== x) {
+        throw new RangeError(`not a finite float32 value: ${x}`);
+    }
+    f32[0] = x;
+    const bits = c_text_u32[0];
+    const sign = bits >>> 31 ? '-' : '';
+    const exp = (bits >>> 23) & 0xff;
+    const mant = bits & 0x7fffff;
+    if (exp === 0 && mant === 0)
+        return `${sign}0x0p+0f`;
+    // 23 fraction bits shifted to 24 fill six hex digits.
+    const digits = (mant << 1).toString(16).padStart(6, '0').replace(/0+$/, '');
+    const frac = digits === '' ? '' : `.${digits}`;
+    const e = exp === 0 ? -126 : exp - 127;
+    return `${sign}0x${exp === 0 ? 0 : 1}${frac}p${e < 0 ? '-' : '+'}${Math.abs(e)}f`;
+}
+/** An int8 or int32 constant as a C literal (INT32_MIN would need a cast; the scheme never stores it). */
+function c_text_intLiteral(v) {
+    if (!Number.isInteger(v) || v <= -2147483648 || v > 2147483647)
+        throw new RangeError(`not an int32 literal: ${v}`);
+    return String(v);
+}
+
+;// CONCATENATED MODULE: ./src/device/c-code.ts
+
+function encodeStatements(model, name, int8Path) {
+    const out = [];
+    let offset = 0;
+    let m = 0;
+    model.encoding.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            out.push(int8Path
+                ? `  {\n    const float d = features[${i}] - ${name}_q_in_mean[${m}];\n    const float t = d * ${name}_q_in_mul[${m}];\n    xq[${offset}] = ${name}_input_code(t);\n  }`
+                : `  x[${offset}] = (features[${i}] - ${name}_f_in_mean[${m}]) / ${name}_f_in_std[${m}];`);
+            m++;
+            offset++;
+        }
+        else {
+            const n = f.categories.length;
+            out.push(`  c = ${name}_category(features[${i}], ${n});`, int8Path
+                ? `  for (j = 0; j < ${n}; j++) xq[${offset} + j] = j == c ? ${name}_q_in_one : ${name}_q_in_zero;`
+                : `  for (j = 0; j < ${n}; j++) x[${offset} + j] = j == c ? 1.0f : 0.0f;`);
+            offset += n;
+        }
+    });
+    return out;
+}
+function c_code_helpers(name, hasNumeric, hasCategorical) {
+    const out = [];
+    if (hasCategorical) {
+        out.push(`/* A raw categorical value as a category index: a whole number in [0, n), else -1. */`, `static int ${name}_category(float v, int n) {`, `  if (v >= 0.0f && v < (float)n) {`, `    const int c = (int)v;`, `    if ((float)c == v) return c;`, `  }`, `  return -1;`, `}`, ``);
+    }
+    if (hasNumeric) {
+        out.push(`/* Input steps to an int8 code: clamp, round half away from zero (t - trunc(t) is exact), add the zero-point. */`, `static int8_t ${name}_input_code(float t) {`, `  int32_t i;`, `  float f;`, `  if (!(t > -${INPUT_STEP_LIMIT}.0f)) t = -${INPUT_STEP_LIMIT}.0f;`, `  else if (t > ${INPUT_STEP_LIMIT}.0f) t = ${INPUT_STEP_LIMIT}.0f;`, `  i = (int32_t)t;`, `  f = t - (float)i;`, `  if (f >= 0.5f) i++;`, `  else if (f <= -0.5f) i--;`, `  i += ${name}_q_in_zero;`, `  return (int8_t)(i < -128 ? -128 : i > 127 ? 127 : i);`, `}`, ``);
+    }
+    out.push(`/*`, ` * acc * M with M = m0 * 2^-31 * 2^-shift: a saturating left shift when shift < 0, the fixed-point`, ` * multiply (nudge, then division by 2^31 truncating toward zero) and a rounding right shift (ties`, ` * away from zero) when shift > 0: gemmlowp's SaturatingRoundingDoublingHighMul and RoundingDivideByPOT.`, ` */`, `static int32_t ${name}_requantize(int32_t acc, int32_t m0, int shift) {`, `  int64_t x = acc;`, `  int64_t ab;`, `  int32_t high, mask, remainder, threshold, floor_shift;`, `  if (m0 == 0) return 0;`, `  if (shift < 0) {`, `    x *= (int64_t)1 << -shift;`, `    if (x > INT32_MAX) x = INT32_MAX;`, `    if (x < INT32_MIN) x = INT32_MIN;`, `  }`, `  if (x == INT32_MIN && m0 == INT32_MIN) return INT32_MAX;`, `  ab = x * (int64_t)m0;`, `  high = (int32_t)((ab + (ab >= 0 ? ((int64_t)1 << 30) : (1 - ((int64_t)1 << 30)))) / ((int64_t)1 << 31));`, `  if (shift <= 0) return high;`, `  mask = (int32_t)(((int64_t)1 << shift) - 1);`, `  remainder = (int32_t)((uint32_t)high & (uint32_t)mask);`, `  threshold = (mask >> 1) + (high < 0 ? 1 : 0);`, `  floor_shift = high >= 0 ? (high >> shift) : ~((~high) >> shift);`, `  return floor_shift + (remainder > threshold ? 1 : 0);`, `}`, ``);
+    return out;
+}
+function c_code_floatPath(model, name) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const activation = net.activation === 'tanh'
+        ? 'tanhf(a)'
+        : net.activation === 'logistic'
+            ? '1.0f / (1.0f + expf(-a))'
+            : 'a > 0.0f ? a : 0.0f';
+    const out = [
+        `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  float x[${N}_INPUTS];`,
+        `  float h[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...encodeStatements(model, name, false),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    float a = ${name}_f_b1[j];`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) a += ${name}_f_w1[j][i] * x[i];`,
+        `    h[j] = ${activation};`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    float z = ${name}_f_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) z += ${name}_f_w2[k][j] * h[j];`,
+        `    outputs[k] = z;`,
+        `  }`,
+    ];
+    if (net.head === 'softmax') {
+        out.push(`  {`, `    float m = outputs[0], s = 0.0f;`, `    int best = 0;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > m) m = outputs[k];`, `    for (k = 0; k < ${N}_OUTPUTS; k++) {`, `      outputs[k] = expf(outputs[k] - m);`, `      s += outputs[k];`, `    }`, `    for (k = 0; k < ${N}_OUTPUTS; k++) outputs[k] /= s;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `    return best;`, `  }`);
+    }
+    else if (net.head === 'logistic') {
+        out.push(`  outputs[0] = 1.0f / (1.0f + expf(-outputs[0]));`, `  return outputs[0] > 0.5f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  outputs[0] = outputs[0] * ${name}_f_target[1] + ${name}_f_target[0];`, `  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+function c_code_int8Path(model, name) {
+    const N = name.toUpperCase();
+    const head = model.network.head;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const out = [
+        `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  int8_t xq[${N}_INPUTS];`,
+        `  int8_t hq[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...(head === 'softmax' ? [`  int best = 0;`] : []),
+        ...encodeStatements(model, name, true),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    int32_t acc = ${name}_q_b1[j], r;`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) acc += (int32_t)${name}_q_w1[j][i] * (int32_t)xq[i];`,
+        `    r = ${name}_requantize(acc, ${name}_q_m0[j], ${name}_q_shift[j]);`,
+        `    if (r < -${PRE_ACTIVATION_LIMIT}) r = -${PRE_ACTIVATION_LIMIT};`,
+        `    else if (r > ${PRE_ACTIVATION_LIMIT}) r = ${PRE_ACTIVATION_LIMIT};`,
+        `    r += ${name}_q_act_zero;`,
+        `    if (r < -128) r = -128;`,
+        `    else if (r > 127) r = 127;`,
+        `    hq[j] = ${name}_q_lut[r + 128];`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    int32_t acc = ${name}_q_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) acc += (int32_t)${name}_q_w2[k][j] * (int32_t)hq[j];`,
+        `    outputs[k] = (float)acc * ${name}_q_out_scale[k];`,
+        `  }`,
+    ];
+    if (head === 'softmax') {
+        out.push(`  for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `  return best;`);
+    }
+    else if (head === 'logistic') {
+        out.push(`  return outputs[0] > 0.0f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/export-c.ts
+/**
+ * Firmware export: a model as C99 source, NAME.h and NAME.c, with a float32 and an int8 path.
+ * No dynamic allocation, nothing beyond the C standard library (math.h on the float path).
+ * The constant objects are exactly those cost.ts counts (`storedObjects`), and the int8 path
+ * does exactly what int8-forward.ts simulates, operation for operation.
+ */
+
+
+
+
+
+const DEFAULT_C_NAME = 'nb_model';
+const q = (s) => `"${commentText(s)}"`;
+function checkModel(model) {
+    const net = model.network;
+    const int8 = model.int8;
+    if (int8 === null) {
+        throw new UserError('model: no int8 network (key "int8" is null); write the model again with this version');
+    }
+    const values = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!values.every(Number.isFinite))
+        throw new UserError('model: network weights must be finite numbers');
+    if (int8.inputs !== net.inputs || int8.width !== net.width || int8.outputs !== net.outputs) {
+        throw new UserError('model: the int8 network does not have the shape of the float network', { key: 'int8' });
+    }
+    return int8;
+}
+function headerText(model, name, p) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const enc = model.encoding;
+    const classes = enc.target.classes ?? [];
+    const regression = model.task === 'regression';
+    const act = net.activation;
+    const lines = [
+        `/*`,
+        ` * ${name}.h: a neural network for the device, written by neuron-budget ${commentText(p.toolVersion, 32)}.`,
+        ` * Do not edit: export it again from the model file instead.`,
+        ` *`,
+        ` * Data fingerprint: ${commentText(p.dataFingerprint, 80)}`,
+        ` * Config: ${commentText(p.config, 120)}`,
+        ` * Network: ${net.inputs} inputs after encoding, ${net.width} hidden neurons (${act}), ${net.outputs} output${net.outputs === 1 ? '' : 's'} (${net.head} head).`,
+        ` *`,
+        ` * features[] holds the raw values, in this order:`,
+    ];
+    enc.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            lines.push(` *   [${i}] ${q(f.name)}: a number, standardised on the device`);
+        }
+        else {
+            lines.push(` *   [${i}] ${q(f.name)}: the category's index, one-hot encoded on the device:`);
+            f.categories.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        }
+    });
+    if (enc.features.some((f) => f.kind === 'categorical')) {
+        lines.push(` * A category index that is not a whole number in range encodes as no category (all zeros).`);
+    }
+    lines.push(` *`);
+    if (regression) {
+        lines.push(` * Both functions return 0 and write the prediction of ${q(enc.target.name)}, in its own units, to outputs[0].`);
+    }
+    else {
+        lines.push(` * Both functions return the class index of ${q(enc.target.name)}:`);
+        classes.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        lines.push(` * ${name}_predict: the float32 network; outputs[] gets ${net.head === 'softmax' ? 'the probability of each class, in class order' : 'the probability of class 1'}.`, ` * ${name}_predict_int8: the int8 network; outputs[] gets the dequantised logit${net.outputs === 1 ? ' of class 1 (class 1 when it is above 0)' : ' of each class (the largest wins)'}.`);
+    }
+    lines.push(` * The int8 path is integer arithmetic apart from the input scaling and the output's dequantisation;`, ` * its outputs equal neuron-budget's simulation of it bit for bit on IEEE 754 single precision with`, ` * each assignment rounded to float (FLT_EVAL_METHOD 0, or GCC in an ISO mode such as -std=c99).`, ` * The float path runs the trained network in float32 arithmetic; it needs tanhf and expf (link -lm).`, ` */`, `#ifndef ${N}_H`, `#define ${N}_H`, ``, `#ifdef __cplusplus`, `extern "C" {`, `#endif`, ``, `#define ${N}_FEATURES ${enc.features.length}`, `#define ${N}_OUTPUTS ${net.outputs}`, `#define ${N}_INPUTS ${net.inputs}`, `#define ${N}_HIDDEN ${net.width}`);
+    if (!regression)
+        lines.push(`#define ${N}_CLASSES ${classes.length}`);
+    lines.push(``, `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, ``, `#ifdef __cplusplus`, `}`, `#endif`, ``, `#endif`, ``);
+    return lines.join('\n');
+}
+/** Values wrapped into lines of at most ~100 characters, indented. */
+function wrap(values, indent) {
+    const lines = [];
+    let line = '';
+    for (const v of values) {
+        if (line !== '' && line.length + v.length + 2 > 100 - indent.length) {
+            lines.push(`${indent}${line},`);
+            line = '';
+        }
+        line = line === '' ? v : `${line}, ${v}`;
+    }
+    if (line !== '')
+        lines.push(`${indent}${line}`);
+    return lines.join('\n');
+}
+function literal(type, v) {
+    return type === 'float' ? floatLiteral(v) : intLiteral(v);
+}
+function declare(name, o, values) {
+    const decl = `static const ${o.type} ${name}_${o.suffix}`;
+    const flat = values.flat();
+    if (flat.length !== o.count)
+        throw new Error(`internal: ${o.suffix} has ${flat.length} values, expected ${o.count}`);
+    const cells = (row, indent) => wrap(row.map((v) => literal(o.type, v)), indent);
+    if (o.scalar)
+        return `${decl} = ${literal(o.type, flat[0])};`;
+    if (isMatrix(values)) {
+        const rows = values.map((r) => `  {\n${cells(r, '    ')}\n  }`);
+        return `${decl}[${values.length}][${values[0].length}] = {\n${rows.join(',\n')}\n};`;
+    }
+    return `${decl}[${o.count}] = {\n${cells(flat, '  ')}\n};`;
+}
+function isMatrix(values) {
+    return Array.isArray(values[0]);
+}
+/** The values of each stored object, keyed by suffix. */
+function objectValues(model, int8) {
+    const net = model.network;
+    const enc = model.encoding;
+    const numeric = enc.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const qNumeric = int8.input.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const f = (v) => Math.fround(v);
+    const rows = (m) => m.map((r) => r.map(f));
+    return {
+        f_in_mean: numeric.map((e) => f(e.mean)),
+        f_in_std: numeric.map((e) => f(e.std > 0 ? e.std : 1)),
+        f_w1: rows(net.hiddenWeights),
+        f_b1: net.hiddenBias.map(f),
+        f_w2: rows(net.outputWeights),
+        f_b2: net.outputBias.map(f),
+        f_target: [f(enc.target.mean), f(enc.target.std)],
+        q_in_mean: qNumeric.map((e) => e.mean),
+        q_in_mul: qNumeric.map((e) => e.multiplier),
+        q_in_zero: [int8.input.zeroPoint],
+        q_in_one: [int8.input.one],
+        q_w1: int8.hidden.weights,
+        q_b1: foldZeroPoint(int8.hidden.bias, int8.hidden.weights, int8.input.zeroPoint),
+        q_m0: int8.hidden.multiplier,
+        q_shift: int8.hidden.shift,
+        q_act_zero: [int8.hidden.preActivation.zeroPoint],
+        q_lut: int8.hidden.table,
+        q_w2: int8.output.weights,
+        q_b2: foldZeroPoint(int8.output.bias, int8.output.weights, int8.hidden.activation.zeroPoint),
+        q_out_scale: int8.output.scale,
+    };
+}
+function sourceText(model, int8, name, p) {
+    const stored = storedObjects(costShapeOf(model.network, model.encoding));
+    const values = objectValues(model, int8);
+    const numeric = model.encoding.features.some((f) => f.kind === 'numeric');
+    const categorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const s = int8.hidden;
+    return [
+        `/*`,
+        ` * ${name}.c: written by neuron-budget ${commentText(p.toolVersion, 32)}; see ${name}.h. Do not edit.`,
+        ` *`,
+        ` * int8 scheme: input scale ${int8.input.scale.toPrecision(6)}, zero-point ${int8.input.zeroPoint};`,
+        ` * pre-activation scale ${s.preActivation.scale.toPrecision(6)}, zero-point ${s.preActivation.zeroPoint};`,
+        ` * hidden activation scale ${s.activation.scale.toPrecision(6)}, zero-point ${s.activation.zeroPoint};`,
+        ` * symmetric per-neuron int8 weights, int32 biases (zero-points folded in), ${model.network.activation} by table.`,
+        ` */`,
+        `#include "${name}.h"`,
+        `#include <math.h>`,
+        `#include <stdint.h>`,
+        ``,
+        `/* float32 network */`,
+        ...stored.float32.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        `/* int8 network */`,
+        ...stored.int8.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        ...helpers(name, numeric, categorical),
+        ...floatPath(model, name),
+        ...int8Path(model, name),
+    ].join('\n');
+}
+/** NAME.h and NAME.c for `model`; `name` must be a C identifier. */
+function exportC(model, name, provenance) {
+    checkCName(name);
+    const int8 = checkModel(model);
+    return {
+        headerFile: `${name}.h`,
+        sourceFile: `${name}.c`,
+        header: headerText(model, name, provenance),
+        source: sourceText(model, int8, name, provenance),
+    };
+}
+
+;// CONCATENATED MODULE: ./src/device/index.ts
+/**
+ * Device reality: what a network costs on a microcontroller, its int8 form, and firmware
+ * source for both forms. Pure functions; no I/O.
+ */
+
+
+
+
+
+
+
+
+;// CONCATENATED MODULE: ./src/model/document.ts
+
+
+const MODEL_SCHEMA = 'neuron-budget/model@2';
+/** The previous version (no cost, no int8 network): still read, as int8 null. */
+const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
+/**
+ * The witness as a document. With `calibration` (the encoded training rows) it carries the
+ * int8 form too.
+ */
+function modelDocument(witness, encoding, target, backing, calibration = null) {
+    return {
+        schema: MODEL_SCHEMA,
+        task: encoding.target.task,
+        width: witness.network.width,
+        target: {
+            metric: target.metric,
+            threshold: target.threshold,
+            value: witness.judged,
+            on: backing.on,
+            met: witness.met,
+            adequate: backing.adequate,
+        },
+        origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
+        encoding: structuredClone(encoding),
+        network: structuredClone(witness.network),
+        cost: cost_deviceCost(cost_costShapeOf(witness.network, encoding)),
+        int8: calibration === null ? null : quantizeNetwork(witness.network, encoding, calibration),
+    };
+}
+/** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
+function serializeModel(doc) {
+    return `${JSON.stringify(doc, null, 2)}\n`;
+}
+function inputsOf(features) {
+    return features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
+}
+/** Parse and check a model file; a bad file gets a message naming the file and the key. */
+function parseModel(text, file = 'model') {
+    let doc;
+    try {
+        doc = JSON.parse(text);
+    }
+    catch (e) {
+        throw new UserError(`${file}: not valid JSON (${e instanceof Error ? e.message : String(e)})`, { file });
+    }
+    const bad = (key, expected) => {
+        throw new UserError(`${file}: key "${key}" should be ${expected}`, { file, key });
+    };
+    if (typeof doc !== 'object' || doc === null)
+        return bad('(root)', 'an object');
+    const d = doc;
+    if (d.schema !== MODEL_SCHEMA && d.schema !== MODEL_SCHEMA_V1)
+        bad('schema', `"${MODEL_SCHEMA}"`);
+    if (d.task !== 'classification' && d.task !== 'regression')
+        bad('task', '"classification" or "regression"');
+    const net = d.network;
+    if (typeof net !== 'object' || net === null)
+        return bad('network', 'an object');
+    const enc = d.encoding;
+    if (typeof enc !== 'object' || enc === null || !Array.isArray(enc.features))
+        return bad('encoding.features', 'a list');
+    if (inputsOf(enc.features) !== net.inputs)
+        bad('encoding.features', `to encode to ${net.inputs} inputs (network.inputs)`);
+    if (!Array.isArray(net.hiddenWeights) || net.hiddenWeights.length !== net.width)
+        bad('network.hiddenWeights', `${net.width} rows`);
+    if (net.hiddenWeights.some((r) => !Array.isArray(r) || r.length !== net.inputs))
+        bad('network.hiddenWeights', `rows of ${net.inputs} numbers`);
+    if (!Array.isArray(net.hiddenBias) || net.hiddenBias.length !== net.width)
+        bad('network.hiddenBias', `${net.width} numbers`);
+    if (!Array.isArray(net.outputWeights) || net.outputWeights.length !== net.outputs)
+        bad('network.outputWeights', `${net.outputs} rows`);
+    if (net.outputWeights.some((r) => !Array.isArray(r) || r.length !== net.width))
+        bad('network.outputWeights', `rows of ${net.width} numbers`);
+    if (!Array.isArray(net.outputBias) || net.outputBias.length !== net.outputs)
+        bad('network.outputBias', `${net.outputs} numbers`);
+    if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
+        bad('encoding.target.classes', 'a list of class labels');
+    if (d.schema === MODEL_SCHEMA_V1) {
+        // Version 1 recorded only the validation value and the grown width; what it reached is kept.
+        const v1 = d;
+        const old = d;
+        return {
+            ...d,
+            schema: MODEL_SCHEMA,
+            target: { ...v1.target, on: 'validation', met: true, adequate: true },
+            origin: { seed: old.origin.seed, width: old.origin.grownWidth, restart: old.origin.restart + 1, how: 'fresh' },
+            cost: deviceCost(costShapeOf(net, enc)),
+            int8: null,
+        };
+    }
+    if (d.int8 !== null) {
+        const problem = checkInt8Network(d.int8, net, enc);
+        if (problem)
+            bad(problem.key, problem.expected);
+    }
+    return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
+}
+
 ;// CONCATENATED MODULE: ./src/nn/kernel/layout.ts
 function layoutOf(s) {
     const w1 = 0;
@@ -14788,7 +16116,7 @@ function reference_headOutputs(head, K, z, zo, out, oo) {
  * Sum over rows [start, end) of the per-row loss; the summed gradient goes into `grad`
  * (overwritten). No allocation.
  */
-function referenceLossAndGradient(shape, params, x, y, start, end, grad, s, primeOffset = 0) {
+function referenceLossAndGradient(shape, params, x, y, start, end, grad, s) {
     const D = shape.inputs;
     const H = shape.width;
     const K = shape.outputs;
@@ -14814,13 +16142,7 @@ function referenceLossAndGradient(shape, params, x, y, start, end, grad, s, prim
                 grad[wo + k] += hj * dz[k];
                 sum += params[wo + k] * dz[k];
             }
-            const fp = act === ACT_TANH
-                ? 1 - hj * hj + primeOffset
-                : act === ACT_LOGISTIC
-                    ? hj * (1 - hj) + primeOffset
-                    : a[j] > 0
-                        ? 1
-                        : 0;
+            const fp = act === ACT_TANH ? 1 - hj * hj : act === ACT_LOGISTIC ? hj * (1 - hj) : a[j] > 0 ? 1 : 0;
             dh[qo + j] = sum * fp;
         }
         for (let j = 0; j < H; j++)
@@ -14899,8 +16221,8 @@ function referenceKernel() {
     };
     return {
         name: 'reference-f64',
-        lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0) {
-            return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape), primeOffset);
+        lossAndGradient(shape, params, x, y, start, end, grad) {
+            return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape));
         },
         forward(shape, params, x, rows, logits, hidden) {
             reference_referenceForward(shape, params, x, rows, logits, hidden, sized(shape));
@@ -14910,359 +16232,357 @@ function referenceKernel() {
 
 ;// CONCATENATED MODULE: ./src/nn/kernel/kernel-bytes.ts
 // Generated by scripts/build-kernel.mjs from kernel.as; do not edit.
-// 26261 bytes, sha256 959f4fe35dd125349b485cc52d95df3dcc03a007f35d02a8bc673ac3e4733362
-const KERNEL_SHA256 = '959f4fe35dd125349b485cc52d95df3dcc03a007f35d02a8bc673ac3e4733362';
-const KERNEL_BASE64 = 'AGFzbQEAAAABTwpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AYAJ/fAF8YAN/f38Bf2ANf39/f39/f39/f39/fAF8YAAB' +
-    'f2AKf39/f39/f39/fwADDw4DAQACBAAFAgYHCAkAAQUDAQABBmcTfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC3wBRAAAAAAAAAAA' +
-    'C38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALBzYFCXdvcmtC' +
-    'eXRlcwAICGxvc3NHcmFkAAkHZm9yd2FyZAALCGhlYXBCYXNlAAoGbWVtb3J5AgAKgcsBDqkEACAAJAQgASQGIAIkACADJAEgBCQC' +
-    'IANBAWpBfnEkAyAGQQ9qQXBxIgAkByMDIwBBA3RsIgEgAGoiACQKIAAgAWoiACQIIwNBA3QiASAAaiIAJAsgACABaiIAJAkjAyMC' +
-    'QQN0bCIBIABqIgAkDCAAIAFqIgAkDiMDQQV0IgEgAGoiACQPIAAjA0EIdGoiACQQIwJBBXQiAiAAaiIAJBEgACACaiIAJBIgACAB' +
-    'aiQNQQAhAANAIAAjAEgEQEEAIQEDQCABIwFIBEAjByABQXxxIgIjAGxBBEECIwMgAkEEak4bIABsaiABIAJrakEDdGogBSAAIwFs' +
-    'IAFqQQN0aisDADkDACABQQFqIQEMAQsLIwMjAUoEQCMHIwEiAUF8cSICIwBsQQRBAiMDIAJBBGpOGyAAbGogASACa2pBA3RqRAAA' +
-    'AAAAAAAAOQMACyAAQQFqIQAMAQsLIAUjASMAQQN0bGoiASMBQQN0aiECQQAhAANAIAAjAUgEQCAAQQN0IgMjCGogASADaisDADkD' +
-    'ACAAQQFqIQAMAQsLIwMjAUoEQCMIIwFBA3RqRAAAAAAAAAAAOQMAC0EAIQADQCAAIwJIBEBBACEBA0AgASMBSARAIwkgACMDbCAB' +
-    'akEDdGogAiABIwJsIABqQQN0aisDADkDACABQQFqIQEMAQsLIwMjAUoEQCMJIwEgACMDbGpBA3RqRAAAAAAAAAAAOQMACyAAQQFq' +
-    'IQAMAQsLC7kDAgZ/BHsjA0EDdCEDA0AgAiMDSARAIAJBA3QiBSMOav0ABAAhCSMOIANBAXRqIAVq/QAEACEKIw4gA0EDbGogBWr9' +
-    'AAQAIQsjEiACQQV0aiIGIAkjDiADaiAFav0ABAAiCP0NAAECAwQFBgcQERITFBUWF/0LBAAgBiAKIAv9DQABAgMEBQYHEBESExQV' +
-    'Fhf9CwQQIAYgCSAI/Q0ICQoLDA0ODxgZGhscHR4f/QsEICAGIAogC/0NCAkKCwwNDg8YGRobHB0eH/0LBDAgAkECaiECDAELCyAA' +
-    'IwEjACMBbGpBA3RqIgYjAiMBQQN0bGohBSMCQQN0IQcDQCAEIwJIBEAgBSAEQQN0IgBq/QoDACIIIQkgACAGaiEDIxIhAkEAIQAD' +
-    'QCAAIwFIBEAgCCAC/QAEACAD/QoDACIK/fIB/fABIQggCSAC/QAEECAK/fIB/fABIQkgAyAHaiEDIAJBIGohAiAAQQFqIQAMAQsL' +
-    'IAEgBEEDdGoiACAI/SEAOQMAIAAgB2ogCP0hATkDACAAIAdBAXRqIAn9IQA5AwAgACAHQQNsaiAJ/SEBOQMAIARBAWohBAwBCwsL' +
-    'kQECBX8BfCMOIQIjECEDIAAjASMAIwFsakEDdGoiBCMCIwFBA3RsaiEFA0AgASMCSARAIAUgAUEDdGorAwAhBkEAIQADQCAAIwFI' +
-    'BEAgBiACIABBA3RqKwMAIAQgACMCbCABakEDdGorAwCioCEGIABBAWohAAwBCwsgAyABQQN0aiAGOQMAIAFBAWohAQwBCwsLnwMC' +
-    'An4CfCAAIABiIABEAAAAAAAAAABjcgRARAAAAAAAAPh/DwsgAEQAAAAAAAAAAGEEQEQAAAAAAADw/w8LIABEAAAAAAAA8H9hBEBE' +
-    'AAAAAAAA8H8PCyAARAAAAAAAABAAYwR8QkohASAARAAAAAAAAFBDogUgAAu9IgJCNIhC/w+DQv8HfSABfCEBIAJC/////////weD' +
-    'QoCAgICAgID4P4S/IgBEzTt/Zp6g9j9kBHwgAUIBfCEBIABEAAAAAAAA4D+iBSAAC0QAAAAAAADwv6AiACAARAAAAAAAAABAoKMi' +
-    'AyADoiEAIAG5IgREAADg/kIu5j+iIAMgA6AiAyADIAAgACAAIAAgACAAIAAgACAAIAAgAERkIQtZyEKmP6JEGIZhGIZhqD+gokQo' +
-    'r6G8hvKqP6CiRB4eHh4eHq4/oKJEERERERERsT+gokQUO7ETO7GzP6CiREYXXXTRRbc/oKJEHMdxHMdxvD+gokSSJEmSJEnCP6Ci' +
-    'RJqZmZmZmck/oKJEVVVVVVVV1T+goqKgIAREdjx5Ne856j2ioKALgokBAg17Bn8jA0EDdCEWA0AjAyATQQRqTgRAIBNBA3QiEiMI' +
-    'av0ABAAiBiEPIAYiByEQIwggEmr9AAQQIgQhDiAEIgUhDSMHIBIjAGxqIRVBACEUA0AgFCMASARAIAYgFEEDdCIRIABq/QoDACII' +
-    'IBX9AAQAIgr98gH98AEhBiAOIAggFf0ABBAiCf3yAf3wASEOIA8gASARav0KAwAiCCAK/fIB/fABIQ8gBSAIIAn98gH98AEhBSAH' +
-    'IAIgEWr9CgMAIgggCv3yAf3wASEHIA0gCCAJ/fIB/fABIQ0gECADIBFq/QoDACIIIAr98gH98AEhECAEIAggCf3yAf3wASEEIBVB' +
-    'IGohFSAUQQFqIRQMAQsLIw4gEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAG/fIBIgz97AH9DAAAAAAAADZAAAAAAAAA' +
-    'NkD99gEiBiAG/fABIgj9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4' +
-    'Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEh' +
-    'CP0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAK/QwAAAAA' +
-    'AADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8g' +
-    'Cv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqgASo/GqABGqAB' +
-    'Kj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94' +
-    't09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9DAltqBNGEuY9' +
-    'CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABA' +
-    'AAAAAAAAAED98AH98wEgDP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgBv0MAAAAAAAA' +
-    'AAAAAAAAAAAAACAG/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAb97AH9DAAAAAAAADZAAAAAAAAANkD99gEiCCAI/fABIgn9DP6C' +
-    'K2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiDP0MAAAAAAAAOEMAAAAAAAA4Q/3xASEIIAkgCP0MAADg/kIu' +
-    '5j8AAOD+Qi7mP/3yAf3xASAI/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgsgC/3yASIKIAr98gEhCSAM/Qz/AwAAAAAAAP8DAAAA' +
-    'AAAA/c4BQTT9ywEiCCAL/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAv98gH98AH9DFVVVVVVVcU/VVVVVVVV' +
-    'xT/9DFVVVVVVVaU/VVVVVVVVpT8gC/3yAf3wASAK/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAv9' +
-    '8gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gC/3yAf3wASAK/fIB/fABIAn98gH98AH9DDTHVqXjHcc+' +
-    'NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gC/3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAL/fIB' +
-    '/fABIAr98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gCf3yAf3wASAJIAn98gH98gH98AH98gH98gEgCP0MAAAAAAAA8D8AAAAAAADw' +
-    'P/3xAf3wASIIIAj9DAAAAAAAAABAAAAAAAAAAED98AH98wEgBv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA' +
-    '/U79UQv9CwQAIw4gEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAO/fIBIgz97AH9DAAAAAAAADZAAAAAAAAANkD99gEi' +
-    'BiAG/fABIgj9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEG' +
-    'IAggBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCP0MAAAA' +
-    'AAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAK/QwAAAAAAADwPwAA' +
-    'AAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCv3yAf3w' +
-    'ASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqg' +
-    'ARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4g' +
-    'Cv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9DAltqBNGEuY9CW2oE0YS' +
-    '5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAA' +
-    'AED98AH98wEgDP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgDv0MAAAAAAAAAAAAAAAA' +
-    'AAAAACAO/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA797AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG/fABIgj9DP6CK2VHFfc/' +
-    '/oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+' +
-    'Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCCAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4B' +
-    'QTT9ywEiBiAK/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVV' +
-    'VVVVVaU/VVVVVVVVpT8gCv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9' +
-    'DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMd' +
-    'xz79DFyfeLdPfpI+XJ94t09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn9' +
-    '8gH98AH9DAltqBNGEuY9CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3w' +
-    'ASIGIAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgDv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9' +
-    'CwQQIw4gFmogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAP/fIBIgz97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG' +
-    '/fABIgj9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAgg' +
-    'Bv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCP0MAAAAAAAA' +
-    '4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAK/QwAAAAAAADwPwAAAAAA' +
-    'APA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCv3yAf3wASAJ' +
-    '/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqg' +
-    'Afo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCv3y' +
-    'Af3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9DAltqBNGEuY9CW2oE0YS5j0g' +
-    'CP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAAAED9' +
-    '8AH98wEgDP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgD/0MAAAAAAAAAAAAAAAAAAAA' +
-    'ACAP/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA/97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG/fABIgj9DP6CK2VHFfc//oIr' +
-    'ZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+Qi7m' +
-    'P/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCCAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9' +
-    'ywEiBiAK/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVV' +
-    'VaU/VVVVVVVVpT8gCv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqg' +
-    'ARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79' +
-    'DFyfeLdPfpI+XJ94t09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH9' +
-    '8AH9DAltqBNGEuY9CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIG' +
-    'IAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgD/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQA' +
-    'Iw4gFmogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAF/fIBIgv97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAK/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAJ/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAn98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAJ/fIB/fABIAj98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgC/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgBf0MAAAAAAAAAAAAAAAAAAAAACAF' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAX97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG/fABIgj9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAggBv0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIJIAn98gEhCCAL/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BiAK/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAr98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCv3yAf3wASAJ/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAr98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCv3yAf3wASAJ/fIB/fABIAj98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCv3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAK/fIB/fABIAn98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gCP3yAf3wASAIIAj98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIGIAb9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgBf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQQIw4g' +
-    'FkEBdGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAH/fIBIgr97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgB/0MAAAAAAAAAAAAAAAAAAAAACAH' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAf97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhBiAK/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAn98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAJ/fIB/fABIAj98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgB/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQAIw4g' +
-    'FkEBdGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAN/fIBIgr97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgDf0MAAAAAAAAAAAAAAAAAAAAACAN' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA397AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgDf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQQIw4g' +
-    'FkEDbGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAQ/fIBIgr97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fAB' +
-    'Igb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBv0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3y' +
-    'Af3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgEP0MAAAAAAAAAAAAAAAAAAAAACAQ' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIBD97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgEP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQAIw4g' +
-    'FkEDbGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAE/fIBIgn97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBCAE/fAB' +
-    'IgX9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCP0MAAAAAAAAOEMAAAAAAAA4Q/3xASEEIAUgBP0M' +
-    'AADg/kIu5j8AAOD+Qi7mP/3yAf3xASAE/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgcgB/3yASIGIAb98gEhBf0MAAAAAAAA4D8A' +
-    'AAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAI/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBCAH/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAf98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gB/3yAf3wASAG/fIB' +
-    '/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAf98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+' +
-    'GqABGqAB+j4gB/3yAf3wASAG/fIB/fABIAX98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gB/3yAf3w' +
-    'Af0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAH/fIB/fABIAb98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBf3y' +
-    'Af3wASAFIAX98gH98gH98AH98gH98gEgBP0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIEIAT9DAAAAAAAAABAAAAAAAAAAED98AH9' +
-    '8wEgCf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUgBP0MAAAAAAAAAAAAAAAAAAAAACAE' +
-    '/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAT97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV' +
-    '9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3y' +
-    'Af3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgBP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79UQv9CwQQIBNB' +
-    'BGohEwwBCwsDQCATIwNIBEAgE0EDdCISIwhq/QAEACIEIRAgBCIFIQ0jByASIwBsaiEUQQAhFQNAIBUjAEgEQCAQIBVBA3QiESAA' +
-    'av0KAwAgFP0ABAAiBv3yAf3wASEQIAUgASARav0KAwAgBv3yAf3wASEFIA0gAiARav0KAwAgBv3yAf3wASENIAQgAyARav0KAwAg' +
-    'Bv3yAf3wASEEIBRBEGohFCAVQQFqIRUMAQsLIw4gEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAQ/fIBIgv97AH9DAAA' +
-    'AAAAADZAAAAAAAAANkD99gEiBiAG/fABIgf9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAA' +
-    'AAAAOEMAAAAAAAA4Q/3xASEGIAcgBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkg' +
-    'Cf3yASIIIAj98gEhB/0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAK/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9' +
-    'ywEiBiAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVV' +
-    'VaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAn98gH98AH9DBqg' +
-    'ARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAf98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79' +
-    'DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAJ/fIB/fABIAj98gH9' +
-    '8AH9DAltqBNGEuY9CW2oE0YS5j0gB/3yAf3wASAHIAf98gH98gH98AH98gH98gEgBv0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIG' +
-    'IAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgC/0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3w' +
-    'AQUgEP0MAAAAAAAAAAAAAAAAAAAAACAQ/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIBD97AH9DAAAAAAAADZAAAAAAAAANkD99gEi' +
-    'BiAG/fABIgf9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEG' +
-    'IAcgBv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhByAK/Qz/' +
-    'AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVV' +
-    'VVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFW' +
-    'PxdswRZswVY/IAn98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAf98gH9' +
-    '8AH9DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y' +
-    '2Pjv2O4hPiAJ/fIB/fABIAj98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gB/3yAf3wASAHIAf98gH98gH98AH98gH98gEgBv0MAAAA' +
-    'AAAA8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgEP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAA' +
-    'AAAAgAAAAAAAAACA/U79UQv9CwQAIw4gFmogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAF/fIBIgr97AH9DAAAAAAA' +
-    'ADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3y' +
-    'ASIHIAf98gEhBv0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUg' +
-    'Bf0MAAAAAAAAAAAAAAAAAAAAACAF/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAX97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBiAG' +
-    '/fABIgf9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCv0MAAAAAAAAOEMAAAAAAAA4Q/3xASEGIAcg' +
-    'Bv0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAG/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgkgCf3yASIIIAj98gEhByAK/Qz/AwAA' +
-    'AAAAAP8DAAAAAAAA/c4BQTT9ywEiBiAJ/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAn98gH98AH9DFVVVVVV' +
-    'VcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCf3yAf3wASAI/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxds' +
-    'wRZswVY/IAn98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCf3yAf3wASAI/fIB/fABIAf98gH98AH9' +
-    'DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCf3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv' +
-    '2O4hPiAJ/fIB/fABIAj98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gB/3yAf3wASAHIAf98gH98gH98AH98gH98gEgBv0MAAAAAAAA' +
-    '8D8AAAAAAADwP/3xAf3wASIGIAb9DAAAAAAAAABAAAAAAAAAAED98AH98wEgBf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAA' +
-    'gAAAAAAAAACA/U79UQv9CwQAIw4gFkEBdGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAN/fIBIgr97AH9DAAAAAAA' +
-    'ADZAAAAAAAAANkD99gEiBSAF/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3xASEFIAYgBf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3y' +
-    'ASIHIAf98gEhBv0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAJ/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAj98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAI/fIB/fABIAf98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIFIAX9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgCv0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUg' +
-    'Df0MAAAAAAAAAAAAAAAAAAAAACAN/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIA397AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF' +
-    '/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYg' +
-    'Bf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAA' +
-    'AAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVV' +
-    'VcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxds' +
-    'wRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9' +
-    'DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv' +
-    '2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA' +
-    '8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH98wEgDf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAA' +
-    'gAAAAAAAAACA/U79UQv9CwQAIw4gFkEDbGogEmojBAR7IwRBAUYEe/0MAAAAAAAA4D8AAAAAAADgPyAE/fIBIgn97AH9DAAAAAAA' +
-    'ADZAAAAAAAAANkD99gEiBCAE/fABIgX9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCP0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3xASEEIAUgBP0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAE/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgcgB/3y' +
-    'ASIGIAb98gEhBf0MAAAAAAAA4D8AAAAAAADgP/0MAAAAAAAA4D8AAAAAAADgPyAI/Qz/AwAAAAAAAP8DAAAAAAAA/c4BQTT9ywEi' +
-    'BCAH/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAf98gH98AH9DFVVVVVVVcU/VVVVVVVVxT/9DFVVVVVVVaU/' +
-    'VVVVVVVVpT8gB/3yAf3wASAG/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxdswRZswVY/IAf98gH98AH9DBqgARqg' +
-    'ASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gB/3yAf3wASAG/fIB/fABIAX98gH98AH9DDTHVqXjHcc+NMdWpeMdxz79DFyf' +
-    'eLdPfpI+XJ94t09+kj4gB/3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv2O4hPiAH/fIB/fABIAb98gH98AH9' +
-    'DAltqBNGEuY9CW2oE0YS5j0gBf3yAf3wASAFIAX98gH98gH98AH98gH98gEgBP0MAAAAAAAA8D8AAAAAAADwP/3xAf3wASIEIAT9' +
-    'DAAAAAAAAABAAAAAAAAAAED98AH98wEgCf0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAAgAAAAAAAAACA/U79Uf3yAf3wAQUg' +
-    'BP0MAAAAAAAAAAAAAAAAAAAAACAE/QwAAAAAAAAAAAAAAAAAAAAA/Ur9UgsFIAT97AH9DAAAAAAAADZAAAAAAAAANkD99gEiBSAF' +
-    '/fABIgb9DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiCf0MAAAAAAAAOEMAAAAAAAA4Q/3xASEFIAYg' +
-    'Bf0MAADg/kIu5j8AAOD+Qi7mP/3yAf3xASAF/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgggCP3yASIHIAf98gEhBiAJ/Qz/AwAA' +
-    'AAAAAP8DAAAAAAAA/c4BQTT9ywEiBSAI/QwAAAAAAADwPwAAAAAAAPA//QwAAAAAAADgPwAAAAAAAOA/IAj98gH98AH9DFVVVVVV' +
-    'VcU/VVVVVVVVxT/9DFVVVVVVVaU/VVVVVVVVpT8gCP3yAf3wASAH/fIB/fAB/QwRERERERGBPxEREREREYE//QwXbMEWbMFWPxds' +
-    'wRZswVY/IAj98gH98AH9DBqgARqgASo/GqABGqABKj/9DBqgARqgAfo+GqABGqAB+j4gCP3yAf3wASAH/fIB/fABIAb98gH98AH9' +
-    'DDTHVqXjHcc+NMdWpeMdxz79DFyfeLdPfpI+XJ94t09+kj4gCP3yAf3wAf0M5ET1Z0XmWj7kRPVnReZaPv0MmNj479juIT6Y2Pjv' +
-    '2O4hPiAI/fIB/fABIAf98gH98AH9DAltqBNGEuY9CW2oE0YS5j0gBv3yAf3wASAGIAb98gH98gH98AH98gH98gEgBf0MAAAAAAAA' +
-    '8D8AAAAAAADwP/3xAf3wASIFIAX9DAAAAAAAAABAAAAAAAAAAED98AH98wEgBP0MAAAAAAAAAAAAAAAAAAAAAP1J/QwAAAAAAAAA' +
-    'gAAAAAAAAACA/U79UQv9CwQAIBNBAmohEwwBCwsLmwwCBXsGfyMOIQkDQCAHIwNIBEAgB0EDdCIKIwhq/QAEACEBIwcgByAHQXxx' +
-    'IgZrIAYjAGxqQQN0aiEIQSBBECMDIAZBBGpOGyELQQAhBgNAIAYjAEgEQCABIAAgBkEDdGr9CgMAIAj9AAQA/fIB/fABIQEgCCAL' +
-    'aiEIIAZBAWohBgwBCwsgCSAKaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAH98gEiAf3sAf0MAAAAAAAANkAAAAAAAAA2' +
-    'QP32ASICIAL98AEiAv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASID/QwAAAAAAAA4QwAAAAAAADhD' +
-    '/fEBIQQgAiAE/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiAiAC/fIBIgQgBP3yASEF' +
-    '/QwAAAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAP9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIDIAL9DAAAAAAA' +
-    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gAv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAC' +
-    '/fIB/fABIAT98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gAv3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
-    'P/0MGqABGqAB+j4aoAEaoAH6PiAC/fIB/fABIAT98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
-    'T36SPiAC/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAL98gH98AEgBP3yAf3wAf0MCW2oE0YS5j0J' +
-    'bagTRhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAD/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgIgAv0MAAAAAAAAAEAA' +
-    'AAAAAAAAQP3wAf3zASAB/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAB/QwAAAAAAAAA' +
-    'AAAAAAAAAAAAIAH9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgAf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASICIAL98AEiAv0M/oIr' +
-    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASID/QwAAAAAAAA4QwAAAAAAADhD/fEBIQQgAiAE/QwAAOD+Qi7m' +
-    'PwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiAiAC/fIBIgQgBP3yASEFIAP9DP8DAAAAAAAA/wMAAAAA' +
-    'AAD9zgFBNP3LASIDIAL9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gAv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXF' +
-    'P/0MVVVVVVVVpT9VVVVVVVWlPyAC/fIB/fABIAT98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gAv3y' +
-    'Af3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAC/fIB/fABIAT98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40' +
-    'x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAC/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAL98gH9' +
-    '8AEgBP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAD/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/fEB/fABIgIgAv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAB/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9' +
-    'Tv1RC/0LBAAgB0ECaiEHDAELCwu/CAMDfAN/BnsjAiAAQQN0bCIAIxBqIQcjESAAaiEGIwZFBEAgBiAHKwMAIAGhIgE5AwAgAUQA' +
-    'AAAAAADgP6IgAaIPCyMGQQFGBEAgBysDACIDRAAAAAAAAOA/ov0UIg397AH9DAAAAAAAADZAAAAAAAAANkD99gEiCCAI/fABIgn9' +
-    'DP6CK2VHFfc//oIrZUcV9z/98gH9DAAAAAAAADhDAAAAAAAAOEP98AEiC/0MAAAAAAAAOEMAAAAAAAA4Q/3xASEIIAkgCP0MAADg' +
-    '/kIu5j8AAOD+Qi7mP/3yAf3xASAI/Qx2PHk17znqPXY8eTXvOeo9/fIB/fEBIgogCv3yASIMIAz98gEhCSAGIAv9DP8DAAAAAAAA' +
-    '/wMAAAAAAAD9zgFBNP3LASIIIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9V' +
-    'VVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAz98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzB' +
-    'Vj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAz98gH98AEgCf3yAf3wAf0MNMdW' +
-    'peMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+' +
-    'IAr98gH98AEgDP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAJ/fIB/fABIAkgCf3yAf3yAf3wAf3yAf3yASAI/QwAAAAAAADwPwAA' +
-    'AAAAAPA//fEB/fABIgggCP0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAA' +
-    'AAAAAID9Tv1R/SEARAAAAAAAAOA/okQAAAAAAADgP6AgAaE5AwAgA0QAAAAAAAAAACADRAAAAAAAAAAAZCIAGyADmiADIAAbEAci' +
-    'AkQAAAAAAADwP6AiBEQAAAAAAADwP2IEfCAEEAMgAiAERAAAAAAAAPC/oKEgBKOgBSACC6AgASADoqEPCyAHKwMAIQNBASEAA0Ag' +
-    'ACMCSARAIAcgAEEDdGorAwAiAiADZARAIAIhAwsgAEEBaiEADAELC0EAIQADQCAAIwJIBEAgAEEDdCIFIAdqKwMAIAOhEAchAiAF' +
-    'IAZqIAI5AwAgBCACoCEEIABBAWohAAwBCwtEAAAAAAAA8D8gBKMhAkEAIQADQCAAIwJIBEAgBiAAQQN0aiIFIAUrAwAgAqI5AwAg' +
-    'AEEBaiEADAELCyAGIAH8AkEDdCIFaiIAIAArAwBEAAAAAAAA8L+gOQMAIAQQAyAFIAdqKwMAIAOhoQv5AgIBfgF8IAAgAGIEQCAA' +
-    'DwsgAETvOfr+Qi6GQGQEQEQAAAAAAADwfw8LIABEUjAt1RBJh8BjBEBEAAAAAAAAAAAPCyAAIABE/oIrZUcV9z+iRAAAAAAAAOA/' +
-    'oJwiAEQAAOD+Qi7mP6KhIABEdjx5Ne856j2ioSICIAIgAiACIAIgAiACIAIgAiACIAIgAiACRAltqBNGEuY9okSY2Pjv2O4hPqCi' +
-    'RORE9WdF5lo+oKJEXJ94t09+kj6gokQ0x1al4x3HPqCiRBqgARqgAfo+oKJEGqABGqABKj+gokQXbMEWbMFWP6CiRBEREREREYE/' +
-    'oKJEVVVVVVVVpT+gokRVVVVVVVXFP6CiRAAAAAAAAOA/oKJEAAAAAAAA8D+gokQAAAAAAADwP6AhAiAA/AYiAUL/B1UEQCACRAAA' +
-    'AAAAAOB/oiABQjSGv6IPCyABQoJ4UwRAIAIgAULnD3xCNIa/okQAAAAAAABwAaIPCyACIAFC/wd8QjSGv6ILNgAgAUEBakF+cSIB' +
-    'IABBAXRsIAFBAXRqIAJBAXQgAWxqIAJqIAFBKGxqIAJBA3RqQQN0QUBrC4kIAgN7B38gACABIAIgAyAEIAUgCxAAIAwkBSMKQQAj' +
-    'AEEDdCIDIwNs/AsAIwtBACMDQQN0IhT8CwAjDEEAIwJBA3QiACMDbPwLACMNQQAgAPwLAEQAAAAAAAAAACEMA0AgCCAJSARAQSAg' +
-    'CSAIayIAIABBIE4bIQEgBiADIAhsaiETQQAhAANAIABBBGogAUwEQCATIAAgA2xqIgIgAiADaiACIANBAXRqIAIgA0EDbGoQBCAF' +
-    'IxAQAUEAIQIDQCACQQRIBEAgDCACIAcgACAIaiACakEDdGorAwAQBqAhDCACQQFqIQIMAQsLIw8gACAUbGoQDCAAQQRqIQAMAQsL' +
-    'A0AgACABSARAIBMgACADbGoQBSAFEAIgDEEAIAcgACAIakEDdGorAwAQBqAhDCMPIAAgFGxqIREjA0EDdCEQIw4hBCMRIRJBACEL' +
-    'A0AgCyMDSARA/QwAAAAAAAAAAAAAAAAAAAAAIQ4gBCALQQN0IhVq/QAEACENQQAhAgNAIAIjAkgEQCAOIAIgEGwgFWoiFiMJav0A' +
-    'BAAgEiACQQN0av0KAwAiD/3yAf3wASEOIwwgFmoiFiAW/QAEACANIA/98gH98AH9CwQAIAJBAWohAgwBCwsgESAVaiAOAnv9DAAA' +
-    'AAAAAPA/AAAAAAAA8D8gDSAN/fIB/fEBIwX9FCIO/fABIwRFDQAaIA39DAAAAAAAAPA/AAAAAAAA8D8gDf3xAf3yASAO/fABIwRB' +
-    'AUYNABr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAAAAAAAAAAAAAAAgDf0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIg39CwQA' +
-    'IwsgFWoiAiAC/QAEACAN/fAB/QsEACALQQJqIQsMAQsLQQAhAgNAIAIjAkgEQCACQQN0IgQjDWoiCyALKwMAIAQgEmorAwCgOQMA' +
-    'IAJBAWohAgwBCwsgAEEBaiEADAELCyATIAEQDSABIAhqIQgMAQsLQQAhAQNAIAEjAEgEQEEAIQADQCAAIwFIBEAgCiABIwFsIABq' +
-    'QQN0aiMKIABBfHEiAiMAbEEEQQIjAyACQQRqThsgAWxqIAAgAmtqQQN0aisDADkDACAAQQFqIQAMAQsLIAFBAWohAQwBCwsgCiMB' +
-    'IwBBA3RsaiIBIwFBA3QiAGoiAiMCIABsaiEDQQAhAANAIAAjAUgEQCAAQQN0IgQgAWojCyAEaisDADkDACAAQQFqIQAMAQsLQQAh' +
-    'AANAIAAjAkgEQEEAIQEDQCABIwFIBEAgAiABIwJsIABqQQN0aiMMIAAjA2wgAWpBA3RqKwMAOQMAIAFBAWohAQwBCwsgAyAAQQN0' +
-    'IgFqIw0gAWorAwA5AwAgAEEBaiEADAELCyAMCwUAQYAIC5UCAQF/IABBACABIAIgAyAEIAkQACMAQQN0IQlBACEAA0AgACAGSARA' +
-    'IAUgACAJbGohAUEEQQEgBiAAa0EEThsiA0EERgRAIAEgASAJaiABIAlBAXRqIAEgCUEDbGoQBCAEIAcjAiAAQQN0bGoQAQUgARAF' +
-    'IAQQAkEAIQEDQCABIwJIBEAgByAAIwJsIAFqQQN0aiMQIAFBA3RqKwMAOQMAIAFBAWohAQwBCwsLQQAhAQNAIAEgA0gEQCAIBEAg' +
-    'ACABaiEKQQAhAgNAIAIjAUgEQCAIIAojAWwgAmpBA3RqIw4gASMDbCACakEDdGorAwA5AwAgAkEBaiECDAELCwsgAUEBaiEBDAEL' +
-    'CyAAIANqIQAMAQsLC5kJAgx7B38jA0EDdCEQIwJBA3QhDQNAIA8jA0gEQP0MAAAAAAAAAAAAAAAAAAAAACEB/QwAAAAAAAAAAAAA' +
-    'AAAAAAAAIQL9DAAAAAAAAAAAAAAAAAAAAAAhA/0MAAAAAAAAAAAAAAAAAAAAACEEIA9BA3QiESMOav0ABAAhByMOIBBqIBFq/QAE' +
-    'ACEIIw4gEEEBdGogEWr9AAQAIQojDiAQQQNsaiARav0ABAAhC0EAIQ4DQCAOIwJIBEAgASAOIBBsIBFqIhMjCWr9AAQAIgwjESAO' +
-    'QQN0aiIS/QoDACIJ/fIB/fABIQEgAiAMIA0gEmr9CgMAIgX98gH98AEhAiADIAwgEiANQQF0av0KAwAiBv3yAf3wASEDIAQgDCAS' +
-    'IA1BA2xq/QoDACIM/fIB/fABIQQjDCATaiISIBL9AAQAIAcgCf3yAf3wASAIIAX98gH98AEgCiAG/fIB/fABIAsgDP3yAf3wAf0L' +
-    'BAAgDkEBaiEODAELCyAAIBFqIAECe/0MAAAAAAAA8D8AAAAAAADwPyAHIAf98gH98QEjBf0UIgH98AEjBEUNABogB/0MAAAAAAAA' +
-    '8D8AAAAAAADwPyAH/fEB/fIBIAH98AEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAH/QwAAAAA' +
-    'AAAAAAAAAAAAAAAA/Ur9Ugv98gEiAf0LBAAgACAQaiARaiACAnv9DAAAAAAAAPA/AAAAAAAA8D8gCCAI/fIB/fEBIwX9FCIC/fAB' +
-    'IwRFDQAaIAj9DAAAAAAAAPA/AAAAAAAA8D8gCP3xAf3yASAC/fABIwRBAUYNABr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAAAA' +
-    'AAAAAAAAAAAgCP0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIgL9CwQAIAAgEEEBdGogEWogAwJ7/QwAAAAAAADwPwAAAAAAAPA/' +
-    'IAogCv3yAf3xASMF/RQiA/3wASMERQ0AGiAK/QwAAAAAAADwPwAAAAAAAPA/IAr98QH98gEgA/3wASMEQQFGDQAa/QwAAAAAAADw' +
-    'PwAAAAAAAPA//QwAAAAAAAAAAAAAAAAAAAAAIAr9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SC/3yASID/QsEACAAIBBBA2xqIBFqIAQC' +
-    'e/0MAAAAAAAA8D8AAAAAAADwPyALIAv98gH98QEjBf0UIgT98AEjBEUNABogC/0MAAAAAAAA8D8AAAAAAADwPyAL/fEB/fIBIAT9' +
-    '8AEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAL/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEi' +
-    'BP0LBAAjCyARaiIOIA79AAQAIAH98AEgAv3wASAD/fABIAT98AH9CwQAIA9BAmohDwwBCwtBACEAA0AgACMCSARAIABBA3QiDiMN' +
-    'aiIPIA8rAwAjESAOaiIOKwMAoCANIA5qKwMAoCAOIA1BAXRqKwMAoCAOIA1BA2xqKwMAoDkDACAAQQFqIQAMAQsLC4wKAgh/C3sj' +
-    'A0EDdCEHIwBBA3QhCANAIwMgBkEEak4EQCAGQQN0IQlBACEDA0AjACADQQRqTgRA/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAA' +
-    'AAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACEN/QwAAAAAAAAAAAAAAAAAAAAAIQv9DAAAAAAAAAAAAAAAAAAAAAAhDv0M' +
-    'AAAAAAAAAAAAAAAAAAAAACEP/QwAAAAAAAAAAAAAAAAAAAAAIRD9DAAAAAAAAAAAAAAAAAAAAAAhESAAIANBA3RqIQIjDyAJaiEE' +
-    'QQAhBQNAIAEgBUoEQCAKIAL9CgMAIhMgBP0ABAAiEv3yAf3wASEKIAwgEyAE/QAEECIT/fIB/fABIQwgDSAC/QoDCCIUIBL98gH9' +
-    '8AEhDSALIBQgE/3yAf3wASELIA4gAv0KAxAiFCAS/fIB/fABIQ4gDyAUIBP98gH98AEhDyAQIAL9CgMYIhQgEv3yAf3wASEQIBEg' +
-    'FCAT/fIB/fABIREgAiAIaiECIAQgB2ohBCAFQQFqIQUMAQsLIwogCSMAbGogA0EFdGoiAiAC/QAEACAK/fAB/QsEACACIAL9AAQQ' +
-    'IAz98AH9CwQQIAIgAv0ABCAgDf3wAf0LBCAgAiAC/QAEMCAL/fAB/QsEMCACIAL9AARAIA798AH9CwRAIAIgAv0ABFAgD/3wAf0L' +
-    'BFAgAiAC/QAEYCAQ/fAB/QsEYCACIAL9AARwIBH98AH9CwRwIANBBGohAwwBCwsDQCADIwBIBED9DAAAAAAAAAAAAAAAAAAAAAAh' +
-    'Cv0MAAAAAAAAAAAAAAAAAAAAACELIAAgA0EDdGohBCMPIAlqIQJBACEFA0AgASAFSgRAIAogBP0KAwAiDCAC/QAEAP3yAf3wASEK' +
-    'IAsgDCAC/QAEEP3yAf3wASELIAQgCGohBCACIAdqIQIgBUEBaiEFDAELCyMKIAkjAGxqIANBBXRqIgIgAv0ABAAgCv3wAf0LBAAg' +
-    'AiAC/QAEECAL/fAB/QsEECADQQFqIQMMAQsLIAZBBGohBgwBCwsDQCAGIwNIBEAgBkEDdCEJQQAhAgNAIwAgAkEEak4EQP0MAAAA' +
-    'AAAAAAAAAAAAAAAAACEL/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACEN' +
-    'IAAgAkEDdGohAyMPIAlqIQRBACEFA0AgASAFSgRAIAsgA/0KAwAgBP0ABAAiDv3yAf3wASELIAogA/0KAwggDv3yAf3wASEKIAwg' +
-    'A/0KAxAgDv3yAf3wASEMIA0gA/0KAxggDv3yAf3wASENIAMgCGohAyAEIAdqIQQgBUEBaiEFDAELCyMKIAkjAGxqIAJBBHRqIgMg' +
-    'A/0ABAAgC/3wAf0LBAAgAyAD/QAEECAK/fAB/QsEECADIAP9AAQgIAz98AH9CwQgIAMgA/0ABDAgDf3wAf0LBDAgAkEEaiECDAEL' +
-    'CwNAIAIjAEgEQP0MAAAAAAAAAAAAAAAAAAAAACEKIAAgAkEDdGohAyMPIAlqIQRBACEFA0AgASAFSgRAIAogA/0KAwAgBP0ABAD9' +
-    '8gH98AEhCiADIAhqIQMgBCAHaiEEIAVBAWohBQwBCwsjCiAJIwBsaiACQQR0aiIDIAP9AAQAIAr98AH9CwQAIAJBAWohAgwBCwsg' +
-    'BkECaiEGDAELCws=';
+// 26165 bytes, sha256 33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e
+const KERNEL_SHA256 = '33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e';
+const KERNEL_BASE64 = 'AGFzbQEAAAABTgpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AYAJ/fAF8YAN/f38Bf2AMf39/f39/f39/f39/AXxgAAF/' +
+    'YAp/f39/f39/f39/AAMPDgMBAAIEAAUCBgcICQABBQMBAAEGWxJ/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38B' +
+    'QQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAsHNgUJd29ya0J5dGVzAAgIbG9zc0dy' +
+    'YWQACQdmb3J3YXJkAAsIaGVhcEJhc2UACgZtZW1vcnkCAAquygEOqQQAIAAkBCABJAUgAiQAIAMkASAEJAIgA0EBakF+cSQDIAZB' +
+    'D2pBcHEiACQGIwMjAEEDdGwiASAAaiIAJAkgACABaiIAJAcjA0EDdCIBIABqIgAkCiAAIAFqIgAkCCMDIwJBA3RsIgEgAGoiACQL' +
+    'IAAgAWoiACQNIwNBBXQiASAAaiIAJA4gACMDQQh0aiIAJA8jAkEFdCICIABqIgAkECAAIAJqIgAkESAAIAFqJAxBACEAA0AgACMA' +
+    'SARAQQAhAQNAIAEjAUgEQCMGIAFBfHEiAiMAbEEEQQIjAyACQQRqThsgAGxqIAEgAmtqQQN0aiAFIAAjAWwgAWpBA3RqKwMAOQMA' +
+    'IAFBAWohAQwBCwsjAyMBSgRAIwYjASIBQXxxIgIjAGxBBEECIwMgAkEEak4bIABsaiABIAJrakEDdGpEAAAAAAAAAAA5AwALIABB' +
+    'AWohAAwBCwsgBSMBIwBBA3RsaiIBIwFBA3RqIQJBACEAA0AgACMBSARAIABBA3QiAyMHaiABIANqKwMAOQMAIABBAWohAAwBCwsj' +
+    'AyMBSgRAIwcjAUEDdGpEAAAAAAAAAAA5AwALQQAhAANAIAAjAkgEQEEAIQEDQCABIwFIBEAjCCAAIwNsIAFqQQN0aiACIAEjAmwg' +
+    'AGpBA3RqKwMAOQMAIAFBAWohAQwBCwsjAyMBSgRAIwgjASAAIwNsakEDdGpEAAAAAAAAAAA5AwALIABBAWohAAwBCwsLuQMCBn8E' +
+    'eyMDQQN0IQMDQCACIwNIBEAgAkEDdCIFIw1q/QAEACEJIw0gA0EBdGogBWr9AAQAIQojDSADQQNsaiAFav0ABAAhCyMRIAJBBXRq' +
+    'IgYgCSMNIANqIAVq/QAEACII/Q0AAQIDBAUGBxAREhMUFRYX/QsEACAGIAogC/0NAAECAwQFBgcQERITFBUWF/0LBBAgBiAJIAj9' +
+    'DQgJCgsMDQ4PGBkaGxwdHh/9CwQgIAYgCiAL/Q0ICQoLDA0ODxgZGhscHR4f/QsEMCACQQJqIQIMAQsLIAAjASMAIwFsakEDdGoi' +
+    'BiMCIwFBA3RsaiEFIwJBA3QhBwNAIAQjAkgEQCAFIARBA3QiAGr9CgMAIgghCSAAIAZqIQMjESECQQAhAANAIAAjAUgEQCAIIAL9' +
+    'AAQAIAP9CgMAIgr98gH98AEhCCAJIAL9AAQQIAr98gH98AEhCSADIAdqIQMgAkEgaiECIABBAWohAAwBCwsgASAEQQN0aiIAIAj9' +
+    'IQA5AwAgACAHaiAI/SEBOQMAIAAgB0EBdGogCf0hADkDACAAIAdBA2xqIAn9IQE5AwAgBEEBaiEEDAELCwuRAQIFfwF8Iw0hAiMP' +
+    'IQMgACMBIwAjAWxqQQN0aiIEIwIjAUEDdGxqIQUDQCABIwJIBEAgBSABQQN0aisDACEGQQAhAANAIAAjAUgEQCAGIAIgAEEDdGor' +
+    'AwAgBCAAIwJsIAFqQQN0aisDAKKgIQYgAEEBaiEADAELCyADIAFBA3RqIAY5AwAgAUEBaiEBDAELCwufAwICfgJ8IAAgAGIgAEQA' +
+    'AAAAAAAAAGNyBEBEAAAAAAAA+H8PCyAARAAAAAAAAAAAYQRARAAAAAAAAPD/DwsgAEQAAAAAAADwf2EEQEQAAAAAAADwfw8LIABE' +
+    'AAAAAAAAEABjBHxCSiEBIABEAAAAAAAAUEOiBSAAC70iAkI0iEL/D4NC/wd9IAF8IQEgAkL/////////B4NCgICAgICAgPg/hL8i' +
+    'AETNO39mnqD2P2QEfCABQgF8IQEgAEQAAAAAAADgP6IFIAALRAAAAAAAAPC/oCIAIABEAAAAAAAAAECgoyIDIAOiIQAgAbkiBEQA' +
+    'AOD+Qi7mP6IgAyADoCIDIAMgACAAIAAgACAAIAAgACAAIAAgACAARGQhC1nIQqY/okQYhmEYhmGoP6CiRCivobyG8qo/oKJEHh4e' +
+    'Hh4erj+gokQRERERERGxP6CiRBQ7sRM7sbM/oKJERhdddNFFtz+gokQcx3Ecx3G8P6CiRJIkSZIkScI/oKJEmpmZmZmZyT+gokRV' +
+    'VVVVVVXVP6CioqAgBER2PHk17znqPaKgoAuCiQECDXsGfyMDQQN0IRYDQCMDIBNBBGpOBEAgE0EDdCISIwdq/QAEACIGIQ8gBiIH' +
+    'IRAjByASav0ABBAiBCEOIAQiBSENIwYgEiMAbGohFUEAIRQDQCAUIwBIBEAgBiAUQQN0IhEgAGr9CgMAIgggFf0ABAAiCv3yAf3w' +
+    'ASEGIA4gCCAV/QAEECIJ/fIB/fABIQ4gDyABIBFq/QoDACIIIAr98gH98AEhDyAFIAggCf3yAf3wASEFIAcgAiARav0KAwAiCCAK' +
+    '/fIB/fABIQcgDSAIIAn98gH98AEhDSAQIAMgEWr9CgMAIgggCv3yAf3wASEQIAQgCCAJ/fIB/fABIQQgFUEgaiEVIBRBAWohFAwB' +
+    'CwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAb98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEi' +
+    'CP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwA' +
+    'AOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAA' +
+    'AAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9' +
+    'DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH9' +
+    '8AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4a' +
+    'oAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB' +
+    '/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB' +
+    '/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3z' +
+    'ASAM/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAG/QwAAAAAAAAAAAAAAAAAAAAAIAb9' +
+    'DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitlRxX3' +
+    'P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIM/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY//fIB' +
+    '/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCyAL/fIBIgogCv3yASEJIAz9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASII' +
+    'IAv9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gC/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9V' +
+    'VVVVVVWlPyAL/fIB/fABIAr98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gC/3yAf3wAf0MGqABGqAB' +
+    'Kj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAL/fIB/fABIAr98gH98AEgCf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94' +
+    't09+kj5cn3i3T36SPiAL/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAv98gH98AEgCv3yAf3wAf0M' +
+    'CW2oE0YS5j0JbagTRhLmPSAJ/fIB/fABIAkgCf3yAf3yAf3wAf3yAf3yASAI/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgggCP0M' +
+    'AAAAAAAAAEAAAAAAAAAAQP3wAf3zASAG/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAS' +
+    'aiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA798gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIr' +
+    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7m' +
+    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA/' +
+    '/QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAA' +
+    'AOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBER' +
+    'EREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6' +
+    'PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVn' +
+    'ReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAgg' +
+    'CP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwA' +
+    'AAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAO/QwAAAAAAAAAAAAAAAAAAAAAIA79DAAAAAAA' +
+    'AAAAAAAAAAAAAAD9Sv1SCwUgDv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0M' +
+    'AAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9' +
+    'DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAA' +
+    'AAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWl' +
+    'PyAK/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEa' +
+    'oAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5c' +
+    'n3i3T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS' +
+    '5j0JbagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAA' +
+    'AEAAAAAAAAAAQP3wAf3zASAO/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWaiASaiME' +
+    'BHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA/98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA//QwA' +
+    'AAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/' +
+    'AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBERERER' +
+    'EYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK' +
+    '/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVnReZa' +
+    'PuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAggCP3y' +
+    'Af3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwAAAAA' +
+    'AAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAP/QwAAAAAAAAAAAAAAAAAAAAAIA/9DAAAAAAAAAAA' +
+    'AAAAAAAAAAD9Sv1SCwUgD/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAA' +
+    'AAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8' +
+    'eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAA' +
+    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK' +
+    '/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
+    'P/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
+    'T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0J' +
+    'bagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
+    'AAAAAAAAQP3wAf3zASAP/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB' +
+    '/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAL/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAAAAAAAAAAIAX9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB' +
+    '/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQF0aiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAf98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAH/QwAAAAAAAAAAAAAAAAAAAAAIAf9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgB/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEGIAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB' +
+    '/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAH/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQF0aiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAAAAAAAAAAIA39DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQNsaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAAAAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQNsaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIEIAT98AEiBf0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEBIQQgBSAE/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB/fABIAb98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAH/fIB' +
+    '/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAH/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAF/fIB/fABIAUgBf3yAf3y' +
+    'Af3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAJ/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAAAAAAAAAAIAT9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAgE0EEaiETDAELCwNAIBMj' +
+    'A0gEQCATQQN0IhIjB2r9AAQAIgQhECAEIgUhDSMGIBIjAGxqIRRBACEVA0AgFSMASARAIBAgFUEDdCIRIABq/QoDACAU/QAEACIG' +
+    '/fIB/fABIRAgBSABIBFq/QoDACAG/fIB/fABIQUgDSACIBFq/QoDACAG/fIB/fABIQ0gBCADIBFq/QoDACAG/fIB/fABIQQgFEEQ' +
+    'aiEUIBVBAWohFQwBCwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2' +
+    'QP32ASIGIAb98AEiB/0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD' +
+    '/fEBIQYgByAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEH' +
+    '/QwAAAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAn9DAAAAAAA' +
+    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ' +
+    '/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
+    'P/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
+    'T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0J' +
+    'bagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
+    'AAAAAAAAQP3wAf3zASAL/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAA' +
+    'AAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIr' +
+    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7m' +
+    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAA' +
+    'AAD9zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXF' +
+    'P/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3y' +
+    'Af3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40' +
+    'x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH9' +
+    '8AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA/' +
+    '/fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9' +
+    'Tv1RC/0LBAAjDSAWaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIAX9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEg' +
+    'CP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAjDSAWQQF0aiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIA39DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
+    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAjDSAWQQNsaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIEIAT98AEiBf0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQQgBSAE/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB' +
+    '/fABIAb98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAH/fIB/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAH/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAJ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIAT9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
+    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAgE0ECaiETDAELCwubDAIFewZ/Iw0hCQNAIAcjA0gEQCAHQQN0IgojB2r9AAQAIQEjBiAHIAdBfHEiBmsgBiMAbGpBA3Rq' +
+    'IQhBIEEQIwMgBkEEak4bIQtBACEGA0AgBiMASARAIAEgACAGQQN0av0KAwAgCP0ABAD98gH98AEhASAIIAtqIQggBkEBaiEGDAEL' +
+    'CyAJIApqIwQEeyMEQQFGBHv9DAAAAAAAAOA/AAAAAAAA4D8gAf3yASIB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC' +
+    '/Qz+gitlRxX3P/6CK2VHFfc//fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA' +
+    '4P5CLuY/AADg/kIu5j/98gH98QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQX9DAAAAAAAAOA/AAAA' +
+    'AAAA4D/9DAAAAAAAAOA/AAAAAAAA4D8gA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMgAv0MAAAAAAAA8D8AAAAAAADwP/0M' +
+    'AAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VVVVVVVaU/IAL98gH98AEgBP3yAf3w' +
+    'Af0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEqPxqgARqgASo//QwaoAEaoAH6Phqg' +
+    'ARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3T36SPlyfeLdPfpI+IAL98gH98AH9' +
+    'DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJbagTRhLmPQltqBNGEuY9IAX98gH9' +
+    '8AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMB' +
+    'IAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH98gH98AEFIAH9DAAAAAAAAAAAAAAAAAAAAAAgAf0M' +
+    'AAAAAAAAAAAAAAAAAAAAAP1K/VILBSAB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC/Qz+gitlRxX3P/6CK2VHFfc/' +
+    '/fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA4P5CLuY/AADg/kIu5j/98gH9' +
+    '8QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQUgA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMg' +
+    'Av0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VV' +
+    'VVVVVaU/IAL98gH98AEgBP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEq' +
+    'PxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3' +
+    'T36SPlyfeLdPfpI+IAL98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJ' +
+    'bagTRhLmPQltqBNGEuY9IAX98gH98AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwA' +
+    'AAAAAAAAQAAAAAAAAABA/fAB/fMBIAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VEL/QsEACAHQQJq' +
+    'IQcMAQsLC78IAwN8A38GeyMCIABBA3RsIgAjD2ohByMQIABqIQYjBUUEQCAGIAcrAwAgAaEiATkDACABRAAAAAAAAOA/oiABog8L' +
+    'IwVBAUYEQCAHKwMAIgNEAAAAAAAA4D+i/RQiDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitl' +
+    'RxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY/' +
+    '/fIB/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgwgDP3yASEJIAYgC/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0' +
+    '/csBIgggCv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAK/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVV' +
+    'VVWlP1VVVVVVVaU/IAr98gH98AEgDP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAK/fIB/fAB/Qwa' +
+    'oAEaoAEqPxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAr98gH98AEgDP3yAf3wASAJ/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+' +
+    '/Qxcn3i3T36SPlyfeLdPfpI+IAr98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gCv3yAf3wASAM/fIB' +
+    '/fAB/QwJbagTRhLmPQltqBNGEuY9IAn98gH98AEgCSAJ/fIB/fIB/fAB/fIB/fIBIAj9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEi' +
+    'CCAI/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMBIA39DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH9IQBE' +
+    'AAAAAAAA4D+iRAAAAAAAAOA/oCABoTkDACADRAAAAAAAAAAAIANEAAAAAAAAAABkIgAbIAOaIAMgABsQByICRAAAAAAAAPA/oCIE' +
+    'RAAAAAAAAPA/YgR8IAQQAyACIAREAAAAAAAA8L+goSAEo6AFIAILoCABIAOioQ8LIAcrAwAhA0EBIQADQCAAIwJIBEAgByAAQQN0' +
+    'aisDACICIANkBEAgAiEDCyAAQQFqIQAMAQsLQQAhAANAIAAjAkgEQCAAQQN0IgUgB2orAwAgA6EQByECIAUgBmogAjkDACAEIAKg' +
+    'IQQgAEEBaiEADAELC0QAAAAAAADwPyAEoyECQQAhAANAIAAjAkgEQCAGIABBA3RqIgUgBSsDACACojkDACAAQQFqIQAMAQsLIAYg' +
+    'AfwCQQN0IgVqIgAgACsDAEQAAAAAAADwv6A5AwAgBBADIAUgB2orAwAgA6GhC/kCAgF+AXwgACAAYgRAIAAPCyAARO85+v5CLoZA' +
+    'ZARARAAAAAAAAPB/DwsgAERSMC3VEEmHwGMEQEQAAAAAAAAAAA8LIAAgAET+gitlRxX3P6JEAAAAAAAA4D+gnCIARAAA4P5CLuY/' +
+    'oqEgAER2PHk17znqPaKhIgIgAiACIAIgAiACIAIgAiACIAIgAiACIAJECW2oE0YS5j2iRJjY+O/Y7iE+oKJE5ET1Z0XmWj6gokRc' +
+    'n3i3T36SPqCiRDTHVqXjHcc+oKJEGqABGqAB+j6gokQaoAEaoAEqP6CiRBdswRZswVY/oKJEERERERERgT+gokRVVVVVVVWlP6Ci' +
+    'RFVVVVVVVcU/oKJEAAAAAAAA4D+gokQAAAAAAADwP6CiRAAAAAAAAPA/oCECIAD8BiIBQv8HVQRAIAJEAAAAAAAA4H+iIAFCNIa/' +
+    'og8LIAFCgnhTBEAgAiABQucPfEI0hr+iRAAAAAAAAHABog8LIAIgAUL/B3xCNIa/ogs2ACABQQFqQX5xIgEgAEEBdGwgAUEBdGog' +
+    'AkEBdCABbGogAmogAUEobGogAkEDdGpBA3RBQGsL7gcDA3sHfwF8IAAgASACIAMgBCAFIAsQACMJQQAjAEEDdCIDIwNs/AsAIwpB' +
+    'ACMDQQN0IhP8CwAjC0EAIwJBA3QiACMDbPwLACMMQQAgAPwLAANAIAggCUgEQEEgIAkgCGsiACAAQSBOGyEBIAYgAyAIbGohEkEA' +
+    'IQADQCAAQQRqIAFMBEAgEiAAIANsaiICIAIgA2ogAiADQQF0aiACIANBA2xqEAQgBSMPEAFBACECA0AgAkEESARAIBYgAiAHIAAg' +
+    'CGogAmpBA3RqKwMAEAagIRYgAkEBaiECDAELCyMOIAAgE2xqEAwgAEEEaiEADAELCwNAIAAgAUgEQCASIAAgA2xqEAUgBRACIBZB' +
+    'ACAHIAAgCGpBA3RqKwMAEAagIRYjDiAAIBNsaiEQIwNBA3QhDyMNIQQjECERQQAhCwNAIAsjA0gEQP0MAAAAAAAAAAAAAAAAAAAA' +
+    'ACEMIAQgC0EDdCIUav0ABAAhDUEAIQIDQCACIwJIBEAgDCACIA9sIBRqIhUjCGr9AAQAIBEgAkEDdGr9CgMAIg798gH98AEhDCML' +
+    'IBVqIhUgFf0ABAAgDSAO/fIB/fAB/QsEACACQQFqIQIMAQsLIBAgFGogDAJ7/QwAAAAAAADwPwAAAAAAAPA/IA0gDf3yAf3xASME' +
+    'RQ0AGiAN/QwAAAAAAADwPwAAAAAAAPA/IA398QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAA' +
+    'ACAN/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiDP0LBAAjCiAUaiICIAL9AAQAIAz98AH9CwQAIAtBAmohCwwBCwtBACECA0Ag' +
+    'AiMCSARAIAJBA3QiBCMMaiILIAsrAwAgBCARaisDAKA5AwAgAkEBaiECDAELCyAAQQFqIQAMAQsLIBIgARANIAEgCGohCAwBCwtB' +
+    'ACEBA0AgASMASARAQQAhAANAIAAjAUgEQCAKIAEjAWwgAGpBA3RqIwkgAEF8cSICIwBsQQRBAiMDIAJBBGpOGyABbGogACACa2pB' +
+    'A3RqKwMAOQMAIABBAWohAAwBCwsgAUEBaiEBDAELCyAKIwEjAEEDdGxqIgEjAUEDdCIAaiICIwIgAGxqIQNBACEAA0AgACMBSARA' +
+    'IABBA3QiBCABaiMKIARqKwMAOQMAIABBAWohAAwBCwtBACEAA0AgACMCSARAQQAhAQNAIAEjAUgEQCACIAEjAmwgAGpBA3RqIwsg' +
+    'ACMDbCABakEDdGorAwA5AwAgAUEBaiEBDAELCyADIABBA3QiAWojDCABaisDADkDACAAQQFqIQAMAQsLIBYLBQBBgAgLlQIBAX8g' +
+    'AEEAIAEgAiADIAQgCRAAIwBBA3QhCUEAIQADQCAAIAZIBEAgBSAAIAlsaiEBQQRBASAGIABrQQROGyIDQQRGBEAgASABIAlqIAEg' +
+    'CUEBdGogASAJQQNsahAEIAQgByMCIABBA3RsahABBSABEAUgBBACQQAhAQNAIAEjAkgEQCAHIAAjAmwgAWpBA3RqIw8gAUEDdGor' +
+    'AwA5AwAgAUEBaiEBDAELCwtBACEBA0AgASADSARAIAgEQCAAIAFqIQpBACECA0AgAiMBSARAIAggCiMBbCACakEDdGojDSABIwNs' +
+    'IAJqQQN0aisDADkDACACQQFqIQIMAQsLCyABQQFqIQEMAQsLIAAgA2ohAAwBCwsL4QgCDHsHfyMDQQN0IRAjAkEDdCENA0AgDyMD' +
+    'SARA/QwAAAAAAAAAAAAAAAAAAAAAIQH9DAAAAAAAAAAAAAAAAAAAAAAhAv0MAAAAAAAAAAAAAAAAAAAAACED/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIQQgD0EDdCIRIw1q/QAEACEIIw0gEGogEWr9AAQAIQkjDSAQQQF0aiARav0ABAAhCiMNIBBBA2xqIBFq/QAEACELQQAh' +
+    'DgNAIA4jAkgEQCABIA4gEGwgEWoiEyMIav0ABAAiDCMQIA5BA3RqIhL9CgMAIgX98gH98AEhASACIAwgDSASav0KAwAiBv3yAf3w' +
+    'ASECIAMgDCASIA1BAXRq/QoDACIH/fIB/fABIQMgBCAMIBIgDUEDbGr9CgMAIgz98gH98AEhBCMLIBNqIhIgEv0ABAAgCCAF/fIB' +
+    '/fABIAkgBv3yAf3wASAKIAf98gH98AEgCyAM/fIB/fAB/QsEACAOQQFqIQ4MAQsLIAAgEWogAQJ7/QwAAAAAAADwPwAAAAAAAPA/' +
+    'IAggCP3yAf3xASMERQ0AGiAI/QwAAAAAAADwPwAAAAAAAPA/IAj98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAA' +
+    'AAAAAAAAAAAAAAAAACAI/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiAf0LBAAgACAQaiARaiACAnv9DAAAAAAAAPA/AAAAAAAA' +
+    '8D8gCSAJ/fIB/fEBIwRFDQAaIAn9DAAAAAAAAPA/AAAAAAAA8D8gCf3xAf3yASMEQQFGDQAa/QwAAAAAAADwPwAAAAAAAPA//QwA' +
+    'AAAAAAAAAAAAAAAAAAAAIAn9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SC/3yASIC/QsEACAAIBBBAXRqIBFqIAMCe/0MAAAAAAAA8D8A' +
+    'AAAAAADwPyAKIAr98gH98QEjBEUNABogCv0MAAAAAAAA8D8AAAAAAADwPyAK/fEB/fIBIwRBAUYNABr9DAAAAAAAAPA/AAAAAAAA' +
+    '8D/9DAAAAAAAAAAAAAAAAAAAAAAgCv0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIgP9CwQAIAAgEEEDbGogEWogBAJ7/QwAAAAA' +
+    'AADwPwAAAAAAAPA/IAsgC/3yAf3xASMERQ0AGiAL/QwAAAAAAADwPwAAAAAAAPA/IAv98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8A' +
+    'AAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAL/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiBP0LBAAjCiARaiIOIA79AAQAIAH9' +
+    '8AEgAv3wASAD/fABIAT98AH9CwQAIA9BAmohDwwBCwtBACEAA0AgACMCSARAIABBA3QiDiMMaiIPIA8rAwAjECAOaiIOKwMAoCAN' +
+    'IA5qKwMAoCAOIA1BAXRqKwMAoCAOIA1BA2xqKwMAoDkDACAAQQFqIQAMAQsLC4wKAgh/C3sjA0EDdCEHIwBBA3QhCANAIwMgBkEE' +
+    'ak4EQCAGQQN0IQlBACEDA0AjACADQQRqTgRA/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAA' +
+    'AAAAAAAAAAAAACEN/QwAAAAAAAAAAAAAAAAAAAAAIQv9DAAAAAAAAAAAAAAAAAAAAAAhDv0MAAAAAAAAAAAAAAAAAAAAACEP/QwA' +
+    'AAAAAAAAAAAAAAAAAAAAIRD9DAAAAAAAAAAAAAAAAAAAAAAhESAAIANBA3RqIQIjDiAJaiEEQQAhBQNAIAEgBUoEQCAKIAL9CgMA' +
+    'IhMgBP0ABAAiEv3yAf3wASEKIAwgEyAE/QAEECIT/fIB/fABIQwgDSAC/QoDCCIUIBL98gH98AEhDSALIBQgE/3yAf3wASELIA4g' +
+    'Av0KAxAiFCAS/fIB/fABIQ4gDyAUIBP98gH98AEhDyAQIAL9CgMYIhQgEv3yAf3wASEQIBEgFCAT/fIB/fABIREgAiAIaiECIAQg' +
+    'B2ohBCAFQQFqIQUMAQsLIwkgCSMAbGogA0EFdGoiAiAC/QAEACAK/fAB/QsEACACIAL9AAQQIAz98AH9CwQQIAIgAv0ABCAgDf3w' +
+    'Af0LBCAgAiAC/QAEMCAL/fAB/QsEMCACIAL9AARAIA798AH9CwRAIAIgAv0ABFAgD/3wAf0LBFAgAiAC/QAEYCAQ/fAB/QsEYCAC' +
+    'IAL9AARwIBH98AH9CwRwIANBBGohAwwBCwsDQCADIwBIBED9DAAAAAAAAAAAAAAAAAAAAAAhCv0MAAAAAAAAAAAAAAAAAAAAACEL' +
+    'IAAgA0EDdGohBCMOIAlqIQJBACEFA0AgASAFSgRAIAogBP0KAwAiDCAC/QAEAP3yAf3wASEKIAsgDCAC/QAEEP3yAf3wASELIAQg' +
+    'CGohBCACIAdqIQIgBUEBaiEFDAELCyMJIAkjAGxqIANBBXRqIgIgAv0ABAAgCv3wAf0LBAAgAiAC/QAEECAL/fAB/QsEECADQQFq' +
+    'IQMMAQsLIAZBBGohBgwBCwsDQCAGIwNIBEAgBkEDdCEJQQAhAgNAIwAgAkEEak4EQP0MAAAAAAAAAAAAAAAAAAAAACEL/QwAAAAA' +
+    'AAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACENIAAgAkEDdGohAyMOIAlqIQRBACEF' +
+    'A0AgASAFSgRAIAsgA/0KAwAgBP0ABAAiDv3yAf3wASELIAogA/0KAwggDv3yAf3wASEKIAwgA/0KAxAgDv3yAf3wASEMIA0gA/0K' +
+    'AxggDv3yAf3wASENIAMgCGohAyAEIAdqIQQgBUEBaiEFDAELCyMJIAkjAGxqIAJBBHRqIgMgA/0ABAAgC/3wAf0LBAAgAyAD/QAE' +
+    'ECAK/fAB/QsEECADIAP9AAQgIAz98AH9CwQgIAMgA/0ABDAgDf3wAf0LBDAgAkEEaiECDAELCwNAIAIjAEgEQP0MAAAAAAAAAAAA' +
+    'AAAAAAAAACEKIAAgAkEDdGohAyMOIAlqIQRBACEFA0AgASAFSgRAIAogA/0KAwAgBP0ABAD98gH98AEhCiADIAhqIQMgBCAHaiEE' +
+    'IAVBAWohBQwBCwsjCSAJIwBsaiACQQR0aiIDIAP9AAQAIAr98AH9CwQAIAJBAWohAgwBCwsgBkECaiEGDAELCws=';
 
 ;// CONCATENATED MODULE: ./src/nn/kernel/wasm.ts
 
@@ -15473,7 +16793,7 @@ function wasmKernel() {
     const f = new ForwardPlan(rt.view());
     return {
         name: 'wasm-simd-f64',
-        lossAndGradient(shape, params, x, y, start, end, grad, primeOffset = 0) {
+        lossAndGradient(shape, params, x, y, start, end, grad) {
             const P = params.length;
             if (!g.current(rt, shape, x, y))
                 g.plan(rt, shape, x, y, P);
@@ -15485,7 +16805,7 @@ function wasmKernel() {
             else
                 mem.set(params, po);
             const { inputs, width, outputs } = shape;
-            const loss = ex.lossGrad(g.activation, g.head, inputs, width, outputs, g.paramsAt, g.xAt, g.yAt, start, end, g.gradAt, g.workAt, primeOffset);
+            const loss = ex.lossGrad(g.activation, g.head, inputs, width, outputs, g.paramsAt, g.xAt, g.yAt, start, end, g.gradAt, g.workAt);
             const view = g.grad;
             if (P <= 64)
                 for (let q = 0; q < P; q++)
@@ -15769,6 +17089,543 @@ function network_describe(shape) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/nn/stall.ts
+/** When a training's error has flattened: the trigger of in-place growth. */
+/** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
+class StallDetector {
+    window;
+    threshold;
+    ring;
+    count = 0;
+    minSoFar = Infinity;
+    errorAtStart = NaN;
+    constructor(window, threshold) {
+        this.window = window;
+        this.threshold = threshold;
+        this.ring = new Float64Array(window + 1);
+    }
+    reset() {
+        this.count = 0;
+        this.minSoFar = Infinity;
+        this.errorAtStart = NaN;
+    }
+    /** Records the error of the current epoch; true when the error has flattened. */
+    record(error) {
+        if (error < this.minSoFar)
+            this.minSoFar = error;
+        const s = this.count++;
+        const w = this.window;
+        this.ring[s % (w + 1)] = this.minSoFar;
+        if (s === 0)
+            this.errorAtStart = this.minSoFar;
+        if (s < w)
+            return false;
+        const drop = this.ring[(s - w) % (w + 1)] - this.minSoFar;
+        if (!(this.errorAtStart > 0))
+            return !(drop > 0);
+        return drop / this.errorAtStart < this.threshold;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/nn/line-search.ts
+/**
+ * A line search for the strong Wolfe conditions (Nocedal & Wright, Numerical Optimization,
+ * 2nd ed. 2006: Algorithm 3.5 with the zoom of Algorithm 3.6, trial steps by the cubic
+ * interpolation of section 3.5, eq. 3.59):
+ *   sufficient decrease  φ(α) ≤ φ(0) + c1·α·φ'(0)
+ *   curvature            |φ'(α)| ≤ c2·|φ'(0)|
+ * where φ(α) = f(x0 + α·d). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so the
+ * same inputs give the same bits on every engine. No allocation after construction.
+ */
+/**
+ * A trial step from interpolation must stay at least this fraction of the bracket away from
+ * both ends, so the bracket shrinks by a fixed factor whatever the cubic says. 0.1 is common
+ * practice with no published source.
+ */
+const BRACKET_MARGIN = 0.1;
+/**
+ * Extrapolation bounds while no bracket exists: the next step lies in
+ * [α_i + 1.1·(α_i − α_{i−1}), α_i + 4·(α_i − α_{i−1})], the factors of the Moré–Thuente line
+ * search (MINPACK-2 dcsrch; from memory).
+ */
+const EXTRAPOLATE_MIN = 1.1;
+const EXTRAPOLATE_MAX = 4;
+const EPSILON = 2.220446049250313e-16;
+function finite(v) {
+    return v - v === 0;
+}
+/**
+ * The minimiser of the cubic through (a, fa, ga) and (b, fb, gb) (Nocedal & Wright eq. 3.59);
+ * NaN when the cubic has no local minimiser or the data are not finite.
+ */
+function cubicMinimizer(a, fa, ga, b, fb, gb) {
+    const d1 = ga + gb - (3 * (fa - fb)) / (a - b);
+    const disc = d1 * d1 - ga * gb;
+    if (!(disc >= 0))
+        return NaN;
+    const root = Math.sqrt(disc);
+    const d2 = b > a ? root : -root;
+    const alpha = b - ((b - a) * (gb + d2 - d1)) / (gb - ga + 2 * d2);
+    return finite(alpha) ? alpha : NaN;
+}
+/** Trial step inside the bracket (lo, hi): the cubic minimiser kept BRACKET_MARGIN away from both ends. */
+function bracketedStep(aLo, fLo, gLo, aHi, fHi, gHi, hiFinite) {
+    const left = aLo < aHi ? aLo : aHi;
+    const right = aLo < aHi ? aHi : aLo;
+    const margin = BRACKET_MARGIN * (right - left);
+    // Without finite values at the far end there is nothing to interpolate: bisect.
+    const c = hiFinite ? cubicMinimizer(aLo, fLo, gLo, aHi, fHi, gHi) : NaN;
+    if (c !== c)
+        return 0.5 * (aLo + aHi);
+    if (c < left + margin)
+        return left + margin;
+    if (c > right - margin)
+        return right - margin;
+    return c;
+}
+/** Next step while the function still falls steeply: the cubic's minimiser beyond α_i, within the extrapolation bounds. */
+function extrapolatedStep(aPrev, fPrev, gPrev, a, f, g) {
+    const span = a - aPrev;
+    const lower = a + EXTRAPOLATE_MIN * span;
+    const upper = a + EXTRAPOLATE_MAX * span;
+    const c = cubicMinimizer(aPrev, fPrev, gPrev, a, f, g);
+    if (c !== c || c > upper)
+        return upper;
+    return c < lower ? lower : c;
+}
+class StrongWolfeLineSearch {
+    settings;
+    /** The best point of the last search (valid when it reported `moved`) and its gradient. */
+    point;
+    gradient;
+    /** Loss, step and directional derivative φ'(α) at `point`. */
+    loss = NaN;
+    alpha = 0;
+    slope = NaN;
+    /** The point, gradient, loss and φ'(α) of the most recent evaluate(). */
+    trialPoint;
+    trialGradient;
+    trialLoss = NaN;
+    trialSlope = NaN;
+    constructor(size, settings) {
+        this.settings = settings;
+        this.point = new Float64Array(size);
+        this.gradient = new Float64Array(size);
+        this.trialPoint = new Float64Array(size);
+        this.trialGradient = new Float64Array(size);
+    }
+    resize(size) {
+        this.point = new Float64Array(size);
+        this.gradient = new Float64Array(size);
+        this.trialPoint = new Float64Array(size);
+        this.trialGradient = new Float64Array(size);
+    }
+    /** φ(α) at x0 + α·d (into trialPoint/trialGradient); sets trialSlope = ∇f(x0 + α·d)ᵀd. */
+    evaluate(x0, d, alpha, objective) {
+        const xt = this.trialPoint;
+        const gt = this.trialGradient;
+        const n = xt.length;
+        for (let q = 0; q < n; q++)
+            xt[q] = x0[q] + alpha * d[q];
+        const f = objective(xt, gt);
+        let slope = 0;
+        for (let q = 0; q < n; q++)
+            slope += gt[q] * d[q];
+        this.trialLoss = f;
+        this.trialSlope = slope;
+        return f;
+    }
+    /** The trial just evaluated becomes the best point (buffers swap, nothing is copied). */
+    keepTrial(alpha) {
+        const p = this.point;
+        const g = this.gradient;
+        this.point = this.trialPoint;
+        this.gradient = this.trialGradient;
+        this.trialPoint = p;
+        this.trialGradient = g;
+        this.loss = this.trialLoss;
+        this.slope = this.trialSlope;
+        this.alpha = alpha;
+    }
+    /**
+     * Searches along the descent direction d from x0, whose loss is f0 and whose directional
+     * derivative is slope0 < 0, starting with step alpha1. Uses at most `budget` evaluations.
+     * A non-finite loss or slope at a trial point counts as a step that is too long.
+     */
+    search(x0, f0, slope0, d, alpha1, objective, budget) {
+        const { c1, c2 } = this.settings;
+        const limit = Math.min(budget, this.settings.maxEvaluations);
+        const curvature = -c2 * slope0;
+        this.loss = f0;
+        this.slope = slope0;
+        this.alpha = 0;
+        let evaluations = 0;
+        const end = (status) => ({
+            status: status === 'failed' && evaluations >= budget ? 'budget' : status,
+            evaluations,
+            moved: this.alpha > 0,
+        });
+        // Algorithm 3.5: widen the step until the bracket [lo, hi] holds a Wolfe point. The best
+        // point so far (lo) is α = 0 at first, then always the lowest loss satisfying Armijo.
+        let aPrev = 0;
+        let fPrev = f0;
+        let gPrev = slope0;
+        let a = alpha1;
+        let aHi;
+        let fHi;
+        let gHi;
+        let hiFinite;
+        for (let i = 1;; i++) {
+            if (evaluations >= limit)
+                return end('failed');
+            const f = this.evaluate(x0, d, a, objective);
+            const g = this.trialSlope;
+            evaluations++;
+            const ok = finite(f) && finite(g);
+            if (!ok || f > f0 + c1 * a * slope0 || (i > 1 && f >= fPrev)) {
+                aHi = a;
+                fHi = f;
+                gHi = g;
+                hiFinite = ok;
+                break;
+            }
+            if ((g < 0 ? -g : g) <= curvature) {
+                this.keepTrial(a);
+                return end('wolfe');
+            }
+            if (g >= 0) {
+                // The minimum lies between the previous step and this one; this one is the lower.
+                aHi = aPrev;
+                fHi = fPrev;
+                gHi = gPrev;
+                hiFinite = true;
+                this.keepTrial(a);
+                break;
+            }
+            this.keepTrial(a);
+            const next = extrapolatedStep(aPrev, fPrev, gPrev, a, f, g);
+            aPrev = a;
+            fPrev = f;
+            gPrev = g;
+            a = next;
+        }
+        // Algorithm 3.6 (zoom): lo is this.alpha with this.loss and this.slope.
+        for (;;) {
+            if (evaluations >= limit)
+                return end('failed');
+            const aLo = this.alpha;
+            const width = aHi > aLo ? aHi - aLo : aLo - aHi;
+            if (width <= EPSILON * (aHi > aLo ? aHi : aLo))
+                return end('failed');
+            const aj = bracketedStep(aLo, this.loss, this.slope, aHi, fHi, gHi, hiFinite);
+            const f = this.evaluate(x0, d, aj, objective);
+            const g = this.trialSlope;
+            evaluations++;
+            const ok = finite(f) && finite(g);
+            if (!ok || f > f0 + c1 * aj * slope0 || f >= this.loss) {
+                aHi = aj;
+                fHi = f;
+                gHi = g;
+                hiFinite = ok;
+                continue;
+            }
+            if ((g < 0 ? -g : g) <= curvature) {
+                this.keepTrial(aj);
+                return end('wolfe');
+            }
+            if (g * (aHi - aLo) >= 0) {
+                aHi = aLo;
+                fHi = this.loss;
+                gHi = this.slope;
+                hiFinite = true;
+            }
+            this.keepTrial(aj);
+        }
+    }
+}
+
+;// CONCATENATED MODULE: ./src/nn/lbfgs.ts
+/**
+ * Full-batch limited-memory BFGS (Liu & Nocedal 1989; Nocedal & Wright, Numerical Optimization,
+ * 2nd ed. 2006, Algorithm 7.5), with the two-loop recursion of Algorithm 7.4, the initial
+ * Hessian H0 = γ·I with γ = sᵀy / yᵀy of the newest pair (eq. 7.20), and a strong Wolfe line
+ * search (line-search.ts). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so a run
+ * gives the same bits on every engine. All work arrays are allocated in the constructor or
+ * on resize, none inside an iteration.
+ */
+
+/**
+ * memory 10, gradientTolerance 1e-5, lossTolerance 2.22e-9 (factr 1e7 × machine epsilon, same
+ * formula) and 20 line-search evaluations are SciPy's L-BFGS-B defaults (scipy.optimize
+ * fmin_l_bfgs_b: m, pgtol, factr, maxls; checked in its documentation). c1 = 1e-4 and c2 = 0.9
+ * are the values Nocedal & Wright recommend for quasi-Newton methods (section 3.1, from memory),
+ * and SciPy's line_search defaults (checked). Nocedal & Wright suggest m between 3 and 20 (from
+ * memory); 10 is SciPy's choice.
+ * @testOnly
+ */
+const LBFGS_DEFAULTS = {
+    memory: 10,
+    c1: 1e-4,
+    c2: 0.9,
+    gradientTolerance: 1e-5,
+    lossTolerance: 2.220446049250313e-9,
+    maxLineSearchEvaluations: 20,
+};
+/**
+ * A pair is kept only when sᵀy > ε·‖s‖·‖y‖ (ε the machine epsilon): the cosine between s and
+ * y must exceed the rounding level of the dot product itself. A strong Wolfe step always
+ * gives sᵀy ≥ (1 − c2)·|∇fᵀs| > 0, so this only drops pairs from steps accepted without the
+ * curvature condition (budget ran out) or lost to rounding, where 1/sᵀy would be noise and the
+ * inverse-Hessian approximation could stop being positive definite.
+ */
+const PAIR_COSINE_MIN = 2.220446049250313e-16;
+function dot(a, ao, b, bo, n) {
+    let s = 0;
+    for (let q = 0; q < n; q++)
+        s += a[ao + q] * b[bo + q];
+    return s;
+}
+class Lbfgs {
+    options;
+    stats = { iterations: 0, evaluations: 0, skippedPairs: 0, restarts: 0 };
+    n;
+    m;
+    /** Ring of pairs: pair i occupies [i·n, (i+1)·n) of s and y. */
+    s;
+    y;
+    rho;
+    coef;
+    count = 0;
+    newest = -1;
+    gamma = 1;
+    d;
+    /** The point whose loss and gradient are cached, so an iteration starts without evaluating. */
+    x;
+    g;
+    f = NaN;
+    known = false;
+    search;
+    constructor(size, options = {}) {
+        const o = { ...LBFGS_DEFAULTS, ...options };
+        if (!Number.isInteger(o.memory) || o.memory < 1)
+            throw new RangeError(`memory must be a whole number >= 1, got ${o.memory}`);
+        if (!(0 < o.c1 && o.c1 < o.c2 && o.c2 < 1))
+            throw new RangeError(`need 0 < c1 < c2 < 1, got c1 ${o.c1}, c2 ${o.c2}`);
+        if (!(o.maxLineSearchEvaluations >= 1))
+            throw new RangeError('maxLineSearchEvaluations must be >= 1');
+        this.options = o;
+        this.n = size;
+        this.m = o.memory;
+        this.s = new Float64Array(this.m * size);
+        this.y = new Float64Array(this.m * size);
+        this.rho = new Float64Array(this.m);
+        this.coef = new Float64Array(this.m);
+        this.d = new Float64Array(size);
+        this.x = new Float64Array(size);
+        this.g = new Float64Array(size);
+        this.search = new StrongWolfeLineSearch(size, {
+            c1: o.c1,
+            c2: o.c2,
+            maxEvaluations: o.maxLineSearchEvaluations,
+        });
+    }
+    /**
+     * Hands over an evaluation the caller already made at x, so the next iteration need not repeat
+     * it. The curvature pairs stay; call reset() as well if x is unrelated to the previous point.
+     */
+    setPoint(x, loss, grad) {
+        this.x.set(x);
+        this.g.set(grad);
+        this.f = loss;
+        this.known = true;
+    }
+    /**
+     * One iteration from x (updated in place): direction by the two-loop recursion, then a strong
+     * Wolfe line search. Uses at most maxEvaluations evaluations (one more at the start when no
+     * loss is known for x). If the caller changed x since the last call, the history is dropped
+     * and x is evaluated afresh. x never gets worse: on 'stuck' it holds the best point found.
+     */
+    iterate(x, objective, maxEvaluations) {
+        let evaluations = 0;
+        if (!(maxEvaluations >= 1))
+            return { evaluations, loss: this.known ? this.f : NaN, status: 'progress' };
+        if (!this.known || !this.isCurrent(x)) {
+            if (this.known)
+                this.reset();
+            this.x.set(x);
+            this.f = objective(this.x, this.g);
+            this.known = true;
+            evaluations++;
+            this.stats.evaluations++;
+        }
+        const n = this.n;
+        const f0 = this.f;
+        const gInf = this.gradientInfNorm();
+        if (!(f0 - f0 === 0) || !(gInf - gInf === 0))
+            return { evaluations, loss: f0, status: 'stuck' };
+        if (gInf <= this.options.gradientTolerance)
+            return { evaluations, loss: f0, status: 'converged' };
+        this.stats.iterations++;
+        for (;;) {
+            let quasiNewton = this.count > 0;
+            this.direction();
+            let slope0 = dot(this.g, 0, this.d, 0, n);
+            if (!(slope0 < 0) && quasiNewton) {
+                // Rounding made the quasi-Newton direction useless: fall back on steepest descent.
+                this.reset();
+                quasiNewton = false;
+                this.direction();
+                slope0 = dot(this.g, 0, this.d, 0, n);
+            }
+            if (!(slope0 < 0))
+                return { evaluations, loss: this.f, status: 'stuck' };
+            const budget = maxEvaluations - evaluations;
+            if (budget < 1)
+                return { evaluations, loss: this.f, status: 'progress' };
+            // Quasi-Newton steps are well scaled, so α = 1 comes first (Nocedal & Wright, section 3.5).
+            // Without curvature information the first trial moves the parameters by a Euclidean length
+            // of 1 (as Liu & Nocedal's LBFGS code does, from memory): the summed loss's gradient grows
+            // with the row count, so α = 1 on −∇f would make the step depend on the data size, while a
+            // unit move is on the scale of Nguyen–Widrow initial weights.
+            const alpha1 = this.count > 0 ? 1 : 1 / Math.sqrt(dot(this.d, 0, this.d, 0, n));
+            const fOld = this.f;
+            const r = this.search.search(this.x, fOld, slope0, this.d, alpha1, objective, budget);
+            evaluations += r.evaluations;
+            this.stats.evaluations += r.evaluations;
+            if (r.moved)
+                this.accept(x, r.status !== 'failed');
+            if (r.status === 'wolfe') {
+                const fNew = this.f;
+                const scale = Math.max(fOld < 0 ? -fOld : fOld, fNew < 0 ? -fNew : fNew, 1);
+                const converged = this.gradientInfNorm() <= this.options.gradientTolerance ||
+                    (this.options.lossTolerance > 0 && (fOld - fNew) / scale <= this.options.lossTolerance);
+                return { evaluations, loss: this.f, status: converged ? 'converged' : 'progress' };
+            }
+            if (r.status === 'budget')
+                return { evaluations, loss: this.f, status: 'progress' };
+            // The line search failed. With curvature pairs, they may be what misleads: drop them and
+            // try steepest descent from the best point so far. Without, there is nowhere to go.
+            if (!quasiNewton)
+                return { evaluations, loss: this.f, status: 'stuck' };
+            this.reset();
+            this.stats.restarts++;
+        }
+    }
+    /** Forgets the curvature pairs (after the parameter vector changed meaning); the cached point stays. */
+    reset() {
+        this.count = 0;
+        this.newest = -1;
+        this.gamma = 1;
+    }
+    /**
+     * Carries over to a resized parameter vector (map[old] = new index, −1 dropped). Removing or
+     * adding a neuron changes the function, so old pairs are not secants of the new one: the
+     * history is dropped and the next iteration evaluates the new point.
+     */
+    resize(_map, newSize) {
+        this.reset();
+        this.known = false;
+        this.f = NaN;
+        if (newSize === this.n)
+            return;
+        this.n = newSize;
+        this.s = new Float64Array(this.m * newSize);
+        this.y = new Float64Array(this.m * newSize);
+        this.d = new Float64Array(newSize);
+        this.x = new Float64Array(newSize);
+        this.g = new Float64Array(newSize);
+        this.search.resize(newSize);
+    }
+    /** Curvature pairs currently held. */
+    get pairs() {
+        return this.count;
+    }
+    isCurrent(x) {
+        const c = this.x;
+        if (x.length !== c.length)
+            return false;
+        for (let q = 0; q < c.length; q++)
+            if (x[q] !== c[q])
+                return false;
+        return true;
+    }
+    gradientInfNorm() {
+        const g = this.g;
+        let m = 0;
+        for (let q = 0; q < g.length; q++) {
+            const a = g[q] < 0 ? -g[q] : g[q];
+            if (a > m || a !== a)
+                m = a;
+        }
+        return m;
+    }
+    /** d = −H·g by the two-loop recursion (Algorithm 7.4), newest pair first; −g without pairs. */
+    direction() {
+        const { n, m, s, y, rho, coef, d, g } = this;
+        for (let q = 0; q < n; q++)
+            d[q] = g[q];
+        for (let k = 0; k < this.count; k++) {
+            const i = (this.newest - k + m) % m;
+            const a = rho[i] * dot(s, i * n, d, 0, n);
+            coef[i] = a;
+            const o = i * n;
+            for (let q = 0; q < n; q++)
+                d[q] -= a * y[o + q];
+        }
+        const gamma = this.gamma;
+        for (let q = 0; q < n; q++)
+            d[q] *= gamma;
+        for (let k = this.count - 1; k >= 0; k--) {
+            const i = (this.newest - k + m) % m;
+            const b = rho[i] * dot(y, i * n, d, 0, n);
+            const c = coef[i] - b;
+            const o = i * n;
+            for (let q = 0; q < n; q++)
+                d[q] += c * s[o + q];
+        }
+        for (let q = 0; q < n; q++)
+            d[q] = -d[q];
+    }
+    /** Moves to the line search's best point; stores the pair s = x₊ − x, y = g₊ − g when asked and acceptable. */
+    accept(out, storePair) {
+        const { n, m } = this;
+        const xn = this.search.point;
+        const gn = this.search.gradient;
+        if (storePair) {
+            let sy = 0;
+            let ss = 0;
+            let yy = 0;
+            for (let q = 0; q < n; q++) {
+                const sq = xn[q] - this.x[q];
+                const yq = gn[q] - this.g[q];
+                sy += sq * yq;
+                ss += sq * sq;
+                yy += yq * yq;
+            }
+            if (sy > PAIR_COSINE_MIN * Math.sqrt(ss) * Math.sqrt(yy)) {
+                const i = (this.newest + 1) % m;
+                const o = i * n;
+                for (let q = 0; q < n; q++) {
+                    this.s[o + q] = xn[q] - this.x[q];
+                    this.y[o + q] = gn[q] - this.g[q];
+                }
+                this.rho[i] = 1 / sy;
+                this.gamma = sy / yy;
+                this.newest = i;
+                if (this.count < m)
+                    this.count++;
+            }
+            else {
+                this.stats.skippedPairs++;
+            }
+        }
+        this.x.set(xn);
+        this.g.set(gn);
+        this.f = this.search.loss;
+        out.set(xn);
+    }
+}
+
 ;// CONCATENATED MODULE: ./src/nn/optimizers.ts
 /** iRprop+ defaults (Riedmiller & Braun 1993; Igel & Hüsken 2003). */
 const IRPROP_DEFAULTS = { etaPlus: 1.2, etaMinus: 0.5, delta0: 0.1, deltaMin: 1e-6, deltaMax: 50 };
@@ -15933,45 +17790,135 @@ function makeUpdater(kind, size, settings) {
     return new Momentum(size, settings.learningRate ?? BACKPROP_DEFAULTS.learningRate, settings.momentum ?? BACKPROP_DEFAULTS.momentum);
 }
 
-;// CONCATENATED MODULE: ./src/nn/stall.ts
-/** When a training's error has flattened: the trigger of in-place growth. */
-/** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
-class StallDetector {
-    window;
-    threshold;
-    ring;
-    count = 0;
-    minSoFar = Infinity;
-    errorAtStart = NaN;
-    constructor(window, threshold) {
-        this.window = window;
-        this.threshold = threshold;
-        this.ring = new Float64Array(window + 1);
+;// CONCATENATED MODULE: ./src/nn/steppers.ts
+
+
+/** A first-order update: evaluate once, then step along the gradient. */
+class FirstOrder {
+    updater;
+    result = { evaluations: 1, loss: 0, status: 'progress' };
+    constructor(updater) {
+        this.updater = updater;
     }
-    reset() {
-        this.count = 0;
-        this.minSoFar = Infinity;
-        this.errorAtStart = NaN;
+    step(params, objective, grad, _budget, rows) {
+        const loss = objective(params, grad);
+        // A non-finite loss leaves the weights untouched; the trainer stops the run as diverged.
+        if (Number.isFinite(loss))
+            this.updater.step(params, grad, loss, rows);
+        this.result.loss = loss;
+        return this.result;
     }
-    /** Records the error of the current epoch; true when the error has flattened. */
-    record(error) {
-        if (error < this.minSoFar)
-            this.minSoFar = error;
-        const s = this.count++;
-        const w = this.window;
-        this.ring[s % (w + 1)] = this.minSoFar;
-        if (s === 0)
-            this.errorAtStart = this.minSoFar;
-        if (s < w)
-            return false;
-        const drop = this.ring[(s - w) % (w + 1)] - this.minSoFar;
-        if (!(this.errorAtStart > 0))
-            return !(drop > 0);
-        return drop / this.errorAtStart < this.threshold;
+    resize(map, newSize) {
+        this.updater.resize(map, newSize);
     }
+    resetRange(from, to) {
+        this.updater.resetRange(from, to);
+    }
+}
+/** L-BFGS: each step is one iteration with its strong Wolfe line search. */
+class QuasiNewton {
+    lbfgs;
+    constructor(size) {
+        this.lbfgs = new Lbfgs(size);
+    }
+    step(params, objective, _grad, budget) {
+        return this.lbfgs.iterate(params, objective, budget);
+    }
+    resize(map, newSize) {
+        this.lbfgs.resize(map, newSize);
+    }
+    resetRange() {
+        // The curvature pairs describe the whole vector: after surgery they no longer hold.
+        this.lbfgs.reset();
+    }
+}
+function makeStepper(optimizer, size, settings) {
+    return optimizer === 'lbfgs' ? new QuasiNewton(size) : new FirstOrder(makeUpdater(optimizer, size, settings));
+}
+
+;// CONCATENATED MODULE: ./src/nn/surgery.ts
+
+
+
+/** Hidden activations of every training row (rows × width); the logits go into `logits`. */
+function hiddenActivations(kernel, shape, params, data, logits) {
+    const hidden = new Float64Array(data.trainRows * shape.width);
+    kernel.forward(shape, params, data.xTrain, data.trainRows, logits, hidden);
+    return hidden;
+}
+function columnMeans(hidden, rows, width) {
+    const mean = new Float64Array(width);
+    for (let p = 0; p < rows; p++)
+        for (let j = 0; j < width; j++)
+            mean[j] += hidden[p * width + j];
+    for (let j = 0; j < width; j++)
+        mean[j] /= rows;
+    return mean;
+}
+/** Appends a hidden neuron with fresh input weights (as `init` draws them) and zero outgoing weights. */
+function withNeuronAdded(shape, params, init, rng) {
+    const map = resizeIndexMap(shape, -1);
+    const grown = resizeParams(params, shape, -1);
+    const next = { ...shape, width: shape.width + 1 };
+    initHiddenNeuron(grown, layoutOf(next), next.inputs, next.width, shape.width, init, rng);
+    return { shape: next, params: grown, map };
+}
+/** Removes hidden neuron j, folding its mean activation over the training rows into the output biases. */
+function withNeuronRemoved(kernel, shape, params, data, j) {
+    if (!Number.isInteger(j) || j < 0 || j >= shape.width) {
+        throw new RangeError(`no hidden neuron ${j} in a network of width ${shape.width}`);
+    }
+    const logits = new Float64Array(data.trainRows * shape.outputs);
+    const mean = columnMeans(hiddenActivations(kernel, shape, params, data, logits), data.trainRows, shape.width);
+    const lay = layoutOf(shape);
+    const folded = params.slice();
+    for (let k = 0; k < shape.outputs; k++)
+        folded[lay.b2 + k] += folded[lay.w2 + j * shape.outputs + k] * mean[j];
+    return {
+        shape: { ...shape, width: shape.width - 1 },
+        params: resizeParams(folded, shape, j),
+        map: resizeIndexMap(shape, j),
+    };
+}
+/** Compensated-ablation loss increase per hidden neuron (mean per training row), in one pass. */
+function saliencies(kernel, shape, params, data, head) {
+    const H = shape.width;
+    const K = shape.outputs;
+    const N = data.trainRows;
+    const logits = new Float64Array(N * K);
+    const hidden = hiddenActivations(kernel, shape, params, data, logits);
+    const mean = columnMeans(hidden, N, H);
+    const lay = layoutOf(shape);
+    const out = new Float64Array(H);
+    const z = new Float64Array(K);
+    const y = data.yTrain;
+    for (let p = 0; p < N; p++) {
+        const base = rowLoss(head, K, logits, p * K, y[p]);
+        for (let j = 0; j < H; j++) {
+            const d = hidden[p * H + j] - mean[j];
+            for (let k = 0; k < K; k++)
+                z[k] = logits[p * K + k] - d * params[lay.w2 + j * K + k];
+            out[j] += rowLoss(head, K, z, 0, y[p]) - base;
+        }
+    }
+    for (let j = 0; j < H; j++)
+        out[j] /= N;
+    return out;
 }
 
 ;// CONCATENATED MODULE: ./src/nn/trainer.ts
+/**
+ * One network and its optimiser state while it trains, grows and shrinks.
+ *
+ * Training follows the exact gradient of the loss it reports (plus the L2 penalty on the weights,
+ * when there is one). The steering rows (validation rows, or the training rows when there are
+ * none) decide when a training stops: when their loss has not really improved for `patience`
+ * epochs, when the optimiser has converged, or at max-epochs. The network handed back is the one
+ * with the lowest steering loss among those that met the target on the steering rows (or, when
+ * none did, among all checked): early stopping with the best weights restored. The judging rows
+ * are never read here.
+ */
+
 
 
 
@@ -15981,13 +17928,10 @@ class StallDetector {
 
 
 /**
- * Flat-spot elimination (Fahlman 1988, "An empirical study of learning speed in
- * back-propagation networks", CMU-CS-88-162; 0.1 is the sigmoid-prime offset of the
- * Cascade-Correlation reference code): a saturated tanh or logistic neuron has a derivative of
- * exactly 0 in floating point and would never move again. Measured on XOR (width 2, tanh,
- * iRprop+, 2,000 epochs, 100 seeds): 50 reach 100% with the exact gradient, 85 with it.
+ * A steering loss counts as improved when it falls by more than this fraction of the last
+ * improved value; smaller gains do not reset the patience (an engineering choice, no source).
  */
-const FLAT_SPOT_OFFSET = 0.1;
+const MIN_IMPROVEMENT = 1e-3;
 /** The output head the dataset calls for. */
 function headFor(data) {
     if (data.task === 'regression')
@@ -15999,16 +17943,25 @@ class NetworkTrainer {
     options;
     kernel;
     shape;
+    layout;
     params;
     grad;
-    updater;
+    /** The best network checked so far, and the best that met the target (see the header). */
+    best;
+    bestMet;
+    stepper;
     init;
     stall;
     head;
     logitsTrain;
-    logitsValidation;
+    logitsSteer;
     batch;
-    primeOffset;
+    batchStart = 0;
+    batchEnd = 0;
+    /** The loss over all training rows with the weight penalty, and its gradient: what the optimiser minimises. */
+    objective;
+    /** The same over rows [batchStart, batchEnd) (mini-batch Adam). */
+    batchObjective;
     constructor(data, width, options, rng, kernel, settings) {
         this.data = data;
         this.options = options;
@@ -16022,6 +17975,8 @@ class NetworkTrainer {
         }
         if (!(options.checkEvery >= 1))
             throw new RangeError(`checkEvery must be >= 1, got ${options.checkEvery}`);
+        if (!(options.weightDecay >= 0))
+            throw new RangeError(`weightDecay must be >= 0, got ${options.weightDecay}`);
         this.shape = {
             inputs: data.inputs,
             width,
@@ -16029,213 +17984,184 @@ class NetworkTrainer {
             activation: options.activation,
             head: headFor(data),
         };
+        this.layout = layoutOf(this.shape);
         this.head = reference_headCode(this.shape.head);
         this.init = options.init ?? defaultInit(options.activation);
         this.params = initParams(this.shape, this.init, rng);
         this.grad = new Float64Array(this.params.length);
-        this.updater = makeUpdater(options.optimizer, this.params.length, settings);
-        this.primeOffset = options.primeOffset ?? FLAT_SPOT_OFFSET;
+        this.best = new Float64Array(this.params.length);
+        this.bestMet = new Float64Array(this.params.length);
+        this.stepper = makeStepper(options.optimizer, this.params.length, settings);
         this.stall = options.stall ? new StallDetector(options.stall.window, options.stall.threshold) : null;
         this.logitsTrain = new Float64Array(data.trainRows * data.outputs);
-        this.logitsValidation = new Float64Array(data.validationRows * data.outputs);
+        const steerRows = data.validationRows > 0 ? data.validationRows : data.trainRows;
+        this.logitsSteer = new Float64Array(steerRows * data.outputs);
         const b = settings.batchSize ?? 0;
         this.batch = options.optimizer === 'adam' && b > 0 && b < data.trainRows ? b : data.trainRows;
+        this.objective = (x, g) => this.penalised(x, g, this.lossOver(x, g, 0, this.data.trainRows));
+        this.batchObjective = (x, g) => this.penalised(x, g, this.lossOver(x, g, this.batchStart, this.batchEnd));
     }
     get network() {
         return network_describe(this.shape);
     }
-    /** The live parameter vector (layout in network.ts); for tests and benchmarks. */
+    /** The live parameter vector (layout in kernel/layout.ts); for tests and benchmarks. */
     get parameters() {
         return this.params;
     }
+    lossOver(x, g, start, end) {
+        return this.kernel.lossAndGradient(this.shape, x, this.data.xTrain, this.data.yTrain, start, end, g);
+    }
+    /** Adds (λ/2)·Σw² over the weights (not the biases) to `loss` and λw to their gradient. */
+    penalised(x, g, loss) {
+        const lambda = this.options.weightDecay;
+        if (lambda === 0)
+            return loss;
+        const { w1, b1, w2, b2 } = this.layout;
+        let squares = 0;
+        for (let q = w1; q < b1; q++) {
+            squares += x[q] * x[q];
+            g[q] += lambda * x[q];
+        }
+        for (let q = w2; q < b2; q++) {
+            squares += x[q] * x[q];
+            g[q] += lambda * x[q];
+        }
+        return loss + 0.5 * lambda * squares;
+    }
+    /** One epoch: a full-batch optimiser step, or one pass of mini-batch Adam steps. */
+    epoch(budget) {
+        const N = this.data.trainRows;
+        if (this.batch >= N)
+            return this.stepper.step(this.params, this.objective, this.grad, budget, N);
+        let loss = 0;
+        for (let start = 0; start < N; start += this.batch) {
+            this.batchStart = start;
+            this.batchEnd = Math.min(N, start + this.batch);
+            const part = this.stepper.step(this.params, this.batchObjective, this.grad, 1, this.batchEnd - start).loss;
+            loss += part;
+            if (!Number.isFinite(part))
+                break;
+        }
+        return { evaluations: 1, loss, status: 'progress' };
+    }
     run(maxEpochs) {
-        const { data, kernel, shape, options } = this;
-        const N = data.trainRows;
-        const x = data.xTrain;
-        const y = data.yTrain;
-        const batch = this.batch;
-        const checkEvery = options.checkEvery;
+        const { options } = this;
         let stop = 'max-epochs';
         let epochs = 0;
-        for (let e = 1; e <= maxEpochs; e++) {
-            let loss = 0;
-            if (batch >= N) {
-                loss = this.fullBatchEpoch();
-                if (!Number.isFinite(loss)) {
-                    stop = 'diverged';
-                    break;
-                }
+        let nextCheck = options.checkEvery;
+        let reference = Infinity;
+        let lastImprovement = 0;
+        let bestLoss = Infinity;
+        let bestMetLoss = Infinity;
+        this.stall?.reset();
+        while (epochs < maxEpochs) {
+            const step = this.epoch(maxEpochs - epochs);
+            epochs += step.evaluations;
+            if (!Number.isFinite(step.loss)) {
+                stop = 'diverged';
+                break;
             }
-            else {
-                for (let start = 0; start < N; start += batch) {
-                    const end = Math.min(N, start + batch);
-                    const part = kernel.lossAndGradient(shape, this.params, x, y, start, end, this.grad, this.primeOffset);
-                    loss += part;
-                    if (!Number.isFinite(part))
-                        break;
-                    this.updater.step(this.params, this.grad, part, end - start);
-                }
-                if (!Number.isFinite(loss)) {
-                    stop = 'diverged';
-                    break;
-                }
+            const stalled = this.stall !== null && this.stall.record(step.loss / this.data.trainRows);
+            const ended = step.status !== 'progress';
+            if (epochs < nextCheck && epochs < maxEpochs && !ended && !stalled)
+                continue;
+            nextCheck = epochs + options.checkEvery;
+            if (options.interrupted?.() === true) {
+                stop = 'interrupted';
+                break;
             }
-            epochs = e;
-            if (e % checkEvery === 0 || e === maxEpochs) {
-                if (options.interrupted?.() === true) {
-                    stop = 'interrupted';
-                    break;
-                }
-                const m = this.targetMetricOnJudgedRows();
-                if (meetsThreshold(m, options.target)) {
-                    stop = 'reached';
-                    break;
-                }
-                if (!Number.isFinite(m)) {
-                    stop = 'diverged';
-                    break;
-                }
+            const steer = this.steeringMetrics();
+            const metric = metricValue(steer, options.target.metric);
+            if (!Number.isFinite(steer.loss) || !Number.isFinite(metric)) {
+                stop = 'diverged';
+                break;
             }
-            if (this.stall !== null && this.stall.record(loss / N)) {
+            if (steer.loss < reference * (1 - MIN_IMPROVEMENT)) {
+                reference = steer.loss;
+                lastImprovement = epochs;
+            }
+            if (steer.loss < bestLoss) {
+                bestLoss = steer.loss;
+                this.best.set(this.params);
+            }
+            if (meetsThreshold(metric, options.target) && steer.loss < bestMetLoss) {
+                bestMetLoss = steer.loss;
+                this.bestMet.set(this.params);
+            }
+            if (ended || stalled || epochs - lastImprovement >= options.patience) {
                 stop = 'stalled';
                 break;
             }
         }
+        if (stop !== 'diverged' && stop !== 'interrupted') {
+            if (bestMetLoss < Infinity)
+                this.params.set(this.bestMet);
+            else if (bestLoss < Infinity)
+                this.params.set(this.best);
+        }
         const rec = this.evaluate();
-        if (stop !== 'diverged' && !Number.isFinite(rec.trainLoss))
-            stop = 'diverged';
-        return { ...rec, epochs, stop };
+        if (stop === 'diverged' || stop === 'interrupted')
+            return { ...rec, epochs, stop };
+        if (!Number.isFinite(rec.trainLoss))
+            return { ...rec, epochs, stop: 'diverged' };
+        return { ...rec, epochs, stop: rec.stop === 'reached' ? 'reached' : stop };
     }
     trainMetrics() {
         const { data, shape } = this;
         this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
         return computeMetrics(this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, data.encoding.target.std);
     }
-    validationMetrics() {
+    /** Metrics on the steering rows: the validation rows, or the training rows when there are none. */
+    steeringMetrics() {
         const { data, shape } = this;
         if (data.validationRows === 0)
-            return null;
-        this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsValidation, null);
-        return computeMetrics(this.head, shape.outputs, this.logitsValidation, data.yValidation, data.validationRows, data.encoding.target.std);
+            return this.trainMetrics();
+        this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsSteer, null);
+        return computeMetrics(this.head, shape.outputs, this.logitsSteer, data.yValidation, data.validationRows, data.encoding.target.std);
     }
-    targetMetricOnJudgedRows() {
-        const { data, shape } = this;
-        const name = this.options.target.metric;
-        const std = data.encoding.target.std;
-        if (data.validationRows > 0) {
-            this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsValidation, null);
-            return targetMetric(name, this.head, shape.outputs, this.logitsValidation, data.yValidation, data.validationRows, std);
-        }
-        this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
-        return targetMetric(name, this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, std);
-    }
-    /** Every metric on the training rows and on the judged rows (validation, or training when there are none). */
     /**
-     * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no target
-     * check). Returns the summed loss; a non-finite loss leaves the weights untouched.
+     * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no check).
+     * Returns the loss; a non-finite loss leaves the weights untouched. For the engine benchmark.
      */
     fullBatchEpoch() {
-        const { data } = this;
-        const N = data.trainRows;
-        const loss = this.kernel.lossAndGradient(this.shape, this.params, data.xTrain, data.yTrain, 0, N, this.grad, this.primeOffset);
-        if (Number.isFinite(loss))
-            this.updater.step(this.params, this.grad, loss, N);
-        return loss;
+        return this.stepper.step(this.params, this.objective, this.grad, 1, this.data.trainRows).loss;
     }
+    /** Metrics on the training rows and on the steering rows. */
     metrics() {
-        const train = this.trainMetrics();
-        return { train, validation: this.validationMetrics() ?? train };
+        return { train: this.trainMetrics(), validation: this.steeringMetrics() };
     }
     evaluate() {
         const { train, validation } = this.metrics();
         const metric = this.options.target.metric;
         const trainMetric = metricValue(train, metric);
-        const validationMetric = metricValue(validation, metric);
+        const steeringMetric = metricValue(validation, metric);
         let stop = 'max-epochs';
         if (!Number.isFinite(train.loss))
             stop = 'diverged';
-        else if (meetsThreshold(validationMetric, this.options.target))
+        else if (meetsThreshold(steeringMetric, this.options.target))
             stop = 'reached';
-        return { epochs: 0, stop, trainLoss: train.loss, trainMetric, validationMetric };
+        return { epochs: 0, stop, trainLoss: train.loss, trainMetric, steeringMetric };
     }
     addNeuron(rng) {
-        const old = this.shape;
-        const map = resizeIndexMap(old, -1);
-        const params = resizeParams(this.params, old, -1);
-        const shape = { ...old, width: old.width + 1 };
-        initHiddenNeuron(params, layoutOf(shape), shape.inputs, shape.width, old.width, this.init, rng);
-        this.replace(shape, params, map);
+        this.replace(withNeuronAdded(this.shape, this.params, this.init, rng));
     }
     removeNeuron(j) {
-        const old = this.shape;
-        if (!Number.isInteger(j) || j < 0 || j >= old.width)
-            throw new RangeError(`no hidden neuron ${j} in a network of width ${old.width}`);
-        const mean = this.hiddenMeans();
-        const lay = layoutOf(old);
-        const params = this.params.slice();
-        for (let k = 0; k < old.outputs; k++)
-            params[lay.b2 + k] += params[lay.w2 + j * old.outputs + k] * mean[j];
-        const map = resizeIndexMap(old, j);
-        const shape = { ...old, width: old.width - 1 };
-        this.replace(shape, resizeParams(params, old, j), map);
-        const to = layoutOf(shape);
-        this.updater.resetRange(to.b2, to.b2 + shape.outputs);
+        this.replace(withNeuronRemoved(this.kernel, this.shape, this.params, this.data, j));
+        // The output biases absorbed the removed neuron: what the optimiser learnt about them is stale.
+        this.stepper.resetRange(this.layout.b2, this.layout.b2 + this.shape.outputs);
     }
-    replace(shape, params, map) {
-        this.shape = shape;
-        this.params = params;
-        this.grad = new Float64Array(params.length);
-        this.updater.resize(map, params.length);
+    replace(r) {
+        this.shape = r.shape;
+        this.layout = layoutOf(r.shape);
+        this.params = r.params;
+        this.grad = new Float64Array(r.params.length);
+        this.best = new Float64Array(r.params.length);
+        this.bestMet = new Float64Array(r.params.length);
+        this.stepper.resize(r.map, r.params.length);
         this.stall?.reset();
     }
-    /** Hidden activations of every training row (rows × width) and their logits. */
-    hiddenActivations() {
-        const { data, shape } = this;
-        const hidden = new Float64Array(data.trainRows * shape.width);
-        this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, hidden);
-        return hidden;
-    }
-    hiddenMeans() {
-        const H = this.shape.width;
-        const N = this.data.trainRows;
-        const hidden = this.hiddenActivations();
-        const mean = new Float64Array(H);
-        for (let p = 0; p < N; p++)
-            for (let j = 0; j < H; j++)
-                mean[j] += hidden[p * H + j];
-        for (let j = 0; j < H; j++)
-            mean[j] /= N;
-        return mean;
-    }
     saliency() {
-        const { shape, data } = this;
-        const H = shape.width;
-        const K = shape.outputs;
-        const N = data.trainRows;
-        const hidden = this.hiddenActivations();
-        const logits = this.logitsTrain;
-        const mean = new Float64Array(H);
-        for (let p = 0; p < N; p++)
-            for (let j = 0; j < H; j++)
-                mean[j] += hidden[p * H + j];
-        for (let j = 0; j < H; j++)
-            mean[j] /= N;
-        const lay = layoutOf(shape);
-        const out = new Float64Array(H);
-        const z = new Float64Array(K);
-        const y = data.yTrain;
-        for (let p = 0; p < N; p++) {
-            const base = rowLoss(this.head, K, logits, p * K, y[p]);
-            for (let j = 0; j < H; j++) {
-                const d = hidden[p * H + j] - mean[j];
-                for (let k = 0; k < K; k++)
-                    z[k] = logits[p * K + k] - d * this.params[lay.w2 + j * K + k];
-                out[j] += rowLoss(this.head, K, z, 0, y[p]) - base;
-            }
-        }
-        for (let j = 0; j < H; j++)
-            out[j] /= N;
-        return out;
+        return saliencies(this.kernel, this.shape, this.params, this.data, this.head);
     }
     snapshot() {
         return toJson(this.shape, this.params);
@@ -16244,37 +18170,32 @@ class NetworkTrainer {
     load(net) {
         const { shape, params } = network_fromJson(net);
         const s = this.shape;
-        if (shape.inputs !== s.inputs ||
-            shape.width !== s.width ||
-            shape.outputs !== s.outputs ||
-            shape.head !== s.head ||
-            shape.activation !== s.activation) {
+        const same = ['inputs', 'width', 'outputs', 'head', 'activation'].every((k) => shape[k] === s[k]);
+        if (!same) {
             throw new RangeError(`network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`);
         }
         this.params.set(params);
     }
+}
+function settingsOf(options, extras) {
+    return { ...(options.optimizerSettings ?? {}), ...(extras.optimizerSettings ?? {}) };
 }
 /**
  * A trainer that continues from an existing network: its weights, fresh optimiser and stall
  * state. Deterministic: the same arguments give the same later runs.
  */
 function trainerFromNetwork(data, net, options, rng, extras = {}) {
-    const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), {
-        ...(options.optimizerSettings ?? {}),
-        ...(extras.optimizerSettings ?? {}),
-    });
+    const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
     trainer.load(net);
     return trainer;
 }
 function createTrainer(data, width, options, rng, extras = {}) {
-    return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), {
-        ...(options.optimizerSettings ?? {}),
-        ...(extras.optimizerSettings ?? {}),
-    });
+    return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
 }
 
 ;// CONCATENATED MODULE: ./src/nn/predict.ts
-/** Running a network on encoded rows. */
+
+
 
 
 /** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
@@ -16288,6 +18209,15 @@ function predict_predict(net, x, rows) {
     for (let p = 0; p < rows; p++)
         headOutputs(head, K, logits, p * K, out, p * K);
     return out;
+}
+/** The network's `metric` on encoded rows (regression errors in the target's units, via its std). */
+function metricOn(net, x, y, rows, metric, targetStd) {
+    if (rows === 0)
+        return Number.NaN;
+    const { shape, params } = network_fromJson(net);
+    const logits = new Float64Array(rows * shape.outputs);
+    defaultKernel().forward(shape, params, x, rows, logits, null);
+    return targetMetric(metric, reference_headCode(shape.head), shape.outputs, logits, y, rows, targetStd);
 }
 
 ;// CONCATENATED MODULE: ./src/nn/index.ts
@@ -16408,7 +18338,7 @@ function dataStageReport(config, data, timing) {
     const ds = data.dataset;
     const classes = data.profile.classes;
     return {
-        schema: 'neuron-budget/report@1',
+        schema: 'neuron-budget/report@2',
         tool: { name: TOOL_NAME, version: TOOL_VERSION },
         reasons: [],
         width: null,
@@ -16420,6 +18350,7 @@ function dataStageReport(config, data, timing) {
             droppedRows: data.droppedRows,
             trainRows: ds.trainRows,
             validationRows: ds.validationRows,
+            judgingRows: ds.judgingRows,
             inputs: ds.inputs,
             outputs: ds.outputs,
             task: ds.task,
@@ -16436,7 +18367,7 @@ function dataStageReport(config, data, timing) {
     };
 }
 /** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-function searchStageReport(report, search) {
+function searchStageReport(report, search, required) {
     return {
         ...report,
         reasons: [],
@@ -16445,11 +18376,33 @@ function searchStageReport(report, search) {
         search: {
             outcome: search.outcome,
             grownWidth: search.grownWidth,
+            required,
             widths: search.widths,
-            pruning: search.pruning,
+            pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
             trainings: search.trainings,
-            note: search.note,
+            notes: search.notes,
+            judging: search.judging,
+            witness: witnessOf(search),
         },
+    };
+}
+/** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
+function shownSource(task) {
+    return { width: task.width, restart: task.restart + 1 };
+}
+function witnessOf(search) {
+    const w = search.witness;
+    if (w === null)
+        return null;
+    return {
+        width: w.network.width,
+        how: w.how,
+        source: shownSource(w.source),
+        judged: w.judged,
+        steering: w.steering,
+        train: w.train,
+        met: w.met,
+        adequate: search.width !== null,
     };
 }
 
@@ -16473,12 +18426,20 @@ function inputsLine(data) {
     }
     return `${data.dataset.inputs} after encoding: ${parts.join(', ')}`;
 }
-function splitLine(config, report) {
+function splitLine(config, report, data) {
     const d = report.data;
-    if (d.validationRows === 0)
-        return `${d.trainRows} training rows, judged on themselves (data.validation is 0)`;
-    const how = d.task === 'classification' ? 'stratified by class, ' : '';
-    return `${d.trainRows} training / ${d.validationRows} validation (${how}seed ${config.search.seed})`;
+    const how = `${d.task === 'classification' ? 'stratified by class, ' : ''}seed ${config.search.seed}`;
+    if (d.validationRows === 0 && d.judgingRows === 0) {
+        return `${d.trainRows} training rows, steered and judged on themselves (data.validation is 0)`;
+    }
+    const parts = [`${d.trainRows} training`];
+    if (d.validationRows > 0)
+        parts.push(`${d.validationRows} validation`);
+    if (d.judgingRows > 0)
+        parts.push(`${d.judgingRows} judging`);
+    const folded = data.judgingFolded ? '; a class is too small for judging rows, so the validation rows judge' : '';
+    const optimistic = d.judgingRows === 0 && !data.judgingFolded ? '; judged on the validation rows (data.judging is 0)' : '';
+    return `${parts.join(' / ')} (${how})${folded}${optimistic}`;
 }
 function dataSummaryText(config, data, report) {
     const d = report.data;
@@ -16486,7 +18447,7 @@ function dataSummaryText(config, data, report) {
         ['config', escapeText(displayPath(config.root, config.file))],
         ['data', escapeText(d.file)],
         ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
-        ['split', splitLine(config, report)],
+        ['split', splitLine(config, report, data)],
         ['inputs', inputsLine(data)],
         [
             'task',
@@ -16604,7 +18565,7 @@ function viewOf(report) {
         current: {
             width: report.width,
             metric: report.metric.value,
-            reached: at ? at.reached : null,
+            met: at ? at.met : null,
             restarts: at ? at.restarts : null,
             rows: report.data.rows,
             searchSeconds: typeof searchSeconds === 'number' ? searchSeconds : null,
@@ -16613,13 +18574,14 @@ function viewOf(report) {
             ? {
                 width: b.width,
                 metric: b.metric,
-                reached: b.reached ?? null,
+                met: b.met ?? null,
                 restarts: b.restarts ?? null,
                 rows: b.rows ?? null,
                 searchSeconds: b.searchSeconds ?? null,
             }
             : null,
         prunedFrom: grown !== null && report.width !== null && grown !== report.width ? grown : null,
+        backing: at ? backingSentence(at, report) : null,
         rows: [...byWidth.values()].sort((x, y) => x.width - y.width),
         history: b?.history ?? [],
         baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
@@ -16639,6 +18601,23 @@ function currentWidthCell(view, report, dash, strong = (s) => s) {
 function overDeviceBudget(report) {
     const budget = report.gate?.maxWidth ?? null;
     return budget !== null && report.width !== null && report.width > budget;
+}
+/**
+ * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
+ * wider networks); 3 are required." One definition of the backing, shown by every screen.
+ */
+function backingSentence(w, report) {
+    const judging = report.search?.judging.on ?? 'judging';
+    const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
+    const parts = [];
+    if (w.restarts > 0)
+        parts.push(`${w.metBy.fresh} of ${w.restarts} fresh restart${w.restarts === 1 ? '' : 's'}`);
+    if (w.metBy.pruned > 0)
+        parts.push(`${w.metBy.pruned} pruned from wider networks`);
+    const required = report.search?.required ?? null;
+    const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
+    const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
+    return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
 }
 
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
@@ -16693,7 +18672,7 @@ function summaryTable(view, report) {
         '|:--|--:|--:|',
         `| Smallest adequate width | ${b?.width ?? dash} | ${cWidth} |`,
         `| ${capital(metricName)} at that width (network kept) | ${num(b?.metric)} | ${num(c.metric)} |`,
-        `| Restarts reaching the target there | ${successRate(b?.reached, b?.restarts)} | ${successRate(c.reached, c.restarts)} |`,
+        `| Networks meeting the target there | ${b?.met ?? '—'} | ${c.met ?? '—'} |`,
         `| Data rows | ${b?.rows == null ? dash : formatCount(b.rows)} | ${c.rows === null ? dash : formatCount(c.rows)}${rowsDelta} |`,
         `| Search time | ${formatSeconds(b?.searchSeconds)} | ${formatSeconds(c.searchSeconds)} |`,
     ];
@@ -16704,7 +18683,8 @@ function summaryTable(view, report) {
         terms.push(`allowed growth over the baseline: ${gate.allowedGrowth}`);
     }
     terms.push(`data: ${escapeMarkdown(report.data.file)}`);
-    return `${rows.join('\n')}\n\n${terms.join(' · ')}.`;
+    const backing = view.backing === null ? '' : `\n\n${escapeMarkdown(view.backing, 400)}`;
+    return `${rows.join('\n')}${backing}\n\n${terms.join(' · ')}.`;
 }
 function chartSection(view, report) {
     const chartWidths = new Set();
@@ -16797,25 +18777,25 @@ function collapsible(summary, body) {
 function widthTable(view, limits, chartWidths) {
     const hasBaseline = view.baseline !== null;
     const header = hasBaseline
-        ? '| Width | This change: best | Reached | Wilson 95% | Baseline: best | Reached |\n|--:|--:|--:|--:|--:|--:|'
-        : '| Width | Best | Reached | Wilson 95% | Median epochs |\n|--:|--:|--:|--:|--:|';
+        ? '| Width | This change: best | Met | Wilson 95% | Baseline: best | Met |\n|--:|--:|--:|--:|--:|--:|'
+        : '| Width | Best | Met | Wilson 95% | Median epochs |\n|--:|--:|--:|--:|--:|';
     const keep = pickRows(view.rows, limits.widthRows, (r) => chartWidths.has(r.width) || r.width === view.current.width);
     const lines = keep.kept.map((r) => {
         const c = r.current;
         const cells = [
             mark(r.width, view),
             num(c?.best),
-            c ? successRate(c.reached, c.restarts) : '—',
+            c ? metCell(c) : '—',
             c ? `${c.wilson[0].toFixed(2)}–${c.wilson[1].toFixed(2)}` : '—',
         ];
         if (hasBaseline)
-            cells.push(num(r.baseline?.best), r.baseline ? successRate(r.baseline.reached, r.baseline.restarts) : '—');
+            cells.push(num(r.baseline?.best), r.baseline ? String(r.baseline.met) : '—');
         else
             cells.push(c ? formatCount(c.medianEpochs) : '—');
         return `| ${cells.join(' | ')} |`;
     });
     const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
-    return `${header}\n${lines.join('\n')}${omitted}\n\nReached: restarts that reached the target out of restarts run. Wilson 95%: interval for the success rate.`;
+    return `${header}\n${lines.join('\n')}${omitted}\n\nMet: networks of that width that met the target (fresh restarts + networks pruned down to it). Wilson 95%: interval for the fresh restarts' success rate.`;
 }
 function mark(width, view) {
     const tags = [];
@@ -16838,7 +18818,7 @@ function pruneTable(steps, limits) {
     if (limits.pruneRows === 0)
         return `_${steps.length} steps left out for length; the JSON report lists them._`;
     const shown = steps.slice(0, limits.pruneRows);
-    const lines = shown.map((s) => `| ${s.restart} | ${s.width} | ${s.neuron} | ${num(s.metricBefore)} | ${num(s.metricAfter)} | ${s.kept ? 'removed' : 'kept (needed)'} |`);
+    const lines = shown.map((s) => `| ${s.source.width}/${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back (needed)'} |`);
     const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
     return `| Restart | Width before | Neuron | Metric before | Metric after | Outcome |\n|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}`;
 }
@@ -16924,6 +18904,10 @@ function num(v) {
 function capital(s) {
     return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
 }
+/** "4 (1 + 3)": networks of the width that met the target, fresh + pruned when both occur. */
+function metCell(w) {
+    return w.metBy.pruned > 0 && w.metBy.fresh > 0 ? `${w.met} (${w.metBy.fresh} + ${w.metBy.pruned})` : String(w.met);
+}
 
 ;// CONCATENATED MODULE: ./src/report/text.ts
 
@@ -16934,9 +18918,9 @@ function renderText(report) {
     const view = viewOf(report);
     const out = [];
     const label = VERDICT_LABEL[view.verdict];
-    out.push(...wrap(`neuron-budget: ${label}. ${escapeText(view.headline)}`, ''));
+    out.push(...text_wrap(`neuron-budget: ${label}. ${escapeText(view.headline)}`, ''));
     for (const r of view.otherReasons)
-        out.push(...wrap(escapeText(r), '  - ', '    '));
+        out.push(...text_wrap(escapeText(r), '  - ', '    '));
     out.push('');
     const b = view.baseline;
     const c = view.current;
@@ -16947,7 +18931,7 @@ function renderText(report) {
         ['', 'baseline', 'this change'],
         ['smallest adequate width', b?.width == null ? dash : String(b.width), cWidth],
         [`${view.metricName} at that width`, fmt(b?.metric), fmt(c.metric)],
-        ['restarts reaching target there', rate(b?.reached, b?.restarts), rate(c.reached, c.restarts)],
+        ['networks meeting target there', b?.met == null ? dash : String(b.met), c.met === null ? dash : String(c.met)],
         [
             'data rows',
             b?.rows == null ? dash : formatCount(b.rows),
@@ -16961,29 +18945,31 @@ function renderText(report) {
     ];
     for (const [name, before, after] of table)
         out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
+    if (view.backing !== null) {
+        out.push('');
+        out.push(...text_wrap(view.backing, ''));
+    }
     out.push('');
     const terms = [`target: ${targetPhrase(view.metricName, view.threshold)}`];
     if (report.gate) {
         terms.push(report.gate.maxWidth === null ? 'no device budget' : `device budget: ${neurons(report.gate.maxWidth)}`);
         terms.push(`allowed growth: ${report.gate.allowedGrowth}`);
     }
-    out.push(...wrap(`${terms.join('; ')}.`, ''));
-    out.push(...wrap(`data: ${escapeText(report.data.file)}`, ''));
+    out.push(...text_wrap(`${terms.join('; ')}.`, ''));
+    out.push(...text_wrap(`data: ${escapeText(report.data.file)}`, ''));
     if (view.rows.length > 0) {
         out.push('');
-        out.push(`${view.metricName} by width (best over restarts; reached/run)`);
-        const head = b
-            ? ['width', 'this change', 'reached', 'baseline', 'reached']
-            : ['width', 'best', 'reached', 'wilson 95%'];
+        out.push(`${view.metricName} by width (best network; networks that met the target)`);
+        const head = b ? ['width', 'this change', 'met', 'baseline', 'met'] : ['width', 'best', 'met', 'wilson 95%'];
         out.push(head.map((h, i) => (i === 0 ? h.padStart(7) : h.padStart(14))).join(''));
         for (const r of view.rows) {
             const cells = [
                 `${r.width === c.width ? '>' : ' '}${String(r.width).padStart(6)}`,
                 fmt(r.current?.best),
-                r.current ? rate(r.current.reached, r.current.restarts) : dash,
+                r.current ? String(r.current.met) : dash,
             ];
             if (b)
-                cells.push(fmt(r.baseline?.best), r.baseline ? rate(r.baseline.reached, r.baseline.restarts) : dash);
+                cells.push(fmt(r.baseline?.best), r.baseline ? String(r.baseline.met) : dash);
             else
                 cells.push(r.current ? `${r.current.wilson[0].toFixed(2)}-${r.current.wilson[1].toFixed(2)}` : dash);
             out.push(cells.map((x, i) => (i === 0 ? x : x.padStart(14))).join(''));
@@ -16996,11 +18982,11 @@ function renderText(report) {
         const widths = view.history.slice(-20).map((h) => String(h.width));
         if (c.width !== null)
             widths.push(`now ${c.width}`);
-        out.push(...wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
+        out.push(...text_wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
     }
     const pruning = report.search?.pruning ?? [];
     if (pruning.length > 0) {
-        const removed = pruning.filter((s) => s.kept).length;
+        const removed = pruning.filter((s) => s.accepted).length;
         out.push('');
         out.push(`pruning: ${pruning.length} step${pruning.length === 1 ? '' : 's'}, ${removed} neuron${removed === 1 ? '' : 's'} removed`);
     }
@@ -17008,14 +18994,14 @@ function renderText(report) {
         out.push('');
         out.push('data changes since the baseline:');
         for (const line of changeLines(report.changes))
-            out.push(...wrap(line, '  - ', '    '));
+            out.push(...text_wrap(line, '  - ', '    '));
     }
     out.push('');
-    out.push(...wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
+    out.push(...text_wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
     if (overDeviceBudget(report)) {
-        out.push(...wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
+        out.push(...text_wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
     }
-    out.push(...wrap('A passing gate is not a safety sign-off for a device.', ''));
+    out.push(...text_wrap('A passing gate is not a safety sign-off for a device.', ''));
     return `${out.join('\n')}\n`;
 }
 function changeLines(ch) {
@@ -17055,7 +19041,7 @@ function changeLines(ch) {
     return lines;
 }
 /** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
-function wrap(text, first, rest = first) {
+function text_wrap(text, first, rest = first) {
     const words = text.split(/ +/).filter((w) => w !== '');
     const lines = [];
     let line = first;
@@ -17076,9 +19062,6 @@ function wrap(text, first, rest = first) {
 function fmt(v) {
     return v === null || v === undefined ? '-' : formatMetric(v);
 }
-function rate(reached, restarts) {
-    return successRate(reached, restarts).replace('—', '-');
-}
 function ascii(s) {
     return s.replace('−', '-');
 }
@@ -17095,7 +19078,7 @@ function withGate(report, outcome, gate) {
                 width: b.result.width,
                 metric: b.result.metric.value,
                 file: gate.baselineAsWritten,
-                reached: b.result.reached,
+                met: b.result.met,
                 restarts: b.result.restarts,
                 rows: b.data.rows,
                 searchSeconds: b.result.searchSeconds,
@@ -17122,35 +19105,9 @@ function withGate(report, outcome, gate) {
 
 
 
-;// CONCATENATED MODULE: external "node:os"
-const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
 ;// CONCATENATED MODULE: external "node:perf_hooks"
 const external_node_perf_hooks_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:perf_hooks");
-;// CONCATENATED MODULE: ./src/search/wilson.ts
-/**
- * Wilson score interval for a binomial success rate (Wilson 1927). Used to show how
- * sure the k-of-n restart count at a width is.
- */
-/** Two-sided 95% normal quantile. */
-const Z95 = 1.959964;
-function wilsonInterval(successes, trials, z = Z95) {
-    if (trials <= 0)
-        return [0, 1];
-    const n = trials;
-    const p = successes / n;
-    const z2 = z * z;
-    const denom = 1 + z2 / n;
-    const centre = (p + z2 / (2 * n)) / denom;
-    const half = (z * Math.sqrt((p * (1 - p)) / n + z2 / (4 * n * n))) / denom;
-    // Clamp the rounding dust at the ends so 0/n starts at exactly 0 and n/n ends at exactly 1.
-    const lo = successes === 0 ? 0 : Math.max(0, centre - half);
-    const hi = successes === n ? 1 : Math.min(1, centre + half);
-    return [lo, hi];
-}
-
 ;// CONCATENATED MODULE: ./src/search/growth.ts
-
-
 function taskKey(task) {
     return `${task.width}:${task.restart}`;
 }
@@ -17173,55 +19130,72 @@ function taskFor(plan, width, restart) {
     return plan.growth === 'in-place' ? { width: plan.minWidth, restart } : { width, restart };
 }
 /**
- * In-place growth maps onto widths like this: restart i counts as reaching the target
- * at width w when its network reached it at a width no larger than w (a network of
- * fewer neurons that reaches the target is also a width-w network: give the extra
- * neurons zero outgoing weights). Otherwise its metric and epochs at w are those at the
- * end of its time at w; a restart that diverged before w counts as a diverged failure.
+ * In-place growth maps onto widths like this: restart i counts as meeting the target at width w
+ * when its network met it at a width no larger than w (a network of fewer neurons that meets the
+ * target is also a width-w network: give the extra neurons zero outgoing weights). Otherwise its
+ * figures at w are those at the end of its time at w; a restart that diverged before w counts as
+ * a diverged failure.
  */
 function restartAtWidth(plan, result, width) {
-    const restart = result.restart;
+    const task = { width: result.width, restart: result.restart };
+    const base = { restart: result.restart, task };
+    const judged = (j) => ({
+        train: j.train,
+        steering: j.steering,
+        judged: j.judged,
+        reached: j.reached,
+        met: j.met,
+    });
     if (plan.growth !== 'in-place') {
         return {
-            restart,
-            reached: result.reached,
-            metric: result.metric,
+            ...base,
+            ...judged(result),
             epochs: result.epochs,
             stop: result.stop,
             reason: result.reason,
+            network: result.network,
         };
     }
-    if (result.reached && result.finalWidth <= width) {
-        return { restart, reached: true, metric: result.metric, epochs: result.epochs, stop: 'reached', reason: null };
+    if (result.met && result.finalWidth <= width) {
+        return {
+            ...base,
+            ...judged(result),
+            epochs: result.epochs,
+            stop: result.stop,
+            reason: null,
+            network: result.network,
+        };
     }
     const seg = result.segments.find((s) => s.width === width);
     if (seg !== undefined) {
         const diverged = seg.stop === 'diverged';
         return {
-            restart,
-            reached: false,
-            metric: seg.metric,
+            ...base,
+            ...judged(seg),
+            met: false,
             epochs: seg.epochs,
             stop: seg.stop,
             reason: diverged ? result.reason : null,
+            network: null,
         };
     }
+    const nan = Number.NaN;
     return {
-        restart,
+        ...base,
+        train: nan,
+        steering: nan,
+        judged: nan,
         reached: false,
-        metric: Number.NaN,
+        met: false,
         epochs: result.epochs,
         stop: 'diverged',
         reason: result.reason,
+        network: null,
     };
 }
-/**
- * Walk widths upward and, at each width, restarts in index order, stopping a width as
- * soon as its answer is certain: `required` successes, or more than `restarts - required`
- * failures. Pure: the same outcomes give the same decision.
- */
-function decideGrowth(plan, target, lookup) {
-    const widths = [];
+/** Walk the widths as the header says. Pure: the same outcomes give the same decision. */
+function decideGrowth(plan, lookup) {
+    const tried = [];
     const used = new Set();
     const allowedFailures = plan.restarts - plan.required;
     for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
@@ -17234,73 +19208,41 @@ function decideGrowth(plan, target, lookup) {
             const task = taskFor(plan, w, i);
             const key = taskKey(task);
             if (!used.has(key) && plan.maxTrainings !== null && used.size >= plan.maxTrainings) {
+                if (seen.length > 0)
+                    tried.push({ width: w, restarts: seen });
                 return {
                     kind: 'decided',
-                    adequateWidth: null,
-                    widths,
-                    reachedAtAdequate: [],
+                    grownWidth: null,
+                    tried,
                     trainings: used.size,
                     capHit: { width: w, restartsRun: seen.length },
                 };
             }
             const result = lookup(task);
-            if (result === undefined)
-                return { kind: 'need', task, deciding: w, widths, trainings: used.size };
+            if (result === undefined) {
+                const sofar = seen.length > 0 ? [...tried, { width: w, restarts: seen }] : tried;
+                return { kind: 'need', task, deciding: w, tried: sofar, trainings: used.size };
+            }
             used.add(key);
             const at = restartAtWidth(plan, result, w);
             seen.push(at);
-            if (at.reached)
+            if (at.met)
                 successes++;
             else
                 failures++;
         }
-        const summary = summarizeWidth(w, seen, successes >= plan.required, target);
-        widths.push(summary);
-        if (summary.adequate) {
-            return {
-                kind: 'decided',
-                adequateWidth: w,
-                widths,
-                reachedAtAdequate: seen.filter((s) => s.reached),
-                trainings: used.size,
-                capHit: null,
-            };
-        }
+        tried.push({ width: w, restarts: seen });
+        if (successes >= plan.required)
+            return { kind: 'decided', grownWidth: w, tried, trainings: used.size, capHit: null };
     }
-    return { kind: 'decided', adequateWidth: null, widths, reachedAtAdequate: [], trainings: used.size, capHit: null };
-}
-/** @testOnly */
-function median(values) {
-    if (values.length === 0)
-        return null;
-    const s = [...values].sort((a, b) => a - b);
-    const mid = s.length >> 1;
-    return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
-}
-function summarizeWidth(width, seen, adequate, target) {
-    const finite = seen.map((s) => s.metric).filter((m) => Number.isFinite(m));
-    let best = null;
-    for (const m of finite)
-        if (best === null || isBetter(target.metric, m, best))
-            best = m;
-    const reached = seen.filter((s) => s.reached).length;
-    return {
-        width,
-        restarts: seen.length,
-        reached,
-        adequate,
-        best,
-        median: median(finite),
-        wilson: wilsonInterval(reached, seen.length),
-        medianEpochs: median(seen.map((s) => s.epochs)) ?? 0,
-        diverged: seen.filter((s) => s.stop === 'diverged').length,
-    };
+    return { kind: 'decided', grownWidth: null, tried, trainings: used.size, capHit: null };
 }
 /**
  * Merge growth results from anywhere (threads, processes, machines) into the decision.
- * Duplicates must agree; extra results past the decision point are ignored.
+ * Identical duplicates are fine; two different results for one task are refused; extra results
+ * past the decision point are ignored.
  */
-function mergeOutcomes(plan, target, results) {
+function mergeOutcomes(plan, results) {
     const byKey = new Map();
     for (const r of results) {
         const key = taskKey(r);
@@ -17311,10 +19253,53 @@ function mergeOutcomes(plan, target, results) {
         }
         byKey.set(key, r);
     }
-    return decideGrowth(plan, target, (t) => byKey.get(taskKey(t)));
+    return decideGrowth(plan, (t) => byKey.get(taskKey(t)));
+}
+
+;// CONCATENATED MODULE: ./src/search/judge.ts
+/**
+ * Whether a trained network meets the target: decided on the judging rows alone, which no
+ * training ever reads (they do not stop a training, pick a restart or accept a pruning step).
+ * Without judging rows the validation rows judge, and without those the training rows.
+ */
+
+
+function judgingRowsOf(data, folded) {
+    if (data.judgingRows > 0)
+        return { on: 'judging', rows: data.judgingRows, folded };
+    if (data.validationRows > 0)
+        return { on: 'validation', rows: data.validationRows, folded };
+    return { on: 'training', rows: data.trainRows, folded };
+}
+/** The judged metric of `net`. */
+function judgedMetric(data, net, target) {
+    const std = data.encoding.target.std;
+    if (data.judgingRows > 0)
+        return metricOn(net, data.xJudging, data.yJudging, data.judgingRows, target.metric, std);
+    if (data.validationRows > 0)
+        return metricOn(net, data.xValidation, data.yValidation, data.validationRows, target.metric, std);
+    return metricOn(net, data.xTrain, data.yTrain, data.trainRows, target.metric, std);
+}
+/** The record of a finished training, with the judged metric added. */
+function judge(data, net, rec, target) {
+    const diverged = rec.stop === 'diverged' || net === null;
+    const judged = diverged ? Number.NaN : judgedMetric(data, net, target);
+    return {
+        train: rec.trainMetric,
+        steering: rec.steeringMetric,
+        judged,
+        reached: !diverged && meetsThreshold(rec.steeringMetric, target),
+        met: !diverged && meetsThreshold(judged, target),
+    };
 }
 
 ;// CONCATENATED MODULE: ./src/search/task.ts
+/**
+ * One unit of work, runnable in any thread: a growth task (one seeded training, or one
+ * network grown in place) or a prune job (shrinking one network that met the target).
+ * Everything here is a pure function of (data, context, task): no shared state, and the clock is
+ * read only through `cancelled`, which can only end a task early (the caller then discards it).
+ */
 
 
 
@@ -17326,27 +19311,31 @@ function mergeOutcomes(plan, target, results) {
 const DEFAULT_STALL = { window: 100, threshold: 0.05 };
 /** Engineering choice: try the three least salient neurons before giving up a prune step. */
 const DEFAULT_PRUNE_CANDIDATES = 3;
-function reachedBy(rec, target) {
-    if (rec.stop === 'diverged')
-        return false;
-    return rec.stop === 'reached' || meetsThreshold(rec.validationMetric, target);
-}
 const never = () => false;
 function divergedReason(width, epochs) {
     return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
+/** Gives up when the caller says so or the search's time is up. */
+function stopWhen(ctx, cancelled) {
+    const deadline = ctx.deadline;
+    return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
+}
 /**
  * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
- * null only when `cancelled` said so (the answer was no longer needed).
- * In-place growth (Dynamic Node Creation) starts at the task's width and gives every
- * width up to max-epochs; a neuron is added when the error curve flattens (the stall
- * trigger) or that budget runs out, until the target is reached or max-width is hit.
+ * null only when `cancelled` (or the time budget) said to give up.
+ * In-place growth (Dynamic Node Creation) starts at the task's width and gives every width up to
+ * max-epochs; a neuron is added when the error curve flattens (the stall trigger) or that budget
+ * runs out, until the target is met or max-width is hit.
  */
 function runTask(data, ctx, task, cancelled = never) {
     const { plan, train } = ctx;
     const inPlace = plan.growth === 'in-place';
     const rng = rngFor(ctx.seed, task.width, task.restart);
-    const options = { ...train, stall: inPlace ? { ...ctx.stall } : null, interrupted: cancelled };
+    const options = {
+        ...train,
+        stall: inPlace ? { ...ctx.stall } : null,
+        interrupted: stopWhen(ctx, cancelled),
+    };
     const trainer = createTrainer(data, task.width, options, rng);
     const segments = [];
     let epochs = 0;
@@ -17356,46 +19345,47 @@ function runTask(data, ctx, task, cancelled = never) {
             return null;
         epochs += rec.epochs;
         const width = trainer.network.width;
-        const reached = reachedBy(rec, train.target);
-        segments.push({ width, epochs, metric: rec.validationMetric, stop: reached ? 'reached' : rec.stop });
-        const done = reached || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
+        const network = rec.stop === 'diverged' ? null : trainer.snapshot();
+        const judged = judge(data, network, rec, train.target);
+        segments.push({ width, epochs, stop: rec.stop, ...judged });
+        const done = judged.met || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
         if (done) {
-            const diverged = rec.stop === 'diverged';
             return {
                 width: task.width,
                 restart: task.restart,
-                reached,
-                stop: reached ? 'reached' : rec.stop,
+                ...judged,
+                stop: rec.stop,
                 epochs,
-                metric: rec.validationMetric,
                 finalWidth: width,
                 segments,
-                network: reached ? trainer.snapshot() : null,
-                reason: diverged ? divergedReason(width, epochs) : null,
+                network: judged.met ? network : null,
+                reason: rec.stop === 'diverged' ? divergedReason(width, epochs) : null,
             };
         }
-        // Stalled (or out of epochs at this width): add a neuron that leaves the function unchanged and keep training.
+        // Out of patience or epochs at this width: add a neuron that leaves the function unchanged and keep training.
         trainer.addNeuron(rng);
     }
 }
 /**
- * Shrink one network by compensated ablation: score every hidden neuron by the loss
- * increase of removing it with its mean activation folded into the output biases,
- * remove the least salient, retrain for `pruneEpochs`, and keep the removal only if
- * the network still reaches the target; otherwise restore and try the next candidate.
+ * Shrink one network by compensated ablation: score every hidden neuron by the loss increase of
+ * removing it with its mean activation folded into the output biases, remove the least salient,
+ * retrain for at most `pruneEpochs`, and keep the removal only if the steering rows still meet the
+ * target; otherwise restore and try the next candidate. Each kept network is judged on the judging
+ * rows (that decides whether it counts for its width), but the judging rows never decide whether a
+ * removal is kept.
  */
-function runPruneJob(data, ctx, job) {
+function runPruneJob(data, ctx, job, cancelled = never) {
     const target = ctx.train.target;
-    const retrain = { ...ctx.train, stall: null };
+    const retrain = { ...ctx.train, stall: null, interrupted: stopWhen(ctx, cancelled) };
     // Every restore starts from a snapshot with fresh optimiser state, so the result does not
     // depend on which thread ran the growth task.
-    const fromSnapshot = (net) => trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.task.width, job.task.restart));
+    const fromSnapshot = (net) => trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.source.width, job.source.restart));
     let trainer = fromSnapshot(job.network);
-    let trainings = 0;
-    const grownWidth = trainer.network.width;
-    let metric = trainer.evaluate().validationMetric;
-    let network = trainer.snapshot();
+    let steering = trainer.evaluate().steeringMetric;
+    let network = job.network;
+    const chain = [];
     const steps = [];
+    let trainings = 0;
     while (trainer.network.width > 1) {
         const width = trainer.network.width;
         const order = leastSalientFirst(trainer.saliency());
@@ -17407,13 +19397,25 @@ function runPruneJob(data, ctx, job) {
                 trainer = fromSnapshot(network);
             trainer.removeNeuron(j);
             const rec = trainer.run(ctx.pruneEpochs);
+            if (rec.stop === 'interrupted')
+                return { source: job.source, chain, steps, trainings, interrupted: true };
             trainings++;
-            const after = rec.stop === 'diverged' ? Number.NaN : trainer.evaluate().validationMetric;
-            const ok = Number.isFinite(after) && meetsThreshold(after, target);
-            steps.push({ restart: job.task.restart, width, neuron: j, metricBefore: metric, metricAfter: after, kept: ok });
-            if (ok) {
-                metric = after;
-                network = trainer.snapshot();
+            const smaller = rec.stop === 'diverged' ? null : trainer.snapshot();
+            const judged = judge(data, smaller, rec, target);
+            const accepted = smaller !== null && judged.reached;
+            steps.push({
+                source: job.source,
+                width,
+                neuron: j,
+                steeringBefore: steering,
+                steeringAfter: judged.steering,
+                accepted,
+                judged: accepted ? judged.judged : null,
+            });
+            if (accepted && smaller !== null) {
+                steering = judged.steering;
+                network = smaller;
+                chain.push({ width: width - 1, network: smaller, ...judged });
                 removed = true;
                 break;
             }
@@ -17422,7 +19424,7 @@ function runPruneJob(data, ctx, job) {
         if (!removed)
             break;
     }
-    return { restart: job.task.restart, grownWidth, width: network.width, metric, network, steps, trainings };
+    return { source: job.source, chain, steps, trainings, interrupted: false };
 }
 /** Neuron indices by ascending saliency; ties (and NaN) resolved by index so the order is total. */
 function leastSalientFirst(saliency) {
@@ -17430,15 +19432,6 @@ function leastSalientFirst(saliency) {
     const key = (j) => (Number.isFinite(saliency[j]) ? saliency[j] : Number.POSITIVE_INFINITY);
     idx.sort((a, b) => key(a) - key(b) || a - b);
     return idx;
-}
-/** Smallest pruned network wins; ties go to the lowest restart index. */
-function pickWitness(results) {
-    let best = null;
-    for (const r of results) {
-        if (best === null || r.width < best.width || (r.width === best.width && r.restart < best.restart))
-            best = r;
-    }
-    return best;
 }
 
 ;// CONCATENATED MODULE: ./src/search/executor.ts
@@ -17458,7 +19451,8 @@ function inThreadExecutor(data, ctx) {
         size: 1,
         async train(task) {
             await yieldToEventLoop();
-            return runTask(data, ctx, task); // never cancelled here: nothing runs ahead in one thread
+            // Never discarded here (nothing runs ahead in one thread); null only when the time ran out.
+            return runTask(data, ctx, task);
         },
         async prune(job) {
             await yieldToEventLoop();
@@ -17485,6 +19479,8 @@ function shareDataset(data) {
         xTrain: toShared(data.xTrain),
         yTrain: toShared(data.yTrain),
         xValidation: toShared(data.xValidation),
+        xJudging: toShared(data.xJudging),
+        yJudging: toShared(data.yJudging),
         yValidation: toShared(data.yValidation),
     };
 }
@@ -17529,7 +19525,9 @@ function workerPoolExecutor(data, ctx, size, entry) {
             if (p !== undefined) {
                 if (reply.type === 'done')
                     p.resolve(reply.result);
-                else if (reply.type === 'error')
+                else if (reply.type === 'cancelled')
+                    p.resolve(null);
+                else
                     p.reject(new Error(reply.message));
             }
             pump();
@@ -17590,11 +19588,225 @@ function workerPoolExecutor(data, ctx, size, entry) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/search/notes.ts
+/**
+ * Why no width is adequate, in sentences a reviewer can act on, read off the per-width curve:
+ * - networks met the target, but too few of one width (say how many, and how many are required);
+ * - the networks fit the training rows but not the judging rows: too few rows or too much noise;
+ * - more neurons still help: the curve still improves at max-width, which is too small;
+ * - the curve is flat and even the training rows are not fitted: the features may not carry the target.
+ * And how far a search got when its budget ran out.
+ */
+
+
+/** Widths at the top of the range whose best is compared with the rest to tell a rising curve. */
+const TOP_WIDTHS = 3;
+/**
+ * A curve still rises when its best over the top widths beats the best before them by more than
+ * this (accuracy points, or this fraction of an error metric's value); an engineering choice.
+ */
+const RISE = 0.005;
+function span(from, to) {
+    return from === to ? `width ${from}` : `widths ${from}–${to}`;
+}
+function bestAt(widths, target, pickTrain = false) {
+    let best = null;
+    for (const w of widths) {
+        const v = pickTrain ? w.bestTrain : w.best;
+        if (v !== null && (best === null || isBetter(target.metric, v, best.value)))
+            best = { width: w.width, value: v };
+    }
+    return best;
+}
+function rises(widths, target) {
+    if (widths.length <= TOP_WIDTHS)
+        return null;
+    const top = bestAt(widths.slice(-TOP_WIDTHS), target);
+    const before = bestAt(widths.slice(0, -TOP_WIDTHS), target);
+    if (top === null || before === null)
+        return null;
+    const margin = higherIsBetter(target.metric) ? RISE : RISE * Math.abs(before.value);
+    const gain = higherIsBetter(target.metric) ? top.value - before.value : before.value - top.value;
+    return gain > margin ? { from: before, to: top } : null;
+}
+function notFoundNotes(plan, target, widths, judgedOn) {
+    const notes = [];
+    const name = target.metric;
+    const withMet = widths.filter((w) => w.met > 0);
+    if (withMet.length > 0) {
+        const shown = withMet
+            .slice(0, 3)
+            .map((w) => `${w.met === 1 ? '1 network' : `${w.met} networks`} of width ${w.width}`)
+            .join(', ');
+        notes.push(`Some networks met ${targetShort(name, target.threshold)} (${shown}), but a width needs ${plan.required} to be adequate.`);
+    }
+    const train = bestAt(widths, target, true);
+    const judged = bestAt(widths, target);
+    const rising = rises(widths, target);
+    if (rising !== null) {
+        notes.push(`More neurons still help: the best ${judgedOn} ${name} improved from ${formatMetric(rising.from.value)} (width ${rising.from.width}) to ${formatMetric(rising.to.value)} (width ${rising.to.width}); search.max-width (${plan.maxWidth}) is too small for this target.`);
+    }
+    else if (train !== null && meetsThreshold(train.value, target)) {
+        notes.push(`The networks fit the training rows (${name} ${formatMetric(train.value)} at width ${train.width}) but not the ${judgedOn} rows (best ${judged === null ? 'none' : formatMetric(judged.value)}): the data hold too few rows, or too much noise, for this target.`);
+    }
+    else {
+        const best = train === null ? 'no network trained' : `the best training ${name} was ${formatMetric(train.value)}`;
+        notes.push(`Even the training rows are not fitted (${best}) and more neurons did not help from ${span(plan.minWidth, plan.maxWidth)}: the features may not carry the target.`);
+    }
+    return notes;
+}
+/** The growth phase stopped (time budget, training cap) before a width was adequate. */
+function stoppedGrowingNote(plan, why, atWidth, trainings) {
+    const below = atWidth > plan.minWidth
+        ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate on fresh restarts`
+        : '';
+    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
+}
+/** The time ran out while pruning: the grown width is proven, smaller ones are not settled. */
+function stoppedPruningNote(why, grownWidth, trainings) {
+    return `${why} while pruning, after ${trainings} trainings: ${neurons(grownWidth)} are enough (proven by fresh restarts), but whether fewer would do was not settled.`;
+}
+
+;// CONCATENATED MODULE: ./src/search/wilson.ts
+/**
+ * Wilson score interval for a binomial success rate (Wilson 1927). Used to show how
+ * sure the k-of-n restart count at a width is.
+ */
+/** Two-sided 95% normal quantile. */
+const Z95 = 1.959964;
+function wilsonInterval(successes, trials, z = Z95) {
+    if (trials <= 0)
+        return [0, 1];
+    const n = trials;
+    const p = successes / n;
+    const z2 = z * z;
+    const denom = 1 + z2 / n;
+    const centre = (p + z2 / (2 * n)) / denom;
+    const half = (z * Math.sqrt((p * (1 - p)) / n + z2 / (4 * n * n))) / denom;
+    // Clamp the rounding dust at the ends so 0/n starts at exactly 0 and n/n ends at exactly 1.
+    const lo = successes === 0 ? 0 : Math.max(0, centre - half);
+    const hi = successes === n ? 1 : Math.min(1, centre + half);
+    return [lo, hi];
+}
+
+;// CONCATENATED MODULE: ./src/search/tally.ts
+/**
+ * The one definition of an adequate width, applied: a width is adequate when at least `required`
+ * distinct networks of that width met the target on the judging rows, counting fresh restarts at
+ * that width and networks pruned down to it from a larger width. The headline is the smallest
+ * adequate width; its witness is the network of that width that did best on the steering rows
+ * (the judging rows decide whether a network counts, never which one is shown).
+ */
+
+
+function median(values) {
+    if (values.length === 0)
+        return null;
+    const s = [...values].sort((a, b) => a - b);
+    const mid = s.length >> 1;
+    return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
+}
+function bestOf(values, target) {
+    let best = null;
+    for (const v of values)
+        if (Number.isFinite(v) && (best === null || isBetter(target.metric, v, best)))
+            best = v;
+    return best;
+}
+/** Better witness first: steering metric, then fresh before pruned, then narrower source, then lower restart. */
+function beats(a, b, target) {
+    if (isBetter(target.metric, a.steering, b.steering))
+        return true;
+    if (isBetter(target.metric, b.steering, a.steering))
+        return false;
+    if (a.how !== b.how)
+        return a.how === 'fresh';
+    if (a.source.width !== b.source.width)
+        return a.source.width < b.source.width;
+    return a.source.restart < b.source.restart;
+}
+function pick(candidates, target) {
+    let best = null;
+    for (const c of candidates)
+        if (c.met && (best === null || beats(c, best, target)))
+            best = c;
+    return best;
+}
+function tally(plan, target, tried, pruned, seed) {
+    const fresh = new Map(tried.map((t) => [t.width, t.restarts]));
+    const links = new Map();
+    for (const r of pruned) {
+        for (const link of r.chain) {
+            const list = links.get(link.width) ?? [];
+            list.push({ ...link, source: r.source, how: 'pruned' });
+            links.set(link.width, list);
+        }
+    }
+    const widthList = [...new Set([...fresh.keys(), ...links.keys()])].sort((a, b) => a - b);
+    const widths = [];
+    const candidatesAt = new Map();
+    for (const w of widthList) {
+        const runs = fresh.get(w) ?? [];
+        const prunedHere = links.get(w) ?? [];
+        const freshCandidates = runs
+            .filter((r) => r.met && r.network !== null)
+            .map((r) => ({ ...r, width: w, network: r.network, source: r.task, how: 'fresh' }));
+        candidatesAt.set(w, [...freshCandidates, ...prunedHere]);
+        const freshMet = freshCandidates.length;
+        const prunedMet = prunedHere.filter((c) => c.met).length;
+        const all = [...runs, ...prunedHere];
+        widths.push({
+            width: w,
+            restarts: runs.length,
+            reached: runs.filter((r) => r.reached).length,
+            met: freshMet + prunedMet,
+            metBy: { fresh: freshMet, pruned: prunedMet },
+            adequate: freshMet + prunedMet >= plan.required,
+            best: bestOf(all.map((r) => r.judged), target),
+            bestTrain: bestOf(all.map((r) => r.train), target),
+            median: median(runs.map((r) => r.judged).filter(Number.isFinite)),
+            wilson: wilsonInterval(freshMet, runs.length),
+            medianEpochs: median(runs.map((r) => r.epochs)) ?? 0,
+            diverged: runs.filter((r) => r.stop === 'diverged').length,
+        });
+    }
+    const width = widths.find((w) => w.adequate)?.width ?? null;
+    let chosen = null;
+    if (width !== null)
+        chosen = pick(candidatesAt.get(width) ?? [], target);
+    else
+        for (const w of widthList)
+            chosen ??= pick(candidatesAt.get(w) ?? [], target);
+    return { widths, width, witness: chosen === null ? null : tally_witnessOf(chosen, seed) };
+}
+function tally_witnessOf(c, seed) {
+    return {
+        source: c.source,
+        seed,
+        how: c.how,
+        network: c.network,
+        train: c.train,
+        steering: c.steering,
+        judged: c.judged,
+        reached: c.reached,
+        met: c.met,
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/search/search.ts
 /**
- * The growth-and-prune search: find the smallest hidden width whose networks reach the
- * target, and hold a trained network (the witness) that proves it.
+ * The growth-and-prune search: find the smallest hidden width at which enough networks meet the
+ * target (tally.ts has the one definition), and hold a trained network (the witness) that shows it.
+ *
+ * 1. Growth (growth.ts): fresh seeded restarts, width by width upward, until one width is
+ *    adequate on fresh restarts alone.
+ * 2. Prune (task.ts): every network that met the target at that width or below is shrunk one
+ *    neuron at a time while the steering rows still meet the target; each smaller network that
+ *    also meets it on the judging rows counts for its width.
+ * 3. Tally: the smallest width with `required` networks that met the target is the answer.
  */
+
+
 
 
 
@@ -17608,7 +19820,7 @@ function growthPlan(search) {
         minWidth: search.minWidth,
         maxWidth: search.maxWidth,
         restarts: search.restarts,
-        // A width is only adequate with a network to show for it: at least one restart must reach.
+        // A width is only adequate with a network to show for it: at least one must meet the target.
         required: Math.max(1, search.required),
         maxTrainings: search.maxTrainings,
     };
@@ -17620,6 +19832,8 @@ function searchContext(search, target, options = {}) {
         optimizer: search.optimizer,
         maxEpochs: search.maxEpochs,
         checkEvery: search.checkEvery,
+        patience: search.patience,
+        weightDecay: search.weightDecay,
         target: { ...target },
         stall: null,
     };
@@ -17630,28 +19844,79 @@ function searchContext(search, target, options = {}) {
         stall: { ...(options.stall ?? DEFAULT_STALL) },
         pruneEpochs: search.pruneEpochs,
         pruneCandidates: options.pruneCandidates ?? DEFAULT_PRUNE_CANDIDATES,
+        deadline: search.timeBudget === null ? null : Date.now() + search.timeBudget * 1000,
     };
 }
 function workerCount(search, options) {
     const n = options.workers ?? search.workers ?? (0,external_node_os_namespaceObject.availableParallelism)();
     return Math.max(1, Math.floor(n));
 }
-function search_fmt(x) {
-    return x === null || !Number.isFinite(x) ? 'none' : String(Number(x.toPrecision(4)));
+/** Resolves when the deadline passes (never without one); the timer does not keep the process alive. */
+function timeUp(deadline) {
+    if (deadline === null)
+        return new Promise(() => undefined);
+    return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
 }
-function span(from, to) {
-    return from === to ? `width ${from}` : `widths ${from}–${to}`;
+/** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
+async function grow(ctx, executor, target, progress) {
+    const plan = ctx.plan;
+    const canon = planTasks(plan);
+    const position = new Map(canon.map((t, k) => [taskKey(t), k]));
+    const results = new Map();
+    const inflight = new Map();
+    const clock = timeUp(ctx.deadline);
+    let best = null;
+    for (;;) {
+        const decision = decideGrowth(plan, (t) => results.get(taskKey(t)));
+        // Tasks before the first undecided one that are still running can no longer matter.
+        const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
+        for (const key of [...inflight.keys()]) {
+            if ((position.get(key) ?? 0) < frontier) {
+                const [w, i] = key.split(':').map(Number);
+                executor.discard({ width: w, restart: i });
+                inflight.delete(key);
+            }
+        }
+        if (decision.kind === 'decided')
+            return { decision, results, outOfTime: false };
+        if (ctx.deadline !== null && Date.now() >= ctx.deadline)
+            return { decision, results, outOfTime: true };
+        for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
+            const key = taskKey(canon[k]);
+            if (results.has(key) || inflight.has(key))
+                continue;
+            inflight.set(key, executor.train(canon[k]));
+        }
+        const keyed = [...inflight.entries()].map(([key, p]) => p.then((r) => ({ key, r })));
+        const done = await Promise.race([...keyed, clock]);
+        if (done === 'time')
+            return { decision, results, outOfTime: true };
+        inflight.delete(done.key);
+        // A task handed back without a result gave up because the time ran out.
+        if (done.r === null)
+            return { decision, results, outOfTime: true };
+        results.set(done.key, done.r);
+        if (Number.isFinite(done.r.judged) && (best === null || isBetter(target.metric, done.r.judged, best)))
+            best = done.r.judged;
+        progress({ phase: 'growth', width: done.r.finalWidth, restart: done.r.restart, epoch: done.r.epochs, best });
+    }
 }
-function notFoundNote(plan, target, widths) {
-    const best = widths.map((w) => `${w.width}: ${search_fmt(w.best)}`).join(', ');
-    return (`No width from ${plan.minWidth} to ${plan.maxWidth} had ${plan.required} of ${plan.restarts} restarts reach ` +
-        `${targetShort(target.metric, target.threshold)}; best validation ${target.metric} per width: ${best}.`);
-}
-function stoppedNote(plan, why, atWidth, trainings) {
-    const below = atWidth > plan.minWidth
-        ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate`
-        : '';
-    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
+/** Every network that met the target at the grown width or below, once each, in (width, restart) order. */
+function pruneSources(tried, grownWidth) {
+    const jobs = [];
+    const seen = new Set();
+    for (const { width, restarts } of tried) {
+        if (grownWidth !== null && width > grownWidth)
+            continue;
+        for (const r of restarts) {
+            const key = taskKey(r.task);
+            if (!r.met || r.network === null || seen.has(key))
+                continue;
+            seen.add(key);
+            jobs.push({ source: r.task, network: r.network });
+        }
+    }
+    return jobs;
 }
 /** Run the whole search. Outside `timing`, the result depends only on the data, the config and the code. */
 async function runSearch(data, search, target, options = {}) {
@@ -17663,119 +19928,80 @@ async function runSearch(data, search, target, options = {}) {
     // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
     const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
     const executor = size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
-    const deadline = search.timeBudget === null ? Number.POSITIVE_INFINITY : t0 + search.timeBudget * 1000;
-    let bestSoFar = null;
     const progress = (e) => options.onProgress?.(e);
+    const judging = judgingRowsOf(data, options.judgingFolded ?? false);
+    const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
+    const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
     try {
-        // Growth phase: keep every thread busy with tasks in canonical order from the first undecided one.
-        const canon = planTasks(plan);
-        const position = new Map(canon.map((t, k) => [taskKey(t), k]));
-        const results = new Map();
-        const inflight = new Map();
-        let decision;
-        for (;;) {
-            decision = decideGrowth(plan, target, (t) => results.get(taskKey(t)));
-            // Tasks before the first undecided one that are still running can no longer matter.
-            const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
-            for (const key of [...inflight.keys()]) {
-                if ((position.get(key) ?? 0) < frontier) {
-                    const [w, i] = key.split(':').map(Number);
-                    executor.discard({ width: w, restart: i });
-                    inflight.delete(key);
-                }
-            }
-            if (decision.kind === 'decided')
-                break;
-            if (now() >= deadline)
-                break;
-            for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
-                const key = taskKey(canon[k]);
-                if (results.has(key) || inflight.has(key))
-                    continue;
-                inflight.set(key, executor.train(canon[k]));
-            }
-            const done = await Promise.race([...inflight.values()]);
-            const key = taskKey(done);
-            inflight.delete(key);
-            results.set(key, done);
-            if (Number.isFinite(done.metric) && (bestSoFar === null || isBetter(target.metric, done.metric, bestSoFar))) {
-                bestSoFar = done.metric;
-            }
-            progress({ phase: 'growth', width: done.finalWidth, restart: done.restart, epoch: done.epochs, best: bestSoFar });
-        }
+        const grown = await grow(ctx, executor, target, progress);
         const growthEnd = now();
-        const timing = (pruneEnd) => ({
-            searchSeconds: (pruneEnd - t0) / 1000,
+        const timing = (end) => ({
+            searchSeconds: (end - t0) / 1000,
             growthSeconds: (growthEnd - t0) / 1000,
-            pruneSeconds: (pruneEnd - growthEnd) / 1000,
+            pruneSeconds: (end - growthEnd) / 1000,
         });
-        if (decision.kind === 'need' || decision.capHit !== null || decision.adequateWidth === null) {
-            let outcome = 'not-found';
-            let note;
-            if (decision.kind === 'need') {
-                outcome = 'inconclusive';
-                const why = `The time budget of ${search.timeBudget} s ran out`;
-                note = stoppedNote(plan, why, decision.deciding, decision.trainings);
-            }
-            else if (decision.capHit !== null) {
-                outcome = 'inconclusive';
-                note = stoppedNote(plan, `The cap of ${search.maxTrainings} trainings was reached`, decision.capHit.width, decision.trainings);
-            }
-            else {
-                note = notFoundNote(plan, target, decision.widths);
-            }
+        const base = { grownWidth: null, metric: null, witness: null, pruning: [], judging };
+        const decision = grown.decision;
+        if (decision.kind === 'need') {
             return {
-                outcome,
+                ...base,
+                outcome: 'inconclusive',
                 width: null,
-                grownWidth: null,
-                metric: null,
-                witness: null,
-                widths: decision.widths,
-                pruning: [],
+                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
                 trainings: decision.trainings,
-                note,
+                notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings)],
                 timing: timing(now()),
             };
         }
-        // Prune phase: shrink every network that reached the target at the adequate width.
-        const grownWidth = decision.adequateWidth;
-        const reachedTasks = decision.reachedAtAdequate.map((r) => results.get(taskKey(taskFor(plan, grownWidth, r.restart))));
-        let pruned;
-        if (search.prune) {
-            pruned = await Promise.all(reachedTasks.map(async (t) => {
-                const r = await executor.prune({ task: { width: t.width, restart: t.restart }, network: t.network });
-                progress({ phase: 'prune', width: r.width, restart: r.restart, epoch: r.steps.length, best: r.metric });
-                return r;
-            }));
+        if (decision.capHit !== null) {
+            const why = `The cap of ${search.maxTrainings} trainings was reached`;
+            return {
+                ...base,
+                outcome: 'inconclusive',
+                width: null,
+                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
+                trainings: decision.trainings,
+                notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings)],
+                timing: timing(now()),
+            };
         }
-        else {
-            pruned = reachedTasks.map((t) => ({
-                restart: t.restart,
-                grownWidth: t.finalWidth,
-                width: t.finalWidth,
-                metric: t.metric,
-                network: t.network,
-                steps: [],
-                trainings: 0,
-            }));
+        // Prune phase: shrink every network that met the target at the grown width or below.
+        const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+        const pruned = await Promise.all(jobs.map(async (job) => {
+            const r = await executor.prune(job);
+            const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
+            progress({ phase: 'prune', width: last, restart: job.source.restart, epoch: r.steps.length, best: null });
+            return r;
+        }));
+        const trainings = decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0);
+        const t = tally(plan, target, decision.tried, pruned, ctx.seed);
+        const steps = pruned.flatMap((r) => r.steps);
+        if (pruned.some((r) => r.interrupted) && decision.grownWidth !== null) {
+            return {
+                ...base,
+                outcome: 'inconclusive',
+                grownWidth: decision.grownWidth,
+                width: null,
+                witness: t.witness,
+                widths: t.widths,
+                pruning: steps,
+                trainings,
+                notes: [stoppedPruningNote(budgetWhy, decision.grownWidth, trainings)],
+                timing: timing(now()),
+            };
         }
-        const win = pickWitness(pruned);
+        const found = t.width !== null && t.witness !== null;
         return {
-            outcome: 'found',
-            width: win.width,
-            grownWidth,
-            metric: win.metric,
-            witness: {
-                restart: win.restart,
-                seed: search.seed,
-                grownWidth: win.grownWidth,
-                network: win.network,
-                metric: win.metric,
-            },
-            widths: decision.widths,
-            pruning: pruned.flatMap((r) => r.steps),
-            trainings: decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0),
-            note: null,
+            outcome: found ? 'found' : 'not-found',
+            width: found ? t.width : null,
+            grownWidth: decision.grownWidth,
+            metric: found ? t.witness.judged : null,
+            witness: t.witness,
+            widths: t.widths,
+            pruning: steps,
+            trainings,
+            notes: found ? [] : notFoundNotes(plan, target, t.widths, judgedOn),
+            judging,
             timing: timing(now()),
         };
     }
@@ -17831,6 +20057,7 @@ function runSearchWorker() {
 
 
 
+
 ;// CONCATENATED MODULE: ./src/run.ts
 /**
  * The main job shared by the command line and the action: config → data → search → gate →
@@ -17868,6 +20095,7 @@ async function runJob(options) {
     const search = await timed(timing, 'searchSeconds', () => runSearch(data.dataset, config.search, config.target, {
         workers: options.workers ?? null,
         workerEntry: options.workerEntry ?? null,
+        judgingFolded: data.judgingFolded,
         ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     }));
     timing.growthSeconds = search.timing.growthSeconds;
@@ -17886,14 +20114,16 @@ async function runJob(options) {
     });
     if (gate.notWritten !== null)
         options.log?.(`baseline not written: ${gate.notWritten}`);
-    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search), gate.outcome, gate.gate);
+    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required), gate.outcome, gate.gate);
     let modelWritten = null;
     if (options.modelPath) {
         if (search.witness === null) {
-            options.log?.('model not written: no network reached the target');
+            options.log?.('model not written: no network met the target');
         }
         else {
-            const doc = modelDocument(search.witness, data.dataset.encoding, config.target);
+            const backing = { on: search.judging.on, adequate: search.width !== null };
+            const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
+            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration);
             await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
             modelWritten = options.modelPath;
         }

@@ -51,7 +51,7 @@ export function targetPhrase(metric: MetricName, threshold: number): string {
   return `${metric} of ${higherIsBetter(metric) ? 'at least' : 'at most'} ${formatMetric(threshold)}`;
 }
 
-export function successRate(reached: number | null | undefined, restarts: number | null | undefined): string {
+function successRate(reached: number | null | undefined, restarts: number | null | undefined): string {
   if (reached === null || reached === undefined || restarts === null || restarts === undefined || restarts === 0) {
     return '—';
   }

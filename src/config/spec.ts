@@ -379,7 +379,7 @@ export function sectionDefaults(section: SectionSpec['name']): Record<string, un
 }
 
 /** The judging fraction when validation rows are held out (common practice for a hold-out test set; no single source). */
-export const DEFAULT_JUDGING = 0.2;
+const DEFAULT_JUDGING = 0.2;
 
 /** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
 export function derivedJudging(validation: number): number {

@@ -29,7 +29,7 @@ import type { Head, NetworkJson, Rng, StopReason, TrainOptions, TrainRecord, Tra
  * A steering loss counts as improved when it falls by more than this fraction of the last
  * improved value; smaller gains do not reset the patience (an engineering choice, no source).
  */
-export const MIN_IMPROVEMENT = 1e-3;
+const MIN_IMPROVEMENT = 1e-3;
 
 /** The output head the dataset calls for. */
 export function headFor(data: Pick<EncodedDataset, 'task' | 'outputs'>): Head {

@@ -66,7 +66,7 @@ export function searchStageReport(report: ReportDraft, search: SearchResult, req
 }
 
 /** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
-export function shownSource(task: TrainingTask): ReportSource {
+function shownSource(task: TrainingTask): ReportSource {
   return { width: task.width, restart: task.restart + 1 };
 }
 

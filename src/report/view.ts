@@ -118,7 +118,7 @@ export function overDeviceBudget(report: Report): boolean {
  * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
  * wider networks); 3 are required." One definition of the backing, shown by every screen.
  */
-export function backingSentence(w: WidthSummary, report: Report): string {
+function backingSentence(w: WidthSummary, report: Report): string {
   const judging = report.search?.judging.on ?? 'judging';
   const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
   const parts: string[] = [];

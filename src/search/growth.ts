@@ -31,7 +31,7 @@ export function planTasks(plan: GrowthPlan): TrainingTask[] {
 }
 
 /** The task whose result says how restart `restart` fares at width `width`. */
-export function taskFor(plan: GrowthPlan, width: number, restart: number): TrainingTask {
+function taskFor(plan: GrowthPlan, width: number, restart: number): TrainingTask {
   return plan.growth === 'in-place' ? { width: plan.minWidth, restart } : { width, restart };
 }
 

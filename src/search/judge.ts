@@ -16,7 +16,7 @@ export function judgingRowsOf(data: EncodedDataset, folded: boolean): JudgingRow
 }
 
 /** The judged metric of `net`. */
-export function judgedMetric(data: EncodedDataset, net: NetworkJson, target: TargetConfig): number {
+function judgedMetric(data: EncodedDataset, net: NetworkJson, target: TargetConfig): number {
   const std = data.encoding.target.std;
   if (data.judgingRows > 0) return metricOn(net, data.xJudging, data.yJudging, data.judgingRows, target.metric, std);
   if (data.validationRows > 0)

@@ -28,6 +28,7 @@ export interface Tally {
   witness: Witness | null;
 }
 
+/** @testOnly */
 export function median(values: readonly number[]): number | null {
   if (values.length === 0) return null;
   const s = [...values].sort((a, b) => a - b);

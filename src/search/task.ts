@@ -44,7 +44,7 @@ function divergedReason(width: number, epochs: number): string {
 }
 
 /** Gives up when the caller says so or the search's time is up. */
-export function stopWhen(ctx: SearchContext, cancelled: () => boolean): () => boolean {
+function stopWhen(ctx: SearchContext, cancelled: () => boolean): () => boolean {
   const deadline = ctx.deadline;
   return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
 }
