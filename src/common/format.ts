@@ -50,10 +50,3 @@ export function targetShort(metric: MetricName, threshold: number): string {
 export function targetPhrase(metric: MetricName, threshold: number): string {
   return `${metric} of ${higherIsBetter(metric) ? 'at least' : 'at most'} ${formatMetric(threshold)}`;
 }
-
-function successRate(reached: number | null | undefined, restarts: number | null | undefined): string {
-  if (reached === null || reached === undefined || restarts === null || restarts === undefined || restarts === 0) {
-    return '—';
-  }
-  return `${reached}/${restarts}`;
-}
