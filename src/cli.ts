@@ -15,6 +15,7 @@ import { escapeLines } from './common/escape.js';
 import { isUserError } from './common/errors.js';
 import { EXIT } from './common/exit-codes.js';
 import { DEFAULT_CONFIG, parseInvocation, UsageError } from './cli/args.js';
+import { runExport, runPredict } from './cli/model-commands.js';
 import { progressPrinter } from './cli/progress.js';
 import { usage } from './cli/usage.js';
 import { runJob, type JobOptions } from './run.js';
@@ -35,12 +36,21 @@ async function main(argv: readonly string[]): Promise<number> {
     }
     const root = process.cwd();
     const { flags } = invocation;
+    if (invocation.command === 'export') {
+      err.write(`${await runExport(root, invocation.args, flags)}\n`);
+      return EXIT.ok;
+    }
+    if (invocation.command === 'predict') {
+      const said = await runPredict(root, invocation.args, flags, (text) => process.stdout.write(text));
+      err.write(`${said}\n`);
+      return EXIT.ok;
+    }
     const fromCwd = (p: string | undefined): string | null => (p === undefined ? null : resolve(root, p));
     const progress = progressPrinter(err);
     const options: JobOptions = {
       configPath: resolve(root, flags.config ?? DEFAULT_CONFIG),
       root,
-      mode: invocation.command,
+      mode: invocation.command === 'baseline' ? 'baseline' : 'check',
       baselinePath: fromCwd(flags.baseline),
       reportPath: fromCwd(flags.report),
       modelPath: fromCwd(flags.model),

@@ -4,10 +4,11 @@
  */
 import { displayPath } from './common/paths.js';
 import { EXIT } from './common/exit-codes.js';
-import { loadConfig, settleMetric } from './config/index.js';
+import { loadConfig, settleTarget } from './config/index.js';
 import { loadData } from './data/index.js';
 import { checkOutputFolder, writeOutput } from './files/output.js';
 import { readBaseline, runGateStage, type Verdict } from './gate/index.js';
+import { costShapeOf, deviceCost } from './device/index.js';
 import { modelDocument, serializeModel } from './model/index.js';
 import { dataStageReport, searchStageReport } from './report/assemble.js';
 import { dataSummaryText } from './report/data-summary.js';
@@ -69,7 +70,7 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
   const previous = await readBaseline(baselinePath, baselineShown);
 
   const data = await timed(timing, 'loadSeconds', () => loadData(loaded));
-  const config = settleMetric(loaded, data.dataset.task);
+  const config = settleTarget(loaded, data.dataset.task, data.dataset.encoding.target.classes);
   options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
 
   const search = await timed(timing, 'searchSeconds', () =>
@@ -83,9 +84,11 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
   timing.growthSeconds = search.timing.growthSeconds;
   timing.pruneSeconds = search.timing.pruneSeconds;
 
+  const cost = search.witness === null ? null : deviceCost(costShapeOf(search.witness.network, data.dataset.encoding));
   const gate = await runGateStage({
     mode: options.mode,
     result: search,
+    cost,
     loaded: data,
     config,
     baselinePath,
@@ -97,7 +100,10 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
   });
   if (gate.notWritten !== null) options.log?.(`baseline not written: ${gate.notWritten}`);
   const report = withGate(
-    searchStageReport(dataStageReport(config, data, timing), search, config.search.required),
+    searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
+      encoding: data.dataset.encoding,
+      target: config.target,
+    }),
     gate.outcome,
     gate.gate,
   );
@@ -109,7 +115,12 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     } else {
       const backing = { on: search.judging.on, adequate: search.width !== null };
       const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
-      const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration);
+      const provenance = {
+        tool: { name: 'neuron-budget' as const, version: TOOL_VERSION },
+        data: data.fingerprint,
+        config: displayPath(config.root, config.file),
+      };
+      const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration, provenance);
       await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
       modelWritten = options.modelPath;
     }

@@ -11,8 +11,8 @@ import { TOOL_NAME } from '../version.js';
 
 export const DEFAULT_CONFIG = 'neuron-budget.yml';
 
-export type Command = 'check' | 'baseline';
-export type FlagName = 'config' | 'report' | 'model' | 'baseline' | 'workers';
+export type Command = 'check' | 'baseline' | 'export' | 'predict';
+export type FlagName = 'config' | 'report' | 'model' | 'baseline' | 'workers' | 'format' | 'out' | 'name';
 
 export interface FlagSpec {
   value: string;
@@ -25,11 +25,18 @@ export const FLAGS: Record<FlagName, FlagSpec> = {
   model: { value: 'FILE', help: 'write the smallest network found (weights and encoding) to FILE' },
   baseline: { value: 'FILE', help: 'baseline file to use instead of the one named in the config' },
   workers: { value: 'N', help: `worker threads, 1 to ${MAX_WORKERS} (default: config, else one per core)` },
+  format: { value: 'FORMAT', help: 'what to write: c (C99 source, a float32 and an int8 path)' },
+  out: { value: 'PATH', help: 'where to write (export: a folder; predict: a CSV file, default stdout)' },
+  name: { value: 'NAME', help: 'C name of the model: its files and the prefix of its functions (default nb_model)' },
 };
 
 export interface CommandSpec {
   summary: string;
   flags: FlagName[];
+  /** Arguments given by position, in order (all required). */
+  positionals?: string[];
+  /** Flags that must be given. */
+  required?: FlagName[];
 }
 
 export const COMMANDS: Record<Command, CommandSpec> = {
@@ -39,7 +46,18 @@ export const COMMANDS: Record<Command, CommandSpec> = {
   },
   baseline: {
     summary: 'search the smallest adequate width and write it as the new baseline',
-    flags: ['config', 'baseline'],
+    flags: ['config', 'baseline', 'workers'],
+  },
+  export: {
+    summary: 'write firmware source for a model file (written by check --model)',
+    flags: ['format', 'out', 'name'],
+    positionals: ['MODEL.json'],
+    required: ['format', 'out'],
+  },
+  predict: {
+    summary: 'score the rows of a CSV file with a model file, as CSV',
+    flags: ['out'],
+    positionals: ['MODEL.json', 'DATA.csv'],
   },
 };
 
@@ -49,7 +67,14 @@ export class UsageError extends UserError {}
 export type Invocation =
   | { kind: 'help'; command: Command | null }
   | { kind: 'version' }
-  | { kind: 'run'; command: Command; flags: Partial<Record<FlagName, string>>; workers: number | null };
+  | {
+      kind: 'run';
+      command: Command;
+      flags: Partial<Record<FlagName, string>>;
+      workers: number | null;
+      /** The positional arguments, in the order the command names them. */
+      args: string[];
+    };
 
 function isCommand(s: string): s is Command {
   return Object.hasOwn(COMMANDS, s);
@@ -80,7 +105,7 @@ export function parseInvocation(argv: readonly string[]): Invocation {
     );
   }
   const command = first;
-  const flags = readFlags(command, rest);
+  const { flags, args } = readFlags(command, rest);
   let workers: number | null = null;
   if (flags.workers !== undefined) {
     workers = parseWorkerCount(flags.workers);
@@ -90,17 +115,24 @@ export function parseInvocation(argv: readonly string[]): Invocation {
       );
     }
   }
-  return { kind: 'run', command, flags, workers };
+  return { kind: 'run', command, flags, workers, args };
 }
 
-function readFlags(command: Command, args: string[]): Partial<Record<FlagName, string>> {
-  const allowed = COMMANDS[command].flags;
+function readFlags(command: Command, args: string[]): { flags: Partial<Record<FlagName, string>>; args: string[] } {
+  const spec = COMMANDS[command];
+  const allowed = spec.flags;
+  const wanted = spec.positionals ?? [];
+  const positional: string[] = [];
   const options = Object.fromEntries(Object.keys(FLAGS).map((f) => [f, { type: 'string' as const }]));
   // Not strict: unknown options and missing values get our own messages below.
   const { tokens } = parseArgs({ args, options, strict: false, allowPositionals: true, tokens: true });
   const flags: Partial<Record<FlagName, string>> = {};
   for (const token of tokens) {
     if (token.kind === 'positional') {
+      if (positional.length < wanted.length) {
+        positional.push(token.value);
+        continue;
+      }
       throw new UsageError(`${command}: unexpected argument ${quote(token.value)}; options are written --name VALUE`);
     }
     if (token.kind !== 'option') continue;
@@ -120,5 +152,13 @@ function readFlags(command: Command, args: string[]): Partial<Record<FlagName, s
     if (flags[flag] !== undefined) throw new UsageError(`${command}: --${flag} is given twice`);
     flags[flag] = value;
   }
-  return flags;
+  if (positional.length < wanted.length) {
+    throw new UsageError(
+      `${command}: expected ${wanted.join(' ')}, found ${positional.length === 0 ? 'nothing' : positional.map((p) => quote(p)).join(' ')}`,
+    );
+  }
+  for (const flag of spec.required ?? []) {
+    if (flags[flag] === undefined) throw new UsageError(`${command}: --${flag} ${FLAGS[flag].value} is required`);
+  }
+  return { flags, args: positional };
 }

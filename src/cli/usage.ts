@@ -8,7 +8,7 @@ export function usage(command: Command | null): string {
     const lines = [
       `${TOOL_NAME} ${command}: ${spec.summary}`,
       '',
-      `usage: ${TOOL_NAME} ${command} [options]`,
+      `usage: ${TOOL_NAME} ${command}${(spec.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`,
       '',
       'options:',
       ...spec.flags.map((f) => `  --${`${f} ${FLAGS[f].value}`.padEnd(16)}${FLAGS[f].help}`),
@@ -22,7 +22,9 @@ export function usage(command: Command | null): string {
     'your target, and checks it against a committed baseline and a device budget.',
     '',
     'usage:',
-    ...Object.keys(COMMANDS).map((c) => `  ${TOOL_NAME} ${c.padEnd(9)} [options]`),
+    ...Object.entries(COMMANDS).map(
+      ([c, s]) => `  ${TOOL_NAME} ${c.padEnd(9)}${(s.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`,
+    ),
     `  ${TOOL_NAME} COMMAND --help   options of one command`,
     `  ${TOOL_NAME} --version`,
     '',
@@ -31,7 +33,7 @@ export function usage(command: Command | null): string {
     '',
     'The current folder is the workspace. Paths in the config file resolve against',
     "the config file's folder and must stay inside the workspace.",
-    'Messages go to stderr; stdout carries only --help and --version.',
+    "Messages go to stderr; stdout carries only what was asked for (--help, --version, predict's CSV).",
     '',
     exitCodesText(),
   ].join('\n');

@@ -24,6 +24,8 @@ export type JsonSchema = {
   maxItems?: number;
   minimum?: number;
   maximum?: number;
+  exclusiveMinimum?: number;
+  minProperties?: number;
   pattern?: string;
   maxLength?: number;
   $ref?: string;
@@ -63,6 +65,8 @@ const KNOWN = new Set([
   'maxItems',
   'minimum',
   'maximum',
+  'exclusiveMinimum',
+  'minProperties',
   'pattern',
   'maxLength',
   '$ref',
@@ -113,6 +117,7 @@ export function schemaValidator(root: JsonSchema): (value: unknown) => void {
     if (typeof value === 'number') {
       if (node.minimum !== undefined && value < node.minimum) fail(typePhrase(node, types(node)));
       if (node.maximum !== undefined && value > node.maximum) fail(typePhrase(node, types(node)));
+      if (node.exclusiveMinimum !== undefined && value <= node.exclusiveMinimum) fail(typePhrase(node, types(node)));
     }
     if (typeof value === 'string') {
       if (node.maxLength !== undefined && value.length > node.maxLength)
@@ -128,9 +133,8 @@ export function schemaValidator(root: JsonSchema): (value: unknown) => void {
     }
     if (isObject(value)) {
       const props = node.properties ?? {};
-      for (const name of node.required ?? []) {
-        if (!Object.hasOwn(value, name))
-          throw new SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
+      if (node.minProperties !== undefined && Object.keys(value).length < node.minProperties) {
+        fail(`an object with at least ${node.minProperties} key${node.minProperties === 1 ? '' : 's'}`);
       }
       for (const [name, child] of Object.entries(value)) {
         if (Object.hasOwn(props, name)) check(props[name], child, join(key, name));
@@ -142,6 +146,11 @@ export function schemaValidator(root: JsonSchema): (value: unknown) => void {
           );
         } else if (typeof node.additionalProperties === 'object')
           check(node.additionalProperties, child, join(key, name));
+      }
+      // What is there is checked before what is missing: a wrong value says more than a later absent key.
+      for (const name of node.required ?? []) {
+        if (!Object.hasOwn(value, name))
+          throw new SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
       }
     }
     if (node.anyOf !== undefined) {
@@ -160,8 +169,17 @@ export function schemaValidator(root: JsonSchema): (value: unknown) => void {
             describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING),
           );
         check(node.oneOf[at], value, key);
-      } else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
-        fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
+      } else {
+        // When the value's type leaves one branch (null or an object, say), check that one: its error is the precise one.
+        const typed = node.oneOf.filter((b) => {
+          const t = resolve(b).type;
+          const all = t === undefined ? [] : Array.isArray(t) ? t : [t];
+          return all.length === 0 || all.some((x) => hasType(value, x));
+        });
+        if (typed.length === 1) check(typed[0], value, key);
+        else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
+          fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
+        }
       }
     }
   };
@@ -222,6 +240,7 @@ function typePhrase(node: JsonSchema, ts: JsonType[]): string {
   const bound = (): string => {
     const parts: string[] = [];
     if (node.minimum !== undefined && node.maximum !== undefined) return ` from ${node.minimum} to ${node.maximum}`;
+    if (node.exclusiveMinimum !== undefined) parts.push(` above ${node.exclusiveMinimum}`);
     if (node.minimum !== undefined) parts.push(` of at least ${node.minimum}`);
     if (node.maximum !== undefined) parts.push(` of at most ${node.maximum}`);
     return parts.join('');

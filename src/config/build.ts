@@ -8,7 +8,8 @@ import { quote } from '../common/escape.js';
 import { checkInside } from '../common/paths.js';
 import { defaultMetric, metricFitsTask, metricsFor, type MetricName } from '../common/metric.js';
 import type { ConfigReader, Found, WrittenKeys } from './reader.js';
-import { CONFIG_SPEC, derivedJudging, fieldName } from './spec.js';
+import { CONFIG_SPEC } from './spec.js';
+import { derivedJudging, fieldName } from './keys.js';
 import type { Config } from './types.js';
 
 type Section = Record<string, unknown>;

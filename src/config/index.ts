@@ -10,6 +10,7 @@ import { UserError } from '../common/errors.js';
 import { formatCount } from '../common/format.js';
 import { defaultMetric, metricFitsTask, type Task } from '../common/metric.js';
 import { displayPath } from '../common/paths.js';
+import { didYouMean } from '../common/suggest.js';
 import { buildConfig } from './build.js';
 import { ConfigReader } from './reader.js';
 import type { Config } from './types.js';
@@ -70,10 +71,46 @@ export function configKeyError(config: Config, key: string, detail: string): Use
 }
 
 /**
+ * What the config could not settle before the data were read: the metric and recall floors,
+ * which depend on the task and the class labels found.
+ */
+export function settleTarget(config: Config, task: Task, classes: string[] | null): Config {
+  const settled = settleMetric(config, task);
+  return { ...settled, target: { ...settled.target, recallFloors: recallFloors(settled, task, classes) } };
+}
+
+/** target.min-recall as one floor per class index; each named class must be one the data have. */
+function recallFloors(config: Config, task: Task, classes: string[] | null): number[] | null {
+  const rule = config.target.minRecall ?? null;
+  if (rule === null) return null;
+  if (task !== 'classification' || classes === null) {
+    throw configKeyError(
+      config,
+      'target.min-recall',
+      `the target column ${quote(config.data.target)} was read as regression; recall floors need classes (remove target.min-recall)`,
+    );
+  }
+  if ('every' in rule) return classes.map(() => rule.every);
+  const floors = classes.map(() => 0);
+  for (const { label, min } of rule.classes) {
+    const i = classes.indexOf(label);
+    if (i < 0) {
+      throw configKeyError(
+        config,
+        'target.min-recall',
+        `names the class ${quote(label)}, which the target column ${quote(config.data.target)} does not have${didYouMean(label, classes)}; its classes are ${classes.map((c) => quote(c)).join(', ')}`,
+      );
+    }
+    floors[i] = min;
+  }
+  return floors;
+}
+
+/**
  * With data.task auto the task is only known after reading: the metric follows it unless the
  * config names one, and a named metric must suit it.
  */
-export function settleMetric(config: Config, task: Task): Config {
+function settleMetric(config: Config, task: Task): Config {
   const target = config.target;
   if (!config.metricGiven) {
     const metric = defaultMetric(task);

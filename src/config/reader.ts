@@ -19,8 +19,9 @@ import {
 import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 import { didYouMean } from '../common/suggest.js';
-import { CONFIG_SPEC, DERIVED, describeRule, REQUIRED, type KeySpec, type SectionSpec } from './spec.js';
-import type { KeyPosition } from './types.js';
+import { CONFIG_SPEC, DERIVED, REQUIRED, type KeySpec, type SectionSpec } from './spec.js';
+import { describeRule } from './keys.js';
+import type { KeyPosition, RecallRule } from './types.js';
 
 /** A key as written: its value node (null when empty), the key node, and the dotted key. */
 export interface Found {
@@ -134,8 +135,8 @@ export class ConfigReader {
         if (tag === undefined) return;
         if (!CORE_TAGS.has(tag)) {
           const shown = tag.startsWith('tag:yaml.org,2002:') ? `!!${tag.slice('tag:yaml.org,2002:'.length)}` : tag;
-          throw this.error(
-            node,
+          throw this.errorAt(
+            this.tagOffset(node),
             null,
             `unsupported YAML tag ${quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`,
           );
@@ -153,6 +154,14 @@ export class ConfigReader {
         }
       },
     });
+  }
+
+  /** Where a node's tag is written (the parser's range starts at the value, after the tag). */
+  private tagOffset(node: Node): number {
+    const start = node.range?.[0] ?? 0;
+    const lineStart = this.text.lastIndexOf('\n', start - 1) + 1;
+    const bang = this.text.lastIndexOf('!', start);
+    return bang >= lineStart ? (this.text[bang - 1] === '!' ? bang - 1 : bang) : start;
   }
 
   errorAt(offset: number, key: string | null, message: string): UserError {
@@ -260,6 +269,33 @@ export class ConfigReader {
     return this.checkRule(found, spec);
   }
 
+  /** target.min-recall: one floor for every class, or floors for named classes. */
+  private recallRule(found: Found, node: Node | null, expected: string): RecallRule {
+    const floor = (value: unknown): value is number => typeof value === 'number' && value > 0 && value <= 1;
+    if (node !== null && isScalar(node)) {
+      if (!floor(node.value)) throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
+      return { every: node.value };
+    }
+    if (node === null || !isMap(node) || node.items.length === 0) {
+      throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
+    }
+    const classes: { label: string; min: number }[] = [];
+    for (const pair of node.items as Pair<Node, Node | null>[]) {
+      const label = this.keyName(pair, `${found.key}.`);
+      const value = this.deref(pair.value);
+      const v = value !== null && isScalar(value) ? value.value : undefined;
+      if (!floor(v)) {
+        throw this.error(
+          value ?? pair.key,
+          `${found.key}.${label}`,
+          `expected a recall above 0 and at most 1, found ${this.describe(value)}`,
+        );
+      }
+      classes.push({ label, min: v });
+    }
+    return { classes };
+  }
+
   private checkRule(found: Found, spec: KeySpec): unknown {
     const rule = spec.rule;
     const node = found.node;
@@ -328,6 +364,8 @@ export class ConfigReader {
         }
         return out;
       }
+      case 'recall':
+        return this.recallRule(found, node, expected);
     }
   }
 }

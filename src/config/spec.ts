@@ -21,7 +21,9 @@ export type ValueRule =
   /** A path, relative to the config file's folder, that must stay inside the workspace. */
   | { kind: 'path' }
   /** A list of distinct non-empty texts, with at least `minItems` of them. */
-  | { kind: 'text-list'; minItems: number; nullable?: boolean };
+  | { kind: 'text-list'; minItems: number; nullable?: boolean }
+  /** A recall floor: a number in (0, 1] for every class, or a mapping of class labels to such numbers. */
+  | { kind: 'recall'; nullable?: boolean };
 
 export type DefaultValue = string | number | boolean | null | string[] | typeof REQUIRED | typeof DERIVED;
 
@@ -151,6 +153,22 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         default: REQUIRED,
         description:
           "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
+      },
+      {
+        name: 'precision',
+        changesResult: true,
+        rule: { kind: 'enum', values: ['float32', 'int8'] },
+        default: 'float32',
+        description:
+          'Which form of a network must meet the target: float32, or int8 (its post-training quantised form, as the exported C runs it).',
+      },
+      {
+        name: 'min-recall',
+        changesResult: true,
+        rule: { kind: 'recall', nullable: true },
+        default: null,
+        description:
+          'Classification: the least recall a network needs besides the metric, for every class (a number) or per named class (a mapping, e.g. bearing_wear: 0.9). null: none.',
       },
     ],
   },
@@ -311,6 +329,29 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         description: 'Hard device budget: a smallest adequate width above it fails. null: no budget.',
       },
       {
+        name: 'max-flash-bytes',
+        changesResult: false,
+        rule: { kind: 'integer', min: 1, max: 1_000_000_000, nullable: true },
+        default: null,
+        description:
+          'Device budget: flash bytes for the weights of the witness in target.precision form (as the exported C stores them); above it fails. null: no budget.',
+      },
+      {
+        name: 'max-ram-bytes',
+        changesResult: false,
+        rule: { kind: 'integer', min: 1, max: 1_000_000_000, nullable: true },
+        default: null,
+        description:
+          'Device budget: RAM bytes for the activations of one inference in target.precision form; above it fails. null: no budget.',
+      },
+      {
+        name: 'max-macs',
+        changesResult: false,
+        rule: { kind: 'integer', min: 1, max: 1_000_000_000_000, nullable: true },
+        default: null,
+        description: 'Device budget: multiply-accumulates per inference; above it fails. null: no budget.',
+      },
+      {
         name: 'allowed-growth',
         changesResult: false,
         rule: { kind: 'integer', min: 0, max: WIDTH_LIMIT },
@@ -329,59 +370,3 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
     ],
   },
 ];
-
-/** "an integer from 1 to 1000", "one of tanh, logistic, relu", … for messages. */
-export function describeRule(rule: ValueRule): string {
-  const orNull = 'nullable' in rule && rule.nullable ? ', or null' : '';
-  switch (rule.kind) {
-    case 'integer':
-      return `an integer from ${rule.min} to ${rule.max}${orNull}`;
-    case 'number': {
-      const low = rule.exclusiveMin ? `above ${rule.min}` : `of ${rule.min} or more`;
-      if (rule.max === Number.MAX_VALUE) return `a number ${low}${orNull}`;
-      if (rule.exclusiveMax)
-        return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
-      return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and at most ${rule.max}${orNull}`;
-    }
-    case 'enum':
-      return `one of ${rule.values.join(', ')}${orNull}`;
-    case 'boolean':
-      return 'true or false';
-    case 'text':
-      return 'a column name (text)';
-    case 'character':
-      return 'a single character other than a quote or a line break';
-    case 'path':
-      return 'a path relative to the config file';
-    case 'text-list':
-      return `a list of column names${rule.minItems > 0 ? ` (at least ${rule.minItems})` : ''}${orNull}`;
-  }
-}
-
-/** `min-width` → `minWidth`: how the typed config names a key. */
-export function fieldName(key: string): string {
-  return key.replace(/-([a-z])/g, (_, c: string) => c.toUpperCase());
-}
-
-/**
- * A section's documented defaults by typed field name (required and derived keys left out), for
- * code that builds a config without a file (tests, benchmarks).
- * @testOnly
- */
-export function sectionDefaults(section: SectionSpec['name']): Record<string, unknown> {
-  const spec = CONFIG_SPEC.find((s) => s.name === section);
-  const out: Record<string, unknown> = {};
-  for (const key of spec?.keys ?? []) {
-    if (key.default === REQUIRED || key.default === DERIVED) continue;
-    out[fieldName(key.name)] = Array.isArray(key.default) ? [...key.default] : key.default;
-  }
-  return out;
-}
-
-/** The judging fraction when validation rows are held out (common practice for a hold-out test set; no single source). */
-const DEFAULT_JUDGING = 0.2;
-
-/** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
-export function derivedJudging(validation: number): number {
-  return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
-}

@@ -31,10 +31,22 @@ export interface DataConfig {
   missing: 'error' | 'drop';
 }
 
+/** target.min-recall as written: one floor for every class, or floors for named classes. */
+export type RecallRule = { every: number } | { classes: { label: string; min: number }[] };
+
 export interface TargetConfig {
   metric: MetricName;
   /** accuracy: at least this; error metrics: at most this (in the target's units). */
   threshold: number;
+  /** Which form of a network must meet the target; the config always fills it (absent: float32). */
+  precision?: 'float32' | 'int8';
+  /** The least recall per class, as written; null or absent: none. */
+  minRecall?: RecallRule | null;
+  /**
+   * The least recall per class index, once the data named the classes (0 where none applies);
+   * null for regression or without target.min-recall.
+   */
+  recallFloors?: number[] | null;
 }
 
 export interface SearchConfig {
@@ -77,6 +89,10 @@ export interface GateConfig {
   allowedGrowth: number;
   /** How much worse the metric at the chosen width may get before it is flagged. */
   metricTolerance: number;
+  /** Device budgets in bytes and operations (target.precision form); null = none. */
+  maxFlashBytes: number | null;
+  maxRamBytes: number | null;
+  maxMacs: number | null;
 }
 
 /** Where a key is written in the config file. */

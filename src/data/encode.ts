@@ -77,6 +77,9 @@ export function encodeDataset(features: TypedColumn[], target: TargetColumn, spl
   const train = fill(split.train);
   const validation = fill(split.validation);
   const judging = fill(split.judging);
+  // The rows that judge, as the device gets them: what the int8 path is judged on.
+  const judgedRows =
+    split.judging.length > 0 ? split.judging : split.validation.length > 0 ? split.validation : split.train;
   return {
     task: target.task,
     inputs,
@@ -90,6 +93,21 @@ export function encodeDataset(features: TypedColumn[], target: TargetColumn, spl
     judgingRows: split.judging.length,
     xJudging: judging.x,
     yJudging: judging.y,
+    rawJudged: rawFeatures(features, judgedRows),
     encoding: { features: encodings, target: targetEncoding },
   };
+}
+
+/**
+ * Rows as a device receives them (rows × features, float32): a numeric feature's value, a
+ * categorical feature's category index. The exported C and the int8 simulation take this form.
+ */
+function rawFeatures(features: TypedColumn[], rows: Int32Array): Float32Array {
+  const F = features.length;
+  const out = new Float32Array(new SharedArrayBuffer(rows.length * F * Float32Array.BYTES_PER_ELEMENT));
+  features.forEach((column, f) => {
+    if (column.kind === 'numeric') for (let r = 0; r < rows.length; r++) out[r * F + f] = column.values[rows[r]];
+    else for (let r = 0; r < rows.length; r++) out[r * F + f] = column.codes[rows[r]];
+  });
+  return out;
 }

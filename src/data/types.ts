@@ -46,6 +46,12 @@ export interface EncodedDataset {
   yValidation: Float64Array; // validationRows
   xJudging: Float64Array; // judgingRows * inputs
   yJudging: Float64Array; // judgingRows
+  /**
+   * The rows that judge (judging rows, else validation rows, else training rows) as a device gets
+   * them: rows × features, float32, a numeric feature's raw value or a categorical feature's index.
+   * Optional: datasets built in code without raw rows cannot judge an int8 form.
+   */
+  rawJudged?: Float32Array;
   encoding: Encoding;
 }
 

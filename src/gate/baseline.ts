@@ -11,7 +11,7 @@ import { writeFileAtomic } from '../files/atomic.js';
 import type { SearchResult } from '../search/types.js';
 import baselineSchema from '../../schema/baseline.schema.json' with { type: 'json' };
 import { schemaValidator, SchemaProblem, type JsonSchema } from '../common/json-schema.js';
-import { findJsonSyntaxProblem } from './json-position.js';
+import { findJsonSyntaxProblem } from '../common/json-position.js';
 import { resultSettings, settingsFingerprint } from './settings.js';
 import {
   BASELINE_SCHEMA,

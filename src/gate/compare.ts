@@ -8,7 +8,8 @@
  * width is what the device pays for and the target threshold already bounds the metric.
  */
 import type { GateConfig, MetricName } from '../config/types.js';
-import { formatMetric, neurons, targetPhrase } from '../common/format.js';
+import { formatCount, formatMetric, neurons, targetPhrase } from '../common/format.js';
+import type { DeviceCost } from '../device/index.js';
 import { higherIsBetter } from '../common/metric.js';
 import type { SearchResult } from '../search/types.js';
 import { settingsDifferences } from './settings.js';
@@ -19,7 +20,10 @@ export interface CompareInput {
   target: { metric: MetricName; threshold: number };
   /** The search range actually searched, and the networks a width needs. */
   search: { minWidth: number; maxWidth: number; required: number };
-  gate: Pick<GateConfig, 'maxWidth' | 'allowedGrowth' | 'metricTolerance'>;
+  gate: Pick<GateConfig, 'maxWidth' | 'allowedGrowth' | 'metricTolerance'> &
+    Partial<Pick<GateConfig, 'maxFlashBytes' | 'maxRamBytes' | 'maxMacs'>>;
+  /** What the witness costs on the device, and which form the budgets apply to; null without a witness. */
+  device?: { cost: DeviceCost; precision: 'float32' | 'int8' } | null;
   baseline: Baseline | null;
   /** This run's result-changing settings (see settings.ts). */
   settings: ResultSettings;
@@ -71,6 +75,7 @@ export function compare(input: CompareInput): Comparison {
   if (gate.maxWidth !== null && width > gate.maxWidth) {
     failures.push(`Needs ${neurons(width)}; the device budget is ${gate.maxWidth}.`);
   }
+  failures.push(...budgetFailures(input));
 
   if (!baseline) {
     if (failures.length > 0) return { verdict: 'fail', reasons: [...failures, ...flags], settingsChanged };
@@ -135,4 +140,29 @@ function sentence(s: string): string {
   const t = s.trim();
   const capital = t.charAt(0).toUpperCase() + t.slice(1);
   return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}
+
+/** One sentence per byte or operation budget the witness exceeds, naming the figure and the budget. */
+function budgetFailures(input: CompareInput): string[] {
+  const { gate, device } = input;
+  if (!device) return [];
+  const { cost, precision } = device;
+  const out: string[] = [];
+  const at = `(width ${input.result.width})`;
+  if (gate.maxFlashBytes != null && cost.flashBytes[precision] > gate.maxFlashBytes) {
+    out.push(
+      `Needs ${formatCount(cost.flashBytes[precision])} flash bytes for its ${precision} weights ${at}; the device budget is ${formatCount(gate.maxFlashBytes)} bytes.`,
+    );
+  }
+  if (gate.maxRamBytes != null && cost.ramBytes[precision] > gate.maxRamBytes) {
+    out.push(
+      `Needs ${formatCount(cost.ramBytes[precision])} RAM bytes for one ${precision} inference ${at}; the device budget is ${formatCount(gate.maxRamBytes)} bytes.`,
+    );
+  }
+  if (gate.maxMacs != null && cost.macs > gate.maxMacs) {
+    out.push(
+      `Needs ${formatCount(cost.macs)} multiply-accumulates per inference ${at}; the device budget is ${formatCount(gate.maxMacs)}.`,
+    );
+  }
+  return out;
 }

@@ -1,6 +1,7 @@
 /** The comparison and data changes for one run against the baseline (pure). */
 import type { Config } from '../config/types.js';
 import type { LoadedData } from '../data/types.js';
+import type { DeviceCost } from '../device/index.js';
 import type { SearchResult } from '../search/types.js';
 import { compare, type Comparison } from './compare.js';
 import { dataChanges } from './data-changes.js';
@@ -18,8 +19,11 @@ export function evaluateGate(input: {
   loaded: Pick<LoadedData, 'fingerprint' | 'profile'>;
   config: Config;
   baseline: Baseline | null;
+  /** What the witness costs on the device; null without a witness. */
+  cost?: DeviceCost | null;
 }): GateOutcome {
   const { result, loaded, config, baseline } = input;
+  const cost = input.cost ?? null;
   const comparison = compare({
     result,
     target: config.target,
@@ -27,6 +31,7 @@ export function evaluateGate(input: {
     gate: config.gate,
     baseline,
     settings: resultSettings(config),
+    device: cost === null ? null : { cost, precision: config.target.precision ?? 'float32' },
   });
   const changes = baseline
     ? dataChanges(

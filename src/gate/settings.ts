@@ -9,7 +9,8 @@
  */
 import { createHash } from 'node:crypto';
 import type { Config } from '../config/types.js';
-import { CONFIG_SPEC, fieldName } from '../config/spec.js';
+import { CONFIG_SPEC } from '../config/spec.js';
+import { fieldName } from '../config/keys.js';
 import type { ResultSettings } from './types.js';
 
 export function resultSettings(config: Config): ResultSettings {
@@ -18,14 +19,24 @@ export function resultSettings(config: Config): ResultSettings {
     const values = config[section.name] as unknown as Record<string, ResultSettings[string]>;
     for (const key of section.keys) {
       if (!key.changesResult) continue;
-      const value = values[fieldName(key.name)];
-      out[`${section.name}.${key.name}`] = Array.isArray(value) ? [...value] : value;
+      out[`${section.name}.${key.name}`] = settingValue(values[fieldName(key.name)]);
     }
   }
   // The order of ignored columns does not matter; the order of features does (input order).
   const ignore = out['data.ignore'];
   if (Array.isArray(ignore)) ignore.sort();
   return out;
+}
+
+/** A setting as the baseline records it: a plain value, a list of texts, or a structured value as its canonical text. */
+function settingValue(value: unknown): ResultSettings[string] {
+  if (value === undefined || value === null) return null;
+  if (Array.isArray(value) && value.every((v) => typeof v === 'string')) return [...value];
+  if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean') return value;
+  // target.min-recall: {every} or {classes: [...]}, written the way the config states it.
+  const rule = value as { every?: number; classes?: { label: string; min: number }[] };
+  if (typeof rule.every === 'number') return rule.every;
+  return JSON.stringify(Object.fromEntries((rule.classes ?? []).map((c) => [c.label, c.min])));
 }
 
 /** sha256 hex of the settings in canonical form (keys sorted). */

@@ -10,6 +10,7 @@
  */
 import type { Config, GateConfig } from '../config/types.js';
 import type { LoadedData } from '../data/types.js';
+import type { DeviceCost } from '../device/index.js';
 import type { SearchResult } from '../search/types.js';
 import { nextBaseline, whyNotRecordable } from './baseline.js';
 import { updateBaseline } from './baseline-update.js';
@@ -25,6 +26,8 @@ export interface GateStageInput {
   baselinePath: string;
   /** The path as the user wrote it, for messages. */
   baselineShown: string;
+  /** What the witness costs on the device; null without a witness. */
+  cost?: DeviceCost | null;
   /** The baseline as read before the search (null: none). */
   previous: Baseline | null;
   /** For the history (baseline mode). */
@@ -53,7 +56,13 @@ export async function runGateStage(input: GateStageInput): Promise<GateStageResu
           ...input.config,
           gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
         };
-  const outcome = evaluateGate({ result: input.result, loaded: input.loaded, config, baseline: previous });
+  const outcome = evaluateGate({
+    result: input.result,
+    loaded: input.loaded,
+    config,
+    baseline: previous,
+    cost: input.cost ?? null,
+  });
   if (input.mode === 'check') return { outcome, written: null, notWritten: null, gate: config.gate };
 
   const why = whyNotRecordable(input.result);

@@ -6,4 +6,4 @@ export type * from './types.js';
 export type { OptimizerSettings } from './optimizers.js';
 export type { Metrics } from './metrics.js';
 export { createTrainer, trainerFromNetwork, headFor } from './trainer.js';
-export { metricOn, predict } from './predict.js';
+export { classesOn, metricOn, predict } from './predict.js';

@@ -33,3 +33,21 @@ export function metricOn(
   defaultKernel().forward(shape, params, x, rows, logits, null);
   return targetMetric(metric, headCode(shape.head), shape.outputs, logits, y, rows, targetStd);
 }
+
+/** The class each row is given: the largest logit, or logit > 0 for a logistic head. */
+export function classesOn(net: NetworkJson, x: Float64Array, rows: number): Int32Array {
+  const { shape, params } = fromJson(net);
+  const K = shape.outputs;
+  const logits = new Float64Array(rows * K);
+  defaultKernel().forward(shape, params, x, rows, logits, null);
+  const out = new Int32Array(rows);
+  for (let p = 0; p < rows; p++) {
+    if (K === 1) out[p] = logits[p] > 0 ? 1 : 0;
+    else {
+      let best = 0;
+      for (let k = 1; k < K; k++) if (logits[p * K + k] > logits[p * K + best]) best = k;
+      out[p] = best;
+    }
+  }
+  return out;
+}

@@ -2,12 +2,13 @@
  * Assembles the JSON report, stage by stage: the data stage's facts, then the search's
  * findings (the gate's part is filled by withGate in json.ts). Pure.
  */
-import type { Config } from '../config/types.js';
-import type { LoadedData } from '../data/types.js';
+import type { Config, TargetConfig } from '../config/types.js';
+import { costShapeOf, deviceCost } from '../device/index.js';
+import type { Encoding, LoadedData } from '../data/types.js';
 import { displayPath } from '../common/paths.js';
 import type { SearchResult, TrainingTask } from '../search/types.js';
 import { TOOL_NAME, TOOL_VERSION } from '../version.js';
-import type { ReportDraft, ReportSource, ReportWitness } from './types.js';
+import type { ReportDevice, ReportDraft, ReportSource, ReportWitness } from './types.js';
 
 /** The report with the data stage's facts; verdict and search come later. */
 export function dataStageReport(config: Config, data: LoadedData, timing: Record<string, number>): ReportDraft {
@@ -39,15 +40,25 @@ export function dataStageReport(config: Config, data: LoadedData, timing: Record
               .map((label) => ({ label, count: classes[label] })),
     },
     search: null,
+    device: null,
     changes: null,
     timing: { ...timing },
   };
 }
 
 /** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-export function searchStageReport(report: ReportDraft, search: SearchResult, required: number): ReportDraft {
+export function searchStageReport(
+  report: ReportDraft,
+  search: SearchResult,
+  required: number,
+  context: { encoding: Encoding; target: TargetConfig },
+): ReportDraft {
+  const { encoding } = context;
+  const costOf = (width: number) =>
+    deviceCost(costShapeOf({ inputs: report.data.inputs, width, outputs: report.data.outputs }, encoding));
   return {
     ...report,
+    device: deviceOf(search, context, report.data.inputs, report.data.outputs),
     reasons: [],
     width: search.width,
     metric: { ...report.metric, value: search.metric },
@@ -55,7 +66,7 @@ export function searchStageReport(report: ReportDraft, search: SearchResult, req
       outcome: search.outcome,
       grownWidth: search.grownWidth,
       required,
-      widths: search.widths,
+      widths: search.widths.map((w) => ({ ...w, cost: costOf(w.width) })),
       pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
       trainings: search.trainings,
       notes: search.notes,
@@ -82,5 +93,39 @@ function witnessOf(search: SearchResult): ReportWitness | null {
     train: w.train,
     met: w.met,
     adequate: search.width !== null,
+  };
+}
+
+function deviceOf(
+  search: SearchResult,
+  context: { encoding: Encoding; target: TargetConfig },
+  inputs: number,
+  outputs: number,
+): ReportDevice | null {
+  const w = search.witness;
+  const a = search.appraisal;
+  if (w === null || a === null) return null;
+  const width = w.network.width;
+  const labels = context.encoding.target.classes;
+  const floors = context.target.recallFloors ?? null;
+  const finite = (v: number | undefined): number | null => (v === undefined || !Number.isFinite(v) ? null : v);
+  return {
+    precision: context.target.precision ?? 'float32',
+    inputs,
+    width,
+    outputs,
+    cost: deviceCost(costShapeOf({ inputs, width, outputs }, context.encoding)),
+    metric: { float32: a.float32, int8: a.int8 },
+    classes:
+      labels === null || a.confusion === null
+        ? null
+        : labels.map((label, c) => ({
+            label,
+            rows: a.confusion![c].reduce((s, v) => s + v, 0),
+            recall: finite(a.recall?.[c]),
+            precision: finite(a.precision?.[c]),
+            floor: floors === null || floors[c] <= 0 ? null : floors[c],
+          })),
+    confusion: a.confusion,
   };
 }

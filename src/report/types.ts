@@ -1,4 +1,5 @@
 import type { MetricName, Task } from '../config/types.js';
+import type { DeviceCost } from '../device/index.js';
 import type { JudgingRows, SearchOutcome, WidthSummary } from '../search/types.js';
 import type { BaselineWidth, DataChanges, HistoryEntry } from '../gate/types.js';
 
@@ -57,7 +58,8 @@ export interface Report {
     grownWidth: number | null;
     /** Networks of one width that must meet the target for the width to be adequate (search.required). */
     required: number;
-    widths: WidthSummary[];
+    /** Every width decided, with what a network of that width costs on the device. */
+    widths: ReportWidth[];
     pruning: ReportPruneStep[];
     trainings: number;
     /** Why no width is adequate, or how far an unfinished search got. */
@@ -66,6 +68,8 @@ export interface Report {
     /** The network behind `width` (or, when none is adequate, the best that met the target), or null. */
     witness: ReportWitness | null;
   } | null;
+  /** The witness on the device: its cost, its metric in both forms, and per class; null without a witness. */
+  device: ReportDevice | null;
   /** Data changes against the baseline (filled by the gate); null without a baseline. */
   changes: DataChanges | null;
   timing: Record<string, number>;
@@ -104,4 +108,25 @@ export interface ReportWitness {
   met: boolean;
   /** Its width is adequate (false only when no width is: then it is the best network that met the target). */
   adequate: boolean;
+}
+
+export interface ReportWidth extends WidthSummary {
+  /** What a network of this width costs on the device (src/device/cost.ts). */
+  cost: DeviceCost;
+}
+
+export interface ReportDevice {
+  /** The form that must meet the target (target.precision); the byte budgets apply to it. */
+  precision: 'float32' | 'int8';
+  inputs: number;
+  width: number;
+  outputs: number;
+  cost: DeviceCost;
+  /** The witness's metric on the rows that judged it, in both forms (int8 null without raw rows). */
+  metric: { float32: number; int8: number | null };
+  /** Classification: per class, on the rows that judged it, in the form that decides. */
+  classes:
+    { label: string; rows: number; recall: number | null; precision: number | null; floor: number | null }[] | null;
+  /** Classification: rows of true class (row) predicted as class (column), in `classes` order. */
+  confusion: number[][] | null;
 }

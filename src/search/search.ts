@@ -16,7 +16,7 @@ import type { EncodedDataset } from '../data/types.js';
 import type { TrainOptions } from '../nn/index.js';
 import { inThreadExecutor, workerPoolExecutor, type Executor } from './executor.js';
 import { decideGrowth, planTasks, taskKey, type GrowthDecision, type RestartAtWidth } from './growth.js';
-import { judgingRowsOf } from './judge.js';
+import { appraise, judgingRowsOf } from './judge.js';
 import { notFoundNotes, stoppedGrowingNote, stoppedPruningNote } from './notes.js';
 import { tally } from './tally.js';
 import {
@@ -182,7 +182,7 @@ export async function runSearch(
       growthSeconds: (growthEnd - t0) / 1000,
       pruneSeconds: (end - growthEnd) / 1000,
     });
-    const base = { grownWidth: null, metric: null, witness: null, pruning: [], judging };
+    const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
 
     const decision = grown.decision;
     if (decision.kind === 'need') {
@@ -229,6 +229,7 @@ export async function runSearch(
         grownWidth: decision.grownWidth,
         width: null,
         witness: t.witness,
+        appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
         widths: t.widths,
         pruning: steps,
         trainings,
@@ -243,6 +244,7 @@ export async function runSearch(
       grownWidth: decision.grownWidth,
       metric: found ? t.witness!.judged : null,
       witness: t.witness,
+      appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
       widths: t.widths,
       pruning: steps,
       trainings,

@@ -77,6 +77,21 @@ export interface Witness extends Judged {
   network: NetworkJson;
 }
 
+/** A network on the rows that judge, in both forms (search/judge.ts `appraise`). */
+export interface Appraisal {
+  /** The target metric of the float network. */
+  float32: number;
+  /** The target metric of its int8 form; null when the dataset has no raw rows to run it on. */
+  int8: number | null;
+  /** Classification: the confusion matrix (true class × predicted class) of the form that decides. */
+  confusion: number[][] | null;
+  recall: number[] | null;
+  precision: number[] | null;
+  /** The metric of the form that decides (target.precision). */
+  deciding: number;
+  met: boolean;
+}
+
 /** Which rows judged the target, and how many. */
 export interface JudgingRows {
   on: 'judging' | 'validation' | 'training';
@@ -98,6 +113,8 @@ export interface SearchResult {
    * best network that met the target at any width (its width then is not adequate), or null.
    */
   witness: Witness | null;
+  /** The witness on the rows that judge, in both forms, with its per-class figures; null without a witness. */
+  appraisal: Appraisal | null;
   widths: WidthSummary[];
   pruning: PruneStep[];
   /** Trainings the answer used: growth restarts and pruning retrainings. */

@@ -203,6 +203,33 @@ const cases: Case[] = [
     at: 'neuron-budget.yml:5:3:',
     says: ['target.metric', 'classification', 'mae'],
   },
+  {
+    name: 'a recall floor for a class the data do not have suggests the nearest',
+    config: GOOD.replace('  threshold: 0.9\n', '  threshold: 0.9\n  min-recall: { bearing_waer: 0.9 }\n'),
+    at: 'neuron-budget.yml:6:3:',
+    says: ['target.min-recall', '"bearing_waer"', 'did you mean "bearing_wear"', '"normal"'],
+  },
+  {
+    name: 'a recall floor above 1',
+    config: GOOD.replace('  threshold: 0.9\n', '  threshold: 0.9\n  min-recall: { normal: 1.5 }\n'),
+    at: 'neuron-budget.yml:6:25:',
+    says: ['target.min-recall.normal', 'at most 1', 'found 1.5'],
+  },
+  {
+    name: 'a recall floor on a regression target',
+    config: GOOD.replace(
+      '  target: condition\n',
+      '  target: kurtosis\n  ignore: [condition]\n  task: regression\n',
+    ).replace('  threshold: 0.9\n', '  metric: rmse\n  threshold: 0.9\n  min-recall: 0.8\n'),
+    at: 'neuron-budget.yml:9:3:',
+    says: ['target.min-recall', 'regression'],
+  },
+  {
+    name: 'an unsupported YAML tag',
+    config: GOOD.replace('  threshold: 0.9', '  threshold: !custom 0.9'),
+    at: 'neuron-budget.yml:5:14:',
+    says: ['unsupported YAML tag', '"!custom"'],
+  },
 ];
 
 describe('config mistakes through the built command line', () => {

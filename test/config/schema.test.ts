@@ -112,6 +112,19 @@ function probes(key: KeySpec): unknown[] {
       return [...common, ';', '\t', ';;', '', '"', '\n'];
     case 'text-list':
       return [...common, ['a'], ['a', 'b'], ['a', 'a'], [''], [1], ['a', 2]];
+    case 'recall':
+      return [
+        ...common,
+        0.9,
+        1,
+        0,
+        1.5,
+        -0.2,
+        { normal: 0.9 },
+        { normal: 0.9, worn: 1 },
+        { normal: 0 },
+        { normal: 'x' },
+      ];
   }
 }
 

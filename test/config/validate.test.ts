@@ -53,7 +53,7 @@ describe('defaults', () => {
       maxCategories: 20,
       missing: 'error',
     });
-    expect(c.target).toEqual({ metric: 'accuracy', threshold: 0.95 });
+    expect(c.target).toEqual({ metric: 'accuracy', threshold: 0.95, precision: 'float32', minRecall: null });
     expect(c.search).toEqual({
       minWidth: 1,
       maxWidth: 16,
@@ -78,6 +78,9 @@ describe('defaults', () => {
       baseline: join(root, 'neuron-budget.baseline.json'),
       baselineAsWritten: 'neuron-budget.baseline.json',
       maxWidth: null,
+      maxFlashBytes: null,
+      maxRamBytes: null,
+      maxMacs: null,
       allowedGrowth: 0,
       metricTolerance: 0.02,
     });
@@ -105,6 +108,8 @@ describe('defaults', () => {
         'target:',
         '  metric: accuracy',
         '  threshold: 1',
+        '  precision: int8',
+        '  min-recall: { worn: 0.9, healthy: 1 }',
         'search:',
         '  min-width: 2',
         '  max-width: 8',
@@ -127,6 +132,9 @@ describe('defaults', () => {
         'gate:',
         '  baseline: ci/base.json',
         '  max-width: 2',
+        '  max-flash-bytes: 4096',
+        '  max-ram-bytes: 512',
+        '  max-macs: 100000',
         '  allowed-growth: 1',
         '  metric-tolerance: 0',
         '',
@@ -143,7 +151,17 @@ describe('defaults', () => {
       maxCategories: 5,
       missing: 'drop',
     });
-    expect(c.target).toEqual({ metric: 'accuracy', threshold: 1 });
+    expect(c.target).toEqual({
+      metric: 'accuracy',
+      threshold: 1,
+      precision: 'int8',
+      minRecall: {
+        classes: [
+          { label: 'worn', min: 0.9 },
+          { label: 'healthy', min: 1 },
+        ],
+      },
+    });
     expect(c.search).toEqual({
       minWidth: 2,
       maxWidth: 8,
@@ -168,6 +186,9 @@ describe('defaults', () => {
       baseline: join(root, 'ci', 'base.json'),
       baselineAsWritten: 'ci/base.json',
       maxWidth: 2,
+      maxFlashBytes: 4096,
+      maxRamBytes: 512,
+      maxMacs: 100000,
       allowedGrowth: 1,
       metricTolerance: 0,
     });

@@ -110,6 +110,11 @@ function checkCompiled(t: Trained): { rows: number; worst: number } {
 const compiled =
   CC === null ? 'compiled C (SKIPPED: no gcc or cc on PATH; install a C compiler to run these)' : `compiled C (${CC})`;
 
+// CI installs a compiler and sets NEURON_BUDGET_REQUIRE_CC, so there a missing one fails instead of skipping.
+if (CC === null && process.env['NEURON_BUDGET_REQUIRE_CC'] === '1') {
+  throw new Error('NEURON_BUDGET_REQUIRE_CC is set but no gcc or cc is on PATH');
+}
+
 describe.skipIf(CC === null)(compiled, () => {
   it('Iris, three species (softmax head): every row', async () => {
     expect(checkCompiled(await trainedIris('species')).rows).toBe(150);

@@ -12,7 +12,7 @@ import {
   whyNotRecordable,
   writeBaseline,
 } from '../../src/gate/baseline.js';
-import { findJsonSyntaxProblem } from '../../src/gate/json-position.js';
+import { findJsonSyntaxProblem } from '../../src/common/json-position.js';
 import { HISTORY_CAP, type Baseline } from '../../src/gate/types.js';
 import { UserError } from '../../src/common/errors.js';
 import { config, found, inconclusive, loaded, notFound, profile } from './build.js';
@@ -120,7 +120,7 @@ describe('history', () => {
       Array.from({ length: 10 }, (_, i) => `2026-01-${String(i + 1).padStart(2, '0')}`),
     );
     expect(b!.history.at(-1)!.data).toBe(b!.data.fingerprint);
-    expect(validate(b)).toBe(true);
+    expect(validate(b), JSON.stringify(validate.errors)).toBe(true);
   });
 
   it(`is capped at ${HISTORY_CAP} entries, dropping the oldest`, () => {
@@ -131,7 +131,7 @@ describe('history', () => {
     expect(b!.history).toHaveLength(HISTORY_CAP);
     expect(b!.history[0].rows).toBe(6);
     expect(b!.history.at(-1)!.rows).toBe(HISTORY_CAP + 5);
-    expect(validate(b)).toBe(true);
+    expect(validate(b), JSON.stringify(validate.errors)).toBe(true);
   });
 
   it('does not change the previous baseline object', () => {

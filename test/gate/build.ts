@@ -4,7 +4,7 @@
  */
 import type { Config } from '../../src/config/types.js';
 import { testConfig, type ConfigOverrides } from '../helpers/config.js';
-import type { DataProfile, LoadedData } from '../../src/data/types.js';
+import type { DataProfile, Encoding, LoadedData } from '../../src/data/types.js';
 import { searchStageReport } from '../../src/report/assemble.js';
 import type { ReportDraft } from '../../src/report/types.js';
 import type { PruneStep, SearchResult, WidthSummary } from '../../src/search/types.js';
@@ -53,6 +53,7 @@ export function found(
     grownWidth: foundWidth,
     metric,
     witness: null,
+    appraisal: null,
     widths,
     pruning: opts.pruning ?? [],
     trainings: widths.length * 10,
@@ -148,8 +149,19 @@ export function dataReport(
       classes: p.classes ? Object.entries(p.classes).map(([label, count]) => ({ label, count })) : null,
     },
     search: null,
+    device: null,
     changes: null,
     timing: { searchSeconds: result.timing.searchSeconds },
   };
-  return searchStageReport(draft, result, cfg.search.required);
+  const encoding: Encoding = {
+    features: Array.from({ length: 6 }, (_, i) => ({ kind: 'numeric' as const, name: `f${i}`, mean: 0, std: 1 })),
+    target: {
+      name: 'condition',
+      task: p.classes ? 'classification' : 'regression',
+      classes: p.classes ? Object.keys(p.classes) : null,
+      mean: 0,
+      std: 1,
+    },
+  };
+  return searchStageReport(draft, result, cfg.search.required, { encoding, target: cfg.target });
 }

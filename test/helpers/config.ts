@@ -3,7 +3,7 @@
  * has its own tests). Values are the documented defaults of src/config/spec.ts (the only key
  * list) unless a test overrides them.
  */
-import { derivedJudging, sectionDefaults } from '../../src/config/spec.js';
+import { derivedJudging, sectionDefaults } from '../../src/config/keys.js';
 import type { Config, DataConfig, GateConfig, SearchConfig, TargetConfig } from '../../src/config/types.js';
 
 export function searchSettings(over: Partial<SearchConfig> = {}): SearchConfig {
@@ -31,7 +31,7 @@ export function testConfig(root: string, over: ConfigOverrides = {}): Config {
       path: `${root}/${dataPath}`,
       pathAsWritten: dataPath,
     },
-    target: { metric: 'accuracy', threshold: 0.95, ...over.target },
+    target: { precision: 'float32', minRecall: null, metric: 'accuracy', threshold: 0.95, ...over.target },
     search: searchSettings(over.search),
     gate: {
       ...gate,

@@ -118,7 +118,8 @@ describe('witness export', () => {
     };
     bad('{', '(root)');
     bad('{"schema":"something-else"}', 'schema');
-    bad(JSON.stringify({ schema: MODEL_SCHEMA, task: 'classification' }), 'network');
+    bad(JSON.stringify({ schema: MODEL_SCHEMA, task: 'classification' }), 'width');
+    bad(JSON.stringify({ schema: MODEL_SCHEMA, task: 'sorting' }), 'task');
   });
 });
 
