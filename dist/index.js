@@ -29444,6 +29444,173 @@ module.exports = {
 
 /***/ }),
 
+/***/ 1922:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   h2: () => (/* binding */ MAX_MESSAGE),
+/* harmony export */   iU: () => (/* binding */ isUserError),
+/* harmony export */   yo: () => (/* binding */ UserError)
+/* harmony export */ });
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4678);
+/**
+ * An error the user caused (bad config, bad data, bad arguments). The shells print
+ * `message` without a stack trace, exit with code 2, and (in the action) turn
+ * `file`/`line`/`column` into an error annotation.
+ *
+ * Messages quote repository strings (column names, values, paths), so the whole message is
+ * passed through the one sanitiser here: whoever builds a message cannot forget it.
+ */
+
+/** Longest message shown; the values inside are clipped where they are quoted, this bounds the rest. */
+const MAX_MESSAGE = 2000;
+class UserError extends Error {
+    file;
+    line;
+    column;
+    key;
+    constructor(message, where = {}) {
+        super((0,_escape_js__WEBPACK_IMPORTED_MODULE_0__/* .escapeText */ .X1)(message, MAX_MESSAGE));
+        this.name = 'UserError';
+        this.file = where.file;
+        this.line = where.line;
+        this.column = where.column;
+        this.key = where.key;
+    }
+}
+function isUserError(e) {
+    return e instanceof UserError;
+}
+
+
+/***/ }),
+
+/***/ 4678:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   FV: () => (/* binding */ escapeMarkdown),
+/* harmony export */   RQ: () => (/* binding */ escapeLines),
+/* harmony export */   X1: () => (/* binding */ escapeText),
+/* harmony export */   hD: () => (/* binding */ quote)
+/* harmony export */ });
+/**
+ * The one sanitiser for strings from the repository (column names, class labels, categories,
+ * paths, YAML values, and sentences that quote them). A data file is written by whoever opens
+ * the pull request, so its strings are hostile until shown otherwise.
+ *
+ * - `escapeText`: for logs, the terminal and messages. Control characters (C0, DEL, C1) and
+ *   invisible or bidirectional formatting characters are shown escaped (`\n`, `\x1b`,
+ *   `\u202e`), never raw, so a string can neither start a line nor move the cursor; and `::`
+ *   is broken up, so even a line that starts with a repository string cannot be read by the
+ *   Actions runner as a workflow command (`::error …::`).
+ * - `quote`: a value inside a message: clipped, escaped, in double quotes.
+ * - `escapeMarkdown`: for the pull-request comment and the job summary.
+ * - `clip`: shortens a string to a bounded number of characters with an ellipsis.
+ */
+/** Most characters of one repository string shown on any screen. */
+const MAX_SHOWN = 200;
+/** Most characters of one value quoted inside a message. */
+const MAX_QUOTED = 80;
+const ELLIPSIS = '…';
+const ZWSP = '&#8203;';
+/** Invisible and bidirectional formatting characters that could disguise text. */
+const INVISIBLE = /[\u00ad\u061c\u180e\u200b-\u200f\u2028\u2029\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff]/u;
+const SHORT_ESCAPES = { 0x0a: '\\n', 0x0d: '\\r', 0x09: '\\t' };
+/** At most `max` characters (code points), the last of them an ellipsis when cut. */
+function clip(s, max = MAX_SHOWN) {
+    if (s.length <= max)
+        return s;
+    const chars = Array.from(s.slice(0, max + 1));
+    return chars.length > max ? `${chars.slice(0, max - 1).join('')}${ELLIPSIS}` : s;
+}
+function hex(c, width) {
+    return c.toString(16).padStart(width, '0');
+}
+/** Is this code point one that `escapeText` shows escaped? */
+function needsEscape(c, ch) {
+    return c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch);
+}
+/** Text for logs, the terminal and messages: clipped, control and invisible characters escaped, `::` broken. */
+function escapeText(raw, max = MAX_SHOWN) {
+    const s = clip(raw, max);
+    let out = '';
+    for (const ch of s) {
+        const c = ch.codePointAt(0) ?? 0;
+        if (!needsEscape(c, ch))
+            out += ch;
+        else if (SHORT_ESCAPES[c] !== undefined)
+            out += SHORT_ESCAPES[c];
+        else if (c < 0x100)
+            out += `\\x${hex(c, 2)}`;
+        else
+            out += `\\u${hex(c, 4)}`;
+    }
+    // The runner reads a line that starts with "::" as a command; "::" never survives whole.
+    return out.replace(/::/g, ':\\x3a');
+}
+/** A repository value inside a message: `"name"`, clipped and escaped. */
+function quote(raw, max = MAX_QUOTED) {
+    return `"${escapeText(raw, max).replace(/"/g, '\\"')}"`;
+}
+/** Whole lines of text (our own line breaks kept), each escaped as `escapeText` does. */
+function escapeLines(text) {
+    return text
+        .split('\n')
+        .map((line) => escapeText(line, Number.MAX_SAFE_INTEGER))
+        .join('\n');
+}
+/** Space , ; ' " / % = ? */
+const PLAIN = new Set([0x20, 0x2c, 0x3b, 0x27, 0x22, 0x2f, 0x25, 0x3d, 0x3f]);
+/**
+ * Markdown: every ASCII character other than letters, digits, space and , ; ' " / % = ?
+ * (which mean nothing to Markdown in the middle of a line, where these strings always go)
+ * becomes a numeric character reference, which GitHub-flavoured Markdown shows as literal
+ * text and never reads as syntax (emphasis, links, images, HTML, code, table pipes,
+ * headings, lists). GitHub turns some plain text into links after rendering (@-mentions,
+ * #123 references, URLs, www. addresses, :emoji:; GitHub behaviour as we know it, not
+ * checked against GitHub here), so a zero-width space follows every "@", "#" and ":" and
+ * precedes the dot of "www.", which breaks those patterns without changing what a reader
+ * sees. Line breaks become spaces, so a string never leaves its line or table cell.
+ */
+function escapeMarkdown(raw, max = MAX_SHOWN) {
+    const s = clip(raw, max);
+    let out = '';
+    for (let i = 0; i < s.length; i++) {
+        const c = s.charCodeAt(i);
+        if ((c >= 0x30 && c <= 0x39) || (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a) || PLAIN.has(c)) {
+            out += s[i];
+        }
+        else if (c === 0x0a || c === 0x0d || c === 0x09) {
+            out += ' ';
+        }
+        else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
+            out += '&#65533;';
+        }
+        else if (c < 0x80) {
+            if (c === 0x2e && /www$/i.test(s.slice(Math.max(0, i - 3), i)))
+                out += ZWSP;
+            out += `&#${c};`;
+            if (c === 0x40 || c === 0x23 || c === 0x3a)
+                out += ZWSP;
+        }
+        else if (INVISIBLE.test(s[i])) {
+            out += '&#65533;';
+        }
+        else if (c === 0xff20 || c === 0xfe6b) {
+            // Full-width and small commercial at: GitHub does not mention on them, but keep them inert anyway.
+            out += `&#${c};${ZWSP}`;
+        }
+        else {
+            out += s[i];
+        }
+    }
+    return out;
+}
+
+
+/***/ }),
+
 /***/ 6950:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -29456,7 +29623,6 @@ module.exports = {
 /* harmony export */   gI: () => (/* binding */ formatMetric),
 /* harmony export */   nO: () => (/* binding */ neurons)
 /* harmony export */ });
-/* unused harmony export successRate */
 /* harmony import */ var _metric_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8457);
 /** Number and word formatting shared by the search's notes, the gate's reasons and every renderer. Locale-free. */
 
@@ -29510,12 +29676,6 @@ function targetShort(metric, threshold) {
 /** "accuracy of at least 0.95" / "rmse of at most 0.3". */
 function targetPhrase(metric, threshold) {
     return `${metric} of ${(0,_metric_js__WEBPACK_IMPORTED_MODULE_0__/* .higherIsBetter */ .i2)(metric) ? 'at least' : 'at most'} ${formatMetric(threshold)}`;
-}
-function successRate(reached, restarts) {
-    if (reached === null || reached === undefined || restarts === null || restarts === undefined || restarts === 0) {
-        return '—';
-    }
-    return `${reached}/${restarts}`;
 }
 
 
@@ -29689,7 +29849,980 @@ function shuffle(items, rng) {
 
 /***/ }),
 
-/***/ 606:
+/***/ 4143:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  MF: () => (/* reexport */ cost_costShapeOf),
+  Q2: () => (/* reexport */ deviceCost),
+  LS: () => (/* reexport */ int8Forward),
+  gf: () => (/* reexport */ quantizeNetwork)
+});
+
+// UNUSED EXPORTS: DEFAULT_C_NAME, LUT_ENTRIES, activationRanges, activationTable, categoryIndex, checkCName, checkInt8Network, commentText, dequantizeValue, exportC, floatLiteral, foldZeroPoint, inputCode, multiplyByQuantizedMultiplier, objectBytes, quantizeLayer, quantizeMultiplier, quantizeValue, rangeParams, rawFeatureRows, roundHalfAway, roundingDivideByPot, saturatingRoundingDoublingHighMul, storedObjects
+
+;// CONCATENATED MODULE: ./src/device/cost.ts
+const C_TYPE_BYTES = { float: 4, int8_t: 1, int32_t: 4 };
+/** Entries of the activation lookup table (indexed by an int8 pre-activation). */
+const cost_LUT_ENTRIES = 256;
+/** The constant objects each path of the exported C declares, in declaration order. */
+function cost_storedObjects(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const float32 = [];
+    const int8 = [];
+    if (s.numericFeatures > 0) {
+        float32.push({ suffix: 'f_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        float32.push({ suffix: 'f_in_std', type: 'float', count: s.numericFeatures, role: 'feature deviations' });
+    }
+    float32.push({ suffix: 'f_w1', type: 'float', count: H * D, role: 'hidden weights' }, { suffix: 'f_b1', type: 'float', count: H, role: 'hidden biases' }, { suffix: 'f_w2', type: 'float', count: K * H, role: 'output weights' }, { suffix: 'f_b2', type: 'float', count: K, role: 'output biases' });
+    if (s.regression)
+        float32.push({ suffix: 'f_target', type: 'float', count: 2, role: 'target mean and deviation' });
+    if (s.numericFeatures > 0) {
+        int8.push({ suffix: 'q_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        int8.push({ suffix: 'q_in_mul', type: 'float', count: s.numericFeatures, role: '1 / (deviation · input scale)' });
+    }
+    int8.push({ suffix: 'q_in_zero', type: 'int8_t', count: 1, role: 'input zero-point', scalar: true });
+    if (s.categoricalFeatures > 0)
+        int8.push({ suffix: 'q_in_one', type: 'int8_t', count: 1, role: 'code of a one-hot 1', scalar: true });
+    int8.push({ suffix: 'q_w1', type: 'int8_t', count: H * D, role: 'hidden weights' }, { suffix: 'q_b1', type: 'int32_t', count: H, role: 'hidden biases (zero-point folded in)' }, { suffix: 'q_m0', type: 'int32_t', count: H, role: 'requantisation multipliers M0' }, { suffix: 'q_shift', type: 'int8_t', count: H, role: 'requantisation shifts n' }, { suffix: 'q_act_zero', type: 'int8_t', count: 1, role: 'pre-activation zero-point', scalar: true }, { suffix: 'q_lut', type: 'int8_t', count: cost_LUT_ENTRIES, role: 'activation lookup table' }, { suffix: 'q_w2', type: 'int8_t', count: K * H, role: 'output weights' }, { suffix: 'q_b2', type: 'int32_t', count: K, role: 'output biases (zero-point folded in)' }, { suffix: 'q_out_scale', type: 'float', count: K, role: 'output dequantisation scales' });
+    return { float32, int8 };
+}
+function objectBytes(o) {
+    return o.count * C_TYPE_BYTES[o.type];
+}
+function sumBytes(objects) {
+    return objects.reduce((n, o) => n + objectBytes(o), 0);
+}
+function deviceCost(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const stored = cost_storedObjects(s);
+    return {
+        parameters: D * H + H + H * K + K,
+        macs: D * H + H * K,
+        flashBytes: { float32: sumBytes(stored.float32), int8: sumBytes(stored.int8) },
+        ramBytes: { float32: 4 * (D + H), int8: D + H },
+    };
+}
+/** The cost shape of a network of `width` hidden neurons on data encoded as `encoding`. */
+function cost_costShapeOf(net, encoding) {
+    return {
+        inputs: net.inputs,
+        width: net.width,
+        outputs: net.outputs,
+        numericFeatures: encoding.features.filter((f) => f.kind === 'numeric').length,
+        categoricalFeatures: encoding.features.filter((f) => f.kind === 'categorical').length,
+        regression: encoding.target.task === 'regression',
+    };
+}
+
+// EXTERNAL MODULE: ./src/nn/kernel/detmath.ts
+var detmath = __nccwpck_require__(415);
+;// CONCATENATED MODULE: ./src/device/fixed-point.ts
+/**
+ * The integer arithmetic of the int8 inference, written so that this TypeScript and the
+ * exported C compute the same integers. Every value here is an integer held exactly in a
+ * double (all magnitudes stay below 2^53), so no step depends on JavaScript's number type.
+ *
+ * Requantisation follows Jacob et al. 2018, "Quantization and Training of Neural Networks for
+ * Efficient Integer-Arithmetic-Only Inference", section 2.2: the real multiplier M (eq. 5) is
+ * written M = 2^−n · M0 with M0 in [0.5, 1) (eq. 6), M0 held as a 32-bit fixed-point integer.
+ * The fixed-point multiply and the rounding shift are the documented rules of the
+ * general-purpose gemmlowp library (fixedpoint/fixedpoint.h): SaturatingRoundingDoublingHighMul
+ * and RoundingDivideByPOT.
+ * @testOnly
+ */
+const INT32_MIN = -2147483648;
+/** @testOnly */
+const INT32_MAX = 2147483647;
+const TWO_15 = 32768;
+const TWO_30 = 1073741824;
+const TWO_31 = 2147483648;
+/** Largest right shift RoundingDivideByPOT takes (gemmlowp asserts exponent ≤ 31). */
+const fixed_point_MAX_SHIFT = 31;
+/**
+ * Round to nearest, ties away from zero. Exact for every double: trunc(x) and x − trunc(x)
+ * are both exact, so no addition of 0.5 can round the wrong way.
+ */
+function roundHalfAway(x) {
+    const i = Math.trunc(x);
+    const f = x - i;
+    const r = f >= 0.5 ? i + 1 : f <= -0.5 ? i - 1 : i;
+    return r === 0 ? 0 : r; // no −0 in the JSON
+}
+function clamp(x, lo, hi) {
+    return x < lo ? lo : x > hi ? hi : x;
+}
+/**
+ * gemmlowp's SaturatingRoundingDoublingHighMul for int32 a, b: (a·b + nudge) / 2^31 truncated
+ * toward zero, nudge = 2^30 when a·b ≥ 0 and 1 − 2^30 otherwise (so a tie rounds toward +∞);
+ * INT32_MIN · INT32_MIN saturates to INT32_MAX.
+ *
+ * a·b reaches 2^62, beyond a double's 53 bits, so the product is split: b = bh·2^16 + bl,
+ * a·bh = ph·2^15 + pl, and a·b + nudge = ph·2^31 + r with every part exact.
+ */
+function saturatingRoundingDoublingHighMul(a, b) {
+    if (a === INT32_MIN && b === INT32_MIN)
+        return INT32_MAX;
+    const bh = b >> 16; // signed high half
+    const bl = b & 0xffff; // unsigned low half
+    const p = a * bh; // |p| ≤ 2^46: exact
+    const q = a * bl; // |q| < 2^47: exact
+    const ph = Math.floor(p / TWO_15);
+    const pl = p - ph * TWO_15; // in [0, 2^15)
+    const negative = (a < 0 && b > 0) || (a > 0 && b < 0);
+    const nudge = negative ? 1 - TWO_30 : TWO_30;
+    const r = pl * 65536 + q + nudge; // |r| < 2^48: exact
+    const rh = Math.floor(r / TWO_31);
+    const rl = r - rh * TWO_31; // in [0, 2^31)
+    const floor = ph + rh; // floor((a·b + nudge) / 2^31)
+    const truncated = floor < 0 && rl !== 0 ? floor + 1 : floor;
+    return truncated === 0 ? 0 : truncated;
+}
+/**
+ * gemmlowp's RoundingDivideByPOT: x / 2^exponent rounded to nearest, ties away from zero,
+ * for int32 x and 0 ≤ exponent ≤ 31.
+ */
+function roundingDivideByPot(x, exponent) {
+    const mask = 2 ** exponent - 1;
+    const remainder = x & mask;
+    const threshold = Math.floor(mask / 2) + (x < 0 ? 1 : 0);
+    return (x >> exponent) + (remainder > threshold ? 1 : 0);
+}
+/**
+ * M = 2^−n · M0, M0 in [0.5, 1), M0 stored as round(M0 · 2^31) (eq. 6). Two limits, both exact
+ * in their effect on an int32 accumulator acc: for M < 2^−32, |acc · M| < 1/2 always rounds to
+ * 0, so the multiplier is 0; for M ≥ 2^31 every nonzero acc saturates an int8, and so does
+ * 2^30 · 2^31 (the left shift capped at 31), which stands in for it.
+ */
+function quantizeMultiplier(m) {
+    if (!(m > 0) || !Number.isFinite(m))
+        return { multiplier: 0, shift: 0 };
+    let n = 0;
+    let f = m;
+    while (f < 0.5 && n <= fixed_point_MAX_SHIFT + 1) {
+        f *= 2; // exact
+        n++;
+    }
+    while (f >= 1 && n >= -fixed_point_MAX_SHIFT - 1) {
+        f /= 2; // exact
+        n--;
+    }
+    if (n > fixed_point_MAX_SHIFT)
+        return { multiplier: 0, shift: 0 };
+    let m0 = roundHalfAway(f * TWO_31);
+    if (m0 === TWO_31) {
+        m0 = TWO_30;
+        n--;
+    }
+    if (n < -fixed_point_MAX_SHIFT)
+        return { multiplier: TWO_30, shift: -fixed_point_MAX_SHIFT };
+    return { multiplier: m0, shift: n };
+}
+/**
+ * acc · M for an int32 acc: a left shift (saturating to int32) when shift < 0, then the
+ * fixed-point multiply by M0, then the rounding right shift when shift > 0.
+ */
+function multiplyByQuantizedMultiplier(acc, q) {
+    if (q.multiplier === 0)
+        return 0;
+    let x = acc;
+    if (q.shift < 0)
+        x = clamp(acc * 2 ** -q.shift, INT32_MIN, INT32_MAX); // power-of-two product: exact
+    const high = saturatingRoundingDoublingHighMul(x, q.multiplier);
+    return q.shift > 0 ? roundingDivideByPot(high, q.shift) : high;
+}
+
+;// CONCATENATED MODULE: ./src/device/quantize.ts
+
+
+
+/** Largest |int32 bias|; with at most MAX_QUANT_INPUTS terms of |q_w·q_x| ≤ 127·128 the accumulator stays in int32. */
+const quantize_BIAS_LIMIT = 2 ** 30;
+const MAX_QUANT_INPUTS = 16384;
+const INT8_MIN = -128;
+const INT8_MAX = 127;
+/**
+ * Pre-activation range and activation codes per activation. The calibrated range is
+ * R = max |a| over the calibration rows (ReLU: max a), clipped where the activation is within
+ * half an output step of its limit (beyond that every pre-activation gives the same code):
+ *   tanh      a in [−R, R], S_a = R/127, Z_a = 0; h in [−tanh R, tanh R], S_h = tanh(R)/127, Z_h = 0
+ *             (odd function: symmetric codes). Clip: atanh(1 − 1/254) = ln(507)/2 ≈ 3.11.
+ *   logistic  a in [−R, R], S_a = R/127, Z_a = 0; h in [0, σ(R)] (widened to hold 0),
+ *             S_h = σ(R)/255, Z_h = −128. Clip: σ(a) = 1 − 1/510 at a = ln(509) ≈ 6.23.
+ *   relu      a in [0, R], S_a = R/255, Z_a = −128 (a negative pre-activation clamps to code
+ *             −128, which is relu's 0); h = a: S_h = S_a, Z_h = −128.
+ * The output range is the image of the pre-activation range, so it needs no calibration of its own.
+ */
+function activationRanges(activation, calibrated) {
+    if (activation === 'relu') {
+        const r = calibrated > 0 && Number.isFinite(calibrated) ? calibrated : 1;
+        const s = r / 255;
+        return { preActivation: { scale: s, zeroPoint: INT8_MIN }, activation: { scale: s, zeroPoint: INT8_MIN } };
+    }
+    const clip = activation === 'tanh' ? (0,detmath/* detLog */.Ep)(507) / 2 : (0,detmath/* detLog */.Ep)(509);
+    const r = calibrated > 0 && calibrated < clip ? calibrated : clip;
+    const preActivation = { scale: r / 127, zeroPoint: 0 };
+    if (activation === 'tanh')
+        return { preActivation, activation: { scale: (0,detmath/* detTanh */.hL)(r) / 127, zeroPoint: 0 } };
+    return { preActivation, activation: { scale: (0,detmath/* detLogistic */.U1)(r) / 255, zeroPoint: INT8_MIN } };
+}
+function activate(activation, a) {
+    if (activation === 'tanh')
+        return (0,detmath/* detTanh */.hL)(a);
+    if (activation === 'logistic')
+        return (0,detmath/* detLogistic */.U1)(a);
+    return a > 0 ? a : 0;
+}
+/** q = clamp(Z + round(r / S)) into int8. */
+function quantizeValue(r, p) {
+    return clamp(p.zeroPoint + roundHalfAway(r / p.scale), INT8_MIN, INT8_MAX);
+}
+/** r = S · (q − Z) (the paper's eq. 1). */
+function dequantizeValue(q, p) {
+    return p.scale * (q - p.zeroPoint);
+}
+/**
+ * The asymmetric int8 parameters of the range [lo, hi], widened to hold 0, with the
+ * zero-point rounded to an integer so that real 0 is exactly representable.
+ */
+function rangeParams(lo, hi) {
+    let a = Math.min(lo, 0);
+    let b = Math.max(hi, 0);
+    if (!(b > a)) {
+        a = 0;
+        b = 1;
+    }
+    const scale = (b - a) / 255;
+    return { scale, zeroPoint: clamp(roundHalfAway(INT8_MIN - a / scale), INT8_MIN, INT8_MAX) };
+}
+/** The table of activation codes for every int8 pre-activation code. */
+function activationTable(activation, pre, out) {
+    const table = [];
+    for (let q = INT8_MIN; q < INT8_MIN + cost_LUT_ENTRIES; q++) {
+        table.push(quantizeValue(activate(activation, dequantizeValue(q, pre)), out));
+    }
+    return table;
+}
+/**
+ * One layer's symmetric per-output-channel weights and int32 biases. The scale is at least
+ * |bias| / (S_in · BIAS_LIMIT), so the bias always fits (coarser weights only when they are
+ * negligible beside the bias); an all-zero channel gets scale 1.
+ */
+function quantizeLayer(weights, bias, inputScale) {
+    const scales = [];
+    const qWeights = [];
+    const qBias = [];
+    weights.forEach((row, j) => {
+        let maxAbs = 0;
+        for (const w of row)
+            maxAbs = Math.max(maxAbs, Math.abs(w));
+        let s = Math.max(maxAbs / INT8_MAX, Math.abs(bias[j]) / (inputScale * quantize_BIAS_LIMIT));
+        if (!(s > 0) || !Number.isFinite(s))
+            s = 1;
+        scales.push(s);
+        qWeights.push(row.map((w) => clamp(roundHalfAway(w / s), -INT8_MAX, INT8_MAX)));
+        qBias.push(clamp(roundHalfAway(bias[j] / (inputScale * s)), -quantize_BIAS_LIMIT, quantize_BIAS_LIMIT));
+    });
+    return { weights: qWeights, scales, bias: qBias };
+}
+/** bias − Z · Σ weights: the accumulator then sums weight · code directly (the paper's section 2.3). */
+function quantize_foldZeroPoint(bias, weights, zero) {
+    return bias.map((b, j) => b - zero * weights[j].reduce((s, w) => s + w, 0));
+}
+function checkFinite(net) {
+    const all = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!all.every(Number.isFinite))
+        throw new RangeError('cannot quantise a network with non-finite weights');
+}
+/** Largest |a| (ReLU: largest a) of the hidden pre-activations over the calibration rows, in float64. */
+function calibratePreActivation(net, cal) {
+    const D = net.inputs;
+    let extreme = 0;
+    for (let p = 0; p < cal.rows; p++) {
+        for (let j = 0; j < net.width; j++) {
+            let a = net.hiddenBias[j];
+            const w = net.hiddenWeights[j];
+            for (let i = 0; i < D; i++)
+                a += cal.x[p * D + i] * w[i];
+            const v = net.activation === 'relu' ? a : Math.abs(a);
+            if (v > extreme)
+                extreme = v;
+        }
+    }
+    return extreme;
+}
+function inputRange(cal, D) {
+    let lo = 0;
+    let hi = 0;
+    for (let q = 0; q < cal.rows * D; q++) {
+        const v = cal.x[q];
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    return rangeParams(lo, hi);
+}
+/** The int8 form of `net`, its activation ranges calibrated on `calibration` (the training rows). */
+function quantizeNetwork(net, encoding, calibration) {
+    const D = net.inputs;
+    const H = net.width;
+    const K = net.outputs;
+    if (D > MAX_QUANT_INPUTS || H > MAX_QUANT_INPUTS) {
+        throw new RangeError(`int8 quantisation takes at most ${MAX_QUANT_INPUTS} inputs and hidden neurons`);
+    }
+    if (calibration.rows < 1)
+        throw new RangeError('int8 quantisation needs at least one calibration row');
+    checkFinite(net);
+    const encoded = encoding.features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
+    if (encoded !== D)
+        throw new RangeError(`the encoding gives ${encoded} inputs, the network takes ${D}`);
+    const input = inputRange(calibration, D);
+    const features = encoding.features.map((f) => f.kind === 'numeric'
+        ? {
+            kind: 'numeric',
+            mean: Math.fround(f.mean),
+            multiplier: Math.fround(1 / ((f.std > 0 ? f.std : 1) * input.scale)),
+        }
+        : { kind: 'categorical', categories: f.categories.length });
+    const hidden = quantizeLayer(net.hiddenWeights, net.hiddenBias, input.scale);
+    const ranges = activationRanges(net.activation, calibratePreActivation(net, calibration));
+    const multipliers = hidden.scales.map((s) => quantizeMultiplier((input.scale * s) / ranges.preActivation.scale));
+    const t = encoding.target;
+    const regression = t.task === 'regression';
+    const outBias = net.outputBias.map((b) => (regression ? b + t.mean / t.std : b));
+    const S_h = ranges.activation.scale;
+    const output = quantizeLayer(net.outputWeights, outBias, S_h);
+    return {
+        inputs: D,
+        width: H,
+        outputs: K,
+        activation: net.activation,
+        head: net.head,
+        input: { ...input, one: quantizeValue(1, input), features },
+        hidden: {
+            weights: hidden.weights,
+            weightScales: hidden.scales,
+            bias: hidden.bias,
+            multiplier: multipliers.map((m) => m.multiplier),
+            shift: multipliers.map((m) => m.shift),
+            preActivation: ranges.preActivation,
+            activation: ranges.activation,
+            table: activationTable(net.activation, ranges.preActivation, ranges.activation),
+        },
+        output: {
+            weights: output.weights,
+            weightScales: output.scales,
+            bias: output.bias,
+            scale: output.scales.map((s) => Math.fround(S_h * s * (regression ? t.std : 1))),
+        },
+    };
+}
+
+// EXTERNAL MODULE: ./src/common/errors.ts
+var errors = __nccwpck_require__(1922);
+;// CONCATENATED MODULE: ./src/device/int8-forward.ts
+/**
+ * The int8 inference exactly as the exported C runs it (export-c.ts, NAME_predict_int8), so
+ * that both give the same bits. The only float operations are the ones the C performs, each
+ * rounded to float32 with Math.fround: the centring of a raw numeric feature (x − mean), its
+ * scaling into quantisation steps (· multiplier), the int32 accumulator's conversion to float
+ * and the output's dequantisation (· scale). Everything else is integer arithmetic.
+ *
+ * None of these float steps is a product feeding a sum, so a C compiler that contracts
+ * a·b + c into a fused multiply-add cannot change them; they need IEEE 754 single precision
+ * with each assignment rounded to float (FLT_EVAL_METHOD 0, or a compiler that honours C99's
+ * rounding on assignment, as GCC does in its ISO modes).
+ */
+
+
+
+/** A raw value's clamp before it is rounded to an integer (keeps the C's float → int conversion defined). */
+const int8_forward_INPUT_STEP_LIMIT = 512;
+/** The requantised pre-activation's clamp before its zero-point is added (keeps the C's sum in int32). */
+const int8_forward_PRE_ACTIVATION_LIMIT = 255;
+/**
+ * A value in input quantisation steps to its int8 code: clamp t to ±512 (NaN to −512), round
+ * half away from zero through truncation (t − trunc(t) is exact in float32), add Z, clamp.
+ */
+function inputCode(t, zeroPoint) {
+    let v = t;
+    if (!(v > -int8_forward_INPUT_STEP_LIMIT))
+        v = -int8_forward_INPUT_STEP_LIMIT;
+    else if (v > int8_forward_INPUT_STEP_LIMIT)
+        v = int8_forward_INPUT_STEP_LIMIT;
+    let i = Math.trunc(v);
+    const f = Math.fround(v - i);
+    if (f >= 0.5)
+        i++;
+    else if (f <= -0.5)
+        i--;
+    return clamp(zeroPoint + i, -128, 127);
+}
+/** A categorical feature's raw value as a category index: a whole number in [0, n), else −1 (all zeros). */
+function categoryIndex(v, n) {
+    if (v >= 0 && v < n) {
+        const c = Math.trunc(v);
+        if (c === v)
+            return c;
+    }
+    return -1;
+}
+/**
+ * Run the int8 network on `rows` rows of raw features (rows × features, float32 values).
+ * With `trace`, also records the input and hidden codes of every row.
+ */
+function int8Forward(q, features, rows, trace = null) {
+    const F = q.input.features.length;
+    const D = q.inputs;
+    const H = q.width;
+    const K = q.outputs;
+    const b1 = quantize_foldZeroPoint(q.hidden.bias, q.hidden.weights, q.input.zeroPoint);
+    const b2 = quantize_foldZeroPoint(q.output.bias, q.output.weights, q.hidden.activation.zeroPoint);
+    const requant = q.hidden.multiplier.map((multiplier, j) => ({ multiplier, shift: q.hidden.shift[j] }));
+    const zx = q.input.zeroPoint;
+    const za = q.hidden.preActivation.zeroPoint;
+    const xq = new Int32Array(D);
+    const hq = new Int32Array(H);
+    const classes = new Int32Array(rows);
+    const outputs = new Float32Array(rows * K);
+    for (let p = 0; p < rows; p++) {
+        let c = 0;
+        for (let f = 0; f < F; f++) {
+            const v = Math.fround(features[p * F + f]);
+            const e = q.input.features[f];
+            if (e.kind === 'numeric') {
+                const d = Math.fround(v - e.mean);
+                xq[c++] = inputCode(Math.fround(d * e.multiplier), zx);
+            }
+            else {
+                const k = categoryIndex(v, e.categories);
+                for (let j = 0; j < e.categories; j++)
+                    xq[c + j] = j === k ? q.input.one : zx;
+                c += e.categories;
+            }
+        }
+        for (let j = 0; j < H; j++) {
+            const w = q.hidden.weights[j];
+            let acc = b1[j];
+            for (let i = 0; i < D; i++)
+                acc += w[i] * xq[i];
+            const r = clamp(multiplyByQuantizedMultiplier(acc, requant[j]), -int8_forward_PRE_ACTIVATION_LIMIT, int8_forward_PRE_ACTIVATION_LIMIT);
+            const code = clamp(za + r, -128, 127);
+            hq[j] = q.hidden.table[code + 128];
+            if (trace)
+                trace.preActivation[p * H + j] = code;
+        }
+        if (trace) {
+            trace.inputs.set(xq, p * D);
+            trace.hidden.set(hq, p * H);
+        }
+        let best = 0;
+        for (let k = 0; k < K; k++) {
+            const w = q.output.weights[k];
+            let acc = b2[k];
+            for (let j = 0; j < H; j++)
+                acc += w[j] * hq[j];
+            const z = Math.fround(Math.fround(acc) * q.output.scale[k]);
+            outputs[p * K + k] = z;
+            if (z > outputs[p * K + best])
+                best = k;
+        }
+        classes[p] = q.head === 'softmax' ? best : q.head === 'logistic' ? (outputs[p * K] > 0 ? 1 : 0) : 0;
+    }
+    return { classes, outputs };
+}
+/**
+ * Raw CSV rows as the device's raw features (rows × features, float32): a numeric feature's
+ * number, a categorical feature's category index (−1 for a category the model has not seen,
+ * which encodes as all zeros, as encodeRows does).
+ */
+function rawFeatureRows(encoding, rows) {
+    const F = encoding.features.length;
+    const out = new Float32Array(rows.length * F);
+    rows.forEach((row, r) => {
+        encoding.features.forEach((f, i) => {
+            const cell = row[f.name];
+            if (cell === undefined)
+                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
+            const text = cell.trim();
+            if (f.kind === 'categorical') {
+                out[r * F + i] = f.categories.indexOf(text);
+                return;
+            }
+            const v = text === '' ? Number.NaN : Number(text);
+            if (!Number.isFinite(v)) {
+                throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
+            }
+            out[r * F + i] = v;
+        });
+    });
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/int8-check.ts
+
+
+
+const isInt = (v, lo, hi) => Number.isInteger(v) && v >= lo && v <= hi;
+const isF32 = (v) => typeof v === 'number' && Number.isFinite(v) && Math.fround(v) === v;
+const isPositive = (v) => typeof v === 'number' && Number.isFinite(v) && v > 0;
+function list(v, n, ok) {
+    return Array.isArray(v) && v.length === n && v.every(ok);
+}
+function matrix(v, rows, cols, ok) {
+    return Array.isArray(v) && v.length === rows && v.every((r) => list(r, cols, ok));
+}
+const obj = (v) => typeof v === 'object' && v !== null && !Array.isArray(v) ? v : null;
+function quantParams(v) {
+    const p = obj(v);
+    return p !== null && isPositive(p.scale) && isInt(p.zeroPoint, -128, 127);
+}
+function checkInt8Network(value, shape, encoding) {
+    const { inputs: D, width: H, outputs: K } = shape;
+    const q = obj(value);
+    if (q === null)
+        return { key: 'int8', expected: 'an object or null' };
+    if (q.inputs !== D || q.width !== H || q.outputs !== K) {
+        return { key: 'int8', expected: `the shape of the network (${D} inputs, ${H} hidden, ${K} outputs)` };
+    }
+    const input = obj(q.input);
+    if (input === null || !quantParams(input) || !isInt(input.one, -128, 127)) {
+        return { key: 'int8.input', expected: 'a scale, an int8 zero-point and an int8 one-hot code' };
+    }
+    const features = input.features;
+    const fine = Array.isArray(features) &&
+        features.length === encoding.features.length &&
+        features.every((f, i) => {
+            const e = encoding.features[i];
+            const g = obj(f);
+            if (g === null || g.kind !== e.kind)
+                return false;
+            if (e.kind === 'categorical')
+                return g.categories === e.categories.length;
+            return isF32(g.mean) && isF32(g.multiplier);
+        });
+    if (!fine)
+        return { key: 'int8.input.features', expected: 'one entry per feature of the encoding, of its kind' };
+    const hidden = obj(q.hidden);
+    if (hidden === null)
+        return { key: 'int8.hidden', expected: 'an object' };
+    const checks = [
+        ['weights', matrix(hidden.weights, H, D, (w) => isInt(w, -127, 127)), `${H} rows of ${D} integers in [-127, 127]`],
+        ['weightScales', list(hidden.weightScales, H, isPositive), `${H} positive numbers`],
+        ['bias', list(hidden.bias, H, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${H} integers within ±2^30`],
+        ['multiplier', list(hidden.multiplier, H, (m) => isInt(m, 0, 2 ** 31 - 1)), `${H} integers in [0, 2^31)`],
+        ['shift', list(hidden.shift, H, (n) => isInt(n, -MAX_SHIFT, MAX_SHIFT)), `${H} integers in [-31, 31]`],
+        ['preActivation', quantParams(hidden.preActivation), 'a scale and an int8 zero-point'],
+        ['activation', quantParams(hidden.activation), 'a scale and an int8 zero-point'],
+        ['table', list(hidden.table, LUT_ENTRIES, (t) => isInt(t, -128, 127)), `${LUT_ENTRIES} integers in [-128, 127]`],
+    ];
+    for (const [key, ok, expected] of checks)
+        if (!ok)
+            return { key: `int8.hidden.${key}`, expected };
+    const output = obj(q.output);
+    if (output === null)
+        return { key: 'int8.output', expected: 'an object' };
+    const outChecks = [
+        ['weights', matrix(output.weights, K, H, (w) => isInt(w, -127, 127)), `${K} rows of ${H} integers in [-127, 127]`],
+        ['weightScales', list(output.weightScales, K, isPositive), `${K} positive numbers`],
+        ['bias', list(output.bias, K, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${K} integers within ±2^30`],
+        ['scale', list(output.scale, K, isF32), `${K} finite float32 numbers`],
+    ];
+    for (const [key, ok, expected] of outChecks)
+        if (!ok)
+            return { key: `int8.output.${key}`, expected };
+    return null;
+}
+
+;// CONCATENATED MODULE: ./src/device/c-text.ts
+/**
+ * Pieces of C source text: checked identifiers, safe comment text and exact float32 literals.
+ * Names from a repository (features, categories, classes, config paths) are untrusted: they
+ * only ever reach the C inside comments, through `commentText`.
+ */
+
+/** Letters, digits and underscores, a letter first (a leading underscore is reserved in C), at most 31 (C99's portable length). */
+const C_NAME = /^[A-Za-z][A-Za-z0-9_]{0,30}$/;
+/**
+ * The NAME of NAME.h, NAME.c and NAME_predict; a clear error for anything that is not a plain C
+ * identifier (the value shown JSON-escaped, so no control character reaches a log line).
+ */
+function c_text_checkCName(name, key = '--name') {
+    if (!C_NAME.test(name)) {
+        const shown = JSON.stringify(name.length > 40 ? `${name.slice(0, 40)}…` : name).replace(/[\u007f-\u009f\u2028\u2029]/g, '?');
+        throw new UserError(`${key}: expected a C identifier (a letter, then up to 30 letters, digits or underscores), found ${shown}`, { key });
+    }
+    return name;
+}
+/** Longest untrusted text kept in a comment, in characters, before the escapes. */
+const COMMENT_CLIP = 64;
+/**
+ * Untrusted text made safe inside a C block comment: clipped to `max` characters (with "..."),
+ * every character outside printable ASCII, and the backslash, written as <U+XXXX> (no line
+ * break, control character or line splice survives), "??" broken so no trigraph forms, and
+ * every "*\/" and "/*" broken with a space.
+ */
+function c_text_commentText(text, max = COMMENT_CLIP) {
+    const chars = Array.from(text);
+    const clipped = chars.length > max ? [...chars.slice(0, max), '.', '.', '.'] : chars;
+    let out = '';
+    for (const ch of clipped) {
+        const code = ch.codePointAt(0) ?? 0;
+        const printable = code >= 0x20 && code <= 0x7e && ch !== '\\';
+        out += printable ? ch : `<U+${code.toString(16).toUpperCase().padStart(4, '0')}>`;
+    }
+    out = out.replace(/\?\?/g, '?<U+003F>');
+    let before;
+    do {
+        before = out;
+        out = out.replace(/\*\//g, '* /').replace(/\/\*/g, '/ *');
+    } while (out !== before);
+    return out;
+}
+const f32 = new Float32Array(1);
+const u32 = new Uint32Array(f32.buffer);
+/** A float32 value as a C99 hexadecimal float literal with an f suffix: exact by construction. */
+function c_text_floatLiteral(x) {
+    if (!Number.isFinite(x) || Math.fround(x) !== x) {
+        throw new RangeError(`not a finite float32 value: ${x}`);
+    }
+    f32[0] = x;
+    const bits = u32[0];
+    const sign = bits >>> 31 ? '-' : '';
+    const exp = (bits >>> 23) & 0xff;
+    const mant = bits & 0x7fffff;
+    if (exp === 0 && mant === 0)
+        return `${sign}0x0p+0f`;
+    // 23 fraction bits shifted to 24 fill six hex digits.
+    const digits = (mant << 1).toString(16).padStart(6, '0').replace(/0+$/, '');
+    const frac = digits === '' ? '' : `.${digits}`;
+    const e = exp === 0 ? -126 : exp - 127;
+    return `${sign}0x${exp === 0 ? 0 : 1}${frac}p${e < 0 ? '-' : '+'}${Math.abs(e)}f`;
+}
+/** An int8 or int32 constant as a C literal (INT32_MIN would need a cast; the scheme never stores it). */
+function c_text_intLiteral(v) {
+    if (!Number.isInteger(v) || v <= -2147483648 || v > 2147483647)
+        throw new RangeError(`not an int32 literal: ${v}`);
+    return String(v);
+}
+
+;// CONCATENATED MODULE: ./src/device/c-code.ts
+
+function encodeStatements(model, name, int8Path) {
+    const out = [];
+    let offset = 0;
+    let m = 0;
+    model.encoding.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            out.push(int8Path
+                ? `  {\n    const float d = features[${i}] - ${name}_q_in_mean[${m}];\n    const float t = d * ${name}_q_in_mul[${m}];\n    xq[${offset}] = ${name}_input_code(t);\n  }`
+                : `  x[${offset}] = (features[${i}] - ${name}_f_in_mean[${m}]) / ${name}_f_in_std[${m}];`);
+            m++;
+            offset++;
+        }
+        else {
+            const n = f.categories.length;
+            out.push(`  c = ${name}_category(features[${i}], ${n});`, int8Path
+                ? `  for (j = 0; j < ${n}; j++) xq[${offset} + j] = j == c ? ${name}_q_in_one : ${name}_q_in_zero;`
+                : `  for (j = 0; j < ${n}; j++) x[${offset} + j] = j == c ? 1.0f : 0.0f;`);
+            offset += n;
+        }
+    });
+    return out;
+}
+function c_code_helpers(name, hasNumeric, hasCategorical) {
+    const out = [];
+    if (hasCategorical) {
+        out.push(`/* A raw categorical value as a category index: a whole number in [0, n), else -1. */`, `static int ${name}_category(float v, int n) {`, `  if (v >= 0.0f && v < (float)n) {`, `    const int c = (int)v;`, `    if ((float)c == v) return c;`, `  }`, `  return -1;`, `}`, ``);
+    }
+    if (hasNumeric) {
+        out.push(`/* Input steps to an int8 code: clamp, round half away from zero (t - trunc(t) is exact), add the zero-point. */`, `static int8_t ${name}_input_code(float t) {`, `  int32_t i;`, `  float f;`, `  if (!(t > -${INPUT_STEP_LIMIT}.0f)) t = -${INPUT_STEP_LIMIT}.0f;`, `  else if (t > ${INPUT_STEP_LIMIT}.0f) t = ${INPUT_STEP_LIMIT}.0f;`, `  i = (int32_t)t;`, `  f = t - (float)i;`, `  if (f >= 0.5f) i++;`, `  else if (f <= -0.5f) i--;`, `  i += ${name}_q_in_zero;`, `  return (int8_t)(i < -128 ? -128 : i > 127 ? 127 : i);`, `}`, ``);
+    }
+    out.push(`/*`, ` * acc * M with M = m0 * 2^-31 * 2^-shift: a saturating left shift when shift < 0, the fixed-point`, ` * multiply (nudge, then division by 2^31 truncating toward zero) and a rounding right shift (ties`, ` * away from zero) when shift > 0: gemmlowp's SaturatingRoundingDoublingHighMul and RoundingDivideByPOT.`, ` */`, `static int32_t ${name}_requantize(int32_t acc, int32_t m0, int shift) {`, `  int64_t x = acc;`, `  int64_t ab;`, `  int32_t high, mask, remainder, threshold, floor_shift;`, `  if (m0 == 0) return 0;`, `  if (shift < 0) {`, `    x *= (int64_t)1 << -shift;`, `    if (x > INT32_MAX) x = INT32_MAX;`, `    if (x < INT32_MIN) x = INT32_MIN;`, `  }`, `  if (x == INT32_MIN && m0 == INT32_MIN) return INT32_MAX;`, `  ab = x * (int64_t)m0;`, `  high = (int32_t)((ab + (ab >= 0 ? ((int64_t)1 << 30) : (1 - ((int64_t)1 << 30)))) / ((int64_t)1 << 31));`, `  if (shift <= 0) return high;`, `  mask = (int32_t)(((int64_t)1 << shift) - 1);`, `  remainder = (int32_t)((uint32_t)high & (uint32_t)mask);`, `  threshold = (mask >> 1) + (high < 0 ? 1 : 0);`, `  floor_shift = high >= 0 ? (high >> shift) : ~((~high) >> shift);`, `  return floor_shift + (remainder > threshold ? 1 : 0);`, `}`, ``);
+    return out;
+}
+function c_code_floatPath(model, name) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const activation = net.activation === 'tanh'
+        ? 'tanhf(a)'
+        : net.activation === 'logistic'
+            ? '1.0f / (1.0f + expf(-a))'
+            : 'a > 0.0f ? a : 0.0f';
+    const out = [
+        `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  float x[${N}_INPUTS];`,
+        `  float h[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...encodeStatements(model, name, false),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    float a = ${name}_f_b1[j];`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) a += ${name}_f_w1[j][i] * x[i];`,
+        `    h[j] = ${activation};`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    float z = ${name}_f_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) z += ${name}_f_w2[k][j] * h[j];`,
+        `    outputs[k] = z;`,
+        `  }`,
+    ];
+    if (net.head === 'softmax') {
+        out.push(`  {`, `    float m = outputs[0], s = 0.0f;`, `    int best = 0;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > m) m = outputs[k];`, `    for (k = 0; k < ${N}_OUTPUTS; k++) {`, `      outputs[k] = expf(outputs[k] - m);`, `      s += outputs[k];`, `    }`, `    for (k = 0; k < ${N}_OUTPUTS; k++) outputs[k] /= s;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `    return best;`, `  }`);
+    }
+    else if (net.head === 'logistic') {
+        out.push(`  outputs[0] = 1.0f / (1.0f + expf(-outputs[0]));`, `  return outputs[0] > 0.5f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  outputs[0] = outputs[0] * ${name}_f_target[1] + ${name}_f_target[0];`, `  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+function c_code_int8Path(model, name) {
+    const N = name.toUpperCase();
+    const head = model.network.head;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const out = [
+        `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  int8_t xq[${N}_INPUTS];`,
+        `  int8_t hq[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...(head === 'softmax' ? [`  int best = 0;`] : []),
+        ...encodeStatements(model, name, true),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    int32_t acc = ${name}_q_b1[j], r;`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) acc += (int32_t)${name}_q_w1[j][i] * (int32_t)xq[i];`,
+        `    r = ${name}_requantize(acc, ${name}_q_m0[j], ${name}_q_shift[j]);`,
+        `    if (r < -${PRE_ACTIVATION_LIMIT}) r = -${PRE_ACTIVATION_LIMIT};`,
+        `    else if (r > ${PRE_ACTIVATION_LIMIT}) r = ${PRE_ACTIVATION_LIMIT};`,
+        `    r += ${name}_q_act_zero;`,
+        `    if (r < -128) r = -128;`,
+        `    else if (r > 127) r = 127;`,
+        `    hq[j] = ${name}_q_lut[r + 128];`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    int32_t acc = ${name}_q_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) acc += (int32_t)${name}_q_w2[k][j] * (int32_t)hq[j];`,
+        `    outputs[k] = (float)acc * ${name}_q_out_scale[k];`,
+        `  }`,
+    ];
+    if (head === 'softmax') {
+        out.push(`  for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `  return best;`);
+    }
+    else if (head === 'logistic') {
+        out.push(`  return outputs[0] > 0.0f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/export-c.ts
+/**
+ * Firmware export: a model as C99 source, NAME.h and NAME.c, with a float32 and an int8 path.
+ * No dynamic allocation, nothing beyond the C standard library (math.h on the float path).
+ * The constant objects are exactly those cost.ts counts (`storedObjects`), and the int8 path
+ * does exactly what int8-forward.ts simulates, operation for operation.
+ */
+
+
+
+
+
+const DEFAULT_C_NAME = 'nb_model';
+const q = (s) => `"${commentText(s)}"`;
+function checkModel(model) {
+    const net = model.network;
+    const int8 = model.int8;
+    if (int8 === null) {
+        throw new UserError('model: no int8 network (key "int8" is null); write the model again with this version');
+    }
+    const values = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!values.every(Number.isFinite))
+        throw new UserError('model: network weights must be finite numbers');
+    if (int8.inputs !== net.inputs || int8.width !== net.width || int8.outputs !== net.outputs) {
+        throw new UserError('model: the int8 network does not have the shape of the float network', { key: 'int8' });
+    }
+    return int8;
+}
+function headerText(model, name, p) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const enc = model.encoding;
+    const classes = enc.target.classes ?? [];
+    const regression = model.task === 'regression';
+    const act = net.activation;
+    const lines = [
+        `/*`,
+        ` * ${name}.h: a neural network for the device, written by neuron-budget ${commentText(p.toolVersion, 32)}.`,
+        ` * Do not edit: export it again from the model file instead.`,
+        ` *`,
+        ` * Data fingerprint: ${commentText(p.dataFingerprint, 80)}`,
+        ` * Config: ${commentText(p.config, 120)}`,
+        ` * Network: ${net.inputs} inputs after encoding, ${net.width} hidden neurons (${act}), ${net.outputs} output${net.outputs === 1 ? '' : 's'} (${net.head} head).`,
+        ` *`,
+        ` * features[] holds the raw values, in this order:`,
+    ];
+    enc.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            lines.push(` *   [${i}] ${q(f.name)}: a number, standardised on the device`);
+        }
+        else {
+            lines.push(` *   [${i}] ${q(f.name)}: the category's index, one-hot encoded on the device:`);
+            f.categories.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        }
+    });
+    if (enc.features.some((f) => f.kind === 'categorical')) {
+        lines.push(` * A category index that is not a whole number in range encodes as no category (all zeros).`);
+    }
+    lines.push(` *`);
+    if (regression) {
+        lines.push(` * Both functions return 0 and write the prediction of ${q(enc.target.name)}, in its own units, to outputs[0].`);
+    }
+    else {
+        lines.push(` * Both functions return the class index of ${q(enc.target.name)}:`);
+        classes.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        lines.push(` * ${name}_predict: the float32 network; outputs[] gets ${net.head === 'softmax' ? 'the probability of each class, in class order' : 'the probability of class 1'}.`, ` * ${name}_predict_int8: the int8 network; outputs[] gets the dequantised logit${net.outputs === 1 ? ' of class 1 (class 1 when it is above 0)' : ' of each class (the largest wins)'}.`);
+    }
+    lines.push(` * The int8 path is integer arithmetic apart from the input scaling and the output's dequantisation;`, ` * its outputs equal neuron-budget's simulation of it bit for bit on IEEE 754 single precision with`, ` * each assignment rounded to float (FLT_EVAL_METHOD 0, or GCC in an ISO mode such as -std=c99).`, ` * The float path runs the trained network in float32 arithmetic; it needs tanhf and expf (link -lm).`, ` */`, `#ifndef ${N}_H`, `#define ${N}_H`, ``, `#ifdef __cplusplus`, `extern "C" {`, `#endif`, ``, `#define ${N}_FEATURES ${enc.features.length}`, `#define ${N}_OUTPUTS ${net.outputs}`, `#define ${N}_INPUTS ${net.inputs}`, `#define ${N}_HIDDEN ${net.width}`);
+    if (!regression)
+        lines.push(`#define ${N}_CLASSES ${classes.length}`);
+    lines.push(``, `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, ``, `#ifdef __cplusplus`, `}`, `#endif`, ``, `#endif`, ``);
+    return lines.join('\n');
+}
+/** Values wrapped into lines of at most ~100 characters, indented. */
+function wrap(values, indent) {
+    const lines = [];
+    let line = '';
+    for (const v of values) {
+        if (line !== '' && line.length + v.length + 2 > 100 - indent.length) {
+            lines.push(`${indent}${line},`);
+            line = '';
+        }
+        line = line === '' ? v : `${line}, ${v}`;
+    }
+    if (line !== '')
+        lines.push(`${indent}${line}`);
+    return lines.join('\n');
+}
+function literal(type, v) {
+    return type === 'float' ? floatLiteral(v) : intLiteral(v);
+}
+function declare(name, o, values) {
+    const decl = `static const ${o.type} ${name}_${o.suffix}`;
+    const flat = values.flat();
+    if (flat.length !== o.count)
+        throw new Error(`internal: ${o.suffix} has ${flat.length} values, expected ${o.count}`);
+    const cells = (row, indent) => wrap(row.map((v) => literal(o.type, v)), indent);
+    if (o.scalar)
+        return `${decl} = ${literal(o.type, flat[0])};`;
+    if (isMatrix(values)) {
+        const rows = values.map((r) => `  {\n${cells(r, '    ')}\n  }`);
+        return `${decl}[${values.length}][${values[0].length}] = {\n${rows.join(',\n')}\n};`;
+    }
+    return `${decl}[${o.count}] = {\n${cells(flat, '  ')}\n};`;
+}
+function isMatrix(values) {
+    return Array.isArray(values[0]);
+}
+/** The values of each stored object, keyed by suffix. */
+function objectValues(model, int8) {
+    const net = model.network;
+    const enc = model.encoding;
+    const numeric = enc.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const qNumeric = int8.input.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const f = (v) => Math.fround(v);
+    const rows = (m) => m.map((r) => r.map(f));
+    return {
+        f_in_mean: numeric.map((e) => f(e.mean)),
+        f_in_std: numeric.map((e) => f(e.std > 0 ? e.std : 1)),
+        f_w1: rows(net.hiddenWeights),
+        f_b1: net.hiddenBias.map(f),
+        f_w2: rows(net.outputWeights),
+        f_b2: net.outputBias.map(f),
+        f_target: [f(enc.target.mean), f(enc.target.std)],
+        q_in_mean: qNumeric.map((e) => e.mean),
+        q_in_mul: qNumeric.map((e) => e.multiplier),
+        q_in_zero: [int8.input.zeroPoint],
+        q_in_one: [int8.input.one],
+        q_w1: int8.hidden.weights,
+        q_b1: foldZeroPoint(int8.hidden.bias, int8.hidden.weights, int8.input.zeroPoint),
+        q_m0: int8.hidden.multiplier,
+        q_shift: int8.hidden.shift,
+        q_act_zero: [int8.hidden.preActivation.zeroPoint],
+        q_lut: int8.hidden.table,
+        q_w2: int8.output.weights,
+        q_b2: foldZeroPoint(int8.output.bias, int8.output.weights, int8.hidden.activation.zeroPoint),
+        q_out_scale: int8.output.scale,
+    };
+}
+function sourceText(model, int8, name, p) {
+    const stored = storedObjects(costShapeOf(model.network, model.encoding));
+    const values = objectValues(model, int8);
+    const numeric = model.encoding.features.some((f) => f.kind === 'numeric');
+    const categorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const s = int8.hidden;
+    return [
+        `/*`,
+        ` * ${name}.c: written by neuron-budget ${commentText(p.toolVersion, 32)}; see ${name}.h. Do not edit.`,
+        ` *`,
+        ` * int8 scheme: input scale ${int8.input.scale.toPrecision(6)}, zero-point ${int8.input.zeroPoint};`,
+        ` * pre-activation scale ${s.preActivation.scale.toPrecision(6)}, zero-point ${s.preActivation.zeroPoint};`,
+        ` * hidden activation scale ${s.activation.scale.toPrecision(6)}, zero-point ${s.activation.zeroPoint};`,
+        ` * symmetric per-neuron int8 weights, int32 biases (zero-points folded in), ${model.network.activation} by table.`,
+        ` */`,
+        `#include "${name}.h"`,
+        `#include <math.h>`,
+        `#include <stdint.h>`,
+        ``,
+        `/* float32 network */`,
+        ...stored.float32.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        `/* int8 network */`,
+        ...stored.int8.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        ...helpers(name, numeric, categorical),
+        ...floatPath(model, name),
+        ...int8Path(model, name),
+    ].join('\n');
+}
+/** NAME.h and NAME.c for `model`; `name` must be a C identifier. */
+function exportC(model, name, provenance) {
+    checkCName(name);
+    const int8 = checkModel(model);
+    return {
+        headerFile: `${name}.h`,
+        sourceFile: `${name}.c`,
+        header: headerText(model, name, provenance),
+        source: sourceText(model, int8, name, provenance),
+    };
+}
+
+;// CONCATENATED MODULE: ./src/device/index.ts
+/**
+ * Device reality: what a network costs on a microcontroller, its int8 form, and firmware
+ * source for both forms. Pure functions; no I/O.
+ */
+
+
+
+
+
+
+
+
+
+/***/ }),
+
+/***/ 2591:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -37357,151 +38490,10 @@ function getOctokit(token, options, ...additionalPlugins) {
 const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
 ;// CONCATENATED MODULE: external "node:path"
 const external_node_path_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:path");
-;// CONCATENATED MODULE: ./src/common/escape.ts
-/**
- * The one sanitiser for strings from the repository (column names, class labels, categories,
- * paths, YAML values, and sentences that quote them). A data file is written by whoever opens
- * the pull request, so its strings are hostile until shown otherwise.
- *
- * - `escapeText`: for logs, the terminal and messages. Control characters (C0, DEL, C1) and
- *   invisible or bidirectional formatting characters are shown escaped (`\n`, `\x1b`,
- *   `\u202e`), never raw, so a string can neither start a line nor move the cursor; and `::`
- *   is broken up, so even a line that starts with a repository string cannot be read by the
- *   Actions runner as a workflow command (`::error …::`).
- * - `quote`: a value inside a message: clipped, escaped, in double quotes.
- * - `escapeMarkdown`: for the pull-request comment and the job summary.
- * - `clip`: shortens a string to a bounded number of characters with an ellipsis.
- */
-/** Most characters of one repository string shown on any screen. */
-const MAX_SHOWN = 200;
-/** Most characters of one value quoted inside a message. */
-const MAX_QUOTED = 80;
-const ELLIPSIS = '…';
-const ZWSP = '&#8203;';
-/** Invisible and bidirectional formatting characters that could disguise text. */
-const INVISIBLE = /[\u00ad\u061c\u180e\u200b-\u200f\u2028\u2029\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff]/u;
-const SHORT_ESCAPES = { 0x0a: '\\n', 0x0d: '\\r', 0x09: '\\t' };
-/** At most `max` characters (code points), the last of them an ellipsis when cut. */
-function clip(s, max = MAX_SHOWN) {
-    if (s.length <= max)
-        return s;
-    const chars = Array.from(s.slice(0, max + 1));
-    return chars.length > max ? `${chars.slice(0, max - 1).join('')}${ELLIPSIS}` : s;
-}
-function hex(c, width) {
-    return c.toString(16).padStart(width, '0');
-}
-/** Is this code point one that `escapeText` shows escaped? */
-function needsEscape(c, ch) {
-    return c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch);
-}
-/** Text for logs, the terminal and messages: clipped, control and invisible characters escaped, `::` broken. */
-function escapeText(raw, max = MAX_SHOWN) {
-    const s = clip(raw, max);
-    let out = '';
-    for (const ch of s) {
-        const c = ch.codePointAt(0) ?? 0;
-        if (!needsEscape(c, ch))
-            out += ch;
-        else if (SHORT_ESCAPES[c] !== undefined)
-            out += SHORT_ESCAPES[c];
-        else if (c < 0x100)
-            out += `\\x${hex(c, 2)}`;
-        else
-            out += `\\u${hex(c, 4)}`;
-    }
-    // The runner reads a line that starts with "::" as a command; "::" never survives whole.
-    return out.replace(/::/g, ':\\x3a');
-}
-/** A repository value inside a message: `"name"`, clipped and escaped. */
-function quote(raw, max = MAX_QUOTED) {
-    return `"${escapeText(raw, max).replace(/"/g, '\\"')}"`;
-}
-/** Whole lines of text (our own line breaks kept), each escaped as `escapeText` does. */
-function escapeLines(text) {
-    return text
-        .split('\n')
-        .map((line) => escapeText(line, Number.MAX_SAFE_INTEGER))
-        .join('\n');
-}
-/** Space , ; ' " / % = ? */
-const PLAIN = new Set([0x20, 0x2c, 0x3b, 0x27, 0x22, 0x2f, 0x25, 0x3d, 0x3f]);
-/**
- * Markdown: every ASCII character other than letters, digits, space and , ; ' " / % = ?
- * (which mean nothing to Markdown in the middle of a line, where these strings always go)
- * becomes a numeric character reference, which GitHub-flavoured Markdown shows as literal
- * text and never reads as syntax (emphasis, links, images, HTML, code, table pipes,
- * headings, lists). GitHub turns some plain text into links after rendering (@-mentions,
- * #123 references, URLs, www. addresses, :emoji:; GitHub behaviour as we know it, not
- * checked against GitHub here), so a zero-width space follows every "@", "#" and ":" and
- * precedes the dot of "www.", which breaks those patterns without changing what a reader
- * sees. Line breaks become spaces, so a string never leaves its line or table cell.
- */
-function escapeMarkdown(raw, max = MAX_SHOWN) {
-    const s = clip(raw, max);
-    let out = '';
-    for (let i = 0; i < s.length; i++) {
-        const c = s.charCodeAt(i);
-        if ((c >= 0x30 && c <= 0x39) || (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a) || PLAIN.has(c)) {
-            out += s[i];
-        }
-        else if (c === 0x0a || c === 0x0d || c === 0x09) {
-            out += ' ';
-        }
-        else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
-            out += '&#65533;';
-        }
-        else if (c < 0x80) {
-            if (c === 0x2e && /www$/i.test(s.slice(Math.max(0, i - 3), i)))
-                out += ZWSP;
-            out += `&#${c};`;
-            if (c === 0x40 || c === 0x23 || c === 0x3a)
-                out += ZWSP;
-        }
-        else if (INVISIBLE.test(s[i])) {
-            out += '&#65533;';
-        }
-        else if (c === 0xff20 || c === 0xfe6b) {
-            // Full-width and small commercial at: GitHub does not mention on them, but keep them inert anyway.
-            out += `&#${c};${ZWSP}`;
-        }
-        else {
-            out += s[i];
-        }
-    }
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/common/errors.ts
-/**
- * An error the user caused (bad config, bad data, bad arguments). The shells print
- * `message` without a stack trace, exit with code 2, and (in the action) turn
- * `file`/`line`/`column` into an error annotation.
- *
- * Messages quote repository strings (column names, values, paths), so the whole message is
- * passed through the one sanitiser here: whoever builds a message cannot forget it.
- */
-
-/** Longest message shown; the values inside are clipped where they are quoted, this bounds the rest. */
-const MAX_MESSAGE = 2000;
-class errors_UserError extends Error {
-    file;
-    line;
-    column;
-    key;
-    constructor(message, where = {}) {
-        super(escapeText(message, MAX_MESSAGE));
-        this.name = 'UserError';
-        this.file = where.file;
-        this.line = where.line;
-        this.column = where.column;
-        this.key = where.key;
-    }
-}
-function isUserError(e) {
-    return e instanceof errors_UserError;
-}
-
+// EXTERNAL MODULE: ./src/common/escape.ts
+var common_escape = __nccwpck_require__(4678);
+// EXTERNAL MODULE: ./src/common/errors.ts
+var errors = __nccwpck_require__(1922);
 ;// CONCATENATED MODULE: ./src/common/exit-codes.ts
 /** Exit codes, the same for the command line and the action. */
 const EXIT = {
@@ -37692,7 +38684,7 @@ function checkInside(root, baseDir, p) {
 function resolveInside(root, baseDir, p, key) {
     const result = checkInside(root, baseDir, p);
     if (!result.ok)
-        throw new errors_UserError(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
+        throw new errors/* UserError */.yo(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
     return result.path;
 }
 
@@ -37700,6 +38692,58 @@ function resolveInside(root, baseDir, p, key) {
 var format = __nccwpck_require__(6950);
 // EXTERNAL MODULE: ./src/common/metric.ts
 var common_metric = __nccwpck_require__(8457);
+;// CONCATENATED MODULE: ./src/common/suggest.ts
+/** "Did you mean …?" help for misspelt names (config keys, flags, commands, columns). */
+/** Levenshtein distance (insert, delete, substitute; each costs 1). @testOnly */
+function editDistance(a, b) {
+    if (a === b)
+        return 0;
+    if (a.length === 0)
+        return b.length;
+    if (b.length === 0)
+        return a.length;
+    let previous = new Array(b.length + 1);
+    let current = new Array(b.length + 1);
+    for (let j = 0; j <= b.length; j++)
+        previous[j] = j;
+    for (let i = 1; i <= a.length; i++) {
+        current[0] = i;
+        for (let j = 1; j <= b.length; j++) {
+            const substitution = previous[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1);
+            current[j] = Math.min(previous[j] + 1, current[j - 1] + 1, substitution);
+        }
+        [previous, current] = [current, previous];
+    }
+    return previous[b.length];
+}
+/**
+ * The candidate closest to `name` (case-insensitive, `_` and `-` treated alike), or null
+ * when none is close enough to be a plausible typo: at most a third of the longer name's
+ * letters may differ, but always two (a rule of thumb, no source); ties keep the first candidate.
+ */
+function nearest(name, candidates) {
+    const norm = (s) => s.toLowerCase().replace(/_/g, '-');
+    const wanted = norm(name);
+    let best = null;
+    let bestDistance = Infinity;
+    for (const candidate of candidates) {
+        const d = editDistance(wanted, norm(candidate));
+        if (d < bestDistance) {
+            best = candidate;
+            bestDistance = d;
+        }
+    }
+    if (best === null)
+        return null;
+    const limit = Math.max(2, Math.ceil(Math.max(wanted.length, best.length) / 3));
+    return bestDistance <= limit ? best : null;
+}
+/** " (did you mean `x`?)" or "" when nothing is close. */
+function didYouMean(name, candidates) {
+    const match = nearest(name, candidates);
+    return match === null ? '' : ` (did you mean "${match}"?)`;
+}
+
 ;// CONCATENATED MODULE: ./src/config/spec.ts
 /**
  * Every config key the validator accepts, with its rule, default and description, as data.
@@ -37707,13 +38751,13 @@ var common_metric = __nccwpck_require__(8457);
  * so the two cannot drift apart.
  */
 /** Marks a key the user must give. */
-const REQUIRED = Symbol('required');
+const spec_REQUIRED = Symbol('required');
 /** Marks a key whose default depends on another key (the description says how). */
-const DERIVED = Symbol('derived');
+const spec_DERIVED = Symbol('derived');
 /** Largest width the search may try: the gate is for small networks on small devices. */
 const WIDTH_LIMIT = 1024;
 const EPOCH_LIMIT = 10_000_000;
-const CONFIG_SPEC = [
+const spec_CONFIG_SPEC = [
     {
         name: 'data',
         required: true,
@@ -37723,14 +38767,14 @@ const CONFIG_SPEC = [
                 name: 'path',
                 changesResult: false,
                 rule: { kind: 'path' },
-                default: REQUIRED,
+                default: spec_REQUIRED,
                 description: 'CSV file with a header row, relative to this config file. Must stay inside the workspace.',
             },
             {
                 name: 'target',
                 changesResult: true,
                 rule: { kind: 'text' },
-                default: REQUIRED,
+                default: spec_REQUIRED,
                 description: 'Column to predict.',
             },
             {
@@ -37765,7 +38809,7 @@ const CONFIG_SPEC = [
                 name: 'judging',
                 changesResult: true,
                 rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
-                default: DERIVED,
+                default: spec_DERIVED,
                 description: 'Fraction of rows (per class) held out to judge whether a network meets the target; they never steer training. Default: 0.2 (at most half of what validation leaves), or 0 when data.validation is 0 (then the target is judged on the training rows). 0 with validation above 0 judges on the validation rows, which is optimistic.',
             },
             {
@@ -37800,15 +38844,29 @@ const CONFIG_SPEC = [
                 name: 'metric',
                 changesResult: true,
                 rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
-                default: DERIVED,
+                default: spec_DERIVED,
                 description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
             },
             {
                 name: 'threshold',
                 changesResult: true,
                 rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
-                default: REQUIRED,
+                default: spec_REQUIRED,
                 description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
+            },
+            {
+                name: 'precision',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['float32', 'int8'] },
+                default: 'float32',
+                description: 'Which form of a network must meet the target: float32, or int8 (its post-training quantised form, as the exported C runs it).',
+            },
+            {
+                name: 'min-recall',
+                changesResult: true,
+                rule: { kind: 'recall', nullable: true },
+                default: null,
+                description: 'Classification: the least recall a network needs besides the metric, for every class (a number) or per named class (a mapping, e.g. bearing_wear: 0.9). null: none.',
             },
         ],
     },
@@ -37965,6 +39023,27 @@ const CONFIG_SPEC = [
                 description: 'Hard device budget: a smallest adequate width above it fails. null: no budget.',
             },
             {
+                name: 'max-flash-bytes',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: 1_000_000_000, nullable: true },
+                default: null,
+                description: 'Device budget: flash bytes for the weights of the witness in target.precision form (as the exported C stores them); above it fails. null: no budget.',
+            },
+            {
+                name: 'max-ram-bytes',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: 1_000_000_000, nullable: true },
+                default: null,
+                description: 'Device budget: RAM bytes for the activations of one inference in target.precision form; above it fails. null: no budget.',
+            },
+            {
+                name: 'max-macs',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: 1_000_000_000_000, nullable: true },
+                default: null,
+                description: 'Device budget: multiply-accumulates per inference; above it fails. null: no budget.',
+            },
+            {
                 name: 'allowed-growth',
                 changesResult: false,
                 rule: { kind: 'integer', min: 0, max: WIDTH_LIMIT },
@@ -37982,6 +39061,10 @@ const CONFIG_SPEC = [
         ],
     },
 ];
+
+;// CONCATENATED MODULE: ./src/config/keys.ts
+/** What the key list (spec.ts) implies: how a rule reads in a message, field names, defaults. */
+
 /** "an integer from 1 to 1000", "one of tanh, logistic, relu", … for messages. */
 function describeRule(rule) {
     const orNull = 'nullable' in rule && rule.nullable ? ', or null' : '';
@@ -38008,6 +39091,8 @@ function describeRule(rule) {
             return 'a path relative to the config file';
         case 'text-list':
             return `a list of column names${rule.minItems > 0 ? ` (at least ${rule.minItems})` : ''}${orNull}`;
+        case 'recall':
+            return `a recall above 0 and at most 1, or a mapping of class labels to such recalls${orNull}`;
     }
 }
 /** `min-width` → `minWidth`: how the typed config names a key. */
@@ -38047,10 +39132,11 @@ function derivedJudging(validation) {
 
 
 
+
 function buildConfig(reader, written, file, root) {
     const baseDir = (0,external_node_path_namespaceObject.dirname)(file);
     const sections = {};
-    for (const spec of CONFIG_SPEC) {
+    for (const spec of spec_CONFIG_SPEC) {
         const found = written.values.get(spec.name) ?? new Map();
         const section = {};
         for (const key of spec.keys) {
@@ -38098,12 +39184,12 @@ function checkRules(reader, written, config) {
     ]) {
         if (list?.includes(data.target)) {
             const role = name === 'features' ? 'a feature' : 'ignored';
-            throw reader.valueError(at('data', name), `lists the target column ${quote(data.target)}; the target cannot also be ${role}`);
+            throw reader.valueError(at('data', name), `lists the target column ${(0,common_escape/* quote */.hD)(data.target)}; the target cannot also be ${role}`);
         }
     }
     const both = data.features?.find((f) => data.ignore.includes(f));
     if (both !== undefined) {
-        throw reader.valueError(at('data', 'ignore'), `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`);
+        throw reader.valueError(at('data', 'ignore'), `column ${(0,common_escape/* quote */.hD)(both)} is both in data.features and in data.ignore; keep it in one`);
     }
     if (data.judging === undefined)
         data.judging = derivedJudging(data.validation);
@@ -38158,58 +39244,6 @@ function checkThreshold(reader, found, metric, threshold) {
 
 // EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
 var dist = __nccwpck_require__(8815);
-;// CONCATENATED MODULE: ./src/common/suggest.ts
-/** "Did you mean …?" help for misspelt names (config keys, flags, commands, columns). */
-/** Levenshtein distance (insert, delete, substitute; each costs 1). @testOnly */
-function editDistance(a, b) {
-    if (a === b)
-        return 0;
-    if (a.length === 0)
-        return b.length;
-    if (b.length === 0)
-        return a.length;
-    let previous = new Array(b.length + 1);
-    let current = new Array(b.length + 1);
-    for (let j = 0; j <= b.length; j++)
-        previous[j] = j;
-    for (let i = 1; i <= a.length; i++) {
-        current[0] = i;
-        for (let j = 1; j <= b.length; j++) {
-            const substitution = previous[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1);
-            current[j] = Math.min(previous[j] + 1, current[j - 1] + 1, substitution);
-        }
-        [previous, current] = [current, previous];
-    }
-    return previous[b.length];
-}
-/**
- * The candidate closest to `name` (case-insensitive, `_` and `-` treated alike), or null
- * when none is close enough to be a plausible typo: at most a third of the longer name's
- * letters may differ, but always two (a rule of thumb, no source); ties keep the first candidate.
- */
-function nearest(name, candidates) {
-    const norm = (s) => s.toLowerCase().replace(/_/g, '-');
-    const wanted = norm(name);
-    let best = null;
-    let bestDistance = Infinity;
-    for (const candidate of candidates) {
-        const d = editDistance(wanted, norm(candidate));
-        if (d < bestDistance) {
-            best = candidate;
-            bestDistance = d;
-        }
-    }
-    if (best === null)
-        return null;
-    const limit = Math.max(2, Math.ceil(Math.max(wanted.length, best.length) / 3));
-    return bestDistance <= limit ? best : null;
-}
-/** " (did you mean `x`?)" or "" when nothing is close. */
-function didYouMean(name, candidates) {
-    const match = nearest(name, candidates);
-    return match === null ? '' : ` (did you mean "${match}"?)`;
-}
-
 ;// CONCATENATED MODULE: ./src/config/reader.ts
 /**
  * The YAML side of the config: parses the text once, walks it against the key list in spec.ts,
@@ -38217,6 +39251,7 @@ function didYouMean(name, candidates) {
  * the key, and says what was expected and what was found. Where each key is written is kept, so
  * errors found later (after the data are read) still point at the right line.
  */
+
 
 
 
@@ -38252,15 +39287,15 @@ class ConfigReader {
         const sections = new Map();
         for (const pair of top.items) {
             const name = this.keyName(pair, '');
-            const spec = CONFIG_SPEC.find((s) => s.name === name);
+            const spec = spec_CONFIG_SPEC.find((s) => s.name === name);
             if (!spec) {
-                const names = CONFIG_SPEC.map((s) => s.name);
+                const names = spec_CONFIG_SPEC.map((s) => s.name);
                 throw this.error(pair.key, name, `unknown section${didYouMean(name, names)}; the sections are ${names.join(', ')}`);
             }
             sections.set(name, { node: this.deref(pair.value), keyNode: pair.key, key: name });
         }
         const values = new Map();
-        for (const spec of CONFIG_SPEC)
+        for (const spec of spec_CONFIG_SPEC)
             values.set(spec.name, this.readSection(spec, sections.get(spec.name)));
         return { sections, values };
     }
@@ -38289,7 +39324,7 @@ class ConfigReader {
         }
         if (first.code === 'DUPLICATE_KEY') {
             const key = /^\s*["']?([^"':\n]*)/.exec(this.text.slice(offset))?.[1]?.trim() ?? '';
-            throw this.errorAt(offset, null, `key ${quote(key)} appears twice in the same mapping; keep one`);
+            throw this.errorAt(offset, null, `key ${(0,common_escape/* quote */.hD)(key)} appears twice in the same mapping; keep one`);
         }
         const reason = first.message
             .replace(/ at line \d+, column \d+[\s\S]*$/, '')
@@ -38311,22 +39346,29 @@ class ConfigReader {
                     return;
                 if (!CORE_TAGS.has(tag)) {
                     const shown = tag.startsWith('tag:yaml.org,2002:') ? `!!${tag.slice('tag:yaml.org,2002:'.length)}` : tag;
-                    throw this.error(node, null, `unsupported YAML tag ${quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`);
+                    throw this.errorAt(this.tagOffset(node), null, `unsupported YAML tag ${(0,common_escape/* quote */.hD)(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`);
                 }
                 if ((0,dist/* isScalar */.jn)(node) && NUMBER_TAGS.has(tag) && typeof node.value === 'string') {
                     const text = node.value.trim();
                     if (!DECIMAL.test(text)) {
-                        throw this.error(node, null, `the tag ${tag.endsWith('int') ? '!!int' : '!!float'} needs a number, found ${quote(node.value)}`);
+                        throw this.error(node, null, `the tag ${tag.endsWith('int') ? '!!int' : '!!float'} needs a number, found ${(0,common_escape/* quote */.hD)(node.value)}`);
                     }
                     node.value = Number(text);
                 }
             },
         });
     }
+    /** Where a node's tag is written (the parser's range starts at the value, after the tag). */
+    tagOffset(node) {
+        const start = node.range?.[0] ?? 0;
+        const lineStart = this.text.lastIndexOf('\n', start - 1) + 1;
+        const bang = this.text.lastIndexOf('!', start);
+        return bang >= lineStart ? (this.text[bang - 1] === '!' ? bang - 1 : bang) : start;
+    }
     errorAt(offset, key, message) {
         const { line, col } = this.lines.linePos(Math.min(offset, this.text.length));
         const prefix = key === null ? '' : `${key}: `;
-        return new errors_UserError(`${this.shown}:${line}:${col}: ${prefix}${message}`, {
+        return new errors/* UserError */.yo(`${this.shown}:${line}:${col}: ${prefix}${message}`, {
             file: this.shown,
             line,
             column: col,
@@ -38366,7 +39408,7 @@ class ConfigReader {
             if (v === null)
                 return node.source === '' || node.source === undefined ? 'nothing' : `null`;
             if (typeof v === 'string')
-                return quote(v);
+                return (0,common_escape/* quote */.hD)(v);
             if (typeof v === 'number' || typeof v === 'boolean' || typeof v === 'bigint')
                 return String(v);
         }
@@ -38377,7 +39419,7 @@ class ConfigReader {
         const out = new Map();
         if (!section || section.node === null || ((0,dist/* isScalar */.jn)(section.node) && section.node.value === null)) {
             if (spec.required) {
-                const missing = spec.keys.filter((k) => k.default === REQUIRED).map((k) => `${spec.name}.${k.name}`);
+                const missing = spec.keys.filter((k) => k.default === spec_REQUIRED).map((k) => `${spec.name}.${k.name}`);
                 throw this.error(section?.keyNode ?? null, spec.name, `section is required (with ${missing.join(' and ')}); ${spec.description}`);
             }
             return out;
@@ -38395,7 +39437,7 @@ class ConfigReader {
             out.set(name, { node: this.deref(pair.value), keyNode: pair.key, key: full });
         }
         for (const key of spec.keys) {
-            if (key.default === REQUIRED && !out.has(key.name)) {
+            if (key.default === spec_REQUIRED && !out.has(key.name)) {
                 throw this.error(section.keyNode, `${spec.name}.${key.name}`, `required key is missing (${key.description})`);
             }
         }
@@ -38404,11 +39446,34 @@ class ConfigReader {
     /** The value of one key checked against its rule, or its default (undefined for required and derived keys). */
     value(found, spec) {
         if (!found) {
-            if (spec.default === REQUIRED || spec.default === DERIVED)
+            if (spec.default === spec_REQUIRED || spec.default === spec_DERIVED)
                 return undefined;
             return Array.isArray(spec.default) ? [...spec.default] : spec.default;
         }
         return this.checkRule(found, spec);
+    }
+    /** target.min-recall: one floor for every class, or floors for named classes. */
+    recallRule(found, node, expected) {
+        const floor = (value) => typeof value === 'number' && value > 0 && value <= 1;
+        if (node !== null && (0,dist/* isScalar */.jn)(node)) {
+            if (!floor(node.value))
+                throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
+            return { every: node.value };
+        }
+        if (node === null || !(0,dist/* isMap */.jh)(node) || node.items.length === 0) {
+            throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
+        }
+        const classes = [];
+        for (const pair of node.items) {
+            const label = this.keyName(pair, `${found.key}.`);
+            const value = this.deref(pair.value);
+            const v = value !== null && (0,dist/* isScalar */.jn)(value) ? value.value : undefined;
+            if (!floor(v)) {
+                throw this.error(value ?? pair.key, `${found.key}.${label}`, `expected a recall above 0 and at most 1, found ${this.describe(value)}`);
+            }
+            classes.push({ label, min: v });
+        }
+        return { classes };
     }
     checkRule(found, spec) {
         const rule = spec.rule;
@@ -38475,12 +39540,14 @@ class ConfigReader {
                         throw this.error(item ?? node, found.key, `expected column names as text, found ${this.describe(item)}${hint}`);
                     }
                     if (seen.has(v))
-                        throw this.error(item, found.key, `column ${quote(v)} is listed twice`);
+                        throw this.error(item, found.key, `column ${(0,common_escape/* quote */.hD)(v)} is listed twice`);
                     seen.add(v);
                     out.push(v);
                 }
                 return out;
             }
+            case 'recall':
+                return this.recallRule(found, node, expected);
         }
     }
 }
@@ -38501,6 +39568,7 @@ class ConfigReader {
 
 
 
+
 /** A config is a few dozen lines; anything this big is not one (and parsing it could take minutes). @testOnly */
 const MAX_CONFIG_BYTES = 256 * 1024;
 async function loadConfig(configPath, root) {
@@ -38510,20 +39578,20 @@ async function loadConfig(configPath, root) {
     try {
         const info = await (0,promises_namespaceObject.stat)(file);
         if (info.isFile() && info.size > MAX_CONFIG_BYTES) {
-            throw new errors_UserError(`${shown}: the config file has ${(0,format/* formatCount */.B4)(info.size)} bytes; a config may have at most ${(0,format/* formatCount */.B4)(MAX_CONFIG_BYTES)} (is this the right file?)`, { file: shown });
+            throw new errors/* UserError */.yo(`${shown}: the config file has ${(0,format/* formatCount */.B4)(info.size)} bytes; a config may have at most ${(0,format/* formatCount */.B4)(MAX_CONFIG_BYTES)} (is this the right file?)`, { file: shown });
         }
         text = await (0,promises_namespaceObject.readFile)(file, 'utf8');
     }
     catch (error) {
-        if (error instanceof errors_UserError)
+        if (error instanceof errors/* UserError */.yo)
             throw error;
         const code = error.code;
         if (code === 'ENOENT')
-            throw new errors_UserError(`${shown}: config file not found (looked for ${file})`, { file: shown });
+            throw new errors/* UserError */.yo(`${shown}: config file not found (looked for ${file})`, { file: shown });
         if (code === 'EISDIR')
-            throw new errors_UserError(`${shown}: expected a YAML config file, found a folder`, { file: shown });
+            throw new errors/* UserError */.yo(`${shown}: expected a YAML config file, found a folder`, { file: shown });
         if (code === 'EACCES')
-            throw new errors_UserError(`${shown}: config file cannot be read (permission denied)`, { file: shown });
+            throw new errors/* UserError */.yo(`${shown}: config file cannot be read (permission denied)`, { file: shown });
         throw error;
     }
     return parseConfig(text, { file, root });
@@ -38544,11 +39612,39 @@ function configKeyError(config, key, detail) {
     const shown = displayPath(config.root, config.file);
     const at = config.positions.get(key) ?? config.positions.get(key.split('.')[0]) ?? null;
     const where = at === null ? shown : `${shown}:${at.line}:${at.column}`;
-    return new errors_UserError(`${where}: ${key}: ${detail}`, {
+    return new errors/* UserError */.yo(`${where}: ${key}: ${detail}`, {
         file: shown,
         key,
         ...(at ? { line: at.line, column: at.column } : {}),
     });
+}
+/**
+ * What the config could not settle before the data were read: the metric and recall floors,
+ * which depend on the task and the class labels found.
+ */
+function settleTarget(config, task, classes) {
+    const settled = settleMetric(config, task);
+    return { ...settled, target: { ...settled.target, recallFloors: recallFloors(settled, task, classes) } };
+}
+/** target.min-recall as one floor per class index; each named class must be one the data have. */
+function recallFloors(config, task, classes) {
+    const rule = config.target.minRecall ?? null;
+    if (rule === null)
+        return null;
+    if (task !== 'classification' || classes === null) {
+        throw configKeyError(config, 'target.min-recall', `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as regression; recall floors need classes (remove target.min-recall)`);
+    }
+    if ('every' in rule)
+        return classes.map(() => rule.every);
+    const floors = classes.map(() => 0);
+    for (const { label, min } of rule.classes) {
+        const i = classes.indexOf(label);
+        if (i < 0) {
+            throw configKeyError(config, 'target.min-recall', `names the class ${(0,common_escape/* quote */.hD)(label)}, which the target column ${(0,common_escape/* quote */.hD)(config.data.target)} does not have${didYouMean(label, classes)}; its classes are ${classes.map((c) => (0,common_escape/* quote */.hD)(c)).join(', ')}`);
+        }
+        floors[i] = min;
+    }
+    return floors;
 }
 /**
  * With data.task auto the task is only known after reading: the metric follows it unless the
@@ -38559,10 +39655,10 @@ function settleMetric(config, task) {
     if (!config.metricGiven) {
         const metric = (0,common_metric/* defaultMetric */.ml)(task);
         if (metric === 'accuracy' && target.threshold > 1) {
-            throw configKeyError(config, 'target.threshold', `the target column ${quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
+            throw configKeyError(config, 'target.threshold', `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
         }
         if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
-            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
+            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
         }
         return { ...config, target: { ...target, metric } };
     }
@@ -38571,7 +39667,7 @@ function settleMetric(config, task) {
     const hint = task === 'classification'
         ? 'set target.metric to accuracy, or data.task to regression'
         : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
-    throw configKeyError(config, 'target.metric', `the target column ${quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
+    throw configKeyError(config, 'target.metric', `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
 }
 
 ;// CONCATENATED MODULE: ./src/data/where.ts
@@ -38584,7 +39680,7 @@ function columnLabel(column, name) {
 /** An error at a line (1-based, as an editor counts) and column (1-based field number). */
 function dataError(file, line, column, message, key) {
     const at = column === undefined ? `${file.shown}:${line}` : `${file.shown}:${line}:${column}`;
-    return new errors_UserError(`${at}: ${message}`, { file: file.path, line, column, key });
+    return new errors/* UserError */.yo(`${at}: ${message}`, { file: file.path, line, column, key });
 }
 /** Quote a value from the file for a message, keeping it short and visible. */
 function shownValue(value) {
@@ -38783,6 +39879,8 @@ function encodeDataset(features, target, split) {
     const train = fill(split.train);
     const validation = fill(split.validation);
     const judging = fill(split.judging);
+    // The rows that judge, as the device gets them: what the int8 path is judged on.
+    const judgedRows = split.judging.length > 0 ? split.judging : split.validation.length > 0 ? split.validation : split.train;
     return {
         task: target.task,
         inputs,
@@ -38796,8 +39894,26 @@ function encodeDataset(features, target, split) {
         judgingRows: split.judging.length,
         xJudging: judging.x,
         yJudging: judging.y,
+        rawJudged: rawFeatures(features, judgedRows),
         encoding: { features: encodings, target: targetEncoding },
     };
+}
+/**
+ * Rows as a device receives them (rows × features, float32): a numeric feature's value, a
+ * categorical feature's category index. The exported C and the int8 simulation take this form.
+ */
+function rawFeatures(features, rows) {
+    const F = features.length;
+    const out = new Float32Array(new SharedArrayBuffer(rows.length * F * Float32Array.BYTES_PER_ELEMENT));
+    features.forEach((column, f) => {
+        if (column.kind === 'numeric')
+            for (let r = 0; r < rows.length; r++)
+                out[r * F + f] = column.values[rows[r]];
+        else
+            for (let r = 0; r < rows.length; r++)
+                out[r * F + f] = column.codes[rows[r]];
+    });
+    return out;
 }
 
 ;// CONCATENATED MODULE: ./src/data/fingerprint.ts
@@ -41353,7 +42469,7 @@ class TextCheck extends external_node_stream_.Transform {
             const b = chunk[i];
             if (this.need > 0) {
                 if (b < this.low || b > this.high)
-                    return this.where('invalid', text_check_hex(b));
+                    return this.where('invalid', hex(b));
                 this.need--;
                 this.low = 0x80;
                 this.high = 0xbf;
@@ -41396,7 +42512,7 @@ class TextCheck extends external_node_stream_.Transform {
             else if (b === 0xf4)
                 this.expect(3, 0x80, 0x8f);
             else
-                return this.where('invalid', text_check_hex(b));
+                return this.where('invalid', hex(b));
         }
         return null;
     }
@@ -41418,7 +42534,7 @@ class TextCheck extends external_node_stream_.Transform {
         return { line: this.line, column: this.field + 1, bytes, why, header: this.header ?? [] };
     }
 }
-function text_check_hex(b) {
+function hex(b) {
     return `0x${b.toString(16).padStart(2, '0')}`;
 }
 /** Good enough to name a column in a message; the CSV parser does the real work. */
@@ -41581,7 +42697,7 @@ function fieldCountError(file, line, record, header) {
 function explain(file, error, 
 /** Line on which the record being parsed starts. */
 recordLine, header) {
-    if (error instanceof errors_UserError)
+    if (error instanceof errors/* UserError */.yo)
         return error;
     if (error instanceof NotTextError) {
         const w = error.where;
@@ -41607,15 +42723,15 @@ recordLine, header) {
             return dataError(file, recordLine, field, `${columnLabel(field, name)}: in the row starting on this line, a quote appears in the middle of an ` +
                 'unquoted value; quote the whole value and write the inner quote as ""');
         case 'ENOENT':
-            return new errors_UserError(`${file.shown}: the data file does not exist`, { file: file.path, key: 'data.path' });
+            return new errors/* UserError */.yo(`${file.shown}: the data file does not exist`, { file: file.path, key: 'data.path' });
         case 'EISDIR':
-            return new errors_UserError(`${file.shown}: is a folder; data.path must name a CSV file`, {
+            return new errors/* UserError */.yo(`${file.shown}: is a folder; data.path must name a CSV file`, {
                 file: file.path,
                 key: 'data.path',
             });
         case 'EACCES':
         case 'EPERM':
-            return new errors_UserError(`${file.shown}: the data file cannot be read (permission denied)`, {
+            return new errors/* UserError */.yo(`${file.shown}: the data file cannot be read (permission denied)`, {
                 file: file.path,
                 key: 'data.path',
             });
@@ -41708,7 +42824,7 @@ function groupRows(target) {
 function tooFew(target, group, rows, minTrain, f, file) {
     const what = target.classes === null
         ? `the data have ${rows} rows`
-        : `class ${quote(target.classes[group])} has ${rows} row${rows === 1 ? '' : 's'}`;
+        : `class ${(0,common_escape/* quote */.hD)(target.classes[group])} has ${rows} row${rows === 1 ? '' : 's'}`;
     const parts = [`${minTrain} to train on`];
     if (f.validation > 0)
         parts.push('1 to validate on');
@@ -41902,7 +43018,7 @@ async function writeOutput(path, text, what, root) {
         if (reason === undefined)
             throw error;
         const shown = displayPath(root, path);
-        throw new errors_UserError(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
+        throw new errors/* UserError */.yo(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
     }
 }
 /** Fails early when `path` cannot be an output file (its folder is missing, or it is a folder). */
@@ -41911,16 +43027,16 @@ async function checkOutputFolder(path, what, root) {
     const shown = displayPath(root, folder);
     const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
     if (info === null)
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
+        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
             file: displayPath(root, path),
         });
     if (!info.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
+        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
             file: displayPath(root, path),
         });
     const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
     if (target?.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
+        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
             file: displayPath(root, path),
         });
 }
@@ -41937,15 +43053,15 @@ async function checkOutputFolder(path, what, root) {
  */
 
 
+
 function resultSettings(config) {
     const out = {};
-    for (const section of CONFIG_SPEC) {
+    for (const section of spec_CONFIG_SPEC) {
         const values = config[section.name];
         for (const key of section.keys) {
             if (!key.changesResult)
                 continue;
-            const value = values[fieldName(key.name)];
-            out[`${section.name}.${key.name}`] = Array.isArray(value) ? [...value] : value;
+            out[`${section.name}.${key.name}`] = settingValue(values[fieldName(key.name)]);
         }
     }
     // The order of ignored columns does not matter; the order of features does (input order).
@@ -41953,6 +43069,20 @@ function resultSettings(config) {
     if (Array.isArray(ignore))
         ignore.sort();
     return out;
+}
+/** A setting as the baseline records it: a plain value, a list of texts, or a structured value as its canonical text. */
+function settingValue(value) {
+    if (value === undefined || value === null)
+        return null;
+    if (Array.isArray(value) && value.every((v) => typeof v === 'string'))
+        return [...value];
+    if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean')
+        return value;
+    // target.min-recall: {every} or {classes: [...]}, written the way the config states it.
+    const rule = value;
+    if (typeof rule.every === 'number')
+        return rule.every;
+    return JSON.stringify(Object.fromEntries((rule.classes ?? []).map((c) => [c.label, c.min])));
 }
 /** sha256 hex of the settings in canonical form (keys sorted). */
 function settingsFingerprint(settings) {
@@ -42020,6 +43150,7 @@ function compare(input) {
     if (gate.maxWidth !== null && width > gate.maxWidth) {
         failures.push(`Needs ${(0,format/* neurons */.nO)(width)}; the device budget is ${gate.maxWidth}.`);
     }
+    failures.push(...budgetFailures(input));
     if (!baseline) {
         if (failures.length > 0)
             return { verdict: 'fail', reasons: [...failures, ...flags], settingsChanged };
@@ -42082,6 +43213,25 @@ function sentence(s) {
     const t = s.trim();
     const capital = t.charAt(0).toUpperCase() + t.slice(1);
     return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}
+/** One sentence per byte or operation budget the witness exceeds, naming the figure and the budget. */
+function budgetFailures(input) {
+    const { gate, device } = input;
+    if (!device)
+        return [];
+    const { cost, precision } = device;
+    const out = [];
+    const at = `(width ${input.result.width})`;
+    if (gate.maxFlashBytes != null && cost.flashBytes[precision] > gate.maxFlashBytes) {
+        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.flashBytes[precision])} flash bytes for its ${precision} weights ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxFlashBytes)} bytes.`);
+    }
+    if (gate.maxRamBytes != null && cost.ramBytes[precision] > gate.maxRamBytes) {
+        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.ramBytes[precision])} RAM bytes for one ${precision} inference ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxRamBytes)} bytes.`);
+    }
+    if (gate.maxMacs != null && cost.macs > gate.maxMacs) {
+        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.macs)} multiply-accumulates per inference ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxMacs)}.`);
+    }
+    return out;
 }
 
 ;// CONCATENATED MODULE: ./src/gate/data-changes.ts
@@ -42171,6 +43321,7 @@ function byCodeUnit(a, b) {
 
 function evaluateGate(input) {
     const { result, loaded, config, baseline } = input;
+    const cost = input.cost ?? null;
     const comparison = compare({
         result,
         target: config.target,
@@ -42178,6 +43329,7 @@ function evaluateGate(input) {
         gate: config.gate,
         baseline,
         settings: resultSettings(config),
+        device: cost === null ? null : { cost, precision: config.target.precision ?? 'float32' },
     });
     const changes = baseline
         ? dataChanges(baseline.data.profile, loaded.profile, { before: baseline.data.fingerprint, after: loaded.fingerprint }, { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') })
@@ -42199,7 +43351,7 @@ const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"htt
  * The first problem is reported as `key: expected …, found …`, with the key written as a path
  * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
  */
-class SchemaProblem extends Error {
+class json_schema_SchemaProblem extends Error {
     key;
     expected;
     found;
@@ -42229,6 +43381,8 @@ const KNOWN = new Set([
     'maxItems',
     'minimum',
     'maximum',
+    'exclusiveMinimum',
+    'minProperties',
     'pattern',
     'maxLength',
     '$ref',
@@ -42261,7 +43415,7 @@ function schemaValidator(root) {
     const check = (raw, value, key) => {
         const node = resolve(raw);
         const fail = (expected, found = value) => {
-            throw new SchemaProblem(key || '(top level)', node.title ?? expected, describe(found));
+            throw new json_schema_SchemaProblem(key || '(top level)', node.title ?? expected, describe(found));
         };
         if (node.const !== undefined && value !== node.const)
             fail(JSON.stringify(node.const));
@@ -42278,6 +43432,8 @@ function schemaValidator(root) {
             if (node.minimum !== undefined && value < node.minimum)
                 fail(typePhrase(node, types(node)));
             if (node.maximum !== undefined && value > node.maximum)
+                fail(typePhrase(node, types(node)));
+            if (node.exclusiveMinimum !== undefined && value <= node.exclusiveMinimum)
                 fail(typePhrase(node, types(node)));
         }
         if (typeof value === 'string') {
@@ -42296,18 +43452,22 @@ function schemaValidator(root) {
         }
         if (isObject(value)) {
             const props = node.properties ?? {};
-            for (const name of node.required ?? []) {
-                if (!Object.hasOwn(value, name))
-                    throw new SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
+            if (node.minProperties !== undefined && Object.keys(value).length < node.minProperties) {
+                fail(`an object with at least ${node.minProperties} key${node.minProperties === 1 ? '' : 's'}`);
             }
             for (const [name, child] of Object.entries(value)) {
                 if (Object.hasOwn(props, name))
                     check(props[name], child, join(key, name));
                 else if (node.additionalProperties === false) {
-                    throw new SchemaProblem(join(key, name), `no such key (allowed: ${Object.keys(props).join(', ')})`, describe(child));
+                    throw new json_schema_SchemaProblem(join(key, name), `no such key (allowed: ${Object.keys(props).join(', ')})`, describe(child));
                 }
                 else if (typeof node.additionalProperties === 'object')
                     check(node.additionalProperties, child, join(key, name));
+            }
+            // What is there is checked before what is missing: a wrong value says more than a later absent key.
+            for (const name of node.required ?? []) {
+                if (!Object.hasOwn(value, name))
+                    throw new json_schema_SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
             }
         }
         if (node.anyOf !== undefined) {
@@ -42320,11 +43480,21 @@ function schemaValidator(root) {
             if (!kinds.includes(undefined) && isObject(value)) {
                 const at = kinds.indexOf(value['kind']);
                 if (at < 0)
-                    throw new SchemaProblem(join(key, 'kind'), `one of ${kinds.map((k) => JSON.stringify(k)).join(', ')}`, describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING));
+                    throw new json_schema_SchemaProblem(join(key, 'kind'), `one of ${kinds.map((k) => JSON.stringify(k)).join(', ')}`, describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING));
                 check(node.oneOf[at], value, key);
             }
-            else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
-                fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
+            else {
+                // When the value's type leaves one branch (null or an object, say), check that one: its error is the precise one.
+                const typed = node.oneOf.filter((b) => {
+                    const t = resolve(b).type;
+                    const all = t === undefined ? [] : Array.isArray(t) ? t : [t];
+                    return all.length === 0 || all.some((x) => hasType(value, x));
+                });
+                if (typed.length === 1)
+                    check(typed[0], value, key);
+                else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
+                    fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
+                }
             }
         }
     };
@@ -42334,7 +43504,7 @@ function schemaValidator(root) {
             return true;
         }
         catch (e) {
-            if (e instanceof SchemaProblem)
+            if (e instanceof json_schema_SchemaProblem)
                 return false;
             throw e;
         }
@@ -42384,6 +43554,8 @@ function typePhrase(node, ts) {
         const parts = [];
         if (node.minimum !== undefined && node.maximum !== undefined)
             return ` from ${node.minimum} to ${node.maximum}`;
+        if (node.exclusiveMinimum !== undefined)
+            parts.push(` above ${node.exclusiveMinimum}`);
         if (node.minimum !== undefined)
             parts.push(` of at least ${node.minimum}`);
         if (node.maximum !== undefined)
@@ -42442,14 +43614,14 @@ function describe(v) {
     return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
-;// CONCATENATED MODULE: ./src/gate/json-position.ts
+;// CONCATENATED MODULE: ./src/common/json-position.ts
 /**
  * Finds where a JSON text first goes wrong. JSON.parse's messages differ between Node
  * versions and some carry no position at all, so a small scanner (RFC 8259 grammar)
  * gives every user the same line and column.
  */
 /** Returns null when `text` is valid JSON. */
-function findJsonSyntaxProblem(text) {
+function json_position_findJsonSyntaxProblem(text) {
     let i = 0;
     const n = text.length;
     const fail = (expected) => {
@@ -42765,21 +43937,21 @@ async function readBaseline(path, shown = path) {
         if (code === 'ENOENT')
             return null;
         if (code === 'EISDIR')
-            throw new errors_UserError(`${shown}: expected a baseline file, found a folder`, { file: shown });
-        throw new errors_UserError(`${shown}: cannot read the baseline file (${code ?? 'unknown error'})`, { file: shown });
+            throw new errors/* UserError */.yo(`${shown}: expected a baseline file, found a folder`, { file: shown });
+        throw new errors/* UserError */.yo(`${shown}: cannot read the baseline file (${code ?? 'unknown error'})`, { file: shown });
     }
     return parseBaseline(text, shown);
 }
 /** Parses and validates baseline text; `shown` names the file in messages. */
 function parseBaseline(text, shown) {
     if (text.trim() === '') {
-        throw new errors_UserError(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
+        throw new errors/* UserError */.yo(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
             file: shown,
         });
     }
-    const syntax = findJsonSyntaxProblem(text);
+    const syntax = json_position_findJsonSyntaxProblem(text);
     if (syntax) {
-        throw new errors_UserError(`${shown}:${syntax.line}:${syntax.column}: the baseline is not valid JSON: ${syntax.detail}`, {
+        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the baseline is not valid JSON: ${syntax.detail}`, {
             file: shown,
             line: syntax.line,
             column: syntax.column,
@@ -42792,24 +43964,24 @@ function parseBaseline(text, shown) {
 }
 function checkSchemaVersion(value, shown) {
     if (!baseline_isObject(value)) {
-        throw new errors_UserError(`${shown}: expected a neuron-budget baseline (a JSON object), found ${baseline_describe(value)}`, {
+        throw new errors/* UserError */.yo(`${shown}: expected a neuron-budget baseline (a JSON object), found ${baseline_describe(value)}`, {
             file: shown,
         });
     }
     const schema = 'schema' in value ? value['schema'] : baseline_MISSING;
     const match = typeof schema === 'string' ? /^neuron-budget\/baseline@(\d+)$/.exec(schema) : null;
     if (!match) {
-        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
+        throw new errors/* UserError */.yo(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
     }
     const version = Number(match[1]);
     if (version > BASELINE_VERSION) {
-        throw new errors_UserError(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
+        throw new errors/* UserError */.yo(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
     }
     if (version < BASELINE_VERSION) {
-        throw new errors_UserError(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
+        throw new errors/* UserError */.yo(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
     }
     if (version !== BASELINE_VERSION) {
-        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
+        throw new errors/* UserError */.yo(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
             file: shown,
             key: 'schema',
         });
@@ -42822,9 +43994,9 @@ function validateBaselineShape(value, shown) {
         checkShape(value);
     }
     catch (e) {
-        if (!(e instanceof SchemaProblem))
+        if (!(e instanceof json_schema_SchemaProblem))
             throw e;
-        throw new errors_UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
+        throw new errors/* UserError */.yo(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
     }
 }
 const baseline_MISSING = Symbol('missing');
@@ -42996,7 +44168,7 @@ async function updateBaseline(path, shown, expected, next) {
         const now = await readBaseline(path, shown);
         if (!sameBaseline(expected, now)) {
             const what = now === null ? 'was removed' : expected === null ? 'was created' : 'changed';
-            throw new errors_UserError(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
+            throw new errors/* UserError */.yo(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
                 'so this result was not recorded, to keep that change. Run `neuron-budget baseline` again to record it on top.', { file: shown });
         }
         await writeBaseline(path, next);
@@ -43016,7 +44188,7 @@ async function lockOrRefuse(path, shown) {
         const who = e.owner
             ? ` by process ${e.owner.pid}${e.owner.host ? ` on ${e.owner.host}` : ''}${e.owner.since ? ` since ${e.owner.since}` : ''}`
             : '';
-        throw new errors_UserError(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
+        throw new errors/* UserError */.yo(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
             'Run `neuron-budget baseline` again when it has finished; if none is running, delete the lock file.', { file: shown });
     }
 }
@@ -43052,7 +44224,13 @@ async function runGateStage(input) {
             ...input.config,
             gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
         };
-    const outcome = evaluateGate({ result: input.result, loaded: input.loaded, config, baseline: previous });
+    const outcome = evaluateGate({
+        result: input.result,
+        loaded: input.loaded,
+        config,
+        baseline: previous,
+        cost: input.cost ?? null,
+    });
     if (input.mode === 'check')
         return { outcome, written: null, notWritten: null, gate: config.gate };
     const why = whyNotRecordable(input.result);
@@ -43077,973 +44255,18 @@ async function runGateStage(input) {
 
 
 
-;// CONCATENATED MODULE: ./src/device/cost.ts
-const C_TYPE_BYTES = { float: 4, int8_t: 1, int32_t: 4 };
-/** Entries of the activation lookup table (indexed by an int8 pre-activation). */
-const cost_LUT_ENTRIES = 256;
-/** The constant objects each path of the exported C declares, in declaration order. */
-function cost_storedObjects(s) {
-    const { inputs: D, width: H, outputs: K } = s;
-    const float32 = [];
-    const int8 = [];
-    if (s.numericFeatures > 0) {
-        float32.push({ suffix: 'f_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
-        float32.push({ suffix: 'f_in_std', type: 'float', count: s.numericFeatures, role: 'feature deviations' });
-    }
-    float32.push({ suffix: 'f_w1', type: 'float', count: H * D, role: 'hidden weights' }, { suffix: 'f_b1', type: 'float', count: H, role: 'hidden biases' }, { suffix: 'f_w2', type: 'float', count: K * H, role: 'output weights' }, { suffix: 'f_b2', type: 'float', count: K, role: 'output biases' });
-    if (s.regression)
-        float32.push({ suffix: 'f_target', type: 'float', count: 2, role: 'target mean and deviation' });
-    if (s.numericFeatures > 0) {
-        int8.push({ suffix: 'q_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
-        int8.push({ suffix: 'q_in_mul', type: 'float', count: s.numericFeatures, role: '1 / (deviation · input scale)' });
-    }
-    int8.push({ suffix: 'q_in_zero', type: 'int8_t', count: 1, role: 'input zero-point', scalar: true });
-    if (s.categoricalFeatures > 0)
-        int8.push({ suffix: 'q_in_one', type: 'int8_t', count: 1, role: 'code of a one-hot 1', scalar: true });
-    int8.push({ suffix: 'q_w1', type: 'int8_t', count: H * D, role: 'hidden weights' }, { suffix: 'q_b1', type: 'int32_t', count: H, role: 'hidden biases (zero-point folded in)' }, { suffix: 'q_m0', type: 'int32_t', count: H, role: 'requantisation multipliers M0' }, { suffix: 'q_shift', type: 'int8_t', count: H, role: 'requantisation shifts n' }, { suffix: 'q_act_zero', type: 'int8_t', count: 1, role: 'pre-activation zero-point', scalar: true }, { suffix: 'q_lut', type: 'int8_t', count: cost_LUT_ENTRIES, role: 'activation lookup table' }, { suffix: 'q_w2', type: 'int8_t', count: K * H, role: 'output weights' }, { suffix: 'q_b2', type: 'int32_t', count: K, role: 'output biases (zero-point folded in)' }, { suffix: 'q_out_scale', type: 'float', count: K, role: 'output dequantisation scales' });
-    return { float32, int8 };
-}
-function objectBytes(o) {
-    return o.count * C_TYPE_BYTES[o.type];
-}
-function sumBytes(objects) {
-    return objects.reduce((n, o) => n + objectBytes(o), 0);
-}
-function cost_deviceCost(s) {
-    const { inputs: D, width: H, outputs: K } = s;
-    const stored = cost_storedObjects(s);
-    return {
-        parameters: D * H + H + H * K + K,
-        macs: D * H + H * K,
-        flashBytes: { float32: sumBytes(stored.float32), int8: sumBytes(stored.int8) },
-        ramBytes: { float32: 4 * (D + H), int8: D + H },
-    };
-}
-/** The cost shape of a network of `width` hidden neurons on data encoded as `encoding`. */
-function cost_costShapeOf(net, encoding) {
-    return {
-        inputs: net.inputs,
-        width: net.width,
-        outputs: net.outputs,
-        numericFeatures: encoding.features.filter((f) => f.kind === 'numeric').length,
-        categoricalFeatures: encoding.features.filter((f) => f.kind === 'categorical').length,
-        regression: encoding.target.task === 'regression',
-    };
-}
-
-// EXTERNAL MODULE: ./src/nn/kernel/detmath.ts
-var detmath = __nccwpck_require__(415);
-;// CONCATENATED MODULE: ./src/device/fixed-point.ts
-/**
- * The integer arithmetic of the int8 inference, written so that this TypeScript and the
- * exported C compute the same integers. Every value here is an integer held exactly in a
- * double (all magnitudes stay below 2^53), so no step depends on JavaScript's number type.
- *
- * Requantisation follows Jacob et al. 2018, "Quantization and Training of Neural Networks for
- * Efficient Integer-Arithmetic-Only Inference", section 2.2: the real multiplier M (eq. 5) is
- * written M = 2^−n · M0 with M0 in [0.5, 1) (eq. 6), M0 held as a 32-bit fixed-point integer.
- * The fixed-point multiply and the rounding shift are the documented rules of the
- * general-purpose gemmlowp library (fixedpoint/fixedpoint.h): SaturatingRoundingDoublingHighMul
- * and RoundingDivideByPOT.
- * @testOnly
- */
-const INT32_MIN = (/* unused pure expression or super */ null && (-2147483648));
-/** @testOnly */
-const INT32_MAX = 2147483647;
-const TWO_15 = 32768;
-const TWO_30 = 1073741824;
-const TWO_31 = 2147483648;
-/** Largest right shift RoundingDivideByPOT takes (gemmlowp asserts exponent ≤ 31). */
-const fixed_point_MAX_SHIFT = 31;
-/**
- * Round to nearest, ties away from zero. Exact for every double: trunc(x) and x − trunc(x)
- * are both exact, so no addition of 0.5 can round the wrong way.
- */
-function roundHalfAway(x) {
-    const i = Math.trunc(x);
-    const f = x - i;
-    const r = f >= 0.5 ? i + 1 : f <= -0.5 ? i - 1 : i;
-    return r === 0 ? 0 : r; // no −0 in the JSON
-}
-function fixed_point_clamp(x, lo, hi) {
-    return x < lo ? lo : x > hi ? hi : x;
-}
-/**
- * gemmlowp's SaturatingRoundingDoublingHighMul for int32 a, b: (a·b + nudge) / 2^31 truncated
- * toward zero, nudge = 2^30 when a·b ≥ 0 and 1 − 2^30 otherwise (so a tie rounds toward +∞);
- * INT32_MIN · INT32_MIN saturates to INT32_MAX.
- *
- * a·b reaches 2^62, beyond a double's 53 bits, so the product is split: b = bh·2^16 + bl,
- * a·bh = ph·2^15 + pl, and a·b + nudge = ph·2^31 + r with every part exact.
- */
-function saturatingRoundingDoublingHighMul(a, b) {
-    if (a === INT32_MIN && b === INT32_MIN)
-        return INT32_MAX;
-    const bh = b >> 16; // signed high half
-    const bl = b & 0xffff; // unsigned low half
-    const p = a * bh; // |p| ≤ 2^46: exact
-    const q = a * bl; // |q| < 2^47: exact
-    const ph = Math.floor(p / TWO_15);
-    const pl = p - ph * TWO_15; // in [0, 2^15)
-    const negative = (a < 0 && b > 0) || (a > 0 && b < 0);
-    const nudge = negative ? 1 - TWO_30 : TWO_30;
-    const r = pl * 65536 + q + nudge; // |r| < 2^48: exact
-    const rh = Math.floor(r / TWO_31);
-    const rl = r - rh * TWO_31; // in [0, 2^31)
-    const floor = ph + rh; // floor((a·b + nudge) / 2^31)
-    const truncated = floor < 0 && rl !== 0 ? floor + 1 : floor;
-    return truncated === 0 ? 0 : truncated;
-}
-/**
- * gemmlowp's RoundingDivideByPOT: x / 2^exponent rounded to nearest, ties away from zero,
- * for int32 x and 0 ≤ exponent ≤ 31.
- */
-function roundingDivideByPot(x, exponent) {
-    const mask = 2 ** exponent - 1;
-    const remainder = x & mask;
-    const threshold = Math.floor(mask / 2) + (x < 0 ? 1 : 0);
-    return (x >> exponent) + (remainder > threshold ? 1 : 0);
-}
-/**
- * M = 2^−n · M0, M0 in [0.5, 1), M0 stored as round(M0 · 2^31) (eq. 6). Two limits, both exact
- * in their effect on an int32 accumulator acc: for M < 2^−32, |acc · M| < 1/2 always rounds to
- * 0, so the multiplier is 0; for M ≥ 2^31 every nonzero acc saturates an int8, and so does
- * 2^30 · 2^31 (the left shift capped at 31), which stands in for it.
- */
-function quantizeMultiplier(m) {
-    if (!(m > 0) || !Number.isFinite(m))
-        return { multiplier: 0, shift: 0 };
-    let n = 0;
-    let f = m;
-    while (f < 0.5 && n <= fixed_point_MAX_SHIFT + 1) {
-        f *= 2; // exact
-        n++;
-    }
-    while (f >= 1 && n >= -fixed_point_MAX_SHIFT - 1) {
-        f /= 2; // exact
-        n--;
-    }
-    if (n > fixed_point_MAX_SHIFT)
-        return { multiplier: 0, shift: 0 };
-    let m0 = roundHalfAway(f * TWO_31);
-    if (m0 === TWO_31) {
-        m0 = TWO_30;
-        n--;
-    }
-    if (n < -fixed_point_MAX_SHIFT)
-        return { multiplier: TWO_30, shift: -fixed_point_MAX_SHIFT };
-    return { multiplier: m0, shift: n };
-}
-/**
- * acc · M for an int32 acc: a left shift (saturating to int32) when shift < 0, then the
- * fixed-point multiply by M0, then the rounding right shift when shift > 0.
- */
-function fixed_point_multiplyByQuantizedMultiplier(acc, q) {
-    if (q.multiplier === 0)
-        return 0;
-    let x = acc;
-    if (q.shift < 0)
-        x = fixed_point_clamp(acc * 2 ** -q.shift, INT32_MIN, INT32_MAX); // power-of-two product: exact
-    const high = saturatingRoundingDoublingHighMul(x, q.multiplier);
-    return q.shift > 0 ? roundingDivideByPot(high, q.shift) : high;
-}
-
-;// CONCATENATED MODULE: ./src/device/quantize.ts
-
-
-
-/** Largest |int32 bias|; with at most MAX_QUANT_INPUTS terms of |q_w·q_x| ≤ 127·128 the accumulator stays in int32. */
-const quantize_BIAS_LIMIT = 2 ** 30;
-const MAX_QUANT_INPUTS = 16384;
-const INT8_MIN = -128;
-const INT8_MAX = 127;
-/**
- * Pre-activation range and activation codes per activation. The calibrated range is
- * R = max |a| over the calibration rows (ReLU: max a), clipped where the activation is within
- * half an output step of its limit (beyond that every pre-activation gives the same code):
- *   tanh      a in [−R, R], S_a = R/127, Z_a = 0; h in [−tanh R, tanh R], S_h = tanh(R)/127, Z_h = 0
- *             (odd function: symmetric codes). Clip: atanh(1 − 1/254) = ln(507)/2 ≈ 3.11.
- *   logistic  a in [−R, R], S_a = R/127, Z_a = 0; h in [0, σ(R)] (widened to hold 0),
- *             S_h = σ(R)/255, Z_h = −128. Clip: σ(a) = 1 − 1/510 at a = ln(509) ≈ 6.23.
- *   relu      a in [0, R], S_a = R/255, Z_a = −128 (a negative pre-activation clamps to code
- *             −128, which is relu's 0); h = a: S_h = S_a, Z_h = −128.
- * The output range is the image of the pre-activation range, so it needs no calibration of its own.
- */
-function activationRanges(activation, calibrated) {
-    if (activation === 'relu') {
-        const r = calibrated > 0 && Number.isFinite(calibrated) ? calibrated : 1;
-        const s = r / 255;
-        return { preActivation: { scale: s, zeroPoint: INT8_MIN }, activation: { scale: s, zeroPoint: INT8_MIN } };
-    }
-    const clip = activation === 'tanh' ? (0,detmath/* detLog */.Ep)(507) / 2 : (0,detmath/* detLog */.Ep)(509);
-    const r = calibrated > 0 && calibrated < clip ? calibrated : clip;
-    const preActivation = { scale: r / 127, zeroPoint: 0 };
-    if (activation === 'tanh')
-        return { preActivation, activation: { scale: (0,detmath/* detTanh */.hL)(r) / 127, zeroPoint: 0 } };
-    return { preActivation, activation: { scale: (0,detmath/* detLogistic */.U1)(r) / 255, zeroPoint: INT8_MIN } };
-}
-function activate(activation, a) {
-    if (activation === 'tanh')
-        return (0,detmath/* detTanh */.hL)(a);
-    if (activation === 'logistic')
-        return (0,detmath/* detLogistic */.U1)(a);
-    return a > 0 ? a : 0;
-}
-/** q = clamp(Z + round(r / S)) into int8. */
-function quantizeValue(r, p) {
-    return fixed_point_clamp(p.zeroPoint + roundHalfAway(r / p.scale), INT8_MIN, INT8_MAX);
-}
-/** r = S · (q − Z) (the paper's eq. 1). */
-function dequantizeValue(q, p) {
-    return p.scale * (q - p.zeroPoint);
-}
-/**
- * The asymmetric int8 parameters of the range [lo, hi], widened to hold 0, with the
- * zero-point rounded to an integer so that real 0 is exactly representable.
- */
-function rangeParams(lo, hi) {
-    let a = Math.min(lo, 0);
-    let b = Math.max(hi, 0);
-    if (!(b > a)) {
-        a = 0;
-        b = 1;
-    }
-    const scale = (b - a) / 255;
-    return { scale, zeroPoint: fixed_point_clamp(roundHalfAway(INT8_MIN - a / scale), INT8_MIN, INT8_MAX) };
-}
-/** The table of activation codes for every int8 pre-activation code. */
-function activationTable(activation, pre, out) {
-    const table = [];
-    for (let q = INT8_MIN; q < INT8_MIN + cost_LUT_ENTRIES; q++) {
-        table.push(quantizeValue(activate(activation, dequantizeValue(q, pre)), out));
-    }
-    return table;
-}
-/**
- * One layer's symmetric per-output-channel weights and int32 biases. The scale is at least
- * |bias| / (S_in · BIAS_LIMIT), so the bias always fits (coarser weights only when they are
- * negligible beside the bias); an all-zero channel gets scale 1.
- */
-function quantizeLayer(weights, bias, inputScale) {
-    const scales = [];
-    const qWeights = [];
-    const qBias = [];
-    weights.forEach((row, j) => {
-        let maxAbs = 0;
-        for (const w of row)
-            maxAbs = Math.max(maxAbs, Math.abs(w));
-        let s = Math.max(maxAbs / INT8_MAX, Math.abs(bias[j]) / (inputScale * quantize_BIAS_LIMIT));
-        if (!(s > 0) || !Number.isFinite(s))
-            s = 1;
-        scales.push(s);
-        qWeights.push(row.map((w) => fixed_point_clamp(roundHalfAway(w / s), -INT8_MAX, INT8_MAX)));
-        qBias.push(fixed_point_clamp(roundHalfAway(bias[j] / (inputScale * s)), -quantize_BIAS_LIMIT, quantize_BIAS_LIMIT));
-    });
-    return { weights: qWeights, scales, bias: qBias };
-}
-/** bias − Z · Σ weights: the accumulator then sums weight · code directly (the paper's section 2.3). */
-function quantize_foldZeroPoint(bias, weights, zero) {
-    return bias.map((b, j) => b - zero * weights[j].reduce((s, w) => s + w, 0));
-}
-function checkFinite(net) {
-    const all = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
-    if (!all.every(Number.isFinite))
-        throw new RangeError('cannot quantise a network with non-finite weights');
-}
-/** Largest |a| (ReLU: largest a) of the hidden pre-activations over the calibration rows, in float64. */
-function calibratePreActivation(net, cal) {
-    const D = net.inputs;
-    let extreme = 0;
-    for (let p = 0; p < cal.rows; p++) {
-        for (let j = 0; j < net.width; j++) {
-            let a = net.hiddenBias[j];
-            const w = net.hiddenWeights[j];
-            for (let i = 0; i < D; i++)
-                a += cal.x[p * D + i] * w[i];
-            const v = net.activation === 'relu' ? a : Math.abs(a);
-            if (v > extreme)
-                extreme = v;
-        }
-    }
-    return extreme;
-}
-function inputRange(cal, D) {
-    let lo = 0;
-    let hi = 0;
-    for (let q = 0; q < cal.rows * D; q++) {
-        const v = cal.x[q];
-        if (v < lo)
-            lo = v;
-        if (v > hi)
-            hi = v;
-    }
-    return rangeParams(lo, hi);
-}
-/** The int8 form of `net`, its activation ranges calibrated on `calibration` (the training rows). */
-function quantizeNetwork(net, encoding, calibration) {
-    const D = net.inputs;
-    const H = net.width;
-    const K = net.outputs;
-    if (D > MAX_QUANT_INPUTS || H > MAX_QUANT_INPUTS) {
-        throw new RangeError(`int8 quantisation takes at most ${MAX_QUANT_INPUTS} inputs and hidden neurons`);
-    }
-    if (calibration.rows < 1)
-        throw new RangeError('int8 quantisation needs at least one calibration row');
-    checkFinite(net);
-    const encoded = encoding.features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
-    if (encoded !== D)
-        throw new RangeError(`the encoding gives ${encoded} inputs, the network takes ${D}`);
-    const input = inputRange(calibration, D);
-    const features = encoding.features.map((f) => f.kind === 'numeric'
-        ? {
-            kind: 'numeric',
-            mean: Math.fround(f.mean),
-            multiplier: Math.fround(1 / ((f.std > 0 ? f.std : 1) * input.scale)),
-        }
-        : { kind: 'categorical', categories: f.categories.length });
-    const hidden = quantizeLayer(net.hiddenWeights, net.hiddenBias, input.scale);
-    const ranges = activationRanges(net.activation, calibratePreActivation(net, calibration));
-    const multipliers = hidden.scales.map((s) => quantizeMultiplier((input.scale * s) / ranges.preActivation.scale));
-    const t = encoding.target;
-    const regression = t.task === 'regression';
-    const outBias = net.outputBias.map((b) => (regression ? b + t.mean / t.std : b));
-    const S_h = ranges.activation.scale;
-    const output = quantizeLayer(net.outputWeights, outBias, S_h);
-    return {
-        inputs: D,
-        width: H,
-        outputs: K,
-        activation: net.activation,
-        head: net.head,
-        input: { ...input, one: quantizeValue(1, input), features },
-        hidden: {
-            weights: hidden.weights,
-            weightScales: hidden.scales,
-            bias: hidden.bias,
-            multiplier: multipliers.map((m) => m.multiplier),
-            shift: multipliers.map((m) => m.shift),
-            preActivation: ranges.preActivation,
-            activation: ranges.activation,
-            table: activationTable(net.activation, ranges.preActivation, ranges.activation),
-        },
-        output: {
-            weights: output.weights,
-            weightScales: output.scales,
-            bias: output.bias,
-            scale: output.scales.map((s) => Math.fround(S_h * s * (regression ? t.std : 1))),
-        },
-    };
-}
-
-;// CONCATENATED MODULE: ./src/device/int8-forward.ts
-/**
- * The int8 inference exactly as the exported C runs it (export-c.ts, NAME_predict_int8), so
- * that both give the same bits. The only float operations are the ones the C performs, each
- * rounded to float32 with Math.fround: the centring of a raw numeric feature (x − mean), its
- * scaling into quantisation steps (· multiplier), the int32 accumulator's conversion to float
- * and the output's dequantisation (· scale). Everything else is integer arithmetic.
- *
- * None of these float steps is a product feeding a sum, so a C compiler that contracts
- * a·b + c into a fused multiply-add cannot change them; they need IEEE 754 single precision
- * with each assignment rounded to float (FLT_EVAL_METHOD 0, or a compiler that honours C99's
- * rounding on assignment, as GCC does in its ISO modes).
- */
-
-
-
-/** A raw value's clamp before it is rounded to an integer (keeps the C's float → int conversion defined). */
-const int8_forward_INPUT_STEP_LIMIT = 512;
-/** The requantised pre-activation's clamp before its zero-point is added (keeps the C's sum in int32). */
-const int8_forward_PRE_ACTIVATION_LIMIT = 255;
-/**
- * A value in input quantisation steps to its int8 code: clamp t to ±512 (NaN to −512), round
- * half away from zero through truncation (t − trunc(t) is exact in float32), add Z, clamp.
- */
-function inputCode(t, zeroPoint) {
-    let v = t;
-    if (!(v > -int8_forward_INPUT_STEP_LIMIT))
-        v = -int8_forward_INPUT_STEP_LIMIT;
-    else if (v > int8_forward_INPUT_STEP_LIMIT)
-        v = int8_forward_INPUT_STEP_LIMIT;
-    let i = Math.trunc(v);
-    const f = Math.fround(v - i);
-    if (f >= 0.5)
-        i++;
-    else if (f <= -0.5)
-        i--;
-    return clamp(zeroPoint + i, -128, 127);
-}
-/** A categorical feature's raw value as a category index: a whole number in [0, n), else −1 (all zeros). */
-function categoryIndex(v, n) {
-    if (v >= 0 && v < n) {
-        const c = Math.trunc(v);
-        if (c === v)
-            return c;
-    }
-    return -1;
-}
-/**
- * Run the int8 network on `rows` rows of raw features (rows × features, float32 values).
- * With `trace`, also records the input and hidden codes of every row.
- */
-function int8Forward(q, features, rows, trace = null) {
-    const F = q.input.features.length;
-    const D = q.inputs;
-    const H = q.width;
-    const K = q.outputs;
-    const b1 = foldZeroPoint(q.hidden.bias, q.hidden.weights, q.input.zeroPoint);
-    const b2 = foldZeroPoint(q.output.bias, q.output.weights, q.hidden.activation.zeroPoint);
-    const requant = q.hidden.multiplier.map((multiplier, j) => ({ multiplier, shift: q.hidden.shift[j] }));
-    const zx = q.input.zeroPoint;
-    const za = q.hidden.preActivation.zeroPoint;
-    const xq = new Int32Array(D);
-    const hq = new Int32Array(H);
-    const classes = new Int32Array(rows);
-    const outputs = new Float32Array(rows * K);
-    for (let p = 0; p < rows; p++) {
-        let c = 0;
-        for (let f = 0; f < F; f++) {
-            const v = Math.fround(features[p * F + f]);
-            const e = q.input.features[f];
-            if (e.kind === 'numeric') {
-                const d = Math.fround(v - e.mean);
-                xq[c++] = inputCode(Math.fround(d * e.multiplier), zx);
-            }
-            else {
-                const k = categoryIndex(v, e.categories);
-                for (let j = 0; j < e.categories; j++)
-                    xq[c + j] = j === k ? q.input.one : zx;
-                c += e.categories;
-            }
-        }
-        for (let j = 0; j < H; j++) {
-            const w = q.hidden.weights[j];
-            let acc = b1[j];
-            for (let i = 0; i < D; i++)
-                acc += w[i] * xq[i];
-            const r = clamp(multiplyByQuantizedMultiplier(acc, requant[j]), -int8_forward_PRE_ACTIVATION_LIMIT, int8_forward_PRE_ACTIVATION_LIMIT);
-            const code = clamp(za + r, -128, 127);
-            hq[j] = q.hidden.table[code + 128];
-            if (trace)
-                trace.preActivation[p * H + j] = code;
-        }
-        if (trace) {
-            trace.inputs.set(xq, p * D);
-            trace.hidden.set(hq, p * H);
-        }
-        let best = 0;
-        for (let k = 0; k < K; k++) {
-            const w = q.output.weights[k];
-            let acc = b2[k];
-            for (let j = 0; j < H; j++)
-                acc += w[j] * hq[j];
-            const z = Math.fround(Math.fround(acc) * q.output.scale[k]);
-            outputs[p * K + k] = z;
-            if (z > outputs[p * K + best])
-                best = k;
-        }
-        classes[p] = q.head === 'softmax' ? best : q.head === 'logistic' ? (outputs[p * K] > 0 ? 1 : 0) : 0;
-    }
-    return { classes, outputs };
-}
-/**
- * Raw CSV rows as the device's raw features (rows × features, float32): a numeric feature's
- * number, a categorical feature's category index (−1 for a category the model has not seen,
- * which encodes as all zeros, as encodeRows does).
- */
-function rawFeatureRows(encoding, rows) {
-    const F = encoding.features.length;
-    const out = new Float32Array(rows.length * F);
-    rows.forEach((row, r) => {
-        encoding.features.forEach((f, i) => {
-            const cell = row[f.name];
-            if (cell === undefined)
-                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
-            const text = cell.trim();
-            if (f.kind === 'categorical') {
-                out[r * F + i] = f.categories.indexOf(text);
-                return;
-            }
-            const v = text === '' ? Number.NaN : Number(text);
-            if (!Number.isFinite(v)) {
-                throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
-            }
-            out[r * F + i] = v;
-        });
-    });
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/device/int8-check.ts
-
-
-
-const isInt = (v, lo, hi) => Number.isInteger(v) && v >= lo && v <= hi;
-const isF32 = (v) => typeof v === 'number' && Number.isFinite(v) && Math.fround(v) === v;
-const isPositive = (v) => typeof v === 'number' && Number.isFinite(v) && v > 0;
-function list(v, n, ok) {
-    return Array.isArray(v) && v.length === n && v.every(ok);
-}
-function matrix(v, rows, cols, ok) {
-    return Array.isArray(v) && v.length === rows && v.every((r) => list(r, cols, ok));
-}
-const obj = (v) => typeof v === 'object' && v !== null && !Array.isArray(v) ? v : null;
-function quantParams(v) {
-    const p = obj(v);
-    return p !== null && isPositive(p.scale) && isInt(p.zeroPoint, -128, 127);
-}
-function int8_check_checkInt8Network(value, shape, encoding) {
-    const { inputs: D, width: H, outputs: K } = shape;
-    const q = obj(value);
-    if (q === null)
-        return { key: 'int8', expected: 'an object or null' };
-    if (q.inputs !== D || q.width !== H || q.outputs !== K) {
-        return { key: 'int8', expected: `the shape of the network (${D} inputs, ${H} hidden, ${K} outputs)` };
-    }
-    const input = obj(q.input);
-    if (input === null || !quantParams(input) || !isInt(input.one, -128, 127)) {
-        return { key: 'int8.input', expected: 'a scale, an int8 zero-point and an int8 one-hot code' };
-    }
-    const features = input.features;
-    const fine = Array.isArray(features) &&
-        features.length === encoding.features.length &&
-        features.every((f, i) => {
-            const e = encoding.features[i];
-            const g = obj(f);
-            if (g === null || g.kind !== e.kind)
-                return false;
-            if (e.kind === 'categorical')
-                return g.categories === e.categories.length;
-            return isF32(g.mean) && isF32(g.multiplier);
-        });
-    if (!fine)
-        return { key: 'int8.input.features', expected: 'one entry per feature of the encoding, of its kind' };
-    const hidden = obj(q.hidden);
-    if (hidden === null)
-        return { key: 'int8.hidden', expected: 'an object' };
-    const checks = [
-        ['weights', matrix(hidden.weights, H, D, (w) => isInt(w, -127, 127)), `${H} rows of ${D} integers in [-127, 127]`],
-        ['weightScales', list(hidden.weightScales, H, isPositive), `${H} positive numbers`],
-        ['bias', list(hidden.bias, H, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${H} integers within ±2^30`],
-        ['multiplier', list(hidden.multiplier, H, (m) => isInt(m, 0, 2 ** 31 - 1)), `${H} integers in [0, 2^31)`],
-        ['shift', list(hidden.shift, H, (n) => isInt(n, -MAX_SHIFT, MAX_SHIFT)), `${H} integers in [-31, 31]`],
-        ['preActivation', quantParams(hidden.preActivation), 'a scale and an int8 zero-point'],
-        ['activation', quantParams(hidden.activation), 'a scale and an int8 zero-point'],
-        ['table', list(hidden.table, LUT_ENTRIES, (t) => isInt(t, -128, 127)), `${LUT_ENTRIES} integers in [-128, 127]`],
-    ];
-    for (const [key, ok, expected] of checks)
-        if (!ok)
-            return { key: `int8.hidden.${key}`, expected };
-    const output = obj(q.output);
-    if (output === null)
-        return { key: 'int8.output', expected: 'an object' };
-    const outChecks = [
-        ['weights', matrix(output.weights, K, H, (w) => isInt(w, -127, 127)), `${K} rows of ${H} integers in [-127, 127]`],
-        ['weightScales', list(output.weightScales, K, isPositive), `${K} positive numbers`],
-        ['bias', list(output.bias, K, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${K} integers within ±2^30`],
-        ['scale', list(output.scale, K, isF32), `${K} finite float32 numbers`],
-    ];
-    for (const [key, ok, expected] of outChecks)
-        if (!ok)
-            return { key: `int8.output.${key}`, expected };
-    return null;
-}
-
-;// CONCATENATED MODULE: ./src/device/c-text.ts
-/**
- * Pieces of C source text: checked identifiers, safe comment text and exact float32 literals.
- * Names from a repository (features, categories, classes, config paths) are untrusted: they
- * only ever reach the C inside comments, through `commentText`.
- */
-
-/** Letters, digits and underscores, a letter first (a leading underscore is reserved in C), at most 31 (C99's portable length). */
-const C_NAME = /^[A-Za-z][A-Za-z0-9_]{0,30}$/;
-/**
- * The NAME of NAME.h, NAME.c and NAME_predict; a clear error for anything that is not a plain C
- * identifier (the value shown JSON-escaped, so no control character reaches a log line).
- */
-function c_text_checkCName(name, key = '--name') {
-    if (!C_NAME.test(name)) {
-        const shown = JSON.stringify(name.length > 40 ? `${name.slice(0, 40)}…` : name).replace(/[\u007f-\u009f\u2028\u2029]/g, '?');
-        throw new UserError(`${key}: expected a C identifier (a letter, then up to 30 letters, digits or underscores), found ${shown}`, { key });
-    }
-    return name;
-}
-/** Longest untrusted text kept in a comment, in characters, before the escapes. */
-const COMMENT_CLIP = 64;
-/**
- * Untrusted text made safe inside a C block comment: clipped to `max` characters (with "..."),
- * every character outside printable ASCII, and the backslash, written as <U+XXXX> (no line
- * break, control character or line splice survives), "??" broken so no trigraph forms, and
- * every "*\/" and "/*" broken with a space.
- */
-function c_text_commentText(text, max = COMMENT_CLIP) {
-    const chars = Array.from(text);
-    const clipped = chars.length > max ? [...chars.slice(0, max), '.', '.', '.'] : chars;
-    let out = '';
-    for (const ch of clipped) {
-        const code = ch.codePointAt(0) ?? 0;
-        const printable = code >= 0x20 && code <= 0x7e && ch !== '\\';
-        out += printable ? ch : `<U+${code.toString(16).toUpperCase().padStart(4, '0')}>`;
-    }
-    out = out.replace(/\?\?/g, '?<U+003F>');
-    let before;
-    do {
-        before = out;
-        out = out.replace(/\*\//g, '* /').replace(/\/\*/g, '/ *');
-    } while (out !== before);
-    return out;
-}
-const f32 = new Float32Array(1);
-const u32 = new Uint32Array(f32.buffer);
-/** A float32 value as a C99 hexadecimal float literal with an f suffix: exact by construction. */
-function c_text_floatLiteral(x) {
-    if (!Number.isFinite(x) || Math.fround(x) !== x) {
-        throw new RangeError(`not a finite float32 value: ${x}`);
-    }
-    f32[0] = x;
-    const bits = u32[0];
-    const sign = bits >>> 31 ? '-' : '';
-    const exp = (bits >>> 23) & 0xff;
-    const mant = bits & 0x7fffff;
-    if (exp === 0 && mant === 0)
-        return `${sign}0x0p+0f`;
-    // 23 fraction bits shifted to 24 fill six hex digits.
-    const digits = (mant << 1).toString(16).padStart(6, '0').replace(/0+$/, '');
-    const frac = digits === '' ? '' : `.${digits}`;
-    const e = exp === 0 ? -126 : exp - 127;
-    return `${sign}0x${exp === 0 ? 0 : 1}${frac}p${e < 0 ? '-' : '+'}${Math.abs(e)}f`;
-}
-/** An int8 or int32 constant as a C literal (INT32_MIN would need a cast; the scheme never stores it). */
-function c_text_intLiteral(v) {
-    if (!Number.isInteger(v) || v <= -2147483648 || v > 2147483647)
-        throw new RangeError(`not an int32 literal: ${v}`);
-    return String(v);
-}
-
-;// CONCATENATED MODULE: ./src/device/c-code.ts
-
-function encodeStatements(model, name, int8Path) {
-    const out = [];
-    let offset = 0;
-    let m = 0;
-    model.encoding.features.forEach((f, i) => {
-        if (f.kind === 'numeric') {
-            out.push(int8Path
-                ? `  {\n    const float d = features[${i}] - ${name}_q_in_mean[${m}];\n    const float t = d * ${name}_q_in_mul[${m}];\n    xq[${offset}] = ${name}_input_code(t);\n  }`
-                : `  x[${offset}] = (features[${i}] - ${name}_f_in_mean[${m}]) / ${name}_f_in_std[${m}];`);
-            m++;
-            offset++;
-        }
-        else {
-            const n = f.categories.length;
-            out.push(`  c = ${name}_category(features[${i}], ${n});`, int8Path
-                ? `  for (j = 0; j < ${n}; j++) xq[${offset} + j] = j == c ? ${name}_q_in_one : ${name}_q_in_zero;`
-                : `  for (j = 0; j < ${n}; j++) x[${offset} + j] = j == c ? 1.0f : 0.0f;`);
-            offset += n;
-        }
-    });
-    return out;
-}
-function c_code_helpers(name, hasNumeric, hasCategorical) {
-    const out = [];
-    if (hasCategorical) {
-        out.push(`/* A raw categorical value as a category index: a whole number in [0, n), else -1. */`, `static int ${name}_category(float v, int n) {`, `  if (v >= 0.0f && v < (float)n) {`, `    const int c = (int)v;`, `    if ((float)c == v) return c;`, `  }`, `  return -1;`, `}`, ``);
-    }
-    if (hasNumeric) {
-        out.push(`/* Input steps to an int8 code: clamp, round half away from zero (t - trunc(t) is exact), add the zero-point. */`, `static int8_t ${name}_input_code(float t) {`, `  int32_t i;`, `  float f;`, `  if (!(t > -${INPUT_STEP_LIMIT}.0f)) t = -${INPUT_STEP_LIMIT}.0f;`, `  else if (t > ${INPUT_STEP_LIMIT}.0f) t = ${INPUT_STEP_LIMIT}.0f;`, `  i = (int32_t)t;`, `  f = t - (float)i;`, `  if (f >= 0.5f) i++;`, `  else if (f <= -0.5f) i--;`, `  i += ${name}_q_in_zero;`, `  return (int8_t)(i < -128 ? -128 : i > 127 ? 127 : i);`, `}`, ``);
-    }
-    out.push(`/*`, ` * acc * M with M = m0 * 2^-31 * 2^-shift: a saturating left shift when shift < 0, the fixed-point`, ` * multiply (nudge, then division by 2^31 truncating toward zero) and a rounding right shift (ties`, ` * away from zero) when shift > 0: gemmlowp's SaturatingRoundingDoublingHighMul and RoundingDivideByPOT.`, ` */`, `static int32_t ${name}_requantize(int32_t acc, int32_t m0, int shift) {`, `  int64_t x = acc;`, `  int64_t ab;`, `  int32_t high, mask, remainder, threshold, floor_shift;`, `  if (m0 == 0) return 0;`, `  if (shift < 0) {`, `    x *= (int64_t)1 << -shift;`, `    if (x > INT32_MAX) x = INT32_MAX;`, `    if (x < INT32_MIN) x = INT32_MIN;`, `  }`, `  if (x == INT32_MIN && m0 == INT32_MIN) return INT32_MAX;`, `  ab = x * (int64_t)m0;`, `  high = (int32_t)((ab + (ab >= 0 ? ((int64_t)1 << 30) : (1 - ((int64_t)1 << 30)))) / ((int64_t)1 << 31));`, `  if (shift <= 0) return high;`, `  mask = (int32_t)(((int64_t)1 << shift) - 1);`, `  remainder = (int32_t)((uint32_t)high & (uint32_t)mask);`, `  threshold = (mask >> 1) + (high < 0 ? 1 : 0);`, `  floor_shift = high >= 0 ? (high >> shift) : ~((~high) >> shift);`, `  return floor_shift + (remainder > threshold ? 1 : 0);`, `}`, ``);
-    return out;
-}
-function c_code_floatPath(model, name) {
-    const N = name.toUpperCase();
-    const net = model.network;
-    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
-    const activation = net.activation === 'tanh'
-        ? 'tanhf(a)'
-        : net.activation === 'logistic'
-            ? '1.0f / (1.0f + expf(-a))'
-            : 'a > 0.0f ? a : 0.0f';
-    const out = [
-        `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
-        `  float x[${N}_INPUTS];`,
-        `  float h[${N}_HIDDEN];`,
-        `  int i, j, k;`,
-        ...(hasCategorical ? [`  int c;`] : []),
-        ...encodeStatements(model, name, false),
-        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
-        `    float a = ${name}_f_b1[j];`,
-        `    for (i = 0; i < ${N}_INPUTS; i++) a += ${name}_f_w1[j][i] * x[i];`,
-        `    h[j] = ${activation};`,
-        `  }`,
-        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
-        `    float z = ${name}_f_b2[k];`,
-        `    for (j = 0; j < ${N}_HIDDEN; j++) z += ${name}_f_w2[k][j] * h[j];`,
-        `    outputs[k] = z;`,
-        `  }`,
-    ];
-    if (net.head === 'softmax') {
-        out.push(`  {`, `    float m = outputs[0], s = 0.0f;`, `    int best = 0;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > m) m = outputs[k];`, `    for (k = 0; k < ${N}_OUTPUTS; k++) {`, `      outputs[k] = expf(outputs[k] - m);`, `      s += outputs[k];`, `    }`, `    for (k = 0; k < ${N}_OUTPUTS; k++) outputs[k] /= s;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `    return best;`, `  }`);
-    }
-    else if (net.head === 'logistic') {
-        out.push(`  outputs[0] = 1.0f / (1.0f + expf(-outputs[0]));`, `  return outputs[0] > 0.5f ? 1 : 0;`);
-    }
-    else {
-        out.push(`  outputs[0] = outputs[0] * ${name}_f_target[1] + ${name}_f_target[0];`, `  return 0;`);
-    }
-    out.push(`}`, ``);
-    return out;
-}
-function c_code_int8Path(model, name) {
-    const N = name.toUpperCase();
-    const head = model.network.head;
-    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
-    const out = [
-        `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
-        `  int8_t xq[${N}_INPUTS];`,
-        `  int8_t hq[${N}_HIDDEN];`,
-        `  int i, j, k;`,
-        ...(hasCategorical ? [`  int c;`] : []),
-        ...(head === 'softmax' ? [`  int best = 0;`] : []),
-        ...encodeStatements(model, name, true),
-        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
-        `    int32_t acc = ${name}_q_b1[j], r;`,
-        `    for (i = 0; i < ${N}_INPUTS; i++) acc += (int32_t)${name}_q_w1[j][i] * (int32_t)xq[i];`,
-        `    r = ${name}_requantize(acc, ${name}_q_m0[j], ${name}_q_shift[j]);`,
-        `    if (r < -${PRE_ACTIVATION_LIMIT}) r = -${PRE_ACTIVATION_LIMIT};`,
-        `    else if (r > ${PRE_ACTIVATION_LIMIT}) r = ${PRE_ACTIVATION_LIMIT};`,
-        `    r += ${name}_q_act_zero;`,
-        `    if (r < -128) r = -128;`,
-        `    else if (r > 127) r = 127;`,
-        `    hq[j] = ${name}_q_lut[r + 128];`,
-        `  }`,
-        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
-        `    int32_t acc = ${name}_q_b2[k];`,
-        `    for (j = 0; j < ${N}_HIDDEN; j++) acc += (int32_t)${name}_q_w2[k][j] * (int32_t)hq[j];`,
-        `    outputs[k] = (float)acc * ${name}_q_out_scale[k];`,
-        `  }`,
-    ];
-    if (head === 'softmax') {
-        out.push(`  for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `  return best;`);
-    }
-    else if (head === 'logistic') {
-        out.push(`  return outputs[0] > 0.0f ? 1 : 0;`);
-    }
-    else {
-        out.push(`  return 0;`);
-    }
-    out.push(`}`, ``);
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/device/export-c.ts
-/**
- * Firmware export: a model as C99 source, NAME.h and NAME.c, with a float32 and an int8 path.
- * No dynamic allocation, nothing beyond the C standard library (math.h on the float path).
- * The constant objects are exactly those cost.ts counts (`storedObjects`), and the int8 path
- * does exactly what int8-forward.ts simulates, operation for operation.
- */
-
-
-
-
-
-const DEFAULT_C_NAME = 'nb_model';
-const q = (s) => `"${commentText(s)}"`;
-function checkModel(model) {
-    const net = model.network;
-    const int8 = model.int8;
-    if (int8 === null) {
-        throw new UserError('model: no int8 network (key "int8" is null); write the model again with this version');
-    }
-    const values = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
-    if (!values.every(Number.isFinite))
-        throw new UserError('model: network weights must be finite numbers');
-    if (int8.inputs !== net.inputs || int8.width !== net.width || int8.outputs !== net.outputs) {
-        throw new UserError('model: the int8 network does not have the shape of the float network', { key: 'int8' });
-    }
-    return int8;
-}
-function headerText(model, name, p) {
-    const N = name.toUpperCase();
-    const net = model.network;
-    const enc = model.encoding;
-    const classes = enc.target.classes ?? [];
-    const regression = model.task === 'regression';
-    const act = net.activation;
-    const lines = [
-        `/*`,
-        ` * ${name}.h: a neural network for the device, written by neuron-budget ${commentText(p.toolVersion, 32)}.`,
-        ` * Do not edit: export it again from the model file instead.`,
-        ` *`,
-        ` * Data fingerprint: ${commentText(p.dataFingerprint, 80)}`,
-        ` * Config: ${commentText(p.config, 120)}`,
-        ` * Network: ${net.inputs} inputs after encoding, ${net.width} hidden neurons (${act}), ${net.outputs} output${net.outputs === 1 ? '' : 's'} (${net.head} head).`,
-        ` *`,
-        ` * features[] holds the raw values, in this order:`,
-    ];
-    enc.features.forEach((f, i) => {
-        if (f.kind === 'numeric') {
-            lines.push(` *   [${i}] ${q(f.name)}: a number, standardised on the device`);
-        }
-        else {
-            lines.push(` *   [${i}] ${q(f.name)}: the category's index, one-hot encoded on the device:`);
-            f.categories.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
-        }
-    });
-    if (enc.features.some((f) => f.kind === 'categorical')) {
-        lines.push(` * A category index that is not a whole number in range encodes as no category (all zeros).`);
-    }
-    lines.push(` *`);
-    if (regression) {
-        lines.push(` * Both functions return 0 and write the prediction of ${q(enc.target.name)}, in its own units, to outputs[0].`);
-    }
-    else {
-        lines.push(` * Both functions return the class index of ${q(enc.target.name)}:`);
-        classes.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
-        lines.push(` * ${name}_predict: the float32 network; outputs[] gets ${net.head === 'softmax' ? 'the probability of each class, in class order' : 'the probability of class 1'}.`, ` * ${name}_predict_int8: the int8 network; outputs[] gets the dequantised logit${net.outputs === 1 ? ' of class 1 (class 1 when it is above 0)' : ' of each class (the largest wins)'}.`);
-    }
-    lines.push(` * The int8 path is integer arithmetic apart from the input scaling and the output's dequantisation;`, ` * its outputs equal neuron-budget's simulation of it bit for bit on IEEE 754 single precision with`, ` * each assignment rounded to float (FLT_EVAL_METHOD 0, or GCC in an ISO mode such as -std=c99).`, ` * The float path runs the trained network in float32 arithmetic; it needs tanhf and expf (link -lm).`, ` */`, `#ifndef ${N}_H`, `#define ${N}_H`, ``, `#ifdef __cplusplus`, `extern "C" {`, `#endif`, ``, `#define ${N}_FEATURES ${enc.features.length}`, `#define ${N}_OUTPUTS ${net.outputs}`, `#define ${N}_INPUTS ${net.inputs}`, `#define ${N}_HIDDEN ${net.width}`);
-    if (!regression)
-        lines.push(`#define ${N}_CLASSES ${classes.length}`);
-    lines.push(``, `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, ``, `#ifdef __cplusplus`, `}`, `#endif`, ``, `#endif`, ``);
-    return lines.join('\n');
-}
-/** Values wrapped into lines of at most ~100 characters, indented. */
-function wrap(values, indent) {
-    const lines = [];
-    let line = '';
-    for (const v of values) {
-        if (line !== '' && line.length + v.length + 2 > 100 - indent.length) {
-            lines.push(`${indent}${line},`);
-            line = '';
-        }
-        line = line === '' ? v : `${line}, ${v}`;
-    }
-    if (line !== '')
-        lines.push(`${indent}${line}`);
-    return lines.join('\n');
-}
-function literal(type, v) {
-    return type === 'float' ? floatLiteral(v) : intLiteral(v);
-}
-function declare(name, o, values) {
-    const decl = `static const ${o.type} ${name}_${o.suffix}`;
-    const flat = values.flat();
-    if (flat.length !== o.count)
-        throw new Error(`internal: ${o.suffix} has ${flat.length} values, expected ${o.count}`);
-    const cells = (row, indent) => wrap(row.map((v) => literal(o.type, v)), indent);
-    if (o.scalar)
-        return `${decl} = ${literal(o.type, flat[0])};`;
-    if (isMatrix(values)) {
-        const rows = values.map((r) => `  {\n${cells(r, '    ')}\n  }`);
-        return `${decl}[${values.length}][${values[0].length}] = {\n${rows.join(',\n')}\n};`;
-    }
-    return `${decl}[${o.count}] = {\n${cells(flat, '  ')}\n};`;
-}
-function isMatrix(values) {
-    return Array.isArray(values[0]);
-}
-/** The values of each stored object, keyed by suffix. */
-function objectValues(model, int8) {
-    const net = model.network;
-    const enc = model.encoding;
-    const numeric = enc.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
-    const qNumeric = int8.input.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
-    const f = (v) => Math.fround(v);
-    const rows = (m) => m.map((r) => r.map(f));
-    return {
-        f_in_mean: numeric.map((e) => f(e.mean)),
-        f_in_std: numeric.map((e) => f(e.std > 0 ? e.std : 1)),
-        f_w1: rows(net.hiddenWeights),
-        f_b1: net.hiddenBias.map(f),
-        f_w2: rows(net.outputWeights),
-        f_b2: net.outputBias.map(f),
-        f_target: [f(enc.target.mean), f(enc.target.std)],
-        q_in_mean: qNumeric.map((e) => e.mean),
-        q_in_mul: qNumeric.map((e) => e.multiplier),
-        q_in_zero: [int8.input.zeroPoint],
-        q_in_one: [int8.input.one],
-        q_w1: int8.hidden.weights,
-        q_b1: foldZeroPoint(int8.hidden.bias, int8.hidden.weights, int8.input.zeroPoint),
-        q_m0: int8.hidden.multiplier,
-        q_shift: int8.hidden.shift,
-        q_act_zero: [int8.hidden.preActivation.zeroPoint],
-        q_lut: int8.hidden.table,
-        q_w2: int8.output.weights,
-        q_b2: foldZeroPoint(int8.output.bias, int8.output.weights, int8.hidden.activation.zeroPoint),
-        q_out_scale: int8.output.scale,
-    };
-}
-function sourceText(model, int8, name, p) {
-    const stored = storedObjects(costShapeOf(model.network, model.encoding));
-    const values = objectValues(model, int8);
-    const numeric = model.encoding.features.some((f) => f.kind === 'numeric');
-    const categorical = model.encoding.features.some((f) => f.kind === 'categorical');
-    const s = int8.hidden;
-    return [
-        `/*`,
-        ` * ${name}.c: written by neuron-budget ${commentText(p.toolVersion, 32)}; see ${name}.h. Do not edit.`,
-        ` *`,
-        ` * int8 scheme: input scale ${int8.input.scale.toPrecision(6)}, zero-point ${int8.input.zeroPoint};`,
-        ` * pre-activation scale ${s.preActivation.scale.toPrecision(6)}, zero-point ${s.preActivation.zeroPoint};`,
-        ` * hidden activation scale ${s.activation.scale.toPrecision(6)}, zero-point ${s.activation.zeroPoint};`,
-        ` * symmetric per-neuron int8 weights, int32 biases (zero-points folded in), ${model.network.activation} by table.`,
-        ` */`,
-        `#include "${name}.h"`,
-        `#include <math.h>`,
-        `#include <stdint.h>`,
-        ``,
-        `/* float32 network */`,
-        ...stored.float32.map((o) => declare(name, o, values[o.suffix])),
-        ``,
-        `/* int8 network */`,
-        ...stored.int8.map((o) => declare(name, o, values[o.suffix])),
-        ``,
-        ...helpers(name, numeric, categorical),
-        ...floatPath(model, name),
-        ...int8Path(model, name),
-    ].join('\n');
-}
-/** NAME.h and NAME.c for `model`; `name` must be a C identifier. */
-function exportC(model, name, provenance) {
-    checkCName(name);
-    const int8 = checkModel(model);
-    return {
-        headerFile: `${name}.h`,
-        sourceFile: `${name}.c`,
-        header: headerText(model, name, provenance),
-        source: sourceText(model, int8, name, provenance),
-    };
-}
-
-;// CONCATENATED MODULE: ./src/device/index.ts
-/**
- * Device reality: what a network costs on a microcontroller, its int8 form, and firmware
- * source for both forms. Pure functions; no I/O.
- */
-
-
-
-
-
-
-
-
+// EXTERNAL MODULE: ./src/device/index.ts + 8 modules
+var device = __nccwpck_require__(4143);
 ;// CONCATENATED MODULE: ./src/model/document.ts
 
-
-const MODEL_SCHEMA = 'neuron-budget/model@2';
-/** The previous version (no cost, no int8 network): still read, as int8 null. */
-const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
+const document_MODEL_SCHEMA = 'neuron-budget/model@2';
 /**
  * The witness as a document. With `calibration` (the encoded training rows) it carries the
  * int8 form too.
  */
-function modelDocument(witness, encoding, target, backing, calibration = null) {
+function modelDocument(witness, encoding, target, backing, calibration = null, provenance = null) {
     return {
-        schema: MODEL_SCHEMA,
+        schema: document_MODEL_SCHEMA,
         task: encoding.target.task,
         width: witness.network.width,
         target: {
@@ -44057,76 +44280,120 @@ function modelDocument(witness, encoding, target, backing, calibration = null) {
         origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
         encoding: structuredClone(encoding),
         network: structuredClone(witness.network),
-        cost: cost_deviceCost(cost_costShapeOf(witness.network, encoding)),
-        int8: calibration === null ? null : quantizeNetwork(witness.network, encoding, calibration),
+        cost: (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)(witness.network, encoding)),
+        int8: calibration === null ? null : (0,device/* quantizeNetwork */.gf)(witness.network, encoding, calibration),
+        provenance,
     };
 }
 /** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
 function serializeModel(doc) {
     return `${JSON.stringify(doc, null, 2)}\n`;
 }
+
+;// CONCATENATED MODULE: ./schema/model.schema.json
+const model_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget model","description":"A trained network as a self-contained file: the network, how raw rows become its inputs and its outputs labels or values, what it costs on a device, and its int8 form. Written by neuron-budget for the witness of a search.","type":"object","additionalProperties":false,"required":["schema","task","width","target","origin","encoding","network","cost","int8","provenance"],"properties":{"schema":{"const":"neuron-budget/model@2","description":"Format and version of this file."},"task":{"enum":["classification","regression"],"description":"What the network predicts: a class or a number."},"width":{"type":"integer","description":"Hidden neurons of the network (the same as network.width).","minimum":1},"target":{"type":"object","description":"The target the network was judged against and what it reached.","additionalProperties":false,"required":["metric","threshold","value","on","met","adequate"],"properties":{"metric":{"enum":["accuracy","rmse","mae","max-abs-error"],"description":"The target metric of the config."},"threshold":{"type":"number","description":"The config\'s threshold: accuracy at least this, error metrics at most this (in the target\'s units)."},"value":{"type":"number","description":"The metric on the rows that judged the network (target.on)."},"on":{"enum":["judging","validation","training"],"description":"Which rows judged it: the judging rows, never seen in training; or the validation rows, or the training rows, when there were none."},"met":{"type":"boolean","description":"The network met the target on those rows."},"adequate":{"type":"boolean","description":"Its width is adequate: at least search.required networks of that width met the target."}}},"origin":{"type":"object","description":"Where the network came from: with the same config and data, enough to train it again.","additionalProperties":false,"required":["seed","width","restart","how"],"properties":{"seed":{"type":"integer","description":"The config\'s base seed."},"width":{"type":"integer","minimum":1,"description":"Width of the fresh training the network started as."},"restart":{"type":"integer","minimum":1,"description":"Restart of that width (counted from 1) whose seeded stream trained it."},"how":{"enum":["fresh","pruned"],"description":"fresh: trained at its width; pruned: pruned down to it from origin.width."}}},"encoding":{"$ref":"#/$defs/encoding","description":"How raw rows become the network\'s inputs (numeric: standardised; categorical: one-hot) and its outputs labels or values."},"network":{"$ref":"#/$defs/network","description":"The trained network\'s weights in float64, with their layout."},"cost":{"$ref":"#/$defs/cost","description":"What the network costs on a device: parameters, multiply-accumulates, flash and RAM bytes in float32 and int8."},"int8":{"description":"The int8 form of the network, calibrated on the training rows; null when the writer had no training rows to calibrate on.","oneOf":[{"type":"null"},{"$ref":"#/$defs/int8"}]},"provenance":{"description":"What produced the file, for the header of exported firmware; null in files of version 1.","oneOf":[{"type":"null"},{"type":"object","additionalProperties":false,"required":["tool","data","config"],"properties":{"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget","description":"The tool that wrote the file."},"version":{"type":"string","description":"Its version."}},"description":"The tool that wrote the file."},"data":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint of the data as used (64 hex digits)."},"config":{"type":"string","description":"The config file, relative to the workspace."}}}]}},"$defs":{"encoding":{"type":"object","description":"How raw rows become the network\'s inputs, and its outputs labels or values.","additionalProperties":false,"required":["features","target"],"properties":{"features":{"type":"array","description":"The features in input order; they encode to network.inputs inputs.","items":{"oneOf":[{"type":"object","description":"A numeric feature: one input, standardised.","additionalProperties":false,"required":["kind","name","mean","std"],"properties":{"kind":{"const":"numeric","description":"A number column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"mean":{"type":"number","description":"Mean over the training rows; the input is (x − mean) / std."},"std":{"type":"number","description":"Population standard deviation over the training rows (1 for a constant column, which is only centred)."}}},{"type":"object","description":"A categorical feature: one input per category, one-hot.","additionalProperties":false,"required":["kind","name","categories"],"properties":{"kind":{"const":"categorical","description":"A text column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"categories":{"type":"array","description":"The categories in input order: category k sets input k of this feature\'s block to 1, the others to 0. A category not listed sets them all to 0.","items":{"type":"string"},"minItems":1}}}]}},"target":{"type":"object","description":"How the network\'s outputs become labels or values.","additionalProperties":false,"required":["name","task","classes","mean","std"],"properties":{"name":{"type":"string","description":"The target column\'s name (text from the repository)."},"task":{"enum":["classification","regression"],"description":"The same as the document\'s task."},"classes":{"type":["array","null"],"items":{"type":"string"},"description":"Classification: the class labels in index order (sorted); null for regression."},"mean":{"type":"number","description":"Regression: the network\'s output is (y − mean) / std; classification: 0."},"std":{"type":"number","description":"Regression: see mean; classification: 1."}}}}},"network":{"type":"object","description":"The one-hidden-layer network in float64: a_j = hiddenBias[j] + Σ_i hiddenWeights[j][i]·x_i, h_j = activation(a_j), z_k = outputBias[k] + Σ_j outputWeights[k][j]·h_j, then the head.","additionalProperties":false,"required":["inputs","width","outputs","activation","head","hiddenWeights","hiddenBias","outputWeights","outputBias"],"properties":{"inputs":{"type":"integer","description":"Inputs after encoding (D).","minimum":1},"width":{"type":"integer","description":"Hidden neurons (H).","minimum":1},"outputs":{"type":"integer","description":"Output units (K): the classes for three or more, 1 for two classes (logistic) and for regression.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The hidden neurons\' activation."},"head":{"enum":["softmax","logistic","linear"],"description":"softmax: class probabilities; logistic: the probability of the second class; linear: the standardised value."},"hiddenWeights":{"type":"array","description":"H rows: hiddenWeights[j][i] is the weight from input i to hidden neuron j.","items":{"type":"array","description":"Hidden neuron j\'s weight from each input i, in input order.","items":{"type":"number"}}},"hiddenBias":{"type":"array","description":"One bias per hidden neuron.","items":{"type":"number"}},"outputWeights":{"type":"array","description":"K rows: outputWeights[k][j] is the weight from hidden neuron j to output k.","items":{"type":"array","description":"Output k\'s weight from each hidden neuron j.","items":{"type":"number"}}},"outputBias":{"type":"array","description":"One bias per output.","items":{"type":"number"}}}},"bytesByForm":{"type":"object","description":"A figure for each form of the network.","additionalProperties":false,"required":["float32","int8"],"properties":{"float32":{"type":"integer","description":"The float32 form.","minimum":0},"int8":{"type":"integer","description":"The int8 form.","minimum":0}}},"cost":{"type":"object","description":"What the network costs on a device, by the definitions of src/device/cost.ts.","additionalProperties":false,"required":["parameters","macs","flashBytes","ramBytes"],"properties":{"parameters":{"type":"integer","description":"Weights and biases: D·H + H + H·K + K.","minimum":0},"macs":{"type":"integer","description":"Multiply-accumulates per inference: D·H + H·K.","minimum":0},"flashBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the constant objects the exported C stores for each form (weights, biases, scales, zero-points, multipliers, shifts, the activation table, the input encoding\'s constants); code and padding not counted."},"ramBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the activation buffers of one inference (the encoded input vector and the hidden vector, in the form\'s type); the caller\'s arrays, scalars and the stack frame not counted."}}},"quantParams":{"type":"object","description":"An int8 quantisation: real = scale · (code − zeroPoint).","additionalProperties":false,"required":["scale","zeroPoint"],"properties":{"scale":{"type":"number","description":"S: the real value of one code step.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z: the code of real 0 (real = S · (q − Z))."}}},"int8":{"type":"object","description":"The int8 form (integer-only inference after Jacob et al. 2018, per-channel symmetric weights after Krishnamoorthi 2018).","additionalProperties":false,"required":["inputs","width","outputs","activation","head","input","hidden","output"],"properties":{"inputs":{"type":"integer","description":"The same as network.inputs.","minimum":1},"width":{"type":"integer","description":"The same as network.width.","minimum":1},"outputs":{"type":"integer","description":"The same as network.outputs.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The same as network.activation."},"head":{"enum":["softmax","logistic","linear"],"description":"The same as network.head."},"input":{"type":"object","description":"The quantisation of the encoded inputs (asymmetric int8).","additionalProperties":false,"required":["scale","zeroPoint","one","features"],"properties":{"scale":{"type":"number","description":"S_x of the whole encoded input vector: (hi − lo) / 255 over the training rows, the range widened to hold 0.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z_x: the code of an input of 0, round(−128 − lo / S_x)."},"one":{"type":"integer","minimum":-128,"maximum":127,"description":"The code of a one-hot 1: clamp(Z_x + round(1 / S_x))."},"features":{"type":"array","description":"One entry per feature of encoding.features, in the same order.","items":{"oneOf":[{"type":"object","description":"A numeric feature\'s input stage.","additionalProperties":false,"required":["kind","mean","multiplier"],"properties":{"kind":{"const":"numeric","description":"A numeric feature."},"mean":{"type":"number","description":"The feature\'s mean as float32, subtracted from the raw value in float32."},"multiplier":{"type":"number","description":"float32 1 / (std · S_x): the centred value times this, in float32, is the input in code steps before rounding."}}},{"type":"object","description":"A categorical feature\'s input stage.","additionalProperties":false,"required":["kind","categories"],"properties":{"kind":{"const":"categorical","description":"A categorical feature."},"categories":{"type":"integer","description":"Its number of categories (one-hot inputs).","minimum":1}}}]}}}},"hidden":{"type":"object","description":"The hidden layer: int32 accumulation, requantisation to an int8 pre-activation, the activation by table.","additionalProperties":false,"required":["weights","weightScales","bias","multiplier","shift","preActivation","activation","table"],"properties":{"weights":{"type":"array","description":"H rows of D int8 weight codes (symmetric: zero-point 0, range ±127).","items":{"type":"array","description":"Neuron j\'s weight codes, in input order.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per hidden neuron: max |w| / 127 (larger only when the bias would not fit in ±2^30 steps).","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per hidden neuron at scale S_x · S_w[j], zero-point 0, before the input zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"multiplier":{"type":"array","description":"M0 per hidden neuron as round(M0 · 2^31) in [2^30, 2^31), with M = S_x · S_w[j] / S_a = M0 · 2^−shift; 0 when M < 2^−32.","items":{"type":"integer","minimum":0,"maximum":2147483647}},"shift":{"type":"array","description":"n per hidden neuron: a rounding right shift when positive, a saturating left shift when negative.","items":{"type":"integer","minimum":-31,"maximum":31}},"preActivation":{"$ref":"#/$defs/quantParams","description":"The int8 pre-activation that indexes the table (S_a, Z_a)."},"activation":{"$ref":"#/$defs/quantParams","description":"The int8 hidden activation the table holds (S_h, Z_h)."},"table":{"type":"array","description":"table[q + 128]: the activation code of pre-activation code q, for q = −128..127.","items":{"type":"integer","minimum":-128,"maximum":127},"minItems":256,"maxItems":256}}},"output":{"type":"object","description":"The output layer: int32 accumulation, then dequantisation to float for the head.","additionalProperties":false,"required":["weights","weightScales","bias","scale"],"properties":{"weights":{"type":"array","description":"K rows of H int8 weight codes (symmetric, ±127).","items":{"type":"array","description":"Output k\'s weight codes, by hidden neuron.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per output.","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per output at scale S_h · S_w[k] (regression: with the target\'s mean / std added), before the hidden zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"scale":{"type":"array","description":"float32 per output: the dequantised output per accumulator step (S_h · S_w[k]; regression: times the target\'s std, giving target units).","items":{"type":"number"}}}}}}}}');
+;// CONCATENATED MODULE: ./src/model/parse.ts
+/**
+ * Reading a model file: JSON syntax with line and column, then the shape by
+ * schema/model.schema.json itself, then what a schema cannot say (array lengths that follow
+ * the network's shape, the int8 form's consistency). Every problem is one message naming the
+ * file and the key. Files of version 1 (before judging rows and the int8 form) are read too.
+ */
+
+
+
+
+
+
+/** The first version: no cost, no int8 form, judged on the validation rows, a 0-based restart and the grown width. */
+const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
+const parse_checkShape = schemaValidator(model_schema_namespaceObject);
 function inputsOf(features) {
     return features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
 }
+/** A version-1 document in this version's shape (what it could not know is marked as such). */
+function upgrade(d) {
+    const v1target = d['target'];
+    const v1origin = d['origin'];
+    const net = d['network'];
+    const enc = d['encoding'];
+    const cost = net && enc && Array.isArray(enc.features)
+        ? deviceCost(costShapeOf(net, enc))
+        : undefined;
+    return {
+        ...d,
+        schema: MODEL_SCHEMA,
+        target: v1target && { ...v1target, on: 'validation', met: true, adequate: true },
+        origin: v1origin && {
+            seed: v1origin.seed,
+            width: v1origin.grownWidth,
+            restart: typeof v1origin.restart === 'number' ? v1origin.restart + 1 : v1origin.restart,
+            how: 'fresh',
+        },
+        cost,
+        int8: null,
+        provenance: null,
+    };
+}
 /** Parse and check a model file; a bad file gets a message naming the file and the key. */
 function parseModel(text, file = 'model') {
-    let doc;
+    const syntax = findJsonSyntaxProblem(text);
+    if (syntax) {
+        throw new UserError(`${file}:${syntax.line}:${syntax.column}: the model is not valid JSON: ${syntax.detail}`, {
+            file,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    }
+    let doc = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    const bad = (key, expected, found) => {
+        throw new UserError(`${file}: ${key}: expected ${expected}, found ${found}`, { file, key });
+    };
+    if (typeof doc !== 'object' || doc === null || Array.isArray(doc))
+        return bad('(top level)', 'a neuron-budget model (a JSON object)', Array.isArray(doc) ? 'a list' : String(doc));
+    const schema = doc['schema'];
+    if (schema === MODEL_SCHEMA_V1)
+        doc = upgrade(doc);
+    else if (schema !== MODEL_SCHEMA) {
+        bad('schema', `"${MODEL_SCHEMA}"`, typeof schema === 'string' ? JSON.stringify(schema.slice(0, 60)) : 'nothing');
+    }
     try {
-        doc = JSON.parse(text);
+        parse_checkShape(doc);
     }
     catch (e) {
-        throw new UserError(`${file}: not valid JSON (${e instanceof Error ? e.message : String(e)})`, { file });
+        if (e instanceof SchemaProblem)
+            bad(e.key, e.expected, e.found);
+        throw e;
     }
-    const bad = (key, expected) => {
-        throw new UserError(`${file}: key "${key}" should be ${expected}`, { file, key });
-    };
-    if (typeof doc !== 'object' || doc === null)
-        return bad('(root)', 'an object');
     const d = doc;
-    if (d.schema !== MODEL_SCHEMA && d.schema !== MODEL_SCHEMA_V1)
-        bad('schema', `"${MODEL_SCHEMA}"`);
-    if (d.task !== 'classification' && d.task !== 'regression')
-        bad('task', '"classification" or "regression"');
     const net = d.network;
-    if (typeof net !== 'object' || net === null)
-        return bad('network', 'an object');
     const enc = d.encoding;
-    if (typeof enc !== 'object' || enc === null || !Array.isArray(enc.features))
-        return bad('encoding.features', 'a list');
     if (inputsOf(enc.features) !== net.inputs)
-        bad('encoding.features', `to encode to ${net.inputs} inputs (network.inputs)`);
-    if (!Array.isArray(net.hiddenWeights) || net.hiddenWeights.length !== net.width)
-        bad('network.hiddenWeights', `${net.width} rows`);
-    if (net.hiddenWeights.some((r) => !Array.isArray(r) || r.length !== net.inputs))
-        bad('network.hiddenWeights', `rows of ${net.inputs} numbers`);
-    if (!Array.isArray(net.hiddenBias) || net.hiddenBias.length !== net.width)
-        bad('network.hiddenBias', `${net.width} numbers`);
-    if (!Array.isArray(net.outputWeights) || net.outputWeights.length !== net.outputs)
-        bad('network.outputWeights', `${net.outputs} rows`);
-    if (net.outputWeights.some((r) => !Array.isArray(r) || r.length !== net.width))
-        bad('network.outputWeights', `rows of ${net.width} numbers`);
-    if (!Array.isArray(net.outputBias) || net.outputBias.length !== net.outputs)
-        bad('network.outputBias', `${net.outputs} numbers`);
-    if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
-        bad('encoding.target.classes', 'a list of class labels');
-    if (d.schema === MODEL_SCHEMA_V1) {
-        // Version 1 recorded only the validation value and the grown width; what it reached is kept.
-        const v1 = d;
-        const old = d;
-        return {
-            ...d,
-            schema: MODEL_SCHEMA,
-            target: { ...v1.target, on: 'validation', met: true, adequate: true },
-            origin: { seed: old.origin.seed, width: old.origin.grownWidth, restart: old.origin.restart + 1, how: 'fresh' },
-            cost: deviceCost(costShapeOf(net, enc)),
-            int8: null,
-        };
-    }
+        bad('encoding.features', `features that encode to ${net.inputs} inputs (network.inputs)`, `${inputsOf(enc.features)}`);
+    const rows = (key, list, count, length) => {
+        if (list.length !== count)
+            bad(key, `${count} rows`, `${list.length}`);
+        list.forEach((r, i) => {
+            if (r.length !== length)
+                bad(`${key}[${i}]`, `${length} numbers`, `${r.length}`);
+        });
+    };
+    rows('network.hiddenWeights', net.hiddenWeights, net.width, net.inputs);
+    rows('network.outputWeights', net.outputWeights, net.outputs, net.width);
+    if (net.hiddenBias.length !== net.width)
+        bad('network.hiddenBias', `${net.width} numbers`, `${net.hiddenBias.length}`);
+    if (net.outputBias.length !== net.outputs)
+        bad('network.outputBias', `${net.outputs} numbers`, `${net.outputBias.length}`);
+    if (d.width !== net.width)
+        bad('width', `network.width (${net.width})`, `${d.width}`);
+    if (d.task === 'classification' && !Array.isArray(enc.target.classes))
+        bad('encoding.target.classes', 'a list of class labels', 'null');
     if (d.int8 !== null) {
         const problem = checkInt8Network(d.int8, net, enc);
         if (problem)
-            bad(problem.key, problem.expected);
+            bad(problem.key, problem.expected, 'something else');
     }
+    // The cost is derived: recompute it rather than trust the file.
     return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
 }
 
@@ -44238,6 +44505,7 @@ function scoreRows(model, rows) {
 
 
 
+
 ;// CONCATENATED MODULE: ./package.json
 const package_namespaceObject = {"rE":"0.1.0"};
 ;// CONCATENATED MODULE: ./src/version.ts
@@ -44247,6 +44515,7 @@ const TOOL_NAME = 'neuron-budget';
 const TOOL_VERSION = package_namespaceObject.rE;
 
 ;// CONCATENATED MODULE: ./src/report/assemble.ts
+
 
 
 /** The report with the data stage's facts; verdict and search come later. */
@@ -44278,14 +44547,18 @@ function dataStageReport(config, data, timing) {
                     .map((label) => ({ label, count: classes[label] })),
         },
         search: null,
+        device: null,
         changes: null,
         timing: { ...timing },
     };
 }
 /** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-function searchStageReport(report, search, required) {
+function searchStageReport(report, search, required, context) {
+    const { encoding } = context;
+    const costOf = (width) => (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)({ inputs: report.data.inputs, width, outputs: report.data.outputs }, encoding));
     return {
         ...report,
+        device: deviceOf(search, context, report.data.inputs, report.data.outputs),
         reasons: [],
         width: search.width,
         metric: { ...report.metric, value: search.metric },
@@ -44293,7 +44566,7 @@ function searchStageReport(report, search, required) {
             outcome: search.outcome,
             grownWidth: search.grownWidth,
             required,
-            widths: search.widths,
+            widths: search.widths.map((w) => ({ ...w, cost: costOf(w.width) })),
             pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
             trainings: search.trainings,
             notes: search.notes,
@@ -44321,6 +44594,34 @@ function witnessOf(search) {
         adequate: search.width !== null,
     };
 }
+function deviceOf(search, context, inputs, outputs) {
+    const w = search.witness;
+    const a = search.appraisal;
+    if (w === null || a === null)
+        return null;
+    const width = w.network.width;
+    const labels = context.encoding.target.classes;
+    const floors = context.target.recallFloors ?? null;
+    const finite = (v) => (v === undefined || !Number.isFinite(v) ? null : v);
+    return {
+        precision: context.target.precision ?? 'float32',
+        inputs,
+        width,
+        outputs,
+        cost: (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)({ inputs, width, outputs }, context.encoding)),
+        metric: { float32: a.float32, int8: a.int8 },
+        classes: labels === null || a.confusion === null
+            ? null
+            : labels.map((label, c) => ({
+                label,
+                rows: a.confusion[c].reduce((s, v) => s + v, 0),
+                recall: finite(a.recall?.[c]),
+                precision: finite(a.precision?.[c]),
+                floor: floors === null || floors[c] <= 0 ? null : floors[c],
+            })),
+        confusion: a.confusion,
+    };
+}
 
 ;// CONCATENATED MODULE: ./src/report/data-summary.ts
 
@@ -44336,7 +44637,7 @@ function inputsLine(data) {
     const parts = [`${numeric} numeric`];
     if (categorical.length > 0) {
         const oneHot = categorical
-            .map((f) => (f.kind === 'categorical' ? `${escapeText(f.name, 60)} → ${f.categories.length}` : ''))
+            .map((f) => (f.kind === 'categorical' ? `${(0,common_escape/* escapeText */.X1)(f.name, 60)} → ${f.categories.length}` : ''))
             .join(', ');
         parts.push(`${categorical.length} categorical (${oneHot})`);
     }
@@ -44360,8 +44661,8 @@ function splitLine(config, report, data) {
 function dataSummaryText(config, data, report) {
     const d = report.data;
     const rows = [
-        ['config', escapeText(displayPath(config.root, config.file))],
-        ['data', escapeText(d.file)],
+        ['config', (0,common_escape/* escapeText */.X1)(displayPath(config.root, config.file))],
+        ['data', (0,common_escape/* escapeText */.X1)(d.file)],
         ['rows', `${d.rows} used${d.droppedRows > 0 ? `, ${d.droppedRows} dropped for missing values` : ''}`],
         ['split', splitLine(config, report, data)],
         ['inputs', inputsLine(data)],
@@ -44371,7 +44672,7 @@ function dataSummaryText(config, data, report) {
         ],
     ];
     if (d.classes) {
-        const labels = d.classes.map((c) => escapeText(c.label, LABEL_SHOWN));
+        const labels = d.classes.map((c) => (0,common_escape/* escapeText */.X1)(c.label, LABEL_SHOWN));
         const width = Math.max(...labels.map((l) => l.length));
         d.classes.forEach((c, i) => {
             const share = ((100 * c.count) / d.rows).toFixed(1);
@@ -44568,18 +44869,18 @@ function renderMarkdown(report, options = {}) {
 }
 function headline(view) {
     const label = VERDICT_LABEL[view.verdict];
-    const lines = [`### neuron-budget: ${label}. ${escapeMarkdown(view.headline)}`];
+    const lines = [`### neuron-budget: ${label}. ${(0,common_escape/* escapeMarkdown */.FV)(view.headline)}`];
     if (view.otherReasons.length > 0) {
         lines.push('');
         for (const r of view.otherReasons)
-            lines.push(`- ${escapeMarkdown(r)}`);
+            lines.push(`- ${(0,common_escape/* escapeMarkdown */.FV)(r)}`);
     }
     return lines.join('\n');
 }
 function summaryTable(view, report) {
     const b = view.baseline;
     const c = view.current;
-    const metricName = escapeMarkdown(view.metricName);
+    const metricName = (0,common_escape/* escapeMarkdown */.FV)(view.metricName);
     const dash = '—';
     const cWidth = currentWidthCell(view, report, dash, (w) => `**${w}**`);
     const rowsDelta = b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${(0,format/* formatDelta */.CW)(c.rows - b.rows)})` : '';
@@ -44593,13 +44894,13 @@ function summaryTable(view, report) {
         `| Search time | ${(0,format/* formatSeconds */.Xo)(b?.searchSeconds)} | ${(0,format/* formatSeconds */.Xo)(c.searchSeconds)} |`,
     ];
     const gate = report.gate;
-    const terms = [`Target: ${escapeMarkdown((0,format/* targetPhrase */.Lx)(view.metricName, view.threshold))}`];
+    const terms = [`Target: ${(0,common_escape/* escapeMarkdown */.FV)((0,format/* targetPhrase */.Lx)(view.metricName, view.threshold))}`];
     if (gate) {
         terms.push(gate.maxWidth === null ? 'no device budget set' : `device budget: ${(0,format/* neurons */.nO)(gate.maxWidth)}`);
         terms.push(`allowed growth over the baseline: ${gate.allowedGrowth}`);
     }
-    terms.push(`data: ${escapeMarkdown(report.data.file)}`);
-    const backing = view.backing === null ? '' : `\n\n${escapeMarkdown(view.backing, 400)}`;
+    terms.push(`data: ${(0,common_escape/* escapeMarkdown */.FV)(report.data.file)}`);
+    const backing = view.backing === null ? '' : `\n\n${(0,common_escape/* escapeMarkdown */.FV)(view.backing, 400)}`;
     return `${rows.join('\n')}${backing}\n\n${terms.join(' · ')}.`;
 }
 function chartSection(view, report) {
@@ -44618,8 +44919,8 @@ function chartSection(view, report) {
     if (current.widths.length > 0 || baseline.widths.length > 0) {
         const range = metricRange([...current.values, ...baseline.values], view.threshold, accuracy);
         const title = (who) => `${who}, best ${view.metricName} per width`;
-        parts.push(`#### ${capital(escapeMarkdown(view.metricName))} by width`);
-        parts.push(`Bars: the best ${escapeMarkdown(view.metricName)} any restart reached at each width. Flat line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}. ` +
+        parts.push(`#### ${capital((0,common_escape/* escapeMarkdown */.FV)(view.metricName))} by width`);
+        parts.push(`Bars: the best ${(0,common_escape/* escapeMarkdown */.FV)(view.metricName)} any restart reached at each width. Flat line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}. ` +
             `The numbers are in the per-width table below.`);
         for (const [who, s] of [
             ['This change', current],
@@ -44724,8 +45025,8 @@ function mark(width, view) {
 function historyTable(history, limits) {
     const start = Math.max(0, history.length - limits.historyRows);
     const lines = history.slice(start).map((h, i) => {
-        const commit = h.commit === null ? '—' : escapeMarkdown(h.commit.slice(0, 12));
-        return `| ${start + i + 1} | ${escapeMarkdown(h.date.slice(0, 10))} | ${commit} | ${(0,format/* formatCount */.B4)(h.rows)} | ${h.width} | ${num(h.metric)} |`;
+        const commit = h.commit === null ? '—' : (0,common_escape/* escapeMarkdown */.FV)(h.commit.slice(0, 12));
+        return `| ${start + i + 1} | ${(0,common_escape/* escapeMarkdown */.FV)(h.date.slice(0, 10))} | ${commit} | ${(0,format/* formatCount */.B4)(h.rows)} | ${h.width} | ${num(h.metric)} |`;
     });
     const omitted = start > 0 ? `\n\n_The ${start} oldest entries are left out for length._` : '';
     return `| # | Date | Commit | Rows | Width | Metric |\n|--:|:--|:--|--:|--:|--:|\n${lines.join('\n')}${omitted}`;
@@ -44741,25 +45042,25 @@ function pruneTable(steps, limits) {
 function changesList(changes, limits) {
     const items = [];
     if (changes.file)
-        items.push(`Data file: ${escapeMarkdown(changes.file.before)} → ${escapeMarkdown(changes.file.after)}.`);
+        items.push(`Data file: ${(0,common_escape/* escapeMarkdown */.FV)(changes.file.before)} → ${(0,common_escape/* escapeMarkdown */.FV)(changes.file.after)}.`);
     const r = changes.rows;
     if (!changes.changed)
         items.push("The data are the same as the baseline's (same fingerprint).");
     else
         items.push(`Rows: ${(0,format/* formatCount */.B4)(r.before)} → ${(0,format/* formatCount */.B4)(r.after)} (${(0,format/* formatDelta */.CW)(r.after - r.before)}).`);
     for (const label of changes.classesAppeared)
-        items.push(`New class ${escapeMarkdown(label)}.`);
+        items.push(`New class ${(0,common_escape/* escapeMarkdown */.FV)(label)}.`);
     for (const label of changes.classesVanished)
-        items.push(`Class ${escapeMarkdown(label)} no longer appears.`);
+        items.push(`Class ${(0,common_escape/* escapeMarkdown */.FV)(label)} no longer appears.`);
     for (const c of changes.classes ?? []) {
         if (c.before !== c.after) {
-            items.push(`Class ${escapeMarkdown(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} → ${(0,format/* formatCount */.B4)(c.after)} rows (${(0,format/* formatDelta */.CW)(c.after - c.before)}).`);
+            items.push(`Class ${(0,common_escape/* escapeMarkdown */.FV)(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} → ${(0,format/* formatCount */.B4)(c.after)} rows (${(0,format/* formatDelta */.CW)(c.after - c.before)}).`);
         }
     }
     for (const name of changes.columnsAdded)
-        items.push(`Column added: ${escapeMarkdown(name)}.`);
+        items.push(`Column added: ${(0,common_escape/* escapeMarkdown */.FV)(name)}.`);
     for (const name of changes.columnsRemoved)
-        items.push(`Column removed: ${escapeMarkdown(name)}.`);
+        items.push(`Column removed: ${(0,common_escape/* escapeMarkdown */.FV)(name)}.`);
     for (const f of changes.features) {
         const parts = [];
         if (f.meanMoved) {
@@ -44769,13 +45070,13 @@ function changesList(changes, limits) {
         if (f.rangeWidened) {
             parts.push(`range ${num(f.rangeBefore[0])} to ${num(f.rangeBefore[1])} widened to ${num(f.rangeAfter[0])} to ${num(f.rangeAfter[1])}`);
         }
-        items.push(`Feature ${escapeMarkdown(f.name)}: ${parts.join('; ')}.`);
+        items.push(`Feature ${(0,common_escape/* escapeMarkdown */.FV)(f.name)}: ${parts.join('; ')}.`);
     }
     for (const c of changes.categories) {
         if (c.appeared.length > 0)
-            items.push(`Feature ${escapeMarkdown(c.feature)}: new categories ${c.appeared.map((s) => escapeMarkdown(s)).join(', ')}.`);
+            items.push(`Feature ${(0,common_escape/* escapeMarkdown */.FV)(c.feature)}: new categories ${c.appeared.map((s) => (0,common_escape/* escapeMarkdown */.FV)(s)).join(', ')}.`);
         if (c.vanished.length > 0)
-            items.push(`Feature ${escapeMarkdown(c.feature)}: categories gone ${c.vanished.map((s) => escapeMarkdown(s)).join(', ')}.`);
+            items.push(`Feature ${(0,common_escape/* escapeMarkdown */.FV)(c.feature)}: categories gone ${c.vanished.map((s) => (0,common_escape/* escapeMarkdown */.FV)(s)).join(', ')}.`);
     }
     if (changes.changed && items.length === (changes.file ? 2 : 1)) {
         items.push('No class, column or feature moved beyond the thresholds.');
@@ -44785,7 +45086,7 @@ function changesList(changes, limits) {
     return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation or its range widened.`;
 }
 function footer(view, report) {
-    const file = view.baselineFile === null ? 'the baseline file' : escapeMarkdown(view.baselineFile);
+    const file = view.baselineFile === null ? 'the baseline file' : (0,common_escape/* escapeMarkdown */.FV)(view.baselineFile);
     const accept = view.verdict === 'new'
         ? 'To record this result as the baseline'
         : 'If this change is intended, accept it as the new baseline';
@@ -44796,7 +45097,7 @@ function footer(view, report) {
         '---',
         `${accept}: run \`neuron-budget baseline\` and commit ${file}, or run the action with \`update-baseline: true\`. ` +
             `A baseline is only written when the search found a width.${overBudget}`,
-        `_neuron-budget ${escapeMarkdown(report.tool.version)} measures how many hidden neurons this data needs; a passing gate is not a safety sign-off for a device._`,
+        `_neuron-budget ${(0,common_escape/* escapeMarkdown */.FV)(report.tool.version)} measures how many hidden neurons this data needs; a passing gate is not a safety sign-off for a device._`,
     ].join('\n\n');
 }
 function pickRows(rows, max, must) {
@@ -44834,9 +45135,9 @@ function renderText(report) {
     const view = viewOf(report);
     const out = [];
     const label = VERDICT_LABEL[view.verdict];
-    out.push(...text_wrap(`neuron-budget: ${label}. ${escapeText(view.headline)}`, ''));
+    out.push(...wrap(`neuron-budget: ${label}. ${(0,common_escape/* escapeText */.X1)(view.headline)}`, ''));
     for (const r of view.otherReasons)
-        out.push(...text_wrap(escapeText(r), '  - ', '    '));
+        out.push(...wrap((0,common_escape/* escapeText */.X1)(r), '  - ', '    '));
     out.push('');
     const b = view.baseline;
     const c = view.current;
@@ -44863,7 +45164,7 @@ function renderText(report) {
         out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
     if (view.backing !== null) {
         out.push('');
-        out.push(...text_wrap(view.backing, ''));
+        out.push(...wrap(view.backing, ''));
     }
     out.push('');
     const terms = [`target: ${(0,format/* targetPhrase */.Lx)(view.metricName, view.threshold)}`];
@@ -44871,8 +45172,8 @@ function renderText(report) {
         terms.push(report.gate.maxWidth === null ? 'no device budget' : `device budget: ${(0,format/* neurons */.nO)(report.gate.maxWidth)}`);
         terms.push(`allowed growth: ${report.gate.allowedGrowth}`);
     }
-    out.push(...text_wrap(`${terms.join('; ')}.`, ''));
-    out.push(...text_wrap(`data: ${escapeText(report.data.file)}`, ''));
+    out.push(...wrap(`${terms.join('; ')}.`, ''));
+    out.push(...wrap(`data: ${(0,common_escape/* escapeText */.X1)(report.data.file)}`, ''));
     if (view.rows.length > 0) {
         out.push('');
         out.push(`${view.metricName} by width (best network; networks that met the target)`);
@@ -44898,7 +45199,7 @@ function renderText(report) {
         const widths = view.history.slice(-20).map((h) => String(h.width));
         if (c.width !== null)
             widths.push(`now ${c.width}`);
-        out.push(...text_wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
+        out.push(...wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
     }
     const pruning = report.search?.pruning ?? [];
     if (pruning.length > 0) {
@@ -44910,54 +45211,54 @@ function renderText(report) {
         out.push('');
         out.push('data changes since the baseline:');
         for (const line of changeLines(report.changes))
-            out.push(...text_wrap(line, '  - ', '    '));
+            out.push(...wrap(line, '  - ', '    '));
     }
     out.push('');
-    out.push(...text_wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
+    out.push(...wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
     if (overDeviceBudget(report)) {
-        out.push(...text_wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
+        out.push(...wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
     }
-    out.push(...text_wrap('A passing gate is not a safety sign-off for a device.', ''));
+    out.push(...wrap('A passing gate is not a safety sign-off for a device.', ''));
     return `${out.join('\n')}\n`;
 }
 function changeLines(ch) {
     const lines = [];
     if (ch.file)
-        lines.push(`data file ${escapeText(ch.file.before)} -> ${escapeText(ch.file.after)}`);
+        lines.push(`data file ${(0,common_escape/* escapeText */.X1)(ch.file.before)} -> ${(0,common_escape/* escapeText */.X1)(ch.file.after)}`);
     if (!ch.changed)
         lines.push('same data as the baseline (same fingerprint)');
     else
         lines.push(`rows ${(0,format/* formatCount */.B4)(ch.rows.before)} -> ${(0,format/* formatCount */.B4)(ch.rows.after)} (${ascii((0,format/* formatDelta */.CW)(ch.rows.after - ch.rows.before))})`);
     for (const l of ch.classesAppeared)
-        lines.push(`new class ${escapeText(l)}`);
+        lines.push(`new class ${(0,common_escape/* escapeText */.X1)(l)}`);
     for (const l of ch.classesVanished)
-        lines.push(`class ${escapeText(l)} no longer appears`);
+        lines.push(`class ${(0,common_escape/* escapeText */.X1)(l)} no longer appears`);
     for (const c of ch.classes ?? []) {
         if (c.before !== c.after)
-            lines.push(`class ${escapeText(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} -> ${(0,format/* formatCount */.B4)(c.after)} rows (${ascii((0,format/* formatDelta */.CW)(c.after - c.before))})`);
+            lines.push(`class ${(0,common_escape/* escapeText */.X1)(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} -> ${(0,format/* formatCount */.B4)(c.after)} rows (${ascii((0,format/* formatDelta */.CW)(c.after - c.before))})`);
     }
     for (const n of ch.columnsAdded)
-        lines.push(`column added: ${escapeText(n)}`);
+        lines.push(`column added: ${(0,common_escape/* escapeText */.X1)(n)}`);
     for (const n of ch.columnsRemoved)
-        lines.push(`column removed: ${escapeText(n)}`);
+        lines.push(`column removed: ${(0,common_escape/* escapeText */.X1)(n)}`);
     for (const f of ch.features) {
         const parts = [];
         if (f.meanMoved)
             parts.push(`mean ${fmt(f.meanBefore)} -> ${fmt(f.meanAfter)}${f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} std)`}`);
         if (f.rangeWidened)
             parts.push(`range ${fmt(f.rangeBefore[0])}..${fmt(f.rangeBefore[1])} -> ${fmt(f.rangeAfter[0])}..${fmt(f.rangeAfter[1])}`);
-        lines.push(`feature ${escapeText(f.name)}: ${parts.join('; ')}`);
+        lines.push(`feature ${(0,common_escape/* escapeText */.X1)(f.name)}: ${parts.join('; ')}`);
     }
     for (const c of ch.categories) {
         if (c.appeared.length > 0)
-            lines.push(`feature ${escapeText(c.feature)}: new categories ${c.appeared.map((s) => escapeText(s)).join(', ')}`);
+            lines.push(`feature ${(0,common_escape/* escapeText */.X1)(c.feature)}: new categories ${c.appeared.map((s) => (0,common_escape/* escapeText */.X1)(s)).join(', ')}`);
         if (c.vanished.length > 0)
-            lines.push(`feature ${escapeText(c.feature)}: categories gone ${c.vanished.map((s) => escapeText(s)).join(', ')}`);
+            lines.push(`feature ${(0,common_escape/* escapeText */.X1)(c.feature)}: categories gone ${c.vanished.map((s) => (0,common_escape/* escapeText */.X1)(s)).join(', ')}`);
     }
     return lines;
 }
 /** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
-function text_wrap(text, first, rest = first) {
+function wrap(text, first, rest = first) {
     const words = text.split(/ +/).filter((w) => w !== '');
     const lines = [];
     let line = first;
@@ -45021,13 +45322,14 @@ function withGate(report, outcome, gate) {
 
 
 
-// EXTERNAL MODULE: ./src/search/index.ts + 9 modules
-var src_search = __nccwpck_require__(9324);
+// EXTERNAL MODULE: ./src/search/index.ts + 10 modules
+var src_search = __nccwpck_require__(6202);
 ;// CONCATENATED MODULE: ./src/run.ts
 /**
  * The main job shared by the command line and the action: config → data → search → gate →
  * report. This file only orchestrates; each stage lives in its folder.
  */
+
 
 
 
@@ -45055,7 +45357,7 @@ async function runJob(options) {
     // A corrupt baseline is the user's to fix before minutes of search, not after.
     const previous = await readBaseline(baselinePath, baselineShown);
     const data = await timed(timing, 'loadSeconds', () => loadData(loaded));
-    const config = settleMetric(loaded, data.dataset.task);
+    const config = settleTarget(loaded, data.dataset.task, data.dataset.encoding.target.classes);
     options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
     const search = await timed(timing, 'searchSeconds', () => (0,src_search/* runSearch */._d)(data.dataset, config.search, config.target, {
         workers: options.workers ?? null,
@@ -45065,9 +45367,11 @@ async function runJob(options) {
     }));
     timing.growthSeconds = search.timing.growthSeconds;
     timing.pruneSeconds = search.timing.pruneSeconds;
+    const cost = search.witness === null ? null : (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)(search.witness.network, data.dataset.encoding));
     const gate = await runGateStage({
         mode: options.mode,
         result: search,
+        cost,
         loaded: data,
         config,
         baselinePath,
@@ -45079,7 +45383,10 @@ async function runJob(options) {
     });
     if (gate.notWritten !== null)
         options.log?.(`baseline not written: ${gate.notWritten}`);
-    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required), gate.outcome, gate.gate);
+    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
+        encoding: data.dataset.encoding,
+        target: config.target,
+    }), gate.outcome, gate.gate);
     let modelWritten = null;
     if (options.modelPath) {
         if (search.witness === null) {
@@ -45088,7 +45395,12 @@ async function runJob(options) {
         else {
             const backing = { on: search.judging.on, adequate: search.width !== null };
             const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
-            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration);
+            const provenance = {
+                tool: { name: 'neuron-budget', version: TOOL_VERSION },
+                data: data.fingerprint,
+                config: displayPath(config.root, config.file),
+            };
+            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration, provenance);
             await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
             modelWritten = options.modelPath;
         }
@@ -45403,7 +45715,7 @@ function parseBooleanInput(name, value) {
         return true;
     if (FALSE.includes(value))
         return false;
-    throw new errors_UserError(`input ${name}: expected true or false, found ${quote(value)}`, { key: name });
+    throw new errors/* UserError */.yo(`input ${name}: expected true or false, found ${(0,common_escape/* quote */.hD)(value)}`, { key: name });
 }
 /** '' means every core; otherwise a whole number from 1 to MAX_WORKERS. @testOnly */
 function parseWorkersInput(value) {
@@ -45411,23 +45723,23 @@ function parseWorkersInput(value) {
         return null;
     const n = parseWorkerCount(value);
     if (n === null) {
-        throw new errors_UserError(`input workers: expected a whole number from 1 to ${MAX_WORKERS}, or empty for every core, found ${quote(value)}`, { key: 'workers' });
+        throw new errors/* UserError */.yo(`input workers: expected a whole number from 1 to ${MAX_WORKERS}, or empty for every core, found ${(0,common_escape/* quote */.hD)(value)}`, { key: 'workers' });
     }
     return n;
 }
 function workspaceRoot(env) {
     const ws = env['GITHUB_WORKSPACE'];
     if (!ws) {
-        throw new errors_UserError('GITHUB_WORKSPACE is not set: run neuron-budget as a step of a GitHub Actions job, after actions/checkout');
+        throw new errors/* UserError */.yo('GITHUB_WORKSPACE is not set: run neuron-budget as a step of a GitHub Actions job, after actions/checkout');
     }
     if (!(0,external_node_path_namespaceObject.isAbsolute)(ws)) {
-        throw new errors_UserError(`GITHUB_WORKSPACE must be an absolute path, found ${quote(ws)}`);
+        throw new errors/* UserError */.yo(`GITHUB_WORKSPACE must be an absolute path, found ${(0,common_escape/* quote */.hD)(ws)}`);
     }
     try {
         return (0,external_node_fs_namespaceObject.realpathSync)(ws);
     }
     catch {
-        throw new errors_UserError(`GITHUB_WORKSPACE ${ws} does not exist: check out the repository first (actions/checkout)`);
+        throw new errors/* UserError */.yo(`GITHUB_WORKSPACE ${ws} does not exist: check out the repository first (actions/checkout)`);
     }
 }
 /** Lexical and symbolic-link confinement, through the shared config helper. */
@@ -45448,10 +45760,10 @@ function readInputs(get, env = process.env) {
         st = (0,external_node_fs_namespaceObject.statSync)(workingDirectory);
     }
     catch {
-        throw new errors_UserError(`input working-directory: ${quote(wdWritten)} does not exist in the workspace (looked for ${workingDirectory})`, { key: 'working-directory' });
+        throw new errors/* UserError */.yo(`input working-directory: ${(0,common_escape/* quote */.hD)(wdWritten)} does not exist in the workspace (looked for ${workingDirectory})`, { key: 'working-directory' });
     }
     if (!st.isDirectory()) {
-        throw new errors_UserError(`input working-directory: ${quote(wdWritten)} is not a directory (${workingDirectory})`, {
+        throw new errors/* UserError */.yo(`input working-directory: ${(0,common_escape/* quote */.hD)(wdWritten)} is not a directory (${workingDirectory})`, {
             key: 'working-directory',
         });
     }
@@ -45485,7 +45797,7 @@ function failureMarkdown(message, kind) {
     const tail = kind === 'input'
         ? 'No verdict was reached, so this change has not been checked. The error is also annotated on the file.'
         : 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.';
-    return `${head}\n\n<pre>${escapeMarkdown(message, MAX_MESSAGE)}</pre>\n\n${tail}\n`;
+    return `${head}\n\n<pre>${(0,common_escape/* escapeMarkdown */.FV)(message, errors/* MAX_MESSAGE */.h2)}</pre>\n\n${tail}\n`;
 }
 function fitSummary(markdown, limit = SUMMARY_LIMIT) {
     if (markdown.length <= limit)
@@ -45575,7 +45887,7 @@ function classify(e, o, timeout) {
     if (typeof err.status !== 'number')
         throw e; // not an HTTP failure: a bug, not GitHub's doing
     const response = err.response;
-    const detail = octokit_clip(messageOf(response?.data) ?? (typeof err.message === 'string' ? err.message : 'no message'));
+    const detail = clip(messageOf(response?.data) ?? (typeof err.message === 'string' ? err.message : 'no message'));
     // A RequestError without a response: the request never got an answer (the library files it as 500).
     if (!response)
         return { ...base, kind: 'no-response', status: null, detail };
@@ -45626,7 +45938,7 @@ function messageOf(data) {
     return typeof data === 'string' && data.trim() !== '' ? data : null;
 }
 /** GitHub's texts end up in warnings; a long HTML error page must not. */
-function octokit_clip(s, max = 200) {
+function clip(s, max = 200) {
     const one = s.replace(/\s+/g, ' ').trim();
     return one.length > max ? `${one.slice(0, max - 1)}…` : one;
 }
@@ -45712,7 +46024,7 @@ function throttledProgress(print, intervalMs = PROGRESS_INTERVAL_MS, now = Date.
 function logUntrusted(text) {
     const token = `neuron-budget-${(0,external_node_crypto_.randomUUID)()}`;
     info(`::stop-commands::${token}`);
-    info(escapeLines(text));
+    info((0,common_escape/* escapeLines */.RQ)(text));
     info(`::${token}::`);
 }
 
@@ -45753,7 +46065,7 @@ async function writeSummary(markdown) {
         await summary.addRaw(fitSummary(markdown), true).write();
     }
     catch (e) {
-        warning(`Could not write the job summary: ${escapeText(e.message)}`);
+        warning(`Could not write the job summary: ${(0,common_escape/* escapeText */.X1)(e.message)}`);
     }
 }
 /** Beside the report, for workflows that relay the comment themselves (pull requests from forks). */
@@ -45762,7 +46074,7 @@ async function writeCommentFile(path, markdown) {
         await writeFileAtomic(path, markdown);
     }
     catch (e) {
-        warning(`Could not write ${escapeText(path)}: ${escapeText(e.message)}`);
+        warning(`Could not write ${(0,common_escape/* escapeText */.X1)(path)}: ${(0,common_escape/* escapeText */.X1)(e.message)}`);
     }
 }
 function isForkPullRequest() {
@@ -45826,20 +46138,20 @@ async function postComment(inputs, markdown) {
         retryBaseMs: retryBaseFromEnv(process.env),
         requestTimeoutMs: requestTimeoutFromEnv(process.env),
         budget,
-        log: (m) => info(escapeText(m, MAX_MESSAGE)),
+        log: (m) => info((0,common_escape/* escapeText */.X1)(m, errors/* MAX_MESSAGE */.h2)),
     });
     const marker = commentMarker(inputs.configKey);
     try {
         const identity = await tokenIdentity(octokit);
-        info(`Looking for an earlier neuron-budget comment by ${escapeText(identity.login)} (${identity.how}).`);
-        const done = await upsertComment(octokit, { owner, repo, issueNumber }, marker, commentBody(marker, markdown, runUrl()), identity, (m) => info(escapeText(m, MAX_MESSAGE)));
-        info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${escapeText(done.url)}` : ''}`);
+        info(`Looking for an earlier neuron-budget comment by ${(0,common_escape/* escapeText */.X1)(identity.login)} (${identity.how}).`);
+        const done = await upsertComment(octokit, { owner, repo, issueNumber }, marker, commentBody(marker, markdown, runUrl()), identity, (m) => info((0,common_escape/* escapeText */.X1)(m, errors/* MAX_MESSAGE */.h2)));
+        info(`Pull-request comment ${done.action} (id ${done.id})${done.url ? `: ${(0,common_escape/* escapeText */.X1)(done.url)}` : ''}`);
     }
     catch (e) {
         const why = isApiFailure(e)
             ? describeFailure(e, forbiddenAdvice(), Math.round(budgetMs / 100) / 10)
             : `It failed with an unexpected error: ${e.message ?? String(e)}.`;
-        warning(escapeText(`Could not post the pull-request comment. ${why} The verdict, job summary and outputs are unaffected.`, MAX_MESSAGE));
+        warning((0,common_escape/* escapeText */.X1)(`Could not post the pull-request comment. ${why} The verdict, job summary and outputs are unaffected.`, errors/* MAX_MESSAGE */.h2));
     }
 }
 function setOutputs(result, reportPath) {
@@ -45870,7 +46182,7 @@ async function failBadInput(e, inputs) {
 }
 async function failInternal(e, inputs) {
     const err = e instanceof Error ? e : new Error(String(e));
-    error(`internal error: ${escapeText(err.message, MAX_MESSAGE)}`, { title: 'neuron-budget' });
+    error(`internal error: ${(0,common_escape/* escapeText */.X1)(err.message, errors/* MAX_MESSAGE */.h2)}`, { title: 'neuron-budget' });
     if (err.stack)
         logUntrusted(err.stack);
     process.exitCode = EXIT.internal;
@@ -45888,7 +46200,7 @@ async function run() {
         const reportPath = (0,external_node_path_namespaceObject.join)(folder, 'report.json');
         const modelPath = (0,external_node_path_namespaceObject.join)(folder, 'model.json');
         const mode = inputs.updateBaseline ? 'baseline' : 'check';
-        info(`neuron-budget: ${mode} with ${escapeText(inputs.configKey)} (workspace ${escapeText(inputs.workspace)})`);
+        info(`neuron-budget: ${mode} with ${(0,common_escape/* escapeText */.X1)(inputs.configKey)} (workspace ${(0,common_escape/* escapeText */.X1)(inputs.workspace)})`);
         let phase = null;
         const progress = () => throttledProgress((line) => info(line));
         let print = progress();
@@ -45929,20 +46241,20 @@ async function run() {
         const verdict = result.verdict;
         if (FAILING.has(verdict)) {
             const reason = result.report.reasons[0];
-            setFailed(`neuron-budget verdict: ${verdict}${reason ? ` (${escapeText(reason, MAX_MESSAGE)})` : ''}`);
+            setFailed(`neuron-budget verdict: ${verdict}${reason ? ` (${(0,common_escape/* escapeText */.X1)(reason, errors/* MAX_MESSAGE */.h2)})` : ''}`);
         }
         else {
             info(`neuron-budget verdict: ${verdict}`);
         }
         if (result.baselineWritten)
-            info(`Baseline written to ${escapeText(result.baselineWritten)}; commit it to accept this result.`);
+            info(`Baseline written to ${(0,common_escape/* escapeText */.X1)(result.baselineWritten)}; commit it to accept this result.`);
         // None of these throw: they report trouble as warnings and leave the result alone.
         await writeCommentFile((0,external_node_path_namespaceObject.join)(folder, 'comment.md'), result.markdown);
         await writeSummary(result.markdown);
         await postComment(inputs, result.markdown);
     }
     catch (e) {
-        if (isUserError(e))
+        if ((0,errors/* isUserError */.iU)(e))
             await failBadInput(e, inputs);
         else
             await failInternal(e, inputs);
@@ -45958,8 +46270,8 @@ async function run() {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(606);
-/* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9324);
+/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(2591);
+/* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6202);
 /**
  * Entry of the action bundle (dist/index.js). The same bundle is also the entry of the search's
  * worker threads, since the bundler does not follow `new Worker(path)`.
@@ -45985,6 +46297,7 @@ __webpack_async_result__();
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
+  ar: () => (/* reexport */ classesOn),
   K$: () => (/* reexport */ createTrainer),
   Oc: () => (/* reexport */ metricOn),
   Y$: () => (/* reexport */ trainerFromNetwork)
@@ -48223,6 +48536,26 @@ function metricOn(net, x, y, rows, metric, targetStd) {
     defaultKernel().forward(shape, params, x, rows, logits, null);
     return targetMetric(metric, reference_headCode(shape.head), shape.outputs, logits, y, rows, targetStd);
 }
+/** The class each row is given: the largest logit, or logit > 0 for a logistic head. */
+function classesOn(net, x, rows) {
+    const { shape, params } = network_fromJson(net);
+    const K = shape.outputs;
+    const logits = new Float64Array(rows * K);
+    defaultKernel().forward(shape, params, x, rows, logits, null);
+    const out = new Int32Array(rows);
+    for (let p = 0; p < rows; p++) {
+        if (K === 1)
+            out[p] = logits[p] > 0 ? 1 : 0;
+        else {
+            let best = 0;
+            for (let k = 1; k < K; k++)
+                if (logits[p * K + k] > logits[p * K + best])
+                    best = k;
+            out[p] = best;
+        }
+    }
+    return out;
+}
 
 ;// CONCATENATED MODULE: ./src/nn/index.ts
 
@@ -48464,7 +48797,7 @@ function detSoftplus(z) {
 
 /***/ }),
 
-/***/ 9324:
+/***/ 6202:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -48637,12 +48970,72 @@ var random = __nccwpck_require__(4554);
 var nn = __nccwpck_require__(6575);
 // EXTERNAL MODULE: ./src/common/metric.ts
 var metric = __nccwpck_require__(8457);
+// EXTERNAL MODULE: ./src/device/index.ts + 8 modules
+var device = __nccwpck_require__(4143);
+;// CONCATENATED MODULE: ./src/search/classes.ts
+/** counts[t][p]: rows of true class t predicted as p. */
+function confusion(predicted, truth, classes) {
+    const counts = Array.from({ length: classes }, () => new Array(classes).fill(0));
+    for (let r = 0; r < truth.length; r++)
+        counts[truth[r]][predicted[r]]++;
+    return counts;
+}
+/** Recall per class: correct / rows of that class; NaN for a class with no rows. */
+function recalls(counts) {
+    return counts.map((row, c) => {
+        const n = row.reduce((s, v) => s + v, 0);
+        return n === 0 ? Number.NaN : row[c] / n;
+    });
+}
+/** Precision per class: correct / rows predicted as that class; NaN when none was. */
+function precisions(counts) {
+    return counts.map((_, c) => {
+        const n = counts.reduce((s, row) => s + row[c], 0);
+        return n === 0 ? Number.NaN : counts[c][c] / n;
+    });
+}
+/** Every class with a floor above 0 reaches it; a class absent from the rows cannot be checked and passes. */
+function recallsHold(counts, floors) {
+    const r = recalls(counts);
+    return floors.every((min, c) => min <= 0 || Number.isNaN(r[c]) || r[c] >= min);
+}
+/** The target metric from predictions: class indices (accuracy) or values in the target's units (errors). */
+function metricOfPredictions(metric, predicted, truth) {
+    const n = truth.length;
+    if (n === 0)
+        return Number.NaN;
+    if (metric === 'accuracy') {
+        let correct = 0;
+        for (let r = 0; r < n; r++)
+            if (predicted[r] === truth[r])
+                correct++;
+        return correct / n;
+    }
+    let se = 0;
+    let ae = 0;
+    let max = 0;
+    for (let r = 0; r < n; r++) {
+        const d = Math.abs(predicted[r] - truth[r]);
+        se += d * d;
+        ae += d;
+        if (d > max || d !== d)
+            max = d;
+    }
+    return metric === 'rmse' ? Math.sqrt(se / n) : metric === 'mae' ? ae / n : max;
+}
+
 ;// CONCATENATED MODULE: ./src/search/judge.ts
 /**
  * Whether a trained network meets the target: decided on the judging rows alone, which no
  * training ever reads (they do not stop a training, pick a restart or accept a pruning step).
  * Without judging rows the validation rows judge, and without those the training rows.
+ *
+ * A network meets the target when, in the form target.precision names (float32, or the int8
+ * form the exported C runs, quantised as src/device/quantize.ts does), its metric meets the
+ * threshold on those rows and every class with a recall floor (target.min-recall) reaches it.
  */
+
+
 
 
 function judgingRowsOf(data, folded) {
@@ -48652,25 +49045,64 @@ function judgingRowsOf(data, folded) {
         return { on: 'validation', rows: data.validationRows, folded };
     return { on: 'training', rows: data.trainRows, folded };
 }
-/** The judged metric of `net`. */
-function judgedMetric(data, net, target) {
-    const std = data.encoding.target.std;
+/** The encoded rows that judge, with their targets (classes, or standardised values). */
+function judgedRows(data) {
     if (data.judgingRows > 0)
-        return (0,nn/* metricOn */.Oc)(net, data.xJudging, data.yJudging, data.judgingRows, target.metric, std);
+        return { x: data.xJudging, y: data.yJudging, rows: data.judgingRows };
     if (data.validationRows > 0)
-        return (0,nn/* metricOn */.Oc)(net, data.xValidation, data.yValidation, data.validationRows, target.metric, std);
-    return (0,nn/* metricOn */.Oc)(net, data.xTrain, data.yTrain, data.trainRows, target.metric, std);
+        return { x: data.xValidation, y: data.yValidation, rows: data.validationRows };
+    return { x: data.xTrain, y: data.yTrain, rows: data.trainRows };
 }
-/** The record of a finished training, with the judged metric added. */
+/** Everything the screens show about a network on the rows that judge. `withInt8` computes the int8 form even when float32 decides. */
+function appraise(data, net, target, withInt8) {
+    const { x, y, rows } = judgedRows(data);
+    const std = data.encoding.target.std;
+    const float32 = (0,nn/* metricOn */.Oc)(net, x, y, rows, target.metric, std);
+    const int8Decides = target.precision === 'int8';
+    let int8 = null;
+    let int8Classes = null;
+    if ((withInt8 || int8Decides) && data.rawJudged !== undefined) {
+        const q = (0,device/* quantizeNetwork */.gf)(net, data.encoding, { x: data.xTrain, rows: data.trainRows });
+        const out = (0,device/* int8Forward */.LS)(q, data.rawJudged, rows);
+        if (data.task === 'classification') {
+            int8Classes = out.classes;
+            int8 = metricOfPredictions(target.metric, out.classes, y);
+        }
+        else {
+            const t = data.encoding.target;
+            int8 = metricOfPredictions(target.metric, out.outputs, Float64Array.from(y, (v) => v * t.std + t.mean));
+        }
+    }
+    if (int8Decides && int8 === null)
+        throw new Error('target.precision is int8, but the dataset has no raw rows to run the int8 form on');
+    const deciding = int8Decides ? int8 : float32;
+    let counts = null;
+    if (data.task === 'classification') {
+        const predicted = int8Decides ? int8Classes : (0,nn/* classesOn */.ar)(net, x, rows);
+        counts = confusion(predicted, y, data.encoding.target.classes?.length ?? 2);
+    }
+    const floors = target.recallFloors ?? null;
+    const recallOk = floors === null || counts === null || recallsHold(counts, floors);
+    return {
+        float32,
+        int8,
+        confusion: counts,
+        recall: counts === null ? null : recalls(counts),
+        precision: counts === null ? null : precisions(counts),
+        deciding,
+        met: (0,metric/* meetsThreshold */.M0)(deciding, target) && recallOk,
+    };
+}
+/** The record of a finished training, with its judgement on the rows that judge added. */
 function judge(data, net, rec, target) {
     const diverged = rec.stop === 'diverged' || net === null;
-    const judged = diverged ? Number.NaN : judgedMetric(data, net, target);
+    const a = diverged ? null : appraise(data, net, target, false);
     return {
         train: rec.trainMetric,
         steering: rec.steeringMetric,
-        judged,
+        judged: a === null ? Number.NaN : a.deciding,
         reached: !diverged && (0,metric/* meetsThreshold */.M0)(rec.steeringMetric, target),
-        met: !diverged && (0,metric/* meetsThreshold */.M0)(judged, target),
+        met: a !== null && a.met,
     };
 }
 
@@ -49082,6 +49514,7 @@ function wilsonInterval(successes, trials, z = Z95) {
  */
 
 
+/** @testOnly */
 function median(values) {
     if (values.length === 0)
         return null;
@@ -49323,7 +49756,7 @@ async function runSearch(data, search, target, options = {}) {
             growthSeconds: (growthEnd - t0) / 1000,
             pruneSeconds: (end - growthEnd) / 1000,
         });
-        const base = { grownWidth: null, metric: null, witness: null, pruning: [], judging };
+        const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
         const decision = grown.decision;
         if (decision.kind === 'need') {
             return {
@@ -49366,6 +49799,7 @@ async function runSearch(data, search, target, options = {}) {
                 grownWidth: decision.grownWidth,
                 width: null,
                 witness: t.witness,
+                appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
                 widths: t.widths,
                 pruning: steps,
                 trainings,
@@ -49380,6 +49814,7 @@ async function runSearch(data, search, target, options = {}) {
             grownWidth: decision.grownWidth,
             metric: found ? t.witness.judged : null,
             witness: t.witness,
+            appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
             widths: t.widths,
             pruning: steps,
             trainings,

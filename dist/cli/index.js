@@ -8876,6 +8876,9 @@ const FLAGS = {
     model: { value: 'FILE', help: 'write the smallest network found (weights and encoding) to FILE' },
     baseline: { value: 'FILE', help: 'baseline file to use instead of the one named in the config' },
     workers: { value: 'N', help: `worker threads, 1 to ${MAX_WORKERS} (default: config, else one per core)` },
+    format: { value: 'FORMAT', help: 'what to write: c (C99 source, a float32 and an int8 path)' },
+    out: { value: 'PATH', help: 'where to write (export: a folder; predict: a CSV file, default stdout)' },
+    name: { value: 'NAME', help: 'C name of the model: its files and the prefix of its functions (default nb_model)' },
 };
 const COMMANDS = {
     check: {
@@ -8884,7 +8887,18 @@ const COMMANDS = {
     },
     baseline: {
         summary: 'search the smallest adequate width and write it as the new baseline',
-        flags: ['config', 'baseline'],
+        flags: ['config', 'baseline', 'workers'],
+    },
+    export: {
+        summary: 'write firmware source for a model file (written by check --model)',
+        flags: ['format', 'out', 'name'],
+        positionals: ['MODEL.json'],
+        required: ['format', 'out'],
+    },
+    predict: {
+        summary: 'score the rows of a CSV file with a model file, as CSV',
+        flags: ['out'],
+        positionals: ['MODEL.json', 'DATA.csv'],
     },
 };
 /** A mistake on the command line: exit 2, one line, with a pointer to --help. */
@@ -8916,7 +8930,7 @@ function parseInvocation(argv) {
         throw new UsageError(`unknown command ${quote(first)}${didYouMean(first, Object.keys(COMMANDS))}; commands: ${commandList(', ')}`);
     }
     const command = first;
-    const flags = readFlags(command, rest);
+    const { flags, args } = readFlags(command, rest);
     let workers = null;
     if (flags.workers !== undefined) {
         workers = parseWorkerCount(flags.workers);
@@ -8924,16 +8938,23 @@ function parseInvocation(argv) {
             throw new UsageError(`${command}: --workers: expected an integer from 1 to ${MAX_WORKERS}, found ${quote(flags.workers)}`);
         }
     }
-    return { kind: 'run', command, flags, workers };
+    return { kind: 'run', command, flags, workers, args };
 }
 function readFlags(command, args) {
-    const allowed = COMMANDS[command].flags;
+    const spec = COMMANDS[command];
+    const allowed = spec.flags;
+    const wanted = spec.positionals ?? [];
+    const positional = [];
     const options = Object.fromEntries(Object.keys(FLAGS).map((f) => [f, { type: 'string' }]));
     // Not strict: unknown options and missing values get our own messages below.
     const { tokens } = (0,external_node_util_namespaceObject.parseArgs)({ args, options, strict: false, allowPositionals: true, tokens: true });
     const flags = {};
     for (const token of tokens) {
         if (token.kind === 'positional') {
+            if (positional.length < wanted.length) {
+                positional.push(token.value);
+                continue;
+            }
             throw new UsageError(`${command}: unexpected argument ${quote(token.value)}; options are written --name VALUE`);
         }
         if (token.kind !== 'option')
@@ -8953,175 +8974,14 @@ function readFlags(command, args) {
             throw new UsageError(`${command}: --${flag} is given twice`);
         flags[flag] = value;
     }
-    return flags;
-}
-
-;// CONCATENATED MODULE: ./src/report/progress.ts
-const PROGRESS_INTERVAL_MS = 5000;
-/** @testOnly */
-function progressLine(e) {
-    const best = e.best === null ? 'none yet' : String(Number(e.best.toPrecision(4)));
-    return `${e.phase}: width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}, best so far ${best}`;
-}
-/**
- * Returns a progress handler that prints through `print`, at most once per `intervalMs`
- * (the first event always prints). `now` is injectable for tests.
- */
-function throttledProgress(print, intervalMs = PROGRESS_INTERVAL_MS, now = Date.now) {
-    let last = -Infinity;
-    return (e) => {
-        const t = now();
-        if (t - last < intervalMs)
-            return;
-        last = t;
-        print(progressLine(e));
-    };
-}
-
-;// CONCATENATED MODULE: ./src/cli/progress.ts
-/** Search progress on stderr: one line redrawn in place on a terminal; elsewhere a plain line every few seconds. */
-
-function progressPrinter(stream) {
-    if (!stream.isTTY) {
-        // The same throttled line the action logs: the first event at once, then one every few seconds.
-        const print = throttledProgress((line) => stream.write(`progress: ${line}\n`));
-        return { onProgress: print, done: () => undefined };
+    if (positional.length < wanted.length) {
+        throw new UsageError(`${command}: expected ${wanted.join(' ')}, found ${positional.length === 0 ? 'nothing' : positional.map((p) => quote(p)).join(' ')}`);
     }
-    let last = 0;
-    let drawn = false;
-    return {
-        onProgress: (e) => {
-            const now = performance.now();
-            if (now - last < 100)
-                return; // display only: at most ten redraws a second
-            last = now;
-            const best = e.best === null ? '' : ` · best ${e.best.toFixed(4)}`;
-            stream.write(`\r\x1b[2K${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`);
-            drawn = true;
-        },
-        done: () => {
-            if (drawn)
-                stream.write('\r\x1b[2K');
-        },
-    };
-}
-
-;// CONCATENATED MODULE: ./src/cli/usage.ts
-/** The help text of the command line. */
-
-
-function usage(command) {
-    if (command !== null) {
-        const spec = COMMANDS[command];
-        const lines = [
-            `${TOOL_NAME} ${command}: ${spec.summary}`,
-            '',
-            `usage: ${TOOL_NAME} ${command} [options]`,
-            '',
-            'options:',
-            ...spec.flags.map((f) => `  --${`${f} ${FLAGS[f].value}`.padEnd(16)}${FLAGS[f].help}`),
-            '',
-            exitCodesText(),
-        ];
-        return lines.join('\n');
+    for (const flag of spec.required ?? []) {
+        if (flags[flag] === undefined)
+            throw new UsageError(`${command}: --${flag} ${FLAGS[flag].value} is required`);
     }
-    return [
-        `${TOOL_NAME} ${TOOL_VERSION}: finds the smallest hidden-layer width that reaches`,
-        'your target, and checks it against a committed baseline and a device budget.',
-        '',
-        'usage:',
-        ...Object.keys(COMMANDS).map((c) => `  ${TOOL_NAME} ${c.padEnd(9)} [options]`),
-        `  ${TOOL_NAME} COMMAND --help   options of one command`,
-        `  ${TOOL_NAME} --version`,
-        '',
-        'commands:',
-        ...Object.entries(COMMANDS).map(([c, s]) => `  ${c.padEnd(10)}${s.summary}`),
-        '',
-        'The current folder is the workspace. Paths in the config file resolve against',
-        "the config file's folder and must stay inside the workspace.",
-        'Messages go to stderr; stdout carries only --help and --version.',
-        '',
-        exitCodesText(),
-    ].join('\n');
-}
-function exitCodesText() {
-    return 'exit codes: 0 pass, improved or new; 1 fail or inconclusive; 2 bad input';
-}
-
-;// CONCATENATED MODULE: external "node:fs"
-const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
-;// CONCATENATED MODULE: ./src/common/paths.ts
-/**
- * Workspace confinement for every path a user gives (config paths, action inputs).
- * A gate that runs on pull requests must not read or write outside the checkout, so a
- * path may not climb out with `../`, be absolute somewhere else, or pass through a
- * symbolic link that points outside.
- */
-
-
-
-/** True when `child` is `parent` or lies below it (both absolute and normalised). @testOnly */
-function isInside(parent, child) {
-    return relativeInside(parent, child) !== null;
-}
-/**
- * `child` relative to `parent` with forward slashes ('' for `parent` itself), or null when it
- * lies outside. A name that merely starts with two dots (`..x`) is inside.
- */
-function relativeInside(parent, child) {
-    const rel = (0,external_node_path_namespaceObject.relative)((0,external_node_path_namespaceObject.resolve)(parent), (0,external_node_path_namespaceObject.resolve)(child));
-    if (rel === '..' || rel.startsWith('..' + external_node_path_namespaceObject.sep) || (0,external_node_path_namespaceObject.isAbsolute)(rel))
-        return null;
-    return rel.split(external_node_path_namespaceObject.sep).join('/');
-}
-/** How a file is named in messages: relative to the workspace root when inside it, forward slashes. */
-function displayPath(root, file) {
-    const rel = relativeInside(root, file);
-    return rel === null ? (0,external_node_path_namespaceObject.resolve)(file) : rel || '.';
-}
-/** The real location of `p`, following links through its longest existing prefix. */
-function realLocation(p) {
-    let existing = p;
-    const rest = [];
-    while (!(0,external_node_fs_namespaceObject.existsSync)(existing)) {
-        const parent = (0,external_node_path_namespaceObject.dirname)(existing);
-        if (parent === existing)
-            return p;
-        rest.unshift(existing.slice(parent.length).replace(/^[\\/]+/, ''));
-        existing = parent;
-    }
-    return (0,external_node_path_namespaceObject.resolve)((0,external_node_fs_namespaceObject.realpathSync)(existing), ...rest);
-}
-/**
- * Resolves `p` against `baseDir` and checks that the result stays inside `root`.
- * Returns the absolute path, or the reason it was refused (for the caller to locate).
- */
-function checkInside(root, baseDir, p) {
-    if (p.trim() === '')
-        return { ok: false, reason: 'expected a path, found an empty string' };
-    if (p.includes('\0'))
-        return { ok: false, reason: 'a path may not contain a NUL character' };
-    const absoluteRoot = (0,external_node_path_namespaceObject.resolve)(root);
-    const target = (0,external_node_path_namespaceObject.resolve)(baseDir, p);
-    const where = (0,external_node_path_namespaceObject.isAbsolute)(p) ? 'is an absolute path outside' : 'leads outside';
-    if (!isInside(absoluteRoot, target)) {
-        return { ok: false, reason: `"${p}" ${where} the workspace ${absoluteRoot}` };
-    }
-    const realRoot = realLocation(absoluteRoot);
-    if (!isInside(realRoot, realLocation(target))) {
-        return {
-            ok: false,
-            reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
-        };
-    }
-    return { ok: true, path: target };
-}
-/** As checkInside, but throws a UserError (with `key` when given) instead of returning the reason. */
-function resolveInside(root, baseDir, p, key) {
-    const result = checkInside(root, baseDir, p);
-    if (!result.ok)
-        throw new UserError(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
-    return result.path;
+    return { flags, args: positional };
 }
 
 ;// CONCATENATED MODULE: external "node:fs/promises"
@@ -9220,1193 +9080,4347 @@ function targetShort(metric, threshold) {
 function targetPhrase(metric, threshold) {
     return `${metric} of ${higherIsBetter(metric) ? 'at least' : 'at most'} ${formatMetric(threshold)}`;
 }
-function successRate(reached, restarts) {
-    if (reached === null || reached === undefined || restarts === null || restarts === undefined || restarts === 0) {
-        return '—';
+
+;// CONCATENATED MODULE: external "node:fs"
+const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
+;// CONCATENATED MODULE: ./src/common/paths.ts
+/**
+ * Workspace confinement for every path a user gives (config paths, action inputs).
+ * A gate that runs on pull requests must not read or write outside the checkout, so a
+ * path may not climb out with `../`, be absolute somewhere else, or pass through a
+ * symbolic link that points outside.
+ */
+
+
+
+/** True when `child` is `parent` or lies below it (both absolute and normalised). @testOnly */
+function isInside(parent, child) {
+    return relativeInside(parent, child) !== null;
+}
+/**
+ * `child` relative to `parent` with forward slashes ('' for `parent` itself), or null when it
+ * lies outside. A name that merely starts with two dots (`..x`) is inside.
+ */
+function relativeInside(parent, child) {
+    const rel = (0,external_node_path_namespaceObject.relative)((0,external_node_path_namespaceObject.resolve)(parent), (0,external_node_path_namespaceObject.resolve)(child));
+    if (rel === '..' || rel.startsWith('..' + external_node_path_namespaceObject.sep) || (0,external_node_path_namespaceObject.isAbsolute)(rel))
+        return null;
+    return rel.split(external_node_path_namespaceObject.sep).join('/');
+}
+/** How a file is named in messages: relative to the workspace root when inside it, forward slashes. */
+function displayPath(root, file) {
+    const rel = relativeInside(root, file);
+    return rel === null ? (0,external_node_path_namespaceObject.resolve)(file) : rel || '.';
+}
+/** The real location of `p`, following links through its longest existing prefix. */
+function realLocation(p) {
+    let existing = p;
+    const rest = [];
+    while (!(0,external_node_fs_namespaceObject.existsSync)(existing)) {
+        const parent = (0,external_node_path_namespaceObject.dirname)(existing);
+        if (parent === existing)
+            return p;
+        rest.unshift(existing.slice(parent.length).replace(/^[\\/]+/, ''));
+        existing = parent;
     }
-    return `${reached}/${restarts}`;
+    return (0,external_node_path_namespaceObject.resolve)((0,external_node_fs_namespaceObject.realpathSync)(existing), ...rest);
+}
+/**
+ * Resolves `p` against `baseDir` and checks that the result stays inside `root`.
+ * Returns the absolute path, or the reason it was refused (for the caller to locate).
+ */
+function checkInside(root, baseDir, p) {
+    if (p.trim() === '')
+        return { ok: false, reason: 'expected a path, found an empty string' };
+    if (p.includes('\0'))
+        return { ok: false, reason: 'a path may not contain a NUL character' };
+    const absoluteRoot = (0,external_node_path_namespaceObject.resolve)(root);
+    const target = (0,external_node_path_namespaceObject.resolve)(baseDir, p);
+    const where = (0,external_node_path_namespaceObject.isAbsolute)(p) ? 'is an absolute path outside' : 'leads outside';
+    if (!isInside(absoluteRoot, target)) {
+        return { ok: false, reason: `"${p}" ${where} the workspace ${absoluteRoot}` };
+    }
+    const realRoot = realLocation(absoluteRoot);
+    if (!isInside(realRoot, realLocation(target))) {
+        return {
+            ok: false,
+            reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
+        };
+    }
+    return { ok: true, path: target };
+}
+/** As checkInside, but throws a UserError (with `key` when given) instead of returning the reason. */
+function resolveInside(root, baseDir, p, key) {
+    const result = checkInside(root, baseDir, p);
+    if (!result.ok)
+        throw new UserError(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
+    return result.path;
 }
 
-;// CONCATENATED MODULE: ./src/config/spec.ts
-/**
- * Every config key the validator accepts, with its rule, default and description, as data.
- * The validator walks this table; a test walks it against schema/neuron-budget.schema.json
- * so the two cannot drift apart.
- */
-/** Marks a key the user must give. */
-const REQUIRED = Symbol('required');
-/** Marks a key whose default depends on another key (the description says how). */
-const DERIVED = Symbol('derived');
-/** Largest width the search may try: the gate is for small networks on small devices. */
-const WIDTH_LIMIT = 1024;
-const EPOCH_LIMIT = 10_000_000;
-const CONFIG_SPEC = [
-    {
-        name: 'data',
-        required: true,
-        description: 'The CSV file the networks learn from and how to read it.',
-        keys: [
-            {
-                name: 'path',
-                changesResult: false,
-                rule: { kind: 'path' },
-                default: REQUIRED,
-                description: 'CSV file with a header row, relative to this config file. Must stay inside the workspace.',
-            },
-            {
-                name: 'target',
-                changesResult: true,
-                rule: { kind: 'text' },
-                default: REQUIRED,
-                description: 'Column to predict.',
-            },
-            {
-                name: 'features',
-                changesResult: true,
-                rule: { kind: 'text-list', minItems: 1, nullable: true },
-                default: null,
-                description: 'Columns used as inputs. Default: every column except the target and the ignored ones.',
-            },
-            {
-                name: 'ignore',
-                changesResult: true,
-                rule: { kind: 'text-list', minItems: 0 },
-                default: [],
-                description: 'Columns never used as inputs (identifiers, timestamps).',
-            },
-            {
-                name: 'task',
-                changesResult: true,
-                rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
-                default: 'auto',
-                description: 'auto: decided from the target column (text or few distinct values: classification).',
-            },
-            {
-                name: 'validation',
-                changesResult: true,
-                rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
-                default: 0.25,
-                description: 'Fraction of rows (per class) held out to steer training: when a training stops, and whether a pruning step is kept. 0 steers on the training rows.',
-            },
-            {
-                name: 'judging',
-                changesResult: true,
-                rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
-                default: DERIVED,
-                description: 'Fraction of rows (per class) held out to judge whether a network meets the target; they never steer training. Default: 0.2 (at most half of what validation leaves), or 0 when data.validation is 0 (then the target is judged on the training rows). 0 with validation above 0 judges on the validation rows, which is optimistic.',
-            },
-            {
-                name: 'delimiter',
-                changesResult: true,
-                rule: { kind: 'character' },
-                default: ',',
-                description: 'Field separator: one character (write "\\t" in double quotes for a tab).',
-            },
-            {
-                name: 'max-categories',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: 10_000 },
-                default: 20,
-                description: 'Most distinct values a text feature may have; each becomes one input.',
-            },
-            {
-                name: 'missing',
-                changesResult: true,
-                rule: { kind: 'enum', values: ['error', 'drop'] },
-                default: 'error',
-                description: 'An empty feature value: error stops with its location; drop skips the row and counts it.',
-            },
-        ],
-    },
-    {
-        name: 'target',
-        required: true,
-        description: 'What a network must reach on the validation rows.',
-        keys: [
-            {
-                name: 'metric',
-                changesResult: true,
-                rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
-                default: DERIVED,
-                description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
-            },
-            {
-                name: 'threshold',
-                changesResult: true,
-                rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
-                default: REQUIRED,
-                description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
-            },
-        ],
-    },
-    {
-        name: 'search',
-        required: false,
-        description: 'How the smallest adequate width is searched for.',
-        keys: [
-            {
-                name: 'min-width',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
-                default: 1,
-                description: 'First width the growth phase tries.',
-            },
-            {
-                name: 'max-width',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
-                default: 16,
-                description: 'Last width the growth phase tries; at least min-width.',
-            },
-            {
-                name: 'restarts',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: 1000 },
-                default: 10,
-                description: 'Seeded trainings per width.',
-            },
-            {
-                name: 'required',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: 1000 },
-                default: 3,
-                description: 'Trainings per width that must reach the target for the width to count as adequate; at most restarts.',
-            },
-            {
-                name: 'max-epochs',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
-                default: 3000,
-                description: 'Epochs after which one training gives up.',
-            },
-            {
-                name: 'seed',
-                changesResult: true,
-                rule: { kind: 'integer', min: 0, max: 4_294_967_295 },
-                default: 1,
-                description: 'Base seed of every random choice (split, initial weights); same seed, same result.',
-            },
-            {
-                name: 'growth',
-                changesResult: true,
-                rule: { kind: 'enum', values: ['fresh', 'in-place'] },
-                default: 'fresh',
-                description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
-            },
-            {
-                name: 'activation',
-                changesResult: true,
-                rule: { kind: 'enum', values: ['tanh', 'logistic', 'relu'] },
-                default: 'tanh',
-                description: 'Hidden-layer activation function.',
-            },
-            {
-                name: 'optimizer',
-                changesResult: true,
-                rule: { kind: 'enum', values: ['lbfgs', 'irprop+', 'adam', 'backprop'] },
-                default: 'lbfgs',
-                description: 'lbfgs (full-batch L-BFGS with a strong Wolfe line search), irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
-            },
-            {
-                name: 'weight-decay',
-                changesResult: true,
-                rule: { kind: 'number', min: 0, max: 1000 },
-                default: 0.0001,
-                description: 'L2 penalty on the weights (not the biases): the summed loss gains weight-decay/2 × the sum of squared weights. 0 turns it off.',
-            },
-            {
-                name: 'init',
-                changesResult: true,
-                rule: { kind: 'enum', values: ['nguyen-widrow', 'glorot', 'he'], nullable: true },
-                default: null,
-                description: 'Initial weights. Default (null): Nguyen-Widrow for tanh and logistic, He for relu.',
-            },
-            {
-                name: 'check-every',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
-                default: 10,
-                description: 'Epochs between checks of the validation rows; at most max-epochs.',
-            },
-            {
-                name: 'patience',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
-                default: 200,
-                description: 'A training stops when its validation loss has not improved (by 0.1%) for this many epochs: early stopping, and the bound on polishing a network that met the target.',
-            },
-            {
-                name: 'prune',
-                changesResult: true,
-                rule: { kind: 'boolean' },
-                default: true,
-                description: 'Whether to remove hidden neurons from the adequate network while it still reaches the target.',
-            },
-            {
-                name: 'prune-epochs',
-                changesResult: true,
-                rule: { kind: 'integer', min: 0, max: EPOCH_LIMIT },
-                default: 200,
-                description: 'Epochs of retraining after each neuron removed.',
-            },
-            {
-                name: 'time-budget',
-                changesResult: false,
-                rule: { kind: 'number', min: 0, max: 31_536_000, exclusiveMin: true, nullable: true },
-                default: null,
-                description: 'Wall-clock seconds the search may take; when spent the verdict is inconclusive. null: no limit.',
-            },
-            {
-                name: 'max-trainings',
-                changesResult: true,
-                rule: { kind: 'integer', min: 1, max: 100_000_000, nullable: true },
-                default: null,
-                description: 'Most trainings the search may run; when spent the verdict is inconclusive. null: no limit.',
-            },
-            {
-                name: 'workers',
-                changesResult: false,
-                rule: { kind: 'integer', min: 1, max: 256, nullable: true },
-                default: null,
-                description: 'Worker threads. null: one per available CPU core. Results do not depend on it.',
-            },
-        ],
-    },
-    {
-        name: 'gate',
-        required: false,
-        description: 'How the result is judged against the committed baseline and the device budget.',
-        keys: [
-            {
-                name: 'baseline',
-                changesResult: false,
-                rule: { kind: 'path' },
-                default: 'neuron-budget.baseline.json',
-                description: 'Baseline file, relative to this config file. Must stay inside the workspace.',
-            },
-            {
-                name: 'max-width',
-                changesResult: false,
-                rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT, nullable: true },
-                default: null,
-                description: 'Hard device budget: a smallest adequate width above it fails. null: no budget.',
-            },
-            {
-                name: 'allowed-growth',
-                changesResult: false,
-                rule: { kind: 'integer', min: 0, max: WIDTH_LIMIT },
-                default: 0,
-                description: 'Neurons the width may grow over the baseline before the verdict is fail.',
-            },
-            {
-                name: 'metric-tolerance',
-                changesResult: false,
-                rule: { kind: 'number', min: 0, max: Number.MAX_VALUE },
-                // 0.02 is common practice for "noticeably worse" with a few hundred validation rows; no source.
-                default: 0.02,
-                description: 'How much worse the metric at the chosen width may get against the baseline before it is flagged (accuracy: below 1).',
-            },
-        ],
-    },
-];
-/** "an integer from 1 to 1000", "one of tanh, logistic, relu", … for messages. */
-function describeRule(rule) {
-    const orNull = 'nullable' in rule && rule.nullable ? ', or null' : '';
-    switch (rule.kind) {
-        case 'integer':
-            return `an integer from ${rule.min} to ${rule.max}${orNull}`;
-        case 'number': {
-            const low = rule.exclusiveMin ? `above ${rule.min}` : `of ${rule.min} or more`;
-            if (rule.max === Number.MAX_VALUE)
-                return `a number ${low}${orNull}`;
-            if (rule.exclusiveMax)
-                return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
-            return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and at most ${rule.max}${orNull}`;
-        }
-        case 'enum':
-            return `one of ${rule.values.join(', ')}${orNull}`;
-        case 'boolean':
-            return 'true or false';
-        case 'text':
-            return 'a column name (text)';
-        case 'character':
-            return 'a single character other than a quote or a line break';
-        case 'path':
-            return 'a path relative to the config file';
-        case 'text-list':
-            return `a list of column names${rule.minItems > 0 ? ` (at least ${rule.minItems})` : ''}${orNull}`;
+;// CONCATENATED MODULE: ./src/device/cost.ts
+const C_TYPE_BYTES = { float: 4, int8_t: 1, int32_t: 4 };
+/** Entries of the activation lookup table (indexed by an int8 pre-activation). */
+const LUT_ENTRIES = 256;
+/** The constant objects each path of the exported C declares, in declaration order. */
+function storedObjects(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const float32 = [];
+    const int8 = [];
+    if (s.numericFeatures > 0) {
+        float32.push({ suffix: 'f_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        float32.push({ suffix: 'f_in_std', type: 'float', count: s.numericFeatures, role: 'feature deviations' });
     }
+    float32.push({ suffix: 'f_w1', type: 'float', count: H * D, role: 'hidden weights' }, { suffix: 'f_b1', type: 'float', count: H, role: 'hidden biases' }, { suffix: 'f_w2', type: 'float', count: K * H, role: 'output weights' }, { suffix: 'f_b2', type: 'float', count: K, role: 'output biases' });
+    if (s.regression)
+        float32.push({ suffix: 'f_target', type: 'float', count: 2, role: 'target mean and deviation' });
+    if (s.numericFeatures > 0) {
+        int8.push({ suffix: 'q_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
+        int8.push({ suffix: 'q_in_mul', type: 'float', count: s.numericFeatures, role: '1 / (deviation · input scale)' });
+    }
+    int8.push({ suffix: 'q_in_zero', type: 'int8_t', count: 1, role: 'input zero-point', scalar: true });
+    if (s.categoricalFeatures > 0)
+        int8.push({ suffix: 'q_in_one', type: 'int8_t', count: 1, role: 'code of a one-hot 1', scalar: true });
+    int8.push({ suffix: 'q_w1', type: 'int8_t', count: H * D, role: 'hidden weights' }, { suffix: 'q_b1', type: 'int32_t', count: H, role: 'hidden biases (zero-point folded in)' }, { suffix: 'q_m0', type: 'int32_t', count: H, role: 'requantisation multipliers M0' }, { suffix: 'q_shift', type: 'int8_t', count: H, role: 'requantisation shifts n' }, { suffix: 'q_act_zero', type: 'int8_t', count: 1, role: 'pre-activation zero-point', scalar: true }, { suffix: 'q_lut', type: 'int8_t', count: LUT_ENTRIES, role: 'activation lookup table' }, { suffix: 'q_w2', type: 'int8_t', count: K * H, role: 'output weights' }, { suffix: 'q_b2', type: 'int32_t', count: K, role: 'output biases (zero-point folded in)' }, { suffix: 'q_out_scale', type: 'float', count: K, role: 'output dequantisation scales' });
+    return { float32, int8 };
 }
-/** `min-width` → `minWidth`: how the typed config names a key. */
-function fieldName(key) {
-    return key.replace(/-([a-z])/g, (_, c) => c.toUpperCase());
+function objectBytes(o) {
+    return o.count * C_TYPE_BYTES[o.type];
+}
+function sumBytes(objects) {
+    return objects.reduce((n, o) => n + objectBytes(o), 0);
+}
+function deviceCost(s) {
+    const { inputs: D, width: H, outputs: K } = s;
+    const stored = storedObjects(s);
+    return {
+        parameters: D * H + H + H * K + K,
+        macs: D * H + H * K,
+        flashBytes: { float32: sumBytes(stored.float32), int8: sumBytes(stored.int8) },
+        ramBytes: { float32: 4 * (D + H), int8: D + H },
+    };
+}
+/** The cost shape of a network of `width` hidden neurons on data encoded as `encoding`. */
+function costShapeOf(net, encoding) {
+    return {
+        inputs: net.inputs,
+        width: net.width,
+        outputs: net.outputs,
+        numericFeatures: encoding.features.filter((f) => f.kind === 'numeric').length,
+        categoricalFeatures: encoding.features.filter((f) => f.kind === 'categorical').length,
+        regression: encoding.target.task === 'regression',
+    };
+}
+
+;// CONCATENATED MODULE: ./src/nn/kernel/constants.ts
+/**
+ * The numbers both kernels must share to give the same bits: the constants of the elementary
+ * functions (detmath.ts), the gradient block size and the activation and head codes. This file is
+ * the one source: scripts/build-kernel.mjs writes them into kernel.as (between its "generated
+ * constants" markers) and `build-kernel.mjs --check` fails when kernel.as or its bytes disagree.
+ * Plain numeric literals only, so the script can read them without a TypeScript compiler.
+ */
+/** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
+const LN2_HI = 6.9314718036912381649e-1;
+const LN2_LO = 1.90821492927058770002e-10;
+const INV_LN2 = 1.442695040888963387;
+/** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
+const C2 = 0.5;
+const C3 = 0.16666666666666666;
+const C4 = 0.041666666666666664;
+const C5 = 0.008333333333333333;
+const C6 = 0.001388888888888889;
+const C7 = 0.0001984126984126984;
+const C8 = 0.0000248015873015873;
+const C9 = 0.0000027557319223985893;
+const C10 = 2.755731922398589e-7;
+const C11 = 2.505210838544172e-8;
+const C12 = 2.08767569878681e-9;
+const C13 = 1.6059043836821613e-10;
+/** |x| beyond this has tanh(x) === ±1 in double precision. */
+const TANH_CLAMP = 22;
+/** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
+const ROUND_MAGIC = 6755399441055744;
+const SQRT2 = 1.4142135623730951;
+/**
+ * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
+ * the products of a block's rows are added in row order starting from +0, and that block sum is
+ * then added to the running gradient, in both kernels.
+ */
+const GRAD_BLOCK_ROWS = 32;
+const ACT_TANH = 0;
+const ACT_LOGISTIC = 1;
+const ACT_RELU = 2;
+const HEAD_LINEAR = 0;
+const HEAD_LOGISTIC = 1;
+const HEAD_SOFTMAX = 2;
+
+;// CONCATENATED MODULE: ./src/nn/kernel/detmath.ts
+/**
+ * Elementary functions whose results we control. ECMAScript leaves Math.exp, Math.tanh and
+ * Math.log implementation-approximated, so their last bits may change between Node versions;
+ * these use only +, -, *, / and exact bit operations, which IEEE 754 fixes, so every engine
+ * gives the same bits. The WebAssembly kernel evaluates tanh with the very same sequence of
+ * operations and constants, so both paths agree bit for bit.
+ *
+ * Accuracy against Math.*: a few units in the last place (test/nn/detmath.test.ts states the bound).
+ */
+
+const f64 = new Float64Array(1);
+const u32 = new Uint32Array(f64.buffer);
+const HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0; // little-endian: high word at index 1
+/** 2^k for integer k in [-1022, 1023], built from its bits. */
+function pow2(k) {
+    u32[1 - HI] = 0;
+    u32[HI] = (k + 1023) << 20;
+    return f64[0];
+}
+/** expm1(r) for |r| <= ~0.35 by Horner's rule. */
+function expm1Poly(r) {
+    let q = C12 + r * C13;
+    q = C11 + r * q;
+    q = C10 + r * q;
+    q = C9 + r * q;
+    q = C8 + r * q;
+    q = C7 + r * q;
+    q = C6 + r * q;
+    q = C5 + r * q;
+    q = C4 + r * q;
+    q = C3 + r * q;
+    q = C2 + r * q;
+    q = 1 + r * q;
+    return r * q;
 }
 /**
- * A section's documented defaults by typed field name (required and derived keys left out), for
- * code that builds a config without a file (tests, benchmarks).
+ * The same polynomial by Estrin's scheme: more operations run side by side, which is what the
+ * SIMD kernel needs for speed (tanh uses this form in both paths).
+ */
+function expm1PolyEstrin(r) {
+    const r2 = r * r;
+    const r4 = r2 * r2;
+    const r8 = r4 * r4;
+    const b0 = 1 + C2 * r + (C3 + C4 * r) * r2;
+    const b1 = C5 + C6 * r + (C7 + C8 * r) * r2;
+    const b2 = C9 + C10 * r + (C11 + C12 * r) * r2;
+    const c0 = b0 + b1 * r4;
+    const c1 = b2 + C13 * r4;
+    return r * (c0 + c1 * r8);
+}
+/** e^x. */
+function detExp(x) {
+    if (x !== x)
+        return x;
+    if (x > 709.782712893384)
+        return Infinity;
+    if (x < -745.1332191019412)
+        return 0;
+    const k = Math.floor(x * INV_LN2 + 0.5);
+    const r = x - k * LN2_HI - k * LN2_LO;
+    const m = 1 + expm1Poly(r);
+    if (k > 1023)
+        return m * pow2(1023) * pow2(k - 1023);
+    if (k < -1022)
+        return m * pow2(k + 1000) * pow2(-1000);
+    return m * pow2(k);
+}
+/** Powers of two 2^0..2^64 for the tanh reduction (k never leaves that range). */
+const POW2_TANH = new Float64Array(65);
+for (let k = 0; k <= 64; k++)
+    POW2_TANH[k] = pow2(k);
+/**
+ * tanh(x) = expm1(2|x|) / (expm1(2|x|) + 2) with the sign of x. Branch-free apart from the
+ * clamp, so the SIMD kernel can evaluate the same operations lane by lane.
+ */
+function detTanh(x) {
+    const ax = Math.min(x < 0 ? -x : x, TANH_CLAMP);
+    const y = ax + ax;
+    // Round y/ln2 to the nearest whole number (ties to even) by adding and removing 1.5·2^52.
+    const k = y * INV_LN2 + ROUND_MAGIC - ROUND_MAGIC;
+    const r = y - k * LN2_HI - k * LN2_LO;
+    const p = expm1PolyEstrin(r);
+    const s = POW2_TANH[k];
+    const em = s * p + (s - 1);
+    const t = em / (em + 2);
+    return x < 0 ? -t : t;
+}
+/** Logistic function through tanh, so it inherits tanh's determinism: 1/(1+e^-x) = (1 + tanh(x/2))/2. */
+function detLogistic(x) {
+    return 0.5 + 0.5 * detTanh(0.5 * x);
+}
+/** Natural logarithm. */
+function detLog(x) {
+    if (x !== x || x < 0)
+        return NaN;
+    if (x === 0)
+        return -Infinity;
+    if (x === Infinity)
+        return Infinity;
+    let e = 0;
+    if (x < 2.2250738585072014e-308) {
+        x *= 18014398509481984; // 2^54: lift subnormals into the normal range
+        e = -54;
+    }
+    f64[0] = x;
+    const hi = u32[HI];
+    e += ((hi >>> 20) & 0x7ff) - 1023;
+    u32[HI] = (hi & 0x000fffff) | 0x3ff00000; // mantissa in [1, 2)
+    let m = f64[0];
+    if (m > SQRT2) {
+        m *= 0.5;
+        e += 1;
+    }
+    const f = m - 1;
+    const s = f / (2 + f);
+    const s2 = s * s;
+    // 2 atanh(s) = 2 (s + s^3/3 + ... + s^23/23); |s| <= 0.1716 so the tail is below 1e-18.
+    let q = 1 / 21 + s2 * (1 / 23);
+    q = 1 / 19 + s2 * q;
+    q = 1 / 17 + s2 * q;
+    q = 1 / 15 + s2 * q;
+    q = 1 / 13 + s2 * q;
+    q = 1 / 11 + s2 * q;
+    q = 1 / 9 + s2 * q;
+    q = 1 / 7 + s2 * q;
+    q = 1 / 5 + s2 * q;
+    q = 1 / 3 + s2 * q;
+    const series = s2 * q;
+    const logm = 2 * s + 2 * s * series;
+    return e * LN2_HI + (logm + e * LN2_LO);
+}
+/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. @testOnly */
+function detLog1p(u) {
+    const w = 1 + u;
+    if (w === 1)
+        return u;
+    return detLog(w) + (u - (w - 1)) / w;
+}
+/** log(1 + e^z) without overflow. */
+function detSoftplus(z) {
+    return (z > 0 ? z : 0) + detLog1p(detExp(z > 0 ? -z : z));
+}
+
+;// CONCATENATED MODULE: ./src/device/fixed-point.ts
+/**
+ * The integer arithmetic of the int8 inference, written so that this TypeScript and the
+ * exported C compute the same integers. Every value here is an integer held exactly in a
+ * double (all magnitudes stay below 2^53), so no step depends on JavaScript's number type.
+ *
+ * Requantisation follows Jacob et al. 2018, "Quantization and Training of Neural Networks for
+ * Efficient Integer-Arithmetic-Only Inference", section 2.2: the real multiplier M (eq. 5) is
+ * written M = 2^−n · M0 with M0 in [0.5, 1) (eq. 6), M0 held as a 32-bit fixed-point integer.
+ * The fixed-point multiply and the rounding shift are the documented rules of the
+ * general-purpose gemmlowp library (fixedpoint/fixedpoint.h): SaturatingRoundingDoublingHighMul
+ * and RoundingDivideByPOT.
  * @testOnly
  */
-function sectionDefaults(section) {
-    const spec = CONFIG_SPEC.find((s) => s.name === section);
-    const out = {};
-    for (const key of spec?.keys ?? []) {
-        if (key.default === REQUIRED || key.default === DERIVED)
-            continue;
-        out[fieldName(key.name)] = Array.isArray(key.default) ? [...key.default] : key.default;
-    }
-    return out;
+const INT32_MIN = -2147483648;
+/** @testOnly */
+const INT32_MAX = 2147483647;
+const TWO_15 = 32768;
+const TWO_30 = 1073741824;
+const TWO_31 = 2147483648;
+/** Largest right shift RoundingDivideByPOT takes (gemmlowp asserts exponent ≤ 31). */
+const MAX_SHIFT = 31;
+/**
+ * Round to nearest, ties away from zero. Exact for every double: trunc(x) and x − trunc(x)
+ * are both exact, so no addition of 0.5 can round the wrong way.
+ */
+function roundHalfAway(x) {
+    const i = Math.trunc(x);
+    const f = x - i;
+    const r = f >= 0.5 ? i + 1 : f <= -0.5 ? i - 1 : i;
+    return r === 0 ? 0 : r; // no −0 in the JSON
 }
-/** The judging fraction when validation rows are held out (common practice for a hold-out test set; no single source). */
-const DEFAULT_JUDGING = 0.2;
-/** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
-function derivedJudging(validation) {
-    return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
+function clamp(x, lo, hi) {
+    return x < lo ? lo : x > hi ? hi : x;
+}
+/**
+ * gemmlowp's SaturatingRoundingDoublingHighMul for int32 a, b: (a·b + nudge) / 2^31 truncated
+ * toward zero, nudge = 2^30 when a·b ≥ 0 and 1 − 2^30 otherwise (so a tie rounds toward +∞);
+ * INT32_MIN · INT32_MIN saturates to INT32_MAX.
+ *
+ * a·b reaches 2^62, beyond a double's 53 bits, so the product is split: b = bh·2^16 + bl,
+ * a·bh = ph·2^15 + pl, and a·b + nudge = ph·2^31 + r with every part exact.
+ */
+function saturatingRoundingDoublingHighMul(a, b) {
+    if (a === INT32_MIN && b === INT32_MIN)
+        return INT32_MAX;
+    const bh = b >> 16; // signed high half
+    const bl = b & 0xffff; // unsigned low half
+    const p = a * bh; // |p| ≤ 2^46: exact
+    const q = a * bl; // |q| < 2^47: exact
+    const ph = Math.floor(p / TWO_15);
+    const pl = p - ph * TWO_15; // in [0, 2^15)
+    const negative = (a < 0 && b > 0) || (a > 0 && b < 0);
+    const nudge = negative ? 1 - TWO_30 : TWO_30;
+    const r = pl * 65536 + q + nudge; // |r| < 2^48: exact
+    const rh = Math.floor(r / TWO_31);
+    const rl = r - rh * TWO_31; // in [0, 2^31)
+    const floor = ph + rh; // floor((a·b + nudge) / 2^31)
+    const truncated = floor < 0 && rl !== 0 ? floor + 1 : floor;
+    return truncated === 0 ? 0 : truncated;
+}
+/**
+ * gemmlowp's RoundingDivideByPOT: x / 2^exponent rounded to nearest, ties away from zero,
+ * for int32 x and 0 ≤ exponent ≤ 31.
+ */
+function roundingDivideByPot(x, exponent) {
+    const mask = 2 ** exponent - 1;
+    const remainder = x & mask;
+    const threshold = Math.floor(mask / 2) + (x < 0 ? 1 : 0);
+    return (x >> exponent) + (remainder > threshold ? 1 : 0);
+}
+/**
+ * M = 2^−n · M0, M0 in [0.5, 1), M0 stored as round(M0 · 2^31) (eq. 6). Two limits, both exact
+ * in their effect on an int32 accumulator acc: for M < 2^−32, |acc · M| < 1/2 always rounds to
+ * 0, so the multiplier is 0; for M ≥ 2^31 every nonzero acc saturates an int8, and so does
+ * 2^30 · 2^31 (the left shift capped at 31), which stands in for it.
+ */
+function quantizeMultiplier(m) {
+    if (!(m > 0) || !Number.isFinite(m))
+        return { multiplier: 0, shift: 0 };
+    let n = 0;
+    let f = m;
+    while (f < 0.5 && n <= MAX_SHIFT + 1) {
+        f *= 2; // exact
+        n++;
+    }
+    while (f >= 1 && n >= -MAX_SHIFT - 1) {
+        f /= 2; // exact
+        n--;
+    }
+    if (n > MAX_SHIFT)
+        return { multiplier: 0, shift: 0 };
+    let m0 = roundHalfAway(f * TWO_31);
+    if (m0 === TWO_31) {
+        m0 = TWO_30;
+        n--;
+    }
+    if (n < -MAX_SHIFT)
+        return { multiplier: TWO_30, shift: -MAX_SHIFT };
+    return { multiplier: m0, shift: n };
+}
+/**
+ * acc · M for an int32 acc: a left shift (saturating to int32) when shift < 0, then the
+ * fixed-point multiply by M0, then the rounding right shift when shift > 0.
+ */
+function multiplyByQuantizedMultiplier(acc, q) {
+    if (q.multiplier === 0)
+        return 0;
+    let x = acc;
+    if (q.shift < 0)
+        x = clamp(acc * 2 ** -q.shift, INT32_MIN, INT32_MAX); // power-of-two product: exact
+    const high = saturatingRoundingDoublingHighMul(x, q.multiplier);
+    return q.shift > 0 ? roundingDivideByPot(high, q.shift) : high;
 }
 
-;// CONCATENATED MODULE: ./src/config/build.ts
+;// CONCATENATED MODULE: ./src/device/quantize.ts
+
+
+
+/** Largest |int32 bias|; with at most MAX_QUANT_INPUTS terms of |q_w·q_x| ≤ 127·128 the accumulator stays in int32. */
+const BIAS_LIMIT = 2 ** 30;
+const MAX_QUANT_INPUTS = 16384;
+const INT8_MIN = -128;
+const INT8_MAX = 127;
 /**
- * From checked values to the typed Config: every key of spec.ts becomes a field of its section
- * (camelCase), paths become absolute inside the workspace, and the rules between keys are
- * checked (each error points at the key that was written).
+ * Pre-activation range and activation codes per activation. The calibrated range is
+ * R = max |a| over the calibration rows (ReLU: max a), clipped where the activation is within
+ * half an output step of its limit (beyond that every pre-activation gives the same code):
+ *   tanh      a in [−R, R], S_a = R/127, Z_a = 0; h in [−tanh R, tanh R], S_h = tanh(R)/127, Z_h = 0
+ *             (odd function: symmetric codes). Clip: atanh(1 − 1/254) = ln(507)/2 ≈ 3.11.
+ *   logistic  a in [−R, R], S_a = R/127, Z_a = 0; h in [0, σ(R)] (widened to hold 0),
+ *             S_h = σ(R)/255, Z_h = −128. Clip: σ(a) = 1 − 1/510 at a = ln(509) ≈ 6.23.
+ *   relu      a in [0, R], S_a = R/255, Z_a = −128 (a negative pre-activation clamps to code
+ *             −128, which is relu's 0); h = a: S_h = S_a, Z_h = −128.
+ * The output range is the image of the pre-activation range, so it needs no calibration of its own.
+ */
+function activationRanges(activation, calibrated) {
+    if (activation === 'relu') {
+        const r = calibrated > 0 && Number.isFinite(calibrated) ? calibrated : 1;
+        const s = r / 255;
+        return { preActivation: { scale: s, zeroPoint: INT8_MIN }, activation: { scale: s, zeroPoint: INT8_MIN } };
+    }
+    const clip = activation === 'tanh' ? detLog(507) / 2 : detLog(509);
+    const r = calibrated > 0 && calibrated < clip ? calibrated : clip;
+    const preActivation = { scale: r / 127, zeroPoint: 0 };
+    if (activation === 'tanh')
+        return { preActivation, activation: { scale: detTanh(r) / 127, zeroPoint: 0 } };
+    return { preActivation, activation: { scale: detLogistic(r) / 255, zeroPoint: INT8_MIN } };
+}
+function activate(activation, a) {
+    if (activation === 'tanh')
+        return detTanh(a);
+    if (activation === 'logistic')
+        return detLogistic(a);
+    return a > 0 ? a : 0;
+}
+/** q = clamp(Z + round(r / S)) into int8. */
+function quantizeValue(r, p) {
+    return clamp(p.zeroPoint + roundHalfAway(r / p.scale), INT8_MIN, INT8_MAX);
+}
+/** r = S · (q − Z) (the paper's eq. 1). */
+function dequantizeValue(q, p) {
+    return p.scale * (q - p.zeroPoint);
+}
+/**
+ * The asymmetric int8 parameters of the range [lo, hi], widened to hold 0, with the
+ * zero-point rounded to an integer so that real 0 is exactly representable.
+ */
+function rangeParams(lo, hi) {
+    let a = Math.min(lo, 0);
+    let b = Math.max(hi, 0);
+    if (!(b > a)) {
+        a = 0;
+        b = 1;
+    }
+    const scale = (b - a) / 255;
+    return { scale, zeroPoint: clamp(roundHalfAway(INT8_MIN - a / scale), INT8_MIN, INT8_MAX) };
+}
+/** The table of activation codes for every int8 pre-activation code. */
+function activationTable(activation, pre, out) {
+    const table = [];
+    for (let q = INT8_MIN; q < INT8_MIN + LUT_ENTRIES; q++) {
+        table.push(quantizeValue(activate(activation, dequantizeValue(q, pre)), out));
+    }
+    return table;
+}
+/**
+ * One layer's symmetric per-output-channel weights and int32 biases. The scale is at least
+ * |bias| / (S_in · BIAS_LIMIT), so the bias always fits (coarser weights only when they are
+ * negligible beside the bias); an all-zero channel gets scale 1.
+ */
+function quantizeLayer(weights, bias, inputScale) {
+    const scales = [];
+    const qWeights = [];
+    const qBias = [];
+    weights.forEach((row, j) => {
+        let maxAbs = 0;
+        for (const w of row)
+            maxAbs = Math.max(maxAbs, Math.abs(w));
+        let s = Math.max(maxAbs / INT8_MAX, Math.abs(bias[j]) / (inputScale * BIAS_LIMIT));
+        if (!(s > 0) || !Number.isFinite(s))
+            s = 1;
+        scales.push(s);
+        qWeights.push(row.map((w) => clamp(roundHalfAway(w / s), -INT8_MAX, INT8_MAX)));
+        qBias.push(clamp(roundHalfAway(bias[j] / (inputScale * s)), -BIAS_LIMIT, BIAS_LIMIT));
+    });
+    return { weights: qWeights, scales, bias: qBias };
+}
+/** bias − Z · Σ weights: the accumulator then sums weight · code directly (the paper's section 2.3). */
+function foldZeroPoint(bias, weights, zero) {
+    return bias.map((b, j) => b - zero * weights[j].reduce((s, w) => s + w, 0));
+}
+function checkFinite(net) {
+    const all = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!all.every(Number.isFinite))
+        throw new RangeError('cannot quantise a network with non-finite weights');
+}
+/** Largest |a| (ReLU: largest a) of the hidden pre-activations over the calibration rows, in float64. */
+function calibratePreActivation(net, cal) {
+    const D = net.inputs;
+    let extreme = 0;
+    for (let p = 0; p < cal.rows; p++) {
+        for (let j = 0; j < net.width; j++) {
+            let a = net.hiddenBias[j];
+            const w = net.hiddenWeights[j];
+            for (let i = 0; i < D; i++)
+                a += cal.x[p * D + i] * w[i];
+            const v = net.activation === 'relu' ? a : Math.abs(a);
+            if (v > extreme)
+                extreme = v;
+        }
+    }
+    return extreme;
+}
+function inputRange(cal, D) {
+    let lo = 0;
+    let hi = 0;
+    for (let q = 0; q < cal.rows * D; q++) {
+        const v = cal.x[q];
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    return rangeParams(lo, hi);
+}
+/** The int8 form of `net`, its activation ranges calibrated on `calibration` (the training rows). */
+function quantizeNetwork(net, encoding, calibration) {
+    const D = net.inputs;
+    const H = net.width;
+    const K = net.outputs;
+    if (D > MAX_QUANT_INPUTS || H > MAX_QUANT_INPUTS) {
+        throw new RangeError(`int8 quantisation takes at most ${MAX_QUANT_INPUTS} inputs and hidden neurons`);
+    }
+    if (calibration.rows < 1)
+        throw new RangeError('int8 quantisation needs at least one calibration row');
+    checkFinite(net);
+    const encoded = encoding.features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
+    if (encoded !== D)
+        throw new RangeError(`the encoding gives ${encoded} inputs, the network takes ${D}`);
+    const input = inputRange(calibration, D);
+    const features = encoding.features.map((f) => f.kind === 'numeric'
+        ? {
+            kind: 'numeric',
+            mean: Math.fround(f.mean),
+            multiplier: Math.fround(1 / ((f.std > 0 ? f.std : 1) * input.scale)),
+        }
+        : { kind: 'categorical', categories: f.categories.length });
+    const hidden = quantizeLayer(net.hiddenWeights, net.hiddenBias, input.scale);
+    const ranges = activationRanges(net.activation, calibratePreActivation(net, calibration));
+    const multipliers = hidden.scales.map((s) => quantizeMultiplier((input.scale * s) / ranges.preActivation.scale));
+    const t = encoding.target;
+    const regression = t.task === 'regression';
+    const outBias = net.outputBias.map((b) => (regression ? b + t.mean / t.std : b));
+    const S_h = ranges.activation.scale;
+    const output = quantizeLayer(net.outputWeights, outBias, S_h);
+    return {
+        inputs: D,
+        width: H,
+        outputs: K,
+        activation: net.activation,
+        head: net.head,
+        input: { ...input, one: quantizeValue(1, input), features },
+        hidden: {
+            weights: hidden.weights,
+            weightScales: hidden.scales,
+            bias: hidden.bias,
+            multiplier: multipliers.map((m) => m.multiplier),
+            shift: multipliers.map((m) => m.shift),
+            preActivation: ranges.preActivation,
+            activation: ranges.activation,
+            table: activationTable(net.activation, ranges.preActivation, ranges.activation),
+        },
+        output: {
+            weights: output.weights,
+            weightScales: output.scales,
+            bias: output.bias,
+            scale: output.scales.map((s) => Math.fround(S_h * s * (regression ? t.std : 1))),
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/device/int8-forward.ts
+/**
+ * The int8 inference exactly as the exported C runs it (export-c.ts, NAME_predict_int8), so
+ * that both give the same bits. The only float operations are the ones the C performs, each
+ * rounded to float32 with Math.fround: the centring of a raw numeric feature (x − mean), its
+ * scaling into quantisation steps (· multiplier), the int32 accumulator's conversion to float
+ * and the output's dequantisation (· scale). Everything else is integer arithmetic.
+ *
+ * None of these float steps is a product feeding a sum, so a C compiler that contracts
+ * a·b + c into a fused multiply-add cannot change them; they need IEEE 754 single precision
+ * with each assignment rounded to float (FLT_EVAL_METHOD 0, or a compiler that honours C99's
+ * rounding on assignment, as GCC does in its ISO modes).
  */
 
 
 
-
-
-function buildConfig(reader, written, file, root) {
-    const baseDir = (0,external_node_path_namespaceObject.dirname)(file);
-    const sections = {};
-    for (const spec of CONFIG_SPEC) {
-        const found = written.values.get(spec.name) ?? new Map();
-        const section = {};
-        for (const key of spec.keys) {
-            const at = found.get(key.name);
-            const value = reader.value(at, key);
-            const field = fieldName(key.name);
-            if (key.rule.kind === 'path' && typeof value === 'string') {
-                section[field] = insidePath(reader, at, root, baseDir, value, `${spec.name}.${key.name}`);
-                section[`${field}AsWritten`] = value;
+/** A raw value's clamp before it is rounded to an integer (keeps the C's float → int conversion defined). */
+const INPUT_STEP_LIMIT = 512;
+/** The requantised pre-activation's clamp before its zero-point is added (keeps the C's sum in int32). */
+const PRE_ACTIVATION_LIMIT = 255;
+/**
+ * A value in input quantisation steps to its int8 code: clamp t to ±512 (NaN to −512), round
+ * half away from zero through truncation (t − trunc(t) is exact in float32), add Z, clamp.
+ */
+function inputCode(t, zeroPoint) {
+    let v = t;
+    if (!(v > -INPUT_STEP_LIMIT))
+        v = -INPUT_STEP_LIMIT;
+    else if (v > INPUT_STEP_LIMIT)
+        v = INPUT_STEP_LIMIT;
+    let i = Math.trunc(v);
+    const f = Math.fround(v - i);
+    if (f >= 0.5)
+        i++;
+    else if (f <= -0.5)
+        i--;
+    return clamp(zeroPoint + i, -128, 127);
+}
+/** A categorical feature's raw value as a category index: a whole number in [0, n), else −1 (all zeros). */
+function categoryIndex(v, n) {
+    if (v >= 0 && v < n) {
+        const c = Math.trunc(v);
+        if (c === v)
+            return c;
+    }
+    return -1;
+}
+/**
+ * Run the int8 network on `rows` rows of raw features (rows × features, float32 values).
+ * With `trace`, also records the input and hidden codes of every row.
+ */
+function int8Forward(q, features, rows, trace = null) {
+    const F = q.input.features.length;
+    const D = q.inputs;
+    const H = q.width;
+    const K = q.outputs;
+    const b1 = foldZeroPoint(q.hidden.bias, q.hidden.weights, q.input.zeroPoint);
+    const b2 = foldZeroPoint(q.output.bias, q.output.weights, q.hidden.activation.zeroPoint);
+    const requant = q.hidden.multiplier.map((multiplier, j) => ({ multiplier, shift: q.hidden.shift[j] }));
+    const zx = q.input.zeroPoint;
+    const za = q.hidden.preActivation.zeroPoint;
+    const xq = new Int32Array(D);
+    const hq = new Int32Array(H);
+    const classes = new Int32Array(rows);
+    const outputs = new Float32Array(rows * K);
+    for (let p = 0; p < rows; p++) {
+        let c = 0;
+        for (let f = 0; f < F; f++) {
+            const v = Math.fround(features[p * F + f]);
+            const e = q.input.features[f];
+            if (e.kind === 'numeric') {
+                const d = Math.fround(v - e.mean);
+                xq[c++] = inputCode(Math.fround(d * e.multiplier), zx);
             }
             else {
-                section[field] = value;
+                const k = categoryIndex(v, e.categories);
+                for (let j = 0; j < e.categories; j++)
+                    xq[c + j] = j === k ? q.input.one : zx;
+                c += e.categories;
             }
         }
-        sections[spec.name] = section;
-    }
-    const config = {
-        file,
-        root,
-        data: sections['data'],
-        target: sections['target'],
-        search: sections['search'],
-        gate: sections['gate'],
-        positions: reader.positions(written),
-        metricGiven: written.values.get('target')?.has('metric') ?? false,
-    };
-    checkRules(reader, written, config);
-    return config;
-}
-function insidePath(reader, found, root, baseDir, p, key) {
-    const result = checkInside(root, baseDir, p);
-    if (result.ok)
-        return result.path;
-    if (found)
-        throw reader.valueError(found, `${result.reason}; paths must stay inside the workspace`);
-    throw reader.error(null, key, `the default ${result.reason} (the config file is outside the workspace); set ${key}`);
-}
-/** The rules between keys, each reported at the key the user wrote. */
-function checkRules(reader, written, config) {
-    const at = (section, key) => written.values.get(section)?.get(key);
-    const { data, target, search, gate } = config;
-    for (const [list, name] of [
-        [data.features, 'features'],
-        [data.ignore, 'ignore'],
-    ]) {
-        if (list?.includes(data.target)) {
-            const role = name === 'features' ? 'a feature' : 'ignored';
-            throw reader.valueError(at('data', name), `lists the target column ${quote(data.target)}; the target cannot also be ${role}`);
+        for (let j = 0; j < H; j++) {
+            const w = q.hidden.weights[j];
+            let acc = b1[j];
+            for (let i = 0; i < D; i++)
+                acc += w[i] * xq[i];
+            const r = clamp(multiplyByQuantizedMultiplier(acc, requant[j]), -PRE_ACTIVATION_LIMIT, PRE_ACTIVATION_LIMIT);
+            const code = clamp(za + r, -128, 127);
+            hq[j] = q.hidden.table[code + 128];
+            if (trace)
+                trace.preActivation[p * H + j] = code;
         }
+        if (trace) {
+            trace.inputs.set(xq, p * D);
+            trace.hidden.set(hq, p * H);
+        }
+        let best = 0;
+        for (let k = 0; k < K; k++) {
+            const w = q.output.weights[k];
+            let acc = b2[k];
+            for (let j = 0; j < H; j++)
+                acc += w[j] * hq[j];
+            const z = Math.fround(Math.fround(acc) * q.output.scale[k]);
+            outputs[p * K + k] = z;
+            if (z > outputs[p * K + best])
+                best = k;
+        }
+        classes[p] = q.head === 'softmax' ? best : q.head === 'logistic' ? (outputs[p * K] > 0 ? 1 : 0) : 0;
     }
-    const both = data.features?.find((f) => data.ignore.includes(f));
-    if (both !== undefined) {
-        throw reader.valueError(at('data', 'ignore'), `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`);
-    }
-    if (data.judging === undefined)
-        data.judging = derivedJudging(data.validation);
-    if (data.validation + data.judging >= 1) {
-        const found = at('data', 'judging') ?? at('data', 'validation');
-        throw reader.valueError(found, `expected data.validation + data.judging below 1 (some rows must be left to train on), found ${data.validation} + ${data.judging}`);
-    }
-    if (!config.metricGiven)
-        target.metric = defaultMetric(data.task === 'regression' ? 'regression' : 'classification');
-    if (config.metricGiven && data.task !== 'auto' && !metricFitsTask(target.metric, data.task)) {
-        throw reader.valueError(at('target', 'metric'), `data.task is ${data.task}, so expected ${metricsFor(data.task)
-            .join(', ')
-            .replace(/, (?=[^,]*$)/, ' or ')}, found "${target.metric}"`);
-    }
-    const thresholdAt = at('target', 'threshold');
-    if (config.metricGiven || data.task === 'classification')
-        checkThreshold(reader, thresholdAt, target.metric, target.threshold);
-    const searchFound = written.sections.get('search');
-    const ordered = (name, relation, otherName) => {
-        const value = search[fieldName(name)];
-        const other = search[fieldName(otherName)];
-        if (relation === 'at least' ? value >= other : value <= other)
-            return;
-        const mine = at('search', name);
-        if (mine)
-            throw reader.valueError(mine, `expected search.${name} to be ${relation} search.${otherName} (${other}), found ${value}`);
-        // Only the other key was written: blame it, against this key's default.
-        const reverse = relation === 'at least' ? 'at most' : 'at least';
-        const message = `expected search.${otherName} to be ${reverse} search.${name} (${value}, the default), found ${other}`;
-        const theirs = at('search', otherName);
-        if (theirs)
-            throw reader.valueError(theirs, message);
-        throw reader.error(searchFound?.keyNode ?? null, `search.${otherName}`, message);
-    };
-    ordered('max-width', 'at least', 'min-width');
-    ordered('required', 'at most', 'restarts');
-    ordered('check-every', 'at most', 'max-epochs');
-    if (gate.maxWidth !== null && gate.maxWidth < search.minWidth) {
-        throw reader.valueError(at('gate', 'max-width'), `expected at least search.min-width (${search.minWidth}), found ${gate.maxWidth}; every width tried would be over the budget`);
-    }
-    const accuracyKnown = config.metricGiven || data.task === 'classification';
-    if (accuracyKnown && target.metric === 'accuracy' && gate.metricTolerance >= 1) {
-        throw reader.valueError(at('gate', 'metric-tolerance'), `expected a tolerance below 1 for accuracy, found ${gate.metricTolerance}`);
-    }
+    return { classes, outputs };
 }
-/** An accuracy threshold must be a fraction; error thresholds are in the target's own units. */
-function checkThreshold(reader, found, metric, threshold) {
-    if (metric === 'accuracy' && threshold > 1) {
-        throw reader.valueError(found, `expected an accuracy above 0 and at most 1, found ${threshold} (write 95% as 0.95)`);
-    }
-}
-
-// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
-var dist = __nccwpck_require__(8815);
-;// CONCATENATED MODULE: ./src/config/reader.ts
 /**
- * The YAML side of the config: parses the text once, walks it against the key list in spec.ts,
- * and checks each value against its rule. Every error names the file, the line and column, and
- * the key, and says what was expected and what was found. Where each key is written is kept, so
- * errors found later (after the data are read) still point at the right line.
+ * Raw CSV rows as the device's raw features (rows × features, float32): a numeric feature's
+ * number, a categorical feature's category index (−1 for a category the model has not seen,
+ * which encodes as all zeros, as encodeRows does).
  */
-
-
-
-
-
-/** YAML tags a config may carry: the core schema's plain types. Anything else is refused. */
-const CORE_TAGS = new Set(['str', 'int', 'float', 'bool', 'null', 'seq', 'map'].map((t) => `tag:yaml.org,2002:${t}`));
-const NUMBER_TAGS = new Set(['tag:yaml.org,2002:int', 'tag:yaml.org,2002:float']);
-const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-class ConfigReader {
-    text;
-    shown;
-    lines = new dist/* LineCounter */.HN();
-    doc;
-    constructor(text, 
-    /** The file as named in messages. */
-    shown) {
-        this.text = text;
-        this.shown = shown;
-        this.doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter: this.lines, uniqueKeys: true, prettyErrors: false });
-    }
-    /** Checks the syntax and the sections and keys against spec.ts; values are checked by `value`. */
-    read() {
-        this.checkSyntax();
-        this.checkTags();
-        const top = this.doc.contents;
-        if (top === null || ((0,dist/* isScalar */.jn)(top) && top.value === null)) {
-            throw this.error(null, null, 'the config file is empty; expected a mapping with the sections data, target, search and gate');
-        }
-        if (!(0,dist/* isMap */.jh)(top)) {
-            throw this.error(top, null, `expected a mapping with the sections data, target, search and gate, found ${this.describe(top)}`);
-        }
-        const sections = new Map();
-        for (const pair of top.items) {
-            const name = this.keyName(pair, '');
-            const spec = CONFIG_SPEC.find((s) => s.name === name);
-            if (!spec) {
-                const names = CONFIG_SPEC.map((s) => s.name);
-                throw this.error(pair.key, name, `unknown section${didYouMean(name, names)}; the sections are ${names.join(', ')}`);
+function rawFeatureRows(encoding, rows) {
+    const F = encoding.features.length;
+    const out = new Float32Array(rows.length * F);
+    rows.forEach((row, r) => {
+        encoding.features.forEach((f, i) => {
+            const cell = row[f.name];
+            if (cell === undefined)
+                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
+            const text = cell.trim();
+            if (f.kind === 'categorical') {
+                out[r * F + i] = f.categories.indexOf(text);
+                return;
             }
-            sections.set(name, { node: this.deref(pair.value), keyNode: pair.key, key: name });
-        }
-        const values = new Map();
-        for (const spec of CONFIG_SPEC)
-            values.set(spec.name, this.readSection(spec, sections.get(spec.name)));
-        return { sections, values };
-    }
-    /** Where every written section and key is (dotted key → line and column of the key). */
-    positions(written) {
-        const out = new Map();
-        const add = (found) => {
-            const { line, col } = this.lines.linePos(found.keyNode.range?.[0] ?? 0);
-            out.set(found.key, { line, column: col });
-        };
-        for (const found of written.sections.values())
-            add(found);
-        for (const section of written.values.values())
-            for (const found of section.values())
-                add(found);
-        return out;
-    }
-    // ---- syntax and locations -------------------------------------------------------
-    checkSyntax() {
-        const first = this.doc.errors[0];
-        if (!first)
-            return;
-        const offset = first.pos[0];
-        if (first.code === 'MULTIPLE_DOCS') {
-            throw this.errorAt(offset, null, 'expected one YAML document, found a second one (a "---" line)');
-        }
-        if (first.code === 'DUPLICATE_KEY') {
-            const key = /^\s*["']?([^"':\n]*)/.exec(this.text.slice(offset))?.[1]?.trim() ?? '';
-            throw this.errorAt(offset, null, `key ${quote(key)} appears twice in the same mapping; keep one`);
-        }
-        const reason = first.message
-            .replace(/ at line \d+, column \d+[\s\S]*$/, '')
-            .replace(/\s+/g, ' ')
-            .trim();
-        throw this.errorAt(offset, null, `YAML syntax error: ${reason}`);
-    }
-    /**
-     * Refuses tags outside the core schema (`!custom`, `!!binary`, `!!set`, …), which would
-     * otherwise pass silently as plain text. `!!float 1` and `!!int 3` are numbers, as written.
-     */
-    checkTags() {
-        (0,dist/* visit */.YR)(this.doc, {
-            Node: (_key, node) => {
-                if (!(0,dist/* isScalar */.jn)(node) && !(0,dist/* isMap */.jh)(node) && !(0,dist/* isSeq */.oP)(node))
-                    return;
-                const tag = node.tag;
-                if (tag === undefined)
-                    return;
-                if (!CORE_TAGS.has(tag)) {
-                    const shown = tag.startsWith('tag:yaml.org,2002:') ? `!!${tag.slice('tag:yaml.org,2002:'.length)}` : tag;
-                    throw this.error(node, null, `unsupported YAML tag ${quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`);
-                }
-                if ((0,dist/* isScalar */.jn)(node) && NUMBER_TAGS.has(tag) && typeof node.value === 'string') {
-                    const text = node.value.trim();
-                    if (!DECIMAL.test(text)) {
-                        throw this.error(node, null, `the tag ${tag.endsWith('int') ? '!!int' : '!!float'} needs a number, found ${quote(node.value)}`);
-                    }
-                    node.value = Number(text);
-                }
-            },
+            const v = text === '' ? Number.NaN : Number(text);
+            if (!Number.isFinite(v)) {
+                throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
+            }
+            out[r * F + i] = v;
         });
+    });
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/int8-check.ts
+
+
+
+const isInt = (v, lo, hi) => Number.isInteger(v) && v >= lo && v <= hi;
+const isF32 = (v) => typeof v === 'number' && Number.isFinite(v) && Math.fround(v) === v;
+const isPositive = (v) => typeof v === 'number' && Number.isFinite(v) && v > 0;
+function list(v, n, ok) {
+    return Array.isArray(v) && v.length === n && v.every(ok);
+}
+function matrix(v, rows, cols, ok) {
+    return Array.isArray(v) && v.length === rows && v.every((r) => list(r, cols, ok));
+}
+const obj = (v) => typeof v === 'object' && v !== null && !Array.isArray(v) ? v : null;
+function quantParams(v) {
+    const p = obj(v);
+    return p !== null && isPositive(p.scale) && isInt(p.zeroPoint, -128, 127);
+}
+function checkInt8Network(value, shape, encoding) {
+    const { inputs: D, width: H, outputs: K } = shape;
+    const q = obj(value);
+    if (q === null)
+        return { key: 'int8', expected: 'an object or null' };
+    if (q.inputs !== D || q.width !== H || q.outputs !== K) {
+        return { key: 'int8', expected: `the shape of the network (${D} inputs, ${H} hidden, ${K} outputs)` };
     }
-    errorAt(offset, key, message) {
-        const { line, col } = this.lines.linePos(Math.min(offset, this.text.length));
-        const prefix = key === null ? '' : `${key}: `;
-        return new errors_UserError(`${this.shown}:${line}:${col}: ${prefix}${message}`, {
-            file: this.shown,
-            line,
-            column: col,
-            ...(key === null ? {} : { key }),
+    const input = obj(q.input);
+    if (input === null || !quantParams(input) || !isInt(input.one, -128, 127)) {
+        return { key: 'int8.input', expected: 'a scale, an int8 zero-point and an int8 one-hot code' };
+    }
+    const features = input.features;
+    const fine = Array.isArray(features) &&
+        features.length === encoding.features.length &&
+        features.every((f, i) => {
+            const e = encoding.features[i];
+            const g = obj(f);
+            if (g === null || g.kind !== e.kind)
+                return false;
+            if (e.kind === 'categorical')
+                return g.categories === e.categories.length;
+            return isF32(g.mean) && isF32(g.multiplier);
         });
-    }
-    /** An error located at `node` (or the file's start when null). */
-    error(node, key, message) {
-        return this.errorAt(node?.range?.[0] ?? 0, key, message);
-    }
-    /** Locates a bad value: at the value itself, or at its key when the value is empty. */
-    valueError(found, message) {
-        const empty = found.node === null || ((0,dist/* isScalar */.jn)(found.node) && found.node.value === null && found.node.source === '');
-        return this.error(empty ? found.keyNode : found.node, found.key, message);
-    }
-    keyName(pair, prefix) {
-        const key = pair.key;
-        if (!(0,dist/* isScalar */.jn)(key) || (typeof key.value !== 'string' && typeof key.value !== 'number')) {
-            throw this.error(key, null, `expected a key name${prefix ? ` in ${prefix.slice(0, -1)}` : ''}, found ${this.describe(key)}`);
-        }
-        return String(key.value);
-    }
-    deref(node) {
-        if (node && (0,dist/* isAlias */.Vj)(node))
-            return node.resolve(this.doc) ?? null;
-        return node;
-    }
-    describe(node) {
-        if (node === null)
-            return 'nothing';
-        if ((0,dist/* isMap */.jh)(node))
-            return 'a mapping';
-        if ((0,dist/* isSeq */.oP)(node))
-            return 'a list';
-        if ((0,dist/* isScalar */.jn)(node)) {
-            const v = node.value;
-            if (v === null)
-                return node.source === '' || node.source === undefined ? 'nothing' : `null`;
-            if (typeof v === 'string')
-                return quote(v);
-            if (typeof v === 'number' || typeof v === 'boolean' || typeof v === 'bigint')
-                return String(v);
-        }
-        return 'a value of an unsupported type';
-    }
-    // ---- sections and keys ----------------------------------------------------------
-    readSection(spec, section) {
-        const out = new Map();
-        if (!section || section.node === null || ((0,dist/* isScalar */.jn)(section.node) && section.node.value === null)) {
-            if (spec.required) {
-                const missing = spec.keys.filter((k) => k.default === REQUIRED).map((k) => `${spec.name}.${k.name}`);
-                throw this.error(section?.keyNode ?? null, spec.name, `section is required (with ${missing.join(' and ')}); ${spec.description}`);
-            }
-            return out;
-        }
-        if (!(0,dist/* isMap */.jh)(section.node)) {
-            throw this.error(section.node, spec.name, `expected a mapping of ${spec.name} settings, found ${this.describe(section.node)}`);
-        }
-        const names = spec.keys.map((k) => k.name);
-        for (const pair of section.node.items) {
-            const name = this.keyName(pair, `${spec.name}.`);
-            const full = `${spec.name}.${name}`;
-            if (!names.includes(name)) {
-                throw this.error(pair.key, full, `unknown key${didYouMean(name, names)}; ${spec.name} accepts ${names.join(', ')}`);
-            }
-            out.set(name, { node: this.deref(pair.value), keyNode: pair.key, key: full });
-        }
-        for (const key of spec.keys) {
-            if (key.default === REQUIRED && !out.has(key.name)) {
-                throw this.error(section.keyNode, `${spec.name}.${key.name}`, `required key is missing (${key.description})`);
-            }
-        }
-        return out;
-    }
-    /** The value of one key checked against its rule, or its default (undefined for required and derived keys). */
-    value(found, spec) {
-        if (!found) {
-            if (spec.default === REQUIRED || spec.default === DERIVED)
-                return undefined;
-            return Array.isArray(spec.default) ? [...spec.default] : spec.default;
-        }
-        return this.checkRule(found, spec);
-    }
-    checkRule(found, spec) {
-        const rule = spec.rule;
-        const node = found.node;
-        const scalar = node !== null && (0,dist/* isScalar */.jn)(node) ? node.value : undefined;
-        const isNull = node === null || ((0,dist/* isScalar */.jn)(node) && node.value === null);
-        const expected = describeRule(rule);
-        const bad = () => this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
-        if (isNull && 'nullable' in rule && rule.nullable)
-            return null;
-        switch (rule.kind) {
-            case 'integer':
-            case 'number': {
-                if (typeof scalar !== 'number' || !Number.isFinite(scalar))
-                    throw bad();
-                if (rule.kind === 'integer' && !Number.isInteger(scalar))
-                    throw bad();
-                const exMin = rule.kind === 'number' && rule.exclusiveMin;
-                const exMax = rule.kind === 'number' && rule.exclusiveMax;
-                if (scalar < rule.min || (exMin && scalar === rule.min))
-                    throw bad();
-                if (scalar > rule.max || (exMax && scalar === rule.max))
-                    throw bad();
-                return scalar;
-            }
-            case 'enum': {
-                if (typeof scalar !== 'string' || !rule.values.includes(scalar)) {
-                    const hint = typeof scalar === 'string' ? didYouMean(scalar, rule.values) : '';
-                    throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}${hint}`);
-                }
-                return scalar;
-            }
-            case 'boolean': {
-                if (typeof scalar !== 'boolean')
-                    throw bad();
-                return scalar;
-            }
-            case 'text':
-            case 'path': {
-                if (typeof scalar === 'number' && rule.kind === 'text') {
-                    throw this.valueError(found, `expected ${expected}, found the number ${this.describe(node)} (put a column name that looks like a number in quotes)`);
-                }
-                if (typeof scalar !== 'string' || scalar.trim() === '')
-                    throw bad();
-                return scalar;
-            }
-            case 'character': {
-                if (typeof scalar !== 'string' || [...scalar].length !== 1 || /["\r\n]/.test(scalar))
-                    throw bad();
-                return scalar;
-            }
-            case 'text-list': {
-                if (node === null || !(0,dist/* isSeq */.oP)(node))
-                    throw bad();
-                if (node.items.length < rule.minItems)
-                    throw this.valueError(found, `expected ${expected}, found an empty list`);
-                const seen = new Set();
-                const out = [];
-                for (const raw of node.items) {
-                    const item = this.deref(raw);
-                    const v = item !== null && (0,dist/* isScalar */.jn)(item) ? item.value : undefined;
-                    if (typeof v !== 'string' || v.trim() === '') {
-                        const hint = typeof v === 'number' ? ' (put a column name that looks like a number in quotes)' : '';
-                        throw this.error(item ?? node, found.key, `expected column names as text, found ${this.describe(item)}${hint}`);
-                    }
-                    if (seen.has(v))
-                        throw this.error(item, found.key, `column ${quote(v)} is listed twice`);
-                    seen.add(v);
-                    out.push(v);
-                }
-                return out;
-            }
-        }
-    }
+    if (!fine)
+        return { key: 'int8.input.features', expected: 'one entry per feature of the encoding, of its kind' };
+    const hidden = obj(q.hidden);
+    if (hidden === null)
+        return { key: 'int8.hidden', expected: 'an object' };
+    const checks = [
+        ['weights', matrix(hidden.weights, H, D, (w) => isInt(w, -127, 127)), `${H} rows of ${D} integers in [-127, 127]`],
+        ['weightScales', list(hidden.weightScales, H, isPositive), `${H} positive numbers`],
+        ['bias', list(hidden.bias, H, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${H} integers within ±2^30`],
+        ['multiplier', list(hidden.multiplier, H, (m) => isInt(m, 0, 2 ** 31 - 1)), `${H} integers in [0, 2^31)`],
+        ['shift', list(hidden.shift, H, (n) => isInt(n, -MAX_SHIFT, MAX_SHIFT)), `${H} integers in [-31, 31]`],
+        ['preActivation', quantParams(hidden.preActivation), 'a scale and an int8 zero-point'],
+        ['activation', quantParams(hidden.activation), 'a scale and an int8 zero-point'],
+        ['table', list(hidden.table, LUT_ENTRIES, (t) => isInt(t, -128, 127)), `${LUT_ENTRIES} integers in [-128, 127]`],
+    ];
+    for (const [key, ok, expected] of checks)
+        if (!ok)
+            return { key: `int8.hidden.${key}`, expected };
+    const output = obj(q.output);
+    if (output === null)
+        return { key: 'int8.output', expected: 'an object' };
+    const outChecks = [
+        ['weights', matrix(output.weights, K, H, (w) => isInt(w, -127, 127)), `${K} rows of ${H} integers in [-127, 127]`],
+        ['weightScales', list(output.weightScales, K, isPositive), `${K} positive numbers`],
+        ['bias', list(output.bias, K, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${K} integers within ±2^30`],
+        ['scale', list(output.scale, K, isF32), `${K} finite float32 numbers`],
+    ];
+    for (const [key, ok, expected] of outChecks)
+        if (!ok)
+            return { key: `int8.output.${key}`, expected };
+    return null;
 }
 
-;// CONCATENATED MODULE: ./src/config/index.ts
+;// CONCATENATED MODULE: ./src/device/c-text.ts
 /**
- * The config stage: the YAML file → a typed Config with every default filled in (reader.ts
- * walks the YAML against spec.ts, build.ts makes the typed config and checks the rules between
- * keys). Errors found after the data are read point at the key through the positions kept here.
+ * Pieces of C source text: checked identifiers, safe comment text and exact float32 literals.
+ * Names from a repository (features, categories, classes, config paths) are untrusted: they
+ * only ever reach the C inside comments, through `commentText`.
  */
 
-
-
-
-
-
-
-
-
-
-/** A config is a few dozen lines; anything this big is not one (and parsing it could take minutes). @testOnly */
-const MAX_CONFIG_BYTES = 256 * 1024;
-async function loadConfig(configPath, root) {
-    const file = (0,external_node_path_namespaceObject.resolve)(root, configPath);
-    const shown = displayPath(root, file);
-    let text;
-    try {
-        const info = await (0,promises_namespaceObject.stat)(file);
-        if (info.isFile() && info.size > MAX_CONFIG_BYTES) {
-            throw new errors_UserError(`${shown}: the config file has ${formatCount(info.size)} bytes; a config may have at most ${formatCount(MAX_CONFIG_BYTES)} (is this the right file?)`, { file: shown });
-        }
-        text = await (0,promises_namespaceObject.readFile)(file, 'utf8');
-    }
-    catch (error) {
-        if (error instanceof errors_UserError)
-            throw error;
-        const code = error.code;
-        if (code === 'ENOENT')
-            throw new errors_UserError(`${shown}: config file not found (looked for ${file})`, { file: shown });
-        if (code === 'EISDIR')
-            throw new errors_UserError(`${shown}: expected a YAML config file, found a folder`, { file: shown });
-        if (code === 'EACCES')
-            throw new errors_UserError(`${shown}: config file cannot be read (permission denied)`, { file: shown });
-        throw error;
-    }
-    return parseConfig(text, { file, root });
-}
-/** Validates config text as if it were the file `file` (absolute) inside workspace `root`. @testOnly */
-function parseConfig(text, where) {
-    const file = (0,external_node_path_namespaceObject.resolve)(where.file);
-    const root = (0,external_node_path_namespaceObject.resolve)(where.root);
-    // Editors do not count a byte-order mark as a column; neither do we.
-    const reader = new ConfigReader(text.replace(/^\uFEFF/, ''), displayPath(root, file));
-    return buildConfig(reader, reader.read(), file, root);
-}
+/** Letters, digits and underscores, a letter first (a leading underscore is reserved in C), at most 31 (C99's portable length). */
+const C_NAME = /^[A-Za-z][A-Za-z0-9_]{0,30}$/;
 /**
- * A UserError about a config key found after validation (the data showed the problem): at the
- * key's line and column when it is written, else at its section's, else at the file.
+ * The NAME of NAME.h, NAME.c and NAME_predict; a clear error for anything that is not a plain C
+ * identifier (the value shown JSON-escaped, so no control character reaches a log line).
  */
-function configKeyError(config, key, detail) {
-    const shown = displayPath(config.root, config.file);
-    const at = config.positions.get(key) ?? config.positions.get(key.split('.')[0]) ?? null;
-    const where = at === null ? shown : `${shown}:${at.line}:${at.column}`;
-    return new errors_UserError(`${where}: ${key}: ${detail}`, {
-        file: shown,
-        key,
-        ...(at ? { line: at.line, column: at.column } : {}),
-    });
+function checkCName(name, key = '--name') {
+    if (!C_NAME.test(name)) {
+        const shown = JSON.stringify(name.length > 40 ? `${name.slice(0, 40)}…` : name).replace(/[\u007f-\u009f\u2028\u2029]/g, '?');
+        throw new errors_UserError(`${key}: expected a C identifier (a letter, then up to 30 letters, digits or underscores), found ${shown}`, { key });
+    }
+    return name;
 }
+/** Longest untrusted text kept in a comment, in characters, before the escapes. */
+const COMMENT_CLIP = 64;
 /**
- * With data.task auto the task is only known after reading: the metric follows it unless the
- * config names one, and a named metric must suit it.
+ * Untrusted text made safe inside a C block comment: clipped to `max` characters (with "..."),
+ * every character outside printable ASCII, and the backslash, written as <U+XXXX> (no line
+ * break, control character or line splice survives), "??" broken so no trigraph forms, and
+ * every "*\/" and "/*" broken with a space.
  */
-function settleMetric(config, task) {
-    const target = config.target;
-    if (!config.metricGiven) {
-        const metric = defaultMetric(task);
-        if (metric === 'accuracy' && target.threshold > 1) {
-            throw configKeyError(config, 'target.threshold', `the target column ${quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
-        }
-        if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
-            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
-        }
-        return { ...config, target: { ...target, metric } };
+function commentText(text, max = COMMENT_CLIP) {
+    const chars = Array.from(text);
+    const clipped = chars.length > max ? [...chars.slice(0, max), '.', '.', '.'] : chars;
+    let out = '';
+    for (const ch of clipped) {
+        const code = ch.codePointAt(0) ?? 0;
+        const printable = code >= 0x20 && code <= 0x7e && ch !== '\\';
+        out += printable ? ch : `<U+${code.toString(16).toUpperCase().padStart(4, '0')}>`;
     }
-    if (metricFitsTask(target.metric, task))
-        return config;
-    const hint = task === 'classification'
-        ? 'set target.metric to accuracy, or data.task to regression'
-        : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
-    throw configKeyError(config, 'target.metric', `the target column ${quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
+    out = out.replace(/\?\?/g, '?<U+003F>');
+    let before;
+    do {
+        before = out;
+        out = out.replace(/\*\//g, '* /').replace(/\/\*/g, '/ *');
+    } while (out !== before);
+    return out;
+}
+const f32 = new Float32Array(1);
+const c_text_u32 = new Uint32Array(f32.buffer);
+/** A float32 value as a C99 hexadecimal float literal with an f suffix: exact by construction. */
+function floatLiteral(x) {
+    if (!Number.isFinite(x) || Math.fround(x) !== x) {
+        throw new RangeError(`not a finite float32 value: ${x}`);
+    }
+    f32[0] = x;
+    const bits = c_text_u32[0];
+    const sign = bits >>> 31 ? '-' : '';
+    const exp = (bits >>> 23) & 0xff;
+    const mant = bits & 0x7fffff;
+    if (exp === 0 && mant === 0)
+        return `${sign}0x0p+0f`;
+    // 23 fraction bits shifted to 24 fill six hex digits.
+    const digits = (mant << 1).toString(16).padStart(6, '0').replace(/0+$/, '');
+    const frac = digits === '' ? '' : `.${digits}`;
+    const e = exp === 0 ? -126 : exp - 127;
+    return `${sign}0x${exp === 0 ? 0 : 1}${frac}p${e < 0 ? '-' : '+'}${Math.abs(e)}f`;
+}
+/** An int8 or int32 constant as a C literal (INT32_MIN would need a cast; the scheme never stores it). */
+function intLiteral(v) {
+    if (!Number.isInteger(v) || v <= -2147483648 || v > 2147483647)
+        throw new RangeError(`not an int32 literal: ${v}`);
+    return String(v);
 }
 
-;// CONCATENATED MODULE: ./src/data/where.ts
-/** Where in the data file something is, for messages a user can follow in a text editor. */
+;// CONCATENATED MODULE: ./src/device/c-code.ts
 
-/** `column 4 "kurtosis"`: both the number an editor shows and the header name. */
-function columnLabel(column, name) {
-    return name === undefined || name === '' ? `column ${column}` : `column ${column} "${name}"`;
-}
-/** An error at a line (1-based, as an editor counts) and column (1-based field number). */
-function dataError(file, line, column, message, key) {
-    const at = column === undefined ? `${file.shown}:${line}` : `${file.shown}:${line}:${column}`;
-    return new errors_UserError(`${at}: ${message}`, { file: file.path, line, column, key });
-}
-/** Quote a value from the file for a message, keeping it short and visible. */
-function shownValue(value) {
-    const cut = value.length > 40 ? `${value.slice(0, 37)}...` : value;
-    return JSON.stringify(cut);
-}
-/**
- * A problem whose fix belongs in the config (a column name that is not in the header).
- * Thrown where the config position is not at hand; loadData turns it into a UserError
- * at the key's line and column in the config file.
- */
-class ConfigKeyProblem extends Error {
-    key;
-    detail;
-    constructor(key, detail) {
-        super(`${key}: ${detail}`);
-        this.key = key;
-        this.detail = detail;
-        this.name = 'ConfigKeyProblem';
-    }
-}
-
-;// CONCATENATED MODULE: ./src/data/columns.ts
-
-
-/** Most classes a classification target may have (a practical cap, no source). */
-const MAX_CLASSES = 1000;
-/** Resolves data.target / data.features / data.ignore against the header. */
-function chooseColumns(header, config, file) {
-    const data = config.data;
-    const index = new Map(header.map((name, i) => [name, i]));
-    const find = (name, key) => {
-        const i = index.get(name);
-        if (i !== undefined)
-            return i;
-        const guess = nearest(name, header);
-        const hint = guess === null ? '.' : ` (did you mean "${guess}"?).`;
-        throw new ConfigKeyProblem(key, `expected a column of ${file.shown}, found "${name}", which its header (line 1) does not have${hint} ` +
-            `The columns are: ${header.join(', ')}`);
-    };
-    const target = find(data.target, 'data.target');
-    const ignored = new Set();
-    for (const name of data.ignore) {
-        const i = find(name, 'data.ignore');
-        if (i === target) {
-            throw new ConfigKeyProblem('data.ignore', `lists "${name}", which is the target column (data.target)`);
-        }
-        ignored.add(i);
-    }
-    let features;
-    if (data.features === null) {
-        features = header.map((_, i) => i).filter((i) => i !== target && !ignored.has(i));
-    }
-    else {
-        features = [];
-        for (const name of data.features) {
-            const i = find(name, 'data.features');
-            if (i === target) {
-                throw new ConfigKeyProblem('data.features', `lists "${name}", which is the target column (data.target)`);
-            }
-            if (ignored.has(i)) {
-                throw new ConfigKeyProblem('data.features', `lists "${name}", which data.ignore also lists`);
-            }
-            if (features.includes(i)) {
-                throw new ConfigKeyProblem('data.features', `lists "${name}" twice`);
-            }
-            features.push(i);
-        }
-    }
-    if (features.length === 0) {
-        throw new ConfigKeyProblem(data.features === null ? 'data.ignore' : 'data.features', `expected at least one feature column besides the target "${data.target}", found none left in ${file.shown}`);
-    }
-    const columns = features.map((field) => ({ field, distinctLimit: data.maxCategories }));
-    columns.push({ field: target, distinctLimit: MAX_CLASSES });
-    return { plan: { columns, target: columns.length - 1 }, features, target };
-}
-function looksNumeric(store) {
-    return store.numberCount > 0 && store.numberCount >= store.textCount;
-}
-/** Numeric column values, or the first cell that breaks them. */
-function numericColumn(store, file, role) {
-    const text = store.firstText;
-    const odd = store.firstNotFinite;
-    const label = `${columnLabel(store.column, store.name)}${role}`;
-    if (odd !== null && (text === null || odd.line <= text.line)) {
-        const why = odd.overflow
-            ? 'a number too large for a 64-bit float'
-            : 'a value that is not a finite number (NaN and Infinity are not measurements; leave the cell empty if it is missing)';
-        throw dataError(file, odd.line, store.column, `${label}: expected a finite number, found ${shownValue(odd.value)}, ${why}`);
-    }
-    if (text !== null) {
-        throw dataError(file, text.line, store.column, `${label}: expected a number, found ${shownValue(text.value)} (the column holds numbers in ` +
-            `${store.numberCount} of ${store.numberCount + store.textCount} rows; leave a missing value empty)`);
-    }
-    return { kind: 'numeric', name: store.name, column: store.column, values: store.numbers.subarray(0, store.length) };
-}
-function categoricalColumn(store, file, cap) {
-    if (store.distinct === null || store.codes === null) {
-        const count = store.distinctCount();
-        const over = store.overflow;
-        const amount = store.distinctCountExact() ? `${count}` : `more than ${cap}`;
-        throw dataError(file, over?.line ?? 1, store.column, `${columnLabel(store.column, store.name)} is text with ${amount} distinct values; a categorical column ` +
-            `may have at most ${cap} (data.max-categories). The value ${shownValue(over?.value ?? '')} on this line ` +
-            `is number ${cap + 1}. An identifier column belongs in data.ignore.`);
-    }
-    return sortedCategories(store, store.distinct, store.codes);
-}
-function sortedCategories(store, distinct, codes) {
-    const firstSeen = [...distinct.keys()];
-    const categories = [...firstSeen].sort(compareText);
-    const rank = new Map(categories.map((c, i) => [c, i]));
-    const remap = Int32Array.from(firstSeen, (c) => rank.get(c) ?? -1);
-    const out = new Int32Array(store.length);
-    for (let i = 0; i < store.length; i++)
-        out[i] = remap[codes[i]];
-    return { kind: 'categorical', name: store.name, column: store.column, categories, codes: out };
-}
-function compareText(a, b) {
-    return a < b ? -1 : a > b ? 1 : 0;
-}
-/** The feature column as numeric or categorical, by the rule at the top of this file. */
-function featureColumn(store, file, cap) {
-    return looksNumeric(store) ? numericColumn(store, file, '') : categoricalColumn(store, file, cap);
-}
-
-;// CONCATENATED MODULE: ./src/data/encode.ts
-function sharedFloat64(length) {
-    return new Float64Array(new SharedArrayBuffer(length * Float64Array.BYTES_PER_ELEMENT));
-}
-/** Mean and population standard deviation over the given rows (two passes, for accuracy). */
-function meanAndStd(values, rows) {
-    if (rows.length === 0)
-        return { mean: 0, std: 0 };
-    let sum = 0;
-    for (let i = 0; i < rows.length; i++)
-        sum += values[rows[i]];
-    const mean = sum / rows.length;
-    let squares = 0;
-    for (let i = 0; i < rows.length; i++) {
-        const d = values[rows[i]] - mean;
-        squares += d * d;
-    }
-    return { mean, std: Math.sqrt(squares / rows.length) };
-}
-function encodeDataset(features, target, split) {
-    const encodings = features.map((column) => {
-        if (column.kind === 'categorical') {
-            return { kind: 'categorical', name: column.name, categories: column.categories };
-        }
-        const { mean, std } = meanAndStd(column.values, split.train);
-        // A constant feature is only centred: dividing by 0 would poison every input.
-        return { kind: 'numeric', name: column.name, mean, std: std > 0 ? std : 1 };
-    });
-    const inputs = encodings.reduce((n, e) => n + (e.kind === 'numeric' ? 1 : e.categories.length), 0);
-    let targetEncoding;
-    let outputs;
-    if (target.task === 'classification') {
-        targetEncoding = { name: target.name, task: 'classification', classes: target.classes, mean: 0, std: 1 };
-        outputs = target.classes.length === 2 ? 1 : target.classes.length;
-    }
-    else {
-        const { mean, std } = meanAndStd(target.values, split.train);
-        targetEncoding = { name: target.name, task: 'regression', classes: null, mean, std: std > 0 ? std : 1 };
-        outputs = 1;
-    }
-    const fill = (rows) => {
-        const x = sharedFloat64(rows.length * inputs);
-        const y = sharedFloat64(rows.length);
-        let offset = 0;
-        for (let f = 0; f < features.length; f++) {
-            const column = features[f];
-            const e = encodings[f];
-            if (column.kind === 'numeric' && e.kind === 'numeric') {
-                const values = column.values;
-                for (let r = 0; r < rows.length; r++)
-                    x[r * inputs + offset] = (values[rows[r]] - e.mean) / e.std;
-                offset += 1;
-            }
-            else if (column.kind === 'categorical') {
-                const codes = column.codes;
-                for (let r = 0; r < rows.length; r++)
-                    x[r * inputs + offset + codes[rows[r]]] = 1;
-                offset += column.categories.length;
-            }
-        }
-        if (target.task === 'classification') {
-            for (let r = 0; r < rows.length; r++)
-                y[r] = target.indices[rows[r]];
+function encodeStatements(model, name, int8Path) {
+    const out = [];
+    let offset = 0;
+    let m = 0;
+    model.encoding.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            out.push(int8Path
+                ? `  {\n    const float d = features[${i}] - ${name}_q_in_mean[${m}];\n    const float t = d * ${name}_q_in_mul[${m}];\n    xq[${offset}] = ${name}_input_code(t);\n  }`
+                : `  x[${offset}] = (features[${i}] - ${name}_f_in_mean[${m}]) / ${name}_f_in_std[${m}];`);
+            m++;
+            offset++;
         }
         else {
-            for (let r = 0; r < rows.length; r++)
-                y[r] = (target.values[rows[r]] - targetEncoding.mean) / targetEncoding.std;
+            const n = f.categories.length;
+            out.push(`  c = ${name}_category(features[${i}], ${n});`, int8Path
+                ? `  for (j = 0; j < ${n}; j++) xq[${offset} + j] = j == c ? ${name}_q_in_one : ${name}_q_in_zero;`
+                : `  for (j = 0; j < ${n}; j++) x[${offset} + j] = j == c ? 1.0f : 0.0f;`);
+            offset += n;
         }
-        return { x, y };
-    };
-    const train = fill(split.train);
-    const validation = fill(split.validation);
-    const judging = fill(split.judging);
+    });
+    return out;
+}
+function helpers(name, hasNumeric, hasCategorical) {
+    const out = [];
+    if (hasCategorical) {
+        out.push(`/* A raw categorical value as a category index: a whole number in [0, n), else -1. */`, `static int ${name}_category(float v, int n) {`, `  if (v >= 0.0f && v < (float)n) {`, `    const int c = (int)v;`, `    if ((float)c == v) return c;`, `  }`, `  return -1;`, `}`, ``);
+    }
+    if (hasNumeric) {
+        out.push(`/* Input steps to an int8 code: clamp, round half away from zero (t - trunc(t) is exact), add the zero-point. */`, `static int8_t ${name}_input_code(float t) {`, `  int32_t i;`, `  float f;`, `  if (!(t > -${INPUT_STEP_LIMIT}.0f)) t = -${INPUT_STEP_LIMIT}.0f;`, `  else if (t > ${INPUT_STEP_LIMIT}.0f) t = ${INPUT_STEP_LIMIT}.0f;`, `  i = (int32_t)t;`, `  f = t - (float)i;`, `  if (f >= 0.5f) i++;`, `  else if (f <= -0.5f) i--;`, `  i += ${name}_q_in_zero;`, `  return (int8_t)(i < -128 ? -128 : i > 127 ? 127 : i);`, `}`, ``);
+    }
+    out.push(`/*`, ` * acc * M with M = m0 * 2^-31 * 2^-shift: a saturating left shift when shift < 0, the fixed-point`, ` * multiply (nudge, then division by 2^31 truncating toward zero) and a rounding right shift (ties`, ` * away from zero) when shift > 0: gemmlowp's SaturatingRoundingDoublingHighMul and RoundingDivideByPOT.`, ` */`, `static int32_t ${name}_requantize(int32_t acc, int32_t m0, int shift) {`, `  int64_t x = acc;`, `  int64_t ab;`, `  int32_t high, mask, remainder, threshold, floor_shift;`, `  if (m0 == 0) return 0;`, `  if (shift < 0) {`, `    x *= (int64_t)1 << -shift;`, `    if (x > INT32_MAX) x = INT32_MAX;`, `    if (x < INT32_MIN) x = INT32_MIN;`, `  }`, `  if (x == INT32_MIN && m0 == INT32_MIN) return INT32_MAX;`, `  ab = x * (int64_t)m0;`, `  high = (int32_t)((ab + (ab >= 0 ? ((int64_t)1 << 30) : (1 - ((int64_t)1 << 30)))) / ((int64_t)1 << 31));`, `  if (shift <= 0) return high;`, `  mask = (int32_t)(((int64_t)1 << shift) - 1);`, `  remainder = (int32_t)((uint32_t)high & (uint32_t)mask);`, `  threshold = (mask >> 1) + (high < 0 ? 1 : 0);`, `  floor_shift = high >= 0 ? (high >> shift) : ~((~high) >> shift);`, `  return floor_shift + (remainder > threshold ? 1 : 0);`, `}`, ``);
+    return out;
+}
+function floatPath(model, name) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const activation = net.activation === 'tanh'
+        ? 'tanhf(a)'
+        : net.activation === 'logistic'
+            ? '1.0f / (1.0f + expf(-a))'
+            : 'a > 0.0f ? a : 0.0f';
+    const out = [
+        `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  float x[${N}_INPUTS];`,
+        `  float h[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...encodeStatements(model, name, false),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    float a = ${name}_f_b1[j];`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) a += ${name}_f_w1[j][i] * x[i];`,
+        `    h[j] = ${activation};`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    float z = ${name}_f_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) z += ${name}_f_w2[k][j] * h[j];`,
+        `    outputs[k] = z;`,
+        `  }`,
+    ];
+    if (net.head === 'softmax') {
+        out.push(`  {`, `    float m = outputs[0], s = 0.0f;`, `    int best = 0;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > m) m = outputs[k];`, `    for (k = 0; k < ${N}_OUTPUTS; k++) {`, `      outputs[k] = expf(outputs[k] - m);`, `      s += outputs[k];`, `    }`, `    for (k = 0; k < ${N}_OUTPUTS; k++) outputs[k] /= s;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `    return best;`, `  }`);
+    }
+    else if (net.head === 'logistic') {
+        out.push(`  outputs[0] = 1.0f / (1.0f + expf(-outputs[0]));`, `  return outputs[0] > 0.5f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  outputs[0] = outputs[0] * ${name}_f_target[1] + ${name}_f_target[0];`, `  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+function int8Path(model, name) {
+    const N = name.toUpperCase();
+    const head = model.network.head;
+    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const out = [
+        `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
+        `  int8_t xq[${N}_INPUTS];`,
+        `  int8_t hq[${N}_HIDDEN];`,
+        `  int i, j, k;`,
+        ...(hasCategorical ? [`  int c;`] : []),
+        ...(head === 'softmax' ? [`  int best = 0;`] : []),
+        ...encodeStatements(model, name, true),
+        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
+        `    int32_t acc = ${name}_q_b1[j], r;`,
+        `    for (i = 0; i < ${N}_INPUTS; i++) acc += (int32_t)${name}_q_w1[j][i] * (int32_t)xq[i];`,
+        `    r = ${name}_requantize(acc, ${name}_q_m0[j], ${name}_q_shift[j]);`,
+        `    if (r < -${PRE_ACTIVATION_LIMIT}) r = -${PRE_ACTIVATION_LIMIT};`,
+        `    else if (r > ${PRE_ACTIVATION_LIMIT}) r = ${PRE_ACTIVATION_LIMIT};`,
+        `    r += ${name}_q_act_zero;`,
+        `    if (r < -128) r = -128;`,
+        `    else if (r > 127) r = 127;`,
+        `    hq[j] = ${name}_q_lut[r + 128];`,
+        `  }`,
+        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
+        `    int32_t acc = ${name}_q_b2[k];`,
+        `    for (j = 0; j < ${N}_HIDDEN; j++) acc += (int32_t)${name}_q_w2[k][j] * (int32_t)hq[j];`,
+        `    outputs[k] = (float)acc * ${name}_q_out_scale[k];`,
+        `  }`,
+    ];
+    if (head === 'softmax') {
+        out.push(`  for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `  return best;`);
+    }
+    else if (head === 'logistic') {
+        out.push(`  return outputs[0] > 0.0f ? 1 : 0;`);
+    }
+    else {
+        out.push(`  return 0;`);
+    }
+    out.push(`}`, ``);
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/device/export-c.ts
+/**
+ * Firmware export: a model as C99 source, NAME.h and NAME.c, with a float32 and an int8 path.
+ * No dynamic allocation, nothing beyond the C standard library (math.h on the float path).
+ * The constant objects are exactly those cost.ts counts (`storedObjects`), and the int8 path
+ * does exactly what int8-forward.ts simulates, operation for operation.
+ */
+
+
+
+
+
+const DEFAULT_C_NAME = 'nb_model';
+const q = (s) => `"${commentText(s)}"`;
+function checkModel(model) {
+    const net = model.network;
+    const int8 = model.int8;
+    if (int8 === null) {
+        throw new errors_UserError('model: no int8 network (key "int8" is null); write the model again with this version');
+    }
+    const values = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
+    if (!values.every(Number.isFinite))
+        throw new errors_UserError('model: network weights must be finite numbers');
+    if (int8.inputs !== net.inputs || int8.width !== net.width || int8.outputs !== net.outputs) {
+        throw new errors_UserError('model: the int8 network does not have the shape of the float network', { key: 'int8' });
+    }
+    return int8;
+}
+function headerText(model, name, p) {
+    const N = name.toUpperCase();
+    const net = model.network;
+    const enc = model.encoding;
+    const classes = enc.target.classes ?? [];
+    const regression = model.task === 'regression';
+    const act = net.activation;
+    const lines = [
+        `/*`,
+        ` * ${name}.h: a neural network for the device, written by neuron-budget ${commentText(p.toolVersion, 32)}.`,
+        ` * Do not edit: export it again from the model file instead.`,
+        ` *`,
+        ` * Data fingerprint: ${commentText(p.dataFingerprint, 80)}`,
+        ` * Config: ${commentText(p.config, 120)}`,
+        ` * Network: ${net.inputs} inputs after encoding, ${net.width} hidden neurons (${act}), ${net.outputs} output${net.outputs === 1 ? '' : 's'} (${net.head} head).`,
+        ` *`,
+        ` * features[] holds the raw values, in this order:`,
+    ];
+    enc.features.forEach((f, i) => {
+        if (f.kind === 'numeric') {
+            lines.push(` *   [${i}] ${q(f.name)}: a number, standardised on the device`);
+        }
+        else {
+            lines.push(` *   [${i}] ${q(f.name)}: the category's index, one-hot encoded on the device:`);
+            f.categories.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        }
+    });
+    if (enc.features.some((f) => f.kind === 'categorical')) {
+        lines.push(` * A category index that is not a whole number in range encodes as no category (all zeros).`);
+    }
+    lines.push(` *`);
+    if (regression) {
+        lines.push(` * Both functions return 0 and write the prediction of ${q(enc.target.name)}, in its own units, to outputs[0].`);
+    }
+    else {
+        lines.push(` * Both functions return the class index of ${q(enc.target.name)}:`);
+        classes.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
+        lines.push(` * ${name}_predict: the float32 network; outputs[] gets ${net.head === 'softmax' ? 'the probability of each class, in class order' : 'the probability of class 1'}.`, ` * ${name}_predict_int8: the int8 network; outputs[] gets the dequantised logit${net.outputs === 1 ? ' of class 1 (class 1 when it is above 0)' : ' of each class (the largest wins)'}.`);
+    }
+    lines.push(` * The int8 path is integer arithmetic apart from the input scaling and the output's dequantisation;`, ` * its outputs equal neuron-budget's simulation of it bit for bit on IEEE 754 single precision with`, ` * each assignment rounded to float (FLT_EVAL_METHOD 0, or GCC in an ISO mode such as -std=c99).`, ` * The float path runs the trained network in float32 arithmetic; it needs tanhf and expf (link -lm).`, ` */`, `#ifndef ${N}_H`, `#define ${N}_H`, ``, `#ifdef __cplusplus`, `extern "C" {`, `#endif`, ``, `#define ${N}_FEATURES ${enc.features.length}`, `#define ${N}_OUTPUTS ${net.outputs}`, `#define ${N}_INPUTS ${net.inputs}`, `#define ${N}_HIDDEN ${net.width}`);
+    if (!regression)
+        lines.push(`#define ${N}_CLASSES ${classes.length}`);
+    lines.push(``, `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, ``, `#ifdef __cplusplus`, `}`, `#endif`, ``, `#endif`, ``);
+    return lines.join('\n');
+}
+/** Values wrapped into lines of at most ~100 characters, indented. */
+function wrap(values, indent) {
+    const lines = [];
+    let line = '';
+    for (const v of values) {
+        if (line !== '' && line.length + v.length + 2 > 100 - indent.length) {
+            lines.push(`${indent}${line},`);
+            line = '';
+        }
+        line = line === '' ? v : `${line}, ${v}`;
+    }
+    if (line !== '')
+        lines.push(`${indent}${line}`);
+    return lines.join('\n');
+}
+function literal(type, v) {
+    return type === 'float' ? floatLiteral(v) : intLiteral(v);
+}
+function declare(name, o, values) {
+    const decl = `static const ${o.type} ${name}_${o.suffix}`;
+    const flat = values.flat();
+    if (flat.length !== o.count)
+        throw new Error(`internal: ${o.suffix} has ${flat.length} values, expected ${o.count}`);
+    const cells = (row, indent) => wrap(row.map((v) => literal(o.type, v)), indent);
+    if (o.scalar)
+        return `${decl} = ${literal(o.type, flat[0])};`;
+    if (isMatrix(values)) {
+        const rows = values.map((r) => `  {\n${cells(r, '    ')}\n  }`);
+        return `${decl}[${values.length}][${values[0].length}] = {\n${rows.join(',\n')}\n};`;
+    }
+    return `${decl}[${o.count}] = {\n${cells(flat, '  ')}\n};`;
+}
+function isMatrix(values) {
+    return Array.isArray(values[0]);
+}
+/** The values of each stored object, keyed by suffix. */
+function objectValues(model, int8) {
+    const net = model.network;
+    const enc = model.encoding;
+    const numeric = enc.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const qNumeric = int8.input.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
+    const f = (v) => Math.fround(v);
+    const rows = (m) => m.map((r) => r.map(f));
     return {
-        task: target.task,
-        inputs,
-        outputs,
-        trainRows: split.train.length,
-        validationRows: split.validation.length,
-        xTrain: train.x,
-        yTrain: train.y,
-        xValidation: validation.x,
-        yValidation: validation.y,
-        judgingRows: split.judging.length,
-        xJudging: judging.x,
-        yJudging: judging.y,
-        encoding: { features: encodings, target: targetEncoding },
+        f_in_mean: numeric.map((e) => f(e.mean)),
+        f_in_std: numeric.map((e) => f(e.std > 0 ? e.std : 1)),
+        f_w1: rows(net.hiddenWeights),
+        f_b1: net.hiddenBias.map(f),
+        f_w2: rows(net.outputWeights),
+        f_b2: net.outputBias.map(f),
+        f_target: [f(enc.target.mean), f(enc.target.std)],
+        q_in_mean: qNumeric.map((e) => e.mean),
+        q_in_mul: qNumeric.map((e) => e.multiplier),
+        q_in_zero: [int8.input.zeroPoint],
+        q_in_one: [int8.input.one],
+        q_w1: int8.hidden.weights,
+        q_b1: foldZeroPoint(int8.hidden.bias, int8.hidden.weights, int8.input.zeroPoint),
+        q_m0: int8.hidden.multiplier,
+        q_shift: int8.hidden.shift,
+        q_act_zero: [int8.hidden.preActivation.zeroPoint],
+        q_lut: int8.hidden.table,
+        q_w2: int8.output.weights,
+        q_b2: foldZeroPoint(int8.output.bias, int8.output.weights, int8.hidden.activation.zeroPoint),
+        q_out_scale: int8.output.scale,
     };
 }
+function sourceText(model, int8, name, p) {
+    const stored = storedObjects(costShapeOf(model.network, model.encoding));
+    const values = objectValues(model, int8);
+    const numeric = model.encoding.features.some((f) => f.kind === 'numeric');
+    const categorical = model.encoding.features.some((f) => f.kind === 'categorical');
+    const s = int8.hidden;
+    return [
+        `/*`,
+        ` * ${name}.c: written by neuron-budget ${commentText(p.toolVersion, 32)}; see ${name}.h. Do not edit.`,
+        ` *`,
+        ` * int8 scheme: input scale ${int8.input.scale.toPrecision(6)}, zero-point ${int8.input.zeroPoint};`,
+        ` * pre-activation scale ${s.preActivation.scale.toPrecision(6)}, zero-point ${s.preActivation.zeroPoint};`,
+        ` * hidden activation scale ${s.activation.scale.toPrecision(6)}, zero-point ${s.activation.zeroPoint};`,
+        ` * symmetric per-neuron int8 weights, int32 biases (zero-points folded in), ${model.network.activation} by table.`,
+        ` */`,
+        `#include "${name}.h"`,
+        `#include <math.h>`,
+        `#include <stdint.h>`,
+        ``,
+        `/* float32 network */`,
+        ...stored.float32.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        `/* int8 network */`,
+        ...stored.int8.map((o) => declare(name, o, values[o.suffix])),
+        ``,
+        ...helpers(name, numeric, categorical),
+        ...floatPath(model, name),
+        ...int8Path(model, name),
+    ].join('\n');
+}
+/** NAME.h and NAME.c for `model`; `name` must be a C identifier. */
+function exportC(model, name, provenance) {
+    checkCName(name);
+    const int8 = checkModel(model);
+    return {
+        headerFile: `${name}.h`,
+        sourceFile: `${name}.c`,
+        header: headerText(model, name, provenance),
+        source: sourceText(model, int8, name, provenance),
+    };
+}
+
+;// CONCATENATED MODULE: ./src/device/index.ts
+/**
+ * Device reality: what a network costs on a microcontroller, its int8 form, and firmware
+ * source for both forms. Pure functions; no I/O.
+ */
+
+
+
+
+
+
+
 
 ;// CONCATENATED MODULE: external "node:crypto"
 const external_node_crypto_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:crypto");
-;// CONCATENATED MODULE: ./src/data/fingerprint.ts
+;// CONCATENATED MODULE: ./src/files/process.ts
+/** Whether a process of this machine still runs, for telling a dead writer's leftovers from a live one's. */
 /**
- * sha256 of the data as used, over a canonical form: columns sorted by name, each
- * with its role and kind, then its values in row order (numbers as little-endian
- * 64-bit floats, categories as indices into the sorted category list). Line endings,
- * quoting, spelling of numbers ("1.0" vs "1") and column order do not change it; any
- * changed value does.
+ * True only when `pid` certainly names no running process here (ESRCH). A process of
+ * another user (EPERM) runs; anything unclear counts as running, so nothing live is touched.
+ */
+function processIsGone(pid) {
+    if (!Number.isSafeInteger(pid) || pid <= 0)
+        return false;
+    try {
+        process.kill(pid, 0);
+        return false;
+    }
+    catch (e) {
+        return e.code === 'ESRCH';
+    }
+}
+
+;// CONCATENATED MODULE: ./src/files/atomic.ts
+/**
+ * Writes a file so that readers see either the old content or the whole new content,
+ * never a half-written file: write a temp file in the same folder, then rename it over
+ * the target (rename is atomic within one file system, which is why the temp file must
+ * live beside the target rather than in the OS temp folder).
+ *
+ * A writer killed between the two steps leaves its temp file behind. The names follow one
+ * pattern, `.NAME.PID.HEX.neuron-budget.tmp`, which users can ignore in git
+ * (`*.neuron-budget.tmp`), and the next write of the same target removes those whose
+ * writer is gone.
  */
 
 
-const FORMAT = 'neuron-budget data fingerprint v1';
-const CHUNK = 8192;
-function fingerprint(features, target, rows) {
-    const parts = features.map((column) => ({
-        name: column.name,
-        role: 'feature',
-        kind: column.kind,
-        write: (hash) => column.kind === 'numeric' ? numbers(hash, column.values) : categories(hash, column.categories, column.codes),
-    }));
-    parts.push({
-        name: target.name,
-        role: 'target',
-        kind: target.task === 'classification' && target.numericLabels === null ? 'categorical' : 'numeric',
-        write: (hash) => target.task === 'regression'
-            ? numbers(hash, target.values)
-            : target.numericLabels !== null
-                ? numbers(hash, target.numericLabels)
-                : categories(hash, target.classes, target.indices),
-    });
-    parts.sort((a, b) => compareText(a.name, b.name));
-    const hash = (0,external_node_crypto_namespaceObject.createHash)('sha256');
-    hash.update(`${FORMAT}\nrows ${rows}\n`);
-    for (const part of parts) {
-        hash.update(`${JSON.stringify([part.name, part.role, part.kind])}\n`);
-        part.write(hash);
+
+
+const TEMP_SUFFIX = '.neuron-budget.tmp';
+/** A temp file this old is stale whatever its PID says (a PID can be reused, or belong to another machine). @testOnly */
+const STALE_TEMP_AGE_MS = 60 * 60 * 1000;
+async function writeFileAtomic(path, text) {
+    await removeStaleTempFiles(path);
+    // The random suffix only names the temp file; it never reaches any output.
+    const temp = (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}.${process.pid}.${(0,external_node_crypto_namespaceObject.randomBytes)(6).toString('hex')}${TEMP_SUFFIX}`);
+    let handle = null;
+    try {
+        handle = await (0,promises_namespaceObject.open)(temp, 'wx');
+        await handle.writeFile(text, 'utf8');
+        await handle.sync();
+        await handle.close();
+        handle = null;
+        await (0,promises_namespaceObject.rename)(temp, path);
     }
-    return hash.digest('hex');
-}
-function numbers(hash, values) {
-    const chunk = new Float64Array(CHUNK);
-    const view = new DataView(chunk.buffer);
-    const littleEndian = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
-    for (let start = 0; start < values.length; start += CHUNK) {
-        const n = Math.min(CHUNK, values.length - start);
-        for (let i = 0; i < n; i++) {
-            const v = values[start + i];
-            if (littleEndian)
-                chunk[i] = v === 0 ? 0 : v;
-            else
-                view.setFloat64(i * 8, v === 0 ? 0 : v, true);
-        }
-        hash.update(new Uint8Array(chunk.buffer, 0, n * 8));
+    catch (error) {
+        if (handle)
+            await handle.close().catch(() => undefined);
+        await (0,promises_namespaceObject.rm)(temp, { force: true }).catch(() => undefined);
+        throw error;
     }
 }
-function categories(hash, names, codes) {
-    hash.update(`${JSON.stringify(names)}\n`);
-    const chunk = new Uint32Array(CHUNK);
-    const view = new DataView(chunk.buffer);
-    const littleEndian = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
-    for (let start = 0; start < codes.length; start += CHUNK) {
-        const n = Math.min(CHUNK, codes.length - start);
-        for (let i = 0; i < n; i++) {
-            if (littleEndian)
-                chunk[i] = codes[start + i];
-            else
-                view.setUint32(i * 4, codes[start + i], true);
+function escapeRegExp(s) {
+    return s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}
+/**
+ * Removes the temp files that earlier writes of `path` left behind: only names of exactly
+ * our pattern for this target, and only when their writer process is gone (on this machine)
+ * or the file is older than STALE_TEMP_AGE_MS. Never throws: a leftover it cannot remove
+ * must not stop the write. Returns the names removed.
+ * @testOnly
+ */
+async function removeStaleTempFiles(path, now = Date.now()) {
+    const folder = (0,external_node_path_namespaceObject.dirname)(path);
+    // A bare `.tmp` ending is the name neuron-budget 0.1.0 gave them: an upgrade cleans those up too.
+    const pattern = new RegExp(`^\\.${escapeRegExp((0,external_node_path_namespaceObject.basename)(path))}\\.(\\d{1,10})\\.[0-9a-f]{12}(?:${escapeRegExp(TEMP_SUFFIX)}|\\.tmp)$`);
+    let names;
+    try {
+        names = await (0,promises_namespaceObject.readdir)(folder);
+    }
+    catch {
+        return [];
+    }
+    const removed = [];
+    for (const name of names) {
+        const m = pattern.exec(name);
+        if (!m)
+            continue;
+        const pid = Number(m[1]);
+        if (pid === process.pid)
+            continue; // a write of this process may be under way
+        const full = (0,external_node_path_namespaceObject.join)(folder, name);
+        try {
+            const info = await (0,promises_namespaceObject.stat)(full);
+            if (!info.isFile())
+                continue;
+            if (!processIsGone(pid) && now - info.mtimeMs < STALE_TEMP_AGE_MS)
+                continue;
+            await (0,promises_namespaceObject.rm)(full, { force: true });
+            removed.push(name);
         }
-        hash.update(new Uint8Array(chunk.buffer, 0, n * 4));
+        catch {
+            // Gone already (another run cleaned it) or not ours to touch: leave it.
+        }
+    }
+    return removed;
+}
+
+;// CONCATENATED MODULE: ./src/files/output.ts
+/**
+ * Output files a user asked for (report, model): checked before minutes of work, written
+ * atomically after. A refusal by the file system is the user's to fix, not a bug.
+ */
+
+
+
+
+
+/** Writes an output file atomically; a refusal by the file system is the user's to fix, not a bug. */
+async function writeOutput(path, text, what, root) {
+    try {
+        await writeFileAtomic(path, text);
+    }
+    catch (error) {
+        const code = error.code;
+        const reasons = {
+            EACCES: 'permission denied',
+            EPERM: 'permission denied',
+            EROFS: 'the file system is read-only',
+            ENOSPC: 'no space left on the device',
+            EISDIR: 'it is a folder',
+            ENOENT: 'its folder does not exist',
+            ENOTDIR: 'a part of the path is not a folder',
+        };
+        const reason = code === undefined ? undefined : reasons[code];
+        if (reason === undefined)
+            throw error;
+        const shown = displayPath(root, path);
+        throw new errors_UserError(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
+    }
+}
+/** Fails early when `path` cannot be an output file (its folder is missing, or it is a folder). */
+async function checkOutputFolder(path, what, root) {
+    const folder = (0,external_node_path_namespaceObject.dirname)(path);
+    const shown = displayPath(root, folder);
+    const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
+    if (info === null)
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
+            file: displayPath(root, path),
+        });
+    if (!info.isDirectory())
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
+            file: displayPath(root, path),
+        });
+    const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
+    if (target?.isDirectory())
+        throw new errors_UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
+            file: displayPath(root, path),
+        });
+}
+
+;// CONCATENATED MODULE: ./src/model/document.ts
+
+const MODEL_SCHEMA = 'neuron-budget/model@2';
+/**
+ * The witness as a document. With `calibration` (the encoded training rows) it carries the
+ * int8 form too.
+ */
+function modelDocument(witness, encoding, target, backing, calibration = null, provenance = null) {
+    return {
+        schema: MODEL_SCHEMA,
+        task: encoding.target.task,
+        width: witness.network.width,
+        target: {
+            metric: target.metric,
+            threshold: target.threshold,
+            value: witness.judged,
+            on: backing.on,
+            met: witness.met,
+            adequate: backing.adequate,
+        },
+        origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
+        encoding: structuredClone(encoding),
+        network: structuredClone(witness.network),
+        cost: deviceCost(costShapeOf(witness.network, encoding)),
+        int8: calibration === null ? null : quantizeNetwork(witness.network, encoding, calibration),
+        provenance,
+    };
+}
+/** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
+function serializeModel(doc) {
+    return `${JSON.stringify(doc, null, 2)}\n`;
+}
+
+;// CONCATENATED MODULE: ./schema/model.schema.json
+const model_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget model","description":"A trained network as a self-contained file: the network, how raw rows become its inputs and its outputs labels or values, what it costs on a device, and its int8 form. Written by neuron-budget for the witness of a search.","type":"object","additionalProperties":false,"required":["schema","task","width","target","origin","encoding","network","cost","int8","provenance"],"properties":{"schema":{"const":"neuron-budget/model@2","description":"Format and version of this file."},"task":{"enum":["classification","regression"],"description":"What the network predicts: a class or a number."},"width":{"type":"integer","description":"Hidden neurons of the network (the same as network.width).","minimum":1},"target":{"type":"object","description":"The target the network was judged against and what it reached.","additionalProperties":false,"required":["metric","threshold","value","on","met","adequate"],"properties":{"metric":{"enum":["accuracy","rmse","mae","max-abs-error"],"description":"The target metric of the config."},"threshold":{"type":"number","description":"The config\'s threshold: accuracy at least this, error metrics at most this (in the target\'s units)."},"value":{"type":"number","description":"The metric on the rows that judged the network (target.on)."},"on":{"enum":["judging","validation","training"],"description":"Which rows judged it: the judging rows, never seen in training; or the validation rows, or the training rows, when there were none."},"met":{"type":"boolean","description":"The network met the target on those rows."},"adequate":{"type":"boolean","description":"Its width is adequate: at least search.required networks of that width met the target."}}},"origin":{"type":"object","description":"Where the network came from: with the same config and data, enough to train it again.","additionalProperties":false,"required":["seed","width","restart","how"],"properties":{"seed":{"type":"integer","description":"The config\'s base seed."},"width":{"type":"integer","minimum":1,"description":"Width of the fresh training the network started as."},"restart":{"type":"integer","minimum":1,"description":"Restart of that width (counted from 1) whose seeded stream trained it."},"how":{"enum":["fresh","pruned"],"description":"fresh: trained at its width; pruned: pruned down to it from origin.width."}}},"encoding":{"$ref":"#/$defs/encoding","description":"How raw rows become the network\'s inputs (numeric: standardised; categorical: one-hot) and its outputs labels or values."},"network":{"$ref":"#/$defs/network","description":"The trained network\'s weights in float64, with their layout."},"cost":{"$ref":"#/$defs/cost","description":"What the network costs on a device: parameters, multiply-accumulates, flash and RAM bytes in float32 and int8."},"int8":{"description":"The int8 form of the network, calibrated on the training rows; null when the writer had no training rows to calibrate on.","oneOf":[{"type":"null"},{"$ref":"#/$defs/int8"}]},"provenance":{"description":"What produced the file, for the header of exported firmware; null in files of version 1.","oneOf":[{"type":"null"},{"type":"object","additionalProperties":false,"required":["tool","data","config"],"properties":{"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget","description":"The tool that wrote the file."},"version":{"type":"string","description":"Its version."}},"description":"The tool that wrote the file."},"data":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint of the data as used (64 hex digits)."},"config":{"type":"string","description":"The config file, relative to the workspace."}}}]}},"$defs":{"encoding":{"type":"object","description":"How raw rows become the network\'s inputs, and its outputs labels or values.","additionalProperties":false,"required":["features","target"],"properties":{"features":{"type":"array","description":"The features in input order; they encode to network.inputs inputs.","items":{"oneOf":[{"type":"object","description":"A numeric feature: one input, standardised.","additionalProperties":false,"required":["kind","name","mean","std"],"properties":{"kind":{"const":"numeric","description":"A number column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"mean":{"type":"number","description":"Mean over the training rows; the input is (x − mean) / std."},"std":{"type":"number","description":"Population standard deviation over the training rows (1 for a constant column, which is only centred)."}}},{"type":"object","description":"A categorical feature: one input per category, one-hot.","additionalProperties":false,"required":["kind","name","categories"],"properties":{"kind":{"const":"categorical","description":"A text column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"categories":{"type":"array","description":"The categories in input order: category k sets input k of this feature\'s block to 1, the others to 0. A category not listed sets them all to 0.","items":{"type":"string"},"minItems":1}}}]}},"target":{"type":"object","description":"How the network\'s outputs become labels or values.","additionalProperties":false,"required":["name","task","classes","mean","std"],"properties":{"name":{"type":"string","description":"The target column\'s name (text from the repository)."},"task":{"enum":["classification","regression"],"description":"The same as the document\'s task."},"classes":{"type":["array","null"],"items":{"type":"string"},"description":"Classification: the class labels in index order (sorted); null for regression."},"mean":{"type":"number","description":"Regression: the network\'s output is (y − mean) / std; classification: 0."},"std":{"type":"number","description":"Regression: see mean; classification: 1."}}}}},"network":{"type":"object","description":"The one-hidden-layer network in float64: a_j = hiddenBias[j] + Σ_i hiddenWeights[j][i]·x_i, h_j = activation(a_j), z_k = outputBias[k] + Σ_j outputWeights[k][j]·h_j, then the head.","additionalProperties":false,"required":["inputs","width","outputs","activation","head","hiddenWeights","hiddenBias","outputWeights","outputBias"],"properties":{"inputs":{"type":"integer","description":"Inputs after encoding (D).","minimum":1},"width":{"type":"integer","description":"Hidden neurons (H).","minimum":1},"outputs":{"type":"integer","description":"Output units (K): the classes for three or more, 1 for two classes (logistic) and for regression.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The hidden neurons\' activation."},"head":{"enum":["softmax","logistic","linear"],"description":"softmax: class probabilities; logistic: the probability of the second class; linear: the standardised value."},"hiddenWeights":{"type":"array","description":"H rows: hiddenWeights[j][i] is the weight from input i to hidden neuron j.","items":{"type":"array","description":"Hidden neuron j\'s weight from each input i, in input order.","items":{"type":"number"}}},"hiddenBias":{"type":"array","description":"One bias per hidden neuron.","items":{"type":"number"}},"outputWeights":{"type":"array","description":"K rows: outputWeights[k][j] is the weight from hidden neuron j to output k.","items":{"type":"array","description":"Output k\'s weight from each hidden neuron j.","items":{"type":"number"}}},"outputBias":{"type":"array","description":"One bias per output.","items":{"type":"number"}}}},"bytesByForm":{"type":"object","description":"A figure for each form of the network.","additionalProperties":false,"required":["float32","int8"],"properties":{"float32":{"type":"integer","description":"The float32 form.","minimum":0},"int8":{"type":"integer","description":"The int8 form.","minimum":0}}},"cost":{"type":"object","description":"What the network costs on a device, by the definitions of src/device/cost.ts.","additionalProperties":false,"required":["parameters","macs","flashBytes","ramBytes"],"properties":{"parameters":{"type":"integer","description":"Weights and biases: D·H + H + H·K + K.","minimum":0},"macs":{"type":"integer","description":"Multiply-accumulates per inference: D·H + H·K.","minimum":0},"flashBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the constant objects the exported C stores for each form (weights, biases, scales, zero-points, multipliers, shifts, the activation table, the input encoding\'s constants); code and padding not counted."},"ramBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the activation buffers of one inference (the encoded input vector and the hidden vector, in the form\'s type); the caller\'s arrays, scalars and the stack frame not counted."}}},"quantParams":{"type":"object","description":"An int8 quantisation: real = scale · (code − zeroPoint).","additionalProperties":false,"required":["scale","zeroPoint"],"properties":{"scale":{"type":"number","description":"S: the real value of one code step.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z: the code of real 0 (real = S · (q − Z))."}}},"int8":{"type":"object","description":"The int8 form (integer-only inference after Jacob et al. 2018, per-channel symmetric weights after Krishnamoorthi 2018).","additionalProperties":false,"required":["inputs","width","outputs","activation","head","input","hidden","output"],"properties":{"inputs":{"type":"integer","description":"The same as network.inputs.","minimum":1},"width":{"type":"integer","description":"The same as network.width.","minimum":1},"outputs":{"type":"integer","description":"The same as network.outputs.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The same as network.activation."},"head":{"enum":["softmax","logistic","linear"],"description":"The same as network.head."},"input":{"type":"object","description":"The quantisation of the encoded inputs (asymmetric int8).","additionalProperties":false,"required":["scale","zeroPoint","one","features"],"properties":{"scale":{"type":"number","description":"S_x of the whole encoded input vector: (hi − lo) / 255 over the training rows, the range widened to hold 0.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z_x: the code of an input of 0, round(−128 − lo / S_x)."},"one":{"type":"integer","minimum":-128,"maximum":127,"description":"The code of a one-hot 1: clamp(Z_x + round(1 / S_x))."},"features":{"type":"array","description":"One entry per feature of encoding.features, in the same order.","items":{"oneOf":[{"type":"object","description":"A numeric feature\'s input stage.","additionalProperties":false,"required":["kind","mean","multiplier"],"properties":{"kind":{"const":"numeric","description":"A numeric feature."},"mean":{"type":"number","description":"The feature\'s mean as float32, subtracted from the raw value in float32."},"multiplier":{"type":"number","description":"float32 1 / (std · S_x): the centred value times this, in float32, is the input in code steps before rounding."}}},{"type":"object","description":"A categorical feature\'s input stage.","additionalProperties":false,"required":["kind","categories"],"properties":{"kind":{"const":"categorical","description":"A categorical feature."},"categories":{"type":"integer","description":"Its number of categories (one-hot inputs).","minimum":1}}}]}}}},"hidden":{"type":"object","description":"The hidden layer: int32 accumulation, requantisation to an int8 pre-activation, the activation by table.","additionalProperties":false,"required":["weights","weightScales","bias","multiplier","shift","preActivation","activation","table"],"properties":{"weights":{"type":"array","description":"H rows of D int8 weight codes (symmetric: zero-point 0, range ±127).","items":{"type":"array","description":"Neuron j\'s weight codes, in input order.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per hidden neuron: max |w| / 127 (larger only when the bias would not fit in ±2^30 steps).","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per hidden neuron at scale S_x · S_w[j], zero-point 0, before the input zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"multiplier":{"type":"array","description":"M0 per hidden neuron as round(M0 · 2^31) in [2^30, 2^31), with M = S_x · S_w[j] / S_a = M0 · 2^−shift; 0 when M < 2^−32.","items":{"type":"integer","minimum":0,"maximum":2147483647}},"shift":{"type":"array","description":"n per hidden neuron: a rounding right shift when positive, a saturating left shift when negative.","items":{"type":"integer","minimum":-31,"maximum":31}},"preActivation":{"$ref":"#/$defs/quantParams","description":"The int8 pre-activation that indexes the table (S_a, Z_a)."},"activation":{"$ref":"#/$defs/quantParams","description":"The int8 hidden activation the table holds (S_h, Z_h)."},"table":{"type":"array","description":"table[q + 128]: the activation code of pre-activation code q, for q = −128..127.","items":{"type":"integer","minimum":-128,"maximum":127},"minItems":256,"maxItems":256}}},"output":{"type":"object","description":"The output layer: int32 accumulation, then dequantisation to float for the head.","additionalProperties":false,"required":["weights","weightScales","bias","scale"],"properties":{"weights":{"type":"array","description":"K rows of H int8 weight codes (symmetric, ±127).","items":{"type":"array","description":"Output k\'s weight codes, by hidden neuron.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per output.","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per output at scale S_h · S_w[k] (regression: with the target\'s mean / std added), before the hidden zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"scale":{"type":"array","description":"float32 per output: the dequantised output per accumulator step (S_h · S_w[k]; regression: times the target\'s std, giving target units).","items":{"type":"number"}}}}}}}}');
+;// CONCATENATED MODULE: ./src/common/json-position.ts
+/**
+ * Finds where a JSON text first goes wrong. JSON.parse's messages differ between Node
+ * versions and some carry no position at all, so a small scanner (RFC 8259 grammar)
+ * gives every user the same line and column.
+ */
+/** Returns null when `text` is valid JSON. */
+function findJsonSyntaxProblem(text) {
+    let i = 0;
+    const n = text.length;
+    const fail = (expected) => {
+        throw new ScanError(i, expected);
+    };
+    const ws = () => {
+        while (i < n) {
+            const c = text.charCodeAt(i);
+            if (c === 0x20 || c === 0x09 || c === 0x0a || c === 0x0d)
+                i++;
+            else
+                break;
+        }
+    };
+    const literal = (word) => {
+        if (text.startsWith(word, i))
+            i += word.length;
+        else
+            fail(`"${word}"`);
+    };
+    const digits = () => {
+        const start = i;
+        while (i < n && text.charCodeAt(i) >= 0x30 && text.charCodeAt(i) <= 0x39)
+            i++;
+        if (i === start)
+            fail('a digit');
+    };
+    const number = () => {
+        if (text[i] === '-')
+            i++;
+        if (text[i] === '0')
+            i++;
+        else
+            digits();
+        if (text[i] === '.') {
+            i++;
+            digits();
+        }
+        if (text[i] === 'e' || text[i] === 'E') {
+            i++;
+            if (text[i] === '+' || text[i] === '-')
+                i++;
+            digits();
+        }
+    };
+    const string = () => {
+        i++; // opening quote
+        while (i < n) {
+            const c = text.charCodeAt(i);
+            if (c === 0x22) {
+                i++;
+                return;
+            }
+            if (c < 0x20)
+                fail('a closing quote (a string cannot contain a line break or control character)');
+            if (c === 0x5c) {
+                i++;
+                const e = text[i];
+                if (e === 'u') {
+                    for (let k = 1; k <= 4; k++) {
+                        if (!/[0-9a-fA-F]/.test(text[i + k] ?? '')) {
+                            i += k;
+                            fail('four hex digits after \\u');
+                        }
+                    }
+                    i += 5;
+                }
+                else if (e !== undefined && '"\\/bfnrt'.includes(e))
+                    i++;
+                else
+                    fail('a valid escape (\\" \\\\ \\/ \\b \\f \\n \\r \\t \\uXXXX)');
+            }
+            else
+                i++;
+        }
+        fail('a closing quote');
+    };
+    const value = () => {
+        ws();
+        const c = text[i];
+        if (c === '{') {
+            i++;
+            ws();
+            if (text[i] === '}') {
+                i++;
+                return;
+            }
+            for (;;) {
+                ws();
+                if (text[i] !== '"')
+                    fail('a key in double quotes');
+                string();
+                ws();
+                if (text[i] !== ':')
+                    fail('":"');
+                i++;
+                value();
+                ws();
+                if (text[i] === ',') {
+                    i++;
+                    continue;
+                }
+                if (text[i] === '}') {
+                    i++;
+                    return;
+                }
+                fail('"," or "}"');
+            }
+        }
+        else if (c === '[') {
+            i++;
+            ws();
+            if (text[i] === ']') {
+                i++;
+                return;
+            }
+            for (;;) {
+                value();
+                ws();
+                if (text[i] === ',') {
+                    i++;
+                    continue;
+                }
+                if (text[i] === ']') {
+                    i++;
+                    return;
+                }
+                fail('"," or "]"');
+            }
+        }
+        else if (c === '"')
+            string();
+        else if (c === '-' || (c !== undefined && c >= '0' && c <= '9'))
+            number();
+        else if (c === 't')
+            literal('true');
+        else if (c === 'f')
+            literal('false');
+        else if (c === 'n')
+            literal('null');
+        else
+            fail('a value');
+    };
+    try {
+        if (text.charCodeAt(0) === 0xfeff)
+            i = 1;
+        value();
+        ws();
+        if (i < n)
+            fail('the end of the file');
+        return null;
+    }
+    catch (e) {
+        if (!(e instanceof ScanError))
+            throw e;
+        const { line, column } = lineAndColumn(text, e.offset);
+        const found = e.offset >= n ? 'the end of the file' : describeChar(text, e.offset);
+        return { line, column, detail: `expected ${e.expected}, found ${found}` };
+    }
+}
+class ScanError extends Error {
+    offset;
+    expected;
+    constructor(offset, expected) {
+        super(`expected ${expected} at offset ${offset}`);
+        this.offset = offset;
+        this.expected = expected;
+    }
+}
+/** 1-based line and column as a text editor counts them (column in characters). */
+function lineAndColumn(text, offset) {
+    let line = 1;
+    let lineStart = 0;
+    for (let k = 0; k < offset && k < text.length; k++) {
+        if (text.charCodeAt(k) === 0x0a) {
+            line++;
+            lineStart = k + 1;
+        }
+    }
+    return { line, column: offset - lineStart + 1 };
+}
+function describeChar(text, offset) {
+    const c = text.codePointAt(offset) ?? 0;
+    if (c === 0x0a || c === 0x0d)
+        return 'a line break';
+    if (c < 0x20 || c === 0x7f)
+        return `control character U+${c.toString(16).toUpperCase().padStart(4, '0')}`;
+    return JSON.stringify(String.fromCodePoint(c));
+}
+
+;// CONCATENATED MODULE: ./src/common/json-schema.ts
+/**
+ * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
+ * file format has one definition: the schema editors read is the one the tool enforces. Only
+ * the keywords our schemas use are understood (type, const, enum, properties, required,
+ * additionalProperties, items, minItems, maxItems, minimum, maximum, pattern, maxLength, $ref
+ * into $defs, anyOf, oneOf); a schema that uses any other keyword is refused when it is loaded,
+ * so a schema cannot silently say more than is checked.
+ *
+ * The first problem is reported as `key: expected …, found …`, with the key written as a path
+ * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
+ */
+class SchemaProblem extends Error {
+    key;
+    expected;
+    found;
+    constructor(
+    /** Where, as a path (`result.width`, `history[0]`); '(top level)' for the document itself. */
+    key, expected, 
+    /** What was found, described for a reader. */
+    found) {
+        super(`${key}: expected ${expected}, found ${found}`);
+        this.key = key;
+        this.expected = expected;
+        this.found = found;
+        this.name = 'SchemaProblem';
+    }
+}
+const KNOWN = new Set([
+    'title',
+    'description',
+    'type',
+    'const',
+    'enum',
+    'properties',
+    'required',
+    'additionalProperties',
+    'items',
+    'minItems',
+    'maxItems',
+    'minimum',
+    'maximum',
+    'exclusiveMinimum',
+    'minProperties',
+    'pattern',
+    'maxLength',
+    '$ref',
+    'anyOf',
+    'oneOf',
+    '$defs',
+    '$schema',
+    '$id',
+    '$comment',
+]);
+/** A validator for documents of one schema. Throws when the schema uses a keyword it does not check. */
+function schemaValidator(root) {
+    checkKeywords(root, '#');
+    const patterns = new Map();
+    const regex = (p) => {
+        let re = patterns.get(p);
+        if (re === undefined)
+            patterns.set(p, (re = new RegExp(p, 'u')));
+        return re;
+    };
+    const resolve = (node) => {
+        if (node.$ref === undefined)
+            return node;
+        const m = /^#\/\$defs\/(.+)$/.exec(node.$ref);
+        const target = m ? root.$defs?.[m[1]] : undefined;
+        if (target === undefined)
+            throw new Error(`schema: unresolved $ref ${node.$ref}`);
+        return { ...target, ...(node.title ? { title: node.title } : {}) };
+    };
+    const check = (raw, value, key) => {
+        const node = resolve(raw);
+        const fail = (expected, found = value) => {
+            throw new SchemaProblem(key || '(top level)', node.title ?? expected, describe(found));
+        };
+        if (node.const !== undefined && value !== node.const)
+            fail(JSON.stringify(node.const));
+        if (node.enum !== undefined && !node.enum.includes(value))
+            fail(`one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`);
+        if (node.type !== undefined) {
+            const types = Array.isArray(node.type) ? node.type : [node.type];
+            if (value === null && types.includes('null'))
+                return;
+            if (!types.some((t) => hasType(value, t)))
+                fail(typePhrase(node, types.filter((t) => t !== 'null')));
+        }
+        if (typeof value === 'number') {
+            if (node.minimum !== undefined && value < node.minimum)
+                fail(typePhrase(node, types(node)));
+            if (node.maximum !== undefined && value > node.maximum)
+                fail(typePhrase(node, types(node)));
+            if (node.exclusiveMinimum !== undefined && value <= node.exclusiveMinimum)
+                fail(typePhrase(node, types(node)));
+        }
+        if (typeof value === 'string') {
+            if (node.maxLength !== undefined && value.length > node.maxLength)
+                fail(`a string of at most ${node.maxLength} characters`);
+            if (node.pattern !== undefined && !regex(node.pattern).test(value))
+                fail(`a string matching ${node.pattern}`);
+        }
+        if (Array.isArray(value)) {
+            if (node.maxItems !== undefined && value.length > node.maxItems)
+                fail(`a list of at most ${node.maxItems} entries`, value.length);
+            if (node.minItems !== undefined && value.length < node.minItems)
+                fail(`a list of at least ${node.minItems} entries`, value.length);
+            if (node.items !== undefined)
+                value.forEach((v, i) => check(node.items, v, `${key}[${i}]`));
+        }
+        if (isObject(value)) {
+            const props = node.properties ?? {};
+            if (node.minProperties !== undefined && Object.keys(value).length < node.minProperties) {
+                fail(`an object with at least ${node.minProperties} key${node.minProperties === 1 ? '' : 's'}`);
+            }
+            for (const [name, child] of Object.entries(value)) {
+                if (Object.hasOwn(props, name))
+                    check(props[name], child, join(key, name));
+                else if (node.additionalProperties === false) {
+                    throw new SchemaProblem(join(key, name), `no such key (allowed: ${Object.keys(props).join(', ')})`, describe(child));
+                }
+                else if (typeof node.additionalProperties === 'object')
+                    check(node.additionalProperties, child, join(key, name));
+            }
+            // What is there is checked before what is missing: a wrong value says more than a later absent key.
+            for (const name of node.required ?? []) {
+                if (!Object.hasOwn(value, name))
+                    throw new SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
+            }
+        }
+        if (node.anyOf !== undefined) {
+            if (!node.anyOf.some((branch) => passes(branch, value, key)))
+                fail(node.anyOf.map((b) => expectedOf(resolve(b))).join(' or '));
+        }
+        if (node.oneOf !== undefined) {
+            // Our oneOf branches are told apart by a `kind` constant: check the branch the document names.
+            const kinds = node.oneOf.map((b) => resolve(b).properties?.['kind']?.const);
+            if (!kinds.includes(undefined) && isObject(value)) {
+                const at = kinds.indexOf(value['kind']);
+                if (at < 0)
+                    throw new SchemaProblem(join(key, 'kind'), `one of ${kinds.map((k) => JSON.stringify(k)).join(', ')}`, describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING));
+                check(node.oneOf[at], value, key);
+            }
+            else {
+                // When the value's type leaves one branch (null or an object, say), check that one: its error is the precise one.
+                const typed = node.oneOf.filter((b) => {
+                    const t = resolve(b).type;
+                    const all = t === undefined ? [] : Array.isArray(t) ? t : [t];
+                    return all.length === 0 || all.some((x) => hasType(value, x));
+                });
+                if (typed.length === 1)
+                    check(typed[0], value, key);
+                else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
+                    fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
+                }
+            }
+        }
+    };
+    const passes = (node, value, key) => {
+        try {
+            check(node, value, key);
+            return true;
+        }
+        catch (e) {
+            if (e instanceof SchemaProblem)
+                return false;
+            throw e;
+        }
+    };
+    return (value) => check(root, value, '');
+}
+const MISSING = Symbol('missing');
+const MISSING_KEY = 'nothing (the key is missing)';
+function checkKeywords(node, where) {
+    for (const [k, v] of Object.entries(node)) {
+        if (!KNOWN.has(k))
+            throw new Error(`schema: keyword ${k} at ${where} is not checked by schemaValidator`);
+        if (k === 'properties' || k === '$defs')
+            for (const [name, child] of Object.entries(v))
+                checkKeywords(child, `${where}/${k}/${name}`);
+        if ((k === 'items' || k === 'additionalProperties') && typeof v === 'object')
+            checkKeywords(v, `${where}/${k}`);
+        if (k === 'anyOf' || k === 'oneOf')
+            v.forEach((child, i) => checkKeywords(child, `${where}/${k}/${i}`));
+    }
+}
+function types(node) {
+    const t = node.type === undefined ? [] : Array.isArray(node.type) ? node.type : [node.type];
+    return t.filter((x) => x !== 'null');
+}
+function hasType(value, type) {
+    switch (type) {
+        case 'object':
+            return isObject(value);
+        case 'array':
+            return Array.isArray(value);
+        case 'string':
+            return typeof value === 'string';
+        case 'number':
+            return typeof value === 'number' && Number.isFinite(value);
+        case 'integer':
+            return typeof value === 'number' && Number.isInteger(value);
+        case 'boolean':
+            return typeof value === 'boolean';
+        case 'null':
+            return value === null;
+    }
+}
+/** "an integer of at least 1", "a number", "a list", … */
+function typePhrase(node, ts) {
+    const bound = () => {
+        const parts = [];
+        if (node.minimum !== undefined && node.maximum !== undefined)
+            return ` from ${node.minimum} to ${node.maximum}`;
+        if (node.exclusiveMinimum !== undefined)
+            parts.push(` above ${node.exclusiveMinimum}`);
+        if (node.minimum !== undefined)
+            parts.push(` of at least ${node.minimum}`);
+        if (node.maximum !== undefined)
+            parts.push(` of at most ${node.maximum}`);
+        return parts.join('');
+    };
+    const one = (t) => {
+        switch (t) {
+            case 'object':
+                return 'an object';
+            case 'array':
+                return 'a list';
+            case 'string':
+                return 'a string';
+            case 'number':
+                return `a number${bound()}`;
+            case 'integer':
+                return `an integer${bound()}`;
+            case 'boolean':
+                return 'true or false';
+            case 'null':
+                return 'null';
+        }
+    };
+    return ts.length === 0 ? 'a value' : ts.map(one).join(' or ');
+}
+function expectedOf(node) {
+    if (node.title !== undefined)
+        return node.title;
+    if (node.const !== undefined)
+        return JSON.stringify(node.const);
+    if (node.enum !== undefined)
+        return `one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`;
+    return typePhrase(node, types(node));
+}
+function join(key, child) {
+    return key === '' ? child : `${key}.${child}`;
+}
+function isObject(v) {
+    return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+/** A found value for a message: short, and never a repository string in full. */
+function describe(v) {
+    if (v === MISSING)
+        return 'nothing';
+    if (v === null)
+        return 'null';
+    if (Array.isArray(v))
+        return 'a list';
+    if (typeof v === 'object')
+        return 'an object';
+    if (typeof v === 'string') {
+        const s = JSON.stringify(v);
+        return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
+    }
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
+}
+
+;// CONCATENATED MODULE: ./src/model/parse.ts
+/**
+ * Reading a model file: JSON syntax with line and column, then the shape by
+ * schema/model.schema.json itself, then what a schema cannot say (array lengths that follow
+ * the network's shape, the int8 form's consistency). Every problem is one message naming the
+ * file and the key. Files of version 1 (before judging rows and the int8 form) are read too.
+ */
+
+
+
+
+
+
+/** The first version: no cost, no int8 form, judged on the validation rows, a 0-based restart and the grown width. */
+const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
+const checkShape = schemaValidator(model_schema_namespaceObject);
+function inputsOf(features) {
+    return features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
+}
+/** A version-1 document in this version's shape (what it could not know is marked as such). */
+function upgrade(d) {
+    const v1target = d['target'];
+    const v1origin = d['origin'];
+    const net = d['network'];
+    const enc = d['encoding'];
+    const cost = net && enc && Array.isArray(enc.features)
+        ? deviceCost(costShapeOf(net, enc))
+        : undefined;
+    return {
+        ...d,
+        schema: MODEL_SCHEMA,
+        target: v1target && { ...v1target, on: 'validation', met: true, adequate: true },
+        origin: v1origin && {
+            seed: v1origin.seed,
+            width: v1origin.grownWidth,
+            restart: typeof v1origin.restart === 'number' ? v1origin.restart + 1 : v1origin.restart,
+            how: 'fresh',
+        },
+        cost,
+        int8: null,
+        provenance: null,
+    };
+}
+/** Parse and check a model file; a bad file gets a message naming the file and the key. */
+function parseModel(text, file = 'model') {
+    const syntax = findJsonSyntaxProblem(text);
+    if (syntax) {
+        throw new errors_UserError(`${file}:${syntax.line}:${syntax.column}: the model is not valid JSON: ${syntax.detail}`, {
+            file,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    }
+    let doc = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    const bad = (key, expected, found) => {
+        throw new errors_UserError(`${file}: ${key}: expected ${expected}, found ${found}`, { file, key });
+    };
+    if (typeof doc !== 'object' || doc === null || Array.isArray(doc))
+        return bad('(top level)', 'a neuron-budget model (a JSON object)', Array.isArray(doc) ? 'a list' : String(doc));
+    const schema = doc['schema'];
+    if (schema === MODEL_SCHEMA_V1)
+        doc = upgrade(doc);
+    else if (schema !== MODEL_SCHEMA) {
+        bad('schema', `"${MODEL_SCHEMA}"`, typeof schema === 'string' ? JSON.stringify(schema.slice(0, 60)) : 'nothing');
+    }
+    try {
+        checkShape(doc);
+    }
+    catch (e) {
+        if (e instanceof SchemaProblem)
+            bad(e.key, e.expected, e.found);
+        throw e;
+    }
+    const d = doc;
+    const net = d.network;
+    const enc = d.encoding;
+    if (inputsOf(enc.features) !== net.inputs)
+        bad('encoding.features', `features that encode to ${net.inputs} inputs (network.inputs)`, `${inputsOf(enc.features)}`);
+    const rows = (key, list, count, length) => {
+        if (list.length !== count)
+            bad(key, `${count} rows`, `${list.length}`);
+        list.forEach((r, i) => {
+            if (r.length !== length)
+                bad(`${key}[${i}]`, `${length} numbers`, `${r.length}`);
+        });
+    };
+    rows('network.hiddenWeights', net.hiddenWeights, net.width, net.inputs);
+    rows('network.outputWeights', net.outputWeights, net.outputs, net.width);
+    if (net.hiddenBias.length !== net.width)
+        bad('network.hiddenBias', `${net.width} numbers`, `${net.hiddenBias.length}`);
+    if (net.outputBias.length !== net.outputs)
+        bad('network.outputBias', `${net.outputs} numbers`, `${net.outputBias.length}`);
+    if (d.width !== net.width)
+        bad('width', `network.width (${net.width})`, `${d.width}`);
+    if (d.task === 'classification' && !Array.isArray(enc.target.classes))
+        bad('encoding.target.classes', 'a list of class labels', 'null');
+    if (d.int8 !== null) {
+        const problem = checkInt8Network(d.int8, net, enc);
+        if (problem)
+            bad(problem.key, problem.expected, 'something else');
+    }
+    // The cost is derived: recompute it rather than trust the file.
+    return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
+}
+
+;// CONCATENATED MODULE: ./src/nn/kernel/layout.ts
+function layoutOf(s) {
+    const w1 = 0;
+    const b1 = s.inputs * s.width;
+    const w2 = b1 + s.width;
+    const b2 = w2 + s.width * s.outputs;
+    return { w1, b1, w2, b2, size: b2 + s.outputs };
+}
+
+;// CONCATENATED MODULE: ./src/nn/kernel/reference.ts
+
+
+
+
+function activationCode(a) {
+    return a === 'tanh' ? ACT_TANH : a === 'logistic' ? ACT_LOGISTIC : ACT_RELU;
+}
+function headCode(h) {
+    return h === 'linear' ? HEAD_LINEAR : h === 'logistic' ? HEAD_LOGISTIC : HEAD_SOFTMAX;
+}
+function makeScratch(width, outputs) {
+    return {
+        a: new Float64Array(width),
+        h: new Float64Array(width),
+        dh: new Float64Array(GRAD_BLOCK_ROWS * width),
+        acc: new Float64Array(width),
+        z: new Float64Array(outputs),
+        dz: new Float64Array(outputs),
+    };
+}
+/** Hidden pre-activations a and activations h of row p. */
+function hiddenRow(act, D, H, params, b1, x, p, a, h) {
+    for (let j = 0; j < H; j++)
+        a[j] = params[b1 + j];
+    const xo = p * D;
+    for (let i = 0; i < D; i++) {
+        const xi = x[xo + i];
+        const wo = i * H;
+        for (let j = 0; j < H; j++)
+            a[j] += xi * params[wo + j];
+    }
+    if (act === ACT_TANH)
+        for (let j = 0; j < H; j++)
+            h[j] = detTanh(a[j]);
+    else if (act === ACT_LOGISTIC)
+        for (let j = 0; j < H; j++)
+            h[j] = detLogistic(a[j]);
+    else
+        for (let j = 0; j < H; j++)
+            h[j] = a[j] > 0 ? a[j] : 0;
+}
+function outputRow(H, K, params, w2, b2, h, z) {
+    for (let k = 0; k < K; k++)
+        z[k] = params[b2 + k];
+    for (let j = 0; j < H; j++) {
+        const hj = h[j];
+        const wo = w2 + j * K;
+        for (let k = 0; k < K; k++)
+            z[k] += hj * params[wo + k];
+    }
+}
+/**
+ * Loss of one row from its logits z; writes dLoss/dz into dz. `t` is the class index
+ * (classification) or the standardised target (regression).
+ */
+function headLossAndDelta(head, K, z, t, dz) {
+    if (head === HEAD_LINEAR) {
+        const d = z[0] - t;
+        dz[0] = d;
+        return 0.5 * d * d;
+    }
+    if (head === HEAD_LOGISTIC) {
+        dz[0] = detLogistic(z[0]) - t;
+        return detSoftplus(z[0]) - t * z[0];
+    }
+    let m = z[0];
+    for (let k = 1; k < K; k++)
+        if (z[k] > m)
+            m = z[k];
+    let s = 0;
+    for (let k = 0; k < K; k++) {
+        const e = detExp(z[k] - m);
+        dz[k] = e;
+        s += e;
+    }
+    const inv = 1 / s;
+    for (let k = 0; k < K; k++)
+        dz[k] *= inv;
+    dz[t] -= 1;
+    return detLog(s) - (z[t] - m);
+}
+/** Head outputs (probabilities or standardised values) from logits. */
+function headOutputs(head, K, z, zo, out, oo) {
+    if (head === HEAD_LINEAR) {
+        for (let k = 0; k < K; k++)
+            out[oo + k] = z[zo + k];
+    }
+    else if (head === HEAD_LOGISTIC) {
+        out[oo] = detLogistic(z[zo]);
+    }
+    else {
+        let m = z[zo];
+        for (let k = 1; k < K; k++)
+            if (z[zo + k] > m)
+                m = z[zo + k];
+        let s = 0;
+        for (let k = 0; k < K; k++) {
+            const e = detExp(z[zo + k] - m);
+            out[oo + k] = e;
+            s += e;
+        }
+        const inv = 1 / s;
+        for (let k = 0; k < K; k++)
+            out[oo + k] *= inv;
+    }
+}
+/**
+ * Sum over rows [start, end) of the per-row loss; the summed gradient goes into `grad`
+ * (overwritten). No allocation.
+ */
+function referenceLossAndGradient(shape, params, x, y, start, end, grad, s) {
+    const D = shape.inputs;
+    const H = shape.width;
+    const K = shape.outputs;
+    const act = activationCode(shape.activation);
+    const head = headCode(shape.head);
+    const lay = layoutOf(shape);
+    const { a, h, dh, acc, z, dz } = s;
+    grad.fill(0);
+    let loss = 0;
+    for (let p = start; p < end; p++) {
+        const q = (p - start) % GRAD_BLOCK_ROWS; // this row's place in its gradient block
+        const qo = q * H;
+        hiddenRow(act, D, H, params, lay.b1, x, p, a, h);
+        outputRow(H, K, params, lay.w2, lay.b2, h, z);
+        loss += headLossAndDelta(head, K, z, y[p], dz);
+        for (let k = 0; k < K; k++)
+            grad[lay.b2 + k] += dz[k];
+        for (let j = 0; j < H; j++) {
+            const hj = h[j];
+            const wo = lay.w2 + j * K;
+            let sum = 0;
+            for (let k = 0; k < K; k++) {
+                grad[wo + k] += hj * dz[k];
+                sum += params[wo + k] * dz[k];
+            }
+            const fp = act === ACT_TANH ? 1 - hj * hj : act === ACT_LOGISTIC ? hj * (1 - hj) : a[j] > 0 ? 1 : 0;
+            dh[qo + j] = sum * fp;
+        }
+        for (let j = 0; j < H; j++)
+            grad[lay.b1 + j] += dh[qo + j];
+        if (q === GRAD_BLOCK_ROWS - 1 || p === end - 1)
+            addInputGradient(D, H, x, p - q, q + 1, dh, acc, grad);
+    }
+    return loss;
+}
+/** Adds the block sums Σ_q x[first+q, i]·dh[q, j] (q = 0..n−1 in order, from +0) to the W1 gradient. */
+function addInputGradient(D, H, x, first, n, dh, acc, grad) {
+    for (let i = 0; i < D; i++) {
+        acc.fill(0);
+        for (let q = 0; q < n; q++) {
+            const xi = x[(first + q) * D + i];
+            const qo = q * H;
+            for (let j = 0; j < H; j++)
+                acc[j] += xi * dh[qo + j];
+        }
+        const go = i * H;
+        for (let j = 0; j < H; j++)
+            grad[go + j] += acc[j];
+    }
+}
+/**
+ * Forward pass over `rows` rows. Writes logits (rows × K) into `logits`; when `hidden`
+ * is given, also the hidden activations (rows × H).
+ */
+function referenceForward(shape, params, x, rows, logits, hidden, s) {
+    const D = shape.inputs;
+    const H = shape.width;
+    const K = shape.outputs;
+    const act = activationCode(shape.activation);
+    const lay = layoutOf(shape);
+    for (let p = 0; p < rows; p++) {
+        hiddenRow(act, D, H, params, lay.b1, x, p, s.a, s.h);
+        outputRow(H, K, params, lay.w2, lay.b2, s.h, s.z);
+        for (let k = 0; k < K; k++)
+            logits[p * K + k] = s.z[k];
+        if (hidden)
+            for (let j = 0; j < H; j++)
+                hidden[p * H + j] = s.h[j];
+    }
+}
+/** Per-row loss from logits (no gradient). */
+function rowLoss(head, K, z, zo, t) {
+    if (head === HEAD_LINEAR) {
+        const d = z[zo] - t;
+        return 0.5 * d * d;
+    }
+    if (head === HEAD_LOGISTIC)
+        return detSoftplus(z[zo]) - t * z[zo];
+    let m = z[zo];
+    for (let k = 1; k < K; k++)
+        if (z[zo + k] > m)
+            m = z[zo + k];
+    let s = 0;
+    for (let k = 0; k < K; k++)
+        s += detExp(z[zo + k] - m);
+    return detLog(s) - (z[zo + t] - m);
+}
+
+;// CONCATENATED MODULE: ./src/nn/kernel/kernel.ts
+
+function referenceKernel() {
+    let scratch = makeScratch(0, 0);
+    let width = -1;
+    let outputs = -1;
+    const sized = (shape) => {
+        if (shape.width !== width || shape.outputs !== outputs) {
+            scratch = makeScratch(shape.width, shape.outputs);
+            width = shape.width;
+            outputs = shape.outputs;
+        }
+        return scratch;
+    };
+    return {
+        name: 'reference-f64',
+        lossAndGradient(shape, params, x, y, start, end, grad) {
+            return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape));
+        },
+        forward(shape, params, x, rows, logits, hidden) {
+            referenceForward(shape, params, x, rows, logits, hidden, sized(shape));
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/nn/kernel/kernel-bytes.ts
+// Generated by scripts/build-kernel.mjs from kernel.as; do not edit.
+// 26165 bytes, sha256 33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e
+const KERNEL_SHA256 = '33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e';
+const KERNEL_BASE64 = 'AGFzbQEAAAABTgpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AYAJ/fAF8YAN/f38Bf2AMf39/f39/f39/f39/AXxgAAF/' +
+    'YAp/f39/f39/f39/AAMPDgMBAAIEAAUCBgcICQABBQMBAAEGWxJ/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38B' +
+    'QQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAsHNgUJd29ya0J5dGVzAAgIbG9zc0dy' +
+    'YWQACQdmb3J3YXJkAAsIaGVhcEJhc2UACgZtZW1vcnkCAAquygEOqQQAIAAkBCABJAUgAiQAIAMkASAEJAIgA0EBakF+cSQDIAZB' +
+    'D2pBcHEiACQGIwMjAEEDdGwiASAAaiIAJAkgACABaiIAJAcjA0EDdCIBIABqIgAkCiAAIAFqIgAkCCMDIwJBA3RsIgEgAGoiACQL' +
+    'IAAgAWoiACQNIwNBBXQiASAAaiIAJA4gACMDQQh0aiIAJA8jAkEFdCICIABqIgAkECAAIAJqIgAkESAAIAFqJAxBACEAA0AgACMA' +
+    'SARAQQAhAQNAIAEjAUgEQCMGIAFBfHEiAiMAbEEEQQIjAyACQQRqThsgAGxqIAEgAmtqQQN0aiAFIAAjAWwgAWpBA3RqKwMAOQMA' +
+    'IAFBAWohAQwBCwsjAyMBSgRAIwYjASIBQXxxIgIjAGxBBEECIwMgAkEEak4bIABsaiABIAJrakEDdGpEAAAAAAAAAAA5AwALIABB' +
+    'AWohAAwBCwsgBSMBIwBBA3RsaiIBIwFBA3RqIQJBACEAA0AgACMBSARAIABBA3QiAyMHaiABIANqKwMAOQMAIABBAWohAAwBCwsj' +
+    'AyMBSgRAIwcjAUEDdGpEAAAAAAAAAAA5AwALQQAhAANAIAAjAkgEQEEAIQEDQCABIwFIBEAjCCAAIwNsIAFqQQN0aiACIAEjAmwg' +
+    'AGpBA3RqKwMAOQMAIAFBAWohAQwBCwsjAyMBSgRAIwgjASAAIwNsakEDdGpEAAAAAAAAAAA5AwALIABBAWohAAwBCwsLuQMCBn8E' +
+    'eyMDQQN0IQMDQCACIwNIBEAgAkEDdCIFIw1q/QAEACEJIw0gA0EBdGogBWr9AAQAIQojDSADQQNsaiAFav0ABAAhCyMRIAJBBXRq' +
+    'IgYgCSMNIANqIAVq/QAEACII/Q0AAQIDBAUGBxAREhMUFRYX/QsEACAGIAogC/0NAAECAwQFBgcQERITFBUWF/0LBBAgBiAJIAj9' +
+    'DQgJCgsMDQ4PGBkaGxwdHh/9CwQgIAYgCiAL/Q0ICQoLDA0ODxgZGhscHR4f/QsEMCACQQJqIQIMAQsLIAAjASMAIwFsakEDdGoi' +
+    'BiMCIwFBA3RsaiEFIwJBA3QhBwNAIAQjAkgEQCAFIARBA3QiAGr9CgMAIgghCSAAIAZqIQMjESECQQAhAANAIAAjAUgEQCAIIAL9' +
+    'AAQAIAP9CgMAIgr98gH98AEhCCAJIAL9AAQQIAr98gH98AEhCSADIAdqIQMgAkEgaiECIABBAWohAAwBCwsgASAEQQN0aiIAIAj9' +
+    'IQA5AwAgACAHaiAI/SEBOQMAIAAgB0EBdGogCf0hADkDACAAIAdBA2xqIAn9IQE5AwAgBEEBaiEEDAELCwuRAQIFfwF8Iw0hAiMP' +
+    'IQMgACMBIwAjAWxqQQN0aiIEIwIjAUEDdGxqIQUDQCABIwJIBEAgBSABQQN0aisDACEGQQAhAANAIAAjAUgEQCAGIAIgAEEDdGor' +
+    'AwAgBCAAIwJsIAFqQQN0aisDAKKgIQYgAEEBaiEADAELCyADIAFBA3RqIAY5AwAgAUEBaiEBDAELCwufAwICfgJ8IAAgAGIgAEQA' +
+    'AAAAAAAAAGNyBEBEAAAAAAAA+H8PCyAARAAAAAAAAAAAYQRARAAAAAAAAPD/DwsgAEQAAAAAAADwf2EEQEQAAAAAAADwfw8LIABE' +
+    'AAAAAAAAEABjBHxCSiEBIABEAAAAAAAAUEOiBSAAC70iAkI0iEL/D4NC/wd9IAF8IQEgAkL/////////B4NCgICAgICAgPg/hL8i' +
+    'AETNO39mnqD2P2QEfCABQgF8IQEgAEQAAAAAAADgP6IFIAALRAAAAAAAAPC/oCIAIABEAAAAAAAAAECgoyIDIAOiIQAgAbkiBEQA' +
+    'AOD+Qi7mP6IgAyADoCIDIAMgACAAIAAgACAAIAAgACAAIAAgACAARGQhC1nIQqY/okQYhmEYhmGoP6CiRCivobyG8qo/oKJEHh4e' +
+    'Hh4erj+gokQRERERERGxP6CiRBQ7sRM7sbM/oKJERhdddNFFtz+gokQcx3Ecx3G8P6CiRJIkSZIkScI/oKJEmpmZmZmZyT+gokRV' +
+    'VVVVVVXVP6CioqAgBER2PHk17znqPaKgoAuCiQECDXsGfyMDQQN0IRYDQCMDIBNBBGpOBEAgE0EDdCISIwdq/QAEACIGIQ8gBiIH' +
+    'IRAjByASav0ABBAiBCEOIAQiBSENIwYgEiMAbGohFUEAIRQDQCAUIwBIBEAgBiAUQQN0IhEgAGr9CgMAIgggFf0ABAAiCv3yAf3w' +
+    'ASEGIA4gCCAV/QAEECIJ/fIB/fABIQ4gDyABIBFq/QoDACIIIAr98gH98AEhDyAFIAggCf3yAf3wASEFIAcgAiARav0KAwAiCCAK' +
+    '/fIB/fABIQcgDSAIIAn98gH98AEhDSAQIAMgEWr9CgMAIgggCv3yAf3wASEQIAQgCCAJ/fIB/fABIQQgFUEgaiEVIBRBAWohFAwB' +
+    'CwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAb98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEi' +
+    'CP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwA' +
+    'AOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAA' +
+    'AAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9' +
+    'DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH9' +
+    '8AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4a' +
+    'oAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB' +
+    '/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB' +
+    '/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3z' +
+    'ASAM/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAG/QwAAAAAAAAAAAAAAAAAAAAAIAb9' +
+    'DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitlRxX3' +
+    'P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIM/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY//fIB' +
+    '/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCyAL/fIBIgogCv3yASEJIAz9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASII' +
+    'IAv9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gC/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9V' +
+    'VVVVVVWlPyAL/fIB/fABIAr98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gC/3yAf3wAf0MGqABGqAB' +
+    'Kj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAL/fIB/fABIAr98gH98AEgCf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94' +
+    't09+kj5cn3i3T36SPiAL/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAv98gH98AEgCv3yAf3wAf0M' +
+    'CW2oE0YS5j0JbagTRhLmPSAJ/fIB/fABIAkgCf3yAf3yAf3wAf3yAf3yASAI/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgggCP0M' +
+    'AAAAAAAAAEAAAAAAAAAAQP3wAf3zASAG/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAS' +
+    'aiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA798gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIr' +
+    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7m' +
+    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA/' +
+    '/QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAA' +
+    'AOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBER' +
+    'EREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6' +
+    'PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVn' +
+    'ReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAgg' +
+    'CP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwA' +
+    'AAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAO/QwAAAAAAAAAAAAAAAAAAAAAIA79DAAAAAAA' +
+    'AAAAAAAAAAAAAAD9Sv1SCwUgDv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0M' +
+    'AAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9' +
+    'DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAA' +
+    'AAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWl' +
+    'PyAK/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEa' +
+    'oAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5c' +
+    'n3i3T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS' +
+    '5j0JbagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAA' +
+    'AEAAAAAAAAAAQP3wAf3zASAO/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWaiASaiME' +
+    'BHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA/98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA//QwA' +
+    'AAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/' +
+    'AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBERERER' +
+    'EYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK' +
+    '/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVnReZa' +
+    'PuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAggCP3y' +
+    'Af3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwAAAAA' +
+    'AAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAP/QwAAAAAAAAAAAAAAAAAAAAAIA/9DAAAAAAAAAAA' +
+    'AAAAAAAAAAD9Sv1SCwUgD/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAA' +
+    'AAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8' +
+    'eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAA' +
+    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK' +
+    '/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
+    'P/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
+    'T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0J' +
+    'bagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
+    'AAAAAAAAQP3wAf3zASAP/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB' +
+    '/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAL/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAAAAAAAAAAIAX9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB' +
+    '/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQF0aiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAf98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAH/QwAAAAAAAAAAAAAAAAAAAAAIAf9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgB/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEGIAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB' +
+    '/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAH/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQF0aiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAAAAAAAAAAIA39DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQNsaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
+    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
+    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAAAAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQNsaiASaiMEBHsj' +
+    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIEIAT98AEiBf0M/oIrZUcV9z/+' +
+    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEBIQQgBSAE/QwAAOD+Qi7mPwAA4P5C' +
+    'LuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
+    'AADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
+    'AAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB/fABIAb98gH98AH9DBEREREREYE/' +
+    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAH/fIB' +
+    '/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAH/fIB/fAB/QzkRPVnReZaPuRE' +
+    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAF/fIB/fABIAUgBf3yAf3y' +
+    'Af3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAJ/QwAAAAAAAAA' +
+    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAAAAAAAAAAIAT9DAAAAAAAAAAAAAAA' +
+    'AAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
+    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
+    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAgE0EEaiETDAELCwNAIBMj' +
+    'A0gEQCATQQN0IhIjB2r9AAQAIgQhECAEIgUhDSMGIBIjAGxqIRRBACEVA0AgFSMASARAIBAgFUEDdCIRIABq/QoDACAU/QAEACIG' +
+    '/fIB/fABIRAgBSABIBFq/QoDACAG/fIB/fABIQUgDSACIBFq/QoDACAG/fIB/fABIQ0gBCADIBFq/QoDACAG/fIB/fABIQQgFEEQ' +
+    'aiEUIBVBAWohFQwBCwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2' +
+    'QP32ASIGIAb98AEiB/0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD' +
+    '/fEBIQYgByAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEH' +
+    '/QwAAAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAn9DAAAAAAA' +
+    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ' +
+    '/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
+    'P/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
+    'T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0J' +
+    'bagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
+    'AAAAAAAAQP3wAf3zASAL/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAA' +
+    'AAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIr' +
+    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7m' +
+    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAA' +
+    'AAD9zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXF' +
+    'P/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3y' +
+    'Af3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40' +
+    'x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH9' +
+    '8AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA/' +
+    '/fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9' +
+    'Tv1RC/0LBAAjDSAWaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIAX9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEg' +
+    'CP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAjDSAWQQF0aiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
+    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIA39DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
+    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAjDSAWQQNsaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
+    'ASIEIAT98AEiBf0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
+    'IQQgBSAE/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwA' +
+    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/' +
+    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB' +
+    '/fABIAb98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
+    'GqABGqAB+j4aoAEaoAH6PiAH/fIB/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
+    'PiAH/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagT' +
+    'RhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAA' +
+    'AAAAQP3wAf3zASAJ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIAT9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
+    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
+    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
+    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
+    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
+    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
+    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
+    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
+    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
+    'C/0LBAAgE0ECaiETDAELCwubDAIFewZ/Iw0hCQNAIAcjA0gEQCAHQQN0IgojB2r9AAQAIQEjBiAHIAdBfHEiBmsgBiMAbGpBA3Rq' +
+    'IQhBIEEQIwMgBkEEak4bIQtBACEGA0AgBiMASARAIAEgACAGQQN0av0KAwAgCP0ABAD98gH98AEhASAIIAtqIQggBkEBaiEGDAEL' +
+    'CyAJIApqIwQEeyMEQQFGBHv9DAAAAAAAAOA/AAAAAAAA4D8gAf3yASIB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC' +
+    '/Qz+gitlRxX3P/6CK2VHFfc//fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA' +
+    '4P5CLuY/AADg/kIu5j/98gH98QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQX9DAAAAAAAAOA/AAAA' +
+    'AAAA4D/9DAAAAAAAAOA/AAAAAAAA4D8gA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMgAv0MAAAAAAAA8D8AAAAAAADwP/0M' +
+    'AAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VVVVVVVaU/IAL98gH98AEgBP3yAf3w' +
+    'Af0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEqPxqgARqgASo//QwaoAEaoAH6Phqg' +
+    'ARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3T36SPlyfeLdPfpI+IAL98gH98AH9' +
+    'DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJbagTRhLmPQltqBNGEuY9IAX98gH9' +
+    '8AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMB' +
+    'IAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH98gH98AEFIAH9DAAAAAAAAAAAAAAAAAAAAAAgAf0M' +
+    'AAAAAAAAAAAAAAAAAAAAAP1K/VILBSAB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC/Qz+gitlRxX3P/6CK2VHFfc/' +
+    '/fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA4P5CLuY/AADg/kIu5j/98gH9' +
+    '8QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQUgA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMg' +
+    'Av0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VV' +
+    'VVVVVaU/IAL98gH98AEgBP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEq' +
+    'PxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3' +
+    'T36SPlyfeLdPfpI+IAL98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJ' +
+    'bagTRhLmPQltqBNGEuY9IAX98gH98AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwA' +
+    'AAAAAAAAQAAAAAAAAABA/fAB/fMBIAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VEL/QsEACAHQQJq' +
+    'IQcMAQsLC78IAwN8A38GeyMCIABBA3RsIgAjD2ohByMQIABqIQYjBUUEQCAGIAcrAwAgAaEiATkDACABRAAAAAAAAOA/oiABog8L' +
+    'IwVBAUYEQCAHKwMAIgNEAAAAAAAA4D+i/RQiDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitl' +
+    'RxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY/' +
+    '/fIB/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgwgDP3yASEJIAYgC/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0' +
+    '/csBIgggCv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAK/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVV' +
+    'VVWlP1VVVVVVVaU/IAr98gH98AEgDP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAK/fIB/fAB/Qwa' +
+    'oAEaoAEqPxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAr98gH98AEgDP3yAf3wASAJ/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+' +
+    '/Qxcn3i3T36SPlyfeLdPfpI+IAr98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gCv3yAf3wASAM/fIB' +
+    '/fAB/QwJbagTRhLmPQltqBNGEuY9IAn98gH98AEgCSAJ/fIB/fIB/fAB/fIB/fIBIAj9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEi' +
+    'CCAI/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMBIA39DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH9IQBE' +
+    'AAAAAAAA4D+iRAAAAAAAAOA/oCABoTkDACADRAAAAAAAAAAAIANEAAAAAAAAAABkIgAbIAOaIAMgABsQByICRAAAAAAAAPA/oCIE' +
+    'RAAAAAAAAPA/YgR8IAQQAyACIAREAAAAAAAA8L+goSAEo6AFIAILoCABIAOioQ8LIAcrAwAhA0EBIQADQCAAIwJIBEAgByAAQQN0' +
+    'aisDACICIANkBEAgAiEDCyAAQQFqIQAMAQsLQQAhAANAIAAjAkgEQCAAQQN0IgUgB2orAwAgA6EQByECIAUgBmogAjkDACAEIAKg' +
+    'IQQgAEEBaiEADAELC0QAAAAAAADwPyAEoyECQQAhAANAIAAjAkgEQCAGIABBA3RqIgUgBSsDACACojkDACAAQQFqIQAMAQsLIAYg' +
+    'AfwCQQN0IgVqIgAgACsDAEQAAAAAAADwv6A5AwAgBBADIAUgB2orAwAgA6GhC/kCAgF+AXwgACAAYgRAIAAPCyAARO85+v5CLoZA' +
+    'ZARARAAAAAAAAPB/DwsgAERSMC3VEEmHwGMEQEQAAAAAAAAAAA8LIAAgAET+gitlRxX3P6JEAAAAAAAA4D+gnCIARAAA4P5CLuY/' +
+    'oqEgAER2PHk17znqPaKhIgIgAiACIAIgAiACIAIgAiACIAIgAiACIAJECW2oE0YS5j2iRJjY+O/Y7iE+oKJE5ET1Z0XmWj6gokRc' +
+    'n3i3T36SPqCiRDTHVqXjHcc+oKJEGqABGqAB+j6gokQaoAEaoAEqP6CiRBdswRZswVY/oKJEERERERERgT+gokRVVVVVVVWlP6Ci' +
+    'RFVVVVVVVcU/oKJEAAAAAAAA4D+gokQAAAAAAADwP6CiRAAAAAAAAPA/oCECIAD8BiIBQv8HVQRAIAJEAAAAAAAA4H+iIAFCNIa/' +
+    'og8LIAFCgnhTBEAgAiABQucPfEI0hr+iRAAAAAAAAHABog8LIAIgAUL/B3xCNIa/ogs2ACABQQFqQX5xIgEgAEEBdGwgAUEBdGog' +
+    'AkEBdCABbGogAmogAUEobGogAkEDdGpBA3RBQGsL7gcDA3sHfwF8IAAgASACIAMgBCAFIAsQACMJQQAjAEEDdCIDIwNs/AsAIwpB' +
+    'ACMDQQN0IhP8CwAjC0EAIwJBA3QiACMDbPwLACMMQQAgAPwLAANAIAggCUgEQEEgIAkgCGsiACAAQSBOGyEBIAYgAyAIbGohEkEA' +
+    'IQADQCAAQQRqIAFMBEAgEiAAIANsaiICIAIgA2ogAiADQQF0aiACIANBA2xqEAQgBSMPEAFBACECA0AgAkEESARAIBYgAiAHIAAg' +
+    'CGogAmpBA3RqKwMAEAagIRYgAkEBaiECDAELCyMOIAAgE2xqEAwgAEEEaiEADAELCwNAIAAgAUgEQCASIAAgA2xqEAUgBRACIBZB' +
+    'ACAHIAAgCGpBA3RqKwMAEAagIRYjDiAAIBNsaiEQIwNBA3QhDyMNIQQjECERQQAhCwNAIAsjA0gEQP0MAAAAAAAAAAAAAAAAAAAA' +
+    'ACEMIAQgC0EDdCIUav0ABAAhDUEAIQIDQCACIwJIBEAgDCACIA9sIBRqIhUjCGr9AAQAIBEgAkEDdGr9CgMAIg798gH98AEhDCML' +
+    'IBVqIhUgFf0ABAAgDSAO/fIB/fAB/QsEACACQQFqIQIMAQsLIBAgFGogDAJ7/QwAAAAAAADwPwAAAAAAAPA/IA0gDf3yAf3xASME' +
+    'RQ0AGiAN/QwAAAAAAADwPwAAAAAAAPA/IA398QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAA' +
+    'ACAN/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiDP0LBAAjCiAUaiICIAL9AAQAIAz98AH9CwQAIAtBAmohCwwBCwtBACECA0Ag' +
+    'AiMCSARAIAJBA3QiBCMMaiILIAsrAwAgBCARaisDAKA5AwAgAkEBaiECDAELCyAAQQFqIQAMAQsLIBIgARANIAEgCGohCAwBCwtB' +
+    'ACEBA0AgASMASARAQQAhAANAIAAjAUgEQCAKIAEjAWwgAGpBA3RqIwkgAEF8cSICIwBsQQRBAiMDIAJBBGpOGyABbGogACACa2pB' +
+    'A3RqKwMAOQMAIABBAWohAAwBCwsgAUEBaiEBDAELCyAKIwEjAEEDdGxqIgEjAUEDdCIAaiICIwIgAGxqIQNBACEAA0AgACMBSARA' +
+    'IABBA3QiBCABaiMKIARqKwMAOQMAIABBAWohAAwBCwtBACEAA0AgACMCSARAQQAhAQNAIAEjAUgEQCACIAEjAmwgAGpBA3RqIwsg' +
+    'ACMDbCABakEDdGorAwA5AwAgAUEBaiEBDAELCyADIABBA3QiAWojDCABaisDADkDACAAQQFqIQAMAQsLIBYLBQBBgAgLlQIBAX8g' +
+    'AEEAIAEgAiADIAQgCRAAIwBBA3QhCUEAIQADQCAAIAZIBEAgBSAAIAlsaiEBQQRBASAGIABrQQROGyIDQQRGBEAgASABIAlqIAEg' +
+    'CUEBdGogASAJQQNsahAEIAQgByMCIABBA3RsahABBSABEAUgBBACQQAhAQNAIAEjAkgEQCAHIAAjAmwgAWpBA3RqIw8gAUEDdGor' +
+    'AwA5AwAgAUEBaiEBDAELCwtBACEBA0AgASADSARAIAgEQCAAIAFqIQpBACECA0AgAiMBSARAIAggCiMBbCACakEDdGojDSABIwNs' +
+    'IAJqQQN0aisDADkDACACQQFqIQIMAQsLCyABQQFqIQEMAQsLIAAgA2ohAAwBCwsL4QgCDHsHfyMDQQN0IRAjAkEDdCENA0AgDyMD' +
+    'SARA/QwAAAAAAAAAAAAAAAAAAAAAIQH9DAAAAAAAAAAAAAAAAAAAAAAhAv0MAAAAAAAAAAAAAAAAAAAAACED/QwAAAAAAAAAAAAA' +
+    'AAAAAAAAIQQgD0EDdCIRIw1q/QAEACEIIw0gEGogEWr9AAQAIQkjDSAQQQF0aiARav0ABAAhCiMNIBBBA2xqIBFq/QAEACELQQAh' +
+    'DgNAIA4jAkgEQCABIA4gEGwgEWoiEyMIav0ABAAiDCMQIA5BA3RqIhL9CgMAIgX98gH98AEhASACIAwgDSASav0KAwAiBv3yAf3w' +
+    'ASECIAMgDCASIA1BAXRq/QoDACIH/fIB/fABIQMgBCAMIBIgDUEDbGr9CgMAIgz98gH98AEhBCMLIBNqIhIgEv0ABAAgCCAF/fIB' +
+    '/fABIAkgBv3yAf3wASAKIAf98gH98AEgCyAM/fIB/fAB/QsEACAOQQFqIQ4MAQsLIAAgEWogAQJ7/QwAAAAAAADwPwAAAAAAAPA/' +
+    'IAggCP3yAf3xASMERQ0AGiAI/QwAAAAAAADwPwAAAAAAAPA/IAj98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAA' +
+    'AAAAAAAAAAAAAAAAACAI/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiAf0LBAAgACAQaiARaiACAnv9DAAAAAAAAPA/AAAAAAAA' +
+    '8D8gCSAJ/fIB/fEBIwRFDQAaIAn9DAAAAAAAAPA/AAAAAAAA8D8gCf3xAf3yASMEQQFGDQAa/QwAAAAAAADwPwAAAAAAAPA//QwA' +
+    'AAAAAAAAAAAAAAAAAAAAIAn9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SC/3yASIC/QsEACAAIBBBAXRqIBFqIAMCe/0MAAAAAAAA8D8A' +
+    'AAAAAADwPyAKIAr98gH98QEjBEUNABogCv0MAAAAAAAA8D8AAAAAAADwPyAK/fEB/fIBIwRBAUYNABr9DAAAAAAAAPA/AAAAAAAA' +
+    '8D/9DAAAAAAAAAAAAAAAAAAAAAAgCv0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIgP9CwQAIAAgEEEDbGogEWogBAJ7/QwAAAAA' +
+    'AADwPwAAAAAAAPA/IAsgC/3yAf3xASMERQ0AGiAL/QwAAAAAAADwPwAAAAAAAPA/IAv98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8A' +
+    'AAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAL/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiBP0LBAAjCiARaiIOIA79AAQAIAH9' +
+    '8AEgAv3wASAD/fABIAT98AH9CwQAIA9BAmohDwwBCwtBACEAA0AgACMCSARAIABBA3QiDiMMaiIPIA8rAwAjECAOaiIOKwMAoCAN' +
+    'IA5qKwMAoCAOIA1BAXRqKwMAoCAOIA1BA2xqKwMAoDkDACAAQQFqIQAMAQsLC4wKAgh/C3sjA0EDdCEHIwBBA3QhCANAIwMgBkEE' +
+    'ak4EQCAGQQN0IQlBACEDA0AjACADQQRqTgRA/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAA' +
+    'AAAAAAAAAAAAACEN/QwAAAAAAAAAAAAAAAAAAAAAIQv9DAAAAAAAAAAAAAAAAAAAAAAhDv0MAAAAAAAAAAAAAAAAAAAAACEP/QwA' +
+    'AAAAAAAAAAAAAAAAAAAAIRD9DAAAAAAAAAAAAAAAAAAAAAAhESAAIANBA3RqIQIjDiAJaiEEQQAhBQNAIAEgBUoEQCAKIAL9CgMA' +
+    'IhMgBP0ABAAiEv3yAf3wASEKIAwgEyAE/QAEECIT/fIB/fABIQwgDSAC/QoDCCIUIBL98gH98AEhDSALIBQgE/3yAf3wASELIA4g' +
+    'Av0KAxAiFCAS/fIB/fABIQ4gDyAUIBP98gH98AEhDyAQIAL9CgMYIhQgEv3yAf3wASEQIBEgFCAT/fIB/fABIREgAiAIaiECIAQg' +
+    'B2ohBCAFQQFqIQUMAQsLIwkgCSMAbGogA0EFdGoiAiAC/QAEACAK/fAB/QsEACACIAL9AAQQIAz98AH9CwQQIAIgAv0ABCAgDf3w' +
+    'Af0LBCAgAiAC/QAEMCAL/fAB/QsEMCACIAL9AARAIA798AH9CwRAIAIgAv0ABFAgD/3wAf0LBFAgAiAC/QAEYCAQ/fAB/QsEYCAC' +
+    'IAL9AARwIBH98AH9CwRwIANBBGohAwwBCwsDQCADIwBIBED9DAAAAAAAAAAAAAAAAAAAAAAhCv0MAAAAAAAAAAAAAAAAAAAAACEL' +
+    'IAAgA0EDdGohBCMOIAlqIQJBACEFA0AgASAFSgRAIAogBP0KAwAiDCAC/QAEAP3yAf3wASEKIAsgDCAC/QAEEP3yAf3wASELIAQg' +
+    'CGohBCACIAdqIQIgBUEBaiEFDAELCyMJIAkjAGxqIANBBXRqIgIgAv0ABAAgCv3wAf0LBAAgAiAC/QAEECAL/fAB/QsEECADQQFq' +
+    'IQMMAQsLIAZBBGohBgwBCwsDQCAGIwNIBEAgBkEDdCEJQQAhAgNAIwAgAkEEak4EQP0MAAAAAAAAAAAAAAAAAAAAACEL/QwAAAAA' +
+    'AAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACENIAAgAkEDdGohAyMOIAlqIQRBACEF' +
+    'A0AgASAFSgRAIAsgA/0KAwAgBP0ABAAiDv3yAf3wASELIAogA/0KAwggDv3yAf3wASEKIAwgA/0KAxAgDv3yAf3wASEMIA0gA/0K' +
+    'AxggDv3yAf3wASENIAMgCGohAyAEIAdqIQQgBUEBaiEFDAELCyMJIAkjAGxqIAJBBHRqIgMgA/0ABAAgC/3wAf0LBAAgAyAD/QAE' +
+    'ECAK/fAB/QsEECADIAP9AAQgIAz98AH9CwQgIAMgA/0ABDAgDf3wAf0LBDAgAkEEaiECDAELCwNAIAIjAEgEQP0MAAAAAAAAAAAA' +
+    'AAAAAAAAACEKIAAgAkEDdGohAyMOIAlqIQRBACEFA0AgASAFSgRAIAogA/0KAwAgBP0ABAD98gH98AEhCiADIAhqIQMgBCAHaiEE' +
+    'IAVBAWohBQwBCwsjCSAJIwBsaiACQQR0aiIDIAP9AAQAIAr98AH9CwQAIAJBAWohAgwBCwsgBkECaiEGDAELCws=';
+
+;// CONCATENATED MODULE: ./src/nn/kernel/wasm.ts
+
+
+
+const wasmApi = globalThis.WebAssembly;
+/** Data arrays stay resident in wasm memory until this many bytes are cached; then the cache starts over. */
+const CACHE_LIMIT_BYTES = 1 << 30;
+const CACHE_LIMIT_ENTRIES = 32;
+const PAGE = 65536;
+class Runtime {
+    ex;
+    f64;
+    base;
+    top;
+    cache = new Map();
+    /** Changes whenever cached data or the memory itself changed, so kernels know to re-resolve their offsets. */
+    version = 0;
+    constructor(ex) {
+        this.ex = ex;
+        this.base = align(ex.heapBase());
+        this.top = this.base;
+        this.f64 = new Float64Array(ex.memory.buffer);
+    }
+    /** A Float64Array over the whole memory, renewed after the memory grew. */
+    view() {
+        if (this.f64.buffer !== this.ex.memory.buffer)
+            this.f64 = new Float64Array(this.ex.memory.buffer);
+        return this.f64;
+    }
+    ensure(bytes) {
+        const have = this.ex.memory.buffer.byteLength;
+        if (bytes > have) {
+            this.ex.memory.grow(Math.ceil((bytes - have) / PAGE));
+            this.version++;
+        }
+    }
+    /** Byte offset of one data array inside wasm memory (copied in on first use). */
+    residentOne(a) {
+        const at = this.cache.get(a);
+        return at !== undefined ? at : this.resident(a, null)[0];
+    }
+    /**
+     * Byte offsets of the given data arrays inside wasm memory (copied in on first use). Data
+     * arrays are treated as immutable once a trainer has used them, as EncodedDataset promises.
+     */
+    resident(a, b) {
+        let pa = this.cache.get(a);
+        let pb = b === null ? 0 : this.cache.get(b);
+        if (pa !== undefined && pb !== undefined)
+            return [pa, pb];
+        const need = (pa === undefined ? a.byteLength + 16 : 0) + (b !== null && pb === undefined ? b.byteLength + 16 : 0);
+        if (this.top + need - this.base > CACHE_LIMIT_BYTES || this.cache.size + 2 > CACHE_LIMIT_ENTRIES) {
+            this.cache.clear();
+            this.top = this.base;
+            this.version++;
+            pa = undefined;
+            pb = b === null ? 0 : undefined;
+        }
+        if (pa === undefined)
+            pa = this.copyIn(a);
+        if (pb === undefined && b !== null)
+            pb = this.copyIn(b);
+        return [pa, pb ?? 0];
+    }
+    copyIn(a) {
+        const at = this.top;
+        this.ensure(at + a.byteLength);
+        this.view().set(a, at / 8);
+        this.top = align(at + a.byteLength);
+        this.cache.set(a, at);
+        this.version++;
+        return at;
+    }
+    /** Byte offset of a scratch area of `bytes` bytes above the cached data (valid until the next call). */
+    scratch(bytes) {
+        this.ensure(this.top + bytes + 64);
+        return this.top;
+    }
+}
+function align(n) {
+    return (n + 63) & ~63;
+}
+let runtime;
+function decode(b64) {
+    return Uint8Array.from(Buffer.from(b64, 'base64'));
+}
+/** The per-thread kernel module, or null where this engine has no WebAssembly SIMD. */
+function getRuntime() {
+    if (runtime !== undefined)
+        return runtime;
+    const bytes = decode(KERNEL_BASE64);
+    // The bytes are what the reproducibility check vouched for, or the build is broken: never run others.
+    const sha = (0,external_node_crypto_namespaceObject.createHash)('sha256').update(bytes).digest('hex');
+    if (sha !== KERNEL_SHA256)
+        throw new Error(`kernel bytes have sha256 ${sha}, expected ${KERNEL_SHA256}`);
+    try {
+        if (wasmApi === undefined || !wasmApi.validate(bytes)) {
+            runtime = null;
+        }
+        else {
+            const instance = new wasmApi.Instance(new wasmApi.Module(bytes), { env: { abort: () => undefined } });
+            runtime = new Runtime(instance.exports);
+        }
+    }
+    catch {
+        runtime = null;
+    }
+    return runtime;
+}
+function wasmAvailable() {
+    return getRuntime() !== null;
+}
+/**
+ * Where one gradient call's operands live in wasm memory. Kept while nothing moved (same shape,
+ * same data, same memory), so the epoch loop allocates nothing and resolves nothing.
+ */
+class GradientPlan {
+    version = -1;
+    shape = null;
+    x = null;
+    y = null;
+    xAt = 0;
+    yAt = 0;
+    paramsAt = 0;
+    gradAt = 0;
+    workAt = 0;
+    activation = 0;
+    head = 0;
+    memory;
+    grad;
+    constructor(memory) {
+        this.memory = memory;
+        this.grad = memory.subarray(0, 0);
+    }
+    current(rt, shape, x, y) {
+        return this.version === rt.version && shape === this.shape && x === this.x && y === this.y;
+    }
+    plan(rt, shape, x, y, size) {
+        [this.xAt, this.yAt] = rt.resident(x, y);
+        this.paramsAt = rt.scratch(16 * size + 128 + rt.ex.workBytes(shape.inputs, shape.width, shape.outputs));
+        this.gradAt = align(this.paramsAt + 8 * size);
+        this.workAt = align(this.gradAt + 8 * size);
+        this.memory = rt.view();
+        this.grad = this.memory.subarray(this.gradAt / 8, this.gradAt / 8 + size);
+        this.activation = activationCode(shape.activation);
+        this.head = headCode(shape.head);
+        this.version = rt.version;
+        this.shape = shape;
+        this.x = x;
+        this.y = y;
+    }
+}
+/** The same for one forward call: inputs, logits and (optionally) hidden activations. */
+class ForwardPlan {
+    version = -1;
+    shape = null;
+    x = null;
+    rows = -1;
+    hiddenBytes = -1;
+    xAt = 0;
+    paramsAt = 0;
+    logitsAt = 0;
+    hiddenAt = 0;
+    workAt = 0;
+    memory;
+    logits;
+    hidden;
+    constructor(memory) {
+        this.memory = memory;
+        this.logits = memory.subarray(0, 0);
+        this.hidden = memory.subarray(0, 0);
+    }
+    current(rt, shape, x, rows, hiddenBytes) {
+        return (this.version === rt.version &&
+            shape === this.shape &&
+            x === this.x &&
+            rows === this.rows &&
+            hiddenBytes === this.hiddenBytes);
+    }
+    plan(rt, shape, x, rows, hiddenBytes, size) {
+        const { inputs: D, width: H, outputs: K } = shape;
+        this.xAt = rt.residentOne(x);
+        const logitBytes = 8 * rows * K;
+        this.paramsAt = rt.scratch(8 * size + logitBytes + hiddenBytes + 256 + rt.ex.workBytes(D, H, K));
+        this.logitsAt = align(this.paramsAt + 8 * size);
+        this.hiddenAt = align(this.logitsAt + logitBytes);
+        this.workAt = align(this.hiddenAt + hiddenBytes);
+        this.memory = rt.view();
+        this.logits = this.memory.subarray(this.logitsAt / 8, this.logitsAt / 8 + rows * K);
+        this.hidden = this.memory.subarray(this.hiddenAt / 8, this.hiddenAt / 8 + rows * H);
+        this.version = rt.version;
+        this.shape = shape;
+        this.x = x;
+        this.rows = rows;
+        this.hiddenBytes = hiddenBytes;
+    }
+}
+/** A kernel backed by the shared WebAssembly module; throws when WebAssembly SIMD is unavailable. */
+function wasmKernel() {
+    const rt = getRuntime();
+    if (rt === null)
+        throw new Error('WebAssembly SIMD is not available in this JavaScript engine');
+    const ex = rt.ex;
+    // Gradient and forward calls share the scratch area above the cached data; each call rewrites
+    // everything it reads there, so they may overlap.
+    const g = new GradientPlan(rt.view());
+    const f = new ForwardPlan(rt.view());
+    return {
+        name: 'wasm-simd-f64',
+        lossAndGradient(shape, params, x, y, start, end, grad) {
+            const P = params.length;
+            if (!g.current(rt, shape, x, y))
+                g.plan(rt, shape, x, y, P);
+            const mem = g.memory;
+            const po = g.paramsAt / 8;
+            if (P <= 64)
+                for (let q = 0; q < P; q++)
+                    mem[po + q] = params[q];
+            else
+                mem.set(params, po);
+            const { inputs, width, outputs } = shape;
+            const loss = ex.lossGrad(g.activation, g.head, inputs, width, outputs, g.paramsAt, g.xAt, g.yAt, start, end, g.gradAt, g.workAt);
+            const view = g.grad;
+            if (P <= 64)
+                for (let q = 0; q < P; q++)
+                    grad[q] = view[q];
+            else
+                grad.set(view);
+            return loss;
+        },
+        forward(shape, params, x, rows, logits, hidden) {
+            const hiddenBytes = hidden ? 8 * rows * shape.width : 0;
+            if (!f.current(rt, shape, x, rows, hiddenBytes))
+                f.plan(rt, shape, x, rows, hiddenBytes, params.length);
+            f.memory.set(params, f.paramsAt / 8);
+            const { inputs, width, outputs } = shape;
+            ex.forward(activationCode(shape.activation), inputs, width, outputs, f.paramsAt, f.xAt, rows, f.logitsAt, hidden ? f.hiddenAt : 0, f.workAt);
+            logits.set(f.logits);
+            if (hidden)
+                hidden.set(f.hidden);
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/nn/kernel/select.ts
+/** Picks the compute kernel a new trainer runs: the WebAssembly SIMD kernel, else the float64 reference (same bits). */
+
+
+function defaultKernel() {
+    return wasmAvailable() ? wasmKernel() : referenceKernel();
+}
+
+;// CONCATENATED MODULE: ./src/nn/metrics.ts
+
+function computeMetrics(head, K, logits, y, rows, targetStd) {
+    let loss = 0;
+    for (let p = 0; p < rows; p++)
+        loss += rowLoss(head, K, logits, p * K, y[p]);
+    loss /= rows;
+    const metric = (name) => targetMetric(name, head, K, logits, y, rows, targetStd);
+    if (head === HEAD_LINEAR) {
+        return { loss, accuracy: NaN, rmse: metric('rmse'), mae: metric('mae'), maxAbsError: metric('max-abs-error') };
+    }
+    // A network whose loss is not finite has no accuracy.
+    return { loss, accuracy: Number.isFinite(loss) ? metric('accuracy') : NaN, rmse: NaN, mae: NaN, maxAbsError: NaN };
+}
+/** One metric without building the whole record (used inside the epoch loop). */
+function targetMetric(name, head, K, logits, y, rows, targetStd) {
+    if (name === 'accuracy') {
+        if (head === HEAD_LINEAR)
+            return NaN;
+        let correct = 0;
+        for (let p = 0; p < rows; p++) {
+            let cls = 0;
+            if (head === HEAD_LOGISTIC) {
+                const z = logits[p];
+                if (z !== z)
+                    return NaN;
+                cls = z > 0 ? 1 : 0;
+            }
+            else {
+                const o = p * K;
+                for (let k = 0; k < K; k++)
+                    if (logits[o + k] !== logits[o + k])
+                        return NaN;
+                for (let k = 1; k < K; k++)
+                    if (logits[o + k] > logits[o + cls])
+                        cls = k;
+            }
+            if (cls === y[p])
+                correct++;
+        }
+        return correct / rows;
+    }
+    if (head !== HEAD_LINEAR)
+        return NaN;
+    let se = 0;
+    let ae = 0;
+    let maxAe = 0;
+    for (let p = 0; p < rows; p++) {
+        const d = (logits[p] - y[p]) * targetStd;
+        const a = d < 0 ? -d : d;
+        se += d * d;
+        ae += a;
+        if (a > maxAe || a !== a)
+            maxAe = a;
+    }
+    return name === 'rmse' ? Math.sqrt(se / rows) : name === 'mae' ? ae / rows : maxAe;
+}
+function metricValue(m, name) {
+    switch (name) {
+        case 'accuracy':
+            return m.accuracy;
+        case 'rmse':
+            return m.rmse;
+        case 'mae':
+            return m.mae;
+        case 'max-abs-error':
+            return m.maxAbsError;
     }
 }
 
-;// CONCATENATED MODULE: ./src/data/profile.ts
-function profileData(features, target, stores, rows) {
-    const missing = new Map(stores.map((s) => [s.column, s.missing]));
-    const profiles = {};
-    for (const column of features) {
-        const lost = missing.get(column.column) ?? 0;
-        profiles[column.name] =
-            column.kind === 'numeric'
-                ? numericProfile(column.values, lost)
-                : categoricalProfile(column.categories, column.codes, lost);
+;// CONCATENATED MODULE: ./src/nn/network.ts
+
+
+/** The activation's usual initialisation. */
+function defaultInit(activation) {
+    return activation === 'relu' ? 'he' : 'nguyen-widrow';
+}
+/** Nguyen-Widrow scale β = 0.7 · H^(1/n) (Nguyen & Widrow 1990). @testOnly */
+function nguyenWidrowBeta(width, inputs) {
+    return 0.7 * detExp(detLog(width) / inputs);
+}
+/** Standard normal draw by the Marsaglia polar method (no trigonometry, so it stays deterministic). */
+function gaussian(rng) {
+    for (;;) {
+        const u = 2 * rng.nextDouble() - 1;
+        const v = 2 * rng.nextDouble() - 1;
+        const s = u * u + v * v;
+        if (s > 0 && s < 1)
+            return u * Math.sqrt((-2 * detLog(s)) / s);
     }
-    let classes = null;
-    if (target.task === 'classification') {
-        const counts = new Array(target.classes.length).fill(0);
-        for (const c of target.indices)
-            counts[c]++;
-        classes = {};
-        target.classes.forEach((label, i) => {
-            classes[label] = counts[i];
+}
+/**
+ * Draws hidden neuron j's input weights and bias into `params` (layout `lay`, `width` hidden
+ * neurons), as `init` prescribes for a layer of `width` neurons.
+ */
+function initHiddenNeuron(params, lay, inputs, width, j, init, rng) {
+    if (init === 'nguyen-widrow') {
+        const beta = nguyenWidrowBeta(width, inputs);
+        let norm2 = 0;
+        for (let i = 0; i < inputs; i++) {
+            const w = rng.nextDouble() - 0.5;
+            params[lay.w1 + i * width + j] = w;
+            norm2 += w * w;
+        }
+        const scale = norm2 > 0 ? beta / Math.sqrt(norm2) : 0;
+        for (let i = 0; i < inputs; i++)
+            params[lay.w1 + i * width + j] *= scale;
+        params[lay.b1 + j] = beta * (2 * rng.nextDouble() - 1);
+    }
+    else if (init === 'glorot') {
+        const limit = Math.sqrt(6 / (inputs + width));
+        for (let i = 0; i < inputs; i++)
+            params[lay.w1 + i * width + j] = limit * (2 * rng.nextDouble() - 1);
+        params[lay.b1 + j] = 0;
+    }
+    else {
+        const std = Math.sqrt(2 / inputs);
+        for (let i = 0; i < inputs; i++)
+            params[lay.w1 + i * width + j] = std * gaussian(rng);
+        params[lay.b1 + j] = 0;
+    }
+}
+/** A freshly initialised parameter vector. Draw order: hidden neurons 0..H-1, then output weights row by row. */
+function initParams(shape, init, rng) {
+    const lay = layoutOf(shape);
+    const params = new Float64Array(lay.size);
+    const { inputs, width, outputs } = shape;
+    for (let j = 0; j < width; j++)
+        initHiddenNeuron(params, lay, inputs, width, j, init, rng);
+    if (init === 'nguyen-widrow') {
+        // Output weights: small uniform values, U(-0.5, 0.5); output biases 0.
+        for (let q = 0; q < width * outputs; q++)
+            params[lay.w2 + q] = rng.nextDouble() - 0.5;
+    }
+    else if (init === 'glorot') {
+        const limit = Math.sqrt(6 / (width + outputs));
+        for (let q = 0; q < width * outputs; q++)
+            params[lay.w2 + q] = limit * (2 * rng.nextDouble() - 1);
+    }
+    else {
+        const std = Math.sqrt(2 / width);
+        for (let q = 0; q < width * outputs; q++)
+            params[lay.w2 + q] = std * gaussian(rng);
+    }
+    return params;
+}
+/**
+ * The parameters of `shape` with hidden neuron `j` removed (removeAt) or a zeroed neuron
+ * appended (remove < 0). Returned in the layout of the new width.
+ */
+function resizeParams(params, shape, removeAt) {
+    const { inputs, width, outputs } = shape;
+    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
+    const from = layoutOf(shape);
+    const to = layoutOf({ inputs, width: newWidth, outputs });
+    const out = new Float64Array(to.size);
+    const keep = (j) => (removeAt >= 0 && j > removeAt ? j - 1 : j);
+    for (let j = 0; j < width; j++) {
+        if (j === removeAt)
+            continue;
+        const jj = keep(j);
+        for (let i = 0; i < inputs; i++)
+            out[to.w1 + i * newWidth + jj] = params[from.w1 + i * width + j];
+        out[to.b1 + jj] = params[from.b1 + j];
+        for (let k = 0; k < outputs; k++)
+            out[to.w2 + jj * outputs + k] = params[from.w2 + j * outputs + k];
+    }
+    for (let k = 0; k < outputs; k++)
+        out[to.b2 + k] = params[from.b2 + k];
+    return out;
+}
+/** Maps old parameter indices to new ones for a resize (−1: dropped); new parameters have no source. */
+function resizeIndexMap(shape, removeAt) {
+    const { inputs, width, outputs } = shape;
+    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
+    const from = layoutOf(shape);
+    const to = layoutOf({ inputs, width: newWidth, outputs });
+    const map = new Int32Array(from.size).fill(-1);
+    for (let j = 0; j < width; j++) {
+        if (j === removeAt)
+            continue;
+        const jj = removeAt >= 0 && j > removeAt ? j - 1 : j;
+        for (let i = 0; i < inputs; i++)
+            map[from.w1 + i * width + j] = to.w1 + i * newWidth + jj;
+        map[from.b1 + j] = to.b1 + jj;
+        for (let k = 0; k < outputs; k++)
+            map[from.w2 + j * outputs + k] = to.w2 + jj * outputs + k;
+    }
+    for (let k = 0; k < outputs; k++)
+        map[from.b2 + k] = to.b2 + k;
+    return map;
+}
+function toJson(shape, params) {
+    const { inputs, width, outputs } = shape;
+    const lay = layoutOf(shape);
+    const hiddenWeights = [];
+    for (let j = 0; j < width; j++) {
+        const row = [];
+        for (let i = 0; i < inputs; i++)
+            row.push(params[lay.w1 + i * width + j]);
+        hiddenWeights.push(row);
+    }
+    const outputWeights = [];
+    for (let k = 0; k < outputs; k++) {
+        const row = [];
+        for (let j = 0; j < width; j++)
+            row.push(params[lay.w2 + j * outputs + k]);
+        outputWeights.push(row);
+    }
+    return {
+        inputs,
+        width,
+        outputs,
+        activation: shape.activation,
+        head: shape.head,
+        hiddenWeights,
+        hiddenBias: Array.from(params.subarray(lay.b1, lay.b1 + width)),
+        outputWeights,
+        outputBias: Array.from(params.subarray(lay.b2, lay.b2 + outputs)),
+    };
+}
+function fromJson(net) {
+    const shape = {
+        inputs: net.inputs,
+        width: net.width,
+        outputs: net.outputs,
+        activation: net.activation,
+        head: net.head,
+    };
+    const lay = layoutOf(shape);
+    const params = new Float64Array(lay.size);
+    for (let j = 0; j < net.width; j++) {
+        for (let i = 0; i < net.inputs; i++)
+            params[lay.w1 + i * net.width + j] = net.hiddenWeights[j][i];
+        params[lay.b1 + j] = net.hiddenBias[j];
+    }
+    for (let k = 0; k < net.outputs; k++) {
+        for (let j = 0; j < net.width; j++)
+            params[lay.w2 + j * net.outputs + k] = net.outputWeights[k][j];
+        params[lay.b2 + k] = net.outputBias[k];
+    }
+    return { shape, params };
+}
+function network_describe(shape) {
+    return {
+        inputs: shape.inputs,
+        width: shape.width,
+        outputs: shape.outputs,
+        activation: shape.activation,
+        head: shape.head,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/nn/stall.ts
+/** When a training's error has flattened: the trigger of in-place growth. */
+/** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
+class StallDetector {
+    window;
+    threshold;
+    ring;
+    count = 0;
+    minSoFar = Infinity;
+    errorAtStart = NaN;
+    constructor(window, threshold) {
+        this.window = window;
+        this.threshold = threshold;
+        this.ring = new Float64Array(window + 1);
+    }
+    reset() {
+        this.count = 0;
+        this.minSoFar = Infinity;
+        this.errorAtStart = NaN;
+    }
+    /** Records the error of the current epoch; true when the error has flattened. */
+    record(error) {
+        if (error < this.minSoFar)
+            this.minSoFar = error;
+        const s = this.count++;
+        const w = this.window;
+        this.ring[s % (w + 1)] = this.minSoFar;
+        if (s === 0)
+            this.errorAtStart = this.minSoFar;
+        if (s < w)
+            return false;
+        const drop = this.ring[(s - w) % (w + 1)] - this.minSoFar;
+        if (!(this.errorAtStart > 0))
+            return !(drop > 0);
+        return drop / this.errorAtStart < this.threshold;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/nn/line-search.ts
+/**
+ * A line search for the strong Wolfe conditions (Nocedal & Wright, Numerical Optimization,
+ * 2nd ed. 2006: Algorithm 3.5 with the zoom of Algorithm 3.6, trial steps by the cubic
+ * interpolation of section 3.5, eq. 3.59):
+ *   sufficient decrease  φ(α) ≤ φ(0) + c1·α·φ'(0)
+ *   curvature            |φ'(α)| ≤ c2·|φ'(0)|
+ * where φ(α) = f(x0 + α·d). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so the
+ * same inputs give the same bits on every engine. No allocation after construction.
+ */
+/**
+ * A trial step from interpolation must stay at least this fraction of the bracket away from
+ * both ends, so the bracket shrinks by a fixed factor whatever the cubic says. 0.1 is common
+ * practice with no published source.
+ */
+const BRACKET_MARGIN = 0.1;
+/**
+ * Extrapolation bounds while no bracket exists: the next step lies in
+ * [α_i + 1.1·(α_i − α_{i−1}), α_i + 4·(α_i − α_{i−1})], the factors of the Moré–Thuente line
+ * search (MINPACK-2 dcsrch; from memory).
+ */
+const EXTRAPOLATE_MIN = 1.1;
+const EXTRAPOLATE_MAX = 4;
+const EPSILON = 2.220446049250313e-16;
+function finite(v) {
+    return v - v === 0;
+}
+/**
+ * The minimiser of the cubic through (a, fa, ga) and (b, fb, gb) (Nocedal & Wright eq. 3.59);
+ * NaN when the cubic has no local minimiser or the data are not finite.
+ */
+function cubicMinimizer(a, fa, ga, b, fb, gb) {
+    const d1 = ga + gb - (3 * (fa - fb)) / (a - b);
+    const disc = d1 * d1 - ga * gb;
+    if (!(disc >= 0))
+        return NaN;
+    const root = Math.sqrt(disc);
+    const d2 = b > a ? root : -root;
+    const alpha = b - ((b - a) * (gb + d2 - d1)) / (gb - ga + 2 * d2);
+    return finite(alpha) ? alpha : NaN;
+}
+/** Trial step inside the bracket (lo, hi): the cubic minimiser kept BRACKET_MARGIN away from both ends. */
+function bracketedStep(aLo, fLo, gLo, aHi, fHi, gHi, hiFinite) {
+    const left = aLo < aHi ? aLo : aHi;
+    const right = aLo < aHi ? aHi : aLo;
+    const margin = BRACKET_MARGIN * (right - left);
+    // Without finite values at the far end there is nothing to interpolate: bisect.
+    const c = hiFinite ? cubicMinimizer(aLo, fLo, gLo, aHi, fHi, gHi) : NaN;
+    if (c !== c)
+        return 0.5 * (aLo + aHi);
+    if (c < left + margin)
+        return left + margin;
+    if (c > right - margin)
+        return right - margin;
+    return c;
+}
+/** Next step while the function still falls steeply: the cubic's minimiser beyond α_i, within the extrapolation bounds. */
+function extrapolatedStep(aPrev, fPrev, gPrev, a, f, g) {
+    const span = a - aPrev;
+    const lower = a + EXTRAPOLATE_MIN * span;
+    const upper = a + EXTRAPOLATE_MAX * span;
+    const c = cubicMinimizer(aPrev, fPrev, gPrev, a, f, g);
+    if (c !== c || c > upper)
+        return upper;
+    return c < lower ? lower : c;
+}
+class StrongWolfeLineSearch {
+    settings;
+    /** The best point of the last search (valid when it reported `moved`) and its gradient. */
+    point;
+    gradient;
+    /** Loss, step and directional derivative φ'(α) at `point`. */
+    loss = NaN;
+    alpha = 0;
+    slope = NaN;
+    /** The point, gradient, loss and φ'(α) of the most recent evaluate(). */
+    trialPoint;
+    trialGradient;
+    trialLoss = NaN;
+    trialSlope = NaN;
+    constructor(size, settings) {
+        this.settings = settings;
+        this.point = new Float64Array(size);
+        this.gradient = new Float64Array(size);
+        this.trialPoint = new Float64Array(size);
+        this.trialGradient = new Float64Array(size);
+    }
+    resize(size) {
+        this.point = new Float64Array(size);
+        this.gradient = new Float64Array(size);
+        this.trialPoint = new Float64Array(size);
+        this.trialGradient = new Float64Array(size);
+    }
+    /** φ(α) at x0 + α·d (into trialPoint/trialGradient); sets trialSlope = ∇f(x0 + α·d)ᵀd. */
+    evaluate(x0, d, alpha, objective) {
+        const xt = this.trialPoint;
+        const gt = this.trialGradient;
+        const n = xt.length;
+        for (let q = 0; q < n; q++)
+            xt[q] = x0[q] + alpha * d[q];
+        const f = objective(xt, gt);
+        let slope = 0;
+        for (let q = 0; q < n; q++)
+            slope += gt[q] * d[q];
+        this.trialLoss = f;
+        this.trialSlope = slope;
+        return f;
+    }
+    /** The trial just evaluated becomes the best point (buffers swap, nothing is copied). */
+    keepTrial(alpha) {
+        const p = this.point;
+        const g = this.gradient;
+        this.point = this.trialPoint;
+        this.gradient = this.trialGradient;
+        this.trialPoint = p;
+        this.trialGradient = g;
+        this.loss = this.trialLoss;
+        this.slope = this.trialSlope;
+        this.alpha = alpha;
+    }
+    /**
+     * Searches along the descent direction d from x0, whose loss is f0 and whose directional
+     * derivative is slope0 < 0, starting with step alpha1. Uses at most `budget` evaluations.
+     * A non-finite loss or slope at a trial point counts as a step that is too long.
+     */
+    search(x0, f0, slope0, d, alpha1, objective, budget) {
+        const { c1, c2 } = this.settings;
+        const limit = Math.min(budget, this.settings.maxEvaluations);
+        const curvature = -c2 * slope0;
+        this.loss = f0;
+        this.slope = slope0;
+        this.alpha = 0;
+        let evaluations = 0;
+        const end = (status) => ({
+            status: status === 'failed' && evaluations >= budget ? 'budget' : status,
+            evaluations,
+            moved: this.alpha > 0,
+        });
+        // Algorithm 3.5: widen the step until the bracket [lo, hi] holds a Wolfe point. The best
+        // point so far (lo) is α = 0 at first, then always the lowest loss satisfying Armijo.
+        let aPrev = 0;
+        let fPrev = f0;
+        let gPrev = slope0;
+        let a = alpha1;
+        let aHi;
+        let fHi;
+        let gHi;
+        let hiFinite;
+        for (let i = 1;; i++) {
+            if (evaluations >= limit)
+                return end('failed');
+            const f = this.evaluate(x0, d, a, objective);
+            const g = this.trialSlope;
+            evaluations++;
+            const ok = finite(f) && finite(g);
+            if (!ok || f > f0 + c1 * a * slope0 || (i > 1 && f >= fPrev)) {
+                aHi = a;
+                fHi = f;
+                gHi = g;
+                hiFinite = ok;
+                break;
+            }
+            if ((g < 0 ? -g : g) <= curvature) {
+                this.keepTrial(a);
+                return end('wolfe');
+            }
+            if (g >= 0) {
+                // The minimum lies between the previous step and this one; this one is the lower.
+                aHi = aPrev;
+                fHi = fPrev;
+                gHi = gPrev;
+                hiFinite = true;
+                this.keepTrial(a);
+                break;
+            }
+            this.keepTrial(a);
+            const next = extrapolatedStep(aPrev, fPrev, gPrev, a, f, g);
+            aPrev = a;
+            fPrev = f;
+            gPrev = g;
+            a = next;
+        }
+        // Algorithm 3.6 (zoom): lo is this.alpha with this.loss and this.slope.
+        for (;;) {
+            if (evaluations >= limit)
+                return end('failed');
+            const aLo = this.alpha;
+            const width = aHi > aLo ? aHi - aLo : aLo - aHi;
+            if (width <= EPSILON * (aHi > aLo ? aHi : aLo))
+                return end('failed');
+            const aj = bracketedStep(aLo, this.loss, this.slope, aHi, fHi, gHi, hiFinite);
+            const f = this.evaluate(x0, d, aj, objective);
+            const g = this.trialSlope;
+            evaluations++;
+            const ok = finite(f) && finite(g);
+            if (!ok || f > f0 + c1 * aj * slope0 || f >= this.loss) {
+                aHi = aj;
+                fHi = f;
+                gHi = g;
+                hiFinite = ok;
+                continue;
+            }
+            if ((g < 0 ? -g : g) <= curvature) {
+                this.keepTrial(aj);
+                return end('wolfe');
+            }
+            if (g * (aHi - aLo) >= 0) {
+                aHi = aLo;
+                fHi = this.loss;
+                gHi = this.slope;
+                hiFinite = true;
+            }
+            this.keepTrial(aj);
+        }
+    }
+}
+
+;// CONCATENATED MODULE: ./src/nn/lbfgs.ts
+/**
+ * Full-batch limited-memory BFGS (Liu & Nocedal 1989; Nocedal & Wright, Numerical Optimization,
+ * 2nd ed. 2006, Algorithm 7.5), with the two-loop recursion of Algorithm 7.4, the initial
+ * Hessian H0 = γ·I with γ = sᵀy / yᵀy of the newest pair (eq. 7.20), and a strong Wolfe line
+ * search (line-search.ts). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so a run
+ * gives the same bits on every engine. All work arrays are allocated in the constructor or
+ * on resize, none inside an iteration.
+ */
+
+/**
+ * memory 10, gradientTolerance 1e-5, lossTolerance 2.22e-9 (factr 1e7 × machine epsilon, same
+ * formula) and 20 line-search evaluations are SciPy's L-BFGS-B defaults (scipy.optimize
+ * fmin_l_bfgs_b: m, pgtol, factr, maxls; checked in its documentation). c1 = 1e-4 and c2 = 0.9
+ * are the values Nocedal & Wright recommend for quasi-Newton methods (section 3.1, from memory),
+ * and SciPy's line_search defaults (checked). Nocedal & Wright suggest m between 3 and 20 (from
+ * memory); 10 is SciPy's choice.
+ * @testOnly
+ */
+const LBFGS_DEFAULTS = {
+    memory: 10,
+    c1: 1e-4,
+    c2: 0.9,
+    gradientTolerance: 1e-5,
+    lossTolerance: 2.220446049250313e-9,
+    maxLineSearchEvaluations: 20,
+};
+/**
+ * A pair is kept only when sᵀy > ε·‖s‖·‖y‖ (ε the machine epsilon): the cosine between s and
+ * y must exceed the rounding level of the dot product itself. A strong Wolfe step always
+ * gives sᵀy ≥ (1 − c2)·|∇fᵀs| > 0, so this only drops pairs from steps accepted without the
+ * curvature condition (budget ran out) or lost to rounding, where 1/sᵀy would be noise and the
+ * inverse-Hessian approximation could stop being positive definite.
+ */
+const PAIR_COSINE_MIN = 2.220446049250313e-16;
+function dot(a, ao, b, bo, n) {
+    let s = 0;
+    for (let q = 0; q < n; q++)
+        s += a[ao + q] * b[bo + q];
+    return s;
+}
+class Lbfgs {
+    options;
+    stats = { iterations: 0, evaluations: 0, skippedPairs: 0, restarts: 0 };
+    n;
+    m;
+    /** Ring of pairs: pair i occupies [i·n, (i+1)·n) of s and y. */
+    s;
+    y;
+    rho;
+    coef;
+    count = 0;
+    newest = -1;
+    gamma = 1;
+    d;
+    /** The point whose loss and gradient are cached, so an iteration starts without evaluating. */
+    x;
+    g;
+    f = NaN;
+    known = false;
+    search;
+    constructor(size, options = {}) {
+        const o = { ...LBFGS_DEFAULTS, ...options };
+        if (!Number.isInteger(o.memory) || o.memory < 1)
+            throw new RangeError(`memory must be a whole number >= 1, got ${o.memory}`);
+        if (!(0 < o.c1 && o.c1 < o.c2 && o.c2 < 1))
+            throw new RangeError(`need 0 < c1 < c2 < 1, got c1 ${o.c1}, c2 ${o.c2}`);
+        if (!(o.maxLineSearchEvaluations >= 1))
+            throw new RangeError('maxLineSearchEvaluations must be >= 1');
+        this.options = o;
+        this.n = size;
+        this.m = o.memory;
+        this.s = new Float64Array(this.m * size);
+        this.y = new Float64Array(this.m * size);
+        this.rho = new Float64Array(this.m);
+        this.coef = new Float64Array(this.m);
+        this.d = new Float64Array(size);
+        this.x = new Float64Array(size);
+        this.g = new Float64Array(size);
+        this.search = new StrongWolfeLineSearch(size, {
+            c1: o.c1,
+            c2: o.c2,
+            maxEvaluations: o.maxLineSearchEvaluations,
         });
     }
-    const used = [
-        ...features.map((c) => ({ name: c.name, column: c.column })),
-        { name: target.name, column: target.column },
-    ];
-    used.sort((a, b) => a.column - b.column);
-    return { rows, classes, columns: used.map((c) => c.name), features: profiles };
-}
-function numericProfile(values, missing) {
-    let sum = 0;
-    let min = Infinity;
-    let max = -Infinity;
-    for (let i = 0; i < values.length; i++) {
-        const v = values[i];
-        sum += v;
-        if (v < min)
-            min = v;
-        if (v > max)
-            max = v;
+    /**
+     * Hands over an evaluation the caller already made at x, so the next iteration need not repeat
+     * it. The curvature pairs stay; call reset() as well if x is unrelated to the previous point.
+     */
+    setPoint(x, loss, grad) {
+        this.x.set(x);
+        this.g.set(grad);
+        this.f = loss;
+        this.known = true;
     }
-    const mean = sum / values.length;
-    let squares = 0;
-    for (let i = 0; i < values.length; i++) {
-        const d = values[i] - mean;
-        squares += d * d;
+    /**
+     * One iteration from x (updated in place): direction by the two-loop recursion, then a strong
+     * Wolfe line search. Uses at most maxEvaluations evaluations (one more at the start when no
+     * loss is known for x). If the caller changed x since the last call, the history is dropped
+     * and x is evaluated afresh. x never gets worse: on 'stuck' it holds the best point found.
+     */
+    iterate(x, objective, maxEvaluations) {
+        let evaluations = 0;
+        if (!(maxEvaluations >= 1))
+            return { evaluations, loss: this.known ? this.f : NaN, status: 'progress' };
+        if (!this.known || !this.isCurrent(x)) {
+            if (this.known)
+                this.reset();
+            this.x.set(x);
+            this.f = objective(this.x, this.g);
+            this.known = true;
+            evaluations++;
+            this.stats.evaluations++;
+        }
+        const n = this.n;
+        const f0 = this.f;
+        const gInf = this.gradientInfNorm();
+        if (!(f0 - f0 === 0) || !(gInf - gInf === 0))
+            return { evaluations, loss: f0, status: 'stuck' };
+        if (gInf <= this.options.gradientTolerance)
+            return { evaluations, loss: f0, status: 'converged' };
+        this.stats.iterations++;
+        for (;;) {
+            let quasiNewton = this.count > 0;
+            this.direction();
+            let slope0 = dot(this.g, 0, this.d, 0, n);
+            if (!(slope0 < 0) && quasiNewton) {
+                // Rounding made the quasi-Newton direction useless: fall back on steepest descent.
+                this.reset();
+                quasiNewton = false;
+                this.direction();
+                slope0 = dot(this.g, 0, this.d, 0, n);
+            }
+            if (!(slope0 < 0))
+                return { evaluations, loss: this.f, status: 'stuck' };
+            const budget = maxEvaluations - evaluations;
+            if (budget < 1)
+                return { evaluations, loss: this.f, status: 'progress' };
+            // Quasi-Newton steps are well scaled, so α = 1 comes first (Nocedal & Wright, section 3.5).
+            // Without curvature information the first trial moves the parameters by a Euclidean length
+            // of 1 (as Liu & Nocedal's LBFGS code does, from memory): the summed loss's gradient grows
+            // with the row count, so α = 1 on −∇f would make the step depend on the data size, while a
+            // unit move is on the scale of Nguyen–Widrow initial weights.
+            const alpha1 = this.count > 0 ? 1 : 1 / Math.sqrt(dot(this.d, 0, this.d, 0, n));
+            const fOld = this.f;
+            const r = this.search.search(this.x, fOld, slope0, this.d, alpha1, objective, budget);
+            evaluations += r.evaluations;
+            this.stats.evaluations += r.evaluations;
+            if (r.moved)
+                this.accept(x, r.status !== 'failed');
+            if (r.status === 'wolfe') {
+                const fNew = this.f;
+                const scale = Math.max(fOld < 0 ? -fOld : fOld, fNew < 0 ? -fNew : fNew, 1);
+                const converged = this.gradientInfNorm() <= this.options.gradientTolerance ||
+                    (this.options.lossTolerance > 0 && (fOld - fNew) / scale <= this.options.lossTolerance);
+                return { evaluations, loss: this.f, status: converged ? 'converged' : 'progress' };
+            }
+            if (r.status === 'budget')
+                return { evaluations, loss: this.f, status: 'progress' };
+            // The line search failed. With curvature pairs, they may be what misleads: drop them and
+            // try steepest descent from the best point so far. Without, there is nowhere to go.
+            if (!quasiNewton)
+                return { evaluations, loss: this.f, status: 'stuck' };
+            this.reset();
+            this.stats.restarts++;
+        }
     }
-    // Population standard deviation, the same one the standardisation uses.
-    return { kind: 'numeric', mean, std: Math.sqrt(squares / values.length), min, max, missing };
+    /** Forgets the curvature pairs (after the parameter vector changed meaning); the cached point stays. */
+    reset() {
+        this.count = 0;
+        this.newest = -1;
+        this.gamma = 1;
+    }
+    /**
+     * Carries over to a resized parameter vector (map[old] = new index, −1 dropped). Removing or
+     * adding a neuron changes the function, so old pairs are not secants of the new one: the
+     * history is dropped and the next iteration evaluates the new point.
+     */
+    resize(_map, newSize) {
+        this.reset();
+        this.known = false;
+        this.f = NaN;
+        if (newSize === this.n)
+            return;
+        this.n = newSize;
+        this.s = new Float64Array(this.m * newSize);
+        this.y = new Float64Array(this.m * newSize);
+        this.d = new Float64Array(newSize);
+        this.x = new Float64Array(newSize);
+        this.g = new Float64Array(newSize);
+        this.search.resize(newSize);
+    }
+    /** Curvature pairs currently held. */
+    get pairs() {
+        return this.count;
+    }
+    isCurrent(x) {
+        const c = this.x;
+        if (x.length !== c.length)
+            return false;
+        for (let q = 0; q < c.length; q++)
+            if (x[q] !== c[q])
+                return false;
+        return true;
+    }
+    gradientInfNorm() {
+        const g = this.g;
+        let m = 0;
+        for (let q = 0; q < g.length; q++) {
+            const a = g[q] < 0 ? -g[q] : g[q];
+            if (a > m || a !== a)
+                m = a;
+        }
+        return m;
+    }
+    /** d = −H·g by the two-loop recursion (Algorithm 7.4), newest pair first; −g without pairs. */
+    direction() {
+        const { n, m, s, y, rho, coef, d, g } = this;
+        for (let q = 0; q < n; q++)
+            d[q] = g[q];
+        for (let k = 0; k < this.count; k++) {
+            const i = (this.newest - k + m) % m;
+            const a = rho[i] * dot(s, i * n, d, 0, n);
+            coef[i] = a;
+            const o = i * n;
+            for (let q = 0; q < n; q++)
+                d[q] -= a * y[o + q];
+        }
+        const gamma = this.gamma;
+        for (let q = 0; q < n; q++)
+            d[q] *= gamma;
+        for (let k = this.count - 1; k >= 0; k--) {
+            const i = (this.newest - k + m) % m;
+            const b = rho[i] * dot(y, i * n, d, 0, n);
+            const c = coef[i] - b;
+            const o = i * n;
+            for (let q = 0; q < n; q++)
+                d[q] += c * s[o + q];
+        }
+        for (let q = 0; q < n; q++)
+            d[q] = -d[q];
+    }
+    /** Moves to the line search's best point; stores the pair s = x₊ − x, y = g₊ − g when asked and acceptable. */
+    accept(out, storePair) {
+        const { n, m } = this;
+        const xn = this.search.point;
+        const gn = this.search.gradient;
+        if (storePair) {
+            let sy = 0;
+            let ss = 0;
+            let yy = 0;
+            for (let q = 0; q < n; q++) {
+                const sq = xn[q] - this.x[q];
+                const yq = gn[q] - this.g[q];
+                sy += sq * yq;
+                ss += sq * sq;
+                yy += yq * yq;
+            }
+            if (sy > PAIR_COSINE_MIN * Math.sqrt(ss) * Math.sqrt(yy)) {
+                const i = (this.newest + 1) % m;
+                const o = i * n;
+                for (let q = 0; q < n; q++) {
+                    this.s[o + q] = xn[q] - this.x[q];
+                    this.y[o + q] = gn[q] - this.g[q];
+                }
+                this.rho[i] = 1 / sy;
+                this.gamma = sy / yy;
+                this.newest = i;
+                if (this.count < m)
+                    this.count++;
+            }
+            else {
+                this.stats.skippedPairs++;
+            }
+        }
+        this.x.set(xn);
+        this.g.set(gn);
+        this.f = this.search.loss;
+        out.set(xn);
+    }
 }
-function categoricalProfile(categories, codes, missing) {
-    const tally = new Array(categories.length).fill(0);
-    for (const c of codes)
-        tally[c]++;
-    const counts = {};
-    categories.forEach((category, i) => {
-        counts[category] = tally[i];
+
+;// CONCATENATED MODULE: ./src/nn/optimizers.ts
+/** iRprop+ defaults (Riedmiller & Braun 1993; Igel & Hüsken 2003). */
+const IRPROP_DEFAULTS = { etaPlus: 1.2, etaMinus: 0.5, delta0: 0.1, deltaMin: 1e-6, deltaMax: 50 };
+/** Adam defaults (Kingma & Ba 2015). */
+const ADAM_DEFAULTS = { learningRate: 0.001, beta1: 0.9, beta2: 0.999, epsilon: 1e-8 };
+/** Backpropagation with momentum: ε 0.1, α 0.9, the values of Rumelhart, Hinton & Williams' 1986 symmetry run (from memory). */
+const BACKPROP_DEFAULTS = { learningRate: 0.1, momentum: 0.9 };
+function remap(old, map, newSize, fresh) {
+    const out = new Float64Array(newSize).fill(fresh);
+    for (let q = 0; q < map.length; q++)
+        if (map[q] >= 0)
+            out[map[q]] = old[q];
+    return out;
+}
+/** iRprop+ (Igel & Hüsken): on a sign change, revert the last step only if the error rose. @testOnly */
+class IRpropPlus {
+    kind = 'irprop+';
+    delta;
+    prevGrad;
+    prevStep;
+    prevLoss = Infinity;
+    constructor(size) {
+        this.delta = new Float64Array(size).fill(IRPROP_DEFAULTS.delta0);
+        this.prevGrad = new Float64Array(size);
+        this.prevStep = new Float64Array(size);
+    }
+    step(params, grad, loss, _rows) {
+        const { etaPlus, etaMinus, deltaMin, deltaMax } = IRPROP_DEFAULTS;
+        const delta = this.delta;
+        const prevGrad = this.prevGrad;
+        const prevStep = this.prevStep;
+        const errorRose = loss > this.prevLoss;
+        const n = params.length;
+        for (let q = 0; q < n; q++) {
+            const g = grad[q];
+            const c = g * prevGrad[q];
+            if (c > 0) {
+                const d = Math.min(delta[q] * etaPlus, deltaMax);
+                delta[q] = d;
+                const step = g > 0 ? -d : d;
+                params[q] += step;
+                prevStep[q] = step;
+                prevGrad[q] = g;
+            }
+            else if (c < 0) {
+                delta[q] = Math.max(delta[q] * etaMinus, deltaMin);
+                if (errorRose) {
+                    const step = -prevStep[q];
+                    params[q] += step;
+                    prevStep[q] = step;
+                }
+                else {
+                    prevStep[q] = 0;
+                }
+                prevGrad[q] = 0;
+            }
+            else {
+                const d = delta[q];
+                const step = g > 0 ? -d : g < 0 ? d : 0;
+                params[q] += step;
+                prevStep[q] = step;
+                prevGrad[q] = g;
+            }
+        }
+        this.prevLoss = loss;
+    }
+    resize(map, newSize) {
+        this.delta = remap(this.delta, map, newSize, IRPROP_DEFAULTS.delta0);
+        this.prevGrad = remap(this.prevGrad, map, newSize, 0);
+        this.prevStep = remap(this.prevStep, map, newSize, 0);
+    }
+    resetRange(from, to) {
+        this.delta.fill(IRPROP_DEFAULTS.delta0, from, to);
+        this.prevGrad.fill(0, from, to);
+        this.prevStep.fill(0, from, to);
+        // The function changed, so the last error no longer says whether a step made things worse.
+        this.prevLoss = Infinity;
+    }
+    /** Inspection for tests. */
+    state() {
+        return { delta: this.delta, prevGrad: this.prevGrad, prevStep: this.prevStep, prevLoss: this.prevLoss };
+    }
+}
+/** Adam (Kingma & Ba 2015), Algorithm 1, on the mean gradient of the batch. */
+class Adam {
+    lr;
+    kind = 'adam';
+    m;
+    v;
+    t = 0;
+    b1t = 1;
+    b2t = 1;
+    constructor(size, lr) {
+        this.lr = lr;
+        this.m = new Float64Array(size);
+        this.v = new Float64Array(size);
+    }
+    step(params, grad, _loss, rows) {
+        const { beta1, beta2, epsilon } = ADAM_DEFAULTS;
+        this.t++;
+        this.b1t *= beta1;
+        this.b2t *= beta2;
+        const c1 = 1 / (1 - this.b1t);
+        const c2 = 1 / (1 - this.b2t);
+        const inv = 1 / rows;
+        const m = this.m;
+        const v = this.v;
+        const lr = this.lr;
+        const n = params.length;
+        for (let q = 0; q < n; q++) {
+            const g = grad[q] * inv;
+            const mq = beta1 * m[q] + (1 - beta1) * g;
+            const vq = beta2 * v[q] + (1 - beta2) * g * g;
+            m[q] = mq;
+            v[q] = vq;
+            params[q] -= (lr * (mq * c1)) / (Math.sqrt(vq * c2) + epsilon);
+        }
+    }
+    resize(map, newSize) {
+        this.m = remap(this.m, map, newSize, 0);
+        this.v = remap(this.v, map, newSize, 0);
+    }
+    resetRange(from, to) {
+        this.m.fill(0, from, to);
+        this.v.fill(0, from, to);
+    }
+}
+/** Backpropagation with momentum: Δw(t) = −ε ∂E/∂w + α Δw(t−1), on the mean gradient (Rumelhart, Hinton & Williams 1986). */
+class Momentum {
+    lr;
+    momentum;
+    kind = 'backprop';
+    prevStep;
+    constructor(size, lr, momentum) {
+        this.lr = lr;
+        this.momentum = momentum;
+        this.prevStep = new Float64Array(size);
+    }
+    step(params, grad, _loss, rows) {
+        const scale = this.lr / rows;
+        const alpha = this.momentum;
+        const prev = this.prevStep;
+        const n = params.length;
+        for (let q = 0; q < n; q++) {
+            const s = -scale * grad[q] + alpha * prev[q];
+            prev[q] = s;
+            params[q] += s;
+        }
+    }
+    resize(map, newSize) {
+        this.prevStep = remap(this.prevStep, map, newSize, 0);
+    }
+    resetRange(from, to) {
+        this.prevStep.fill(0, from, to);
+    }
+}
+function makeUpdater(kind, size, settings) {
+    if (kind === 'irprop+')
+        return new IRpropPlus(size);
+    if (kind === 'adam')
+        return new Adam(size, settings.learningRate ?? ADAM_DEFAULTS.learningRate);
+    return new Momentum(size, settings.learningRate ?? BACKPROP_DEFAULTS.learningRate, settings.momentum ?? BACKPROP_DEFAULTS.momentum);
+}
+
+;// CONCATENATED MODULE: ./src/nn/steppers.ts
+
+
+/** A first-order update: evaluate once, then step along the gradient. */
+class FirstOrder {
+    updater;
+    result = { evaluations: 1, loss: 0, status: 'progress' };
+    constructor(updater) {
+        this.updater = updater;
+    }
+    step(params, objective, grad, _budget, rows) {
+        const loss = objective(params, grad);
+        // A non-finite loss leaves the weights untouched; the trainer stops the run as diverged.
+        if (Number.isFinite(loss))
+            this.updater.step(params, grad, loss, rows);
+        this.result.loss = loss;
+        return this.result;
+    }
+    resize(map, newSize) {
+        this.updater.resize(map, newSize);
+    }
+    resetRange(from, to) {
+        this.updater.resetRange(from, to);
+    }
+}
+/** L-BFGS: each step is one iteration with its strong Wolfe line search. */
+class QuasiNewton {
+    lbfgs;
+    constructor(size) {
+        this.lbfgs = new Lbfgs(size);
+    }
+    step(params, objective, _grad, budget) {
+        return this.lbfgs.iterate(params, objective, budget);
+    }
+    resize(map, newSize) {
+        this.lbfgs.resize(map, newSize);
+    }
+    resetRange() {
+        // The curvature pairs describe the whole vector: after surgery they no longer hold.
+        this.lbfgs.reset();
+    }
+}
+function makeStepper(optimizer, size, settings) {
+    return optimizer === 'lbfgs' ? new QuasiNewton(size) : new FirstOrder(makeUpdater(optimizer, size, settings));
+}
+
+;// CONCATENATED MODULE: ./src/nn/surgery.ts
+
+
+
+/** Hidden activations of every training row (rows × width); the logits go into `logits`. */
+function hiddenActivations(kernel, shape, params, data, logits) {
+    const hidden = new Float64Array(data.trainRows * shape.width);
+    kernel.forward(shape, params, data.xTrain, data.trainRows, logits, hidden);
+    return hidden;
+}
+function columnMeans(hidden, rows, width) {
+    const mean = new Float64Array(width);
+    for (let p = 0; p < rows; p++)
+        for (let j = 0; j < width; j++)
+            mean[j] += hidden[p * width + j];
+    for (let j = 0; j < width; j++)
+        mean[j] /= rows;
+    return mean;
+}
+/** Appends a hidden neuron with fresh input weights (as `init` draws them) and zero outgoing weights. */
+function withNeuronAdded(shape, params, init, rng) {
+    const map = resizeIndexMap(shape, -1);
+    const grown = resizeParams(params, shape, -1);
+    const next = { ...shape, width: shape.width + 1 };
+    initHiddenNeuron(grown, layoutOf(next), next.inputs, next.width, shape.width, init, rng);
+    return { shape: next, params: grown, map };
+}
+/** Removes hidden neuron j, folding its mean activation over the training rows into the output biases. */
+function withNeuronRemoved(kernel, shape, params, data, j) {
+    if (!Number.isInteger(j) || j < 0 || j >= shape.width) {
+        throw new RangeError(`no hidden neuron ${j} in a network of width ${shape.width}`);
+    }
+    const logits = new Float64Array(data.trainRows * shape.outputs);
+    const mean = columnMeans(hiddenActivations(kernel, shape, params, data, logits), data.trainRows, shape.width);
+    const lay = layoutOf(shape);
+    const folded = params.slice();
+    for (let k = 0; k < shape.outputs; k++)
+        folded[lay.b2 + k] += folded[lay.w2 + j * shape.outputs + k] * mean[j];
+    return {
+        shape: { ...shape, width: shape.width - 1 },
+        params: resizeParams(folded, shape, j),
+        map: resizeIndexMap(shape, j),
+    };
+}
+/** Compensated-ablation loss increase per hidden neuron (mean per training row), in one pass. */
+function saliencies(kernel, shape, params, data, head) {
+    const H = shape.width;
+    const K = shape.outputs;
+    const N = data.trainRows;
+    const logits = new Float64Array(N * K);
+    const hidden = hiddenActivations(kernel, shape, params, data, logits);
+    const mean = columnMeans(hidden, N, H);
+    const lay = layoutOf(shape);
+    const out = new Float64Array(H);
+    const z = new Float64Array(K);
+    const y = data.yTrain;
+    for (let p = 0; p < N; p++) {
+        const base = rowLoss(head, K, logits, p * K, y[p]);
+        for (let j = 0; j < H; j++) {
+            const d = hidden[p * H + j] - mean[j];
+            for (let k = 0; k < K; k++)
+                z[k] = logits[p * K + k] - d * params[lay.w2 + j * K + k];
+            out[j] += rowLoss(head, K, z, 0, y[p]) - base;
+        }
+    }
+    for (let j = 0; j < H; j++)
+        out[j] /= N;
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/nn/trainer.ts
+/**
+ * One network and its optimiser state while it trains, grows and shrinks.
+ *
+ * Training follows the exact gradient of the loss it reports (plus the L2 penalty on the weights,
+ * when there is one). The steering rows (validation rows, or the training rows when there are
+ * none) decide when a training stops: when their loss has not really improved for `patience`
+ * epochs, when the optimiser has converged, or at max-epochs. The network handed back is the one
+ * with the lowest steering loss among those that met the target on the steering rows (or, when
+ * none did, among all checked): early stopping with the best weights restored. The judging rows
+ * are never read here.
+ */
+
+
+
+
+
+
+
+
+
+/**
+ * A steering loss counts as improved when it falls by more than this fraction of the last
+ * improved value; smaller gains do not reset the patience (an engineering choice, no source).
+ */
+const MIN_IMPROVEMENT = 1e-3;
+/** The output head the dataset calls for. */
+function headFor(data) {
+    if (data.task === 'regression')
+        return 'linear';
+    return data.outputs === 1 ? 'logistic' : 'softmax';
+}
+class NetworkTrainer {
+    data;
+    options;
+    kernel;
+    shape;
+    layout;
+    params;
+    grad;
+    /** The best network checked so far, and the best that met the target (see the header). */
+    best;
+    bestMet;
+    stepper;
+    init;
+    stall;
+    head;
+    logitsTrain;
+    logitsSteer;
+    batch;
+    batchStart = 0;
+    batchEnd = 0;
+    /** The loss over all training rows with the weight penalty, and its gradient: what the optimiser minimises. */
+    objective;
+    /** The same over rows [batchStart, batchEnd) (mini-batch Adam). */
+    batchObjective;
+    constructor(data, width, options, rng, kernel, settings) {
+        this.data = data;
+        this.options = options;
+        this.kernel = kernel;
+        if (!Number.isInteger(width) || width < 0)
+            throw new RangeError(`width must be a whole number >= 0, got ${width}`);
+        if (data.trainRows < 1)
+            throw new RangeError('the training set has no rows');
+        if ((data.task === 'classification') !== (options.target.metric === 'accuracy')) {
+            throw new RangeError(`target metric ${options.target.metric} does not fit a ${data.task} task`);
+        }
+        if (!(options.checkEvery >= 1))
+            throw new RangeError(`checkEvery must be >= 1, got ${options.checkEvery}`);
+        if (!(options.weightDecay >= 0))
+            throw new RangeError(`weightDecay must be >= 0, got ${options.weightDecay}`);
+        this.shape = {
+            inputs: data.inputs,
+            width,
+            outputs: data.outputs,
+            activation: options.activation,
+            head: headFor(data),
+        };
+        this.layout = layoutOf(this.shape);
+        this.head = headCode(this.shape.head);
+        this.init = options.init ?? defaultInit(options.activation);
+        this.params = initParams(this.shape, this.init, rng);
+        this.grad = new Float64Array(this.params.length);
+        this.best = new Float64Array(this.params.length);
+        this.bestMet = new Float64Array(this.params.length);
+        this.stepper = makeStepper(options.optimizer, this.params.length, settings);
+        this.stall = options.stall ? new StallDetector(options.stall.window, options.stall.threshold) : null;
+        this.logitsTrain = new Float64Array(data.trainRows * data.outputs);
+        const steerRows = data.validationRows > 0 ? data.validationRows : data.trainRows;
+        this.logitsSteer = new Float64Array(steerRows * data.outputs);
+        const b = settings.batchSize ?? 0;
+        this.batch = options.optimizer === 'adam' && b > 0 && b < data.trainRows ? b : data.trainRows;
+        this.objective = (x, g) => this.penalised(x, g, this.lossOver(x, g, 0, this.data.trainRows));
+        this.batchObjective = (x, g) => this.penalised(x, g, this.lossOver(x, g, this.batchStart, this.batchEnd));
+    }
+    get network() {
+        return network_describe(this.shape);
+    }
+    /** The live parameter vector (layout in kernel/layout.ts); for tests and benchmarks. */
+    get parameters() {
+        return this.params;
+    }
+    lossOver(x, g, start, end) {
+        return this.kernel.lossAndGradient(this.shape, x, this.data.xTrain, this.data.yTrain, start, end, g);
+    }
+    /** Adds (λ/2)·Σw² over the weights (not the biases) to `loss` and λw to their gradient. */
+    penalised(x, g, loss) {
+        const lambda = this.options.weightDecay;
+        if (lambda === 0)
+            return loss;
+        const { w1, b1, w2, b2 } = this.layout;
+        let squares = 0;
+        for (let q = w1; q < b1; q++) {
+            squares += x[q] * x[q];
+            g[q] += lambda * x[q];
+        }
+        for (let q = w2; q < b2; q++) {
+            squares += x[q] * x[q];
+            g[q] += lambda * x[q];
+        }
+        return loss + 0.5 * lambda * squares;
+    }
+    /** One epoch: a full-batch optimiser step, or one pass of mini-batch Adam steps. */
+    epoch(budget) {
+        const N = this.data.trainRows;
+        if (this.batch >= N)
+            return this.stepper.step(this.params, this.objective, this.grad, budget, N);
+        let loss = 0;
+        for (let start = 0; start < N; start += this.batch) {
+            this.batchStart = start;
+            this.batchEnd = Math.min(N, start + this.batch);
+            const part = this.stepper.step(this.params, this.batchObjective, this.grad, 1, this.batchEnd - start).loss;
+            loss += part;
+            if (!Number.isFinite(part))
+                break;
+        }
+        return { evaluations: 1, loss, status: 'progress' };
+    }
+    run(maxEpochs) {
+        const { options } = this;
+        let stop = 'max-epochs';
+        let epochs = 0;
+        let nextCheck = options.checkEvery;
+        let reference = Infinity;
+        let lastImprovement = 0;
+        let bestLoss = Infinity;
+        let bestMetLoss = Infinity;
+        this.stall?.reset();
+        while (epochs < maxEpochs) {
+            const step = this.epoch(maxEpochs - epochs);
+            epochs += step.evaluations;
+            if (!Number.isFinite(step.loss)) {
+                stop = 'diverged';
+                break;
+            }
+            const stalled = this.stall !== null && this.stall.record(step.loss / this.data.trainRows);
+            const ended = step.status !== 'progress';
+            if (epochs < nextCheck && epochs < maxEpochs && !ended && !stalled)
+                continue;
+            nextCheck = epochs + options.checkEvery;
+            if (options.interrupted?.() === true) {
+                stop = 'interrupted';
+                break;
+            }
+            const steer = this.steeringMetrics();
+            const metric = metricValue(steer, options.target.metric);
+            if (!Number.isFinite(steer.loss) || !Number.isFinite(metric)) {
+                stop = 'diverged';
+                break;
+            }
+            if (steer.loss < reference * (1 - MIN_IMPROVEMENT)) {
+                reference = steer.loss;
+                lastImprovement = epochs;
+            }
+            if (steer.loss < bestLoss) {
+                bestLoss = steer.loss;
+                this.best.set(this.params);
+            }
+            if (meetsThreshold(metric, options.target) && steer.loss < bestMetLoss) {
+                bestMetLoss = steer.loss;
+                this.bestMet.set(this.params);
+            }
+            if (ended || stalled || epochs - lastImprovement >= options.patience) {
+                stop = 'stalled';
+                break;
+            }
+        }
+        if (stop !== 'diverged' && stop !== 'interrupted') {
+            if (bestMetLoss < Infinity)
+                this.params.set(this.bestMet);
+            else if (bestLoss < Infinity)
+                this.params.set(this.best);
+        }
+        const rec = this.evaluate();
+        if (stop === 'diverged' || stop === 'interrupted')
+            return { ...rec, epochs, stop };
+        if (!Number.isFinite(rec.trainLoss))
+            return { ...rec, epochs, stop: 'diverged' };
+        return { ...rec, epochs, stop: rec.stop === 'reached' ? 'reached' : stop };
+    }
+    trainMetrics() {
+        const { data, shape } = this;
+        this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
+        return computeMetrics(this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, data.encoding.target.std);
+    }
+    /** Metrics on the steering rows: the validation rows, or the training rows when there are none. */
+    steeringMetrics() {
+        const { data, shape } = this;
+        if (data.validationRows === 0)
+            return this.trainMetrics();
+        this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsSteer, null);
+        return computeMetrics(this.head, shape.outputs, this.logitsSteer, data.yValidation, data.validationRows, data.encoding.target.std);
+    }
+    /**
+     * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no check).
+     * Returns the loss; a non-finite loss leaves the weights untouched. For the engine benchmark.
+     */
+    fullBatchEpoch() {
+        return this.stepper.step(this.params, this.objective, this.grad, 1, this.data.trainRows).loss;
+    }
+    /** Metrics on the training rows and on the steering rows. */
+    metrics() {
+        return { train: this.trainMetrics(), validation: this.steeringMetrics() };
+    }
+    evaluate() {
+        const { train, validation } = this.metrics();
+        const metric = this.options.target.metric;
+        const trainMetric = metricValue(train, metric);
+        const steeringMetric = metricValue(validation, metric);
+        let stop = 'max-epochs';
+        if (!Number.isFinite(train.loss))
+            stop = 'diverged';
+        else if (meetsThreshold(steeringMetric, this.options.target))
+            stop = 'reached';
+        return { epochs: 0, stop, trainLoss: train.loss, trainMetric, steeringMetric };
+    }
+    addNeuron(rng) {
+        this.replace(withNeuronAdded(this.shape, this.params, this.init, rng));
+    }
+    removeNeuron(j) {
+        this.replace(withNeuronRemoved(this.kernel, this.shape, this.params, this.data, j));
+        // The output biases absorbed the removed neuron: what the optimiser learnt about them is stale.
+        this.stepper.resetRange(this.layout.b2, this.layout.b2 + this.shape.outputs);
+    }
+    replace(r) {
+        this.shape = r.shape;
+        this.layout = layoutOf(r.shape);
+        this.params = r.params;
+        this.grad = new Float64Array(r.params.length);
+        this.best = new Float64Array(r.params.length);
+        this.bestMet = new Float64Array(r.params.length);
+        this.stepper.resize(r.map, r.params.length);
+        this.stall?.reset();
+    }
+    saliency() {
+        return saliencies(this.kernel, this.shape, this.params, this.data, this.head);
+    }
+    snapshot() {
+        return toJson(this.shape, this.params);
+    }
+    /** Takes over the weights of `net` (same shape); optimiser and stall state stay as new. */
+    load(net) {
+        const { shape, params } = fromJson(net);
+        const s = this.shape;
+        const same = ['inputs', 'width', 'outputs', 'head', 'activation'].every((k) => shape[k] === s[k]);
+        if (!same) {
+            throw new RangeError(`network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`);
+        }
+        this.params.set(params);
+    }
+}
+function settingsOf(options, extras) {
+    return { ...(options.optimizerSettings ?? {}), ...(extras.optimizerSettings ?? {}) };
+}
+/**
+ * A trainer that continues from an existing network: its weights, fresh optimiser and stall
+ * state. Deterministic: the same arguments give the same later runs.
+ */
+function trainerFromNetwork(data, net, options, rng, extras = {}) {
+    const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
+    trainer.load(net);
+    return trainer;
+}
+function createTrainer(data, width, options, rng, extras = {}) {
+    return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
+}
+
+;// CONCATENATED MODULE: ./src/nn/predict.ts
+
+
+
+
+/** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
+function predict_predict(net, x, rows) {
+    const { shape, params } = fromJson(net);
+    const K = shape.outputs;
+    const logits = new Float64Array(rows * K);
+    referenceForward(shape, params, x, rows, logits, null, makeScratch(shape.width, K));
+    const out = new Float64Array(rows * K);
+    const head = headCode(shape.head);
+    for (let p = 0; p < rows; p++)
+        headOutputs(head, K, logits, p * K, out, p * K);
+    return out;
+}
+/** The network's `metric` on encoded rows (regression errors in the target's units, via its std). */
+function metricOn(net, x, y, rows, metric, targetStd) {
+    if (rows === 0)
+        return Number.NaN;
+    const { shape, params } = fromJson(net);
+    const logits = new Float64Array(rows * shape.outputs);
+    defaultKernel().forward(shape, params, x, rows, logits, null);
+    return targetMetric(metric, headCode(shape.head), shape.outputs, logits, y, rows, targetStd);
+}
+/** The class each row is given: the largest logit, or logit > 0 for a logistic head. */
+function classesOn(net, x, rows) {
+    const { shape, params } = fromJson(net);
+    const K = shape.outputs;
+    const logits = new Float64Array(rows * K);
+    defaultKernel().forward(shape, params, x, rows, logits, null);
+    const out = new Int32Array(rows);
+    for (let p = 0; p < rows; p++) {
+        if (K === 1)
+            out[p] = logits[p] > 0 ? 1 : 0;
+        else {
+            let best = 0;
+            for (let k = 1; k < K; k++)
+                if (logits[p * K + k] > logits[p * K + best])
+                    best = k;
+            out[p] = best;
+        }
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/nn/index.ts
+
+
+
+;// CONCATENATED MODULE: ./src/model/predict.ts
+/** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
+
+
+/** (x − mean) / std, with a constant training column (std 0) only centred. */
+function standardise(x, mean, std) {
+    return std > 0 ? (x - mean) / std : x - mean;
+}
+/** Encode raw rows the way the training data was encoded. An unseen category encodes as all zeros. */
+function encodeRows(model, rows) {
+    const inputs = model.network.inputs;
+    const x = new Float64Array(rows.length * inputs);
+    rows.forEach((row, r) => {
+        let c = r * inputs;
+        for (const f of model.encoding.features) {
+            const cell = row[f.name];
+            if (cell === undefined)
+                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
+            const text = cell.trim();
+            if (f.kind === 'numeric') {
+                const v = text === '' ? Number.NaN : Number(text);
+                if (!Number.isFinite(v)) {
+                    throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
+                }
+                x[c++] = standardise(v, f.mean, f.std);
+            }
+            else {
+                const k = f.categories.indexOf(text);
+                for (let j = 0; j < f.categories.length; j++)
+                    x[c + j] = j === k ? 1 : 0;
+                c += f.categories.length;
+            }
+        }
     });
-    return { kind: 'categorical', counts, missing };
+    return x;
 }
+/** Head outputs for each row: class probabilities, or the value in the target's units. */
+function predictRows(model, rows) {
+    const out = predict(model.network, encodeRows(model, rows), rows.length);
+    const K = model.network.outputs;
+    const t = model.encoding.target;
+    const preds = [];
+    for (let p = 0; p < rows.length; p++) {
+        if (model.task === 'regression') {
+            preds.push({ value: out[p] * t.std + t.mean });
+            continue;
+        }
+        const classes = t.classes ?? [];
+        const probabilities = {};
+        let best = 0;
+        if (K === 1) {
+            // One logistic output: the probability of the second class.
+            probabilities[classes[0]] = 1 - out[p];
+            probabilities[classes[1]] = out[p];
+            best = out[p] > 0.5 ? 1 : 0;
+        }
+        else {
+            for (let k = 0; k < K; k++) {
+                probabilities[classes[k]] = out[p * K + k];
+                if (out[p * K + k] > out[p * K + best])
+                    best = k;
+            }
+        }
+        preds.push({ label: classes[best], probabilities });
+    }
+    return preds;
+}
+/** The model's target metric on rows that carry the target column. */
+function scoreRows(model, rows) {
+    const preds = predictRows(model, rows);
+    const name = model.encoding.target.name;
+    const truth = rows.map((row, r) => {
+        const cell = row[name];
+        if (cell === undefined)
+            throw new UserError(`row ${r + 1}: target column "${name}" is missing`, { key: name });
+        return cell.trim();
+    });
+    const metric = model.target.metric;
+    if (metric === 'accuracy') {
+        let correct = 0;
+        preds.forEach((p, r) => {
+            if ('label' in p && p.label === truth[r])
+                correct++;
+        });
+        return correct / rows.length;
+    }
+    let se = 0;
+    let ae = 0;
+    let maxAe = 0;
+    preds.forEach((p, r) => {
+        const d = Math.abs(('value' in p ? p.value : Number.NaN) - Number(truth[r]));
+        se += d * d;
+        ae += d;
+        if (d > maxAe || d !== d)
+            maxAe = d;
+    });
+    if (metric === 'rmse')
+        return Math.sqrt(se / rows.length);
+    return metric === 'mae' ? ae / rows.length : maxAe;
+}
+
+;// CONCATENATED MODULE: ./src/model/index.ts
+/** Witness export: the winning network as a JSON document anyone can run on raw rows. */
+
+
+
 
 ;// CONCATENATED MODULE: external "node:stream"
 const external_node_stream_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:stream");
@@ -12631,14 +15645,14 @@ const NumberKind = {
 };
 // Decimal notation: optional sign, digits with an optional fraction, optional exponent.
 // Hex, binary, `1_000` and the like are text, even though Number() would accept some.
-const numbers_DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 const NON_FINITE = /^[+-]?(?:nan|inf|infinity)$/i;
 /** Reads `text` (already trimmed); the value is in `parsed.value` when Finite. */
 function classifyNumber(text, parsed) {
     const c = text.charCodeAt(0);
     // Fast rejection of obvious text: a number starts with a digit, sign or dot.
     const couldBeNumber = (c >= 48 && c <= 57) || c === 45 || c === 43 || c === 46;
-    if (couldBeNumber && numbers_DECIMAL.test(text)) {
+    if (couldBeNumber && DECIMAL.test(text)) {
         const value = Number(text);
         if (!Number.isFinite(value))
             return NumberKind.Overflow;
@@ -12648,124 +15662,6 @@ function classifyNumber(text, parsed) {
     if (text.length <= 9 && NON_FINITE.test(text))
         return NumberKind.NotFinite;
     return NumberKind.Text;
-}
-
-;// CONCATENATED MODULE: ./src/data/column-store.ts
-/**
- * One column of the file, kept compactly while reading: numbers in a growable
- * Float64Array, and (while the column has few distinct values) each cell's text as an
- * index into a small table of distinct strings. Which of the two the column really is
- * gets decided once the whole file has been read.
- */
-
-const INITIAL_CAPACITY = 1024;
-class ColumnStore {
-    name;
-    column;
-    distinctLimit;
-    length = 0;
-    /** Cell values where they are finite numbers, NaN elsewhere. */
-    numbers = new Float64Array(INITIAL_CAPACITY);
-    /** Index into `distinct` per cell; null once the column has too many distinct values. */
-    codes = new Int32Array(INITIAL_CAPACITY);
-    /** Distinct cell texts in order of first appearance; null after overflow. */
-    distinct = new Map();
-    /** Where the distinct texts first outgrew `distinctLimit` (the value and its line). */
-    overflow = null;
-    /** After overflow, all distinct texts while the column still looks like text (for the count). */
-    overflowTexts = null;
-    numberCount = 0;
-    textCount = 0;
-    firstText = null;
-    /** First NaN/Infinity/overflowing number, and which it was. */
-    firstNotFinite = null;
-    /** Empty cells met, including those of dropped rows. */
-    missing = 0;
-    parsed = { value: 0 };
-    constructor(name, 
-    /** 1-based field number in the file. */
-    column, 
-    /** Most distinct texts worth remembering (the categorical cap, or the class cap). */
-    distinctLimit) {
-        this.name = name;
-        this.column = column;
-        this.distinctLimit = distinctLimit;
-    }
-    push(text, line) {
-        const i = this.length;
-        if (i === this.numbers.length)
-            this.grow();
-        const kind = classifyNumber(text, this.parsed);
-        if (kind === NumberKind.Finite) {
-            this.numbers[i] = this.parsed.value;
-            this.numberCount++;
-        }
-        else {
-            this.numbers[i] = NaN;
-            if (kind === NumberKind.Text) {
-                this.textCount++;
-                if (this.firstText === null)
-                    this.firstText = { value: text, line };
-            }
-            else {
-                this.numberCount++;
-                if (this.firstNotFinite === null) {
-                    this.firstNotFinite = { value: text, line, overflow: kind === NumberKind.Overflow };
-                }
-            }
-        }
-        if (this.distinct !== null && this.codes !== null) {
-            let code = this.distinct.get(text);
-            if (code === undefined) {
-                code = this.distinct.size;
-                if (code >= this.distinctLimit) {
-                    this.startOverflow(text, line);
-                }
-                else {
-                    this.distinct.set(text, code);
-                }
-            }
-            if (this.codes !== null)
-                this.codes[i] = code;
-        }
-        else if (this.overflowTexts !== null) {
-            if (this.textCount >= this.numberCount)
-                this.overflowTexts.add(text);
-            else
-                this.overflowTexts = null; // a numeric-looking column: the count no longer matters
-        }
-        this.length = i + 1;
-    }
-    /** Distinct values counted so far past the cap (a lower bound when counting stopped). */
-    distinctCount() {
-        if (this.distinct !== null)
-            return this.distinct.size;
-        return this.overflowTexts?.size ?? this.distinctLimit + 1;
-    }
-    /** Whether `distinctCount()` is exact. */
-    distinctCountExact() {
-        return this.distinct !== null || this.overflowTexts !== null;
-    }
-    startOverflow(text, line) {
-        this.overflow = { value: text, line };
-        if (this.textCount >= this.numberCount && this.distinct !== null) {
-            this.overflowTexts = new Set(this.distinct.keys());
-            this.overflowTexts.add(text);
-        }
-        this.distinct = null;
-        this.codes = null;
-    }
-    grow() {
-        const capacity = this.numbers.length * 2;
-        const numbers = new Float64Array(capacity);
-        numbers.set(this.numbers);
-        this.numbers = numbers;
-        if (this.codes !== null) {
-            const codes = new Int32Array(capacity);
-            codes.set(this.codes);
-            this.codes = codes;
-        }
-    }
 }
 
 ;// CONCATENATED MODULE: ./src/data/text-check.ts
@@ -12905,6 +15801,1819 @@ function splitHeader(text, delimiter) {
         .replace(/\r$/, '')
         .split(delimiter)
         .map((s) => s.trim().replace(/^"(.*)"$/, '$1'));
+}
+
+;// CONCATENATED MODULE: ./src/data/where.ts
+/** Where in the data file something is, for messages a user can follow in a text editor. */
+
+/** `column 4 "kurtosis"`: both the number an editor shows and the header name. */
+function columnLabel(column, name) {
+    return name === undefined || name === '' ? `column ${column}` : `column ${column} "${name}"`;
+}
+/** An error at a line (1-based, as an editor counts) and column (1-based field number). */
+function dataError(file, line, column, message, key) {
+    const at = column === undefined ? `${file.shown}:${line}` : `${file.shown}:${line}:${column}`;
+    return new errors_UserError(`${at}: ${message}`, { file: file.path, line, column, key });
+}
+/** Quote a value from the file for a message, keeping it short and visible. */
+function shownValue(value) {
+    const cut = value.length > 40 ? `${value.slice(0, 37)}...` : value;
+    return JSON.stringify(cut);
+}
+/**
+ * A problem whose fix belongs in the config (a column name that is not in the header).
+ * Thrown where the config position is not at hand; loadData turns it into a UserError
+ * at the key's line and column in the config file.
+ */
+class ConfigKeyProblem extends Error {
+    key;
+    detail;
+    constructor(key, detail) {
+        super(`${key}: ${detail}`);
+        this.key = key;
+        this.detail = detail;
+        this.name = 'ConfigKeyProblem';
+    }
+}
+
+;// CONCATENATED MODULE: ./src/model/score-csv.ts
+/**
+ * Scores the rows of a CSV file with a model, streaming: the columns the model reads are found
+ * by name in the header, every cell is read as the training data were (the same strict numbers,
+ * the same standardisation and one-hot encoding), and a cell the model cannot take (a missing
+ * column, a value that is not a number, a category it never saw) is an error naming the file,
+ * the line and the column. With the target column present, the model's metric on those rows is
+ * computed the way the report computes it.
+ */
+
+
+
+
+
+
+
+
+
+
+
+/** Rows encoded and run together (memory stays bounded whatever the file's size). */
+const BATCH = 4096;
+/** Reads `file` and hands each batch of predictions to `onBatch`, in file order. */
+async function scoreCsv(model, file, onBatch, delimiter = ',') {
+    const D = model.network.inputs;
+    const K = model.network.outputs;
+    const features = model.encoding.features;
+    const target = model.encoding.target;
+    const classes = target.classes ?? [];
+    const x = new Float64Array(BATCH * D);
+    const truthClass = new Int32Array(BATCH);
+    const truthValue = new Float64Array(BATCH);
+    let columns = null;
+    let targetColumn = null;
+    let filled = 0;
+    let rows = 0;
+    let correct = 0;
+    let se = 0;
+    let ae = 0;
+    let maxAe = 0;
+    let nextLine = 1;
+    const parsed = { value: 0 };
+    const flush = () => {
+        if (filled === 0)
+            return;
+        const out = predict_predict(model.network, x.subarray(0, filled * D), filled);
+        const cls = new Int32Array(filled);
+        const outputs = new Float64Array(filled * K);
+        for (let p = 0; p < filled; p++) {
+            if (model.task === 'regression') {
+                outputs[p] = out[p] * target.std + target.mean;
+            }
+            else if (K === 1) {
+                outputs[p] = out[p];
+                cls[p] = out[p] > 0.5 ? 1 : 0;
+            }
+            else {
+                let best = 0;
+                for (let k = 0; k < K; k++) {
+                    outputs[p * K + k] = out[p * K + k];
+                    if (out[p * K + k] > out[p * K + best])
+                        best = k;
+                }
+                cls[p] = best;
+            }
+            if (targetColumn !== null) {
+                if (model.task === 'classification') {
+                    if (cls[p] === truthClass[p])
+                        correct++;
+                }
+                else {
+                    const d = Math.abs(outputs[p] - truthValue[p]);
+                    se += d * d;
+                    ae += d;
+                    if (d > maxAe || d !== d)
+                        maxAe = d;
+                }
+            }
+        }
+        onBatch({ rows: filled, classes: cls, outputs });
+        filled = 0;
+    };
+    const number = (text, line, col) => {
+        const kind = classifyNumber(text, parsed);
+        if (kind !== NumberKind.Finite) {
+            throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)}: expected a finite number, found ${quote(text)}`);
+        }
+        return parsed.value;
+    };
+    const onRecord = (record) => {
+        const line = nextLine;
+        nextLine += 1 + record.reduce((n, v) => n + (v.match(/\n/g)?.length ?? 0), 0);
+        if (record.length === 1 && record[0] === '')
+            return;
+        if (columns === null) {
+            const at = new Map(record.map((name, i) => [name, i]));
+            columns = features.map((f) => {
+                const field = at.get(f.name);
+                if (field === undefined) {
+                    throw dataError(file, line, undefined, `expected the column ${quote(f.name)} the model reads, found only ${record.map((c) => quote(c, 40)).join(', ')}`);
+                }
+                return { field, name: f.name };
+            });
+            const t = at.get(target.name);
+            targetColumn = t === undefined ? null : { field: t, name: target.name };
+            return;
+        }
+        const cols = columns;
+        let c = filled * D;
+        features.forEach((f, i) => {
+            const col = cols[i];
+            const text = (record[col.field] ?? '').trim();
+            if (text === '')
+                throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)} is empty; the model needs a value`);
+            if (f.kind === 'numeric') {
+                x[c++] = standardise(number(text, line, col), f.mean, f.std);
+            }
+            else {
+                const k = f.categories.indexOf(text);
+                if (k < 0) {
+                    throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)}: the category ${quote(text)} is not one the model was trained on (${f.categories.map((v) => quote(v, 30)).join(', ')})`);
+                }
+                for (let j = 0; j < f.categories.length; j++)
+                    x[c + j] = j === k ? 1 : 0;
+                c += f.categories.length;
+            }
+        });
+        if (targetColumn !== null) {
+            const col = targetColumn;
+            const text = (record[col.field] ?? '').trim();
+            if (model.task === 'regression')
+                truthValue[filled] = number(text, line, col);
+            else {
+                let k = classes.indexOf(text);
+                // Numeric class labels are kept as the number's shortest text ("1", not "1.0").
+                if (k < 0 && classifyNumber(text, parsed) === NumberKind.Finite)
+                    k = classes.indexOf(String(parsed.value));
+                if (k < 0) {
+                    throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)} (the target): the class ${quote(text)} is not one the model knows`);
+                }
+                truthClass[filled] = k;
+            }
+        }
+        filled++;
+        rows++;
+        if (filled === BATCH)
+            flush();
+    };
+    const parser = parse({
+        delimiter,
+        bom: true,
+        trim: true,
+        skip_empty_lines: false,
+        record_delimiter: ['\r\n', '\n'],
+        relax_column_count: true,
+    });
+    const sink = new external_node_stream_namespaceObject.Writable({
+        objectMode: true,
+        write(record, _encoding, done) {
+            try {
+                onRecord(record);
+            }
+            catch (error) {
+                done(error);
+                return;
+            }
+            done();
+        },
+    });
+    try {
+        await (0,external_node_stream_promises_namespaceObject.pipeline)((0,external_node_fs_namespaceObject.createReadStream)(file.path), new TextCheck(delimiter), parser, sink);
+    }
+    catch (error) {
+        if (error instanceof errors_UserError)
+            throw error;
+        if (error instanceof NotTextError) {
+            throw dataError(file, error.where.line, error.where.column, `expected UTF-8 text, found the byte ${error.where.bytes}; save the file as CSV (UTF-8)`);
+        }
+        const code = error.code;
+        if (code === 'ENOENT')
+            throw new errors_UserError(`${file.shown}: the data file does not exist`, { file: file.path });
+        if (code === 'EISDIR')
+            throw new errors_UserError(`${file.shown}: is a folder; expected a CSV file`, { file: file.path });
+        if (typeof code === 'string' && code.startsWith('CSV_')) {
+            throw dataError(file, nextLine, undefined, `the row starting on this line cannot be read as CSV: ${error.message}`);
+        }
+        throw error;
+    }
+    flush();
+    if (columns === null)
+        throw dataError(file, 1, 1, 'the file is empty; expected a header row naming the columns');
+    if (targetColumn === null || rows === 0)
+        return { rows, metric: null };
+    const metric = model.target.metric;
+    if (metric === 'accuracy')
+        return { rows, metric: correct / rows };
+    return { rows, metric: metric === 'rmse' ? Math.sqrt(se / rows) : metric === 'mae' ? ae / rows : maxAe };
+}
+
+;// CONCATENATED MODULE: ./src/cli/model-commands.ts
+/**
+ * The commands that work on a model file (written by `check --model` or the action's `model`
+ * output): `export` writes firmware source, `predict` scores the rows of a CSV file.
+ */
+
+
+
+
+
+
+
+
+
+
+
+
+async function readModel(root, path) {
+    const file = (0,external_node_path_namespaceObject.resolve)(root, path);
+    const shown = displayPath(root, file);
+    let text;
+    try {
+        text = await (0,promises_namespaceObject.readFile)(file, 'utf8');
+    }
+    catch (e) {
+        const code = e.code;
+        if (code === 'ENOENT')
+            throw new errors_UserError(`${shown}: model file not found`, { file: shown });
+        if (code === 'EISDIR')
+            throw new errors_UserError(`${shown}: expected a model file, found a folder`, { file: shown });
+        throw new errors_UserError(`${shown}: the model file cannot be read (${code ?? 'unknown error'})`, { file: shown });
+    }
+    return parseModel(text, shown);
+}
+/** `export MODEL.json --format c --out DIR [--name NAME]`: NAME.h and NAME.c in DIR. */
+async function runExport(root, args, flags) {
+    if (flags.format !== 'c')
+        throw new UsageError(`export: --format: expected c, found ${quote(flags.format ?? '')}`);
+    const model = await readModel(root, args[0]);
+    if (model.int8 === null) {
+        throw new errors_UserError(`${args[0]}: the model has no int8 form (it was written by an older neuron-budget); run check --model again to write one with it`);
+    }
+    const name = flags.name ?? DEFAULT_C_NAME;
+    const dir = (0,external_node_path_namespaceObject.resolve)(root, flags.out ?? '.');
+    const info = await (0,promises_namespaceObject.stat)(dir).catch(() => null);
+    if (info !== null && !info.isDirectory())
+        throw new errors_UserError(`export: --out ${escapeText(displayPath(root, dir))} is not a folder`);
+    if (info === null)
+        await (0,promises_namespaceObject.mkdir)(dir, { recursive: true });
+    const files = exportC({ task: model.task, encoding: model.encoding, network: model.network, int8: model.int8 }, name, {
+        toolVersion: model.provenance?.tool.version ?? TOOL_VERSION,
+        dataFingerprint: model.provenance?.data ?? 'unknown (a model of version 1)',
+        config: model.provenance?.config ?? 'unknown (a model of version 1)',
+    });
+    await writeOutput((0,external_node_path_namespaceObject.join)(dir, files.headerFile), files.header, 'header', root);
+    await writeOutput((0,external_node_path_namespaceObject.join)(dir, files.sourceFile), files.source, 'source', root);
+    return `wrote ${escapeText(displayPath(root, (0,external_node_path_namespaceObject.join)(dir, files.headerFile)))} and ${escapeText(displayPath(root, (0,external_node_path_namespaceObject.join)(dir, files.sourceFile)))}`;
+}
+/** A CSV field: quoted when it holds a delimiter, a quote or a line break. */
+function csvField(s) {
+    return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+/**
+ * `predict MODEL.json DATA.csv [--out FILE]`: one CSV row per data row, the prediction and then
+ * one probability column per class (regression: the predicted value). With the target column in
+ * the data, the model's metric on those rows goes to stderr.
+ */
+async function runPredict(root, args, flags, write) {
+    const model = await readModel(root, args[0]);
+    const dataPath = (0,external_node_path_namespaceObject.resolve)(root, args[1]);
+    const file = { path: dataPath, shown: displayPath(root, dataPath) };
+    const labels = model.encoding.target.classes ?? [];
+    const K = model.network.outputs;
+    const header = model.task === 'regression' ? ['prediction'] : ['prediction', ...labels.map((l) => `p(${l})`)];
+    const lines = [header.map(csvField).join(',')];
+    const outPath = flags.out === undefined ? null : (0,external_node_path_namespaceObject.resolve)(root, flags.out);
+    const emit = (line) => {
+        if (outPath === null)
+            write(`${line}\n`);
+        else
+            lines.push(line);
+    };
+    if (outPath === null)
+        write(`${lines[0]}\n`);
+    const scored = await scoreCsv(model, file, (batch) => {
+        for (let p = 0; p < batch.rows; p++) {
+            if (model.task === 'regression') {
+                emit(String(batch.outputs[p]));
+                continue;
+            }
+            const probs = K === 1 ? [1 - batch.outputs[p], batch.outputs[p]] : Array.from(batch.outputs.subarray(p * K, p * K + K));
+            emit([csvField(labels[batch.classes[p]]), ...probs.map(String)].join(','));
+        }
+    });
+    if (outPath !== null)
+        await writeOutput(outPath, `${lines.join('\n')}\n`, 'predictions', root);
+    const where = outPath === null ? '' : ` to ${escapeText(displayPath(root, outPath))}`;
+    const metric = scored.metric === null ? '' : `; ${model.target.metric} ${formatMetric(scored.metric)} on these rows`;
+    return `scored ${scored.rows} rows${where}${metric}`;
+}
+
+;// CONCATENATED MODULE: ./src/report/progress.ts
+const PROGRESS_INTERVAL_MS = 5000;
+/** @testOnly */
+function progressLine(e) {
+    const best = e.best === null ? 'none yet' : String(Number(e.best.toPrecision(4)));
+    return `${e.phase}: width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}, best so far ${best}`;
+}
+/**
+ * Returns a progress handler that prints through `print`, at most once per `intervalMs`
+ * (the first event always prints). `now` is injectable for tests.
+ */
+function throttledProgress(print, intervalMs = PROGRESS_INTERVAL_MS, now = Date.now) {
+    let last = -Infinity;
+    return (e) => {
+        const t = now();
+        if (t - last < intervalMs)
+            return;
+        last = t;
+        print(progressLine(e));
+    };
+}
+
+;// CONCATENATED MODULE: ./src/cli/progress.ts
+/** Search progress on stderr: one line redrawn in place on a terminal; elsewhere a plain line every few seconds. */
+
+function progressPrinter(stream) {
+    if (!stream.isTTY) {
+        // The same throttled line the action logs: the first event at once, then one every few seconds.
+        const print = throttledProgress((line) => stream.write(`progress: ${line}\n`));
+        return { onProgress: print, done: () => undefined };
+    }
+    let last = 0;
+    let drawn = false;
+    return {
+        onProgress: (e) => {
+            const now = performance.now();
+            if (now - last < 100)
+                return; // display only: at most ten redraws a second
+            last = now;
+            const best = e.best === null ? '' : ` · best ${e.best.toFixed(4)}`;
+            stream.write(`\r\x1b[2K${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`);
+            drawn = true;
+        },
+        done: () => {
+            if (drawn)
+                stream.write('\r\x1b[2K');
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/cli/usage.ts
+/** The help text of the command line. */
+
+
+function usage(command) {
+    if (command !== null) {
+        const spec = COMMANDS[command];
+        const lines = [
+            `${TOOL_NAME} ${command}: ${spec.summary}`,
+            '',
+            `usage: ${TOOL_NAME} ${command}${(spec.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`,
+            '',
+            'options:',
+            ...spec.flags.map((f) => `  --${`${f} ${FLAGS[f].value}`.padEnd(16)}${FLAGS[f].help}`),
+            '',
+            exitCodesText(),
+        ];
+        return lines.join('\n');
+    }
+    return [
+        `${TOOL_NAME} ${TOOL_VERSION}: finds the smallest hidden-layer width that reaches`,
+        'your target, and checks it against a committed baseline and a device budget.',
+        '',
+        'usage:',
+        ...Object.entries(COMMANDS).map(([c, s]) => `  ${TOOL_NAME} ${c.padEnd(9)}${(s.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`),
+        `  ${TOOL_NAME} COMMAND --help   options of one command`,
+        `  ${TOOL_NAME} --version`,
+        '',
+        'commands:',
+        ...Object.entries(COMMANDS).map(([c, s]) => `  ${c.padEnd(10)}${s.summary}`),
+        '',
+        'The current folder is the workspace. Paths in the config file resolve against',
+        "the config file's folder and must stay inside the workspace.",
+        "Messages go to stderr; stdout carries only what was asked for (--help, --version, predict's CSV).",
+        '',
+        exitCodesText(),
+    ].join('\n');
+}
+function exitCodesText() {
+    return 'exit codes: 0 pass, improved or new; 1 fail or inconclusive; 2 bad input';
+}
+
+;// CONCATENATED MODULE: ./src/config/spec.ts
+/**
+ * Every config key the validator accepts, with its rule, default and description, as data.
+ * The validator walks this table; a test walks it against schema/neuron-budget.schema.json
+ * so the two cannot drift apart.
+ */
+/** Marks a key the user must give. */
+const spec_REQUIRED = Symbol('required');
+/** Marks a key whose default depends on another key (the description says how). */
+const spec_DERIVED = Symbol('derived');
+/** Largest width the search may try: the gate is for small networks on small devices. */
+const WIDTH_LIMIT = 1024;
+const EPOCH_LIMIT = 10_000_000;
+const spec_CONFIG_SPEC = [
+    {
+        name: 'data',
+        required: true,
+        description: 'The CSV file the networks learn from and how to read it.',
+        keys: [
+            {
+                name: 'path',
+                changesResult: false,
+                rule: { kind: 'path' },
+                default: spec_REQUIRED,
+                description: 'CSV file with a header row, relative to this config file. Must stay inside the workspace.',
+            },
+            {
+                name: 'target',
+                changesResult: true,
+                rule: { kind: 'text' },
+                default: spec_REQUIRED,
+                description: 'Column to predict.',
+            },
+            {
+                name: 'features',
+                changesResult: true,
+                rule: { kind: 'text-list', minItems: 1, nullable: true },
+                default: null,
+                description: 'Columns used as inputs. Default: every column except the target and the ignored ones.',
+            },
+            {
+                name: 'ignore',
+                changesResult: true,
+                rule: { kind: 'text-list', minItems: 0 },
+                default: [],
+                description: 'Columns never used as inputs (identifiers, timestamps).',
+            },
+            {
+                name: 'task',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
+                default: 'auto',
+                description: 'auto: decided from the target column (text or few distinct values: classification).',
+            },
+            {
+                name: 'validation',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
+                default: 0.25,
+                description: 'Fraction of rows (per class) held out to steer training: when a training stops, and whether a pruning step is kept. 0 steers on the training rows.',
+            },
+            {
+                name: 'judging',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: 1, exclusiveMax: true },
+                default: spec_DERIVED,
+                description: 'Fraction of rows (per class) held out to judge whether a network meets the target; they never steer training. Default: 0.2 (at most half of what validation leaves), or 0 when data.validation is 0 (then the target is judged on the training rows). 0 with validation above 0 judges on the validation rows, which is optimistic.',
+            },
+            {
+                name: 'delimiter',
+                changesResult: true,
+                rule: { kind: 'character' },
+                default: ',',
+                description: 'Field separator: one character (write "\\t" in double quotes for a tab).',
+            },
+            {
+                name: 'max-categories',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: 10_000 },
+                default: 20,
+                description: 'Most distinct values a text feature may have; each becomes one input.',
+            },
+            {
+                name: 'missing',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['error', 'drop'] },
+                default: 'error',
+                description: 'An empty feature value: error stops with its location; drop skips the row and counts it.',
+            },
+        ],
+    },
+    {
+        name: 'target',
+        required: true,
+        description: 'What a network must reach on the validation rows.',
+        keys: [
+            {
+                name: 'metric',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
+                default: spec_DERIVED,
+                description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
+            },
+            {
+                name: 'threshold',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
+                default: spec_REQUIRED,
+                description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
+            },
+            {
+                name: 'precision',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['float32', 'int8'] },
+                default: 'float32',
+                description: 'Which form of a network must meet the target: float32, or int8 (its post-training quantised form, as the exported C runs it).',
+            },
+            {
+                name: 'min-recall',
+                changesResult: true,
+                rule: { kind: 'recall', nullable: true },
+                default: null,
+                description: 'Classification: the least recall a network needs besides the metric, for every class (a number) or per named class (a mapping, e.g. bearing_wear: 0.9). null: none.',
+            },
+        ],
+    },
+    {
+        name: 'search',
+        required: false,
+        description: 'How the smallest adequate width is searched for.',
+        keys: [
+            {
+                name: 'min-width',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
+                default: 1,
+                description: 'First width the growth phase tries.',
+            },
+            {
+                name: 'max-width',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT },
+                default: 16,
+                description: 'Last width the growth phase tries; at least min-width.',
+            },
+            {
+                name: 'restarts',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: 1000 },
+                default: 10,
+                description: 'Seeded trainings per width.',
+            },
+            {
+                name: 'required',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: 1000 },
+                default: 3,
+                description: 'Trainings per width that must reach the target for the width to count as adequate; at most restarts.',
+            },
+            {
+                name: 'max-epochs',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+                default: 3000,
+                description: 'Epochs after which one training gives up.',
+            },
+            {
+                name: 'seed',
+                changesResult: true,
+                rule: { kind: 'integer', min: 0, max: 4_294_967_295 },
+                default: 1,
+                description: 'Base seed of every random choice (split, initial weights); same seed, same result.',
+            },
+            {
+                name: 'growth',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['fresh', 'in-place'] },
+                default: 'fresh',
+                description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
+            },
+            {
+                name: 'activation',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['tanh', 'logistic', 'relu'] },
+                default: 'tanh',
+                description: 'Hidden-layer activation function.',
+            },
+            {
+                name: 'optimizer',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['lbfgs', 'irprop+', 'adam', 'backprop'] },
+                default: 'lbfgs',
+                description: 'lbfgs (full-batch L-BFGS with a strong Wolfe line search), irprop+ (full batch), adam, or backprop (backpropagation with momentum).',
+            },
+            {
+                name: 'weight-decay',
+                changesResult: true,
+                rule: { kind: 'number', min: 0, max: 1000 },
+                default: 0.0001,
+                description: 'L2 penalty on the weights (not the biases): the summed loss gains weight-decay/2 × the sum of squared weights. 0 turns it off.',
+            },
+            {
+                name: 'init',
+                changesResult: true,
+                rule: { kind: 'enum', values: ['nguyen-widrow', 'glorot', 'he'], nullable: true },
+                default: null,
+                description: 'Initial weights. Default (null): Nguyen-Widrow for tanh and logistic, He for relu.',
+            },
+            {
+                name: 'check-every',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+                default: 10,
+                description: 'Epochs between checks of the validation rows; at most max-epochs.',
+            },
+            {
+                name: 'patience',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: EPOCH_LIMIT },
+                default: 200,
+                description: 'A training stops when its validation loss has not improved (by 0.1%) for this many epochs: early stopping, and the bound on polishing a network that met the target.',
+            },
+            {
+                name: 'prune',
+                changesResult: true,
+                rule: { kind: 'boolean' },
+                default: true,
+                description: 'Whether to remove hidden neurons from the adequate network while it still reaches the target.',
+            },
+            {
+                name: 'prune-epochs',
+                changesResult: true,
+                rule: { kind: 'integer', min: 0, max: EPOCH_LIMIT },
+                default: 200,
+                description: 'Epochs of retraining after each neuron removed.',
+            },
+            {
+                name: 'time-budget',
+                changesResult: false,
+                rule: { kind: 'number', min: 0, max: 31_536_000, exclusiveMin: true, nullable: true },
+                default: null,
+                description: 'Wall-clock seconds the search may take; when spent the verdict is inconclusive. null: no limit.',
+            },
+            {
+                name: 'max-trainings',
+                changesResult: true,
+                rule: { kind: 'integer', min: 1, max: 100_000_000, nullable: true },
+                default: null,
+                description: 'Most trainings the search may run; when spent the verdict is inconclusive. null: no limit.',
+            },
+            {
+                name: 'workers',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: 256, nullable: true },
+                default: null,
+                description: 'Worker threads. null: one per available CPU core. Results do not depend on it.',
+            },
+        ],
+    },
+    {
+        name: 'gate',
+        required: false,
+        description: 'How the result is judged against the committed baseline and the device budget.',
+        keys: [
+            {
+                name: 'baseline',
+                changesResult: false,
+                rule: { kind: 'path' },
+                default: 'neuron-budget.baseline.json',
+                description: 'Baseline file, relative to this config file. Must stay inside the workspace.',
+            },
+            {
+                name: 'max-width',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: WIDTH_LIMIT, nullable: true },
+                default: null,
+                description: 'Hard device budget: a smallest adequate width above it fails. null: no budget.',
+            },
+            {
+                name: 'max-flash-bytes',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: 1_000_000_000, nullable: true },
+                default: null,
+                description: 'Device budget: flash bytes for the weights of the witness in target.precision form (as the exported C stores them); above it fails. null: no budget.',
+            },
+            {
+                name: 'max-ram-bytes',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: 1_000_000_000, nullable: true },
+                default: null,
+                description: 'Device budget: RAM bytes for the activations of one inference in target.precision form; above it fails. null: no budget.',
+            },
+            {
+                name: 'max-macs',
+                changesResult: false,
+                rule: { kind: 'integer', min: 1, max: 1_000_000_000_000, nullable: true },
+                default: null,
+                description: 'Device budget: multiply-accumulates per inference; above it fails. null: no budget.',
+            },
+            {
+                name: 'allowed-growth',
+                changesResult: false,
+                rule: { kind: 'integer', min: 0, max: WIDTH_LIMIT },
+                default: 0,
+                description: 'Neurons the width may grow over the baseline before the verdict is fail.',
+            },
+            {
+                name: 'metric-tolerance',
+                changesResult: false,
+                rule: { kind: 'number', min: 0, max: Number.MAX_VALUE },
+                // 0.02 is common practice for "noticeably worse" with a few hundred validation rows; no source.
+                default: 0.02,
+                description: 'How much worse the metric at the chosen width may get against the baseline before it is flagged (accuracy: below 1).',
+            },
+        ],
+    },
+];
+
+;// CONCATENATED MODULE: ./src/config/keys.ts
+/** What the key list (spec.ts) implies: how a rule reads in a message, field names, defaults. */
+
+/** "an integer from 1 to 1000", "one of tanh, logistic, relu", … for messages. */
+function describeRule(rule) {
+    const orNull = 'nullable' in rule && rule.nullable ? ', or null' : '';
+    switch (rule.kind) {
+        case 'integer':
+            return `an integer from ${rule.min} to ${rule.max}${orNull}`;
+        case 'number': {
+            const low = rule.exclusiveMin ? `above ${rule.min}` : `of ${rule.min} or more`;
+            if (rule.max === Number.MAX_VALUE)
+                return `a number ${low}${orNull}`;
+            if (rule.exclusiveMax)
+                return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and below ${rule.max}${orNull}`;
+            return `a number ${rule.exclusiveMin ? low : `from ${rule.min}`} and at most ${rule.max}${orNull}`;
+        }
+        case 'enum':
+            return `one of ${rule.values.join(', ')}${orNull}`;
+        case 'boolean':
+            return 'true or false';
+        case 'text':
+            return 'a column name (text)';
+        case 'character':
+            return 'a single character other than a quote or a line break';
+        case 'path':
+            return 'a path relative to the config file';
+        case 'text-list':
+            return `a list of column names${rule.minItems > 0 ? ` (at least ${rule.minItems})` : ''}${orNull}`;
+        case 'recall':
+            return `a recall above 0 and at most 1, or a mapping of class labels to such recalls${orNull}`;
+    }
+}
+/** `min-width` → `minWidth`: how the typed config names a key. */
+function fieldName(key) {
+    return key.replace(/-([a-z])/g, (_, c) => c.toUpperCase());
+}
+/**
+ * A section's documented defaults by typed field name (required and derived keys left out), for
+ * code that builds a config without a file (tests, benchmarks).
+ * @testOnly
+ */
+function sectionDefaults(section) {
+    const spec = CONFIG_SPEC.find((s) => s.name === section);
+    const out = {};
+    for (const key of spec?.keys ?? []) {
+        if (key.default === REQUIRED || key.default === DERIVED)
+            continue;
+        out[fieldName(key.name)] = Array.isArray(key.default) ? [...key.default] : key.default;
+    }
+    return out;
+}
+/** The judging fraction when validation rows are held out (common practice for a hold-out test set; no single source). */
+const DEFAULT_JUDGING = 0.2;
+/** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
+function derivedJudging(validation) {
+    return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
+}
+
+;// CONCATENATED MODULE: ./src/config/build.ts
+/**
+ * From checked values to the typed Config: every key of spec.ts becomes a field of its section
+ * (camelCase), paths become absolute inside the workspace, and the rules between keys are
+ * checked (each error points at the key that was written).
+ */
+
+
+
+
+
+
+function buildConfig(reader, written, file, root) {
+    const baseDir = (0,external_node_path_namespaceObject.dirname)(file);
+    const sections = {};
+    for (const spec of spec_CONFIG_SPEC) {
+        const found = written.values.get(spec.name) ?? new Map();
+        const section = {};
+        for (const key of spec.keys) {
+            const at = found.get(key.name);
+            const value = reader.value(at, key);
+            const field = fieldName(key.name);
+            if (key.rule.kind === 'path' && typeof value === 'string') {
+                section[field] = insidePath(reader, at, root, baseDir, value, `${spec.name}.${key.name}`);
+                section[`${field}AsWritten`] = value;
+            }
+            else {
+                section[field] = value;
+            }
+        }
+        sections[spec.name] = section;
+    }
+    const config = {
+        file,
+        root,
+        data: sections['data'],
+        target: sections['target'],
+        search: sections['search'],
+        gate: sections['gate'],
+        positions: reader.positions(written),
+        metricGiven: written.values.get('target')?.has('metric') ?? false,
+    };
+    checkRules(reader, written, config);
+    return config;
+}
+function insidePath(reader, found, root, baseDir, p, key) {
+    const result = checkInside(root, baseDir, p);
+    if (result.ok)
+        return result.path;
+    if (found)
+        throw reader.valueError(found, `${result.reason}; paths must stay inside the workspace`);
+    throw reader.error(null, key, `the default ${result.reason} (the config file is outside the workspace); set ${key}`);
+}
+/** The rules between keys, each reported at the key the user wrote. */
+function checkRules(reader, written, config) {
+    const at = (section, key) => written.values.get(section)?.get(key);
+    const { data, target, search, gate } = config;
+    for (const [list, name] of [
+        [data.features, 'features'],
+        [data.ignore, 'ignore'],
+    ]) {
+        if (list?.includes(data.target)) {
+            const role = name === 'features' ? 'a feature' : 'ignored';
+            throw reader.valueError(at('data', name), `lists the target column ${quote(data.target)}; the target cannot also be ${role}`);
+        }
+    }
+    const both = data.features?.find((f) => data.ignore.includes(f));
+    if (both !== undefined) {
+        throw reader.valueError(at('data', 'ignore'), `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`);
+    }
+    if (data.judging === undefined)
+        data.judging = derivedJudging(data.validation);
+    if (data.validation + data.judging >= 1) {
+        const found = at('data', 'judging') ?? at('data', 'validation');
+        throw reader.valueError(found, `expected data.validation + data.judging below 1 (some rows must be left to train on), found ${data.validation} + ${data.judging}`);
+    }
+    if (!config.metricGiven)
+        target.metric = defaultMetric(data.task === 'regression' ? 'regression' : 'classification');
+    if (config.metricGiven && data.task !== 'auto' && !metricFitsTask(target.metric, data.task)) {
+        throw reader.valueError(at('target', 'metric'), `data.task is ${data.task}, so expected ${metricsFor(data.task)
+            .join(', ')
+            .replace(/, (?=[^,]*$)/, ' or ')}, found "${target.metric}"`);
+    }
+    const thresholdAt = at('target', 'threshold');
+    if (config.metricGiven || data.task === 'classification')
+        checkThreshold(reader, thresholdAt, target.metric, target.threshold);
+    const searchFound = written.sections.get('search');
+    const ordered = (name, relation, otherName) => {
+        const value = search[fieldName(name)];
+        const other = search[fieldName(otherName)];
+        if (relation === 'at least' ? value >= other : value <= other)
+            return;
+        const mine = at('search', name);
+        if (mine)
+            throw reader.valueError(mine, `expected search.${name} to be ${relation} search.${otherName} (${other}), found ${value}`);
+        // Only the other key was written: blame it, against this key's default.
+        const reverse = relation === 'at least' ? 'at most' : 'at least';
+        const message = `expected search.${otherName} to be ${reverse} search.${name} (${value}, the default), found ${other}`;
+        const theirs = at('search', otherName);
+        if (theirs)
+            throw reader.valueError(theirs, message);
+        throw reader.error(searchFound?.keyNode ?? null, `search.${otherName}`, message);
+    };
+    ordered('max-width', 'at least', 'min-width');
+    ordered('required', 'at most', 'restarts');
+    ordered('check-every', 'at most', 'max-epochs');
+    if (gate.maxWidth !== null && gate.maxWidth < search.minWidth) {
+        throw reader.valueError(at('gate', 'max-width'), `expected at least search.min-width (${search.minWidth}), found ${gate.maxWidth}; every width tried would be over the budget`);
+    }
+    const accuracyKnown = config.metricGiven || data.task === 'classification';
+    if (accuracyKnown && target.metric === 'accuracy' && gate.metricTolerance >= 1) {
+        throw reader.valueError(at('gate', 'metric-tolerance'), `expected a tolerance below 1 for accuracy, found ${gate.metricTolerance}`);
+    }
+}
+/** An accuracy threshold must be a fraction; error thresholds are in the target's own units. */
+function checkThreshold(reader, found, metric, threshold) {
+    if (metric === 'accuracy' && threshold > 1) {
+        throw reader.valueError(found, `expected an accuracy above 0 and at most 1, found ${threshold} (write 95% as 0.95)`);
+    }
+}
+
+// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
+var dist = __nccwpck_require__(8815);
+;// CONCATENATED MODULE: ./src/config/reader.ts
+/**
+ * The YAML side of the config: parses the text once, walks it against the key list in spec.ts,
+ * and checks each value against its rule. Every error names the file, the line and column, and
+ * the key, and says what was expected and what was found. Where each key is written is kept, so
+ * errors found later (after the data are read) still point at the right line.
+ */
+
+
+
+
+
+
+/** YAML tags a config may carry: the core schema's plain types. Anything else is refused. */
+const CORE_TAGS = new Set(['str', 'int', 'float', 'bool', 'null', 'seq', 'map'].map((t) => `tag:yaml.org,2002:${t}`));
+const NUMBER_TAGS = new Set(['tag:yaml.org,2002:int', 'tag:yaml.org,2002:float']);
+const reader_DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+class ConfigReader {
+    text;
+    shown;
+    lines = new dist/* LineCounter */.HN();
+    doc;
+    constructor(text, 
+    /** The file as named in messages. */
+    shown) {
+        this.text = text;
+        this.shown = shown;
+        this.doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter: this.lines, uniqueKeys: true, prettyErrors: false });
+    }
+    /** Checks the syntax and the sections and keys against spec.ts; values are checked by `value`. */
+    read() {
+        this.checkSyntax();
+        this.checkTags();
+        const top = this.doc.contents;
+        if (top === null || ((0,dist/* isScalar */.jn)(top) && top.value === null)) {
+            throw this.error(null, null, 'the config file is empty; expected a mapping with the sections data, target, search and gate');
+        }
+        if (!(0,dist/* isMap */.jh)(top)) {
+            throw this.error(top, null, `expected a mapping with the sections data, target, search and gate, found ${this.describe(top)}`);
+        }
+        const sections = new Map();
+        for (const pair of top.items) {
+            const name = this.keyName(pair, '');
+            const spec = spec_CONFIG_SPEC.find((s) => s.name === name);
+            if (!spec) {
+                const names = spec_CONFIG_SPEC.map((s) => s.name);
+                throw this.error(pair.key, name, `unknown section${didYouMean(name, names)}; the sections are ${names.join(', ')}`);
+            }
+            sections.set(name, { node: this.deref(pair.value), keyNode: pair.key, key: name });
+        }
+        const values = new Map();
+        for (const spec of spec_CONFIG_SPEC)
+            values.set(spec.name, this.readSection(spec, sections.get(spec.name)));
+        return { sections, values };
+    }
+    /** Where every written section and key is (dotted key → line and column of the key). */
+    positions(written) {
+        const out = new Map();
+        const add = (found) => {
+            const { line, col } = this.lines.linePos(found.keyNode.range?.[0] ?? 0);
+            out.set(found.key, { line, column: col });
+        };
+        for (const found of written.sections.values())
+            add(found);
+        for (const section of written.values.values())
+            for (const found of section.values())
+                add(found);
+        return out;
+    }
+    // ---- syntax and locations -------------------------------------------------------
+    checkSyntax() {
+        const first = this.doc.errors[0];
+        if (!first)
+            return;
+        const offset = first.pos[0];
+        if (first.code === 'MULTIPLE_DOCS') {
+            throw this.errorAt(offset, null, 'expected one YAML document, found a second one (a "---" line)');
+        }
+        if (first.code === 'DUPLICATE_KEY') {
+            const key = /^\s*["']?([^"':\n]*)/.exec(this.text.slice(offset))?.[1]?.trim() ?? '';
+            throw this.errorAt(offset, null, `key ${quote(key)} appears twice in the same mapping; keep one`);
+        }
+        const reason = first.message
+            .replace(/ at line \d+, column \d+[\s\S]*$/, '')
+            .replace(/\s+/g, ' ')
+            .trim();
+        throw this.errorAt(offset, null, `YAML syntax error: ${reason}`);
+    }
+    /**
+     * Refuses tags outside the core schema (`!custom`, `!!binary`, `!!set`, …), which would
+     * otherwise pass silently as plain text. `!!float 1` and `!!int 3` are numbers, as written.
+     */
+    checkTags() {
+        (0,dist/* visit */.YR)(this.doc, {
+            Node: (_key, node) => {
+                if (!(0,dist/* isScalar */.jn)(node) && !(0,dist/* isMap */.jh)(node) && !(0,dist/* isSeq */.oP)(node))
+                    return;
+                const tag = node.tag;
+                if (tag === undefined)
+                    return;
+                if (!CORE_TAGS.has(tag)) {
+                    const shown = tag.startsWith('tag:yaml.org,2002:') ? `!!${tag.slice('tag:yaml.org,2002:'.length)}` : tag;
+                    throw this.errorAt(this.tagOffset(node), null, `unsupported YAML tag ${quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`);
+                }
+                if ((0,dist/* isScalar */.jn)(node) && NUMBER_TAGS.has(tag) && typeof node.value === 'string') {
+                    const text = node.value.trim();
+                    if (!reader_DECIMAL.test(text)) {
+                        throw this.error(node, null, `the tag ${tag.endsWith('int') ? '!!int' : '!!float'} needs a number, found ${quote(node.value)}`);
+                    }
+                    node.value = Number(text);
+                }
+            },
+        });
+    }
+    /** Where a node's tag is written (the parser's range starts at the value, after the tag). */
+    tagOffset(node) {
+        const start = node.range?.[0] ?? 0;
+        const lineStart = this.text.lastIndexOf('\n', start - 1) + 1;
+        const bang = this.text.lastIndexOf('!', start);
+        return bang >= lineStart ? (this.text[bang - 1] === '!' ? bang - 1 : bang) : start;
+    }
+    errorAt(offset, key, message) {
+        const { line, col } = this.lines.linePos(Math.min(offset, this.text.length));
+        const prefix = key === null ? '' : `${key}: `;
+        return new errors_UserError(`${this.shown}:${line}:${col}: ${prefix}${message}`, {
+            file: this.shown,
+            line,
+            column: col,
+            ...(key === null ? {} : { key }),
+        });
+    }
+    /** An error located at `node` (or the file's start when null). */
+    error(node, key, message) {
+        return this.errorAt(node?.range?.[0] ?? 0, key, message);
+    }
+    /** Locates a bad value: at the value itself, or at its key when the value is empty. */
+    valueError(found, message) {
+        const empty = found.node === null || ((0,dist/* isScalar */.jn)(found.node) && found.node.value === null && found.node.source === '');
+        return this.error(empty ? found.keyNode : found.node, found.key, message);
+    }
+    keyName(pair, prefix) {
+        const key = pair.key;
+        if (!(0,dist/* isScalar */.jn)(key) || (typeof key.value !== 'string' && typeof key.value !== 'number')) {
+            throw this.error(key, null, `expected a key name${prefix ? ` in ${prefix.slice(0, -1)}` : ''}, found ${this.describe(key)}`);
+        }
+        return String(key.value);
+    }
+    deref(node) {
+        if (node && (0,dist/* isAlias */.Vj)(node))
+            return node.resolve(this.doc) ?? null;
+        return node;
+    }
+    describe(node) {
+        if (node === null)
+            return 'nothing';
+        if ((0,dist/* isMap */.jh)(node))
+            return 'a mapping';
+        if ((0,dist/* isSeq */.oP)(node))
+            return 'a list';
+        if ((0,dist/* isScalar */.jn)(node)) {
+            const v = node.value;
+            if (v === null)
+                return node.source === '' || node.source === undefined ? 'nothing' : `null`;
+            if (typeof v === 'string')
+                return quote(v);
+            if (typeof v === 'number' || typeof v === 'boolean' || typeof v === 'bigint')
+                return String(v);
+        }
+        return 'a value of an unsupported type';
+    }
+    // ---- sections and keys ----------------------------------------------------------
+    readSection(spec, section) {
+        const out = new Map();
+        if (!section || section.node === null || ((0,dist/* isScalar */.jn)(section.node) && section.node.value === null)) {
+            if (spec.required) {
+                const missing = spec.keys.filter((k) => k.default === spec_REQUIRED).map((k) => `${spec.name}.${k.name}`);
+                throw this.error(section?.keyNode ?? null, spec.name, `section is required (with ${missing.join(' and ')}); ${spec.description}`);
+            }
+            return out;
+        }
+        if (!(0,dist/* isMap */.jh)(section.node)) {
+            throw this.error(section.node, spec.name, `expected a mapping of ${spec.name} settings, found ${this.describe(section.node)}`);
+        }
+        const names = spec.keys.map((k) => k.name);
+        for (const pair of section.node.items) {
+            const name = this.keyName(pair, `${spec.name}.`);
+            const full = `${spec.name}.${name}`;
+            if (!names.includes(name)) {
+                throw this.error(pair.key, full, `unknown key${didYouMean(name, names)}; ${spec.name} accepts ${names.join(', ')}`);
+            }
+            out.set(name, { node: this.deref(pair.value), keyNode: pair.key, key: full });
+        }
+        for (const key of spec.keys) {
+            if (key.default === spec_REQUIRED && !out.has(key.name)) {
+                throw this.error(section.keyNode, `${spec.name}.${key.name}`, `required key is missing (${key.description})`);
+            }
+        }
+        return out;
+    }
+    /** The value of one key checked against its rule, or its default (undefined for required and derived keys). */
+    value(found, spec) {
+        if (!found) {
+            if (spec.default === spec_REQUIRED || spec.default === spec_DERIVED)
+                return undefined;
+            return Array.isArray(spec.default) ? [...spec.default] : spec.default;
+        }
+        return this.checkRule(found, spec);
+    }
+    /** target.min-recall: one floor for every class, or floors for named classes. */
+    recallRule(found, node, expected) {
+        const floor = (value) => typeof value === 'number' && value > 0 && value <= 1;
+        if (node !== null && (0,dist/* isScalar */.jn)(node)) {
+            if (!floor(node.value))
+                throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
+            return { every: node.value };
+        }
+        if (node === null || !(0,dist/* isMap */.jh)(node) || node.items.length === 0) {
+            throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
+        }
+        const classes = [];
+        for (const pair of node.items) {
+            const label = this.keyName(pair, `${found.key}.`);
+            const value = this.deref(pair.value);
+            const v = value !== null && (0,dist/* isScalar */.jn)(value) ? value.value : undefined;
+            if (!floor(v)) {
+                throw this.error(value ?? pair.key, `${found.key}.${label}`, `expected a recall above 0 and at most 1, found ${this.describe(value)}`);
+            }
+            classes.push({ label, min: v });
+        }
+        return { classes };
+    }
+    checkRule(found, spec) {
+        const rule = spec.rule;
+        const node = found.node;
+        const scalar = node !== null && (0,dist/* isScalar */.jn)(node) ? node.value : undefined;
+        const isNull = node === null || ((0,dist/* isScalar */.jn)(node) && node.value === null);
+        const expected = describeRule(rule);
+        const bad = () => this.valueError(found, `expected ${expected}, found ${this.describe(node)}`);
+        if (isNull && 'nullable' in rule && rule.nullable)
+            return null;
+        switch (rule.kind) {
+            case 'integer':
+            case 'number': {
+                if (typeof scalar !== 'number' || !Number.isFinite(scalar))
+                    throw bad();
+                if (rule.kind === 'integer' && !Number.isInteger(scalar))
+                    throw bad();
+                const exMin = rule.kind === 'number' && rule.exclusiveMin;
+                const exMax = rule.kind === 'number' && rule.exclusiveMax;
+                if (scalar < rule.min || (exMin && scalar === rule.min))
+                    throw bad();
+                if (scalar > rule.max || (exMax && scalar === rule.max))
+                    throw bad();
+                return scalar;
+            }
+            case 'enum': {
+                if (typeof scalar !== 'string' || !rule.values.includes(scalar)) {
+                    const hint = typeof scalar === 'string' ? didYouMean(scalar, rule.values) : '';
+                    throw this.valueError(found, `expected ${expected}, found ${this.describe(node)}${hint}`);
+                }
+                return scalar;
+            }
+            case 'boolean': {
+                if (typeof scalar !== 'boolean')
+                    throw bad();
+                return scalar;
+            }
+            case 'text':
+            case 'path': {
+                if (typeof scalar === 'number' && rule.kind === 'text') {
+                    throw this.valueError(found, `expected ${expected}, found the number ${this.describe(node)} (put a column name that looks like a number in quotes)`);
+                }
+                if (typeof scalar !== 'string' || scalar.trim() === '')
+                    throw bad();
+                return scalar;
+            }
+            case 'character': {
+                if (typeof scalar !== 'string' || [...scalar].length !== 1 || /["\r\n]/.test(scalar))
+                    throw bad();
+                return scalar;
+            }
+            case 'text-list': {
+                if (node === null || !(0,dist/* isSeq */.oP)(node))
+                    throw bad();
+                if (node.items.length < rule.minItems)
+                    throw this.valueError(found, `expected ${expected}, found an empty list`);
+                const seen = new Set();
+                const out = [];
+                for (const raw of node.items) {
+                    const item = this.deref(raw);
+                    const v = item !== null && (0,dist/* isScalar */.jn)(item) ? item.value : undefined;
+                    if (typeof v !== 'string' || v.trim() === '') {
+                        const hint = typeof v === 'number' ? ' (put a column name that looks like a number in quotes)' : '';
+                        throw this.error(item ?? node, found.key, `expected column names as text, found ${this.describe(item)}${hint}`);
+                    }
+                    if (seen.has(v))
+                        throw this.error(item, found.key, `column ${quote(v)} is listed twice`);
+                    seen.add(v);
+                    out.push(v);
+                }
+                return out;
+            }
+            case 'recall':
+                return this.recallRule(found, node, expected);
+        }
+    }
+}
+
+;// CONCATENATED MODULE: ./src/config/index.ts
+/**
+ * The config stage: the YAML file → a typed Config with every default filled in (reader.ts
+ * walks the YAML against spec.ts, build.ts makes the typed config and checks the rules between
+ * keys). Errors found after the data are read point at the key through the positions kept here.
+ */
+
+
+
+
+
+
+
+
+
+
+
+/** A config is a few dozen lines; anything this big is not one (and parsing it could take minutes). @testOnly */
+const MAX_CONFIG_BYTES = 256 * 1024;
+async function loadConfig(configPath, root) {
+    const file = (0,external_node_path_namespaceObject.resolve)(root, configPath);
+    const shown = displayPath(root, file);
+    let text;
+    try {
+        const info = await (0,promises_namespaceObject.stat)(file);
+        if (info.isFile() && info.size > MAX_CONFIG_BYTES) {
+            throw new errors_UserError(`${shown}: the config file has ${formatCount(info.size)} bytes; a config may have at most ${formatCount(MAX_CONFIG_BYTES)} (is this the right file?)`, { file: shown });
+        }
+        text = await (0,promises_namespaceObject.readFile)(file, 'utf8');
+    }
+    catch (error) {
+        if (error instanceof errors_UserError)
+            throw error;
+        const code = error.code;
+        if (code === 'ENOENT')
+            throw new errors_UserError(`${shown}: config file not found (looked for ${file})`, { file: shown });
+        if (code === 'EISDIR')
+            throw new errors_UserError(`${shown}: expected a YAML config file, found a folder`, { file: shown });
+        if (code === 'EACCES')
+            throw new errors_UserError(`${shown}: config file cannot be read (permission denied)`, { file: shown });
+        throw error;
+    }
+    return parseConfig(text, { file, root });
+}
+/** Validates config text as if it were the file `file` (absolute) inside workspace `root`. @testOnly */
+function parseConfig(text, where) {
+    const file = (0,external_node_path_namespaceObject.resolve)(where.file);
+    const root = (0,external_node_path_namespaceObject.resolve)(where.root);
+    // Editors do not count a byte-order mark as a column; neither do we.
+    const reader = new ConfigReader(text.replace(/^\uFEFF/, ''), displayPath(root, file));
+    return buildConfig(reader, reader.read(), file, root);
+}
+/**
+ * A UserError about a config key found after validation (the data showed the problem): at the
+ * key's line and column when it is written, else at its section's, else at the file.
+ */
+function configKeyError(config, key, detail) {
+    const shown = displayPath(config.root, config.file);
+    const at = config.positions.get(key) ?? config.positions.get(key.split('.')[0]) ?? null;
+    const where = at === null ? shown : `${shown}:${at.line}:${at.column}`;
+    return new errors_UserError(`${where}: ${key}: ${detail}`, {
+        file: shown,
+        key,
+        ...(at ? { line: at.line, column: at.column } : {}),
+    });
+}
+/**
+ * What the config could not settle before the data were read: the metric and recall floors,
+ * which depend on the task and the class labels found.
+ */
+function settleTarget(config, task, classes) {
+    const settled = settleMetric(config, task);
+    return { ...settled, target: { ...settled.target, recallFloors: recallFloors(settled, task, classes) } };
+}
+/** target.min-recall as one floor per class index; each named class must be one the data have. */
+function recallFloors(config, task, classes) {
+    const rule = config.target.minRecall ?? null;
+    if (rule === null)
+        return null;
+    if (task !== 'classification' || classes === null) {
+        throw configKeyError(config, 'target.min-recall', `the target column ${quote(config.data.target)} was read as regression; recall floors need classes (remove target.min-recall)`);
+    }
+    if ('every' in rule)
+        return classes.map(() => rule.every);
+    const floors = classes.map(() => 0);
+    for (const { label, min } of rule.classes) {
+        const i = classes.indexOf(label);
+        if (i < 0) {
+            throw configKeyError(config, 'target.min-recall', `names the class ${quote(label)}, which the target column ${quote(config.data.target)} does not have${didYouMean(label, classes)}; its classes are ${classes.map((c) => quote(c)).join(', ')}`);
+        }
+        floors[i] = min;
+    }
+    return floors;
+}
+/**
+ * With data.task auto the task is only known after reading: the metric follows it unless the
+ * config names one, and a named metric must suit it.
+ */
+function settleMetric(config, task) {
+    const target = config.target;
+    if (!config.metricGiven) {
+        const metric = defaultMetric(task);
+        if (metric === 'accuracy' && target.threshold > 1) {
+            throw configKeyError(config, 'target.threshold', `the target column ${quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
+        }
+        if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
+            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
+        }
+        return { ...config, target: { ...target, metric } };
+    }
+    if (metricFitsTask(target.metric, task))
+        return config;
+    const hint = task === 'classification'
+        ? 'set target.metric to accuracy, or data.task to regression'
+        : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
+    throw configKeyError(config, 'target.metric', `the target column ${quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
+}
+
+;// CONCATENATED MODULE: ./src/data/columns.ts
+
+
+/** Most classes a classification target may have (a practical cap, no source). */
+const MAX_CLASSES = 1000;
+/** Resolves data.target / data.features / data.ignore against the header. */
+function chooseColumns(header, config, file) {
+    const data = config.data;
+    const index = new Map(header.map((name, i) => [name, i]));
+    const find = (name, key) => {
+        const i = index.get(name);
+        if (i !== undefined)
+            return i;
+        const guess = nearest(name, header);
+        const hint = guess === null ? '.' : ` (did you mean "${guess}"?).`;
+        throw new ConfigKeyProblem(key, `expected a column of ${file.shown}, found "${name}", which its header (line 1) does not have${hint} ` +
+            `The columns are: ${header.join(', ')}`);
+    };
+    const target = find(data.target, 'data.target');
+    const ignored = new Set();
+    for (const name of data.ignore) {
+        const i = find(name, 'data.ignore');
+        if (i === target) {
+            throw new ConfigKeyProblem('data.ignore', `lists "${name}", which is the target column (data.target)`);
+        }
+        ignored.add(i);
+    }
+    let features;
+    if (data.features === null) {
+        features = header.map((_, i) => i).filter((i) => i !== target && !ignored.has(i));
+    }
+    else {
+        features = [];
+        for (const name of data.features) {
+            const i = find(name, 'data.features');
+            if (i === target) {
+                throw new ConfigKeyProblem('data.features', `lists "${name}", which is the target column (data.target)`);
+            }
+            if (ignored.has(i)) {
+                throw new ConfigKeyProblem('data.features', `lists "${name}", which data.ignore also lists`);
+            }
+            if (features.includes(i)) {
+                throw new ConfigKeyProblem('data.features', `lists "${name}" twice`);
+            }
+            features.push(i);
+        }
+    }
+    if (features.length === 0) {
+        throw new ConfigKeyProblem(data.features === null ? 'data.ignore' : 'data.features', `expected at least one feature column besides the target "${data.target}", found none left in ${file.shown}`);
+    }
+    const columns = features.map((field) => ({ field, distinctLimit: data.maxCategories }));
+    columns.push({ field: target, distinctLimit: MAX_CLASSES });
+    return { plan: { columns, target: columns.length - 1 }, features, target };
+}
+function looksNumeric(store) {
+    return store.numberCount > 0 && store.numberCount >= store.textCount;
+}
+/** Numeric column values, or the first cell that breaks them. */
+function numericColumn(store, file, role) {
+    const text = store.firstText;
+    const odd = store.firstNotFinite;
+    const label = `${columnLabel(store.column, store.name)}${role}`;
+    if (odd !== null && (text === null || odd.line <= text.line)) {
+        const why = odd.overflow
+            ? 'a number too large for a 64-bit float'
+            : 'a value that is not a finite number (NaN and Infinity are not measurements; leave the cell empty if it is missing)';
+        throw dataError(file, odd.line, store.column, `${label}: expected a finite number, found ${shownValue(odd.value)}, ${why}`);
+    }
+    if (text !== null) {
+        throw dataError(file, text.line, store.column, `${label}: expected a number, found ${shownValue(text.value)} (the column holds numbers in ` +
+            `${store.numberCount} of ${store.numberCount + store.textCount} rows; leave a missing value empty)`);
+    }
+    return { kind: 'numeric', name: store.name, column: store.column, values: store.numbers.subarray(0, store.length) };
+}
+function categoricalColumn(store, file, cap) {
+    if (store.distinct === null || store.codes === null) {
+        const count = store.distinctCount();
+        const over = store.overflow;
+        const amount = store.distinctCountExact() ? `${count}` : `more than ${cap}`;
+        throw dataError(file, over?.line ?? 1, store.column, `${columnLabel(store.column, store.name)} is text with ${amount} distinct values; a categorical column ` +
+            `may have at most ${cap} (data.max-categories). The value ${shownValue(over?.value ?? '')} on this line ` +
+            `is number ${cap + 1}. An identifier column belongs in data.ignore.`);
+    }
+    return sortedCategories(store, store.distinct, store.codes);
+}
+function sortedCategories(store, distinct, codes) {
+    const firstSeen = [...distinct.keys()];
+    const categories = [...firstSeen].sort(compareText);
+    const rank = new Map(categories.map((c, i) => [c, i]));
+    const remap = Int32Array.from(firstSeen, (c) => rank.get(c) ?? -1);
+    const out = new Int32Array(store.length);
+    for (let i = 0; i < store.length; i++)
+        out[i] = remap[codes[i]];
+    return { kind: 'categorical', name: store.name, column: store.column, categories, codes: out };
+}
+function compareText(a, b) {
+    return a < b ? -1 : a > b ? 1 : 0;
+}
+/** The feature column as numeric or categorical, by the rule at the top of this file. */
+function featureColumn(store, file, cap) {
+    return looksNumeric(store) ? numericColumn(store, file, '') : categoricalColumn(store, file, cap);
+}
+
+;// CONCATENATED MODULE: ./src/data/encode.ts
+function sharedFloat64(length) {
+    return new Float64Array(new SharedArrayBuffer(length * Float64Array.BYTES_PER_ELEMENT));
+}
+/** Mean and population standard deviation over the given rows (two passes, for accuracy). */
+function meanAndStd(values, rows) {
+    if (rows.length === 0)
+        return { mean: 0, std: 0 };
+    let sum = 0;
+    for (let i = 0; i < rows.length; i++)
+        sum += values[rows[i]];
+    const mean = sum / rows.length;
+    let squares = 0;
+    for (let i = 0; i < rows.length; i++) {
+        const d = values[rows[i]] - mean;
+        squares += d * d;
+    }
+    return { mean, std: Math.sqrt(squares / rows.length) };
+}
+function encodeDataset(features, target, split) {
+    const encodings = features.map((column) => {
+        if (column.kind === 'categorical') {
+            return { kind: 'categorical', name: column.name, categories: column.categories };
+        }
+        const { mean, std } = meanAndStd(column.values, split.train);
+        // A constant feature is only centred: dividing by 0 would poison every input.
+        return { kind: 'numeric', name: column.name, mean, std: std > 0 ? std : 1 };
+    });
+    const inputs = encodings.reduce((n, e) => n + (e.kind === 'numeric' ? 1 : e.categories.length), 0);
+    let targetEncoding;
+    let outputs;
+    if (target.task === 'classification') {
+        targetEncoding = { name: target.name, task: 'classification', classes: target.classes, mean: 0, std: 1 };
+        outputs = target.classes.length === 2 ? 1 : target.classes.length;
+    }
+    else {
+        const { mean, std } = meanAndStd(target.values, split.train);
+        targetEncoding = { name: target.name, task: 'regression', classes: null, mean, std: std > 0 ? std : 1 };
+        outputs = 1;
+    }
+    const fill = (rows) => {
+        const x = sharedFloat64(rows.length * inputs);
+        const y = sharedFloat64(rows.length);
+        let offset = 0;
+        for (let f = 0; f < features.length; f++) {
+            const column = features[f];
+            const e = encodings[f];
+            if (column.kind === 'numeric' && e.kind === 'numeric') {
+                const values = column.values;
+                for (let r = 0; r < rows.length; r++)
+                    x[r * inputs + offset] = (values[rows[r]] - e.mean) / e.std;
+                offset += 1;
+            }
+            else if (column.kind === 'categorical') {
+                const codes = column.codes;
+                for (let r = 0; r < rows.length; r++)
+                    x[r * inputs + offset + codes[rows[r]]] = 1;
+                offset += column.categories.length;
+            }
+        }
+        if (target.task === 'classification') {
+            for (let r = 0; r < rows.length; r++)
+                y[r] = target.indices[rows[r]];
+        }
+        else {
+            for (let r = 0; r < rows.length; r++)
+                y[r] = (target.values[rows[r]] - targetEncoding.mean) / targetEncoding.std;
+        }
+        return { x, y };
+    };
+    const train = fill(split.train);
+    const validation = fill(split.validation);
+    const judging = fill(split.judging);
+    // The rows that judge, as the device gets them: what the int8 path is judged on.
+    const judgedRows = split.judging.length > 0 ? split.judging : split.validation.length > 0 ? split.validation : split.train;
+    return {
+        task: target.task,
+        inputs,
+        outputs,
+        trainRows: split.train.length,
+        validationRows: split.validation.length,
+        xTrain: train.x,
+        yTrain: train.y,
+        xValidation: validation.x,
+        yValidation: validation.y,
+        judgingRows: split.judging.length,
+        xJudging: judging.x,
+        yJudging: judging.y,
+        rawJudged: rawFeatures(features, judgedRows),
+        encoding: { features: encodings, target: targetEncoding },
+    };
+}
+/**
+ * Rows as a device receives them (rows × features, float32): a numeric feature's value, a
+ * categorical feature's category index. The exported C and the int8 simulation take this form.
+ */
+function rawFeatures(features, rows) {
+    const F = features.length;
+    const out = new Float32Array(new SharedArrayBuffer(rows.length * F * Float32Array.BYTES_PER_ELEMENT));
+    features.forEach((column, f) => {
+        if (column.kind === 'numeric')
+            for (let r = 0; r < rows.length; r++)
+                out[r * F + f] = column.values[rows[r]];
+        else
+            for (let r = 0; r < rows.length; r++)
+                out[r * F + f] = column.codes[rows[r]];
+    });
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/data/fingerprint.ts
+/**
+ * sha256 of the data as used, over a canonical form: columns sorted by name, each
+ * with its role and kind, then its values in row order (numbers as little-endian
+ * 64-bit floats, categories as indices into the sorted category list). Line endings,
+ * quoting, spelling of numbers ("1.0" vs "1") and column order do not change it; any
+ * changed value does.
+ */
+
+
+const FORMAT = 'neuron-budget data fingerprint v1';
+const CHUNK = 8192;
+function fingerprint(features, target, rows) {
+    const parts = features.map((column) => ({
+        name: column.name,
+        role: 'feature',
+        kind: column.kind,
+        write: (hash) => column.kind === 'numeric' ? numbers(hash, column.values) : categories(hash, column.categories, column.codes),
+    }));
+    parts.push({
+        name: target.name,
+        role: 'target',
+        kind: target.task === 'classification' && target.numericLabels === null ? 'categorical' : 'numeric',
+        write: (hash) => target.task === 'regression'
+            ? numbers(hash, target.values)
+            : target.numericLabels !== null
+                ? numbers(hash, target.numericLabels)
+                : categories(hash, target.classes, target.indices),
+    });
+    parts.sort((a, b) => compareText(a.name, b.name));
+    const hash = (0,external_node_crypto_namespaceObject.createHash)('sha256');
+    hash.update(`${FORMAT}\nrows ${rows}\n`);
+    for (const part of parts) {
+        hash.update(`${JSON.stringify([part.name, part.role, part.kind])}\n`);
+        part.write(hash);
+    }
+    return hash.digest('hex');
+}
+function numbers(hash, values) {
+    const chunk = new Float64Array(CHUNK);
+    const view = new DataView(chunk.buffer);
+    const littleEndian = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
+    for (let start = 0; start < values.length; start += CHUNK) {
+        const n = Math.min(CHUNK, values.length - start);
+        for (let i = 0; i < n; i++) {
+            const v = values[start + i];
+            if (littleEndian)
+                chunk[i] = v === 0 ? 0 : v;
+            else
+                view.setFloat64(i * 8, v === 0 ? 0 : v, true);
+        }
+        hash.update(new Uint8Array(chunk.buffer, 0, n * 8));
+    }
+}
+function categories(hash, names, codes) {
+    hash.update(`${JSON.stringify(names)}\n`);
+    const chunk = new Uint32Array(CHUNK);
+    const view = new DataView(chunk.buffer);
+    const littleEndian = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
+    for (let start = 0; start < codes.length; start += CHUNK) {
+        const n = Math.min(CHUNK, codes.length - start);
+        for (let i = 0; i < n; i++) {
+            if (littleEndian)
+                chunk[i] = codes[start + i];
+            else
+                view.setUint32(i * 4, codes[start + i], true);
+        }
+        hash.update(new Uint8Array(chunk.buffer, 0, n * 4));
+    }
+}
+
+;// CONCATENATED MODULE: ./src/data/profile.ts
+function profileData(features, target, stores, rows) {
+    const missing = new Map(stores.map((s) => [s.column, s.missing]));
+    const profiles = {};
+    for (const column of features) {
+        const lost = missing.get(column.column) ?? 0;
+        profiles[column.name] =
+            column.kind === 'numeric'
+                ? numericProfile(column.values, lost)
+                : categoricalProfile(column.categories, column.codes, lost);
+    }
+    let classes = null;
+    if (target.task === 'classification') {
+        const counts = new Array(target.classes.length).fill(0);
+        for (const c of target.indices)
+            counts[c]++;
+        classes = {};
+        target.classes.forEach((label, i) => {
+            classes[label] = counts[i];
+        });
+    }
+    const used = [
+        ...features.map((c) => ({ name: c.name, column: c.column })),
+        { name: target.name, column: target.column },
+    ];
+    used.sort((a, b) => a.column - b.column);
+    return { rows, classes, columns: used.map((c) => c.name), features: profiles };
+}
+function numericProfile(values, missing) {
+    let sum = 0;
+    let min = Infinity;
+    let max = -Infinity;
+    for (let i = 0; i < values.length; i++) {
+        const v = values[i];
+        sum += v;
+        if (v < min)
+            min = v;
+        if (v > max)
+            max = v;
+    }
+    const mean = sum / values.length;
+    let squares = 0;
+    for (let i = 0; i < values.length; i++) {
+        const d = values[i] - mean;
+        squares += d * d;
+    }
+    // Population standard deviation, the same one the standardisation uses.
+    return { kind: 'numeric', mean, std: Math.sqrt(squares / values.length), min, max, missing };
+}
+function categoricalProfile(categories, codes, missing) {
+    const tally = new Array(categories.length).fill(0);
+    for (const c of codes)
+        tally[c]++;
+    const counts = {};
+    categories.forEach((category, i) => {
+        counts[category] = tally[i];
+    });
+    return { kind: 'categorical', counts, missing };
+}
+
+;// CONCATENATED MODULE: ./src/data/column-store.ts
+/**
+ * One column of the file, kept compactly while reading: numbers in a growable
+ * Float64Array, and (while the column has few distinct values) each cell's text as an
+ * index into a small table of distinct strings. Which of the two the column really is
+ * gets decided once the whole file has been read.
+ */
+
+const INITIAL_CAPACITY = 1024;
+class ColumnStore {
+    name;
+    column;
+    distinctLimit;
+    length = 0;
+    /** Cell values where they are finite numbers, NaN elsewhere. */
+    numbers = new Float64Array(INITIAL_CAPACITY);
+    /** Index into `distinct` per cell; null once the column has too many distinct values. */
+    codes = new Int32Array(INITIAL_CAPACITY);
+    /** Distinct cell texts in order of first appearance; null after overflow. */
+    distinct = new Map();
+    /** Where the distinct texts first outgrew `distinctLimit` (the value and its line). */
+    overflow = null;
+    /** After overflow, all distinct texts while the column still looks like text (for the count). */
+    overflowTexts = null;
+    numberCount = 0;
+    textCount = 0;
+    firstText = null;
+    /** First NaN/Infinity/overflowing number, and which it was. */
+    firstNotFinite = null;
+    /** Empty cells met, including those of dropped rows. */
+    missing = 0;
+    parsed = { value: 0 };
+    constructor(name, 
+    /** 1-based field number in the file. */
+    column, 
+    /** Most distinct texts worth remembering (the categorical cap, or the class cap). */
+    distinctLimit) {
+        this.name = name;
+        this.column = column;
+        this.distinctLimit = distinctLimit;
+    }
+    push(text, line) {
+        const i = this.length;
+        if (i === this.numbers.length)
+            this.grow();
+        const kind = classifyNumber(text, this.parsed);
+        if (kind === NumberKind.Finite) {
+            this.numbers[i] = this.parsed.value;
+            this.numberCount++;
+        }
+        else {
+            this.numbers[i] = NaN;
+            if (kind === NumberKind.Text) {
+                this.textCount++;
+                if (this.firstText === null)
+                    this.firstText = { value: text, line };
+            }
+            else {
+                this.numberCount++;
+                if (this.firstNotFinite === null) {
+                    this.firstNotFinite = { value: text, line, overflow: kind === NumberKind.Overflow };
+                }
+            }
+        }
+        if (this.distinct !== null && this.codes !== null) {
+            let code = this.distinct.get(text);
+            if (code === undefined) {
+                code = this.distinct.size;
+                if (code >= this.distinctLimit) {
+                    this.startOverflow(text, line);
+                }
+                else {
+                    this.distinct.set(text, code);
+                }
+            }
+            if (this.codes !== null)
+                this.codes[i] = code;
+        }
+        else if (this.overflowTexts !== null) {
+            if (this.textCount >= this.numberCount)
+                this.overflowTexts.add(text);
+            else
+                this.overflowTexts = null; // a numeric-looking column: the count no longer matters
+        }
+        this.length = i + 1;
+    }
+    /** Distinct values counted so far past the cap (a lower bound when counting stopped). */
+    distinctCount() {
+        if (this.distinct !== null)
+            return this.distinct.size;
+        return this.overflowTexts?.size ?? this.distinctLimit + 1;
+    }
+    /** Whether `distinctCount()` is exact. */
+    distinctCountExact() {
+        return this.distinct !== null || this.overflowTexts !== null;
+    }
+    startOverflow(text, line) {
+        this.overflow = { value: text, line };
+        if (this.textCount >= this.numberCount && this.distinct !== null) {
+            this.overflowTexts = new Set(this.distinct.keys());
+            this.overflowTexts.add(text);
+        }
+        this.distinct = null;
+        this.codes = null;
+    }
+    grow() {
+        const capacity = this.numbers.length * 2;
+        const numbers = new Float64Array(capacity);
+        numbers.set(this.numbers);
+        this.numbers = numbers;
+        if (this.codes !== null) {
+            const codes = new Int32Array(capacity);
+            codes.set(this.codes);
+            this.codes = codes;
+        }
+    }
 }
 
 ;// CONCATENATED MODULE: ./src/data/read-csv.ts
@@ -13450,162 +18159,6 @@ async function checkExists(file) {
         throw new ConfigKeyProblem('data.path', `expected a CSV file, found a folder at ${file.shown}`);
 }
 
-;// CONCATENATED MODULE: ./src/files/process.ts
-/** Whether a process of this machine still runs, for telling a dead writer's leftovers from a live one's. */
-/**
- * True only when `pid` certainly names no running process here (ESRCH). A process of
- * another user (EPERM) runs; anything unclear counts as running, so nothing live is touched.
- */
-function processIsGone(pid) {
-    if (!Number.isSafeInteger(pid) || pid <= 0)
-        return false;
-    try {
-        process.kill(pid, 0);
-        return false;
-    }
-    catch (e) {
-        return e.code === 'ESRCH';
-    }
-}
-
-;// CONCATENATED MODULE: ./src/files/atomic.ts
-/**
- * Writes a file so that readers see either the old content or the whole new content,
- * never a half-written file: write a temp file in the same folder, then rename it over
- * the target (rename is atomic within one file system, which is why the temp file must
- * live beside the target rather than in the OS temp folder).
- *
- * A writer killed between the two steps leaves its temp file behind. The names follow one
- * pattern, `.NAME.PID.HEX.neuron-budget.tmp`, which users can ignore in git
- * (`*.neuron-budget.tmp`), and the next write of the same target removes those whose
- * writer is gone.
- */
-
-
-
-
-const TEMP_SUFFIX = '.neuron-budget.tmp';
-/** A temp file this old is stale whatever its PID says (a PID can be reused, or belong to another machine). @testOnly */
-const STALE_TEMP_AGE_MS = 60 * 60 * 1000;
-async function writeFileAtomic(path, text) {
-    await removeStaleTempFiles(path);
-    // The random suffix only names the temp file; it never reaches any output.
-    const temp = (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}.${process.pid}.${(0,external_node_crypto_namespaceObject.randomBytes)(6).toString('hex')}${TEMP_SUFFIX}`);
-    let handle = null;
-    try {
-        handle = await (0,promises_namespaceObject.open)(temp, 'wx');
-        await handle.writeFile(text, 'utf8');
-        await handle.sync();
-        await handle.close();
-        handle = null;
-        await (0,promises_namespaceObject.rename)(temp, path);
-    }
-    catch (error) {
-        if (handle)
-            await handle.close().catch(() => undefined);
-        await (0,promises_namespaceObject.rm)(temp, { force: true }).catch(() => undefined);
-        throw error;
-    }
-}
-function escapeRegExp(s) {
-    return s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-}
-/**
- * Removes the temp files that earlier writes of `path` left behind: only names of exactly
- * our pattern for this target, and only when their writer process is gone (on this machine)
- * or the file is older than STALE_TEMP_AGE_MS. Never throws: a leftover it cannot remove
- * must not stop the write. Returns the names removed.
- * @testOnly
- */
-async function removeStaleTempFiles(path, now = Date.now()) {
-    const folder = (0,external_node_path_namespaceObject.dirname)(path);
-    // A bare `.tmp` ending is the name neuron-budget 0.1.0 gave them: an upgrade cleans those up too.
-    const pattern = new RegExp(`^\\.${escapeRegExp((0,external_node_path_namespaceObject.basename)(path))}\\.(\\d{1,10})\\.[0-9a-f]{12}(?:${escapeRegExp(TEMP_SUFFIX)}|\\.tmp)$`);
-    let names;
-    try {
-        names = await (0,promises_namespaceObject.readdir)(folder);
-    }
-    catch {
-        return [];
-    }
-    const removed = [];
-    for (const name of names) {
-        const m = pattern.exec(name);
-        if (!m)
-            continue;
-        const pid = Number(m[1]);
-        if (pid === process.pid)
-            continue; // a write of this process may be under way
-        const full = (0,external_node_path_namespaceObject.join)(folder, name);
-        try {
-            const info = await (0,promises_namespaceObject.stat)(full);
-            if (!info.isFile())
-                continue;
-            if (!processIsGone(pid) && now - info.mtimeMs < STALE_TEMP_AGE_MS)
-                continue;
-            await (0,promises_namespaceObject.rm)(full, { force: true });
-            removed.push(name);
-        }
-        catch {
-            // Gone already (another run cleaned it) or not ours to touch: leave it.
-        }
-    }
-    return removed;
-}
-
-;// CONCATENATED MODULE: ./src/files/output.ts
-/**
- * Output files a user asked for (report, model): checked before minutes of work, written
- * atomically after. A refusal by the file system is the user's to fix, not a bug.
- */
-
-
-
-
-
-/** Writes an output file atomically; a refusal by the file system is the user's to fix, not a bug. */
-async function writeOutput(path, text, what, root) {
-    try {
-        await writeFileAtomic(path, text);
-    }
-    catch (error) {
-        const code = error.code;
-        const reasons = {
-            EACCES: 'permission denied',
-            EPERM: 'permission denied',
-            EROFS: 'the file system is read-only',
-            ENOSPC: 'no space left on the device',
-            EISDIR: 'it is a folder',
-            ENOENT: 'its folder does not exist',
-            ENOTDIR: 'a part of the path is not a folder',
-        };
-        const reason = code === undefined ? undefined : reasons[code];
-        if (reason === undefined)
-            throw error;
-        const shown = displayPath(root, path);
-        throw new errors_UserError(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
-    }
-}
-/** Fails early when `path` cannot be an output file (its folder is missing, or it is a folder). */
-async function checkOutputFolder(path, what, root) {
-    const folder = (0,external_node_path_namespaceObject.dirname)(path);
-    const shown = displayPath(root, folder);
-    const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
-    if (info === null)
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
-            file: displayPath(root, path),
-        });
-    if (!info.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
-            file: displayPath(root, path),
-        });
-    const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
-    if (target?.isDirectory())
-        throw new errors_UserError(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
-            file: displayPath(root, path),
-        });
-}
-
 ;// CONCATENATED MODULE: ./src/gate/settings.ts
 /**
  * The config settings that change the search's answer, and their fingerprint. Two runs
@@ -13618,15 +18171,15 @@ async function checkOutputFolder(path, what, root) {
  */
 
 
+
 function resultSettings(config) {
     const out = {};
-    for (const section of CONFIG_SPEC) {
+    for (const section of spec_CONFIG_SPEC) {
         const values = config[section.name];
         for (const key of section.keys) {
             if (!key.changesResult)
                 continue;
-            const value = values[fieldName(key.name)];
-            out[`${section.name}.${key.name}`] = Array.isArray(value) ? [...value] : value;
+            out[`${section.name}.${key.name}`] = settingValue(values[fieldName(key.name)]);
         }
     }
     // The order of ignored columns does not matter; the order of features does (input order).
@@ -13634,6 +18187,20 @@ function resultSettings(config) {
     if (Array.isArray(ignore))
         ignore.sort();
     return out;
+}
+/** A setting as the baseline records it: a plain value, a list of texts, or a structured value as its canonical text. */
+function settingValue(value) {
+    if (value === undefined || value === null)
+        return null;
+    if (Array.isArray(value) && value.every((v) => typeof v === 'string'))
+        return [...value];
+    if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean')
+        return value;
+    // target.min-recall: {every} or {classes: [...]}, written the way the config states it.
+    const rule = value;
+    if (typeof rule.every === 'number')
+        return rule.every;
+    return JSON.stringify(Object.fromEntries((rule.classes ?? []).map((c) => [c.label, c.min])));
 }
 /** sha256 hex of the settings in canonical form (keys sorted). */
 function settingsFingerprint(settings) {
@@ -13701,6 +18268,7 @@ function compare(input) {
     if (gate.maxWidth !== null && width > gate.maxWidth) {
         failures.push(`Needs ${neurons(width)}; the device budget is ${gate.maxWidth}.`);
     }
+    failures.push(...budgetFailures(input));
     if (!baseline) {
         if (failures.length > 0)
             return { verdict: 'fail', reasons: [...failures, ...flags], settingsChanged };
@@ -13763,6 +18331,25 @@ function sentence(s) {
     const t = s.trim();
     const capital = t.charAt(0).toUpperCase() + t.slice(1);
     return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}
+/** One sentence per byte or operation budget the witness exceeds, naming the figure and the budget. */
+function budgetFailures(input) {
+    const { gate, device } = input;
+    if (!device)
+        return [];
+    const { cost, precision } = device;
+    const out = [];
+    const at = `(width ${input.result.width})`;
+    if (gate.maxFlashBytes != null && cost.flashBytes[precision] > gate.maxFlashBytes) {
+        out.push(`Needs ${formatCount(cost.flashBytes[precision])} flash bytes for its ${precision} weights ${at}; the device budget is ${formatCount(gate.maxFlashBytes)} bytes.`);
+    }
+    if (gate.maxRamBytes != null && cost.ramBytes[precision] > gate.maxRamBytes) {
+        out.push(`Needs ${formatCount(cost.ramBytes[precision])} RAM bytes for one ${precision} inference ${at}; the device budget is ${formatCount(gate.maxRamBytes)} bytes.`);
+    }
+    if (gate.maxMacs != null && cost.macs > gate.maxMacs) {
+        out.push(`Needs ${formatCount(cost.macs)} multiply-accumulates per inference ${at}; the device budget is ${formatCount(gate.maxMacs)}.`);
+    }
+    return out;
 }
 
 ;// CONCATENATED MODULE: ./src/gate/data-changes.ts
@@ -13852,6 +18439,7 @@ function byCodeUnit(a, b) {
 
 function evaluateGate(input) {
     const { result, loaded, config, baseline } = input;
+    const cost = input.cost ?? null;
     const comparison = compare({
         result,
         target: config.target,
@@ -13859,6 +18447,7 @@ function evaluateGate(input) {
         gate: config.gate,
         baseline,
         settings: resultSettings(config),
+        device: cost === null ? null : { cost, precision: config.target.precision ?? 'float32' },
     });
     const changes = baseline
         ? dataChanges(baseline.data.profile, loaded.profile, { before: baseline.data.fingerprint, after: loaded.fingerprint }, { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') })
@@ -13868,459 +18457,6 @@ function evaluateGate(input) {
 
 ;// CONCATENATED MODULE: ./schema/baseline.schema.json
 const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
-;// CONCATENATED MODULE: ./src/common/json-schema.ts
-/**
- * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
- * file format has one definition: the schema editors read is the one the tool enforces. Only
- * the keywords our schemas use are understood (type, const, enum, properties, required,
- * additionalProperties, items, minItems, maxItems, minimum, maximum, pattern, maxLength, $ref
- * into $defs, anyOf, oneOf); a schema that uses any other keyword is refused when it is loaded,
- * so a schema cannot silently say more than is checked.
- *
- * The first problem is reported as `key: expected …, found …`, with the key written as a path
- * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
- */
-class SchemaProblem extends Error {
-    key;
-    expected;
-    found;
-    constructor(
-    /** Where, as a path (`result.width`, `history[0]`); '(top level)' for the document itself. */
-    key, expected, 
-    /** What was found, described for a reader. */
-    found) {
-        super(`${key}: expected ${expected}, found ${found}`);
-        this.key = key;
-        this.expected = expected;
-        this.found = found;
-        this.name = 'SchemaProblem';
-    }
-}
-const KNOWN = new Set([
-    'title',
-    'description',
-    'type',
-    'const',
-    'enum',
-    'properties',
-    'required',
-    'additionalProperties',
-    'items',
-    'minItems',
-    'maxItems',
-    'minimum',
-    'maximum',
-    'pattern',
-    'maxLength',
-    '$ref',
-    'anyOf',
-    'oneOf',
-    '$defs',
-    '$schema',
-    '$id',
-    '$comment',
-]);
-/** A validator for documents of one schema. Throws when the schema uses a keyword it does not check. */
-function schemaValidator(root) {
-    checkKeywords(root, '#');
-    const patterns = new Map();
-    const regex = (p) => {
-        let re = patterns.get(p);
-        if (re === undefined)
-            patterns.set(p, (re = new RegExp(p, 'u')));
-        return re;
-    };
-    const resolve = (node) => {
-        if (node.$ref === undefined)
-            return node;
-        const m = /^#\/\$defs\/(.+)$/.exec(node.$ref);
-        const target = m ? root.$defs?.[m[1]] : undefined;
-        if (target === undefined)
-            throw new Error(`schema: unresolved $ref ${node.$ref}`);
-        return { ...target, ...(node.title ? { title: node.title } : {}) };
-    };
-    const check = (raw, value, key) => {
-        const node = resolve(raw);
-        const fail = (expected, found = value) => {
-            throw new SchemaProblem(key || '(top level)', node.title ?? expected, describe(found));
-        };
-        if (node.const !== undefined && value !== node.const)
-            fail(JSON.stringify(node.const));
-        if (node.enum !== undefined && !node.enum.includes(value))
-            fail(`one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`);
-        if (node.type !== undefined) {
-            const types = Array.isArray(node.type) ? node.type : [node.type];
-            if (value === null && types.includes('null'))
-                return;
-            if (!types.some((t) => hasType(value, t)))
-                fail(typePhrase(node, types.filter((t) => t !== 'null')));
-        }
-        if (typeof value === 'number') {
-            if (node.minimum !== undefined && value < node.minimum)
-                fail(typePhrase(node, types(node)));
-            if (node.maximum !== undefined && value > node.maximum)
-                fail(typePhrase(node, types(node)));
-        }
-        if (typeof value === 'string') {
-            if (node.maxLength !== undefined && value.length > node.maxLength)
-                fail(`a string of at most ${node.maxLength} characters`);
-            if (node.pattern !== undefined && !regex(node.pattern).test(value))
-                fail(`a string matching ${node.pattern}`);
-        }
-        if (Array.isArray(value)) {
-            if (node.maxItems !== undefined && value.length > node.maxItems)
-                fail(`a list of at most ${node.maxItems} entries`, value.length);
-            if (node.minItems !== undefined && value.length < node.minItems)
-                fail(`a list of at least ${node.minItems} entries`, value.length);
-            if (node.items !== undefined)
-                value.forEach((v, i) => check(node.items, v, `${key}[${i}]`));
-        }
-        if (isObject(value)) {
-            const props = node.properties ?? {};
-            for (const name of node.required ?? []) {
-                if (!Object.hasOwn(value, name))
-                    throw new SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
-            }
-            for (const [name, child] of Object.entries(value)) {
-                if (Object.hasOwn(props, name))
-                    check(props[name], child, join(key, name));
-                else if (node.additionalProperties === false) {
-                    throw new SchemaProblem(join(key, name), `no such key (allowed: ${Object.keys(props).join(', ')})`, describe(child));
-                }
-                else if (typeof node.additionalProperties === 'object')
-                    check(node.additionalProperties, child, join(key, name));
-            }
-        }
-        if (node.anyOf !== undefined) {
-            if (!node.anyOf.some((branch) => passes(branch, value, key)))
-                fail(node.anyOf.map((b) => expectedOf(resolve(b))).join(' or '));
-        }
-        if (node.oneOf !== undefined) {
-            // Our oneOf branches are told apart by a `kind` constant: check the branch the document names.
-            const kinds = node.oneOf.map((b) => resolve(b).properties?.['kind']?.const);
-            if (!kinds.includes(undefined) && isObject(value)) {
-                const at = kinds.indexOf(value['kind']);
-                if (at < 0)
-                    throw new SchemaProblem(join(key, 'kind'), `one of ${kinds.map((k) => JSON.stringify(k)).join(', ')}`, describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING));
-                check(node.oneOf[at], value, key);
-            }
-            else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
-                fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
-            }
-        }
-    };
-    const passes = (node, value, key) => {
-        try {
-            check(node, value, key);
-            return true;
-        }
-        catch (e) {
-            if (e instanceof SchemaProblem)
-                return false;
-            throw e;
-        }
-    };
-    return (value) => check(root, value, '');
-}
-const MISSING = Symbol('missing');
-const MISSING_KEY = 'nothing (the key is missing)';
-function checkKeywords(node, where) {
-    for (const [k, v] of Object.entries(node)) {
-        if (!KNOWN.has(k))
-            throw new Error(`schema: keyword ${k} at ${where} is not checked by schemaValidator`);
-        if (k === 'properties' || k === '$defs')
-            for (const [name, child] of Object.entries(v))
-                checkKeywords(child, `${where}/${k}/${name}`);
-        if ((k === 'items' || k === 'additionalProperties') && typeof v === 'object')
-            checkKeywords(v, `${where}/${k}`);
-        if (k === 'anyOf' || k === 'oneOf')
-            v.forEach((child, i) => checkKeywords(child, `${where}/${k}/${i}`));
-    }
-}
-function types(node) {
-    const t = node.type === undefined ? [] : Array.isArray(node.type) ? node.type : [node.type];
-    return t.filter((x) => x !== 'null');
-}
-function hasType(value, type) {
-    switch (type) {
-        case 'object':
-            return isObject(value);
-        case 'array':
-            return Array.isArray(value);
-        case 'string':
-            return typeof value === 'string';
-        case 'number':
-            return typeof value === 'number' && Number.isFinite(value);
-        case 'integer':
-            return typeof value === 'number' && Number.isInteger(value);
-        case 'boolean':
-            return typeof value === 'boolean';
-        case 'null':
-            return value === null;
-    }
-}
-/** "an integer of at least 1", "a number", "a list", … */
-function typePhrase(node, ts) {
-    const bound = () => {
-        const parts = [];
-        if (node.minimum !== undefined && node.maximum !== undefined)
-            return ` from ${node.minimum} to ${node.maximum}`;
-        if (node.minimum !== undefined)
-            parts.push(` of at least ${node.minimum}`);
-        if (node.maximum !== undefined)
-            parts.push(` of at most ${node.maximum}`);
-        return parts.join('');
-    };
-    const one = (t) => {
-        switch (t) {
-            case 'object':
-                return 'an object';
-            case 'array':
-                return 'a list';
-            case 'string':
-                return 'a string';
-            case 'number':
-                return `a number${bound()}`;
-            case 'integer':
-                return `an integer${bound()}`;
-            case 'boolean':
-                return 'true or false';
-            case 'null':
-                return 'null';
-        }
-    };
-    return ts.length === 0 ? 'a value' : ts.map(one).join(' or ');
-}
-function expectedOf(node) {
-    if (node.title !== undefined)
-        return node.title;
-    if (node.const !== undefined)
-        return JSON.stringify(node.const);
-    if (node.enum !== undefined)
-        return `one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`;
-    return typePhrase(node, types(node));
-}
-function join(key, child) {
-    return key === '' ? child : `${key}.${child}`;
-}
-function isObject(v) {
-    return typeof v === 'object' && v !== null && !Array.isArray(v);
-}
-/** A found value for a message: short, and never a repository string in full. */
-function describe(v) {
-    if (v === MISSING)
-        return 'nothing';
-    if (v === null)
-        return 'null';
-    if (Array.isArray(v))
-        return 'a list';
-    if (typeof v === 'object')
-        return 'an object';
-    if (typeof v === 'string') {
-        const s = JSON.stringify(v);
-        return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
-    }
-    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
-}
-
-;// CONCATENATED MODULE: ./src/gate/json-position.ts
-/**
- * Finds where a JSON text first goes wrong. JSON.parse's messages differ between Node
- * versions and some carry no position at all, so a small scanner (RFC 8259 grammar)
- * gives every user the same line and column.
- */
-/** Returns null when `text` is valid JSON. */
-function findJsonSyntaxProblem(text) {
-    let i = 0;
-    const n = text.length;
-    const fail = (expected) => {
-        throw new ScanError(i, expected);
-    };
-    const ws = () => {
-        while (i < n) {
-            const c = text.charCodeAt(i);
-            if (c === 0x20 || c === 0x09 || c === 0x0a || c === 0x0d)
-                i++;
-            else
-                break;
-        }
-    };
-    const literal = (word) => {
-        if (text.startsWith(word, i))
-            i += word.length;
-        else
-            fail(`"${word}"`);
-    };
-    const digits = () => {
-        const start = i;
-        while (i < n && text.charCodeAt(i) >= 0x30 && text.charCodeAt(i) <= 0x39)
-            i++;
-        if (i === start)
-            fail('a digit');
-    };
-    const number = () => {
-        if (text[i] === '-')
-            i++;
-        if (text[i] === '0')
-            i++;
-        else
-            digits();
-        if (text[i] === '.') {
-            i++;
-            digits();
-        }
-        if (text[i] === 'e' || text[i] === 'E') {
-            i++;
-            if (text[i] === '+' || text[i] === '-')
-                i++;
-            digits();
-        }
-    };
-    const string = () => {
-        i++; // opening quote
-        while (i < n) {
-            const c = text.charCodeAt(i);
-            if (c === 0x22) {
-                i++;
-                return;
-            }
-            if (c < 0x20)
-                fail('a closing quote (a string cannot contain a line break or control character)');
-            if (c === 0x5c) {
-                i++;
-                const e = text[i];
-                if (e === 'u') {
-                    for (let k = 1; k <= 4; k++) {
-                        if (!/[0-9a-fA-F]/.test(text[i + k] ?? '')) {
-                            i += k;
-                            fail('four hex digits after \\u');
-                        }
-                    }
-                    i += 5;
-                }
-                else if (e !== undefined && '"\\/bfnrt'.includes(e))
-                    i++;
-                else
-                    fail('a valid escape (\\" \\\\ \\/ \\b \\f \\n \\r \\t \\uXXXX)');
-            }
-            else
-                i++;
-        }
-        fail('a closing quote');
-    };
-    const value = () => {
-        ws();
-        const c = text[i];
-        if (c === '{') {
-            i++;
-            ws();
-            if (text[i] === '}') {
-                i++;
-                return;
-            }
-            for (;;) {
-                ws();
-                if (text[i] !== '"')
-                    fail('a key in double quotes');
-                string();
-                ws();
-                if (text[i] !== ':')
-                    fail('":"');
-                i++;
-                value();
-                ws();
-                if (text[i] === ',') {
-                    i++;
-                    continue;
-                }
-                if (text[i] === '}') {
-                    i++;
-                    return;
-                }
-                fail('"," or "}"');
-            }
-        }
-        else if (c === '[') {
-            i++;
-            ws();
-            if (text[i] === ']') {
-                i++;
-                return;
-            }
-            for (;;) {
-                value();
-                ws();
-                if (text[i] === ',') {
-                    i++;
-                    continue;
-                }
-                if (text[i] === ']') {
-                    i++;
-                    return;
-                }
-                fail('"," or "]"');
-            }
-        }
-        else if (c === '"')
-            string();
-        else if (c === '-' || (c !== undefined && c >= '0' && c <= '9'))
-            number();
-        else if (c === 't')
-            literal('true');
-        else if (c === 'f')
-            literal('false');
-        else if (c === 'n')
-            literal('null');
-        else
-            fail('a value');
-    };
-    try {
-        if (text.charCodeAt(0) === 0xfeff)
-            i = 1;
-        value();
-        ws();
-        if (i < n)
-            fail('the end of the file');
-        return null;
-    }
-    catch (e) {
-        if (!(e instanceof ScanError))
-            throw e;
-        const { line, column } = lineAndColumn(text, e.offset);
-        const found = e.offset >= n ? 'the end of the file' : describeChar(text, e.offset);
-        return { line, column, detail: `expected ${e.expected}, found ${found}` };
-    }
-}
-class ScanError extends Error {
-    offset;
-    expected;
-    constructor(offset, expected) {
-        super(`expected ${expected} at offset ${offset}`);
-        this.offset = offset;
-        this.expected = expected;
-    }
-}
-/** 1-based line and column as a text editor counts them (column in characters). */
-function lineAndColumn(text, offset) {
-    let line = 1;
-    let lineStart = 0;
-    for (let k = 0; k < offset && k < text.length; k++) {
-        if (text.charCodeAt(k) === 0x0a) {
-            line++;
-            lineStart = k + 1;
-        }
-    }
-    return { line, column: offset - lineStart + 1 };
-}
-function describeChar(text, offset) {
-    const c = text.codePointAt(offset) ?? 0;
-    if (c === 0x0a || c === 0x0d)
-        return 'a line break';
-    if (c < 0x20 || c === 0x7f)
-        return `control character U+${c.toString(16).toUpperCase().padStart(4, '0')}`;
-    return JSON.stringify(String.fromCodePoint(c));
-}
-
 ;// CONCATENATED MODULE: ./src/gate/types.ts
 const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
 const BASELINE_VERSION = 2;
@@ -14497,10 +18633,10 @@ function checkSchemaVersion(value, shown) {
     }
 }
 // ---- shape: schema/baseline.schema.json is the one definition ----
-const checkShape = schemaValidator(baseline_schema_namespaceObject);
+const baseline_checkShape = schemaValidator(baseline_schema_namespaceObject);
 function validateBaselineShape(value, shown) {
     try {
-        checkShape(value);
+        baseline_checkShape(value);
     }
     catch (e) {
         if (!(e instanceof SchemaProblem))
@@ -14733,7 +18869,13 @@ async function runGateStage(input) {
             ...input.config,
             gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
         };
-    const outcome = evaluateGate({ result: input.result, loaded: input.loaded, config, baseline: previous });
+    const outcome = evaluateGate({
+        result: input.result,
+        loaded: input.loaded,
+        config,
+        baseline: previous,
+        cost: input.cost ?? null,
+    });
     if (input.mode === 'check')
         return { outcome, written: null, notWritten: null, gate: config.gate };
     const why = whyNotRecordable(input.result);
@@ -14758,3579 +18900,8 @@ async function runGateStage(input) {
 
 
 
-;// CONCATENATED MODULE: ./src/device/cost.ts
-const C_TYPE_BYTES = { float: 4, int8_t: 1, int32_t: 4 };
-/** Entries of the activation lookup table (indexed by an int8 pre-activation). */
-const cost_LUT_ENTRIES = 256;
-/** The constant objects each path of the exported C declares, in declaration order. */
-function cost_storedObjects(s) {
-    const { inputs: D, width: H, outputs: K } = s;
-    const float32 = [];
-    const int8 = [];
-    if (s.numericFeatures > 0) {
-        float32.push({ suffix: 'f_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
-        float32.push({ suffix: 'f_in_std', type: 'float', count: s.numericFeatures, role: 'feature deviations' });
-    }
-    float32.push({ suffix: 'f_w1', type: 'float', count: H * D, role: 'hidden weights' }, { suffix: 'f_b1', type: 'float', count: H, role: 'hidden biases' }, { suffix: 'f_w2', type: 'float', count: K * H, role: 'output weights' }, { suffix: 'f_b2', type: 'float', count: K, role: 'output biases' });
-    if (s.regression)
-        float32.push({ suffix: 'f_target', type: 'float', count: 2, role: 'target mean and deviation' });
-    if (s.numericFeatures > 0) {
-        int8.push({ suffix: 'q_in_mean', type: 'float', count: s.numericFeatures, role: 'feature means' });
-        int8.push({ suffix: 'q_in_mul', type: 'float', count: s.numericFeatures, role: '1 / (deviation · input scale)' });
-    }
-    int8.push({ suffix: 'q_in_zero', type: 'int8_t', count: 1, role: 'input zero-point', scalar: true });
-    if (s.categoricalFeatures > 0)
-        int8.push({ suffix: 'q_in_one', type: 'int8_t', count: 1, role: 'code of a one-hot 1', scalar: true });
-    int8.push({ suffix: 'q_w1', type: 'int8_t', count: H * D, role: 'hidden weights' }, { suffix: 'q_b1', type: 'int32_t', count: H, role: 'hidden biases (zero-point folded in)' }, { suffix: 'q_m0', type: 'int32_t', count: H, role: 'requantisation multipliers M0' }, { suffix: 'q_shift', type: 'int8_t', count: H, role: 'requantisation shifts n' }, { suffix: 'q_act_zero', type: 'int8_t', count: 1, role: 'pre-activation zero-point', scalar: true }, { suffix: 'q_lut', type: 'int8_t', count: cost_LUT_ENTRIES, role: 'activation lookup table' }, { suffix: 'q_w2', type: 'int8_t', count: K * H, role: 'output weights' }, { suffix: 'q_b2', type: 'int32_t', count: K, role: 'output biases (zero-point folded in)' }, { suffix: 'q_out_scale', type: 'float', count: K, role: 'output dequantisation scales' });
-    return { float32, int8 };
-}
-function objectBytes(o) {
-    return o.count * C_TYPE_BYTES[o.type];
-}
-function sumBytes(objects) {
-    return objects.reduce((n, o) => n + objectBytes(o), 0);
-}
-function cost_deviceCost(s) {
-    const { inputs: D, width: H, outputs: K } = s;
-    const stored = cost_storedObjects(s);
-    return {
-        parameters: D * H + H + H * K + K,
-        macs: D * H + H * K,
-        flashBytes: { float32: sumBytes(stored.float32), int8: sumBytes(stored.int8) },
-        ramBytes: { float32: 4 * (D + H), int8: D + H },
-    };
-}
-/** The cost shape of a network of `width` hidden neurons on data encoded as `encoding`. */
-function cost_costShapeOf(net, encoding) {
-    return {
-        inputs: net.inputs,
-        width: net.width,
-        outputs: net.outputs,
-        numericFeatures: encoding.features.filter((f) => f.kind === 'numeric').length,
-        categoricalFeatures: encoding.features.filter((f) => f.kind === 'categorical').length,
-        regression: encoding.target.task === 'regression',
-    };
-}
-
-;// CONCATENATED MODULE: ./src/nn/kernel/constants.ts
-/**
- * The numbers both kernels must share to give the same bits: the constants of the elementary
- * functions (detmath.ts), the gradient block size and the activation and head codes. This file is
- * the one source: scripts/build-kernel.mjs writes them into kernel.as (between its "generated
- * constants" markers) and `build-kernel.mjs --check` fails when kernel.as or its bytes disagree.
- * Plain numeric literals only, so the script can read them without a TypeScript compiler.
- */
-/** ln 2 split so that k * LN2_HI is exact for |k| < 2^11 (the classic Cody-Waite reduction). */
-const LN2_HI = 6.9314718036912381649e-1;
-const LN2_LO = 1.90821492927058770002e-10;
-const INV_LN2 = 1.442695040888963387;
-/** Taylor coefficients 1/n! for n = 2..13 of expm1 on |r| <= ln2/2 (truncation < 1e-17 relative). */
-const C2 = 0.5;
-const C3 = 0.16666666666666666;
-const C4 = 0.041666666666666664;
-const C5 = 0.008333333333333333;
-const C6 = 0.001388888888888889;
-const C7 = 0.0001984126984126984;
-const C8 = 0.0000248015873015873;
-const C9 = 0.0000027557319223985893;
-const C10 = 2.755731922398589e-7;
-const C11 = 2.505210838544172e-8;
-const C12 = 2.08767569878681e-9;
-const C13 = 1.6059043836821613e-10;
-/** |x| beyond this has tanh(x) === ±1 in double precision. */
-const TANH_CLAMP = 22;
-/** 1.5·2^52: adding it rounds a double of magnitude below 2^51 to a whole number. */
-const ROUND_MAGIC = 6755399441055744;
-const SQRT2 = 1.4142135623730951;
-/**
- * Rows per gradient block. The input-weight gradient is summed block by block: for each weight,
- * the products of a block's rows are added in row order starting from +0, and that block sum is
- * then added to the running gradient, in both kernels.
- */
-const GRAD_BLOCK_ROWS = 32;
-const ACT_TANH = 0;
-const ACT_LOGISTIC = 1;
-const ACT_RELU = 2;
-const constants_HEAD_LINEAR = 0;
-const constants_HEAD_LOGISTIC = 1;
-const HEAD_SOFTMAX = 2;
-
-;// CONCATENATED MODULE: ./src/nn/kernel/detmath.ts
-/**
- * Elementary functions whose results we control. ECMAScript leaves Math.exp, Math.tanh and
- * Math.log implementation-approximated, so their last bits may change between Node versions;
- * these use only +, -, *, / and exact bit operations, which IEEE 754 fixes, so every engine
- * gives the same bits. The WebAssembly kernel evaluates tanh with the very same sequence of
- * operations and constants, so both paths agree bit for bit.
- *
- * Accuracy against Math.*: a few units in the last place (test/nn/detmath.test.ts states the bound).
- */
-
-const f64 = new Float64Array(1);
-const u32 = new Uint32Array(f64.buffer);
-const HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0; // little-endian: high word at index 1
-/** 2^k for integer k in [-1022, 1023], built from its bits. */
-function pow2(k) {
-    u32[1 - HI] = 0;
-    u32[HI] = (k + 1023) << 20;
-    return f64[0];
-}
-/** expm1(r) for |r| <= ~0.35 by Horner's rule. */
-function expm1Poly(r) {
-    let q = C12 + r * C13;
-    q = C11 + r * q;
-    q = C10 + r * q;
-    q = C9 + r * q;
-    q = C8 + r * q;
-    q = C7 + r * q;
-    q = C6 + r * q;
-    q = C5 + r * q;
-    q = C4 + r * q;
-    q = C3 + r * q;
-    q = C2 + r * q;
-    q = 1 + r * q;
-    return r * q;
-}
-/**
- * The same polynomial by Estrin's scheme: more operations run side by side, which is what the
- * SIMD kernel needs for speed (tanh uses this form in both paths).
- */
-function expm1PolyEstrin(r) {
-    const r2 = r * r;
-    const r4 = r2 * r2;
-    const r8 = r4 * r4;
-    const b0 = 1 + C2 * r + (C3 + C4 * r) * r2;
-    const b1 = C5 + C6 * r + (C7 + C8 * r) * r2;
-    const b2 = C9 + C10 * r + (C11 + C12 * r) * r2;
-    const c0 = b0 + b1 * r4;
-    const c1 = b2 + C13 * r4;
-    return r * (c0 + c1 * r8);
-}
-/** e^x. */
-function detmath_detExp(x) {
-    if (x !== x)
-        return x;
-    if (x > 709.782712893384)
-        return Infinity;
-    if (x < -745.1332191019412)
-        return 0;
-    const k = Math.floor(x * INV_LN2 + 0.5);
-    const r = x - k * LN2_HI - k * LN2_LO;
-    const m = 1 + expm1Poly(r);
-    if (k > 1023)
-        return m * pow2(1023) * pow2(k - 1023);
-    if (k < -1022)
-        return m * pow2(k + 1000) * pow2(-1000);
-    return m * pow2(k);
-}
-/** Powers of two 2^0..2^64 for the tanh reduction (k never leaves that range). */
-const POW2_TANH = new Float64Array(65);
-for (let k = 0; k <= 64; k++)
-    POW2_TANH[k] = pow2(k);
-/**
- * tanh(x) = expm1(2|x|) / (expm1(2|x|) + 2) with the sign of x. Branch-free apart from the
- * clamp, so the SIMD kernel can evaluate the same operations lane by lane.
- */
-function detTanh(x) {
-    const ax = Math.min(x < 0 ? -x : x, TANH_CLAMP);
-    const y = ax + ax;
-    // Round y/ln2 to the nearest whole number (ties to even) by adding and removing 1.5·2^52.
-    const k = y * INV_LN2 + ROUND_MAGIC - ROUND_MAGIC;
-    const r = y - k * LN2_HI - k * LN2_LO;
-    const p = expm1PolyEstrin(r);
-    const s = POW2_TANH[k];
-    const em = s * p + (s - 1);
-    const t = em / (em + 2);
-    return x < 0 ? -t : t;
-}
-/** Logistic function through tanh, so it inherits tanh's determinism: 1/(1+e^-x) = (1 + tanh(x/2))/2. */
-function detmath_detLogistic(x) {
-    return 0.5 + 0.5 * detTanh(0.5 * x);
-}
-/** Natural logarithm. */
-function detLog(x) {
-    if (x !== x || x < 0)
-        return NaN;
-    if (x === 0)
-        return -Infinity;
-    if (x === Infinity)
-        return Infinity;
-    let e = 0;
-    if (x < 2.2250738585072014e-308) {
-        x *= 18014398509481984; // 2^54: lift subnormals into the normal range
-        e = -54;
-    }
-    f64[0] = x;
-    const hi = u32[HI];
-    e += ((hi >>> 20) & 0x7ff) - 1023;
-    u32[HI] = (hi & 0x000fffff) | 0x3ff00000; // mantissa in [1, 2)
-    let m = f64[0];
-    if (m > SQRT2) {
-        m *= 0.5;
-        e += 1;
-    }
-    const f = m - 1;
-    const s = f / (2 + f);
-    const s2 = s * s;
-    // 2 atanh(s) = 2 (s + s^3/3 + ... + s^23/23); |s| <= 0.1716 so the tail is below 1e-18.
-    let q = 1 / 21 + s2 * (1 / 23);
-    q = 1 / 19 + s2 * q;
-    q = 1 / 17 + s2 * q;
-    q = 1 / 15 + s2 * q;
-    q = 1 / 13 + s2 * q;
-    q = 1 / 11 + s2 * q;
-    q = 1 / 9 + s2 * q;
-    q = 1 / 7 + s2 * q;
-    q = 1 / 5 + s2 * q;
-    q = 1 / 3 + s2 * q;
-    const series = s2 * q;
-    const logm = 2 * s + 2 * s * series;
-    return e * LN2_HI + (logm + e * LN2_LO);
-}
-/** log(1 + u) for u > -1, keeping the bits of u that 1 + u rounds away. @testOnly */
-function detLog1p(u) {
-    const w = 1 + u;
-    if (w === 1)
-        return u;
-    return detLog(w) + (u - (w - 1)) / w;
-}
-/** log(1 + e^z) without overflow. */
-function detSoftplus(z) {
-    return (z > 0 ? z : 0) + detLog1p(detmath_detExp(z > 0 ? -z : z));
-}
-
-;// CONCATENATED MODULE: ./src/device/fixed-point.ts
-/**
- * The integer arithmetic of the int8 inference, written so that this TypeScript and the
- * exported C compute the same integers. Every value here is an integer held exactly in a
- * double (all magnitudes stay below 2^53), so no step depends on JavaScript's number type.
- *
- * Requantisation follows Jacob et al. 2018, "Quantization and Training of Neural Networks for
- * Efficient Integer-Arithmetic-Only Inference", section 2.2: the real multiplier M (eq. 5) is
- * written M = 2^−n · M0 with M0 in [0.5, 1) (eq. 6), M0 held as a 32-bit fixed-point integer.
- * The fixed-point multiply and the rounding shift are the documented rules of the
- * general-purpose gemmlowp library (fixedpoint/fixedpoint.h): SaturatingRoundingDoublingHighMul
- * and RoundingDivideByPOT.
- * @testOnly
- */
-const INT32_MIN = (/* unused pure expression or super */ null && (-2147483648));
-/** @testOnly */
-const INT32_MAX = 2147483647;
-const TWO_15 = 32768;
-const TWO_30 = 1073741824;
-const TWO_31 = 2147483648;
-/** Largest right shift RoundingDivideByPOT takes (gemmlowp asserts exponent ≤ 31). */
-const fixed_point_MAX_SHIFT = 31;
-/**
- * Round to nearest, ties away from zero. Exact for every double: trunc(x) and x − trunc(x)
- * are both exact, so no addition of 0.5 can round the wrong way.
- */
-function roundHalfAway(x) {
-    const i = Math.trunc(x);
-    const f = x - i;
-    const r = f >= 0.5 ? i + 1 : f <= -0.5 ? i - 1 : i;
-    return r === 0 ? 0 : r; // no −0 in the JSON
-}
-function fixed_point_clamp(x, lo, hi) {
-    return x < lo ? lo : x > hi ? hi : x;
-}
-/**
- * gemmlowp's SaturatingRoundingDoublingHighMul for int32 a, b: (a·b + nudge) / 2^31 truncated
- * toward zero, nudge = 2^30 when a·b ≥ 0 and 1 − 2^30 otherwise (so a tie rounds toward +∞);
- * INT32_MIN · INT32_MIN saturates to INT32_MAX.
- *
- * a·b reaches 2^62, beyond a double's 53 bits, so the product is split: b = bh·2^16 + bl,
- * a·bh = ph·2^15 + pl, and a·b + nudge = ph·2^31 + r with every part exact.
- */
-function saturatingRoundingDoublingHighMul(a, b) {
-    if (a === INT32_MIN && b === INT32_MIN)
-        return INT32_MAX;
-    const bh = b >> 16; // signed high half
-    const bl = b & 0xffff; // unsigned low half
-    const p = a * bh; // |p| ≤ 2^46: exact
-    const q = a * bl; // |q| < 2^47: exact
-    const ph = Math.floor(p / TWO_15);
-    const pl = p - ph * TWO_15; // in [0, 2^15)
-    const negative = (a < 0 && b > 0) || (a > 0 && b < 0);
-    const nudge = negative ? 1 - TWO_30 : TWO_30;
-    const r = pl * 65536 + q + nudge; // |r| < 2^48: exact
-    const rh = Math.floor(r / TWO_31);
-    const rl = r - rh * TWO_31; // in [0, 2^31)
-    const floor = ph + rh; // floor((a·b + nudge) / 2^31)
-    const truncated = floor < 0 && rl !== 0 ? floor + 1 : floor;
-    return truncated === 0 ? 0 : truncated;
-}
-/**
- * gemmlowp's RoundingDivideByPOT: x / 2^exponent rounded to nearest, ties away from zero,
- * for int32 x and 0 ≤ exponent ≤ 31.
- */
-function roundingDivideByPot(x, exponent) {
-    const mask = 2 ** exponent - 1;
-    const remainder = x & mask;
-    const threshold = Math.floor(mask / 2) + (x < 0 ? 1 : 0);
-    return (x >> exponent) + (remainder > threshold ? 1 : 0);
-}
-/**
- * M = 2^−n · M0, M0 in [0.5, 1), M0 stored as round(M0 · 2^31) (eq. 6). Two limits, both exact
- * in their effect on an int32 accumulator acc: for M < 2^−32, |acc · M| < 1/2 always rounds to
- * 0, so the multiplier is 0; for M ≥ 2^31 every nonzero acc saturates an int8, and so does
- * 2^30 · 2^31 (the left shift capped at 31), which stands in for it.
- */
-function quantizeMultiplier(m) {
-    if (!(m > 0) || !Number.isFinite(m))
-        return { multiplier: 0, shift: 0 };
-    let n = 0;
-    let f = m;
-    while (f < 0.5 && n <= fixed_point_MAX_SHIFT + 1) {
-        f *= 2; // exact
-        n++;
-    }
-    while (f >= 1 && n >= -fixed_point_MAX_SHIFT - 1) {
-        f /= 2; // exact
-        n--;
-    }
-    if (n > fixed_point_MAX_SHIFT)
-        return { multiplier: 0, shift: 0 };
-    let m0 = roundHalfAway(f * TWO_31);
-    if (m0 === TWO_31) {
-        m0 = TWO_30;
-        n--;
-    }
-    if (n < -fixed_point_MAX_SHIFT)
-        return { multiplier: TWO_30, shift: -fixed_point_MAX_SHIFT };
-    return { multiplier: m0, shift: n };
-}
-/**
- * acc · M for an int32 acc: a left shift (saturating to int32) when shift < 0, then the
- * fixed-point multiply by M0, then the rounding right shift when shift > 0.
- */
-function fixed_point_multiplyByQuantizedMultiplier(acc, q) {
-    if (q.multiplier === 0)
-        return 0;
-    let x = acc;
-    if (q.shift < 0)
-        x = fixed_point_clamp(acc * 2 ** -q.shift, INT32_MIN, INT32_MAX); // power-of-two product: exact
-    const high = saturatingRoundingDoublingHighMul(x, q.multiplier);
-    return q.shift > 0 ? roundingDivideByPot(high, q.shift) : high;
-}
-
-;// CONCATENATED MODULE: ./src/device/quantize.ts
-
-
-
-/** Largest |int32 bias|; with at most MAX_QUANT_INPUTS terms of |q_w·q_x| ≤ 127·128 the accumulator stays in int32. */
-const quantize_BIAS_LIMIT = 2 ** 30;
-const MAX_QUANT_INPUTS = 16384;
-const INT8_MIN = -128;
-const INT8_MAX = 127;
-/**
- * Pre-activation range and activation codes per activation. The calibrated range is
- * R = max |a| over the calibration rows (ReLU: max a), clipped where the activation is within
- * half an output step of its limit (beyond that every pre-activation gives the same code):
- *   tanh      a in [−R, R], S_a = R/127, Z_a = 0; h in [−tanh R, tanh R], S_h = tanh(R)/127, Z_h = 0
- *             (odd function: symmetric codes). Clip: atanh(1 − 1/254) = ln(507)/2 ≈ 3.11.
- *   logistic  a in [−R, R], S_a = R/127, Z_a = 0; h in [0, σ(R)] (widened to hold 0),
- *             S_h = σ(R)/255, Z_h = −128. Clip: σ(a) = 1 − 1/510 at a = ln(509) ≈ 6.23.
- *   relu      a in [0, R], S_a = R/255, Z_a = −128 (a negative pre-activation clamps to code
- *             −128, which is relu's 0); h = a: S_h = S_a, Z_h = −128.
- * The output range is the image of the pre-activation range, so it needs no calibration of its own.
- */
-function activationRanges(activation, calibrated) {
-    if (activation === 'relu') {
-        const r = calibrated > 0 && Number.isFinite(calibrated) ? calibrated : 1;
-        const s = r / 255;
-        return { preActivation: { scale: s, zeroPoint: INT8_MIN }, activation: { scale: s, zeroPoint: INT8_MIN } };
-    }
-    const clip = activation === 'tanh' ? detLog(507) / 2 : detLog(509);
-    const r = calibrated > 0 && calibrated < clip ? calibrated : clip;
-    const preActivation = { scale: r / 127, zeroPoint: 0 };
-    if (activation === 'tanh')
-        return { preActivation, activation: { scale: detTanh(r) / 127, zeroPoint: 0 } };
-    return { preActivation, activation: { scale: detmath_detLogistic(r) / 255, zeroPoint: INT8_MIN } };
-}
-function activate(activation, a) {
-    if (activation === 'tanh')
-        return detTanh(a);
-    if (activation === 'logistic')
-        return detmath_detLogistic(a);
-    return a > 0 ? a : 0;
-}
-/** q = clamp(Z + round(r / S)) into int8. */
-function quantizeValue(r, p) {
-    return fixed_point_clamp(p.zeroPoint + roundHalfAway(r / p.scale), INT8_MIN, INT8_MAX);
-}
-/** r = S · (q − Z) (the paper's eq. 1). */
-function dequantizeValue(q, p) {
-    return p.scale * (q - p.zeroPoint);
-}
-/**
- * The asymmetric int8 parameters of the range [lo, hi], widened to hold 0, with the
- * zero-point rounded to an integer so that real 0 is exactly representable.
- */
-function rangeParams(lo, hi) {
-    let a = Math.min(lo, 0);
-    let b = Math.max(hi, 0);
-    if (!(b > a)) {
-        a = 0;
-        b = 1;
-    }
-    const scale = (b - a) / 255;
-    return { scale, zeroPoint: fixed_point_clamp(roundHalfAway(INT8_MIN - a / scale), INT8_MIN, INT8_MAX) };
-}
-/** The table of activation codes for every int8 pre-activation code. */
-function activationTable(activation, pre, out) {
-    const table = [];
-    for (let q = INT8_MIN; q < INT8_MIN + cost_LUT_ENTRIES; q++) {
-        table.push(quantizeValue(activate(activation, dequantizeValue(q, pre)), out));
-    }
-    return table;
-}
-/**
- * One layer's symmetric per-output-channel weights and int32 biases. The scale is at least
- * |bias| / (S_in · BIAS_LIMIT), so the bias always fits (coarser weights only when they are
- * negligible beside the bias); an all-zero channel gets scale 1.
- */
-function quantizeLayer(weights, bias, inputScale) {
-    const scales = [];
-    const qWeights = [];
-    const qBias = [];
-    weights.forEach((row, j) => {
-        let maxAbs = 0;
-        for (const w of row)
-            maxAbs = Math.max(maxAbs, Math.abs(w));
-        let s = Math.max(maxAbs / INT8_MAX, Math.abs(bias[j]) / (inputScale * quantize_BIAS_LIMIT));
-        if (!(s > 0) || !Number.isFinite(s))
-            s = 1;
-        scales.push(s);
-        qWeights.push(row.map((w) => fixed_point_clamp(roundHalfAway(w / s), -INT8_MAX, INT8_MAX)));
-        qBias.push(fixed_point_clamp(roundHalfAway(bias[j] / (inputScale * s)), -quantize_BIAS_LIMIT, quantize_BIAS_LIMIT));
-    });
-    return { weights: qWeights, scales, bias: qBias };
-}
-/** bias − Z · Σ weights: the accumulator then sums weight · code directly (the paper's section 2.3). */
-function quantize_foldZeroPoint(bias, weights, zero) {
-    return bias.map((b, j) => b - zero * weights[j].reduce((s, w) => s + w, 0));
-}
-function checkFinite(net) {
-    const all = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
-    if (!all.every(Number.isFinite))
-        throw new RangeError('cannot quantise a network with non-finite weights');
-}
-/** Largest |a| (ReLU: largest a) of the hidden pre-activations over the calibration rows, in float64. */
-function calibratePreActivation(net, cal) {
-    const D = net.inputs;
-    let extreme = 0;
-    for (let p = 0; p < cal.rows; p++) {
-        for (let j = 0; j < net.width; j++) {
-            let a = net.hiddenBias[j];
-            const w = net.hiddenWeights[j];
-            for (let i = 0; i < D; i++)
-                a += cal.x[p * D + i] * w[i];
-            const v = net.activation === 'relu' ? a : Math.abs(a);
-            if (v > extreme)
-                extreme = v;
-        }
-    }
-    return extreme;
-}
-function inputRange(cal, D) {
-    let lo = 0;
-    let hi = 0;
-    for (let q = 0; q < cal.rows * D; q++) {
-        const v = cal.x[q];
-        if (v < lo)
-            lo = v;
-        if (v > hi)
-            hi = v;
-    }
-    return rangeParams(lo, hi);
-}
-/** The int8 form of `net`, its activation ranges calibrated on `calibration` (the training rows). */
-function quantizeNetwork(net, encoding, calibration) {
-    const D = net.inputs;
-    const H = net.width;
-    const K = net.outputs;
-    if (D > MAX_QUANT_INPUTS || H > MAX_QUANT_INPUTS) {
-        throw new RangeError(`int8 quantisation takes at most ${MAX_QUANT_INPUTS} inputs and hidden neurons`);
-    }
-    if (calibration.rows < 1)
-        throw new RangeError('int8 quantisation needs at least one calibration row');
-    checkFinite(net);
-    const encoded = encoding.features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
-    if (encoded !== D)
-        throw new RangeError(`the encoding gives ${encoded} inputs, the network takes ${D}`);
-    const input = inputRange(calibration, D);
-    const features = encoding.features.map((f) => f.kind === 'numeric'
-        ? {
-            kind: 'numeric',
-            mean: Math.fround(f.mean),
-            multiplier: Math.fround(1 / ((f.std > 0 ? f.std : 1) * input.scale)),
-        }
-        : { kind: 'categorical', categories: f.categories.length });
-    const hidden = quantizeLayer(net.hiddenWeights, net.hiddenBias, input.scale);
-    const ranges = activationRanges(net.activation, calibratePreActivation(net, calibration));
-    const multipliers = hidden.scales.map((s) => quantizeMultiplier((input.scale * s) / ranges.preActivation.scale));
-    const t = encoding.target;
-    const regression = t.task === 'regression';
-    const outBias = net.outputBias.map((b) => (regression ? b + t.mean / t.std : b));
-    const S_h = ranges.activation.scale;
-    const output = quantizeLayer(net.outputWeights, outBias, S_h);
-    return {
-        inputs: D,
-        width: H,
-        outputs: K,
-        activation: net.activation,
-        head: net.head,
-        input: { ...input, one: quantizeValue(1, input), features },
-        hidden: {
-            weights: hidden.weights,
-            weightScales: hidden.scales,
-            bias: hidden.bias,
-            multiplier: multipliers.map((m) => m.multiplier),
-            shift: multipliers.map((m) => m.shift),
-            preActivation: ranges.preActivation,
-            activation: ranges.activation,
-            table: activationTable(net.activation, ranges.preActivation, ranges.activation),
-        },
-        output: {
-            weights: output.weights,
-            weightScales: output.scales,
-            bias: output.bias,
-            scale: output.scales.map((s) => Math.fround(S_h * s * (regression ? t.std : 1))),
-        },
-    };
-}
-
-;// CONCATENATED MODULE: ./src/device/int8-forward.ts
-/**
- * The int8 inference exactly as the exported C runs it (export-c.ts, NAME_predict_int8), so
- * that both give the same bits. The only float operations are the ones the C performs, each
- * rounded to float32 with Math.fround: the centring of a raw numeric feature (x − mean), its
- * scaling into quantisation steps (· multiplier), the int32 accumulator's conversion to float
- * and the output's dequantisation (· scale). Everything else is integer arithmetic.
- *
- * None of these float steps is a product feeding a sum, so a C compiler that contracts
- * a·b + c into a fused multiply-add cannot change them; they need IEEE 754 single precision
- * with each assignment rounded to float (FLT_EVAL_METHOD 0, or a compiler that honours C99's
- * rounding on assignment, as GCC does in its ISO modes).
- */
-
-
-
-/** A raw value's clamp before it is rounded to an integer (keeps the C's float → int conversion defined). */
-const int8_forward_INPUT_STEP_LIMIT = 512;
-/** The requantised pre-activation's clamp before its zero-point is added (keeps the C's sum in int32). */
-const int8_forward_PRE_ACTIVATION_LIMIT = 255;
-/**
- * A value in input quantisation steps to its int8 code: clamp t to ±512 (NaN to −512), round
- * half away from zero through truncation (t − trunc(t) is exact in float32), add Z, clamp.
- */
-function inputCode(t, zeroPoint) {
-    let v = t;
-    if (!(v > -int8_forward_INPUT_STEP_LIMIT))
-        v = -int8_forward_INPUT_STEP_LIMIT;
-    else if (v > int8_forward_INPUT_STEP_LIMIT)
-        v = int8_forward_INPUT_STEP_LIMIT;
-    let i = Math.trunc(v);
-    const f = Math.fround(v - i);
-    if (f >= 0.5)
-        i++;
-    else if (f <= -0.5)
-        i--;
-    return clamp(zeroPoint + i, -128, 127);
-}
-/** A categorical feature's raw value as a category index: a whole number in [0, n), else −1 (all zeros). */
-function categoryIndex(v, n) {
-    if (v >= 0 && v < n) {
-        const c = Math.trunc(v);
-        if (c === v)
-            return c;
-    }
-    return -1;
-}
-/**
- * Run the int8 network on `rows` rows of raw features (rows × features, float32 values).
- * With `trace`, also records the input and hidden codes of every row.
- */
-function int8Forward(q, features, rows, trace = null) {
-    const F = q.input.features.length;
-    const D = q.inputs;
-    const H = q.width;
-    const K = q.outputs;
-    const b1 = foldZeroPoint(q.hidden.bias, q.hidden.weights, q.input.zeroPoint);
-    const b2 = foldZeroPoint(q.output.bias, q.output.weights, q.hidden.activation.zeroPoint);
-    const requant = q.hidden.multiplier.map((multiplier, j) => ({ multiplier, shift: q.hidden.shift[j] }));
-    const zx = q.input.zeroPoint;
-    const za = q.hidden.preActivation.zeroPoint;
-    const xq = new Int32Array(D);
-    const hq = new Int32Array(H);
-    const classes = new Int32Array(rows);
-    const outputs = new Float32Array(rows * K);
-    for (let p = 0; p < rows; p++) {
-        let c = 0;
-        for (let f = 0; f < F; f++) {
-            const v = Math.fround(features[p * F + f]);
-            const e = q.input.features[f];
-            if (e.kind === 'numeric') {
-                const d = Math.fround(v - e.mean);
-                xq[c++] = inputCode(Math.fround(d * e.multiplier), zx);
-            }
-            else {
-                const k = categoryIndex(v, e.categories);
-                for (let j = 0; j < e.categories; j++)
-                    xq[c + j] = j === k ? q.input.one : zx;
-                c += e.categories;
-            }
-        }
-        for (let j = 0; j < H; j++) {
-            const w = q.hidden.weights[j];
-            let acc = b1[j];
-            for (let i = 0; i < D; i++)
-                acc += w[i] * xq[i];
-            const r = clamp(multiplyByQuantizedMultiplier(acc, requant[j]), -int8_forward_PRE_ACTIVATION_LIMIT, int8_forward_PRE_ACTIVATION_LIMIT);
-            const code = clamp(za + r, -128, 127);
-            hq[j] = q.hidden.table[code + 128];
-            if (trace)
-                trace.preActivation[p * H + j] = code;
-        }
-        if (trace) {
-            trace.inputs.set(xq, p * D);
-            trace.hidden.set(hq, p * H);
-        }
-        let best = 0;
-        for (let k = 0; k < K; k++) {
-            const w = q.output.weights[k];
-            let acc = b2[k];
-            for (let j = 0; j < H; j++)
-                acc += w[j] * hq[j];
-            const z = Math.fround(Math.fround(acc) * q.output.scale[k]);
-            outputs[p * K + k] = z;
-            if (z > outputs[p * K + best])
-                best = k;
-        }
-        classes[p] = q.head === 'softmax' ? best : q.head === 'logistic' ? (outputs[p * K] > 0 ? 1 : 0) : 0;
-    }
-    return { classes, outputs };
-}
-/**
- * Raw CSV rows as the device's raw features (rows × features, float32): a numeric feature's
- * number, a categorical feature's category index (−1 for a category the model has not seen,
- * which encodes as all zeros, as encodeRows does).
- */
-function rawFeatureRows(encoding, rows) {
-    const F = encoding.features.length;
-    const out = new Float32Array(rows.length * F);
-    rows.forEach((row, r) => {
-        encoding.features.forEach((f, i) => {
-            const cell = row[f.name];
-            if (cell === undefined)
-                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
-            const text = cell.trim();
-            if (f.kind === 'categorical') {
-                out[r * F + i] = f.categories.indexOf(text);
-                return;
-            }
-            const v = text === '' ? Number.NaN : Number(text);
-            if (!Number.isFinite(v)) {
-                throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
-            }
-            out[r * F + i] = v;
-        });
-    });
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/device/int8-check.ts
-
-
-
-const isInt = (v, lo, hi) => Number.isInteger(v) && v >= lo && v <= hi;
-const isF32 = (v) => typeof v === 'number' && Number.isFinite(v) && Math.fround(v) === v;
-const isPositive = (v) => typeof v === 'number' && Number.isFinite(v) && v > 0;
-function list(v, n, ok) {
-    return Array.isArray(v) && v.length === n && v.every(ok);
-}
-function matrix(v, rows, cols, ok) {
-    return Array.isArray(v) && v.length === rows && v.every((r) => list(r, cols, ok));
-}
-const obj = (v) => typeof v === 'object' && v !== null && !Array.isArray(v) ? v : null;
-function quantParams(v) {
-    const p = obj(v);
-    return p !== null && isPositive(p.scale) && isInt(p.zeroPoint, -128, 127);
-}
-function int8_check_checkInt8Network(value, shape, encoding) {
-    const { inputs: D, width: H, outputs: K } = shape;
-    const q = obj(value);
-    if (q === null)
-        return { key: 'int8', expected: 'an object or null' };
-    if (q.inputs !== D || q.width !== H || q.outputs !== K) {
-        return { key: 'int8', expected: `the shape of the network (${D} inputs, ${H} hidden, ${K} outputs)` };
-    }
-    const input = obj(q.input);
-    if (input === null || !quantParams(input) || !isInt(input.one, -128, 127)) {
-        return { key: 'int8.input', expected: 'a scale, an int8 zero-point and an int8 one-hot code' };
-    }
-    const features = input.features;
-    const fine = Array.isArray(features) &&
-        features.length === encoding.features.length &&
-        features.every((f, i) => {
-            const e = encoding.features[i];
-            const g = obj(f);
-            if (g === null || g.kind !== e.kind)
-                return false;
-            if (e.kind === 'categorical')
-                return g.categories === e.categories.length;
-            return isF32(g.mean) && isF32(g.multiplier);
-        });
-    if (!fine)
-        return { key: 'int8.input.features', expected: 'one entry per feature of the encoding, of its kind' };
-    const hidden = obj(q.hidden);
-    if (hidden === null)
-        return { key: 'int8.hidden', expected: 'an object' };
-    const checks = [
-        ['weights', matrix(hidden.weights, H, D, (w) => isInt(w, -127, 127)), `${H} rows of ${D} integers in [-127, 127]`],
-        ['weightScales', list(hidden.weightScales, H, isPositive), `${H} positive numbers`],
-        ['bias', list(hidden.bias, H, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${H} integers within ±2^30`],
-        ['multiplier', list(hidden.multiplier, H, (m) => isInt(m, 0, 2 ** 31 - 1)), `${H} integers in [0, 2^31)`],
-        ['shift', list(hidden.shift, H, (n) => isInt(n, -MAX_SHIFT, MAX_SHIFT)), `${H} integers in [-31, 31]`],
-        ['preActivation', quantParams(hidden.preActivation), 'a scale and an int8 zero-point'],
-        ['activation', quantParams(hidden.activation), 'a scale and an int8 zero-point'],
-        ['table', list(hidden.table, LUT_ENTRIES, (t) => isInt(t, -128, 127)), `${LUT_ENTRIES} integers in [-128, 127]`],
-    ];
-    for (const [key, ok, expected] of checks)
-        if (!ok)
-            return { key: `int8.hidden.${key}`, expected };
-    const output = obj(q.output);
-    if (output === null)
-        return { key: 'int8.output', expected: 'an object' };
-    const outChecks = [
-        ['weights', matrix(output.weights, K, H, (w) => isInt(w, -127, 127)), `${K} rows of ${H} integers in [-127, 127]`],
-        ['weightScales', list(output.weightScales, K, isPositive), `${K} positive numbers`],
-        ['bias', list(output.bias, K, (b) => isInt(b, -BIAS_LIMIT, BIAS_LIMIT)), `${K} integers within ±2^30`],
-        ['scale', list(output.scale, K, isF32), `${K} finite float32 numbers`],
-    ];
-    for (const [key, ok, expected] of outChecks)
-        if (!ok)
-            return { key: `int8.output.${key}`, expected };
-    return null;
-}
-
-;// CONCATENATED MODULE: ./src/device/c-text.ts
-/**
- * Pieces of C source text: checked identifiers, safe comment text and exact float32 literals.
- * Names from a repository (features, categories, classes, config paths) are untrusted: they
- * only ever reach the C inside comments, through `commentText`.
- */
-
-/** Letters, digits and underscores, a letter first (a leading underscore is reserved in C), at most 31 (C99's portable length). */
-const C_NAME = /^[A-Za-z][A-Za-z0-9_]{0,30}$/;
-/**
- * The NAME of NAME.h, NAME.c and NAME_predict; a clear error for anything that is not a plain C
- * identifier (the value shown JSON-escaped, so no control character reaches a log line).
- */
-function c_text_checkCName(name, key = '--name') {
-    if (!C_NAME.test(name)) {
-        const shown = JSON.stringify(name.length > 40 ? `${name.slice(0, 40)}…` : name).replace(/[\u007f-\u009f\u2028\u2029]/g, '?');
-        throw new UserError(`${key}: expected a C identifier (a letter, then up to 30 letters, digits or underscores), found ${shown}`, { key });
-    }
-    return name;
-}
-/** Longest untrusted text kept in a comment, in characters, before the escapes. */
-const COMMENT_CLIP = 64;
-/**
- * Untrusted text made safe inside a C block comment: clipped to `max` characters (with "..."),
- * every character outside printable ASCII, and the backslash, written as <U+XXXX> (no line
- * break, control character or line splice survives), "??" broken so no trigraph forms, and
- * every "*\/" and "/*" broken with a space.
- */
-function c_text_commentText(text, max = COMMENT_CLIP) {
-    const chars = Array.from(text);
-    const clipped = chars.length > max ? [...chars.slice(0, max), '.', '.', '.'] : chars;
-    let out = '';
-    for (const ch of clipped) {
-        const code = ch.codePointAt(0) ?? 0;
-        const printable = code >= 0x20 && code <= 0x7e && ch !== '\\';
-        out += printable ? ch : `<U+${code.toString(16).toUpperCase().padStart(4, '0')}>`;
-    }
-    out = out.replace(/\?\?/g, '?<U+003F>');
-    let before;
-    do {
-        before = out;
-        out = out.replace(/\*\//g, '* /').replace(/\/\*/g, '/ *');
-    } while (out !== before);
-    return out;
-}
-const f32 = new Float32Array(1);
-const c_text_u32 = new Uint32Array(f32.buffer);
-/** A float32 value as a C99 hexadecimal float literal with an f suffix: exact by construction. */
-function c_text_floatLiteral(x) {
-    if (!Number.isFinite(x) || Math.fround(x) !== x) {
-        throw new RangeError(`not a finite float32 value: ${x}`);
-    }
-    f32[0] = x;
-    const bits = c_text_u32[0];
-    const sign = bits >>> 31 ? '-' : '';
-    const exp = (bits >>> 23) & 0xff;
-    const mant = bits & 0x7fffff;
-    if (exp === 0 && mant === 0)
-        return `${sign}0x0p+0f`;
-    // 23 fraction bits shifted to 24 fill six hex digits.
-    const digits = (mant << 1).toString(16).padStart(6, '0').replace(/0+$/, '');
-    const frac = digits === '' ? '' : `.${digits}`;
-    const e = exp === 0 ? -126 : exp - 127;
-    return `${sign}0x${exp === 0 ? 0 : 1}${frac}p${e < 0 ? '-' : '+'}${Math.abs(e)}f`;
-}
-/** An int8 or int32 constant as a C literal (INT32_MIN would need a cast; the scheme never stores it). */
-function c_text_intLiteral(v) {
-    if (!Number.isInteger(v) || v <= -2147483648 || v > 2147483647)
-        throw new RangeError(`not an int32 literal: ${v}`);
-    return String(v);
-}
-
-;// CONCATENATED MODULE: ./src/device/c-code.ts
-
-function encodeStatements(model, name, int8Path) {
-    const out = [];
-    let offset = 0;
-    let m = 0;
-    model.encoding.features.forEach((f, i) => {
-        if (f.kind === 'numeric') {
-            out.push(int8Path
-                ? `  {\n    const float d = features[${i}] - ${name}_q_in_mean[${m}];\n    const float t = d * ${name}_q_in_mul[${m}];\n    xq[${offset}] = ${name}_input_code(t);\n  }`
-                : `  x[${offset}] = (features[${i}] - ${name}_f_in_mean[${m}]) / ${name}_f_in_std[${m}];`);
-            m++;
-            offset++;
-        }
-        else {
-            const n = f.categories.length;
-            out.push(`  c = ${name}_category(features[${i}], ${n});`, int8Path
-                ? `  for (j = 0; j < ${n}; j++) xq[${offset} + j] = j == c ? ${name}_q_in_one : ${name}_q_in_zero;`
-                : `  for (j = 0; j < ${n}; j++) x[${offset} + j] = j == c ? 1.0f : 0.0f;`);
-            offset += n;
-        }
-    });
-    return out;
-}
-function c_code_helpers(name, hasNumeric, hasCategorical) {
-    const out = [];
-    if (hasCategorical) {
-        out.push(`/* A raw categorical value as a category index: a whole number in [0, n), else -1. */`, `static int ${name}_category(float v, int n) {`, `  if (v >= 0.0f && v < (float)n) {`, `    const int c = (int)v;`, `    if ((float)c == v) return c;`, `  }`, `  return -1;`, `}`, ``);
-    }
-    if (hasNumeric) {
-        out.push(`/* Input steps to an int8 code: clamp, round half away from zero (t - trunc(t) is exact), add the zero-point. */`, `static int8_t ${name}_input_code(float t) {`, `  int32_t i;`, `  float f;`, `  if (!(t > -${INPUT_STEP_LIMIT}.0f)) t = -${INPUT_STEP_LIMIT}.0f;`, `  else if (t > ${INPUT_STEP_LIMIT}.0f) t = ${INPUT_STEP_LIMIT}.0f;`, `  i = (int32_t)t;`, `  f = t - (float)i;`, `  if (f >= 0.5f) i++;`, `  else if (f <= -0.5f) i--;`, `  i += ${name}_q_in_zero;`, `  return (int8_t)(i < -128 ? -128 : i > 127 ? 127 : i);`, `}`, ``);
-    }
-    out.push(`/*`, ` * acc * M with M = m0 * 2^-31 * 2^-shift: a saturating left shift when shift < 0, the fixed-point`, ` * multiply (nudge, then division by 2^31 truncating toward zero) and a rounding right shift (ties`, ` * away from zero) when shift > 0: gemmlowp's SaturatingRoundingDoublingHighMul and RoundingDivideByPOT.`, ` */`, `static int32_t ${name}_requantize(int32_t acc, int32_t m0, int shift) {`, `  int64_t x = acc;`, `  int64_t ab;`, `  int32_t high, mask, remainder, threshold, floor_shift;`, `  if (m0 == 0) return 0;`, `  if (shift < 0) {`, `    x *= (int64_t)1 << -shift;`, `    if (x > INT32_MAX) x = INT32_MAX;`, `    if (x < INT32_MIN) x = INT32_MIN;`, `  }`, `  if (x == INT32_MIN && m0 == INT32_MIN) return INT32_MAX;`, `  ab = x * (int64_t)m0;`, `  high = (int32_t)((ab + (ab >= 0 ? ((int64_t)1 << 30) : (1 - ((int64_t)1 << 30)))) / ((int64_t)1 << 31));`, `  if (shift <= 0) return high;`, `  mask = (int32_t)(((int64_t)1 << shift) - 1);`, `  remainder = (int32_t)((uint32_t)high & (uint32_t)mask);`, `  threshold = (mask >> 1) + (high < 0 ? 1 : 0);`, `  floor_shift = high >= 0 ? (high >> shift) : ~((~high) >> shift);`, `  return floor_shift + (remainder > threshold ? 1 : 0);`, `}`, ``);
-    return out;
-}
-function c_code_floatPath(model, name) {
-    const N = name.toUpperCase();
-    const net = model.network;
-    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
-    const activation = net.activation === 'tanh'
-        ? 'tanhf(a)'
-        : net.activation === 'logistic'
-            ? '1.0f / (1.0f + expf(-a))'
-            : 'a > 0.0f ? a : 0.0f';
-    const out = [
-        `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
-        `  float x[${N}_INPUTS];`,
-        `  float h[${N}_HIDDEN];`,
-        `  int i, j, k;`,
-        ...(hasCategorical ? [`  int c;`] : []),
-        ...encodeStatements(model, name, false),
-        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
-        `    float a = ${name}_f_b1[j];`,
-        `    for (i = 0; i < ${N}_INPUTS; i++) a += ${name}_f_w1[j][i] * x[i];`,
-        `    h[j] = ${activation};`,
-        `  }`,
-        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
-        `    float z = ${name}_f_b2[k];`,
-        `    for (j = 0; j < ${N}_HIDDEN; j++) z += ${name}_f_w2[k][j] * h[j];`,
-        `    outputs[k] = z;`,
-        `  }`,
-    ];
-    if (net.head === 'softmax') {
-        out.push(`  {`, `    float m = outputs[0], s = 0.0f;`, `    int best = 0;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > m) m = outputs[k];`, `    for (k = 0; k < ${N}_OUTPUTS; k++) {`, `      outputs[k] = expf(outputs[k] - m);`, `      s += outputs[k];`, `    }`, `    for (k = 0; k < ${N}_OUTPUTS; k++) outputs[k] /= s;`, `    for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `    return best;`, `  }`);
-    }
-    else if (net.head === 'logistic') {
-        out.push(`  outputs[0] = 1.0f / (1.0f + expf(-outputs[0]));`, `  return outputs[0] > 0.5f ? 1 : 0;`);
-    }
-    else {
-        out.push(`  outputs[0] = outputs[0] * ${name}_f_target[1] + ${name}_f_target[0];`, `  return 0;`);
-    }
-    out.push(`}`, ``);
-    return out;
-}
-function c_code_int8Path(model, name) {
-    const N = name.toUpperCase();
-    const head = model.network.head;
-    const hasCategorical = model.encoding.features.some((f) => f.kind === 'categorical');
-    const out = [
-        `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]) {`,
-        `  int8_t xq[${N}_INPUTS];`,
-        `  int8_t hq[${N}_HIDDEN];`,
-        `  int i, j, k;`,
-        ...(hasCategorical ? [`  int c;`] : []),
-        ...(head === 'softmax' ? [`  int best = 0;`] : []),
-        ...encodeStatements(model, name, true),
-        `  for (j = 0; j < ${N}_HIDDEN; j++) {`,
-        `    int32_t acc = ${name}_q_b1[j], r;`,
-        `    for (i = 0; i < ${N}_INPUTS; i++) acc += (int32_t)${name}_q_w1[j][i] * (int32_t)xq[i];`,
-        `    r = ${name}_requantize(acc, ${name}_q_m0[j], ${name}_q_shift[j]);`,
-        `    if (r < -${PRE_ACTIVATION_LIMIT}) r = -${PRE_ACTIVATION_LIMIT};`,
-        `    else if (r > ${PRE_ACTIVATION_LIMIT}) r = ${PRE_ACTIVATION_LIMIT};`,
-        `    r += ${name}_q_act_zero;`,
-        `    if (r < -128) r = -128;`,
-        `    else if (r > 127) r = 127;`,
-        `    hq[j] = ${name}_q_lut[r + 128];`,
-        `  }`,
-        `  for (k = 0; k < ${N}_OUTPUTS; k++) {`,
-        `    int32_t acc = ${name}_q_b2[k];`,
-        `    for (j = 0; j < ${N}_HIDDEN; j++) acc += (int32_t)${name}_q_w2[k][j] * (int32_t)hq[j];`,
-        `    outputs[k] = (float)acc * ${name}_q_out_scale[k];`,
-        `  }`,
-    ];
-    if (head === 'softmax') {
-        out.push(`  for (k = 1; k < ${N}_OUTPUTS; k++) if (outputs[k] > outputs[best]) best = k;`, `  return best;`);
-    }
-    else if (head === 'logistic') {
-        out.push(`  return outputs[0] > 0.0f ? 1 : 0;`);
-    }
-    else {
-        out.push(`  return 0;`);
-    }
-    out.push(`}`, ``);
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/device/export-c.ts
-/**
- * Firmware export: a model as C99 source, NAME.h and NAME.c, with a float32 and an int8 path.
- * No dynamic allocation, nothing beyond the C standard library (math.h on the float path).
- * The constant objects are exactly those cost.ts counts (`storedObjects`), and the int8 path
- * does exactly what int8-forward.ts simulates, operation for operation.
- */
-
-
-
-
-
-const DEFAULT_C_NAME = 'nb_model';
-const q = (s) => `"${commentText(s)}"`;
-function checkModel(model) {
-    const net = model.network;
-    const int8 = model.int8;
-    if (int8 === null) {
-        throw new UserError('model: no int8 network (key "int8" is null); write the model again with this version');
-    }
-    const values = [...net.hiddenWeights.flat(), ...net.hiddenBias, ...net.outputWeights.flat(), ...net.outputBias];
-    if (!values.every(Number.isFinite))
-        throw new UserError('model: network weights must be finite numbers');
-    if (int8.inputs !== net.inputs || int8.width !== net.width || int8.outputs !== net.outputs) {
-        throw new UserError('model: the int8 network does not have the shape of the float network', { key: 'int8' });
-    }
-    return int8;
-}
-function headerText(model, name, p) {
-    const N = name.toUpperCase();
-    const net = model.network;
-    const enc = model.encoding;
-    const classes = enc.target.classes ?? [];
-    const regression = model.task === 'regression';
-    const act = net.activation;
-    const lines = [
-        `/*`,
-        ` * ${name}.h: a neural network for the device, written by neuron-budget ${commentText(p.toolVersion, 32)}.`,
-        ` * Do not edit: export it again from the model file instead.`,
-        ` *`,
-        ` * Data fingerprint: ${commentText(p.dataFingerprint, 80)}`,
-        ` * Config: ${commentText(p.config, 120)}`,
-        ` * Network: ${net.inputs} inputs after encoding, ${net.width} hidden neurons (${act}), ${net.outputs} output${net.outputs === 1 ? '' : 's'} (${net.head} head).`,
-        ` *`,
-        ` * features[] holds the raw values, in this order:`,
-    ];
-    enc.features.forEach((f, i) => {
-        if (f.kind === 'numeric') {
-            lines.push(` *   [${i}] ${q(f.name)}: a number, standardised on the device`);
-        }
-        else {
-            lines.push(` *   [${i}] ${q(f.name)}: the category's index, one-hot encoded on the device:`);
-            f.categories.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
-        }
-    });
-    if (enc.features.some((f) => f.kind === 'categorical')) {
-        lines.push(` * A category index that is not a whole number in range encodes as no category (all zeros).`);
-    }
-    lines.push(` *`);
-    if (regression) {
-        lines.push(` * Both functions return 0 and write the prediction of ${q(enc.target.name)}, in its own units, to outputs[0].`);
-    }
-    else {
-        lines.push(` * Both functions return the class index of ${q(enc.target.name)}:`);
-        classes.forEach((c, k) => lines.push(` *         ${k} = ${q(c)}`));
-        lines.push(` * ${name}_predict: the float32 network; outputs[] gets ${net.head === 'softmax' ? 'the probability of each class, in class order' : 'the probability of class 1'}.`, ` * ${name}_predict_int8: the int8 network; outputs[] gets the dequantised logit${net.outputs === 1 ? ' of class 1 (class 1 when it is above 0)' : ' of each class (the largest wins)'}.`);
-    }
-    lines.push(` * The int8 path is integer arithmetic apart from the input scaling and the output's dequantisation;`, ` * its outputs equal neuron-budget's simulation of it bit for bit on IEEE 754 single precision with`, ` * each assignment rounded to float (FLT_EVAL_METHOD 0, or GCC in an ISO mode such as -std=c99).`, ` * The float path runs the trained network in float32 arithmetic; it needs tanhf and expf (link -lm).`, ` */`, `#ifndef ${N}_H`, `#define ${N}_H`, ``, `#ifdef __cplusplus`, `extern "C" {`, `#endif`, ``, `#define ${N}_FEATURES ${enc.features.length}`, `#define ${N}_OUTPUTS ${net.outputs}`, `#define ${N}_INPUTS ${net.inputs}`, `#define ${N}_HIDDEN ${net.width}`);
-    if (!regression)
-        lines.push(`#define ${N}_CLASSES ${classes.length}`);
-    lines.push(``, `int ${name}_predict(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, `int ${name}_predict_int8(const float features[${N}_FEATURES], float outputs[${N}_OUTPUTS]);`, ``, `#ifdef __cplusplus`, `}`, `#endif`, ``, `#endif`, ``);
-    return lines.join('\n');
-}
-/** Values wrapped into lines of at most ~100 characters, indented. */
-function wrap(values, indent) {
-    const lines = [];
-    let line = '';
-    for (const v of values) {
-        if (line !== '' && line.length + v.length + 2 > 100 - indent.length) {
-            lines.push(`${indent}${line},`);
-            line = '';
-        }
-        line = line === '' ? v : `${line}, ${v}`;
-    }
-    if (line !== '')
-        lines.push(`${indent}${line}`);
-    return lines.join('\n');
-}
-function literal(type, v) {
-    return type === 'float' ? floatLiteral(v) : intLiteral(v);
-}
-function declare(name, o, values) {
-    const decl = `static const ${o.type} ${name}_${o.suffix}`;
-    const flat = values.flat();
-    if (flat.length !== o.count)
-        throw new Error(`internal: ${o.suffix} has ${flat.length} values, expected ${o.count}`);
-    const cells = (row, indent) => wrap(row.map((v) => literal(o.type, v)), indent);
-    if (o.scalar)
-        return `${decl} = ${literal(o.type, flat[0])};`;
-    if (isMatrix(values)) {
-        const rows = values.map((r) => `  {\n${cells(r, '    ')}\n  }`);
-        return `${decl}[${values.length}][${values[0].length}] = {\n${rows.join(',\n')}\n};`;
-    }
-    return `${decl}[${o.count}] = {\n${cells(flat, '  ')}\n};`;
-}
-function isMatrix(values) {
-    return Array.isArray(values[0]);
-}
-/** The values of each stored object, keyed by suffix. */
-function objectValues(model, int8) {
-    const net = model.network;
-    const enc = model.encoding;
-    const numeric = enc.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
-    const qNumeric = int8.input.features.flatMap((f) => (f.kind === 'numeric' ? [f] : []));
-    const f = (v) => Math.fround(v);
-    const rows = (m) => m.map((r) => r.map(f));
-    return {
-        f_in_mean: numeric.map((e) => f(e.mean)),
-        f_in_std: numeric.map((e) => f(e.std > 0 ? e.std : 1)),
-        f_w1: rows(net.hiddenWeights),
-        f_b1: net.hiddenBias.map(f),
-        f_w2: rows(net.outputWeights),
-        f_b2: net.outputBias.map(f),
-        f_target: [f(enc.target.mean), f(enc.target.std)],
-        q_in_mean: qNumeric.map((e) => e.mean),
-        q_in_mul: qNumeric.map((e) => e.multiplier),
-        q_in_zero: [int8.input.zeroPoint],
-        q_in_one: [int8.input.one],
-        q_w1: int8.hidden.weights,
-        q_b1: foldZeroPoint(int8.hidden.bias, int8.hidden.weights, int8.input.zeroPoint),
-        q_m0: int8.hidden.multiplier,
-        q_shift: int8.hidden.shift,
-        q_act_zero: [int8.hidden.preActivation.zeroPoint],
-        q_lut: int8.hidden.table,
-        q_w2: int8.output.weights,
-        q_b2: foldZeroPoint(int8.output.bias, int8.output.weights, int8.hidden.activation.zeroPoint),
-        q_out_scale: int8.output.scale,
-    };
-}
-function sourceText(model, int8, name, p) {
-    const stored = storedObjects(costShapeOf(model.network, model.encoding));
-    const values = objectValues(model, int8);
-    const numeric = model.encoding.features.some((f) => f.kind === 'numeric');
-    const categorical = model.encoding.features.some((f) => f.kind === 'categorical');
-    const s = int8.hidden;
-    return [
-        `/*`,
-        ` * ${name}.c: written by neuron-budget ${commentText(p.toolVersion, 32)}; see ${name}.h. Do not edit.`,
-        ` *`,
-        ` * int8 scheme: input scale ${int8.input.scale.toPrecision(6)}, zero-point ${int8.input.zeroPoint};`,
-        ` * pre-activation scale ${s.preActivation.scale.toPrecision(6)}, zero-point ${s.preActivation.zeroPoint};`,
-        ` * hidden activation scale ${s.activation.scale.toPrecision(6)}, zero-point ${s.activation.zeroPoint};`,
-        ` * symmetric per-neuron int8 weights, int32 biases (zero-points folded in), ${model.network.activation} by table.`,
-        ` */`,
-        `#include "${name}.h"`,
-        `#include <math.h>`,
-        `#include <stdint.h>`,
-        ``,
-        `/* float32 network */`,
-        ...stored.float32.map((o) => declare(name, o, values[o.suffix])),
-        ``,
-        `/* int8 network */`,
-        ...stored.int8.map((o) => declare(name, o, values[o.suffix])),
-        ``,
-        ...helpers(name, numeric, categorical),
-        ...floatPath(model, name),
-        ...int8Path(model, name),
-    ].join('\n');
-}
-/** NAME.h and NAME.c for `model`; `name` must be a C identifier. */
-function exportC(model, name, provenance) {
-    checkCName(name);
-    const int8 = checkModel(model);
-    return {
-        headerFile: `${name}.h`,
-        sourceFile: `${name}.c`,
-        header: headerText(model, name, provenance),
-        source: sourceText(model, int8, name, provenance),
-    };
-}
-
-;// CONCATENATED MODULE: ./src/device/index.ts
-/**
- * Device reality: what a network costs on a microcontroller, its int8 form, and firmware
- * source for both forms. Pure functions; no I/O.
- */
-
-
-
-
-
-
-
-
-;// CONCATENATED MODULE: ./src/model/document.ts
-
-
-const MODEL_SCHEMA = 'neuron-budget/model@2';
-/** The previous version (no cost, no int8 network): still read, as int8 null. */
-const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
-/**
- * The witness as a document. With `calibration` (the encoded training rows) it carries the
- * int8 form too.
- */
-function modelDocument(witness, encoding, target, backing, calibration = null) {
-    return {
-        schema: MODEL_SCHEMA,
-        task: encoding.target.task,
-        width: witness.network.width,
-        target: {
-            metric: target.metric,
-            threshold: target.threshold,
-            value: witness.judged,
-            on: backing.on,
-            met: witness.met,
-            adequate: backing.adequate,
-        },
-        origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
-        encoding: structuredClone(encoding),
-        network: structuredClone(witness.network),
-        cost: cost_deviceCost(cost_costShapeOf(witness.network, encoding)),
-        int8: calibration === null ? null : quantizeNetwork(witness.network, encoding, calibration),
-    };
-}
-/** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
-function serializeModel(doc) {
-    return `${JSON.stringify(doc, null, 2)}\n`;
-}
-function inputsOf(features) {
-    return features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
-}
-/** Parse and check a model file; a bad file gets a message naming the file and the key. */
-function parseModel(text, file = 'model') {
-    let doc;
-    try {
-        doc = JSON.parse(text);
-    }
-    catch (e) {
-        throw new UserError(`${file}: not valid JSON (${e instanceof Error ? e.message : String(e)})`, { file });
-    }
-    const bad = (key, expected) => {
-        throw new UserError(`${file}: key "${key}" should be ${expected}`, { file, key });
-    };
-    if (typeof doc !== 'object' || doc === null)
-        return bad('(root)', 'an object');
-    const d = doc;
-    if (d.schema !== MODEL_SCHEMA && d.schema !== MODEL_SCHEMA_V1)
-        bad('schema', `"${MODEL_SCHEMA}"`);
-    if (d.task !== 'classification' && d.task !== 'regression')
-        bad('task', '"classification" or "regression"');
-    const net = d.network;
-    if (typeof net !== 'object' || net === null)
-        return bad('network', 'an object');
-    const enc = d.encoding;
-    if (typeof enc !== 'object' || enc === null || !Array.isArray(enc.features))
-        return bad('encoding.features', 'a list');
-    if (inputsOf(enc.features) !== net.inputs)
-        bad('encoding.features', `to encode to ${net.inputs} inputs (network.inputs)`);
-    if (!Array.isArray(net.hiddenWeights) || net.hiddenWeights.length !== net.width)
-        bad('network.hiddenWeights', `${net.width} rows`);
-    if (net.hiddenWeights.some((r) => !Array.isArray(r) || r.length !== net.inputs))
-        bad('network.hiddenWeights', `rows of ${net.inputs} numbers`);
-    if (!Array.isArray(net.hiddenBias) || net.hiddenBias.length !== net.width)
-        bad('network.hiddenBias', `${net.width} numbers`);
-    if (!Array.isArray(net.outputWeights) || net.outputWeights.length !== net.outputs)
-        bad('network.outputWeights', `${net.outputs} rows`);
-    if (net.outputWeights.some((r) => !Array.isArray(r) || r.length !== net.width))
-        bad('network.outputWeights', `rows of ${net.width} numbers`);
-    if (!Array.isArray(net.outputBias) || net.outputBias.length !== net.outputs)
-        bad('network.outputBias', `${net.outputs} numbers`);
-    if (d.task === 'classification' && !Array.isArray(enc.target?.classes))
-        bad('encoding.target.classes', 'a list of class labels');
-    if (d.schema === MODEL_SCHEMA_V1) {
-        // Version 1 recorded only the validation value and the grown width; what it reached is kept.
-        const v1 = d;
-        const old = d;
-        return {
-            ...d,
-            schema: MODEL_SCHEMA,
-            target: { ...v1.target, on: 'validation', met: true, adequate: true },
-            origin: { seed: old.origin.seed, width: old.origin.grownWidth, restart: old.origin.restart + 1, how: 'fresh' },
-            cost: deviceCost(costShapeOf(net, enc)),
-            int8: null,
-        };
-    }
-    if (d.int8 !== null) {
-        const problem = checkInt8Network(d.int8, net, enc);
-        if (problem)
-            bad(problem.key, problem.expected);
-    }
-    return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
-}
-
-;// CONCATENATED MODULE: ./src/nn/kernel/layout.ts
-function layoutOf(s) {
-    const w1 = 0;
-    const b1 = s.inputs * s.width;
-    const w2 = b1 + s.width;
-    const b2 = w2 + s.width * s.outputs;
-    return { w1, b1, w2, b2, size: b2 + s.outputs };
-}
-
-;// CONCATENATED MODULE: ./src/nn/kernel/reference.ts
-
-
-
-
-function activationCode(a) {
-    return a === 'tanh' ? ACT_TANH : a === 'logistic' ? ACT_LOGISTIC : ACT_RELU;
-}
-function reference_headCode(h) {
-    return h === 'linear' ? constants_HEAD_LINEAR : h === 'logistic' ? constants_HEAD_LOGISTIC : HEAD_SOFTMAX;
-}
-function reference_makeScratch(width, outputs) {
-    return {
-        a: new Float64Array(width),
-        h: new Float64Array(width),
-        dh: new Float64Array(GRAD_BLOCK_ROWS * width),
-        acc: new Float64Array(width),
-        z: new Float64Array(outputs),
-        dz: new Float64Array(outputs),
-    };
-}
-/** Hidden pre-activations a and activations h of row p. */
-function hiddenRow(act, D, H, params, b1, x, p, a, h) {
-    for (let j = 0; j < H; j++)
-        a[j] = params[b1 + j];
-    const xo = p * D;
-    for (let i = 0; i < D; i++) {
-        const xi = x[xo + i];
-        const wo = i * H;
-        for (let j = 0; j < H; j++)
-            a[j] += xi * params[wo + j];
-    }
-    if (act === ACT_TANH)
-        for (let j = 0; j < H; j++)
-            h[j] = detTanh(a[j]);
-    else if (act === ACT_LOGISTIC)
-        for (let j = 0; j < H; j++)
-            h[j] = detmath_detLogistic(a[j]);
-    else
-        for (let j = 0; j < H; j++)
-            h[j] = a[j] > 0 ? a[j] : 0;
-}
-function outputRow(H, K, params, w2, b2, h, z) {
-    for (let k = 0; k < K; k++)
-        z[k] = params[b2 + k];
-    for (let j = 0; j < H; j++) {
-        const hj = h[j];
-        const wo = w2 + j * K;
-        for (let k = 0; k < K; k++)
-            z[k] += hj * params[wo + k];
-    }
-}
-/**
- * Loss of one row from its logits z; writes dLoss/dz into dz. `t` is the class index
- * (classification) or the standardised target (regression).
- */
-function headLossAndDelta(head, K, z, t, dz) {
-    if (head === constants_HEAD_LINEAR) {
-        const d = z[0] - t;
-        dz[0] = d;
-        return 0.5 * d * d;
-    }
-    if (head === constants_HEAD_LOGISTIC) {
-        dz[0] = detmath_detLogistic(z[0]) - t;
-        return detSoftplus(z[0]) - t * z[0];
-    }
-    let m = z[0];
-    for (let k = 1; k < K; k++)
-        if (z[k] > m)
-            m = z[k];
-    let s = 0;
-    for (let k = 0; k < K; k++) {
-        const e = detmath_detExp(z[k] - m);
-        dz[k] = e;
-        s += e;
-    }
-    const inv = 1 / s;
-    for (let k = 0; k < K; k++)
-        dz[k] *= inv;
-    dz[t] -= 1;
-    return detLog(s) - (z[t] - m);
-}
-/** Head outputs (probabilities or standardised values) from logits. */
-function reference_headOutputs(head, K, z, zo, out, oo) {
-    if (head === HEAD_LINEAR) {
-        for (let k = 0; k < K; k++)
-            out[oo + k] = z[zo + k];
-    }
-    else if (head === HEAD_LOGISTIC) {
-        out[oo] = detLogistic(z[zo]);
-    }
-    else {
-        let m = z[zo];
-        for (let k = 1; k < K; k++)
-            if (z[zo + k] > m)
-                m = z[zo + k];
-        let s = 0;
-        for (let k = 0; k < K; k++) {
-            const e = detExp(z[zo + k] - m);
-            out[oo + k] = e;
-            s += e;
-        }
-        const inv = 1 / s;
-        for (let k = 0; k < K; k++)
-            out[oo + k] *= inv;
-    }
-}
-/**
- * Sum over rows [start, end) of the per-row loss; the summed gradient goes into `grad`
- * (overwritten). No allocation.
- */
-function referenceLossAndGradient(shape, params, x, y, start, end, grad, s) {
-    const D = shape.inputs;
-    const H = shape.width;
-    const K = shape.outputs;
-    const act = activationCode(shape.activation);
-    const head = reference_headCode(shape.head);
-    const lay = layoutOf(shape);
-    const { a, h, dh, acc, z, dz } = s;
-    grad.fill(0);
-    let loss = 0;
-    for (let p = start; p < end; p++) {
-        const q = (p - start) % GRAD_BLOCK_ROWS; // this row's place in its gradient block
-        const qo = q * H;
-        hiddenRow(act, D, H, params, lay.b1, x, p, a, h);
-        outputRow(H, K, params, lay.w2, lay.b2, h, z);
-        loss += headLossAndDelta(head, K, z, y[p], dz);
-        for (let k = 0; k < K; k++)
-            grad[lay.b2 + k] += dz[k];
-        for (let j = 0; j < H; j++) {
-            const hj = h[j];
-            const wo = lay.w2 + j * K;
-            let sum = 0;
-            for (let k = 0; k < K; k++) {
-                grad[wo + k] += hj * dz[k];
-                sum += params[wo + k] * dz[k];
-            }
-            const fp = act === ACT_TANH ? 1 - hj * hj : act === ACT_LOGISTIC ? hj * (1 - hj) : a[j] > 0 ? 1 : 0;
-            dh[qo + j] = sum * fp;
-        }
-        for (let j = 0; j < H; j++)
-            grad[lay.b1 + j] += dh[qo + j];
-        if (q === GRAD_BLOCK_ROWS - 1 || p === end - 1)
-            addInputGradient(D, H, x, p - q, q + 1, dh, acc, grad);
-    }
-    return loss;
-}
-/** Adds the block sums Σ_q x[first+q, i]·dh[q, j] (q = 0..n−1 in order, from +0) to the W1 gradient. */
-function addInputGradient(D, H, x, first, n, dh, acc, grad) {
-    for (let i = 0; i < D; i++) {
-        acc.fill(0);
-        for (let q = 0; q < n; q++) {
-            const xi = x[(first + q) * D + i];
-            const qo = q * H;
-            for (let j = 0; j < H; j++)
-                acc[j] += xi * dh[qo + j];
-        }
-        const go = i * H;
-        for (let j = 0; j < H; j++)
-            grad[go + j] += acc[j];
-    }
-}
-/**
- * Forward pass over `rows` rows. Writes logits (rows × K) into `logits`; when `hidden`
- * is given, also the hidden activations (rows × H).
- */
-function reference_referenceForward(shape, params, x, rows, logits, hidden, s) {
-    const D = shape.inputs;
-    const H = shape.width;
-    const K = shape.outputs;
-    const act = activationCode(shape.activation);
-    const lay = layoutOf(shape);
-    for (let p = 0; p < rows; p++) {
-        hiddenRow(act, D, H, params, lay.b1, x, p, s.a, s.h);
-        outputRow(H, K, params, lay.w2, lay.b2, s.h, s.z);
-        for (let k = 0; k < K; k++)
-            logits[p * K + k] = s.z[k];
-        if (hidden)
-            for (let j = 0; j < H; j++)
-                hidden[p * H + j] = s.h[j];
-    }
-}
-/** Per-row loss from logits (no gradient). */
-function rowLoss(head, K, z, zo, t) {
-    if (head === constants_HEAD_LINEAR) {
-        const d = z[zo] - t;
-        return 0.5 * d * d;
-    }
-    if (head === constants_HEAD_LOGISTIC)
-        return detSoftplus(z[zo]) - t * z[zo];
-    let m = z[zo];
-    for (let k = 1; k < K; k++)
-        if (z[zo + k] > m)
-            m = z[zo + k];
-    let s = 0;
-    for (let k = 0; k < K; k++)
-        s += detmath_detExp(z[zo + k] - m);
-    return detLog(s) - (z[zo + t] - m);
-}
-
-;// CONCATENATED MODULE: ./src/nn/kernel/kernel.ts
-
-function referenceKernel() {
-    let scratch = reference_makeScratch(0, 0);
-    let width = -1;
-    let outputs = -1;
-    const sized = (shape) => {
-        if (shape.width !== width || shape.outputs !== outputs) {
-            scratch = reference_makeScratch(shape.width, shape.outputs);
-            width = shape.width;
-            outputs = shape.outputs;
-        }
-        return scratch;
-    };
-    return {
-        name: 'reference-f64',
-        lossAndGradient(shape, params, x, y, start, end, grad) {
-            return referenceLossAndGradient(shape, params, x, y, start, end, grad, sized(shape));
-        },
-        forward(shape, params, x, rows, logits, hidden) {
-            reference_referenceForward(shape, params, x, rows, logits, hidden, sized(shape));
-        },
-    };
-}
-
-;// CONCATENATED MODULE: ./src/nn/kernel/kernel-bytes.ts
-// Generated by scripts/build-kernel.mjs from kernel.as; do not edit.
-// 26165 bytes, sha256 33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e
-const KERNEL_SHA256 = '33bfaeba01b11b81648d7eec06a252e79a9dc546042a201c892daf50f92a730e';
-const KERNEL_BASE64 = 'AGFzbQEAAAABTgpgAX8AYAJ/fwBgAXwBfGAHf39/f39/fwBgBH9/f38AYAJ/fAF8YAN/f38Bf2AMf39/f39/f39/f39/AXxgAAF/' +
-    'YAp/f39/f39/f39/AAMPDgMBAAIEAAUCBgcICQABBQMBAAEGWxJ/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38B' +
-    'QQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAt/AUEAC38BQQALfwFBAAsHNgUJd29ya0J5dGVzAAgIbG9zc0dy' +
-    'YWQACQdmb3J3YXJkAAsIaGVhcEJhc2UACgZtZW1vcnkCAAquygEOqQQAIAAkBCABJAUgAiQAIAMkASAEJAIgA0EBakF+cSQDIAZB' +
-    'D2pBcHEiACQGIwMjAEEDdGwiASAAaiIAJAkgACABaiIAJAcjA0EDdCIBIABqIgAkCiAAIAFqIgAkCCMDIwJBA3RsIgEgAGoiACQL' +
-    'IAAgAWoiACQNIwNBBXQiASAAaiIAJA4gACMDQQh0aiIAJA8jAkEFdCICIABqIgAkECAAIAJqIgAkESAAIAFqJAxBACEAA0AgACMA' +
-    'SARAQQAhAQNAIAEjAUgEQCMGIAFBfHEiAiMAbEEEQQIjAyACQQRqThsgAGxqIAEgAmtqQQN0aiAFIAAjAWwgAWpBA3RqKwMAOQMA' +
-    'IAFBAWohAQwBCwsjAyMBSgRAIwYjASIBQXxxIgIjAGxBBEECIwMgAkEEak4bIABsaiABIAJrakEDdGpEAAAAAAAAAAA5AwALIABB' +
-    'AWohAAwBCwsgBSMBIwBBA3RsaiIBIwFBA3RqIQJBACEAA0AgACMBSARAIABBA3QiAyMHaiABIANqKwMAOQMAIABBAWohAAwBCwsj' +
-    'AyMBSgRAIwcjAUEDdGpEAAAAAAAAAAA5AwALQQAhAANAIAAjAkgEQEEAIQEDQCABIwFIBEAjCCAAIwNsIAFqQQN0aiACIAEjAmwg' +
-    'AGpBA3RqKwMAOQMAIAFBAWohAQwBCwsjAyMBSgRAIwgjASAAIwNsakEDdGpEAAAAAAAAAAA5AwALIABBAWohAAwBCwsLuQMCBn8E' +
-    'eyMDQQN0IQMDQCACIwNIBEAgAkEDdCIFIw1q/QAEACEJIw0gA0EBdGogBWr9AAQAIQojDSADQQNsaiAFav0ABAAhCyMRIAJBBXRq' +
-    'IgYgCSMNIANqIAVq/QAEACII/Q0AAQIDBAUGBxAREhMUFRYX/QsEACAGIAogC/0NAAECAwQFBgcQERITFBUWF/0LBBAgBiAJIAj9' +
-    'DQgJCgsMDQ4PGBkaGxwdHh/9CwQgIAYgCiAL/Q0ICQoLDA0ODxgZGhscHR4f/QsEMCACQQJqIQIMAQsLIAAjASMAIwFsakEDdGoi' +
-    'BiMCIwFBA3RsaiEFIwJBA3QhBwNAIAQjAkgEQCAFIARBA3QiAGr9CgMAIgghCSAAIAZqIQMjESECQQAhAANAIAAjAUgEQCAIIAL9' +
-    'AAQAIAP9CgMAIgr98gH98AEhCCAJIAL9AAQQIAr98gH98AEhCSADIAdqIQMgAkEgaiECIABBAWohAAwBCwsgASAEQQN0aiIAIAj9' +
-    'IQA5AwAgACAHaiAI/SEBOQMAIAAgB0EBdGogCf0hADkDACAAIAdBA2xqIAn9IQE5AwAgBEEBaiEEDAELCwuRAQIFfwF8Iw0hAiMP' +
-    'IQMgACMBIwAjAWxqQQN0aiIEIwIjAUEDdGxqIQUDQCABIwJIBEAgBSABQQN0aisDACEGQQAhAANAIAAjAUgEQCAGIAIgAEEDdGor' +
-    'AwAgBCAAIwJsIAFqQQN0aisDAKKgIQYgAEEBaiEADAELCyADIAFBA3RqIAY5AwAgAUEBaiEBDAELCwufAwICfgJ8IAAgAGIgAEQA' +
-    'AAAAAAAAAGNyBEBEAAAAAAAA+H8PCyAARAAAAAAAAAAAYQRARAAAAAAAAPD/DwsgAEQAAAAAAADwf2EEQEQAAAAAAADwfw8LIABE' +
-    'AAAAAAAAEABjBHxCSiEBIABEAAAAAAAAUEOiBSAAC70iAkI0iEL/D4NC/wd9IAF8IQEgAkL/////////B4NCgICAgICAgPg/hL8i' +
-    'AETNO39mnqD2P2QEfCABQgF8IQEgAEQAAAAAAADgP6IFIAALRAAAAAAAAPC/oCIAIABEAAAAAAAAAECgoyIDIAOiIQAgAbkiBEQA' +
-    'AOD+Qi7mP6IgAyADoCIDIAMgACAAIAAgACAAIAAgACAAIAAgACAARGQhC1nIQqY/okQYhmEYhmGoP6CiRCivobyG8qo/oKJEHh4e' +
-    'Hh4erj+gokQRERERERGxP6CiRBQ7sRM7sbM/oKJERhdddNFFtz+gokQcx3Ecx3G8P6CiRJIkSZIkScI/oKJEmpmZmZmZyT+gokRV' +
-    'VVVVVVXVP6CioqAgBER2PHk17znqPaKgoAuCiQECDXsGfyMDQQN0IRYDQCMDIBNBBGpOBEAgE0EDdCISIwdq/QAEACIGIQ8gBiIH' +
-    'IRAjByASav0ABBAiBCEOIAQiBSENIwYgEiMAbGohFUEAIRQDQCAUIwBIBEAgBiAUQQN0IhEgAGr9CgMAIgggFf0ABAAiCv3yAf3w' +
-    'ASEGIA4gCCAV/QAEECIJ/fIB/fABIQ4gDyABIBFq/QoDACIIIAr98gH98AEhDyAFIAggCf3yAf3wASEFIAcgAiARav0KAwAiCCAK' +
-    '/fIB/fABIQcgDSAIIAn98gH98AEhDSAQIAMgEWr9CgMAIgggCv3yAf3wASEQIAQgCCAJ/fIB/fABIQQgFUEgaiEVIBRBAWohFAwB' +
-    'CwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAb98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEi' +
-    'CP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwA' +
-    'AOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAA' +
-    'AAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9' +
-    'DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH9' +
-    '8AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4a' +
-    'oAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB' +
-    '/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB' +
-    '/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3z' +
-    'ASAM/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAG/QwAAAAAAAAAAAAAAAAAAAAAIAb9' +
-    'DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitlRxX3' +
-    'P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIM/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY//fIB' +
-    '/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCyAL/fIBIgogCv3yASEJIAz9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASII' +
-    'IAv9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gC/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9V' +
-    'VVVVVVWlPyAL/fIB/fABIAr98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gC/3yAf3wAf0MGqABGqAB' +
-    'Kj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAL/fIB/fABIAr98gH98AEgCf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94' +
-    't09+kj5cn3i3T36SPiAL/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAv98gH98AEgCv3yAf3wAf0M' +
-    'CW2oE0YS5j0JbagTRhLmPSAJ/fIB/fABIAkgCf3yAf3yAf3wAf3yAf3yASAI/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgggCP0M' +
-    'AAAAAAAAAEAAAAAAAAAAQP3wAf3zASAG/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAS' +
-    'aiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA798gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIr' +
-    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7m' +
-    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA/' +
-    '/QwAAAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAA' +
-    'AOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBER' +
-    'EREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6' +
-    'PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVn' +
-    'ReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAgg' +
-    'CP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwA' +
-    'AAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAO/QwAAAAAAAAAAAAAAAAAAAAAIA79DAAAAAAA' +
-    'AAAAAAAAAAAAAAD9Sv1SCwUgDv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0M' +
-    'AAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9' +
-    'DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAA' +
-    'AAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWl' +
-    'PyAK/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEa' +
-    'oAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5c' +
-    'n3i3T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS' +
-    '5j0JbagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAA' +
-    'AEAAAAAAAAAAQP3wAf3zASAO/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWaiASaiME' +
-    'BHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA/98gEiDP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV' +
-    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA' +
-    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEI/QwAAAAAAADgPwAAAAAAAOA//QwA' +
-    'AAAAAADgPwAAAAAAAOA/IAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/' +
-    'AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB/fABIAn98gH98AH9DBERERER' +
-    'EYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAK' +
-    '/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAK/fIB/fAB/QzkRPVnReZa' +
-    'PuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAI/fIB/fABIAggCP3y' +
-    'Af3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAM/QwAAAAA' +
-    'AAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAP/QwAAAAAAAAAAAAAAAAAAAAAIA/9DAAAAAAAAAAA' +
-    'AAAAAAAAAAD9Sv1SCwUgD/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAA' +
-    'AAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8' +
-    'eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAA' +
-    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK' +
-    '/fIB/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
-    'P/0MGqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
-    'T36SPiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0J' +
-    'bagTRhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
-    'AAAAAAAAQP3wAf3zASAP/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWaiASaiMEBHsj' +
-    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
-    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
-    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
-    'AADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
-    'AAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/' +
-    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB' +
-    '/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE' +
-    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
-    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAL/QwAAAAAAAAA' +
-    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAAAAAAAAAAIAX9DAAAAAAAAAAAAAAA' +
-    'AAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiCP0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgCCAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXv' +
-    'Oeo9djx5Ne856j398gH98QEiCiAK/fIBIgkgCf3yASEIIAv9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAr9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCv3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAK/fIB' +
-    '/fABIAn98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCv3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAK/fIB/fABIAn98gH98AEgCP3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAK/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAr98gH98AEgCf3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAI/fIB/fABIAggCP3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQF0aiASaiMEBHsj' +
-    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAf98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
-    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
-    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
-    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
-    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
-    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
-    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
-    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
-    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
-    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAH/QwAAAAAAAAAAAAAAAAAAAAAIAf9DAAAAAAAAAAAAAAA' +
-    'AAAAAAD9Sv1SCwUgB/3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
-    'Oeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEGIAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAn9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB' +
-    '/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAH/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQF0aiASaiMEBHsj' +
-    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
-    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
-    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
-    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
-    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
-    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
-    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
-    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
-    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
-    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAAAAAAAAAAIA39DAAAAAAAAAAAAAAA' +
-    'AAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
-    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
-    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAjDSAWQQNsaiASaiMEBHsj' +
-    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+' +
-    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5C' +
-    'LuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
-    'AADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
-    'AAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/' +
-    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB' +
-    '/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE' +
-    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3y' +
-    'Af3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAK/QwAAAAAAAAA' +
-    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAAAAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAA' +
-    'AAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
-    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
-    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBAAjDSAWQQNsaiASaiMEBHsj' +
-    'BEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIEIAT98AEiBf0M/oIrZUcV9z/+' +
-    'gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEBIQQgBSAE/QwAAOD+Qi7mPwAA4P5C' +
-    'LuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwAAAAAAADgPwAAAAAAAOA//QwAAAAA' +
-    'AADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAA' +
-    'AAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB/fABIAb98gH98AH9DBEREREREYE/' +
-    'ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAH/fIB' +
-    '/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAH/fIB/fAB/QzkRPVnReZaPuRE' +
-    '9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAF/fIB/fABIAUgBf3yAf3y' +
-    'Af3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAJ/QwAAAAAAAAA' +
-    'AAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAAAAAAAAAAIAT9DAAAAAAAAAAAAAAA' +
-    'AAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAA' +
-    'OEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXv' +
-    'Oeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
-    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1RC/0LBBAgE0EEaiETDAELCwNAIBMj' +
-    'A0gEQCATQQN0IhIjB2r9AAQAIgQhECAEIgUhDSMGIBIjAGxqIRRBACEVA0AgFSMASARAIBAgFUEDdCIRIABq/QoDACAU/QAEACIG' +
-    '/fIB/fABIRAgBSABIBFq/QoDACAG/fIB/fABIQUgDSACIBFq/QoDACAG/fIB/fABIQ0gBCADIBFq/QoDACAG/fIB/fABIQQgFEEQ' +
-    'aiEUIBVBAWohFQwBCwsjDSASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IBD98gEiC/3sAf0MAAAAAAAANkAAAAAAAAA2' +
-    'QP32ASIGIAb98AEiB/0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD' +
-    '/fEBIQYgByAG/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEH' +
-    '/QwAAAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAr9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIGIAn9DAAAAAAA' +
-    'APA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAJ' +
-    '/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3wAf0MGqABGqABKj8aoAEaoAEq' +
-    'P/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3' +
-    'T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEgCP3yAf3wAf0MCW2oE0YS5j0J' +
-    'bagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgYgBv0MAAAAAAAAAEAA' +
-    'AAAAAAAAQP3wAf3zASAL/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAQ/QwAAAAAAAAA' +
-    'AAAAAAAAAAAAIBD9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgEP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIr' +
-    'ZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7m' +
-    'PwAA4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAA' +
-    'AAD9zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXF' +
-    'P/0MVVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3y' +
-    'Af3wAf0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40' +
-    'x1al4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH9' +
-    '8AEgCP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA/' +
-    '/fEB/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAQ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9' +
-    'Tv1RC/0LBAAjDSAWaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAX98gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
-    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
-    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
-    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
-    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAF/QwAAAAAAAAAAAAA' +
-    'AAAAAAAAIAX9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIGIAb98AEiB/0M/oIrZUcV' +
-    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIK/QwAAAAAAAA4QwAAAAAAADhD/fEBIQYgByAG/QwAAOD+Qi7mPwAA' +
-    '4P5CLuY//fIB/fEBIAb9DHY8eTXvOeo9djx5Ne856j398gH98QEiCSAJ/fIBIgggCP3yASEHIAr9DP8DAAAAAAAA/wMAAAAAAAD9' +
-    'zgFBNP3LASIGIAn9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCf3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
-    'VVVVVVVVpT9VVVVVVVWlPyAJ/fIB/fABIAj98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCf3yAf3w' +
-    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAJ/fIB/fABIAj98gH98AEgB/3yAf3wAf0MNMdWpeMdxz40x1al' +
-    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAJ/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAn98gH98AEg' +
-    'CP3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAH/fIB/fABIAcgB/3yAf3yAf3wAf3yAf3yASAG/QwAAAAAAADwPwAAAAAAAPA//fEB' +
-    '/fABIgYgBv0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAF/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
-    'C/0LBAAjDSAWQQF0aiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IA398gEiCv3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
-    'ASIFIAX98AEiBv0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
-    'IQUgBiAF/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEG/QwA' +
-    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAn9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIFIAj9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAI/fIB' +
-    '/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEgB/3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgUgBf0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAK/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAN/QwAAAAAAAAAAAAA' +
-    'AAAAAAAAIA39DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
-    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
-    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
-    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
-    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
-    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
-    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
-    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
-    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAN/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
-    'C/0LBAAjDSAWQQNsaiASaiMEBHsjBEEBRgR7/QwAAAAAAADgPwAAAAAAAOA/IAT98gEiCf3sAf0MAAAAAAAANkAAAAAAAAA2QP32' +
-    'ASIEIAT98AEiBf0M/oIrZUcV9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASII/QwAAAAAAAA4QwAAAAAAADhD/fEB' +
-    'IQQgBSAE/QwAAOD+Qi7mPwAA4P5CLuY//fIB/fEBIAT9DHY8eTXvOeo9djx5Ne856j398gH98QEiByAH/fIBIgYgBv3yASEF/QwA' +
-    'AAAAAADgPwAAAAAAAOA//QwAAAAAAADgPwAAAAAAAOA/IAj9DP8DAAAAAAAA/wMAAAAAAAD9zgFBNP3LASIEIAf9DAAAAAAAAPA/' +
-    'AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gB/3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0MVVVVVVVVpT9VVVVVVVWlPyAH/fIB' +
-    '/fABIAb98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gB/3yAf3wAf0MGqABGqABKj8aoAEaoAEqP/0M' +
-    'GqABGqAB+j4aoAEaoAH6PiAH/fIB/fABIAb98gH98AEgBf3yAf3wAf0MNMdWpeMdxz40x1al4x3HPv0MXJ94t09+kj5cn3i3T36S' +
-    'PiAH/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAf98gH98AEgBv3yAf3wAf0MCW2oE0YS5j0JbagT' +
-    'RhLmPSAF/fIB/fABIAUgBf3yAf3yAf3wAf3yAf3yASAE/QwAAAAAAADwPwAAAAAAAPA//fEB/fABIgQgBP0MAAAAAAAAAEAAAAAA' +
-    'AAAAQP3wAf3zASAJ/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R/fIB/fABBSAE/QwAAAAAAAAAAAAA' +
-    'AAAAAAAAIAT9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SCwUgBP3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIFIAX98AEiBv0M/oIrZUcV' +
-    '9z/+gitlRxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIJ/QwAAAAAAAA4QwAAAAAAADhD/fEBIQUgBiAF/QwAAOD+Qi7mPwAA' +
-    '4P5CLuY//fIB/fEBIAX9DHY8eTXvOeo9djx5Ne856j398gH98QEiCCAI/fIBIgcgB/3yASEGIAn9DP8DAAAAAAAA/wMAAAAAAAD9' +
-    'zgFBNP3LASIFIAj9DAAAAAAAAPA/AAAAAAAA8D/9DAAAAAAAAOA/AAAAAAAA4D8gCP3yAf3wAf0MVVVVVVVVxT9VVVVVVVXFP/0M' +
-    'VVVVVVVVpT9VVVVVVVWlPyAI/fIB/fABIAf98gH98AH9DBEREREREYE/ERERERERgT/9DBdswRZswVY/F2zBFmzBVj8gCP3yAf3w' +
-    'Af0MGqABGqABKj8aoAEaoAEqP/0MGqABGqAB+j4aoAEaoAH6PiAI/fIB/fABIAf98gH98AEgBv3yAf3wAf0MNMdWpeMdxz40x1al' +
-    '4x3HPv0MXJ94t09+kj5cn3i3T36SPiAI/fIB/fAB/QzkRPVnReZaPuRE9WdF5lo+/QyY2Pjv2O4hPpjY+O/Y7iE+IAj98gH98AEg' +
-    'B/3yAf3wAf0MCW2oE0YS5j0JbagTRhLmPSAG/fIB/fABIAYgBv3yAf3yAf3wAf3yAf3yASAF/QwAAAAAAADwPwAAAAAAAPA//fEB' +
-    '/fABIgUgBf0MAAAAAAAAAEAAAAAAAAAAQP3wAf3zASAE/QwAAAAAAAAAAAAAAAAAAAAA/Un9DAAAAAAAAACAAAAAAAAAAID9Tv1R' +
-    'C/0LBAAgE0ECaiETDAELCwubDAIFewZ/Iw0hCQNAIAcjA0gEQCAHQQN0IgojB2r9AAQAIQEjBiAHIAdBfHEiBmsgBiMAbGpBA3Rq' +
-    'IQhBIEEQIwMgBkEEak4bIQtBACEGA0AgBiMASARAIAEgACAGQQN0av0KAwAgCP0ABAD98gH98AEhASAIIAtqIQggBkEBaiEGDAEL' +
-    'CyAJIApqIwQEeyMEQQFGBHv9DAAAAAAAAOA/AAAAAAAA4D8gAf3yASIB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC' +
-    '/Qz+gitlRxX3P/6CK2VHFfc//fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA' +
-    '4P5CLuY/AADg/kIu5j/98gH98QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQX9DAAAAAAAAOA/AAAA' +
-    'AAAA4D/9DAAAAAAAAOA/AAAAAAAA4D8gA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMgAv0MAAAAAAAA8D8AAAAAAADwP/0M' +
-    'AAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VVVVVVVaU/IAL98gH98AEgBP3yAf3w' +
-    'Af0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEqPxqgARqgASo//QwaoAEaoAH6Phqg' +
-    'ARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3T36SPlyfeLdPfpI+IAL98gH98AH9' +
-    'DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJbagTRhLmPQltqBNGEuY9IAX98gH9' +
-    '8AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMB' +
-    'IAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH98gH98AEFIAH9DAAAAAAAAAAAAAAAAAAAAAAgAf0M' +
-    'AAAAAAAAAAAAAAAAAAAAAP1K/VILBSAB/ewB/QwAAAAAAAA2QAAAAAAAADZA/fYBIgIgAv3wASIC/Qz+gitlRxX3P/6CK2VHFfc/' +
-    '/fIB/QwAAAAAAAA4QwAAAAAAADhD/fABIgP9DAAAAAAAADhDAAAAAAAAOEP98QEhBCACIAT9DAAA4P5CLuY/AADg/kIu5j/98gH9' +
-    '8QEgBP0Mdjx5Ne856j12PHk17znqPf3yAf3xASICIAL98gEiBCAE/fIBIQUgA/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0/csBIgMg' +
-    'Av0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAC/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVVVVWlP1VV' +
-    'VVVVVaU/IAL98gH98AEgBP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAC/fIB/fAB/QwaoAEaoAEq' +
-    'PxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAL98gH98AEgBP3yAf3wASAF/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+/Qxcn3i3' +
-    'T36SPlyfeLdPfpI+IAL98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gAv3yAf3wASAE/fIB/fAB/QwJ' +
-    'bagTRhLmPQltqBNGEuY9IAX98gH98AEgBSAF/fIB/fIB/fAB/fIB/fIBIAP9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEiAiAC/QwA' +
-    'AAAAAAAAQAAAAAAAAABA/fAB/fMBIAH9DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VEL/QsEACAHQQJq' +
-    'IQcMAQsLC78IAwN8A38GeyMCIABBA3RsIgAjD2ohByMQIABqIQYjBUUEQCAGIAcrAwAgAaEiATkDACABRAAAAAAAAOA/oiABog8L' +
-    'IwVBAUYEQCAHKwMAIgNEAAAAAAAA4D+i/RQiDf3sAf0MAAAAAAAANkAAAAAAAAA2QP32ASIIIAj98AEiCf0M/oIrZUcV9z/+gitl' +
-    'RxX3P/3yAf0MAAAAAAAAOEMAAAAAAAA4Q/3wASIL/QwAAAAAAAA4QwAAAAAAADhD/fEBIQggCSAI/QwAAOD+Qi7mPwAA4P5CLuY/' +
-    '/fIB/fEBIAj9DHY8eTXvOeo9djx5Ne856j398gH98QEiCiAK/fIBIgwgDP3yASEJIAYgC/0M/wMAAAAAAAD/AwAAAAAAAP3OAUE0' +
-    '/csBIgggCv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAA4D8AAAAAAADgPyAK/fIB/fAB/QxVVVVVVVXFP1VVVVVVVcU//QxVVVVV' +
-    'VVWlP1VVVVVVVaU/IAr98gH98AEgDP3yAf3wAf0MERERERERgT8RERERERGBP/0MF2zBFmzBVj8XbMEWbMFWPyAK/fIB/fAB/Qwa' +
-    'oAEaoAEqPxqgARqgASo//QwaoAEaoAH6PhqgARqgAfo+IAr98gH98AEgDP3yAf3wASAJ/fIB/fAB/Qw0x1al4x3HPjTHVqXjHcc+' +
-    '/Qxcn3i3T36SPlyfeLdPfpI+IAr98gH98AH9DORE9WdF5lo+5ET1Z0XmWj79DJjY+O/Y7iE+mNj479juIT4gCv3yAf3wASAM/fIB' +
-    '/fAB/QwJbagTRhLmPQltqBNGEuY9IAn98gH98AEgCSAJ/fIB/fIB/fAB/fIB/fIBIAj9DAAAAAAAAPA/AAAAAAAA8D/98QH98AEi' +
-    'CCAI/QwAAAAAAAAAQAAAAAAAAABA/fAB/fMBIA39DAAAAAAAAAAAAAAAAAAAAAD9Sf0MAAAAAAAAAIAAAAAAAAAAgP1O/VH9IQBE' +
-    'AAAAAAAA4D+iRAAAAAAAAOA/oCABoTkDACADRAAAAAAAAAAAIANEAAAAAAAAAABkIgAbIAOaIAMgABsQByICRAAAAAAAAPA/oCIE' +
-    'RAAAAAAAAPA/YgR8IAQQAyACIAREAAAAAAAA8L+goSAEo6AFIAILoCABIAOioQ8LIAcrAwAhA0EBIQADQCAAIwJIBEAgByAAQQN0' +
-    'aisDACICIANkBEAgAiEDCyAAQQFqIQAMAQsLQQAhAANAIAAjAkgEQCAAQQN0IgUgB2orAwAgA6EQByECIAUgBmogAjkDACAEIAKg' +
-    'IQQgAEEBaiEADAELC0QAAAAAAADwPyAEoyECQQAhAANAIAAjAkgEQCAGIABBA3RqIgUgBSsDACACojkDACAAQQFqIQAMAQsLIAYg' +
-    'AfwCQQN0IgVqIgAgACsDAEQAAAAAAADwv6A5AwAgBBADIAUgB2orAwAgA6GhC/kCAgF+AXwgACAAYgRAIAAPCyAARO85+v5CLoZA' +
-    'ZARARAAAAAAAAPB/DwsgAERSMC3VEEmHwGMEQEQAAAAAAAAAAA8LIAAgAET+gitlRxX3P6JEAAAAAAAA4D+gnCIARAAA4P5CLuY/' +
-    'oqEgAER2PHk17znqPaKhIgIgAiACIAIgAiACIAIgAiACIAIgAiACIAJECW2oE0YS5j2iRJjY+O/Y7iE+oKJE5ET1Z0XmWj6gokRc' +
-    'n3i3T36SPqCiRDTHVqXjHcc+oKJEGqABGqAB+j6gokQaoAEaoAEqP6CiRBdswRZswVY/oKJEERERERERgT+gokRVVVVVVVWlP6Ci' +
-    'RFVVVVVVVcU/oKJEAAAAAAAA4D+gokQAAAAAAADwP6CiRAAAAAAAAPA/oCECIAD8BiIBQv8HVQRAIAJEAAAAAAAA4H+iIAFCNIa/' +
-    'og8LIAFCgnhTBEAgAiABQucPfEI0hr+iRAAAAAAAAHABog8LIAIgAUL/B3xCNIa/ogs2ACABQQFqQX5xIgEgAEEBdGwgAUEBdGog' +
-    'AkEBdCABbGogAmogAUEobGogAkEDdGpBA3RBQGsL7gcDA3sHfwF8IAAgASACIAMgBCAFIAsQACMJQQAjAEEDdCIDIwNs/AsAIwpB' +
-    'ACMDQQN0IhP8CwAjC0EAIwJBA3QiACMDbPwLACMMQQAgAPwLAANAIAggCUgEQEEgIAkgCGsiACAAQSBOGyEBIAYgAyAIbGohEkEA' +
-    'IQADQCAAQQRqIAFMBEAgEiAAIANsaiICIAIgA2ogAiADQQF0aiACIANBA2xqEAQgBSMPEAFBACECA0AgAkEESARAIBYgAiAHIAAg' +
-    'CGogAmpBA3RqKwMAEAagIRYgAkEBaiECDAELCyMOIAAgE2xqEAwgAEEEaiEADAELCwNAIAAgAUgEQCASIAAgA2xqEAUgBRACIBZB' +
-    'ACAHIAAgCGpBA3RqKwMAEAagIRYjDiAAIBNsaiEQIwNBA3QhDyMNIQQjECERQQAhCwNAIAsjA0gEQP0MAAAAAAAAAAAAAAAAAAAA' +
-    'ACEMIAQgC0EDdCIUav0ABAAhDUEAIQIDQCACIwJIBEAgDCACIA9sIBRqIhUjCGr9AAQAIBEgAkEDdGr9CgMAIg798gH98AEhDCML' +
-    'IBVqIhUgFf0ABAAgDSAO/fIB/fAB/QsEACACQQFqIQIMAQsLIBAgFGogDAJ7/QwAAAAAAADwPwAAAAAAAPA/IA0gDf3yAf3xASME' +
-    'RQ0AGiAN/QwAAAAAAADwPwAAAAAAAPA/IA398QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAAAAAAAAAAAAAAAAAA' +
-    'ACAN/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiDP0LBAAjCiAUaiICIAL9AAQAIAz98AH9CwQAIAtBAmohCwwBCwtBACECA0Ag' +
-    'AiMCSARAIAJBA3QiBCMMaiILIAsrAwAgBCARaisDAKA5AwAgAkEBaiECDAELCyAAQQFqIQAMAQsLIBIgARANIAEgCGohCAwBCwtB' +
-    'ACEBA0AgASMASARAQQAhAANAIAAjAUgEQCAKIAEjAWwgAGpBA3RqIwkgAEF8cSICIwBsQQRBAiMDIAJBBGpOGyABbGogACACa2pB' +
-    'A3RqKwMAOQMAIABBAWohAAwBCwsgAUEBaiEBDAELCyAKIwEjAEEDdGxqIgEjAUEDdCIAaiICIwIgAGxqIQNBACEAA0AgACMBSARA' +
-    'IABBA3QiBCABaiMKIARqKwMAOQMAIABBAWohAAwBCwtBACEAA0AgACMCSARAQQAhAQNAIAEjAUgEQCACIAEjAmwgAGpBA3RqIwsg' +
-    'ACMDbCABakEDdGorAwA5AwAgAUEBaiEBDAELCyADIABBA3QiAWojDCABaisDADkDACAAQQFqIQAMAQsLIBYLBQBBgAgLlQIBAX8g' +
-    'AEEAIAEgAiADIAQgCRAAIwBBA3QhCUEAIQADQCAAIAZIBEAgBSAAIAlsaiEBQQRBASAGIABrQQROGyIDQQRGBEAgASABIAlqIAEg' +
-    'CUEBdGogASAJQQNsahAEIAQgByMCIABBA3RsahABBSABEAUgBBACQQAhAQNAIAEjAkgEQCAHIAAjAmwgAWpBA3RqIw8gAUEDdGor' +
-    'AwA5AwAgAUEBaiEBDAELCwtBACEBA0AgASADSARAIAgEQCAAIAFqIQpBACECA0AgAiMBSARAIAggCiMBbCACakEDdGojDSABIwNs' +
-    'IAJqQQN0aisDADkDACACQQFqIQIMAQsLCyABQQFqIQEMAQsLIAAgA2ohAAwBCwsL4QgCDHsHfyMDQQN0IRAjAkEDdCENA0AgDyMD' +
-    'SARA/QwAAAAAAAAAAAAAAAAAAAAAIQH9DAAAAAAAAAAAAAAAAAAAAAAhAv0MAAAAAAAAAAAAAAAAAAAAACED/QwAAAAAAAAAAAAA' +
-    'AAAAAAAAIQQgD0EDdCIRIw1q/QAEACEIIw0gEGogEWr9AAQAIQkjDSAQQQF0aiARav0ABAAhCiMNIBBBA2xqIBFq/QAEACELQQAh' +
-    'DgNAIA4jAkgEQCABIA4gEGwgEWoiEyMIav0ABAAiDCMQIA5BA3RqIhL9CgMAIgX98gH98AEhASACIAwgDSASav0KAwAiBv3yAf3w' +
-    'ASECIAMgDCASIA1BAXRq/QoDACIH/fIB/fABIQMgBCAMIBIgDUEDbGr9CgMAIgz98gH98AEhBCMLIBNqIhIgEv0ABAAgCCAF/fIB' +
-    '/fABIAkgBv3yAf3wASAKIAf98gH98AEgCyAM/fIB/fAB/QsEACAOQQFqIQ4MAQsLIAAgEWogAQJ7/QwAAAAAAADwPwAAAAAAAPA/' +
-    'IAggCP3yAf3xASMERQ0AGiAI/QwAAAAAAADwPwAAAAAAAPA/IAj98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8AAAAAAADwP/0MAAAA' +
-    'AAAAAAAAAAAAAAAAACAI/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiAf0LBAAgACAQaiARaiACAnv9DAAAAAAAAPA/AAAAAAAA' +
-    '8D8gCSAJ/fIB/fEBIwRFDQAaIAn9DAAAAAAAAPA/AAAAAAAA8D8gCf3xAf3yASMEQQFGDQAa/QwAAAAAAADwPwAAAAAAAPA//QwA' +
-    'AAAAAAAAAAAAAAAAAAAAIAn9DAAAAAAAAAAAAAAAAAAAAAD9Sv1SC/3yASIC/QsEACAAIBBBAXRqIBFqIAMCe/0MAAAAAAAA8D8A' +
-    'AAAAAADwPyAKIAr98gH98QEjBEUNABogCv0MAAAAAAAA8D8AAAAAAADwPyAK/fEB/fIBIwRBAUYNABr9DAAAAAAAAPA/AAAAAAAA' +
-    '8D/9DAAAAAAAAAAAAAAAAAAAAAAgCv0MAAAAAAAAAAAAAAAAAAAAAP1K/VIL/fIBIgP9CwQAIAAgEEEDbGogEWogBAJ7/QwAAAAA' +
-    'AADwPwAAAAAAAPA/IAsgC/3yAf3xASMERQ0AGiAL/QwAAAAAAADwPwAAAAAAAPA/IAv98QH98gEjBEEBRg0AGv0MAAAAAAAA8D8A' +
-    'AAAAAADwP/0MAAAAAAAAAAAAAAAAAAAAACAL/QwAAAAAAAAAAAAAAAAAAAAA/Ur9Ugv98gEiBP0LBAAjCiARaiIOIA79AAQAIAH9' +
-    '8AEgAv3wASAD/fABIAT98AH9CwQAIA9BAmohDwwBCwtBACEAA0AgACMCSARAIABBA3QiDiMMaiIPIA8rAwAjECAOaiIOKwMAoCAN' +
-    'IA5qKwMAoCAOIA1BAXRqKwMAoCAOIA1BA2xqKwMAoDkDACAAQQFqIQAMAQsLC4wKAgh/C3sjA0EDdCEHIwBBA3QhCANAIwMgBkEE' +
-    'ak4EQCAGQQN0IQlBACEDA0AjACADQQRqTgRA/QwAAAAAAAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAA' +
-    'AAAAAAAAAAAAACEN/QwAAAAAAAAAAAAAAAAAAAAAIQv9DAAAAAAAAAAAAAAAAAAAAAAhDv0MAAAAAAAAAAAAAAAAAAAAACEP/QwA' +
-    'AAAAAAAAAAAAAAAAAAAAIRD9DAAAAAAAAAAAAAAAAAAAAAAhESAAIANBA3RqIQIjDiAJaiEEQQAhBQNAIAEgBUoEQCAKIAL9CgMA' +
-    'IhMgBP0ABAAiEv3yAf3wASEKIAwgEyAE/QAEECIT/fIB/fABIQwgDSAC/QoDCCIUIBL98gH98AEhDSALIBQgE/3yAf3wASELIA4g' +
-    'Av0KAxAiFCAS/fIB/fABIQ4gDyAUIBP98gH98AEhDyAQIAL9CgMYIhQgEv3yAf3wASEQIBEgFCAT/fIB/fABIREgAiAIaiECIAQg' +
-    'B2ohBCAFQQFqIQUMAQsLIwkgCSMAbGogA0EFdGoiAiAC/QAEACAK/fAB/QsEACACIAL9AAQQIAz98AH9CwQQIAIgAv0ABCAgDf3w' +
-    'Af0LBCAgAiAC/QAEMCAL/fAB/QsEMCACIAL9AARAIA798AH9CwRAIAIgAv0ABFAgD/3wAf0LBFAgAiAC/QAEYCAQ/fAB/QsEYCAC' +
-    'IAL9AARwIBH98AH9CwRwIANBBGohAwwBCwsDQCADIwBIBED9DAAAAAAAAAAAAAAAAAAAAAAhCv0MAAAAAAAAAAAAAAAAAAAAACEL' +
-    'IAAgA0EDdGohBCMOIAlqIQJBACEFA0AgASAFSgRAIAogBP0KAwAiDCAC/QAEAP3yAf3wASEKIAsgDCAC/QAEEP3yAf3wASELIAQg' +
-    'CGohBCACIAdqIQIgBUEBaiEFDAELCyMJIAkjAGxqIANBBXRqIgIgAv0ABAAgCv3wAf0LBAAgAiAC/QAEECAL/fAB/QsEECADQQFq' +
-    'IQMMAQsLIAZBBGohBgwBCwsDQCAGIwNIBEAgBkEDdCEJQQAhAgNAIwAgAkEEak4EQP0MAAAAAAAAAAAAAAAAAAAAACEL/QwAAAAA' +
-    'AAAAAAAAAAAAAAAAIQr9DAAAAAAAAAAAAAAAAAAAAAAhDP0MAAAAAAAAAAAAAAAAAAAAACENIAAgAkEDdGohAyMOIAlqIQRBACEF' +
-    'A0AgASAFSgRAIAsgA/0KAwAgBP0ABAAiDv3yAf3wASELIAogA/0KAwggDv3yAf3wASEKIAwgA/0KAxAgDv3yAf3wASEMIA0gA/0K' +
-    'AxggDv3yAf3wASENIAMgCGohAyAEIAdqIQQgBUEBaiEFDAELCyMJIAkjAGxqIAJBBHRqIgMgA/0ABAAgC/3wAf0LBAAgAyAD/QAE' +
-    'ECAK/fAB/QsEECADIAP9AAQgIAz98AH9CwQgIAMgA/0ABDAgDf3wAf0LBDAgAkEEaiECDAELCwNAIAIjAEgEQP0MAAAAAAAAAAAA' +
-    'AAAAAAAAACEKIAAgAkEDdGohAyMOIAlqIQRBACEFA0AgASAFSgRAIAogA/0KAwAgBP0ABAD98gH98AEhCiADIAhqIQMgBCAHaiEE' +
-    'IAVBAWohBQwBCwsjCSAJIwBsaiACQQR0aiIDIAP9AAQAIAr98AH9CwQAIAJBAWohAgwBCwsgBkECaiEGDAELCws=';
-
-;// CONCATENATED MODULE: ./src/nn/kernel/wasm.ts
-
-
-
-const wasmApi = globalThis.WebAssembly;
-/** Data arrays stay resident in wasm memory until this many bytes are cached; then the cache starts over. */
-const CACHE_LIMIT_BYTES = 1 << 30;
-const CACHE_LIMIT_ENTRIES = 32;
-const PAGE = 65536;
-class Runtime {
-    ex;
-    f64;
-    base;
-    top;
-    cache = new Map();
-    /** Changes whenever cached data or the memory itself changed, so kernels know to re-resolve their offsets. */
-    version = 0;
-    constructor(ex) {
-        this.ex = ex;
-        this.base = align(ex.heapBase());
-        this.top = this.base;
-        this.f64 = new Float64Array(ex.memory.buffer);
-    }
-    /** A Float64Array over the whole memory, renewed after the memory grew. */
-    view() {
-        if (this.f64.buffer !== this.ex.memory.buffer)
-            this.f64 = new Float64Array(this.ex.memory.buffer);
-        return this.f64;
-    }
-    ensure(bytes) {
-        const have = this.ex.memory.buffer.byteLength;
-        if (bytes > have) {
-            this.ex.memory.grow(Math.ceil((bytes - have) / PAGE));
-            this.version++;
-        }
-    }
-    /** Byte offset of one data array inside wasm memory (copied in on first use). */
-    residentOne(a) {
-        const at = this.cache.get(a);
-        return at !== undefined ? at : this.resident(a, null)[0];
-    }
-    /**
-     * Byte offsets of the given data arrays inside wasm memory (copied in on first use). Data
-     * arrays are treated as immutable once a trainer has used them, as EncodedDataset promises.
-     */
-    resident(a, b) {
-        let pa = this.cache.get(a);
-        let pb = b === null ? 0 : this.cache.get(b);
-        if (pa !== undefined && pb !== undefined)
-            return [pa, pb];
-        const need = (pa === undefined ? a.byteLength + 16 : 0) + (b !== null && pb === undefined ? b.byteLength + 16 : 0);
-        if (this.top + need - this.base > CACHE_LIMIT_BYTES || this.cache.size + 2 > CACHE_LIMIT_ENTRIES) {
-            this.cache.clear();
-            this.top = this.base;
-            this.version++;
-            pa = undefined;
-            pb = b === null ? 0 : undefined;
-        }
-        if (pa === undefined)
-            pa = this.copyIn(a);
-        if (pb === undefined && b !== null)
-            pb = this.copyIn(b);
-        return [pa, pb ?? 0];
-    }
-    copyIn(a) {
-        const at = this.top;
-        this.ensure(at + a.byteLength);
-        this.view().set(a, at / 8);
-        this.top = align(at + a.byteLength);
-        this.cache.set(a, at);
-        this.version++;
-        return at;
-    }
-    /** Byte offset of a scratch area of `bytes` bytes above the cached data (valid until the next call). */
-    scratch(bytes) {
-        this.ensure(this.top + bytes + 64);
-        return this.top;
-    }
-}
-function align(n) {
-    return (n + 63) & ~63;
-}
-let runtime;
-function decode(b64) {
-    return Uint8Array.from(Buffer.from(b64, 'base64'));
-}
-/** The per-thread kernel module, or null where this engine has no WebAssembly SIMD. */
-function getRuntime() {
-    if (runtime !== undefined)
-        return runtime;
-    const bytes = decode(KERNEL_BASE64);
-    // The bytes are what the reproducibility check vouched for, or the build is broken: never run others.
-    const sha = (0,external_node_crypto_namespaceObject.createHash)('sha256').update(bytes).digest('hex');
-    if (sha !== KERNEL_SHA256)
-        throw new Error(`kernel bytes have sha256 ${sha}, expected ${KERNEL_SHA256}`);
-    try {
-        if (wasmApi === undefined || !wasmApi.validate(bytes)) {
-            runtime = null;
-        }
-        else {
-            const instance = new wasmApi.Instance(new wasmApi.Module(bytes), { env: { abort: () => undefined } });
-            runtime = new Runtime(instance.exports);
-        }
-    }
-    catch {
-        runtime = null;
-    }
-    return runtime;
-}
-function wasmAvailable() {
-    return getRuntime() !== null;
-}
-/**
- * Where one gradient call's operands live in wasm memory. Kept while nothing moved (same shape,
- * same data, same memory), so the epoch loop allocates nothing and resolves nothing.
- */
-class GradientPlan {
-    version = -1;
-    shape = null;
-    x = null;
-    y = null;
-    xAt = 0;
-    yAt = 0;
-    paramsAt = 0;
-    gradAt = 0;
-    workAt = 0;
-    activation = 0;
-    head = 0;
-    memory;
-    grad;
-    constructor(memory) {
-        this.memory = memory;
-        this.grad = memory.subarray(0, 0);
-    }
-    current(rt, shape, x, y) {
-        return this.version === rt.version && shape === this.shape && x === this.x && y === this.y;
-    }
-    plan(rt, shape, x, y, size) {
-        [this.xAt, this.yAt] = rt.resident(x, y);
-        this.paramsAt = rt.scratch(16 * size + 128 + rt.ex.workBytes(shape.inputs, shape.width, shape.outputs));
-        this.gradAt = align(this.paramsAt + 8 * size);
-        this.workAt = align(this.gradAt + 8 * size);
-        this.memory = rt.view();
-        this.grad = this.memory.subarray(this.gradAt / 8, this.gradAt / 8 + size);
-        this.activation = activationCode(shape.activation);
-        this.head = reference_headCode(shape.head);
-        this.version = rt.version;
-        this.shape = shape;
-        this.x = x;
-        this.y = y;
-    }
-}
-/** The same for one forward call: inputs, logits and (optionally) hidden activations. */
-class ForwardPlan {
-    version = -1;
-    shape = null;
-    x = null;
-    rows = -1;
-    hiddenBytes = -1;
-    xAt = 0;
-    paramsAt = 0;
-    logitsAt = 0;
-    hiddenAt = 0;
-    workAt = 0;
-    memory;
-    logits;
-    hidden;
-    constructor(memory) {
-        this.memory = memory;
-        this.logits = memory.subarray(0, 0);
-        this.hidden = memory.subarray(0, 0);
-    }
-    current(rt, shape, x, rows, hiddenBytes) {
-        return (this.version === rt.version &&
-            shape === this.shape &&
-            x === this.x &&
-            rows === this.rows &&
-            hiddenBytes === this.hiddenBytes);
-    }
-    plan(rt, shape, x, rows, hiddenBytes, size) {
-        const { inputs: D, width: H, outputs: K } = shape;
-        this.xAt = rt.residentOne(x);
-        const logitBytes = 8 * rows * K;
-        this.paramsAt = rt.scratch(8 * size + logitBytes + hiddenBytes + 256 + rt.ex.workBytes(D, H, K));
-        this.logitsAt = align(this.paramsAt + 8 * size);
-        this.hiddenAt = align(this.logitsAt + logitBytes);
-        this.workAt = align(this.hiddenAt + hiddenBytes);
-        this.memory = rt.view();
-        this.logits = this.memory.subarray(this.logitsAt / 8, this.logitsAt / 8 + rows * K);
-        this.hidden = this.memory.subarray(this.hiddenAt / 8, this.hiddenAt / 8 + rows * H);
-        this.version = rt.version;
-        this.shape = shape;
-        this.x = x;
-        this.rows = rows;
-        this.hiddenBytes = hiddenBytes;
-    }
-}
-/** A kernel backed by the shared WebAssembly module; throws when WebAssembly SIMD is unavailable. */
-function wasmKernel() {
-    const rt = getRuntime();
-    if (rt === null)
-        throw new Error('WebAssembly SIMD is not available in this JavaScript engine');
-    const ex = rt.ex;
-    // Gradient and forward calls share the scratch area above the cached data; each call rewrites
-    // everything it reads there, so they may overlap.
-    const g = new GradientPlan(rt.view());
-    const f = new ForwardPlan(rt.view());
-    return {
-        name: 'wasm-simd-f64',
-        lossAndGradient(shape, params, x, y, start, end, grad) {
-            const P = params.length;
-            if (!g.current(rt, shape, x, y))
-                g.plan(rt, shape, x, y, P);
-            const mem = g.memory;
-            const po = g.paramsAt / 8;
-            if (P <= 64)
-                for (let q = 0; q < P; q++)
-                    mem[po + q] = params[q];
-            else
-                mem.set(params, po);
-            const { inputs, width, outputs } = shape;
-            const loss = ex.lossGrad(g.activation, g.head, inputs, width, outputs, g.paramsAt, g.xAt, g.yAt, start, end, g.gradAt, g.workAt);
-            const view = g.grad;
-            if (P <= 64)
-                for (let q = 0; q < P; q++)
-                    grad[q] = view[q];
-            else
-                grad.set(view);
-            return loss;
-        },
-        forward(shape, params, x, rows, logits, hidden) {
-            const hiddenBytes = hidden ? 8 * rows * shape.width : 0;
-            if (!f.current(rt, shape, x, rows, hiddenBytes))
-                f.plan(rt, shape, x, rows, hiddenBytes, params.length);
-            f.memory.set(params, f.paramsAt / 8);
-            const { inputs, width, outputs } = shape;
-            ex.forward(activationCode(shape.activation), inputs, width, outputs, f.paramsAt, f.xAt, rows, f.logitsAt, hidden ? f.hiddenAt : 0, f.workAt);
-            logits.set(f.logits);
-            if (hidden)
-                hidden.set(f.hidden);
-        },
-    };
-}
-
-;// CONCATENATED MODULE: ./src/nn/kernel/select.ts
-/** Picks the compute kernel a new trainer runs: the WebAssembly SIMD kernel, else the float64 reference (same bits). */
-
-
-function defaultKernel() {
-    return wasmAvailable() ? wasmKernel() : referenceKernel();
-}
-
-;// CONCATENATED MODULE: ./src/nn/metrics.ts
-
-function computeMetrics(head, K, logits, y, rows, targetStd) {
-    let loss = 0;
-    for (let p = 0; p < rows; p++)
-        loss += rowLoss(head, K, logits, p * K, y[p]);
-    loss /= rows;
-    const metric = (name) => targetMetric(name, head, K, logits, y, rows, targetStd);
-    if (head === constants_HEAD_LINEAR) {
-        return { loss, accuracy: NaN, rmse: metric('rmse'), mae: metric('mae'), maxAbsError: metric('max-abs-error') };
-    }
-    // A network whose loss is not finite has no accuracy.
-    return { loss, accuracy: Number.isFinite(loss) ? metric('accuracy') : NaN, rmse: NaN, mae: NaN, maxAbsError: NaN };
-}
-/** One metric without building the whole record (used inside the epoch loop). */
-function targetMetric(name, head, K, logits, y, rows, targetStd) {
-    if (name === 'accuracy') {
-        if (head === constants_HEAD_LINEAR)
-            return NaN;
-        let correct = 0;
-        for (let p = 0; p < rows; p++) {
-            let cls = 0;
-            if (head === constants_HEAD_LOGISTIC) {
-                const z = logits[p];
-                if (z !== z)
-                    return NaN;
-                cls = z > 0 ? 1 : 0;
-            }
-            else {
-                const o = p * K;
-                for (let k = 0; k < K; k++)
-                    if (logits[o + k] !== logits[o + k])
-                        return NaN;
-                for (let k = 1; k < K; k++)
-                    if (logits[o + k] > logits[o + cls])
-                        cls = k;
-            }
-            if (cls === y[p])
-                correct++;
-        }
-        return correct / rows;
-    }
-    if (head !== constants_HEAD_LINEAR)
-        return NaN;
-    let se = 0;
-    let ae = 0;
-    let maxAe = 0;
-    for (let p = 0; p < rows; p++) {
-        const d = (logits[p] - y[p]) * targetStd;
-        const a = d < 0 ? -d : d;
-        se += d * d;
-        ae += a;
-        if (a > maxAe || a !== a)
-            maxAe = a;
-    }
-    return name === 'rmse' ? Math.sqrt(se / rows) : name === 'mae' ? ae / rows : maxAe;
-}
-function metricValue(m, name) {
-    switch (name) {
-        case 'accuracy':
-            return m.accuracy;
-        case 'rmse':
-            return m.rmse;
-        case 'mae':
-            return m.mae;
-        case 'max-abs-error':
-            return m.maxAbsError;
-    }
-}
-
-;// CONCATENATED MODULE: ./src/nn/network.ts
-
-
-/** The activation's usual initialisation. */
-function defaultInit(activation) {
-    return activation === 'relu' ? 'he' : 'nguyen-widrow';
-}
-/** Nguyen-Widrow scale β = 0.7 · H^(1/n) (Nguyen & Widrow 1990). @testOnly */
-function nguyenWidrowBeta(width, inputs) {
-    return 0.7 * detmath_detExp(detLog(width) / inputs);
-}
-/** Standard normal draw by the Marsaglia polar method (no trigonometry, so it stays deterministic). */
-function gaussian(rng) {
-    for (;;) {
-        const u = 2 * rng.nextDouble() - 1;
-        const v = 2 * rng.nextDouble() - 1;
-        const s = u * u + v * v;
-        if (s > 0 && s < 1)
-            return u * Math.sqrt((-2 * detLog(s)) / s);
-    }
-}
-/**
- * Draws hidden neuron j's input weights and bias into `params` (layout `lay`, `width` hidden
- * neurons), as `init` prescribes for a layer of `width` neurons.
- */
-function initHiddenNeuron(params, lay, inputs, width, j, init, rng) {
-    if (init === 'nguyen-widrow') {
-        const beta = nguyenWidrowBeta(width, inputs);
-        let norm2 = 0;
-        for (let i = 0; i < inputs; i++) {
-            const w = rng.nextDouble() - 0.5;
-            params[lay.w1 + i * width + j] = w;
-            norm2 += w * w;
-        }
-        const scale = norm2 > 0 ? beta / Math.sqrt(norm2) : 0;
-        for (let i = 0; i < inputs; i++)
-            params[lay.w1 + i * width + j] *= scale;
-        params[lay.b1 + j] = beta * (2 * rng.nextDouble() - 1);
-    }
-    else if (init === 'glorot') {
-        const limit = Math.sqrt(6 / (inputs + width));
-        for (let i = 0; i < inputs; i++)
-            params[lay.w1 + i * width + j] = limit * (2 * rng.nextDouble() - 1);
-        params[lay.b1 + j] = 0;
-    }
-    else {
-        const std = Math.sqrt(2 / inputs);
-        for (let i = 0; i < inputs; i++)
-            params[lay.w1 + i * width + j] = std * gaussian(rng);
-        params[lay.b1 + j] = 0;
-    }
-}
-/** A freshly initialised parameter vector. Draw order: hidden neurons 0..H-1, then output weights row by row. */
-function initParams(shape, init, rng) {
-    const lay = layoutOf(shape);
-    const params = new Float64Array(lay.size);
-    const { inputs, width, outputs } = shape;
-    for (let j = 0; j < width; j++)
-        initHiddenNeuron(params, lay, inputs, width, j, init, rng);
-    if (init === 'nguyen-widrow') {
-        // Output weights: small uniform values, U(-0.5, 0.5); output biases 0.
-        for (let q = 0; q < width * outputs; q++)
-            params[lay.w2 + q] = rng.nextDouble() - 0.5;
-    }
-    else if (init === 'glorot') {
-        const limit = Math.sqrt(6 / (width + outputs));
-        for (let q = 0; q < width * outputs; q++)
-            params[lay.w2 + q] = limit * (2 * rng.nextDouble() - 1);
-    }
-    else {
-        const std = Math.sqrt(2 / width);
-        for (let q = 0; q < width * outputs; q++)
-            params[lay.w2 + q] = std * gaussian(rng);
-    }
-    return params;
-}
-/**
- * The parameters of `shape` with hidden neuron `j` removed (removeAt) or a zeroed neuron
- * appended (remove < 0). Returned in the layout of the new width.
- */
-function resizeParams(params, shape, removeAt) {
-    const { inputs, width, outputs } = shape;
-    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
-    const from = layoutOf(shape);
-    const to = layoutOf({ inputs, width: newWidth, outputs });
-    const out = new Float64Array(to.size);
-    const keep = (j) => (removeAt >= 0 && j > removeAt ? j - 1 : j);
-    for (let j = 0; j < width; j++) {
-        if (j === removeAt)
-            continue;
-        const jj = keep(j);
-        for (let i = 0; i < inputs; i++)
-            out[to.w1 + i * newWidth + jj] = params[from.w1 + i * width + j];
-        out[to.b1 + jj] = params[from.b1 + j];
-        for (let k = 0; k < outputs; k++)
-            out[to.w2 + jj * outputs + k] = params[from.w2 + j * outputs + k];
-    }
-    for (let k = 0; k < outputs; k++)
-        out[to.b2 + k] = params[from.b2 + k];
-    return out;
-}
-/** Maps old parameter indices to new ones for a resize (−1: dropped); new parameters have no source. */
-function resizeIndexMap(shape, removeAt) {
-    const { inputs, width, outputs } = shape;
-    const newWidth = removeAt >= 0 ? width - 1 : width + 1;
-    const from = layoutOf(shape);
-    const to = layoutOf({ inputs, width: newWidth, outputs });
-    const map = new Int32Array(from.size).fill(-1);
-    for (let j = 0; j < width; j++) {
-        if (j === removeAt)
-            continue;
-        const jj = removeAt >= 0 && j > removeAt ? j - 1 : j;
-        for (let i = 0; i < inputs; i++)
-            map[from.w1 + i * width + j] = to.w1 + i * newWidth + jj;
-        map[from.b1 + j] = to.b1 + jj;
-        for (let k = 0; k < outputs; k++)
-            map[from.w2 + j * outputs + k] = to.w2 + jj * outputs + k;
-    }
-    for (let k = 0; k < outputs; k++)
-        map[from.b2 + k] = to.b2 + k;
-    return map;
-}
-function toJson(shape, params) {
-    const { inputs, width, outputs } = shape;
-    const lay = layoutOf(shape);
-    const hiddenWeights = [];
-    for (let j = 0; j < width; j++) {
-        const row = [];
-        for (let i = 0; i < inputs; i++)
-            row.push(params[lay.w1 + i * width + j]);
-        hiddenWeights.push(row);
-    }
-    const outputWeights = [];
-    for (let k = 0; k < outputs; k++) {
-        const row = [];
-        for (let j = 0; j < width; j++)
-            row.push(params[lay.w2 + j * outputs + k]);
-        outputWeights.push(row);
-    }
-    return {
-        inputs,
-        width,
-        outputs,
-        activation: shape.activation,
-        head: shape.head,
-        hiddenWeights,
-        hiddenBias: Array.from(params.subarray(lay.b1, lay.b1 + width)),
-        outputWeights,
-        outputBias: Array.from(params.subarray(lay.b2, lay.b2 + outputs)),
-    };
-}
-function network_fromJson(net) {
-    const shape = {
-        inputs: net.inputs,
-        width: net.width,
-        outputs: net.outputs,
-        activation: net.activation,
-        head: net.head,
-    };
-    const lay = layoutOf(shape);
-    const params = new Float64Array(lay.size);
-    for (let j = 0; j < net.width; j++) {
-        for (let i = 0; i < net.inputs; i++)
-            params[lay.w1 + i * net.width + j] = net.hiddenWeights[j][i];
-        params[lay.b1 + j] = net.hiddenBias[j];
-    }
-    for (let k = 0; k < net.outputs; k++) {
-        for (let j = 0; j < net.width; j++)
-            params[lay.w2 + j * net.outputs + k] = net.outputWeights[k][j];
-        params[lay.b2 + k] = net.outputBias[k];
-    }
-    return { shape, params };
-}
-function network_describe(shape) {
-    return {
-        inputs: shape.inputs,
-        width: shape.width,
-        outputs: shape.outputs,
-        activation: shape.activation,
-        head: shape.head,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/nn/stall.ts
-/** When a training's error has flattened: the trigger of in-place growth. */
-/** Dynamic Node Creation trigger (Ash 1989), signed form, on the min-so-far training error. */
-class StallDetector {
-    window;
-    threshold;
-    ring;
-    count = 0;
-    minSoFar = Infinity;
-    errorAtStart = NaN;
-    constructor(window, threshold) {
-        this.window = window;
-        this.threshold = threshold;
-        this.ring = new Float64Array(window + 1);
-    }
-    reset() {
-        this.count = 0;
-        this.minSoFar = Infinity;
-        this.errorAtStart = NaN;
-    }
-    /** Records the error of the current epoch; true when the error has flattened. */
-    record(error) {
-        if (error < this.minSoFar)
-            this.minSoFar = error;
-        const s = this.count++;
-        const w = this.window;
-        this.ring[s % (w + 1)] = this.minSoFar;
-        if (s === 0)
-            this.errorAtStart = this.minSoFar;
-        if (s < w)
-            return false;
-        const drop = this.ring[(s - w) % (w + 1)] - this.minSoFar;
-        if (!(this.errorAtStart > 0))
-            return !(drop > 0);
-        return drop / this.errorAtStart < this.threshold;
-    }
-}
-
-;// CONCATENATED MODULE: ./src/nn/line-search.ts
-/**
- * A line search for the strong Wolfe conditions (Nocedal & Wright, Numerical Optimization,
- * 2nd ed. 2006: Algorithm 3.5 with the zoom of Algorithm 3.6, trial steps by the cubic
- * interpolation of section 3.5, eq. 3.59):
- *   sufficient decrease  φ(α) ≤ φ(0) + c1·α·φ'(0)
- *   curvature            |φ'(α)| ≤ c2·|φ'(0)|
- * where φ(α) = f(x0 + α·d). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so the
- * same inputs give the same bits on every engine. No allocation after construction.
- */
-/**
- * A trial step from interpolation must stay at least this fraction of the bracket away from
- * both ends, so the bracket shrinks by a fixed factor whatever the cubic says. 0.1 is common
- * practice with no published source.
- */
-const BRACKET_MARGIN = 0.1;
-/**
- * Extrapolation bounds while no bracket exists: the next step lies in
- * [α_i + 1.1·(α_i − α_{i−1}), α_i + 4·(α_i − α_{i−1})], the factors of the Moré–Thuente line
- * search (MINPACK-2 dcsrch; from memory).
- */
-const EXTRAPOLATE_MIN = 1.1;
-const EXTRAPOLATE_MAX = 4;
-const EPSILON = 2.220446049250313e-16;
-function finite(v) {
-    return v - v === 0;
-}
-/**
- * The minimiser of the cubic through (a, fa, ga) and (b, fb, gb) (Nocedal & Wright eq. 3.59);
- * NaN when the cubic has no local minimiser or the data are not finite.
- */
-function cubicMinimizer(a, fa, ga, b, fb, gb) {
-    const d1 = ga + gb - (3 * (fa - fb)) / (a - b);
-    const disc = d1 * d1 - ga * gb;
-    if (!(disc >= 0))
-        return NaN;
-    const root = Math.sqrt(disc);
-    const d2 = b > a ? root : -root;
-    const alpha = b - ((b - a) * (gb + d2 - d1)) / (gb - ga + 2 * d2);
-    return finite(alpha) ? alpha : NaN;
-}
-/** Trial step inside the bracket (lo, hi): the cubic minimiser kept BRACKET_MARGIN away from both ends. */
-function bracketedStep(aLo, fLo, gLo, aHi, fHi, gHi, hiFinite) {
-    const left = aLo < aHi ? aLo : aHi;
-    const right = aLo < aHi ? aHi : aLo;
-    const margin = BRACKET_MARGIN * (right - left);
-    // Without finite values at the far end there is nothing to interpolate: bisect.
-    const c = hiFinite ? cubicMinimizer(aLo, fLo, gLo, aHi, fHi, gHi) : NaN;
-    if (c !== c)
-        return 0.5 * (aLo + aHi);
-    if (c < left + margin)
-        return left + margin;
-    if (c > right - margin)
-        return right - margin;
-    return c;
-}
-/** Next step while the function still falls steeply: the cubic's minimiser beyond α_i, within the extrapolation bounds. */
-function extrapolatedStep(aPrev, fPrev, gPrev, a, f, g) {
-    const span = a - aPrev;
-    const lower = a + EXTRAPOLATE_MIN * span;
-    const upper = a + EXTRAPOLATE_MAX * span;
-    const c = cubicMinimizer(aPrev, fPrev, gPrev, a, f, g);
-    if (c !== c || c > upper)
-        return upper;
-    return c < lower ? lower : c;
-}
-class StrongWolfeLineSearch {
-    settings;
-    /** The best point of the last search (valid when it reported `moved`) and its gradient. */
-    point;
-    gradient;
-    /** Loss, step and directional derivative φ'(α) at `point`. */
-    loss = NaN;
-    alpha = 0;
-    slope = NaN;
-    /** The point, gradient, loss and φ'(α) of the most recent evaluate(). */
-    trialPoint;
-    trialGradient;
-    trialLoss = NaN;
-    trialSlope = NaN;
-    constructor(size, settings) {
-        this.settings = settings;
-        this.point = new Float64Array(size);
-        this.gradient = new Float64Array(size);
-        this.trialPoint = new Float64Array(size);
-        this.trialGradient = new Float64Array(size);
-    }
-    resize(size) {
-        this.point = new Float64Array(size);
-        this.gradient = new Float64Array(size);
-        this.trialPoint = new Float64Array(size);
-        this.trialGradient = new Float64Array(size);
-    }
-    /** φ(α) at x0 + α·d (into trialPoint/trialGradient); sets trialSlope = ∇f(x0 + α·d)ᵀd. */
-    evaluate(x0, d, alpha, objective) {
-        const xt = this.trialPoint;
-        const gt = this.trialGradient;
-        const n = xt.length;
-        for (let q = 0; q < n; q++)
-            xt[q] = x0[q] + alpha * d[q];
-        const f = objective(xt, gt);
-        let slope = 0;
-        for (let q = 0; q < n; q++)
-            slope += gt[q] * d[q];
-        this.trialLoss = f;
-        this.trialSlope = slope;
-        return f;
-    }
-    /** The trial just evaluated becomes the best point (buffers swap, nothing is copied). */
-    keepTrial(alpha) {
-        const p = this.point;
-        const g = this.gradient;
-        this.point = this.trialPoint;
-        this.gradient = this.trialGradient;
-        this.trialPoint = p;
-        this.trialGradient = g;
-        this.loss = this.trialLoss;
-        this.slope = this.trialSlope;
-        this.alpha = alpha;
-    }
-    /**
-     * Searches along the descent direction d from x0, whose loss is f0 and whose directional
-     * derivative is slope0 < 0, starting with step alpha1. Uses at most `budget` evaluations.
-     * A non-finite loss or slope at a trial point counts as a step that is too long.
-     */
-    search(x0, f0, slope0, d, alpha1, objective, budget) {
-        const { c1, c2 } = this.settings;
-        const limit = Math.min(budget, this.settings.maxEvaluations);
-        const curvature = -c2 * slope0;
-        this.loss = f0;
-        this.slope = slope0;
-        this.alpha = 0;
-        let evaluations = 0;
-        const end = (status) => ({
-            status: status === 'failed' && evaluations >= budget ? 'budget' : status,
-            evaluations,
-            moved: this.alpha > 0,
-        });
-        // Algorithm 3.5: widen the step until the bracket [lo, hi] holds a Wolfe point. The best
-        // point so far (lo) is α = 0 at first, then always the lowest loss satisfying Armijo.
-        let aPrev = 0;
-        let fPrev = f0;
-        let gPrev = slope0;
-        let a = alpha1;
-        let aHi;
-        let fHi;
-        let gHi;
-        let hiFinite;
-        for (let i = 1;; i++) {
-            if (evaluations >= limit)
-                return end('failed');
-            const f = this.evaluate(x0, d, a, objective);
-            const g = this.trialSlope;
-            evaluations++;
-            const ok = finite(f) && finite(g);
-            if (!ok || f > f0 + c1 * a * slope0 || (i > 1 && f >= fPrev)) {
-                aHi = a;
-                fHi = f;
-                gHi = g;
-                hiFinite = ok;
-                break;
-            }
-            if ((g < 0 ? -g : g) <= curvature) {
-                this.keepTrial(a);
-                return end('wolfe');
-            }
-            if (g >= 0) {
-                // The minimum lies between the previous step and this one; this one is the lower.
-                aHi = aPrev;
-                fHi = fPrev;
-                gHi = gPrev;
-                hiFinite = true;
-                this.keepTrial(a);
-                break;
-            }
-            this.keepTrial(a);
-            const next = extrapolatedStep(aPrev, fPrev, gPrev, a, f, g);
-            aPrev = a;
-            fPrev = f;
-            gPrev = g;
-            a = next;
-        }
-        // Algorithm 3.6 (zoom): lo is this.alpha with this.loss and this.slope.
-        for (;;) {
-            if (evaluations >= limit)
-                return end('failed');
-            const aLo = this.alpha;
-            const width = aHi > aLo ? aHi - aLo : aLo - aHi;
-            if (width <= EPSILON * (aHi > aLo ? aHi : aLo))
-                return end('failed');
-            const aj = bracketedStep(aLo, this.loss, this.slope, aHi, fHi, gHi, hiFinite);
-            const f = this.evaluate(x0, d, aj, objective);
-            const g = this.trialSlope;
-            evaluations++;
-            const ok = finite(f) && finite(g);
-            if (!ok || f > f0 + c1 * aj * slope0 || f >= this.loss) {
-                aHi = aj;
-                fHi = f;
-                gHi = g;
-                hiFinite = ok;
-                continue;
-            }
-            if ((g < 0 ? -g : g) <= curvature) {
-                this.keepTrial(aj);
-                return end('wolfe');
-            }
-            if (g * (aHi - aLo) >= 0) {
-                aHi = aLo;
-                fHi = this.loss;
-                gHi = this.slope;
-                hiFinite = true;
-            }
-            this.keepTrial(aj);
-        }
-    }
-}
-
-;// CONCATENATED MODULE: ./src/nn/lbfgs.ts
-/**
- * Full-batch limited-memory BFGS (Liu & Nocedal 1989; Nocedal & Wright, Numerical Optimization,
- * 2nd ed. 2006, Algorithm 7.5), with the two-loop recursion of Algorithm 7.4, the initial
- * Hessian H0 = γ·I with γ = sᵀy / yᵀy of the newest pair (eq. 7.20), and a strong Wolfe line
- * search (line-search.ts). Only +, −, ×, ÷, sqrt and comparisons, in a fixed order, so a run
- * gives the same bits on every engine. All work arrays are allocated in the constructor or
- * on resize, none inside an iteration.
- */
-
-/**
- * memory 10, gradientTolerance 1e-5, lossTolerance 2.22e-9 (factr 1e7 × machine epsilon, same
- * formula) and 20 line-search evaluations are SciPy's L-BFGS-B defaults (scipy.optimize
- * fmin_l_bfgs_b: m, pgtol, factr, maxls; checked in its documentation). c1 = 1e-4 and c2 = 0.9
- * are the values Nocedal & Wright recommend for quasi-Newton methods (section 3.1, from memory),
- * and SciPy's line_search defaults (checked). Nocedal & Wright suggest m between 3 and 20 (from
- * memory); 10 is SciPy's choice.
- * @testOnly
- */
-const LBFGS_DEFAULTS = {
-    memory: 10,
-    c1: 1e-4,
-    c2: 0.9,
-    gradientTolerance: 1e-5,
-    lossTolerance: 2.220446049250313e-9,
-    maxLineSearchEvaluations: 20,
-};
-/**
- * A pair is kept only when sᵀy > ε·‖s‖·‖y‖ (ε the machine epsilon): the cosine between s and
- * y must exceed the rounding level of the dot product itself. A strong Wolfe step always
- * gives sᵀy ≥ (1 − c2)·|∇fᵀs| > 0, so this only drops pairs from steps accepted without the
- * curvature condition (budget ran out) or lost to rounding, where 1/sᵀy would be noise and the
- * inverse-Hessian approximation could stop being positive definite.
- */
-const PAIR_COSINE_MIN = 2.220446049250313e-16;
-function dot(a, ao, b, bo, n) {
-    let s = 0;
-    for (let q = 0; q < n; q++)
-        s += a[ao + q] * b[bo + q];
-    return s;
-}
-class Lbfgs {
-    options;
-    stats = { iterations: 0, evaluations: 0, skippedPairs: 0, restarts: 0 };
-    n;
-    m;
-    /** Ring of pairs: pair i occupies [i·n, (i+1)·n) of s and y. */
-    s;
-    y;
-    rho;
-    coef;
-    count = 0;
-    newest = -1;
-    gamma = 1;
-    d;
-    /** The point whose loss and gradient are cached, so an iteration starts without evaluating. */
-    x;
-    g;
-    f = NaN;
-    known = false;
-    search;
-    constructor(size, options = {}) {
-        const o = { ...LBFGS_DEFAULTS, ...options };
-        if (!Number.isInteger(o.memory) || o.memory < 1)
-            throw new RangeError(`memory must be a whole number >= 1, got ${o.memory}`);
-        if (!(0 < o.c1 && o.c1 < o.c2 && o.c2 < 1))
-            throw new RangeError(`need 0 < c1 < c2 < 1, got c1 ${o.c1}, c2 ${o.c2}`);
-        if (!(o.maxLineSearchEvaluations >= 1))
-            throw new RangeError('maxLineSearchEvaluations must be >= 1');
-        this.options = o;
-        this.n = size;
-        this.m = o.memory;
-        this.s = new Float64Array(this.m * size);
-        this.y = new Float64Array(this.m * size);
-        this.rho = new Float64Array(this.m);
-        this.coef = new Float64Array(this.m);
-        this.d = new Float64Array(size);
-        this.x = new Float64Array(size);
-        this.g = new Float64Array(size);
-        this.search = new StrongWolfeLineSearch(size, {
-            c1: o.c1,
-            c2: o.c2,
-            maxEvaluations: o.maxLineSearchEvaluations,
-        });
-    }
-    /**
-     * Hands over an evaluation the caller already made at x, so the next iteration need not repeat
-     * it. The curvature pairs stay; call reset() as well if x is unrelated to the previous point.
-     */
-    setPoint(x, loss, grad) {
-        this.x.set(x);
-        this.g.set(grad);
-        this.f = loss;
-        this.known = true;
-    }
-    /**
-     * One iteration from x (updated in place): direction by the two-loop recursion, then a strong
-     * Wolfe line search. Uses at most maxEvaluations evaluations (one more at the start when no
-     * loss is known for x). If the caller changed x since the last call, the history is dropped
-     * and x is evaluated afresh. x never gets worse: on 'stuck' it holds the best point found.
-     */
-    iterate(x, objective, maxEvaluations) {
-        let evaluations = 0;
-        if (!(maxEvaluations >= 1))
-            return { evaluations, loss: this.known ? this.f : NaN, status: 'progress' };
-        if (!this.known || !this.isCurrent(x)) {
-            if (this.known)
-                this.reset();
-            this.x.set(x);
-            this.f = objective(this.x, this.g);
-            this.known = true;
-            evaluations++;
-            this.stats.evaluations++;
-        }
-        const n = this.n;
-        const f0 = this.f;
-        const gInf = this.gradientInfNorm();
-        if (!(f0 - f0 === 0) || !(gInf - gInf === 0))
-            return { evaluations, loss: f0, status: 'stuck' };
-        if (gInf <= this.options.gradientTolerance)
-            return { evaluations, loss: f0, status: 'converged' };
-        this.stats.iterations++;
-        for (;;) {
-            let quasiNewton = this.count > 0;
-            this.direction();
-            let slope0 = dot(this.g, 0, this.d, 0, n);
-            if (!(slope0 < 0) && quasiNewton) {
-                // Rounding made the quasi-Newton direction useless: fall back on steepest descent.
-                this.reset();
-                quasiNewton = false;
-                this.direction();
-                slope0 = dot(this.g, 0, this.d, 0, n);
-            }
-            if (!(slope0 < 0))
-                return { evaluations, loss: this.f, status: 'stuck' };
-            const budget = maxEvaluations - evaluations;
-            if (budget < 1)
-                return { evaluations, loss: this.f, status: 'progress' };
-            // Quasi-Newton steps are well scaled, so α = 1 comes first (Nocedal & Wright, section 3.5).
-            // Without curvature information the first trial moves the parameters by a Euclidean length
-            // of 1 (as Liu & Nocedal's LBFGS code does, from memory): the summed loss's gradient grows
-            // with the row count, so α = 1 on −∇f would make the step depend on the data size, while a
-            // unit move is on the scale of Nguyen–Widrow initial weights.
-            const alpha1 = this.count > 0 ? 1 : 1 / Math.sqrt(dot(this.d, 0, this.d, 0, n));
-            const fOld = this.f;
-            const r = this.search.search(this.x, fOld, slope0, this.d, alpha1, objective, budget);
-            evaluations += r.evaluations;
-            this.stats.evaluations += r.evaluations;
-            if (r.moved)
-                this.accept(x, r.status !== 'failed');
-            if (r.status === 'wolfe') {
-                const fNew = this.f;
-                const scale = Math.max(fOld < 0 ? -fOld : fOld, fNew < 0 ? -fNew : fNew, 1);
-                const converged = this.gradientInfNorm() <= this.options.gradientTolerance ||
-                    (this.options.lossTolerance > 0 && (fOld - fNew) / scale <= this.options.lossTolerance);
-                return { evaluations, loss: this.f, status: converged ? 'converged' : 'progress' };
-            }
-            if (r.status === 'budget')
-                return { evaluations, loss: this.f, status: 'progress' };
-            // The line search failed. With curvature pairs, they may be what misleads: drop them and
-            // try steepest descent from the best point so far. Without, there is nowhere to go.
-            if (!quasiNewton)
-                return { evaluations, loss: this.f, status: 'stuck' };
-            this.reset();
-            this.stats.restarts++;
-        }
-    }
-    /** Forgets the curvature pairs (after the parameter vector changed meaning); the cached point stays. */
-    reset() {
-        this.count = 0;
-        this.newest = -1;
-        this.gamma = 1;
-    }
-    /**
-     * Carries over to a resized parameter vector (map[old] = new index, −1 dropped). Removing or
-     * adding a neuron changes the function, so old pairs are not secants of the new one: the
-     * history is dropped and the next iteration evaluates the new point.
-     */
-    resize(_map, newSize) {
-        this.reset();
-        this.known = false;
-        this.f = NaN;
-        if (newSize === this.n)
-            return;
-        this.n = newSize;
-        this.s = new Float64Array(this.m * newSize);
-        this.y = new Float64Array(this.m * newSize);
-        this.d = new Float64Array(newSize);
-        this.x = new Float64Array(newSize);
-        this.g = new Float64Array(newSize);
-        this.search.resize(newSize);
-    }
-    /** Curvature pairs currently held. */
-    get pairs() {
-        return this.count;
-    }
-    isCurrent(x) {
-        const c = this.x;
-        if (x.length !== c.length)
-            return false;
-        for (let q = 0; q < c.length; q++)
-            if (x[q] !== c[q])
-                return false;
-        return true;
-    }
-    gradientInfNorm() {
-        const g = this.g;
-        let m = 0;
-        for (let q = 0; q < g.length; q++) {
-            const a = g[q] < 0 ? -g[q] : g[q];
-            if (a > m || a !== a)
-                m = a;
-        }
-        return m;
-    }
-    /** d = −H·g by the two-loop recursion (Algorithm 7.4), newest pair first; −g without pairs. */
-    direction() {
-        const { n, m, s, y, rho, coef, d, g } = this;
-        for (let q = 0; q < n; q++)
-            d[q] = g[q];
-        for (let k = 0; k < this.count; k++) {
-            const i = (this.newest - k + m) % m;
-            const a = rho[i] * dot(s, i * n, d, 0, n);
-            coef[i] = a;
-            const o = i * n;
-            for (let q = 0; q < n; q++)
-                d[q] -= a * y[o + q];
-        }
-        const gamma = this.gamma;
-        for (let q = 0; q < n; q++)
-            d[q] *= gamma;
-        for (let k = this.count - 1; k >= 0; k--) {
-            const i = (this.newest - k + m) % m;
-            const b = rho[i] * dot(y, i * n, d, 0, n);
-            const c = coef[i] - b;
-            const o = i * n;
-            for (let q = 0; q < n; q++)
-                d[q] += c * s[o + q];
-        }
-        for (let q = 0; q < n; q++)
-            d[q] = -d[q];
-    }
-    /** Moves to the line search's best point; stores the pair s = x₊ − x, y = g₊ − g when asked and acceptable. */
-    accept(out, storePair) {
-        const { n, m } = this;
-        const xn = this.search.point;
-        const gn = this.search.gradient;
-        if (storePair) {
-            let sy = 0;
-            let ss = 0;
-            let yy = 0;
-            for (let q = 0; q < n; q++) {
-                const sq = xn[q] - this.x[q];
-                const yq = gn[q] - this.g[q];
-                sy += sq * yq;
-                ss += sq * sq;
-                yy += yq * yq;
-            }
-            if (sy > PAIR_COSINE_MIN * Math.sqrt(ss) * Math.sqrt(yy)) {
-                const i = (this.newest + 1) % m;
-                const o = i * n;
-                for (let q = 0; q < n; q++) {
-                    this.s[o + q] = xn[q] - this.x[q];
-                    this.y[o + q] = gn[q] - this.g[q];
-                }
-                this.rho[i] = 1 / sy;
-                this.gamma = sy / yy;
-                this.newest = i;
-                if (this.count < m)
-                    this.count++;
-            }
-            else {
-                this.stats.skippedPairs++;
-            }
-        }
-        this.x.set(xn);
-        this.g.set(gn);
-        this.f = this.search.loss;
-        out.set(xn);
-    }
-}
-
-;// CONCATENATED MODULE: ./src/nn/optimizers.ts
-/** iRprop+ defaults (Riedmiller & Braun 1993; Igel & Hüsken 2003). */
-const IRPROP_DEFAULTS = { etaPlus: 1.2, etaMinus: 0.5, delta0: 0.1, deltaMin: 1e-6, deltaMax: 50 };
-/** Adam defaults (Kingma & Ba 2015). */
-const ADAM_DEFAULTS = { learningRate: 0.001, beta1: 0.9, beta2: 0.999, epsilon: 1e-8 };
-/** Backpropagation with momentum: ε 0.1, α 0.9, the values of Rumelhart, Hinton & Williams' 1986 symmetry run (from memory). */
-const BACKPROP_DEFAULTS = { learningRate: 0.1, momentum: 0.9 };
-function remap(old, map, newSize, fresh) {
-    const out = new Float64Array(newSize).fill(fresh);
-    for (let q = 0; q < map.length; q++)
-        if (map[q] >= 0)
-            out[map[q]] = old[q];
-    return out;
-}
-/** iRprop+ (Igel & Hüsken): on a sign change, revert the last step only if the error rose. @testOnly */
-class IRpropPlus {
-    kind = 'irprop+';
-    delta;
-    prevGrad;
-    prevStep;
-    prevLoss = Infinity;
-    constructor(size) {
-        this.delta = new Float64Array(size).fill(IRPROP_DEFAULTS.delta0);
-        this.prevGrad = new Float64Array(size);
-        this.prevStep = new Float64Array(size);
-    }
-    step(params, grad, loss, _rows) {
-        const { etaPlus, etaMinus, deltaMin, deltaMax } = IRPROP_DEFAULTS;
-        const delta = this.delta;
-        const prevGrad = this.prevGrad;
-        const prevStep = this.prevStep;
-        const errorRose = loss > this.prevLoss;
-        const n = params.length;
-        for (let q = 0; q < n; q++) {
-            const g = grad[q];
-            const c = g * prevGrad[q];
-            if (c > 0) {
-                const d = Math.min(delta[q] * etaPlus, deltaMax);
-                delta[q] = d;
-                const step = g > 0 ? -d : d;
-                params[q] += step;
-                prevStep[q] = step;
-                prevGrad[q] = g;
-            }
-            else if (c < 0) {
-                delta[q] = Math.max(delta[q] * etaMinus, deltaMin);
-                if (errorRose) {
-                    const step = -prevStep[q];
-                    params[q] += step;
-                    prevStep[q] = step;
-                }
-                else {
-                    prevStep[q] = 0;
-                }
-                prevGrad[q] = 0;
-            }
-            else {
-                const d = delta[q];
-                const step = g > 0 ? -d : g < 0 ? d : 0;
-                params[q] += step;
-                prevStep[q] = step;
-                prevGrad[q] = g;
-            }
-        }
-        this.prevLoss = loss;
-    }
-    resize(map, newSize) {
-        this.delta = remap(this.delta, map, newSize, IRPROP_DEFAULTS.delta0);
-        this.prevGrad = remap(this.prevGrad, map, newSize, 0);
-        this.prevStep = remap(this.prevStep, map, newSize, 0);
-    }
-    resetRange(from, to) {
-        this.delta.fill(IRPROP_DEFAULTS.delta0, from, to);
-        this.prevGrad.fill(0, from, to);
-        this.prevStep.fill(0, from, to);
-        // The function changed, so the last error no longer says whether a step made things worse.
-        this.prevLoss = Infinity;
-    }
-    /** Inspection for tests. */
-    state() {
-        return { delta: this.delta, prevGrad: this.prevGrad, prevStep: this.prevStep, prevLoss: this.prevLoss };
-    }
-}
-/** Adam (Kingma & Ba 2015), Algorithm 1, on the mean gradient of the batch. */
-class Adam {
-    lr;
-    kind = 'adam';
-    m;
-    v;
-    t = 0;
-    b1t = 1;
-    b2t = 1;
-    constructor(size, lr) {
-        this.lr = lr;
-        this.m = new Float64Array(size);
-        this.v = new Float64Array(size);
-    }
-    step(params, grad, _loss, rows) {
-        const { beta1, beta2, epsilon } = ADAM_DEFAULTS;
-        this.t++;
-        this.b1t *= beta1;
-        this.b2t *= beta2;
-        const c1 = 1 / (1 - this.b1t);
-        const c2 = 1 / (1 - this.b2t);
-        const inv = 1 / rows;
-        const m = this.m;
-        const v = this.v;
-        const lr = this.lr;
-        const n = params.length;
-        for (let q = 0; q < n; q++) {
-            const g = grad[q] * inv;
-            const mq = beta1 * m[q] + (1 - beta1) * g;
-            const vq = beta2 * v[q] + (1 - beta2) * g * g;
-            m[q] = mq;
-            v[q] = vq;
-            params[q] -= (lr * (mq * c1)) / (Math.sqrt(vq * c2) + epsilon);
-        }
-    }
-    resize(map, newSize) {
-        this.m = remap(this.m, map, newSize, 0);
-        this.v = remap(this.v, map, newSize, 0);
-    }
-    resetRange(from, to) {
-        this.m.fill(0, from, to);
-        this.v.fill(0, from, to);
-    }
-}
-/** Backpropagation with momentum: Δw(t) = −ε ∂E/∂w + α Δw(t−1), on the mean gradient (Rumelhart, Hinton & Williams 1986). */
-class Momentum {
-    lr;
-    momentum;
-    kind = 'backprop';
-    prevStep;
-    constructor(size, lr, momentum) {
-        this.lr = lr;
-        this.momentum = momentum;
-        this.prevStep = new Float64Array(size);
-    }
-    step(params, grad, _loss, rows) {
-        const scale = this.lr / rows;
-        const alpha = this.momentum;
-        const prev = this.prevStep;
-        const n = params.length;
-        for (let q = 0; q < n; q++) {
-            const s = -scale * grad[q] + alpha * prev[q];
-            prev[q] = s;
-            params[q] += s;
-        }
-    }
-    resize(map, newSize) {
-        this.prevStep = remap(this.prevStep, map, newSize, 0);
-    }
-    resetRange(from, to) {
-        this.prevStep.fill(0, from, to);
-    }
-}
-function makeUpdater(kind, size, settings) {
-    if (kind === 'irprop+')
-        return new IRpropPlus(size);
-    if (kind === 'adam')
-        return new Adam(size, settings.learningRate ?? ADAM_DEFAULTS.learningRate);
-    return new Momentum(size, settings.learningRate ?? BACKPROP_DEFAULTS.learningRate, settings.momentum ?? BACKPROP_DEFAULTS.momentum);
-}
-
-;// CONCATENATED MODULE: ./src/nn/steppers.ts
-
-
-/** A first-order update: evaluate once, then step along the gradient. */
-class FirstOrder {
-    updater;
-    result = { evaluations: 1, loss: 0, status: 'progress' };
-    constructor(updater) {
-        this.updater = updater;
-    }
-    step(params, objective, grad, _budget, rows) {
-        const loss = objective(params, grad);
-        // A non-finite loss leaves the weights untouched; the trainer stops the run as diverged.
-        if (Number.isFinite(loss))
-            this.updater.step(params, grad, loss, rows);
-        this.result.loss = loss;
-        return this.result;
-    }
-    resize(map, newSize) {
-        this.updater.resize(map, newSize);
-    }
-    resetRange(from, to) {
-        this.updater.resetRange(from, to);
-    }
-}
-/** L-BFGS: each step is one iteration with its strong Wolfe line search. */
-class QuasiNewton {
-    lbfgs;
-    constructor(size) {
-        this.lbfgs = new Lbfgs(size);
-    }
-    step(params, objective, _grad, budget) {
-        return this.lbfgs.iterate(params, objective, budget);
-    }
-    resize(map, newSize) {
-        this.lbfgs.resize(map, newSize);
-    }
-    resetRange() {
-        // The curvature pairs describe the whole vector: after surgery they no longer hold.
-        this.lbfgs.reset();
-    }
-}
-function makeStepper(optimizer, size, settings) {
-    return optimizer === 'lbfgs' ? new QuasiNewton(size) : new FirstOrder(makeUpdater(optimizer, size, settings));
-}
-
-;// CONCATENATED MODULE: ./src/nn/surgery.ts
-
-
-
-/** Hidden activations of every training row (rows × width); the logits go into `logits`. */
-function hiddenActivations(kernel, shape, params, data, logits) {
-    const hidden = new Float64Array(data.trainRows * shape.width);
-    kernel.forward(shape, params, data.xTrain, data.trainRows, logits, hidden);
-    return hidden;
-}
-function columnMeans(hidden, rows, width) {
-    const mean = new Float64Array(width);
-    for (let p = 0; p < rows; p++)
-        for (let j = 0; j < width; j++)
-            mean[j] += hidden[p * width + j];
-    for (let j = 0; j < width; j++)
-        mean[j] /= rows;
-    return mean;
-}
-/** Appends a hidden neuron with fresh input weights (as `init` draws them) and zero outgoing weights. */
-function withNeuronAdded(shape, params, init, rng) {
-    const map = resizeIndexMap(shape, -1);
-    const grown = resizeParams(params, shape, -1);
-    const next = { ...shape, width: shape.width + 1 };
-    initHiddenNeuron(grown, layoutOf(next), next.inputs, next.width, shape.width, init, rng);
-    return { shape: next, params: grown, map };
-}
-/** Removes hidden neuron j, folding its mean activation over the training rows into the output biases. */
-function withNeuronRemoved(kernel, shape, params, data, j) {
-    if (!Number.isInteger(j) || j < 0 || j >= shape.width) {
-        throw new RangeError(`no hidden neuron ${j} in a network of width ${shape.width}`);
-    }
-    const logits = new Float64Array(data.trainRows * shape.outputs);
-    const mean = columnMeans(hiddenActivations(kernel, shape, params, data, logits), data.trainRows, shape.width);
-    const lay = layoutOf(shape);
-    const folded = params.slice();
-    for (let k = 0; k < shape.outputs; k++)
-        folded[lay.b2 + k] += folded[lay.w2 + j * shape.outputs + k] * mean[j];
-    return {
-        shape: { ...shape, width: shape.width - 1 },
-        params: resizeParams(folded, shape, j),
-        map: resizeIndexMap(shape, j),
-    };
-}
-/** Compensated-ablation loss increase per hidden neuron (mean per training row), in one pass. */
-function saliencies(kernel, shape, params, data, head) {
-    const H = shape.width;
-    const K = shape.outputs;
-    const N = data.trainRows;
-    const logits = new Float64Array(N * K);
-    const hidden = hiddenActivations(kernel, shape, params, data, logits);
-    const mean = columnMeans(hidden, N, H);
-    const lay = layoutOf(shape);
-    const out = new Float64Array(H);
-    const z = new Float64Array(K);
-    const y = data.yTrain;
-    for (let p = 0; p < N; p++) {
-        const base = rowLoss(head, K, logits, p * K, y[p]);
-        for (let j = 0; j < H; j++) {
-            const d = hidden[p * H + j] - mean[j];
-            for (let k = 0; k < K; k++)
-                z[k] = logits[p * K + k] - d * params[lay.w2 + j * K + k];
-            out[j] += rowLoss(head, K, z, 0, y[p]) - base;
-        }
-    }
-    for (let j = 0; j < H; j++)
-        out[j] /= N;
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/nn/trainer.ts
-/**
- * One network and its optimiser state while it trains, grows and shrinks.
- *
- * Training follows the exact gradient of the loss it reports (plus the L2 penalty on the weights,
- * when there is one). The steering rows (validation rows, or the training rows when there are
- * none) decide when a training stops: when their loss has not really improved for `patience`
- * epochs, when the optimiser has converged, or at max-epochs. The network handed back is the one
- * with the lowest steering loss among those that met the target on the steering rows (or, when
- * none did, among all checked): early stopping with the best weights restored. The judging rows
- * are never read here.
- */
-
-
-
-
-
-
-
-
-
-/**
- * A steering loss counts as improved when it falls by more than this fraction of the last
- * improved value; smaller gains do not reset the patience (an engineering choice, no source).
- */
-const MIN_IMPROVEMENT = 1e-3;
-/** The output head the dataset calls for. */
-function headFor(data) {
-    if (data.task === 'regression')
-        return 'linear';
-    return data.outputs === 1 ? 'logistic' : 'softmax';
-}
-class NetworkTrainer {
-    data;
-    options;
-    kernel;
-    shape;
-    layout;
-    params;
-    grad;
-    /** The best network checked so far, and the best that met the target (see the header). */
-    best;
-    bestMet;
-    stepper;
-    init;
-    stall;
-    head;
-    logitsTrain;
-    logitsSteer;
-    batch;
-    batchStart = 0;
-    batchEnd = 0;
-    /** The loss over all training rows with the weight penalty, and its gradient: what the optimiser minimises. */
-    objective;
-    /** The same over rows [batchStart, batchEnd) (mini-batch Adam). */
-    batchObjective;
-    constructor(data, width, options, rng, kernel, settings) {
-        this.data = data;
-        this.options = options;
-        this.kernel = kernel;
-        if (!Number.isInteger(width) || width < 0)
-            throw new RangeError(`width must be a whole number >= 0, got ${width}`);
-        if (data.trainRows < 1)
-            throw new RangeError('the training set has no rows');
-        if ((data.task === 'classification') !== (options.target.metric === 'accuracy')) {
-            throw new RangeError(`target metric ${options.target.metric} does not fit a ${data.task} task`);
-        }
-        if (!(options.checkEvery >= 1))
-            throw new RangeError(`checkEvery must be >= 1, got ${options.checkEvery}`);
-        if (!(options.weightDecay >= 0))
-            throw new RangeError(`weightDecay must be >= 0, got ${options.weightDecay}`);
-        this.shape = {
-            inputs: data.inputs,
-            width,
-            outputs: data.outputs,
-            activation: options.activation,
-            head: headFor(data),
-        };
-        this.layout = layoutOf(this.shape);
-        this.head = reference_headCode(this.shape.head);
-        this.init = options.init ?? defaultInit(options.activation);
-        this.params = initParams(this.shape, this.init, rng);
-        this.grad = new Float64Array(this.params.length);
-        this.best = new Float64Array(this.params.length);
-        this.bestMet = new Float64Array(this.params.length);
-        this.stepper = makeStepper(options.optimizer, this.params.length, settings);
-        this.stall = options.stall ? new StallDetector(options.stall.window, options.stall.threshold) : null;
-        this.logitsTrain = new Float64Array(data.trainRows * data.outputs);
-        const steerRows = data.validationRows > 0 ? data.validationRows : data.trainRows;
-        this.logitsSteer = new Float64Array(steerRows * data.outputs);
-        const b = settings.batchSize ?? 0;
-        this.batch = options.optimizer === 'adam' && b > 0 && b < data.trainRows ? b : data.trainRows;
-        this.objective = (x, g) => this.penalised(x, g, this.lossOver(x, g, 0, this.data.trainRows));
-        this.batchObjective = (x, g) => this.penalised(x, g, this.lossOver(x, g, this.batchStart, this.batchEnd));
-    }
-    get network() {
-        return network_describe(this.shape);
-    }
-    /** The live parameter vector (layout in kernel/layout.ts); for tests and benchmarks. */
-    get parameters() {
-        return this.params;
-    }
-    lossOver(x, g, start, end) {
-        return this.kernel.lossAndGradient(this.shape, x, this.data.xTrain, this.data.yTrain, start, end, g);
-    }
-    /** Adds (λ/2)·Σw² over the weights (not the biases) to `loss` and λw to their gradient. */
-    penalised(x, g, loss) {
-        const lambda = this.options.weightDecay;
-        if (lambda === 0)
-            return loss;
-        const { w1, b1, w2, b2 } = this.layout;
-        let squares = 0;
-        for (let q = w1; q < b1; q++) {
-            squares += x[q] * x[q];
-            g[q] += lambda * x[q];
-        }
-        for (let q = w2; q < b2; q++) {
-            squares += x[q] * x[q];
-            g[q] += lambda * x[q];
-        }
-        return loss + 0.5 * lambda * squares;
-    }
-    /** One epoch: a full-batch optimiser step, or one pass of mini-batch Adam steps. */
-    epoch(budget) {
-        const N = this.data.trainRows;
-        if (this.batch >= N)
-            return this.stepper.step(this.params, this.objective, this.grad, budget, N);
-        let loss = 0;
-        for (let start = 0; start < N; start += this.batch) {
-            this.batchStart = start;
-            this.batchEnd = Math.min(N, start + this.batch);
-            const part = this.stepper.step(this.params, this.batchObjective, this.grad, 1, this.batchEnd - start).loss;
-            loss += part;
-            if (!Number.isFinite(part))
-                break;
-        }
-        return { evaluations: 1, loss, status: 'progress' };
-    }
-    run(maxEpochs) {
-        const { options } = this;
-        let stop = 'max-epochs';
-        let epochs = 0;
-        let nextCheck = options.checkEvery;
-        let reference = Infinity;
-        let lastImprovement = 0;
-        let bestLoss = Infinity;
-        let bestMetLoss = Infinity;
-        this.stall?.reset();
-        while (epochs < maxEpochs) {
-            const step = this.epoch(maxEpochs - epochs);
-            epochs += step.evaluations;
-            if (!Number.isFinite(step.loss)) {
-                stop = 'diverged';
-                break;
-            }
-            const stalled = this.stall !== null && this.stall.record(step.loss / this.data.trainRows);
-            const ended = step.status !== 'progress';
-            if (epochs < nextCheck && epochs < maxEpochs && !ended && !stalled)
-                continue;
-            nextCheck = epochs + options.checkEvery;
-            if (options.interrupted?.() === true) {
-                stop = 'interrupted';
-                break;
-            }
-            const steer = this.steeringMetrics();
-            const metric = metricValue(steer, options.target.metric);
-            if (!Number.isFinite(steer.loss) || !Number.isFinite(metric)) {
-                stop = 'diverged';
-                break;
-            }
-            if (steer.loss < reference * (1 - MIN_IMPROVEMENT)) {
-                reference = steer.loss;
-                lastImprovement = epochs;
-            }
-            if (steer.loss < bestLoss) {
-                bestLoss = steer.loss;
-                this.best.set(this.params);
-            }
-            if (meetsThreshold(metric, options.target) && steer.loss < bestMetLoss) {
-                bestMetLoss = steer.loss;
-                this.bestMet.set(this.params);
-            }
-            if (ended || stalled || epochs - lastImprovement >= options.patience) {
-                stop = 'stalled';
-                break;
-            }
-        }
-        if (stop !== 'diverged' && stop !== 'interrupted') {
-            if (bestMetLoss < Infinity)
-                this.params.set(this.bestMet);
-            else if (bestLoss < Infinity)
-                this.params.set(this.best);
-        }
-        const rec = this.evaluate();
-        if (stop === 'diverged' || stop === 'interrupted')
-            return { ...rec, epochs, stop };
-        if (!Number.isFinite(rec.trainLoss))
-            return { ...rec, epochs, stop: 'diverged' };
-        return { ...rec, epochs, stop: rec.stop === 'reached' ? 'reached' : stop };
-    }
-    trainMetrics() {
-        const { data, shape } = this;
-        this.kernel.forward(shape, this.params, data.xTrain, data.trainRows, this.logitsTrain, null);
-        return computeMetrics(this.head, shape.outputs, this.logitsTrain, data.yTrain, data.trainRows, data.encoding.target.std);
-    }
-    /** Metrics on the steering rows: the validation rows, or the training rows when there are none. */
-    steeringMetrics() {
-        const { data, shape } = this;
-        if (data.validationRows === 0)
-            return this.trainMetrics();
-        this.kernel.forward(shape, this.params, data.xValidation, data.validationRows, this.logitsSteer, null);
-        return computeMetrics(this.head, shape.outputs, this.logitsSteer, data.yValidation, data.validationRows, data.encoding.target.std);
-    }
-    /**
-     * One full-batch epoch: forward, backward and the optimiser's step, nothing else (no check).
-     * Returns the loss; a non-finite loss leaves the weights untouched. For the engine benchmark.
-     */
-    fullBatchEpoch() {
-        return this.stepper.step(this.params, this.objective, this.grad, 1, this.data.trainRows).loss;
-    }
-    /** Metrics on the training rows and on the steering rows. */
-    metrics() {
-        return { train: this.trainMetrics(), validation: this.steeringMetrics() };
-    }
-    evaluate() {
-        const { train, validation } = this.metrics();
-        const metric = this.options.target.metric;
-        const trainMetric = metricValue(train, metric);
-        const steeringMetric = metricValue(validation, metric);
-        let stop = 'max-epochs';
-        if (!Number.isFinite(train.loss))
-            stop = 'diverged';
-        else if (meetsThreshold(steeringMetric, this.options.target))
-            stop = 'reached';
-        return { epochs: 0, stop, trainLoss: train.loss, trainMetric, steeringMetric };
-    }
-    addNeuron(rng) {
-        this.replace(withNeuronAdded(this.shape, this.params, this.init, rng));
-    }
-    removeNeuron(j) {
-        this.replace(withNeuronRemoved(this.kernel, this.shape, this.params, this.data, j));
-        // The output biases absorbed the removed neuron: what the optimiser learnt about them is stale.
-        this.stepper.resetRange(this.layout.b2, this.layout.b2 + this.shape.outputs);
-    }
-    replace(r) {
-        this.shape = r.shape;
-        this.layout = layoutOf(r.shape);
-        this.params = r.params;
-        this.grad = new Float64Array(r.params.length);
-        this.best = new Float64Array(r.params.length);
-        this.bestMet = new Float64Array(r.params.length);
-        this.stepper.resize(r.map, r.params.length);
-        this.stall?.reset();
-    }
-    saliency() {
-        return saliencies(this.kernel, this.shape, this.params, this.data, this.head);
-    }
-    snapshot() {
-        return toJson(this.shape, this.params);
-    }
-    /** Takes over the weights of `net` (same shape); optimiser and stall state stay as new. */
-    load(net) {
-        const { shape, params } = network_fromJson(net);
-        const s = this.shape;
-        const same = ['inputs', 'width', 'outputs', 'head', 'activation'].every((k) => shape[k] === s[k]);
-        if (!same) {
-            throw new RangeError(`network ${shape.inputs}-${shape.width}-${shape.outputs} (${shape.activation}, ${shape.head}) does not fit ${s.inputs}-${s.width}-${s.outputs} (${s.activation}, ${s.head})`);
-        }
-        this.params.set(params);
-    }
-}
-function settingsOf(options, extras) {
-    return { ...(options.optimizerSettings ?? {}), ...(extras.optimizerSettings ?? {}) };
-}
-/**
- * A trainer that continues from an existing network: its weights, fresh optimiser and stall
- * state. Deterministic: the same arguments give the same later runs.
- */
-function trainerFromNetwork(data, net, options, rng, extras = {}) {
-    const trainer = new NetworkTrainer(data, net.width, { ...options, activation: net.activation }, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
-    trainer.load(net);
-    return trainer;
-}
-function createTrainer(data, width, options, rng, extras = {}) {
-    return new NetworkTrainer(data, width, options, rng, extras.kernel ?? defaultKernel(), settingsOf(options, extras));
-}
-
-;// CONCATENATED MODULE: ./src/nn/predict.ts
-
-
-
-
-/** Run a network on encoded rows; returns rows * outputs head outputs (probabilities or standardised values). */
-function predict_predict(net, x, rows) {
-    const { shape, params } = fromJson(net);
-    const K = shape.outputs;
-    const logits = new Float64Array(rows * K);
-    referenceForward(shape, params, x, rows, logits, null, makeScratch(shape.width, K));
-    const out = new Float64Array(rows * K);
-    const head = headCode(shape.head);
-    for (let p = 0; p < rows; p++)
-        headOutputs(head, K, logits, p * K, out, p * K);
-    return out;
-}
-/** The network's `metric` on encoded rows (regression errors in the target's units, via its std). */
-function metricOn(net, x, y, rows, metric, targetStd) {
-    if (rows === 0)
-        return Number.NaN;
-    const { shape, params } = network_fromJson(net);
-    const logits = new Float64Array(rows * shape.outputs);
-    defaultKernel().forward(shape, params, x, rows, logits, null);
-    return targetMetric(metric, reference_headCode(shape.head), shape.outputs, logits, y, rows, targetStd);
-}
-
-;// CONCATENATED MODULE: ./src/nn/index.ts
-
-
-
-;// CONCATENATED MODULE: ./src/model/predict.ts
-/** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
-
-
-/** (x − mean) / std, with a constant training column (std 0) only centred. */
-function standardise(x, mean, std) {
-    return std > 0 ? (x - mean) / std : x - mean;
-}
-/** Encode raw rows the way the training data was encoded. An unseen category encodes as all zeros. */
-function encodeRows(model, rows) {
-    const inputs = model.network.inputs;
-    const x = new Float64Array(rows.length * inputs);
-    rows.forEach((row, r) => {
-        let c = r * inputs;
-        for (const f of model.encoding.features) {
-            const cell = row[f.name];
-            if (cell === undefined)
-                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
-            const text = cell.trim();
-            if (f.kind === 'numeric') {
-                const v = text === '' ? Number.NaN : Number(text);
-                if (!Number.isFinite(v)) {
-                    throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
-                }
-                x[c++] = standardise(v, f.mean, f.std);
-            }
-            else {
-                const k = f.categories.indexOf(text);
-                for (let j = 0; j < f.categories.length; j++)
-                    x[c + j] = j === k ? 1 : 0;
-                c += f.categories.length;
-            }
-        }
-    });
-    return x;
-}
-/** Head outputs for each row: class probabilities, or the value in the target's units. */
-function predictRows(model, rows) {
-    const out = predict(model.network, encodeRows(model, rows), rows.length);
-    const K = model.network.outputs;
-    const t = model.encoding.target;
-    const preds = [];
-    for (let p = 0; p < rows.length; p++) {
-        if (model.task === 'regression') {
-            preds.push({ value: out[p] * t.std + t.mean });
-            continue;
-        }
-        const classes = t.classes ?? [];
-        const probabilities = {};
-        let best = 0;
-        if (K === 1) {
-            // One logistic output: the probability of the second class.
-            probabilities[classes[0]] = 1 - out[p];
-            probabilities[classes[1]] = out[p];
-            best = out[p] > 0.5 ? 1 : 0;
-        }
-        else {
-            for (let k = 0; k < K; k++) {
-                probabilities[classes[k]] = out[p * K + k];
-                if (out[p * K + k] > out[p * K + best])
-                    best = k;
-            }
-        }
-        preds.push({ label: classes[best], probabilities });
-    }
-    return preds;
-}
-/** The model's target metric on rows that carry the target column. */
-function scoreRows(model, rows) {
-    const preds = predictRows(model, rows);
-    const name = model.encoding.target.name;
-    const truth = rows.map((row, r) => {
-        const cell = row[name];
-        if (cell === undefined)
-            throw new UserError(`row ${r + 1}: target column "${name}" is missing`, { key: name });
-        return cell.trim();
-    });
-    const metric = model.target.metric;
-    if (metric === 'accuracy') {
-        let correct = 0;
-        preds.forEach((p, r) => {
-            if ('label' in p && p.label === truth[r])
-                correct++;
-        });
-        return correct / rows.length;
-    }
-    let se = 0;
-    let ae = 0;
-    let maxAe = 0;
-    preds.forEach((p, r) => {
-        const d = Math.abs(('value' in p ? p.value : Number.NaN) - Number(truth[r]));
-        se += d * d;
-        ae += d;
-        if (d > maxAe || d !== d)
-            maxAe = d;
-    });
-    if (metric === 'rmse')
-        return Math.sqrt(se / rows.length);
-    return metric === 'mae' ? ae / rows.length : maxAe;
-}
-
-;// CONCATENATED MODULE: ./src/model/index.ts
-/** Witness export: the winning network as a JSON document anyone can run on raw rows. */
-
-
-
 ;// CONCATENATED MODULE: ./src/report/assemble.ts
+
 
 
 /** The report with the data stage's facts; verdict and search come later. */
@@ -18362,14 +18933,18 @@ function dataStageReport(config, data, timing) {
                     .map((label) => ({ label, count: classes[label] })),
         },
         search: null,
+        device: null,
         changes: null,
         timing: { ...timing },
     };
 }
 /** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-function searchStageReport(report, search, required) {
+function searchStageReport(report, search, required, context) {
+    const { encoding } = context;
+    const costOf = (width) => deviceCost(costShapeOf({ inputs: report.data.inputs, width, outputs: report.data.outputs }, encoding));
     return {
         ...report,
+        device: deviceOf(search, context, report.data.inputs, report.data.outputs),
         reasons: [],
         width: search.width,
         metric: { ...report.metric, value: search.metric },
@@ -18377,7 +18952,7 @@ function searchStageReport(report, search, required) {
             outcome: search.outcome,
             grownWidth: search.grownWidth,
             required,
-            widths: search.widths,
+            widths: search.widths.map((w) => ({ ...w, cost: costOf(w.width) })),
             pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
             trainings: search.trainings,
             notes: search.notes,
@@ -18403,6 +18978,34 @@ function witnessOf(search) {
         train: w.train,
         met: w.met,
         adequate: search.width !== null,
+    };
+}
+function deviceOf(search, context, inputs, outputs) {
+    const w = search.witness;
+    const a = search.appraisal;
+    if (w === null || a === null)
+        return null;
+    const width = w.network.width;
+    const labels = context.encoding.target.classes;
+    const floors = context.target.recallFloors ?? null;
+    const finite = (v) => (v === undefined || !Number.isFinite(v) ? null : v);
+    return {
+        precision: context.target.precision ?? 'float32',
+        inputs,
+        width,
+        outputs,
+        cost: deviceCost(costShapeOf({ inputs, width, outputs }, context.encoding)),
+        metric: { float32: a.float32, int8: a.int8 },
+        classes: labels === null || a.confusion === null
+            ? null
+            : labels.map((label, c) => ({
+                label,
+                rows: a.confusion[c].reduce((s, v) => s + v, 0),
+                recall: finite(a.recall?.[c]),
+                precision: finite(a.precision?.[c]),
+                floor: floors === null || floors[c] <= 0 ? null : floors[c],
+            })),
+        confusion: a.confusion,
     };
 }
 
@@ -19256,12 +19859,70 @@ function mergeOutcomes(plan, results) {
     return decideGrowth(plan, (t) => byKey.get(taskKey(t)));
 }
 
+;// CONCATENATED MODULE: ./src/search/classes.ts
+/** counts[t][p]: rows of true class t predicted as p. */
+function confusion(predicted, truth, classes) {
+    const counts = Array.from({ length: classes }, () => new Array(classes).fill(0));
+    for (let r = 0; r < truth.length; r++)
+        counts[truth[r]][predicted[r]]++;
+    return counts;
+}
+/** Recall per class: correct / rows of that class; NaN for a class with no rows. */
+function recalls(counts) {
+    return counts.map((row, c) => {
+        const n = row.reduce((s, v) => s + v, 0);
+        return n === 0 ? Number.NaN : row[c] / n;
+    });
+}
+/** Precision per class: correct / rows predicted as that class; NaN when none was. */
+function precisions(counts) {
+    return counts.map((_, c) => {
+        const n = counts.reduce((s, row) => s + row[c], 0);
+        return n === 0 ? Number.NaN : counts[c][c] / n;
+    });
+}
+/** Every class with a floor above 0 reaches it; a class absent from the rows cannot be checked and passes. */
+function recallsHold(counts, floors) {
+    const r = recalls(counts);
+    return floors.every((min, c) => min <= 0 || Number.isNaN(r[c]) || r[c] >= min);
+}
+/** The target metric from predictions: class indices (accuracy) or values in the target's units (errors). */
+function metricOfPredictions(metric, predicted, truth) {
+    const n = truth.length;
+    if (n === 0)
+        return Number.NaN;
+    if (metric === 'accuracy') {
+        let correct = 0;
+        for (let r = 0; r < n; r++)
+            if (predicted[r] === truth[r])
+                correct++;
+        return correct / n;
+    }
+    let se = 0;
+    let ae = 0;
+    let max = 0;
+    for (let r = 0; r < n; r++) {
+        const d = Math.abs(predicted[r] - truth[r]);
+        se += d * d;
+        ae += d;
+        if (d > max || d !== d)
+            max = d;
+    }
+    return metric === 'rmse' ? Math.sqrt(se / n) : metric === 'mae' ? ae / n : max;
+}
+
 ;// CONCATENATED MODULE: ./src/search/judge.ts
 /**
  * Whether a trained network meets the target: decided on the judging rows alone, which no
  * training ever reads (they do not stop a training, pick a restart or accept a pruning step).
  * Without judging rows the validation rows judge, and without those the training rows.
+ *
+ * A network meets the target when, in the form target.precision names (float32, or the int8
+ * form the exported C runs, quantised as src/device/quantize.ts does), its metric meets the
+ * threshold on those rows and every class with a recall floor (target.min-recall) reaches it.
  */
+
+
 
 
 function judgingRowsOf(data, folded) {
@@ -19271,25 +19932,64 @@ function judgingRowsOf(data, folded) {
         return { on: 'validation', rows: data.validationRows, folded };
     return { on: 'training', rows: data.trainRows, folded };
 }
-/** The judged metric of `net`. */
-function judgedMetric(data, net, target) {
-    const std = data.encoding.target.std;
+/** The encoded rows that judge, with their targets (classes, or standardised values). */
+function judgedRows(data) {
     if (data.judgingRows > 0)
-        return metricOn(net, data.xJudging, data.yJudging, data.judgingRows, target.metric, std);
+        return { x: data.xJudging, y: data.yJudging, rows: data.judgingRows };
     if (data.validationRows > 0)
-        return metricOn(net, data.xValidation, data.yValidation, data.validationRows, target.metric, std);
-    return metricOn(net, data.xTrain, data.yTrain, data.trainRows, target.metric, std);
+        return { x: data.xValidation, y: data.yValidation, rows: data.validationRows };
+    return { x: data.xTrain, y: data.yTrain, rows: data.trainRows };
 }
-/** The record of a finished training, with the judged metric added. */
+/** Everything the screens show about a network on the rows that judge. `withInt8` computes the int8 form even when float32 decides. */
+function appraise(data, net, target, withInt8) {
+    const { x, y, rows } = judgedRows(data);
+    const std = data.encoding.target.std;
+    const float32 = metricOn(net, x, y, rows, target.metric, std);
+    const int8Decides = target.precision === 'int8';
+    let int8 = null;
+    let int8Classes = null;
+    if ((withInt8 || int8Decides) && data.rawJudged !== undefined) {
+        const q = quantizeNetwork(net, data.encoding, { x: data.xTrain, rows: data.trainRows });
+        const out = int8Forward(q, data.rawJudged, rows);
+        if (data.task === 'classification') {
+            int8Classes = out.classes;
+            int8 = metricOfPredictions(target.metric, out.classes, y);
+        }
+        else {
+            const t = data.encoding.target;
+            int8 = metricOfPredictions(target.metric, out.outputs, Float64Array.from(y, (v) => v * t.std + t.mean));
+        }
+    }
+    if (int8Decides && int8 === null)
+        throw new Error('target.precision is int8, but the dataset has no raw rows to run the int8 form on');
+    const deciding = int8Decides ? int8 : float32;
+    let counts = null;
+    if (data.task === 'classification') {
+        const predicted = int8Decides ? int8Classes : classesOn(net, x, rows);
+        counts = confusion(predicted, y, data.encoding.target.classes?.length ?? 2);
+    }
+    const floors = target.recallFloors ?? null;
+    const recallOk = floors === null || counts === null || recallsHold(counts, floors);
+    return {
+        float32,
+        int8,
+        confusion: counts,
+        recall: counts === null ? null : recalls(counts),
+        precision: counts === null ? null : precisions(counts),
+        deciding,
+        met: meetsThreshold(deciding, target) && recallOk,
+    };
+}
+/** The record of a finished training, with its judgement on the rows that judge added. */
 function judge(data, net, rec, target) {
     const diverged = rec.stop === 'diverged' || net === null;
-    const judged = diverged ? Number.NaN : judgedMetric(data, net, target);
+    const a = diverged ? null : appraise(data, net, target, false);
     return {
         train: rec.trainMetric,
         steering: rec.steeringMetric,
-        judged,
+        judged: a === null ? Number.NaN : a.deciding,
         reached: !diverged && meetsThreshold(rec.steeringMetric, target),
-        met: !diverged && meetsThreshold(judged, target),
+        met: a !== null && a.met,
     };
 }
 
@@ -19699,6 +20399,7 @@ function wilsonInterval(successes, trials, z = Z95) {
  */
 
 
+/** @testOnly */
 function median(values) {
     if (values.length === 0)
         return null;
@@ -19940,7 +20641,7 @@ async function runSearch(data, search, target, options = {}) {
             growthSeconds: (growthEnd - t0) / 1000,
             pruneSeconds: (end - growthEnd) / 1000,
         });
-        const base = { grownWidth: null, metric: null, witness: null, pruning: [], judging };
+        const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
         const decision = grown.decision;
         if (decision.kind === 'need') {
             return {
@@ -19983,6 +20684,7 @@ async function runSearch(data, search, target, options = {}) {
                 grownWidth: decision.grownWidth,
                 width: null,
                 witness: t.witness,
+                appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
                 widths: t.widths,
                 pruning: steps,
                 trainings,
@@ -19997,6 +20699,7 @@ async function runSearch(data, search, target, options = {}) {
             grownWidth: decision.grownWidth,
             metric: found ? t.witness.judged : null,
             witness: t.witness,
+            appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
             widths: t.widths,
             pruning: steps,
             trainings,
@@ -20075,6 +20778,7 @@ function runSearchWorker() {
 
 
 
+
 async function runJob(options) {
     const timing = {};
     const loaded = await loadConfig(options.configPath, options.root);
@@ -20090,7 +20794,7 @@ async function runJob(options) {
     // A corrupt baseline is the user's to fix before minutes of search, not after.
     const previous = await readBaseline(baselinePath, baselineShown);
     const data = await timed(timing, 'loadSeconds', () => loadData(loaded));
-    const config = settleMetric(loaded, data.dataset.task);
+    const config = settleTarget(loaded, data.dataset.task, data.dataset.encoding.target.classes);
     options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
     const search = await timed(timing, 'searchSeconds', () => runSearch(data.dataset, config.search, config.target, {
         workers: options.workers ?? null,
@@ -20100,9 +20804,11 @@ async function runJob(options) {
     }));
     timing.growthSeconds = search.timing.growthSeconds;
     timing.pruneSeconds = search.timing.pruneSeconds;
+    const cost = search.witness === null ? null : deviceCost(costShapeOf(search.witness.network, data.dataset.encoding));
     const gate = await runGateStage({
         mode: options.mode,
         result: search,
+        cost,
         loaded: data,
         config,
         baselinePath,
@@ -20114,7 +20820,10 @@ async function runJob(options) {
     });
     if (gate.notWritten !== null)
         options.log?.(`baseline not written: ${gate.notWritten}`);
-    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required), gate.outcome, gate.gate);
+    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
+        encoding: data.dataset.encoding,
+        target: config.target,
+    }), gate.outcome, gate.gate);
     let modelWritten = null;
     if (options.modelPath) {
         if (search.witness === null) {
@@ -20123,7 +20832,12 @@ async function runJob(options) {
         else {
             const backing = { on: search.judging.on, adequate: search.width !== null };
             const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
-            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration);
+            const provenance = {
+                tool: { name: 'neuron-budget', version: TOOL_VERSION },
+                data: data.fingerprint,
+                config: displayPath(config.root, config.file),
+            };
+            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration, provenance);
             await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
             modelWritten = options.modelPath;
         }
@@ -20175,6 +20889,7 @@ async function timed(timing, name, work) {
 
 
 
+
 async function main(argv) {
     const err = process.stderr;
     try {
@@ -20189,12 +20904,21 @@ async function main(argv) {
         }
         const root = process.cwd();
         const { flags } = invocation;
+        if (invocation.command === 'export') {
+            err.write(`${await runExport(root, invocation.args, flags)}\n`);
+            return EXIT.ok;
+        }
+        if (invocation.command === 'predict') {
+            const said = await runPredict(root, invocation.args, flags, (text) => process.stdout.write(text));
+            err.write(`${said}\n`);
+            return EXIT.ok;
+        }
         const fromCwd = (p) => (p === undefined ? null : (0,external_node_path_namespaceObject.resolve)(root, p));
         const progress = progressPrinter(err);
         const options = {
             configPath: (0,external_node_path_namespaceObject.resolve)(root, flags.config ?? DEFAULT_CONFIG),
             root,
-            mode: invocation.command,
+            mode: invocation.command === 'baseline' ? 'baseline' : 'check',
             baselinePath: fromCwd(flags.baseline),
             reportPath: fromCwd(flags.report),
             modelPath: fromCwd(flags.model),
