@@ -4,6 +4,8 @@
  * with at most data.max-categories distinct values.
  */
 import type { Config } from '../config/types.js';
+import { quote } from '../common/escape.js';
+import { formatCount } from '../common/format.js';
 import { nearest } from '../common/suggest.js';
 import type { ColumnStore } from './column-store.js';
 import type { ReadPlan } from './read-csv.js';
@@ -11,6 +13,9 @@ import { columnLabel, ConfigKeyProblem, dataError, shownValue, type DataFile } f
 
 /** Most classes a classification target may have (a practical cap, no source). */
 export const MAX_CLASSES = 1000;
+
+/** Column names listed in a message before the rest are only counted. */
+const NAMES_LISTED = 30;
 
 export interface ChosenColumns {
   plan: ReadPlan;
@@ -27,11 +32,11 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
     const i = index.get(name);
     if (i !== undefined) return i;
     const guess = nearest(name, header);
-    const hint = guess === null ? '.' : ` (did you mean "${guess}"?).`;
+    const hint = guess === null ? '.' : ` (did you mean ${quote(guess)}?).`;
     throw new ConfigKeyProblem(
       key,
-      `expected a column of ${file.shown}, found "${name}", which its header (line 1) does not have${hint} ` +
-        `The columns are: ${header.join(', ')}`,
+      `expected a column of ${file.shown}, found ${quote(name)}, which its header (line 1) does not have${hint} ` +
+        `The columns are: ${listNames(header)}`,
     );
   };
   const target = find(data.target, 'data.target');
@@ -39,7 +44,7 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
   for (const name of data.ignore) {
     const i = find(name, 'data.ignore');
     if (i === target) {
-      throw new ConfigKeyProblem('data.ignore', `lists "${name}", which is the target column (data.target)`);
+      throw new ConfigKeyProblem('data.ignore', `lists ${quote(name)}, which is the target column (data.target)`);
     }
     ignored.add(i);
   }
@@ -51,13 +56,13 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
     for (const name of data.features) {
       const i = find(name, 'data.features');
       if (i === target) {
-        throw new ConfigKeyProblem('data.features', `lists "${name}", which is the target column (data.target)`);
+        throw new ConfigKeyProblem('data.features', `lists ${quote(name)}, which is the target column (data.target)`);
       }
       if (ignored.has(i)) {
-        throw new ConfigKeyProblem('data.features', `lists "${name}", which data.ignore also lists`);
+        throw new ConfigKeyProblem('data.features', `lists ${quote(name)}, which data.ignore also lists`);
       }
       if (features.includes(i)) {
-        throw new ConfigKeyProblem('data.features', `lists "${name}" twice`);
+        throw new ConfigKeyProblem('data.features', `lists ${quote(name)} twice`);
       }
       features.push(i);
     }
@@ -65,7 +70,7 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
   if (features.length === 0) {
     throw new ConfigKeyProblem(
       data.features === null ? 'data.ignore' : 'data.features',
-      `expected at least one feature column besides the target "${data.target}", found none left in ${file.shown}`,
+      `expected at least one feature column besides the target ${quote(data.target)}, found none left in ${file.shown}`,
     );
   }
   const columns = features.map((field) => ({ field, distinctLimit: data.maxCategories }));
@@ -158,4 +163,11 @@ export function compareText(a: string, b: string): number {
 /** The feature column as numeric or categorical, by the rule at the top of this file. */
 export function featureColumn(store: ColumnStore, file: DataFile, cap: number): TypedColumn {
   return looksNumeric(store) ? numericColumn(store, file, '') : categoricalColumn(store, file, cap);
+}
+
+/** The header's names for a message: quoted, clipped, and at most NAMES_LISTED of them. */
+function listNames(header: string[]): string {
+  const shown = header.slice(0, NAMES_LISTED).map((name) => quote(name, 40));
+  const more = header.length - shown.length;
+  return more > 0 ? `${shown.join(', ')} and ${formatCount(more)} more` : shown.join(', ');
 }

@@ -10,6 +10,7 @@ import { parse } from 'csv-parse';
 import { ColumnStore } from './column-store.js';
 import { NotTextError, TextCheck } from './text-check.js';
 import { columnLabel, dataError, shownValue, type DataFile } from './where.js';
+import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 
 export interface ColumnRequest {
@@ -191,7 +192,7 @@ function checkHeader(file: DataFile, record: string[], line: number): string[] {
         file,
         line,
         i + 1,
-        `column ${i + 1} is named "${name}" like column ${first + 1}; column names must be unique`,
+        `column ${i + 1} is named ${quote(name, 60)} like column ${first + 1}; column names must be unique`,
       );
     }
     seen.set(name, i);
@@ -207,7 +208,7 @@ function fieldCountError(file: DataFile, line: number, record: string[], header:
       line,
       header.length + 1,
       `${expected}, found ${record.length}: an extra field ${shownValue(record[header.length])} ` +
-        `after the last column "${header[header.length - 1]}" (an unquoted delimiter inside a value?)`,
+        `after the last column ${quote(header[header.length - 1], 60)} (an unquoted delimiter inside a value?)`,
     );
   }
   const next = record.length;
@@ -235,7 +236,8 @@ function explain(
   if (error instanceof UserError) return error;
   if (error instanceof NotTextError) {
     const w = error.where;
-    const where = columnLabel(w.column, w.header[w.column - 1]);
+    // The parser's header when it has read it; the byte check runs ahead of the parser.
+    const where = columnLabel(w.column, (header ?? w.header)[w.column - 1]);
     const what =
       w.why === 'nul'
         ? 'a NUL byte (0x00), so this is not a text file; a file saved as UTF-16 or a spreadsheet looks like this'

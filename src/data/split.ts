@@ -3,6 +3,7 @@
  * round(rows × validation) of its rows (at least one) to validation, chosen by a seeded
  * Fisher–Yates shuffle. Both parts keep file order.
  */
+import { quote } from '../common/escape.js';
 import { type UserError } from '../common/errors.js';
 import { shuffle, xoshiroFromSeed } from '../common/random.js';
 import { columnLabel, dataError, type DataFile } from './where.js';
@@ -70,7 +71,7 @@ function tooFew(
   const what =
     target.classes === null
       ? `the data have ${rows} rows`
-      : `class "${target.classes[group]}" has ${rows} row${rows === 1 ? '' : 's'}`;
+      : `class ${quote(target.classes[group])} has ${rows} row${rows === 1 ? '' : 's'}`;
   const need =
     validation > 0
       ? target.classes === null

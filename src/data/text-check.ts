@@ -12,7 +12,7 @@ export interface BadBytes {
   /** The offending bytes, as hex (`0xff`, `0x00`). */
   bytes: string;
   why: 'nul' | 'invalid' | 'truncated';
-  /** Header names seen on line 1 (naively split), for naming the column. */
+  /** Header names of the first record (quote-aware, but simply split), for naming the column. */
   header: string[];
 }
 
@@ -72,6 +72,7 @@ export class TextCheck extends Transform {
       const b = chunk[i];
       if (this.need > 0) {
         if (b < this.low || b > this.high) return this.where('invalid', hex(b));
+        if (this.header === null) this.keepHeaderByte(b);
         this.need--;
         this.low = 0x80;
         this.high = 0xbf;
@@ -79,7 +80,7 @@ export class TextCheck extends Transform {
       }
       if (b < 0x80) {
         if (b === 0) return this.where('nul', '0x00');
-        if (this.line === 1 && this.header === null) this.keepHeaderByte(b);
+        if (this.header === null) this.keepHeaderByte(b);
         if (b === NEWLINE) {
           this.line++;
           if (!this.inQuotes) this.field = 0;
@@ -90,7 +91,7 @@ export class TextCheck extends Transform {
         }
         continue;
       }
-      if (this.line === 1 && this.header === null) this.keepHeaderByte(b);
+      if (this.header === null) this.keepHeaderByte(b);
       // Lead bytes and the ranges their first continuation byte may take (no overlongs,
       // no surrogates, nothing above U+10FFFF): the well-formed table of the Unicode standard.
       if (b >= 0xc2 && b <= 0xdf) this.expect(1, 0x80, 0xbf);
@@ -111,8 +112,9 @@ export class TextCheck extends Transform {
     this.high = high;
   }
 
+  /** Keeps the first record's bytes; called before `inQuotes` follows this byte. */
   private keepHeaderByte(b: number): void {
-    if (b === NEWLINE) {
+    if (b === NEWLINE && !this.inQuotes) {
       this.header = splitHeader(Buffer.from(this.headerBytes).toString('utf8'), this.delimiter);
       this.headerBytes = [];
     } else if (this.headerBytes.length < HEADER_BYTES_KEPT) {
@@ -129,11 +131,25 @@ function hex(b: number): string {
   return `0x${b.toString(16).padStart(2, '0')}`;
 }
 
-/** Good enough to name a column in a message; the CSV parser does the real work. */
+/** Good enough to name a column in a message (quoted names may hold delimiters and line breaks); the CSV parser does the real work. */
 function splitHeader(text: string, delimiter: string): string[] {
-  return text
-    .replace(/^\uFEFF/, '')
-    .replace(/\r$/, '')
-    .split(delimiter)
-    .map((s) => s.trim().replace(/^"(.*)"$/, '$1'));
+  const names: string[] = [];
+  let name = '';
+  let quoted = false;
+  const line = text.replace(/^\uFEFF/, '').replace(/\r$/, '');
+  for (let i = 0; i < line.length; i++) {
+    const ch = line[i];
+    if (ch === '"') {
+      if (quoted && line[i + 1] === '"') {
+        name += '"';
+        i++;
+      } else quoted = !quoted;
+    } else if (!quoted && line.startsWith(delimiter, i)) {
+      names.push(name.trim());
+      name = '';
+      i += delimiter.length - 1;
+    } else name += ch;
+  }
+  names.push(name.trim());
+  return names;
 }
