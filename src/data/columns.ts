@@ -9,6 +9,7 @@ import { formatCount } from '../common/format.js';
 import { nearest } from '../common/suggest.js';
 import type { ColumnStore } from './column-store.js';
 import type { ReadPlan } from './read-csv.js';
+import { MAX_MAGNITUDE } from './numbers.js';
 import { columnLabel, ConfigKeyProblem, dataError, shownValue, type DataFile } from './where.js';
 
 /** Most classes a classification target may have (a practical cap, no source). */
@@ -108,7 +109,8 @@ export function numericColumn(store: ColumnStore, file: DataFile, role: string):
   const label = `${columnLabel(store.column, store.name)}${role}`;
   if (odd !== null && (text === null || odd.line <= text.line)) {
     const why = odd.overflow
-      ? 'a number too large for a 64-bit float'
+      ? `a number too large: cells may hold numbers from -${MAX_MAGNITUDE_SHOWN} to ${MAX_MAGNITUDE_SHOWN}, the range of ` +
+        'the float32 numbers a device runs the network in (check the unit or the decimal point)'
       : 'a value that is not a finite number (NaN and Infinity are not measurements; leave the cell empty if it is missing)';
     throw dataError(
       file,
@@ -128,6 +130,9 @@ export function numericColumn(store: ColumnStore, file: DataFile, role: string):
   }
   return { kind: 'numeric', name: store.name, column: store.column, values: store.numbers.subarray(0, store.length) };
 }
+
+/** MAX_MAGNITUDE as a message shows it. */
+const MAX_MAGNITUDE_SHOWN = MAX_MAGNITUDE.toPrecision(2).replace('e+', 'e');
 
 export function categoricalColumn(store: ColumnStore, file: DataFile, cap: number): CategoricalColumn {
   if (store.distinct === null || store.codes === null) {

@@ -47,8 +47,8 @@ export function dataChanges(
     const b = featuresBefore.get(name)!;
     const a = featuresAfter.get(name)!;
     if (b.kind === 'numeric' && a.kind === 'numeric') {
-      const delta = Math.abs(a.mean - b.mean);
-      const shiftInStd = b.std > 0 ? delta / b.std : null;
+      const delta = atMostMax(Math.abs(a.mean - b.mean));
+      const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
       const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
       const rangeWidened = a.min < b.min || a.max > b.max;
       if (meanMoved || rangeWidened) {
@@ -93,6 +93,14 @@ export function dataChanges(
  */
 function tableOf<T>(table: Record<string, T> | null): Map<string, T> {
   return new Map(table === null ? [] : Object.entries(table));
+}
+
+/**
+ * Two finite means read from a baseline file can differ by more than the largest float; the
+ * shift is then "at least the largest float", never Infinity (which JSON cannot hold).
+ */
+function atMostMax(x: number): number {
+  return Math.min(x, Number.MAX_VALUE);
 }
 
 /** Locale-independent order, so the summary reads the same on every machine. */

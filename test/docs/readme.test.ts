@@ -6,6 +6,7 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { CONFIG_SPEC, DERIVED, REQUIRED, type KeySpec } from '../../src/config/spec.js';
+import { MAX_MAGNITUDE } from '../../src/data/numbers.js';
 
 const README = new URL('../../README.md', import.meta.url);
 const BEGIN = '<!-- config-reference:begin (generated from src/config/spec.ts by test/docs/readme.test.ts) -->';
@@ -53,5 +54,14 @@ describe('README config reference', () => {
     expect(text).toContain('npm ci && npm test');
     const ci = readFileSync(new URL('../../.ci/run', import.meta.url), 'utf8');
     expect(ci).toMatch(/^npm test$/m);
+  });
+});
+
+describe('README limits', () => {
+  it('states the limits the code enforces', () => {
+    const text = readFileSync(README, 'utf8');
+    const limits = text.slice(text.indexOf('## Limits'), text.indexOf('\n## ', text.indexOf('## Limits') + 1));
+    const magnitude = MAX_MAGNITUDE.toPrecision(2).replace('e+', 'e');
+    expect(limits).toContain(`between -${magnitude} and ${magnitude}`);
   });
 });
