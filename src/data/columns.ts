@@ -10,7 +10,15 @@ import { nearest } from '../common/suggest.js';
 import type { ColumnStore } from './column-store.js';
 import type { ReadPlan } from './read-csv.js';
 import { MAX_MAGNITUDE } from './numbers.js';
-import { columnLabel, ConfigKeyProblem, dataError, shownValue, type DataFile } from './where.js';
+import {
+  characterCount,
+  columnLabel,
+  ConfigKeyProblem,
+  dataError,
+  MAX_NAME_LENGTH,
+  shownValue,
+  type DataFile,
+} from './where.js';
 
 /** Most classes a classification target may have (a practical cap, no source). */
 export const MAX_CLASSES = 1000;
@@ -74,6 +82,7 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
       `expected at least one feature column besides the target ${quote(data.target)}, found none left in ${file.shown}`,
     );
   }
+  for (const field of [...features, target]) checkNameLength(header[field], field + 1, file);
   const columns = features.map((field) => ({ field, distinctLimit: data.maxCategories }));
   columns.push({ field: target, distinctLimit: MAX_CLASSES });
   return { plan: { columns, target: columns.length - 1 }, features, target };
@@ -134,7 +143,16 @@ export function numericColumn(store: ColumnStore, file: DataFile, role: string):
 /** MAX_MAGNITUDE as a message shows it. */
 const MAX_MAGNITUDE_SHOWN = MAX_MAGNITUDE.toPrecision(2).replace('e+', 'e');
 
-export function categoricalColumn(store: ColumnStore, file: DataFile, cap: number): CategoricalColumn {
+/**
+ * The column's texts as categories, or the first cell that breaks them. `what` names a
+ * value in messages: "category" for a feature, "class label" for the target.
+ */
+export function categoricalColumn(
+  store: ColumnStore,
+  file: DataFile,
+  cap: number,
+  what: 'category' | 'class label' = 'category',
+): CategoricalColumn {
   if (store.distinct === null || store.codes === null) {
     const count = store.distinctCount();
     const over = store.overflow;
@@ -146,6 +164,16 @@ export function categoricalColumn(store: ColumnStore, file: DataFile, cap: numbe
       `${columnLabel(store.column, store.name)} is text with ${amount} distinct values; a categorical column ` +
         `may have at most ${cap} (data.max-categories). The value ${shownValue(over?.value ?? '')} on this line ` +
         `is number ${cap + 1}. An identifier column belongs in data.ignore.`,
+    );
+  }
+  const long = store.firstTooLong;
+  if (long !== null) {
+    throw dataError(
+      file,
+      long.line,
+      store.column,
+      `${columnLabel(store.column, store.name)}: a ${what} may have at most ${MAX_NAME_LENGTH} characters; found ` +
+        `one of ${formatCount(characterCount(long.value))} characters: ${shownValue(long.value)}`,
     );
   }
   return sortedCategories(store, store.distinct, store.codes);
@@ -168,6 +196,20 @@ export function compareText(a: string, b: string): number {
 /** The feature column as numeric or categorical, by the rule at the top of this file. */
 export function featureColumn(store: ColumnStore, file: DataFile, cap: number): TypedColumn {
   return looksNumeric(store) ? numericColumn(store, file, '') : categoricalColumn(store, file, cap);
+}
+
+/** A column the job uses must have a name of at most MAX_NAME_LENGTH characters. */
+function checkNameLength(name: string, column: number, file: DataFile): void {
+  if (name.length <= MAX_NAME_LENGTH) return;
+  const length = characterCount(name);
+  if (length <= MAX_NAME_LENGTH) return;
+  throw dataError(
+    file,
+    1,
+    column,
+    `column ${column}: a column name may have at most ${MAX_NAME_LENGTH} characters; found one of ` +
+      `${formatCount(length)} characters: ${shownValue(name)}`,
+  );
 }
 
 /** The header's names for a message: quoted, clipped, and at most NAMES_LISTED of them. */

@@ -62,7 +62,7 @@ export function targetColumn(store: ColumnStore, config: Config, file: DataFile)
     return { task, name: store.name, column: store.column, classes, indices, numericLabels: column.values };
   }
   if (store.distinct === null) throw tooManyClasses(store, file);
-  const column = categoricalColumn(store, file, MAX_CLASSES);
+  const column = categoricalColumn(store, file, MAX_CLASSES, 'class label');
   checkTwoClasses(column.categories, file, store);
   return {
     task,

@@ -32,6 +32,23 @@ export function shownValue(value: string): string {
 }
 
 /**
+ * Most characters in a column name, class label or category (documented in the README's
+ * limits). These strings are stored in the model and the baseline and shown on every screen;
+ * a longer one is a whole document pasted into a cell, not a name (a practical cap, no source).
+ */
+export const MAX_NAME_LENGTH = 256;
+
+/** Characters (code points) in `s`. */
+export function characterCount(s: string): number {
+  let n = 0;
+  for (let i = 0; i < s.length; i++) {
+    const c = s.charCodeAt(i);
+    if (c < 0xdc00 || c > 0xdfff) n++; // a low surrogate completes a character already counted
+  }
+  return n;
+}
+
+/**
  * A problem whose fix belongs in the config (a column name that is not in the header).
  * Thrown where the config position is not at hand; loadData turns it into a UserError
  * at the key's line and column in the config file.
