@@ -134,8 +134,8 @@ export class ConfigReader {
         if (tag === undefined) return;
         if (!CORE_TAGS.has(tag)) {
           const shown = tag.startsWith('tag:yaml.org,2002:') ? `!!${tag.slice('tag:yaml.org,2002:'.length)}` : tag;
-          throw this.error(
-            node,
+          throw this.errorAt(
+            this.tagOffset(node),
             null,
             `unsupported YAML tag ${quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`,
           );
@@ -153,6 +153,16 @@ export class ConfigReader {
         }
       },
     });
+  }
+
+  /** Where a tagged node's tag is written (the node's range starts after it), else the node. */
+  private tagOffset(node: Node): number {
+    const start = node.range?.[0] ?? 0;
+    let end = start;
+    while (end > 0 && /\s/.test(this.text[end - 1])) end--;
+    let tag = end;
+    while (tag > 0 && !/\s/.test(this.text[tag - 1])) tag--;
+    return this.text[tag] === '!' && tag < end ? tag : start;
   }
 
   errorAt(offset: number, key: string | null, message: string): UserError {

@@ -8,7 +8,7 @@ import { Writable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { parse } from 'csv-parse';
 import { ColumnStore } from './column-store.js';
-import { NotTextError, TextCheck } from './text-check.js';
+import { NotTextError, TextCheck, type BadBytes } from './text-check.js';
 import { columnLabel, dataError, shownValue, type DataFile } from './where.js';
 import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
@@ -220,6 +220,20 @@ function fieldCountError(file: DataFile, line: number, record: string[], header:
   );
 }
 
+/** What the bad bytes are, for the message. */
+function notText(w: BadBytes): string {
+  if (w.why === 'nul') {
+    return 'a NUL byte (0x00), so this is not a text file; a file saved as UTF-16 or a spreadsheet looks like this';
+  }
+  if (w.why === 'truncated') return `a UTF-8 character cut off by the end of the file (the bytes ${w.bytes})`;
+  const one = !w.bytes.includes(' ');
+  const bytes = one ? `the byte ${w.bytes}` : `the bytes ${w.bytes}`;
+  if (w.next === null) return `${bytes}, which is not valid UTF-8 text`;
+  // One high byte followed by plain ASCII is how é, ü or ° look in Latin-1 / Windows-1252.
+  const legacy = one && Number(w.next) < 0x80 ? '; a file saved as Latin-1 or Windows-1252 looks like this' : '';
+  return `${bytes}, which is not valid UTF-8 text (it starts a character that ${w.next} does not continue)${legacy}`;
+}
+
 interface CsvParseError extends Error {
   code?: string;
   column?: number | string | null;
@@ -236,19 +250,21 @@ function explain(
   if (error instanceof UserError) return error;
   if (error instanceof NotTextError) {
     const w = error.where;
+    if (w.why === 'cr-only') {
+      return dataError(
+        file,
+        w.line,
+        undefined,
+        'this file ends its lines with CR only (old Mac style); save it with LF or CRLF line endings',
+      );
+    }
     // The parser's header when it has read it; the byte check runs ahead of the parser.
     const where = columnLabel(w.column, (header ?? w.header)[w.column - 1]);
-    const what =
-      w.why === 'nul'
-        ? 'a NUL byte (0x00), so this is not a text file; a file saved as UTF-16 or a spreadsheet looks like this'
-        : w.why === 'truncated'
-          ? 'a UTF-8 character cut off by the end of the file'
-          : `the byte ${w.bytes}, which is not valid UTF-8 text`;
     return dataError(
       file,
       w.line,
       w.column,
-      `${where}: expected UTF-8 text, found ${what}; save the file as CSV (UTF-8)`,
+      `${where}: expected UTF-8 text, found ${notText(w)}; save the file as CSV (UTF-8)`,
     );
   }
   const e = error as CsvParseError;
