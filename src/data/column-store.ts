@@ -14,6 +14,11 @@ export interface FirstSeen {
 
 const INITIAL_CAPACITY = 1024;
 
+/** The column reads as numbers: at least half of its cells are (see columns.ts). */
+export function looksNumeric(store: ColumnStore): boolean {
+  return store.numberCount > 0 && store.numberCount >= store.textCount;
+}
+
 export class ColumnStore {
   length = 0;
   /** Cell values where they are finite numbers, NaN elsewhere. */

@@ -7,7 +7,7 @@ import type { Config } from '../config/types.js';
 import { quote } from '../common/escape.js';
 import { formatCount } from '../common/format.js';
 import { nearest } from '../common/suggest.js';
-import type { ColumnStore } from './column-store.js';
+import { looksNumeric, type ColumnStore } from './column-store.js';
 import type { ReadPlan } from './read-csv.js';
 import { MAX_MAGNITUDE } from './numbers.js';
 import {
@@ -107,9 +107,7 @@ export interface CategoricalColumn {
 
 export type TypedColumn = NumericColumn | CategoricalColumn;
 
-export function looksNumeric(store: ColumnStore): boolean {
-  return store.numberCount > 0 && store.numberCount >= store.textCount;
-}
+export { looksNumeric } from './column-store.js';
 
 /** Numeric column values, or the first cell that breaks them. */
 export function numericColumn(store: ColumnStore, file: DataFile, role: string): NumericColumn {

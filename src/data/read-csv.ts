@@ -4,10 +4,12 @@
  * (as an editor counts it, header = line 1) and the column.
  */
 import { createReadStream } from 'node:fs';
+import { stat } from 'node:fs/promises';
 import { Writable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { parse } from 'csv-parse';
-import { ColumnStore } from './column-store.js';
+import { ColumnStore, looksNumeric } from './column-store.js';
+import { estimateLoad, memoryRoom, whyNotFit } from './memory.js';
 import { NotTextError, TextCheck, type BadBytes } from './text-check.js';
 import { columnLabel, dataError, shownValue, type DataFile } from './where.js';
 import { quote } from '../common/escape.js';
@@ -47,6 +49,7 @@ export interface RawTable {
 }
 
 export async function readCsvColumns(file: DataFile, options: ReadOptions): Promise<RawTable> {
+  const fileBytes = (await stat(file.path)).size;
   let header: string[] | null = null;
   let stores: ColumnStore[] = [];
   let fields: Int32Array = new Int32Array(0);
@@ -102,6 +105,8 @@ export async function readCsvColumns(file: DataFile, options: ReadOptions): Prom
       dropped++;
       return;
     }
+    // The stores are full and about to double: first make sure the whole file will fit.
+    if (rows === stores[0].numbers.length) checkMemory(file, stores, targetIndex, rows, parser.info, fileBytes);
     for (let k = 0; k < stores.length; k++) stores[k].push(record[fields[k]], line);
     rows++;
   };
@@ -169,6 +174,30 @@ export async function readCsvColumns(file: DataFile, options: ReadOptions): Prom
     droppedRows: dropped,
     lastLine: nextLine - 1,
   };
+}
+
+/** Stops with a UserError when loading the whole file would not fit in this process's memory. */
+function checkMemory(
+  file: DataFile,
+  stores: ColumnStore[],
+  target: number,
+  rows: number,
+  parsed: { bytes: number; records: number },
+  fileBytes: number,
+): void {
+  const estimate = estimateLoad({
+    rows,
+    capacity: stores[0].numbers.length,
+    recordsParsed: parsed.records,
+    bytesParsed: parsed.bytes,
+    fileBytes,
+    columns: stores.map((s, k) => ({
+      codes: s.codes !== null,
+      inputs: k === target ? 0 : s.distinct !== null && !looksNumeric(s) ? s.distinct.size : 1,
+    })),
+  });
+  const why = whyNotFit(estimate, memoryRoom());
+  if (why !== null) throw new UserError(`${file.shown}: ${why}`, { file: file.path });
 }
 
 function lineBreaks(record: string[]): number {
