@@ -25,9 +25,11 @@ const INVISIBLE = /[\u00ad\u061c\u180e\u200b-\u200f\u2028\u2029\u202a-\u202e\u20
 const SHORT_ESCAPES: Record<number, string> = { 0x0a: '\\n', 0x0d: '\\r', 0x09: '\\t' };
 
 /** At most `max` characters (code points), the last of them an ellipsis when cut. */
-function clip(s: string, max: number = MAX_SHOWN): string {
+export function clip(s: string, max: number = MAX_SHOWN): string {
   if (s.length <= max) return s;
-  const chars = Array.from(s.slice(0, max + 1));
+  // A code point takes one or two code units, so the first 2 × (max + 1) units hold more than
+  // `max` code points whenever the whole string does.
+  const chars = Array.from(s.slice(0, 2 * max + 2));
   return chars.length > max ? `${chars.slice(0, max - 1).join('')}${ELLIPSIS}` : s;
 }
 
@@ -35,9 +37,15 @@ function hex(c: number, width: number): string {
   return c.toString(16).padStart(width, '0');
 }
 
-/** Is this code point one that `escapeText` shows escaped? */
+/** Is this code point one that `escapeText` shows escaped? (A lone surrogate is not text either.) */
 function needsEscape(c: number, ch: string): boolean {
-  return c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch);
+  return c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || (c >= 0xd800 && c <= 0xdfff) || INVISIBLE.test(ch);
+}
+
+/** Whether `escapeText` would show every character of `s` as it is (no control, invisible or bidi character). */
+export function isPrintable(s: string): boolean {
+  for (const ch of s) if (needsEscape(ch.codePointAt(0) ?? 0, ch)) return false;
+  return true;
 }
 
 /** Text for logs, the terminal and messages: clipped, control and invisible characters escaped, `::` broken. */

@@ -4,6 +4,8 @@
  * gives every user the same line and column.
  */
 
+import { quote } from '../common/escape.js';
+
 export interface JsonSyntaxProblem {
   line: number;
   column: number;
@@ -155,22 +157,29 @@ class ScanError extends Error {
   }
 }
 
-/** 1-based line and column as a text editor counts them (column in characters). */
+/**
+ * 1-based line and column as a text editor counts them: LF, CRLF and a lone CR each end a
+ * line, and the column counts characters (a character outside the BMP is one, not two).
+ */
 function lineAndColumn(text: string, offset: number): { line: number; column: number } {
   let line = 1;
-  let lineStart = 0;
+  let column = 1;
   for (let k = 0; k < offset && k < text.length; k++) {
-    if (text.charCodeAt(k) === 0x0a) {
+    const c = text.charCodeAt(k);
+    if (c === 0x0a || (c === 0x0d && text.charCodeAt(k + 1) !== 0x0a)) {
       line++;
-      lineStart = k + 1;
+      column = 1;
+    } else if (c !== 0x0d && (c < 0xdc00 || c > 0xdfff)) {
+      column++;
     }
   }
-  return { line, column: offset - lineStart + 1 };
+  return { line, column };
 }
 
 function describeChar(text: string, offset: number): string {
   const c = text.codePointAt(offset) ?? 0;
   if (c === 0x0a || c === 0x0d) return 'a line break';
-  if (c < 0x20 || c === 0x7f) return `control character U+${c.toString(16).toUpperCase().padStart(4, '0')}`;
-  return JSON.stringify(String.fromCodePoint(c));
+  if (c < 0x20 || (c >= 0x7f && c < 0xa0))
+    return `control character U+${c.toString(16).toUpperCase().padStart(4, '0')}`;
+  return quote(String.fromCodePoint(c));
 }

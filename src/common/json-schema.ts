@@ -10,6 +10,8 @@
  * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
  */
 
+import { quote } from './escape.js';
+
 export type JsonSchema = {
   title?: string;
   description?: string;
@@ -287,9 +289,6 @@ function describe(v: unknown): string {
   if (v === null) return 'null';
   if (Array.isArray(v)) return 'a list';
   if (typeof v === 'object') return 'an object';
-  if (typeof v === 'string') {
-    const s = JSON.stringify(v);
-    return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
-  }
+  if (typeof v === 'string') return quote(v, 60);
   return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }

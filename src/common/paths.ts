@@ -6,6 +6,7 @@
  */
 import { existsSync, realpathSync } from 'node:fs';
 import { dirname, isAbsolute, relative, resolve, sep } from 'node:path';
+import { quote } from './escape.js';
 import { UserError } from './errors.js';
 
 export type InsideResult = { ok: true; path: string } | { ok: false; reason: string };
@@ -55,13 +56,13 @@ export function checkInside(root: string, baseDir: string, p: string): InsideRes
   const target = resolve(baseDir, p);
   const where = isAbsolute(p) ? 'is an absolute path outside' : 'leads outside';
   if (!isInside(absoluteRoot, target)) {
-    return { ok: false, reason: `"${p}" ${where} the workspace ${absoluteRoot}` };
+    return { ok: false, reason: `${quote(p)} ${where} the workspace ${absoluteRoot}` };
   }
   const realRoot = realLocation(absoluteRoot);
   if (!isInside(realRoot, realLocation(target))) {
     return {
       ok: false,
-      reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
+      reason: `${quote(p)} goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
     };
   }
   return { ok: true, path: target };

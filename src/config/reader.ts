@@ -156,12 +156,14 @@ export class ConfigReader {
     });
   }
 
-  /** Where a node's tag is written (the parser's range starts at the value, after the tag). */
+  /** Where a tagged node's tag is written (the node's range starts after it), else the node. */
   private tagOffset(node: Node): number {
     const start = node.range?.[0] ?? 0;
-    const lineStart = this.text.lastIndexOf('\n', start - 1) + 1;
-    const bang = this.text.lastIndexOf('!', start);
-    return bang >= lineStart ? (this.text[bang - 1] === '!' ? bang - 1 : bang) : start;
+    let end = start;
+    while (end > 0 && /\s/.test(this.text[end - 1])) end--;
+    let tag = end;
+    while (tag > 0 && !/\s/.test(this.text[tag - 1])) tag--;
+    return this.text[tag] === '!' && tag < end ? tag : start;
   }
 
   errorAt(offset: number, key: string | null, message: string): UserError {

@@ -5,6 +5,7 @@
  * gets decided once the whole file has been read.
  */
 import { classifyNumber, NumberKind } from './numbers.js';
+import { characterCount, MAX_NAME_LENGTH } from './where.js';
 
 export interface FirstSeen {
   value: string;
@@ -12,6 +13,11 @@ export interface FirstSeen {
 }
 
 const INITIAL_CAPACITY = 1024;
+
+/** The column reads as numbers: at least half of its cells are (see columns.ts). */
+export function looksNumeric(store: ColumnStore): boolean {
+  return store.numberCount > 0 && store.numberCount >= store.textCount;
+}
 
 export class ColumnStore {
   length = 0;
@@ -31,6 +37,8 @@ export class ColumnStore {
   firstText: FirstSeen | null = null;
   /** First NaN/Infinity/overflowing number, and which it was. */
   firstNotFinite: (FirstSeen & { overflow: boolean }) | null = null;
+  /** First distinct text longer than MAX_NAME_LENGTH (refused if the column is categorical). */
+  firstTooLong: FirstSeen | null = null;
   /** Empty cells met, including those of dropped rows. */
   missing = 0;
 
@@ -66,6 +74,9 @@ export class ColumnStore {
     if (this.distinct !== null && this.codes !== null) {
       let code = this.distinct.get(text);
       if (code === undefined) {
+        if (text.length > MAX_NAME_LENGTH && this.firstTooLong === null && characterCount(text) > MAX_NAME_LENGTH) {
+          this.firstTooLong = { value: text, line };
+        }
         code = this.distinct.size;
         if (code >= this.distinctLimit) {
           this.startOverflow(text, line);

@@ -4,13 +4,27 @@
  * with at most data.max-categories distinct values.
  */
 import type { Config } from '../config/types.js';
+import { quote } from '../common/escape.js';
+import { formatCount } from '../common/format.js';
 import { nearest } from '../common/suggest.js';
-import type { ColumnStore } from './column-store.js';
+import { looksNumeric, type ColumnStore } from './column-store.js';
 import type { ReadPlan } from './read-csv.js';
-import { columnLabel, ConfigKeyProblem, dataError, shownValue, type DataFile } from './where.js';
+import { MAX_MAGNITUDE } from './numbers.js';
+import {
+  characterCount,
+  columnLabel,
+  ConfigKeyProblem,
+  dataError,
+  MAX_NAME_LENGTH,
+  shownValue,
+  type DataFile,
+} from './where.js';
 
 /** Most classes a classification target may have (a practical cap, no source). */
 export const MAX_CLASSES = 1000;
+
+/** Column names listed in a message before the rest are only counted. */
+const NAMES_LISTED = 30;
 
 export interface ChosenColumns {
   plan: ReadPlan;
@@ -27,11 +41,11 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
     const i = index.get(name);
     if (i !== undefined) return i;
     const guess = nearest(name, header);
-    const hint = guess === null ? '.' : ` (did you mean "${guess}"?).`;
+    const hint = guess === null ? '.' : ` (did you mean ${quote(guess)}?).`;
     throw new ConfigKeyProblem(
       key,
-      `expected a column of ${file.shown}, found "${name}", which its header (line 1) does not have${hint} ` +
-        `The columns are: ${header.join(', ')}`,
+      `expected a column of ${file.shown}, found ${quote(name)}, which its header (line 1) does not have${hint} ` +
+        `The columns are: ${listNames(header)}`,
     );
   };
   const target = find(data.target, 'data.target');
@@ -39,7 +53,7 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
   for (const name of data.ignore) {
     const i = find(name, 'data.ignore');
     if (i === target) {
-      throw new ConfigKeyProblem('data.ignore', `lists "${name}", which is the target column (data.target)`);
+      throw new ConfigKeyProblem('data.ignore', `lists ${quote(name)}, which is the target column (data.target)`);
     }
     ignored.add(i);
   }
@@ -51,13 +65,13 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
     for (const name of data.features) {
       const i = find(name, 'data.features');
       if (i === target) {
-        throw new ConfigKeyProblem('data.features', `lists "${name}", which is the target column (data.target)`);
+        throw new ConfigKeyProblem('data.features', `lists ${quote(name)}, which is the target column (data.target)`);
       }
       if (ignored.has(i)) {
-        throw new ConfigKeyProblem('data.features', `lists "${name}", which data.ignore also lists`);
+        throw new ConfigKeyProblem('data.features', `lists ${quote(name)}, which data.ignore also lists`);
       }
       if (features.includes(i)) {
-        throw new ConfigKeyProblem('data.features', `lists "${name}" twice`);
+        throw new ConfigKeyProblem('data.features', `lists ${quote(name)} twice`);
       }
       features.push(i);
     }
@@ -65,9 +79,10 @@ export function chooseColumns(header: string[], config: Config, file: DataFile):
   if (features.length === 0) {
     throw new ConfigKeyProblem(
       data.features === null ? 'data.ignore' : 'data.features',
-      `expected at least one feature column besides the target "${data.target}", found none left in ${file.shown}`,
+      `expected at least one feature column besides the target ${quote(data.target)}, found none left in ${file.shown}`,
     );
   }
+  for (const field of [...features, target]) checkNameLength(header[field], field + 1, file);
   const columns = features.map((field) => ({ field, distinctLimit: data.maxCategories }));
   columns.push({ field: target, distinctLimit: MAX_CLASSES });
   return { plan: { columns, target: columns.length - 1 }, features, target };
@@ -92,9 +107,7 @@ export interface CategoricalColumn {
 
 export type TypedColumn = NumericColumn | CategoricalColumn;
 
-export function looksNumeric(store: ColumnStore): boolean {
-  return store.numberCount > 0 && store.numberCount >= store.textCount;
-}
+export { looksNumeric } from './column-store.js';
 
 /** Numeric column values, or the first cell that breaks them. */
 export function numericColumn(store: ColumnStore, file: DataFile, role: string): NumericColumn {
@@ -103,7 +116,8 @@ export function numericColumn(store: ColumnStore, file: DataFile, role: string):
   const label = `${columnLabel(store.column, store.name)}${role}`;
   if (odd !== null && (text === null || odd.line <= text.line)) {
     const why = odd.overflow
-      ? 'a number too large for a 64-bit float'
+      ? `a number too large: cells may hold numbers from -${MAX_MAGNITUDE_SHOWN} to ${MAX_MAGNITUDE_SHOWN}, the range of ` +
+        'the float32 numbers a device runs the network in (check the unit or the decimal point)'
       : 'a value that is not a finite number (NaN and Infinity are not measurements; leave the cell empty if it is missing)';
     throw dataError(
       file,
@@ -124,7 +138,19 @@ export function numericColumn(store: ColumnStore, file: DataFile, role: string):
   return { kind: 'numeric', name: store.name, column: store.column, values: store.numbers.subarray(0, store.length) };
 }
 
-export function categoricalColumn(store: ColumnStore, file: DataFile, cap: number): CategoricalColumn {
+/** MAX_MAGNITUDE as a message shows it. */
+const MAX_MAGNITUDE_SHOWN = MAX_MAGNITUDE.toPrecision(2).replace('e+', 'e');
+
+/**
+ * The column's texts as categories, or the first cell that breaks them. `what` names a
+ * value in messages: "category" for a feature, "class label" for the target.
+ */
+export function categoricalColumn(
+  store: ColumnStore,
+  file: DataFile,
+  cap: number,
+  what: 'category' | 'class label' = 'category',
+): CategoricalColumn {
   if (store.distinct === null || store.codes === null) {
     const count = store.distinctCount();
     const over = store.overflow;
@@ -136,6 +162,16 @@ export function categoricalColumn(store: ColumnStore, file: DataFile, cap: numbe
       `${columnLabel(store.column, store.name)} is text with ${amount} distinct values; a categorical column ` +
         `may have at most ${cap} (data.max-categories). The value ${shownValue(over?.value ?? '')} on this line ` +
         `is number ${cap + 1}. An identifier column belongs in data.ignore.`,
+    );
+  }
+  const long = store.firstTooLong;
+  if (long !== null) {
+    throw dataError(
+      file,
+      long.line,
+      store.column,
+      `${columnLabel(store.column, store.name)}: a ${what} may have at most ${MAX_NAME_LENGTH} characters; found ` +
+        `one of ${formatCount(characterCount(long.value))} characters: ${shownValue(long.value)}`,
     );
   }
   return sortedCategories(store, store.distinct, store.codes);
@@ -158,4 +194,25 @@ export function compareText(a: string, b: string): number {
 /** The feature column as numeric or categorical, by the rule at the top of this file. */
 export function featureColumn(store: ColumnStore, file: DataFile, cap: number): TypedColumn {
   return looksNumeric(store) ? numericColumn(store, file, '') : categoricalColumn(store, file, cap);
+}
+
+/** A column the job uses must have a name of at most MAX_NAME_LENGTH characters. */
+function checkNameLength(name: string, column: number, file: DataFile): void {
+  if (name.length <= MAX_NAME_LENGTH) return;
+  const length = characterCount(name);
+  if (length <= MAX_NAME_LENGTH) return;
+  throw dataError(
+    file,
+    1,
+    column,
+    `column ${column}: a column name may have at most ${MAX_NAME_LENGTH} characters; found one of ` +
+      `${formatCount(length)} characters: ${shownValue(name)}`,
+  );
+}
+
+/** The header's names for a message: quoted, clipped, and at most NAMES_LISTED of them. */
+function listNames(header: string[]): string {
+  const shown = header.slice(0, NAMES_LISTED).map((name) => quote(name, 40));
+  const more = header.length - shown.length;
+  return more > 0 ? `${shown.join(', ')} and ${formatCount(more)} more` : shown.join(', ');
 }

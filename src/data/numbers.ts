@@ -8,10 +8,18 @@ export const NumberKind = {
   Text: 1,
   /** `NaN`, `Infinity` and friends: number-like, but not a measurement. */
   NotFinite: 2,
-  /** Decimal notation whose value overflows a 64-bit float (e.g. 1e400). */
+  /** Decimal notation beyond ±MAX_MAGNITUDE (e.g. 1e39, or 1e400, which overflows a 64-bit float). */
   Overflow: 3,
 } as const;
 export type NumberKind = (typeof NumberKind)[keyof typeof NumberKind];
+
+/**
+ * The largest magnitude a cell may hold: float32's largest finite value. A device runs the
+ * network in float32, which cannot hold anything larger; and it keeps every column statistic
+ * finite (a sum of squared differences reaches at most rows × 4.6e77), whereas one cell of
+ * 1.7e308 overflows the variance to Infinity. Such a cell is refused rather than rescaled.
+ */
+export const MAX_MAGNITUDE = 3.4028234663852886e38;
 
 // Decimal notation: optional sign, digits with an optional fraction, optional exponent.
 // Hex, binary, `1_000` and the like are text, even though Number() would accept some.
@@ -25,7 +33,7 @@ export function classifyNumber(text: string, parsed: { value: number }): NumberK
   const couldBeNumber = (c >= 48 && c <= 57) || c === 45 || c === 43 || c === 46;
   if (couldBeNumber && DECIMAL.test(text)) {
     const value = Number(text);
-    if (!Number.isFinite(value)) return NumberKind.Overflow;
+    if (!(Math.abs(value) <= MAX_MAGNITUDE)) return NumberKind.Overflow;
     parsed.value = value === 0 ? 0 : value; // -0 and 0 are the same measurement
     return NumberKind.Finite;
   }

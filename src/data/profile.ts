@@ -1,4 +1,10 @@
-/** A summary of the data as used, kept in the baseline to explain later changes. */
+/**
+ * A summary of the data as used, kept in the baseline to explain later changes.
+ *
+ * Its tables are keyed by the file's own strings (column names, class labels, categories), so
+ * they are null-prototype objects: a label such as `__proto__` or `constructor` is then an
+ * ordinary key, never the object's prototype or an inherited method.
+ */
 import type { CategoricalProfile, DataProfile, NumericProfile } from './types.js';
 import type { TypedColumn } from './columns.js';
 import type { TargetColumn } from './target.js';
@@ -11,7 +17,7 @@ export function profileData(
   rows: number,
 ): DataProfile {
   const missing = new Map(stores.map((s) => [s.column, s.missing]));
-  const profiles: Record<string, NumericProfile | CategoricalProfile> = {};
+  const profiles = keyedTable<NumericProfile | CategoricalProfile>();
   for (const column of features) {
     const lost = missing.get(column.column) ?? 0;
     profiles[column.name] =
@@ -23,10 +29,11 @@ export function profileData(
   if (target.task === 'classification') {
     const counts = new Array<number>(target.classes.length).fill(0);
     for (const c of target.indices) counts[c]++;
-    classes = {};
+    const table = keyedTable<number>();
     target.classes.forEach((label, i) => {
-      (classes as Record<string, number>)[label] = counts[i];
+      table[label] = counts[i];
     });
+    classes = table;
   }
   const used = [
     ...features.map((c) => ({ name: c.name, column: c.column })),
@@ -59,9 +66,14 @@ function numericProfile(values: Float64Array, missing: number): NumericProfile {
 function categoricalProfile(categories: string[], codes: Int32Array, missing: number): CategoricalProfile {
   const tally = new Array<number>(categories.length).fill(0);
   for (const c of codes) tally[c]++;
-  const counts: Record<string, number> = {};
+  const counts = keyedTable<number>();
   categories.forEach((category, i) => {
     counts[category] = tally[i];
   });
   return { kind: 'categorical', counts, missing };
+}
+
+/** An empty table keyed by strings from the file: no prototype, so no key is special. */
+function keyedTable<T>(): Record<string, T> {
+  return Object.create(null) as Record<string, T>;
 }

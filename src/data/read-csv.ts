@@ -4,12 +4,15 @@
  * (as an editor counts it, header = line 1) and the column.
  */
 import { createReadStream } from 'node:fs';
+import { stat } from 'node:fs/promises';
 import { Writable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { parse } from 'csv-parse';
-import { ColumnStore } from './column-store.js';
-import { NotTextError, TextCheck } from './text-check.js';
+import { ColumnStore, looksNumeric } from './column-store.js';
+import { estimateLoad, memoryRoom, whyNotFit } from './memory.js';
+import { NotTextError, TextCheck, type BadBytes } from './text-check.js';
 import { columnLabel, dataError, shownValue, type DataFile } from './where.js';
+import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 
 export interface ColumnRequest {
@@ -46,6 +49,7 @@ export interface RawTable {
 }
 
 export async function readCsvColumns(file: DataFile, options: ReadOptions): Promise<RawTable> {
+  const fileBytes = (await stat(file.path)).size;
   let header: string[] | null = null;
   let stores: ColumnStore[] = [];
   let fields: Int32Array = new Int32Array(0);
@@ -101,6 +105,8 @@ export async function readCsvColumns(file: DataFile, options: ReadOptions): Prom
       dropped++;
       return;
     }
+    // The stores are full and about to double: first make sure the whole file will fit.
+    if (rows === stores[0].numbers.length) checkMemory(file, stores, targetIndex, rows, parser.info, fileBytes);
     for (let k = 0; k < stores.length; k++) stores[k].push(record[fields[k]], line);
     rows++;
   };
@@ -170,6 +176,30 @@ export async function readCsvColumns(file: DataFile, options: ReadOptions): Prom
   };
 }
 
+/** Stops with a UserError when loading the whole file would not fit in this process's memory. */
+function checkMemory(
+  file: DataFile,
+  stores: ColumnStore[],
+  target: number,
+  rows: number,
+  parsed: { bytes: number; records: number },
+  fileBytes: number,
+): void {
+  const estimate = estimateLoad({
+    rows,
+    capacity: stores[0].numbers.length,
+    recordsParsed: parsed.records,
+    bytesParsed: parsed.bytes,
+    fileBytes,
+    columns: stores.map((s, k) => ({
+      codes: s.codes !== null,
+      inputs: k === target ? 0 : s.distinct !== null && !looksNumeric(s) ? s.distinct.size : 1,
+    })),
+  });
+  const why = whyNotFit(estimate, memoryRoom());
+  if (why !== null) throw new UserError(`${file.shown}: ${why}`, { file: file.path });
+}
+
 function lineBreaks(record: string[]): number {
   let n = 0;
   for (let i = 0; i < record.length; i++) {
@@ -191,7 +221,7 @@ function checkHeader(file: DataFile, record: string[], line: number): string[] {
         file,
         line,
         i + 1,
-        `column ${i + 1} is named "${name}" like column ${first + 1}; column names must be unique`,
+        `column ${i + 1} is named ${quote(name, 60)} like column ${first + 1}; column names must be unique`,
       );
     }
     seen.set(name, i);
@@ -207,7 +237,7 @@ function fieldCountError(file: DataFile, line: number, record: string[], header:
       line,
       header.length + 1,
       `${expected}, found ${record.length}: an extra field ${shownValue(record[header.length])} ` +
-        `after the last column "${header[header.length - 1]}" (an unquoted delimiter inside a value?)`,
+        `after the last column ${quote(header[header.length - 1], 60)} (an unquoted delimiter inside a value?)`,
     );
   }
   const next = record.length;
@@ -217,6 +247,20 @@ function fieldCountError(file: DataFile, line: number, record: string[], header:
     next + 1,
     `${expected}, found ${record.length}: the row ends before ${columnLabel(next + 1, header[next])}`,
   );
+}
+
+/** What the bad bytes are, for the message. */
+function notText(w: BadBytes): string {
+  if (w.why === 'nul') {
+    return 'a NUL byte (0x00), so this is not a text file; a file saved as UTF-16 or a spreadsheet looks like this';
+  }
+  if (w.why === 'truncated') return `a UTF-8 character cut off by the end of the file (the bytes ${w.bytes})`;
+  const one = !w.bytes.includes(' ');
+  const bytes = one ? `the byte ${w.bytes}` : `the bytes ${w.bytes}`;
+  if (w.next === null) return `${bytes}, which is not valid UTF-8 text`;
+  // One high byte followed by plain ASCII is how é, ü or ° look in Latin-1 / Windows-1252.
+  const legacy = one && Number(w.next) < 0x80 ? '; a file saved as Latin-1 or Windows-1252 looks like this' : '';
+  return `${bytes}, which is not valid UTF-8 text (it starts a character that ${w.next} does not continue)${legacy}`;
 }
 
 interface CsvParseError extends Error {
@@ -235,18 +279,21 @@ function explain(
   if (error instanceof UserError) return error;
   if (error instanceof NotTextError) {
     const w = error.where;
-    const where = columnLabel(w.column, w.header[w.column - 1]);
-    const what =
-      w.why === 'nul'
-        ? 'a NUL byte (0x00), so this is not a text file; a file saved as UTF-16 or a spreadsheet looks like this'
-        : w.why === 'truncated'
-          ? 'a UTF-8 character cut off by the end of the file'
-          : `the byte ${w.bytes}, which is not valid UTF-8 text`;
+    if (w.why === 'cr-only') {
+      return dataError(
+        file,
+        w.line,
+        undefined,
+        'this file ends its lines with CR only (old Mac style); save it with LF or CRLF line endings',
+      );
+    }
+    // The parser's header when it has read it; the byte check runs ahead of the parser.
+    const where = columnLabel(w.column, (header ?? w.header)[w.column - 1]);
     return dataError(
       file,
       w.line,
       w.column,
-      `${where}: expected UTF-8 text, found ${what}; save the file as CSV (UTF-8)`,
+      `${where}: expected UTF-8 text, found ${notText(w)}; save the file as CSV (UTF-8)`,
     );
   }
   const e = error as CsvParseError;

@@ -3,6 +3,7 @@
  * classification; a numeric target with at most AUTO_MAX_CLASSES distinct values means
  * classification too (class labels like 0/1/2); any other numeric target means regression.
  */
+import { quote } from '../common/escape.js';
 import type { Config, Task } from '../config/types.js';
 import type { ColumnStore } from './column-store.js';
 import { categoricalColumn, looksNumeric, MAX_CLASSES, numericColumn } from './columns.js';
@@ -61,7 +62,7 @@ export function targetColumn(store: ColumnStore, config: Config, file: DataFile)
     return { task, name: store.name, column: store.column, classes, indices, numericLabels: column.values };
   }
   if (store.distinct === null) throw tooManyClasses(store, file);
-  const column = categoricalColumn(store, file, MAX_CLASSES);
+  const column = categoricalColumn(store, file, MAX_CLASSES, 'class label');
   checkTwoClasses(column.categories, file, store);
   return {
     task,
@@ -92,7 +93,7 @@ function checkTwoClasses(classes: string[], file: DataFile, store: ColumnStore):
     file,
     1,
     store.column,
-    `${columnLabel(store.column, store.name)} (the target) has a single class "${classes[0] ?? ''}" in all ` +
+    `${columnLabel(store.column, store.name)} (the target) has a single class ${quote(classes[0] ?? '')} in all ` +
       `${store.length} rows; classification needs at least two classes`,
   );
 }

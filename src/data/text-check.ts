@@ -1,7 +1,9 @@
 /**
  * A pass-through stream that refuses bytes that are not UTF-8 text (invalid sequences,
  * NUL bytes) before the CSV parser sees them, and says where they are: the line as an
- * editor counts it and the field number, tracked with a small quote-aware scan.
+ * editor counts it and the field number, tracked with a small quote-aware scan. It also
+ * recognises a file whose lines end with CR alone (old Mac style), which the CSV parser
+ * would read as one endless header line.
  */
 import { Transform, type TransformCallback } from 'node:stream';
 
@@ -9,10 +11,12 @@ export interface BadBytes {
   line: number;
   /** 1-based field number on that line. */
   column: number;
-  /** The offending bytes, as hex (`0xff`, `0x00`). */
+  /** The offending bytes, as hex (`0xff`, `0x00`; `0xe2 0x82` for a character cut short). */
   bytes: string;
-  why: 'nul' | 'invalid' | 'truncated';
-  /** Header names seen on line 1 (naively split), for naming the column. */
+  /** The byte after them that showed they are not a character (as hex), when there is one. */
+  next: string | null;
+  why: 'nul' | 'invalid' | 'truncated' | 'cr-only';
+  /** Header names of the first record (quote-aware, but simply split), for naming the column. */
   header: string[];
 }
 
@@ -25,6 +29,7 @@ export class NotTextError extends Error {
 
 const QUOTE = 0x22;
 const NEWLINE = 0x0a;
+const CR = 0x0d;
 const HEADER_BYTES_KEPT = 65536;
 
 export class TextCheck extends Transform {
@@ -35,6 +40,11 @@ export class TextCheck extends Transform {
   private need = 0;
   private low = 0x80;
   private high = 0xbf;
+  /** The bytes of the character being read (its lead byte and the continuation bytes so far). */
+  private readonly sequence = new Uint8Array(4);
+  private sequenceLength = 0;
+  /** A CR outside quotes on line 1, not yet known to start a CRLF. */
+  private pendingCR = false;
   private headerBytes: number[] = [];
   private header: string[] | null = null;
 
@@ -59,7 +69,11 @@ export class TextCheck extends Transform {
 
   override _flush(done: TransformCallback): void {
     if (this.need > 0) {
-      done(new NotTextError(this.where('truncated', 'end of file')));
+      done(new NotTextError(this.where('truncated', this.sequenceHex())));
+      return;
+    }
+    if (this.pendingCR) {
+      done(new NotTextError(this.where('cr-only', hex(CR))));
       return;
     }
     done();
@@ -70,8 +84,17 @@ export class TextCheck extends Transform {
     const delim = this.delimiter.length === 1 ? this.delimiter.charCodeAt(0) : -1;
     for (let i = 0; i < chunk.length; i++) {
       const b = chunk[i];
+      // CR CR LF (a doubled conversion) still ends the line in LF; CR then anything else does not.
+      if (this.pendingCR && b !== CR) {
+        if (b !== NEWLINE) return this.where('cr-only', hex(CR));
+        this.pendingCR = false;
+      }
       if (this.need > 0) {
-        if (b < this.low || b > this.high) return this.where('invalid', hex(b));
+        // The character started by the lead byte is what is broken, not the byte after it
+        // (in a Latin-1 file, `é,` is e9 2c: the e9 is wrong, the comma is fine).
+        if (b < this.low || b > this.high) return this.where('invalid', this.sequenceHex(), hex(b));
+        if (this.header === null) this.keepHeaderByte(b);
+        this.sequence[this.sequenceLength++] = b;
         this.need--;
         this.low = 0x80;
         this.high = 0xbf;
@@ -79,7 +102,8 @@ export class TextCheck extends Transform {
       }
       if (b < 0x80) {
         if (b === 0) return this.where('nul', '0x00');
-        if (this.line === 1 && this.header === null) this.keepHeaderByte(b);
+        if (this.header === null) this.keepHeaderByte(b);
+        if (b === CR && this.header === null && !this.inQuotes) this.pendingCR = true;
         if (b === NEWLINE) {
           this.line++;
           if (!this.inQuotes) this.field = 0;
@@ -90,7 +114,9 @@ export class TextCheck extends Transform {
         }
         continue;
       }
-      if (this.line === 1 && this.header === null) this.keepHeaderByte(b);
+      if (this.header === null) this.keepHeaderByte(b);
+      this.sequence[0] = b;
+      this.sequenceLength = 1;
       // Lead bytes and the ranges their first continuation byte may take (no overlongs,
       // no surrogates, nothing above U+10FFFF): the well-formed table of the Unicode standard.
       if (b >= 0xc2 && b <= 0xdf) this.expect(1, 0x80, 0xbf);
@@ -111,8 +137,13 @@ export class TextCheck extends Transform {
     this.high = high;
   }
 
+  private sequenceHex(): string {
+    return Array.from(this.sequence.subarray(0, this.sequenceLength), hex).join(' ');
+  }
+
+  /** Keeps the first record's bytes; called before `inQuotes` follows this byte. */
   private keepHeaderByte(b: number): void {
-    if (b === NEWLINE) {
+    if (b === NEWLINE && !this.inQuotes) {
       this.header = splitHeader(Buffer.from(this.headerBytes).toString('utf8'), this.delimiter);
       this.headerBytes = [];
     } else if (this.headerBytes.length < HEADER_BYTES_KEPT) {
@@ -120,8 +151,8 @@ export class TextCheck extends Transform {
     }
   }
 
-  private where(why: BadBytes['why'], bytes: string): BadBytes {
-    return { line: this.line, column: this.field + 1, bytes, why, header: this.header ?? [] };
+  private where(why: BadBytes['why'], bytes: string, next: string | null = null): BadBytes {
+    return { line: this.line, column: this.field + 1, bytes, next, why, header: this.header ?? [] };
   }
 }
 
@@ -129,11 +160,25 @@ function hex(b: number): string {
   return `0x${b.toString(16).padStart(2, '0')}`;
 }
 
-/** Good enough to name a column in a message; the CSV parser does the real work. */
+/** Good enough to name a column in a message (quoted names may hold delimiters and line breaks); the CSV parser does the real work. */
 function splitHeader(text: string, delimiter: string): string[] {
-  return text
-    .replace(/^\uFEFF/, '')
-    .replace(/\r$/, '')
-    .split(delimiter)
-    .map((s) => s.trim().replace(/^"(.*)"$/, '$1'));
+  const names: string[] = [];
+  let name = '';
+  let quoted = false;
+  const line = text.replace(/^\uFEFF/, '').replace(/\r$/, '');
+  for (let i = 0; i < line.length; i++) {
+    const ch = line[i];
+    if (ch === '"') {
+      if (quoted && line[i + 1] === '"') {
+        name += '"';
+        i++;
+      } else quoted = !quoted;
+    } else if (!quoted && line.startsWith(delimiter, i)) {
+      names.push(name.trim());
+      name = '';
+      i += delimiter.length - 1;
+    } else name += ch;
+  }
+  names.push(name.trim());
+  return names;
 }

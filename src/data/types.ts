@@ -66,7 +66,7 @@ export interface NumericProfile {
 
 export interface CategoricalProfile {
   kind: 'categorical';
-  /** Count per category, keys sorted. */
+  /** Count per category, keys sorted; a null-prototype object (the keys are the file's strings). */
   counts: Record<string, number>;
   missing: number;
 }
@@ -74,11 +74,11 @@ export interface CategoricalProfile {
 /** A summary of the data as used, for comparison with the baseline's. */
 export interface DataProfile {
   rows: number;
-  /** Rows per class (classification), keys sorted; null for regression. */
+  /** Rows per class (classification), keys sorted; null for regression. Null-prototype, as every table here. */
   classes: Record<string, number> | null;
   /** Every column used (features and target) in file order. */
   columns: string[];
-  /** Per feature, keyed by column name. */
+  /** Per feature, keyed by column name (null-prototype). */
   features: Record<string, NumericProfile | CategoricalProfile>;
 }
 

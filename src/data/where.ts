@@ -1,4 +1,5 @@
 /** Where in the data file something is, for messages a user can follow in a text editor. */
+import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 
 export interface DataFile {
@@ -10,7 +11,7 @@ export interface DataFile {
 
 /** `column 4 "kurtosis"`: both the number an editor shows and the header name. */
 export function columnLabel(column: number, name: string | undefined): string {
-  return name === undefined || name === '' ? `column ${column}` : `column ${column} "${name}"`;
+  return name === undefined || name === '' ? `column ${column}` : `column ${column} ${quote(name, 60)}`;
 }
 
 /** An error at a line (1-based, as an editor counts) and column (1-based field number). */
@@ -27,8 +28,24 @@ export function dataError(
 
 /** Quote a value from the file for a message, keeping it short and visible. */
 export function shownValue(value: string): string {
-  const cut = value.length > 40 ? `${value.slice(0, 37)}...` : value;
-  return JSON.stringify(cut);
+  return quote(value, 40);
+}
+
+/**
+ * Most characters in a column name, class label or category (documented in the README's
+ * limits). These strings are stored in the model and the baseline and shown on every screen;
+ * a longer one is a whole document pasted into a cell, not a name (a practical cap, no source).
+ */
+export const MAX_NAME_LENGTH = 256;
+
+/** Characters (code points) in `s`. */
+export function characterCount(s: string): number {
+  let n = 0;
+  for (let i = 0; i < s.length; i++) {
+    const c = s.charCodeAt(i);
+    if (c < 0xdc00 || c > 0xdfff) n++; // a low surrogate completes a character already counted
+  }
+  return n;
 }
 
 /**

@@ -6,6 +6,7 @@
 import { readFile } from 'node:fs/promises';
 import type { Config } from '../config/types.js';
 import type { LoadedData } from '../data/types.js';
+import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 import { writeFileAtomic } from '../files/atomic.js';
 import type { SearchResult } from '../search/types.js';
@@ -231,9 +232,6 @@ function describe(v: unknown): string {
   if (v === null) return 'null';
   if (Array.isArray(v)) return 'a list';
   if (typeof v === 'object') return 'an object';
-  if (typeof v === 'string') {
-    const s = JSON.stringify(v);
-    return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
-  }
+  if (typeof v === 'string') return quote(v, 60);
   return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }

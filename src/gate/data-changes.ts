@@ -19,34 +19,36 @@ export function dataChanges(
   fingerprints: { before: string; after: string },
   files: { before: string; after: string } = { before: '', after: '' },
 ): DataChanges {
-  const columnsAdded = after.columns.filter((c) => !before.columns.includes(c));
-  const columnsRemoved = before.columns.filter((c) => !after.columns.includes(c));
+  const columnsBefore = new Set(before.columns);
+  const columnsAfter = new Set(after.columns);
+  const columnsAdded = after.columns.filter((c) => !columnsBefore.has(c));
+  const columnsRemoved = before.columns.filter((c) => !columnsAfter.has(c));
 
   let classes: DataChanges['classes'] = null;
   const classesAppeared: string[] = [];
   const classesVanished: string[] = [];
   if (before.classes !== null || after.classes !== null) {
-    const b = before.classes ?? {};
-    const a = after.classes ?? {};
-    const labels = [...new Set([...Object.keys(b), ...Object.keys(a)])].sort(byCodeUnit);
-    classes = labels.map((label) => ({ label, before: b[label] ?? 0, after: a[label] ?? 0 }));
+    const b = tableOf(before.classes);
+    const a = tableOf(after.classes);
+    const labels = [...new Set([...b.keys(), ...a.keys()])].sort(byCodeUnit);
+    classes = labels.map((label) => ({ label, before: b.get(label) ?? 0, after: a.get(label) ?? 0 }));
     for (const label of labels) {
-      if (!(label in b)) classesAppeared.push(label);
-      if (!(label in a)) classesVanished.push(label);
+      if (!b.has(label)) classesAppeared.push(label);
+      if (!a.has(label)) classesVanished.push(label);
     }
   }
 
   const features: FeatureShift[] = [];
   const categories: CategoryChange[] = [];
-  const shared = Object.keys(after.features)
-    .filter((name) => name in before.features)
-    .sort(byCodeUnit);
+  const featuresBefore = tableOf(before.features);
+  const featuresAfter = tableOf(after.features);
+  const shared = [...featuresAfter.keys()].filter((name) => featuresBefore.has(name)).sort(byCodeUnit);
   for (const name of shared) {
-    const b = before.features[name];
-    const a = after.features[name];
+    const b = featuresBefore.get(name)!;
+    const a = featuresAfter.get(name)!;
     if (b.kind === 'numeric' && a.kind === 'numeric') {
-      const delta = Math.abs(a.mean - b.mean);
-      const shiftInStd = b.std > 0 ? delta / b.std : null;
+      const delta = atMostMax(Math.abs(a.mean - b.mean));
+      const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
       const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
       const rangeWidened = a.min < b.min || a.max > b.max;
       if (meanMoved || rangeWidened) {
@@ -63,12 +65,10 @@ export function dataChanges(
         });
       }
     } else if (b.kind === 'categorical' && a.kind === 'categorical') {
-      const appeared = Object.keys(a.counts)
-        .filter((c) => !(c in b.counts))
-        .sort(byCodeUnit);
-      const vanished = Object.keys(b.counts)
-        .filter((c) => !(c in a.counts))
-        .sort(byCodeUnit);
+      const countsBefore = tableOf(b.counts);
+      const countsAfter = tableOf(a.counts);
+      const appeared = [...countsAfter.keys()].filter((c) => !countsBefore.has(c)).sort(byCodeUnit);
+      const vanished = [...countsBefore.keys()].filter((c) => !countsAfter.has(c)).sort(byCodeUnit);
       if (appeared.length > 0 || vanished.length > 0) categories.push({ feature: name, appeared, vanished });
     }
   }
@@ -85,6 +85,22 @@ export function dataChanges(
     columnsAdded,
     columnsRemoved,
   };
+}
+
+/**
+ * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
+ * is read with JSON.parse, so a label may be `constructor` or `__proto__`: only own keys count.
+ */
+function tableOf<T>(table: Record<string, T> | null): Map<string, T> {
+  return new Map(table === null ? [] : Object.entries(table));
+}
+
+/**
+ * Two finite means read from a baseline file can differ by more than the largest float; the
+ * shift is then "at least the largest float", never Infinity (which JSON cannot hold).
+ */
+function atMostMax(x: number): number {
+  return Math.min(x, Number.MAX_VALUE);
 }
 
 /** Locale-independent order, so the summary reads the same on every machine. */

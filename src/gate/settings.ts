@@ -8,6 +8,7 @@
  * shows up as a data change, which is what the gate exists to measure.
  */
 import { createHash } from 'node:crypto';
+import { clip } from '../common/escape.js';
 import type { Config } from '../config/types.js';
 import { CONFIG_SPEC } from '../config/spec.js';
 import { fieldName } from '../config/keys.js';
@@ -61,7 +62,8 @@ export function settingsDifferences(before: ResultSettings, after: ResultSetting
 function show(v: ResultSettings[string] | undefined): string {
   if (v === undefined) return '(not set)';
   if (v === null) return '(default)';
-  const s = Array.isArray(v) ? `[${v.join(', ')}]` : String(v);
-  // Long feature lists would drown the sentence they appear in.
-  return s.length > 120 ? `${s.slice(0, 117)}...` : s;
+  // Column names are the repository's strings: each is clipped, and long lists would drown the
+  // sentence they appear in. Escaping is the renderer's (text, Markdown), as for every reason.
+  const s = Array.isArray(v) ? `[${v.map((name) => clip(name, 40)).join(', ')}]` : clip(String(v), 120);
+  return clip(s, 120);
 }

@@ -4,6 +4,7 @@
  */
 import { isAbsolute, resolve } from 'node:path';
 import { relativeInside } from '../common/paths.js';
+import { isPrintable } from '../common/escape.js';
 import type { UserError } from '../common/errors.js';
 
 const ANNOTATION_LIMIT = 10;
@@ -29,7 +30,10 @@ export function annotationPath(file: string, workspace: string): string | undefi
 export function toAnnotation(e: UserError, workspace: string): Annotation {
   const a: Annotation = { message: e.message };
   const file = e.file ? annotationPath(e.file, workspace) : undefined;
-  if (file) {
+  // @actions/core escapes only %, CR, LF, ":" and "," in a command's properties, so a file name
+  // with other control or invisible characters would reach the log raw: such an annotation
+  // goes without a location (the message names the file, escaped).
+  if (file && isPrintable(file)) {
     a.file = file;
     if (e.line !== undefined && e.line >= 1) {
       a.startLine = e.line;

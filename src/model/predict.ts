@@ -1,9 +1,15 @@
 /** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
+import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 import { predict } from '../nn/index.js';
 import type { ModelDocument } from './document.js';
 
 export type Row = Record<string, string>;
+
+/** A row's cell, by own key only: a column may be named `constructor` or `__proto__`. */
+function cellOf(row: Row, name: string): string | undefined {
+  return Object.hasOwn(row, name) ? row[name] : undefined;
+}
 
 export type Prediction = { label: string; probabilities: Record<string, number> } | { value: number };
 
@@ -19,13 +25,15 @@ export function encodeRows(model: ModelDocument, rows: readonly Row[]): Float64A
   rows.forEach((row, r) => {
     let c = r * inputs;
     for (const f of model.encoding.features) {
-      const cell = row[f.name];
-      if (cell === undefined) throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
+      const cell = cellOf(row, f.name);
+      if (cell === undefined) throw new UserError(`row ${r + 1}: column ${quote(f.name)} is missing`, { key: f.name });
       const text = cell.trim();
       if (f.kind === 'numeric') {
         const v = text === '' ? Number.NaN : Number(text);
         if (!Number.isFinite(v)) {
-          throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
+          throw new UserError(`row ${r + 1}, column ${quote(f.name)}: expected a number, found ${quote(cell)}`, {
+            key: f.name,
+          });
         }
         x[c++] = standardise(v, f.mean, f.std);
       } else {
@@ -50,7 +58,8 @@ export function predictRows(model: ModelDocument, rows: readonly Row[]): Predict
       continue;
     }
     const classes = t.classes ?? [];
-    const probabilities: Record<string, number> = {};
+    // Keyed by class labels, which may be any string: no prototype, so no label is special.
+    const probabilities = Object.create(null) as Record<string, number>;
     let best = 0;
     if (K === 1) {
       // One logistic output: the probability of the second class.
@@ -73,8 +82,8 @@ export function scoreRows(model: ModelDocument, rows: readonly Row[]): number {
   const preds = predictRows(model, rows);
   const name = model.encoding.target.name;
   const truth = rows.map((row, r) => {
-    const cell = row[name];
-    if (cell === undefined) throw new UserError(`row ${r + 1}: target column "${name}" is missing`, { key: name });
+    const cell = cellOf(row, name);
+    if (cell === undefined) throw new UserError(`row ${r + 1}: target column ${quote(name)} is missing`, { key: name });
     return cell.trim();
   });
   const metric = model.target.metric;

@@ -10,7 +10,8 @@
  */
 import { formatMetric } from '../common/format.js';
 
-const SAFE_TEXT = /^[A-Za-z0-9 .,-]*$/;
+/** Letters, digits, space and . , - + (a width read from a baseline file may print as 1e+21). */
+const SAFE_TEXT = /^[A-Za-z0-9 .,+-]*$/;
 
 function chartText(s: string): string {
   if (!SAFE_TEXT.test(s)) throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
@@ -55,6 +56,12 @@ export function renderChart(spec: ChartSpec): string {
   return lines.join('\n');
 }
 
+/*
+ * The ranges below take values read from a baseline file, which may be any finite number:
+ * every step that could overflow (a margin on top of 1.7e308) stops at the largest float, so
+ * an axis end is always a finite number.
+ */
+
 /** A y-axis range that shows every value and the threshold with a little room. */
 export function metricRange(values: number[], threshold: number, accuracy: boolean): [number, number] {
   const all = [...values, threshold].filter(Number.isFinite);
@@ -64,16 +71,21 @@ export function metricRange(values: number[], threshold: number, accuracy: boole
     return [Math.min(0.9, Math.max(0, Math.floor(low * 10) / 10)), 1];
   }
   const high = Math.max(...all, 0);
-  return [0, niceCeil(high * 1.1)];
+  return [0, niceCeil(finite(high * 1.1))];
 }
 
 export function countRange(values: number[]): [number, number] {
-  const high = Math.max(1, ...values);
-  return [0, Math.ceil(high * 1.15) + 1];
+  const high = Math.max(1, ...values.filter(Number.isFinite));
+  return [0, finite(Math.ceil(finite(high * 1.15)) + 1)];
 }
 
 function niceCeil(x: number): number {
   if (x <= 0) return 1;
   const step = 10 ** Math.floor(Math.log10(x));
-  return Math.ceil(x / step) * step;
+  return finite(Math.ceil(x / step) * step);
+}
+
+/** x, or the largest float when x overflowed. */
+function finite(x: number): number {
+  return Math.min(x, Number.MAX_VALUE);
 }

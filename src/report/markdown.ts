@@ -11,6 +11,7 @@ import type { DataChanges, HistoryEntry } from '../gate/types.js';
 import type { WidthSummary } from '../search/types.js';
 import { countRange, metricRange, renderChart } from './chart.js';
 import { escapeMarkdown as md } from '../common/escape.js';
+import { MAX_MESSAGE } from '../common/errors.js';
 import { higherIsBetter } from '../common/metric.js';
 import { formatCount, formatDelta, formatMetric, formatSeconds, neurons, targetPhrase } from '../common/format.js';
 import type { Report, ReportPruneStep } from './types.js';
@@ -57,10 +58,10 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
 
 function headline(view: ReportView): string {
   const label = VERDICT_LABEL[view.verdict];
-  const lines = [`### neuron-budget: ${label}. ${md(view.headline)}`];
+  const lines = [`### neuron-budget: ${label}. ${md(view.headline, MAX_MESSAGE)}`];
   if (view.otherReasons.length > 0) {
     lines.push('');
-    for (const r of view.otherReasons) lines.push(`- ${md(r)}`);
+    for (const r of view.otherReasons) lines.push(`- ${md(r, MAX_MESSAGE)}`);
   }
   return lines.join('\n');
 }

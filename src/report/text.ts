@@ -1,9 +1,10 @@
 /**
  * The terminal report: the same facts as the comment, plain text, at most 80 columns
- * (long repository names are the one thing that may run over; they are never cut).
+ * (a long repository name may run over; each is clipped at 200 characters).
  */
 import type { DataChanges } from '../gate/types.js';
 import { escapeText as plain } from '../common/escape.js';
+import { MAX_MESSAGE } from '../common/errors.js';
 import { formatCount, formatDelta, formatMetric, formatSeconds, neurons, targetPhrase } from '../common/format.js';
 import type { Report } from './types.js';
 import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf } from './view.js';
@@ -14,8 +15,9 @@ export function renderText(report: Report): string {
   const view = viewOf(report);
   const out: string[] = [];
   const label = VERDICT_LABEL[view.verdict];
-  out.push(...wrap(`neuron-budget: ${label}. ${plain(view.headline)}`, ''));
-  for (const r of view.otherReasons) out.push(...wrap(plain(r), '  - ', '    '));
+  // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
+  out.push(...wrap(`neuron-budget: ${label}. ${plain(view.headline, MAX_MESSAGE)}`, ''));
+  for (const r of view.otherReasons) out.push(...wrap(plain(r, MAX_MESSAGE), '  - ', '    '));
   out.push('');
 
   const b = view.baseline;

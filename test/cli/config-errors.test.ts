@@ -198,6 +198,18 @@ const cases: Case[] = [
     setup: (dir) => mkdirSync(join(dir, 'conf')),
   },
   {
+    name: 'a custom YAML tag',
+    config: GOOD.replace('  target: condition', '  target: !custom condition'),
+    at: 'neuron-budget.yml:3:11:',
+    says: ['unsupported YAML tag "!custom"', 'remove the tag'],
+  },
+  {
+    name: 'a YAML tag outside the core schema',
+    config: GOOD.replace('  threshold: 0.9', '  threshold: !!binary MC45'),
+    at: 'neuron-budget.yml:5:14:',
+    says: ['unsupported YAML tag "!!binary"'],
+  },
+  {
     name: 'metric that does not suit the task found in the data',
     config: GOOD.replace('target:\n  threshold: 0.9', 'target:\n  metric: mae\n  threshold: 0.5'),
     at: 'neuron-budget.yml:5:3:',
@@ -242,6 +254,18 @@ describe('config mistakes through the built command line', () => {
     });
     expectOneUserError(run, c.at, c.says);
     expect(run.created, 'nothing may be written').toEqual([]);
+  });
+
+  test('`threshold: !!float 1` and `min-width: !!int 2` are numbers, as written: the run gets past the config', async () => {
+    const config = `${GOOD.replace('  threshold: 0.9', '  threshold: !!float 1')}search:\n  min-width: !!int 2\n`;
+    const run = await runCli(['check', '--report', 'out.json'], {
+      files: { 'readings.csv': CSV, 'neuron-budget.yml': config },
+    });
+    expect(run.stderr).not.toContain('error:');
+    expect([0, 1], run.stderr).toContain(run.code);
+    const report = JSON.parse(run.read('out.json'));
+    expect(report.metric.threshold).toBe(1);
+    expect(report.search.widths[0].width).toBe(2);
   });
 
   test('the cases cover at least twelve distinct mistakes', () => {

@@ -181,7 +181,25 @@ const cases: Case[] = [
       Buffer.from(',1,3,normal\n'),
     ]),
     at: 'readings.csv:10:2:',
-    says: ['column 2 "pump_model"', '0x28', 'not valid UTF-8'],
+    // c3 starts a two-byte character that 28 ("(") does not continue: c3 is the bad byte.
+    says: ['column 2 "pump_model"', 'the byte 0xc3', 'not valid UTF-8', '0x28 does not continue'],
+  },
+  {
+    name: 'a Latin-1 file: the offending byte is named, not the comma after it',
+    csv: Buffer.concat([
+      Buffer.from(table().slice(0, -1)),
+      Buffer.from('\n9,P-100 caf'),
+      Buffer.from([0xe9]),
+      Buffer.from(',1,3,normal\n'),
+    ]),
+    at: 'readings.csv:10:2:',
+    says: ['column 2 "pump_model"', 'found the byte 0xe9, which is not valid UTF-8', 'Latin-1'],
+  },
+  {
+    name: 'CR-only line endings (old Mac style)',
+    csv: table(ROWS, HEADER, '\r'),
+    at: 'readings.csv:1:',
+    says: ['this file ends its lines with CR only (old Mac style); save it with LF or CRLF line endings'],
   },
   {
     name: 'file saved as UTF-16',

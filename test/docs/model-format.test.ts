@@ -26,7 +26,8 @@ const schemaPath = join(REPO_ROOT, 'schema/model.schema.json');
 const docPath = join(REPO_ROOT, 'docs/model-format.md');
 
 function render(schema: Node): string {
-  const resolve = (n: Node): Node => (n.$ref ? { ...schema.$defs![n.$ref.replace('#/$defs/', '')], ...n, $ref: undefined } : n);
+  const resolve = (n: Node): Node =>
+    n.$ref ? { ...schema.$defs![n.$ref.replace('#/$defs/', '')], ...n, $ref: undefined } : n;
   const typeOf = (raw: Node): string => {
     const n = resolve(raw);
     if (n.const !== undefined) return `\`${JSON.stringify(n.const)}\``;
@@ -42,7 +43,8 @@ function render(schema: Node): string {
     const n = resolve(raw);
     const alt = (n.oneOf ?? n.anyOf ?? []).map(resolve).find((b) => b.properties);
     const props = n.properties ?? alt?.properties;
-    if (path !== '') rows.push(`| \`${path}\` | ${typeOf(raw)} | ${(raw.description ?? n.description ?? '').replace(/\|/g, '\\|')} |`);
+    if (path !== '')
+      rows.push(`| \`${path}\` | ${typeOf(raw)} | ${(raw.description ?? n.description ?? '').replace(/\|/g, '\\|')} |`);
     if (props) for (const [k, v] of Object.entries(props)) walk(v, path === '' ? k : `${path}.${k}`, seen);
     const items = n.items ? resolve(n.items) : null;
     if (items?.properties) for (const [k, v] of Object.entries(items.properties)) walk(v, `${path}[].${k}`, seen);
@@ -52,7 +54,7 @@ function render(schema: Node): string {
     '<!-- Generated from schema/model.schema.json by test/docs/model-format.test.ts; do not edit. -->',
     '# The model file (`neuron-budget/model@2`)',
     '',
-    'Written by `neuron-budget check --model FILE` (and the action\'s `model` output): the witness',
+    "Written by `neuron-budget check --model FILE` (and the action's `model` output): the witness",
     'network, everything needed to run it on raw rows (`neuron-budget predict`), its int8 form and',
     'what it costs on a device (`neuron-budget export` turns it into C). The loader checks every',
     'file against [`schema/model.schema.json`](../schema/model.schema.json) and names the key of the',

@@ -6,6 +6,9 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { CONFIG_SPEC, DERIVED, REQUIRED, type KeySpec } from '../../src/config/spec.js';
+import { MAX_CONFIG_BYTES } from '../../src/config/index.js';
+import { MAX_MAGNITUDE } from '../../src/data/numbers.js';
+import { MAX_NAME_LENGTH } from '../../src/data/where.js';
 
 const README = new URL('../../README.md', import.meta.url);
 const BEGIN = '<!-- config-reference:begin (generated from src/config/spec.ts by test/docs/readme.test.ts) -->';
@@ -53,5 +56,16 @@ describe('README config reference', () => {
     expect(text).toContain('npm ci && npm test');
     const ci = readFileSync(new URL('../../.ci/run', import.meta.url), 'utf8');
     expect(ci).toMatch(/^npm test$/m);
+  });
+});
+
+describe('README limits', () => {
+  it('states the limits the code enforces', () => {
+    const text = readFileSync(README, 'utf8');
+    const limits = text.slice(text.indexOf('## Limits'), text.indexOf('\n## ', text.indexOf('## Limits') + 1));
+    expect(limits).toContain(`at most\n  ${MAX_NAME_LENGTH} characters`);
+    const magnitude = MAX_MAGNITUDE.toPrecision(2).replace('e+', 'e');
+    expect(limits).toContain(`between -${magnitude} and ${magnitude}`);
+    expect(limits).toContain(`at most ${MAX_CONFIG_BYTES / 1024} KiB`);
   });
 });
