@@ -8655,15 +8655,24 @@ const SHORT_ESCAPES = { 0x0a: '\\n', 0x0d: '\\r', 0x09: '\\t' };
 function clip(s, max = MAX_SHOWN) {
     if (s.length <= max)
         return s;
-    const chars = Array.from(s.slice(0, max + 1));
+    // A code point takes one or two code units, so the first 2 × (max + 1) units hold more than
+    // `max` code points whenever the whole string does.
+    const chars = Array.from(s.slice(0, 2 * max + 2));
     return chars.length > max ? `${chars.slice(0, max - 1).join('')}${ELLIPSIS}` : s;
 }
 function hex(c, width) {
     return c.toString(16).padStart(width, '0');
 }
-/** Is this code point one that `escapeText` shows escaped? */
+/** Is this code point one that `escapeText` shows escaped? (A lone surrogate is not text either.) */
 function needsEscape(c, ch) {
-    return c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch);
+    return c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || (c >= 0xd800 && c <= 0xdfff) || INVISIBLE.test(ch);
+}
+/** Whether `escapeText` would show every character of `s` as it is (no control, invisible or bidi character). */
+function isPrintable(s) {
+    for (const ch of s)
+        if (needsEscape(ch.codePointAt(0) ?? 0, ch))
+            return false;
+    return true;
 }
 /** Text for logs, the terminal and messages: clipped, control and invisible characters escaped, `::` broken. */
 function escapeText(raw, max = MAX_SHOWN) {
@@ -8684,7 +8693,7 @@ function escapeText(raw, max = MAX_SHOWN) {
     return out.replace(/::/g, ':\\x3a');
 }
 /** A repository value inside a message: `"name"`, clipped and escaped. */
-function quote(raw, max = MAX_QUOTED) {
+function escape_quote(raw, max = MAX_QUOTED) {
     return `"${escapeText(raw, max).replace(/"/g, '\\"')}"`;
 }
 /** Whole lines of text (our own line breaks kept), each escaped as `escapeText` does. */
@@ -8920,14 +8929,14 @@ function parseInvocation(argv) {
     if (first === 'help') {
         const topic = rest[0];
         if (topic !== undefined && !isCommand(topic)) {
-            throw new UsageError(`no help for ${quote(topic)}${didYouMean(topic, Object.keys(COMMANDS))}; commands: ${commandList(', ')}`);
+            throw new UsageError(`no help for ${escape_quote(topic)}${didYouMean(topic, Object.keys(COMMANDS))}; commands: ${commandList(', ')}`);
         }
         return { kind: 'help', command: topic ?? null };
     }
     if (first.startsWith('-'))
-        throw new UsageError(`expected a command (${commandList(' or ')}) before options, found ${quote(first)}`);
+        throw new UsageError(`expected a command (${commandList(' or ')}) before options, found ${escape_quote(first)}`);
     if (!isCommand(first)) {
-        throw new UsageError(`unknown command ${quote(first)}${didYouMean(first, Object.keys(COMMANDS))}; commands: ${commandList(', ')}`);
+        throw new UsageError(`unknown command ${escape_quote(first)}${didYouMean(first, Object.keys(COMMANDS))}; commands: ${commandList(', ')}`);
     }
     const command = first;
     const { flags, args } = readFlags(command, rest);
@@ -8935,7 +8944,7 @@ function parseInvocation(argv) {
     if (flags.workers !== undefined) {
         workers = parseWorkerCount(flags.workers);
         if (workers === null) {
-            throw new UsageError(`${command}: --workers: expected an integer from 1 to ${MAX_WORKERS}, found ${quote(flags.workers)}`);
+            throw new UsageError(`${command}: --workers: expected an integer from 1 to ${MAX_WORKERS}, found ${escape_quote(flags.workers)}`);
         }
     }
     return { kind: 'run', command, flags, workers, args };
@@ -8955,7 +8964,7 @@ function readFlags(command, args) {
                 positional.push(token.value);
                 continue;
             }
-            throw new UsageError(`${command}: unexpected argument ${quote(token.value)}; options are written --name VALUE`);
+            throw new UsageError(`${command}: unexpected argument ${escape_quote(token.value)}; options are written --name VALUE`);
         }
         if (token.kind !== 'option')
             continue;
@@ -8963,7 +8972,7 @@ function readFlags(command, args) {
         if (!allowed.includes(name)) {
             const elsewhere = Object.hasOwn(FLAGS, name) ? ` (${command} has no --${name})` : '';
             const suggestion = didYouMean(name, allowed).replace(/"([^"]+)"/, '"--$1"');
-            throw new UsageError(`${command}: unknown option ${quote(`--${name}`)}${elsewhere}${suggestion}; see ${TOOL_NAME} ${command} --help`);
+            throw new UsageError(`${command}: unknown option ${escape_quote(`--${name}`)}${elsewhere}${suggestion}; see ${TOOL_NAME} ${command} --help`);
         }
         const flag = name;
         // `--config --report x`: the next option is not this one's value.
@@ -8975,7 +8984,7 @@ function readFlags(command, args) {
         flags[flag] = value;
     }
     if (positional.length < wanted.length) {
-        throw new UsageError(`${command}: expected ${wanted.join(' ')}, found ${positional.length === 0 ? 'nothing' : positional.map((p) => quote(p)).join(' ')}`);
+        throw new UsageError(`${command}: expected ${wanted.join(' ')}, found ${positional.length === 0 ? 'nothing' : positional.map((p) => escape_quote(p)).join(' ')}`);
     }
     for (const flag of spec.required ?? []) {
         if (flags[flag] === undefined)
@@ -9093,6 +9102,7 @@ const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import
 
 
 
+
 /** True when `child` is `parent` or lies below it (both absolute and normalised). @testOnly */
 function isInside(parent, child) {
     return relativeInside(parent, child) !== null;
@@ -9138,13 +9148,13 @@ function checkInside(root, baseDir, p) {
     const target = (0,external_node_path_namespaceObject.resolve)(baseDir, p);
     const where = (0,external_node_path_namespaceObject.isAbsolute)(p) ? 'is an absolute path outside' : 'leads outside';
     if (!isInside(absoluteRoot, target)) {
-        return { ok: false, reason: `"${p}" ${where} the workspace ${absoluteRoot}` };
+        return { ok: false, reason: `${escape_quote(p)} ${where} the workspace ${absoluteRoot}` };
     }
     const realRoot = realLocation(absoluteRoot);
     if (!isInside(realRoot, realLocation(target))) {
         return {
             ok: false,
-            reason: `"${p}" goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
+            reason: `${escape_quote(p)} goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
         };
     }
     return { ok: true, path: target };
@@ -10495,6 +10505,7 @@ const model_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https:
  * versions and some carry no position at all, so a small scanner (RFC 8259 grammar)
  * gives every user the same line and column.
  */
+
 /** Returns null when `text` is valid JSON. */
 function findJsonSyntaxProblem(text) {
     let i = 0;
@@ -10666,25 +10677,32 @@ class ScanError extends Error {
         this.expected = expected;
     }
 }
-/** 1-based line and column as a text editor counts them (column in characters). */
+/**
+ * 1-based line and column as a text editor counts them: LF, CRLF and a lone CR each end a
+ * line, and the column counts characters (a character outside the BMP is one, not two).
+ */
 function lineAndColumn(text, offset) {
     let line = 1;
-    let lineStart = 0;
+    let column = 1;
     for (let k = 0; k < offset && k < text.length; k++) {
-        if (text.charCodeAt(k) === 0x0a) {
+        const c = text.charCodeAt(k);
+        if (c === 0x0a || (c === 0x0d && text.charCodeAt(k + 1) !== 0x0a)) {
             line++;
-            lineStart = k + 1;
+            column = 1;
+        }
+        else if (c !== 0x0d && (c < 0xdc00 || c > 0xdfff)) {
+            column++;
         }
     }
-    return { line, column: offset - lineStart + 1 };
+    return { line, column };
 }
 function describeChar(text, offset) {
     const c = text.codePointAt(offset) ?? 0;
     if (c === 0x0a || c === 0x0d)
         return 'a line break';
-    if (c < 0x20 || c === 0x7f)
+    if (c < 0x20 || (c >= 0x7f && c < 0xa0))
         return `control character U+${c.toString(16).toUpperCase().padStart(4, '0')}`;
-    return JSON.stringify(String.fromCodePoint(c));
+    return escape_quote(String.fromCodePoint(c));
 }
 
 ;// CONCATENATED MODULE: ./src/common/json-schema.ts
@@ -10699,6 +10717,7 @@ function describeChar(text, offset) {
  * The first problem is reported as `key: expected …, found …`, with the key written as a path
  * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
  */
+
 class SchemaProblem extends Error {
     key;
     expected;
@@ -10955,10 +10974,8 @@ function describe(v) {
         return 'a list';
     if (typeof v === 'object')
         return 'an object';
-    if (typeof v === 'string') {
-        const s = JSON.stringify(v);
-        return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
-    }
+    if (typeof v === 'string')
+        return escape_quote(v, 60);
     return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
@@ -13319,6 +13336,11 @@ function classesOn(net, x, rows) {
 /** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
 
 
+
+/** A row's cell, by own key only: a column may be named `constructor` or `__proto__`. */
+function cellOf(row, name) {
+    return Object.hasOwn(row, name) ? row[name] : undefined;
+}
 /** (x − mean) / std, with a constant training column (std 0) only centred. */
 function standardise(x, mean, std) {
     return std > 0 ? (x - mean) / std : x - mean;
@@ -13330,14 +13352,16 @@ function encodeRows(model, rows) {
     rows.forEach((row, r) => {
         let c = r * inputs;
         for (const f of model.encoding.features) {
-            const cell = row[f.name];
+            const cell = cellOf(row, f.name);
             if (cell === undefined)
-                throw new UserError(`row ${r + 1}: column "${f.name}" is missing`, { key: f.name });
+                throw new UserError(`row ${r + 1}: column ${quote(f.name)} is missing`, { key: f.name });
             const text = cell.trim();
             if (f.kind === 'numeric') {
                 const v = text === '' ? Number.NaN : Number(text);
                 if (!Number.isFinite(v)) {
-                    throw new UserError(`row ${r + 1}, column "${f.name}": expected a number, found "${cell}"`, { key: f.name });
+                    throw new UserError(`row ${r + 1}, column ${quote(f.name)}: expected a number, found ${quote(cell)}`, {
+                        key: f.name,
+                    });
                 }
                 x[c++] = standardise(v, f.mean, f.std);
             }
@@ -13363,7 +13387,8 @@ function predictRows(model, rows) {
             continue;
         }
         const classes = t.classes ?? [];
-        const probabilities = {};
+        // Keyed by class labels, which may be any string: no prototype, so no label is special.
+        const probabilities = Object.create(null);
         let best = 0;
         if (K === 1) {
             // One logistic output: the probability of the second class.
@@ -13387,9 +13412,9 @@ function scoreRows(model, rows) {
     const preds = predictRows(model, rows);
     const name = model.encoding.target.name;
     const truth = rows.map((row, r) => {
-        const cell = row[name];
+        const cell = cellOf(row, name);
         if (cell === undefined)
-            throw new UserError(`row ${r + 1}: target column "${name}" is missing`, { key: name });
+            throw new UserError(`row ${r + 1}: target column ${quote(name)} is missing`, { key: name });
         return cell.trim();
     });
     const metric = model.target.metric;
@@ -15640,9 +15665,16 @@ const NumberKind = {
     Text: 1,
     /** `NaN`, `Infinity` and friends: number-like, but not a measurement. */
     NotFinite: 2,
-    /** Decimal notation whose value overflows a 64-bit float (e.g. 1e400). */
+    /** Decimal notation beyond ±MAX_MAGNITUDE (e.g. 1e39, or 1e400, which overflows a 64-bit float). */
     Overflow: 3,
 };
+/**
+ * The largest magnitude a cell may hold: float32's largest finite value. A device runs the
+ * network in float32, which cannot hold anything larger; and it keeps every column statistic
+ * finite (a sum of squared differences reaches at most rows × 4.6e77), whereas one cell of
+ * 1.7e308 overflows the variance to Infinity. Such a cell is refused rather than rescaled.
+ */
+const MAX_MAGNITUDE = 3.4028234663852886e38;
 // Decimal notation: optional sign, digits with an optional fraction, optional exponent.
 // Hex, binary, `1_000` and the like are text, even though Number() would accept some.
 const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
@@ -15654,7 +15686,7 @@ function classifyNumber(text, parsed) {
     const couldBeNumber = (c >= 48 && c <= 57) || c === 45 || c === 43 || c === 46;
     if (couldBeNumber && DECIMAL.test(text)) {
         const value = Number(text);
-        if (!Number.isFinite(value))
+        if (!(Math.abs(value) <= MAX_MAGNITUDE))
             return NumberKind.Overflow;
         parsed.value = value === 0 ? 0 : value; // -0 and 0 are the same measurement
         return NumberKind.Finite;
@@ -15668,7 +15700,9 @@ function classifyNumber(text, parsed) {
 /**
  * A pass-through stream that refuses bytes that are not UTF-8 text (invalid sequences,
  * NUL bytes) before the CSV parser sees them, and says where they are: the line as an
- * editor counts it and the field number, tracked with a small quote-aware scan.
+ * editor counts it and the field number, tracked with a small quote-aware scan. It also
+ * recognises a file whose lines end with CR alone (old Mac style), which the CSV parser
+ * would read as one endless header line.
  */
 
 class NotTextError extends Error {
@@ -15681,6 +15715,7 @@ class NotTextError extends Error {
 }
 const QUOTE = 0x22;
 const NEWLINE = 0x0a;
+const CR = 0x0d;
 const HEADER_BYTES_KEPT = 65536;
 class TextCheck extends external_node_stream_namespaceObject.Transform {
     delimiter;
@@ -15691,6 +15726,11 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
     need = 0;
     low = 0x80;
     high = 0xbf;
+    /** The bytes of the character being read (its lead byte and the continuation bytes so far). */
+    sequence = new Uint8Array(4);
+    sequenceLength = 0;
+    /** A CR outside quotes on line 1, not yet known to start a CRLF. */
+    pendingCR = false;
     headerBytes = [];
     header = null;
     constructor(delimiter) {
@@ -15714,7 +15754,11 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
     }
     _flush(done) {
         if (this.need > 0) {
-            done(new NotTextError(this.where('truncated', 'end of file')));
+            done(new NotTextError(this.where('truncated', this.sequenceHex())));
+            return;
+        }
+        if (this.pendingCR) {
+            done(new NotTextError(this.where('cr-only', text_check_hex(CR))));
             return;
         }
         done();
@@ -15724,9 +15768,20 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
         const delim = this.delimiter.length === 1 ? this.delimiter.charCodeAt(0) : -1;
         for (let i = 0; i < chunk.length; i++) {
             const b = chunk[i];
+            // CR CR LF (a doubled conversion) still ends the line in LF; CR then anything else does not.
+            if (this.pendingCR && b !== CR) {
+                if (b !== NEWLINE)
+                    return this.where('cr-only', text_check_hex(CR));
+                this.pendingCR = false;
+            }
             if (this.need > 0) {
+                // The character started by the lead byte is what is broken, not the byte after it
+                // (in a Latin-1 file, `é,` is e9 2c: the e9 is wrong, the comma is fine).
                 if (b < this.low || b > this.high)
-                    return this.where('invalid', text_check_hex(b));
+                    return this.where('invalid', this.sequenceHex(), text_check_hex(b));
+                if (this.header === null)
+                    this.keepHeaderByte(b);
+                this.sequence[this.sequenceLength++] = b;
                 this.need--;
                 this.low = 0x80;
                 this.high = 0xbf;
@@ -15735,8 +15790,10 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
             if (b < 0x80) {
                 if (b === 0)
                     return this.where('nul', '0x00');
-                if (this.line === 1 && this.header === null)
+                if (this.header === null)
                     this.keepHeaderByte(b);
+                if (b === CR && this.header === null && !this.inQuotes)
+                    this.pendingCR = true;
                 if (b === NEWLINE) {
                     this.line++;
                     if (!this.inQuotes)
@@ -15750,8 +15807,10 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
                 }
                 continue;
             }
-            if (this.line === 1 && this.header === null)
+            if (this.header === null)
                 this.keepHeaderByte(b);
+            this.sequence[0] = b;
+            this.sequenceLength = 1;
             // Lead bytes and the ranges their first continuation byte may take (no overlongs,
             // no surrogates, nothing above U+10FFFF): the well-formed table of the Unicode standard.
             if (b >= 0xc2 && b <= 0xdf)
@@ -15778,8 +15837,12 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
         this.low = low;
         this.high = high;
     }
+    sequenceHex() {
+        return Array.from(this.sequence.subarray(0, this.sequenceLength), text_check_hex).join(' ');
+    }
+    /** Keeps the first record's bytes; called before `inQuotes` follows this byte. */
     keepHeaderByte(b) {
-        if (b === NEWLINE) {
+        if (b === NEWLINE && !this.inQuotes) {
             this.header = splitHeader(Buffer.from(this.headerBytes).toString('utf8'), this.delimiter);
             this.headerBytes = [];
         }
@@ -15787,28 +15850,48 @@ class TextCheck extends external_node_stream_namespaceObject.Transform {
             this.headerBytes.push(b);
         }
     }
-    where(why, bytes) {
-        return { line: this.line, column: this.field + 1, bytes, why, header: this.header ?? [] };
+    where(why, bytes, next = null) {
+        return { line: this.line, column: this.field + 1, bytes, next, why, header: this.header ?? [] };
     }
 }
 function text_check_hex(b) {
     return `0x${b.toString(16).padStart(2, '0')}`;
 }
-/** Good enough to name a column in a message; the CSV parser does the real work. */
+/** Good enough to name a column in a message (quoted names may hold delimiters and line breaks); the CSV parser does the real work. */
 function splitHeader(text, delimiter) {
-    return text
-        .replace(/^\uFEFF/, '')
-        .replace(/\r$/, '')
-        .split(delimiter)
-        .map((s) => s.trim().replace(/^"(.*)"$/, '$1'));
+    const names = [];
+    let name = '';
+    let quoted = false;
+    const line = text.replace(/^\uFEFF/, '').replace(/\r$/, '');
+    for (let i = 0; i < line.length; i++) {
+        const ch = line[i];
+        if (ch === '"') {
+            if (quoted && line[i + 1] === '"') {
+                name += '"';
+                i++;
+            }
+            else
+                quoted = !quoted;
+        }
+        else if (!quoted && line.startsWith(delimiter, i)) {
+            names.push(name.trim());
+            name = '';
+            i += delimiter.length - 1;
+        }
+        else
+            name += ch;
+    }
+    names.push(name.trim());
+    return names;
 }
 
 ;// CONCATENATED MODULE: ./src/data/where.ts
 /** Where in the data file something is, for messages a user can follow in a text editor. */
 
+
 /** `column 4 "kurtosis"`: both the number an editor shows and the header name. */
 function columnLabel(column, name) {
-    return name === undefined || name === '' ? `column ${column}` : `column ${column} "${name}"`;
+    return name === undefined || name === '' ? `column ${column}` : `column ${column} ${escape_quote(name, 60)}`;
 }
 /** An error at a line (1-based, as an editor counts) and column (1-based field number). */
 function dataError(file, line, column, message, key) {
@@ -15817,8 +15900,23 @@ function dataError(file, line, column, message, key) {
 }
 /** Quote a value from the file for a message, keeping it short and visible. */
 function shownValue(value) {
-    const cut = value.length > 40 ? `${value.slice(0, 37)}...` : value;
-    return JSON.stringify(cut);
+    return escape_quote(value, 40);
+}
+/**
+ * Most characters in a column name, class label or category (documented in the README's
+ * limits). These strings are stored in the model and the baseline and shown on every screen;
+ * a longer one is a whole document pasted into a cell, not a name (a practical cap, no source).
+ */
+const MAX_NAME_LENGTH = 256;
+/** Characters (code points) in `s`. */
+function characterCount(s) {
+    let n = 0;
+    for (let i = 0; i < s.length; i++) {
+        const c = s.charCodeAt(i);
+        if (c < 0xdc00 || c > 0xdfff)
+            n++; // a low surrogate completes a character already counted
+    }
+    return n;
 }
 /**
  * A problem whose fix belongs in the config (a column name that is not in the header).
@@ -15921,7 +16019,7 @@ async function scoreCsv(model, file, onBatch, delimiter = ',') {
     const number = (text, line, col) => {
         const kind = classifyNumber(text, parsed);
         if (kind !== NumberKind.Finite) {
-            throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)}: expected a finite number, found ${quote(text)}`);
+            throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)}: expected a finite number, found ${escape_quote(text)}`);
         }
         return parsed.value;
     };
@@ -15935,7 +16033,7 @@ async function scoreCsv(model, file, onBatch, delimiter = ',') {
             columns = features.map((f) => {
                 const field = at.get(f.name);
                 if (field === undefined) {
-                    throw dataError(file, line, undefined, `expected the column ${quote(f.name)} the model reads, found only ${record.map((c) => quote(c, 40)).join(', ')}`);
+                    throw dataError(file, line, undefined, `expected the column ${escape_quote(f.name)} the model reads, found only ${record.map((c) => escape_quote(c, 40)).join(', ')}`);
                 }
                 return { field, name: f.name };
             });
@@ -15956,7 +16054,7 @@ async function scoreCsv(model, file, onBatch, delimiter = ',') {
             else {
                 const k = f.categories.indexOf(text);
                 if (k < 0) {
-                    throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)}: the category ${quote(text)} is not one the model was trained on (${f.categories.map((v) => quote(v, 30)).join(', ')})`);
+                    throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)}: the category ${escape_quote(text)} is not one the model was trained on (${f.categories.map((v) => escape_quote(v, 30)).join(', ')})`);
                 }
                 for (let j = 0; j < f.categories.length; j++)
                     x[c + j] = j === k ? 1 : 0;
@@ -15974,7 +16072,7 @@ async function scoreCsv(model, file, onBatch, delimiter = ',') {
                 if (k < 0 && classifyNumber(text, parsed) === NumberKind.Finite)
                     k = classes.indexOf(String(parsed.value));
                 if (k < 0) {
-                    throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)} (the target): the class ${quote(text)} is not one the model knows`);
+                    throw dataError(file, line, col.field + 1, `${columnLabel(col.field + 1, col.name)} (the target): the class ${escape_quote(text)} is not one the model knows`);
                 }
                 truthClass[filled] = k;
             }
@@ -16072,7 +16170,7 @@ async function readModel(root, path) {
 /** `export MODEL.json --format c --out DIR [--name NAME]`: NAME.h and NAME.c in DIR. */
 async function runExport(root, args, flags) {
     if (flags.format !== 'c')
-        throw new UsageError(`export: --format: expected c, found ${quote(flags.format ?? '')}`);
+        throw new UsageError(`export: --format: expected c, found ${escape_quote(flags.format ?? '')}`);
     const model = await readModel(root, args[0]);
     if (model.int8 === null) {
         throw new errors_UserError(`${args[0]}: the model has no int8 form (it was written by an older neuron-budget); run check --model again to write one with it`);
@@ -16219,7 +16317,8 @@ function usage(command) {
         '',
         'The current folder is the workspace. Paths in the config file resolve against',
         "the config file's folder and must stay inside the workspace.",
-        "Messages go to stderr; stdout carries only what was asked for (--help, --version, predict's CSV).",
+        'Messages go to stderr; stdout carries only what was asked for',
+        "(--help, --version, predict's CSV).",
         '',
         exitCodesText(),
     ].join('\n');
@@ -16668,12 +16767,12 @@ function checkRules(reader, written, config) {
     ]) {
         if (list?.includes(data.target)) {
             const role = name === 'features' ? 'a feature' : 'ignored';
-            throw reader.valueError(at('data', name), `lists the target column ${quote(data.target)}; the target cannot also be ${role}`);
+            throw reader.valueError(at('data', name), `lists the target column ${escape_quote(data.target)}; the target cannot also be ${role}`);
         }
     }
     const both = data.features?.find((f) => data.ignore.includes(f));
     if (both !== undefined) {
-        throw reader.valueError(at('data', 'ignore'), `column ${quote(both)} is both in data.features and in data.ignore; keep it in one`);
+        throw reader.valueError(at('data', 'ignore'), `column ${escape_quote(both)} is both in data.features and in data.ignore; keep it in one`);
     }
     if (data.judging === undefined)
         data.judging = derivedJudging(data.validation);
@@ -16808,7 +16907,7 @@ class ConfigReader {
         }
         if (first.code === 'DUPLICATE_KEY') {
             const key = /^\s*["']?([^"':\n]*)/.exec(this.text.slice(offset))?.[1]?.trim() ?? '';
-            throw this.errorAt(offset, null, `key ${quote(key)} appears twice in the same mapping; keep one`);
+            throw this.errorAt(offset, null, `key ${escape_quote(key)} appears twice in the same mapping; keep one`);
         }
         const reason = first.message
             .replace(/ at line \d+, column \d+[\s\S]*$/, '')
@@ -16830,24 +16929,28 @@ class ConfigReader {
                     return;
                 if (!CORE_TAGS.has(tag)) {
                     const shown = tag.startsWith('tag:yaml.org,2002:') ? `!!${tag.slice('tag:yaml.org,2002:'.length)}` : tag;
-                    throw this.errorAt(this.tagOffset(node), null, `unsupported YAML tag ${quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`);
+                    throw this.errorAt(this.tagOffset(node), null, `unsupported YAML tag ${escape_quote(shown)}; the config takes plain values (text, numbers, true/false, null, lists, mappings), so remove the tag`);
                 }
                 if ((0,dist/* isScalar */.jn)(node) && NUMBER_TAGS.has(tag) && typeof node.value === 'string') {
                     const text = node.value.trim();
                     if (!reader_DECIMAL.test(text)) {
-                        throw this.error(node, null, `the tag ${tag.endsWith('int') ? '!!int' : '!!float'} needs a number, found ${quote(node.value)}`);
+                        throw this.error(node, null, `the tag ${tag.endsWith('int') ? '!!int' : '!!float'} needs a number, found ${escape_quote(node.value)}`);
                     }
                     node.value = Number(text);
                 }
             },
         });
     }
-    /** Where a node's tag is written (the parser's range starts at the value, after the tag). */
+    /** Where a tagged node's tag is written (the node's range starts after it), else the node. */
     tagOffset(node) {
         const start = node.range?.[0] ?? 0;
-        const lineStart = this.text.lastIndexOf('\n', start - 1) + 1;
-        const bang = this.text.lastIndexOf('!', start);
-        return bang >= lineStart ? (this.text[bang - 1] === '!' ? bang - 1 : bang) : start;
+        let end = start;
+        while (end > 0 && /\s/.test(this.text[end - 1]))
+            end--;
+        let tag = end;
+        while (tag > 0 && !/\s/.test(this.text[tag - 1]))
+            tag--;
+        return this.text[tag] === '!' && tag < end ? tag : start;
     }
     errorAt(offset, key, message) {
         const { line, col } = this.lines.linePos(Math.min(offset, this.text.length));
@@ -16892,7 +16995,7 @@ class ConfigReader {
             if (v === null)
                 return node.source === '' || node.source === undefined ? 'nothing' : `null`;
             if (typeof v === 'string')
-                return quote(v);
+                return escape_quote(v);
             if (typeof v === 'number' || typeof v === 'boolean' || typeof v === 'bigint')
                 return String(v);
         }
@@ -17024,7 +17127,7 @@ class ConfigReader {
                         throw this.error(item ?? node, found.key, `expected column names as text, found ${this.describe(item)}${hint}`);
                     }
                     if (seen.has(v))
-                        throw this.error(item, found.key, `column ${quote(v)} is listed twice`);
+                        throw this.error(item, found.key, `column ${escape_quote(v)} is listed twice`);
                     seen.add(v);
                     out.push(v);
                 }
@@ -17116,7 +17219,7 @@ function recallFloors(config, task, classes) {
     if (rule === null)
         return null;
     if (task !== 'classification' || classes === null) {
-        throw configKeyError(config, 'target.min-recall', `the target column ${quote(config.data.target)} was read as regression; recall floors need classes (remove target.min-recall)`);
+        throw configKeyError(config, 'target.min-recall', `the target column ${escape_quote(config.data.target)} was read as regression; recall floors need classes (remove target.min-recall)`);
     }
     if ('every' in rule)
         return classes.map(() => rule.every);
@@ -17124,7 +17227,7 @@ function recallFloors(config, task, classes) {
     for (const { label, min } of rule.classes) {
         const i = classes.indexOf(label);
         if (i < 0) {
-            throw configKeyError(config, 'target.min-recall', `names the class ${quote(label)}, which the target column ${quote(config.data.target)} does not have${didYouMean(label, classes)}; its classes are ${classes.map((c) => quote(c)).join(', ')}`);
+            throw configKeyError(config, 'target.min-recall', `names the class ${escape_quote(label)}, which the target column ${escape_quote(config.data.target)} does not have${didYouMean(label, classes)}; its classes are ${classes.map((c) => escape_quote(c)).join(', ')}`);
         }
         floors[i] = min;
     }
@@ -17139,10 +17242,10 @@ function settleMetric(config, task) {
     if (!config.metricGiven) {
         const metric = defaultMetric(task);
         if (metric === 'accuracy' && target.threshold > 1) {
-            throw configKeyError(config, 'target.threshold', `the target column ${quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
+            throw configKeyError(config, 'target.threshold', `the target column ${escape_quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
         }
         if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
-            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
+            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${escape_quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
         }
         return { ...config, target: { ...target, metric } };
     }
@@ -17151,14 +17254,148 @@ function settleMetric(config, task) {
     const hint = task === 'classification'
         ? 'set target.metric to accuracy, or data.task to regression'
         : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
-    throw configKeyError(config, 'target.metric', `the target column ${quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
+    throw configKeyError(config, 'target.metric', `the target column ${escape_quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
+}
+
+;// CONCATENATED MODULE: ./src/data/column-store.ts
+/**
+ * One column of the file, kept compactly while reading: numbers in a growable
+ * Float64Array, and (while the column has few distinct values) each cell's text as an
+ * index into a small table of distinct strings. Which of the two the column really is
+ * gets decided once the whole file has been read.
+ */
+
+
+const INITIAL_CAPACITY = 1024;
+/** The column reads as numbers: at least half of its cells are (see columns.ts). */
+function looksNumeric(store) {
+    return store.numberCount > 0 && store.numberCount >= store.textCount;
+}
+class ColumnStore {
+    name;
+    column;
+    distinctLimit;
+    length = 0;
+    /** Cell values where they are finite numbers, NaN elsewhere. */
+    numbers = new Float64Array(INITIAL_CAPACITY);
+    /** Index into `distinct` per cell; null once the column has too many distinct values. */
+    codes = new Int32Array(INITIAL_CAPACITY);
+    /** Distinct cell texts in order of first appearance; null after overflow. */
+    distinct = new Map();
+    /** Where the distinct texts first outgrew `distinctLimit` (the value and its line). */
+    overflow = null;
+    /** After overflow, all distinct texts while the column still looks like text (for the count). */
+    overflowTexts = null;
+    numberCount = 0;
+    textCount = 0;
+    firstText = null;
+    /** First NaN/Infinity/overflowing number, and which it was. */
+    firstNotFinite = null;
+    /** First distinct text longer than MAX_NAME_LENGTH (refused if the column is categorical). */
+    firstTooLong = null;
+    /** Empty cells met, including those of dropped rows. */
+    missing = 0;
+    parsed = { value: 0 };
+    constructor(name, 
+    /** 1-based field number in the file. */
+    column, 
+    /** Most distinct texts worth remembering (the categorical cap, or the class cap). */
+    distinctLimit) {
+        this.name = name;
+        this.column = column;
+        this.distinctLimit = distinctLimit;
+    }
+    push(text, line) {
+        const i = this.length;
+        if (i === this.numbers.length)
+            this.grow();
+        const kind = classifyNumber(text, this.parsed);
+        if (kind === NumberKind.Finite) {
+            this.numbers[i] = this.parsed.value;
+            this.numberCount++;
+        }
+        else {
+            this.numbers[i] = NaN;
+            if (kind === NumberKind.Text) {
+                this.textCount++;
+                if (this.firstText === null)
+                    this.firstText = { value: text, line };
+            }
+            else {
+                this.numberCount++;
+                if (this.firstNotFinite === null) {
+                    this.firstNotFinite = { value: text, line, overflow: kind === NumberKind.Overflow };
+                }
+            }
+        }
+        if (this.distinct !== null && this.codes !== null) {
+            let code = this.distinct.get(text);
+            if (code === undefined) {
+                if (text.length > MAX_NAME_LENGTH && this.firstTooLong === null && characterCount(text) > MAX_NAME_LENGTH) {
+                    this.firstTooLong = { value: text, line };
+                }
+                code = this.distinct.size;
+                if (code >= this.distinctLimit) {
+                    this.startOverflow(text, line);
+                }
+                else {
+                    this.distinct.set(text, code);
+                }
+            }
+            if (this.codes !== null)
+                this.codes[i] = code;
+        }
+        else if (this.overflowTexts !== null) {
+            if (this.textCount >= this.numberCount)
+                this.overflowTexts.add(text);
+            else
+                this.overflowTexts = null; // a numeric-looking column: the count no longer matters
+        }
+        this.length = i + 1;
+    }
+    /** Distinct values counted so far past the cap (a lower bound when counting stopped). */
+    distinctCount() {
+        if (this.distinct !== null)
+            return this.distinct.size;
+        return this.overflowTexts?.size ?? this.distinctLimit + 1;
+    }
+    /** Whether `distinctCount()` is exact. */
+    distinctCountExact() {
+        return this.distinct !== null || this.overflowTexts !== null;
+    }
+    startOverflow(text, line) {
+        this.overflow = { value: text, line };
+        if (this.textCount >= this.numberCount && this.distinct !== null) {
+            this.overflowTexts = new Set(this.distinct.keys());
+            this.overflowTexts.add(text);
+        }
+        this.distinct = null;
+        this.codes = null;
+    }
+    grow() {
+        const capacity = this.numbers.length * 2;
+        const numbers = new Float64Array(capacity);
+        numbers.set(this.numbers);
+        this.numbers = numbers;
+        if (this.codes !== null) {
+            const codes = new Int32Array(capacity);
+            codes.set(this.codes);
+            this.codes = codes;
+        }
+    }
 }
 
 ;// CONCATENATED MODULE: ./src/data/columns.ts
 
 
+
+
+
+
 /** Most classes a classification target may have (a practical cap, no source). */
 const MAX_CLASSES = 1000;
+/** Column names listed in a message before the rest are only counted. */
+const NAMES_LISTED = 30;
 /** Resolves data.target / data.features / data.ignore against the header. */
 function chooseColumns(header, config, file) {
     const data = config.data;
@@ -17168,16 +17405,16 @@ function chooseColumns(header, config, file) {
         if (i !== undefined)
             return i;
         const guess = nearest(name, header);
-        const hint = guess === null ? '.' : ` (did you mean "${guess}"?).`;
-        throw new ConfigKeyProblem(key, `expected a column of ${file.shown}, found "${name}", which its header (line 1) does not have${hint} ` +
-            `The columns are: ${header.join(', ')}`);
+        const hint = guess === null ? '.' : ` (did you mean ${escape_quote(guess)}?).`;
+        throw new ConfigKeyProblem(key, `expected a column of ${file.shown}, found ${escape_quote(name)}, which its header (line 1) does not have${hint} ` +
+            `The columns are: ${listNames(header)}`);
     };
     const target = find(data.target, 'data.target');
     const ignored = new Set();
     for (const name of data.ignore) {
         const i = find(name, 'data.ignore');
         if (i === target) {
-            throw new ConfigKeyProblem('data.ignore', `lists "${name}", which is the target column (data.target)`);
+            throw new ConfigKeyProblem('data.ignore', `lists ${escape_quote(name)}, which is the target column (data.target)`);
         }
         ignored.add(i);
     }
@@ -17190,27 +17427,27 @@ function chooseColumns(header, config, file) {
         for (const name of data.features) {
             const i = find(name, 'data.features');
             if (i === target) {
-                throw new ConfigKeyProblem('data.features', `lists "${name}", which is the target column (data.target)`);
+                throw new ConfigKeyProblem('data.features', `lists ${escape_quote(name)}, which is the target column (data.target)`);
             }
             if (ignored.has(i)) {
-                throw new ConfigKeyProblem('data.features', `lists "${name}", which data.ignore also lists`);
+                throw new ConfigKeyProblem('data.features', `lists ${escape_quote(name)}, which data.ignore also lists`);
             }
             if (features.includes(i)) {
-                throw new ConfigKeyProblem('data.features', `lists "${name}" twice`);
+                throw new ConfigKeyProblem('data.features', `lists ${escape_quote(name)} twice`);
             }
             features.push(i);
         }
     }
     if (features.length === 0) {
-        throw new ConfigKeyProblem(data.features === null ? 'data.ignore' : 'data.features', `expected at least one feature column besides the target "${data.target}", found none left in ${file.shown}`);
+        throw new ConfigKeyProblem(data.features === null ? 'data.ignore' : 'data.features', `expected at least one feature column besides the target ${escape_quote(data.target)}, found none left in ${file.shown}`);
     }
+    for (const field of [...features, target])
+        checkNameLength(header[field], field + 1, file);
     const columns = features.map((field) => ({ field, distinctLimit: data.maxCategories }));
     columns.push({ field: target, distinctLimit: MAX_CLASSES });
     return { plan: { columns, target: columns.length - 1 }, features, target };
 }
-function looksNumeric(store) {
-    return store.numberCount > 0 && store.numberCount >= store.textCount;
-}
+
 /** Numeric column values, or the first cell that breaks them. */
 function numericColumn(store, file, role) {
     const text = store.firstText;
@@ -17218,7 +17455,8 @@ function numericColumn(store, file, role) {
     const label = `${columnLabel(store.column, store.name)}${role}`;
     if (odd !== null && (text === null || odd.line <= text.line)) {
         const why = odd.overflow
-            ? 'a number too large for a 64-bit float'
+            ? `a number too large: cells may hold numbers from -${MAX_MAGNITUDE_SHOWN} to ${MAX_MAGNITUDE_SHOWN}, the range of ` +
+                'the float32 numbers a device runs the network in (check the unit or the decimal point)'
             : 'a value that is not a finite number (NaN and Infinity are not measurements; leave the cell empty if it is missing)';
         throw dataError(file, odd.line, store.column, `${label}: expected a finite number, found ${shownValue(odd.value)}, ${why}`);
     }
@@ -17228,7 +17466,13 @@ function numericColumn(store, file, role) {
     }
     return { kind: 'numeric', name: store.name, column: store.column, values: store.numbers.subarray(0, store.length) };
 }
-function categoricalColumn(store, file, cap) {
+/** MAX_MAGNITUDE as a message shows it. */
+const MAX_MAGNITUDE_SHOWN = MAX_MAGNITUDE.toPrecision(2).replace('e+', 'e');
+/**
+ * The column's texts as categories, or the first cell that breaks them. `what` names a
+ * value in messages: "category" for a feature, "class label" for the target.
+ */
+function categoricalColumn(store, file, cap, what = 'category') {
     if (store.distinct === null || store.codes === null) {
         const count = store.distinctCount();
         const over = store.overflow;
@@ -17236,6 +17480,11 @@ function categoricalColumn(store, file, cap) {
         throw dataError(file, over?.line ?? 1, store.column, `${columnLabel(store.column, store.name)} is text with ${amount} distinct values; a categorical column ` +
             `may have at most ${cap} (data.max-categories). The value ${shownValue(over?.value ?? '')} on this line ` +
             `is number ${cap + 1}. An identifier column belongs in data.ignore.`);
+    }
+    const long = store.firstTooLong;
+    if (long !== null) {
+        throw dataError(file, long.line, store.column, `${columnLabel(store.column, store.name)}: a ${what} may have at most ${MAX_NAME_LENGTH} characters; found ` +
+            `one of ${formatCount(characterCount(long.value))} characters: ${shownValue(long.value)}`);
     }
     return sortedCategories(store, store.distinct, store.codes);
 }
@@ -17255,6 +17504,22 @@ function compareText(a, b) {
 /** The feature column as numeric or categorical, by the rule at the top of this file. */
 function featureColumn(store, file, cap) {
     return looksNumeric(store) ? numericColumn(store, file, '') : categoricalColumn(store, file, cap);
+}
+/** A column the job uses must have a name of at most MAX_NAME_LENGTH characters. */
+function checkNameLength(name, column, file) {
+    if (name.length <= MAX_NAME_LENGTH)
+        return;
+    const length = characterCount(name);
+    if (length <= MAX_NAME_LENGTH)
+        return;
+    throw dataError(file, 1, column, `column ${column}: a column name may have at most ${MAX_NAME_LENGTH} characters; found one of ` +
+        `${formatCount(length)} characters: ${shownValue(name)}`);
+}
+/** The header's names for a message: quoted, clipped, and at most NAMES_LISTED of them. */
+function listNames(header) {
+    const shown = header.slice(0, NAMES_LISTED).map((name) => escape_quote(name, 40));
+    const more = header.length - shown.length;
+    return more > 0 ? `${shown.join(', ')} and ${formatCount(more)} more` : shown.join(', ');
 }
 
 ;// CONCATENATED MODULE: ./src/data/encode.ts
@@ -17441,7 +17706,7 @@ function categories(hash, names, codes) {
 ;// CONCATENATED MODULE: ./src/data/profile.ts
 function profileData(features, target, stores, rows) {
     const missing = new Map(stores.map((s) => [s.column, s.missing]));
-    const profiles = {};
+    const profiles = keyedTable();
     for (const column of features) {
         const lost = missing.get(column.column) ?? 0;
         profiles[column.name] =
@@ -17454,10 +17719,11 @@ function profileData(features, target, stores, rows) {
         const counts = new Array(target.classes.length).fill(0);
         for (const c of target.indices)
             counts[c]++;
-        classes = {};
+        const table = keyedTable();
         target.classes.forEach((label, i) => {
-            classes[label] = counts[i];
+            table[label] = counts[i];
         });
+        classes = table;
     }
     const used = [
         ...features.map((c) => ({ name: c.name, column: c.column })),
@@ -17491,128 +17757,124 @@ function categoricalProfile(categories, codes, missing) {
     const tally = new Array(categories.length).fill(0);
     for (const c of codes)
         tally[c]++;
-    const counts = {};
+    const counts = keyedTable();
     categories.forEach((category, i) => {
         counts[category] = tally[i];
     });
     return { kind: 'categorical', counts, missing };
 }
+/** An empty table keyed by strings from the file: no prototype, so no key is special. */
+function keyedTable() {
+    return Object.create(null);
+}
 
-;// CONCATENATED MODULE: ./src/data/column-store.ts
+;// CONCATENATED MODULE: external "node:os"
+const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
+;// CONCATENATED MODULE: external "node:v8"
+const external_node_v8_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:v8");
+;// CONCATENATED MODULE: ./src/data/memory.ts
 /**
- * One column of the file, kept compactly while reading: numbers in a growable
- * Float64Array, and (while the column has few distinct values) each cell's text as an
- * index into a small table of distinct strings. Which of the two the column really is
- * gets decided once the whole file has been read.
+ * Will the data fit in memory? The column stores grow by doubling while the file is read, and
+ * the split and the encoded dataset come after; a process that runs out of address space or
+ * heap on the way dies with a fatal V8 error and a native stack, or an internal error, after
+ * minutes of reading. So each time the stores are about to double, the reader projects the
+ * whole file's rows from the bytes read so far and the file's size, estimates what loading them
+ * takes, and stops with a message (how much, the limit, what to do) when it will not fit.
+ *
+ * The estimate counts what src/data allocates; the search's own working memory comes on top.
  */
 
-const INITIAL_CAPACITY = 1024;
-class ColumnStore {
-    name;
-    column;
-    distinctLimit;
-    length = 0;
-    /** Cell values where they are finite numbers, NaN elsewhere. */
-    numbers = new Float64Array(INITIAL_CAPACITY);
-    /** Index into `distinct` per cell; null once the column has too many distinct values. */
-    codes = new Int32Array(INITIAL_CAPACITY);
-    /** Distinct cell texts in order of first appearance; null after overflow. */
-    distinct = new Map();
-    /** Where the distinct texts first outgrew `distinctLimit` (the value and its line). */
-    overflow = null;
-    /** After overflow, all distinct texts while the column still looks like text (for the count). */
-    overflowTexts = null;
-    numberCount = 0;
-    textCount = 0;
-    firstText = null;
-    /** First NaN/Infinity/overflowing number, and which it was. */
-    firstNotFinite = null;
-    /** Empty cells met, including those of dropped rows. */
-    missing = 0;
-    parsed = { value: 0 };
-    constructor(name, 
-    /** 1-based field number in the file. */
-    column, 
-    /** Most distinct texts worth remembering (the categorical cap, or the class cap). */
-    distinctLimit) {
-        this.name = name;
-        this.column = column;
-        this.distinctLimit = distinctLimit;
+
+
+
+const MIB = 1024 * 1024;
+/** Room kept free for everything not estimated (parser buffers, the report, the workers' start). */
+const HEADROOM = 64 * MIB;
+/** The estimate is an estimate: ask for this much more (a practical margin, no source). */
+const MARGIN = 1.1;
+/** Bytes per row the split keeps: its row lists as JavaScript arrays (heap) and as Int32Arrays. */
+const SPLIT_HEAP_PER_ROW = 16;
+const SPLIT_TYPED_PER_ROW = 12;
+function estimateLoad(shape) {
+    const perRecord = shape.bytesParsed / Math.max(1, shape.recordsParsed);
+    const rows = Math.max(shape.rows, Math.ceil(shape.fileBytes / Math.max(1, perRecord)));
+    let capacity = shape.capacity;
+    while (capacity < rows)
+        capacity *= 2;
+    let storePerRow = 0;
+    let afterPerRow = 8; // the target per row as the network reads it
+    for (const c of shape.columns) {
+        storePerRow += 8 + (c.codes ? 4 : 0);
+        afterPerRow += 8 * c.inputs + (c.codes ? 4 : 0); // inputs as float64; categories re-coded in sorted order
     }
-    push(text, line) {
-        const i = this.length;
-        if (i === this.numbers.length)
-            this.grow();
-        const kind = classifyNumber(text, this.parsed);
-        if (kind === NumberKind.Finite) {
-            this.numbers[i] = this.parsed.value;
-            this.numberCount++;
-        }
-        else {
-            this.numbers[i] = NaN;
-            if (kind === NumberKind.Text) {
-                this.textCount++;
-                if (this.firstText === null)
-                    this.firstText = { value: text, line };
-            }
-            else {
-                this.numberCount++;
-                if (this.firstNotFinite === null) {
-                    this.firstNotFinite = { value: text, line, overflow: kind === NumberKind.Overflow };
-                }
-            }
-        }
-        if (this.distinct !== null && this.codes !== null) {
-            let code = this.distinct.get(text);
-            if (code === undefined) {
-                code = this.distinct.size;
-                if (code >= this.distinctLimit) {
-                    this.startOverflow(text, line);
-                }
-                else {
-                    this.distinct.set(text, code);
-                }
-            }
-            if (this.codes !== null)
-                this.codes[i] = code;
-        }
-        else if (this.overflowTexts !== null) {
-            if (this.textCount >= this.numberCount)
-                this.overflowTexts.add(text);
-            else
-                this.overflowTexts = null; // a numeric-looking column: the count no longer matters
-        }
-        this.length = i + 1;
+    const stores = capacity * storePerRow;
+    // While the last doubling copies, the old stores are still there; after reading, the stores
+    // stay while the split and the encoded arrays are made.
+    const reading = stores + (capacity / 2) * storePerRow;
+    const after = stores + rows * (afterPerRow + SPLIT_TYPED_PER_ROW + SPLIT_HEAP_PER_ROW);
+    return {
+        rows,
+        total: Math.max(reading, after),
+        heap: rows * SPLIT_HEAP_PER_ROW,
+        held: shape.capacity * storePerRow,
+    };
+}
+function memoryRoom() {
+    const heap = (0,external_node_v8_namespaceObject.getHeapStatistics)();
+    const rss = process.memoryUsage.rss();
+    const candidates = [];
+    const total = (0,external_node_os_namespaceObject.totalmem)();
+    candidates.push({ bytes: total - rss, bound: `the machine's memory of ${mib(total)}` });
+    const constrained = process.constrainedMemory();
+    if (constrained > 0 && constrained < total) {
+        candidates.push({ bytes: constrained - rss, bound: `the container's memory limit of ${mib(constrained)}` });
     }
-    /** Distinct values counted so far past the cap (a lower bound when counting stopped). */
-    distinctCount() {
-        if (this.distinct !== null)
-            return this.distinct.size;
-        return this.overflowTexts?.size ?? this.distinctLimit + 1;
+    const space = addressSpace();
+    if (space !== null) {
+        candidates.push({
+            bytes: space.limit - space.used,
+            bound: `the address-space limit (ulimit -v) of ${mib(space.limit)}, ${mib(space.used)} of it in use`,
+        });
     }
-    /** Whether `distinctCount()` is exact. */
-    distinctCountExact() {
-        return this.distinct !== null || this.overflowTexts !== null;
+    const tightest = candidates.reduce((a, b) => (b.bytes < a.bytes ? b : a));
+    return {
+        bytes: Math.max(0, tightest.bytes),
+        bound: tightest.bound,
+        heapBytes: Math.max(0, heap.heap_size_limit - heap.used_heap_size),
+        heapLimit: heap.heap_size_limit,
+    };
+}
+/** Why the estimate does not fit in `room`, or null when it does. */
+function whyNotFit(estimate, room) {
+    const need = estimate.total * MARGIN;
+    const have = Math.max(0, room.bytes + estimate.held - HEADROOM);
+    const heapNeed = estimate.heap * MARGIN;
+    const heapHave = Math.max(0, room.heapBytes - HEADROOM);
+    if (need <= have && heapNeed <= heapHave)
+        return null;
+    return (`loading about ${formatCount(estimate.rows)} rows needs about ${mib(need)} of memory ` +
+        `(${mib(heapNeed)} of it on the JavaScript heap), but this process has room for about ${mib(have)}: ` +
+        `typed arrays are bounded by ${room.bound}, and the JavaScript heap by its limit of ${mib(room.heapLimit)} ` +
+        `(v8 heap_size_limit; ${mib(room.heapBytes)} of it free). Commit fewer rows (a sample of them), raise the ` +
+        'limit (NODE_OPTIONS=--max-old-space-size=… for the heap; ulimit -v or the container limit for the rest), ' +
+        'or run on a bigger runner');
+}
+function mib(bytes) {
+    return `${formatCount(Math.round(bytes / MIB))} MiB`;
+}
+/** The soft address-space limit and the address space in use (Linux /proc), or null when there is none. */
+function addressSpace() {
+    try {
+        const limits = (0,external_node_fs_namespaceObject.readFileSync)('/proc/self/limits', 'utf8');
+        const m = /^Max address space\s+(\S+)/m.exec(limits);
+        if (m === null || m[1] === 'unlimited')
+            return null;
+        const status = (0,external_node_fs_namespaceObject.readFileSync)('/proc/self/status', 'utf8');
+        const used = /^VmSize:\s+(\d+) kB/m.exec(status);
+        return { limit: Number(m[1]), used: used === null ? 0 : Number(used[1]) * 1024 };
     }
-    startOverflow(text, line) {
-        this.overflow = { value: text, line };
-        if (this.textCount >= this.numberCount && this.distinct !== null) {
-            this.overflowTexts = new Set(this.distinct.keys());
-            this.overflowTexts.add(text);
-        }
-        this.distinct = null;
-        this.codes = null;
-    }
-    grow() {
-        const capacity = this.numbers.length * 2;
-        const numbers = new Float64Array(capacity);
-        numbers.set(this.numbers);
-        this.numbers = numbers;
-        if (this.codes !== null) {
-            const codes = new Int32Array(capacity);
-            codes.set(this.codes);
-            this.codes = codes;
-        }
+    catch {
+        return null; // not Linux: the other limits still apply
     }
 }
 
@@ -17630,7 +17892,11 @@ class ColumnStore {
 
 
 
+
+
+
 async function readCsvColumns(file, options) {
+    const fileBytes = (await (0,promises_namespaceObject.stat)(file.path)).size;
     let header = null;
     let stores = [];
     let fields = new Int32Array(0);
@@ -17677,6 +17943,9 @@ async function readCsvColumns(file, options) {
             dropped++;
             return;
         }
+        // The stores are full and about to double: first make sure the whole file will fit.
+        if (rows === stores[0].numbers.length)
+            checkMemory(file, stores, targetIndex, rows, parser.info, fileBytes);
         for (let k = 0; k < stores.length; k++)
             stores[k].push(record[fields[k]], line);
         rows++;
@@ -17731,6 +18000,23 @@ async function readCsvColumns(file, options) {
         lastLine: nextLine - 1,
     };
 }
+/** Stops with a UserError when loading the whole file would not fit in this process's memory. */
+function checkMemory(file, stores, target, rows, parsed, fileBytes) {
+    const estimate = estimateLoad({
+        rows,
+        capacity: stores[0].numbers.length,
+        recordsParsed: parsed.records,
+        bytesParsed: parsed.bytes,
+        fileBytes,
+        columns: stores.map((s, k) => ({
+            codes: s.codes !== null,
+            inputs: k === target ? 0 : s.distinct !== null && !looksNumeric(s) ? s.distinct.size : 1,
+        })),
+    });
+    const why = whyNotFit(estimate, memoryRoom());
+    if (why !== null)
+        throw new errors_UserError(`${file.shown}: ${why}`, { file: file.path });
+}
 function lineBreaks(record) {
     let n = 0;
     for (let i = 0; i < record.length; i++) {
@@ -17748,7 +18034,7 @@ function checkHeader(file, record, line) {
         }
         const first = seen.get(name);
         if (first !== undefined) {
-            throw dataError(file, line, i + 1, `column ${i + 1} is named "${name}" like column ${first + 1}; column names must be unique`);
+            throw dataError(file, line, i + 1, `column ${i + 1} is named ${escape_quote(name, 60)} like column ${first + 1}; column names must be unique`);
         }
         seen.set(name, i);
     });
@@ -17758,10 +18044,25 @@ function fieldCountError(file, line, record, header) {
     const expected = `expected ${header.length} fields as in the header`;
     if (record.length > header.length) {
         return dataError(file, line, header.length + 1, `${expected}, found ${record.length}: an extra field ${shownValue(record[header.length])} ` +
-            `after the last column "${header[header.length - 1]}" (an unquoted delimiter inside a value?)`);
+            `after the last column ${escape_quote(header[header.length - 1], 60)} (an unquoted delimiter inside a value?)`);
     }
     const next = record.length;
     return dataError(file, line, next + 1, `${expected}, found ${record.length}: the row ends before ${columnLabel(next + 1, header[next])}`);
+}
+/** What the bad bytes are, for the message. */
+function notText(w) {
+    if (w.why === 'nul') {
+        return 'a NUL byte (0x00), so this is not a text file; a file saved as UTF-16 or a spreadsheet looks like this';
+    }
+    if (w.why === 'truncated')
+        return `a UTF-8 character cut off by the end of the file (the bytes ${w.bytes})`;
+    const one = !w.bytes.includes(' ');
+    const bytes = one ? `the byte ${w.bytes}` : `the bytes ${w.bytes}`;
+    if (w.next === null)
+        return `${bytes}, which is not valid UTF-8 text`;
+    // One high byte followed by plain ASCII is how é, ü or ° look in Latin-1 / Windows-1252.
+    const legacy = one && Number(w.next) < 0x80 ? '; a file saved as Latin-1 or Windows-1252 looks like this' : '';
+    return `${bytes}, which is not valid UTF-8 text (it starts a character that ${w.next} does not continue)${legacy}`;
 }
 /** Turns stream and parser failures into messages about the file. */
 function explain(file, error, 
@@ -17771,13 +18072,12 @@ recordLine, header) {
         return error;
     if (error instanceof NotTextError) {
         const w = error.where;
-        const where = columnLabel(w.column, w.header[w.column - 1]);
-        const what = w.why === 'nul'
-            ? 'a NUL byte (0x00), so this is not a text file; a file saved as UTF-16 or a spreadsheet looks like this'
-            : w.why === 'truncated'
-                ? 'a UTF-8 character cut off by the end of the file'
-                : `the byte ${w.bytes}, which is not valid UTF-8 text`;
-        return dataError(file, w.line, w.column, `${where}: expected UTF-8 text, found ${what}; save the file as CSV (UTF-8)`);
+        if (w.why === 'cr-only') {
+            return dataError(file, w.line, undefined, 'this file ends its lines with CR only (old Mac style); save it with LF or CRLF line endings');
+        }
+        // The parser's header when it has read it; the byte check runs ahead of the parser.
+        const where = columnLabel(w.column, (header ?? w.header)[w.column - 1]);
+        return dataError(file, w.line, w.column, `${where}: expected UTF-8 text, found ${notText(w)}; save the file as CSV (UTF-8)`);
     }
     const e = error;
     const field = typeof e.column === 'number' ? e.column + 1 : 1;
@@ -17995,7 +18295,7 @@ function groupRows(target) {
 function tooFew(target, group, rows, minTrain, f, file) {
     const what = target.classes === null
         ? `the data have ${rows} rows`
-        : `class ${quote(target.classes[group])} has ${rows} row${rows === 1 ? '' : 's'}`;
+        : `class ${escape_quote(target.classes[group])} has ${rows} row${rows === 1 ? '' : 's'}`;
     const parts = [`${minTrain} to train on`];
     if (f.validation > 0)
         parts.push('1 to validate on');
@@ -18005,6 +18305,12 @@ function tooFew(target, group, rows, minTrain, f, file) {
 }
 
 ;// CONCATENATED MODULE: ./src/data/target.ts
+/**
+ * The target column and the task. With `task: auto`, a text target means
+ * classification; a numeric target with at most AUTO_MAX_CLASSES distinct values means
+ * classification too (class labels like 0/1/2); any other numeric target means regression.
+ */
+
 
 
 /** Distinct numeric values up to which `task: auto` still means classification (a rule of thumb, no source). */
@@ -18044,7 +18350,7 @@ function targetColumn(store, config, file) {
     }
     if (store.distinct === null)
         throw tooManyClasses(store, file);
-    const column = categoricalColumn(store, file, MAX_CLASSES);
+    const column = categoricalColumn(store, file, MAX_CLASSES, 'class label');
     checkTwoClasses(column.categories, file, store);
     return {
         task,
@@ -18072,7 +18378,7 @@ function distinctNumbers(store, limit) {
 function checkTwoClasses(classes, file, store) {
     if (classes.length >= 2)
         return;
-    throw dataError(file, 1, store.column, `${columnLabel(store.column, store.name)} (the target) has a single class "${classes[0] ?? ''}" in all ` +
+    throw dataError(file, 1, store.column, `${columnLabel(store.column, store.name)} (the target) has a single class ${escape_quote(classes[0] ?? '')} in all ` +
         `${store.length} rows; classification needs at least two classes`);
 }
 function checkNotConstant(values, file, store) {
@@ -18172,6 +18478,7 @@ async function checkExists(file) {
 
 
 
+
 function resultSettings(config) {
     const out = {};
     for (const section of spec_CONFIG_SPEC) {
@@ -18225,9 +18532,10 @@ function show(v) {
         return '(not set)';
     if (v === null)
         return '(default)';
-    const s = Array.isArray(v) ? `[${v.join(', ')}]` : String(v);
-    // Long feature lists would drown the sentence they appear in.
-    return s.length > 120 ? `${s.slice(0, 117)}...` : s;
+    // Column names are the repository's strings: each is clipped, and long lists would drown the
+    // sentence they appear in. Escaping is the renderer's (text, Markdown), as for every reason.
+    const s = Array.isArray(v) ? `[${v.map((name) => clip(name, 40)).join(', ')}]` : clip(String(v), 120);
+    return clip(s, 120);
 }
 
 ;// CONCATENATED MODULE: ./src/gate/compare.ts
@@ -18360,34 +18668,36 @@ function budgetFailures(input) {
  */
 const MEAN_SHIFT_IN_STD = 0.5;
 function dataChanges(before, after, fingerprints, files = { before: '', after: '' }) {
-    const columnsAdded = after.columns.filter((c) => !before.columns.includes(c));
-    const columnsRemoved = before.columns.filter((c) => !after.columns.includes(c));
+    const columnsBefore = new Set(before.columns);
+    const columnsAfter = new Set(after.columns);
+    const columnsAdded = after.columns.filter((c) => !columnsBefore.has(c));
+    const columnsRemoved = before.columns.filter((c) => !columnsAfter.has(c));
     let classes = null;
     const classesAppeared = [];
     const classesVanished = [];
     if (before.classes !== null || after.classes !== null) {
-        const b = before.classes ?? {};
-        const a = after.classes ?? {};
-        const labels = [...new Set([...Object.keys(b), ...Object.keys(a)])].sort(byCodeUnit);
-        classes = labels.map((label) => ({ label, before: b[label] ?? 0, after: a[label] ?? 0 }));
+        const b = tableOf(before.classes);
+        const a = tableOf(after.classes);
+        const labels = [...new Set([...b.keys(), ...a.keys()])].sort(byCodeUnit);
+        classes = labels.map((label) => ({ label, before: b.get(label) ?? 0, after: a.get(label) ?? 0 }));
         for (const label of labels) {
-            if (!(label in b))
+            if (!b.has(label))
                 classesAppeared.push(label);
-            if (!(label in a))
+            if (!a.has(label))
                 classesVanished.push(label);
         }
     }
     const features = [];
     const categories = [];
-    const shared = Object.keys(after.features)
-        .filter((name) => name in before.features)
-        .sort(byCodeUnit);
+    const featuresBefore = tableOf(before.features);
+    const featuresAfter = tableOf(after.features);
+    const shared = [...featuresAfter.keys()].filter((name) => featuresBefore.has(name)).sort(byCodeUnit);
     for (const name of shared) {
-        const b = before.features[name];
-        const a = after.features[name];
+        const b = featuresBefore.get(name);
+        const a = featuresAfter.get(name);
         if (b.kind === 'numeric' && a.kind === 'numeric') {
-            const delta = Math.abs(a.mean - b.mean);
-            const shiftInStd = b.std > 0 ? delta / b.std : null;
+            const delta = atMostMax(Math.abs(a.mean - b.mean));
+            const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
             const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
             const rangeWidened = a.min < b.min || a.max > b.max;
             if (meanMoved || rangeWidened) {
@@ -18405,12 +18715,10 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
             }
         }
         else if (b.kind === 'categorical' && a.kind === 'categorical') {
-            const appeared = Object.keys(a.counts)
-                .filter((c) => !(c in b.counts))
-                .sort(byCodeUnit);
-            const vanished = Object.keys(b.counts)
-                .filter((c) => !(c in a.counts))
-                .sort(byCodeUnit);
+            const countsBefore = tableOf(b.counts);
+            const countsAfter = tableOf(a.counts);
+            const appeared = [...countsAfter.keys()].filter((c) => !countsBefore.has(c)).sort(byCodeUnit);
+            const vanished = [...countsBefore.keys()].filter((c) => !countsAfter.has(c)).sort(byCodeUnit);
             if (appeared.length > 0 || vanished.length > 0)
                 categories.push({ feature: name, appeared, vanished });
         }
@@ -18427,6 +18735,20 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
         columnsAdded,
         columnsRemoved,
     };
+}
+/**
+ * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
+ * is read with JSON.parse, so a label may be `constructor` or `__proto__`: only own keys count.
+ */
+function tableOf(table) {
+    return new Map(table === null ? [] : Object.entries(table));
+}
+/**
+ * Two finite means read from a baseline file can differ by more than the largest float; the
+ * shift is then "at least the largest float", never Infinity (which JSON cannot hold).
+ */
+function atMostMax(x) {
+    return Math.min(x, Number.MAX_VALUE);
 }
 /** Locale-independent order, so the summary reads the same on every machine. */
 function byCodeUnit(a, b) {
@@ -18469,6 +18791,7 @@ const HISTORY_CAP = 100;
  * clear errors, and write it atomically. Everything here is pure except readBaseline
  * and writeBaseline; dates are passed in, never read from a clock.
  */
+
 
 
 
@@ -18657,15 +18980,11 @@ function baseline_describe(v) {
         return 'a list';
     if (typeof v === 'object')
         return 'an object';
-    if (typeof v === 'string') {
-        const s = JSON.stringify(v);
-        return s.length > 60 ? `${s.slice(0, 57)}..."` : s;
-    }
+    if (typeof v === 'string')
+        return escape_quote(v, 60);
     return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
-;// CONCATENATED MODULE: external "node:os"
-const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
 ;// CONCATENATED MODULE: external "node:timers/promises"
 const external_node_timers_promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:timers/promises");
 ;// CONCATENATED MODULE: ./src/files/lock.ts
@@ -19086,7 +19405,8 @@ function dataSummaryText(config, data, report) {
  * no value is left out of the chart (the table beside it still lists it).
  */
 
-const SAFE_TEXT = /^[A-Za-z0-9 .,-]*$/;
+/** Letters, digits, space and . , - + (a width read from a baseline file may print as 1e+21). */
+const SAFE_TEXT = /^[A-Za-z0-9 .,+-]*$/;
 function chartText(s) {
     if (!SAFE_TEXT.test(s))
         throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
@@ -19115,6 +19435,11 @@ function renderChart(spec) {
     ];
     return lines.join('\n');
 }
+/*
+ * The ranges below take values read from a baseline file, which may be any finite number:
+ * every step that could overflow (a margin on top of 1.7e308) stops at the largest float, so
+ * an axis end is always a finite number.
+ */
 /** A y-axis range that shows every value and the threshold with a little room. */
 function metricRange(values, threshold, accuracy) {
     const all = [...values, threshold].filter(Number.isFinite);
@@ -19124,17 +19449,21 @@ function metricRange(values, threshold, accuracy) {
         return [Math.min(0.9, Math.max(0, Math.floor(low * 10) / 10)), 1];
     }
     const high = Math.max(...all, 0);
-    return [0, niceCeil(high * 1.1)];
+    return [0, niceCeil(chart_finite(high * 1.1))];
 }
 function countRange(values) {
-    const high = Math.max(1, ...values);
-    return [0, Math.ceil(high * 1.15) + 1];
+    const high = Math.max(1, ...values.filter(Number.isFinite));
+    return [0, chart_finite(Math.ceil(chart_finite(high * 1.15)) + 1)];
 }
 function niceCeil(x) {
     if (x <= 0)
         return 1;
     const step = 10 ** Math.floor(Math.log10(x));
-    return Math.ceil(x / step) * step;
+    return chart_finite(Math.ceil(x / step) * step);
+}
+/** x, or the largest float when x overflowed. */
+function chart_finite(x) {
+    return Math.min(x, Number.MAX_VALUE);
 }
 
 ;// CONCATENATED MODULE: ./src/report/view.ts
@@ -19229,6 +19558,7 @@ function backingSentence(w, report) {
 
 
 
+
 /** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
 const COMMENT_LIMIT = 65_000;
 /** Most widths a chart shows; longer curves keep the widest (where the answer lies). */
@@ -19255,11 +19585,11 @@ function renderMarkdown(report, options = {}) {
 }
 function headline(view) {
     const label = VERDICT_LABEL[view.verdict];
-    const lines = [`### neuron-budget: ${label}. ${escapeMarkdown(view.headline)}`];
+    const lines = [`### neuron-budget: ${label}. ${escapeMarkdown(view.headline, MAX_MESSAGE)}`];
     if (view.otherReasons.length > 0) {
         lines.push('');
         for (const r of view.otherReasons)
-            lines.push(`- ${escapeMarkdown(r)}`);
+            lines.push(`- ${escapeMarkdown(r, MAX_MESSAGE)}`);
     }
     return lines.join('\n');
 }
@@ -19516,14 +19846,16 @@ function metCell(w) {
 
 
 
+
 const TEXT_WIDTH = 80;
 function renderText(report) {
     const view = viewOf(report);
     const out = [];
     const label = VERDICT_LABEL[view.verdict];
-    out.push(...text_wrap(`neuron-budget: ${label}. ${escapeText(view.headline)}`, ''));
+    // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
+    out.push(...text_wrap(`neuron-budget: ${label}. ${escapeText(view.headline, MAX_MESSAGE)}`, ''));
     for (const r of view.otherReasons)
-        out.push(...text_wrap(escapeText(r), '  - ', '    '));
+        out.push(...text_wrap(escapeText(r, MAX_MESSAGE), '  - ', '    '));
     out.push('');
     const b = view.baseline;
     const c = view.current;

@@ -33,7 +33,8 @@ export function usage(command: Command | null): string {
     '',
     'The current folder is the workspace. Paths in the config file resolve against',
     "the config file's folder and must stay inside the workspace.",
-    "Messages go to stderr; stdout carries only what was asked for (--help, --version, predict's CSV).",
+    'Messages go to stderr; stdout carries only what was asked for',
+    "(--help, --version, predict's CSV).",
     '',
     exitCodesText(),
   ].join('\n');

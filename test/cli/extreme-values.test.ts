@@ -82,7 +82,7 @@ describe('huge numbers in the baseline file', () => {
     baseline.history.push({ ...baseline.history[0], width: 1e21, metric: -1.7e308 });
     baseline.result.width = 1.7e308;
     baseline.widths[0].best = 1.7e308;
-    baseline.widths.push({ width: 1e21, restarts: 1, reached: 0, best: -1.7e308 });
+    baseline.widths.push({ width: 1e21, restarts: 1, met: 0, adequate: false, best: -1.7e308 });
     baseline.data.profile.features.kurtosis.mean = -1.7e308;
     baseline.data.profile.features.kurtosis.std = 5e-324;
     baseline.data.profile.features.rms_velocity.max = 1.7e308;
