@@ -19,7 +19,6 @@ const MAX_SHOWN = 200;
 const MAX_QUOTED = 80;
 
 const ELLIPSIS = '…';
-const ZWSP = '&#8203;';
 /** Invisible and bidirectional formatting characters that could disguise text. */
 const INVISIBLE = /[\u00ad\u061c\u180e\u200b-\u200f\u2028\u2029\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff]/u;
 const SHORT_ESCAPES: Record<number, string> = { 0x0a: '\\n', 0x0d: '\\r', 0x09: '\\t' };
@@ -76,43 +75,60 @@ export function escapeLines(text: string): string {
     .join('\n');
 }
 
-/** Space , ; ' " / % = ? */
-const PLAIN = new Set([0x20, 0x2c, 0x3b, 0x27, 0x22, 0x2f, 0x25, 0x3d, 0x3f]);
+/**
+ * ASCII punctuation that is Markdown syntax in the middle of a line (emphasis, code, links and
+ * images, HTML, entities, table pipes, strikethrough, math); a backslash makes it literal.
+ */
+const MARKDOWN_PUNCTUATION = new Set('\\`*_[]<|~&$'.split(''));
+/** Characters GitHub may turn into a mention, reference, URL or emoji when a word follows. */
+const LINK_STARTS = new Set(['@', '#', ':', '\uff20', '\ufe6b']);
+const ZWSP = '\u200b';
+/** Between two of these, "_" cannot open or close emphasis (CommonMark's intraword rule), so it stays bare. */
+const WORD = /^[\p{L}\p{N}]$/u;
+const REPLACEMENT = '\ufffd';
 
 /**
- * Markdown: every ASCII character other than letters, digits, space and , ; ' " / % = ?
- * (which mean nothing to Markdown in the middle of a line, where these strings always go)
- * becomes a numeric character reference, which GitHub-flavoured Markdown shows as literal
- * text and never reads as syntax (emphasis, links, images, HTML, code, table pipes,
- * headings, lists). GitHub turns some plain text into links after rendering (@-mentions,
- * #123 references, URLs, www. addresses, :emoji:; GitHub behaviour as we know it, not
- * checked against GitHub here), so a zero-width space follows every "@", "#" and ":" and
- * precedes the dot of "www.", which breaks those patterns without changing what a reader
- * sees. Line breaks become spaces, so a string never leaves its line or table cell.
+ * Markdown that reads as written: the ASCII punctuation that GitHub-flavoured Markdown could
+ * read as syntax mid-line gets a backslash, which CommonMark defines as "this character, literally"; everything else stays
+ * as it is, so the raw comment (in e-mail notifications and the raw view) stays readable.
+ * GitHub also turns some plain text into links after rendering (@-mentions, #123 references,
+ * URLs, :emoji:; GitHub behaviour as we know it, not checked against GitHub here), which no
+ * escape prevents, so a zero-width space breaks exactly those patterns: after "@", "#" or ":"
+ * when a word character or "/" follows, and before the dot of "www.". Line breaks become
+ * spaces, so a string never leaves its line or table cell; control and invisible or
+ * bidirectional characters become U+FFFD. Meant for the middle of a line, where these
+ * strings always go.
  */
 export function escapeMarkdown(raw: string, max: number = MAX_SHOWN): string {
   const s = clip(raw, max);
   let out = '';
   for (let i = 0; i < s.length; i++) {
+    const ch = s[i];
     const c = s.charCodeAt(i);
-    if ((c >= 0x30 && c <= 0x39) || (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a) || PLAIN.has(c)) {
-      out += s[i];
-    } else if (c === 0x0a || c === 0x0d || c === 0x09) {
-      out += ' ';
-    } else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
-      out += '&#65533;';
-    } else if (c < 0x80) {
-      if (c === 0x2e && /www$/i.test(s.slice(Math.max(0, i - 3), i))) out += ZWSP;
-      out += `&#${c};`;
-      if (c === 0x40 || c === 0x23 || c === 0x3a) out += ZWSP;
-    } else if (INVISIBLE.test(s[i])) {
-      out += '&#65533;';
-    } else if (c === 0xff20 || c === 0xfe6b) {
-      // Full-width and small commercial at: GitHub does not mention on them, but keep them inert anyway.
-      out += `&#${c};${ZWSP}`;
-    } else {
-      out += s[i];
-    }
+    const next = s[i + 1] ?? '';
+    if (c === 0x0a || c === 0x0d || c === 0x09) out += ' ';
+    else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch)) out += REPLACEMENT;
+    else if (ch === '_' && WORD.test(s[i - 1] ?? '') && WORD.test(next)) out += ch;
+    else if (MARKDOWN_PUNCTUATION.has(ch)) out += `\\${ch}`;
+    else if (ch === '.' && /www$/i.test(s.slice(Math.max(0, i - 3), i))) out += `${ZWSP}.`;
+    else if (LINK_STARTS.has(ch) && /^[\p{L}\p{N}_/]/u.test(next)) out += `${ch}${ZWSP}`;
+    else out += ch;
   }
-  return out;
+  return escapeLineStart(out);
+}
+
+/**
+ * A list item or a cell may begin with the string, where a heading (`# `), quote (`>`), list
+ * item (`- `, `+ `, `1. `), rule or underline (`---`, `===`) or an indent would start a block:
+ * those get a backslash too (an indent becomes no-break spaces). Anything else, such as "-3" or
+ * "1.5", stays as it is.
+ */
+function escapeLineStart(s: string): string {
+  const indent = /^ +/.exec(s)?.[0].length ?? 0;
+  const rest = s.slice(indent);
+  const lead = '\u00a0'.repeat(indent);
+  if (/^(>|#{1,6}(\s|$)|[+-](\s|$)|[-= ]+$)/.test(rest)) return `${lead}\\${rest}`;
+  const ordered = /^(\d{1,9})([.)](\s|$))/.exec(rest);
+  if (ordered) return `${lead}${ordered[1]}\\${rest.slice(ordered[1].length)}`;
+  return `${lead}${rest}`;
 }

@@ -1,5 +1,5 @@
 /** The few pieces of markdown the shell writes itself (the report layout belongs to src/report/). */
-import { escapeMarkdown } from '../common/escape.js';
+import { clip, escapeLines } from '../common/escape.js';
 import { MAX_MESSAGE } from '../common/errors.js';
 
 /** The runner refuses a step summary over 1 MiB; leave room for the note. */
@@ -15,7 +15,18 @@ export function failureMarkdown(message: string, kind: 'input' | 'internal'): st
     kind === 'input'
       ? 'No verdict was reached, so this change has not been checked. The error is also annotated on the file.'
       : 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.';
-  return `${head}\n\n<pre>${escapeMarkdown(message, MAX_MESSAGE)}</pre>\n\n${tail}\n`;
+  return `${head}\n\n${codeBlock(escapeLines(clip(message, MAX_MESSAGE)))}\n\n${tail}\n`;
+}
+
+/**
+ * A fenced code block: shown verbatim, and GitHub links nothing inside one (no mention, reference
+ * or URL). The fence is longer than any run of backticks in the text, so the text cannot close it;
+ * control characters are already shown escaped.
+ */
+function codeBlock(text: string): string {
+  const longest = Math.max(0, ...(text.match(/`+/g) ?? []).map((run) => run.length));
+  const fence = '`'.repeat(Math.max(3, longest + 1));
+  return `${fence}text\n${text}\n${fence}`;
 }
 
 export function fitSummary(markdown: string, limit = SUMMARY_LIMIT): string {
