@@ -29515,7 +29515,6 @@ const MAX_SHOWN = 200;
 /** Most characters of one value quoted inside a message. */
 const MAX_QUOTED = 80;
 const ELLIPSIS = '…';
-const ZWSP = '&#8203;';
 /** Invisible and bidirectional formatting characters that could disguise text. */
 const INVISIBLE = /[\u00ad\u061c\u180e\u200b-\u200f\u2028\u2029\u202a-\u202e\u2060-\u2064\u2066-\u2069\ufeff]/u;
 const SHORT_ESCAPES = { 0x0a: '\\n', 0x0d: '\\r', 0x09: '\\t' };
@@ -29571,52 +29570,69 @@ function escapeLines(text) {
         .map((line) => escapeText(line, Number.MAX_SAFE_INTEGER))
         .join('\n');
 }
-/** Space , ; ' " / % = ? */
-const PLAIN = new Set([0x20, 0x2c, 0x3b, 0x27, 0x22, 0x2f, 0x25, 0x3d, 0x3f]);
 /**
- * Markdown: every ASCII character other than letters, digits, space and , ; ' " / % = ?
- * (which mean nothing to Markdown in the middle of a line, where these strings always go)
- * becomes a numeric character reference, which GitHub-flavoured Markdown shows as literal
- * text and never reads as syntax (emphasis, links, images, HTML, code, table pipes,
- * headings, lists). GitHub turns some plain text into links after rendering (@-mentions,
- * #123 references, URLs, www. addresses, :emoji:; GitHub behaviour as we know it, not
- * checked against GitHub here), so a zero-width space follows every "@", "#" and ":" and
- * precedes the dot of "www.", which breaks those patterns without changing what a reader
- * sees. Line breaks become spaces, so a string never leaves its line or table cell.
+ * ASCII punctuation that is Markdown syntax in the middle of a line (emphasis, code, links and
+ * images, HTML, entities, table pipes, strikethrough, math); a backslash makes it literal.
+ */
+const MARKDOWN_PUNCTUATION = new Set('\\`*_[]<|~&$'.split(''));
+/** Characters GitHub may turn into a mention, reference, URL or emoji when a word follows. */
+const LINK_STARTS = new Set(['@', '#', ':', '\uff20', '\ufe6b']);
+const ZWSP = '\u200b';
+/** Between two of these, "_" cannot open or close emphasis (CommonMark's intraword rule), so it stays bare. */
+const WORD = /^[\p{L}\p{N}]$/u;
+const REPLACEMENT = '\ufffd';
+/**
+ * Markdown that reads as written: the ASCII punctuation that GitHub-flavoured Markdown could
+ * read as syntax mid-line gets a backslash, which CommonMark defines as "this character, literally"; everything else stays
+ * as it is, so the raw comment (in e-mail notifications and the raw view) stays readable.
+ * GitHub also turns some plain text into links after rendering (@-mentions, #123 references,
+ * URLs, :emoji:; GitHub behaviour as we know it, not checked against GitHub here), which no
+ * escape prevents, so a zero-width space breaks exactly those patterns: after "@", "#" or ":"
+ * when a word character or "/" follows, and before the dot of "www.". Line breaks become
+ * spaces, so a string never leaves its line or table cell; control and invisible or
+ * bidirectional characters become U+FFFD. Meant for the middle of a line, where these
+ * strings always go.
  */
 function escapeMarkdown(raw, max = MAX_SHOWN) {
     const s = clip(raw, max);
     let out = '';
     for (let i = 0; i < s.length; i++) {
+        const ch = s[i];
         const c = s.charCodeAt(i);
-        if ((c >= 0x30 && c <= 0x39) || (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a) || PLAIN.has(c)) {
-            out += s[i];
-        }
-        else if (c === 0x0a || c === 0x0d || c === 0x09) {
+        const next = s[i + 1] ?? '';
+        if (c === 0x0a || c === 0x0d || c === 0x09)
             out += ' ';
-        }
-        else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
-            out += '&#65533;';
-        }
-        else if (c < 0x80) {
-            if (c === 0x2e && /www$/i.test(s.slice(Math.max(0, i - 3), i)))
-                out += ZWSP;
-            out += `&#${c};`;
-            if (c === 0x40 || c === 0x23 || c === 0x3a)
-                out += ZWSP;
-        }
-        else if (INVISIBLE.test(s[i])) {
-            out += '&#65533;';
-        }
-        else if (c === 0xff20 || c === 0xfe6b) {
-            // Full-width and small commercial at: GitHub does not mention on them, but keep them inert anyway.
-            out += `&#${c};${ZWSP}`;
-        }
-        else {
-            out += s[i];
-        }
+        else if (c < 0x20 || c === 0x7f || (c >= 0x80 && c < 0xa0) || INVISIBLE.test(ch))
+            out += REPLACEMENT;
+        else if (ch === '_' && WORD.test(s[i - 1] ?? '') && WORD.test(next))
+            out += ch;
+        else if (MARKDOWN_PUNCTUATION.has(ch))
+            out += `\\${ch}`;
+        else if (ch === '.' && /www$/i.test(s.slice(Math.max(0, i - 3), i)))
+            out += `${ZWSP}.`;
+        else if (LINK_STARTS.has(ch) && /^[\p{L}\p{N}_/]/u.test(next))
+            out += `${ch}${ZWSP}`;
+        else
+            out += ch;
     }
-    return out;
+    return escapeLineStart(out);
+}
+/**
+ * A list item or a cell may begin with the string, where a heading (`# `), quote (`>`), list
+ * item (`- `, `+ `, `1. `), rule or underline (`---`, `===`) or an indent would start a block:
+ * those get a backslash too (an indent becomes no-break spaces). Anything else, such as "-3" or
+ * "1.5", stays as it is.
+ */
+function escapeLineStart(s) {
+    const indent = /^ +/.exec(s)?.[0].length ?? 0;
+    const rest = s.slice(indent);
+    const lead = '\u00a0'.repeat(indent);
+    if (/^(>|#{1,6}(\s|$)|[+-](\s|$)|[-= ]+$)/.test(rest))
+        return `${lead}\\${rest}`;
+    const ordered = /^(\d{1,9})([.)](\s|$))/.exec(rest);
+    if (ordered)
+        return `${lead}${ordered[1]}\\${rest.slice(ordered[1].length)}`;
+    return `${lead}${rest}`;
 }
 
 
@@ -29659,12 +29675,12 @@ function formatCount(n) {
     const grouped = s.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
     return n < 0 ? `-${grouped}` : grouped;
 }
-/** Signed difference: +12, −3, 0. */
+/** Signed difference: +12, -3, 0 (ASCII minus, the same in tables, lists and the terminal). */
 function formatDelta(n) {
     if (n > 0)
         return `+${formatCount(n)}`;
     if (n < 0)
-        return `−${formatCount(-n)}`;
+        return `-${formatCount(-n)}`;
     return '0';
 }
 function formatSeconds(seconds) {
@@ -30833,7 +30849,7 @@ function exportC(model, name, provenance) {
 
 /***/ }),
 
-/***/ 9294:
+/***/ 4746:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -38505,6 +38521,83 @@ const external_node_path_namespaceObject = __WEBPACK_EXTERNAL_createRequire(impo
 var common_escape = __nccwpck_require__(4678);
 // EXTERNAL MODULE: ./src/common/errors.ts
 var errors = __nccwpck_require__(1922);
+;// CONCATENATED MODULE: ./src/common/paths.ts
+/**
+ * Workspace confinement for every path a user gives (config paths, action inputs).
+ * A gate that runs on pull requests must not read or write outside the checkout, so a
+ * path may not climb out with `../`, be absolute somewhere else, or pass through a
+ * symbolic link that points outside.
+ */
+
+
+
+
+/** True when `child` is `parent` or lies below it (both absolute and normalised). @testOnly */
+function isInside(parent, child) {
+    return relativeInside(parent, child) !== null;
+}
+/**
+ * `child` relative to `parent` with forward slashes ('' for `parent` itself), or null when it
+ * lies outside. A name that merely starts with two dots (`..x`) is inside.
+ */
+function relativeInside(parent, child) {
+    const rel = (0,external_node_path_namespaceObject.relative)((0,external_node_path_namespaceObject.resolve)(parent), (0,external_node_path_namespaceObject.resolve)(child));
+    if (rel === '..' || rel.startsWith('..' + external_node_path_namespaceObject.sep) || (0,external_node_path_namespaceObject.isAbsolute)(rel))
+        return null;
+    return rel.split(external_node_path_namespaceObject.sep).join('/');
+}
+/** How a file is named in messages: relative to the workspace root when inside it, forward slashes. */
+function displayPath(root, file) {
+    const rel = relativeInside(root, file);
+    return rel === null ? (0,external_node_path_namespaceObject.resolve)(file) : rel || '.';
+}
+/** The real location of `p`, following links through its longest existing prefix. */
+function realLocation(p) {
+    let existing = p;
+    const rest = [];
+    while (!(0,external_node_fs_namespaceObject.existsSync)(existing)) {
+        const parent = (0,external_node_path_namespaceObject.dirname)(existing);
+        if (parent === existing)
+            return p;
+        rest.unshift(existing.slice(parent.length).replace(/^[\\/]+/, ''));
+        existing = parent;
+    }
+    return (0,external_node_path_namespaceObject.resolve)((0,external_node_fs_namespaceObject.realpathSync)(existing), ...rest);
+}
+/**
+ * Resolves `p` against `baseDir` and checks that the result stays inside `root`.
+ * Returns the absolute path, or the reason it was refused (for the caller to locate).
+ */
+function checkInside(root, baseDir, p) {
+    if (p.trim() === '')
+        return { ok: false, reason: 'expected a path, found an empty string' };
+    if (p.includes('\0'))
+        return { ok: false, reason: 'a path may not contain a NUL character' };
+    const absoluteRoot = (0,external_node_path_namespaceObject.resolve)(root);
+    const target = (0,external_node_path_namespaceObject.resolve)(baseDir, p);
+    const where = (0,external_node_path_namespaceObject.isAbsolute)(p) ? 'is an absolute path outside' : 'leads outside';
+    if (!isInside(absoluteRoot, target)) {
+        return { ok: false, reason: `${(0,common_escape/* quote */.hD)(p)} ${where} the workspace ${absoluteRoot}` };
+    }
+    const realRoot = realLocation(absoluteRoot);
+    if (!isInside(realRoot, realLocation(target))) {
+        return {
+            ok: false,
+            reason: `${(0,common_escape/* quote */.hD)(p)} goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
+        };
+    }
+    return { ok: true, path: target };
+}
+/** As checkInside, but throws a UserError (with `key` when given) instead of returning the reason. */
+function resolveInside(root, baseDir, p, key) {
+    const result = checkInside(root, baseDir, p);
+    if (!result.ok)
+        throw new errors/* UserError */.yo(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
+    return result.path;
+}
+/** The config file the command line and the action read when none is named. */
+const DEFAULT_CONFIG = 'neuron-budget.yml';
+
 ;// CONCATENATED MODULE: ./src/common/exit-codes.ts
 /** Exit codes, the same for the command line and the action. */
 const EXIT = {
@@ -38623,81 +38716,6 @@ async function removeStaleTempFiles(path, now = Date.now()) {
         }
     }
     return removed;
-}
-
-;// CONCATENATED MODULE: ./src/common/paths.ts
-/**
- * Workspace confinement for every path a user gives (config paths, action inputs).
- * A gate that runs on pull requests must not read or write outside the checkout, so a
- * path may not climb out with `../`, be absolute somewhere else, or pass through a
- * symbolic link that points outside.
- */
-
-
-
-
-/** True when `child` is `parent` or lies below it (both absolute and normalised). @testOnly */
-function isInside(parent, child) {
-    return relativeInside(parent, child) !== null;
-}
-/**
- * `child` relative to `parent` with forward slashes ('' for `parent` itself), or null when it
- * lies outside. A name that merely starts with two dots (`..x`) is inside.
- */
-function relativeInside(parent, child) {
-    const rel = (0,external_node_path_namespaceObject.relative)((0,external_node_path_namespaceObject.resolve)(parent), (0,external_node_path_namespaceObject.resolve)(child));
-    if (rel === '..' || rel.startsWith('..' + external_node_path_namespaceObject.sep) || (0,external_node_path_namespaceObject.isAbsolute)(rel))
-        return null;
-    return rel.split(external_node_path_namespaceObject.sep).join('/');
-}
-/** How a file is named in messages: relative to the workspace root when inside it, forward slashes. */
-function displayPath(root, file) {
-    const rel = relativeInside(root, file);
-    return rel === null ? (0,external_node_path_namespaceObject.resolve)(file) : rel || '.';
-}
-/** The real location of `p`, following links through its longest existing prefix. */
-function realLocation(p) {
-    let existing = p;
-    const rest = [];
-    while (!(0,external_node_fs_namespaceObject.existsSync)(existing)) {
-        const parent = (0,external_node_path_namespaceObject.dirname)(existing);
-        if (parent === existing)
-            return p;
-        rest.unshift(existing.slice(parent.length).replace(/^[\\/]+/, ''));
-        existing = parent;
-    }
-    return (0,external_node_path_namespaceObject.resolve)((0,external_node_fs_namespaceObject.realpathSync)(existing), ...rest);
-}
-/**
- * Resolves `p` against `baseDir` and checks that the result stays inside `root`.
- * Returns the absolute path, or the reason it was refused (for the caller to locate).
- */
-function checkInside(root, baseDir, p) {
-    if (p.trim() === '')
-        return { ok: false, reason: 'expected a path, found an empty string' };
-    if (p.includes('\0'))
-        return { ok: false, reason: 'a path may not contain a NUL character' };
-    const absoluteRoot = (0,external_node_path_namespaceObject.resolve)(root);
-    const target = (0,external_node_path_namespaceObject.resolve)(baseDir, p);
-    const where = (0,external_node_path_namespaceObject.isAbsolute)(p) ? 'is an absolute path outside' : 'leads outside';
-    if (!isInside(absoluteRoot, target)) {
-        return { ok: false, reason: `${(0,common_escape/* quote */.hD)(p)} ${where} the workspace ${absoluteRoot}` };
-    }
-    const realRoot = realLocation(absoluteRoot);
-    if (!isInside(realRoot, realLocation(target))) {
-        return {
-            ok: false,
-            reason: `${(0,common_escape/* quote */.hD)(p)} goes through a symbolic link that leads outside the workspace ${absoluteRoot}`,
-        };
-    }
-    return { ok: true, path: target };
-}
-/** As checkInside, but throws a UserError (with `key` when given) instead of returning the reason. */
-function resolveInside(root, baseDir, p, key) {
-    const result = checkInside(root, baseDir, p);
-    if (!result.ok)
-        throw new errors/* UserError */.yo(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
-    return result.path;
 }
 
 // EXTERNAL MODULE: ./src/common/format.ts
@@ -43646,7 +43664,7 @@ function evaluateGate(input) {
 }
 
 ;// CONCATENATED MODULE: ./schema/baseline.schema.json
-const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
+const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."},"decisive":{"type":["number","null"],"description":"The search.required-th best judged metric over the networks of this width: at or past the threshold exactly when the width is adequate (recall floors aside); null when fewer finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
 ;// CONCATENATED MODULE: ./src/common/json-schema.ts
 /**
  * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
@@ -44202,6 +44220,7 @@ function nextBaseline(previous, current, meta) {
             met: w.met,
             adequate: w.adequate,
             best: w.best,
+            decisive: w.decisive,
         })),
         data: {
             file: config.data.pathAsWritten.replace(/\\/g, '/'),
@@ -44544,14 +44563,20 @@ async function runGateStage(input) {
         cost: input.cost ?? null,
     });
     if (input.mode === 'check')
-        return { outcome, written: null, notWritten: null, gate: config.gate };
+        return { outcome, written: null, notWritten: null, historyEntries: null, gate: config.gate };
     const why = whyNotRecordable(input.result);
     if (why !== null)
-        return { outcome, written: null, notWritten: why, gate: config.gate };
+        return { outcome, written: null, notWritten: why, historyEntries: null, gate: config.gate };
     const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
     // Only if the file still holds what `previous` was read from: never drop another run's entry.
     await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
-    return { outcome, written: input.baselinePath, notWritten: null, gate: config.gate };
+    return {
+        outcome,
+        written: input.baselinePath,
+        notWritten: null,
+        historyEntries: next.history.length,
+        gate: config.gate,
+    };
 }
 
 ;// CONCATENATED MODULE: ./src/gate/index.ts
@@ -45134,21 +45159,6 @@ function viewOf(report) {
         baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
     };
 }
-/** The width found exceeds gate.max-width. */
-/** This change's width for the summary table: the width and what pruning did, or why there is none. */
-function currentWidthCell(view, report, dash, strong = (s) => s) {
-    const c = view.current;
-    if (c.width === null) {
-        if (report.search?.outcome === 'inconclusive')
-            return 'not settled';
-        return report.search ? 'none in range' : dash;
-    }
-    return `${strong(String(c.width))}${view.prunedFrom !== null ? ` (pruned from ${view.prunedFrom})` : ''}`;
-}
-function overDeviceBudget(report) {
-    const budget = report.gate?.maxWidth ?? null;
-    return budget !== null && report.width !== null && report.width > budget;
-}
 /**
  * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
  * wider networks); 3 are required." One definition of the backing, shown by every screen.
@@ -45166,194 +45176,425 @@ function backingSentence(w, report) {
     const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
     return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
 }
-
-;// CONCATENATED MODULE: ./src/report/markdown.ts
-
-
-
-
-
-
-/** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
-const COMMENT_LIMIT = 65_000;
-/** Most widths a chart shows; longer curves keep the widest (where the answer lies). */
-const CHART_MAX_POINTS = 30;
-const DETAIL_LEVELS = [
-    { widthRows: Infinity, historyRows: Infinity, pruneRows: Infinity, changeItems: Infinity },
-    { widthRows: 200, historyRows: 100, pruneRows: 60, changeItems: 100 },
-    { widthRows: 80, historyRows: 40, pruneRows: 20, changeItems: 40 },
-    { widthRows: 0, historyRows: 12, pruneRows: 0, changeItems: 12 },
-];
-function renderMarkdown(report, options = {}) {
-    const limit = options.limit ?? COMMENT_LIMIT;
-    const view = viewOf(report);
-    const charts = chartSection(view, report);
-    const head = [headline(view), summaryTable(view, report), charts.text].filter((s) => s !== '').join('\n\n');
-    const foot = footer(view, report);
-    for (const level of DETAIL_LEVELS) {
-        const body = [head, details(view, report, level, charts.chartWidths), foot].filter((s) => s !== '').join('\n\n');
-        if (body.length + 1 <= limit)
-            return `${body}\n`;
-    }
-    const note = "_The details were left out to keep this comment within GitHub's size limit; the JSON report has them all._";
-    return `${[head, note, foot].join('\n\n')}\n`;
+/** A baseline width's decisive metric, or its best in files that lack it when one network suffices. */
+function baselineDecisive(w, required) {
+    if (w.decisive !== undefined)
+        return w.decisive;
+    return required === 1 ? w.best : null;
 }
-function headline(view) {
-    const label = VERDICT_LABEL[view.verdict];
-    const lines = [`### neuron-budget: ${label}. ${(0,common_escape/* escapeMarkdown */.FV)(view.headline, errors/* MAX_MESSAGE */.h2)}`];
-    if (view.otherReasons.length > 0) {
-        lines.push('');
-        for (const r of view.otherReasons)
-            lines.push(`- ${(0,common_escape/* escapeMarkdown */.FV)(r, errors/* MAX_MESSAGE */.h2)}`);
-    }
-    return lines.join('\n');
+
+;// CONCATENATED MODULE: ./src/report/words.ts
+
+
+/** "best", "2nd best", "3rd best", "4th best". */
+function nthBest(n) {
+    if (n <= 1)
+        return 'best';
+    const tens = n % 100;
+    const suffix = tens >= 11 && tens <= 13 ? 'th' : (['th', 'st', 'nd', 'rd'][n % 10] ?? 'th');
+    return `${n}${suffix} best`;
 }
-function summaryTable(view, report) {
-    const b = view.baseline;
-    const c = view.current;
-    const metricName = (0,common_escape/* escapeMarkdown */.FV)(view.metricName);
-    const dash = '—';
-    const cWidth = currentWidthCell(view, report, dash, (w) => `**${w}**`);
-    const rowsDelta = b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${(0,format/* formatDelta */.CW)(c.rows - b.rows)})` : '';
-    const rows = [
-        '| | Baseline | This change |',
-        '|:--|--:|--:|',
-        `| Smallest adequate width | ${b?.width ?? dash} | ${cWidth} |`,
-        `| ${capital(metricName)} at that width (network kept) | ${num(b?.metric)} | ${num(c.metric)} |`,
-        `| Networks meeting the target there | ${b?.met ?? '—'} | ${c.met ?? '—'} |`,
-        `| Data rows | ${b?.rows == null ? dash : (0,format/* formatCount */.B4)(b.rows)} | ${c.rows === null ? dash : (0,format/* formatCount */.B4)(c.rows)}${rowsDelta} |`,
-        `| Search time | ${(0,format/* formatSeconds */.Xo)(b?.searchSeconds)} | ${(0,format/* formatSeconds */.Xo)(c.searchSeconds)} |`,
-    ];
-    const gate = report.gate;
-    const terms = [`Target: ${(0,common_escape/* escapeMarkdown */.FV)((0,format/* targetPhrase */.Lx)(view.metricName, view.threshold))}`];
-    if (gate) {
-        terms.push(gate.maxWidth === null ? 'no device budget set' : `device budget: ${(0,format/* neurons */.nO)(gate.maxWidth)}`);
-        terms.push(`allowed growth over the baseline: ${gate.allowedGrowth}`);
-    }
-    terms.push(`data: ${(0,common_escape/* escapeMarkdown */.FV)(report.data.file)}`);
-    const backing = view.backing === null ? '' : `\n\n${(0,common_escape/* escapeMarkdown */.FV)(view.backing, 400)}`;
-    return `${rows.join('\n')}${backing}\n\n${terms.join(' · ')}.`;
+/** "on 539 judging rows" (or validation/training rows when those judged). */
+function judgingRowsPhrase(report) {
+    const j = report.search?.judging;
+    if (!j)
+        return '';
+    return `on ${(0,format/* formatCount */.B4)(j.rows)} ${j.on} rows`;
 }
-function chartSection(view, report) {
-    const chartWidths = new Set();
-    const accuracy = (0,common_metric/* higherIsBetter */.i2)(view.metricName);
-    const seriesOf = (pick) => {
-        const points = view.rows
-            .map((r) => ({ width: r.width, value: pick(r) }))
-            .filter((p) => p.value !== null && Number.isFinite(p.value))
-            .slice(-CHART_MAX_POINTS);
-        return { widths: points.map((p) => p.width), values: points.map((p) => p.value) };
-    };
-    const current = seriesOf((r) => r.current?.best ?? null);
-    const baseline = view.baseline ? seriesOf((r) => r.baseline?.best ?? null) : { widths: [], values: [] };
-    const parts = [];
-    if (current.widths.length > 0 || baseline.widths.length > 0) {
-        const range = metricRange([...current.values, ...baseline.values], view.threshold, accuracy);
-        const title = (who) => `${who}, best ${view.metricName} per width`;
-        parts.push(`#### ${capital((0,common_escape/* escapeMarkdown */.FV)(view.metricName))} by width`);
-        parts.push(`Bars: the best ${(0,common_escape/* escapeMarkdown */.FV)(view.metricName)} any restart reached at each width. Flat line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}. ` +
-            `The numbers are in the per-width table below.`);
-        for (const [who, s] of [
-            ['This change', current],
-            ['Baseline', baseline],
-        ]) {
-            if (s.widths.length === 0)
-                continue;
-            s.widths.forEach((w) => chartWidths.add(w));
-            parts.push(renderChart({
-                title: title(who),
-                xTitle: 'hidden neurons',
-                categories: s.widths.map(String),
-                yTitle: view.metricName,
-                yRange: range,
-                series: [
-                    { kind: 'bar', values: s.values },
-                    { kind: 'line', values: s.values.map(() => view.threshold) },
-                ],
-            }));
+/** The first answer: how many neurons the data need now, and what the witness scores. */
+function needsSentence(report) {
+    const base = report.baseline?.width ?? null;
+    const target = (0,format/* targetPhrase */.Lx)(report.metric.name, report.metric.threshold);
+    if (report.width === null) {
+        const why = report.search?.outcome === 'inconclusive'
+            ? 'not settled: the search stopped before it could decide'
+            : `no width in the search range is adequate (${report.search?.required ?? 1} of its networks meeting ${target})`;
+        return `${capitalise(why)}${base === null ? '' : `; the baseline needed ${(0,format/* neurons */.nO)(base)}`}.`;
+    }
+    const was = base === null
+        ? ''
+        : base === report.width
+            ? ', as the baseline did'
+            : ` (the baseline needed ${(0,format/* formatCount */.B4)(base)})`;
+    const parts = [`${(0,format/* neurons */.nO)(report.width)}${was}.`];
+    const value = report.metric.value;
+    if (value !== null) {
+        const int8 = report.device?.metric.int8 ?? null;
+        const decides = report.device?.precision ?? 'float32';
+        const forms = int8 === null
+            ? ''
+            : decides === 'int8'
+                ? ` in the int8 form that decides (float32 ${(0,format/* formatMetric */.gI)(report.device.metric.float32)})`
+                : `; int8 form ${(0,format/* formatMetric */.gI)(int8)}`;
+        const bound = `${(0,common_metric/* higherIsBetter */.i2)(report.metric.name) ? 'at least' : 'at most'} ${(0,format/* formatMetric */.gI)(report.metric.threshold)}`;
+        parts.push(`The witness scores ${report.metric.name} ${(0,format/* formatMetric */.gI)(value)} ${judgingRowsPhrase(report)} (target: ${bound})${forms}.`);
+    }
+    return parts.join(' ');
+}
+/** The spread of a regression target, so "rmse ≤ 6" can be read against its scale; null otherwise. */
+function targetSpreadSentence(report) {
+    const s = report.data.targetSpread;
+    if (!s || report.data.task !== 'regression')
+        return null;
+    return `The target column has mean ${(0,format/* formatMetric */.gI)(s.mean)}, standard deviation ${(0,format/* formatMetric */.gI)(s.std)}, range ${(0,format/* formatMetric */.gI)(s.min)} to ${(0,format/* formatMetric */.gI)(s.max)}.`;
+}
+/** Every data change, most important first within the fixed order a reader expects. */
+function changeItems(ch, esc) {
+    const items = [];
+    if (ch.file)
+        items.push({ weight: 2, text: `Data file ${esc(ch.file.before)} → ${esc(ch.file.after)}.` });
+    if (!ch.changed) {
+        items.push({ weight: 0, text: "Same data as the baseline's (same fingerprint)." });
+        return items;
+    }
+    const r = ch.rows;
+    const rowShare = r.before > 0 ? Math.abs(r.after - r.before) / r.before : 1;
+    items.push({
+        weight: rowShare >= 0.5 ? 5 : rowShare >= 0.05 ? 3 : 1,
+        text: `Rows ${(0,format/* formatCount */.B4)(r.before)} → ${(0,format/* formatCount */.B4)(r.after)} (${(0,format/* formatDelta */.CW)(r.after - r.before)}).`,
+    });
+    for (const label of ch.classesAppeared)
+        items.push({ weight: 6, text: `New class ${esc(label)}.` });
+    for (const label of ch.classesVanished)
+        items.push({ weight: 6, text: `Class ${esc(label)} no longer appears.` });
+    for (const c of ch.classes ?? []) {
+        if (c.before === c.after || c.before === 0 || c.after === 0)
+            continue;
+        // What matters is the class's share of the rows, not its count: all classes growing together is one change.
+        const moved = r.before > 0 && r.after > 0 ? Math.abs(c.after / r.after - c.before / r.before) : 1;
+        items.push({
+            weight: moved >= 0.05 ? 4 : 1,
+            text: `Class ${esc(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} → ${(0,format/* formatCount */.B4)(c.after)} rows (${(0,format/* formatDelta */.CW)(c.after - c.before)}${share(c, r)}).`,
+        });
+    }
+    for (const name of ch.columnsAdded)
+        items.push({ weight: 5, text: `Column added: ${esc(name)}.` });
+    for (const name of ch.columnsRemoved)
+        items.push({ weight: 5, text: `Column removed: ${esc(name)}.` });
+    for (const f of ch.features) {
+        const parts = [];
+        if (f.meanMoved) {
+            const by = f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} standard deviations)`;
+            parts.push(`mean ${(0,format/* formatMetric */.gI)(f.meanBefore)} → ${(0,format/* formatMetric */.gI)(f.meanAfter)}${by}`);
         }
+        if (f.rangeWidened) {
+            parts.push(`range ${(0,format/* formatMetric */.gI)(f.rangeBefore[0])} to ${(0,format/* formatMetric */.gI)(f.rangeBefore[1])} widened to ${(0,format/* formatMetric */.gI)(f.rangeAfter[0])} to ${(0,format/* formatMetric */.gI)(f.rangeAfter[1])}`);
+        }
+        if (parts.length === 0)
+            continue;
+        items.push({
+            weight: f.meanMoved ? 2 + Math.min(3, 1.5 * (f.shiftInStd ?? 0)) : 2,
+            text: `Feature ${esc(f.name)}: ${parts.join('; ')}.`,
+        });
     }
-    const drift = driftChart(view, report.gate?.maxWidth ?? null);
-    if (drift)
-        parts.push(drift);
-    return { text: parts.join('\n\n'), chartWidths };
+    for (const c of ch.categories) {
+        if (c.appeared.length > 0)
+            items.push({
+                weight: 4,
+                text: `Feature ${esc(c.feature)}: new categories ${c.appeared.map((s) => esc(s)).join(', ')}.`,
+            });
+        if (c.vanished.length > 0)
+            items.push({
+                weight: 3,
+                text: `Feature ${esc(c.feature)}: categories gone ${c.vanished.map((s) => esc(s)).join(', ')}.`,
+            });
+    }
+    return items;
 }
+/** "; 39% → 31% of the rows", when both row counts are known. */
+function share(c, rows) {
+    if (rows.before <= 0 || rows.after <= 0)
+        return '';
+    const pct = (n, of) => `${Math.round((100 * n) / of)}%`;
+    return `; ${pct(c.before, rows.before)} → ${pct(c.after, rows.after)} of the rows`;
+}
+/** Most changes the "why it changed" answer names; the evidence lists them all. */
+const WHY_ITEMS = 3;
+/** The third answer: why the width changed, from the settings and the data, most important first. */
+function whySentence(report, esc) {
+    const b = report.baseline;
+    if (b === null)
+        return `No baseline to compare with: this is the first measurement of this data (${(0,format/* formatCount */.B4)(report.data.rows)} rows).`;
+    const settings = b.settingsChanged ?? [];
+    const lead = settings.length > 0 ? `Settings changed: ${settings.map((s) => esc(s)).join('; ')}. ` : '';
+    const ch = report.changes;
+    if (ch === null)
+        return `${lead}`.trim();
+    if (!ch.changed) {
+        return settings.length > 0
+            ? `${lead}The data are the same as the baseline's.`
+            : "Nothing changed: the same data and settings as the baseline's.";
+    }
+    const items = changeItems(ch, esc)
+        .map((item, order) => ({ ...item, order }))
+        .sort((x, y) => y.weight - x.weight || x.order - y.order);
+    const shown = items.slice(0, WHY_ITEMS).map((i) => i.text);
+    const more = items.length - shown.length;
+    const tail = more > 0 ? ` And ${more} more change${more === 1 ? '' : 's'} in the details.` : '';
+    const quiet = items.every((i) => i.weight <= 1) ? ' No class, column or feature moved beyond the thresholds.' : '';
+    return `${lead}${shown.join(' ')}${quiet}${tail}`;
+}
+/** "Tried 14 removals on 3 networks: 3 removed, 11 put back; the witness was pruned from 8 to 7." */
+function pruningSentence(report) {
+    const steps = report.search?.pruning ?? [];
+    if (steps.length === 0)
+        return null;
+    const networks = new Set(steps.map((s) => `${s.source.width}/${s.source.restart}`)).size;
+    const removed = steps.filter((s) => s.accepted).length;
+    const w = report.search?.witness ?? null;
+    const witness = w !== null && w.how === 'pruned' && w.source.width !== w.width
+        ? `; the witness was pruned from ${w.source.width} to ${w.width} neurons`
+        : '';
+    return `Tried ${steps.length} removal${steps.length === 1 ? '' : 's'} on ${networks} network${networks === 1 ? '' : 's'}: ${removed} removed, ${steps.length - removed} put back${witness}.`;
+}
+/** "45 trainings in 9.40 s (growth 8.10 s, pruning 1.30 s)": what the search cost this run. */
+function searchCostSentence(report) {
+    const s = report.search;
+    if (!s)
+        return null;
+    const t = report.timing;
+    const split = typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
+        ? ` (growth ${(0,format/* formatSeconds */.Xo)(t['growthSeconds'])}, pruning ${(0,format/* formatSeconds */.Xo)(t['pruneSeconds'])})`
+        : '';
+    return `The search ran ${(0,format/* formatCount */.B4)(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${(0,format/* formatSeconds */.Xo)(t['searchSeconds'])}${split}.`;
+}
+/** Whether this run's result is already the baseline (nothing to accept). */
+function baselineIsCurrent(report) {
+    const b = report.baseline;
+    return (b !== null &&
+        b.width === report.width &&
+        b.sameSettings !== false &&
+        report.changes !== null &&
+        !report.changes.changed &&
+        report.changes.file === null);
+}
+/** What to do next, fitting the run: what was written, and the command the user would type. */
+function hints(report, context, esc, code) {
+    const out = [];
+    const config = context.configShown === null ? '' : ` --config ${esc(context.configShown)}`;
+    const file = esc(context.baselineFile ?? report.gate?.baselineFile ?? report.baseline?.file ?? 'the baseline file');
+    const written = context.baseline;
+    if (written !== null && 'file' in written) {
+        out.push(`Baseline written: ${esc(written.file)}, width ${written.width}, ${written.historyEntries} history entr${written.historyEntries === 1 ? 'y' : 'ies'}. Commit it to make it the baseline.`);
+    }
+    else if (written !== null) {
+        out.push(`Baseline not written: ${esc(written.notWritten, 400)}.`);
+    }
+    else if (report.width !== null && report.verdict !== 'inconclusive' && !baselineIsCurrent(report)) {
+        const command = code(`neuron-budget baseline${config}`);
+        const action = code('update-baseline: true');
+        const lead = report.verdict === 'new'
+            ? 'To record this result as the baseline'
+            : 'If this change is intended, accept it as the new baseline';
+        out.push(context.surface === 'action'
+            ? `${lead}: run the action with ${action}, or run ${command} and commit ${file}.`
+            : `${lead}: run ${command} and commit ${file}.`);
+    }
+    const budget = report.gate?.maxWidth ?? null;
+    if (budget !== null && report.width !== null && report.width > budget) {
+        out.push(`A new baseline does not lift the device budget: this check fails until the width fits it or ${code('gate.max-width')} is raised.`);
+    }
+    return out;
+}
+const SIGN_OFF = 'A passing gate is not a safety sign-off for a device.';
+function capitalise(s) {
+    return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
+}
+
+;// CONCATENATED MODULE: ./src/report/charts.ts
+/**
+ * The two charts, one per question, as chart specs with the sentence that reads them.
+ *
+ * Metric by width: one chart holds the baseline and this change, each width a pair of
+ * categories ("b7" the baseline, "7" this change), because Mermaid draws two bar series at the
+ * same place over each other. A side that did not decide a width has a bar of the axis minimum
+ * there, i.e. none. The bar is the `required`-th best judged metric, so a bar reaches the
+ * threshold line exactly when the width is adequate (recall floors aside). An empty category at
+ * each end carries the threshold line past the outer bars, so it shows even with one width.
+ */
+
+
+
+
+
+/** Most widths the metric chart shows; longer curves keep the widest (where the answer lies). */
+const CHART_MAX_WIDTHS = 15;
+/** Most baselines the drift chart shows. */
+const DRIFT_MAX_POINTS = 30;
+function metricChart(view, report) {
+    const required = report.search?.required ?? 1;
+    const rows = view.rows.slice(-CHART_MAX_WIDTHS);
+    const pairs = view.baseline !== null;
+    const now = rows.map((r) => r.current?.decisive ?? null);
+    const base = rows.map((r) => (r.baseline ? baselineDecisive(r.baseline, required) : null));
+    const values = [...now, ...base].filter((v) => v !== null && Number.isFinite(v));
+    if (values.length === 0)
+        return null;
+    const accuracy = (0,common_metric/* higherIsBetter */.i2)(view.metricName);
+    const range = metricRange(values, view.threshold, accuracy);
+    const floor = range[0];
+    const categories = [''];
+    const nowBars = [floor];
+    const baseBars = [floor];
+    rows.forEach((r, i) => {
+        if (pairs) {
+            categories.push(`b${r.width}${r.width === view.baseline?.width ? ' min' : ''}`);
+            baseBars.push(base[i] ?? floor);
+            nowBars.push(floor);
+        }
+        categories.push(`${r.width}${r.width === view.current.width ? ' min' : ''}`);
+        nowBars.push(now[i] ?? floor);
+        baseBars.push(floor);
+    });
+    categories.push(' ');
+    nowBars.push(floor);
+    baseBars.push(floor);
+    const which = nthBest(required);
+    const side = accuracy ? 'at or above' : 'at or below';
+    const legend = [
+        `Bars: the ${which} ${view.metricName} of the networks at each width, so a bar ${side} the line means the width is adequate (${required} network${required === 1 ? '' : 's'} met the target).`,
+        pairs ? 'Each width has two places: "b" and the width is the baseline, the width alone this change.' : '',
+        `"min" marks the smallest adequate width${pairs ? ' of each' : ''}. Line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}.`,
+        `The y-axis runs from ${(0,format/* formatMetric */.gI)(range[0])} to ${(0,format/* formatMetric */.gI)(range[1])}${range[0] === 0 ? '' : ', not from 0'}; the numbers are in the table.`,
+    ]
+        .filter((s) => s !== '')
+        .join(' ');
+    return {
+        spec: {
+            title: `${view.metricName} by hidden neurons`,
+            xTitle: 'hidden neurons',
+            categories,
+            yTitle: view.metricName,
+            yRange: range,
+            series: [
+                ...(pairs ? [{ kind: 'bar', values: baseBars }] : []),
+                { kind: 'bar', values: nowBars },
+                { kind: 'line', values: categories.map(() => view.threshold) },
+            ],
+        },
+        legend,
+        widths: rows.map((r) => r.width),
+    };
+}
+/** Capacity drift: the width of each accepted baseline, then this change, against the neuron budget. */
 function driftChart(view, budget) {
     if (view.history.length === 0)
-        return '';
-    const history = view.history.slice(-CHART_MAX_POINTS);
-    const labels = history.map((_, i) => String(view.history.length - history.length + i + 1));
-    const widths = history.map((h) => h.width);
+        return null;
+    const history = view.history.slice(-DRIFT_MAX_POINTS);
+    const first = view.history.length - history.length;
+    const categories = ['', ...history.map((_, i) => String(first + i + 1))];
+    const widths = [0, ...history.map((h) => h.width)];
     if (view.current.width !== null) {
-        labels.push('now');
+        categories.push('now');
         widths.push(view.current.width);
     }
-    return [
-        '#### Capacity drift',
-        `Bars: the smallest adequate width of each accepted baseline, oldest first (numbered as in the history table below)${view.current.width !== null ? ', then this change' : ''}.` +
-            (budget === null ? '' : ` Flat line: the device budget of ${budget}.`),
-        renderChart({
+    categories.push(' ');
+    widths.push(0);
+    const legend = `Bars: the smallest adequate width of each accepted baseline, oldest first (numbered as in the history table)${view.current.width !== null ? ', then this change' : ''}.` +
+        (budget === null
+            ? ' No neuron budget is set (gate.max-width).'
+            : ` Line: the device budget of ${budget} hidden neurons.`);
+    return {
+        spec: {
             title: 'Smallest adequate width over time',
             xTitle: 'accepted baseline',
-            categories: labels,
+            categories,
             yTitle: 'hidden neurons',
             yRange: countRange(budget === null ? widths : [...widths, budget]),
             series: [
                 { kind: 'bar', values: widths },
-                ...(budget === null ? [] : [{ kind: 'line', values: widths.map(() => budget) }]),
+                ...(budget === null ? [] : [{ kind: 'line', values: categories.map(() => budget) }]),
             ],
-        }),
-    ].join('\n\n');
+        },
+        legend,
+        widths: [],
+    };
 }
-function details(view, report, limits, chartWidths) {
-    const blocks = [];
-    if (view.rows.length > 0)
-        blocks.push(collapsible('Per-width results', widthTable(view, limits, chartWidths)));
-    if (view.history.length > 0)
-        blocks.push(collapsible(`Baseline history (${view.history.length})`, historyTable(view.history, limits)));
-    const pruning = report.search?.pruning ?? [];
-    if (pruning.length > 0)
-        blocks.push(collapsible(`Pruning steps (${pruning.length})`, pruneTable(pruning, limits)));
-    if (report.changes)
-        blocks.push(collapsible('What changed in the data', changesList(report.changes, limits)));
-    return blocks.join('\n\n');
-}
+
+;// CONCATENATED MODULE: ./src/report/context.ts
+const DEFAULT_CONTEXT = {
+    surface: 'cli',
+    mode: 'check',
+    configShown: null,
+    baselineFile: null,
+    baseline: null,
+};
+
+;// CONCATENATED MODULE: ./src/report/evidence.ts
+/**
+ * The comment's evidence, collapsed under the three answers: the per-width ladder, per-class
+ * figures, the baseline history, the pruning steps and every data change (Markdown tables).
+ */
+
+
+
+
 function collapsible(summary, body) {
     // The blank line after </summary> lets GitHub render the Markdown inside.
     return `<details><summary>${summary}</summary>\n\n${body}\n\n</details>`;
 }
-function widthTable(view, limits, chartWidths) {
+function num(v) {
+    return v === null || v === undefined || !Number.isFinite(v) ? '—' : (0,format/* formatMetric */.gI)(v);
+}
+/** "4 of 10 + 1 pruned": networks that met the target, by source. */
+function metCell(w) {
+    const fresh = `${w.metBy.fresh} of ${w.restarts}`;
+    return w.metBy.pruned > 0 ? `${fresh} + ${w.metBy.pruned} pruned` : fresh;
+}
+function ladderSection(view, report, limits, mustShow) {
+    const required = report.search?.required ?? 1;
+    const which = nthBest(required);
     const hasBaseline = view.baseline !== null;
-    const header = hasBaseline
-        ? '| Width | This change: best | Met | Wilson 95% | Baseline: best | Met |\n|--:|--:|--:|--:|--:|--:|'
-        : '| Width | Best | Met | Wilson 95% | Median epochs |\n|--:|--:|--:|--:|--:|';
-    const keep = pickRows(view.rows, limits.widthRows, (r) => chartWidths.has(r.width) || r.width === view.current.width);
+    const header = [
+        'Width',
+        'Met the target',
+        `${capitalise(which)}`,
+        'Best',
+        'Adequate',
+        ...(hasBaseline ? ['Baseline: met', `Baseline: ${which}`] : []),
+    ];
+    const keep = pickRows(view.rows, limits.widthRows, (r) => mustShow.has(r.width) || r.width === view.current.width);
     const lines = keep.kept.map((r) => {
         const c = r.current;
+        const marked = r.width === view.current.width || r.width === view.baseline?.width;
         const cells = [
-            mark(r.width, view),
+            marked ? `**${r.width}**` : String(r.width),
+            c ? metCell(c) : 'not decided',
+            num(c?.decisive),
             num(c?.best),
-            c ? metCell(c) : '—',
-            c ? `${c.wilson[0].toFixed(2)}–${c.wilson[1].toFixed(2)}` : '—',
+            c ? (c.adequate ? 'yes' : 'no') : '—',
         ];
         if (hasBaseline)
-            cells.push(num(r.baseline?.best), r.baseline ? String(r.baseline.met) : '—');
-        else
-            cells.push(c ? (0,format/* formatCount */.B4)(c.medianEpochs) : '—');
+            cells.push(r.baseline ? String(r.baseline.met) : '—', num(r.baseline ? baselineDecisive(r.baseline, required) : null));
         return `| ${cells.join(' | ')} |`;
     });
+    const align = header.map((_, i) => (i === 1 ? ':--' : '--:'));
     const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
-    return `${header}\n${lines.join('\n')}${omitted}\n\nMet: networks of that width that met the target (fresh restarts + networks pruned down to it). Wilson 95%: interval for the fresh restarts' success rate.`;
+    const bold = view.current.width !== null || view.baseline?.width != null
+        ? ' Bold: the smallest adequate width of this change and of the baseline.'
+        : '';
+    return (`| ${header.join(' | ')} |\n|${align.join('|')}|\n${lines.join('\n')}${omitted}\n\n` +
+        `Met the target: fresh restarts at that width that met it, of those run, plus networks pruned down to it. ` +
+        `A width is adequate when ${required} network${required === 1 ? '' : 's'} of it met the target, so the ${which} figure decides.${bold}` +
+        (searchCostSentence(report) === null ? '' : ` ${searchCostSentence(report)}`));
 }
-function mark(width, view) {
-    const tags = [];
-    if (width === view.current.width)
-        tags.push('this change');
-    if (view.baseline && width === view.baseline.width)
-        tags.push('baseline');
-    return tags.length > 0 ? `**${width}** (${tags.join(', ')})` : String(width);
+function classSection(report) {
+    const d = report.device;
+    if (d === null || d.classes === null)
+        return null;
+    const floors = d.classes.some((c) => c.floor !== null);
+    const head = `| Class | Rows | Recall | Precision${floors ? ' | Recall floor' : ''} |\n|:--|--:|--:|--:|${floors ? '--:|' : ''}`;
+    const lines = d.classes.map((c) => `| ${(0,common_escape/* escapeMarkdown */.FV)(c.label)} | ${(0,format/* formatCount */.B4)(c.rows)} | ${num(c.recall)} | ${num(c.precision)}${floors ? ` | ${num(c.floor)}` : ''} |`);
+    const parts = [`In the ${d.precision} form that decides.`, `${head}\n${lines.join('\n')}`];
+    if (d.confusion !== null) {
+        const labels = d.classes.map((c) => (0,common_escape/* escapeMarkdown */.FV)(c.label, 40));
+        const ch = `| True class ↓ predicted → | ${labels.join(' | ')} |\n|:--|${labels.map(() => '--:').join('|')}|`;
+        const rows = d.confusion.map((row, i) => `| ${labels[i]} | ${row.map((n) => (0,format/* formatCount */.B4)(n)).join(' | ')} |`);
+        parts.push(`${ch}\n${rows.join('\n')}`);
+    }
+    return parts.join('\n\n');
 }
-function historyTable(history, limits) {
+function historySection(history, limits) {
     const start = Math.max(0, history.length - limits.historyRows);
     const lines = history.slice(start).map((h, i) => {
         const commit = h.commit === null ? '—' : (0,common_escape/* escapeMarkdown */.FV)(h.commit.slice(0, 12));
@@ -45362,74 +45603,24 @@ function historyTable(history, limits) {
     const omitted = start > 0 ? `\n\n_The ${start} oldest entries are left out for length._` : '';
     return `| # | Date | Commit | Rows | Width | Metric |\n|--:|:--|:--|--:|--:|--:|\n${lines.join('\n')}${omitted}`;
 }
-function pruneTable(steps, limits) {
+function pruneSection(report, limits) {
+    const steps = report.search?.pruning ?? [];
+    const summary = pruningSentence(report);
+    if (summary === null)
+        return null;
     if (limits.pruneRows === 0)
-        return `_${steps.length} steps left out for length; the JSON report lists them._`;
+        return `${summary}\n\n_The steps are left out for length; the JSON report lists them._`;
     const shown = steps.slice(0, limits.pruneRows);
-    const lines = shown.map((s) => `| ${s.source.width}/${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back (needed)'} |`);
+    const lines = shown.map((s) => `| ${s.source.width} | ${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back'} |`);
     const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
-    return `| Restart | Width before | Neuron | Metric before | Metric after | Outcome |\n|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}`;
+    return (`${summary}\n\n| Grown width | Restart | Width before | Neuron index | Steering before | Steering after | Outcome |\n|--:|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}\n\n` +
+        'Neuron index counts from 0, as in the JSON report and the model file. A neuron is put back when the network without it no longer meets the target on the steering rows.');
 }
-function changesList(changes, limits) {
-    const items = [];
-    if (changes.file)
-        items.push(`Data file: ${(0,common_escape/* escapeMarkdown */.FV)(changes.file.before)} → ${(0,common_escape/* escapeMarkdown */.FV)(changes.file.after)}.`);
-    const r = changes.rows;
-    if (!changes.changed)
-        items.push("The data are the same as the baseline's (same fingerprint).");
-    else
-        items.push(`Rows: ${(0,format/* formatCount */.B4)(r.before)} → ${(0,format/* formatCount */.B4)(r.after)} (${(0,format/* formatDelta */.CW)(r.after - r.before)}).`);
-    for (const label of changes.classesAppeared)
-        items.push(`New class ${(0,common_escape/* escapeMarkdown */.FV)(label)}.`);
-    for (const label of changes.classesVanished)
-        items.push(`Class ${(0,common_escape/* escapeMarkdown */.FV)(label)} no longer appears.`);
-    for (const c of changes.classes ?? []) {
-        if (c.before !== c.after) {
-            items.push(`Class ${(0,common_escape/* escapeMarkdown */.FV)(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} → ${(0,format/* formatCount */.B4)(c.after)} rows (${(0,format/* formatDelta */.CW)(c.after - c.before)}).`);
-        }
-    }
-    for (const name of changes.columnsAdded)
-        items.push(`Column added: ${(0,common_escape/* escapeMarkdown */.FV)(name)}.`);
-    for (const name of changes.columnsRemoved)
-        items.push(`Column removed: ${(0,common_escape/* escapeMarkdown */.FV)(name)}.`);
-    for (const f of changes.features) {
-        const parts = [];
-        if (f.meanMoved) {
-            const by = f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} standard deviations)`;
-            parts.push(`mean ${num(f.meanBefore)} → ${num(f.meanAfter)}${by}`);
-        }
-        if (f.rangeWidened) {
-            parts.push(`range ${num(f.rangeBefore[0])} to ${num(f.rangeBefore[1])} widened to ${num(f.rangeAfter[0])} to ${num(f.rangeAfter[1])}`);
-        }
-        items.push(`Feature ${(0,common_escape/* escapeMarkdown */.FV)(f.name)}: ${parts.join('; ')}.`);
-    }
-    for (const c of changes.categories) {
-        if (c.appeared.length > 0)
-            items.push(`Feature ${(0,common_escape/* escapeMarkdown */.FV)(c.feature)}: new categories ${c.appeared.map((s) => (0,common_escape/* escapeMarkdown */.FV)(s)).join(', ')}.`);
-        if (c.vanished.length > 0)
-            items.push(`Feature ${(0,common_escape/* escapeMarkdown */.FV)(c.feature)}: categories gone ${c.vanished.map((s) => (0,common_escape/* escapeMarkdown */.FV)(s)).join(', ')}.`);
-    }
-    if (changes.changed && items.length === (changes.file ? 2 : 1)) {
-        items.push('No class, column or feature moved beyond the thresholds.');
-    }
+function changesSection(changes, limits) {
+    const items = changeItems(changes, common_escape/* escapeMarkdown */.FV).map((i) => i.text);
     const shown = items.slice(0, limits.changeItems);
     const omitted = items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
     return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation or its range widened.`;
-}
-function footer(view, report) {
-    const file = view.baselineFile === null ? 'the baseline file' : (0,common_escape/* escapeMarkdown */.FV)(view.baselineFile);
-    const accept = view.verdict === 'new'
-        ? 'To record this result as the baseline'
-        : 'If this change is intended, accept it as the new baseline';
-    const overBudget = overDeviceBudget(report)
-        ? ' A new baseline does not lift the device budget: this check keeps failing until the width fits it or `gate.max-width` is raised.'
-        : '';
-    return [
-        '---',
-        `${accept}: run \`neuron-budget baseline\` and commit ${file}, or run the action with \`update-baseline: true\`. ` +
-            `A baseline is only written when the search found a width.${overBudget}`,
-        `_neuron-budget ${(0,common_escape/* escapeMarkdown */.FV)(report.tool.version)} measures how many hidden neurons this data needs; a passing gate is not a safety sign-off for a device._`,
-    ].join('\n\n');
 }
 function pickRows(rows, max, must) {
     if (rows.length <= max)
@@ -45446,149 +45637,299 @@ function pickRows(rows, max, must) {
     });
     return { kept, omitted: rows.length - kept.length };
 }
-function num(v) {
-    return v === null || v === undefined ? '—' : (0,format/* formatMetric */.gI)(v);
+
+;// CONCATENATED MODULE: ./src/report/ledger.ts
+
+/** The ledger, or null when there is no width to cost. */
+function ledgerOf(report) {
+    // A network's cost depends on its width alone (for these inputs and outputs): the width's entry holds it.
+    const costAt = (width) => report.search?.widths.find((w) => w.width === width)?.cost ?? null;
+    if (report.width === null)
+        return null;
+    const c = report.device?.cost ?? costAt(report.width);
+    if (c === null)
+        return null;
+    const p = report.device?.precision ?? 'float32';
+    const other = p === 'int8' ? 'float32' : 'int8';
+    const g = report.gate ?? null;
+    const baselineWidth = report.baseline?.width ?? null;
+    const base = baselineWidth === null ? null : costAt(baselineWidth);
+    return {
+        precision: p,
+        baselineWidth,
+        rows: [
+            { label: 'hidden neurons', unit: '', now: report.width, budget: g?.maxWidth ?? null, atBaseline: baselineWidth },
+            {
+                label: `flash, ${p}`,
+                unit: ' B',
+                now: c.flashBytes[p],
+                budget: g?.maxFlashBytes ?? null,
+                atBaseline: base?.flashBytes[p] ?? null,
+            },
+            {
+                label: `flash, ${other}`,
+                unit: ' B',
+                now: c.flashBytes[other],
+                budget: null,
+                atBaseline: base?.flashBytes[other] ?? null,
+            },
+            {
+                label: `RAM, ${p}`,
+                unit: ' B',
+                now: c.ramBytes[p],
+                budget: g?.maxRamBytes ?? null,
+                atBaseline: base?.ramBytes[p] ?? null,
+            },
+            {
+                label: `RAM, ${other}`,
+                unit: ' B',
+                now: c.ramBytes[other],
+                budget: null,
+                atBaseline: base?.ramBytes[other] ?? null,
+            },
+            {
+                label: 'multiply-accumulates',
+                unit: '',
+                now: c.macs,
+                budget: g?.maxMacs ?? null,
+                atBaseline: base?.macs ?? null,
+            },
+        ],
+    };
 }
-function capital(s) {
-    return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
+function amount(n, unit) {
+    return `${(0,format/* formatCount */.B4)(n)}${unit}`;
 }
-/** "4 (1 + 3)": networks of the width that met the target, fresh + pruned when both occur. */
-function metCell(w) {
-    return w.metBy.pruned > 0 && w.metBy.fresh > 0 ? `${w.met} (${w.metBy.fresh} + ${w.metBy.pruned})` : String(w.met);
+/** "5 (over by 2)" / "600 B (fits, 77 B spare)" / "none set". */
+function budgetCell(row) {
+    if (row.budget === null)
+        return 'none set';
+    const gap = row.now - row.budget;
+    return gap > 0
+        ? `${amount(row.budget, row.unit)} (over by ${amount(gap, row.unit)})`
+        : `${amount(row.budget, row.unit)} (fits, ${amount(-gap, row.unit)} spare)`;
+}
+/** The second answer: does the width found fit the device? */
+function fitsSentence(ledger) {
+    if (ledger === null)
+        return 'Nothing to cost: no width is adequate.';
+    const budgeted = ledger.rows.filter((r) => r.budget !== null);
+    if (budgeted.length === 0) {
+        return 'No device budget is set, so nothing is gated; the ledger shows what the network costs. Set gate.max-width, gate.max-flash-bytes, gate.max-ram-bytes or gate.max-macs to gate on it.';
+    }
+    const over = budgeted.filter((r) => r.now > r.budget);
+    if (over.length > 0)
+        return `No: ${over.map((r) => `${excess(r)} over the budget of ${amount(r.budget, r.unit)}`).join('; ')}.`;
+    return `Yes, within every budget set: ${budgeted.map((r) => `${r.label} ${amount(r.now, r.unit)} of ${amount(r.budget, r.unit)}`).join(', ')}.`;
+}
+/** "2 hidden neurons" / "123 B of flash, int8" / "12 multiply-accumulates". */
+function excess(r) {
+    const gap = r.now - r.budget;
+    if (r.label === 'hidden neurons')
+        return (0,format/* neurons */.nO)(gap);
+    return r.unit === '' ? `${(0,format/* formatCount */.B4)(gap)} ${r.label}` : `${amount(gap, r.unit)} of ${r.label}`;
+}
+
+;// CONCATENATED MODULE: ./src/report/markdown.ts
+/**
+ * The pull-request comment and job summary (GitHub-flavoured Markdown), laid out around the
+ * reviewer's three questions: how many neurons does the data need now, does that fit the
+ * device, and why did it change. The verdict and the three answers come first; the evidence
+ * (metric by width, per class, capacity drift, pruning, every data change) follows collapsed.
+ * Every string from the repository passes through escapeMarkdown. When the comment would
+ * exceed the limit, only the evidence is shortened.
+ */
+
+
+
+
+
+
+
+
+
+/** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
+const COMMENT_LIMIT = 65_000;
+const DETAIL_LEVELS = [
+    { widthRows: Infinity, historyRows: Infinity, pruneRows: Infinity, changeItems: Infinity },
+    { widthRows: 200, historyRows: 100, pruneRows: 60, changeItems: 100 },
+    { widthRows: 80, historyRows: 40, pruneRows: 20, changeItems: 40 },
+    { widthRows: 0, historyRows: 12, pruneRows: 0, changeItems: 12 },
+];
+const code = (s) => `\`${s}\``;
+function renderMarkdown(report, options = {}) {
+    const limit = options.limit ?? COMMENT_LIMIT;
+    const context = options.context ?? DEFAULT_CONTEXT;
+    const view = viewOf(report);
+    const head = [headline(view), answers(view, report)].join('\n\n');
+    const foot = footer(report, context);
+    for (const level of DETAIL_LEVELS) {
+        const body = [head, evidence(view, report, level), foot].filter((s) => s !== '').join('\n\n');
+        if (body.length + 1 <= limit)
+            return `${body}\n`;
+    }
+    const note = "_The evidence was left out to keep this comment within GitHub's size limit; the JSON report has it all._";
+    return `${[head, note, foot].join('\n\n')}\n`;
+}
+function headline(view) {
+    const lines = [`### neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${(0,common_escape/* escapeMarkdown */.FV)(view.headline, errors/* MAX_MESSAGE */.h2)}`];
+    if (view.otherReasons.length > 0) {
+        lines.push('');
+        for (const r of view.otherReasons)
+            lines.push(`- ${(0,common_escape/* escapeMarkdown */.FV)(r, errors/* MAX_MESSAGE */.h2)}`);
+    }
+    return lines.join('\n');
+}
+/** The three answers, each led by its question's word in bold. */
+function answers(view, report) {
+    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
+    const ledger = ledgerOf(report);
+    const parts = [
+        `**Needs:** ${(0,common_escape/* escapeMarkdown */.FV)(needs.join(' '), 2 * errors/* MAX_MESSAGE */.h2)}`,
+        `**Fits the device:** ${(0,common_escape/* escapeMarkdown */.FV)(fitsSentence(ledger), errors/* MAX_MESSAGE */.h2)}`,
+    ];
+    if (ledger !== null)
+        parts.push(ledgerTable(ledger));
+    parts.push(`**Why it changed:** ${whySentence(report, common_escape/* escapeMarkdown */.FV)}`);
+    return parts.join('\n\n');
+}
+function ledgerTable(ledger) {
+    const base = ledger.baselineWidth;
+    const head = base === null
+        ? '| On the device | Needs now | Budget |\n|:--|--:|--:|'
+        : `| On the device | Needs now | Budget | At the baseline's ${base} |\n|:--|--:|--:|--:|`;
+    const lines = ledger.rows.map((r) => {
+        const cells = [r.label, `**${amount(r.now, r.unit)}**`, budgetCell(r)];
+        if (base !== null)
+            cells.push(r.atBaseline === null ? '—' : amount(r.atBaseline, r.unit));
+        return `| ${cells.join(' | ')} |`;
+    });
+    return `${head}\n${lines.join('\n')}`;
+}
+function evidence(view, report, limits) {
+    const blocks = [];
+    const metric = metricChart(view, report);
+    if (view.rows.length > 0) {
+        const chart = metric === null ? '' : `${metric.legend}\n\n${renderChart(metric.spec)}\n\n`;
+        blocks.push(collapsible(`Per width: ${(0,common_escape/* escapeMarkdown */.FV)(view.metricName)} of the ${view.rows.length} width${view.rows.length === 1 ? '' : 's'} decided`, `${chart}${ladderSection(view, report, limits, new Set(metric?.widths ?? []))}`));
+    }
+    const classes = classSection(report);
+    if (classes !== null)
+        blocks.push(collapsible('Per class, on the rows that judged the witness', classes));
+    const drift = driftChart(view, report.gate?.maxWidth ?? null);
+    if (drift !== null) {
+        blocks.push(collapsible(`Capacity drift: ${view.history.length} accepted baseline${view.history.length === 1 ? '' : 's'}`, `${drift.legend}\n\n${renderChart(drift.spec)}\n\n${historySection(view.history, limits)}`));
+    }
+    const pruning = pruneSection(report, limits);
+    if (pruning !== null)
+        blocks.push(collapsible(`Pruning: ${report.search.pruning.length} removals tried`, pruning));
+    if (report.changes)
+        blocks.push(collapsible('Every data change since the baseline', changesSection(report.changes, limits)));
+    return blocks.join('\n\n');
+}
+function footer(report, context) {
+    const lines = hints(report, context, common_escape/* escapeMarkdown */.FV, code);
+    const sign = `_neuron-budget ${(0,common_escape/* escapeMarkdown */.FV)(report.tool.version)} measures how many hidden neurons this data needs. ${SIGN_OFF}_`;
+    return ['---', ...lines, sign].join('\n\n');
 }
 
 ;// CONCATENATED MODULE: ./src/report/text.ts
+/**
+ * The terminal report: the same answers and words as the comment, plain text, at most 80 columns
+ * (a long repository name may run over; each is clipped at 200 characters).
+ */
+
+
+
 
 
 
 
 const TEXT_WIDTH = 80;
-function renderText(report) {
+function renderText(report, context = DEFAULT_CONTEXT) {
     const view = viewOf(report);
     const out = [];
-    const label = VERDICT_LABEL[view.verdict];
     // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
-    out.push(...wrap(`neuron-budget: ${label}. ${(0,common_escape/* escapeText */.X1)(view.headline, errors/* MAX_MESSAGE */.h2)}`, ''));
+    out.push(...wrap(`neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${(0,common_escape/* escapeText */.X1)(view.headline, errors/* MAX_MESSAGE */.h2)}`, ''));
     for (const r of view.otherReasons)
         out.push(...wrap((0,common_escape/* escapeText */.X1)(r, errors/* MAX_MESSAGE */.h2), '  - ', '    '));
-    out.push('');
-    const b = view.baseline;
-    const c = view.current;
-    const dash = '-';
-    const cWidth = currentWidthCell(view, report, dash);
-    const rowsDelta = b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${(0,format/* formatDelta */.CW)(c.rows - b.rows)})` : '';
-    const table = [
-        ['', 'baseline', 'this change'],
-        ['smallest adequate width', b?.width == null ? dash : String(b.width), cWidth],
-        [`${view.metricName} at that width`, fmt(b?.metric), fmt(c.metric)],
-        ['networks meeting target there', b?.met == null ? dash : String(b.met), c.met === null ? dash : String(c.met)],
-        [
-            'data rows',
-            b?.rows == null ? dash : (0,format/* formatCount */.B4)(b.rows),
-            c.rows === null ? dash : `${(0,format/* formatCount */.B4)(c.rows)}${rowsDelta}`,
-        ],
-        [
-            'search time',
-            (0,format/* formatSeconds */.Xo)(b?.searchSeconds).replace('—', dash),
-            (0,format/* formatSeconds */.Xo)(c.searchSeconds).replace('—', dash),
-        ],
-    ];
-    for (const [name, before, after] of table)
-        out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
-    if (view.backing !== null) {
-        out.push('');
-        out.push(...wrap(view.backing, ''));
-    }
-    out.push('');
-    const terms = [`target: ${(0,format/* targetPhrase */.Lx)(view.metricName, view.threshold)}`];
-    if (report.gate) {
-        terms.push(report.gate.maxWidth === null ? 'no device budget' : `device budget: ${(0,format/* neurons */.nO)(report.gate.maxWidth)}`);
-        terms.push(`allowed growth: ${report.gate.allowedGrowth}`);
-    }
-    out.push(...wrap(`${terms.join('; ')}.`, ''));
-    out.push(...wrap(`data: ${(0,common_escape/* escapeText */.X1)(report.data.file)}`, ''));
-    if (view.rows.length > 0) {
-        out.push('');
-        out.push(`${view.metricName} by width (best network; networks that met the target)`);
-        const head = b ? ['width', 'this change', 'met', 'baseline', 'met'] : ['width', 'best', 'met', 'wilson 95%'];
-        out.push(head.map((h, i) => (i === 0 ? h.padStart(7) : h.padStart(14))).join(''));
-        for (const r of view.rows) {
-            const cells = [
-                `${r.width === c.width ? '>' : ' '}${String(r.width).padStart(6)}`,
-                fmt(r.current?.best),
-                r.current ? String(r.current.met) : dash,
-            ];
-            if (b)
-                cells.push(fmt(r.baseline?.best), r.baseline ? String(r.baseline.met) : dash);
-            else
-                cells.push(r.current ? `${r.current.wilson[0].toFixed(2)}-${r.current.wilson[1].toFixed(2)}` : dash);
-            out.push(cells.map((x, i) => (i === 0 ? x : x.padStart(14))).join(''));
-        }
-        out.push("  (> marks this change's width; the threshold is " + (0,format/* formatMetric */.gI)(view.threshold) + ')');
-    }
+    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
+    out.push('', ...wrap(`Needs: ${needs.join(' ')}`, '', '  '));
+    const ledger = ledgerOf(report);
+    out.push('', ...wrap(`Fits the device: ${fitsSentence(ledger)}`, '', '  '));
+    if (ledger !== null)
+        out.push(...ledgerLines(ledger));
+    out.push('', ...wrap(`Why it changed: ${whySentence(report, common_escape/* escapeText */.X1)}`, '', '  '));
+    if (view.rows.length > 0)
+        out.push('', ...ladderLines(view, report));
     if (view.history.length > 0) {
         out.push('');
-        out.push(`capacity drift (accepted baselines, oldest first${c.width !== null ? ', then now' : ''}):`);
+        out.push(`capacity drift (accepted baselines, oldest first${view.current.width !== null ? ', then now' : ''}):`);
         const widths = view.history.slice(-20).map((h) => String(h.width));
-        if (c.width !== null)
-            widths.push(`now ${c.width}`);
-        out.push(...wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
+        if (view.current.width !== null)
+            widths.push(`now ${view.current.width}`);
+        const budget = report.gate?.maxWidth ?? null;
+        out.push(...wrap(`width ${widths.join(' -> ')}${budget === null ? '' : ` (budget ${budget})`}`, '  ', '  '));
     }
-    const pruning = report.search?.pruning ?? [];
-    if (pruning.length > 0) {
-        const removed = pruning.filter((s) => s.accepted).length;
-        out.push('');
-        out.push(`pruning: ${pruning.length} step${pruning.length === 1 ? '' : 's'}, ${removed} neuron${removed === 1 ? '' : 's'} removed`);
-    }
+    const pruning = pruningSentence(report);
+    if (pruning !== null)
+        out.push('', ...wrap(`pruning: ${pruning[0].toLowerCase()}${pruning.slice(1)}`, '', '  '));
     if (report.changes) {
-        out.push('');
-        out.push('data changes since the baseline:');
-        for (const line of changeLines(report.changes))
-            out.push(...wrap(line, '  - ', '    '));
+        out.push('', 'data changes since the baseline:');
+        for (const item of changeItems(report.changes, common_escape/* escapeText */.X1))
+            out.push(...wrap(item.text, '  - ', '    '));
     }
     out.push('');
-    out.push(...wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''));
-    if (overDeviceBudget(report)) {
-        out.push(...wrap('A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.', ''));
-    }
-    out.push(...wrap('A passing gate is not a safety sign-off for a device.', ''));
+    for (const line of hints(report, context, common_escape/* escapeText */.X1, (s) => s))
+        out.push(...wrap(line, ''));
+    out.push(...wrap(SIGN_OFF, ''));
     return `${out.join('\n')}\n`;
 }
-function changeLines(ch) {
-    const lines = [];
-    if (ch.file)
-        lines.push(`data file ${(0,common_escape/* escapeText */.X1)(ch.file.before)} -> ${(0,common_escape/* escapeText */.X1)(ch.file.after)}`);
-    if (!ch.changed)
-        lines.push('same data as the baseline (same fingerprint)');
-    else
-        lines.push(`rows ${(0,format/* formatCount */.B4)(ch.rows.before)} -> ${(0,format/* formatCount */.B4)(ch.rows.after)} (${ascii((0,format/* formatDelta */.CW)(ch.rows.after - ch.rows.before))})`);
-    for (const l of ch.classesAppeared)
-        lines.push(`new class ${(0,common_escape/* escapeText */.X1)(l)}`);
-    for (const l of ch.classesVanished)
-        lines.push(`class ${(0,common_escape/* escapeText */.X1)(l)} no longer appears`);
-    for (const c of ch.classes ?? []) {
-        if (c.before !== c.after)
-            lines.push(`class ${(0,common_escape/* escapeText */.X1)(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} -> ${(0,format/* formatCount */.B4)(c.after)} rows (${ascii((0,format/* formatDelta */.CW)(c.after - c.before))})`);
+function ledgerLines(ledger) {
+    const base = ledger.baselineWidth;
+    const head = ['on the device', 'needs now', 'budget', ...(base === null ? [] : [`at baseline's ${base}`])];
+    const rows = ledger.rows.map((r) => [
+        r.label,
+        amount(r.now, r.unit),
+        budgetCell(r),
+        ...(base === null ? [] : [r.atBaseline === null ? '-' : amount(r.atBaseline, r.unit)]),
+    ]);
+    const widths = [22, 11, 20, 18];
+    return [head, ...rows].map((cells) => `  ${cells.map((c, i) => (i === 0 ? c.padEnd(widths[0]) : c.padStart(widths[i]))).join('')}`.trimEnd());
+}
+function ladderLines(view, report) {
+    const required = report.search?.required ?? 1;
+    const b = view.baseline;
+    const out = [`${view.metricName} by width (met: networks that met the target; ${nthBest(required)} decides)`];
+    const head = ['width', 'met', nthBest(required), 'best', 'adequate', ...(b ? ['baseline met'] : [])];
+    const widths = [7, 16, 11, 10, 10, 14];
+    const line = (cells) => cells
+        .map((c, i) => c.padStart(widths[i]))
+        .join('')
+        .trimEnd();
+    out.push(line(head));
+    for (const r of view.rows) {
+        const c = r.current;
+        const marked = r.width === view.current.width ? '>' : ' ';
+        out.push(line([
+            `${marked}${r.width}`,
+            c ? `${c.metBy.fresh} of ${c.restarts}${c.metBy.pruned > 0 ? ` +${c.metBy.pruned}p` : ''}` : 'not decided',
+            fmt(c?.decisive),
+            fmt(c?.best),
+            c ? (c.adequate ? 'yes' : 'no') : '-',
+            ...(b ? [r.baseline ? String(r.baseline.met) : '-'] : []),
+        ]));
     }
-    for (const n of ch.columnsAdded)
-        lines.push(`column added: ${(0,common_escape/* escapeText */.X1)(n)}`);
-    for (const n of ch.columnsRemoved)
-        lines.push(`column removed: ${(0,common_escape/* escapeText */.X1)(n)}`);
-    for (const f of ch.features) {
-        const parts = [];
-        if (f.meanMoved)
-            parts.push(`mean ${fmt(f.meanBefore)} -> ${fmt(f.meanAfter)}${f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} std)`}`);
-        if (f.rangeWidened)
-            parts.push(`range ${fmt(f.rangeBefore[0])}..${fmt(f.rangeBefore[1])} -> ${fmt(f.rangeAfter[0])}..${fmt(f.rangeAfter[1])}`);
-        lines.push(`feature ${(0,common_escape/* escapeText */.X1)(f.name)}: ${parts.join('; ')}`);
-    }
-    for (const c of ch.categories) {
-        if (c.appeared.length > 0)
-            lines.push(`feature ${(0,common_escape/* escapeText */.X1)(c.feature)}: new categories ${c.appeared.map((s) => (0,common_escape/* escapeText */.X1)(s)).join(', ')}`);
-        if (c.vanished.length > 0)
-            lines.push(`feature ${(0,common_escape/* escapeText */.X1)(c.feature)}: categories gone ${c.vanished.map((s) => (0,common_escape/* escapeText */.X1)(s)).join(', ')}`);
-    }
-    return lines;
+    const notes = [`threshold ${(0,format/* formatMetric */.gI)(view.threshold)}`];
+    if (view.current.width !== null)
+        notes.unshift("> marks this change's smallest adequate width");
+    if (view.rows.some((r) => (r.current?.metBy.pruned ?? 0) > 0))
+        notes.push('+Np: N networks pruned down to it');
+    out.push(...wrap(`(${notes.join('; ')})`, '  ', '  '));
+    const cost = searchCostSentence(report);
+    if (cost !== null)
+        out.push(...wrap(cost, '  ', '  '));
+    return out;
 }
 /** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
 function wrap(text, first, rest = first) {
@@ -45610,10 +45951,7 @@ function wrap(text, first, rest = first) {
     return lines;
 }
 function fmt(v) {
-    return v === null || v === undefined ? '-' : (0,format/* formatMetric */.gI)(v);
-}
-function ascii(s) {
-    return s.replace('−', '-');
+    return v === null || v === undefined || !Number.isFinite(v) ? '-' : (0,format/* formatMetric */.gI)(v);
 }
 
 ;// CONCATENATED MODULE: ./src/report/json.ts
@@ -45641,6 +45979,9 @@ function withGate(report, outcome, gate) {
             : null,
         gate: {
             maxWidth: gate.maxWidth,
+            maxFlashBytes: gate.maxFlashBytes,
+            maxRamBytes: gate.maxRamBytes,
+            maxMacs: gate.maxMacs,
             allowedGrowth: gate.allowedGrowth,
             metricTolerance: gate.metricTolerance,
             baselineFile: gate.baselineAsWritten,
@@ -45651,6 +45992,7 @@ function withGate(report, outcome, gate) {
 
 ;// CONCATENATED MODULE: ./src/report/index.ts
 /** Rendering a report: pull-request comment / job summary, terminal text, JSON. */
+
 
 
 
@@ -45742,11 +46084,26 @@ async function runJob(options) {
         await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
     }
     const verdict = report.verdict;
+    const context = {
+        surface: options.surface ?? 'cli',
+        mode: options.mode,
+        configShown: options.configShown ?? null,
+        baselineFile: displayPath(loaded.root, baselinePath),
+        baseline: options.mode === 'check'
+            ? null
+            : gate.written !== null && report.width !== null
+                ? {
+                    file: displayPath(loaded.root, baselinePath),
+                    width: report.width,
+                    historyEntries: gate.historyEntries ?? 1,
+                }
+                : { notWritten: gate.notWritten ?? 'no width reached the target' },
+    };
     return {
         report,
         verdict,
-        markdown: renderMarkdown(report),
-        text: renderText(report),
+        markdown: renderMarkdown(report, { context }),
+        text: renderText(report, context),
         baselineWritten: gate.written,
         modelWritten,
         exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
@@ -46104,7 +46461,7 @@ function readInputs(get, env = process.env) {
             key: 'working-directory',
         });
     }
-    const configWritten = get('config') || 'neuron-budget.yml';
+    const configWritten = get('config') || DEFAULT_CONFIG;
     const configPath = resolveInput(workspace, workingDirectory, 'config', configWritten);
     const configKey = (0,external_node_path_namespaceObject.relative)(workspace, configPath).split(external_node_path_namespaceObject.sep).join('/');
     return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers };
@@ -46134,7 +46491,17 @@ function failureMarkdown(message, kind) {
     const tail = kind === 'input'
         ? 'No verdict was reached, so this change has not been checked. The error is also annotated on the file.'
         : 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.';
-    return `${head}\n\n<pre>${(0,common_escape/* escapeMarkdown */.FV)(message, errors/* MAX_MESSAGE */.h2)}</pre>\n\n${tail}\n`;
+    return `${head}\n\n${codeBlock((0,common_escape/* escapeLines */.RQ)((0,common_escape/* clip */.$Q)(message, errors/* MAX_MESSAGE */.h2)))}\n\n${tail}\n`;
+}
+/**
+ * A fenced code block: shown verbatim, and GitHub links nothing inside one (no mention, reference
+ * or URL). The fence is longer than any run of backticks in the text, so the text cannot close it;
+ * control characters are already shown escaped.
+ */
+function codeBlock(text) {
+    const longest = Math.max(0, ...(text.match(/`+/g) ?? []).map((run) => run.length));
+    const fence = '`'.repeat(Math.max(3, longest + 1));
+    return `${fence}text\n${text}\n${fence}`;
 }
 function fitSummary(markdown, limit = SUMMARY_LIMIT) {
     if (markdown.length <= limit)
@@ -46389,6 +46756,7 @@ function logUntrusted(text) {
 
 
 
+
 /** Verdicts that fail the step; the rest pass it. */
 const FAILING = new Set(['fail', 'inconclusive']);
 function runUrl() {
@@ -46555,6 +46923,8 @@ async function run() {
                 // The bundle this runs in is also the search's worker entry.
                 workerEntry: (0,external_node_url_.fileURLToPath)(import.meta.url),
                 commit: process.env['GITHUB_SHA'] || null,
+                surface: 'action',
+                configShown: inputs.configKey === DEFAULT_CONFIG ? null : inputs.configKey,
                 onProgress: (ev) => {
                     if (ev.phase !== phase) {
                         if (phase !== null) {
@@ -46607,7 +46977,7 @@ async function run() {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(9294);
+/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4746);
 /* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6202);
 /**
  * Entry of the action bundle (dist/index.js). The same bundle is also the entry of the search's
@@ -49859,6 +50229,13 @@ function median(values) {
     const mid = s.length >> 1;
     return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
 }
+/** The n-th best finite value (1 = the best), or null when fewer than n are finite. */
+function nthBest(values, n, target) {
+    const finite = values
+        .filter(Number.isFinite)
+        .sort((a, b) => ((0,metric/* isBetter */.LK)(target.metric, a, b) ? -1 : (0,metric/* isBetter */.LK)(target.metric, b, a) ? 1 : 0));
+    return finite.length >= n ? finite[n - 1] : null;
+}
 function bestOf(values, target) {
     let best = null;
     for (const v of values)
@@ -49916,6 +50293,7 @@ function tally(plan, target, tried, pruned, seed) {
             metBy: { fresh: freshMet, pruned: prunedMet },
             adequate: freshMet + prunedMet >= plan.required,
             best: bestOf(all.map((r) => r.judged), target),
+            decisive: nthBest(all.map((r) => r.judged), plan.required, target),
             bestTrain: bestOf(all.map((r) => r.train), target),
             median: median(runs.map((r) => r.judged).filter(Number.isFinite)),
             wilson: wilsonInterval(freshMet, runs.length),

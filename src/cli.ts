@@ -56,6 +56,8 @@ async function main(argv: readonly string[]): Promise<number> {
       modelPath: fromCwd(flags.model),
       workers: invocation.workers,
       workerEntry: fileURLToPath(import.meta.url),
+      surface: 'cli',
+      configShown: flags.config ?? null,
       log: (line) => {
         progress.done();
         err.write(`${escapeLines(line)}\n`);

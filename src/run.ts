@@ -12,7 +12,7 @@ import { costShapeOf, deviceCost } from './device/index.js';
 import { modelDocument, serializeModel } from './model/index.js';
 import { dataStageReport, searchStageReport } from './report/assemble.js';
 import { dataSummaryText } from './report/data-summary.js';
-import { renderMarkdown, renderText, withGate, type Report } from './report/index.js';
+import { renderMarkdown, renderText, withGate, type RenderContext, type Report } from './report/index.js';
 import { runSearch } from './search/index.js';
 import type { ProgressEvent } from './search/types.js';
 import { TOOL_VERSION } from './version.js';
@@ -35,6 +35,10 @@ export interface JobOptions {
   workerEntry?: string | null;
   /** Commit the data came from, for the baseline history. */
   commit?: string | null;
+  /** Who shows the result (for hints that fit): the command line or the action. */
+  surface?: RenderContext['surface'];
+  /** The config file as the user named it, for commands in hints; null or absent when it was the default. */
+  configShown?: string | null;
   onProgress?: (event: ProgressEvent) => void;
   /** Plain log lines (phase changes, per-width results); they quote repository strings, escaped. */
   log?: (line: string) => void;
@@ -129,11 +133,27 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
   }
   const verdict = report.verdict;
+  const context: RenderContext = {
+    surface: options.surface ?? 'cli',
+    mode: options.mode,
+    configShown: options.configShown ?? null,
+    baselineFile: displayPath(loaded.root, baselinePath),
+    baseline:
+      options.mode === 'check'
+        ? null
+        : gate.written !== null && report.width !== null
+          ? {
+              file: displayPath(loaded.root, baselinePath),
+              width: report.width,
+              historyEntries: gate.historyEntries ?? 1,
+            }
+          : { notWritten: gate.notWritten ?? 'no width reached the target' },
+  };
   return {
     report,
     verdict,
-    markdown: renderMarkdown(report),
-    text: renderText(report),
+    markdown: renderMarkdown(report, { context }),
+    text: renderText(report, context),
     baselineWritten: gate.written,
     modelWritten,
     exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,

@@ -4,12 +4,13 @@
  */
 import { parseArgs } from 'node:util';
 import { quote } from '../common/escape.js';
+import { DEFAULT_CONFIG } from '../common/paths.js';
 import { UserError } from '../common/errors.js';
 import { didYouMean } from '../common/suggest.js';
 import { MAX_WORKERS, parseWorkerCount } from '../common/workers.js';
 import { TOOL_NAME } from '../version.js';
 
-export const DEFAULT_CONFIG = 'neuron-budget.yml';
+export { DEFAULT_CONFIG };
 
 export type Command = 'check' | 'baseline' | 'export' | 'predict';
 export type FlagName = 'config' | 'report' | 'model' | 'baseline' | 'workers' | 'format' | 'out' | 'name';

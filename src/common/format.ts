@@ -22,10 +22,10 @@ export function formatCount(n: number): string {
   return n < 0 ? `-${grouped}` : grouped;
 }
 
-/** Signed difference: +12, −3, 0. */
+/** Signed difference: +12, -3, 0 (ASCII minus, the same in tables, lists and the terminal). */
 export function formatDelta(n: number): string {
   if (n > 0) return `+${formatCount(n)}`;
-  if (n < 0) return `−${formatCount(-n)}`;
+  if (n < 0) return `-${formatCount(-n)}`;
   return '0';
 }
 

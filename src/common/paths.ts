@@ -74,3 +74,6 @@ export function resolveInside(root: string, baseDir: string, p: string, key?: st
   if (!result.ok) throw new UserError(key ? `${key}: ${result.reason}` : result.reason, key ? { key } : {});
   return result.path;
 }
+
+/** The config file the command line and the action read when none is named. */
+export const DEFAULT_CONFIG = 'neuron-budget.yml';

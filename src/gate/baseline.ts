@@ -93,6 +93,7 @@ export function nextBaseline(previous: Baseline | null, current: RunFacts, meta:
       met: w.met,
       adequate: w.adequate,
       best: w.best,
+      decisive: w.decisive,
     })),
     data: {
       file: config.data.pathAsWritten.replace(/\\/g, '/'),

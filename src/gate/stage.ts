@@ -43,6 +43,8 @@ export interface GateStageResult {
   written: string | null;
   /** Baseline mode: why nothing was written, else null. */
   notWritten: string | null;
+  /** Entries in the history of the baseline written, else null. */
+  historyEntries: number | null;
   /** The gate settings in effect (the --baseline override applied), for withGate. */
   gate: GateConfig;
 }
@@ -63,10 +65,11 @@ export async function runGateStage(input: GateStageInput): Promise<GateStageResu
     baseline: previous,
     cost: input.cost ?? null,
   });
-  if (input.mode === 'check') return { outcome, written: null, notWritten: null, gate: config.gate };
+  if (input.mode === 'check')
+    return { outcome, written: null, notWritten: null, historyEntries: null, gate: config.gate };
 
   const why = whyNotRecordable(input.result);
-  if (why !== null) return { outcome, written: null, notWritten: why, gate: config.gate };
+  if (why !== null) return { outcome, written: null, notWritten: why, historyEntries: null, gate: config.gate };
   const next = nextBaseline(
     previous,
     { result: input.result, loaded: input.loaded, config },
@@ -74,5 +77,11 @@ export async function runGateStage(input: GateStageInput): Promise<GateStageResu
   );
   // Only if the file still holds what `previous` was read from: never drop another run's entry.
   await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
-  return { outcome, written: input.baselinePath, notWritten: null, gate: config.gate };
+  return {
+    outcome,
+    written: input.baselinePath,
+    notWritten: null,
+    historyEntries: next.history.length,
+    gate: config.gate,
+  };
 }

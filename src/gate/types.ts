@@ -20,6 +20,8 @@ export interface BaselineWidth {
   adequate: boolean;
   /** Best judged metric over the networks of this width; null when none finished. */
   best: number | null;
+  /** The `required`-th best judged metric there (what adequacy turns on); absent in files from before it was recorded. */
+  decisive?: number | null;
 }
 
 /** One accepted result, kept so capacity drift can be drawn over time. */

@@ -5,7 +5,7 @@
  */
 import { realpathSync, statSync } from 'node:fs';
 import { isAbsolute, join, relative, resolve, sep } from 'node:path';
-import { resolveInside } from '../common/paths.js';
+import { DEFAULT_CONFIG, resolveInside } from '../common/paths.js';
 import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 import { MAX_WORKERS, parseWorkerCount } from '../common/workers.js';
@@ -99,7 +99,7 @@ export function readInputs(get: InputReader, env: NodeJS.ProcessEnv = process.en
     });
   }
 
-  const configWritten = get('config') || 'neuron-budget.yml';
+  const configWritten = get('config') || DEFAULT_CONFIG;
   const configPath = resolveInput(workspace, workingDirectory, 'config', configWritten);
   const configKey = relative(workspace, configPath).split(sep).join('/');
 

@@ -8,6 +8,7 @@ import { context } from '@actions/github';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { escapeText } from '../common/escape.js';
+import { DEFAULT_CONFIG } from '../common/paths.js';
 import { isUserError, MAX_MESSAGE, type UserError } from '../common/errors.js';
 import { EXIT } from '../common/exit-codes.js';
 import { writeFileAtomic } from '../files/atomic.js';
@@ -211,6 +212,8 @@ export async function run(): Promise<void> {
         // The bundle this runs in is also the search's worker entry.
         workerEntry: fileURLToPath(import.meta.url),
         commit: process.env['GITHUB_SHA'] || null,
+        surface: 'action',
+        configShown: inputs.configKey === DEFAULT_CONFIG ? null : inputs.configKey,
         onProgress: (ev) => {
           if (ev.phase !== phase) {
             if (phase !== null) {

@@ -30,6 +30,9 @@ export function withGate(report: ReportDraft, outcome: GateOutcome, gate: GateCo
       : null,
     gate: {
       maxWidth: gate.maxWidth,
+      maxFlashBytes: gate.maxFlashBytes,
+      maxRamBytes: gate.maxRamBytes,
+      maxMacs: gate.maxMacs,
       allowedGrowth: gate.allowedGrowth,
       metricTolerance: gate.metricTolerance,
       baselineFile: gate.baselineAsWritten,

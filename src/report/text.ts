@@ -1,156 +1,112 @@
 /**
- * The terminal report: the same facts as the comment, plain text, at most 80 columns
+ * The terminal report: the same answers and words as the comment, plain text, at most 80 columns
  * (a long repository name may run over; each is clipped at 200 characters).
  */
-import type { DataChanges } from '../gate/types.js';
 import { escapeText as plain } from '../common/escape.js';
 import { MAX_MESSAGE } from '../common/errors.js';
-import { formatCount, formatDelta, formatMetric, formatSeconds, neurons, targetPhrase } from '../common/format.js';
+import { formatMetric } from '../common/format.js';
+import { DEFAULT_CONTEXT, type RenderContext } from './context.js';
+import { amount, budgetCell, fitsSentence, ledgerOf, type Ledger } from './ledger.js';
 import type { Report } from './types.js';
-import { currentWidthCell, overDeviceBudget, VERDICT_LABEL, viewOf } from './view.js';
+import { VERDICT_LABEL, viewOf, type ReportView } from './view.js';
+import {
+  changeItems,
+  hints,
+  needsSentence,
+  nthBest,
+  pruningSentence,
+  searchCostSentence,
+  SIGN_OFF,
+  targetSpreadSentence,
+  whySentence,
+} from './words.js';
 
 export const TEXT_WIDTH = 80;
 
-export function renderText(report: Report): string {
+export function renderText(report: Report, context: RenderContext = DEFAULT_CONTEXT): string {
   const view = viewOf(report);
   const out: string[] = [];
-  const label = VERDICT_LABEL[view.verdict];
   // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
-  out.push(...wrap(`neuron-budget: ${label}. ${plain(view.headline, MAX_MESSAGE)}`, ''));
+  out.push(...wrap(`neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${plain(view.headline, MAX_MESSAGE)}`, ''));
   for (const r of view.otherReasons) out.push(...wrap(plain(r, MAX_MESSAGE), '  - ', '    '));
-  out.push('');
 
-  const b = view.baseline;
-  const c = view.current;
-  const dash = '-';
-  const cWidth = currentWidthCell(view, report, dash);
-  const rowsDelta =
-    b && b.rows !== null && c.rows !== null && b.rows !== c.rows ? ` (${formatDelta(c.rows - b.rows)})` : '';
-  const table: [string, string, string][] = [
-    ['', 'baseline', 'this change'],
-    ['smallest adequate width', b?.width == null ? dash : String(b.width), cWidth],
-    [`${view.metricName} at that width`, fmt(b?.metric), fmt(c.metric)],
-    ['networks meeting target there', b?.met == null ? dash : String(b.met), c.met === null ? dash : String(c.met)],
-    [
-      'data rows',
-      b?.rows == null ? dash : formatCount(b.rows),
-      c.rows === null ? dash : `${formatCount(c.rows)}${rowsDelta}`,
-    ],
-    [
-      'search time',
-      formatSeconds(b?.searchSeconds).replace('—', dash),
-      formatSeconds(c.searchSeconds).replace('—', dash),
-    ],
-  ];
-  for (const [name, before, after] of table)
-    out.push(`${name.padEnd(32)}${before.padStart(16)}${after.padStart(24)}`.trimEnd());
-  if (view.backing !== null) {
-    out.push('');
-    out.push(...wrap(view.backing, ''));
-  }
-  out.push('');
-  const terms = [`target: ${targetPhrase(view.metricName, view.threshold)}`];
-  if (report.gate) {
-    terms.push(report.gate.maxWidth === null ? 'no device budget' : `device budget: ${neurons(report.gate.maxWidth)}`);
-    terms.push(`allowed growth: ${report.gate.allowedGrowth}`);
-  }
-  out.push(...wrap(`${terms.join('; ')}.`, ''));
-  out.push(...wrap(`data: ${plain(report.data.file)}`, ''));
+  const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
+  out.push('', ...wrap(`Needs: ${needs.join(' ')}`, '', '  '));
+  const ledger = ledgerOf(report);
+  out.push('', ...wrap(`Fits the device: ${fitsSentence(ledger)}`, '', '  '));
+  if (ledger !== null) out.push(...ledgerLines(ledger));
+  out.push('', ...wrap(`Why it changed: ${whySentence(report, plain)}`, '', '  '));
 
-  if (view.rows.length > 0) {
-    out.push('');
-    out.push(`${view.metricName} by width (best network; networks that met the target)`);
-    const head = b ? ['width', 'this change', 'met', 'baseline', 'met'] : ['width', 'best', 'met', 'wilson 95%'];
-    out.push(head.map((h, i) => (i === 0 ? h.padStart(7) : h.padStart(14))).join(''));
-    for (const r of view.rows) {
-      const cells = [
-        `${r.width === c.width ? '>' : ' '}${String(r.width).padStart(6)}`,
-        fmt(r.current?.best),
-        r.current ? String(r.current.met) : dash,
-      ];
-      if (b) cells.push(fmt(r.baseline?.best), r.baseline ? String(r.baseline.met) : dash);
-      else cells.push(r.current ? `${r.current.wilson[0].toFixed(2)}-${r.current.wilson[1].toFixed(2)}` : dash);
-      out.push(cells.map((x, i) => (i === 0 ? x : x.padStart(14))).join(''));
-    }
-    out.push("  (> marks this change's width; the threshold is " + formatMetric(view.threshold) + ')');
-  }
-
+  if (view.rows.length > 0) out.push('', ...ladderLines(view, report));
   if (view.history.length > 0) {
     out.push('');
-    out.push(`capacity drift (accepted baselines, oldest first${c.width !== null ? ', then now' : ''}):`);
+    out.push(`capacity drift (accepted baselines, oldest first${view.current.width !== null ? ', then now' : ''}):`);
     const widths = view.history.slice(-20).map((h) => String(h.width));
-    if (c.width !== null) widths.push(`now ${c.width}`);
-    out.push(...wrap(`width ${widths.join(' -> ')}`, '  ', '  '));
+    if (view.current.width !== null) widths.push(`now ${view.current.width}`);
+    const budget = report.gate?.maxWidth ?? null;
+    out.push(...wrap(`width ${widths.join(' -> ')}${budget === null ? '' : ` (budget ${budget})`}`, '  ', '  '));
   }
-
-  const pruning = report.search?.pruning ?? [];
-  if (pruning.length > 0) {
-    const removed = pruning.filter((s) => s.accepted).length;
-    out.push('');
-    out.push(
-      `pruning: ${pruning.length} step${pruning.length === 1 ? '' : 's'}, ${removed} neuron${removed === 1 ? '' : 's'} removed`,
-    );
-  }
-
+  const pruning = pruningSentence(report);
+  if (pruning !== null) out.push('', ...wrap(`pruning: ${pruning[0].toLowerCase()}${pruning.slice(1)}`, '', '  '));
   if (report.changes) {
-    out.push('');
-    out.push('data changes since the baseline:');
-    for (const line of changeLines(report.changes)) out.push(...wrap(line, '  - ', '    '));
+    out.push('', 'data changes since the baseline:');
+    for (const item of changeItems(report.changes, plain)) out.push(...wrap(item.text, '  - ', '    '));
   }
 
   out.push('');
-  out.push(
-    ...wrap('To accept this result as the baseline: neuron-budget baseline (then commit the baseline file).', ''),
-  );
-  if (overDeviceBudget(report)) {
-    out.push(
-      ...wrap(
-        'A new baseline does not lift the device budget: this check keeps failing until the width fits it or gate.max-width is raised.',
-        '',
-      ),
-    );
-  }
-  out.push(...wrap('A passing gate is not a safety sign-off for a device.', ''));
+  for (const line of hints(report, context, plain, (s) => s)) out.push(...wrap(line, ''));
+  out.push(...wrap(SIGN_OFF, ''));
   return `${out.join('\n')}\n`;
 }
 
-function changeLines(ch: DataChanges): string[] {
-  const lines: string[] = [];
-  if (ch.file) lines.push(`data file ${plain(ch.file.before)} -> ${plain(ch.file.after)}`);
-  if (!ch.changed) lines.push('same data as the baseline (same fingerprint)');
-  else
-    lines.push(
-      `rows ${formatCount(ch.rows.before)} -> ${formatCount(ch.rows.after)} (${ascii(formatDelta(ch.rows.after - ch.rows.before))})`,
+function ledgerLines(ledger: Ledger): string[] {
+  const base = ledger.baselineWidth;
+  const head = ['on the device', 'needs now', 'budget', ...(base === null ? [] : [`at baseline's ${base}`])];
+  const rows = ledger.rows.map((r) => [
+    r.label,
+    amount(r.now, r.unit),
+    budgetCell(r),
+    ...(base === null ? [] : [r.atBaseline === null ? '-' : amount(r.atBaseline, r.unit)]),
+  ]);
+  const widths = [22, 11, 20, 18];
+  return [head, ...rows].map((cells) =>
+    `  ${cells.map((c, i) => (i === 0 ? c.padEnd(widths[0]) : c.padStart(widths[i]))).join('')}`.trimEnd(),
+  );
+}
+
+function ladderLines(view: ReportView, report: Report): string[] {
+  const required = report.search?.required ?? 1;
+  const b = view.baseline;
+  const out = [`${view.metricName} by width (met: networks that met the target; ${nthBest(required)} decides)`];
+  const head = ['width', 'met', nthBest(required), 'best', 'adequate', ...(b ? ['baseline met'] : [])];
+  const widths = [7, 16, 11, 10, 10, 14];
+  const line = (cells: string[]): string =>
+    cells
+      .map((c, i) => c.padStart(widths[i]))
+      .join('')
+      .trimEnd();
+  out.push(line(head));
+  for (const r of view.rows) {
+    const c = r.current;
+    const marked = r.width === view.current.width ? '>' : ' ';
+    out.push(
+      line([
+        `${marked}${r.width}`,
+        c ? `${c.metBy.fresh} of ${c.restarts}${c.metBy.pruned > 0 ? ` +${c.metBy.pruned}p` : ''}` : 'not decided',
+        fmt(c?.decisive),
+        fmt(c?.best),
+        c ? (c.adequate ? 'yes' : 'no') : '-',
+        ...(b ? [r.baseline ? String(r.baseline.met) : '-'] : []),
+      ]),
     );
-  for (const l of ch.classesAppeared) lines.push(`new class ${plain(l)}`);
-  for (const l of ch.classesVanished) lines.push(`class ${plain(l)} no longer appears`);
-  for (const c of ch.classes ?? []) {
-    if (c.before !== c.after)
-      lines.push(
-        `class ${plain(c.label)}: ${formatCount(c.before)} -> ${formatCount(c.after)} rows (${ascii(formatDelta(c.after - c.before))})`,
-      );
   }
-  for (const n of ch.columnsAdded) lines.push(`column added: ${plain(n)}`);
-  for (const n of ch.columnsRemoved) lines.push(`column removed: ${plain(n)}`);
-  for (const f of ch.features) {
-    const parts: string[] = [];
-    if (f.meanMoved)
-      parts.push(
-        `mean ${fmt(f.meanBefore)} -> ${fmt(f.meanAfter)}${f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} std)`}`,
-      );
-    if (f.rangeWidened)
-      parts.push(
-        `range ${fmt(f.rangeBefore[0])}..${fmt(f.rangeBefore[1])} -> ${fmt(f.rangeAfter[0])}..${fmt(f.rangeAfter[1])}`,
-      );
-    lines.push(`feature ${plain(f.name)}: ${parts.join('; ')}`);
-  }
-  for (const c of ch.categories) {
-    if (c.appeared.length > 0)
-      lines.push(`feature ${plain(c.feature)}: new categories ${c.appeared.map((s) => plain(s)).join(', ')}`);
-    if (c.vanished.length > 0)
-      lines.push(`feature ${plain(c.feature)}: categories gone ${c.vanished.map((s) => plain(s)).join(', ')}`);
-  }
-  return lines;
+  const notes = [`threshold ${formatMetric(view.threshold)}`];
+  if (view.current.width !== null) notes.unshift("> marks this change's smallest adequate width");
+  if (view.rows.some((r) => (r.current?.metBy.pruned ?? 0) > 0)) notes.push('+Np: N networks pruned down to it');
+  out.push(...wrap(`(${notes.join('; ')})`, '  ', '  '));
+  const cost = searchCostSentence(report);
+  if (cost !== null) out.push(...wrap(cost, '  ', '  '));
+  return out;
 }
 
 /** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
@@ -173,9 +129,5 @@ function wrap(text: string, first: string, rest: string = first): string[] {
 }
 
 function fmt(v: number | null | undefined): string {
-  return v === null || v === undefined ? '-' : formatMetric(v);
-}
-
-function ascii(s: string): string {
-  return s.replace('−', '-');
+  return v === null || v === undefined || !Number.isFinite(v) ? '-' : formatMetric(v);
 }

@@ -38,7 +38,16 @@ export interface Report {
     history?: HistoryEntry[];
   } | null;
   /** Gate settings the verdict was judged with (filled by the gate). */
-  gate?: { maxWidth: number | null; allowedGrowth: number; metricTolerance: number; baselineFile: string } | null;
+  gate?: {
+    maxWidth: number | null;
+    /** Device budgets for the form in `device.precision` (null: none set). */
+    maxFlashBytes: number | null;
+    maxRamBytes: number | null;
+    maxMacs: number | null;
+    allowedGrowth: number;
+    metricTolerance: number;
+    baselineFile: string;
+  } | null;
   data: {
     file: string;
     rows: number;

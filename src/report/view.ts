@@ -93,27 +93,6 @@ export function viewOf(report: Report): ReportView {
   };
 }
 
-/** The width found exceeds gate.max-width. */
-/** This change's width for the summary table: the width and what pruning did, or why there is none. */
-export function currentWidthCell(
-  view: ReportView,
-  report: Report,
-  dash: string,
-  strong: (s: string) => string = (s) => s,
-): string {
-  const c = view.current;
-  if (c.width === null) {
-    if (report.search?.outcome === 'inconclusive') return 'not settled';
-    return report.search ? 'none in range' : dash;
-  }
-  return `${strong(String(c.width))}${view.prunedFrom !== null ? ` (pruned from ${view.prunedFrom})` : ''}`;
-}
-
-export function overDeviceBudget(report: Report): boolean {
-  const budget = report.gate?.maxWidth ?? null;
-  return budget !== null && report.width !== null && report.width > budget;
-}
-
 /**
  * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
  * wider networks); 3 are required." One definition of the backing, shown by every screen.
@@ -128,4 +107,10 @@ function backingSentence(w: WidthSummary, report: Report): string {
   const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
   const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
   return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
+}
+
+/** A baseline width's decisive metric, or its best in files that lack it when one network suffices. */
+export function baselineDecisive(w: BaselineWidth, required: number): number | null {
+  if (w.decisive !== undefined) return w.decisive;
+  return required === 1 ? w.best : null;
 }

@@ -36,6 +36,14 @@ export function median(values: readonly number[]): number | null {
   return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
 }
 
+/** The n-th best finite value (1 = the best), or null when fewer than n are finite. */
+function nthBest(values: number[], n: number, target: TargetConfig): number | null {
+  const finite = values
+    .filter(Number.isFinite)
+    .sort((a, b) => (isBetter(target.metric, a, b) ? -1 : isBetter(target.metric, b, a) ? 1 : 0));
+  return finite.length >= n ? finite[n - 1] : null;
+}
+
 function bestOf(values: number[], target: TargetConfig): number | null {
   let best: number | null = null;
   for (const v of values) if (Number.isFinite(v) && (best === null || isBetter(target.metric, v, best))) best = v;
@@ -95,6 +103,11 @@ export function tally(
       adequate: freshMet + prunedMet >= plan.required,
       best: bestOf(
         all.map((r) => r.judged),
+        target,
+      ),
+      decisive: nthBest(
+        all.map((r) => r.judged),
+        plan.required,
         target,
       ),
       bestTrain: bestOf(

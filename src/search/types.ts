@@ -36,6 +36,12 @@ export interface WidthSummary {
   adequate: boolean;
   /** Best judged metric over the networks of this width (fresh and pruned); null if none finished. */
   best: number | null;
+  /**
+   * The `required`-th best judged metric over the same networks: the figure the adequacy rule
+   * turns on (at or past the threshold exactly when enough networks did, recall floors aside);
+   * null when fewer than `required` finished.
+   */
+  decisive: number | null;
   /** Best metric on the training rows over the same networks (tells "does not fit" from "does not generalise"). */
   bestTrain: number | null;
   /** Median judged metric of the fresh restarts (null when none ran or all diverged). */

@@ -62,13 +62,13 @@ describe('hostile strings through the built command line', () => {
     expectInert(second);
     const text = squash(second.stderr);
     expect(text).toContain(squash(escapeText(CONFIG_AFTER)));
-    expect(text).toContain(squash(`data file ${escapeText(DATA_BEFORE)} -> ${escapeText(DATA_AFTER)}`));
+    expect(text).toContain(squash(`Data file ${escapeText(DATA_BEFORE)} → ${escapeText(DATA_AFTER)}.`));
     for (const label of after.labels.filter((l) => !before.labels.includes(l)))
-      expect(text).toContain(squash(`new class ${escapeText(label)}`));
+      expect(text).toContain(squash(`New class ${escapeText(label)}.`));
     for (const label of before.labels.filter((l) => !after.labels.includes(l)))
-      expect(text).toContain(squash(`class ${escapeText(label)} no longer appears`));
-    expect(text).toContain(squash(`column added: ${escapeText(after.numeric[after.numeric.length - 1])}`));
-    expect(text).toContain(squash(`column removed: ${escapeText(before.numeric[0])}`));
+      expect(text).toContain(squash(`Class ${escapeText(label)} no longer appears.`));
+    expect(text).toContain(squash(`Column added: ${escapeText(after.numeric[after.numeric.length - 1])}`));
+    expect(text).toContain(squash(`Column removed: ${escapeText(before.numeric[0])}`));
     expect(text).toContain('The settings that shape the result differ');
 
     // The report keeps the data's own strings exactly: escaping is for screens, not for data.

@@ -114,8 +114,8 @@ describe('labels, categories and column names that are property names', () => {
     expect(changes.columnsAdded).toEqual(['valueOf']);
     expect(changes.columnsRemoved).toEqual(['toString']);
     expect(changes.categories).toEqual([{ feature: 'constructor', appeared: ['valueOf'], vanished: ['toString'] }]);
-    expect(second.stderr).toContain('class constructor: 20 -> 25 rows (+5)');
-    expect(second.stderr).toContain('class __proto__ no longer appears');
+    expect(second.stderr).toContain('Class constructor: 20 → 25 rows (+5');
+    expect(second.stderr).toContain('Class __proto__ no longer appears.');
     expect(second.stderr).not.toMatch(/NaN|undefined|\[object|function/);
   });
 });

@@ -28,6 +28,8 @@ export function width(w: number, met: number, restarts: number, best: number | n
     metBy: { fresh: met, pruned: 0 },
     adequate: met >= required,
     best,
+    // Invented: the required-th best sits just under the threshold (0.95) on a width that is not adequate.
+    decisive: best === null ? null : met >= required ? best : Math.min(best, 0.949),
     bestTrain: best === null ? null : Math.min(1, best + 0.02),
     median: best === null ? null : best - 0.01,
     wilson: wilsonInterval(met, restarts),

@@ -78,7 +78,7 @@ describe('demo, end to end through dist/cli/index.js', () => {
       expect(rows.before).toBe(baseline.data.rows);
       expect(pr.stderr).toMatch(
         new RegExp(
-          `rows ${rows.before.toLocaleString('en-US')} -> ${rows.after.toLocaleString('en-US')} \\(\\+${(rows.after - rows.before).toLocaleString('en-US')}\\)`,
+          `Rows ${rows.before.toLocaleString('en-US')} → ${rows.after.toLocaleString('en-US')} \\(\\+${(rows.after - rows.before).toLocaleString('en-US')}\\)`,
         ),
       );
       // A failing check never touches the baseline.

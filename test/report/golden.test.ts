@@ -13,20 +13,33 @@
  *
  *   UPDATE_GOLDEN=1 npx vitest run test/report
  *
- * This rewrites test/report/golden/demo-fail.md, test/report/golden/demo-fail.txt and
- * docs/example-comment.md.
+ * This rewrites the three screens' golden files under test/report/golden/ (the pull-request
+ * comment and the job summary as the action writes them, the terminal text as the command line
+ * prints it) and docs/example-comment.md.
  */
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { renderMarkdown, renderText } from '../../src/report/index.js';
+import { commentBody, commentMarker } from '../../src/github/comment.js';
+import { fitSummary } from '../../src/github/markdown.js';
+import { renderMarkdown, renderText, type RenderContext } from '../../src/report/index.js';
 import type { Report } from '../../src/report/types.js';
 
 const here = (p: string): string => fileURLToPath(new URL(p, import.meta.url));
 const FIXTURE = here('./fixtures/demo-fail.report.json');
-const GOLDEN_MD = here('./golden/demo-fail.md');
+const GOLDEN_COMMENT = here('./golden/demo-fail.comment.md');
+const GOLDEN_SUMMARY = here('./golden/demo-fail.summary.md');
 const GOLDEN_TXT = here('./golden/demo-fail.txt');
+const CONFIG = 'examples/pump-vibration/neuron-budget.pr.yml';
+const ACTION: RenderContext = {
+  surface: 'action',
+  mode: 'check',
+  configShown: CONFIG,
+  baselineFile: 'examples/pump-vibration/neuron-budget.baseline.json',
+  baseline: null,
+};
+const CLI: RenderContext = { ...ACTION, surface: 'cli' };
 const EXAMPLE = here('../../docs/example-comment.md');
 const UPDATE = process.env['UPDATE_GOLDEN'] === '1';
 
@@ -57,10 +70,13 @@ export function exampleDocument(markdown: string): string {
 
 describe('golden files', () => {
   const report = loadFixture();
-  const md = renderMarkdown(report);
-  const text = renderText(report);
+  const md = renderMarkdown(report, { context: ACTION });
+  const comment = commentBody(commentMarker(CONFIG), md, 'https://github.com/acme/pumps/actions/runs/1');
+  const summary = fitSummary(md);
+  const text = renderText(report, CLI);
   if (UPDATE) {
-    write(GOLDEN_MD, md);
+    write(GOLDEN_COMMENT, comment);
+    write(GOLDEN_SUMMARY, summary);
     write(GOLDEN_TXT, text);
     write(EXAMPLE, exampleDocument(md));
   }
@@ -69,8 +85,12 @@ describe('golden files', () => {
     expect(report.verdict).toBe('fail');
   });
 
-  it('renders the comment exactly as the golden file', () => {
-    expect(md).toBe(readFileSync(GOLDEN_MD, 'utf8'));
+  it('renders the pull-request comment exactly as the golden file', () => {
+    expect(comment).toBe(readFileSync(GOLDEN_COMMENT, 'utf8'));
+  });
+
+  it('renders the job summary exactly as the golden file', () => {
+    expect(summary).toBe(readFileSync(GOLDEN_SUMMARY, 'utf8'));
   });
 
   it('renders the terminal text exactly as the golden file', () => {
@@ -79,5 +99,9 @@ describe('golden files', () => {
 
   it('keeps docs/example-comment.md in step with the golden comment', () => {
     expect(readFileSync(EXAMPLE, 'utf8')).toBe(exampleDocument(md));
+  });
+
+  it('writes the example comment without character references: only what needs escaping is escaped', () => {
+    expect(readFileSync(EXAMPLE, 'utf8')).not.toMatch(/&#?\w+;/);
   });
 });

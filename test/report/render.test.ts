@@ -21,8 +21,17 @@ function gated(
   return withGate(dataReport(result, cfg, p, 'b'.repeat(64)), outcome, cfg.gate);
 }
 
-function headAndTable(md: string): string {
-  return md.slice(0, md.indexOf('#### '));
+/** The verdict and the three answers: everything before the first collapsed block. */
+function answers(md: string): string {
+  return md.slice(0, md.indexOf('<details>'));
+}
+
+/** Chart categories and series values, by the line that holds them. */
+function chartParts(block: string): { categories: string[]; bars: string[][]; line: string[] | null } {
+  const categories = JSON.parse(`[${block.match(/x-axis "[^"]*" \[(.*)\]/)![1]}]`) as string[];
+  const bars = [...block.matchAll(/ {2}bar \[(.*)\]/g)].map((m) => m[1].split(', '));
+  const line = block.match(/ {2}line \[(.*)\]/)?.[1].split(', ') ?? null;
+  return { categories, bars, line };
 }
 
 function mermaidBlocks(md: string): string[] {
@@ -54,6 +63,9 @@ describe('JSON report (withGate)', () => {
     expect(r.baseline!.history).toHaveLength(1);
     expect(r.gate).toEqual({
       maxWidth: 8,
+      maxFlashBytes: null,
+      maxRamBytes: null,
+      maxMacs: null,
       allowedGrowth: 0,
       metricTolerance: 0.02,
       baselineFile: 'neuron-budget.baseline.json',
@@ -77,15 +89,25 @@ describe('JSON report (withGate)', () => {
 });
 
 describe('comment', () => {
-  it('starts with the verdict and the main reason, then the baseline-vs-change table', () => {
+  it('leads with the verdict, then answers: needs, fits the device, why it changed; evidence after', () => {
     const md = renderMarkdown(gated(found(9, 0.96), null));
     const lines = md.split('\n');
-    expect(lines[0]).toBe('### neuron-budget: FAIL. Needs 9 hidden neurons; the device budget is 8&#46;');
-    expect(md).toContain('| Smallest adequate width | — | **9** |');
-    expect(md).toContain('| Accuracy at that width (network kept) | — | 0.96 |');
-    expect(md).toContain('| Networks meeting the target there | — | 4 |');
-    expect(md).toContain('| Data rows | — | 1,800 |');
-    expect(md).toContain('| Search time | — | 12.5 s |');
+    expect(lines[0]).toBe('### neuron-budget: FAIL. Needs 9 hidden neurons; the device budget is 8.');
+    const head = answers(md);
+    const order = [
+      '**Needs:** 9 hidden neurons.',
+      '**Fits the device:** No: 1 hidden neuron over the budget of 8.',
+      '**Why it changed:** No baseline',
+    ];
+    const at = order.map((s) => head.indexOf(s));
+    expect(
+      at.every((i) => i > 0),
+      JSON.stringify(at),
+    ).toBe(true);
+    expect([...at].sort((a, b) => a - b)).toEqual(at);
+    expect(head).toContain('The witness scores accuracy 0.96 on 360 judging rows (target: at least 0.95).');
+    expect(head).toContain('| hidden neurons | **9** | 8 (over by 1) |');
+    expect(head).not.toContain('| Baseline | This change |');
   });
 
   it('shows every chart number in the per-width table too (a chart that fails to render loses nothing)', () => {
@@ -99,38 +121,69 @@ describe('comment', () => {
       },
     );
     const md = renderMarkdown(gated(found(6, 0.96), base));
-    const details = md.slice(md.indexOf('<summary>Per-width results'));
-    const [current, baseline] = mermaidBlocks(md);
-    for (const [block, column] of [
-      [current, 1],
-      [baseline, 4],
-    ] as const) {
-      const widths = block
-        .match(/x-axis "[^"]*" \[(.*)\]/)![1]
-        .split(', ')
-        .map((s) => Number(s.replace(/"/g, '')));
-      const values = block.match(/ {2}bar \[(.*)\]/)![1].split(', ');
-      widths.forEach((w, i) => {
-        const row = details
-          .split('\n')
-          .find((l) => new RegExp(`^\\| (\\*\\*)?${w}(\\*\\*)?( \\([a-z, ]+\\))? \\|`).test(l))!;
-        expect(row.split(' | ')[column].trim(), `width ${w}`).toBe(values[i]);
-      });
-    }
+    const [block] = mermaidBlocks(md);
+    const { categories, bars, line } = chartParts(block);
+    expect(bars).toHaveLength(2);
+    expect(new Set(line)).toEqual(new Set(['0.95']));
+    const floor = block.match(/y-axis "[^"]*" (\S+) -->/)![1];
+    const table = md.slice(md.indexOf('| Width |')).split('\n');
+    const cellOf = (w: number, column: number): string => {
+      const row = table.find((l) => new RegExp(`^\\| (\\*\\*)?${w}(\\*\\*)? \\|`).test(l))!;
+      return row.split(' | ')[column].trim().replace(/ \|$/, '');
+    };
+    let checked = 0;
+    categories.forEach((c, i) => {
+      const m = /^(b?)(\d+)( min)?$/.exec(c);
+      if (!m) {
+        expect(c.trim(), 'only the pads are not widths').toBe('');
+        expect(bars.every((b) => b[i] === floor)).toBe(true);
+        return;
+      }
+      const [baseBar, nowBar] = bars;
+      if (m[1] === 'b') {
+        expect(nowBar[i]).toBe(floor);
+        expect(baseBar[i], c).toBe(cellOf(Number(m[2]), 6).replace('—', floor));
+      } else {
+        expect(baseBar[i]).toBe(floor);
+        expect(nowBar[i], c).toBe(cellOf(Number(m[2]), 2).replace('—', floor));
+      }
+      checked++;
+    });
+    expect(checked).toBe(12);
+    expect(categories).toContain('6 min');
+    expect(categories).toContain('b3 min');
   });
 
-  it('words the table for a search that found nothing or ran out of budget', () => {
-    expect(renderMarkdown(gated(notFound(16), null))).toContain('| Smallest adequate width | — | none in range |');
+  it('draws the threshold across the whole range, also with a single width, and states the axis', () => {
+    const r = found(1, 0.97);
+    const md = renderMarkdown(gated(r, null));
+    const { categories, bars, line } = chartParts(mermaidBlocks(md)[0]);
+    expect(categories).toEqual(['', '1 min', ' ']);
+    expect(line).toEqual(['0.95', '0.95', '0.95']);
+    expect(bars[0][1]).toBe('0.97');
+    expect(md).toMatch(/The y-axis runs from 0\.9 to 1, not from 0/);
+  });
+
+  it('answers for a search that found nothing or ran out of budget, with nothing to accept', () => {
+    const none = renderMarkdown(gated(notFound(16), null));
+    expect(answers(none)).toContain(
+      '**Needs:** No width in the search range is adequate (3 of its networks meeting accuracy of at least 0.95).',
+    );
+    expect(answers(none)).toContain('**Fits the device:** Nothing to cost: no width is adequate.');
+    expect(none).not.toContain('accept it');
+    expect(none).not.toContain('To record this result');
     const md = renderMarkdown(gated(inconclusive(), null));
     expect(md.split('\n')[0]).toMatch(/^### neuron-budget: INCONCLUSIVE\. The search ran out of budget/);
-    expect(md).toContain('| Smallest adequate width | — | not settled |');
+    expect(answers(md)).toContain('**Needs:** Not settled: the search stopped before it could decide.');
+    expect(md).not.toContain('To record this result');
   });
 
-  it('says how to refresh the baseline, and that a pass is not a safety sign-off', () => {
+  it('says how to record the baseline, and that a pass is not a safety sign-off', () => {
     const md = renderMarkdown(gated(found(5, 0.96), null));
-    expect(md).toContain('run `neuron-budget baseline` and commit neuron&#45;budget&#46;baseline&#46;json');
-    expect(md).toContain('`update-baseline: true`');
-    expect(md).toContain('a passing gate is not a safety sign-off for a device');
+    expect(md).toContain(
+      'To record this result as the baseline: run `neuron-budget baseline` and commit neuron-budget.baseline.json.',
+    );
+    expect(md).toContain('A passing gate is not a safety sign-off for a device.');
   });
 
   it('puts a blank line after every </summary> so GitHub renders the Markdown inside', () => {
@@ -169,16 +222,18 @@ describe('capacity drift', () => {
     const r = gated(found(7, 0.96), b, profile({ rows: 2100 }), config({ gate: { allowedGrowth: 1 } }));
     const md = renderMarkdown(r);
     const drift = mermaidBlocks(md).find((m) => m.includes('Smallest adequate width over time'))!;
-    expect(drift).toContain('x-axis "accepted baseline" ["1", "2", "3", "4", "5", "6", "7", "8", "9", "10", "now"]');
-    expect(drift).toContain(`bar [${[...widths, 7].join(', ')}]`);
-    expect(drift).toContain('line [8, 8, 8, 8, 8, 8, 8, 8, 8, 8, 8]');
+    expect(drift).toContain(
+      'x-axis "accepted baseline" ["", "1", "2", "3", "4", "5", "6", "7", "8", "9", "10", "now", " "]',
+    );
+    expect(drift).toContain(`bar [0, ${[...widths, 7].join(', ')}, 0]`);
+    expect(drift).toContain('line [8, 8, 8, 8, 8, 8, 8, 8, 8, 8, 8, 8, 8]');
     // The history table lists the same ten entries with their rows.
-    const history = md.slice(md.indexOf('Baseline history (10)'));
+    const history = md.slice(md.indexOf('Capacity drift: 10 accepted baselines'));
     for (let k = 0; k < 10; k++)
       expect(history).toContain(
-        `| ${k + 1} | 2026&#45;01&#45;${String(k + 1).padStart(2, '0')} | — | ${(1000 + 100 * k).toLocaleString('en-US')} | ${widths[k]} |`,
+        `| ${k + 1} | 2026-01-${String(k + 1).padStart(2, '0')} | — | ${(1000 + 100 * k).toLocaleString('en-US')} | ${widths[k]} |`,
       );
-    expect(renderText(r)).toContain('width 2 -> 2 -> 3 -> 3 -> 3 -> 4 -> 4 -> 5 -> 5 -> 6 -> now 7');
+    expect(renderText(r)).toContain('width 2 -> 2 -> 3 -> 3 -> 3 -> 4 -> 4 -> 5 -> 5 -> 6 -> now 7 (budget 8)');
   });
 });
 
@@ -234,10 +289,10 @@ describe('length cap', () => {
     const md = renderMarkdown(report);
     expect(md.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(COMMENT_LIMIT).toBeLessThan(GITHUB_LIMIT);
-    // Headline, table and charts are exactly those of the unshortened comment.
-    expect(headAndTable(md)).toBe(headAndTable(full));
+    // The verdict, the answers and the charts are exactly those of the unshortened comment.
+    expect(answers(md)).toBe(answers(full));
     expect(mermaidBlocks(md)).toEqual(mermaidBlocks(full));
-    expect(md).toContain('| Smallest adequate width | 900 | **1500** |');
+    expect(answers(md)).toContain('| hidden neurons | **1,500** | 8 (over by 1,492) | 900 |');
     expect(md).toMatch(/left out for length/);
     expect(md.trimEnd().endsWith('not a safety sign-off for a device._')).toBe(true);
   });
@@ -259,27 +314,34 @@ describe('terminal text', () => {
     for (const line of text.split('\n')) expect(line.length, line).toBeLessThanOrEqual(TEXT_WIDTH);
     expect(text.split('\n')[0]).toBe('neuron-budget: FAIL. Needs 9 hidden neurons; the device budget is 8.');
     expect(text).toContain("  - Needs 9 hidden neurons, 5 more than the baseline's 4; no growth is allowed.");
-    expect(text).toMatch(/smallest adequate width +4 +9\n/);
-    expect(text).toMatch(/accuracy at that width +0\.9622 +0\.9583\n/);
-    expect(text).toMatch(/data rows +1,800 +2,400 \(\+600\)\n/);
-    expect(text).toContain('rows 1,800 -> 2,400 (+600)');
-    expect(text).toContain('pruning: 2 steps, 1 neuron removed');
+    expect(text).toContain('Needs: 9 hidden neurons (the baseline needed 4). The witness scores accuracy');
+    expect(text).toMatch(/\n {2}hidden neurons +9 +8 \(over by 1\) +4\n/);
+    expect(text).toContain('Rows 1,800 → 2,400 (+600).');
+    expect(text).toContain('pruning: tried 2 removals on 2 networks: 1 removed, 1 put back.');
+    // The same answers, word for word, as the comment (which has no repository string here to escape).
+    const md = renderMarkdown(r);
+    const flat = (s: string): string => s.replace(/\s+/g, ' ');
+    for (const answer of ['Needs', 'Fits the device', 'Why it changed']) {
+      const said = flat(md).match(new RegExp(`\\*\\*${answer}:\\*\\* (.*?) (\\*\\*|\\| |<details>)`))![1];
+      expect(flat(text), answer).toContain(`${answer}: ${said}`);
+    }
   });
 });
 
 describe('charts: edge cases', () => {
   it('leaves a width whose restarts all diverged out of the chart but keeps it in the table', () => {
     const r = found(4, 0.96);
-    r.widths[1] = { ...r.widths[1], best: null, median: null, diverged: 10 };
+    r.widths[1] = { ...r.widths[1], best: null, decisive: null, median: null, diverged: 10 };
     const md = renderMarkdown(gated(r, null));
-    const [chart] = mermaidBlocks(md);
-    expect(chart).toContain('x-axis "hidden neurons" ["1", "3", "4"]');
-    expect(md).toMatch(/\n\| 2 \| — \| 0 \|/);
+    const { categories, bars } = chartParts(mermaidBlocks(md)[0]);
+    expect(categories).toEqual(['', '1', '2', '3', '4 min', ' ']);
+    expect(bars[0][2]).toBe(mermaidBlocks(md)[0].match(/y-axis "[^"]*" (\S+) -->/)![1]);
+    expect(md).toMatch(/\n\| 2 \| 0 of 10 \| — \| — \| no \|/);
   });
 
   it('never draws a collapsed y-axis when every value is 1', () => {
     const r = found(2, 1);
-    r.widths = r.widths.map((w) => ({ ...w, best: 1 }));
+    r.widths = r.widths.map((w) => ({ ...w, best: 1, decisive: 1 }));
     const md = renderMarkdown(gated(r, null, profile(), config({ target: { threshold: 1 } })));
     expect(mermaidBlocks(md)[0]).toContain('y-axis "accuracy" 0.9 --> 1');
   });
