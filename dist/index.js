@@ -45039,7 +45039,7 @@ function dataSummaryText(config, data, report) {
  * words written here ever reach a chart, so nothing from the repository can break it;
  * `chartText` still refuses anything outside a small alphabet as a second line of defence.
  *
- * The constructs used: `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
+ * The constructs used: an init directive that sets the series colours, `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
  * `y-axis "…" a --> b`, `line [n, …]`, `bar [n, …]`. Every series has exactly one value
  * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
  * no value is left out of the chart (the table beside it still lists it).
@@ -45058,14 +45058,22 @@ function chartNumber(n) {
         throw new Error(`not a chart number: ${n}`);
     return s;
 }
+/** Colours readable on GitHub's light and dark themes. */
+const CHART_COLORS = { baseline: '#8c959f', current: '#0969da', limit: '#cf222e' };
 function renderChart(spec) {
     for (const s of spec.series) {
         if (s.values.length !== spec.categories.length) {
             throw new Error('every chart series needs one value per category');
         }
     }
+    for (const s of spec.series) {
+        if (!/^#[0-9a-f]{6}$/.test(s.color))
+            throw new Error(`not a chart colour: ${JSON.stringify(s.color)}`);
+    }
+    const palette = spec.series.map((s) => s.color).join(',');
     const lines = [
         '```mermaid',
+        `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
         'xychart-beta',
         `  title ${chartText(spec.title)}`,
         `  x-axis ${chartText(spec.xTitle)} [${spec.categories.map(chartText).join(', ')}]`,
@@ -45409,8 +45417,10 @@ function capitalise(s) {
  * categories ("b7" the baseline, "7" this change), because Mermaid draws two bar series at the
  * same place over each other. A side that did not decide a width has a bar of the axis minimum
  * there, i.e. none. The bar is the `required`-th best judged metric, so a bar reaches the
- * threshold line exactly when the width is adequate (recall floors aside). An empty category at
- * each end carries the threshold line past the outer bars, so it shows even with one width.
+ * threshold line exactly when the width is adequate (recall floors aside). A category without
+ * bars at each end (the widths just outside the range shown; the first is blank when that would be
+ * 0) carries the threshold line past the outer bars, so it shows even with one width. Mermaid's
+ * band axis merges equal labels, so every category is distinct.
  */
 
 
@@ -45432,8 +45442,10 @@ function metricChart(view, report) {
         return null;
     const accuracy = (0,common_metric/* higherIsBetter */.i2)(view.metricName);
     const range = metricRange(values, view.threshold, accuracy);
-    const floor = range[0];
-    const categories = [''];
+    // Mermaid draws a bar of the axis minimum as a stub a few pixels high; one below it draws nothing.
+    const floor = range[0] - (range[1] - range[0]);
+    const first = rows[0].width - 1;
+    const categories = [first > 0 ? String(first) : ' '];
     const nowBars = [floor];
     const baseBars = [floor];
     rows.forEach((r, i) => {
@@ -45446,15 +45458,15 @@ function metricChart(view, report) {
         nowBars.push(now[i] ?? floor);
         baseBars.push(floor);
     });
-    categories.push(' ');
+    categories.push(String(rows[rows.length - 1].width + 1));
     nowBars.push(floor);
     baseBars.push(floor);
     const which = nthBest(required);
     const side = accuracy ? 'at or above' : 'at or below';
     const legend = [
         `Bars: the ${which} ${view.metricName} of the networks at each width, so a bar ${side} the line means the width is adequate (${required} network${required === 1 ? '' : 's'} met the target).`,
-        pairs ? 'Each width has two places: "b" and the width is the baseline, the width alone this change.' : '',
-        `"min" marks the smallest adequate width${pairs ? ' of each' : ''}. Line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}.`,
+        pairs ? 'Each width has two places: grey "b" and the width is the baseline, blue the width alone this change.' : '',
+        `"min" marks the smallest adequate width${pairs ? ' of each' : ''}. Red line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}.`,
         `The y-axis runs from ${(0,format/* formatMetric */.gI)(range[0])} to ${(0,format/* formatMetric */.gI)(range[1])}${range[0] === 0 ? '' : ', not from 0'}; the numbers are in the table.`,
     ]
         .filter((s) => s !== '')
@@ -45467,9 +45479,9 @@ function metricChart(view, report) {
             yTitle: view.metricName,
             yRange: range,
             series: [
-                ...(pairs ? [{ kind: 'bar', values: baseBars }] : []),
-                { kind: 'bar', values: nowBars },
-                { kind: 'line', values: categories.map(() => view.threshold) },
+                ...(pairs ? [{ kind: 'bar', values: baseBars, color: CHART_COLORS.baseline }] : []),
+                { kind: 'bar', values: nowBars, color: CHART_COLORS.current },
+                { kind: 'line', values: categories.map(() => view.threshold), color: CHART_COLORS.limit },
             ],
         },
         legend,
@@ -45482,18 +45494,19 @@ function driftChart(view, budget) {
         return null;
     const history = view.history.slice(-DRIFT_MAX_POINTS);
     const first = view.history.length - history.length;
-    const categories = ['', ...history.map((_, i) => String(first + i + 1))];
+    // A blank first and a "later" last category carry the budget line past the outer bars.
+    const categories = [' ', ...history.map((_, i) => String(first + i + 1))];
     const widths = [0, ...history.map((h) => h.width)];
     if (view.current.width !== null) {
         categories.push('now');
         widths.push(view.current.width);
     }
-    categories.push(' ');
+    categories.push('later');
     widths.push(0);
     const legend = `Bars: the smallest adequate width of each accepted baseline, oldest first (numbered as in the history table)${view.current.width !== null ? ', then this change' : ''}.` +
         (budget === null
             ? ' No neuron budget is set (gate.max-width).'
-            : ` Line: the device budget of ${budget} hidden neurons.`);
+            : ` Red line: the device budget of ${budget} hidden neurons.`);
     return {
         spec: {
             title: 'Smallest adequate width over time',
@@ -45502,8 +45515,10 @@ function driftChart(view, budget) {
             yTitle: 'hidden neurons',
             yRange: countRange(budget === null ? widths : [...widths, budget]),
             series: [
-                { kind: 'bar', values: widths },
-                ...(budget === null ? [] : [{ kind: 'line', values: categories.map(() => budget) }]),
+                { kind: 'bar', values: widths, color: CHART_COLORS.current },
+                ...(budget === null
+                    ? []
+                    : [{ kind: 'line', values: categories.map(() => budget), color: CHART_COLORS.limit }]),
             ],
         },
         legend,

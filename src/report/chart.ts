@@ -3,7 +3,7 @@
  * words written here ever reach a chart, so nothing from the repository can break it;
  * `chartText` still refuses anything outside a small alphabet as a second line of defence.
  *
- * The constructs used: `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
+ * The constructs used: an init directive that sets the series colours, `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
  * `y-axis "…" a --> b`, `line [n, …]`, `bar [n, …]`. Every series has exactly one value
  * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
  * no value is left out of the chart (the table beside it still lists it).
@@ -27,7 +27,12 @@ function chartNumber(n: number): string {
 export interface ChartSeries {
   kind: 'line' | 'bar';
   values: number[];
+  /** `#rrggbb`; mermaid's default palette starts with a near-white lavender that hides bars. */
+  color: string;
 }
+
+/** Colours readable on GitHub's light and dark themes. */
+export const CHART_COLORS = { baseline: '#8c959f', current: '#0969da', limit: '#cf222e' } as const;
 
 export interface ChartSpec {
   title: string;
@@ -44,8 +49,13 @@ export function renderChart(spec: ChartSpec): string {
       throw new Error('every chart series needs one value per category');
     }
   }
+  for (const s of spec.series) {
+    if (!/^#[0-9a-f]{6}$/.test(s.color)) throw new Error(`not a chart colour: ${JSON.stringify(s.color)}`);
+  }
+  const palette = spec.series.map((s) => s.color).join(',');
   const lines = [
     '```mermaid',
+    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
     'xychart-beta',
     `  title ${chartText(spec.title)}`,
     `  x-axis ${chartText(spec.xTitle)} [${spec.categories.map(chartText).join(', ')}]`,

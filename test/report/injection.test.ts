@@ -97,6 +97,7 @@ const LABEL = '"[A-Za-z0-9 .,-]*"';
 const NUM = '-?\\d+(?:\\.\\d+)?';
 const CHART_LINES = [
   /^```mermaid$/,
+  /^%%\{init: \{"themeVariables": \{"xyChart": \{"plotColorPalette": "#[0-9a-f]{6}(?:,#[0-9a-f]{6})*"\}\}\}\}%%$/,
   /^xychart-beta$/,
   new RegExp(`^  title ${LABEL}$`),
   new RegExp(`^  x-axis ${LABEL} \\[${LABEL}(?:, ${LABEL})*\\]$`),
@@ -113,7 +114,7 @@ function checkChart(block: string): void {
       `chart line outside the allowed grammar: ${JSON.stringify(line)}`,
     ).toBe(true);
   }
-  expect(lines[1]).toBe('xychart-beta');
+  expect(lines[2]).toBe('xychart-beta');
   const categories = (lines.find((l) => l.startsWith('  x-axis'))!.match(/"[^"]*"/g) ?? []).length - 1;
   for (const series of lines.filter((l) => /^ {2}(line|bar) /.test(l))) {
     expect(series.split(',').length, 'one value per category').toBe(categories);
