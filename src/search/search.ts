@@ -133,7 +133,14 @@ async function grow(
     results.set(done.key, done.r);
     if (Number.isFinite(done.r.judged) && (best === null || isBetter(target.metric, done.r.judged, best)))
       best = done.r.judged;
-    progress({ phase: 'growth', width: done.r.finalWidth, restart: done.r.restart, epoch: done.r.epochs, best });
+    progress({
+      phase: 'growth',
+      kind: 'done',
+      width: done.r.finalWidth,
+      restart: done.r.restart,
+      epoch: done.r.epochs,
+      best,
+    });
   }
 }
 
@@ -175,6 +182,7 @@ export async function runSearch(
   const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
 
   try {
+    progress({ phase: 'growth', kind: 'start', width: plan.minWidth, restart: 0, epoch: 0, best: null });
     const grown = await grow(ctx, executor, target, progress);
     const growthEnd = now();
     const timing = (end: number) => ({
@@ -211,11 +219,22 @@ export async function runSearch(
 
     // Prune phase: shrink every network that met the target at the grown width or below.
     const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+    if (jobs.length > 0) {
+      const from = Math.max(...jobs.map((j) => j.source.width));
+      progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
+    }
     const pruned: PruneResult[] = await Promise.all(
       jobs.map(async (job) => {
         const r = await executor.prune(job);
         const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
-        progress({ phase: 'prune', width: last, restart: job.source.restart, epoch: r.steps.length, best: null });
+        progress({
+          phase: 'prune',
+          kind: 'done',
+          width: last,
+          restart: job.source.restart,
+          epoch: r.steps.length,
+          best: null,
+        });
         return r;
       }),
     );

@@ -159,8 +159,13 @@ describe('progress', () => {
   it('reports every growth training and every prune job, with the best metric so far', async () => {
     const events: import('../../src/search/types.js').ProgressEvent[] = [];
     const r = await runSearch(parity(3), searchConfig(), exact, { onProgress: (e) => events.push(e) });
-    const growth = events.filter((e) => e.phase === 'growth');
-    const prune = events.filter((e) => e.phase === 'prune');
+    // Each phase opens with a start event, sent before any of its trainings finished.
+    expect(events[0]).toEqual({ phase: 'growth', kind: 'start', width: 1, restart: 0, epoch: 0, best: null });
+    const firstPrune = events.findIndex((e) => e.phase === 'prune');
+    expect(events[firstPrune]).toMatchObject({ phase: 'prune', kind: 'start', width: r.grownWidth });
+    expect(events.filter((e) => e.kind === 'start')).toHaveLength(2);
+    const growth = events.filter((e) => e.phase === 'growth' && e.kind === 'done');
+    const prune = events.filter((e) => e.phase === 'prune' && e.kind === 'done');
     // One thread: no speculative trainings, so one event per training the decision used.
     expect(growth.length).toBe(r.widths.reduce((n, w) => n + w.restarts, 0));
     expect(prune.length).toBe(r.widths.at(-1)!.reached);
