@@ -4,6 +4,7 @@
  */
 import { displayPath } from './common/paths.js';
 import { EXIT } from './common/exit-codes.js';
+import { secondsFromMs } from './common/format.js';
 import { loadConfig, settleTarget } from './config/index.js';
 import { loadData } from './data/index.js';
 import { checkOutputFolder, writeOutput } from './files/output.js';
@@ -145,6 +146,6 @@ async function timed<T>(timing: Record<string, number>, name: string, work: () =
   try {
     return await work();
   } finally {
-    timing[name] = Math.round(performance.now() - start) / 1000;
+    timing[name] = secondsFromMs(performance.now() - start);
   }
 }

@@ -26,6 +26,7 @@ import {
   type PruneResult,
   type SearchContext,
 } from './task.js';
+import { secondsFromMs } from '../common/format.js';
 import { isBetter } from '../common/metric.js';
 import type { GrowthPlan, ProgressEvent, SearchResult, TaskResult } from './types.js';
 
@@ -186,9 +187,9 @@ export async function runSearch(
     const grown = await grow(ctx, executor, target, progress);
     const growthEnd = now();
     const timing = (end: number) => ({
-      searchSeconds: (end - t0) / 1000,
-      growthSeconds: (growthEnd - t0) / 1000,
-      pruneSeconds: (end - growthEnd) / 1000,
+      searchSeconds: secondsFromMs(end - t0),
+      growthSeconds: secondsFromMs(growthEnd - t0),
+      pruneSeconds: secondsFromMs(end - growthEnd),
     });
     const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
 

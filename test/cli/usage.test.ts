@@ -174,6 +174,8 @@ describe('check on a small table', () => {
       'pruneSeconds',
       'searchSeconds',
     ]);
+    // Rounded to whole milliseconds, in the JSON as in the baseline's searchSeconds.
+    for (const seconds of Object.values(report.timing)) expect(/^\d+(\.\d{1,3})?$/.test(String(seconds))).toBe(true);
     for (const shown of [
       '30 used',
       '18 training / 6 validation / 6 judging',

@@ -176,6 +176,19 @@ describe('progress', () => {
   });
 });
 
+describe('timing', () => {
+  it('holds seconds rounded to whole milliseconds, whatever the clock returns', async () => {
+    // The clock is read at the start, when growth ends and at the end.
+    const ticks = [1000.1234567, 1067.4188, 1134.8];
+    let i = 0;
+    const now = (): number => ticks[Math.min(i++, ticks.length - 1)];
+    const r = await runSearch(parity(2), searchConfig(), exact, { now });
+    expect(r.outcome).toBe('found');
+    // Raw these would be 0.1346765433, 0.0672953433 and 0.0673812.
+    expect(r.timing).toEqual({ searchSeconds: 0.135, growthSeconds: 0.067, pruneSeconds: 0.067 });
+  });
+});
+
 describe('determinism (one thread)', () => {
   it('two runs give the same result outside timing', async () => {
     const a = await runSearch(iris().dataset, searchConfig(), { metric: 'accuracy', threshold: 0.95 });
