@@ -81,7 +81,8 @@ describe.each(list)('action bundle under $label', (runtime: Runtime) => {
     expect(r.code, explain(r)).toBe(0);
 
     // The report file named by the output exists under RUNNER_TEMP and describes the CSV we wrote.
-    expect(r.outputs['report']).toBe(join(r.runnerTemp, 'neuron-budget', 'neuron-budget.yml', 'report.json'));
+    // Named after the config (neuron-budget.yml) without its extension: a folder, not something that reads as a file.
+    expect(r.outputs['report']).toBe(join(r.runnerTemp, 'neuron-budget', 'neuron-budget', 'report.json'));
     const report = readJson(r.outputs['report']) as { schema: string; data: Record<string, unknown> };
     expect(report.schema).toBe('neuron-budget/report@2');
     expect(report.data['rows']).toBe(24);
