@@ -8,7 +8,7 @@ import { secondsFromMs } from './common/format.js';
 import { loadConfig, settleTarget } from './config/index.js';
 import { loadData } from './data/index.js';
 import { checkOutputFolder, writeOutput } from './files/output.js';
-import { readBaseline, runGateStage, type Verdict } from './gate/index.js';
+import { readBaseline, runGateStage, type BaselineRecord, type Verdict } from './gate/index.js';
 import { costShapeOf, deviceCost } from './device/index.js';
 import { modelDocument, serializeModel } from './model/index.js';
 import { dataStageReport, searchStageReport } from './report/assemble.js';
@@ -50,6 +50,11 @@ export interface JobResult {
   text: string;
   /** Path of the baseline written, or null. */
   baselineWritten: string | null;
+  /**
+   * Baseline mode: what was written ({file as the user wrote it, width, historyEntries}) or why
+   * nothing was ({notWritten}); null in check mode. The shells print it (report/baseline-record.ts).
+   */
+  baselineRecord: BaselineRecord | null;
   /** Path of the witness written, or null. */
   modelWritten: string | null;
   /** 0 pass/improved/new, 1 fail/inconclusive. */
@@ -99,7 +104,6 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     date: new Date(),
     toolVersion: TOOL_VERSION,
   });
-  if (gate.notWritten !== null) options.log?.(`baseline not written: ${gate.notWritten}`);
   const report = withGate(
     searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
       encoding: data.dataset.encoding,
@@ -136,6 +140,7 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     markdown: renderMarkdown(report),
     text: renderText(report),
     baselineWritten: gate.written,
+    baselineRecord: gate.record,
     modelWritten,
     exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
   };

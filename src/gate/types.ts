@@ -124,5 +124,11 @@ export interface DataChanges {
   columnsRemoved: string[];
 }
 
+/**
+ * What `baseline` (or the action's update-baseline) did with the file: written, with the file as
+ * the user wrote it, the width recorded and the history entries it now holds; or why not.
+ */
+export type BaselineRecord = { file: string; width: number; historyEntries: number } | { notWritten: string };
+
 /** The gate's answer: pass, fail, improved, new (no baseline yet) or inconclusive (budget ran out). */
 export type Verdict = 'pass' | 'fail' | 'improved' | 'new' | 'inconclusive';

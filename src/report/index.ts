@@ -3,4 +3,5 @@ export { renderMarkdown, COMMENT_LIMIT, CHART_MAX_POINTS } from './markdown.js';
 export type { MarkdownOptions } from './markdown.js';
 export { renderText, TEXT_WIDTH } from './text.js';
 export { withGate } from './json.js';
+export { baselineRecordLine } from './baseline-record.js';
 export type { Report, Verdict } from './types.js';

@@ -254,12 +254,32 @@ describe.each(list)('action bundle under $label', (runtime: Runtime) => {
     const b2 = readJson(baselinePath) as { history: unknown[] };
     expect(validate(b2), JSON.stringify(validate.errors)).toBe(true);
     expect(b2.history.length).toBe(b1.history.length + 1);
+    // The log says what was written: the file as the config names it, the width, the history.
+    const width = (readJson(baselinePath) as { result: { width: number } }).result.width;
+    expect(first.stdout).toMatch(
+      new RegExp(`^baseline written: neuron-budget\\.baseline\\.json, width ${width}, 1 history entry$`, 'm'),
+    );
+    expect(second.stdout).toMatch(/^baseline written: neuron-budget\.baseline\.json, width \d+, 2 history entries$/m);
 
     const check = await onPr(ws);
     expect(check.code, explain(check)).toBe(0);
     expect(check.outputs['verdict']).toBe('pass');
     expect(check.outputs['baseline-width']).toBe(check.outputs['width']);
     expect(check.outputs['baseline']).toBe('');
+    expect(check.stdout).not.toContain('baseline written');
+
+    // No width reached the target: nothing written, and the log says why.
+    const none = await run({
+      workspace: failingWorkspace(),
+      eventName: 'push',
+      event: pushEvent(),
+      inputs: { 'update-baseline': 'true' },
+    });
+    expect(none.code, explain(none)).toBe(1);
+    expect(none.outputs['baseline']).toBe('');
+    expect(none.stdout).toMatch(
+      /^baseline not written: no width reached the target, so there is no result to record; the baseline file was left unchanged$/m,
+    );
   });
 
   it('config or working-directory outside the workspace: refused with a clear error, nothing read', async () => {
