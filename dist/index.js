@@ -29647,6 +29647,7 @@ function escapeLineStart(s) {
 /* harmony export */   Lx: () => (/* binding */ targetPhrase),
 /* harmony export */   Xo: () => (/* binding */ formatSeconds),
 /* harmony export */   aL: () => (/* binding */ targetShort),
+/* harmony export */   cm: () => (/* binding */ secondsFromMs),
 /* harmony export */   gI: () => (/* binding */ formatMetric),
 /* harmony export */   nO: () => (/* binding */ neurons)
 /* harmony export */ });
@@ -29683,6 +29684,13 @@ function formatDelta(n) {
         return `-${formatCount(-n)}`;
     return '0';
 }
+/**
+ * A measured duration as every file holds it: seconds, rounded to whole milliseconds (a clock
+ * reading's last digits are noise, and 0.06729538599999978 reads as a bug).
+ */
+function secondsFromMs(ms) {
+    return Math.round(ms) / 1000;
+}
 function formatSeconds(seconds) {
     if (seconds === null || seconds === undefined || !Number.isFinite(seconds))
         return '—';
@@ -29712,6 +29720,7 @@ function targetPhrase(metric, threshold) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   KU: () => (/* binding */ AUTO_MAX_CLASSES),
 /* harmony export */   LK: () => (/* binding */ isBetter),
 /* harmony export */   M0: () => (/* binding */ meetsThreshold),
 /* harmony export */   Ri: () => (/* binding */ comparator),
@@ -29724,6 +29733,11 @@ function targetPhrase(metric, threshold) {
  * The target metrics and what "better" and "meets the target" mean for each: one definition,
  * used by the engine, the search, the gate and every screen.
  */
+/**
+ * With data.task auto, a numeric target with at most this many distinct values is read as class
+ * labels (0/1/2), any other numeric target as a measurement (a rule of thumb, no source).
+ */
+const AUTO_MAX_CLASSES = 10;
 const ERROR_METRICS = ['rmse', 'mae', 'max-abs-error'];
 /** Accuracy is better when higher; the error metrics when lower. */
 function higherIsBetter(metric) {
@@ -30849,7 +30863,7 @@ function exportC(model, name, provenance) {
 
 /***/ }),
 
-/***/ 4746:
+/***/ 4104:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -38780,6 +38794,7 @@ function didYouMean(name, candidates) {
  * The validator walks this table; a test walks it against schema/neuron-budget.schema.json
  * so the two cannot drift apart.
  */
+
 /** Marks a key the user must give. */
 const spec_REQUIRED = Symbol('required');
 /** Marks a key whose default depends on another key (the description says how). */
@@ -38826,7 +38841,7 @@ const spec_CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
                 default: 'auto',
-                description: 'auto: decided from the target column (text or few distinct values: classification).',
+                description: `auto: decided from the target column: text, or numbers with at most ${common_metric/* AUTO_MAX_CLASSES */.KU} distinct values, is classification; other numbers are regression.`,
             },
             {
                 name: 'validation',
@@ -38875,14 +38890,14 @@ const spec_CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
                 default: spec_DERIVED,
-                description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
+                description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: follows the task, accuracy for classification and rmse for regression (with data.task auto, the task found in the data).',
             },
             {
                 name: 'threshold',
                 changesResult: true,
                 rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
                 default: spec_REQUIRED,
-                description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
+                description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units. Checked against the metric in effect: with data.task auto and no target.metric, once the data show the task.",
             },
             {
                 name: 'precision',
@@ -39657,7 +39672,7 @@ function configKeyError(config, key, detail) {
  * which depend on the task and the class labels found.
  */
 function settleTarget(config, task, classes) {
-    const settled = settleMetric(config, task);
+    const settled = settleMetric(config, task, classes);
     return { ...settled, target: { ...settled.target, recallFloors: recallFloors(settled, task, classes) } };
 }
 /** target.min-recall as one floor per class index; each named class must be one the data have. */
@@ -39682,17 +39697,18 @@ function recallFloors(config, task, classes) {
 }
 /**
  * With data.task auto the task is only known after reading: the metric follows it unless the
- * config names one, and a named metric must suit it.
+ * config names one, and a named metric must suit it. A threshold or tolerance that cannot be an
+ * accuracy is refused here, once the task is known, saying what to write either way.
  */
-function settleMetric(config, task) {
+function settleMetric(config, task, classes) {
     const target = config.target;
     if (!config.metricGiven) {
         const metric = (0,common_metric/* defaultMetric */.ml)(task);
         if (metric === 'accuracy' && target.threshold > 1) {
-            throw configKeyError(config, 'target.threshold', `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
+            throw configKeyError(config, 'target.threshold', `${readAsClassification(config, classes)}, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold}; ${whatToWrite(config, classes, 'write the accuracy as a fraction (95% as 0.95)')}`);
         }
         if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
-            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
+            throw configKeyError(config, 'gate.metric-tolerance', `${readAsClassification(config, classes)}, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}; ${whatToWrite(config, classes, 'write the tolerance as a fraction (2 points as 0.02)')}`);
         }
         return { ...config, target: { ...target, metric } };
     }
@@ -39702,6 +39718,23 @@ function settleMetric(config, task) {
         ? 'set target.metric to accuracy, or data.task to regression'
         : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
     throw configKeyError(config, 'target.metric', `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
+}
+/** Whether a class target's labels are all numbers (data.task auto read a numeric column with few values as classes). */
+function numericLabels(classes) {
+    return classes !== null && classes.every((c) => c.trim() !== '' && Number.isFinite(Number(c)));
+}
+/** "the target column "x" was read as classification (…why…)". */
+function readAsClassification(config, classes) {
+    const why = numericLabels(classes)
+        ? `it holds only ${classes.length} distinct numbers, and data.task auto reads at most ${common_metric/* AUTO_MAX_CLASSES */.KU} as class labels`
+        : 'it holds text';
+    return `the target column ${(0,common_escape/* quote */.hD)(config.data.target)} was read as classification (${why})`;
+}
+/** What to write: a few distinct numbers may be a measurement (then regression, and rmse follows); text is classes. */
+function whatToWrite(config, classes, asAccuracy) {
+    if (!numericLabels(classes))
+        return asAccuracy;
+    return `if ${(0,common_escape/* quote */.hD)(config.data.target)} is a measurement, write "task: regression" under data (the metric is then rmse, in the column's units); if it holds classes, ${asAccuracy}`;
 }
 
 ;// CONCATENATED MODULE: ./src/data/numbers.ts
@@ -40268,6 +40301,13 @@ function profileData(features, target, stores, rows) {
     ];
     used.sort((a, b) => a.column - b.column);
     return { rows, classes, columns: used.map((c) => c.name), features: profiles };
+}
+/** A regression target's mean, standard deviation and range over the rows used; null for classification. */
+function targetSpread(target) {
+    if (target.task !== 'regression')
+        return null;
+    const { mean, std, min, max } = numericProfile(target.values, 0);
+    return { mean, std, min, max };
 }
 function numericProfile(values, missing) {
     let sum = 0;
@@ -43146,8 +43186,7 @@ function tooFew(target, group, rows, minTrain, f, file) {
 
 
 
-/** Distinct numeric values up to which `task: auto` still means classification (a rule of thumb, no source). */
-const AUTO_MAX_CLASSES = 10;
+
 function targetColumn(store, config, file) {
     const wanted = config.data.task;
     const label = columnLabel(store.column, store.name);
@@ -43158,7 +43197,7 @@ function targetColumn(store, config, file) {
     else if (!numeric)
         task = 'classification';
     else
-        task = distinctNumbers(store, AUTO_MAX_CLASSES) === null ? 'regression' : 'classification';
+        task = distinctNumbers(store, common_metric/* AUTO_MAX_CLASSES */.KU) === null ? 'regression' : 'classification';
     if (task === 'regression') {
         if (!numeric) {
             const first = store.firstText;
@@ -43282,6 +43321,7 @@ async function load(config) {
         droppedRows: table.droppedRows,
         fingerprint: fingerprint(typed, target, table.rows),
         profile: profileData(typed, target, table.columns, table.rows),
+        targetSpread: targetSpread(target),
         splitRows: split,
         judgingFolded: split.judgingFolded,
     };
@@ -43553,6 +43593,16 @@ function budgetFailures(input) {
  * for a "medium" shift (common practice, no single source).
  */
 const MEAN_SHIFT_IN_STD = 0.5;
+/**
+ * A numeric feature's range counts as widened when it grew on a side (a new minimum below the
+ * baseline's, or a new maximum above it) by more than this many baseline standard deviations.
+ * A rule of thumb (common practice, no single source): the extremes of a sample wander by chance
+ * as rows are added (for normal data and a thousand rows the sample maximum's spread is about
+ * σ/√(2 ln n) ≈ 0.27σ, from extreme-value theory; figure from memory), so a new extreme within
+ * a few hundredths of σ of the old one is no change a reviewer should read about, while one
+ * half a σ beyond it puts rows where the baseline's networks never saw any.
+ */
+const RANGE_GROWTH_IN_STD = 0.5;
 function dataChanges(before, after, fingerprints, files = { before: '', after: '' }) {
     const columnsBefore = new Set(before.columns);
     const columnsAfter = new Set(after.columns);
@@ -43585,7 +43635,8 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
             const delta = atMostMax(Math.abs(a.mean - b.mean));
             const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
             const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
-            const rangeWidened = a.min < b.min || a.max > b.max;
+            const rangeGrowth = growthOf(b, a);
+            const rangeWidened = grewMeaningfully(rangeGrowth.below, b.std) || grewMeaningfully(rangeGrowth.above, b.std);
             if (meanMoved || rangeWidened) {
                 features.push({
                     name,
@@ -43597,6 +43648,7 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
                     rangeBefore: [b.min, b.max],
                     rangeAfter: [a.min, a.max],
                     rangeWidened,
+                    rangeGrowth,
                 });
             }
         }
@@ -43621,6 +43673,17 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
         columnsAdded,
         columnsRemoved,
     };
+}
+/** How far the range reaches beyond the baseline's on each side, in the feature's units and in baseline stds. */
+function growthOf(b, a) {
+    const below = atMostMax(Math.max(0, b.min - a.min));
+    const above = atMostMax(Math.max(0, a.max - b.max));
+    const inStd = (g) => (b.std > 0 ? atMostMax(g / b.std) : null);
+    return { below, above, belowInStd: inStd(below), aboveInStd: inStd(above) };
+}
+/** A side grew meaningfully: by more than RANGE_GROWTH_IN_STD baseline stds (any growth for a constant feature). */
+function grewMeaningfully(growth, std) {
+    return std > 0 ? growth > RANGE_GROWTH_IN_STD * std : growth > 0;
 }
 /**
  * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
@@ -44563,20 +44626,15 @@ async function runGateStage(input) {
         cost: input.cost ?? null,
     });
     if (input.mode === 'check')
-        return { outcome, written: null, notWritten: null, historyEntries: null, gate: config.gate };
+        return { outcome, written: null, record: null, gate: config.gate };
     const why = whyNotRecordable(input.result);
     if (why !== null)
-        return { outcome, written: null, notWritten: why, historyEntries: null, gate: config.gate };
+        return { outcome, written: null, record: { notWritten: why }, gate: config.gate };
     const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
     // Only if the file still holds what `previous` was read from: never drop another run's entry.
     await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
-    return {
-        outcome,
-        written: input.baselinePath,
-        notWritten: null,
-        historyEntries: next.history.length,
-        gate: config.gate,
-    };
+    const record = { file: input.baselineShown, width: next.result.width, historyEntries: next.history.length };
+    return { outcome, written: input.baselinePath, record, gate: config.gate };
 }
 
 ;// CONCATENATED MODULE: ./src/gate/index.ts
@@ -44890,6 +44948,7 @@ function dataStageReport(config, data, timing) {
                 : Object.keys(classes)
                     .sort()
                     .map((label) => ({ label, count: classes[label] })),
+            targetSpread: data.targetSpread,
         },
         search: null,
         device: null,
@@ -45286,7 +45345,13 @@ function changeItems(ch, esc) {
             parts.push(`mean ${(0,format/* formatMetric */.gI)(f.meanBefore)} → ${(0,format/* formatMetric */.gI)(f.meanAfter)}${by}`);
         }
         if (f.rangeWidened) {
-            parts.push(`range ${(0,format/* formatMetric */.gI)(f.rangeBefore[0])} to ${(0,format/* formatMetric */.gI)(f.rangeBefore[1])} widened to ${(0,format/* formatMetric */.gI)(f.rangeAfter[0])} to ${(0,format/* formatMetric */.gI)(f.rangeAfter[1])}`);
+            const g = f.rangeGrowth;
+            const sides = [];
+            if (g.below > 0)
+                sides.push(`${(0,format/* formatMetric */.gI)(g.below)} lower${inStd(g.belowInStd)}`);
+            if (g.above > 0)
+                sides.push(`${(0,format/* formatMetric */.gI)(g.above)} higher${inStd(g.aboveInStd)}`);
+            parts.push(`range ${(0,format/* formatMetric */.gI)(f.rangeBefore[0])} to ${(0,format/* formatMetric */.gI)(f.rangeBefore[1])} widened to ${(0,format/* formatMetric */.gI)(f.rangeAfter[0])} to ${(0,format/* formatMetric */.gI)(f.rangeAfter[1])} (${sides.join(', ')})`);
         }
         if (parts.length === 0)
             continue;
@@ -45315,6 +45380,10 @@ function share(c, rows) {
         return '';
     const pct = (n, of) => `${Math.round((100 * n) / of)}%`;
     return `; ${pct(c.before, rows.before)} → ${pct(c.after, rows.after)} of the rows`;
+}
+/** " (1.2 standard deviations)" or nothing when the baseline's deviation was 0. */
+function inStd(v) {
+    return v === null ? '' : `, ${v.toFixed(1)} standard deviations`;
 }
 /** Most changes the "why it changed" answer names; the evidence lists them all. */
 const WHY_ITEMS = 3;
@@ -45635,7 +45704,7 @@ function changesSection(changes, limits) {
     const items = changeItems(changes, common_escape/* escapeMarkdown */.FV).map((i) => i.text);
     const shown = items.slice(0, limits.changeItems);
     const omitted = items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
-    return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation or its range widened.`;
+    return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation, or its range grew on a side by more than half a baseline standard deviation.`;
 }
 function pickRows(rows, max, must) {
     if (rows.length <= max)
@@ -46005,8 +46074,24 @@ function withGate(report, outcome, gate) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/report/baseline-record.ts
+/**
+ * The one line that says what `baseline` did with the baseline file, for the command line's
+ * stdout and the action's log (the record itself is in JobResult.baselineRecord).
+ */
+
+
+/** "baseline written: FILE, width W, N history entries", or "baseline not written: WHY". The file is escaped. */
+function baselineRecordLine(record) {
+    if ('notWritten' in record)
+        return `baseline not written: ${record.notWritten}`;
+    const entries = record.historyEntries === 1 ? '1 history entry' : `${(0,format/* formatCount */.B4)(record.historyEntries)} history entries`;
+    return `baseline written: ${(0,common_escape/* escapeText */.X1)(record.file)}, width ${record.width}, ${entries}`;
+}
+
 ;// CONCATENATED MODULE: ./src/report/index.ts
 /** Rendering a report: pull-request comment / job summary, terminal text, JSON. */
+
 
 
 
@@ -46019,6 +46104,7 @@ var src_search = __nccwpck_require__(6202);
  * The main job shared by the command line and the action: config → data → search → gate →
  * report. This file only orchestrates; each stage lives in its folder.
  */
+
 
 
 
@@ -46071,8 +46157,6 @@ async function runJob(options) {
         date: new Date(),
         toolVersion: TOOL_VERSION,
     });
-    if (gate.notWritten !== null)
-        options.log?.(`baseline not written: ${gate.notWritten}`);
     const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
         encoding: data.dataset.encoding,
         target: config.target,
@@ -46104,15 +46188,7 @@ async function runJob(options) {
         mode: options.mode,
         configShown: options.configShown ?? null,
         baselineFile: displayPath(loaded.root, baselinePath),
-        baseline: options.mode === 'check'
-            ? null
-            : gate.written !== null && report.width !== null
-                ? {
-                    file: displayPath(loaded.root, baselinePath),
-                    width: report.width,
-                    historyEntries: gate.historyEntries ?? 1,
-                }
-                : { notWritten: gate.notWritten ?? 'no width reached the target' },
+        baseline: gate.record,
     };
     return {
         report,
@@ -46120,6 +46196,7 @@ async function runJob(options) {
         markdown: renderMarkdown(report, { context }),
         text: renderText(report, context),
         baselineWritten: gate.written,
+        baselineRecord: gate.record,
         modelWritten,
         exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
     };
@@ -46130,7 +46207,7 @@ async function timed(timing, name, work) {
         return await work();
     }
     finally {
-        timing[name] = Math.round(performance.now() - start) / 1000;
+        timing[name] = (0,format/* secondsFromMs */.cm)(performance.now() - start);
     }
 }
 
@@ -46481,9 +46558,14 @@ function readInputs(get, env = process.env) {
     const configKey = (0,external_node_path_namespaceObject.relative)(workspace, configPath).split(external_node_path_namespaceObject.sep).join('/');
     return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers };
 }
-/** A file-system-safe folder name for one config, so two steps with different configs never share files. @testOnly */
+/**
+ * A file-system-safe folder name for one config, so two steps with different configs never share
+ * files: the config's path without its YAML extension (a folder named `neuron-budget.yml` reads as
+ * a file), each run of other characters (the path's slashes too) as one underscore. @testOnly
+ */
 function configSlug(configKey) {
-    return configKey.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^\.+/, '_') || 'config';
+    const stem = configKey.replace(/\.ya?ml$/i, '');
+    return stem.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^\.+/, '_') || 'config';
 }
 /** Where the report and the witness go: under RUNNER_TEMP on a runner, else in the workspace. */
 function outputFolder(inputs, env = process.env) {
@@ -46587,7 +46669,7 @@ function makeClient(o) {
                 continue;
             }
             const transient = why.kind === 'server-error' || why.kind === 'timeout' || why.kind === 'no-response';
-            if (!transient || !REPEATABLE.has(parsed.method) || attempts >= MAX_ATTEMPTS)
+            if (!transient || why.permanent || !REPEATABLE.has(parsed.method) || attempts >= MAX_ATTEMPTS)
                 throw fail();
             const delay = attempts * attempts;
             o.log(`${describeBriefly(why)} on ${what}; retrying in ${delay} s (attempt ${attempts + 1} of ${MAX_ATTEMPTS})`);
@@ -46596,6 +46678,8 @@ function makeClient(o) {
     });
     return octokit;
 }
+/** What fetch's "bad port" means, for a warning a user can act on. */
+const BAD_PORT = 'fetch refuses to connect to this port at all (a "bad port" in the Fetch standard; check GITHUB_API_URL), so nothing was sent';
 function classify(e, o, timeout) {
     const base = { note: '', waitSeconds: 0 };
     if (o.budget.signal.aborted)
@@ -46608,8 +46692,12 @@ function classify(e, o, timeout) {
     const response = err.response;
     const detail = clip(messageOf(response?.data) ?? (typeof err.message === 'string' ? err.message : 'no message'));
     // A RequestError without a response: the request never got an answer (the library files it as 500).
-    if (!response)
+    if (!response) {
+        // fetch itself refuses the ports the Fetch standard lists as "bad ports": no retry can help.
+        if (detail === 'bad port')
+            return { ...base, kind: 'no-response', status: null, detail: BAD_PORT, permanent: true };
         return { ...base, kind: 'no-response', status: null, detail };
+    }
     const status = err.status;
     const headers = response.headers ?? {};
     if (status === 429) {
@@ -46708,15 +46796,21 @@ function commentBudgetFromEnv(env) {
 }
 
 ;// CONCATENATED MODULE: ./src/report/progress.ts
+/** Search progress as one plain line, at most one every few seconds, for the step log and for a terminal that is not interactive. */
+
 const PROGRESS_INTERVAL_MS = 5000;
-/** @testOnly */
+/** One line per event; metrics in the one format every screen uses (formatMetric). */
 function progressLine(e) {
-    const best = e.best === null ? 'none yet' : String(Number(e.best.toPrecision(4)));
+    if (e.kind === 'start') {
+        return e.phase === 'growth' ? `growth: starting at width ${e.width}` : `prune: starting from width ${e.width}`;
+    }
+    const best = e.best === null ? 'none yet' : (0,format/* formatMetric */.gI)(e.best);
     return `${e.phase}: width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}, best so far ${best}`;
 }
 /**
  * Returns a progress handler that prints through `print`, at most once per `intervalMs`
- * (the first event always prints). `now` is injectable for tests.
+ * (the first event always prints: the search sends one as each phase starts, so a log shows a
+ * line at once rather than after the first training). `now` is injectable for tests.
  */
 function throttledProgress(print, intervalMs = PROGRESS_INTERVAL_MS, now = Date.now) {
     let last = -Infinity;
@@ -46752,6 +46846,7 @@ function logUntrusted(text) {
  * The action's shell: inputs → runJob → outputs, job summary, pull-request comment, step result.
  * Everything GitHub-specific lives here; the job itself knows nothing about the runner.
  */
+
 
 
 
@@ -46968,8 +47063,9 @@ async function run() {
         else {
             info(`neuron-budget verdict: ${verdict}`);
         }
-        if (result.baselineWritten)
-            info(`Baseline written to ${(0,common_escape/* escapeText */.X1)(result.baselineWritten)}; commit it to accept this result.`);
+        // The line escapes the file name; it starts with our own word, so it is never a workflow command.
+        if (result.baselineRecord)
+            info(baselineRecordLine(result.baselineRecord));
         // None of these throw: they report trouble as warnings and leave the result alone.
         await writeCommentFile((0,external_node_path_namespaceObject.join)(folder, 'comment.md'), result.markdown);
         await writeSummary(result.markdown);
@@ -46992,7 +47088,7 @@ async function run() {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4746);
+/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4104);
 /* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6202);
 /**
  * Entry of the action bundle (dist/index.js). The same bundle is also the entry of the search's
@@ -50360,6 +50456,7 @@ function witnessOf(c, seed) {
 
 
 
+
 function growthPlan(search) {
     return {
         growth: search.growth,
@@ -50444,7 +50541,14 @@ async function grow(ctx, executor, target, progress) {
         results.set(done.key, done.r);
         if (Number.isFinite(done.r.judged) && (best === null || (0,metric/* isBetter */.LK)(target.metric, done.r.judged, best)))
             best = done.r.judged;
-        progress({ phase: 'growth', width: done.r.finalWidth, restart: done.r.restart, epoch: done.r.epochs, best });
+        progress({
+            phase: 'growth',
+            kind: 'done',
+            width: done.r.finalWidth,
+            restart: done.r.restart,
+            epoch: done.r.epochs,
+            best,
+        });
     }
 }
 /** Every network that met the target at the grown width or below, once each, in (width, restart) order. */
@@ -50479,12 +50583,13 @@ async function runSearch(data, search, target, options = {}) {
     const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
     const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
     try {
+        progress({ phase: 'growth', kind: 'start', width: plan.minWidth, restart: 0, epoch: 0, best: null });
         const grown = await grow(ctx, executor, target, progress);
         const growthEnd = now();
         const timing = (end) => ({
-            searchSeconds: (end - t0) / 1000,
-            growthSeconds: (growthEnd - t0) / 1000,
-            pruneSeconds: (end - growthEnd) / 1000,
+            searchSeconds: (0,format/* secondsFromMs */.cm)(end - t0),
+            growthSeconds: (0,format/* secondsFromMs */.cm)(growthEnd - t0),
+            pruneSeconds: (0,format/* secondsFromMs */.cm)(end - growthEnd),
         });
         const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
         const decision = grown.decision;
@@ -50513,10 +50618,21 @@ async function runSearch(data, search, target, options = {}) {
         }
         // Prune phase: shrink every network that met the target at the grown width or below.
         const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+        if (jobs.length > 0) {
+            const from = Math.max(...jobs.map((j) => j.source.width));
+            progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
+        }
         const pruned = await Promise.all(jobs.map(async (job) => {
             const r = await executor.prune(job);
             const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
-            progress({ phase: 'prune', width: last, restart: job.source.restart, epoch: r.steps.length, best: null });
+            progress({
+                phase: 'prune',
+                kind: 'done',
+                width: last,
+                restart: job.source.restart,
+                epoch: r.steps.length,
+                best: null,
+            });
             return r;
         }));
         const trainings = decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0);

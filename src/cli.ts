@@ -2,7 +2,8 @@
  * The `neuron-budget` command line: parses argv, runs the main job, prints to stderr,
  * and turns the outcome into an exit code (0 pass/improved/new, 1 fail/inconclusive,
  * 2 bad input or usage, 3 internal error). stdout carries only what was asked for
- * (--help, --version), so it stays clean for scripts.
+ * (--help, --version, `baseline`'s one line saying whether the file was written, `predict`'s
+ * rows), so it stays clean for scripts.
  *
  * The workspace root is the current working directory: paths inside the config file
  * must stay inside it. Paths given as flags are the user's own choice and resolve
@@ -18,6 +19,7 @@ import { DEFAULT_CONFIG, parseInvocation, UsageError } from './cli/args.js';
 import { runExport, runPredict } from './cli/model-commands.js';
 import { progressPrinter } from './cli/progress.js';
 import { usage } from './cli/usage.js';
+import { baselineRecordLine } from './report/index.js';
 import { runJob, type JobOptions } from './run.js';
 import { runSearchWorker } from './search/index.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
@@ -71,6 +73,8 @@ async function main(argv: readonly string[]): Promise<number> {
       progress.done();
     }
     err.write(`${escapeLines(result.text)}\n`);
+    // What `baseline` was asked for: whether the file was written, on stdout for scripts.
+    if (result.baselineRecord) process.stdout.write(`${escapeLines(baselineRecordLine(result.baselineRecord))}\n`);
     return result.exitCode;
   } catch (error) {
     if (isUserError(error)) {

@@ -4,10 +4,11 @@
  */
 import { displayPath } from './common/paths.js';
 import { EXIT } from './common/exit-codes.js';
+import { secondsFromMs } from './common/format.js';
 import { loadConfig, settleTarget } from './config/index.js';
 import { loadData } from './data/index.js';
 import { checkOutputFolder, writeOutput } from './files/output.js';
-import { readBaseline, runGateStage, type Verdict } from './gate/index.js';
+import { readBaseline, runGateStage, type BaselineRecord, type Verdict } from './gate/index.js';
 import { costShapeOf, deviceCost } from './device/index.js';
 import { modelDocument, serializeModel } from './model/index.js';
 import { dataStageReport, searchStageReport } from './report/assemble.js';
@@ -53,6 +54,11 @@ export interface JobResult {
   text: string;
   /** Path of the baseline written, or null. */
   baselineWritten: string | null;
+  /**
+   * Baseline mode: what was written ({file as the user wrote it, width, historyEntries}) or why
+   * nothing was ({notWritten}); null in check mode. The shells print it (report/baseline-record.ts).
+   */
+  baselineRecord: BaselineRecord | null;
   /** Path of the witness written, or null. */
   modelWritten: string | null;
   /** 0 pass/improved/new, 1 fail/inconclusive. */
@@ -102,7 +108,6 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     date: new Date(),
     toolVersion: TOOL_VERSION,
   });
-  if (gate.notWritten !== null) options.log?.(`baseline not written: ${gate.notWritten}`);
   const report = withGate(
     searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
       encoding: data.dataset.encoding,
@@ -138,16 +143,7 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     mode: options.mode,
     configShown: options.configShown ?? null,
     baselineFile: displayPath(loaded.root, baselinePath),
-    baseline:
-      options.mode === 'check'
-        ? null
-        : gate.written !== null && report.width !== null
-          ? {
-              file: displayPath(loaded.root, baselinePath),
-              width: report.width,
-              historyEntries: gate.historyEntries ?? 1,
-            }
-          : { notWritten: gate.notWritten ?? 'no width reached the target' },
+    baseline: gate.record,
   };
   return {
     report,
@@ -155,6 +151,7 @@ export async function runJob(options: JobOptions): Promise<JobResult> {
     markdown: renderMarkdown(report, { context }),
     text: renderText(report, context),
     baselineWritten: gate.written,
+    baselineRecord: gate.record,
     modelWritten,
     exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
   };
@@ -165,6 +162,6 @@ async function timed<T>(timing: Record<string, number>, name: string, work: () =
   try {
     return await work();
   } finally {
-    timing[name] = Math.round(performance.now() - start) / 1000;
+    timing[name] = secondsFromMs(performance.now() - start);
   }
 }

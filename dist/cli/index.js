@@ -9096,6 +9096,11 @@ const promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.ur
  * The target metrics and what "better" and "meets the target" mean for each: one definition,
  * used by the engine, the search, the gate and every screen.
  */
+/**
+ * With data.task auto, a numeric target with at most this many distinct values is read as class
+ * labels (0/1/2), any other numeric target as a measurement (a rule of thumb, no source).
+ */
+const AUTO_MAX_CLASSES = 10;
 const ERROR_METRICS = ['rmse', 'mae', 'max-abs-error'];
 /** Accuracy is better when higher; the error metrics when lower. */
 function higherIsBetter(metric) {
@@ -9163,6 +9168,13 @@ function formatDelta(n) {
     if (n < 0)
         return `-${formatCount(-n)}`;
     return '0';
+}
+/**
+ * A measured duration as every file holds it: seconds, rounded to whole milliseconds (a clock
+ * reading's last digits are noise, and 0.06729538599999978 reads as a bug).
+ */
+function secondsFromMs(ms) {
+    return Math.round(ms) / 1000;
 }
 function formatSeconds(seconds) {
     if (seconds === null || seconds === undefined || !Number.isFinite(seconds))
@@ -16254,15 +16266,21 @@ async function runPredict(root, args, flags, write) {
 }
 
 ;// CONCATENATED MODULE: ./src/report/progress.ts
+/** Search progress as one plain line, at most one every few seconds, for the step log and for a terminal that is not interactive. */
+
 const PROGRESS_INTERVAL_MS = 5000;
-/** @testOnly */
+/** One line per event; metrics in the one format every screen uses (formatMetric). */
 function progressLine(e) {
-    const best = e.best === null ? 'none yet' : String(Number(e.best.toPrecision(4)));
+    if (e.kind === 'start') {
+        return e.phase === 'growth' ? `growth: starting at width ${e.width}` : `prune: starting from width ${e.width}`;
+    }
+    const best = e.best === null ? 'none yet' : formatMetric(e.best);
     return `${e.phase}: width ${e.width}, restart ${e.restart + 1}, epoch ${e.epoch}, best so far ${best}`;
 }
 /**
  * Returns a progress handler that prints through `print`, at most once per `intervalMs`
- * (the first event always prints). `now` is injectable for tests.
+ * (the first event always prints: the search sends one as each phase starts, so a log shows a
+ * line at once rather than after the first training). `now` is injectable for tests.
  */
 function throttledProgress(print, intervalMs = PROGRESS_INTERVAL_MS, now = Date.now) {
     let last = -Infinity;
@@ -16278,6 +16296,7 @@ function throttledProgress(print, intervalMs = PROGRESS_INTERVAL_MS, now = Date.
 ;// CONCATENATED MODULE: ./src/cli/progress.ts
 /** Search progress on stderr: one line redrawn in place on a terminal; elsewhere a plain line every few seconds. */
 
+
 function progressPrinter(stream) {
     if (!stream.isTTY) {
         // The same throttled line the action logs: the first event at once, then one every few seconds.
@@ -16292,8 +16311,11 @@ function progressPrinter(stream) {
             if (now - last < 100)
                 return; // display only: at most ten redraws a second
             last = now;
-            const best = e.best === null ? '' : ` · best ${e.best.toFixed(4)}`;
-            stream.write(`\r\x1b[2K${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`);
+            const best = e.best === null ? '' : ` · best ${formatMetric(e.best)}`;
+            const line = e.kind === 'start'
+                ? progressLine(e)
+                : `${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`;
+            stream.write(`\r\x1b[2K${line}`);
             drawn = true;
         },
         done: () => {
@@ -16346,12 +16368,1018 @@ function exitCodesText() {
     return 'exit codes: 0 pass, improved or new; 1 fail or inconclusive; 2 bad input';
 }
 
+;// CONCATENATED MODULE: ./src/report/chart.ts
+/**
+ * Mermaid `xychart-beta` blocks. Only numbers computed by neuron-budget and fixed
+ * words written here ever reach a chart, so nothing from the repository can break it;
+ * `chartText` still refuses anything outside a small alphabet as a second line of defence.
+ *
+ * The constructs used: an init directive that sets the series colours, `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
+ * `y-axis "…" a --> b`, `line [n, …]`, `bar [n, …]`. Every series has exactly one value
+ * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
+ * no value is left out of the chart (the table beside it still lists it).
+ */
+
+/** Letters, digits, space and . , - + (a width read from a baseline file may print as 1e+21). */
+const SAFE_TEXT = /^[A-Za-z0-9 .,+-]*$/;
+function chartText(s) {
+    if (!SAFE_TEXT.test(s))
+        throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
+    return `"${s}"`;
+}
+function chartNumber(n) {
+    const s = formatMetric(n);
+    if (!/^-?\d+(\.\d+)?$/.test(s))
+        throw new Error(`not a chart number: ${n}`);
+    return s;
+}
+/** Colours readable on GitHub's light and dark themes. */
+const CHART_COLORS = { baseline: '#8c959f', current: '#0969da', limit: '#cf222e' };
+function renderChart(spec) {
+    for (const s of spec.series) {
+        if (s.values.length !== spec.categories.length) {
+            throw new Error('every chart series needs one value per category');
+        }
+    }
+    for (const s of spec.series) {
+        if (!/^#[0-9a-f]{6}$/.test(s.color))
+            throw new Error(`not a chart colour: ${JSON.stringify(s.color)}`);
+    }
+    const palette = spec.series.map((s) => s.color).join(',');
+    const lines = [
+        '```mermaid',
+        `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
+        'xychart-beta',
+        `  title ${chartText(spec.title)}`,
+        `  x-axis ${chartText(spec.xTitle)} [${spec.categories.map(chartText).join(', ')}]`,
+        `  y-axis ${chartText(spec.yTitle)} ${chartNumber(spec.yRange[0])} --> ${chartNumber(spec.yRange[1])}`,
+        ...spec.series.map((s) => `  ${s.kind} [${s.values.map(chartNumber).join(', ')}]`),
+        '```',
+    ];
+    return lines.join('\n');
+}
+/*
+ * The ranges below take values read from a baseline file, which may be any finite number:
+ * every step that could overflow (a margin on top of 1.7e308) stops at the largest float, so
+ * an axis end is always a finite number.
+ */
+/** A y-axis range that shows every value and the threshold with a little room. */
+function metricRange(values, threshold, accuracy) {
+    const all = [...values, threshold].filter(Number.isFinite);
+    if (accuracy) {
+        const low = Math.min(...all);
+        // Keep the axis from collapsing when every value is 1.
+        return [Math.min(0.9, Math.max(0, Math.floor(low * 10) / 10)), 1];
+    }
+    const high = Math.max(...all, 0);
+    return [0, niceCeil(chart_finite(high * 1.1))];
+}
+function countRange(values) {
+    const high = Math.max(1, ...values.filter(Number.isFinite));
+    return [0, chart_finite(Math.ceil(chart_finite(high * 1.15)) + 1)];
+}
+function niceCeil(x) {
+    if (x <= 0)
+        return 1;
+    const step = 10 ** Math.floor(Math.log10(x));
+    return chart_finite(Math.ceil(x / step) * step);
+}
+/** x, or the largest float when x overflowed. */
+function chart_finite(x) {
+    return Math.min(x, Number.MAX_VALUE);
+}
+
+;// CONCATENATED MODULE: ./src/report/view.ts
+const VERDICT_LABEL = {
+    pass: 'PASS',
+    fail: 'FAIL',
+    improved: 'IMPROVED',
+    new: 'NEW',
+    inconclusive: 'INCONCLUSIVE',
+};
+function viewOf(report) {
+    const widths = report.search?.widths ?? [];
+    const at = report.width === null ? undefined : widths.find((w) => w.width === report.width);
+    const b = report.baseline;
+    const byWidth = new Map();
+    for (const w of widths)
+        byWidth.set(w.width, { width: w.width, current: w, baseline: null });
+    for (const w of b?.widths ?? []) {
+        const row = byWidth.get(w.width) ?? { width: w.width, current: null, baseline: null };
+        row.baseline = w;
+        byWidth.set(w.width, row);
+    }
+    const grown = report.search?.grownWidth ?? null;
+    const searchSeconds = report.timing['searchSeconds'];
+    return {
+        verdict: report.verdict,
+        headline: report.reasons[0] ?? '',
+        otherReasons: report.reasons.slice(1),
+        metricName: report.metric.name,
+        threshold: report.metric.threshold,
+        current: {
+            width: report.width,
+            metric: report.metric.value,
+            met: at ? at.met : null,
+            restarts: at ? at.restarts : null,
+            rows: report.data.rows,
+            searchSeconds: typeof searchSeconds === 'number' ? searchSeconds : null,
+        },
+        baseline: b
+            ? {
+                width: b.width,
+                metric: b.metric,
+                met: b.met ?? null,
+                restarts: b.restarts ?? null,
+                rows: b.rows ?? null,
+                searchSeconds: b.searchSeconds ?? null,
+            }
+            : null,
+        prunedFrom: grown !== null && report.width !== null && grown !== report.width ? grown : null,
+        backing: at ? backingSentence(at, report) : null,
+        rows: [...byWidth.values()].sort((x, y) => x.width - y.width),
+        history: b?.history ?? [],
+        baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
+    };
+}
+/**
+ * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
+ * wider networks); 3 are required." One definition of the backing, shown by every screen.
+ */
+function backingSentence(w, report) {
+    const judging = report.search?.judging.on ?? 'judging';
+    const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
+    const parts = [];
+    if (w.restarts > 0)
+        parts.push(`${w.metBy.fresh} of ${w.restarts} fresh restart${w.restarts === 1 ? '' : 's'}`);
+    if (w.metBy.pruned > 0)
+        parts.push(`${w.metBy.pruned} pruned from wider networks`);
+    const required = report.search?.required ?? null;
+    const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
+    const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
+    return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
+}
+/** A baseline width's decisive metric, or its best in files that lack it when one network suffices. */
+function baselineDecisive(w, required) {
+    if (w.decisive !== undefined)
+        return w.decisive;
+    return required === 1 ? w.best : null;
+}
+
+;// CONCATENATED MODULE: ./src/report/words.ts
+
+
+/** "best", "2nd best", "3rd best", "4th best". */
+function nthBest(n) {
+    if (n <= 1)
+        return 'best';
+    const tens = n % 100;
+    const suffix = tens >= 11 && tens <= 13 ? 'th' : (['th', 'st', 'nd', 'rd'][n % 10] ?? 'th');
+    return `${n}${suffix} best`;
+}
+/** "on 539 judging rows" (or validation/training rows when those judged). */
+function judgingRowsPhrase(report) {
+    const j = report.search?.judging;
+    if (!j)
+        return '';
+    return `on ${formatCount(j.rows)} ${j.on} rows`;
+}
+/** The first answer: how many neurons the data need now, and what the witness scores. */
+function needsSentence(report) {
+    const base = report.baseline?.width ?? null;
+    const target = targetPhrase(report.metric.name, report.metric.threshold);
+    if (report.width === null) {
+        const why = report.search?.outcome === 'inconclusive'
+            ? 'not settled: the search stopped before it could decide'
+            : `no width in the search range is adequate (${report.search?.required ?? 1} of its networks meeting ${target})`;
+        return `${capitalise(why)}${base === null ? '' : `; the baseline needed ${neurons(base)}`}.`;
+    }
+    const was = base === null
+        ? ''
+        : base === report.width
+            ? ', as the baseline did'
+            : ` (the baseline needed ${formatCount(base)})`;
+    const parts = [`${neurons(report.width)}${was}.`];
+    const value = report.metric.value;
+    if (value !== null) {
+        const int8 = report.device?.metric.int8 ?? null;
+        const decides = report.device?.precision ?? 'float32';
+        const forms = int8 === null
+            ? ''
+            : decides === 'int8'
+                ? ` in the int8 form that decides (float32 ${formatMetric(report.device.metric.float32)})`
+                : `; int8 form ${formatMetric(int8)}`;
+        const bound = `${higherIsBetter(report.metric.name) ? 'at least' : 'at most'} ${formatMetric(report.metric.threshold)}`;
+        parts.push(`The witness scores ${report.metric.name} ${formatMetric(value)} ${judgingRowsPhrase(report)} (target: ${bound})${forms}.`);
+    }
+    return parts.join(' ');
+}
+/** The spread of a regression target, so "rmse ≤ 6" can be read against its scale; null otherwise. */
+function targetSpreadSentence(report) {
+    const s = report.data.targetSpread;
+    if (!s || report.data.task !== 'regression')
+        return null;
+    return `The target column has mean ${formatMetric(s.mean)}, standard deviation ${formatMetric(s.std)}, range ${formatMetric(s.min)} to ${formatMetric(s.max)}.`;
+}
+/** Every data change, most important first within the fixed order a reader expects. */
+function changeItems(ch, esc) {
+    const items = [];
+    if (ch.file)
+        items.push({ weight: 2, text: `Data file ${esc(ch.file.before)} → ${esc(ch.file.after)}.` });
+    if (!ch.changed) {
+        items.push({ weight: 0, text: "Same data as the baseline's (same fingerprint)." });
+        return items;
+    }
+    const r = ch.rows;
+    const rowShare = r.before > 0 ? Math.abs(r.after - r.before) / r.before : 1;
+    items.push({
+        weight: rowShare >= 0.5 ? 5 : rowShare >= 0.05 ? 3 : 1,
+        text: `Rows ${formatCount(r.before)} → ${formatCount(r.after)} (${formatDelta(r.after - r.before)}).`,
+    });
+    for (const label of ch.classesAppeared)
+        items.push({ weight: 6, text: `New class ${esc(label)}.` });
+    for (const label of ch.classesVanished)
+        items.push({ weight: 6, text: `Class ${esc(label)} no longer appears.` });
+    for (const c of ch.classes ?? []) {
+        if (c.before === c.after || c.before === 0 || c.after === 0)
+            continue;
+        // What matters is the class's share of the rows, not its count: all classes growing together is one change.
+        const moved = r.before > 0 && r.after > 0 ? Math.abs(c.after / r.after - c.before / r.before) : 1;
+        items.push({
+            weight: moved >= 0.05 ? 4 : 1,
+            text: `Class ${esc(c.label)}: ${formatCount(c.before)} → ${formatCount(c.after)} rows (${formatDelta(c.after - c.before)}${share(c, r)}).`,
+        });
+    }
+    for (const name of ch.columnsAdded)
+        items.push({ weight: 5, text: `Column added: ${esc(name)}.` });
+    for (const name of ch.columnsRemoved)
+        items.push({ weight: 5, text: `Column removed: ${esc(name)}.` });
+    for (const f of ch.features) {
+        const parts = [];
+        if (f.meanMoved) {
+            const by = f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} standard deviations)`;
+            parts.push(`mean ${formatMetric(f.meanBefore)} → ${formatMetric(f.meanAfter)}${by}`);
+        }
+        if (f.rangeWidened) {
+            const g = f.rangeGrowth;
+            const sides = [];
+            if (g.below > 0)
+                sides.push(`${formatMetric(g.below)} lower${inStd(g.belowInStd)}`);
+            if (g.above > 0)
+                sides.push(`${formatMetric(g.above)} higher${inStd(g.aboveInStd)}`);
+            parts.push(`range ${formatMetric(f.rangeBefore[0])} to ${formatMetric(f.rangeBefore[1])} widened to ${formatMetric(f.rangeAfter[0])} to ${formatMetric(f.rangeAfter[1])} (${sides.join(', ')})`);
+        }
+        if (parts.length === 0)
+            continue;
+        items.push({
+            weight: f.meanMoved ? 2 + Math.min(3, 1.5 * (f.shiftInStd ?? 0)) : 2,
+            text: `Feature ${esc(f.name)}: ${parts.join('; ')}.`,
+        });
+    }
+    for (const c of ch.categories) {
+        if (c.appeared.length > 0)
+            items.push({
+                weight: 4,
+                text: `Feature ${esc(c.feature)}: new categories ${c.appeared.map((s) => esc(s)).join(', ')}.`,
+            });
+        if (c.vanished.length > 0)
+            items.push({
+                weight: 3,
+                text: `Feature ${esc(c.feature)}: categories gone ${c.vanished.map((s) => esc(s)).join(', ')}.`,
+            });
+    }
+    return items;
+}
+/** "; 39% → 31% of the rows", when both row counts are known. */
+function share(c, rows) {
+    if (rows.before <= 0 || rows.after <= 0)
+        return '';
+    const pct = (n, of) => `${Math.round((100 * n) / of)}%`;
+    return `; ${pct(c.before, rows.before)} → ${pct(c.after, rows.after)} of the rows`;
+}
+/** " (1.2 standard deviations)" or nothing when the baseline's deviation was 0. */
+function inStd(v) {
+    return v === null ? '' : `, ${v.toFixed(1)} standard deviations`;
+}
+/** Most changes the "why it changed" answer names; the evidence lists them all. */
+const WHY_ITEMS = 3;
+/** The third answer: why the width changed, from the settings and the data, most important first. */
+function whySentence(report, esc) {
+    const b = report.baseline;
+    if (b === null)
+        return `No baseline to compare with: this is the first measurement of this data (${formatCount(report.data.rows)} rows).`;
+    const settings = b.settingsChanged ?? [];
+    const lead = settings.length > 0 ? `Settings changed: ${settings.map((s) => esc(s)).join('; ')}. ` : '';
+    const ch = report.changes;
+    if (ch === null)
+        return `${lead}`.trim();
+    if (!ch.changed) {
+        return settings.length > 0
+            ? `${lead}The data are the same as the baseline's.`
+            : "Nothing changed: the same data and settings as the baseline's.";
+    }
+    const items = changeItems(ch, esc)
+        .map((item, order) => ({ ...item, order }))
+        .sort((x, y) => y.weight - x.weight || x.order - y.order);
+    const shown = items.slice(0, WHY_ITEMS).map((i) => i.text);
+    const more = items.length - shown.length;
+    const tail = more > 0 ? ` And ${more} more change${more === 1 ? '' : 's'} in the details.` : '';
+    const quiet = items.every((i) => i.weight <= 1) ? ' No class, column or feature moved beyond the thresholds.' : '';
+    return `${lead}${shown.join(' ')}${quiet}${tail}`;
+}
+/** "Tried 14 removals on 3 networks: 3 removed, 11 put back; the witness was pruned from 8 to 7." */
+function pruningSentence(report) {
+    const steps = report.search?.pruning ?? [];
+    if (steps.length === 0)
+        return null;
+    const networks = new Set(steps.map((s) => `${s.source.width}/${s.source.restart}`)).size;
+    const removed = steps.filter((s) => s.accepted).length;
+    const w = report.search?.witness ?? null;
+    const witness = w !== null && w.how === 'pruned' && w.source.width !== w.width
+        ? `; the witness was pruned from ${w.source.width} to ${w.width} neurons`
+        : '';
+    return `Tried ${steps.length} removal${steps.length === 1 ? '' : 's'} on ${networks} network${networks === 1 ? '' : 's'}: ${removed} removed, ${steps.length - removed} put back${witness}.`;
+}
+/** "45 trainings in 9.40 s (growth 8.10 s, pruning 1.30 s)": what the search cost this run. */
+function searchCostSentence(report) {
+    const s = report.search;
+    if (!s)
+        return null;
+    const t = report.timing;
+    const split = typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
+        ? ` (growth ${formatSeconds(t['growthSeconds'])}, pruning ${formatSeconds(t['pruneSeconds'])})`
+        : '';
+    return `The search ran ${formatCount(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${formatSeconds(t['searchSeconds'])}${split}.`;
+}
+/** Whether this run's result is already the baseline (nothing to accept). */
+function baselineIsCurrent(report) {
+    const b = report.baseline;
+    return (b !== null &&
+        b.width === report.width &&
+        b.sameSettings !== false &&
+        report.changes !== null &&
+        !report.changes.changed &&
+        report.changes.file === null);
+}
+/** What to do next, fitting the run: what was written, and the command the user would type. */
+function hints(report, context, esc, code) {
+    const out = [];
+    const config = context.configShown === null ? '' : ` --config ${esc(context.configShown)}`;
+    const file = esc(context.baselineFile ?? report.gate?.baselineFile ?? report.baseline?.file ?? 'the baseline file');
+    const written = context.baseline;
+    if (written !== null && 'file' in written) {
+        out.push(`Baseline written: ${esc(written.file)}, width ${written.width}, ${written.historyEntries} history entr${written.historyEntries === 1 ? 'y' : 'ies'}. Commit it to make it the baseline.`);
+    }
+    else if (written !== null) {
+        out.push(`Baseline not written: ${esc(written.notWritten, 400)}.`);
+    }
+    else if (report.width !== null && report.verdict !== 'inconclusive' && !baselineIsCurrent(report)) {
+        const command = code(`neuron-budget baseline${config}`);
+        const action = code('update-baseline: true');
+        const lead = report.verdict === 'new'
+            ? 'To record this result as the baseline'
+            : 'If this change is intended, accept it as the new baseline';
+        out.push(context.surface === 'action'
+            ? `${lead}: run the action with ${action}, or run ${command} and commit ${file}.`
+            : `${lead}: run ${command} and commit ${file}.`);
+    }
+    const budget = report.gate?.maxWidth ?? null;
+    if (budget !== null && report.width !== null && report.width > budget) {
+        out.push(`A new baseline does not lift the device budget: this check fails until the width fits it or ${code('gate.max-width')} is raised.`);
+    }
+    return out;
+}
+const SIGN_OFF = 'A passing gate is not a safety sign-off for a device.';
+function capitalise(s) {
+    return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
+}
+
+;// CONCATENATED MODULE: ./src/report/charts.ts
+/**
+ * The two charts, one per question, as chart specs with the sentence that reads them.
+ *
+ * Metric by width: one chart holds the baseline and this change, each width a pair of
+ * categories ("b7" the baseline, "7" this change), because Mermaid draws two bar series at the
+ * same place over each other. A side that did not decide a width has a bar of the axis minimum
+ * there, i.e. none. The bar is the `required`-th best judged metric, so a bar reaches the
+ * threshold line exactly when the width is adequate (recall floors aside). A category without
+ * bars at each end (the widths just outside the range shown; the first is blank when that would be
+ * 0) carries the threshold line past the outer bars, so it shows even with one width. Mermaid's
+ * band axis merges equal labels, so every category is distinct.
+ */
+
+
+
+
+
+/** Most widths the metric chart shows; longer curves keep the widest (where the answer lies). */
+const CHART_MAX_WIDTHS = 15;
+/** Most baselines the drift chart shows. */
+const DRIFT_MAX_POINTS = 30;
+function metricChart(view, report) {
+    const required = report.search?.required ?? 1;
+    const rows = view.rows.slice(-CHART_MAX_WIDTHS);
+    const pairs = view.baseline !== null;
+    const now = rows.map((r) => r.current?.decisive ?? null);
+    const base = rows.map((r) => (r.baseline ? baselineDecisive(r.baseline, required) : null));
+    const values = [...now, ...base].filter((v) => v !== null && Number.isFinite(v));
+    if (values.length === 0)
+        return null;
+    const accuracy = higherIsBetter(view.metricName);
+    const range = metricRange(values, view.threshold, accuracy);
+    // Mermaid draws a bar of the axis minimum as a stub a few pixels high; one below it draws nothing.
+    const floor = range[0] - (range[1] - range[0]);
+    const first = rows[0].width - 1;
+    const categories = [first > 0 ? String(first) : ' '];
+    const nowBars = [floor];
+    const baseBars = [floor];
+    rows.forEach((r, i) => {
+        if (pairs) {
+            categories.push(`b${r.width}${r.width === view.baseline?.width ? ' min' : ''}`);
+            baseBars.push(base[i] ?? floor);
+            nowBars.push(floor);
+        }
+        categories.push(`${r.width}${r.width === view.current.width ? ' min' : ''}`);
+        nowBars.push(now[i] ?? floor);
+        baseBars.push(floor);
+    });
+    categories.push(String(rows[rows.length - 1].width + 1));
+    nowBars.push(floor);
+    baseBars.push(floor);
+    const which = nthBest(required);
+    const side = accuracy ? 'at or above' : 'at or below';
+    const legend = [
+        `Bars: the ${which} ${view.metricName} of the networks at each width, so a bar ${side} the line means the width is adequate (${required} network${required === 1 ? '' : 's'} met the target).`,
+        pairs ? 'Each width has two places: grey "b" and the width is the baseline, blue the width alone this change.' : '',
+        `"min" marks the smallest adequate width${pairs ? ' of each' : ''}. Red line: the threshold ${formatMetric(view.threshold)}.`,
+        `The y-axis runs from ${formatMetric(range[0])} to ${formatMetric(range[1])}${range[0] === 0 ? '' : ', not from 0'}; the numbers are in the table.`,
+    ]
+        .filter((s) => s !== '')
+        .join(' ');
+    return {
+        spec: {
+            title: `${view.metricName} by hidden neurons`,
+            xTitle: 'hidden neurons',
+            categories,
+            yTitle: view.metricName,
+            yRange: range,
+            series: [
+                ...(pairs ? [{ kind: 'bar', values: baseBars, color: CHART_COLORS.baseline }] : []),
+                { kind: 'bar', values: nowBars, color: CHART_COLORS.current },
+                { kind: 'line', values: categories.map(() => view.threshold), color: CHART_COLORS.limit },
+            ],
+        },
+        legend,
+        widths: rows.map((r) => r.width),
+    };
+}
+/** Capacity drift: the width of each accepted baseline, then this change, against the neuron budget. */
+function driftChart(view, budget) {
+    if (view.history.length === 0)
+        return null;
+    const history = view.history.slice(-DRIFT_MAX_POINTS);
+    const first = view.history.length - history.length;
+    // A blank first and a "later" last category carry the budget line past the outer bars.
+    const categories = [' ', ...history.map((_, i) => String(first + i + 1))];
+    const widths = [0, ...history.map((h) => h.width)];
+    if (view.current.width !== null) {
+        categories.push('now');
+        widths.push(view.current.width);
+    }
+    categories.push('later');
+    widths.push(0);
+    const legend = `Bars: the smallest adequate width of each accepted baseline, oldest first (numbered as in the history table)${view.current.width !== null ? ', then this change' : ''}.` +
+        (budget === null
+            ? ' No neuron budget is set (gate.max-width).'
+            : ` Red line: the device budget of ${budget} hidden neurons.`);
+    return {
+        spec: {
+            title: 'Smallest adequate width over time',
+            xTitle: 'accepted baseline',
+            categories,
+            yTitle: 'hidden neurons',
+            yRange: countRange(budget === null ? widths : [...widths, budget]),
+            series: [
+                { kind: 'bar', values: widths, color: CHART_COLORS.current },
+                ...(budget === null
+                    ? []
+                    : [{ kind: 'line', values: categories.map(() => budget), color: CHART_COLORS.limit }]),
+            ],
+        },
+        legend,
+        widths: [],
+    };
+}
+
+;// CONCATENATED MODULE: ./src/report/context.ts
+const DEFAULT_CONTEXT = {
+    surface: 'cli',
+    mode: 'check',
+    configShown: null,
+    baselineFile: null,
+    baseline: null,
+};
+
+;// CONCATENATED MODULE: ./src/report/evidence.ts
+/**
+ * The comment's evidence, collapsed under the three answers: the per-width ladder, per-class
+ * figures, the baseline history, the pruning steps and every data change (Markdown tables).
+ */
+
+
+
+
+function collapsible(summary, body) {
+    // The blank line after </summary> lets GitHub render the Markdown inside.
+    return `<details><summary>${summary}</summary>\n\n${body}\n\n</details>`;
+}
+function num(v) {
+    return v === null || v === undefined || !Number.isFinite(v) ? '—' : formatMetric(v);
+}
+/** "4 of 10 + 1 pruned": networks that met the target, by source. */
+function metCell(w) {
+    const fresh = `${w.metBy.fresh} of ${w.restarts}`;
+    return w.metBy.pruned > 0 ? `${fresh} + ${w.metBy.pruned} pruned` : fresh;
+}
+function ladderSection(view, report, limits, mustShow) {
+    const required = report.search?.required ?? 1;
+    const which = nthBest(required);
+    const hasBaseline = view.baseline !== null;
+    const header = [
+        'Width',
+        'Met the target',
+        `${capitalise(which)}`,
+        'Best',
+        'Adequate',
+        ...(hasBaseline ? ['Baseline: met', `Baseline: ${which}`] : []),
+    ];
+    const keep = pickRows(view.rows, limits.widthRows, (r) => mustShow.has(r.width) || r.width === view.current.width);
+    const lines = keep.kept.map((r) => {
+        const c = r.current;
+        const marked = r.width === view.current.width || r.width === view.baseline?.width;
+        const cells = [
+            marked ? `**${r.width}**` : String(r.width),
+            c ? metCell(c) : 'not decided',
+            num(c?.decisive),
+            num(c?.best),
+            c ? (c.adequate ? 'yes' : 'no') : '—',
+        ];
+        if (hasBaseline)
+            cells.push(r.baseline ? String(r.baseline.met) : '—', num(r.baseline ? baselineDecisive(r.baseline, required) : null));
+        return `| ${cells.join(' | ')} |`;
+    });
+    const align = header.map((_, i) => (i === 1 ? ':--' : '--:'));
+    const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
+    const bold = view.current.width !== null || view.baseline?.width != null
+        ? ' Bold: the smallest adequate width of this change and of the baseline.'
+        : '';
+    return (`| ${header.join(' | ')} |\n|${align.join('|')}|\n${lines.join('\n')}${omitted}\n\n` +
+        `Met the target: fresh restarts at that width that met it, of those run, plus networks pruned down to it. ` +
+        `A width is adequate when ${required} network${required === 1 ? '' : 's'} of it met the target, so the ${which} figure decides.${bold}` +
+        (searchCostSentence(report) === null ? '' : ` ${searchCostSentence(report)}`));
+}
+function classSection(report) {
+    const d = report.device;
+    if (d === null || d.classes === null)
+        return null;
+    const floors = d.classes.some((c) => c.floor !== null);
+    const head = `| Class | Rows | Recall | Precision${floors ? ' | Recall floor' : ''} |\n|:--|--:|--:|--:|${floors ? '--:|' : ''}`;
+    const lines = d.classes.map((c) => `| ${escapeMarkdown(c.label)} | ${formatCount(c.rows)} | ${num(c.recall)} | ${num(c.precision)}${floors ? ` | ${num(c.floor)}` : ''} |`);
+    const parts = [`In the ${d.precision} form that decides.`, `${head}\n${lines.join('\n')}`];
+    if (d.confusion !== null) {
+        const labels = d.classes.map((c) => escapeMarkdown(c.label, 40));
+        const ch = `| True class ↓ predicted → | ${labels.join(' | ')} |\n|:--|${labels.map(() => '--:').join('|')}|`;
+        const rows = d.confusion.map((row, i) => `| ${labels[i]} | ${row.map((n) => formatCount(n)).join(' | ')} |`);
+        parts.push(`${ch}\n${rows.join('\n')}`);
+    }
+    return parts.join('\n\n');
+}
+function historySection(history, limits) {
+    const start = Math.max(0, history.length - limits.historyRows);
+    const lines = history.slice(start).map((h, i) => {
+        const commit = h.commit === null ? '—' : escapeMarkdown(h.commit.slice(0, 12));
+        return `| ${start + i + 1} | ${escapeMarkdown(h.date.slice(0, 10))} | ${commit} | ${formatCount(h.rows)} | ${h.width} | ${num(h.metric)} |`;
+    });
+    const omitted = start > 0 ? `\n\n_The ${start} oldest entries are left out for length._` : '';
+    return `| # | Date | Commit | Rows | Width | Metric |\n|--:|:--|:--|--:|--:|--:|\n${lines.join('\n')}${omitted}`;
+}
+function pruneSection(report, limits) {
+    const steps = report.search?.pruning ?? [];
+    const summary = pruningSentence(report);
+    if (summary === null)
+        return null;
+    if (limits.pruneRows === 0)
+        return `${summary}\n\n_The steps are left out for length; the JSON report lists them._`;
+    const shown = steps.slice(0, limits.pruneRows);
+    const lines = shown.map((s) => `| ${s.source.width} | ${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back'} |`);
+    const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
+    return (`${summary}\n\n| Grown width | Restart | Width before | Neuron index | Steering before | Steering after | Outcome |\n|--:|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}\n\n` +
+        'Neuron index counts from 0, as in the JSON report and the model file. A neuron is put back when the network without it no longer meets the target on the steering rows.');
+}
+function changesSection(changes, limits) {
+    const items = changeItems(changes, escapeMarkdown).map((i) => i.text);
+    const shown = items.slice(0, limits.changeItems);
+    const omitted = items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
+    return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation, or its range grew on a side by more than half a baseline standard deviation.`;
+}
+function pickRows(rows, max, must) {
+    if (rows.length <= max)
+        return { kept: rows, omitted: 0 };
+    let room = Math.max(0, max - rows.filter(must).length);
+    const kept = rows.filter((r) => {
+        if (must(r))
+            return true;
+        if (room > 0) {
+            room--;
+            return true;
+        }
+        return false;
+    });
+    return { kept, omitted: rows.length - kept.length };
+}
+
+;// CONCATENATED MODULE: ./src/report/ledger.ts
+
+/** The ledger, or null when there is no width to cost. */
+function ledgerOf(report) {
+    // A network's cost depends on its width alone (for these inputs and outputs): the width's entry holds it.
+    const costAt = (width) => report.search?.widths.find((w) => w.width === width)?.cost ?? null;
+    if (report.width === null)
+        return null;
+    const c = report.device?.cost ?? costAt(report.width);
+    if (c === null)
+        return null;
+    const p = report.device?.precision ?? 'float32';
+    const other = p === 'int8' ? 'float32' : 'int8';
+    const g = report.gate ?? null;
+    const baselineWidth = report.baseline?.width ?? null;
+    const base = baselineWidth === null ? null : costAt(baselineWidth);
+    return {
+        precision: p,
+        baselineWidth,
+        rows: [
+            { label: 'hidden neurons', unit: '', now: report.width, budget: g?.maxWidth ?? null, atBaseline: baselineWidth },
+            {
+                label: `flash, ${p}`,
+                unit: ' B',
+                now: c.flashBytes[p],
+                budget: g?.maxFlashBytes ?? null,
+                atBaseline: base?.flashBytes[p] ?? null,
+            },
+            {
+                label: `flash, ${other}`,
+                unit: ' B',
+                now: c.flashBytes[other],
+                budget: null,
+                atBaseline: base?.flashBytes[other] ?? null,
+            },
+            {
+                label: `RAM, ${p}`,
+                unit: ' B',
+                now: c.ramBytes[p],
+                budget: g?.maxRamBytes ?? null,
+                atBaseline: base?.ramBytes[p] ?? null,
+            },
+            {
+                label: `RAM, ${other}`,
+                unit: ' B',
+                now: c.ramBytes[other],
+                budget: null,
+                atBaseline: base?.ramBytes[other] ?? null,
+            },
+            {
+                label: 'multiply-accumulates',
+                unit: '',
+                now: c.macs,
+                budget: g?.maxMacs ?? null,
+                atBaseline: base?.macs ?? null,
+            },
+        ],
+    };
+}
+function amount(n, unit) {
+    return `${formatCount(n)}${unit}`;
+}
+/** "5 (over by 2)" / "600 B (fits, 77 B spare)" / "none set". */
+function budgetCell(row) {
+    if (row.budget === null)
+        return 'none set';
+    const gap = row.now - row.budget;
+    return gap > 0
+        ? `${amount(row.budget, row.unit)} (over by ${amount(gap, row.unit)})`
+        : `${amount(row.budget, row.unit)} (fits, ${amount(-gap, row.unit)} spare)`;
+}
+/** The second answer: does the width found fit the device? */
+function fitsSentence(ledger) {
+    if (ledger === null)
+        return 'Nothing to cost: no width is adequate.';
+    const budgeted = ledger.rows.filter((r) => r.budget !== null);
+    if (budgeted.length === 0) {
+        return 'No device budget is set, so nothing is gated; the ledger shows what the network costs. Set gate.max-width, gate.max-flash-bytes, gate.max-ram-bytes or gate.max-macs to gate on it.';
+    }
+    const over = budgeted.filter((r) => r.now > r.budget);
+    if (over.length > 0)
+        return `No: ${over.map((r) => `${excess(r)} over the budget of ${amount(r.budget, r.unit)}`).join('; ')}.`;
+    return `Yes, within every budget set: ${budgeted.map((r) => `${r.label} ${amount(r.now, r.unit)} of ${amount(r.budget, r.unit)}`).join(', ')}.`;
+}
+/** "2 hidden neurons" / "123 B of flash, int8" / "12 multiply-accumulates". */
+function excess(r) {
+    const gap = r.now - r.budget;
+    if (r.label === 'hidden neurons')
+        return neurons(gap);
+    return r.unit === '' ? `${formatCount(gap)} ${r.label}` : `${amount(gap, r.unit)} of ${r.label}`;
+}
+
+;// CONCATENATED MODULE: ./src/report/markdown.ts
+/**
+ * The pull-request comment and job summary (GitHub-flavoured Markdown), laid out around the
+ * reviewer's three questions: how many neurons does the data need now, does that fit the
+ * device, and why did it change. The verdict and the three answers come first; the evidence
+ * (metric by width, per class, capacity drift, pruning, every data change) follows collapsed.
+ * Every string from the repository passes through escapeMarkdown. When the comment would
+ * exceed the limit, only the evidence is shortened.
+ */
+
+
+
+
+
+
+
+
+
+/** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
+const COMMENT_LIMIT = 65_000;
+const DETAIL_LEVELS = [
+    { widthRows: Infinity, historyRows: Infinity, pruneRows: Infinity, changeItems: Infinity },
+    { widthRows: 200, historyRows: 100, pruneRows: 60, changeItems: 100 },
+    { widthRows: 80, historyRows: 40, pruneRows: 20, changeItems: 40 },
+    { widthRows: 0, historyRows: 12, pruneRows: 0, changeItems: 12 },
+];
+const code = (s) => `\`${s}\``;
+function renderMarkdown(report, options = {}) {
+    const limit = options.limit ?? COMMENT_LIMIT;
+    const context = options.context ?? DEFAULT_CONTEXT;
+    const view = viewOf(report);
+    const head = [headline(view), answers(view, report)].join('\n\n');
+    const foot = footer(report, context);
+    for (const level of DETAIL_LEVELS) {
+        const body = [head, evidence(view, report, level), foot].filter((s) => s !== '').join('\n\n');
+        if (body.length + 1 <= limit)
+            return `${body}\n`;
+    }
+    const note = "_The evidence was left out to keep this comment within GitHub's size limit; the JSON report has it all._";
+    return `${[head, note, foot].join('\n\n')}\n`;
+}
+function headline(view) {
+    const lines = [`### neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${escapeMarkdown(view.headline, MAX_MESSAGE)}`];
+    if (view.otherReasons.length > 0) {
+        lines.push('');
+        for (const r of view.otherReasons)
+            lines.push(`- ${escapeMarkdown(r, MAX_MESSAGE)}`);
+    }
+    return lines.join('\n');
+}
+/** The three answers, each led by its question's word in bold. */
+function answers(view, report) {
+    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
+    const ledger = ledgerOf(report);
+    const parts = [
+        `**Needs:** ${escapeMarkdown(needs.join(' '), 2 * MAX_MESSAGE)}`,
+        `**Fits the device:** ${escapeMarkdown(fitsSentence(ledger), MAX_MESSAGE)}`,
+    ];
+    if (ledger !== null)
+        parts.push(ledgerTable(ledger));
+    parts.push(`**Why it changed:** ${whySentence(report, escapeMarkdown)}`);
+    return parts.join('\n\n');
+}
+function ledgerTable(ledger) {
+    const base = ledger.baselineWidth;
+    const head = base === null
+        ? '| On the device | Needs now | Budget |\n|:--|--:|--:|'
+        : `| On the device | Needs now | Budget | At the baseline's ${base} |\n|:--|--:|--:|--:|`;
+    const lines = ledger.rows.map((r) => {
+        const cells = [r.label, `**${amount(r.now, r.unit)}**`, budgetCell(r)];
+        if (base !== null)
+            cells.push(r.atBaseline === null ? '—' : amount(r.atBaseline, r.unit));
+        return `| ${cells.join(' | ')} |`;
+    });
+    return `${head}\n${lines.join('\n')}`;
+}
+function evidence(view, report, limits) {
+    const blocks = [];
+    const metric = metricChart(view, report);
+    if (view.rows.length > 0) {
+        const chart = metric === null ? '' : `${metric.legend}\n\n${renderChart(metric.spec)}\n\n`;
+        blocks.push(collapsible(`Per width: ${escapeMarkdown(view.metricName)} of the ${view.rows.length} width${view.rows.length === 1 ? '' : 's'} decided`, `${chart}${ladderSection(view, report, limits, new Set(metric?.widths ?? []))}`));
+    }
+    const classes = classSection(report);
+    if (classes !== null)
+        blocks.push(collapsible('Per class, on the rows that judged the witness', classes));
+    const drift = driftChart(view, report.gate?.maxWidth ?? null);
+    if (drift !== null) {
+        blocks.push(collapsible(`Capacity drift: ${view.history.length} accepted baseline${view.history.length === 1 ? '' : 's'}`, `${drift.legend}\n\n${renderChart(drift.spec)}\n\n${historySection(view.history, limits)}`));
+    }
+    const pruning = pruneSection(report, limits);
+    if (pruning !== null)
+        blocks.push(collapsible(`Pruning: ${report.search.pruning.length} removals tried`, pruning));
+    if (report.changes)
+        blocks.push(collapsible('Every data change since the baseline', changesSection(report.changes, limits)));
+    return blocks.join('\n\n');
+}
+function footer(report, context) {
+    const lines = hints(report, context, escapeMarkdown, code);
+    const sign = `_neuron-budget ${escapeMarkdown(report.tool.version)} measures how many hidden neurons this data needs. ${SIGN_OFF}_`;
+    return ['---', ...lines, sign].join('\n\n');
+}
+
+;// CONCATENATED MODULE: ./src/report/text.ts
+/**
+ * The terminal report: the same answers and words as the comment, plain text, at most 80 columns
+ * (a long repository name may run over; each is clipped at 200 characters).
+ */
+
+
+
+
+
+
+
+const TEXT_WIDTH = 80;
+function renderText(report, context = DEFAULT_CONTEXT) {
+    const view = viewOf(report);
+    const out = [];
+    // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
+    out.push(...text_wrap(`neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${escapeText(view.headline, MAX_MESSAGE)}`, ''));
+    for (const r of view.otherReasons)
+        out.push(...text_wrap(escapeText(r, MAX_MESSAGE), '  - ', '    '));
+    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
+    out.push('', ...text_wrap(`Needs: ${needs.join(' ')}`, '', '  '));
+    const ledger = ledgerOf(report);
+    out.push('', ...text_wrap(`Fits the device: ${fitsSentence(ledger)}`, '', '  '));
+    if (ledger !== null)
+        out.push(...ledgerLines(ledger));
+    out.push('', ...text_wrap(`Why it changed: ${whySentence(report, escapeText)}`, '', '  '));
+    if (view.rows.length > 0)
+        out.push('', ...ladderLines(view, report));
+    if (view.history.length > 0) {
+        out.push('');
+        out.push(`capacity drift (accepted baselines, oldest first${view.current.width !== null ? ', then now' : ''}):`);
+        const widths = view.history.slice(-20).map((h) => String(h.width));
+        if (view.current.width !== null)
+            widths.push(`now ${view.current.width}`);
+        const budget = report.gate?.maxWidth ?? null;
+        out.push(...text_wrap(`width ${widths.join(' -> ')}${budget === null ? '' : ` (budget ${budget})`}`, '  ', '  '));
+    }
+    const pruning = pruningSentence(report);
+    if (pruning !== null)
+        out.push('', ...text_wrap(`pruning: ${pruning[0].toLowerCase()}${pruning.slice(1)}`, '', '  '));
+    if (report.changes) {
+        out.push('', 'data changes since the baseline:');
+        for (const item of changeItems(report.changes, escapeText))
+            out.push(...text_wrap(item.text, '  - ', '    '));
+    }
+    out.push('');
+    for (const line of hints(report, context, escapeText, (s) => s))
+        out.push(...text_wrap(line, ''));
+    out.push(...text_wrap(SIGN_OFF, ''));
+    return `${out.join('\n')}\n`;
+}
+function ledgerLines(ledger) {
+    const base = ledger.baselineWidth;
+    const head = ['on the device', 'needs now', 'budget', ...(base === null ? [] : [`at baseline's ${base}`])];
+    const rows = ledger.rows.map((r) => [
+        r.label,
+        amount(r.now, r.unit),
+        budgetCell(r),
+        ...(base === null ? [] : [r.atBaseline === null ? '-' : amount(r.atBaseline, r.unit)]),
+    ]);
+    const widths = [22, 11, 20, 18];
+    return [head, ...rows].map((cells) => `  ${cells.map((c, i) => (i === 0 ? c.padEnd(widths[0]) : c.padStart(widths[i]))).join('')}`.trimEnd());
+}
+function ladderLines(view, report) {
+    const required = report.search?.required ?? 1;
+    const b = view.baseline;
+    const out = [`${view.metricName} by width (met: networks that met the target; ${nthBest(required)} decides)`];
+    const head = ['width', 'met', nthBest(required), 'best', 'adequate', ...(b ? ['baseline met'] : [])];
+    const widths = [7, 16, 11, 10, 10, 14];
+    const line = (cells) => cells
+        .map((c, i) => c.padStart(widths[i]))
+        .join('')
+        .trimEnd();
+    out.push(line(head));
+    for (const r of view.rows) {
+        const c = r.current;
+        const marked = r.width === view.current.width ? '>' : ' ';
+        out.push(line([
+            `${marked}${r.width}`,
+            c ? `${c.metBy.fresh} of ${c.restarts}${c.metBy.pruned > 0 ? ` +${c.metBy.pruned}p` : ''}` : 'not decided',
+            fmt(c?.decisive),
+            fmt(c?.best),
+            c ? (c.adequate ? 'yes' : 'no') : '-',
+            ...(b ? [r.baseline ? String(r.baseline.met) : '-'] : []),
+        ]));
+    }
+    const notes = [`threshold ${formatMetric(view.threshold)}`];
+    if (view.current.width !== null)
+        notes.unshift("> marks this change's smallest adequate width");
+    if (view.rows.some((r) => (r.current?.metBy.pruned ?? 0) > 0))
+        notes.push('+Np: N networks pruned down to it');
+    out.push(...text_wrap(`(${notes.join('; ')})`, '  ', '  '));
+    const cost = searchCostSentence(report);
+    if (cost !== null)
+        out.push(...text_wrap(cost, '  ', '  '));
+    return out;
+}
+/** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
+function text_wrap(text, first, rest = first) {
+    const words = text.split(/ +/).filter((w) => w !== '');
+    const lines = [];
+    let line = first;
+    let empty = true;
+    for (const w of words) {
+        if (!empty && line.length + 1 + w.length > TEXT_WIDTH) {
+            lines.push(line);
+            line = rest + w;
+        }
+        else {
+            line += (empty ? '' : ' ') + w;
+        }
+        empty = false;
+    }
+    lines.push(line);
+    return lines;
+}
+function fmt(v) {
+    return v === null || v === undefined || !Number.isFinite(v) ? '-' : formatMetric(v);
+}
+
+;// CONCATENATED MODULE: ./src/report/json.ts
+function withGate(report, outcome, gate) {
+    const b = outcome.baseline;
+    return {
+        ...report,
+        verdict: outcome.verdict,
+        reasons: [...outcome.reasons],
+        baseline: b
+            ? {
+                width: b.result.width,
+                metric: b.result.metric.value,
+                file: gate.baselineAsWritten,
+                met: b.result.met,
+                restarts: b.result.restarts,
+                rows: b.data.rows,
+                searchSeconds: b.result.searchSeconds,
+                toolVersion: b.tool.version,
+                sameSettings: outcome.settingsChanged.length === 0,
+                settingsChanged: [...outcome.settingsChanged],
+                widths: b.widths.map((w) => ({ ...w })),
+                history: b.history.map((h) => ({ ...h })),
+            }
+            : null,
+        gate: {
+            maxWidth: gate.maxWidth,
+            maxFlashBytes: gate.maxFlashBytes,
+            maxRamBytes: gate.maxRamBytes,
+            maxMacs: gate.maxMacs,
+            allowedGrowth: gate.allowedGrowth,
+            metricTolerance: gate.metricTolerance,
+            baselineFile: gate.baselineAsWritten,
+        },
+        changes: outcome.changes,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/report/baseline-record.ts
+/**
+ * The one line that says what `baseline` did with the baseline file, for the command line's
+ * stdout and the action's log (the record itself is in JobResult.baselineRecord).
+ */
+
+
+/** "baseline written: FILE, width W, N history entries", or "baseline not written: WHY". The file is escaped. */
+function baselineRecordLine(record) {
+    if ('notWritten' in record)
+        return `baseline not written: ${record.notWritten}`;
+    const entries = record.historyEntries === 1 ? '1 history entry' : `${formatCount(record.historyEntries)} history entries`;
+    return `baseline written: ${escapeText(record.file)}, width ${record.width}, ${entries}`;
+}
+
+;// CONCATENATED MODULE: ./src/report/index.ts
+/** Rendering a report: pull-request comment / job summary, terminal text, JSON. */
+
+
+
+
+
+
 ;// CONCATENATED MODULE: ./src/config/spec.ts
 /**
  * Every config key the validator accepts, with its rule, default and description, as data.
  * The validator walks this table; a test walks it against schema/neuron-budget.schema.json
  * so the two cannot drift apart.
  */
+
 /** Marks a key the user must give. */
 const spec_REQUIRED = Symbol('required');
 /** Marks a key whose default depends on another key (the description says how). */
@@ -16398,7 +17426,7 @@ const spec_CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
                 default: 'auto',
-                description: 'auto: decided from the target column (text or few distinct values: classification).',
+                description: `auto: decided from the target column: text, or numbers with at most ${AUTO_MAX_CLASSES} distinct values, is classification; other numbers are regression.`,
             },
             {
                 name: 'validation',
@@ -16447,14 +17475,14 @@ const spec_CONFIG_SPEC = [
                 changesResult: true,
                 rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
                 default: spec_DERIVED,
-                description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
+                description: 'accuracy for classification; rmse, mae or max-abs-error for regression. Default: follows the task, accuracy for classification and rmse for regression (with data.task auto, the task found in the data).',
             },
             {
                 name: 'threshold',
                 changesResult: true,
                 rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
                 default: spec_REQUIRED,
-                description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
+                description: "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units. Checked against the metric in effect: with data.task auto and no target.metric, once the data show the task.",
             },
             {
                 name: 'precision',
@@ -17229,7 +18257,7 @@ function configKeyError(config, key, detail) {
  * which depend on the task and the class labels found.
  */
 function settleTarget(config, task, classes) {
-    const settled = settleMetric(config, task);
+    const settled = settleMetric(config, task, classes);
     return { ...settled, target: { ...settled.target, recallFloors: recallFloors(settled, task, classes) } };
 }
 /** target.min-recall as one floor per class index; each named class must be one the data have. */
@@ -17254,17 +18282,18 @@ function recallFloors(config, task, classes) {
 }
 /**
  * With data.task auto the task is only known after reading: the metric follows it unless the
- * config names one, and a named metric must suit it.
+ * config names one, and a named metric must suit it. A threshold or tolerance that cannot be an
+ * accuracy is refused here, once the task is known, saying what to write either way.
  */
-function settleMetric(config, task) {
+function settleMetric(config, task, classes) {
     const target = config.target;
     if (!config.metricGiven) {
         const metric = defaultMetric(task);
         if (metric === 'accuracy' && target.threshold > 1) {
-            throw configKeyError(config, 'target.threshold', `the target column ${escape_quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`);
+            throw configKeyError(config, 'target.threshold', `${readAsClassification(config, classes)}, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold}; ${whatToWrite(config, classes, 'write the accuracy as a fraction (95% as 0.95)')}`);
         }
         if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
-            throw configKeyError(config, 'gate.metric-tolerance', `the target column ${escape_quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`);
+            throw configKeyError(config, 'gate.metric-tolerance', `${readAsClassification(config, classes)}, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}; ${whatToWrite(config, classes, 'write the tolerance as a fraction (2 points as 0.02)')}`);
         }
         return { ...config, target: { ...target, metric } };
     }
@@ -17274,6 +18303,23 @@ function settleMetric(config, task) {
         ? 'set target.metric to accuracy, or data.task to regression'
         : "set target.metric to rmse, mae or max-abs-error (with a threshold in the target's units), or data.task to classification";
     throw configKeyError(config, 'target.metric', `the target column ${escape_quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`);
+}
+/** Whether a class target's labels are all numbers (data.task auto read a numeric column with few values as classes). */
+function numericLabels(classes) {
+    return classes !== null && classes.every((c) => c.trim() !== '' && Number.isFinite(Number(c)));
+}
+/** "the target column "x" was read as classification (…why…)". */
+function readAsClassification(config, classes) {
+    const why = numericLabels(classes)
+        ? `it holds only ${classes.length} distinct numbers, and data.task auto reads at most ${AUTO_MAX_CLASSES} as class labels`
+        : 'it holds text';
+    return `the target column ${escape_quote(config.data.target)} was read as classification (${why})`;
+}
+/** What to write: a few distinct numbers may be a measurement (then regression, and rmse follows); text is classes. */
+function whatToWrite(config, classes, asAccuracy) {
+    if (!numericLabels(classes))
+        return asAccuracy;
+    return `if ${escape_quote(config.data.target)} is a measurement, write "task: regression" under data (the metric is then rmse, in the column's units); if it holds classes, ${asAccuracy}`;
 }
 
 ;// CONCATENATED MODULE: ./src/data/column-store.ts
@@ -17750,6 +18796,13 @@ function profileData(features, target, stores, rows) {
     ];
     used.sort((a, b) => a.column - b.column);
     return { rows, classes, columns: used.map((c) => c.name), features: profiles };
+}
+/** A regression target's mean, standard deviation and range over the rows used; null for classification. */
+function targetSpread(target) {
+    if (target.task !== 'regression')
+        return null;
+    const { mean, std, min, max } = numericProfile(target.values, 0);
+    return { mean, std, min, max };
 }
 function numericProfile(values, missing) {
     let sum = 0;
@@ -18332,8 +19385,7 @@ function tooFew(target, group, rows, minTrain, f, file) {
 
 
 
-/** Distinct numeric values up to which `task: auto` still means classification (a rule of thumb, no source). */
-const AUTO_MAX_CLASSES = 10;
+
 function targetColumn(store, config, file) {
     const wanted = config.data.task;
     const label = columnLabel(store.column, store.name);
@@ -18468,6 +19520,7 @@ async function load(config) {
         droppedRows: table.droppedRows,
         fingerprint: fingerprint(typed, target, table.rows),
         profile: profileData(typed, target, table.columns, table.rows),
+        targetSpread: targetSpread(target),
         splitRows: split,
         judgingFolded: split.judgingFolded,
     };
@@ -18686,6 +19739,16 @@ function budgetFailures(input) {
  * for a "medium" shift (common practice, no single source).
  */
 const MEAN_SHIFT_IN_STD = 0.5;
+/**
+ * A numeric feature's range counts as widened when it grew on a side (a new minimum below the
+ * baseline's, or a new maximum above it) by more than this many baseline standard deviations.
+ * A rule of thumb (common practice, no single source): the extremes of a sample wander by chance
+ * as rows are added (for normal data and a thousand rows the sample maximum's spread is about
+ * σ/√(2 ln n) ≈ 0.27σ, from extreme-value theory; figure from memory), so a new extreme within
+ * a few hundredths of σ of the old one is no change a reviewer should read about, while one
+ * half a σ beyond it puts rows where the baseline's networks never saw any.
+ */
+const RANGE_GROWTH_IN_STD = 0.5;
 function dataChanges(before, after, fingerprints, files = { before: '', after: '' }) {
     const columnsBefore = new Set(before.columns);
     const columnsAfter = new Set(after.columns);
@@ -18718,7 +19781,8 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
             const delta = atMostMax(Math.abs(a.mean - b.mean));
             const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
             const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
-            const rangeWidened = a.min < b.min || a.max > b.max;
+            const rangeGrowth = growthOf(b, a);
+            const rangeWidened = grewMeaningfully(rangeGrowth.below, b.std) || grewMeaningfully(rangeGrowth.above, b.std);
             if (meanMoved || rangeWidened) {
                 features.push({
                     name,
@@ -18730,6 +19794,7 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
                     rangeBefore: [b.min, b.max],
                     rangeAfter: [a.min, a.max],
                     rangeWidened,
+                    rangeGrowth,
                 });
             }
         }
@@ -18754,6 +19819,17 @@ function dataChanges(before, after, fingerprints, files = { before: '', after: '
         columnsAdded,
         columnsRemoved,
     };
+}
+/** How far the range reaches beyond the baseline's on each side, in the feature's units and in baseline stds. */
+function growthOf(b, a) {
+    const below = atMostMax(Math.max(0, b.min - a.min));
+    const above = atMostMax(Math.max(0, a.max - b.max));
+    const inStd = (g) => (b.std > 0 ? atMostMax(g / b.std) : null);
+    return { below, above, belowInStd: inStd(below), aboveInStd: inStd(above) };
+}
+/** A side grew meaningfully: by more than RANGE_GROWTH_IN_STD baseline stds (any growth for a constant feature). */
+function grewMeaningfully(growth, std) {
+    return std > 0 ? growth > RANGE_GROWTH_IN_STD * std : growth > 0;
 }
 /**
  * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
@@ -19216,20 +20292,15 @@ async function runGateStage(input) {
         cost: input.cost ?? null,
     });
     if (input.mode === 'check')
-        return { outcome, written: null, notWritten: null, historyEntries: null, gate: config.gate };
+        return { outcome, written: null, record: null, gate: config.gate };
     const why = whyNotRecordable(input.result);
     if (why !== null)
-        return { outcome, written: null, notWritten: why, historyEntries: null, gate: config.gate };
+        return { outcome, written: null, record: { notWritten: why }, gate: config.gate };
     const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
     // Only if the file still holds what `previous` was read from: never drop another run's entry.
     await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
-    return {
-        outcome,
-        written: input.baselinePath,
-        notWritten: null,
-        historyEntries: next.history.length,
-        gate: config.gate,
-    };
+    const record = { file: input.baselineShown, width: next.result.width, historyEntries: next.history.length };
+    return { outcome, written: input.baselinePath, record, gate: config.gate };
 }
 
 ;// CONCATENATED MODULE: ./src/gate/index.ts
@@ -19276,6 +20347,7 @@ function dataStageReport(config, data, timing) {
                 : Object.keys(classes)
                     .sort()
                     .map((label) => ({ label, count: classes[label] })),
+            targetSpread: data.targetSpread,
         },
         search: null,
         device: null,
@@ -19418,985 +20490,6 @@ function dataSummaryText(config, data, report) {
     const body = rows.map(([k, v]) => `  ${k.padEnd(12)}${v}`).join('\n');
     return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;
 }
-
-;// CONCATENATED MODULE: ./src/report/chart.ts
-/**
- * Mermaid `xychart-beta` blocks. Only numbers computed by neuron-budget and fixed
- * words written here ever reach a chart, so nothing from the repository can break it;
- * `chartText` still refuses anything outside a small alphabet as a second line of defence.
- *
- * The constructs used: an init directive that sets the series colours, `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
- * `y-axis "…" a --> b`, `line [n, …]`, `bar [n, …]`. Every series has exactly one value
- * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
- * no value is left out of the chart (the table beside it still lists it).
- */
-
-/** Letters, digits, space and . , - + (a width read from a baseline file may print as 1e+21). */
-const SAFE_TEXT = /^[A-Za-z0-9 .,+-]*$/;
-function chartText(s) {
-    if (!SAFE_TEXT.test(s))
-        throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
-    return `"${s}"`;
-}
-function chartNumber(n) {
-    const s = formatMetric(n);
-    if (!/^-?\d+(\.\d+)?$/.test(s))
-        throw new Error(`not a chart number: ${n}`);
-    return s;
-}
-/** Colours readable on GitHub's light and dark themes. */
-const CHART_COLORS = { baseline: '#8c959f', current: '#0969da', limit: '#cf222e' };
-function renderChart(spec) {
-    for (const s of spec.series) {
-        if (s.values.length !== spec.categories.length) {
-            throw new Error('every chart series needs one value per category');
-        }
-    }
-    for (const s of spec.series) {
-        if (!/^#[0-9a-f]{6}$/.test(s.color))
-            throw new Error(`not a chart colour: ${JSON.stringify(s.color)}`);
-    }
-    const palette = spec.series.map((s) => s.color).join(',');
-    const lines = [
-        '```mermaid',
-        `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
-        'xychart-beta',
-        `  title ${chartText(spec.title)}`,
-        `  x-axis ${chartText(spec.xTitle)} [${spec.categories.map(chartText).join(', ')}]`,
-        `  y-axis ${chartText(spec.yTitle)} ${chartNumber(spec.yRange[0])} --> ${chartNumber(spec.yRange[1])}`,
-        ...spec.series.map((s) => `  ${s.kind} [${s.values.map(chartNumber).join(', ')}]`),
-        '```',
-    ];
-    return lines.join('\n');
-}
-/*
- * The ranges below take values read from a baseline file, which may be any finite number:
- * every step that could overflow (a margin on top of 1.7e308) stops at the largest float, so
- * an axis end is always a finite number.
- */
-/** A y-axis range that shows every value and the threshold with a little room. */
-function metricRange(values, threshold, accuracy) {
-    const all = [...values, threshold].filter(Number.isFinite);
-    if (accuracy) {
-        const low = Math.min(...all);
-        // Keep the axis from collapsing when every value is 1.
-        return [Math.min(0.9, Math.max(0, Math.floor(low * 10) / 10)), 1];
-    }
-    const high = Math.max(...all, 0);
-    return [0, niceCeil(chart_finite(high * 1.1))];
-}
-function countRange(values) {
-    const high = Math.max(1, ...values.filter(Number.isFinite));
-    return [0, chart_finite(Math.ceil(chart_finite(high * 1.15)) + 1)];
-}
-function niceCeil(x) {
-    if (x <= 0)
-        return 1;
-    const step = 10 ** Math.floor(Math.log10(x));
-    return chart_finite(Math.ceil(x / step) * step);
-}
-/** x, or the largest float when x overflowed. */
-function chart_finite(x) {
-    return Math.min(x, Number.MAX_VALUE);
-}
-
-;// CONCATENATED MODULE: ./src/report/view.ts
-const VERDICT_LABEL = {
-    pass: 'PASS',
-    fail: 'FAIL',
-    improved: 'IMPROVED',
-    new: 'NEW',
-    inconclusive: 'INCONCLUSIVE',
-};
-function viewOf(report) {
-    const widths = report.search?.widths ?? [];
-    const at = report.width === null ? undefined : widths.find((w) => w.width === report.width);
-    const b = report.baseline;
-    const byWidth = new Map();
-    for (const w of widths)
-        byWidth.set(w.width, { width: w.width, current: w, baseline: null });
-    for (const w of b?.widths ?? []) {
-        const row = byWidth.get(w.width) ?? { width: w.width, current: null, baseline: null };
-        row.baseline = w;
-        byWidth.set(w.width, row);
-    }
-    const grown = report.search?.grownWidth ?? null;
-    const searchSeconds = report.timing['searchSeconds'];
-    return {
-        verdict: report.verdict,
-        headline: report.reasons[0] ?? '',
-        otherReasons: report.reasons.slice(1),
-        metricName: report.metric.name,
-        threshold: report.metric.threshold,
-        current: {
-            width: report.width,
-            metric: report.metric.value,
-            met: at ? at.met : null,
-            restarts: at ? at.restarts : null,
-            rows: report.data.rows,
-            searchSeconds: typeof searchSeconds === 'number' ? searchSeconds : null,
-        },
-        baseline: b
-            ? {
-                width: b.width,
-                metric: b.metric,
-                met: b.met ?? null,
-                restarts: b.restarts ?? null,
-                rows: b.rows ?? null,
-                searchSeconds: b.searchSeconds ?? null,
-            }
-            : null,
-        prunedFrom: grown !== null && report.width !== null && grown !== report.width ? grown : null,
-        backing: at ? backingSentence(at, report) : null,
-        rows: [...byWidth.values()].sort((x, y) => x.width - y.width),
-        history: b?.history ?? [],
-        baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
-    };
-}
-/**
- * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
- * wider networks); 3 are required." One definition of the backing, shown by every screen.
- */
-function backingSentence(w, report) {
-    const judging = report.search?.judging.on ?? 'judging';
-    const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
-    const parts = [];
-    if (w.restarts > 0)
-        parts.push(`${w.metBy.fresh} of ${w.restarts} fresh restart${w.restarts === 1 ? '' : 's'}`);
-    if (w.metBy.pruned > 0)
-        parts.push(`${w.metBy.pruned} pruned from wider networks`);
-    const required = report.search?.required ?? null;
-    const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
-    const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
-    return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
-}
-/** A baseline width's decisive metric, or its best in files that lack it when one network suffices. */
-function baselineDecisive(w, required) {
-    if (w.decisive !== undefined)
-        return w.decisive;
-    return required === 1 ? w.best : null;
-}
-
-;// CONCATENATED MODULE: ./src/report/words.ts
-
-
-/** "best", "2nd best", "3rd best", "4th best". */
-function nthBest(n) {
-    if (n <= 1)
-        return 'best';
-    const tens = n % 100;
-    const suffix = tens >= 11 && tens <= 13 ? 'th' : (['th', 'st', 'nd', 'rd'][n % 10] ?? 'th');
-    return `${n}${suffix} best`;
-}
-/** "on 539 judging rows" (or validation/training rows when those judged). */
-function judgingRowsPhrase(report) {
-    const j = report.search?.judging;
-    if (!j)
-        return '';
-    return `on ${formatCount(j.rows)} ${j.on} rows`;
-}
-/** The first answer: how many neurons the data need now, and what the witness scores. */
-function needsSentence(report) {
-    const base = report.baseline?.width ?? null;
-    const target = targetPhrase(report.metric.name, report.metric.threshold);
-    if (report.width === null) {
-        const why = report.search?.outcome === 'inconclusive'
-            ? 'not settled: the search stopped before it could decide'
-            : `no width in the search range is adequate (${report.search?.required ?? 1} of its networks meeting ${target})`;
-        return `${capitalise(why)}${base === null ? '' : `; the baseline needed ${neurons(base)}`}.`;
-    }
-    const was = base === null
-        ? ''
-        : base === report.width
-            ? ', as the baseline did'
-            : ` (the baseline needed ${formatCount(base)})`;
-    const parts = [`${neurons(report.width)}${was}.`];
-    const value = report.metric.value;
-    if (value !== null) {
-        const int8 = report.device?.metric.int8 ?? null;
-        const decides = report.device?.precision ?? 'float32';
-        const forms = int8 === null
-            ? ''
-            : decides === 'int8'
-                ? ` in the int8 form that decides (float32 ${formatMetric(report.device.metric.float32)})`
-                : `; int8 form ${formatMetric(int8)}`;
-        const bound = `${higherIsBetter(report.metric.name) ? 'at least' : 'at most'} ${formatMetric(report.metric.threshold)}`;
-        parts.push(`The witness scores ${report.metric.name} ${formatMetric(value)} ${judgingRowsPhrase(report)} (target: ${bound})${forms}.`);
-    }
-    return parts.join(' ');
-}
-/** The spread of a regression target, so "rmse ≤ 6" can be read against its scale; null otherwise. */
-function targetSpreadSentence(report) {
-    const s = report.data.targetSpread;
-    if (!s || report.data.task !== 'regression')
-        return null;
-    return `The target column has mean ${formatMetric(s.mean)}, standard deviation ${formatMetric(s.std)}, range ${formatMetric(s.min)} to ${formatMetric(s.max)}.`;
-}
-/** Every data change, most important first within the fixed order a reader expects. */
-function changeItems(ch, esc) {
-    const items = [];
-    if (ch.file)
-        items.push({ weight: 2, text: `Data file ${esc(ch.file.before)} → ${esc(ch.file.after)}.` });
-    if (!ch.changed) {
-        items.push({ weight: 0, text: "Same data as the baseline's (same fingerprint)." });
-        return items;
-    }
-    const r = ch.rows;
-    const rowShare = r.before > 0 ? Math.abs(r.after - r.before) / r.before : 1;
-    items.push({
-        weight: rowShare >= 0.5 ? 5 : rowShare >= 0.05 ? 3 : 1,
-        text: `Rows ${formatCount(r.before)} → ${formatCount(r.after)} (${formatDelta(r.after - r.before)}).`,
-    });
-    for (const label of ch.classesAppeared)
-        items.push({ weight: 6, text: `New class ${esc(label)}.` });
-    for (const label of ch.classesVanished)
-        items.push({ weight: 6, text: `Class ${esc(label)} no longer appears.` });
-    for (const c of ch.classes ?? []) {
-        if (c.before === c.after || c.before === 0 || c.after === 0)
-            continue;
-        // What matters is the class's share of the rows, not its count: all classes growing together is one change.
-        const moved = r.before > 0 && r.after > 0 ? Math.abs(c.after / r.after - c.before / r.before) : 1;
-        items.push({
-            weight: moved >= 0.05 ? 4 : 1,
-            text: `Class ${esc(c.label)}: ${formatCount(c.before)} → ${formatCount(c.after)} rows (${formatDelta(c.after - c.before)}${share(c, r)}).`,
-        });
-    }
-    for (const name of ch.columnsAdded)
-        items.push({ weight: 5, text: `Column added: ${esc(name)}.` });
-    for (const name of ch.columnsRemoved)
-        items.push({ weight: 5, text: `Column removed: ${esc(name)}.` });
-    for (const f of ch.features) {
-        const parts = [];
-        if (f.meanMoved) {
-            const by = f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} standard deviations)`;
-            parts.push(`mean ${formatMetric(f.meanBefore)} → ${formatMetric(f.meanAfter)}${by}`);
-        }
-        if (f.rangeWidened) {
-            parts.push(`range ${formatMetric(f.rangeBefore[0])} to ${formatMetric(f.rangeBefore[1])} widened to ${formatMetric(f.rangeAfter[0])} to ${formatMetric(f.rangeAfter[1])}`);
-        }
-        if (parts.length === 0)
-            continue;
-        items.push({
-            weight: f.meanMoved ? 2 + Math.min(3, 1.5 * (f.shiftInStd ?? 0)) : 2,
-            text: `Feature ${esc(f.name)}: ${parts.join('; ')}.`,
-        });
-    }
-    for (const c of ch.categories) {
-        if (c.appeared.length > 0)
-            items.push({
-                weight: 4,
-                text: `Feature ${esc(c.feature)}: new categories ${c.appeared.map((s) => esc(s)).join(', ')}.`,
-            });
-        if (c.vanished.length > 0)
-            items.push({
-                weight: 3,
-                text: `Feature ${esc(c.feature)}: categories gone ${c.vanished.map((s) => esc(s)).join(', ')}.`,
-            });
-    }
-    return items;
-}
-/** "; 39% → 31% of the rows", when both row counts are known. */
-function share(c, rows) {
-    if (rows.before <= 0 || rows.after <= 0)
-        return '';
-    const pct = (n, of) => `${Math.round((100 * n) / of)}%`;
-    return `; ${pct(c.before, rows.before)} → ${pct(c.after, rows.after)} of the rows`;
-}
-/** Most changes the "why it changed" answer names; the evidence lists them all. */
-const WHY_ITEMS = 3;
-/** The third answer: why the width changed, from the settings and the data, most important first. */
-function whySentence(report, esc) {
-    const b = report.baseline;
-    if (b === null)
-        return `No baseline to compare with: this is the first measurement of this data (${formatCount(report.data.rows)} rows).`;
-    const settings = b.settingsChanged ?? [];
-    const lead = settings.length > 0 ? `Settings changed: ${settings.map((s) => esc(s)).join('; ')}. ` : '';
-    const ch = report.changes;
-    if (ch === null)
-        return `${lead}`.trim();
-    if (!ch.changed) {
-        return settings.length > 0
-            ? `${lead}The data are the same as the baseline's.`
-            : "Nothing changed: the same data and settings as the baseline's.";
-    }
-    const items = changeItems(ch, esc)
-        .map((item, order) => ({ ...item, order }))
-        .sort((x, y) => y.weight - x.weight || x.order - y.order);
-    const shown = items.slice(0, WHY_ITEMS).map((i) => i.text);
-    const more = items.length - shown.length;
-    const tail = more > 0 ? ` And ${more} more change${more === 1 ? '' : 's'} in the details.` : '';
-    const quiet = items.every((i) => i.weight <= 1) ? ' No class, column or feature moved beyond the thresholds.' : '';
-    return `${lead}${shown.join(' ')}${quiet}${tail}`;
-}
-/** "Tried 14 removals on 3 networks: 3 removed, 11 put back; the witness was pruned from 8 to 7." */
-function pruningSentence(report) {
-    const steps = report.search?.pruning ?? [];
-    if (steps.length === 0)
-        return null;
-    const networks = new Set(steps.map((s) => `${s.source.width}/${s.source.restart}`)).size;
-    const removed = steps.filter((s) => s.accepted).length;
-    const w = report.search?.witness ?? null;
-    const witness = w !== null && w.how === 'pruned' && w.source.width !== w.width
-        ? `; the witness was pruned from ${w.source.width} to ${w.width} neurons`
-        : '';
-    return `Tried ${steps.length} removal${steps.length === 1 ? '' : 's'} on ${networks} network${networks === 1 ? '' : 's'}: ${removed} removed, ${steps.length - removed} put back${witness}.`;
-}
-/** "45 trainings in 9.40 s (growth 8.10 s, pruning 1.30 s)": what the search cost this run. */
-function searchCostSentence(report) {
-    const s = report.search;
-    if (!s)
-        return null;
-    const t = report.timing;
-    const split = typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
-        ? ` (growth ${formatSeconds(t['growthSeconds'])}, pruning ${formatSeconds(t['pruneSeconds'])})`
-        : '';
-    return `The search ran ${formatCount(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${formatSeconds(t['searchSeconds'])}${split}.`;
-}
-/** Whether this run's result is already the baseline (nothing to accept). */
-function baselineIsCurrent(report) {
-    const b = report.baseline;
-    return (b !== null &&
-        b.width === report.width &&
-        b.sameSettings !== false &&
-        report.changes !== null &&
-        !report.changes.changed &&
-        report.changes.file === null);
-}
-/** What to do next, fitting the run: what was written, and the command the user would type. */
-function hints(report, context, esc, code) {
-    const out = [];
-    const config = context.configShown === null ? '' : ` --config ${esc(context.configShown)}`;
-    const file = esc(context.baselineFile ?? report.gate?.baselineFile ?? report.baseline?.file ?? 'the baseline file');
-    const written = context.baseline;
-    if (written !== null && 'file' in written) {
-        out.push(`Baseline written: ${esc(written.file)}, width ${written.width}, ${written.historyEntries} history entr${written.historyEntries === 1 ? 'y' : 'ies'}. Commit it to make it the baseline.`);
-    }
-    else if (written !== null) {
-        out.push(`Baseline not written: ${esc(written.notWritten, 400)}.`);
-    }
-    else if (report.width !== null && report.verdict !== 'inconclusive' && !baselineIsCurrent(report)) {
-        const command = code(`neuron-budget baseline${config}`);
-        const action = code('update-baseline: true');
-        const lead = report.verdict === 'new'
-            ? 'To record this result as the baseline'
-            : 'If this change is intended, accept it as the new baseline';
-        out.push(context.surface === 'action'
-            ? `${lead}: run the action with ${action}, or run ${command} and commit ${file}.`
-            : `${lead}: run ${command} and commit ${file}.`);
-    }
-    const budget = report.gate?.maxWidth ?? null;
-    if (budget !== null && report.width !== null && report.width > budget) {
-        out.push(`A new baseline does not lift the device budget: this check fails until the width fits it or ${code('gate.max-width')} is raised.`);
-    }
-    return out;
-}
-const SIGN_OFF = 'A passing gate is not a safety sign-off for a device.';
-function capitalise(s) {
-    return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
-}
-
-;// CONCATENATED MODULE: ./src/report/charts.ts
-/**
- * The two charts, one per question, as chart specs with the sentence that reads them.
- *
- * Metric by width: one chart holds the baseline and this change, each width a pair of
- * categories ("b7" the baseline, "7" this change), because Mermaid draws two bar series at the
- * same place over each other. A side that did not decide a width has a bar of the axis minimum
- * there, i.e. none. The bar is the `required`-th best judged metric, so a bar reaches the
- * threshold line exactly when the width is adequate (recall floors aside). A category without
- * bars at each end (the widths just outside the range shown; the first is blank when that would be
- * 0) carries the threshold line past the outer bars, so it shows even with one width. Mermaid's
- * band axis merges equal labels, so every category is distinct.
- */
-
-
-
-
-
-/** Most widths the metric chart shows; longer curves keep the widest (where the answer lies). */
-const CHART_MAX_WIDTHS = 15;
-/** Most baselines the drift chart shows. */
-const DRIFT_MAX_POINTS = 30;
-function metricChart(view, report) {
-    const required = report.search?.required ?? 1;
-    const rows = view.rows.slice(-CHART_MAX_WIDTHS);
-    const pairs = view.baseline !== null;
-    const now = rows.map((r) => r.current?.decisive ?? null);
-    const base = rows.map((r) => (r.baseline ? baselineDecisive(r.baseline, required) : null));
-    const values = [...now, ...base].filter((v) => v !== null && Number.isFinite(v));
-    if (values.length === 0)
-        return null;
-    const accuracy = higherIsBetter(view.metricName);
-    const range = metricRange(values, view.threshold, accuracy);
-    // Mermaid draws a bar of the axis minimum as a stub a few pixels high; one below it draws nothing.
-    const floor = range[0] - (range[1] - range[0]);
-    const first = rows[0].width - 1;
-    const categories = [first > 0 ? String(first) : ' '];
-    const nowBars = [floor];
-    const baseBars = [floor];
-    rows.forEach((r, i) => {
-        if (pairs) {
-            categories.push(`b${r.width}${r.width === view.baseline?.width ? ' min' : ''}`);
-            baseBars.push(base[i] ?? floor);
-            nowBars.push(floor);
-        }
-        categories.push(`${r.width}${r.width === view.current.width ? ' min' : ''}`);
-        nowBars.push(now[i] ?? floor);
-        baseBars.push(floor);
-    });
-    categories.push(String(rows[rows.length - 1].width + 1));
-    nowBars.push(floor);
-    baseBars.push(floor);
-    const which = nthBest(required);
-    const side = accuracy ? 'at or above' : 'at or below';
-    const legend = [
-        `Bars: the ${which} ${view.metricName} of the networks at each width, so a bar ${side} the line means the width is adequate (${required} network${required === 1 ? '' : 's'} met the target).`,
-        pairs ? 'Each width has two places: grey "b" and the width is the baseline, blue the width alone this change.' : '',
-        `"min" marks the smallest adequate width${pairs ? ' of each' : ''}. Red line: the threshold ${formatMetric(view.threshold)}.`,
-        `The y-axis runs from ${formatMetric(range[0])} to ${formatMetric(range[1])}${range[0] === 0 ? '' : ', not from 0'}; the numbers are in the table.`,
-    ]
-        .filter((s) => s !== '')
-        .join(' ');
-    return {
-        spec: {
-            title: `${view.metricName} by hidden neurons`,
-            xTitle: 'hidden neurons',
-            categories,
-            yTitle: view.metricName,
-            yRange: range,
-            series: [
-                ...(pairs ? [{ kind: 'bar', values: baseBars, color: CHART_COLORS.baseline }] : []),
-                { kind: 'bar', values: nowBars, color: CHART_COLORS.current },
-                { kind: 'line', values: categories.map(() => view.threshold), color: CHART_COLORS.limit },
-            ],
-        },
-        legend,
-        widths: rows.map((r) => r.width),
-    };
-}
-/** Capacity drift: the width of each accepted baseline, then this change, against the neuron budget. */
-function driftChart(view, budget) {
-    if (view.history.length === 0)
-        return null;
-    const history = view.history.slice(-DRIFT_MAX_POINTS);
-    const first = view.history.length - history.length;
-    // A blank first and a "later" last category carry the budget line past the outer bars.
-    const categories = [' ', ...history.map((_, i) => String(first + i + 1))];
-    const widths = [0, ...history.map((h) => h.width)];
-    if (view.current.width !== null) {
-        categories.push('now');
-        widths.push(view.current.width);
-    }
-    categories.push('later');
-    widths.push(0);
-    const legend = `Bars: the smallest adequate width of each accepted baseline, oldest first (numbered as in the history table)${view.current.width !== null ? ', then this change' : ''}.` +
-        (budget === null
-            ? ' No neuron budget is set (gate.max-width).'
-            : ` Red line: the device budget of ${budget} hidden neurons.`);
-    return {
-        spec: {
-            title: 'Smallest adequate width over time',
-            xTitle: 'accepted baseline',
-            categories,
-            yTitle: 'hidden neurons',
-            yRange: countRange(budget === null ? widths : [...widths, budget]),
-            series: [
-                { kind: 'bar', values: widths, color: CHART_COLORS.current },
-                ...(budget === null
-                    ? []
-                    : [{ kind: 'line', values: categories.map(() => budget), color: CHART_COLORS.limit }]),
-            ],
-        },
-        legend,
-        widths: [],
-    };
-}
-
-;// CONCATENATED MODULE: ./src/report/context.ts
-const DEFAULT_CONTEXT = {
-    surface: 'cli',
-    mode: 'check',
-    configShown: null,
-    baselineFile: null,
-    baseline: null,
-};
-
-;// CONCATENATED MODULE: ./src/report/evidence.ts
-/**
- * The comment's evidence, collapsed under the three answers: the per-width ladder, per-class
- * figures, the baseline history, the pruning steps and every data change (Markdown tables).
- */
-
-
-
-
-function collapsible(summary, body) {
-    // The blank line after </summary> lets GitHub render the Markdown inside.
-    return `<details><summary>${summary}</summary>\n\n${body}\n\n</details>`;
-}
-function num(v) {
-    return v === null || v === undefined || !Number.isFinite(v) ? '—' : formatMetric(v);
-}
-/** "4 of 10 + 1 pruned": networks that met the target, by source. */
-function metCell(w) {
-    const fresh = `${w.metBy.fresh} of ${w.restarts}`;
-    return w.metBy.pruned > 0 ? `${fresh} + ${w.metBy.pruned} pruned` : fresh;
-}
-function ladderSection(view, report, limits, mustShow) {
-    const required = report.search?.required ?? 1;
-    const which = nthBest(required);
-    const hasBaseline = view.baseline !== null;
-    const header = [
-        'Width',
-        'Met the target',
-        `${capitalise(which)}`,
-        'Best',
-        'Adequate',
-        ...(hasBaseline ? ['Baseline: met', `Baseline: ${which}`] : []),
-    ];
-    const keep = pickRows(view.rows, limits.widthRows, (r) => mustShow.has(r.width) || r.width === view.current.width);
-    const lines = keep.kept.map((r) => {
-        const c = r.current;
-        const marked = r.width === view.current.width || r.width === view.baseline?.width;
-        const cells = [
-            marked ? `**${r.width}**` : String(r.width),
-            c ? metCell(c) : 'not decided',
-            num(c?.decisive),
-            num(c?.best),
-            c ? (c.adequate ? 'yes' : 'no') : '—',
-        ];
-        if (hasBaseline)
-            cells.push(r.baseline ? String(r.baseline.met) : '—', num(r.baseline ? baselineDecisive(r.baseline, required) : null));
-        return `| ${cells.join(' | ')} |`;
-    });
-    const align = header.map((_, i) => (i === 1 ? ':--' : '--:'));
-    const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
-    const bold = view.current.width !== null || view.baseline?.width != null
-        ? ' Bold: the smallest adequate width of this change and of the baseline.'
-        : '';
-    return (`| ${header.join(' | ')} |\n|${align.join('|')}|\n${lines.join('\n')}${omitted}\n\n` +
-        `Met the target: fresh restarts at that width that met it, of those run, plus networks pruned down to it. ` +
-        `A width is adequate when ${required} network${required === 1 ? '' : 's'} of it met the target, so the ${which} figure decides.${bold}` +
-        (searchCostSentence(report) === null ? '' : ` ${searchCostSentence(report)}`));
-}
-function classSection(report) {
-    const d = report.device;
-    if (d === null || d.classes === null)
-        return null;
-    const floors = d.classes.some((c) => c.floor !== null);
-    const head = `| Class | Rows | Recall | Precision${floors ? ' | Recall floor' : ''} |\n|:--|--:|--:|--:|${floors ? '--:|' : ''}`;
-    const lines = d.classes.map((c) => `| ${escapeMarkdown(c.label)} | ${formatCount(c.rows)} | ${num(c.recall)} | ${num(c.precision)}${floors ? ` | ${num(c.floor)}` : ''} |`);
-    const parts = [`In the ${d.precision} form that decides.`, `${head}\n${lines.join('\n')}`];
-    if (d.confusion !== null) {
-        const labels = d.classes.map((c) => escapeMarkdown(c.label, 40));
-        const ch = `| True class ↓ predicted → | ${labels.join(' | ')} |\n|:--|${labels.map(() => '--:').join('|')}|`;
-        const rows = d.confusion.map((row, i) => `| ${labels[i]} | ${row.map((n) => formatCount(n)).join(' | ')} |`);
-        parts.push(`${ch}\n${rows.join('\n')}`);
-    }
-    return parts.join('\n\n');
-}
-function historySection(history, limits) {
-    const start = Math.max(0, history.length - limits.historyRows);
-    const lines = history.slice(start).map((h, i) => {
-        const commit = h.commit === null ? '—' : escapeMarkdown(h.commit.slice(0, 12));
-        return `| ${start + i + 1} | ${escapeMarkdown(h.date.slice(0, 10))} | ${commit} | ${formatCount(h.rows)} | ${h.width} | ${num(h.metric)} |`;
-    });
-    const omitted = start > 0 ? `\n\n_The ${start} oldest entries are left out for length._` : '';
-    return `| # | Date | Commit | Rows | Width | Metric |\n|--:|:--|:--|--:|--:|--:|\n${lines.join('\n')}${omitted}`;
-}
-function pruneSection(report, limits) {
-    const steps = report.search?.pruning ?? [];
-    const summary = pruningSentence(report);
-    if (summary === null)
-        return null;
-    if (limits.pruneRows === 0)
-        return `${summary}\n\n_The steps are left out for length; the JSON report lists them._`;
-    const shown = steps.slice(0, limits.pruneRows);
-    const lines = shown.map((s) => `| ${s.source.width} | ${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back'} |`);
-    const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
-    return (`${summary}\n\n| Grown width | Restart | Width before | Neuron index | Steering before | Steering after | Outcome |\n|--:|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}\n\n` +
-        'Neuron index counts from 0, as in the JSON report and the model file. A neuron is put back when the network without it no longer meets the target on the steering rows.');
-}
-function changesSection(changes, limits) {
-    const items = changeItems(changes, escapeMarkdown).map((i) => i.text);
-    const shown = items.slice(0, limits.changeItems);
-    const omitted = items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
-    return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation or its range widened.`;
-}
-function pickRows(rows, max, must) {
-    if (rows.length <= max)
-        return { kept: rows, omitted: 0 };
-    let room = Math.max(0, max - rows.filter(must).length);
-    const kept = rows.filter((r) => {
-        if (must(r))
-            return true;
-        if (room > 0) {
-            room--;
-            return true;
-        }
-        return false;
-    });
-    return { kept, omitted: rows.length - kept.length };
-}
-
-;// CONCATENATED MODULE: ./src/report/ledger.ts
-
-/** The ledger, or null when there is no width to cost. */
-function ledgerOf(report) {
-    // A network's cost depends on its width alone (for these inputs and outputs): the width's entry holds it.
-    const costAt = (width) => report.search?.widths.find((w) => w.width === width)?.cost ?? null;
-    if (report.width === null)
-        return null;
-    const c = report.device?.cost ?? costAt(report.width);
-    if (c === null)
-        return null;
-    const p = report.device?.precision ?? 'float32';
-    const other = p === 'int8' ? 'float32' : 'int8';
-    const g = report.gate ?? null;
-    const baselineWidth = report.baseline?.width ?? null;
-    const base = baselineWidth === null ? null : costAt(baselineWidth);
-    return {
-        precision: p,
-        baselineWidth,
-        rows: [
-            { label: 'hidden neurons', unit: '', now: report.width, budget: g?.maxWidth ?? null, atBaseline: baselineWidth },
-            {
-                label: `flash, ${p}`,
-                unit: ' B',
-                now: c.flashBytes[p],
-                budget: g?.maxFlashBytes ?? null,
-                atBaseline: base?.flashBytes[p] ?? null,
-            },
-            {
-                label: `flash, ${other}`,
-                unit: ' B',
-                now: c.flashBytes[other],
-                budget: null,
-                atBaseline: base?.flashBytes[other] ?? null,
-            },
-            {
-                label: `RAM, ${p}`,
-                unit: ' B',
-                now: c.ramBytes[p],
-                budget: g?.maxRamBytes ?? null,
-                atBaseline: base?.ramBytes[p] ?? null,
-            },
-            {
-                label: `RAM, ${other}`,
-                unit: ' B',
-                now: c.ramBytes[other],
-                budget: null,
-                atBaseline: base?.ramBytes[other] ?? null,
-            },
-            {
-                label: 'multiply-accumulates',
-                unit: '',
-                now: c.macs,
-                budget: g?.maxMacs ?? null,
-                atBaseline: base?.macs ?? null,
-            },
-        ],
-    };
-}
-function amount(n, unit) {
-    return `${formatCount(n)}${unit}`;
-}
-/** "5 (over by 2)" / "600 B (fits, 77 B spare)" / "none set". */
-function budgetCell(row) {
-    if (row.budget === null)
-        return 'none set';
-    const gap = row.now - row.budget;
-    return gap > 0
-        ? `${amount(row.budget, row.unit)} (over by ${amount(gap, row.unit)})`
-        : `${amount(row.budget, row.unit)} (fits, ${amount(-gap, row.unit)} spare)`;
-}
-/** The second answer: does the width found fit the device? */
-function fitsSentence(ledger) {
-    if (ledger === null)
-        return 'Nothing to cost: no width is adequate.';
-    const budgeted = ledger.rows.filter((r) => r.budget !== null);
-    if (budgeted.length === 0) {
-        return 'No device budget is set, so nothing is gated; the ledger shows what the network costs. Set gate.max-width, gate.max-flash-bytes, gate.max-ram-bytes or gate.max-macs to gate on it.';
-    }
-    const over = budgeted.filter((r) => r.now > r.budget);
-    if (over.length > 0)
-        return `No: ${over.map((r) => `${excess(r)} over the budget of ${amount(r.budget, r.unit)}`).join('; ')}.`;
-    return `Yes, within every budget set: ${budgeted.map((r) => `${r.label} ${amount(r.now, r.unit)} of ${amount(r.budget, r.unit)}`).join(', ')}.`;
-}
-/** "2 hidden neurons" / "123 B of flash, int8" / "12 multiply-accumulates". */
-function excess(r) {
-    const gap = r.now - r.budget;
-    if (r.label === 'hidden neurons')
-        return neurons(gap);
-    return r.unit === '' ? `${formatCount(gap)} ${r.label}` : `${amount(gap, r.unit)} of ${r.label}`;
-}
-
-;// CONCATENATED MODULE: ./src/report/markdown.ts
-/**
- * The pull-request comment and job summary (GitHub-flavoured Markdown), laid out around the
- * reviewer's three questions: how many neurons does the data need now, does that fit the
- * device, and why did it change. The verdict and the three answers come first; the evidence
- * (metric by width, per class, capacity drift, pruning, every data change) follows collapsed.
- * Every string from the repository passes through escapeMarkdown. When the comment would
- * exceed the limit, only the evidence is shortened.
- */
-
-
-
-
-
-
-
-
-
-/** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
-const COMMENT_LIMIT = 65_000;
-const DETAIL_LEVELS = [
-    { widthRows: Infinity, historyRows: Infinity, pruneRows: Infinity, changeItems: Infinity },
-    { widthRows: 200, historyRows: 100, pruneRows: 60, changeItems: 100 },
-    { widthRows: 80, historyRows: 40, pruneRows: 20, changeItems: 40 },
-    { widthRows: 0, historyRows: 12, pruneRows: 0, changeItems: 12 },
-];
-const code = (s) => `\`${s}\``;
-function renderMarkdown(report, options = {}) {
-    const limit = options.limit ?? COMMENT_LIMIT;
-    const context = options.context ?? DEFAULT_CONTEXT;
-    const view = viewOf(report);
-    const head = [headline(view), answers(view, report)].join('\n\n');
-    const foot = footer(report, context);
-    for (const level of DETAIL_LEVELS) {
-        const body = [head, evidence(view, report, level), foot].filter((s) => s !== '').join('\n\n');
-        if (body.length + 1 <= limit)
-            return `${body}\n`;
-    }
-    const note = "_The evidence was left out to keep this comment within GitHub's size limit; the JSON report has it all._";
-    return `${[head, note, foot].join('\n\n')}\n`;
-}
-function headline(view) {
-    const lines = [`### neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${escapeMarkdown(view.headline, MAX_MESSAGE)}`];
-    if (view.otherReasons.length > 0) {
-        lines.push('');
-        for (const r of view.otherReasons)
-            lines.push(`- ${escapeMarkdown(r, MAX_MESSAGE)}`);
-    }
-    return lines.join('\n');
-}
-/** The three answers, each led by its question's word in bold. */
-function answers(view, report) {
-    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
-    const ledger = ledgerOf(report);
-    const parts = [
-        `**Needs:** ${escapeMarkdown(needs.join(' '), 2 * MAX_MESSAGE)}`,
-        `**Fits the device:** ${escapeMarkdown(fitsSentence(ledger), MAX_MESSAGE)}`,
-    ];
-    if (ledger !== null)
-        parts.push(ledgerTable(ledger));
-    parts.push(`**Why it changed:** ${whySentence(report, escapeMarkdown)}`);
-    return parts.join('\n\n');
-}
-function ledgerTable(ledger) {
-    const base = ledger.baselineWidth;
-    const head = base === null
-        ? '| On the device | Needs now | Budget |\n|:--|--:|--:|'
-        : `| On the device | Needs now | Budget | At the baseline's ${base} |\n|:--|--:|--:|--:|`;
-    const lines = ledger.rows.map((r) => {
-        const cells = [r.label, `**${amount(r.now, r.unit)}**`, budgetCell(r)];
-        if (base !== null)
-            cells.push(r.atBaseline === null ? '—' : amount(r.atBaseline, r.unit));
-        return `| ${cells.join(' | ')} |`;
-    });
-    return `${head}\n${lines.join('\n')}`;
-}
-function evidence(view, report, limits) {
-    const blocks = [];
-    const metric = metricChart(view, report);
-    if (view.rows.length > 0) {
-        const chart = metric === null ? '' : `${metric.legend}\n\n${renderChart(metric.spec)}\n\n`;
-        blocks.push(collapsible(`Per width: ${escapeMarkdown(view.metricName)} of the ${view.rows.length} width${view.rows.length === 1 ? '' : 's'} decided`, `${chart}${ladderSection(view, report, limits, new Set(metric?.widths ?? []))}`));
-    }
-    const classes = classSection(report);
-    if (classes !== null)
-        blocks.push(collapsible('Per class, on the rows that judged the witness', classes));
-    const drift = driftChart(view, report.gate?.maxWidth ?? null);
-    if (drift !== null) {
-        blocks.push(collapsible(`Capacity drift: ${view.history.length} accepted baseline${view.history.length === 1 ? '' : 's'}`, `${drift.legend}\n\n${renderChart(drift.spec)}\n\n${historySection(view.history, limits)}`));
-    }
-    const pruning = pruneSection(report, limits);
-    if (pruning !== null)
-        blocks.push(collapsible(`Pruning: ${report.search.pruning.length} removals tried`, pruning));
-    if (report.changes)
-        blocks.push(collapsible('Every data change since the baseline', changesSection(report.changes, limits)));
-    return blocks.join('\n\n');
-}
-function footer(report, context) {
-    const lines = hints(report, context, escapeMarkdown, code);
-    const sign = `_neuron-budget ${escapeMarkdown(report.tool.version)} measures how many hidden neurons this data needs. ${SIGN_OFF}_`;
-    return ['---', ...lines, sign].join('\n\n');
-}
-
-;// CONCATENATED MODULE: ./src/report/text.ts
-/**
- * The terminal report: the same answers and words as the comment, plain text, at most 80 columns
- * (a long repository name may run over; each is clipped at 200 characters).
- */
-
-
-
-
-
-
-
-const TEXT_WIDTH = 80;
-function renderText(report, context = DEFAULT_CONTEXT) {
-    const view = viewOf(report);
-    const out = [];
-    // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
-    out.push(...text_wrap(`neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${escapeText(view.headline, MAX_MESSAGE)}`, ''));
-    for (const r of view.otherReasons)
-        out.push(...text_wrap(escapeText(r, MAX_MESSAGE), '  - ', '    '));
-    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
-    out.push('', ...text_wrap(`Needs: ${needs.join(' ')}`, '', '  '));
-    const ledger = ledgerOf(report);
-    out.push('', ...text_wrap(`Fits the device: ${fitsSentence(ledger)}`, '', '  '));
-    if (ledger !== null)
-        out.push(...ledgerLines(ledger));
-    out.push('', ...text_wrap(`Why it changed: ${whySentence(report, escapeText)}`, '', '  '));
-    if (view.rows.length > 0)
-        out.push('', ...ladderLines(view, report));
-    if (view.history.length > 0) {
-        out.push('');
-        out.push(`capacity drift (accepted baselines, oldest first${view.current.width !== null ? ', then now' : ''}):`);
-        const widths = view.history.slice(-20).map((h) => String(h.width));
-        if (view.current.width !== null)
-            widths.push(`now ${view.current.width}`);
-        const budget = report.gate?.maxWidth ?? null;
-        out.push(...text_wrap(`width ${widths.join(' -> ')}${budget === null ? '' : ` (budget ${budget})`}`, '  ', '  '));
-    }
-    const pruning = pruningSentence(report);
-    if (pruning !== null)
-        out.push('', ...text_wrap(`pruning: ${pruning[0].toLowerCase()}${pruning.slice(1)}`, '', '  '));
-    if (report.changes) {
-        out.push('', 'data changes since the baseline:');
-        for (const item of changeItems(report.changes, escapeText))
-            out.push(...text_wrap(item.text, '  - ', '    '));
-    }
-    out.push('');
-    for (const line of hints(report, context, escapeText, (s) => s))
-        out.push(...text_wrap(line, ''));
-    out.push(...text_wrap(SIGN_OFF, ''));
-    return `${out.join('\n')}\n`;
-}
-function ledgerLines(ledger) {
-    const base = ledger.baselineWidth;
-    const head = ['on the device', 'needs now', 'budget', ...(base === null ? [] : [`at baseline's ${base}`])];
-    const rows = ledger.rows.map((r) => [
-        r.label,
-        amount(r.now, r.unit),
-        budgetCell(r),
-        ...(base === null ? [] : [r.atBaseline === null ? '-' : amount(r.atBaseline, r.unit)]),
-    ]);
-    const widths = [22, 11, 20, 18];
-    return [head, ...rows].map((cells) => `  ${cells.map((c, i) => (i === 0 ? c.padEnd(widths[0]) : c.padStart(widths[i]))).join('')}`.trimEnd());
-}
-function ladderLines(view, report) {
-    const required = report.search?.required ?? 1;
-    const b = view.baseline;
-    const out = [`${view.metricName} by width (met: networks that met the target; ${nthBest(required)} decides)`];
-    const head = ['width', 'met', nthBest(required), 'best', 'adequate', ...(b ? ['baseline met'] : [])];
-    const widths = [7, 16, 11, 10, 10, 14];
-    const line = (cells) => cells
-        .map((c, i) => c.padStart(widths[i]))
-        .join('')
-        .trimEnd();
-    out.push(line(head));
-    for (const r of view.rows) {
-        const c = r.current;
-        const marked = r.width === view.current.width ? '>' : ' ';
-        out.push(line([
-            `${marked}${r.width}`,
-            c ? `${c.metBy.fresh} of ${c.restarts}${c.metBy.pruned > 0 ? ` +${c.metBy.pruned}p` : ''}` : 'not decided',
-            fmt(c?.decisive),
-            fmt(c?.best),
-            c ? (c.adequate ? 'yes' : 'no') : '-',
-            ...(b ? [r.baseline ? String(r.baseline.met) : '-'] : []),
-        ]));
-    }
-    const notes = [`threshold ${formatMetric(view.threshold)}`];
-    if (view.current.width !== null)
-        notes.unshift("> marks this change's smallest adequate width");
-    if (view.rows.some((r) => (r.current?.metBy.pruned ?? 0) > 0))
-        notes.push('+Np: N networks pruned down to it');
-    out.push(...text_wrap(`(${notes.join('; ')})`, '  ', '  '));
-    const cost = searchCostSentence(report);
-    if (cost !== null)
-        out.push(...text_wrap(cost, '  ', '  '));
-    return out;
-}
-/** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
-function text_wrap(text, first, rest = first) {
-    const words = text.split(/ +/).filter((w) => w !== '');
-    const lines = [];
-    let line = first;
-    let empty = true;
-    for (const w of words) {
-        if (!empty && line.length + 1 + w.length > TEXT_WIDTH) {
-            lines.push(line);
-            line = rest + w;
-        }
-        else {
-            line += (empty ? '' : ' ') + w;
-        }
-        empty = false;
-    }
-    lines.push(line);
-    return lines;
-}
-function fmt(v) {
-    return v === null || v === undefined || !Number.isFinite(v) ? '-' : formatMetric(v);
-}
-
-;// CONCATENATED MODULE: ./src/report/json.ts
-function withGate(report, outcome, gate) {
-    const b = outcome.baseline;
-    return {
-        ...report,
-        verdict: outcome.verdict,
-        reasons: [...outcome.reasons],
-        baseline: b
-            ? {
-                width: b.result.width,
-                metric: b.result.metric.value,
-                file: gate.baselineAsWritten,
-                met: b.result.met,
-                restarts: b.result.restarts,
-                rows: b.data.rows,
-                searchSeconds: b.result.searchSeconds,
-                toolVersion: b.tool.version,
-                sameSettings: outcome.settingsChanged.length === 0,
-                settingsChanged: [...outcome.settingsChanged],
-                widths: b.widths.map((w) => ({ ...w })),
-                history: b.history.map((h) => ({ ...h })),
-            }
-            : null,
-        gate: {
-            maxWidth: gate.maxWidth,
-            maxFlashBytes: gate.maxFlashBytes,
-            maxRamBytes: gate.maxRamBytes,
-            maxMacs: gate.maxMacs,
-            allowedGrowth: gate.allowedGrowth,
-            metricTolerance: gate.metricTolerance,
-            baselineFile: gate.baselineAsWritten,
-        },
-        changes: outcome.changes,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/report/index.ts
-/** Rendering a report: pull-request comment / job summary, terminal text, JSON. */
-
-
-
-
 
 ;// CONCATENATED MODULE: external "node:perf_hooks"
 const external_node_perf_hooks_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:perf_hooks");
@@ -21213,6 +21306,7 @@ function tally_witnessOf(c, seed) {
 
 
 
+
 function growthPlan(search) {
     return {
         growth: search.growth,
@@ -21297,7 +21391,14 @@ async function grow(ctx, executor, target, progress) {
         results.set(done.key, done.r);
         if (Number.isFinite(done.r.judged) && (best === null || isBetter(target.metric, done.r.judged, best)))
             best = done.r.judged;
-        progress({ phase: 'growth', width: done.r.finalWidth, restart: done.r.restart, epoch: done.r.epochs, best });
+        progress({
+            phase: 'growth',
+            kind: 'done',
+            width: done.r.finalWidth,
+            restart: done.r.restart,
+            epoch: done.r.epochs,
+            best,
+        });
     }
 }
 /** Every network that met the target at the grown width or below, once each, in (width, restart) order. */
@@ -21332,12 +21433,13 @@ async function runSearch(data, search, target, options = {}) {
     const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
     const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
     try {
+        progress({ phase: 'growth', kind: 'start', width: plan.minWidth, restart: 0, epoch: 0, best: null });
         const grown = await grow(ctx, executor, target, progress);
         const growthEnd = now();
         const timing = (end) => ({
-            searchSeconds: (end - t0) / 1000,
-            growthSeconds: (growthEnd - t0) / 1000,
-            pruneSeconds: (end - growthEnd) / 1000,
+            searchSeconds: secondsFromMs(end - t0),
+            growthSeconds: secondsFromMs(growthEnd - t0),
+            pruneSeconds: secondsFromMs(end - growthEnd),
         });
         const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
         const decision = grown.decision;
@@ -21366,10 +21468,21 @@ async function runSearch(data, search, target, options = {}) {
         }
         // Prune phase: shrink every network that met the target at the grown width or below.
         const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+        if (jobs.length > 0) {
+            const from = Math.max(...jobs.map((j) => j.source.width));
+            progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
+        }
         const pruned = await Promise.all(jobs.map(async (job) => {
             const r = await executor.prune(job);
             const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
-            progress({ phase: 'prune', width: last, restart: job.source.restart, epoch: r.steps.length, best: null });
+            progress({
+                phase: 'prune',
+                kind: 'done',
+                width: last,
+                restart: job.source.restart,
+                epoch: r.steps.length,
+                best: null,
+            });
             return r;
         }));
         const trainings = decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0);
@@ -21477,6 +21590,7 @@ function runSearchWorker() {
 
 
 
+
 async function runJob(options) {
     const timing = {};
     const loaded = await loadConfig(options.configPath, options.root);
@@ -21516,8 +21630,6 @@ async function runJob(options) {
         date: new Date(),
         toolVersion: TOOL_VERSION,
     });
-    if (gate.notWritten !== null)
-        options.log?.(`baseline not written: ${gate.notWritten}`);
     const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
         encoding: data.dataset.encoding,
         target: config.target,
@@ -21549,15 +21661,7 @@ async function runJob(options) {
         mode: options.mode,
         configShown: options.configShown ?? null,
         baselineFile: displayPath(loaded.root, baselinePath),
-        baseline: options.mode === 'check'
-            ? null
-            : gate.written !== null && report.width !== null
-                ? {
-                    file: displayPath(loaded.root, baselinePath),
-                    width: report.width,
-                    historyEntries: gate.historyEntries ?? 1,
-                }
-                : { notWritten: gate.notWritten ?? 'no width reached the target' },
+        baseline: gate.record,
     };
     return {
         report,
@@ -21565,6 +21669,7 @@ async function runJob(options) {
         markdown: renderMarkdown(report, { context }),
         text: renderText(report, context),
         baselineWritten: gate.written,
+        baselineRecord: gate.record,
         modelWritten,
         exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
     };
@@ -21575,7 +21680,7 @@ async function timed(timing, name, work) {
         return await work();
     }
     finally {
-        timing[name] = Math.round(performance.now() - start) / 1000;
+        timing[name] = secondsFromMs(performance.now() - start);
     }
 }
 
@@ -21584,12 +21689,14 @@ async function timed(timing, name, work) {
  * The `neuron-budget` command line: parses argv, runs the main job, prints to stderr,
  * and turns the outcome into an exit code (0 pass/improved/new, 1 fail/inconclusive,
  * 2 bad input or usage, 3 internal error). stdout carries only what was asked for
- * (--help, --version), so it stays clean for scripts.
+ * (--help, --version, `baseline`'s one line saying whether the file was written, `predict`'s
+ * rows), so it stays clean for scripts.
  *
  * The workspace root is the current working directory: paths inside the config file
  * must stay inside it. Paths given as flags are the user's own choice and resolve
  * against the current directory.
  */
+
 
 
 
@@ -21653,6 +21760,9 @@ async function main(argv) {
             progress.done();
         }
         err.write(`${escapeLines(result.text)}\n`);
+        // What `baseline` was asked for: whether the file was written, on stdout for scripts.
+        if (result.baselineRecord)
+            process.stdout.write(`${escapeLines(baselineRecordLine(result.baselineRecord))}\n`);
         return result.exitCode;
     }
     catch (error) {

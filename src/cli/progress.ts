@@ -1,5 +1,6 @@
 /** Search progress on stderr: one line redrawn in place on a terminal; elsewhere a plain line every few seconds. */
-import { throttledProgress } from '../report/progress.js';
+import { formatMetric } from '../common/format.js';
+import { progressLine, throttledProgress } from '../report/progress.js';
 import type { ProgressEvent } from '../search/types.js';
 
 export function progressPrinter(stream: NodeJS.WriteStream): {
@@ -18,8 +19,12 @@ export function progressPrinter(stream: NodeJS.WriteStream): {
       const now = performance.now();
       if (now - last < 100) return; // display only: at most ten redraws a second
       last = now;
-      const best = e.best === null ? '' : ` · best ${e.best.toFixed(4)}`;
-      stream.write(`\r\x1b[2K${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`);
+      const best = e.best === null ? '' : ` · best ${formatMetric(e.best)}`;
+      const line =
+        e.kind === 'start'
+          ? progressLine(e)
+          : `${e.phase} · width ${e.width} · restart ${e.restart + 1} · epoch ${e.epoch}${best}`;
+      stream.write(`\r\x1b[2K${line}`);
       drawn = true;
     },
     done: () => {

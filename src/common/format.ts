@@ -29,6 +29,14 @@ export function formatDelta(n: number): string {
   return '0';
 }
 
+/**
+ * A measured duration as every file holds it: seconds, rounded to whole milliseconds (a clock
+ * reading's last digits are noise, and 0.06729538599999978 reads as a bug).
+ */
+export function secondsFromMs(ms: number): number {
+  return Math.round(ms) / 1000;
+}
+
 export function formatSeconds(seconds: number | null | undefined): string {
   if (seconds === null || seconds === undefined || !Number.isFinite(seconds)) return '—';
   if (seconds < 10) return `${seconds.toFixed(2)} s`;

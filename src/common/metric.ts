@@ -6,6 +6,12 @@
 export type Task = 'classification' | 'regression';
 export type MetricName = 'accuracy' | 'rmse' | 'mae' | 'max-abs-error';
 
+/**
+ * With data.task auto, a numeric target with at most this many distinct values is read as class
+ * labels (0/1/2), any other numeric target as a measurement (a rule of thumb, no source).
+ */
+export const AUTO_MAX_CLASSES = 10;
+
 const ERROR_METRICS: readonly MetricName[] = ['rmse', 'mae', 'max-abs-error'];
 
 /** A metric and the threshold a network must reach. */

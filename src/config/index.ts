@@ -8,7 +8,7 @@ import { resolve } from 'node:path';
 import { quote } from '../common/escape.js';
 import { UserError } from '../common/errors.js';
 import { formatCount } from '../common/format.js';
-import { defaultMetric, metricFitsTask, type Task } from '../common/metric.js';
+import { AUTO_MAX_CLASSES, defaultMetric, metricFitsTask, type Task } from '../common/metric.js';
 import { displayPath } from '../common/paths.js';
 import { didYouMean } from '../common/suggest.js';
 import { buildConfig } from './build.js';
@@ -75,7 +75,7 @@ export function configKeyError(config: Config, key: string, detail: string): Use
  * which depend on the task and the class labels found.
  */
 export function settleTarget(config: Config, task: Task, classes: string[] | null): Config {
-  const settled = settleMetric(config, task);
+  const settled = settleMetric(config, task, classes);
   return { ...settled, target: { ...settled.target, recallFloors: recallFloors(settled, task, classes) } };
 }
 
@@ -108,9 +108,10 @@ function recallFloors(config: Config, task: Task, classes: string[] | null): num
 
 /**
  * With data.task auto the task is only known after reading: the metric follows it unless the
- * config names one, and a named metric must suit it.
+ * config names one, and a named metric must suit it. A threshold or tolerance that cannot be an
+ * accuracy is refused here, once the task is known, saying what to write either way.
  */
-function settleMetric(config: Config, task: Task): Config {
+function settleMetric(config: Config, task: Task, classes: string[] | null): Config {
   const target = config.target;
   if (!config.metricGiven) {
     const metric = defaultMetric(task);
@@ -118,14 +119,14 @@ function settleMetric(config: Config, task: Task): Config {
       throw configKeyError(
         config,
         'target.threshold',
-        `the target column ${quote(config.data.target)} was read as classification, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold} (write 95% as 0.95; or set data.task: regression and a target.metric)`,
+        `${readAsClassification(config, classes)}, so the threshold is an accuracy: expected above 0 and at most 1, found ${target.threshold}; ${whatToWrite(config, classes, 'write the accuracy as a fraction (95% as 0.95)')}`,
       );
     }
     if (metric === 'accuracy' && config.gate.metricTolerance >= 1) {
       throw configKeyError(
         config,
         'gate.metric-tolerance',
-        `the target column ${quote(config.data.target)} was read as classification, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}`,
+        `${readAsClassification(config, classes)}, so the tolerance is an accuracy difference: expected below 1, found ${config.gate.metricTolerance}; ${whatToWrite(config, classes, 'write the tolerance as a fraction (2 points as 0.02)')}`,
       );
     }
     return { ...config, target: { ...target, metric } };
@@ -140,4 +141,23 @@ function settleMetric(config: Config, task: Task): Config {
     'target.metric',
     `the target column ${quote(config.data.target)} was read as ${task}, which cannot be judged by ${target.metric}; ${hint}`,
   );
+}
+
+/** Whether a class target's labels are all numbers (data.task auto read a numeric column with few values as classes). */
+function numericLabels(classes: string[] | null): boolean {
+  return classes !== null && classes.every((c) => c.trim() !== '' && Number.isFinite(Number(c)));
+}
+
+/** "the target column "x" was read as classification (…why…)". */
+function readAsClassification(config: Config, classes: string[] | null): string {
+  const why = numericLabels(classes)
+    ? `it holds only ${classes!.length} distinct numbers, and data.task auto reads at most ${AUTO_MAX_CLASSES} as class labels`
+    : 'it holds text';
+  return `the target column ${quote(config.data.target)} was read as classification (${why})`;
+}
+
+/** What to write: a few distinct numbers may be a measurement (then regression, and rmse follows); text is classes. */
+function whatToWrite(config: Config, classes: string[] | null, asAccuracy: string): string {
+  if (!numericLabels(classes)) return asAccuracy;
+  return `if ${quote(config.data.target)} is a measurement, write "task: regression" under data (the metric is then rmse, in the column's units); if it holds classes, ${asAccuracy}`;
 }

@@ -4,6 +4,8 @@
  * so the two cannot drift apart.
  */
 
+import { AUTO_MAX_CLASSES } from '../common/metric.js';
+
 /** Marks a key the user must give. */
 export const REQUIRED = Symbol('required');
 /** Marks a key whose default depends on another key (the description says how). */
@@ -92,7 +94,7 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         changesResult: true,
         rule: { kind: 'enum', values: ['auto', 'classification', 'regression'] },
         default: 'auto',
-        description: 'auto: decided from the target column (text or few distinct values: classification).',
+        description: `auto: decided from the target column: text, or numbers with at most ${AUTO_MAX_CLASSES} distinct values, is classification; other numbers are regression.`,
       },
       {
         name: 'validation',
@@ -144,7 +146,7 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         rule: { kind: 'enum', values: ['accuracy', 'rmse', 'mae', 'max-abs-error'] },
         default: DERIVED,
         description:
-          'accuracy for classification; rmse, mae or max-abs-error for regression. Default: rmse when data.task is regression, else accuracy.',
+          'accuracy for classification; rmse, mae or max-abs-error for regression. Default: follows the task, accuracy for classification and rmse for regression (with data.task auto, the task found in the data).',
       },
       {
         name: 'threshold',
@@ -152,7 +154,7 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         rule: { kind: 'number', min: 0, max: Number.MAX_VALUE, exclusiveMin: true },
         default: REQUIRED,
         description:
-          "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units.",
+          "accuracy: at least this (above 0, at most 1); error metrics: at most this, in the target column's units. Checked against the metric in effect: with data.task auto and no target.metric, once the data show the task.",
       },
       {
         name: 'precision',

@@ -10,7 +10,7 @@ import type { Config } from '../config/types.js';
 import { chooseColumns, featureColumn } from './columns.js';
 import { encodeDataset } from './encode.js';
 import { fingerprint } from './fingerprint.js';
-import { profileData } from './profile.js';
+import { profileData, targetSpread } from './profile.js';
 import { readCsvColumns } from './read-csv.js';
 import { splitRows } from './split.js';
 import { targetColumn } from './target.js';
@@ -62,6 +62,7 @@ async function load(config: Config): Promise<LoadedData> {
     droppedRows: table.droppedRows,
     fingerprint: fingerprint(typed, target, table.rows),
     profile: profileData(typed, target, table.columns, table.rows),
+    targetSpread: targetSpread(target),
     splitRows: split,
     judgingFolded: split.judgingFolded,
   };

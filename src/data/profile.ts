@@ -5,7 +5,7 @@
  * they are null-prototype objects: a label such as `__proto__` or `constructor` is then an
  * ordinary key, never the object's prototype or an inherited method.
  */
-import type { CategoricalProfile, DataProfile, NumericProfile } from './types.js';
+import type { CategoricalProfile, DataProfile, NumericProfile, TargetSpread } from './types.js';
 import type { TypedColumn } from './columns.js';
 import type { TargetColumn } from './target.js';
 import type { ColumnStore } from './column-store.js';
@@ -41,6 +41,13 @@ export function profileData(
   ];
   used.sort((a, b) => a.column - b.column);
   return { rows, classes, columns: used.map((c) => c.name), features: profiles };
+}
+
+/** A regression target's mean, standard deviation and range over the rows used; null for classification. */
+export function targetSpread(target: TargetColumn): TargetSpread | null {
+  if (target.task !== 'regression') return null;
+  const { mean, std, min, max } = numericProfile(target.values, 0);
+  return { mean, std, min, max };
 }
 
 function numericProfile(values: Float64Array, missing: number): NumericProfile {

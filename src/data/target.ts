@@ -4,13 +4,11 @@
  * classification too (class labels like 0/1/2); any other numeric target means regression.
  */
 import { quote } from '../common/escape.js';
+import { AUTO_MAX_CLASSES } from '../common/metric.js';
 import type { Config, Task } from '../config/types.js';
 import type { ColumnStore } from './column-store.js';
 import { categoricalColumn, looksNumeric, MAX_CLASSES, numericColumn } from './columns.js';
 import { columnLabel, dataError, shownValue, type DataFile } from './where.js';
-
-/** Distinct numeric values up to which `task: auto` still means classification (a rule of thumb, no source). */
-const AUTO_MAX_CLASSES = 10;
 
 export type TargetColumn =
   | {

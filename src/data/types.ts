@@ -82,6 +82,15 @@ export interface DataProfile {
   features: Record<string, NumericProfile | CategoricalProfile>;
 }
 
+/** The spread of a regression target over the rows used, in its own units: the scale an error threshold is read against. */
+export interface TargetSpread {
+  mean: number;
+  /** Population standard deviation (as the profile's); a network predicting the mean has about this rmse. */
+  std: number;
+  min: number;
+  max: number;
+}
+
 export interface LoadedData {
   dataset: EncodedDataset;
   /** Rows kept after dropping rows with missing values (when allowed). */
@@ -90,6 +99,8 @@ export interface LoadedData {
   /** sha256 hex of the canonical form of the data as used. */
   fingerprint: string;
   profile: DataProfile;
+  /** Regression: the target's spread over every row used (training, validation and judging); null for classification. */
+  targetSpread: TargetSpread | null;
   /**
    * Which kept rows (0-based, file order) went to training and to validation, both
    * ascending; dataset row i of xTrain is kept row train[i].

@@ -3,8 +3,8 @@
  * needs to explain a change of capacity: rows per class, classes, shifted features,
  * columns.
  */
-import type { DataProfile } from '../data/types.js';
-import type { CategoryChange, DataChanges, FeatureShift } from './types.js';
+import type { DataProfile, NumericProfile } from '../data/types.js';
+import type { CategoryChange, DataChanges, FeatureShift, RangeGrowth } from './types.js';
 
 /**
  * A numeric feature counts as shifted when its mean moved by more than this many
@@ -12,6 +12,17 @@ import type { CategoryChange, DataChanges, FeatureShift } from './types.js';
  * for a "medium" shift (common practice, no single source).
  */
 export const MEAN_SHIFT_IN_STD = 0.5;
+
+/**
+ * A numeric feature's range counts as widened when it grew on a side (a new minimum below the
+ * baseline's, or a new maximum above it) by more than this many baseline standard deviations.
+ * A rule of thumb (common practice, no single source): the extremes of a sample wander by chance
+ * as rows are added (for normal data and a thousand rows the sample maximum's spread is about
+ * σ/√(2 ln n) ≈ 0.27σ, from extreme-value theory; figure from memory), so a new extreme within
+ * a few hundredths of σ of the old one is no change a reviewer should read about, while one
+ * half a σ beyond it puts rows where the baseline's networks never saw any.
+ */
+export const RANGE_GROWTH_IN_STD = 0.5;
 
 export function dataChanges(
   before: DataProfile,
@@ -50,7 +61,8 @@ export function dataChanges(
       const delta = atMostMax(Math.abs(a.mean - b.mean));
       const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
       const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
-      const rangeWidened = a.min < b.min || a.max > b.max;
+      const rangeGrowth = growthOf(b, a);
+      const rangeWidened = grewMeaningfully(rangeGrowth.below, b.std) || grewMeaningfully(rangeGrowth.above, b.std);
       if (meanMoved || rangeWidened) {
         features.push({
           name,
@@ -62,6 +74,7 @@ export function dataChanges(
           rangeBefore: [b.min, b.max],
           rangeAfter: [a.min, a.max],
           rangeWidened,
+          rangeGrowth,
         });
       }
     } else if (b.kind === 'categorical' && a.kind === 'categorical') {
@@ -85,6 +98,19 @@ export function dataChanges(
     columnsAdded,
     columnsRemoved,
   };
+}
+
+/** How far the range reaches beyond the baseline's on each side, in the feature's units and in baseline stds. */
+function growthOf(b: NumericProfile, a: NumericProfile): RangeGrowth {
+  const below = atMostMax(Math.max(0, b.min - a.min));
+  const above = atMostMax(Math.max(0, a.max - b.max));
+  const inStd = (g: number): number | null => (b.std > 0 ? atMostMax(g / b.std) : null);
+  return { below, above, belowInStd: inStd(below), aboveInStd: inStd(above) };
+}
+
+/** A side grew meaningfully: by more than RANGE_GROWTH_IN_STD baseline stds (any growth for a constant feature). */
+function grewMeaningfully(growth: number, std: number): boolean {
+  return std > 0 ? growth > RANGE_GROWTH_IN_STD * std : growth > 0;
 }
 
 /**

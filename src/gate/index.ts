@@ -6,7 +6,7 @@ export { evaluateGate } from './evaluate.js';
 export type { GateOutcome } from './evaluate.js';
 export { compare } from './compare.js';
 export type { Comparison, CompareInput } from './compare.js';
-export { dataChanges, MEAN_SHIFT_IN_STD } from './data-changes.js';
+export { dataChanges, MEAN_SHIFT_IN_STD, RANGE_GROWTH_IN_STD } from './data-changes.js';
 export {
   nextBaseline,
   parseBaseline,

@@ -15,7 +15,7 @@ import type { SearchResult } from '../search/types.js';
 import { nextBaseline, whyNotRecordable } from './baseline.js';
 import { updateBaseline } from './baseline-update.js';
 import { evaluateGate, type GateOutcome } from './evaluate.js';
-import type { Baseline } from './types.js';
+import type { Baseline, BaselineRecord } from './types.js';
 
 export interface GateStageInput {
   mode: 'check' | 'baseline';
@@ -41,10 +41,8 @@ export interface GateStageResult {
   outcome: GateOutcome;
   /** Absolute path written (baseline mode, recordable result), else null. */
   written: string | null;
-  /** Baseline mode: why nothing was written, else null. */
-  notWritten: string | null;
-  /** Entries in the history of the baseline written, else null. */
-  historyEntries: number | null;
+  /** Baseline mode: what was written, or why nothing was; null in check mode. */
+  record: BaselineRecord | null;
   /** The gate settings in effect (the --baseline override applied), for withGate. */
   gate: GateConfig;
 }
@@ -65,11 +63,10 @@ export async function runGateStage(input: GateStageInput): Promise<GateStageResu
     baseline: previous,
     cost: input.cost ?? null,
   });
-  if (input.mode === 'check')
-    return { outcome, written: null, notWritten: null, historyEntries: null, gate: config.gate };
+  if (input.mode === 'check') return { outcome, written: null, record: null, gate: config.gate };
 
   const why = whyNotRecordable(input.result);
-  if (why !== null) return { outcome, written: null, notWritten: why, historyEntries: null, gate: config.gate };
+  if (why !== null) return { outcome, written: null, record: { notWritten: why }, gate: config.gate };
   const next = nextBaseline(
     previous,
     { result: input.result, loaded: input.loaded, config },
@@ -77,11 +74,6 @@ export async function runGateStage(input: GateStageInput): Promise<GateStageResu
   );
   // Only if the file still holds what `previous` was read from: never drop another run's entry.
   await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
-  return {
-    outcome,
-    written: input.baselinePath,
-    notWritten: null,
-    historyEntries: next.history.length,
-    gate: config.gate,
-  };
+  const record = { file: input.baselineShown, width: next.result.width, historyEntries: next.history.length };
+  return { outcome, written: input.baselinePath, record, gate: config.gate };
 }

@@ -85,7 +85,20 @@ export interface FeatureShift {
   meanMoved: boolean;
   rangeBefore: [number, number];
   rangeAfter: [number, number];
+  /** The range grew on a side by more than RANGE_GROWTH_IN_STD baseline stds (src/gate/data-changes.ts). */
   rangeWidened: boolean;
+  /** How far the range reaches beyond the baseline's on each side (0: not beyond it). */
+  rangeGrowth: RangeGrowth;
+}
+
+/** Growth of a range past the baseline's, per side: in the feature's units, and in baseline stds (null when that std is 0). */
+export interface RangeGrowth {
+  /** Baseline minimum − new minimum, when the new one is lower; else 0. */
+  below: number;
+  /** New maximum − baseline maximum, when the new one is higher; else 0. */
+  above: number;
+  belowInStd: number | null;
+  aboveInStd: number | null;
 }
 
 export interface CategoryChange {
@@ -105,13 +118,19 @@ export interface DataChanges {
   classes: ({ label: string } & RowChange)[] | null;
   classesAppeared: string[];
   classesVanished: string[];
-  /** Numeric features whose mean moved by more than half a baseline std or whose range widened. */
+  /** Numeric features whose mean moved by more than half a baseline std, or whose range grew on a side by more than half a baseline std. */
   features: FeatureShift[];
   /** Categorical features with categories that appeared or vanished. */
   categories: CategoryChange[];
   columnsAdded: string[];
   columnsRemoved: string[];
 }
+
+/**
+ * What `baseline` (or the action's update-baseline) did with the file: written, with the file as
+ * the user wrote it, the width recorded and the history entries it now holds; or why not.
+ */
+export type BaselineRecord = { file: string; width: number; historyEntries: number } | { notWritten: string };
 
 /** The gate's answer: pass, fail, improved, new (no baseline yet) or inconclusive (budget ran out). */
 export type Verdict = 'pass' | 'fail' | 'improved' | 'new' | 'inconclusive';

@@ -106,9 +106,14 @@ export function readInputs(get: InputReader, env: NodeJS.ProcessEnv = process.en
   return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers };
 }
 
-/** A file-system-safe folder name for one config, so two steps with different configs never share files. @testOnly */
+/**
+ * A file-system-safe folder name for one config, so two steps with different configs never share
+ * files: the config's path without its YAML extension (a folder named `neuron-budget.yml` reads as
+ * a file), each run of other characters (the path's slashes too) as one underscore. @testOnly
+ */
 export function configSlug(configKey: string): string {
-  return configKey.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^\.+/, '_') || 'config';
+  const stem = configKey.replace(/\.ya?ml$/i, '');
+  return stem.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^\.+/, '_') || 'config';
 }
 
 /** Where the report and the witness go: under RUNNER_TEMP on a runner, else in the workspace. */

@@ -22,6 +22,7 @@ import { readInputs, outputFolder, type ActionInputs } from './inputs.js';
 import { failureMarkdown, fitSummary } from './markdown.js';
 import { commentBudgetFromEnv, makeClient, requestTimeoutFromEnv, retryBaseFromEnv } from './octokit.js';
 import { throttledProgress } from '../report/progress.js';
+import { baselineRecordLine } from '../report/index.js';
 import { logUntrusted } from './log.js';
 
 /** Verdicts that fail the step; the rest pass it. */
@@ -241,8 +242,8 @@ export async function run(): Promise<void> {
     } else {
       core.info(`neuron-budget verdict: ${verdict}`);
     }
-    if (result.baselineWritten)
-      core.info(`Baseline written to ${escapeText(result.baselineWritten)}; commit it to accept this result.`);
+    // The line escapes the file name; it starts with our own word, so it is never a workflow command.
+    if (result.baselineRecord) core.info(baselineRecordLine(result.baselineRecord));
 
     // None of these throw: they report trouble as warnings and leave the result alone.
     await writeCommentFile(join(folder, 'comment.md'), result.markdown);

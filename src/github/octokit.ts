@@ -81,7 +81,7 @@ export function makeClient(o: ClientOptions): Octokit {
         continue;
       }
       const transient = why.kind === 'server-error' || why.kind === 'timeout' || why.kind === 'no-response';
-      if (!transient || !REPEATABLE.has(parsed.method) || attempts >= MAX_ATTEMPTS) throw fail();
+      if (!transient || why.permanent || !REPEATABLE.has(parsed.method) || attempts >= MAX_ATTEMPTS) throw fail();
       const delay = attempts * attempts;
       o.log(`${describeBriefly(why)} on ${what}; retrying in ${delay} s (attempt ${attempts + 1} of ${MAX_ATTEMPTS})`);
       await pause(delay * o.retryBaseMs, o.budget.signal, what, attempts, 'waiting to retry');
@@ -90,7 +90,13 @@ export function makeClient(o: ClientOptions): Octokit {
   return octokit;
 }
 
+/** What fetch's "bad port" means, for a warning a user can act on. */
+const BAD_PORT =
+  'fetch refuses to connect to this port at all (a "bad port" in the Fetch standard; check GITHUB_API_URL), so nothing was sent';
+
 interface Classified {
+  /** A failure no retry can change (it happened before anything was sent). */
+  permanent?: boolean;
   kind: FailureKind;
   status: number | null;
   detail: string;
@@ -115,7 +121,11 @@ function classify(e: unknown, o: ClientOptions, timeout: AbortSignal): Classifie
   const response = err.response;
   const detail = clip(messageOf(response?.data) ?? (typeof err.message === 'string' ? err.message : 'no message'));
   // A RequestError without a response: the request never got an answer (the library files it as 500).
-  if (!response) return { ...base, kind: 'no-response', status: null, detail };
+  if (!response) {
+    // fetch itself refuses the ports the Fetch standard lists as "bad ports": no retry can help.
+    if (detail === 'bad port') return { ...base, kind: 'no-response', status: null, detail: BAD_PORT, permanent: true };
+    return { ...base, kind: 'no-response', status: null, detail };
+  }
   const status = err.status;
   const headers = response.headers ?? {};
   if (status === 429) {

@@ -38,6 +38,7 @@ export function dataStageReport(config: Config, data: LoadedData, timing: Record
           : Object.keys(classes)
               .sort()
               .map((label) => ({ label, count: classes[label] })),
+      targetSpread: data.targetSpread,
     },
     search: null,
     device: null,

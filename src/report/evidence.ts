@@ -130,7 +130,7 @@ export function changesSection(changes: DataChanges, limits: DetailLimits): stri
   const shown = items.slice(0, limits.changeItems);
   const omitted =
     items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
-  return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation or its range widened.`;
+  return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation, or its range grew on a side by more than half a baseline standard deviation.`;
 }
 
 function pickRows<T>(rows: T[], max: number, must: (r: T) => boolean): { kept: T[]; omitted: number } {

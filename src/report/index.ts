@@ -5,4 +5,5 @@ export type { RenderContext } from './context.js';
 export type { MarkdownOptions } from './markdown.js';
 export { renderText, TEXT_WIDTH } from './text.js';
 export { withGate } from './json.js';
+export { baselineRecordLine } from './baseline-record.js';
 export type { Report, Verdict } from './types.js';

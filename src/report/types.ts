@@ -1,4 +1,5 @@
 import type { MetricName, Task } from '../config/types.js';
+import type { TargetSpread } from '../data/types.js';
 import type { DeviceCost } from '../device/index.js';
 import type { JudgingRows, SearchOutcome, WidthSummary } from '../search/types.js';
 import type { BaselineWidth, DataChanges, HistoryEntry } from '../gate/types.js';
@@ -60,6 +61,12 @@ export interface Report {
     task: Task;
     fingerprint: string;
     classes: { label: string; count: number }[] | null;
+    /**
+     * Regression: the target's mean, standard deviation, minimum and maximum over the rows used,
+     * in its own units, to read an error threshold against (rmse ≤ 6 on a target whose std is 4
+     * admits a network worse than always predicting the mean); null for classification.
+     */
+    targetSpread: TargetSpread | null;
   };
   search: {
     outcome: SearchOutcome;

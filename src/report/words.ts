@@ -67,7 +67,7 @@ export function needsSentence(report: Report): string {
 
 /** The spread of a regression target, so "rmse ≤ 6" can be read against its scale; null otherwise. */
 export function targetSpreadSentence(report: Report): string | null {
-  const s = (report.data as { targetSpread?: { mean: number; std: number; min: number; max: number } }).targetSpread;
+  const s = report.data.targetSpread;
   if (!s || report.data.task !== 'regression') return null;
   return `The target column has mean ${formatMetric(s.mean)}, standard deviation ${formatMetric(s.std)}, range ${formatMetric(s.min)} to ${formatMetric(s.max)}.`;
 }
@@ -112,8 +112,12 @@ export function changeItems(ch: DataChanges, esc: Escape): ChangeItem[] {
       parts.push(`mean ${formatMetric(f.meanBefore)} → ${formatMetric(f.meanAfter)}${by}`);
     }
     if (f.rangeWidened) {
+      const g = f.rangeGrowth;
+      const sides: string[] = [];
+      if (g.below > 0) sides.push(`${formatMetric(g.below)} lower${inStd(g.belowInStd)}`);
+      if (g.above > 0) sides.push(`${formatMetric(g.above)} higher${inStd(g.aboveInStd)}`);
       parts.push(
-        `range ${formatMetric(f.rangeBefore[0])} to ${formatMetric(f.rangeBefore[1])} widened to ${formatMetric(f.rangeAfter[0])} to ${formatMetric(f.rangeAfter[1])}`,
+        `range ${formatMetric(f.rangeBefore[0])} to ${formatMetric(f.rangeBefore[1])} widened to ${formatMetric(f.rangeAfter[0])} to ${formatMetric(f.rangeAfter[1])} (${sides.join(', ')})`,
       );
     }
     if (parts.length === 0) continue;
@@ -142,6 +146,11 @@ function share(c: { before: number; after: number }, rows: { before: number; aft
   if (rows.before <= 0 || rows.after <= 0) return '';
   const pct = (n: number, of: number): string => `${Math.round((100 * n) / of)}%`;
   return `; ${pct(c.before, rows.before)} → ${pct(c.after, rows.after)} of the rows`;
+}
+
+/** " (1.2 standard deviations)" or nothing when the baseline's deviation was 0. */
+function inStd(v: number | null): string {
+  return v === null ? '' : `, ${v.toFixed(1)} standard deviations`;
 }
 
 /** Most changes the "why it changed" answer names; the evidence lists them all. */

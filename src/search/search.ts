@@ -26,6 +26,7 @@ import {
   type PruneResult,
   type SearchContext,
 } from './task.js';
+import { secondsFromMs } from '../common/format.js';
 import { isBetter } from '../common/metric.js';
 import type { GrowthPlan, ProgressEvent, SearchResult, TaskResult } from './types.js';
 
@@ -133,7 +134,14 @@ async function grow(
     results.set(done.key, done.r);
     if (Number.isFinite(done.r.judged) && (best === null || isBetter(target.metric, done.r.judged, best)))
       best = done.r.judged;
-    progress({ phase: 'growth', width: done.r.finalWidth, restart: done.r.restart, epoch: done.r.epochs, best });
+    progress({
+      phase: 'growth',
+      kind: 'done',
+      width: done.r.finalWidth,
+      restart: done.r.restart,
+      epoch: done.r.epochs,
+      best,
+    });
   }
 }
 
@@ -175,12 +183,13 @@ export async function runSearch(
   const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
 
   try {
+    progress({ phase: 'growth', kind: 'start', width: plan.minWidth, restart: 0, epoch: 0, best: null });
     const grown = await grow(ctx, executor, target, progress);
     const growthEnd = now();
     const timing = (end: number) => ({
-      searchSeconds: (end - t0) / 1000,
-      growthSeconds: (growthEnd - t0) / 1000,
-      pruneSeconds: (end - growthEnd) / 1000,
+      searchSeconds: secondsFromMs(end - t0),
+      growthSeconds: secondsFromMs(growthEnd - t0),
+      pruneSeconds: secondsFromMs(end - growthEnd),
     });
     const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
 
@@ -211,11 +220,22 @@ export async function runSearch(
 
     // Prune phase: shrink every network that met the target at the grown width or below.
     const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+    if (jobs.length > 0) {
+      const from = Math.max(...jobs.map((j) => j.source.width));
+      progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
+    }
     const pruned: PruneResult[] = await Promise.all(
       jobs.map(async (job) => {
         const r = await executor.prune(job);
         const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
-        progress({ phase: 'prune', width: last, restart: job.source.restart, epoch: r.steps.length, best: null });
+        progress({
+          phase: 'prune',
+          kind: 'done',
+          width: last,
+          restart: job.source.restart,
+          epoch: r.steps.length,
+          best: null,
+        });
         return r;
       }),
     );

@@ -134,6 +134,11 @@ export interface SearchResult {
 
 export interface ProgressEvent {
   phase: 'growth' | 'prune';
+  /**
+   * start: the phase begins, before any of its trainings finished (width: where it starts;
+   * restart and epoch 0), so a log shows a line at once; done: one training or prune job finished.
+   */
+  kind: 'start' | 'done';
   width: number;
   /** 0-based, as in TrainingTask. */
   restart: number;

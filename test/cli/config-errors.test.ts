@@ -113,7 +113,7 @@ const cases: Case[] = [
     name: 'accuracy threshold written as a percentage',
     config: GOOD.replace('threshold: 0.9', 'threshold: 95'),
     at: 'neuron-budget.yml:5:3:',
-    says: ['target.threshold', 'found 95', 'read as classification'],
+    says: ['target.threshold', 'found 95', 'read as classification (it holds text)', '(95% as 0.95)'],
   },
   {
     name: 'metric that does not suit the task',

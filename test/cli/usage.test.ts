@@ -174,6 +174,8 @@ describe('check on a small table', () => {
       'pruneSeconds',
       'searchSeconds',
     ]);
+    // Rounded to whole milliseconds, in the JSON as in the baseline's searchSeconds.
+    for (const seconds of Object.values(report.timing)) expect(/^\d+(\.\d{1,3})?$/.test(String(seconds))).toBe(true);
     for (const shown of [
       '30 used',
       '18 training / 6 validation / 6 judging',
@@ -212,5 +214,46 @@ describe('check on a small table', () => {
     });
     expect(run.code, run.stderr).toBe(0);
     expect(run.stderr).toContain('30 used');
+  });
+});
+
+describe('baseline on a small table', () => {
+  test('says on stdout what it wrote: the file, the width and the history entries', async () => {
+    const first = await runCli(['baseline'], { files: FILES });
+    expect(first.code, first.stderr).toBe(0);
+    const written = JSON.parse(first.read('neuron-budget.baseline.json')) as { result: { width: number } };
+    expect(first.stdout).toBe(
+      `baseline written: neuron-budget.baseline.json, width ${written.result.width}, 1 history entry\n`,
+    );
+    expect(first.stderr).not.toContain('baseline written');
+
+    const files = { ...FILES, 'neuron-budget.baseline.json': first.read('neuron-budget.baseline.json') };
+    const second = await runCli(['baseline'], { files });
+    expect(second.stdout).toBe(
+      `baseline written: neuron-budget.baseline.json, width ${written.result.width}, 2 history entries\n`,
+    );
+
+    // --baseline names another file: the line names it as given.
+    const other = await runCli(['baseline', '--baseline', 'gates/pump.json'], {
+      files: { ...FILES, 'gates/.keep': '' },
+    });
+    expect(other.code, other.stderr).toBe(0);
+    expect(other.stdout).toMatch(/^baseline written: gates\/pump\.json, width \d+, 1 history entry\n$/);
+  });
+
+  test('says on stdout why nothing was written when the search could not finish', async () => {
+    const config = `${CONFIG}search:\n  max-trainings: 1\n`;
+    const run = await runCli(['baseline'], { files: { 'neuron-budget.yml': config, 'readings.csv': CSV } });
+    expect(run.code, run.stderr).toBe(1);
+    expect(run.stdout).toBe(
+      'baseline not written: the search did not finish, so there is no result to record; the baseline file was left unchanged\n',
+    );
+    expect(run.created).toEqual([]);
+  });
+
+  test('check prints nothing about the baseline file on stdout', async () => {
+    const run = await runCli(['check'], { files: FILES });
+    expect(run.code, run.stderr).toBe(0);
+    expect(run.stdout).toBe('');
   });
 });

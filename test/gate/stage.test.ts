@@ -42,13 +42,17 @@ describe('gate stage', () => {
     const out = await runGateStage(s.input('check', found(4, 0.96)));
     expect(out.outcome.verdict).toBe('new');
     expect(out.written).toBeNull();
+    expect(out.record).toBeNull();
     expect(readdirSync(s.dir)).toEqual([]);
   });
 
   it('baseline writes, a second baseline grows the history, check compares with it', async () => {
     const s = setup();
-    expect((await runGateStage(s.input('baseline', found(4, 0.96), 1))).written).toBe(s.path);
+    const first = await runGateStage(s.input('baseline', found(4, 0.96), 1));
+    expect(first.written).toBe(s.path);
+    expect(first.record).toEqual({ file: 'neuron-budget.baseline.json', width: 4, historyEntries: 1 });
     const second = await runGateStage(s.input('baseline', found(5, 0.96), 2));
+    expect(second.record).toEqual({ file: 'neuron-budget.baseline.json', width: 5, historyEntries: 2 });
     expect(second.outcome.verdict).toBe('fail'); // judged against the first baseline before replacing it
     const written = JSON.parse(readFileSync(s.path, 'utf8'));
     expect(written.history.map((h: { width: number }) => h.width)).toEqual([4, 5]);
@@ -63,7 +67,9 @@ describe('gate stage', () => {
     const before = readFileSync(s.path, 'utf8');
     const out = await runGateStage(s.input('baseline', notFound(16), 2));
     expect(out.written).toBeNull();
-    expect(out.notWritten).toMatch(/left unchanged/);
+    expect(out.record).toEqual({
+      notWritten: 'no width reached the target, so there is no result to record; the baseline file was left unchanged',
+    });
     expect(readFileSync(s.path, 'utf8')).toBe(before);
   });
 

@@ -189,6 +189,19 @@ describe.each(list)('action bundle under $label, against a misbehaving API', (ru
     expect(w).not.toContain('answered');
   });
 
+  it('a port fetch will not use ("bad port"): no response, said in words, and not retried', async () => {
+    // 6000 is on the Fetch standard's list of bad ports; fetch refuses it before connecting.
+    const r = await onPr(passingWorkspace(), { apiUrl: 'http://127.0.0.1:6000' });
+    expect(r.code, explain(r)).toBe(0);
+    expectResultsKept(r, 'new');
+    const w = commentWarning(r);
+    expect(w).toContain(
+      'No response came from GitHub for GET /user: fetch refuses to connect to this port at all (a "bad port" in the Fetch standard; check GITHUB_API_URL), so nothing was sent (1 attempt).',
+    );
+    expect(w).not.toMatch(/answered|500/);
+    expect(r.stdout).not.toContain('retrying');
+  });
+
   it("a personal access token: the comment is recognised by the token's account; others' comments are untouched", async () => {
     await start({ tokenUser: { login: 'pump-ci', id: 5150 } });
     const token = { 'github-token': 'ghp_standin_personal_token' };

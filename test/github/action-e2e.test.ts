@@ -81,7 +81,8 @@ describe.each(list)('action bundle under $label', (runtime: Runtime) => {
     expect(r.code, explain(r)).toBe(0);
 
     // The report file named by the output exists under RUNNER_TEMP and describes the CSV we wrote.
-    expect(r.outputs['report']).toBe(join(r.runnerTemp, 'neuron-budget', 'neuron-budget.yml', 'report.json'));
+    // Named after the config (neuron-budget.yml) without its extension: a folder, not something that reads as a file.
+    expect(r.outputs['report']).toBe(join(r.runnerTemp, 'neuron-budget', 'neuron-budget', 'report.json'));
     const report = readJson(r.outputs['report']) as { schema: string; data: Record<string, unknown> };
     expect(report.schema).toBe('neuron-budget/report@2');
     expect(report.data['rows']).toBe(24);
@@ -153,8 +154,9 @@ describe.each(list)('action bundle under $label', (runtime: Runtime) => {
     // Final behaviour (needs the search and gate stages): no baseline yet, so the verdict is new.
     expect(first.outputs['verdict']).toBe('new');
     expect(second.outputs['verdict']).toBe('new');
-    // Search progress reaches the log (the first event always prints, later ones at most every 5 s).
-    expect(first.stdout).toMatch(/^growth: width \d+, restart \d+, epoch \d+, best so far /m);
+    // Search progress reaches the log at once: each phase's start prints before any training
+    // finished; later lines follow at most every 5 s.
+    expect(first.stdout).toMatch(/^growth: starting at width \d+$/m);
   });
 
   it('fail verdict: exit 1, the comment shows it, and a comment failure cannot hide it', async () => {
@@ -252,12 +254,32 @@ describe.each(list)('action bundle under $label', (runtime: Runtime) => {
     const b2 = readJson(baselinePath) as { history: unknown[] };
     expect(validate(b2), JSON.stringify(validate.errors)).toBe(true);
     expect(b2.history.length).toBe(b1.history.length + 1);
+    // The log says what was written: the file as the config names it, the width, the history.
+    const width = (readJson(baselinePath) as { result: { width: number } }).result.width;
+    expect(first.stdout).toMatch(
+      new RegExp(`^baseline written: neuron-budget\\.baseline\\.json, width ${width}, 1 history entry$`, 'm'),
+    );
+    expect(second.stdout).toMatch(/^baseline written: neuron-budget\.baseline\.json, width \d+, 2 history entries$/m);
 
     const check = await onPr(ws);
     expect(check.code, explain(check)).toBe(0);
     expect(check.outputs['verdict']).toBe('pass');
     expect(check.outputs['baseline-width']).toBe(check.outputs['width']);
     expect(check.outputs['baseline']).toBe('');
+    expect(check.stdout).not.toContain('baseline written');
+
+    // No width reached the target: nothing written, and the log says why.
+    const none = await run({
+      workspace: failingWorkspace(),
+      eventName: 'push',
+      event: pushEvent(),
+      inputs: { 'update-baseline': 'true' },
+    });
+    expect(none.code, explain(none)).toBe(1);
+    expect(none.outputs['baseline']).toBe('');
+    expect(none.stdout).toMatch(
+      /^baseline not written: no width reached the target, so there is no result to record; the baseline file was left unchanged$/m,
+    );
   });
 
   it('config or working-directory outside the workspace: refused with a clear error, nothing read', async () => {

@@ -88,9 +88,15 @@ describe('output folder', () => {
     const ws = workspace();
     const i = readInputs(reader({ 'working-directory': 'models/pump-a' }), { GITHUB_WORKSPACE: ws });
     expect(outputFolder(i, { RUNNER_TEMP: '/runner/tmp' })).toBe(
-      '/runner/tmp/neuron-budget/models_pump-a_neuron-budget.yml',
+      '/runner/tmp/neuron-budget/models_pump-a_neuron-budget',
     );
-    expect(outputFolder(i, {})).toBe(join(ws, '.neuron-budget', 'models_pump-a_neuron-budget.yml'));
+    expect(outputFolder(i, {})).toBe(join(ws, '.neuron-budget', 'models_pump-a_neuron-budget'));
     expect(configSlug('../..')).not.toMatch(/^\./);
+  });
+  it('is named after the config without its YAML extension, never like a file', () => {
+    expect(configSlug('neuron-budget.yml')).toBe('neuron-budget');
+    expect(configSlug('ci/gate.pr.YAML')).toBe('ci_gate.pr');
+    expect(configSlug('.neuron-budget.yml')).toBe('_neuron-budget');
+    expect(configSlug('settings.json')).toBe('settings.json');
   });
 });

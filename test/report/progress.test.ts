@@ -12,7 +12,7 @@ describe('progress lines', () => {
       5000,
       () => t,
     );
-    const ev = { phase: 'growth' as const, width: 3, restart: 0, epoch: 10, best: 0.5 };
+    const ev = { phase: 'growth' as const, kind: 'done' as const, width: 3, restart: 0, epoch: 10, best: 0.5 };
     on(ev);
     for (t = 100; t < 4900; t += 100) on({ ...ev, epoch: t });
     expect(lines).toHaveLength(1);
@@ -20,6 +20,28 @@ describe('progress lines', () => {
     on({ ...ev, epoch: 999, best: 0.91234567 });
     expect(lines).toEqual([progressLine(ev), 'growth: width 3, restart 1, epoch 999, best so far 0.9123']);
     expect(progressLine({ ...ev, best: null })).toContain('none yet');
+  });
+
+  it('print the start of a phase as the first line, before any training finished', () => {
+    const lines: string[] = [];
+    const on = throttledProgress(
+      (l) => lines.push(l),
+      5000,
+      () => 0,
+    );
+    on({ phase: 'growth', kind: 'start', width: 2, restart: 0, epoch: 0, best: null });
+    on({ phase: 'growth', kind: 'done', width: 2, restart: 0, epoch: 40, best: 0.7 });
+    expect(lines).toEqual(['growth: starting at width 2']);
+    expect(progressLine({ phase: 'prune', kind: 'start', width: 5, restart: 0, epoch: 0, best: null })).toBe(
+      'prune: starting from width 5',
+    );
+  });
+
+  it('format the best metric as every other screen does (formatMetric: 0.698, never 0.6980; 3.0934, never 3.093)', () => {
+    const ev = { phase: 'growth' as const, kind: 'done' as const, width: 1, restart: 1, epoch: 200 };
+    expect(progressLine({ ...ev, best: 0.698 })).toBe('growth: width 1, restart 2, epoch 200, best so far 0.698');
+    expect(progressLine({ ...ev, best: 3.0934017 })).toBe('growth: width 1, restart 2, epoch 200, best so far 3.0934');
+    expect(progressLine({ ...ev, best: 412.3456 })).toBe('growth: width 1, restart 2, epoch 200, best so far 412.35');
   });
 });
 

@@ -159,8 +159,13 @@ describe('progress', () => {
   it('reports every growth training and every prune job, with the best metric so far', async () => {
     const events: import('../../src/search/types.js').ProgressEvent[] = [];
     const r = await runSearch(parity(3), searchConfig(), exact, { onProgress: (e) => events.push(e) });
-    const growth = events.filter((e) => e.phase === 'growth');
-    const prune = events.filter((e) => e.phase === 'prune');
+    // Each phase opens with a start event, sent before any of its trainings finished.
+    expect(events[0]).toEqual({ phase: 'growth', kind: 'start', width: 1, restart: 0, epoch: 0, best: null });
+    const firstPrune = events.findIndex((e) => e.phase === 'prune');
+    expect(events[firstPrune]).toMatchObject({ phase: 'prune', kind: 'start', width: r.grownWidth });
+    expect(events.filter((e) => e.kind === 'start')).toHaveLength(2);
+    const growth = events.filter((e) => e.phase === 'growth' && e.kind === 'done');
+    const prune = events.filter((e) => e.phase === 'prune' && e.kind === 'done');
     // One thread: no speculative trainings, so one event per training the decision used.
     expect(growth.length).toBe(r.widths.reduce((n, w) => n + w.restarts, 0));
     expect(prune.length).toBe(r.widths.at(-1)!.reached);
@@ -168,6 +173,19 @@ describe('progress', () => {
     const bests = growth.map((e) => e.best ?? 0);
     expect(bests).toEqual([...bests].sort((a, b) => a - b)); // best so far never falls (accuracy)
     expect(bests.at(-1)).toBe(1);
+  });
+});
+
+describe('timing', () => {
+  it('holds seconds rounded to whole milliseconds, whatever the clock returns', async () => {
+    // The clock is read at the start, when growth ends and at the end.
+    const ticks = [1000.1234567, 1067.4188, 1134.8];
+    let i = 0;
+    const now = (): number => ticks[Math.min(i++, ticks.length - 1)];
+    const r = await runSearch(parity(2), searchConfig(), exact, { now });
+    expect(r.outcome).toBe('found');
+    // Raw these would be 0.1346765433, 0.0672953433 and 0.0673812.
+    expect(r.timing).toEqual({ searchSeconds: 0.135, growthSeconds: 0.067, pruneSeconds: 0.067 });
   });
 });
 
