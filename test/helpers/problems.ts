@@ -51,24 +51,33 @@ function gaussian(rng: Rng): number {
   }
 }
 
+/** One row of the Gaussian pair: two inputs and the class name. */
+export interface GaussianRow {
+  x1: number;
+  x2: number;
+  label: 'low' | 'high';
+}
+
 /**
  * Two Gaussian classes with identity covariance in two inputs, means (∓1, 0): the Mahalanobis
  * distance between the means is Δ = 2, so with equal priors the Bayes rule (x1 > 0) has
- * accuracy Φ(Δ/2) = Φ(1) ≈ 0.8413 (Duda, Hart & Stork 2001, section 2.8). `rows` per class,
- * classes interleaved; `seed` picks the sample.
+ * accuracy Φ(Δ/2) = Φ(1) ≈ 0.8413 (Duda, Hart & Stork 2001, section 2.8). `rowsPerClass` rows of
+ * each class, interleaved; `seed` picks the sample.
  */
-export function gaussianClassesCsv(rowsPerClass: number, seed: number): string {
+export function gaussianClassRows(rowsPerClass: number, seed: number): GaussianRow[] {
   const rng = rngFor(seed, 0x6761, 0x7573); // a stream of its own ("ga", "us")
-  const lines = ['x1,x2,class'];
+  const rows: GaussianRow[] = [];
   for (let p = 0; p < rowsPerClass; p++) {
-    for (const [mean, label] of [
-      [-1, 'low'],
-      [1, 'high'],
-    ] as const) {
-      lines.push(`${mean + gaussian(rng)},${gaussian(rng)},${label}`);
-    }
+    rows.push({ x1: -1 + gaussian(rng), x2: gaussian(rng), label: 'low' });
+    rows.push({ x1: 1 + gaussian(rng), x2: gaussian(rng), label: 'high' });
   }
-  return `${lines.join('\n')}\n`;
+  return rows;
+}
+
+/** gaussianClassRows as CSV text with the header x1,x2,class. */
+export function gaussianClassesCsv(rowsPerClass: number, seed: number): string {
+  const lines = gaussianClassRows(rowsPerClass, seed).map((r) => `${r.x1},${r.x2},${r.label}`);
+  return `${['x1,x2,class', ...lines].join('\n')}\n`;
 }
 
 /** Φ(1), the standard normal distribution function at 1 (tables, e.g. Abramowitz & Stegun 1964, 26.2). */
