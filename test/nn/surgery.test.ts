@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { createTrainer, predict } from '../../src/nn/index.js';
 import { rngFor } from '../../src/common/random.js';
 import { referenceKernel } from '../../src/nn/kernel/kernel.js';
-import { fromJson, initParams, nguyenWidrowBeta } from '../../src/nn/network.js';
+import { fromJson, initialNorm, initParams, nguyenWidrowBeta } from '../../src/nn/network.js';
 import { layoutOf } from '../../src/nn/kernel/layout.js';
 import { Xoshiro128StarStar } from '../../src/common/random.js';
 import { dataset, options } from './helpers.js';
@@ -155,33 +155,46 @@ describe('removing a neuron with mean compensation', () => {
   });
 });
 
-describe('Nguyen-Widrow initialisation (Nguyen & Widrow 1990)', () => {
+describe('Nguyen-Widrow initialisation (Nguyen & Widrow 1990), its scale capped at 1', () => {
   it.each([
     [1, 1],
     [2, 2],
     [5, 3],
     [16, 10],
+    [32, 2],
     [64, 50],
-  ])('width %i, %i inputs: every hidden neuron has input-weight norm 0.7·H^(1/n), bias within ±β', (H, n) => {
+  ])('width %i, %i inputs: every hidden neuron has input-weight norm min(1, 0.7·H^(1/n)), bias within ±it', (H, n) => {
     const beta = 0.7 * Math.pow(H, 1 / n);
     expect(Math.abs(nguyenWidrowBeta(H, n) - beta)).toBeLessThan(1e-14 * beta);
+    const norm = Math.min(1, beta);
+    expect(Math.abs(initialNorm(H, n) - norm)).toBeLessThan(1e-14 * norm);
     const shape = { inputs: n, width: H, outputs: 2, activation: 'tanh' as const, head: 'softmax' as const };
     const params = initParams(shape, 'nguyen-widrow', rngFor(3, H, n));
     const lay = layoutOf(shape);
     for (let j = 0; j < H; j++) {
       let norm2 = 0;
       for (let i = 0; i < n; i++) norm2 += params[lay.w1 + i * H + j] ** 2;
-      expect(Math.abs(Math.sqrt(norm2) - beta)).toBeLessThan(1e-12 * beta);
-      expect(Math.abs(params[lay.b1 + j])).toBeLessThanOrEqual(beta);
+      expect(Math.abs(Math.sqrt(norm2) - norm)).toBeLessThan(1e-12 * norm);
+      expect(Math.abs(params[lay.b1 + j])).toBeLessThanOrEqual(norm);
     }
   });
 
-  it('a neuron added to a network of width H gets norm 0.7·(H+1)^(1/n)', () => {
+  it('the cap binds only above 1: 0.7·H^(1/n) for 2 inputs up to width 2, 1 from width 3', () => {
+    expect(initialNorm(2, 2)).toBeCloseTo(0.7 * Math.SQRT2, 14);
+    expect(initialNorm(3, 2)).toBe(1);
+    expect(initialNorm(4, 4)).toBeCloseTo(0.7 * Math.SQRT2, 14);
+    expect(initialNorm(5, 4)).toBe(1);
+  });
+
+  it.each([
+    [1, 0.7 * Math.pow(2, 1 / 3)],
+    [4, 1], // 0.7·5^(1/3) = 1.197, capped
+  ])('a neuron added to a network of width %i (3 inputs) gets norm min(1, 0.7·(H+1)^(1/n)) = %f', (H, expected) => {
     const data = regressionData(10, 3, 4);
-    const t = createTrainer(data, 4, options({ target: { metric: 'rmse', threshold: 0 } }), rngFor(2, 4, 0));
-    t.addNeuron(rngFor(2, 5, 0));
-    const w = t.snapshot().hiddenWeights[4];
+    const t = createTrainer(data, H, options({ target: { metric: 'rmse', threshold: 0 } }), rngFor(2, H, 0));
+    t.addNeuron(rngFor(2, H + 1, 0));
+    const w = t.snapshot().hiddenWeights[H];
     const norm = Math.sqrt(w.reduce((s, v) => s + v * v, 0));
-    expect(Math.abs(norm - 0.7 * Math.pow(5, 1 / 3))).toBeLessThan(1e-12);
+    expect(Math.abs(norm - expected)).toBeLessThan(1e-12);
   });
 });
