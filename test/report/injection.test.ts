@@ -7,7 +7,6 @@
  * escaper intends.
  */
 import fc from 'fast-check';
-import MarkdownIt from 'markdown-it';
 import { describe, expect, it } from 'vitest';
 import { evaluateGate } from '../../src/gate/index.js';
 import { nextBaseline } from '../../src/gate/baseline.js';
@@ -15,6 +14,7 @@ import { escapeMarkdown, escapeText } from '../../src/common/escape.js';
 import { renderMarkdown, renderText, withGate } from '../../src/report/index.js';
 import type { DataProfile } from '../../src/data/types.js';
 import { config, dataReport, found, loaded, profile } from '../gate/build.js';
+import { expectNoAutolinks, renderer, textOf } from '../helpers/markdown.js';
 
 const HOSTILE = [
   '**bold** _em_ ~~gone~~',
@@ -119,26 +119,6 @@ function checkChart(block: string): void {
   for (const series of lines.filter((l) => /^ {2}(line|bar) /.test(l))) {
     expect(series.split(',').length, 'one value per category').toBe(categories);
   }
-}
-
-/** A CommonMark renderer with raw HTML allowed (GitHub sanitises it, but allows details and img). */
-const renderer = new MarkdownIt({ html: true, linkify: true });
-
-const ENTITIES: Record<string, string> = { amp: '&', lt: '<', gt: '>', quot: '"', '#39': "'" };
-/** Text content of rendered HTML: tags dropped, the renderer's entities decoded. */
-function textOf(html: string): string {
-  return html
-    .replace(/<[^>]*>/g, '')
-    .replace(/&(amp|lt|gt|quot|#39);/g, (_, e: string) => ENTITIES[e])
-    .replace(/&#(\d+);/g, (_, n: string) => String.fromCodePoint(Number(n)));
-}
-
-/** GitHub links these in rendered text (GitHub behaviour as we know it, not checked here). */
-function expectNoAutolinks(text: string): void {
-  expect(text.match(/.{0,40}(https?:\/\/|www\.).{0,40}/i)?.[0] ?? null).toBeNull();
-  expect(text).not.toMatch(/@[A-Za-z0-9]/);
-  expect(text).not.toMatch(/#[0-9]/);
-  expect(text).not.toMatch(/:[a-z_]+:/);
 }
 
 describe('injection', () => {
