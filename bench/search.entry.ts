@@ -77,6 +77,7 @@ const generatedSearch: SearchConfig = {
   maxEpochs: 150,
   seed: 1,
   growth: 'fresh',
+  start: 'baseline',
   activation: 'tanh',
   optimizer: 'lbfgs',
   patience: 200,

@@ -230,6 +230,14 @@ export const CONFIG_SPEC: readonly SectionSpec[] = [
         description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
       },
       {
+        name: 'start',
+        changesResult: false,
+        rule: { kind: 'enum', values: ['baseline', 'min-width'] },
+        default: 'baseline',
+        description:
+          'baseline: with a baseline of the same settings, decide its width and the one below first, and move only as far as the answer needs; min-width: try every width from min-width up.',
+      },
+      {
         name: 'activation',
         changesResult: true,
         rule: { kind: 'enum', values: ['tanh', 'logistic', 'relu'] },

@@ -9,6 +9,7 @@ export type Activation = 'tanh' | 'logistic' | 'relu';
 export type Optimizer = 'lbfgs' | 'irprop+' | 'adam' | 'backprop';
 export type Init = 'nguyen-widrow' | 'glorot' | 'he';
 export type GrowthMode = 'fresh' | 'in-place';
+export type SearchStart = 'baseline' | 'min-width';
 
 export interface DataConfig {
   /** Absolute path of the CSV file. */
@@ -57,6 +58,8 @@ export interface SearchConfig {
   maxEpochs: number;
   seed: number;
   growth: GrowthMode;
+  /** Where growth begins: at the matching baseline's width when there is one, or always at min-width. */
+  start: SearchStart;
   activation: Activation;
   optimizer: Optimizer;
   /** null: the activation's usual initialisation (Nguyen-Widrow for tanh/logistic, He for ReLU). */

@@ -72,6 +72,7 @@ export function searchStageReport(
       trainings: search.trainings,
       notes: search.notes,
       judging: search.judging,
+      start: search.start,
       witness: witnessOf(search),
     },
   };

@@ -1,7 +1,7 @@
 import type { MetricName, Task } from '../config/types.js';
 import type { TargetSpread } from '../data/types.js';
 import type { DeviceCost } from '../device/index.js';
-import type { JudgingRows, SearchOutcome, WidthSummary } from '../search/types.js';
+import type { JudgingRows, SearchOutcome, WalkReport, WidthSummary } from '../search/types.js';
 import type { BaselineWidth, DataChanges, HistoryEntry } from '../gate/types.js';
 
 export type { Verdict } from '../gate/types.js';
@@ -81,6 +81,8 @@ export interface Report {
     /** Why no width is adequate, or how far an unfinished search got. */
     notes: string[];
     judging: JudgingRows;
+    /** Where the growth walk began (min-width, or a matching baseline's width) and which widths it decided. */
+    start: WalkReport;
     /** The network behind `width` (or, when none is adequate, the best that met the target), or null. */
     witness: ReportWitness | null;
   } | null;

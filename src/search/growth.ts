@@ -17,14 +17,41 @@ export function taskKey(task: TrainingTask): string {
   return `${task.width}:${task.restart}`;
 }
 
-/** Every growth task in canonical order. In-place growth has one task per restart, starting at min-width. */
+/**
+ * The widths in the order a walk can visit them. From min-width: upward. From a start width S
+ * (fresh growth only): S, S−1, S+1, S−2, S+2, … within the range, so whichever way the walk
+ * turns after S, the widths it visits come in increasing position and every task before the
+ * first undecided one can no longer matter.
+ */
+export function walkOrder(plan: GrowthPlan): number[] {
+  const start = startWidth(plan);
+  if (start === null) {
+    const out: number[] = [];
+    for (let w = plan.minWidth; w <= plan.maxWidth; w++) out.push(w);
+    return out;
+  }
+  const out = [start];
+  for (let d = 1; start - d >= plan.minWidth || start + d <= plan.maxWidth; d++) {
+    if (start - d >= plan.minWidth) out.push(start - d);
+    if (start + d <= plan.maxWidth) out.push(start + d);
+  }
+  return out;
+}
+
+/** The width the walk starts from when it does not start at min-width (fresh growth only), clamped to the range. */
+export function startWidth(plan: GrowthPlan): number | null {
+  if (plan.growth === 'in-place' || plan.start === undefined || plan.start === null) return null;
+  return Math.min(plan.maxWidth, Math.max(plan.minWidth, plan.start));
+}
+
+/** Every growth task in canonical order (walkOrder). In-place growth has one task per restart, starting at min-width. */
 export function planTasks(plan: GrowthPlan): TrainingTask[] {
   const tasks: TrainingTask[] = [];
   if (plan.growth === 'in-place') {
     for (let i = 0; i < plan.restarts; i++) tasks.push({ width: plan.minWidth, restart: i });
     return tasks;
   }
-  for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
+  for (const w of walkOrder(plan)) {
     for (let i = 0; i < plan.restarts; i++) tasks.push({ width: w, restart: i });
   }
   return tasks;
@@ -138,12 +165,21 @@ export type GrowthDecision =
 
 export type ResultLookup = (task: TrainingTask) => TaskResult | undefined;
 
-/** Walk the widths as the header says. Pure: the same outcomes give the same decision. */
+type Tried = { width: number; restarts: RestartAtWidth[] };
+
+/**
+ * Walk the widths as the header says. Pure: the same outcomes give the same decision.
+ * From a start width S the walk decides S first; when S is adequate it steps down until a width
+ * is not (the answer is the last adequate one), otherwise it steps up until one is. It assumes
+ * that adequacy, once lost going down, does not come back at a smaller width.
+ */
 export function decideGrowth(plan: GrowthPlan, lookup: ResultLookup): GrowthDecision {
-  const tried: { width: number; restarts: RestartAtWidth[] }[] = [];
+  const tried: Tried[] = [];
   const used = new Set<string>();
   const allowedFailures = plan.restarts - plan.required;
-  for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
+  const byWidth = (): Tried[] => [...tried].sort((a, b) => a.width - b.width);
+  type Step = { adequate: boolean } | { stop: GrowthDecision };
+  const decideWidth = (w: number): Step => {
     const seen: RestartAtWidth[] = [];
     let successes = 0;
     let failures = 0;
@@ -153,18 +189,13 @@ export function decideGrowth(plan: GrowthPlan, lookup: ResultLookup): GrowthDeci
       const key = taskKey(task);
       if (!used.has(key) && plan.maxTrainings !== null && used.size >= plan.maxTrainings) {
         if (seen.length > 0) tried.push({ width: w, restarts: seen });
-        return {
-          kind: 'decided',
-          grownWidth: null,
-          tried,
-          trainings: used.size,
-          capHit: { width: w, restartsRun: seen.length },
-        };
+        const capHit = { width: w, restartsRun: seen.length };
+        return { stop: { kind: 'decided', grownWidth: null, tried: byWidth(), trainings: used.size, capHit } };
       }
       const result = lookup(task);
       if (result === undefined) {
-        const sofar = seen.length > 0 ? [...tried, { width: w, restarts: seen }] : tried;
-        return { kind: 'need', task, deciding: w, tried: sofar, trainings: used.size };
+        if (seen.length > 0) tried.push({ width: w, restarts: seen });
+        return { stop: { kind: 'need', task, deciding: w, tried: byWidth(), trainings: used.size } };
       }
       used.add(key);
       const at = restartAtWidth(plan, result, w);
@@ -173,10 +204,43 @@ export function decideGrowth(plan: GrowthPlan, lookup: ResultLookup): GrowthDeci
       else failures++;
     }
     tried.push({ width: w, restarts: seen });
-    if (successes >= plan.required)
-      return { kind: 'decided', grownWidth: w, tried, trainings: used.size, capHit: null };
+    return { adequate: successes >= plan.required };
+  };
+  const decided = (grownWidth: number | null): GrowthDecision => ({
+    kind: 'decided',
+    grownWidth,
+    tried: byWidth(),
+    trainings: used.size,
+    capHit: null,
+  });
+
+  const start = startWidth(plan);
+  if (start !== null) {
+    const first = decideWidth(start);
+    if ('stop' in first) return first.stop;
+    if (first.adequate) {
+      let lowest = start;
+      for (let w = start - 1; w >= plan.minWidth; w--) {
+        const step = decideWidth(w);
+        if ('stop' in step) return step.stop;
+        if (!step.adequate) break;
+        lowest = w;
+      }
+      return decided(lowest);
+    }
+    for (let w = start + 1; w <= plan.maxWidth; w++) {
+      const step = decideWidth(w);
+      if ('stop' in step) return step.stop;
+      if (step.adequate) return decided(w);
+    }
+    return decided(null);
   }
-  return { kind: 'decided', grownWidth: null, tried, trainings: used.size, capHit: null };
+  for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
+    const step = decideWidth(w);
+    if ('stop' in step) return step.stop;
+    if (step.adequate) return decided(w);
+  }
+  return decided(null);
 }
 
 /**

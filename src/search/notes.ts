@@ -9,7 +9,9 @@
 import { formatMetric, neurons, targetShort } from '../common/format.js';
 import { higherIsBetter, isBetter, meetsThreshold } from '../common/metric.js';
 import type { TargetConfig } from '../config/types.js';
-import type { GrowthPlan, WidthSummary } from './types.js';
+import type { GrowthDecision } from './growth.js';
+import type { StartChoice } from './start.js';
+import type { GrowthPlan, WalkReport, WidthSummary } from './types.js';
 
 /** Widths at the top of the range whose best is compared with the rest to tell a rising curve. */
 const TOP_WIDTHS = 3;
@@ -88,15 +90,70 @@ export function notFoundNotes(
 }
 
 /** The growth phase stopped (time budget, training cap) before a width was adequate. */
-export function stoppedGrowingNote(plan: GrowthPlan, why: string, atWidth: number, trainings: number): string {
-  const below =
-    atWidth > plan.minWidth
-      ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate on fresh restarts`
-      : '';
-  return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
+export function stoppedGrowingNote(
+  plan: GrowthPlan,
+  why: string,
+  atWidth: number,
+  trainings: number,
+  tried: GrowthDecision['tried'],
+): string {
+  const before = tried.filter((t) => t.width !== atWidth && t.restarts.length > 0);
+  const adequate = before.filter((t) => t.restarts.filter((r) => r.met).length >= plan.required).map((t) => t.width);
+  const not = before.filter((t) => !adequate.includes(t.width)).map((t) => t.width);
+  const said = [
+    adequate.length > 0
+      ? `${widthList(adequate)} ${adequate.length > 1 ? 'were' : 'was'} adequate on fresh restarts`
+      : '',
+    not.length > 0 ? `${widthList(not)} ${not.length > 1 ? 'were' : 'was'} not adequate on fresh restarts` : '',
+  ].filter((x) => x !== '');
+  return `${why} while deciding width ${atWidth}, after ${trainings} trainings${said.length > 0 ? `; ${said.join(', ')}` : ''}.`;
 }
 
 /** The time ran out while pruning: the grown width is proven, smaller ones are not settled. */
 export function stoppedPruningNote(why: string, grownWidth: number, trainings: number): string {
   return `${why} while pruning, after ${trainings} trainings: ${neurons(grownWidth)} are enough (proven by fresh restarts), but whether fewer would do was not settled.`;
+}
+
+/** Ascending widths as "width 3", "widths 3–5" or "widths 3, 5–7". */
+function widthList(widths: readonly number[]): string {
+  const runs: string[] = [];
+  for (let k = 0; k < widths.length;) {
+    let e = k;
+    while (e + 1 < widths.length && widths[e + 1] === widths[e] + 1) e++;
+    runs.push(widths[k] === widths[e] ? `${widths[k]}` : `${widths[k]}–${widths[e]}`);
+    k = e + 1;
+  }
+  return widths.length === 1 ? `width ${runs[0]}` : `widths ${runs.join(', ')}`;
+}
+
+/** Where growth began and which widths it decided, with why that was enough. */
+export function walkReport(plan: GrowthPlan, start: StartChoice | null, decision: GrowthDecision): WalkReport {
+  const choice = start ?? { from: 'min-width' as const, width: plan.minWidth, why: 'the search starts there' };
+  const from = choice.from === 'baseline' && plan.start != null ? 'baseline' : 'min-width';
+  const width = from === 'baseline' ? choice.width : plan.minWidth;
+  const decided = decision.tried.filter((t) => t.restarts.length > 0).map((t) => t.width);
+  const lead =
+    from === 'baseline'
+      ? `Growth started at the baseline's width ${width} (${choice.why})`
+      : `Growth started at min-width ${width} (${choice.why})`;
+  const grown = decision.kind === 'decided' && decision.capHit === null ? decision.grownWidth : undefined;
+  let summary: string;
+  if (from === 'min-width' || grown === undefined || decided.length === 0) {
+    summary = `${lead} and decided ${decided.length === 0 ? 'no width' : widthList(decided)}.`;
+  } else {
+    const lowest = decided[0];
+    const untried = lowest > plan.minWidth ? span(plan.minWidth, lowest - 1) : null;
+    const belowRule =
+      untried === null
+        ? ''
+        : `; ${untried} ${lowest - 1 > plan.minWidth ? 'were' : 'was'} not trained, since a width below one that is not adequate is taken not to be adequate either`;
+    let what: string;
+    if (grown === null) what = `no width from ${width} to max-width ${plan.maxWidth} was adequate on fresh restarts`;
+    else if (grown > width)
+      what = `width ${width} was not adequate on fresh restarts, so growth stepped up to width ${grown}, the first that was`;
+    else if (grown === plan.minWidth) what = `every width down to min-width ${grown} was adequate on fresh restarts`;
+    else what = `width ${grown} was adequate on fresh restarts and width ${grown - 1} was not`;
+    summary = `${lead}: ${what}${belowRule}.`;
+  }
+  return { from, width, why: choice.why, decided, summary };
 }

@@ -17,7 +17,8 @@ import type { TrainOptions } from '../nn/index.js';
 import { inThreadExecutor, workerPoolExecutor, type Executor } from './executor.js';
 import { decideGrowth, planTasks, taskKey, type GrowthDecision, type RestartAtWidth } from './growth.js';
 import { appraise, judgingRowsOf } from './judge.js';
-import { notFoundNotes, stoppedGrowingNote, stoppedPruningNote } from './notes.js';
+import { notFoundNotes, stoppedGrowingNote, stoppedPruningNote, walkReport } from './notes.js';
+import type { StartChoice } from './start.js';
 import { tally } from './tally.js';
 import {
   DEFAULT_PRUNE_CANDIDATES,
@@ -45,10 +46,23 @@ export interface SearchOptions {
   pruneCandidates?: number;
   /** The data split asked for judging rows but folded them into the validation rows (small data). */
   judgingFolded?: boolean;
+  /** Where the growth walk begins (search/start.ts); absent: at min-width. */
+  start?: StartChoice;
+  /** Outcomes computed elsewhere (a matrix's shards): used as they are, only the rest runs here. */
+  known?: KnownOutcomes;
+  /** Said when work the known outcomes did not cover runs here (merge logs it). */
+  onLocalWork?: (what: string) => void;
 }
 
-export function growthPlan(search: SearchConfig): GrowthPlan {
+/** Growth results and prune results computed elsewhere; each is a pure function of (data, settings, task). */
+export interface KnownOutcomes {
+  results: readonly TaskResult[];
+  pruned: readonly PruneResult[];
+}
+
+export function growthPlan(search: SearchConfig, start: StartChoice | null = null): GrowthPlan {
   return {
+    start: start !== null && start.from === 'baseline' ? start.width : null,
     growth: search.growth,
     minWidth: search.minWidth,
     maxWidth: search.maxWidth,
@@ -73,7 +87,7 @@ export function searchContext(search: SearchConfig, target: TargetConfig, option
   };
   return {
     seed: search.seed,
-    plan: growthPlan(search),
+    plan: growthPlan(search, options.start ?? null),
     train,
     stall: { ...(options.stall ?? DEFAULT_STALL) },
     pruneEpochs: search.pruneEpochs,
@@ -99,11 +113,12 @@ async function grow(
   executor: Executor,
   target: TargetConfig,
   progress: (e: ProgressEvent) => void,
+  known: readonly TaskResult[],
 ): Promise<{ decision: GrowthDecision; results: Map<string, TaskResult>; outOfTime: boolean }> {
   const plan = ctx.plan;
   const canon = planTasks(plan);
   const position = new Map(canon.map((t, k) => [taskKey(t), k]));
-  const results = new Map<string, TaskResult>();
+  const results = new Map<string, TaskResult>(known.map((r) => [taskKey(r), r]));
   const inflight = new Map<string, Promise<TaskResult | null>>();
   const clock = timeUp(ctx.deadline);
   let best: number | null = null;
@@ -183,15 +198,27 @@ export async function runSearch(
   const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
 
   try {
-    progress({ phase: 'growth', kind: 'start', width: plan.minWidth, restart: 0, epoch: 0, best: null });
-    const grown = await grow(ctx, executor, target, progress);
+    const first = planTasks(plan)[0]?.width ?? plan.minWidth;
+    progress({ phase: 'growth', kind: 'start', width: first, restart: 0, epoch: 0, best: null });
+    const grown = await grow(ctx, executor, target, progress, options.known?.results ?? []);
     const growthEnd = now();
+    if (options.known !== undefined) {
+      const planned = new Set(options.known.results.map(taskKey));
+      const here = grown.decision.tried
+        .flatMap((t) => t.restarts.map((r) => r.task))
+        .filter((t) => !planned.has(taskKey(t)));
+      if (here.length > 0)
+        options.onLocalWork?.(
+          `${here.length} growth ${here.length === 1 ? 'training' : 'trainings'} the plan did not cover (widths ${[...new Set(here.map((t) => t.width))].join(', ')})`,
+        );
+    }
     const timing = (end: number) => ({
       searchSeconds: secondsFromMs(end - t0),
       growthSeconds: secondsFromMs(growthEnd - t0),
       pruneSeconds: secondsFromMs(end - growthEnd),
     });
-    const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
+    const start = walkReport(plan, options.start ?? null, grown.decision);
+    const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging, start };
 
     const decision = grown.decision;
     if (decision.kind === 'need') {
@@ -201,7 +228,7 @@ export async function runSearch(
         width: null,
         widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
         trainings: decision.trainings,
-        notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings)],
+        notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings, decision.tried)],
         timing: timing(now()),
       };
     }
@@ -213,7 +240,7 @@ export async function runSearch(
         width: null,
         widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
         trainings: decision.trainings,
-        notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings)],
+        notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings, decision.tried)],
         timing: timing(now()),
       };
     }
@@ -224,8 +251,13 @@ export async function runSearch(
       const from = Math.max(...jobs.map((j) => j.source.width));
       progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
     }
+    const prunedElsewhere = new Map((options.known?.pruned ?? []).map((r) => [taskKey(r.source), r]));
     const pruned: PruneResult[] = await Promise.all(
       jobs.map(async (job) => {
+        const ready = prunedElsewhere.get(taskKey(job.source));
+        if (ready !== undefined && !ready.interrupted) return ready;
+        if (options.known !== undefined)
+          options.onLocalWork?.(`pruning the network of width ${job.source.width}, restart ${job.source.restart + 1}`);
         const r = await executor.prune(job);
         const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
         progress({
@@ -270,6 +302,7 @@ export async function runSearch(
       trainings,
       notes: found ? [] : notFoundNotes(plan, target, t.widths, judgedOn),
       judging,
+      start,
       timing: timing(now()),
     };
   } finally {

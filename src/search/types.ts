@@ -106,6 +106,18 @@ export interface JudgingRows {
   folded: boolean;
 }
 
+/** Where the growth walk began and what it decided (the report's search.start). */
+export interface WalkReport {
+  from: 'baseline' | 'min-width';
+  width: number;
+  /** Why it began there. */
+  why: string;
+  /** Widths growth decided on fresh restarts, ascending. */
+  decided: number[];
+  /** A sentence: which widths were decided and why that was enough. */
+  summary: string;
+}
+
 export interface SearchResult {
   outcome: SearchOutcome;
   /** Smallest adequate width; null unless found. */
@@ -128,6 +140,8 @@ export interface SearchResult {
   /** Sentences on why no width is adequate, or how far an unfinished search got; empty when found. */
   notes: string[];
   judging: JudgingRows;
+  /** Where the growth walk began, and which widths it decided. */
+  start: WalkReport;
   /** Wall-clock figures only. */
   timing: { searchSeconds: number; growthSeconds: number; pruneSeconds: number };
 }
@@ -157,6 +171,11 @@ export interface GrowthPlan {
   required: number;
   /** Cap on growth trainings; null = none. */
   maxTrainings: number | null;
+  /**
+   * Width the walk starts from (a matching baseline's width), deciding it and the width below
+   * first; null or absent: every width from min-width up. Fresh growth only.
+   */
+  start?: number | null;
 }
 
 /** The network's state at the end of its time at one width (in-place growth passes through several). */

@@ -61,6 +61,13 @@ export function found(
     trainings: widths.length * 10,
     notes: [],
     judging: { on: 'judging', rows: 360, folded: false },
+    start: {
+      from: 'min-width',
+      width: 1,
+      why: 'there is no baseline yet',
+      decided: widths.map((w) => w.width),
+      summary: `Growth started at min-width 1 (there is no baseline yet) and decided widths 1–${foundWidth}.`,
+    },
     timing: { searchSeconds: opts.seconds ?? 12.5, growthSeconds: (opts.seconds ?? 12.5) - 1, pruneSeconds: 1 },
   };
 }

@@ -152,3 +152,50 @@ describe('in-place growth mapped onto widths', () => {
     expect(d.trainings).toBe(8);
   });
 });
+
+describe('the walk from a start width (a matching baseline)', () => {
+  // Restart i meets the target at width w when w ≥ answer, except for a seeded scatter of lucky
+  // and unlucky restarts that leaves adequacy monotone in width (at most 2 of 10 flip).
+  const outcome = (answer: number) => (t: { width: number; restart: number }) =>
+    fresh(t.width, t.restart, t.width >= answer ? t.restart !== (t.width * 3) % 10 : t.restart === (t.width * 7) % 10);
+
+  it('gives the full scan’s width from every start, and decides only the widths the answer needs', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 12 }), fc.integer({ min: 1, max: 12 }), (answer, start) => {
+        const full = decided(decideGrowth(plan({ maxWidth: 12 }), outcome(answer)));
+        const walk = decided(decideGrowth(plan({ maxWidth: 12, start }), outcome(answer)));
+        expect(walk.grownWidth).toBe(full.grownWidth);
+        const widths = walk.tried.map((t) => t.width);
+        expect(widths).toEqual([...widths].sort((a, b) => a - b));
+        // From the start, down to the answer and one below it; or up to the answer.
+        const lo = start >= answer ? Math.max(1, answer - 1) : start;
+        const hi = start >= answer ? start : answer;
+        expect(widths).toEqual(Array.from({ length: hi - lo + 1 }, (_, k) => lo + k));
+      }),
+    );
+  });
+
+  it('decides the start width and the width below first when the answer has not moved', () => {
+    const walk = decided(decideGrowth(plan({ maxWidth: 12, start: 7 }), outcome(7)));
+    const full = decided(decideGrowth(plan({ maxWidth: 12 }), outcome(7)));
+    expect(walk.tried.map((t) => t.width)).toEqual([6, 7]);
+    expect(full.trainings / walk.trainings).toBeGreaterThan(3);
+  });
+
+  it('orders tasks so that the widths any walk visits come in increasing position', () => {
+    for (const start of [1, 4, 6, 9]) {
+      const p = plan({ maxWidth: 9, start, restarts: 2, required: 1 });
+      const order = [...new Set(planTasks(p).map((t) => t.width))];
+      expect([...order].sort((a, b) => a - b)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9]);
+      const pos = (w: number) => order.indexOf(w);
+      expect(order[0]).toBe(start);
+      for (let w = start; w > 1; w--) expect(pos(w - 1)).toBeGreaterThan(pos(w));
+      for (let w = start; w < 9; w++) expect(pos(w + 1)).toBeGreaterThan(pos(w));
+    }
+  });
+
+  it('is ignored by in-place growth, which always grows from min-width', () => {
+    const p = plan({ growth: 'in-place', start: 3 });
+    expect(planTasks(p).every((t) => t.width === 1)).toBe(true);
+  });
+});

@@ -1,0 +1,92 @@
+/**
+ * What every stage of the main job does first (check, baseline, plan, shard, merge): read the
+ * config, check the outputs can be written, read the baseline, load the data, and choose where
+ * the growth walk starts. Everything a stage decides from afterwards is in the result.
+ */
+import { displayPath } from '../common/paths.js';
+import { secondsFromMs } from '../common/format.js';
+import { loadConfig, settleTarget } from '../config/index.js';
+import type { Config } from '../config/types.js';
+import { loadData } from '../data/index.js';
+import type { LoadedData } from '../data/types.js';
+import { checkOutputFolder } from '../files/output.js';
+import { readBaseline, resultSettings, settingsDifferences, type Baseline } from '../gate/index.js';
+import { dataStageReport } from '../report/assemble.js';
+import { dataSummaryText } from '../report/data-summary.js';
+import { chooseStart, type StartChoice } from '../search/start.js';
+
+export interface PrepareOptions {
+  /** Absolute path of the config file. */
+  configPath: string;
+  /** Absolute workspace root no path may leave. */
+  root: string;
+  /** Override of the config's baseline path (absolute), or null. */
+  baselinePath?: string | null;
+  /** Output files the stage will write (absolute), checked before any work: [path, what]. */
+  outputs?: readonly (readonly [string | null | undefined, string])[];
+  log?: (line: string) => void;
+}
+
+export interface PreparedJob {
+  config: Config;
+  data: LoadedData;
+  /** The baseline read (null when there is none yet). */
+  previous: Baseline | null;
+  baselinePath: string;
+  /** The baseline file as the user wrote it. */
+  baselineShown: string;
+  /** The baseline file relative to the workspace, for hints. */
+  baselineFile: string;
+  start: StartChoice;
+  /** Wall-clock seconds so far (loadSeconds). */
+  timing: Record<string, number>;
+}
+
+export async function prepareJob(options: PrepareOptions): Promise<PreparedJob> {
+  const timing: Record<string, number> = {};
+  const loaded = await loadConfig(options.configPath, options.root);
+  // Fail on an unwritable output before minutes of work, not after.
+  for (const [path, what] of options.outputs ?? []) if (path) await checkOutputFolder(path, what, options.root);
+  const baselinePath = options.baselinePath ?? loaded.gate.baseline;
+  const baselineShown = options.baselinePath
+    ? displayPath(loaded.root, options.baselinePath)
+    : loaded.gate.baselineAsWritten;
+  // A corrupt baseline is the user's to fix before minutes of search, not after.
+  const previous = await readBaseline(baselinePath, baselineShown);
+
+  const data = await timed(timing, 'loadSeconds', () => loadData(loaded));
+  const config = settleTarget(loaded, data.dataset.task, data.dataset.encoding.target.classes);
+  options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
+  return {
+    config,
+    data,
+    previous,
+    baselinePath,
+    baselineShown,
+    baselineFile: displayPath(loaded.root, baselinePath),
+    start: startFor(config, previous),
+    timing,
+  };
+}
+
+/** Where growth starts: at a baseline that answers the same question, else at min-width. */
+export function startFor(config: Config, previous: Baseline | null): StartChoice {
+  const s = config.search;
+  return chooseStart({
+    start: s.start,
+    growth: s.growth,
+    minWidth: s.minWidth,
+    maxWidth: s.maxWidth,
+    baselineWidth: previous === null ? null : (previous.result.grownWidth ?? previous.result.width),
+    settingsChanged: previous === null ? [] : settingsDifferences(previous.config.settings, resultSettings(config)),
+  });
+}
+
+export async function timed<T>(timing: Record<string, number>, name: string, work: () => Promise<T>): Promise<T> {
+  const start = performance.now();
+  try {
+    return await work();
+  } finally {
+    timing[name] = secondsFromMs(performance.now() - start);
+  }
+}
