@@ -12,7 +12,7 @@
 import { isMainThread } from 'node:worker_threads';
 import { resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { escapeLines } from './common/escape.js';
+import { escapeLines, quote } from './common/escape.js';
 import { isUserError } from './common/errors.js';
 import { EXIT } from './common/exit-codes.js';
 import { DEFAULT_CONFIG, parseInvocation, UsageError } from './cli/args.js';
@@ -20,7 +20,8 @@ import { runExport, runPredict } from './cli/model-commands.js';
 import { progressPrinter } from './cli/progress.js';
 import { usage } from './cli/usage.js';
 import { baselineRecordLine } from './report/index.js';
-import { runJob, type JobOptions } from './run.js';
+import { runMergeStage, runPlanStage, runShardStage } from './job/stages.js';
+import { runJob, type JobResult } from './run.js';
 import { runSearchWorker } from './search/index.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
 
@@ -49,26 +50,69 @@ async function main(argv: readonly string[]): Promise<number> {
     }
     const fromCwd = (p: string | undefined): string | null => (p === undefined ? null : resolve(root, p));
     const progress = progressPrinter(err);
-    const options: JobOptions = {
+    const log = (line: string): void => {
+      progress.done();
+      err.write(`${escapeLines(line)}\n`);
+    };
+    const base = {
       configPath: resolve(root, flags.config ?? DEFAULT_CONFIG),
       root,
-      mode: invocation.command === 'baseline' ? 'baseline' : 'check',
       baselinePath: fromCwd(flags.baseline),
-      reportPath: fromCwd(flags.report),
-      modelPath: fromCwd(flags.model),
+      log,
+    };
+    const running = {
       workers: invocation.workers,
       workerEntry: fileURLToPath(import.meta.url),
-      surface: 'cli',
-      configShown: flags.config ?? null,
-      log: (line) => {
-        progress.done();
-        err.write(`${escapeLines(line)}\n`);
-      },
       ...(progress.onProgress ? { onProgress: progress.onProgress } : {}),
     };
-    let result;
+    if (invocation.command === 'plan') {
+      const shards = wholeNumber('plan', 'shards', flags.shards);
+      const planned = await runPlanStage({ ...base, shards, planPath: resolve(root, flags.out!) });
+      err.write(`${escapeLines(planned.text)}\n`);
+      // What plan was asked for: the shard indexes, on stdout for a script to fan out.
+      process.stdout.write(`${JSON.stringify(planned.indexes)}\n`);
+      return EXIT.ok;
+    }
+    if (invocation.command === 'shard') {
+      const index = wholeNumber('shard', 'index', flags.index);
+      let said;
+      try {
+        said = await runShardStage({
+          ...base,
+          ...running,
+          planPath: resolve(root, flags.plan!),
+          index,
+          partPath: resolve(root, flags.out!),
+        });
+      } finally {
+        progress.done();
+      }
+      err.write(`${escapeLines(said.text)}\n`);
+      return EXIT.ok;
+    }
+    const finish = {
+      reportPath: fromCwd(flags.report),
+      modelPath: fromCwd(flags.model),
+      surface: 'cli' as const,
+      configShown: flags.config ?? null,
+    };
+    let result: JobResult;
     try {
-      result = await runJob(options);
+      result =
+        invocation.command === 'merge'
+          ? await runMergeStage({
+              ...base,
+              ...running,
+              ...finish,
+              mode: 'check',
+              partPaths: invocation.args.map((a) => resolve(root, a)),
+            })
+          : await runJob({
+              ...base,
+              ...running,
+              ...finish,
+              mode: invocation.command === 'baseline' ? 'baseline' : 'check',
+            });
     } finally {
       progress.done();
     }
@@ -89,6 +133,14 @@ async function main(argv: readonly string[]): Promise<number> {
     );
     return EXIT.internal;
   }
+}
+
+/** A flag that must be a whole number ≥ 0 (a shard count or index). */
+function wholeNumber(command: string, flag: string, value: string | undefined): number {
+  const n = value !== undefined && /^\d{1,6}$/.test(value) ? Number(value) : Number.NaN;
+  if (!Number.isInteger(n))
+    throw new UsageError(`${command}: --${flag}: expected a whole number, found ${quote(value ?? '')}`);
+  return n;
 }
 
 // This file is an entry point only (it runs on import); nothing should import it.

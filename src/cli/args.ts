@@ -12,8 +12,9 @@ import { TOOL_NAME } from '../version.js';
 
 export { DEFAULT_CONFIG };
 
-export type Command = 'check' | 'baseline' | 'export' | 'predict';
-export type FlagName = 'config' | 'report' | 'model' | 'baseline' | 'workers' | 'format' | 'out' | 'name';
+export type Command = 'check' | 'baseline' | 'plan' | 'shard' | 'merge' | 'export' | 'predict';
+export type FlagName =
+  'config' | 'report' | 'model' | 'baseline' | 'workers' | 'shards' | 'plan' | 'index' | 'format' | 'out' | 'name';
 
 export interface FlagSpec {
   value: string;
@@ -26,8 +27,14 @@ export const FLAGS: Record<FlagName, FlagSpec> = {
   model: { value: 'FILE', help: 'write the smallest network found (weights and encoding) to FILE' },
   baseline: { value: 'FILE', help: 'baseline file to use instead of the one named in the config' },
   workers: { value: 'N', help: `worker threads, 1 to ${MAX_WORKERS} (default: config, else one per core)` },
+  shards: { value: 'N', help: 'shards to split the trainings into, 1 to 256 (a matrix job each)' },
+  plan: { value: 'FILE', help: 'the plan written by `plan`' },
+  index: { value: 'I', help: 'which shard of the plan to run, from 0' },
   format: { value: 'FORMAT', help: 'what to write: c (C99 source, a float32 and an int8 path)' },
-  out: { value: 'PATH', help: 'where to write (export: a folder; predict: a CSV file, default stdout)' },
+  out: {
+    value: 'PATH',
+    help: 'where to write (plan: the plan; shard: the part; export: a folder; predict: a CSV file, default stdout)',
+  },
   name: { value: 'NAME', help: 'C name of the model: its files and the prefix of its functions (default nb_model)' },
 };
 
@@ -38,6 +45,8 @@ export interface CommandSpec {
   positionals?: string[];
   /** Flags that must be given. */
   required?: FlagName[];
+  /** After the positionals: one or more further arguments of this kind (merge's part files). */
+  rest?: string;
 }
 
 export const COMMANDS: Record<Command, CommandSpec> = {
@@ -48,6 +57,21 @@ export const COMMANDS: Record<Command, CommandSpec> = {
   baseline: {
     summary: 'search the smallest adequate width and write it as the new baseline',
     flags: ['config', 'baseline', 'workers'],
+  },
+  plan: {
+    summary: 'split the search into shards for a job matrix and write the plan',
+    flags: ['config', 'baseline', 'shards', 'out'],
+    required: ['shards', 'out'],
+  },
+  shard: {
+    summary: "run one shard of a plan and write its part (the trainings' outcomes)",
+    flags: ['config', 'baseline', 'plan', 'index', 'out', 'workers'],
+    required: ['plan', 'index', 'out'],
+  },
+  merge: {
+    summary: 'merge the parts of every shard and finish as check does',
+    flags: ['config', 'report', 'model', 'baseline', 'workers'],
+    rest: 'PART.json',
   },
   export: {
     summary: 'write firmware source for a model file (written by check --model)',
@@ -130,7 +154,7 @@ function readFlags(command: Command, args: string[]): { flags: Partial<Record<Fl
   const flags: Partial<Record<FlagName, string>> = {};
   for (const token of tokens) {
     if (token.kind === 'positional') {
-      if (positional.length < wanted.length) {
+      if (positional.length < wanted.length || spec.rest !== undefined) {
         positional.push(token.value);
         continue;
       }
@@ -158,6 +182,8 @@ function readFlags(command: Command, args: string[]): { flags: Partial<Record<Fl
       `${command}: expected ${wanted.join(' ')}, found ${positional.length === 0 ? 'nothing' : positional.map((p) => quote(p)).join(' ')}`,
     );
   }
+  if (spec.rest !== undefined && positional.length === wanted.length)
+    throw new UsageError(`${command}: expected one or more ${spec.rest} files, found none`);
   for (const flag of spec.required ?? []) {
     if (flags[flag] === undefined) throw new UsageError(`${command}: --${flag} ${FLAGS[flag].value} is required`);
   }

@@ -1,6 +1,6 @@
 /** The help text of the command line. */
 import { TOOL_NAME, TOOL_VERSION } from '../version.js';
-import { COMMANDS, FLAGS, type Command } from './args.js';
+import { COMMANDS, FLAGS, type Command, type CommandSpec } from './args.js';
 
 export function usage(command: Command | null): string {
   if (command !== null) {
@@ -8,7 +8,7 @@ export function usage(command: Command | null): string {
     const lines = [
       `${TOOL_NAME} ${command}: ${spec.summary}`,
       '',
-      `usage: ${TOOL_NAME} ${command}${(spec.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`,
+      `usage: ${TOOL_NAME} ${command}${argsText(spec)} [options]`,
       '',
       'options:',
       ...spec.flags.map((f) => `  --${`${f} ${FLAGS[f].value}`.padEnd(16)}${FLAGS[f].help}`),
@@ -22,9 +22,7 @@ export function usage(command: Command | null): string {
     'your target, and checks it against a committed baseline and a device budget.',
     '',
     'usage:',
-    ...Object.entries(COMMANDS).map(
-      ([c, s]) => `  ${TOOL_NAME} ${c.padEnd(9)}${(s.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`,
-    ),
+    ...Object.entries(COMMANDS).map(([c, s]) => `  ${TOOL_NAME} ${c.padEnd(9)}${argsText(s)} [options]`),
     `  ${TOOL_NAME} COMMAND --help   options of one command`,
     `  ${TOOL_NAME} --version`,
     '',
@@ -38,6 +36,11 @@ export function usage(command: Command | null): string {
     '',
     exitCodesText(),
   ].join('\n');
+}
+
+function argsText(spec: CommandSpec): string {
+  const rest = spec.rest === undefined ? '' : ` ${spec.rest}...`;
+  return `${(spec.positionals ?? []).map((a) => ` ${a}`).join('')}${rest}`;
 }
 
 function exitCodesText(): string {
