@@ -52,7 +52,7 @@ function describe(v: unknown): string {
   if (Array.isArray(v)) return `a list of ${v.length}`;
   if (typeof v === 'object') return 'an object';
   if (typeof v === 'string') return quote(v, 40);
-  return String(v);
+  return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
 }
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -155,8 +155,8 @@ export function checkPart(part: PartDocument, shown: string, want: PartExpectati
 }
 
 function checkJudged(j: unknown, at: string, bad: Bad): void {
-  if (!isObject(j)) bad(at, 'an object', j);
-  const o = j as Record<string, unknown>;
+  if (!isObject(j)) return bad(at, 'an object', j);
+  const o = j;
   for (const k of ['train', 'steering', 'judged']) if (typeof o[k] !== 'number') bad(`${at}.${k}`, 'a number', o[k]);
   for (const k of ['reached', 'met']) if (typeof o[k] !== 'boolean') bad(`${at}.${k}`, 'true or false', o[k]);
 }
