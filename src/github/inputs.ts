@@ -27,6 +27,47 @@ export interface ActionInputs {
   updateBaseline: boolean;
   /** null: every core. */
   workers: number | null;
+  /** Which stage runs: the whole check (default), or one stage of a job matrix. */
+  stage: Stage;
+}
+
+export type Stage =
+  | { kind: 'check' }
+  | { kind: 'plan'; shards: number }
+  | { kind: 'shard'; planPath: string; index: number }
+  | { kind: 'merge'; partsDir: string };
+
+const STAGES = ['check', 'plan', 'shard', 'merge'];
+
+/** A whole number input in a range, with a message that names the input. */
+function wholeNumberInput(name: string, value: string, min: number, max: number): number {
+  const n = /^\d{1,6}$/.test(value) ? Number(value) : Number.NaN;
+  if (!(n >= min && n <= max))
+    throw new UserError(`input ${name}: expected a whole number from ${min} to ${max}, found ${quote(value)}`, {
+      key: name,
+    });
+  return n;
+}
+
+/** The stage and its inputs; a path input is confined to the workspace like config. */
+function readStage(get: InputReader, workspace: string, workingDirectory: string): Stage {
+  const kind = get('stage') || 'check';
+  if (!STAGES.includes(kind))
+    throw new UserError(`input stage: expected one of ${STAGES.join(', ')}, found ${quote(kind)}`, { key: 'stage' });
+  const needed = (name: string, v: string): string => {
+    if (v === '') throw new UserError(`input ${name}: stage ${kind} needs it`, { key: name });
+    return v;
+  };
+  if (kind === 'plan') return { kind, shards: wholeNumberInput('shards', get('shards') || '4', 1, 256) };
+  if (kind === 'shard')
+    return {
+      kind,
+      planPath: resolveInput(workspace, workingDirectory, 'plan', needed('plan', get('plan'))),
+      index: wholeNumberInput('shard-index', needed('shard-index', get('shard-index')), 0, 255),
+    };
+  if (kind === 'merge')
+    return { kind, partsDir: resolveInput(workspace, workingDirectory, 'parts', needed('parts', get('parts'))) };
+  return { kind: 'check' };
 }
 
 const TRUE = ['true', 'True', 'TRUE'];
@@ -103,7 +144,12 @@ export function readInputs(get: InputReader, env: NodeJS.ProcessEnv = process.en
   const configPath = resolveInput(workspace, workingDirectory, 'config', configWritten);
   const configKey = relative(workspace, configPath).split(sep).join('/');
 
-  return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers };
+  const stage = readStage(get, workspace, workingDirectory);
+  if (updateBaseline && (stage.kind === 'plan' || stage.kind === 'shard'))
+    throw new UserError(`input update-baseline: only the check and merge stages write a baseline, not ${stage.kind}`, {
+      key: 'update-baseline',
+    });
+  return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers, stage };
 }
 
 /**

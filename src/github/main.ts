@@ -5,14 +5,15 @@
 import { fileURLToPath } from 'node:url';
 import * as core from '@actions/core';
 import { context } from '@actions/github';
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { escapeText } from '../common/escape.js';
 import { DEFAULT_CONFIG } from '../common/paths.js';
-import { isUserError, MAX_MESSAGE, type UserError } from '../common/errors.js';
+import { isUserError, MAX_MESSAGE, UserError } from '../common/errors.js';
 import { EXIT } from '../common/exit-codes.js';
 import { writeFileAtomic } from '../files/atomic.js';
 import type { ProgressEvent } from '../search/types.js';
+import { runMergeStage, runPlanStage, runShardStage } from '../job/stages.js';
 import { runJob, type JobResult } from '../run.js';
 import { toAnnotation, withinLimit } from './annotations.js';
 import { describeFailure, isApiFailure } from './api-failure.js';
@@ -169,8 +170,14 @@ async function failBadInput(e: UserError, inputs: ActionInputs | null): Promise<
   process.exitCode = EXIT.badInput;
   const md = failureMarkdown(e.message, 'input');
   await writeSummary(md);
-  // A stale "pass" must not linger on the pull request while the config is broken.
-  if (inputs) await postComment(inputs, md);
+  // A stale "pass" must not linger on the pull request while the config is broken (plan and shard
+  // leave that to merge, which runs after them and meets the same broken config).
+  if (inputs && writesComment(inputs)) await postComment(inputs, md);
+}
+
+/** The whole check and merge post the one comment; plan and shard never do. */
+function writesComment(inputs: ActionInputs): boolean {
+  return inputs.stage.kind === 'check' || inputs.stage.kind === 'merge';
 }
 
 async function failInternal(e: unknown, inputs: ActionInputs | null): Promise<void> {
@@ -180,7 +187,89 @@ async function failInternal(e: unknown, inputs: ActionInputs | null): Promise<vo
   process.exitCode = EXIT.internal;
   const md = failureMarkdown(err.message, 'internal');
   await writeSummary(md);
-  if (inputs) await postComment(inputs, md);
+  if (inputs && writesComment(inputs)) await postComment(inputs, md);
+}
+
+/** Search progress as log lines, one group per phase. */
+function groupedProgress(): (ev: ProgressEvent) => void {
+  let phase: ProgressEvent['phase'] | null = null;
+  const progress = (): ((ev: ProgressEvent) => void) => throttledProgress((line) => core.info(line));
+  let print = progress();
+  return (ev) => {
+    if (ev.phase !== phase) {
+      if (phase !== null) {
+        core.endGroup();
+        core.startGroup(`neuron-budget: ${ev.phase} phase`);
+      }
+      phase = ev.phase;
+      print = progress(); // the first line of each phase always shows
+    }
+    print(ev);
+  };
+}
+
+/** In a group: the data summary and search progress fold away in the log. */
+async function grouped<T>(work: () => Promise<T>): Promise<T> {
+  core.startGroup('neuron-budget: data and search');
+  try {
+    return await work();
+  } finally {
+    core.endGroup();
+  }
+}
+
+/**
+ * A matrix's first two stages: plan exposes the shard list for `strategy.matrix` and the plan
+ * file; shard exposes its part file. Neither writes a summary or a comment: merge writes the one.
+ */
+async function runMatrixStage(inputs: ActionInputs, folder: string): Promise<void> {
+  const base = {
+    configPath: inputs.configPath,
+    root: inputs.workspace,
+    baselinePath: null,
+    log: (line: string) => logUntrusted(line),
+  };
+  const stage = inputs.stage;
+  if (stage.kind === 'plan') {
+    const planPath = join(folder, 'plan.json');
+    const planned = await grouped(() => runPlanStage({ ...base, shards: stage.shards, planPath }));
+    logUntrusted(planned.text);
+    core.setOutput('shards', JSON.stringify(planned.indexes));
+    core.setOutput('plan', planPath);
+    return;
+  }
+  if (stage.kind === 'shard') {
+    const partPath = join(folder, `part-${stage.index}.json`);
+    const said = await grouped(() =>
+      runShardStage({
+        ...base,
+        planPath: stage.planPath,
+        index: stage.index,
+        partPath,
+        workers: inputs.workers,
+        workerEntry: fileURLToPath(import.meta.url),
+        onProgress: groupedProgress(),
+      }),
+    );
+    logUntrusted(said.text);
+    core.setOutput('part', partPath);
+  }
+}
+
+/** The part files merge reads: every .json file in the folder, in name order. */
+function partFiles(dir: string): string[] {
+  let names: string[];
+  try {
+    names = readdirSync(dir);
+  } catch {
+    throw new UserError(`input parts: folder ${dir} does not exist; download the shards' artifacts into it`, {
+      key: 'parts',
+    });
+  }
+  return names
+    .filter((n) => n.endsWith('.json'))
+    .sort()
+    .map((n) => join(dir, n));
 }
 
 export async function run(): Promise<void> {
@@ -189,52 +278,40 @@ export async function run(): Promise<void> {
     inputs = readInputs((name) => core.getInput(name));
     const folder = outputFolder(inputs);
     mkdirSync(folder, { recursive: true });
+    const stage = inputs.stage;
+    if (stage.kind === 'plan' || stage.kind === 'shard') {
+      core.info(`neuron-budget: ${stage.kind} stage with ${escapeText(inputs.configKey)}`);
+      await runMatrixStage(inputs, folder);
+      return;
+    }
     const reportPath = join(folder, 'report.json');
     const modelPath = join(folder, 'model.json');
     const mode = inputs.updateBaseline ? 'baseline' : 'check';
 
     core.info(
-      `neuron-budget: ${mode} with ${escapeText(inputs.configKey)} (workspace ${escapeText(inputs.workspace)})`,
+      `neuron-budget: ${stage.kind === 'merge' ? `merge (${mode})` : mode} with ${escapeText(inputs.configKey)} (workspace ${escapeText(inputs.workspace)})`,
     );
-    let phase: ProgressEvent['phase'] | null = null;
-    const progress = (): ((ev: ProgressEvent) => void) => throttledProgress((line) => core.info(line));
-    let print = progress();
-    core.startGroup('neuron-budget: data and search');
-    let result: JobResult;
-    try {
-      result = await runJob({
-        configPath: inputs.configPath,
-        root: inputs.workspace,
-        mode,
-        baselinePath: null,
-        reportPath,
-        modelPath,
-        workers: inputs.workers,
-        // The bundle this runs in is also the search's worker entry.
-        workerEntry: fileURLToPath(import.meta.url),
-        commit: process.env['GITHUB_SHA'] || null,
-        surface: 'action',
-        configShown: inputs.configKey === DEFAULT_CONFIG ? null : inputs.configKey,
-        onProgress: (ev) => {
-          if (ev.phase !== phase) {
-            if (phase !== null) {
-              core.endGroup();
-              core.startGroup(`neuron-budget: ${ev.phase} phase`);
-            }
-            phase = ev.phase;
-            print = progress(); // the first line of each phase always shows
-          }
-          print(ev);
-        },
-        log: (line) => logUntrusted(line),
-      });
-    } finally {
-      core.endGroup();
-    }
+    const options = {
+      configPath: inputs.configPath,
+      root: inputs.workspace,
+      mode,
+      baselinePath: null,
+      reportPath,
+      modelPath,
+      workers: inputs.workers,
+      workerEntry: fileURLToPath(import.meta.url),
+      commit: process.env['GITHUB_SHA'] || null,
+      surface: 'action',
+      configShown: inputs.configKey === DEFAULT_CONFIG ? null : inputs.configKey,
+      onProgress: groupedProgress(),
+      log: (line: string) => logUntrusted(line),
+    } as const;
+    const result: JobResult = await grouped(() =>
+      stage.kind === 'merge' ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir) }) : runJob(options),
+    );
 
     setOutputs(result, reportPath);
     logUntrusted(result.text);
-    // The step's result comes from the verdict alone, decided before any comment traffic.
     const verdict = result.verdict;
     if (FAILING.has(verdict)) {
       const reason = result.report.reasons[0];
@@ -242,10 +319,8 @@ export async function run(): Promise<void> {
     } else {
       core.info(`neuron-budget verdict: ${verdict}`);
     }
-    // The line escapes the file name; it starts with our own word, so it is never a workflow command.
     if (result.baselineRecord) core.info(baselineRecordLine(result.baselineRecord));
 
-    // None of these throw: they report trouble as warnings and leave the result alone.
     await writeCommentFile(join(folder, 'comment.md'), result.markdown);
     await writeSummary(result.markdown);
     await postComment(inputs, result.markdown);

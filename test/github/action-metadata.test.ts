@@ -27,6 +27,11 @@ describe('action.yml', () => {
       'update-baseline': 'false',
       'working-directory': '.',
       workers: '',
+      stage: 'check',
+      shards: '4',
+      plan: '',
+      'shard-index': '',
+      parts: '',
     });
     for (const [name, spec] of Object.entries(meta.inputs)) {
       // Input ids: a letter or _ first, then alphanumerics, - or _ (GitHub's metadata syntax).
