@@ -30863,7 +30863,7 @@ function exportC(model, name, provenance) {
 
 /***/ }),
 
-/***/ 4104:
+/***/ 4188:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -38732,62 +38732,271 @@ async function removeStaleTempFiles(path, now = Date.now()) {
     return removed;
 }
 
-// EXTERNAL MODULE: ./src/common/format.ts
-var format = __nccwpck_require__(6950);
-// EXTERNAL MODULE: ./src/common/metric.ts
-var common_metric = __nccwpck_require__(8457);
-;// CONCATENATED MODULE: ./src/common/suggest.ts
-/** "Did you mean …?" help for misspelt names (config keys, flags, commands, columns). */
-/** Levenshtein distance (insert, delete, substitute; each costs 1). @testOnly */
-function editDistance(a, b) {
-    if (a === b)
-        return 0;
-    if (a.length === 0)
-        return b.length;
-    if (b.length === 0)
-        return a.length;
-    let previous = new Array(b.length + 1);
-    let current = new Array(b.length + 1);
-    for (let j = 0; j <= b.length; j++)
-        previous[j] = j;
-    for (let i = 1; i <= a.length; i++) {
-        current[0] = i;
-        for (let j = 1; j <= b.length; j++) {
-            const substitution = previous[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1);
-            current[j] = Math.min(previous[j] + 1, current[j - 1] + 1, substitution);
+// EXTERNAL MODULE: external "node:perf_hooks"
+var external_node_perf_hooks_ = __nccwpck_require__(643);
+;// CONCATENATED MODULE: ./src/common/json-position.ts
+/**
+ * Finds where a JSON text first goes wrong. JSON.parse's messages differ between Node
+ * versions and some carry no position at all, so a small scanner (RFC 8259 grammar)
+ * gives every user the same line and column.
+ */
+
+/** Returns null when `text` is valid JSON. */
+function json_position_findJsonSyntaxProblem(text) {
+    let i = 0;
+    const n = text.length;
+    const fail = (expected) => {
+        throw new ScanError(i, expected);
+    };
+    const ws = () => {
+        while (i < n) {
+            const c = text.charCodeAt(i);
+            if (c === 0x20 || c === 0x09 || c === 0x0a || c === 0x0d)
+                i++;
+            else
+                break;
         }
-        [previous, current] = [current, previous];
+    };
+    const literal = (word) => {
+        if (text.startsWith(word, i))
+            i += word.length;
+        else
+            fail(`"${word}"`);
+    };
+    const digits = () => {
+        const start = i;
+        while (i < n && text.charCodeAt(i) >= 0x30 && text.charCodeAt(i) <= 0x39)
+            i++;
+        if (i === start)
+            fail('a digit');
+    };
+    const number = () => {
+        if (text[i] === '-')
+            i++;
+        if (text[i] === '0')
+            i++;
+        else
+            digits();
+        if (text[i] === '.') {
+            i++;
+            digits();
+        }
+        if (text[i] === 'e' || text[i] === 'E') {
+            i++;
+            if (text[i] === '+' || text[i] === '-')
+                i++;
+            digits();
+        }
+    };
+    const string = () => {
+        i++; // opening quote
+        while (i < n) {
+            const c = text.charCodeAt(i);
+            if (c === 0x22) {
+                i++;
+                return;
+            }
+            if (c < 0x20)
+                fail('a closing quote (a string cannot contain a line break or control character)');
+            if (c === 0x5c) {
+                i++;
+                const e = text[i];
+                if (e === 'u') {
+                    for (let k = 1; k <= 4; k++) {
+                        if (!/[0-9a-fA-F]/.test(text[i + k] ?? '')) {
+                            i += k;
+                            fail('four hex digits after \\u');
+                        }
+                    }
+                    i += 5;
+                }
+                else if (e !== undefined && '"\\/bfnrt'.includes(e))
+                    i++;
+                else
+                    fail('a valid escape (\\" \\\\ \\/ \\b \\f \\n \\r \\t \\uXXXX)');
+            }
+            else
+                i++;
+        }
+        fail('a closing quote');
+    };
+    const value = () => {
+        ws();
+        const c = text[i];
+        if (c === '{') {
+            i++;
+            ws();
+            if (text[i] === '}') {
+                i++;
+                return;
+            }
+            for (;;) {
+                ws();
+                if (text[i] !== '"')
+                    fail('a key in double quotes');
+                string();
+                ws();
+                if (text[i] !== ':')
+                    fail('":"');
+                i++;
+                value();
+                ws();
+                if (text[i] === ',') {
+                    i++;
+                    continue;
+                }
+                if (text[i] === '}') {
+                    i++;
+                    return;
+                }
+                fail('"," or "}"');
+            }
+        }
+        else if (c === '[') {
+            i++;
+            ws();
+            if (text[i] === ']') {
+                i++;
+                return;
+            }
+            for (;;) {
+                value();
+                ws();
+                if (text[i] === ',') {
+                    i++;
+                    continue;
+                }
+                if (text[i] === ']') {
+                    i++;
+                    return;
+                }
+                fail('"," or "]"');
+            }
+        }
+        else if (c === '"')
+            string();
+        else if (c === '-' || (c !== undefined && c >= '0' && c <= '9'))
+            number();
+        else if (c === 't')
+            literal('true');
+        else if (c === 'f')
+            literal('false');
+        else if (c === 'n')
+            literal('null');
+        else
+            fail('a value');
+    };
+    try {
+        if (text.charCodeAt(0) === 0xfeff)
+            i = 1;
+        value();
+        ws();
+        if (i < n)
+            fail('the end of the file');
+        return null;
     }
-    return previous[b.length];
+    catch (e) {
+        if (!(e instanceof ScanError))
+            throw e;
+        const { line, column } = lineAndColumn(text, e.offset);
+        const found = e.offset >= n ? 'the end of the file' : describeChar(text, e.offset);
+        return { line, column, detail: `expected ${e.expected}, found ${found}` };
+    }
+}
+class ScanError extends Error {
+    offset;
+    expected;
+    constructor(offset, expected) {
+        super(`expected ${expected} at offset ${offset}`);
+        this.offset = offset;
+        this.expected = expected;
+    }
 }
 /**
- * The candidate closest to `name` (case-insensitive, `_` and `-` treated alike), or null
- * when none is close enough to be a plausible typo: at most a third of the longer name's
- * letters may differ, but always two (a rule of thumb, no source); ties keep the first candidate.
+ * 1-based line and column as a text editor counts them: LF, CRLF and a lone CR each end a
+ * line, and the column counts characters (a character outside the BMP is one, not two).
  */
-function nearest(name, candidates) {
-    const norm = (s) => s.toLowerCase().replace(/_/g, '-');
-    const wanted = norm(name);
-    let best = null;
-    let bestDistance = Infinity;
-    for (const candidate of candidates) {
-        const d = editDistance(wanted, norm(candidate));
-        if (d < bestDistance) {
-            best = candidate;
-            bestDistance = d;
+function lineAndColumn(text, offset) {
+    let line = 1;
+    let column = 1;
+    for (let k = 0; k < offset && k < text.length; k++) {
+        const c = text.charCodeAt(k);
+        if (c === 0x0a || (c === 0x0d && text.charCodeAt(k + 1) !== 0x0a)) {
+            line++;
+            column = 1;
+        }
+        else if (c !== 0x0d && (c < 0xdc00 || c > 0xdfff)) {
+            column++;
         }
     }
-    if (best === null)
-        return null;
-    const limit = Math.max(2, Math.ceil(Math.max(wanted.length, best.length) / 3));
-    return bestDistance <= limit ? best : null;
+    return { line, column };
 }
-/** " (did you mean `x`?)" or "" when nothing is close. */
-function didYouMean(name, candidates) {
-    const match = nearest(name, candidates);
-    return match === null ? '' : ` (did you mean "${match}"?)`;
+function describeChar(text, offset) {
+    const c = text.codePointAt(offset) ?? 0;
+    if (c === 0x0a || c === 0x0d)
+        return 'a line break';
+    if (c < 0x20 || (c >= 0x7f && c < 0xa0))
+        return `control character U+${c.toString(16).toUpperCase().padStart(4, '0')}`;
+    return (0,common_escape/* quote */.hD)(String.fromCodePoint(c));
 }
 
+// EXTERNAL MODULE: ./src/common/format.ts
+var format = __nccwpck_require__(6950);
+;// CONCATENATED MODULE: ./src/files/output.ts
+/**
+ * Output files a user asked for (report, model): checked before minutes of work, written
+ * atomically after. A refusal by the file system is the user's to fix, not a bug.
+ */
+
+
+
+
+
+/** Writes an output file atomically; a refusal by the file system is the user's to fix, not a bug. */
+async function writeOutput(path, text, what, root) {
+    try {
+        await writeFileAtomic(path, text);
+    }
+    catch (error) {
+        const code = error.code;
+        const reasons = {
+            EACCES: 'permission denied',
+            EPERM: 'permission denied',
+            EROFS: 'the file system is read-only',
+            ENOSPC: 'no space left on the device',
+            EISDIR: 'it is a folder',
+            ENOENT: 'its folder does not exist',
+            ENOTDIR: 'a part of the path is not a folder',
+        };
+        const reason = code === undefined ? undefined : reasons[code];
+        if (reason === undefined)
+            throw error;
+        const shown = displayPath(root, path);
+        throw new errors/* UserError */.yo(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
+    }
+}
+/** Fails early when `path` cannot be an output file (its folder is missing, or it is a folder). */
+async function checkOutputFolder(path, what, root) {
+    const folder = (0,external_node_path_namespaceObject.dirname)(path);
+    const shown = displayPath(root, folder);
+    const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
+    if (info === null)
+        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
+            file: displayPath(root, path),
+        });
+    if (!info.isDirectory())
+        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
+            file: displayPath(root, path),
+        });
+    const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
+    if (target?.isDirectory())
+        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
+            file: displayPath(root, path),
+        });
+}
+
+// EXTERNAL MODULE: ./src/common/metric.ts
+var common_metric = __nccwpck_require__(8457);
 ;// CONCATENATED MODULE: ./src/config/spec.ts
 /**
  * Every config key the validator accepts, with its rule, default and description, as data.
@@ -38968,6 +39177,13 @@ const spec_CONFIG_SPEC = [
                 rule: { kind: 'enum', values: ['fresh', 'in-place'] },
                 default: 'fresh',
                 description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
+            },
+            {
+                name: 'start',
+                changesResult: false,
+                rule: { kind: 'enum', values: ['baseline', 'min-width'] },
+                default: 'baseline',
+                description: 'baseline: with a baseline of the same settings, decide its width and the one below first, and move only as far as the answer needs; min-width: try every width from min-width up.',
             },
             {
                 name: 'activation',
@@ -39164,6 +39380,2911 @@ const DEFAULT_JUDGING = 0.2;
 /** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
 function derivedJudging(validation) {
     return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
+}
+
+;// CONCATENATED MODULE: ./src/gate/settings.ts
+/**
+ * The config settings that change the search's answer, and their fingerprint. Two runs
+ * with different settings answer different questions, so the gate says so rather than
+ * comparing their widths silently. Worker count and time budget are left out: they
+ * change how long the search takes, not what it finds. The data file's path is left out
+ * too: the data are compared by content (fingerprint and profile, see data-changes.ts),
+ * so a renamed file with the same rows is the same question, and a file with other rows
+ * shows up as a data change, which is what the gate exists to measure.
+ */
+
+
+
+
+function resultSettings(config) {
+    const out = {};
+    for (const section of spec_CONFIG_SPEC) {
+        const values = config[section.name];
+        for (const key of section.keys) {
+            if (!key.changesResult)
+                continue;
+            out[`${section.name}.${key.name}`] = settingValue(values[fieldName(key.name)]);
+        }
+    }
+    // The order of ignored columns does not matter; the order of features does (input order).
+    const ignore = out['data.ignore'];
+    if (Array.isArray(ignore))
+        ignore.sort();
+    return out;
+}
+/** A setting as the baseline records it: a plain value, a list of texts, or a structured value as its canonical text. */
+function settingValue(value) {
+    if (value === undefined || value === null)
+        return null;
+    if (Array.isArray(value) && value.every((v) => typeof v === 'string'))
+        return [...value];
+    if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean')
+        return value;
+    // target.min-recall: {every} or {classes: [...]}, written the way the config states it.
+    const rule = value;
+    if (typeof rule.every === 'number')
+        return rule.every;
+    return JSON.stringify(Object.fromEntries((rule.classes ?? []).map((c) => [c.label, c.min])));
+}
+/** sha256 hex of the settings in canonical form (keys sorted). */
+function settingsFingerprint(settings) {
+    const keys = Object.keys(settings).sort();
+    const canonical = JSON.stringify(keys.map((k) => [k, settings[k]]));
+    return (0,external_node_crypto_.createHash)('sha256').update(canonical, 'utf8').digest('hex');
+}
+/** Settings that differ, as "key: before → after", in key order. */
+function settingsDifferences(before, after) {
+    const keys = [...new Set([...Object.keys(before), ...Object.keys(after)])].sort();
+    const out = [];
+    for (const k of keys) {
+        const a = show(before[k]);
+        const b = show(after[k]);
+        if (a !== b)
+            out.push(`${k}: ${a} → ${b}`);
+    }
+    return out;
+}
+function show(v) {
+    if (v === undefined)
+        return '(not set)';
+    if (v === null)
+        return '(default)';
+    // Column names are the repository's strings: each is clipped, and long lists would drown the
+    // sentence they appear in. Escaping is the renderer's (text, Markdown), as for every reason.
+    const s = Array.isArray(v) ? `[${v.map((name) => (0,common_escape/* clip */.$Q)(name, 40)).join(', ')}]` : (0,common_escape/* clip */.$Q)(String(v), 120);
+    return (0,common_escape/* clip */.$Q)(s, 120);
+}
+
+;// CONCATENATED MODULE: ./src/gate/compare.ts
+
+
+
+function compare(input) {
+    const { result, target, search, gate, baseline } = input;
+    const settingsChanged = baseline ? settingsDifferences(baseline.config.settings, input.settings) : [];
+    const flags = [];
+    if (settingsChanged.length > 0) {
+        flags.push(`The settings that shape the result differ from the baseline's (${settingsChanged.join('; ')}), so this compares answers to different questions.`);
+    }
+    if (result.outcome === 'inconclusive') {
+        const how = result.notes.length > 0 ? ` ${result.notes.map(sentence).join(' ')}` : '';
+        return {
+            verdict: 'inconclusive',
+            reasons: [`The search ran out of budget before it could decide the smallest adequate width.${how}`, ...flags],
+            settingsChanged,
+        };
+    }
+    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
+        const best = bestSeen(result.widths, target.metric);
+        const bestText = best ? `; the best network reached ${(0,format/* formatMetric */.gI)(best.value)} (width ${best.width})` : '';
+        const networks = search.required === 1 ? 'a network that meets' : `${search.required} networks that meet`;
+        return {
+            verdict: 'fail',
+            reasons: [
+                `No width from ${search.minWidth} to ${search.maxWidth} has ${networks} ${(0,format/* targetPhrase */.Lx)(target.metric, target.threshold)}${bestText}.`,
+                ...result.notes.map(sentence),
+                ...flags,
+            ],
+            settingsChanged,
+        };
+    }
+    const width = result.width;
+    const failures = [];
+    if (gate.maxWidth !== null && width > gate.maxWidth) {
+        failures.push(`Needs ${(0,format/* neurons */.nO)(width)}; the device budget is ${gate.maxWidth}.`);
+    }
+    failures.push(...budgetFailures(input));
+    if (!baseline) {
+        if (failures.length > 0)
+            return { verdict: 'fail', reasons: [...failures, ...flags], settingsChanged };
+        return {
+            verdict: 'new',
+            reasons: [
+                `Needs ${(0,format/* neurons */.nO)(width)}; there is no baseline yet to compare with, so record this result as the baseline.`,
+                ...flags,
+            ],
+            settingsChanged,
+        };
+    }
+    const before = baseline.result.width;
+    const growth = width - before;
+    const allowed = gate.allowedGrowth;
+    const allowance = allowed === 0 ? 'no growth is allowed' : `the allowed growth is ${allowed}`;
+    let comparison;
+    if (growth > allowed) {
+        failures.push(`Needs ${(0,format/* neurons */.nO)(width)}, ${growth} more than the baseline's ${before}; ${allowance}.`);
+        comparison = '';
+    }
+    else if (growth > 0) {
+        comparison = `Needs ${(0,format/* neurons */.nO)(width)}, ${growth} more than the baseline's ${before}, within the allowed growth of ${allowed}.`;
+    }
+    else if (growth < 0) {
+        comparison = `Needs ${(0,format/* neurons */.nO)(width)}, ${-growth} fewer than the baseline's ${before}; refresh the baseline to keep the gain.`;
+    }
+    else {
+        comparison = `Needs ${(0,format/* neurons */.nO)(width)}, the same as the baseline.`;
+    }
+    const tolerance = toleranceFlag(result.metric, baseline, target.metric, gate.metricTolerance);
+    if (tolerance)
+        flags.push(tolerance);
+    if (failures.length > 0) {
+        const context = comparison === '' ? [] : [comparison];
+        return { verdict: 'fail', reasons: [...failures, ...context, ...flags], settingsChanged };
+    }
+    return { verdict: growth < 0 ? 'improved' : 'pass', reasons: [comparison, ...flags], settingsChanged };
+}
+function toleranceFlag(value, baseline, metric, tolerance) {
+    const before = baseline.result.metric.value;
+    const worse = (0,common_metric/* higherIsBetter */.i2)(metric) ? before - value : value - before;
+    // A tiny epsilon so that a difference equal to the tolerance (up to rounding) is not flagged.
+    if (worse <= tolerance + 1e-12)
+        return null;
+    return `Flag (does not fail the gate): ${metric} at the chosen width is ${(0,format/* formatMetric */.gI)(value)}, ${(0,format/* formatMetric */.gI)(worse)} worse than the baseline's ${(0,format/* formatMetric */.gI)(before)}; the tolerance is ${(0,format/* formatMetric */.gI)(tolerance)}.`;
+}
+function bestSeen(widths, metric) {
+    let best = null;
+    for (const w of widths) {
+        if (w.best === null)
+            continue;
+        const better = best === null || ((0,common_metric/* higherIsBetter */.i2)(metric) ? w.best > best.value : w.best < best.value);
+        if (better)
+            best = { width: w.width, value: w.best };
+    }
+    return best;
+}
+function sentence(s) {
+    const t = s.trim();
+    const capital = t.charAt(0).toUpperCase() + t.slice(1);
+    return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}
+/** One sentence per byte or operation budget the witness exceeds, naming the figure and the budget. */
+function budgetFailures(input) {
+    const { gate, device } = input;
+    if (!device)
+        return [];
+    const { cost, precision } = device;
+    const out = [];
+    const at = `(width ${input.result.width})`;
+    if (gate.maxFlashBytes != null && cost.flashBytes[precision] > gate.maxFlashBytes) {
+        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.flashBytes[precision])} flash bytes for its ${precision} weights ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxFlashBytes)} bytes.`);
+    }
+    if (gate.maxRamBytes != null && cost.ramBytes[precision] > gate.maxRamBytes) {
+        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.ramBytes[precision])} RAM bytes for one ${precision} inference ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxRamBytes)} bytes.`);
+    }
+    if (gate.maxMacs != null && cost.macs > gate.maxMacs) {
+        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.macs)} multiply-accumulates per inference ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxMacs)}.`);
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/gate/data-changes.ts
+/**
+ * A numeric feature counts as shifted when its mean moved by more than this many
+ * baseline standard deviations. Half a standard deviation is a common rule of thumb
+ * for a "medium" shift (common practice, no single source).
+ */
+const MEAN_SHIFT_IN_STD = 0.5;
+/**
+ * A numeric feature's range counts as widened when it grew on a side (a new minimum below the
+ * baseline's, or a new maximum above it) by more than this many baseline standard deviations.
+ * A rule of thumb (common practice, no single source): the extremes of a sample wander by chance
+ * as rows are added (for normal data and a thousand rows the sample maximum's spread is about
+ * σ/√(2 ln n) ≈ 0.27σ, from extreme-value theory; figure from memory), so a new extreme within
+ * a few hundredths of σ of the old one is no change a reviewer should read about, while one
+ * half a σ beyond it puts rows where the baseline's networks never saw any.
+ */
+const RANGE_GROWTH_IN_STD = 0.5;
+function dataChanges(before, after, fingerprints, files = { before: '', after: '' }) {
+    const columnsBefore = new Set(before.columns);
+    const columnsAfter = new Set(after.columns);
+    const columnsAdded = after.columns.filter((c) => !columnsBefore.has(c));
+    const columnsRemoved = before.columns.filter((c) => !columnsAfter.has(c));
+    let classes = null;
+    const classesAppeared = [];
+    const classesVanished = [];
+    if (before.classes !== null || after.classes !== null) {
+        const b = tableOf(before.classes);
+        const a = tableOf(after.classes);
+        const labels = [...new Set([...b.keys(), ...a.keys()])].sort(byCodeUnit);
+        classes = labels.map((label) => ({ label, before: b.get(label) ?? 0, after: a.get(label) ?? 0 }));
+        for (const label of labels) {
+            if (!b.has(label))
+                classesAppeared.push(label);
+            if (!a.has(label))
+                classesVanished.push(label);
+        }
+    }
+    const features = [];
+    const categories = [];
+    const featuresBefore = tableOf(before.features);
+    const featuresAfter = tableOf(after.features);
+    const shared = [...featuresAfter.keys()].filter((name) => featuresBefore.has(name)).sort(byCodeUnit);
+    for (const name of shared) {
+        const b = featuresBefore.get(name);
+        const a = featuresAfter.get(name);
+        if (b.kind === 'numeric' && a.kind === 'numeric') {
+            const delta = atMostMax(Math.abs(a.mean - b.mean));
+            const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
+            const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
+            const rangeGrowth = growthOf(b, a);
+            const rangeWidened = grewMeaningfully(rangeGrowth.below, b.std) || grewMeaningfully(rangeGrowth.above, b.std);
+            if (meanMoved || rangeWidened) {
+                features.push({
+                    name,
+                    meanBefore: b.mean,
+                    meanAfter: a.mean,
+                    stdBefore: b.std,
+                    shiftInStd,
+                    meanMoved,
+                    rangeBefore: [b.min, b.max],
+                    rangeAfter: [a.min, a.max],
+                    rangeWidened,
+                    rangeGrowth,
+                });
+            }
+        }
+        else if (b.kind === 'categorical' && a.kind === 'categorical') {
+            const countsBefore = tableOf(b.counts);
+            const countsAfter = tableOf(a.counts);
+            const appeared = [...countsAfter.keys()].filter((c) => !countsBefore.has(c)).sort(byCodeUnit);
+            const vanished = [...countsBefore.keys()].filter((c) => !countsAfter.has(c)).sort(byCodeUnit);
+            if (appeared.length > 0 || vanished.length > 0)
+                categories.push({ feature: name, appeared, vanished });
+        }
+    }
+    return {
+        changed: fingerprints.before !== fingerprints.after,
+        file: files.before === files.after ? null : { before: files.before, after: files.after },
+        rows: { before: before.rows, after: after.rows },
+        classes,
+        classesAppeared,
+        classesVanished,
+        features,
+        categories,
+        columnsAdded,
+        columnsRemoved,
+    };
+}
+/** How far the range reaches beyond the baseline's on each side, in the feature's units and in baseline stds. */
+function growthOf(b, a) {
+    const below = atMostMax(Math.max(0, b.min - a.min));
+    const above = atMostMax(Math.max(0, a.max - b.max));
+    const inStd = (g) => (b.std > 0 ? atMostMax(g / b.std) : null);
+    return { below, above, belowInStd: inStd(below), aboveInStd: inStd(above) };
+}
+/** A side grew meaningfully: by more than RANGE_GROWTH_IN_STD baseline stds (any growth for a constant feature). */
+function grewMeaningfully(growth, std) {
+    return std > 0 ? growth > RANGE_GROWTH_IN_STD * std : growth > 0;
+}
+/**
+ * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
+ * is read with JSON.parse, so a label may be `constructor` or `__proto__`: only own keys count.
+ */
+function tableOf(table) {
+    return new Map(table === null ? [] : Object.entries(table));
+}
+/**
+ * Two finite means read from a baseline file can differ by more than the largest float; the
+ * shift is then "at least the largest float", never Infinity (which JSON cannot hold).
+ */
+function atMostMax(x) {
+    return Math.min(x, Number.MAX_VALUE);
+}
+/** Locale-independent order, so the summary reads the same on every machine. */
+function byCodeUnit(a, b) {
+    return a < b ? -1 : a > b ? 1 : 0;
+}
+
+;// CONCATENATED MODULE: ./src/gate/evaluate.ts
+
+
+
+function evaluateGate(input) {
+    const { result, loaded, config, baseline } = input;
+    const cost = input.cost ?? null;
+    const comparison = compare({
+        result,
+        target: config.target,
+        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth, required: config.search.required },
+        gate: config.gate,
+        baseline,
+        settings: resultSettings(config),
+        device: cost === null ? null : { cost, precision: config.target.precision ?? 'float32' },
+    });
+    const changes = baseline
+        ? dataChanges(baseline.data.profile, loaded.profile, { before: baseline.data.fingerprint, after: loaded.fingerprint }, { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') })
+        : null;
+    return { ...comparison, changes, baseline };
+}
+
+;// CONCATENATED MODULE: ./schema/baseline.schema.json
+const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."},"decisive":{"type":["number","null"],"description":"The search.required-th best judged metric over the networks of this width: at or past the threshold exactly when the width is adequate (recall floors aside); null when fewer finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
+;// CONCATENATED MODULE: ./src/common/json-schema.ts
+/**
+ * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
+ * file format has one definition: the schema editors read is the one the tool enforces. Only
+ * the keywords our schemas use are understood (type, const, enum, properties, required,
+ * additionalProperties, items, minItems, maxItems, minimum, maximum, pattern, maxLength, $ref
+ * into $defs, anyOf, oneOf); a schema that uses any other keyword is refused when it is loaded,
+ * so a schema cannot silently say more than is checked.
+ *
+ * The first problem is reported as `key: expected …, found …`, with the key written as a path
+ * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
+ */
+
+class json_schema_SchemaProblem extends Error {
+    key;
+    expected;
+    found;
+    constructor(
+    /** Where, as a path (`result.width`, `history[0]`); '(top level)' for the document itself. */
+    key, expected, 
+    /** What was found, described for a reader. */
+    found) {
+        super(`${key}: expected ${expected}, found ${found}`);
+        this.key = key;
+        this.expected = expected;
+        this.found = found;
+        this.name = 'SchemaProblem';
+    }
+}
+const KNOWN = new Set([
+    'title',
+    'description',
+    'type',
+    'const',
+    'enum',
+    'properties',
+    'required',
+    'additionalProperties',
+    'items',
+    'minItems',
+    'maxItems',
+    'minimum',
+    'maximum',
+    'exclusiveMinimum',
+    'minProperties',
+    'pattern',
+    'maxLength',
+    '$ref',
+    'anyOf',
+    'oneOf',
+    '$defs',
+    '$schema',
+    '$id',
+    '$comment',
+]);
+/** A validator for documents of one schema. Throws when the schema uses a keyword it does not check. */
+function schemaValidator(root) {
+    checkKeywords(root, '#');
+    const patterns = new Map();
+    const regex = (p) => {
+        let re = patterns.get(p);
+        if (re === undefined)
+            patterns.set(p, (re = new RegExp(p, 'u')));
+        return re;
+    };
+    const resolve = (node) => {
+        if (node.$ref === undefined)
+            return node;
+        const m = /^#\/\$defs\/(.+)$/.exec(node.$ref);
+        const target = m ? root.$defs?.[m[1]] : undefined;
+        if (target === undefined)
+            throw new Error(`schema: unresolved $ref ${node.$ref}`);
+        return { ...target, ...(node.title ? { title: node.title } : {}) };
+    };
+    const check = (raw, value, key) => {
+        const node = resolve(raw);
+        const fail = (expected, found = value) => {
+            throw new json_schema_SchemaProblem(key || '(top level)', node.title ?? expected, describe(found));
+        };
+        if (node.const !== undefined && value !== node.const)
+            fail(JSON.stringify(node.const));
+        if (node.enum !== undefined && !node.enum.includes(value))
+            fail(`one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`);
+        if (node.type !== undefined) {
+            const types = Array.isArray(node.type) ? node.type : [node.type];
+            if (value === null && types.includes('null'))
+                return;
+            if (!types.some((t) => hasType(value, t)))
+                fail(typePhrase(node, types.filter((t) => t !== 'null')));
+        }
+        if (typeof value === 'number') {
+            if (node.minimum !== undefined && value < node.minimum)
+                fail(typePhrase(node, types(node)));
+            if (node.maximum !== undefined && value > node.maximum)
+                fail(typePhrase(node, types(node)));
+            if (node.exclusiveMinimum !== undefined && value <= node.exclusiveMinimum)
+                fail(typePhrase(node, types(node)));
+        }
+        if (typeof value === 'string') {
+            if (node.maxLength !== undefined && value.length > node.maxLength)
+                fail(`a string of at most ${node.maxLength} characters`);
+            if (node.pattern !== undefined && !regex(node.pattern).test(value))
+                fail(`a string matching ${node.pattern}`);
+        }
+        if (Array.isArray(value)) {
+            if (node.maxItems !== undefined && value.length > node.maxItems)
+                fail(`a list of at most ${node.maxItems} entries`, value.length);
+            if (node.minItems !== undefined && value.length < node.minItems)
+                fail(`a list of at least ${node.minItems} entries`, value.length);
+            if (node.items !== undefined)
+                value.forEach((v, i) => check(node.items, v, `${key}[${i}]`));
+        }
+        if (isObject(value)) {
+            const props = node.properties ?? {};
+            if (node.minProperties !== undefined && Object.keys(value).length < node.minProperties) {
+                fail(`an object with at least ${node.minProperties} key${node.minProperties === 1 ? '' : 's'}`);
+            }
+            for (const [name, child] of Object.entries(value)) {
+                if (Object.hasOwn(props, name))
+                    check(props[name], child, join(key, name));
+                else if (node.additionalProperties === false) {
+                    throw new json_schema_SchemaProblem(join(key, name), `no such key (allowed: ${Object.keys(props).join(', ')})`, describe(child));
+                }
+                else if (typeof node.additionalProperties === 'object')
+                    check(node.additionalProperties, child, join(key, name));
+            }
+            // What is there is checked before what is missing: a wrong value says more than a later absent key.
+            for (const name of node.required ?? []) {
+                if (!Object.hasOwn(value, name))
+                    throw new json_schema_SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
+            }
+        }
+        if (node.anyOf !== undefined) {
+            if (!node.anyOf.some((branch) => passes(branch, value, key)))
+                fail(node.anyOf.map((b) => expectedOf(resolve(b))).join(' or '));
+        }
+        if (node.oneOf !== undefined) {
+            // Our oneOf branches are told apart by a `kind` constant: check the branch the document names.
+            const kinds = node.oneOf.map((b) => resolve(b).properties?.['kind']?.const);
+            if (!kinds.includes(undefined) && isObject(value)) {
+                const at = kinds.indexOf(value['kind']);
+                if (at < 0)
+                    throw new json_schema_SchemaProblem(join(key, 'kind'), `one of ${kinds.map((k) => JSON.stringify(k)).join(', ')}`, describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING));
+                check(node.oneOf[at], value, key);
+            }
+            else {
+                // When the value's type leaves one branch (null or an object, say), check that one: its error is the precise one.
+                const typed = node.oneOf.filter((b) => {
+                    const t = resolve(b).type;
+                    const all = t === undefined ? [] : Array.isArray(t) ? t : [t];
+                    return all.length === 0 || all.some((x) => hasType(value, x));
+                });
+                if (typed.length === 1)
+                    check(typed[0], value, key);
+                else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
+                    fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
+                }
+            }
+        }
+    };
+    const passes = (node, value, key) => {
+        try {
+            check(node, value, key);
+            return true;
+        }
+        catch (e) {
+            if (e instanceof json_schema_SchemaProblem)
+                return false;
+            throw e;
+        }
+    };
+    return (value) => check(root, value, '');
+}
+const MISSING = Symbol('missing');
+const MISSING_KEY = 'nothing (the key is missing)';
+function checkKeywords(node, where) {
+    for (const [k, v] of Object.entries(node)) {
+        if (!KNOWN.has(k))
+            throw new Error(`schema: keyword ${k} at ${where} is not checked by schemaValidator`);
+        if (k === 'properties' || k === '$defs')
+            for (const [name, child] of Object.entries(v))
+                checkKeywords(child, `${where}/${k}/${name}`);
+        if ((k === 'items' || k === 'additionalProperties') && typeof v === 'object')
+            checkKeywords(v, `${where}/${k}`);
+        if (k === 'anyOf' || k === 'oneOf')
+            v.forEach((child, i) => checkKeywords(child, `${where}/${k}/${i}`));
+    }
+}
+function types(node) {
+    const t = node.type === undefined ? [] : Array.isArray(node.type) ? node.type : [node.type];
+    return t.filter((x) => x !== 'null');
+}
+function hasType(value, type) {
+    switch (type) {
+        case 'object':
+            return isObject(value);
+        case 'array':
+            return Array.isArray(value);
+        case 'string':
+            return typeof value === 'string';
+        case 'number':
+            return typeof value === 'number' && Number.isFinite(value);
+        case 'integer':
+            return typeof value === 'number' && Number.isInteger(value);
+        case 'boolean':
+            return typeof value === 'boolean';
+        case 'null':
+            return value === null;
+    }
+}
+/** "an integer of at least 1", "a number", "a list", … */
+function typePhrase(node, ts) {
+    const bound = () => {
+        const parts = [];
+        if (node.minimum !== undefined && node.maximum !== undefined)
+            return ` from ${node.minimum} to ${node.maximum}`;
+        if (node.exclusiveMinimum !== undefined)
+            parts.push(` above ${node.exclusiveMinimum}`);
+        if (node.minimum !== undefined)
+            parts.push(` of at least ${node.minimum}`);
+        if (node.maximum !== undefined)
+            parts.push(` of at most ${node.maximum}`);
+        return parts.join('');
+    };
+    const one = (t) => {
+        switch (t) {
+            case 'object':
+                return 'an object';
+            case 'array':
+                return 'a list';
+            case 'string':
+                return 'a string';
+            case 'number':
+                return `a number${bound()}`;
+            case 'integer':
+                return `an integer${bound()}`;
+            case 'boolean':
+                return 'true or false';
+            case 'null':
+                return 'null';
+        }
+    };
+    return ts.length === 0 ? 'a value' : ts.map(one).join(' or ');
+}
+function expectedOf(node) {
+    if (node.title !== undefined)
+        return node.title;
+    if (node.const !== undefined)
+        return JSON.stringify(node.const);
+    if (node.enum !== undefined)
+        return `one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`;
+    return typePhrase(node, types(node));
+}
+function join(key, child) {
+    return key === '' ? child : `${key}.${child}`;
+}
+function isObject(v) {
+    return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+/** A found value for a message: short, and never a repository string in full. */
+function describe(v) {
+    if (v === MISSING)
+        return 'nothing';
+    if (v === null)
+        return 'null';
+    if (Array.isArray(v))
+        return 'a list';
+    if (typeof v === 'object')
+        return 'an object';
+    if (typeof v === 'string')
+        return (0,common_escape/* quote */.hD)(v, 60);
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
+}
+
+;// CONCATENATED MODULE: ./src/gate/types.ts
+const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
+const BASELINE_VERSION = 2;
+/** Oldest history entries are dropped beyond this many. */
+const HISTORY_CAP = 100;
+
+;// CONCATENATED MODULE: ./src/gate/baseline.ts
+/**
+ * The baseline file: build it from a run, carry its history forward, read it back with
+ * clear errors, and write it atomically. Everything here is pure except readBaseline
+ * and writeBaseline; dates are passed in, never read from a clock.
+ */
+
+
+
+
+
+
+
+
+
+/**
+ * Why this run cannot become a baseline, or null when it can. A baseline only ever
+ * records a width that was found: a failed or unfinished search leaves the file as it was.
+ */
+function whyNotRecordable(result) {
+    if (result.outcome === 'inconclusive') {
+        return 'the search did not finish, so there is no result to record; the baseline file was left unchanged';
+    }
+    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
+        return 'no width reached the target, so there is no result to record; the baseline file was left unchanged';
+    }
+    return null;
+}
+/**
+ * The baseline that accepting `current` produces: its headline and curve, with the
+ * previous baseline's history carried forward and this result appended (newest last,
+ * oldest dropped beyond HISTORY_CAP). Throws if the run is not recordable; check
+ * whyNotRecordable first.
+ */
+function nextBaseline(previous, current, meta) {
+    const { result, loaded, config } = current;
+    const problem = whyNotRecordable(result);
+    if (problem !== null || result.width === null || result.metric === null) {
+        throw new Error(`nextBaseline called with an unrecordable result: ${problem ?? 'no width'}`);
+    }
+    const width = result.width;
+    const atWidth = result.widths.find((w) => w.width === width) ?? null;
+    const settings = resultSettings(config);
+    const entry = {
+        width,
+        metric: result.metric,
+        rows: loaded.profile.rows,
+        data: loaded.fingerprint,
+        commit: commitHash(meta.commit),
+        date: meta.date.toISOString(),
+    };
+    const history = [...(previous?.history ?? []), entry].slice(-HISTORY_CAP);
+    return {
+        schema: BASELINE_SCHEMA,
+        tool: { name: 'neuron-budget', version: meta.toolVersion },
+        result: {
+            width,
+            metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
+            grownWidth: result.grownWidth,
+            met: atWidth ? atWidth.met : 0,
+            restarts: atWidth ? atWidth.restarts : 0,
+            searchSeconds: result.timing.searchSeconds,
+        },
+        widths: result.widths.map((w) => ({
+            width: w.width,
+            restarts: w.restarts,
+            met: w.met,
+            adequate: w.adequate,
+            best: w.best,
+            decisive: w.decisive,
+        })),
+        data: {
+            file: config.data.pathAsWritten.replace(/\\/g, '/'),
+            rows: loaded.profile.rows,
+            fingerprint: loaded.fingerprint,
+            profile: loaded.profile,
+        },
+        config: { fingerprint: settingsFingerprint(settings), settings },
+        history,
+    };
+}
+/** A commit id as the history stores it (lower-case hex), or null when it is not one. */
+function commitHash(commit) {
+    if (commit === null)
+        return null;
+    const c = commit.trim().toLowerCase();
+    return /^[0-9a-f]{4,64}$/.test(c) ? c : null;
+}
+function serializeBaseline(baseline) {
+    return `${JSON.stringify(baseline, null, 2)}\n`;
+}
+/**
+ * Writes the baseline atomically (temp file beside it, then rename). The text is first
+ * read back through the same validation a later run will use, so a value JSON cannot
+ * hold (NaN becomes null) can never produce a baseline that the next run rejects.
+ */
+async function writeBaseline(path, baseline) {
+    const text = serializeBaseline(baseline);
+    try {
+        parseBaseline(text, path);
+    }
+    catch (e) {
+        throw new Error(`refusing to write a baseline that would not read back: ${e.message}`, { cause: e });
+    }
+    await writeFileAtomic(path, text);
+}
+/**
+ * Reads a baseline. Missing file → null (the verdict is then `new`). A file that is not
+ * valid JSON, of another schema version, or of the wrong shape → UserError naming the
+ * file (`shown`, the path as the user wrote it), and the line/column or key.
+ */
+async function readBaseline(path, shown = path) {
+    let text;
+    try {
+        text = await (0,promises_namespaceObject.readFile)(path, 'utf8');
+    }
+    catch (e) {
+        const code = e.code;
+        if (code === 'ENOENT')
+            return null;
+        if (code === 'EISDIR')
+            throw new errors/* UserError */.yo(`${shown}: expected a baseline file, found a folder`, { file: shown });
+        throw new errors/* UserError */.yo(`${shown}: cannot read the baseline file (${code ?? 'unknown error'})`, { file: shown });
+    }
+    return parseBaseline(text, shown);
+}
+/** Parses and validates baseline text; `shown` names the file in messages. */
+function parseBaseline(text, shown) {
+    if (text.trim() === '') {
+        throw new errors/* UserError */.yo(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
+            file: shown,
+        });
+    }
+    const syntax = json_position_findJsonSyntaxProblem(text);
+    if (syntax) {
+        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the baseline is not valid JSON: ${syntax.detail}`, {
+            file: shown,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    }
+    const value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    checkSchemaVersion(value, shown);
+    validateBaselineShape(value, shown);
+    return value;
+}
+function checkSchemaVersion(value, shown) {
+    if (!baseline_isObject(value)) {
+        throw new errors/* UserError */.yo(`${shown}: expected a neuron-budget baseline (a JSON object), found ${baseline_describe(value)}`, {
+            file: shown,
+        });
+    }
+    const schema = 'schema' in value ? value['schema'] : baseline_MISSING;
+    const match = typeof schema === 'string' ? /^neuron-budget\/baseline@(\d+)$/.exec(schema) : null;
+    if (!match) {
+        throw new errors/* UserError */.yo(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
+    }
+    const version = Number(match[1]);
+    if (version > BASELINE_VERSION) {
+        throw new errors/* UserError */.yo(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
+    }
+    if (version < BASELINE_VERSION) {
+        throw new errors/* UserError */.yo(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
+    }
+    if (version !== BASELINE_VERSION) {
+        throw new errors/* UserError */.yo(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
+            file: shown,
+            key: 'schema',
+        });
+    }
+}
+// ---- shape: schema/baseline.schema.json is the one definition ----
+const checkShape = schemaValidator(baseline_schema_namespaceObject);
+function validateBaselineShape(value, shown) {
+    try {
+        checkShape(value);
+    }
+    catch (e) {
+        if (!(e instanceof json_schema_SchemaProblem))
+            throw e;
+        throw new errors/* UserError */.yo(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
+    }
+}
+const baseline_MISSING = Symbol('missing');
+function baseline_isObject(v) {
+    return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+function baseline_describe(v) {
+    if (v === baseline_MISSING)
+        return 'nothing';
+    if (v === null)
+        return 'null';
+    if (Array.isArray(v))
+        return 'a list';
+    if (typeof v === 'object')
+        return 'an object';
+    if (typeof v === 'string')
+        return (0,common_escape/* quote */.hD)(v, 60);
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
+}
+
+// EXTERNAL MODULE: external "node:os"
+var external_node_os_ = __nccwpck_require__(8161);
+;// CONCATENATED MODULE: external "node:timers/promises"
+const external_node_timers_promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:timers/promises");
+;// CONCATENATED MODULE: ./src/files/lock.ts
+/**
+ * An exclusive lock beside a file, `.NAME.neuron-budget.lock`, for a read-compare-write that
+ * must not interleave with another process's. Created with O_EXCL, so exactly one process
+ * holds it; it records who holds it, so a lock whose holder died can be taken over:
+ *
+ * - its process is gone (same machine, by PID), or
+ * - it is older than STALE_LOCK_AGE_MS (any machine; the section it guards takes
+ *   milliseconds), or
+ * - it is unreadable and older than a few seconds (a holder killed between create and write).
+ */
+
+
+
+
+
+
+const LOCK_SUFFIX = '.neuron-budget.lock';
+/** A lock this old is stale, whoever holds it. @testOnly */
+const STALE_LOCK_AGE_MS = 10 * 60 * 1000;
+/** A lock file without readable content (its holder died before writing it) is stale after this. */
+const EMPTY_LOCK_AGE_MS = 5_000;
+function lockPathFor(path) {
+    return (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}${LOCK_SUFFIX}`);
+}
+/** The lock is held by a live process and was not released in time. */
+class LockBusy extends Error {
+    lockPath;
+    owner;
+    constructor(lockPath, owner) {
+        super(`${lockPath} is held${owner ? ` by process ${owner.pid}` : ''}`);
+        this.lockPath = lockPath;
+        this.owner = owner;
+        this.name = 'LockBusy';
+    }
+}
+async function acquireLock(path, options = {}) {
+    const lockPath = lockPathFor(path);
+    const waitMs = options.waitMs ?? 10_000;
+    const pollMs = options.pollMs ?? 25;
+    const record = {
+        pid: process.pid,
+        host: (0,external_node_os_.hostname)(),
+        token: (0,external_node_crypto_.randomBytes)(8).toString('hex'),
+        since: new Date().toISOString(),
+    };
+    const text = `${JSON.stringify(record)}\n`;
+    const started = Date.now();
+    for (;;) {
+        try {
+            const handle = await (0,promises_namespaceObject.open)(lockPath, 'wx');
+            try {
+                await handle.writeFile(text, 'utf8');
+            }
+            finally {
+                await handle.close();
+            }
+            return { release: () => releaseLock(lockPath, text) };
+        }
+        catch (e) {
+            if (e.code !== 'EEXIST')
+                throw e;
+        }
+        const held = await inspect(lockPath);
+        if (held === null)
+            continue; // released between our try and the look
+        if (held.stale) {
+            // Re-read just before removing: never remove a lock someone else took over meanwhile.
+            const again = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+            if (again === held.text)
+                await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+            continue;
+        }
+        if (Date.now() - started >= waitMs)
+            throw new LockBusy(lockPath, held.owner);
+        await (0,external_node_timers_promises_namespaceObject.setTimeout)(pollMs);
+    }
+}
+/** Removes the lock only while it is still ours. */
+async function releaseLock(lockPath, text) {
+    const now = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+    if (now === text)
+        await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+}
+async function inspect(lockPath) {
+    let text;
+    let age;
+    try {
+        text = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8');
+        age = Date.now() - (await (0,promises_namespaceObject.stat)(lockPath)).mtimeMs;
+    }
+    catch (e) {
+        if (e.code === 'ENOENT')
+            return null;
+        throw e;
+    }
+    const owner = parseOwner(text);
+    if (age >= STALE_LOCK_AGE_MS)
+        return { text, stale: true, owner };
+    if (owner === null)
+        return { text, stale: age >= EMPTY_LOCK_AGE_MS, owner };
+    const here = owner.host === (0,external_node_os_.hostname)();
+    return { text, stale: here && processIsGone(owner.pid), owner };
+}
+/** The holder as the file says, or null. The file sits in a checkout: only plain values pass. */
+function parseOwner(text) {
+    let v;
+    try {
+        v = JSON.parse(text);
+    }
+    catch {
+        return null;
+    }
+    if (typeof v !== 'object' || v === null)
+        return null;
+    const r = v;
+    if (typeof r.pid !== 'number' || !Number.isSafeInteger(r.pid) || r.pid <= 0)
+        return null;
+    const host = typeof r.host === 'string' && /^[A-Za-z0-9._-]{1,255}$/.test(r.host) ? r.host : null;
+    const since = typeof r.since === 'string' && !Number.isNaN(Date.parse(r.since)) ? new Date(r.since).toISOString() : null;
+    return { pid: r.pid, host, since };
+}
+
+;// CONCATENATED MODULE: ./src/gate/baseline-update.ts
+/**
+ * Records an accepted result in the baseline file without losing another run's. A run reads
+ * the baseline before its search and builds the next one from it; if a second run wrote the
+ * file in between, writing ours would silently drop that run's history entry. So the write
+ * happens under an exclusive lock beside the file, after reading the file again: unchanged,
+ * ours is written; changed, nothing is written and the user is told to run again (exit 2).
+ */
+
+
+
+
+/**
+ * Writes `next` to `path` if the file still holds `expected` (null: no file), else throws a
+ * UserError naming the file (`shown`, as the user wrote it).
+ */
+async function updateBaseline(path, shown, expected, next) {
+    const lock = await lockOrRefuse(path, shown);
+    try {
+        const now = await readBaseline(path, shown);
+        if (!sameBaseline(expected, now)) {
+            const what = now === null ? 'was removed' : expected === null ? 'was created' : 'changed';
+            throw new errors/* UserError */.yo(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
+                'so this result was not recorded, to keep that change. Run `neuron-budget baseline` again to record it on top.', { file: shown });
+        }
+        await writeBaseline(path, next);
+    }
+    finally {
+        await lock.release();
+    }
+}
+async function lockOrRefuse(path, shown) {
+    try {
+        return await acquireLock(path);
+    }
+    catch (e) {
+        if (!(e instanceof LockBusy))
+            throw e;
+        const lockShown = displayLockPath(shown, path);
+        const who = e.owner
+            ? ` by process ${e.owner.pid}${e.owner.host ? ` on ${e.owner.host}` : ''}${e.owner.since ? ` since ${e.owner.since}` : ''}`
+            : '';
+        throw new errors/* UserError */.yo(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
+            'Run `neuron-budget baseline` again when it has finished; if none is running, delete the lock file.', { file: shown });
+    }
+}
+/** The lock file's path in the same form as the baseline's as the user wrote it. */
+function displayLockPath(shown, path) {
+    return `${shown.slice(0, shown.lastIndexOf('/') + 1)}${(0,external_node_path_namespaceObject.basename)(lockPathFor(path))}`;
+}
+/** Same content; key order and formatting of the file do not matter to a reader. */
+function sameBaseline(a, b) {
+    if (a === null || b === null)
+        return a === b;
+    return canonical(a) === canonical(b);
+}
+function canonical(v) {
+    if (Array.isArray(v))
+        return `[${v.map(canonical).join(',')}]`;
+    if (v !== null && typeof v === 'object') {
+        const keys = Object.keys(v).sort();
+        return `{${keys.map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(',')}}`;
+    }
+    return JSON.stringify(v);
+}
+
+;// CONCATENATED MODULE: ./src/gate/stage.ts
+
+
+
+async function runGateStage(input) {
+    const previous = input.previous;
+    const config = input.baselinePath === input.config.gate.baseline
+        ? input.config
+        : {
+            ...input.config,
+            gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
+        };
+    const outcome = evaluateGate({
+        result: input.result,
+        loaded: input.loaded,
+        config,
+        baseline: previous,
+        cost: input.cost ?? null,
+    });
+    if (input.mode === 'check')
+        return { outcome, written: null, record: null, gate: config.gate };
+    const why = whyNotRecordable(input.result);
+    if (why !== null)
+        return { outcome, written: null, record: { notWritten: why }, gate: config.gate };
+    const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
+    // Only if the file still holds what `previous` was read from: never drop another run's entry.
+    await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
+    const record = { file: input.baselineShown, width: next.result.width, historyEntries: next.history.length };
+    return { outcome, written: input.baselinePath, record, gate: config.gate };
+}
+
+;// CONCATENATED MODULE: ./src/gate/index.ts
+/**
+ * The gate: baseline file, comparison and data changes. `evaluateGate` is the one call
+ * the job needs after the search; `nextBaseline`/`writeBaseline` record an accepted result.
+ */
+
+
+
+
+
+
+
+
+// EXTERNAL MODULE: ./src/search/growth.ts
+var growth = __nccwpck_require__(6881);
+;// CONCATENATED MODULE: ./src/matrix/exact-json.ts
+/**
+ * JSON that carries every float64 a search produces exactly: JSON writes NaN and ±Infinity as
+ * null and −0 as 0, and a merged search must see the very numbers its shards computed (a
+ * diverged training's NaN metric decides how its restart counts). Those four values travel as
+ * the strings below; every other number already round-trips through JSON unchanged.
+ */
+const SPECIAL = {
+    NaN: Number.NaN,
+    Infinity: Number.POSITIVE_INFINITY,
+    '-Infinity': Number.NEGATIVE_INFINITY,
+    '-0': -0,
+};
+function toExactJson(value) {
+    return JSON.stringify(value, (_key, v) => {
+        if (typeof v !== 'number')
+            return v;
+        if (Number.isNaN(v))
+            return 'NaN';
+        if (v === Number.POSITIVE_INFINITY)
+            return 'Infinity';
+        if (v === Number.NEGATIVE_INFINITY)
+            return '-Infinity';
+        return Object.is(v, -0) ? '-0' : v;
+    });
+}
+/** Parses text written by toExactJson (the caller has checked the syntax). */
+function fromExactJson(text) {
+    return JSON.parse(text, (_key, v) => (typeof v === 'string' && v in SPECIAL ? SPECIAL[v] : v));
+}
+
+;// CONCATENATED MODULE: ./src/matrix/part.ts
+/**
+ * A part: what one shard of a plan computed, as a small JSON file that travels as an artifact.
+ * It names the plan, the data and the settings it was computed for, so `merge` can refuse a part
+ * that belongs to another run, and it carries each training's full outcome (and the networks that
+ * met the target, pruned or not), so the merged search is the one-machine search exactly.
+ */
+
+
+
+
+
+const PART_SCHEMA = 'neuron-budget/part@1';
+function serializePart(part) {
+    return `${toExactJson(part)}\n`;
+}
+function part_describe(v) {
+    if (v === undefined)
+        return 'nothing';
+    if (v === null)
+        return 'null';
+    if (Array.isArray(v))
+        return `a list of ${v.length}`;
+    if (typeof v === 'object')
+        return 'an object';
+    if (typeof v === 'string')
+        return (0,common_escape/* quote */.hD)(v, 40);
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
+}
+const part_isObject = (v) => typeof v === 'object' && v !== null && !Array.isArray(v);
+/** Syntax, then the fields that say where the part came from; the content is checked by checkPart. */
+function parsePart(text, shown) {
+    const syntax = json_position_findJsonSyntaxProblem(text);
+    if (syntax) {
+        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the part is not valid JSON: ${syntax.detail}`, {
+            file: shown,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    }
+    const doc = fromExactJson(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    const bad = (key, expected, found) => {
+        throw new errors/* UserError */.yo(`${shown}: ${key}: expected ${expected}, found ${part_describe(found)}`, { file: shown, key });
+    };
+    if (!part_isObject(doc))
+        return bad('(top level)', 'a neuron-budget part (a JSON object)', doc);
+    if (doc['schema'] !== PART_SCHEMA)
+        bad('schema', `"${PART_SCHEMA}"; this file is not the output of neuron-budget shard`, doc['schema']);
+    const str = (o, key, at) => {
+        const v = part_isObject(o) ? o[key] : undefined;
+        return typeof v === 'string' ? v : bad(at, 'a string', v);
+    };
+    const int = (o, key, at) => {
+        const v = part_isObject(o) ? o[key] : undefined;
+        return Number.isInteger(v) && v >= 0 ? v : bad(at, 'a whole number ≥ 0', v);
+    };
+    str(doc['tool'], 'version', 'tool.version');
+    str(doc, 'plan', 'plan');
+    int(doc['shard'], 'index', 'shard.index');
+    int(doc['shard'], 'of', 'shard.of');
+    str(doc['data'], 'fingerprint', 'data.fingerprint');
+    str(doc['settings'], 'fingerprint', 'settings.fingerprint');
+    if (!Array.isArray(doc['results']))
+        bad('results', 'a list', doc['results']);
+    if (!Array.isArray(doc['pruned']))
+        bad('pruned', 'a list', doc['pruned']);
+    return doc;
+}
+const part_short = (hash) => `${hash.slice(0, 12)}…`;
+/**
+ * Whether the part belongs to this run: the same tool version, data, settings and plan, and
+ * holds results for exactly its shard's tasks, each of the right shape.
+ */
+function checkPart(part, shown, want) {
+    const refuse = (why) => {
+        throw new errors/* UserError */.yo(`${shown}: ${why}`, { file: shown });
+    };
+    const plan = want.plan;
+    if (part.tool.version !== want.toolVersion)
+        refuse(`made by neuron-budget ${(0,common_escape/* quote */.hD)(part.tool.version, 20)}, but this is ${want.toolVersion}; run every stage with the same version`);
+    if (part.data.fingerprint !== plan.data.fingerprint)
+        refuse(`computed on other data (data fingerprint ${part_short(part.data.fingerprint)} in the part, ${part_short(plan.data.fingerprint)} here); every stage must run on the same commit`);
+    if (part.settings.fingerprint !== plan.settings.fingerprint)
+        refuse(`computed with other result-changing settings (settings fingerprint ${part_short(part.settings.fingerprint)} in the part, ${part_short(plan.settings.fingerprint)} here)`);
+    if (part.shard.of !== plan.shards.length || part.plan !== plan.id)
+        refuse(`belongs to another plan (plan ${part_short(part.plan)} of ${part.shard.of} shards; this run's plan is ${part_short(plan.id)} of ${plan.shards.length}): the plan, the shards and the merge must come from the same config, data and baseline`);
+    const shard = plan.shards[part.shard.index];
+    if (shard === undefined)
+        refuse(`shard.index ${part.shard.index} is not a shard of this plan (0 to ${plan.shards.length - 1})`);
+    const bad = (key, expected, found) => {
+        throw new errors/* UserError */.yo(`${shown}: ${key}: expected ${expected}, found ${part_describe(found)}`, { file: shown, key });
+    };
+    const tasks = new Map(shard.tasks.map((t) => [(0,growth/* taskKey */.Do)(t), t]));
+    const seen = new Set();
+    part.results.forEach((r, k) => {
+        checkTaskResult(r, `results[${k}]`, want, bad);
+        const key = (0,growth/* taskKey */.Do)(r);
+        if (!tasks.has(key) || seen.has(key))
+            bad(`results[${k}]`, `a task of shard ${part.shard.index}, each once`, `width ${r.width}, restart ${r.restart + 1}`);
+        seen.add(key);
+    });
+    part.pruned.forEach((p, k) => {
+        const at = `pruned[${k}]`;
+        if (!part_isObject(p) || !part_isObject(p.source))
+            return bad(at, 'a pruned network', p);
+        const key = (0,growth/* taskKey */.Do)(p.source);
+        if (!tasks.get(key)?.prune)
+            bad(`${at}.source`, `a task shard ${part.shard.index} prunes`, `width ${p.source.width}`);
+        if (!Array.isArray(p.chain) || !Array.isArray(p.steps))
+            bad(at, 'a chain and steps', p);
+        if (!Number.isInteger(p.trainings) || typeof p.interrupted !== 'boolean')
+            bad(at, 'trainings and interrupted', p);
+        p.chain.forEach((link, j) => {
+            checkJudged(link, `${at}.chain[${j}]`, bad);
+            checkNetwork(link.network, `${at}.chain[${j}].network`, want, bad);
+        });
+    });
+}
+function checkJudged(j, at, bad) {
+    if (!part_isObject(j))
+        return bad(at, 'an object', j);
+    const o = j;
+    for (const k of ['train', 'steering', 'judged'])
+        if (typeof o[k] !== 'number')
+            bad(`${at}.${k}`, 'a number', o[k]);
+    for (const k of ['reached', 'met'])
+        if (typeof o[k] !== 'boolean')
+            bad(`${at}.${k}`, 'true or false', o[k]);
+}
+function checkTaskResult(r, at, want, bad) {
+    checkJudged(r, at, bad);
+    const o = r;
+    for (const k of ['width', 'restart', 'epochs', 'finalWidth'])
+        if (!Number.isInteger(o[k]))
+            bad(`${at}.${k}`, 'a whole number', o[k]);
+    if (typeof o['stop'] !== 'string')
+        bad(`${at}.stop`, 'a stop reason', o['stop']);
+    if (!Array.isArray(o['segments']))
+        bad(`${at}.segments`, 'a list', o['segments']);
+    o['segments'].forEach((s, k) => checkJudged(s, `${at}.segments[${k}]`, bad));
+    if (o['network'] !== null)
+        checkNetwork(o['network'], `${at}.network`, want, bad);
+    if (o['reason'] !== null && typeof o['reason'] !== 'string')
+        bad(`${at}.reason`, 'a sentence or null', o['reason']);
+}
+function checkNetwork(n, at, want, bad) {
+    if (!part_isObject(n))
+        return bad(at, 'a network', n);
+    const net = n;
+    if (net.inputs !== want.inputs)
+        bad(`${at}.inputs`, `${want.inputs}`, net.inputs);
+    if (net.outputs !== want.outputs)
+        bad(`${at}.outputs`, `${want.outputs}`, net.outputs);
+    if (!Number.isInteger(net.width) || net.width < 1)
+        bad(`${at}.width`, 'a whole number ≥ 1', net.width);
+    const numbers = (v, key, length) => {
+        if (!Array.isArray(v) || v.length !== length || !v.every((x) => typeof x === 'number'))
+            bad(key, `${length} numbers`, v);
+    };
+    const rows = (v, key, count, length) => {
+        if (!Array.isArray(v) || v.length !== count)
+            return bad(key, `${count} rows`, v);
+        v.forEach((row, i) => numbers(row, `${key}[${i}]`, length));
+    };
+    rows(net.hiddenWeights, `${at}.hiddenWeights`, net.width, net.inputs);
+    numbers(net.hiddenBias, `${at}.hiddenBias`, net.width);
+    rows(net.outputWeights, `${at}.outputWeights`, net.outputs, net.width);
+    numbers(net.outputBias, `${at}.outputBias`, net.outputs);
+    if (typeof net.activation !== 'string' || typeof net.head !== 'string')
+        bad(at, 'an activation and a head', n);
+}
+
+;// CONCATENATED MODULE: ./src/matrix/plan.ts
+/**
+ * A search as a plan of independent tasks for a job matrix: which (width, restart) trainings
+ * each shard runs, balanced by their expected cost, and which of their networks a shard prunes
+ * when they meet the target. The plan is a pure function of the data, the result-changing
+ * settings, the start (a matching baseline) and the shard count, and its id is the hash of all
+ * of them, so `merge` can rebuild it and tell whether every part belongs to it.
+ *
+ * Which tasks: from a baseline's width S, the two widths the common answer needs (S and S − 1,
+ * every restart); from min-width, every width up to max-width. Whatever the decision needs
+ * beyond the plan, `merge` runs itself, so a plan that guessed short costs time, never the answer.
+ * Which networks are pruned on the shards: those on the path a one-machine search takes when
+ * the answer has not moved (S's first `required` restarts, S − 1's first restarts − required + 1);
+ * `merge` prunes any other network the answer needs.
+ */
+
+
+const PLAN_SCHEMA = 'neuron-budget/plan@1';
+/** A matrix has at most 256 jobs per workflow run. */
+const MAX_SHARDS = 256;
+function taskMacs(m, task) {
+    const weights = (w) => w * (m.inputs + m.outputs + 1) + m.outputs;
+    const training = 3 * m.trainRows * m.maxEpochs * weights(task.width);
+    // A prune chain usually ends after one refused step: pruneCandidates retrainings one neuron smaller.
+    const pruning = task.prune && task.width > 1 ? 3 * m.trainRows * m.pruneEpochs * m.pruneCandidates * weights(task.width - 1) : 0;
+    return training + pruning;
+}
+/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. */
+function plannedTasks(plan) {
+    const start = (0,growth/* startWidth */.Rm)(plan);
+    if (start === null)
+        return (0,growth/* planTasks */.s$)(plan).map((t) => ({ ...t, prune: false }));
+    const onPath = (t) => t.width === start ? t.restart < plan.required : t.restart <= plan.restarts - plan.required;
+    return (0,growth/* planTasks */.s$)(plan)
+        .filter((t) => t.width === start || t.width === start - 1)
+        .map((t) => ({ ...t, prune: onPath(t) }));
+}
+/**
+ * Split the tasks over `shards` shards (fewer when there are fewer tasks) by longest expected
+ * cost first onto the least loaded shard; ties go to the earlier task and the lower shard, so the
+ * plan is the same on every machine.
+ */
+function makePlan(plan, shards, identity, cost) {
+    const tasks = plannedTasks(plan);
+    const count = Math.max(1, Math.min(shards, tasks.length));
+    const position = new Map(tasks.map((t, k) => [(0,growth/* taskKey */.Do)(t), k]));
+    const byCost = tasks
+        .map((t) => ({ t, macs: taskMacs(cost, t) }))
+        .sort((a, b) => b.macs - a.macs || position.get((0,growth/* taskKey */.Do)(a.t)) - position.get((0,growth/* taskKey */.Do)(b.t)));
+    const out = Array.from({ length: count }, (_, index) => ({ index, estimatedMacs: 0, tasks: [] }));
+    for (const { t, macs } of byCost) {
+        let least = out[0];
+        for (const s of out)
+            if (s.estimatedMacs < least.estimatedMacs)
+                least = s;
+        least.tasks.push(t);
+        least.estimatedMacs += macs;
+    }
+    for (const s of out)
+        s.tasks.sort((a, b) => position.get((0,growth/* taskKey */.Do)(a)) - position.get((0,growth/* taskKey */.Do)(b)));
+    const start = (0,growth/* startWidth */.Rm)(plan);
+    const body = {
+        schema: PLAN_SCHEMA,
+        tool: { name: 'neuron-budget', version: identity.toolVersion },
+        data: { fingerprint: identity.data, rows: identity.rows },
+        settings: { fingerprint: identity.settings },
+        start: start === null
+            ? { from: 'min-width', width: plan.minWidth }
+            : { from: 'baseline', width: start },
+        shards: out,
+    };
+    return { ...body, id: planId(body) };
+}
+function planId(body) {
+    return (0,external_node_crypto_.createHash)('sha256').update(JSON.stringify(body), 'utf8').digest('hex');
+}
+
+// EXTERNAL MODULE: ./src/search/index.ts + 1 modules
+var src_search = __nccwpck_require__(4516);
+// EXTERNAL MODULE: ./src/search/executor.ts
+var search_executor = __nccwpck_require__(3787);
+// EXTERNAL MODULE: ./src/search/search.ts + 3 modules
+var search_search = __nccwpck_require__(8678);
+;// CONCATENATED MODULE: ./src/search/shard.ts
+
+
+async function runShard(data, search, target, work, options = {}) {
+    const ctx = (0,search_search/* searchContext */.iK)(search, target, options);
+    const size = (0,search_search/* workerCount */.Mo)(search, options);
+    const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
+    const executor = size > 1 && entry !== null ? (0,search_executor/* workerPoolExecutor */.m)(data, ctx, size, entry) : (0,search_executor/* inThreadExecutor */.Pe)(data, ctx);
+    const progress = options.onProgress ?? (() => undefined);
+    try {
+        progress({ phase: 'growth', kind: 'start', width: work.tasks[0]?.width ?? 1, restart: 0, epoch: 0, best: null });
+        const outcomes = await Promise.all(work.tasks.map(async (task) => {
+            const result = await executor.train({ width: task.width, restart: task.restart });
+            if (result !== null)
+                progress({
+                    phase: 'growth',
+                    kind: 'done',
+                    width: result.finalWidth,
+                    restart: result.restart,
+                    epoch: result.epochs,
+                    best: null,
+                });
+            if (result === null || !task.prune || !result.met || result.network === null)
+                return { result, pruned: null };
+            const pruned = await executor.prune({
+                source: { width: task.width, restart: task.restart },
+                network: result.network,
+            });
+            progress({
+                phase: 'prune',
+                kind: 'done',
+                width: task.width,
+                restart: task.restart,
+                epoch: pruned.steps.length,
+                best: null,
+            });
+            return { result, pruned: pruned.interrupted ? null : pruned };
+        }));
+        return {
+            results: outcomes.flatMap((o) => (o.result === null ? [] : [o.result])),
+            pruned: outcomes.flatMap((o) => (o.pruned === null ? [] : [o.pruned])),
+        };
+    }
+    finally {
+        await executor.close();
+    }
+}
+
+// EXTERNAL MODULE: ./src/search/task.ts
+var task = __nccwpck_require__(8575);
+;// CONCATENATED MODULE: ./package.json
+const package_namespaceObject = {"rE":"0.1.0"};
+;// CONCATENATED MODULE: ./src/version.ts
+/** The tool's version, taken from package.json when the bundle is built (ncc inlines the JSON). */
+
+const TOOL_NAME = 'neuron-budget';
+const TOOL_VERSION = package_namespaceObject.rE;
+
+// EXTERNAL MODULE: ./src/device/index.ts + 8 modules
+var device = __nccwpck_require__(4143);
+;// CONCATENATED MODULE: ./src/model/document.ts
+
+const document_MODEL_SCHEMA = 'neuron-budget/model@2';
+/**
+ * The witness as a document. With `calibration` (the encoded training rows) it carries the
+ * int8 form too.
+ */
+function modelDocument(witness, encoding, target, backing, calibration = null, provenance = null) {
+    return {
+        schema: document_MODEL_SCHEMA,
+        task: encoding.target.task,
+        width: witness.network.width,
+        target: {
+            metric: target.metric,
+            threshold: target.threshold,
+            value: witness.judged,
+            on: backing.on,
+            met: witness.met,
+            adequate: backing.adequate,
+        },
+        origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
+        encoding: structuredClone(encoding),
+        network: structuredClone(witness.network),
+        cost: (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)(witness.network, encoding)),
+        int8: calibration === null ? null : (0,device/* quantizeNetwork */.gf)(witness.network, encoding, calibration),
+        provenance,
+    };
+}
+/** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
+function serializeModel(doc) {
+    return `${JSON.stringify(doc, null, 2)}\n`;
+}
+
+;// CONCATENATED MODULE: ./schema/model.schema.json
+const model_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget model","description":"A trained network as a self-contained file: the network, how raw rows become its inputs and its outputs labels or values, what it costs on a device, and its int8 form. Written by neuron-budget for the witness of a search.","type":"object","additionalProperties":false,"required":["schema","task","width","target","origin","encoding","network","cost","int8","provenance"],"properties":{"schema":{"const":"neuron-budget/model@2","description":"Format and version of this file."},"task":{"enum":["classification","regression"],"description":"What the network predicts: a class or a number."},"width":{"type":"integer","description":"Hidden neurons of the network (the same as network.width).","minimum":1},"target":{"type":"object","description":"The target the network was judged against and what it reached.","additionalProperties":false,"required":["metric","threshold","value","on","met","adequate"],"properties":{"metric":{"enum":["accuracy","rmse","mae","max-abs-error"],"description":"The target metric of the config."},"threshold":{"type":"number","description":"The config\'s threshold: accuracy at least this, error metrics at most this (in the target\'s units)."},"value":{"type":"number","description":"The metric on the rows that judged the network (target.on)."},"on":{"enum":["judging","validation","training"],"description":"Which rows judged it: the judging rows, never seen in training; or the validation rows, or the training rows, when there were none."},"met":{"type":"boolean","description":"The network met the target on those rows."},"adequate":{"type":"boolean","description":"Its width is adequate: at least search.required networks of that width met the target."}}},"origin":{"type":"object","description":"Where the network came from: with the same config and data, enough to train it again.","additionalProperties":false,"required":["seed","width","restart","how"],"properties":{"seed":{"type":"integer","description":"The config\'s base seed."},"width":{"type":"integer","minimum":1,"description":"Width of the fresh training the network started as."},"restart":{"type":"integer","minimum":1,"description":"Restart of that width (counted from 1) whose seeded stream trained it."},"how":{"enum":["fresh","pruned"],"description":"fresh: trained at its width; pruned: pruned down to it from origin.width."}}},"encoding":{"$ref":"#/$defs/encoding","description":"How raw rows become the network\'s inputs (numeric: standardised; categorical: one-hot) and its outputs labels or values."},"network":{"$ref":"#/$defs/network","description":"The trained network\'s weights in float64, with their layout."},"cost":{"$ref":"#/$defs/cost","description":"What the network costs on a device: parameters, multiply-accumulates, flash and RAM bytes in float32 and int8."},"int8":{"description":"The int8 form of the network, calibrated on the training rows; null when the writer had no training rows to calibrate on.","oneOf":[{"type":"null"},{"$ref":"#/$defs/int8"}]},"provenance":{"description":"What produced the file, for the header of exported firmware; null in files of version 1.","oneOf":[{"type":"null"},{"type":"object","additionalProperties":false,"required":["tool","data","config"],"properties":{"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget","description":"The tool that wrote the file."},"version":{"type":"string","description":"Its version."}},"description":"The tool that wrote the file."},"data":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint of the data as used (64 hex digits)."},"config":{"type":"string","description":"The config file, relative to the workspace."}}}]}},"$defs":{"encoding":{"type":"object","description":"How raw rows become the network\'s inputs, and its outputs labels or values.","additionalProperties":false,"required":["features","target"],"properties":{"features":{"type":"array","description":"The features in input order; they encode to network.inputs inputs.","items":{"oneOf":[{"type":"object","description":"A numeric feature: one input, standardised.","additionalProperties":false,"required":["kind","name","mean","std"],"properties":{"kind":{"const":"numeric","description":"A number column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"mean":{"type":"number","description":"Mean over the training rows; the input is (x − mean) / std."},"std":{"type":"number","description":"Population standard deviation over the training rows (1 for a constant column, which is only centred)."}}},{"type":"object","description":"A categorical feature: one input per category, one-hot.","additionalProperties":false,"required":["kind","name","categories"],"properties":{"kind":{"const":"categorical","description":"A text column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"categories":{"type":"array","description":"The categories in input order: category k sets input k of this feature\'s block to 1, the others to 0. A category not listed sets them all to 0.","items":{"type":"string"},"minItems":1}}}]}},"target":{"type":"object","description":"How the network\'s outputs become labels or values.","additionalProperties":false,"required":["name","task","classes","mean","std"],"properties":{"name":{"type":"string","description":"The target column\'s name (text from the repository)."},"task":{"enum":["classification","regression"],"description":"The same as the document\'s task."},"classes":{"type":["array","null"],"items":{"type":"string"},"description":"Classification: the class labels in index order (sorted); null for regression."},"mean":{"type":"number","description":"Regression: the network\'s output is (y − mean) / std; classification: 0."},"std":{"type":"number","description":"Regression: see mean; classification: 1."}}}}},"network":{"type":"object","description":"The one-hidden-layer network in float64: a_j = hiddenBias[j] + Σ_i hiddenWeights[j][i]·x_i, h_j = activation(a_j), z_k = outputBias[k] + Σ_j outputWeights[k][j]·h_j, then the head.","additionalProperties":false,"required":["inputs","width","outputs","activation","head","hiddenWeights","hiddenBias","outputWeights","outputBias"],"properties":{"inputs":{"type":"integer","description":"Inputs after encoding (D).","minimum":1},"width":{"type":"integer","description":"Hidden neurons (H).","minimum":1},"outputs":{"type":"integer","description":"Output units (K): the classes for three or more, 1 for two classes (logistic) and for regression.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The hidden neurons\' activation."},"head":{"enum":["softmax","logistic","linear"],"description":"softmax: class probabilities; logistic: the probability of the second class; linear: the standardised value."},"hiddenWeights":{"type":"array","description":"H rows: hiddenWeights[j][i] is the weight from input i to hidden neuron j.","items":{"type":"array","description":"Hidden neuron j\'s weight from each input i, in input order.","items":{"type":"number"}}},"hiddenBias":{"type":"array","description":"One bias per hidden neuron.","items":{"type":"number"}},"outputWeights":{"type":"array","description":"K rows: outputWeights[k][j] is the weight from hidden neuron j to output k.","items":{"type":"array","description":"Output k\'s weight from each hidden neuron j.","items":{"type":"number"}}},"outputBias":{"type":"array","description":"One bias per output.","items":{"type":"number"}}}},"bytesByForm":{"type":"object","description":"A figure for each form of the network.","additionalProperties":false,"required":["float32","int8"],"properties":{"float32":{"type":"integer","description":"The float32 form.","minimum":0},"int8":{"type":"integer","description":"The int8 form.","minimum":0}}},"cost":{"type":"object","description":"What the network costs on a device, by the definitions of src/device/cost.ts.","additionalProperties":false,"required":["parameters","macs","flashBytes","ramBytes"],"properties":{"parameters":{"type":"integer","description":"Weights and biases: D·H + H + H·K + K.","minimum":0},"macs":{"type":"integer","description":"Multiply-accumulates per inference: D·H + H·K.","minimum":0},"flashBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the constant objects the exported C stores for each form (weights, biases, scales, zero-points, multipliers, shifts, the activation table, the input encoding\'s constants); code and padding not counted."},"ramBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the activation buffers of one inference (the encoded input vector and the hidden vector, in the form\'s type); the caller\'s arrays, scalars and the stack frame not counted."}}},"quantParams":{"type":"object","description":"An int8 quantisation: real = scale · (code − zeroPoint).","additionalProperties":false,"required":["scale","zeroPoint"],"properties":{"scale":{"type":"number","description":"S: the real value of one code step.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z: the code of real 0 (real = S · (q − Z))."}}},"int8":{"type":"object","description":"The int8 form (integer-only inference after Jacob et al. 2018, per-channel symmetric weights after Krishnamoorthi 2018).","additionalProperties":false,"required":["inputs","width","outputs","activation","head","input","hidden","output"],"properties":{"inputs":{"type":"integer","description":"The same as network.inputs.","minimum":1},"width":{"type":"integer","description":"The same as network.width.","minimum":1},"outputs":{"type":"integer","description":"The same as network.outputs.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The same as network.activation."},"head":{"enum":["softmax","logistic","linear"],"description":"The same as network.head."},"input":{"type":"object","description":"The quantisation of the encoded inputs (asymmetric int8).","additionalProperties":false,"required":["scale","zeroPoint","one","features"],"properties":{"scale":{"type":"number","description":"S_x of the whole encoded input vector: (hi − lo) / 255 over the training rows, the range widened to hold 0.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z_x: the code of an input of 0, round(−128 − lo / S_x)."},"one":{"type":"integer","minimum":-128,"maximum":127,"description":"The code of a one-hot 1: clamp(Z_x + round(1 / S_x))."},"features":{"type":"array","description":"One entry per feature of encoding.features, in the same order.","items":{"oneOf":[{"type":"object","description":"A numeric feature\'s input stage.","additionalProperties":false,"required":["kind","mean","multiplier"],"properties":{"kind":{"const":"numeric","description":"A numeric feature."},"mean":{"type":"number","description":"The feature\'s mean as float32, subtracted from the raw value in float32."},"multiplier":{"type":"number","description":"float32 1 / (std · S_x): the centred value times this, in float32, is the input in code steps before rounding."}}},{"type":"object","description":"A categorical feature\'s input stage.","additionalProperties":false,"required":["kind","categories"],"properties":{"kind":{"const":"categorical","description":"A categorical feature."},"categories":{"type":"integer","description":"Its number of categories (one-hot inputs).","minimum":1}}}]}}}},"hidden":{"type":"object","description":"The hidden layer: int32 accumulation, requantisation to an int8 pre-activation, the activation by table.","additionalProperties":false,"required":["weights","weightScales","bias","multiplier","shift","preActivation","activation","table"],"properties":{"weights":{"type":"array","description":"H rows of D int8 weight codes (symmetric: zero-point 0, range ±127).","items":{"type":"array","description":"Neuron j\'s weight codes, in input order.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per hidden neuron: max |w| / 127 (larger only when the bias would not fit in ±2^30 steps).","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per hidden neuron at scale S_x · S_w[j], zero-point 0, before the input zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"multiplier":{"type":"array","description":"M0 per hidden neuron as round(M0 · 2^31) in [2^30, 2^31), with M = S_x · S_w[j] / S_a = M0 · 2^−shift; 0 when M < 2^−32.","items":{"type":"integer","minimum":0,"maximum":2147483647}},"shift":{"type":"array","description":"n per hidden neuron: a rounding right shift when positive, a saturating left shift when negative.","items":{"type":"integer","minimum":-31,"maximum":31}},"preActivation":{"$ref":"#/$defs/quantParams","description":"The int8 pre-activation that indexes the table (S_a, Z_a)."},"activation":{"$ref":"#/$defs/quantParams","description":"The int8 hidden activation the table holds (S_h, Z_h)."},"table":{"type":"array","description":"table[q + 128]: the activation code of pre-activation code q, for q = −128..127.","items":{"type":"integer","minimum":-128,"maximum":127},"minItems":256,"maxItems":256}}},"output":{"type":"object","description":"The output layer: int32 accumulation, then dequantisation to float for the head.","additionalProperties":false,"required":["weights","weightScales","bias","scale"],"properties":{"weights":{"type":"array","description":"K rows of H int8 weight codes (symmetric, ±127).","items":{"type":"array","description":"Output k\'s weight codes, by hidden neuron.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per output.","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per output at scale S_h · S_w[k] (regression: with the target\'s mean / std added), before the hidden zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"scale":{"type":"array","description":"float32 per output: the dequantised output per accumulator step (S_h · S_w[k]; regression: times the target\'s std, giving target units).","items":{"type":"number"}}}}}}}}');
+;// CONCATENATED MODULE: ./src/model/parse.ts
+/**
+ * Reading a model file: JSON syntax with line and column, then the shape by
+ * schema/model.schema.json itself, then what a schema cannot say (array lengths that follow
+ * the network's shape, the int8 form's consistency). Every problem is one message naming the
+ * file and the key. Files of version 1 (before judging rows and the int8 form) are read too.
+ */
+
+
+
+
+
+
+/** The first version: no cost, no int8 form, judged on the validation rows, a 0-based restart and the grown width. */
+const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
+const parse_checkShape = schemaValidator(model_schema_namespaceObject);
+function inputsOf(features) {
+    return features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
+}
+/** A version-1 document in this version's shape (what it could not know is marked as such). */
+function upgrade(d) {
+    const v1target = d['target'];
+    const v1origin = d['origin'];
+    const net = d['network'];
+    const enc = d['encoding'];
+    const cost = net && enc && Array.isArray(enc.features)
+        ? deviceCost(costShapeOf(net, enc))
+        : undefined;
+    return {
+        ...d,
+        schema: MODEL_SCHEMA,
+        target: v1target && { ...v1target, on: 'validation', met: true, adequate: true },
+        origin: v1origin && {
+            seed: v1origin.seed,
+            width: v1origin.grownWidth,
+            restart: typeof v1origin.restart === 'number' ? v1origin.restart + 1 : v1origin.restart,
+            how: 'fresh',
+        },
+        cost,
+        int8: null,
+        provenance: null,
+    };
+}
+/** Parse and check a model file; a bad file gets a message naming the file and the key. */
+function parseModel(text, file = 'model') {
+    const syntax = findJsonSyntaxProblem(text);
+    if (syntax) {
+        throw new UserError(`${file}:${syntax.line}:${syntax.column}: the model is not valid JSON: ${syntax.detail}`, {
+            file,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    }
+    let doc = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    const bad = (key, expected, found) => {
+        throw new UserError(`${file}: ${key}: expected ${expected}, found ${found}`, { file, key });
+    };
+    if (typeof doc !== 'object' || doc === null || Array.isArray(doc))
+        return bad('(top level)', 'a neuron-budget model (a JSON object)', Array.isArray(doc) ? 'a list' : String(doc));
+    const schema = doc['schema'];
+    if (schema === MODEL_SCHEMA_V1)
+        doc = upgrade(doc);
+    else if (schema !== MODEL_SCHEMA) {
+        bad('schema', `"${MODEL_SCHEMA}"`, typeof schema === 'string' ? JSON.stringify(schema.slice(0, 60)) : 'nothing');
+    }
+    try {
+        parse_checkShape(doc);
+    }
+    catch (e) {
+        if (e instanceof SchemaProblem)
+            bad(e.key, e.expected, e.found);
+        throw e;
+    }
+    const d = doc;
+    const net = d.network;
+    const enc = d.encoding;
+    if (inputsOf(enc.features) !== net.inputs)
+        bad('encoding.features', `features that encode to ${net.inputs} inputs (network.inputs)`, `${inputsOf(enc.features)}`);
+    const rows = (key, list, count, length) => {
+        if (list.length !== count)
+            bad(key, `${count} rows`, `${list.length}`);
+        list.forEach((r, i) => {
+            if (r.length !== length)
+                bad(`${key}[${i}]`, `${length} numbers`, `${r.length}`);
+        });
+    };
+    rows('network.hiddenWeights', net.hiddenWeights, net.width, net.inputs);
+    rows('network.outputWeights', net.outputWeights, net.outputs, net.width);
+    if (net.hiddenBias.length !== net.width)
+        bad('network.hiddenBias', `${net.width} numbers`, `${net.hiddenBias.length}`);
+    if (net.outputBias.length !== net.outputs)
+        bad('network.outputBias', `${net.outputs} numbers`, `${net.outputBias.length}`);
+    if (d.width !== net.width)
+        bad('width', `network.width (${net.width})`, `${d.width}`);
+    if (d.task === 'classification' && !Array.isArray(enc.target.classes))
+        bad('encoding.target.classes', 'a list of class labels', 'null');
+    if (d.int8 !== null) {
+        const problem = checkInt8Network(d.int8, net, enc);
+        if (problem)
+            bad(problem.key, problem.expected, 'something else');
+    }
+    // The cost is derived: recompute it rather than trust the file.
+    return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
+}
+
+// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
+var nn = __nccwpck_require__(6575);
+;// CONCATENATED MODULE: ./src/model/predict.ts
+/** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
+
+
+
+/** A row's cell, by own key only: a column may be named `constructor` or `__proto__`. */
+function cellOf(row, name) {
+    return Object.hasOwn(row, name) ? row[name] : undefined;
+}
+/** (x − mean) / std, with a constant training column (std 0) only centred. */
+function standardise(x, mean, std) {
+    return std > 0 ? (x - mean) / std : x - mean;
+}
+/** Encode raw rows the way the training data was encoded. An unseen category encodes as all zeros. */
+function encodeRows(model, rows) {
+    const inputs = model.network.inputs;
+    const x = new Float64Array(rows.length * inputs);
+    rows.forEach((row, r) => {
+        let c = r * inputs;
+        for (const f of model.encoding.features) {
+            const cell = cellOf(row, f.name);
+            if (cell === undefined)
+                throw new UserError(`row ${r + 1}: column ${quote(f.name)} is missing`, { key: f.name });
+            const text = cell.trim();
+            if (f.kind === 'numeric') {
+                const v = text === '' ? Number.NaN : Number(text);
+                if (!Number.isFinite(v)) {
+                    throw new UserError(`row ${r + 1}, column ${quote(f.name)}: expected a number, found ${quote(cell)}`, {
+                        key: f.name,
+                    });
+                }
+                x[c++] = standardise(v, f.mean, f.std);
+            }
+            else {
+                const k = f.categories.indexOf(text);
+                for (let j = 0; j < f.categories.length; j++)
+                    x[c + j] = j === k ? 1 : 0;
+                c += f.categories.length;
+            }
+        }
+    });
+    return x;
+}
+/** Head outputs for each row: class probabilities, or the value in the target's units. */
+function predictRows(model, rows) {
+    const out = predict(model.network, encodeRows(model, rows), rows.length);
+    const K = model.network.outputs;
+    const t = model.encoding.target;
+    const preds = [];
+    for (let p = 0; p < rows.length; p++) {
+        if (model.task === 'regression') {
+            preds.push({ value: out[p] * t.std + t.mean });
+            continue;
+        }
+        const classes = t.classes ?? [];
+        // Keyed by class labels, which may be any string: no prototype, so no label is special.
+        const probabilities = Object.create(null);
+        let best = 0;
+        if (K === 1) {
+            // One logistic output: the probability of the second class.
+            probabilities[classes[0]] = 1 - out[p];
+            probabilities[classes[1]] = out[p];
+            best = out[p] > 0.5 ? 1 : 0;
+        }
+        else {
+            for (let k = 0; k < K; k++) {
+                probabilities[classes[k]] = out[p * K + k];
+                if (out[p * K + k] > out[p * K + best])
+                    best = k;
+            }
+        }
+        preds.push({ label: classes[best], probabilities });
+    }
+    return preds;
+}
+/** The model's target metric on rows that carry the target column. */
+function scoreRows(model, rows) {
+    const preds = predictRows(model, rows);
+    const name = model.encoding.target.name;
+    const truth = rows.map((row, r) => {
+        const cell = cellOf(row, name);
+        if (cell === undefined)
+            throw new UserError(`row ${r + 1}: target column ${quote(name)} is missing`, { key: name });
+        return cell.trim();
+    });
+    const metric = model.target.metric;
+    if (metric === 'accuracy') {
+        let correct = 0;
+        preds.forEach((p, r) => {
+            if ('label' in p && p.label === truth[r])
+                correct++;
+        });
+        return correct / rows.length;
+    }
+    let se = 0;
+    let ae = 0;
+    let maxAe = 0;
+    preds.forEach((p, r) => {
+        const d = Math.abs(('value' in p ? p.value : Number.NaN) - Number(truth[r]));
+        se += d * d;
+        ae += d;
+        if (d > maxAe || d !== d)
+            maxAe = d;
+    });
+    if (metric === 'rmse')
+        return Math.sqrt(se / rows.length);
+    return metric === 'mae' ? ae / rows.length : maxAe;
+}
+
+;// CONCATENATED MODULE: ./src/model/index.ts
+/** Witness export: the winning network as a JSON document anyone can run on raw rows. */
+
+
+
+
+;// CONCATENATED MODULE: ./src/report/assemble.ts
+
+
+
+/** The report with the data stage's facts; verdict and search come later. */
+function dataStageReport(config, data, timing) {
+    const ds = data.dataset;
+    const classes = data.profile.classes;
+    return {
+        schema: 'neuron-budget/report@2',
+        tool: { name: TOOL_NAME, version: TOOL_VERSION },
+        reasons: [],
+        width: null,
+        metric: { name: config.target.metric, value: null, threshold: config.target.threshold },
+        baseline: null,
+        data: {
+            file: displayPath(config.root, config.data.path),
+            rows: data.rows,
+            droppedRows: data.droppedRows,
+            trainRows: ds.trainRows,
+            validationRows: ds.validationRows,
+            judgingRows: ds.judgingRows,
+            inputs: ds.inputs,
+            outputs: ds.outputs,
+            task: ds.task,
+            fingerprint: data.fingerprint,
+            classes: classes === null
+                ? null
+                : Object.keys(classes)
+                    .sort()
+                    .map((label) => ({ label, count: classes[label] })),
+            targetSpread: data.targetSpread,
+        },
+        search: null,
+        device: null,
+        changes: null,
+        timing: { ...timing },
+    };
+}
+/** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
+function searchStageReport(report, search, required, context) {
+    const { encoding } = context;
+    const costOf = (width) => (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)({ inputs: report.data.inputs, width, outputs: report.data.outputs }, encoding));
+    return {
+        ...report,
+        device: deviceOf(search, context, report.data.inputs, report.data.outputs),
+        reasons: [],
+        width: search.width,
+        metric: { ...report.metric, value: search.metric },
+        search: {
+            outcome: search.outcome,
+            grownWidth: search.grownWidth,
+            required,
+            widths: search.widths.map((w) => ({ ...w, cost: costOf(w.width) })),
+            pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
+            trainings: search.trainings,
+            notes: search.notes,
+            judging: search.judging,
+            start: search.start,
+            witness: witnessOf(search),
+        },
+    };
+}
+/** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
+function shownSource(task) {
+    return { width: task.width, restart: task.restart + 1 };
+}
+function witnessOf(search) {
+    const w = search.witness;
+    if (w === null)
+        return null;
+    return {
+        width: w.network.width,
+        how: w.how,
+        source: shownSource(w.source),
+        judged: w.judged,
+        steering: w.steering,
+        train: w.train,
+        met: w.met,
+        adequate: search.width !== null,
+    };
+}
+function deviceOf(search, context, inputs, outputs) {
+    const w = search.witness;
+    const a = search.appraisal;
+    if (w === null || a === null)
+        return null;
+    const width = w.network.width;
+    const labels = context.encoding.target.classes;
+    const floors = context.target.recallFloors ?? null;
+    const finite = (v) => (v === undefined || !Number.isFinite(v) ? null : v);
+    return {
+        precision: context.target.precision ?? 'float32',
+        inputs,
+        width,
+        outputs,
+        cost: (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)({ inputs, width, outputs }, context.encoding)),
+        metric: { float32: a.float32, int8: a.int8 },
+        classes: labels === null || a.confusion === null
+            ? null
+            : labels.map((label, c) => ({
+                label,
+                rows: a.confusion[c].reduce((s, v) => s + v, 0),
+                recall: finite(a.recall?.[c]),
+                precision: finite(a.precision?.[c]),
+                floor: floors === null || floors[c] <= 0 ? null : floors[c],
+            })),
+        confusion: a.confusion,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/report/chart.ts
+/**
+ * Mermaid `xychart-beta` blocks. Only numbers computed by neuron-budget and fixed
+ * words written here ever reach a chart, so nothing from the repository can break it;
+ * `chartText` still refuses anything outside a small alphabet as a second line of defence.
+ *
+ * The constructs used: an init directive that sets the series colours, `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
+ * `y-axis "…" a --> b`, `line [n, …]`, `bar [n, …]`. Every series has exactly one value
+ * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
+ * no value is left out of the chart (the table beside it still lists it).
+ */
+
+/** Letters, digits, space and . , - + (a width read from a baseline file may print as 1e+21). */
+const SAFE_TEXT = /^[A-Za-z0-9 .,+-]*$/;
+function chartText(s) {
+    if (!SAFE_TEXT.test(s))
+        throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
+    return `"${s}"`;
+}
+function chartNumber(n) {
+    const s = (0,format/* formatMetric */.gI)(n);
+    if (!/^-?\d+(\.\d+)?$/.test(s))
+        throw new Error(`not a chart number: ${n}`);
+    return s;
+}
+/** Colours readable on GitHub's light and dark themes. */
+const CHART_COLORS = { baseline: '#8c959f', current: '#0969da', limit: '#cf222e' };
+function renderChart(spec) {
+    for (const s of spec.series) {
+        if (s.values.length !== spec.categories.length) {
+            throw new Error('every chart series needs one value per category');
+        }
+    }
+    for (const s of spec.series) {
+        if (!/^#[0-9a-f]{6}$/.test(s.color))
+            throw new Error(`not a chart colour: ${JSON.stringify(s.color)}`);
+    }
+    const palette = spec.series.map((s) => s.color).join(',');
+    const lines = [
+        '```mermaid',
+        `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
+        'xychart-beta',
+        `  title ${chartText(spec.title)}`,
+        `  x-axis ${chartText(spec.xTitle)} [${spec.categories.map(chartText).join(', ')}]`,
+        `  y-axis ${chartText(spec.yTitle)} ${chartNumber(spec.yRange[0])} --> ${chartNumber(spec.yRange[1])}`,
+        ...spec.series.map((s) => `  ${s.kind} [${s.values.map(chartNumber).join(', ')}]`),
+        '```',
+    ];
+    return lines.join('\n');
+}
+/*
+ * The ranges below take values read from a baseline file, which may be any finite number:
+ * every step that could overflow (a margin on top of 1.7e308) stops at the largest float, so
+ * an axis end is always a finite number.
+ */
+/** A y-axis range that shows every value and the threshold with a little room. */
+function metricRange(values, threshold, accuracy) {
+    const all = [...values, threshold].filter(Number.isFinite);
+    if (accuracy) {
+        const low = Math.min(...all);
+        // Keep the axis from collapsing when every value is 1.
+        return [Math.min(0.9, Math.max(0, Math.floor(low * 10) / 10)), 1];
+    }
+    const high = Math.max(...all, 0);
+    return [0, niceCeil(finite(high * 1.1))];
+}
+function countRange(values) {
+    const high = Math.max(1, ...values.filter(Number.isFinite));
+    return [0, finite(Math.ceil(finite(high * 1.15)) + 1)];
+}
+function niceCeil(x) {
+    if (x <= 0)
+        return 1;
+    const step = 10 ** Math.floor(Math.log10(x));
+    return finite(Math.ceil(x / step) * step);
+}
+/** x, or the largest float when x overflowed. */
+function finite(x) {
+    return Math.min(x, Number.MAX_VALUE);
+}
+
+;// CONCATENATED MODULE: ./src/report/view.ts
+const VERDICT_LABEL = {
+    pass: 'PASS',
+    fail: 'FAIL',
+    improved: 'IMPROVED',
+    new: 'NEW',
+    inconclusive: 'INCONCLUSIVE',
+};
+function viewOf(report) {
+    const widths = report.search?.widths ?? [];
+    const at = report.width === null ? undefined : widths.find((w) => w.width === report.width);
+    const b = report.baseline;
+    const byWidth = new Map();
+    for (const w of widths)
+        byWidth.set(w.width, { width: w.width, current: w, baseline: null });
+    for (const w of b?.widths ?? []) {
+        const row = byWidth.get(w.width) ?? { width: w.width, current: null, baseline: null };
+        row.baseline = w;
+        byWidth.set(w.width, row);
+    }
+    const grown = report.search?.grownWidth ?? null;
+    const searchSeconds = report.timing['searchSeconds'];
+    return {
+        verdict: report.verdict,
+        headline: report.reasons[0] ?? '',
+        otherReasons: report.reasons.slice(1),
+        metricName: report.metric.name,
+        threshold: report.metric.threshold,
+        current: {
+            width: report.width,
+            metric: report.metric.value,
+            met: at ? at.met : null,
+            restarts: at ? at.restarts : null,
+            rows: report.data.rows,
+            searchSeconds: typeof searchSeconds === 'number' ? searchSeconds : null,
+        },
+        baseline: b
+            ? {
+                width: b.width,
+                metric: b.metric,
+                met: b.met ?? null,
+                restarts: b.restarts ?? null,
+                rows: b.rows ?? null,
+                searchSeconds: b.searchSeconds ?? null,
+            }
+            : null,
+        prunedFrom: grown !== null && report.width !== null && grown !== report.width ? grown : null,
+        backing: at ? backingSentence(at, report) : null,
+        rows: [...byWidth.values()].sort((x, y) => x.width - y.width),
+        history: b?.history ?? [],
+        baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
+    };
+}
+/**
+ * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
+ * wider networks); 3 are required." One definition of the backing, shown by every screen.
+ */
+function backingSentence(w, report) {
+    const judging = report.search?.judging.on ?? 'judging';
+    const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
+    const parts = [];
+    if (w.restarts > 0)
+        parts.push(`${w.metBy.fresh} of ${w.restarts} fresh restart${w.restarts === 1 ? '' : 's'}`);
+    if (w.metBy.pruned > 0)
+        parts.push(`${w.metBy.pruned} pruned from wider networks`);
+    const required = report.search?.required ?? null;
+    const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
+    const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
+    return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
+}
+/** A baseline width's decisive metric, or its best in files that lack it when one network suffices. */
+function baselineDecisive(w, required) {
+    if (w.decisive !== undefined)
+        return w.decisive;
+    return required === 1 ? w.best : null;
+}
+
+;// CONCATENATED MODULE: ./src/report/words.ts
+
+
+/** "best", "2nd best", "3rd best", "4th best". */
+function nthBest(n) {
+    if (n <= 1)
+        return 'best';
+    const tens = n % 100;
+    const suffix = tens >= 11 && tens <= 13 ? 'th' : (['th', 'st', 'nd', 'rd'][n % 10] ?? 'th');
+    return `${n}${suffix} best`;
+}
+/** "on 539 judging rows" (or validation/training rows when those judged). */
+function judgingRowsPhrase(report) {
+    const j = report.search?.judging;
+    if (!j)
+        return '';
+    return `on ${(0,format/* formatCount */.B4)(j.rows)} ${j.on} rows`;
+}
+/** The first answer: how many neurons the data need now, and what the witness scores. */
+function needsSentence(report) {
+    const base = report.baseline?.width ?? null;
+    const target = (0,format/* targetPhrase */.Lx)(report.metric.name, report.metric.threshold);
+    if (report.width === null) {
+        const why = report.search?.outcome === 'inconclusive'
+            ? 'not settled: the search stopped before it could decide'
+            : `no width in the search range is adequate (${report.search?.required ?? 1} of its networks meeting ${target})`;
+        return `${capitalise(why)}${base === null ? '' : `; the baseline needed ${(0,format/* neurons */.nO)(base)}`}.`;
+    }
+    const was = base === null
+        ? ''
+        : base === report.width
+            ? ', as the baseline did'
+            : ` (the baseline needed ${(0,format/* formatCount */.B4)(base)})`;
+    const parts = [`${(0,format/* neurons */.nO)(report.width)}${was}.`];
+    const value = report.metric.value;
+    if (value !== null) {
+        const int8 = report.device?.metric.int8 ?? null;
+        const decides = report.device?.precision ?? 'float32';
+        const forms = int8 === null
+            ? ''
+            : decides === 'int8'
+                ? ` in the int8 form that decides (float32 ${(0,format/* formatMetric */.gI)(report.device.metric.float32)})`
+                : `; int8 form ${(0,format/* formatMetric */.gI)(int8)}`;
+        const bound = `${(0,common_metric/* higherIsBetter */.i2)(report.metric.name) ? 'at least' : 'at most'} ${(0,format/* formatMetric */.gI)(report.metric.threshold)}`;
+        parts.push(`The witness scores ${report.metric.name} ${(0,format/* formatMetric */.gI)(value)} ${judgingRowsPhrase(report)} (target: ${bound})${forms}.`);
+    }
+    return parts.join(' ');
+}
+/** The spread of a regression target, so "rmse ≤ 6" can be read against its scale; null otherwise. */
+function targetSpreadSentence(report) {
+    const s = report.data.targetSpread;
+    if (!s || report.data.task !== 'regression')
+        return null;
+    return `The target column has mean ${(0,format/* formatMetric */.gI)(s.mean)}, standard deviation ${(0,format/* formatMetric */.gI)(s.std)}, range ${(0,format/* formatMetric */.gI)(s.min)} to ${(0,format/* formatMetric */.gI)(s.max)}.`;
+}
+/** Every data change, most important first within the fixed order a reader expects. */
+function changeItems(ch, esc) {
+    const items = [];
+    if (ch.file)
+        items.push({ weight: 2, text: `Data file ${esc(ch.file.before)} → ${esc(ch.file.after)}.` });
+    if (!ch.changed) {
+        items.push({ weight: 0, text: "Same data as the baseline's (same fingerprint)." });
+        return items;
+    }
+    const r = ch.rows;
+    const rowShare = r.before > 0 ? Math.abs(r.after - r.before) / r.before : 1;
+    items.push({
+        weight: rowShare >= 0.5 ? 5 : rowShare >= 0.05 ? 3 : 1,
+        text: `Rows ${(0,format/* formatCount */.B4)(r.before)} → ${(0,format/* formatCount */.B4)(r.after)} (${(0,format/* formatDelta */.CW)(r.after - r.before)}).`,
+    });
+    for (const label of ch.classesAppeared)
+        items.push({ weight: 6, text: `New class ${esc(label)}.` });
+    for (const label of ch.classesVanished)
+        items.push({ weight: 6, text: `Class ${esc(label)} no longer appears.` });
+    for (const c of ch.classes ?? []) {
+        if (c.before === c.after || c.before === 0 || c.after === 0)
+            continue;
+        // What matters is the class's share of the rows, not its count: all classes growing together is one change.
+        const moved = r.before > 0 && r.after > 0 ? Math.abs(c.after / r.after - c.before / r.before) : 1;
+        items.push({
+            weight: moved >= 0.05 ? 4 : 1,
+            text: `Class ${esc(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} → ${(0,format/* formatCount */.B4)(c.after)} rows (${(0,format/* formatDelta */.CW)(c.after - c.before)}${share(c, r)}).`,
+        });
+    }
+    for (const name of ch.columnsAdded)
+        items.push({ weight: 5, text: `Column added: ${esc(name)}.` });
+    for (const name of ch.columnsRemoved)
+        items.push({ weight: 5, text: `Column removed: ${esc(name)}.` });
+    for (const f of ch.features) {
+        const parts = [];
+        if (f.meanMoved) {
+            const by = f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} standard deviations)`;
+            parts.push(`mean ${(0,format/* formatMetric */.gI)(f.meanBefore)} → ${(0,format/* formatMetric */.gI)(f.meanAfter)}${by}`);
+        }
+        if (f.rangeWidened) {
+            const g = f.rangeGrowth;
+            const sides = [];
+            if (g.below > 0)
+                sides.push(`${(0,format/* formatMetric */.gI)(g.below)} lower${inStd(g.belowInStd)}`);
+            if (g.above > 0)
+                sides.push(`${(0,format/* formatMetric */.gI)(g.above)} higher${inStd(g.aboveInStd)}`);
+            parts.push(`range ${(0,format/* formatMetric */.gI)(f.rangeBefore[0])} to ${(0,format/* formatMetric */.gI)(f.rangeBefore[1])} widened to ${(0,format/* formatMetric */.gI)(f.rangeAfter[0])} to ${(0,format/* formatMetric */.gI)(f.rangeAfter[1])} (${sides.join(', ')})`);
+        }
+        if (parts.length === 0)
+            continue;
+        items.push({
+            weight: f.meanMoved ? 2 + Math.min(3, 1.5 * (f.shiftInStd ?? 0)) : 2,
+            text: `Feature ${esc(f.name)}: ${parts.join('; ')}.`,
+        });
+    }
+    for (const c of ch.categories) {
+        if (c.appeared.length > 0)
+            items.push({
+                weight: 4,
+                text: `Feature ${esc(c.feature)}: new categories ${c.appeared.map((s) => esc(s)).join(', ')}.`,
+            });
+        if (c.vanished.length > 0)
+            items.push({
+                weight: 3,
+                text: `Feature ${esc(c.feature)}: categories gone ${c.vanished.map((s) => esc(s)).join(', ')}.`,
+            });
+    }
+    return items;
+}
+/** "; 39% → 31% of the rows", when both row counts are known. */
+function share(c, rows) {
+    if (rows.before <= 0 || rows.after <= 0)
+        return '';
+    const pct = (n, of) => `${Math.round((100 * n) / of)}%`;
+    return `; ${pct(c.before, rows.before)} → ${pct(c.after, rows.after)} of the rows`;
+}
+/** " (1.2 standard deviations)" or nothing when the baseline's deviation was 0. */
+function inStd(v) {
+    return v === null ? '' : `, ${v.toFixed(1)} standard deviations`;
+}
+/** Most changes the "why it changed" answer names; the evidence lists them all. */
+const WHY_ITEMS = 3;
+/** The third answer: why the width changed, from the settings and the data, most important first. */
+function whySentence(report, esc) {
+    const b = report.baseline;
+    if (b === null)
+        return `No baseline to compare with: this is the first measurement of this data (${(0,format/* formatCount */.B4)(report.data.rows)} rows).`;
+    const settings = b.settingsChanged ?? [];
+    const lead = settings.length > 0 ? `Settings changed: ${settings.map((s) => esc(s)).join('; ')}. ` : '';
+    const ch = report.changes;
+    if (ch === null)
+        return `${lead}`.trim();
+    if (!ch.changed) {
+        return settings.length > 0
+            ? `${lead}The data are the same as the baseline's.`
+            : "Nothing changed: the same data and settings as the baseline's.";
+    }
+    const items = changeItems(ch, esc)
+        .map((item, order) => ({ ...item, order }))
+        .sort((x, y) => y.weight - x.weight || x.order - y.order);
+    const shown = items.slice(0, WHY_ITEMS).map((i) => i.text);
+    const more = items.length - shown.length;
+    const tail = more > 0 ? ` And ${more} more change${more === 1 ? '' : 's'} in the details.` : '';
+    const quiet = items.every((i) => i.weight <= 1) ? ' No class, column or feature moved beyond the thresholds.' : '';
+    return `${lead}${shown.join(' ')}${quiet}${tail}`;
+}
+/** "Tried 14 removals on 3 networks: 3 removed, 11 put back; the witness was pruned from 8 to 7." */
+function pruningSentence(report) {
+    const steps = report.search?.pruning ?? [];
+    if (steps.length === 0)
+        return null;
+    const networks = new Set(steps.map((s) => `${s.source.width}/${s.source.restart}`)).size;
+    const removed = steps.filter((s) => s.accepted).length;
+    const w = report.search?.witness ?? null;
+    const witness = w !== null && w.how === 'pruned' && w.source.width !== w.width
+        ? `; the witness was pruned from ${w.source.width} to ${w.width} neurons`
+        : '';
+    return `Tried ${steps.length} removal${steps.length === 1 ? '' : 's'} on ${networks} network${networks === 1 ? '' : 's'}: ${removed} removed, ${steps.length - removed} put back${witness}.`;
+}
+/** "45 trainings in 9.40 s (growth 8.10 s, pruning 1.30 s)": what the search cost this run. */
+function searchCostSentence(report) {
+    const s = report.search;
+    if (!s)
+        return null;
+    const t = report.timing;
+    const split = typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
+        ? ` (growth ${(0,format/* formatSeconds */.Xo)(t['growthSeconds'])}, pruning ${(0,format/* formatSeconds */.Xo)(t['pruneSeconds'])})`
+        : '';
+    return `The search ran ${(0,format/* formatCount */.B4)(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${(0,format/* formatSeconds */.Xo)(t['searchSeconds'])}${split}.`;
+}
+/** Whether this run's result is already the baseline (nothing to accept). */
+function baselineIsCurrent(report) {
+    const b = report.baseline;
+    return (b !== null &&
+        b.width === report.width &&
+        b.sameSettings !== false &&
+        report.changes !== null &&
+        !report.changes.changed &&
+        report.changes.file === null);
+}
+/** What to do next, fitting the run: what was written, and the command the user would type. */
+function hints(report, context, esc, code) {
+    const out = [];
+    const config = context.configShown === null ? '' : ` --config ${esc(context.configShown)}`;
+    const file = esc(context.baselineFile ?? report.gate?.baselineFile ?? report.baseline?.file ?? 'the baseline file');
+    const written = context.baseline;
+    if (written !== null && 'file' in written) {
+        out.push(`Baseline written: ${esc(written.file)}, width ${written.width}, ${written.historyEntries} history entr${written.historyEntries === 1 ? 'y' : 'ies'}. Commit it to make it the baseline.`);
+    }
+    else if (written !== null) {
+        out.push(`Baseline not written: ${esc(written.notWritten, 400)}.`);
+    }
+    else if (report.width !== null && report.verdict !== 'inconclusive' && !baselineIsCurrent(report)) {
+        const command = code(`neuron-budget baseline${config}`);
+        const action = code('update-baseline: true');
+        const lead = report.verdict === 'new'
+            ? 'To record this result as the baseline'
+            : 'If this change is intended, accept it as the new baseline';
+        out.push(context.surface === 'action'
+            ? `${lead}: run the action with ${action}, or run ${command} and commit ${file}.`
+            : `${lead}: run ${command} and commit ${file}.`);
+    }
+    const budget = report.gate?.maxWidth ?? null;
+    if (budget !== null && report.width !== null && report.width > budget) {
+        out.push(`A new baseline does not lift the device budget: this check fails until the width fits it or ${code('gate.max-width')} is raised.`);
+    }
+    return out;
+}
+const SIGN_OFF = 'A passing gate is not a safety sign-off for a device.';
+function capitalise(s) {
+    return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
+}
+
+;// CONCATENATED MODULE: ./src/report/charts.ts
+/**
+ * The two charts, one per question, as chart specs with the sentence that reads them.
+ *
+ * Metric by width: one chart holds the baseline and this change, each width a pair of
+ * categories ("b7" the baseline, "7" this change), because Mermaid draws two bar series at the
+ * same place over each other. A side that did not decide a width has a bar of the axis minimum
+ * there, i.e. none. The bar is the `required`-th best judged metric, so a bar reaches the
+ * threshold line exactly when the width is adequate (recall floors aside). A category without
+ * bars at each end (the widths just outside the range shown; the first is blank when that would be
+ * 0) carries the threshold line past the outer bars, so it shows even with one width. Mermaid's
+ * band axis merges equal labels, so every category is distinct.
+ */
+
+
+
+
+
+/** Most widths the metric chart shows; longer curves keep the widest (where the answer lies). */
+const CHART_MAX_WIDTHS = 15;
+/** Most baselines the drift chart shows. */
+const DRIFT_MAX_POINTS = 30;
+function metricChart(view, report) {
+    const required = report.search?.required ?? 1;
+    const rows = view.rows.slice(-CHART_MAX_WIDTHS);
+    const pairs = view.baseline !== null;
+    const now = rows.map((r) => r.current?.decisive ?? null);
+    const base = rows.map((r) => (r.baseline ? baselineDecisive(r.baseline, required) : null));
+    const values = [...now, ...base].filter((v) => v !== null && Number.isFinite(v));
+    if (values.length === 0)
+        return null;
+    const accuracy = (0,common_metric/* higherIsBetter */.i2)(view.metricName);
+    const range = metricRange(values, view.threshold, accuracy);
+    // Mermaid draws a bar of the axis minimum as a stub a few pixels high; one below it draws nothing.
+    const floor = range[0] - (range[1] - range[0]);
+    const first = rows[0].width - 1;
+    const categories = [first > 0 ? String(first) : ' '];
+    const nowBars = [floor];
+    const baseBars = [floor];
+    rows.forEach((r, i) => {
+        if (pairs) {
+            categories.push(`b${r.width}${r.width === view.baseline?.width ? ' min' : ''}`);
+            baseBars.push(base[i] ?? floor);
+            nowBars.push(floor);
+        }
+        categories.push(`${r.width}${r.width === view.current.width ? ' min' : ''}`);
+        nowBars.push(now[i] ?? floor);
+        baseBars.push(floor);
+    });
+    categories.push(String(rows[rows.length - 1].width + 1));
+    nowBars.push(floor);
+    baseBars.push(floor);
+    const which = nthBest(required);
+    const side = accuracy ? 'at or above' : 'at or below';
+    const legend = [
+        `Bars: the ${which} ${view.metricName} of the networks at each width, so a bar ${side} the line means the width is adequate (${required} network${required === 1 ? '' : 's'} met the target).`,
+        pairs ? 'Each width has two places: grey "b" and the width is the baseline, blue the width alone this change.' : '',
+        `"min" marks the smallest adequate width${pairs ? ' of each' : ''}. Red line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}.`,
+        `The y-axis runs from ${(0,format/* formatMetric */.gI)(range[0])} to ${(0,format/* formatMetric */.gI)(range[1])}${range[0] === 0 ? '' : ', not from 0'}; the numbers are in the table.`,
+    ]
+        .filter((s) => s !== '')
+        .join(' ');
+    return {
+        spec: {
+            title: `${view.metricName} by hidden neurons`,
+            xTitle: 'hidden neurons',
+            categories,
+            yTitle: view.metricName,
+            yRange: range,
+            series: [
+                ...(pairs ? [{ kind: 'bar', values: baseBars, color: CHART_COLORS.baseline }] : []),
+                { kind: 'bar', values: nowBars, color: CHART_COLORS.current },
+                { kind: 'line', values: categories.map(() => view.threshold), color: CHART_COLORS.limit },
+            ],
+        },
+        legend,
+        widths: rows.map((r) => r.width),
+    };
+}
+/** Capacity drift: the width of each accepted baseline, then this change, against the neuron budget. */
+function driftChart(view, budget) {
+    if (view.history.length === 0)
+        return null;
+    const history = view.history.slice(-DRIFT_MAX_POINTS);
+    const first = view.history.length - history.length;
+    // A blank first and a "later" last category carry the budget line past the outer bars.
+    const categories = [' ', ...history.map((_, i) => String(first + i + 1))];
+    const widths = [0, ...history.map((h) => h.width)];
+    if (view.current.width !== null) {
+        categories.push('now');
+        widths.push(view.current.width);
+    }
+    categories.push('later');
+    widths.push(0);
+    const legend = `Bars: the smallest adequate width of each accepted baseline, oldest first (numbered as in the history table)${view.current.width !== null ? ', then this change' : ''}.` +
+        (budget === null
+            ? ' No neuron budget is set (gate.max-width).'
+            : ` Red line: the device budget of ${budget} hidden neurons.`);
+    return {
+        spec: {
+            title: 'Smallest adequate width over time',
+            xTitle: 'accepted baseline',
+            categories,
+            yTitle: 'hidden neurons',
+            yRange: countRange(budget === null ? widths : [...widths, budget]),
+            series: [
+                { kind: 'bar', values: widths, color: CHART_COLORS.current },
+                ...(budget === null
+                    ? []
+                    : [{ kind: 'line', values: categories.map(() => budget), color: CHART_COLORS.limit }]),
+            ],
+        },
+        legend,
+        widths: [],
+    };
+}
+
+;// CONCATENATED MODULE: ./src/report/context.ts
+const DEFAULT_CONTEXT = {
+    surface: 'cli',
+    mode: 'check',
+    configShown: null,
+    baselineFile: null,
+    baseline: null,
+};
+
+;// CONCATENATED MODULE: ./src/report/evidence.ts
+/**
+ * The comment's evidence, collapsed under the three answers: the per-width ladder, per-class
+ * figures, the baseline history, the pruning steps and every data change (Markdown tables).
+ */
+
+
+
+
+function collapsible(summary, body) {
+    // The blank line after </summary> lets GitHub render the Markdown inside.
+    return `<details><summary>${summary}</summary>\n\n${body}\n\n</details>`;
+}
+function num(v) {
+    return v === null || v === undefined || !Number.isFinite(v) ? '—' : (0,format/* formatMetric */.gI)(v);
+}
+/** "4 of 10 + 1 pruned": networks that met the target, by source. */
+function metCell(w) {
+    const fresh = `${w.metBy.fresh} of ${w.restarts}`;
+    return w.metBy.pruned > 0 ? `${fresh} + ${w.metBy.pruned} pruned` : fresh;
+}
+function ladderSection(view, report, limits, mustShow) {
+    const required = report.search?.required ?? 1;
+    const which = nthBest(required);
+    const hasBaseline = view.baseline !== null;
+    const header = [
+        'Width',
+        'Met the target',
+        `${capitalise(which)}`,
+        'Best',
+        'Adequate',
+        ...(hasBaseline ? ['Baseline: met', `Baseline: ${which}`] : []),
+    ];
+    const keep = pickRows(view.rows, limits.widthRows, (r) => mustShow.has(r.width) || r.width === view.current.width);
+    const lines = keep.kept.map((r) => {
+        const c = r.current;
+        const marked = r.width === view.current.width || r.width === view.baseline?.width;
+        const cells = [
+            marked ? `**${r.width}**` : String(r.width),
+            c ? metCell(c) : 'not decided',
+            num(c?.decisive),
+            num(c?.best),
+            c ? (c.adequate ? 'yes' : 'no') : '—',
+        ];
+        if (hasBaseline)
+            cells.push(r.baseline ? String(r.baseline.met) : '—', num(r.baseline ? baselineDecisive(r.baseline, required) : null));
+        return `| ${cells.join(' | ')} |`;
+    });
+    const align = header.map((_, i) => (i === 1 ? ':--' : '--:'));
+    const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
+    const bold = view.current.width !== null || view.baseline?.width != null
+        ? ' Bold: the smallest adequate width of this change and of the baseline.'
+        : '';
+    return (`| ${header.join(' | ')} |\n|${align.join('|')}|\n${lines.join('\n')}${omitted}\n\n` +
+        `Met the target: fresh restarts at that width that met it, of those run, plus networks pruned down to it. ` +
+        `A width is adequate when ${required} network${required === 1 ? '' : 's'} of it met the target, so the ${which} figure decides.${bold}` +
+        (searchCostSentence(report) === null ? '' : ` ${searchCostSentence(report)}`));
+}
+function classSection(report) {
+    const d = report.device;
+    if (d === null || d.classes === null)
+        return null;
+    const floors = d.classes.some((c) => c.floor !== null);
+    const head = `| Class | Rows | Recall | Precision${floors ? ' | Recall floor' : ''} |\n|:--|--:|--:|--:|${floors ? '--:|' : ''}`;
+    const lines = d.classes.map((c) => `| ${(0,common_escape/* escapeMarkdown */.FV)(c.label)} | ${(0,format/* formatCount */.B4)(c.rows)} | ${num(c.recall)} | ${num(c.precision)}${floors ? ` | ${num(c.floor)}` : ''} |`);
+    const parts = [`In the ${d.precision} form that decides.`, `${head}\n${lines.join('\n')}`];
+    if (d.confusion !== null) {
+        const labels = d.classes.map((c) => (0,common_escape/* escapeMarkdown */.FV)(c.label, 40));
+        const ch = `| True class ↓ predicted → | ${labels.join(' | ')} |\n|:--|${labels.map(() => '--:').join('|')}|`;
+        const rows = d.confusion.map((row, i) => `| ${labels[i]} | ${row.map((n) => (0,format/* formatCount */.B4)(n)).join(' | ')} |`);
+        parts.push(`${ch}\n${rows.join('\n')}`);
+    }
+    return parts.join('\n\n');
+}
+function historySection(history, limits) {
+    const start = Math.max(0, history.length - limits.historyRows);
+    const lines = history.slice(start).map((h, i) => {
+        const commit = h.commit === null ? '—' : (0,common_escape/* escapeMarkdown */.FV)(h.commit.slice(0, 12));
+        return `| ${start + i + 1} | ${(0,common_escape/* escapeMarkdown */.FV)(h.date.slice(0, 10))} | ${commit} | ${(0,format/* formatCount */.B4)(h.rows)} | ${h.width} | ${num(h.metric)} |`;
+    });
+    const omitted = start > 0 ? `\n\n_The ${start} oldest entries are left out for length._` : '';
+    return `| # | Date | Commit | Rows | Width | Metric |\n|--:|:--|:--|--:|--:|--:|\n${lines.join('\n')}${omitted}`;
+}
+function pruneSection(report, limits) {
+    const steps = report.search?.pruning ?? [];
+    const summary = pruningSentence(report);
+    if (summary === null)
+        return null;
+    if (limits.pruneRows === 0)
+        return `${summary}\n\n_The steps are left out for length; the JSON report lists them._`;
+    const shown = steps.slice(0, limits.pruneRows);
+    const lines = shown.map((s) => `| ${s.source.width} | ${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back'} |`);
+    const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
+    return (`${summary}\n\n| Grown width | Restart | Width before | Neuron index | Steering before | Steering after | Outcome |\n|--:|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}\n\n` +
+        'Neuron index counts from 0, as in the JSON report and the model file. A neuron is put back when the network without it no longer meets the target on the steering rows.');
+}
+function changesSection(changes, limits) {
+    const items = changeItems(changes, common_escape/* escapeMarkdown */.FV).map((i) => i.text);
+    const shown = items.slice(0, limits.changeItems);
+    const omitted = items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
+    return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation, or its range grew on a side by more than half a baseline standard deviation.`;
+}
+function pickRows(rows, max, must) {
+    if (rows.length <= max)
+        return { kept: rows, omitted: 0 };
+    let room = Math.max(0, max - rows.filter(must).length);
+    const kept = rows.filter((r) => {
+        if (must(r))
+            return true;
+        if (room > 0) {
+            room--;
+            return true;
+        }
+        return false;
+    });
+    return { kept, omitted: rows.length - kept.length };
+}
+
+;// CONCATENATED MODULE: ./src/report/ledger.ts
+
+/** The ledger, or null when there is no width to cost. */
+function ledgerOf(report) {
+    // A network's cost depends on its width alone (for these inputs and outputs): the width's entry holds it.
+    const costAt = (width) => report.search?.widths.find((w) => w.width === width)?.cost ?? null;
+    if (report.width === null)
+        return null;
+    const c = report.device?.cost ?? costAt(report.width);
+    if (c === null)
+        return null;
+    const p = report.device?.precision ?? 'float32';
+    const other = p === 'int8' ? 'float32' : 'int8';
+    const g = report.gate ?? null;
+    const baselineWidth = report.baseline?.width ?? null;
+    const base = baselineWidth === null ? null : costAt(baselineWidth);
+    return {
+        precision: p,
+        baselineWidth,
+        rows: [
+            { label: 'hidden neurons', unit: '', now: report.width, budget: g?.maxWidth ?? null, atBaseline: baselineWidth },
+            {
+                label: `flash, ${p}`,
+                unit: ' B',
+                now: c.flashBytes[p],
+                budget: g?.maxFlashBytes ?? null,
+                atBaseline: base?.flashBytes[p] ?? null,
+            },
+            {
+                label: `flash, ${other}`,
+                unit: ' B',
+                now: c.flashBytes[other],
+                budget: null,
+                atBaseline: base?.flashBytes[other] ?? null,
+            },
+            {
+                label: `RAM, ${p}`,
+                unit: ' B',
+                now: c.ramBytes[p],
+                budget: g?.maxRamBytes ?? null,
+                atBaseline: base?.ramBytes[p] ?? null,
+            },
+            {
+                label: `RAM, ${other}`,
+                unit: ' B',
+                now: c.ramBytes[other],
+                budget: null,
+                atBaseline: base?.ramBytes[other] ?? null,
+            },
+            {
+                label: 'multiply-accumulates',
+                unit: '',
+                now: c.macs,
+                budget: g?.maxMacs ?? null,
+                atBaseline: base?.macs ?? null,
+            },
+        ],
+    };
+}
+function amount(n, unit) {
+    return `${(0,format/* formatCount */.B4)(n)}${unit}`;
+}
+/** "5 (over by 2)" / "600 B (fits, 77 B spare)" / "none set". */
+function budgetCell(row) {
+    if (row.budget === null)
+        return 'none set';
+    const gap = row.now - row.budget;
+    return gap > 0
+        ? `${amount(row.budget, row.unit)} (over by ${amount(gap, row.unit)})`
+        : `${amount(row.budget, row.unit)} (fits, ${amount(-gap, row.unit)} spare)`;
+}
+/** The second answer: does the width found fit the device? */
+function fitsSentence(ledger) {
+    if (ledger === null)
+        return 'Nothing to cost: no width is adequate.';
+    const budgeted = ledger.rows.filter((r) => r.budget !== null);
+    if (budgeted.length === 0) {
+        return 'No device budget is set, so nothing is gated; the ledger shows what the network costs. Set gate.max-width, gate.max-flash-bytes, gate.max-ram-bytes or gate.max-macs to gate on it.';
+    }
+    const over = budgeted.filter((r) => r.now > r.budget);
+    if (over.length > 0)
+        return `No: ${over.map((r) => `${excess(r)} over the budget of ${amount(r.budget, r.unit)}`).join('; ')}.`;
+    return `Yes, within every budget set: ${budgeted.map((r) => `${r.label} ${amount(r.now, r.unit)} of ${amount(r.budget, r.unit)}`).join(', ')}.`;
+}
+/** "2 hidden neurons" / "123 B of flash, int8" / "12 multiply-accumulates". */
+function excess(r) {
+    const gap = r.now - r.budget;
+    if (r.label === 'hidden neurons')
+        return (0,format/* neurons */.nO)(gap);
+    return r.unit === '' ? `${(0,format/* formatCount */.B4)(gap)} ${r.label}` : `${amount(gap, r.unit)} of ${r.label}`;
+}
+
+;// CONCATENATED MODULE: ./src/report/markdown.ts
+/**
+ * The pull-request comment and job summary (GitHub-flavoured Markdown), laid out around the
+ * reviewer's three questions: how many neurons does the data need now, does that fit the
+ * device, and why did it change. The verdict and the three answers come first; the evidence
+ * (metric by width, per class, capacity drift, pruning, every data change) follows collapsed.
+ * Every string from the repository passes through escapeMarkdown. When the comment would
+ * exceed the limit, only the evidence is shortened.
+ */
+
+
+
+
+
+
+
+
+
+/** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
+const COMMENT_LIMIT = 65_000;
+const DETAIL_LEVELS = [
+    { widthRows: Infinity, historyRows: Infinity, pruneRows: Infinity, changeItems: Infinity },
+    { widthRows: 200, historyRows: 100, pruneRows: 60, changeItems: 100 },
+    { widthRows: 80, historyRows: 40, pruneRows: 20, changeItems: 40 },
+    { widthRows: 0, historyRows: 12, pruneRows: 0, changeItems: 12 },
+];
+const code = (s) => `\`${s}\``;
+function renderMarkdown(report, options = {}) {
+    const limit = options.limit ?? COMMENT_LIMIT;
+    const context = options.context ?? DEFAULT_CONTEXT;
+    const view = viewOf(report);
+    const head = [headline(view), answers(view, report)].join('\n\n');
+    const foot = footer(report, context);
+    for (const level of DETAIL_LEVELS) {
+        const body = [head, evidence(view, report, level), foot].filter((s) => s !== '').join('\n\n');
+        if (body.length + 1 <= limit)
+            return `${body}\n`;
+    }
+    const note = "_The evidence was left out to keep this comment within GitHub's size limit; the JSON report has it all._";
+    return `${[head, note, foot].join('\n\n')}\n`;
+}
+function headline(view) {
+    const lines = [`### neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${(0,common_escape/* escapeMarkdown */.FV)(view.headline, errors/* MAX_MESSAGE */.h2)}`];
+    if (view.otherReasons.length > 0) {
+        lines.push('');
+        for (const r of view.otherReasons)
+            lines.push(`- ${(0,common_escape/* escapeMarkdown */.FV)(r, errors/* MAX_MESSAGE */.h2)}`);
+    }
+    return lines.join('\n');
+}
+/** The three answers, each led by its question's word in bold. */
+function answers(view, report) {
+    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
+    const ledger = ledgerOf(report);
+    const parts = [
+        `**Needs:** ${(0,common_escape/* escapeMarkdown */.FV)(needs.join(' '), 2 * errors/* MAX_MESSAGE */.h2)}`,
+        `**Fits the device:** ${(0,common_escape/* escapeMarkdown */.FV)(fitsSentence(ledger), errors/* MAX_MESSAGE */.h2)}`,
+    ];
+    if (ledger !== null)
+        parts.push(ledgerTable(ledger));
+    parts.push(`**Why it changed:** ${whySentence(report, common_escape/* escapeMarkdown */.FV)}`);
+    return parts.join('\n\n');
+}
+function ledgerTable(ledger) {
+    const base = ledger.baselineWidth;
+    const head = base === null
+        ? '| On the device | Needs now | Budget |\n|:--|--:|--:|'
+        : `| On the device | Needs now | Budget | At the baseline's ${base} |\n|:--|--:|--:|--:|`;
+    const lines = ledger.rows.map((r) => {
+        const cells = [r.label, `**${amount(r.now, r.unit)}**`, budgetCell(r)];
+        if (base !== null)
+            cells.push(r.atBaseline === null ? '—' : amount(r.atBaseline, r.unit));
+        return `| ${cells.join(' | ')} |`;
+    });
+    return `${head}\n${lines.join('\n')}`;
+}
+function evidence(view, report, limits) {
+    const blocks = [];
+    const metric = metricChart(view, report);
+    if (view.rows.length > 0) {
+        const chart = metric === null ? '' : `${metric.legend}\n\n${renderChart(metric.spec)}\n\n`;
+        blocks.push(collapsible(`Per width: ${(0,common_escape/* escapeMarkdown */.FV)(view.metricName)} of the ${view.rows.length} width${view.rows.length === 1 ? '' : 's'} decided`, `${chart}${ladderSection(view, report, limits, new Set(metric?.widths ?? []))}`));
+    }
+    const classes = classSection(report);
+    if (classes !== null)
+        blocks.push(collapsible('Per class, on the rows that judged the witness', classes));
+    const drift = driftChart(view, report.gate?.maxWidth ?? null);
+    if (drift !== null) {
+        blocks.push(collapsible(`Capacity drift: ${view.history.length} accepted baseline${view.history.length === 1 ? '' : 's'}`, `${drift.legend}\n\n${renderChart(drift.spec)}\n\n${historySection(view.history, limits)}`));
+    }
+    const pruning = pruneSection(report, limits);
+    if (pruning !== null)
+        blocks.push(collapsible(`Pruning: ${report.search.pruning.length} removals tried`, pruning));
+    if (report.changes)
+        blocks.push(collapsible('Every data change since the baseline', changesSection(report.changes, limits)));
+    return blocks.join('\n\n');
+}
+function footer(report, context) {
+    const lines = hints(report, context, common_escape/* escapeMarkdown */.FV, code);
+    const sign = `_neuron-budget ${(0,common_escape/* escapeMarkdown */.FV)(report.tool.version)} measures how many hidden neurons this data needs. ${SIGN_OFF}_`;
+    return ['---', ...lines, sign].join('\n\n');
+}
+
+;// CONCATENATED MODULE: ./src/report/text.ts
+/**
+ * The terminal report: the same answers and words as the comment, plain text, at most 80 columns
+ * (a long repository name may run over; each is clipped at 200 characters).
+ */
+
+
+
+
+
+
+
+const TEXT_WIDTH = 80;
+function renderText(report, context = DEFAULT_CONTEXT) {
+    const view = viewOf(report);
+    const out = [];
+    // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
+    out.push(...wrap(`neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${(0,common_escape/* escapeText */.X1)(view.headline, errors/* MAX_MESSAGE */.h2)}`, ''));
+    for (const r of view.otherReasons)
+        out.push(...wrap((0,common_escape/* escapeText */.X1)(r, errors/* MAX_MESSAGE */.h2), '  - ', '    '));
+    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
+    out.push('', ...wrap(`Needs: ${needs.join(' ')}`, '', '  '));
+    const ledger = ledgerOf(report);
+    out.push('', ...wrap(`Fits the device: ${fitsSentence(ledger)}`, '', '  '));
+    if (ledger !== null)
+        out.push(...ledgerLines(ledger));
+    out.push('', ...wrap(`Why it changed: ${whySentence(report, common_escape/* escapeText */.X1)}`, '', '  '));
+    if (view.rows.length > 0)
+        out.push('', ...ladderLines(view, report));
+    if (view.history.length > 0) {
+        out.push('');
+        out.push(`capacity drift (accepted baselines, oldest first${view.current.width !== null ? ', then now' : ''}):`);
+        const widths = view.history.slice(-20).map((h) => String(h.width));
+        if (view.current.width !== null)
+            widths.push(`now ${view.current.width}`);
+        const budget = report.gate?.maxWidth ?? null;
+        out.push(...wrap(`width ${widths.join(' -> ')}${budget === null ? '' : ` (budget ${budget})`}`, '  ', '  '));
+    }
+    const pruning = pruningSentence(report);
+    if (pruning !== null)
+        out.push('', ...wrap(`pruning: ${pruning[0].toLowerCase()}${pruning.slice(1)}`, '', '  '));
+    if (report.changes) {
+        out.push('', 'data changes since the baseline:');
+        for (const item of changeItems(report.changes, common_escape/* escapeText */.X1))
+            out.push(...wrap(item.text, '  - ', '    '));
+    }
+    out.push('');
+    for (const line of hints(report, context, common_escape/* escapeText */.X1, (s) => s))
+        out.push(...wrap(line, ''));
+    out.push(...wrap(SIGN_OFF, ''));
+    return `${out.join('\n')}\n`;
+}
+function ledgerLines(ledger) {
+    const base = ledger.baselineWidth;
+    const head = ['on the device', 'needs now', 'budget', ...(base === null ? [] : [`at baseline's ${base}`])];
+    const rows = ledger.rows.map((r) => [
+        r.label,
+        amount(r.now, r.unit),
+        budgetCell(r),
+        ...(base === null ? [] : [r.atBaseline === null ? '-' : amount(r.atBaseline, r.unit)]),
+    ]);
+    const widths = [22, 11, 20, 18];
+    return [head, ...rows].map((cells) => `  ${cells.map((c, i) => (i === 0 ? c.padEnd(widths[0]) : c.padStart(widths[i]))).join('')}`.trimEnd());
+}
+function ladderLines(view, report) {
+    const required = report.search?.required ?? 1;
+    const b = view.baseline;
+    const out = [`${view.metricName} by width (met: networks that met the target; ${nthBest(required)} decides)`];
+    const head = ['width', 'met', nthBest(required), 'best', 'adequate', ...(b ? ['baseline met'] : [])];
+    const widths = [7, 16, 11, 10, 10, 14];
+    const line = (cells) => cells
+        .map((c, i) => c.padStart(widths[i]))
+        .join('')
+        .trimEnd();
+    out.push(line(head));
+    for (const r of view.rows) {
+        const c = r.current;
+        const marked = r.width === view.current.width ? '>' : ' ';
+        out.push(line([
+            `${marked}${r.width}`,
+            c ? `${c.metBy.fresh} of ${c.restarts}${c.metBy.pruned > 0 ? ` +${c.metBy.pruned}p` : ''}` : 'not decided',
+            fmt(c?.decisive),
+            fmt(c?.best),
+            c ? (c.adequate ? 'yes' : 'no') : '-',
+            ...(b ? [r.baseline ? String(r.baseline.met) : '-'] : []),
+        ]));
+    }
+    const notes = [`threshold ${(0,format/* formatMetric */.gI)(view.threshold)}`];
+    if (view.current.width !== null)
+        notes.unshift("> marks this change's smallest adequate width");
+    if (view.rows.some((r) => (r.current?.metBy.pruned ?? 0) > 0))
+        notes.push('+Np: N networks pruned down to it');
+    out.push(...wrap(`(${notes.join('; ')})`, '  ', '  '));
+    const cost = searchCostSentence(report);
+    if (cost !== null)
+        out.push(...wrap(cost, '  ', '  '));
+    return out;
+}
+/** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
+function wrap(text, first, rest = first) {
+    const words = text.split(/ +/).filter((w) => w !== '');
+    const lines = [];
+    let line = first;
+    let empty = true;
+    for (const w of words) {
+        if (!empty && line.length + 1 + w.length > TEXT_WIDTH) {
+            lines.push(line);
+            line = rest + w;
+        }
+        else {
+            line += (empty ? '' : ' ') + w;
+        }
+        empty = false;
+    }
+    lines.push(line);
+    return lines;
+}
+function fmt(v) {
+    return v === null || v === undefined || !Number.isFinite(v) ? '-' : (0,format/* formatMetric */.gI)(v);
+}
+
+;// CONCATENATED MODULE: ./src/report/json.ts
+function withGate(report, outcome, gate) {
+    const b = outcome.baseline;
+    return {
+        ...report,
+        verdict: outcome.verdict,
+        reasons: [...outcome.reasons],
+        baseline: b
+            ? {
+                width: b.result.width,
+                metric: b.result.metric.value,
+                file: gate.baselineAsWritten,
+                met: b.result.met,
+                restarts: b.result.restarts,
+                rows: b.data.rows,
+                searchSeconds: b.result.searchSeconds,
+                toolVersion: b.tool.version,
+                sameSettings: outcome.settingsChanged.length === 0,
+                settingsChanged: [...outcome.settingsChanged],
+                widths: b.widths.map((w) => ({ ...w })),
+                history: b.history.map((h) => ({ ...h })),
+            }
+            : null,
+        gate: {
+            maxWidth: gate.maxWidth,
+            maxFlashBytes: gate.maxFlashBytes,
+            maxRamBytes: gate.maxRamBytes,
+            maxMacs: gate.maxMacs,
+            allowedGrowth: gate.allowedGrowth,
+            metricTolerance: gate.metricTolerance,
+            baselineFile: gate.baselineAsWritten,
+        },
+        changes: outcome.changes,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/report/baseline-record.ts
+/**
+ * The one line that says what `baseline` did with the baseline file, for the command line's
+ * stdout and the action's log (the record itself is in JobResult.baselineRecord).
+ */
+
+
+/** "baseline written: FILE, width W, N history entries", or "baseline not written: WHY". The file is escaped. */
+function baselineRecordLine(record) {
+    if ('notWritten' in record)
+        return `baseline not written: ${record.notWritten}`;
+    const entries = record.historyEntries === 1 ? '1 history entry' : `${(0,format/* formatCount */.B4)(record.historyEntries)} history entries`;
+    return `baseline written: ${(0,common_escape/* escapeText */.X1)(record.file)}, width ${record.width}, ${entries}`;
+}
+
+;// CONCATENATED MODULE: ./src/report/index.ts
+/** Rendering a report: pull-request comment / job summary, terminal text, JSON. */
+
+
+
+
+
+
+;// CONCATENATED MODULE: ./src/job/finish.ts
+/**
+ * What every stage that ends in a search result does last (check, baseline, merge): compare
+ * with the baseline, assemble the report, write the witness and the report, and render the screens.
+ */
+
+
+
+
+
+
+
+
+
+async function finishJob(job, search, options) {
+    const { config, data, timing } = job;
+    timing.growthSeconds = search.timing.growthSeconds;
+    timing.pruneSeconds = search.timing.pruneSeconds;
+    const cost = search.witness === null ? null : (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)(search.witness.network, data.dataset.encoding));
+    const gate = await runGateStage({
+        mode: options.mode,
+        result: search,
+        cost,
+        loaded: data,
+        config,
+        baselinePath: job.baselinePath,
+        baselineShown: job.baselineShown,
+        previous: job.previous,
+        commit: options.commit ?? null,
+        date: new Date(),
+        toolVersion: TOOL_VERSION,
+    });
+    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
+        encoding: data.dataset.encoding,
+        target: config.target,
+    }), gate.outcome, gate.gate);
+    let modelWritten = null;
+    if (options.modelPath) {
+        if (search.witness === null) {
+            options.log?.('model not written: no network met the target');
+        }
+        else {
+            const backing = { on: search.judging.on, adequate: search.width !== null };
+            const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
+            const provenance = {
+                tool: { name: 'neuron-budget', version: TOOL_VERSION },
+                data: data.fingerprint,
+                config: displayPath(config.root, config.file),
+            };
+            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration, provenance);
+            await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
+            modelWritten = options.modelPath;
+        }
+    }
+    if (options.reportPath) {
+        await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
+    }
+    const verdict = report.verdict;
+    const context = {
+        surface: options.surface ?? 'cli',
+        mode: options.mode,
+        configShown: options.configShown ?? null,
+        baselineFile: job.baselineFile,
+        baseline: gate.record,
+    };
+    return {
+        report,
+        verdict,
+        markdown: renderMarkdown(report, { context }),
+        text: renderText(report, context),
+        baselineWritten: gate.written,
+        baselineRecord: gate.record,
+        modelWritten,
+        exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/common/suggest.ts
+/** "Did you mean …?" help for misspelt names (config keys, flags, commands, columns). */
+/** Levenshtein distance (insert, delete, substitute; each costs 1). @testOnly */
+function editDistance(a, b) {
+    if (a === b)
+        return 0;
+    if (a.length === 0)
+        return b.length;
+    if (b.length === 0)
+        return a.length;
+    let previous = new Array(b.length + 1);
+    let current = new Array(b.length + 1);
+    for (let j = 0; j <= b.length; j++)
+        previous[j] = j;
+    for (let i = 1; i <= a.length; i++) {
+        current[0] = i;
+        for (let j = 1; j <= b.length; j++) {
+            const substitution = previous[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1);
+            current[j] = Math.min(previous[j] + 1, current[j - 1] + 1, substitution);
+        }
+        [previous, current] = [current, previous];
+    }
+    return previous[b.length];
+}
+/**
+ * The candidate closest to `name` (case-insensitive, `_` and `-` treated alike), or null
+ * when none is close enough to be a plausible typo: at most a third of the longer name's
+ * letters may differ, but always two (a rule of thumb, no source); ties keep the first candidate.
+ */
+function nearest(name, candidates) {
+    const norm = (s) => s.toLowerCase().replace(/_/g, '-');
+    const wanted = norm(name);
+    let best = null;
+    let bestDistance = Infinity;
+    for (const candidate of candidates) {
+        const d = editDistance(wanted, norm(candidate));
+        if (d < bestDistance) {
+            best = candidate;
+            bestDistance = d;
+        }
+    }
+    if (best === null)
+        return null;
+    const limit = Math.max(2, Math.ceil(Math.max(wanted.length, best.length) / 3));
+    return bestDistance <= limit ? best : null;
+}
+/** " (did you mean `x`?)" or "" when nothing is close. */
+function didYouMean(name, candidates) {
+    const match = nearest(name, candidates);
+    return match === null ? '' : ` (did you mean "${match}"?)`;
 }
 
 ;// CONCATENATED MODULE: ./src/config/build.ts
@@ -42553,8 +45674,6 @@ const lib_parse = function () {
 
 
 
-// EXTERNAL MODULE: external "node:os"
-var external_node_os_ = __nccwpck_require__(8161);
 ;// CONCATENATED MODULE: external "node:v8"
 const external_node_v8_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:v8");
 ;// CONCATENATED MODULE: ./src/data/memory.ts
@@ -43338,1695 +46457,6 @@ async function checkExists(file) {
         throw new ConfigKeyProblem('data.path', `expected a CSV file, found a folder at ${file.shown}`);
 }
 
-;// CONCATENATED MODULE: ./src/files/output.ts
-/**
- * Output files a user asked for (report, model): checked before minutes of work, written
- * atomically after. A refusal by the file system is the user's to fix, not a bug.
- */
-
-
-
-
-
-/** Writes an output file atomically; a refusal by the file system is the user's to fix, not a bug. */
-async function writeOutput(path, text, what, root) {
-    try {
-        await writeFileAtomic(path, text);
-    }
-    catch (error) {
-        const code = error.code;
-        const reasons = {
-            EACCES: 'permission denied',
-            EPERM: 'permission denied',
-            EROFS: 'the file system is read-only',
-            ENOSPC: 'no space left on the device',
-            EISDIR: 'it is a folder',
-            ENOENT: 'its folder does not exist',
-            ENOTDIR: 'a part of the path is not a folder',
-        };
-        const reason = code === undefined ? undefined : reasons[code];
-        if (reason === undefined)
-            throw error;
-        const shown = displayPath(root, path);
-        throw new errors/* UserError */.yo(`${what} file ${shown}: cannot be written (${reason}); nothing was written`, { file: shown });
-    }
-}
-/** Fails early when `path` cannot be an output file (its folder is missing, or it is a folder). */
-async function checkOutputFolder(path, what, root) {
-    const folder = (0,external_node_path_namespaceObject.dirname)(path);
-    const shown = displayPath(root, folder);
-    const info = await (0,promises_namespaceObject.stat)(folder).catch(() => null);
-    if (info === null)
-        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: folder ${shown} does not exist`, {
-            file: displayPath(root, path),
-        });
-    if (!info.isDirectory())
-        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: ${shown} is not a folder`, {
-            file: displayPath(root, path),
-        });
-    const target = await (0,promises_namespaceObject.stat)(path).catch(() => null);
-    if (target?.isDirectory())
-        throw new errors/* UserError */.yo(`${what} file ${displayPath(root, path)}: is a folder, expected a file name`, {
-            file: displayPath(root, path),
-        });
-}
-
-;// CONCATENATED MODULE: ./src/gate/settings.ts
-/**
- * The config settings that change the search's answer, and their fingerprint. Two runs
- * with different settings answer different questions, so the gate says so rather than
- * comparing their widths silently. Worker count and time budget are left out: they
- * change how long the search takes, not what it finds. The data file's path is left out
- * too: the data are compared by content (fingerprint and profile, see data-changes.ts),
- * so a renamed file with the same rows is the same question, and a file with other rows
- * shows up as a data change, which is what the gate exists to measure.
- */
-
-
-
-
-function resultSettings(config) {
-    const out = {};
-    for (const section of spec_CONFIG_SPEC) {
-        const values = config[section.name];
-        for (const key of section.keys) {
-            if (!key.changesResult)
-                continue;
-            out[`${section.name}.${key.name}`] = settingValue(values[fieldName(key.name)]);
-        }
-    }
-    // The order of ignored columns does not matter; the order of features does (input order).
-    const ignore = out['data.ignore'];
-    if (Array.isArray(ignore))
-        ignore.sort();
-    return out;
-}
-/** A setting as the baseline records it: a plain value, a list of texts, or a structured value as its canonical text. */
-function settingValue(value) {
-    if (value === undefined || value === null)
-        return null;
-    if (Array.isArray(value) && value.every((v) => typeof v === 'string'))
-        return [...value];
-    if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean')
-        return value;
-    // target.min-recall: {every} or {classes: [...]}, written the way the config states it.
-    const rule = value;
-    if (typeof rule.every === 'number')
-        return rule.every;
-    return JSON.stringify(Object.fromEntries((rule.classes ?? []).map((c) => [c.label, c.min])));
-}
-/** sha256 hex of the settings in canonical form (keys sorted). */
-function settingsFingerprint(settings) {
-    const keys = Object.keys(settings).sort();
-    const canonical = JSON.stringify(keys.map((k) => [k, settings[k]]));
-    return (0,external_node_crypto_.createHash)('sha256').update(canonical, 'utf8').digest('hex');
-}
-/** Settings that differ, as "key: before → after", in key order. */
-function settingsDifferences(before, after) {
-    const keys = [...new Set([...Object.keys(before), ...Object.keys(after)])].sort();
-    const out = [];
-    for (const k of keys) {
-        const a = show(before[k]);
-        const b = show(after[k]);
-        if (a !== b)
-            out.push(`${k}: ${a} → ${b}`);
-    }
-    return out;
-}
-function show(v) {
-    if (v === undefined)
-        return '(not set)';
-    if (v === null)
-        return '(default)';
-    // Column names are the repository's strings: each is clipped, and long lists would drown the
-    // sentence they appear in. Escaping is the renderer's (text, Markdown), as for every reason.
-    const s = Array.isArray(v) ? `[${v.map((name) => (0,common_escape/* clip */.$Q)(name, 40)).join(', ')}]` : (0,common_escape/* clip */.$Q)(String(v), 120);
-    return (0,common_escape/* clip */.$Q)(s, 120);
-}
-
-;// CONCATENATED MODULE: ./src/gate/compare.ts
-
-
-
-function compare(input) {
-    const { result, target, search, gate, baseline } = input;
-    const settingsChanged = baseline ? settingsDifferences(baseline.config.settings, input.settings) : [];
-    const flags = [];
-    if (settingsChanged.length > 0) {
-        flags.push(`The settings that shape the result differ from the baseline's (${settingsChanged.join('; ')}), so this compares answers to different questions.`);
-    }
-    if (result.outcome === 'inconclusive') {
-        const how = result.notes.length > 0 ? ` ${result.notes.map(sentence).join(' ')}` : '';
-        return {
-            verdict: 'inconclusive',
-            reasons: [`The search ran out of budget before it could decide the smallest adequate width.${how}`, ...flags],
-            settingsChanged,
-        };
-    }
-    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
-        const best = bestSeen(result.widths, target.metric);
-        const bestText = best ? `; the best network reached ${(0,format/* formatMetric */.gI)(best.value)} (width ${best.width})` : '';
-        const networks = search.required === 1 ? 'a network that meets' : `${search.required} networks that meet`;
-        return {
-            verdict: 'fail',
-            reasons: [
-                `No width from ${search.minWidth} to ${search.maxWidth} has ${networks} ${(0,format/* targetPhrase */.Lx)(target.metric, target.threshold)}${bestText}.`,
-                ...result.notes.map(sentence),
-                ...flags,
-            ],
-            settingsChanged,
-        };
-    }
-    const width = result.width;
-    const failures = [];
-    if (gate.maxWidth !== null && width > gate.maxWidth) {
-        failures.push(`Needs ${(0,format/* neurons */.nO)(width)}; the device budget is ${gate.maxWidth}.`);
-    }
-    failures.push(...budgetFailures(input));
-    if (!baseline) {
-        if (failures.length > 0)
-            return { verdict: 'fail', reasons: [...failures, ...flags], settingsChanged };
-        return {
-            verdict: 'new',
-            reasons: [
-                `Needs ${(0,format/* neurons */.nO)(width)}; there is no baseline yet to compare with, so record this result as the baseline.`,
-                ...flags,
-            ],
-            settingsChanged,
-        };
-    }
-    const before = baseline.result.width;
-    const growth = width - before;
-    const allowed = gate.allowedGrowth;
-    const allowance = allowed === 0 ? 'no growth is allowed' : `the allowed growth is ${allowed}`;
-    let comparison;
-    if (growth > allowed) {
-        failures.push(`Needs ${(0,format/* neurons */.nO)(width)}, ${growth} more than the baseline's ${before}; ${allowance}.`);
-        comparison = '';
-    }
-    else if (growth > 0) {
-        comparison = `Needs ${(0,format/* neurons */.nO)(width)}, ${growth} more than the baseline's ${before}, within the allowed growth of ${allowed}.`;
-    }
-    else if (growth < 0) {
-        comparison = `Needs ${(0,format/* neurons */.nO)(width)}, ${-growth} fewer than the baseline's ${before}; refresh the baseline to keep the gain.`;
-    }
-    else {
-        comparison = `Needs ${(0,format/* neurons */.nO)(width)}, the same as the baseline.`;
-    }
-    const tolerance = toleranceFlag(result.metric, baseline, target.metric, gate.metricTolerance);
-    if (tolerance)
-        flags.push(tolerance);
-    if (failures.length > 0) {
-        const context = comparison === '' ? [] : [comparison];
-        return { verdict: 'fail', reasons: [...failures, ...context, ...flags], settingsChanged };
-    }
-    return { verdict: growth < 0 ? 'improved' : 'pass', reasons: [comparison, ...flags], settingsChanged };
-}
-function toleranceFlag(value, baseline, metric, tolerance) {
-    const before = baseline.result.metric.value;
-    const worse = (0,common_metric/* higherIsBetter */.i2)(metric) ? before - value : value - before;
-    // A tiny epsilon so that a difference equal to the tolerance (up to rounding) is not flagged.
-    if (worse <= tolerance + 1e-12)
-        return null;
-    return `Flag (does not fail the gate): ${metric} at the chosen width is ${(0,format/* formatMetric */.gI)(value)}, ${(0,format/* formatMetric */.gI)(worse)} worse than the baseline's ${(0,format/* formatMetric */.gI)(before)}; the tolerance is ${(0,format/* formatMetric */.gI)(tolerance)}.`;
-}
-function bestSeen(widths, metric) {
-    let best = null;
-    for (const w of widths) {
-        if (w.best === null)
-            continue;
-        const better = best === null || ((0,common_metric/* higherIsBetter */.i2)(metric) ? w.best > best.value : w.best < best.value);
-        if (better)
-            best = { width: w.width, value: w.best };
-    }
-    return best;
-}
-function sentence(s) {
-    const t = s.trim();
-    const capital = t.charAt(0).toUpperCase() + t.slice(1);
-    return /[.!?]$/.test(capital) ? capital : `${capital}.`;
-}
-/** One sentence per byte or operation budget the witness exceeds, naming the figure and the budget. */
-function budgetFailures(input) {
-    const { gate, device } = input;
-    if (!device)
-        return [];
-    const { cost, precision } = device;
-    const out = [];
-    const at = `(width ${input.result.width})`;
-    if (gate.maxFlashBytes != null && cost.flashBytes[precision] > gate.maxFlashBytes) {
-        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.flashBytes[precision])} flash bytes for its ${precision} weights ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxFlashBytes)} bytes.`);
-    }
-    if (gate.maxRamBytes != null && cost.ramBytes[precision] > gate.maxRamBytes) {
-        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.ramBytes[precision])} RAM bytes for one ${precision} inference ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxRamBytes)} bytes.`);
-    }
-    if (gate.maxMacs != null && cost.macs > gate.maxMacs) {
-        out.push(`Needs ${(0,format/* formatCount */.B4)(cost.macs)} multiply-accumulates per inference ${at}; the device budget is ${(0,format/* formatCount */.B4)(gate.maxMacs)}.`);
-    }
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/gate/data-changes.ts
-/**
- * A numeric feature counts as shifted when its mean moved by more than this many
- * baseline standard deviations. Half a standard deviation is a common rule of thumb
- * for a "medium" shift (common practice, no single source).
- */
-const MEAN_SHIFT_IN_STD = 0.5;
-/**
- * A numeric feature's range counts as widened when it grew on a side (a new minimum below the
- * baseline's, or a new maximum above it) by more than this many baseline standard deviations.
- * A rule of thumb (common practice, no single source): the extremes of a sample wander by chance
- * as rows are added (for normal data and a thousand rows the sample maximum's spread is about
- * σ/√(2 ln n) ≈ 0.27σ, from extreme-value theory; figure from memory), so a new extreme within
- * a few hundredths of σ of the old one is no change a reviewer should read about, while one
- * half a σ beyond it puts rows where the baseline's networks never saw any.
- */
-const RANGE_GROWTH_IN_STD = 0.5;
-function dataChanges(before, after, fingerprints, files = { before: '', after: '' }) {
-    const columnsBefore = new Set(before.columns);
-    const columnsAfter = new Set(after.columns);
-    const columnsAdded = after.columns.filter((c) => !columnsBefore.has(c));
-    const columnsRemoved = before.columns.filter((c) => !columnsAfter.has(c));
-    let classes = null;
-    const classesAppeared = [];
-    const classesVanished = [];
-    if (before.classes !== null || after.classes !== null) {
-        const b = tableOf(before.classes);
-        const a = tableOf(after.classes);
-        const labels = [...new Set([...b.keys(), ...a.keys()])].sort(byCodeUnit);
-        classes = labels.map((label) => ({ label, before: b.get(label) ?? 0, after: a.get(label) ?? 0 }));
-        for (const label of labels) {
-            if (!b.has(label))
-                classesAppeared.push(label);
-            if (!a.has(label))
-                classesVanished.push(label);
-        }
-    }
-    const features = [];
-    const categories = [];
-    const featuresBefore = tableOf(before.features);
-    const featuresAfter = tableOf(after.features);
-    const shared = [...featuresAfter.keys()].filter((name) => featuresBefore.has(name)).sort(byCodeUnit);
-    for (const name of shared) {
-        const b = featuresBefore.get(name);
-        const a = featuresAfter.get(name);
-        if (b.kind === 'numeric' && a.kind === 'numeric') {
-            const delta = atMostMax(Math.abs(a.mean - b.mean));
-            const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
-            const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
-            const rangeGrowth = growthOf(b, a);
-            const rangeWidened = grewMeaningfully(rangeGrowth.below, b.std) || grewMeaningfully(rangeGrowth.above, b.std);
-            if (meanMoved || rangeWidened) {
-                features.push({
-                    name,
-                    meanBefore: b.mean,
-                    meanAfter: a.mean,
-                    stdBefore: b.std,
-                    shiftInStd,
-                    meanMoved,
-                    rangeBefore: [b.min, b.max],
-                    rangeAfter: [a.min, a.max],
-                    rangeWidened,
-                    rangeGrowth,
-                });
-            }
-        }
-        else if (b.kind === 'categorical' && a.kind === 'categorical') {
-            const countsBefore = tableOf(b.counts);
-            const countsAfter = tableOf(a.counts);
-            const appeared = [...countsAfter.keys()].filter((c) => !countsBefore.has(c)).sort(byCodeUnit);
-            const vanished = [...countsBefore.keys()].filter((c) => !countsAfter.has(c)).sort(byCodeUnit);
-            if (appeared.length > 0 || vanished.length > 0)
-                categories.push({ feature: name, appeared, vanished });
-        }
-    }
-    return {
-        changed: fingerprints.before !== fingerprints.after,
-        file: files.before === files.after ? null : { before: files.before, after: files.after },
-        rows: { before: before.rows, after: after.rows },
-        classes,
-        classesAppeared,
-        classesVanished,
-        features,
-        categories,
-        columnsAdded,
-        columnsRemoved,
-    };
-}
-/** How far the range reaches beyond the baseline's on each side, in the feature's units and in baseline stds. */
-function growthOf(b, a) {
-    const below = atMostMax(Math.max(0, b.min - a.min));
-    const above = atMostMax(Math.max(0, a.max - b.max));
-    const inStd = (g) => (b.std > 0 ? atMostMax(g / b.std) : null);
-    return { below, above, belowInStd: inStd(below), aboveInStd: inStd(above) };
-}
-/** A side grew meaningfully: by more than RANGE_GROWTH_IN_STD baseline stds (any growth for a constant feature). */
-function grewMeaningfully(growth, std) {
-    return std > 0 ? growth > RANGE_GROWTH_IN_STD * std : growth > 0;
-}
-/**
- * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
- * is read with JSON.parse, so a label may be `constructor` or `__proto__`: only own keys count.
- */
-function tableOf(table) {
-    return new Map(table === null ? [] : Object.entries(table));
-}
-/**
- * Two finite means read from a baseline file can differ by more than the largest float; the
- * shift is then "at least the largest float", never Infinity (which JSON cannot hold).
- */
-function atMostMax(x) {
-    return Math.min(x, Number.MAX_VALUE);
-}
-/** Locale-independent order, so the summary reads the same on every machine. */
-function byCodeUnit(a, b) {
-    return a < b ? -1 : a > b ? 1 : 0;
-}
-
-;// CONCATENATED MODULE: ./src/gate/evaluate.ts
-
-
-
-function evaluateGate(input) {
-    const { result, loaded, config, baseline } = input;
-    const cost = input.cost ?? null;
-    const comparison = compare({
-        result,
-        target: config.target,
-        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth, required: config.search.required },
-        gate: config.gate,
-        baseline,
-        settings: resultSettings(config),
-        device: cost === null ? null : { cost, precision: config.target.precision ?? 'float32' },
-    });
-    const changes = baseline
-        ? dataChanges(baseline.data.profile, loaded.profile, { before: baseline.data.fingerprint, after: loaded.fingerprint }, { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') })
-        : null;
-    return { ...comparison, changes, baseline };
-}
-
-;// CONCATENATED MODULE: ./schema/baseline.schema.json
-const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."},"decisive":{"type":["number","null"],"description":"The search.required-th best judged metric over the networks of this width: at or past the threshold exactly when the width is adequate (recall floors aside); null when fewer finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
-;// CONCATENATED MODULE: ./src/common/json-schema.ts
-/**
- * Checks a parsed JSON document against one of our own JSON Schemas (schema/*.json), so each
- * file format has one definition: the schema editors read is the one the tool enforces. Only
- * the keywords our schemas use are understood (type, const, enum, properties, required,
- * additionalProperties, items, minItems, maxItems, minimum, maximum, pattern, maxLength, $ref
- * into $defs, anyOf, oneOf); a schema that uses any other keyword is refused when it is loaded,
- * so a schema cannot silently say more than is checked.
- *
- * The first problem is reported as `key: expected …, found …`, with the key written as a path
- * (`history[0].date`). A schema node's `title` is the "expected" phrase when it has one.
- */
-
-class json_schema_SchemaProblem extends Error {
-    key;
-    expected;
-    found;
-    constructor(
-    /** Where, as a path (`result.width`, `history[0]`); '(top level)' for the document itself. */
-    key, expected, 
-    /** What was found, described for a reader. */
-    found) {
-        super(`${key}: expected ${expected}, found ${found}`);
-        this.key = key;
-        this.expected = expected;
-        this.found = found;
-        this.name = 'SchemaProblem';
-    }
-}
-const KNOWN = new Set([
-    'title',
-    'description',
-    'type',
-    'const',
-    'enum',
-    'properties',
-    'required',
-    'additionalProperties',
-    'items',
-    'minItems',
-    'maxItems',
-    'minimum',
-    'maximum',
-    'exclusiveMinimum',
-    'minProperties',
-    'pattern',
-    'maxLength',
-    '$ref',
-    'anyOf',
-    'oneOf',
-    '$defs',
-    '$schema',
-    '$id',
-    '$comment',
-]);
-/** A validator for documents of one schema. Throws when the schema uses a keyword it does not check. */
-function schemaValidator(root) {
-    checkKeywords(root, '#');
-    const patterns = new Map();
-    const regex = (p) => {
-        let re = patterns.get(p);
-        if (re === undefined)
-            patterns.set(p, (re = new RegExp(p, 'u')));
-        return re;
-    };
-    const resolve = (node) => {
-        if (node.$ref === undefined)
-            return node;
-        const m = /^#\/\$defs\/(.+)$/.exec(node.$ref);
-        const target = m ? root.$defs?.[m[1]] : undefined;
-        if (target === undefined)
-            throw new Error(`schema: unresolved $ref ${node.$ref}`);
-        return { ...target, ...(node.title ? { title: node.title } : {}) };
-    };
-    const check = (raw, value, key) => {
-        const node = resolve(raw);
-        const fail = (expected, found = value) => {
-            throw new json_schema_SchemaProblem(key || '(top level)', node.title ?? expected, describe(found));
-        };
-        if (node.const !== undefined && value !== node.const)
-            fail(JSON.stringify(node.const));
-        if (node.enum !== undefined && !node.enum.includes(value))
-            fail(`one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`);
-        if (node.type !== undefined) {
-            const types = Array.isArray(node.type) ? node.type : [node.type];
-            if (value === null && types.includes('null'))
-                return;
-            if (!types.some((t) => hasType(value, t)))
-                fail(typePhrase(node, types.filter((t) => t !== 'null')));
-        }
-        if (typeof value === 'number') {
-            if (node.minimum !== undefined && value < node.minimum)
-                fail(typePhrase(node, types(node)));
-            if (node.maximum !== undefined && value > node.maximum)
-                fail(typePhrase(node, types(node)));
-            if (node.exclusiveMinimum !== undefined && value <= node.exclusiveMinimum)
-                fail(typePhrase(node, types(node)));
-        }
-        if (typeof value === 'string') {
-            if (node.maxLength !== undefined && value.length > node.maxLength)
-                fail(`a string of at most ${node.maxLength} characters`);
-            if (node.pattern !== undefined && !regex(node.pattern).test(value))
-                fail(`a string matching ${node.pattern}`);
-        }
-        if (Array.isArray(value)) {
-            if (node.maxItems !== undefined && value.length > node.maxItems)
-                fail(`a list of at most ${node.maxItems} entries`, value.length);
-            if (node.minItems !== undefined && value.length < node.minItems)
-                fail(`a list of at least ${node.minItems} entries`, value.length);
-            if (node.items !== undefined)
-                value.forEach((v, i) => check(node.items, v, `${key}[${i}]`));
-        }
-        if (isObject(value)) {
-            const props = node.properties ?? {};
-            if (node.minProperties !== undefined && Object.keys(value).length < node.minProperties) {
-                fail(`an object with at least ${node.minProperties} key${node.minProperties === 1 ? '' : 's'}`);
-            }
-            for (const [name, child] of Object.entries(value)) {
-                if (Object.hasOwn(props, name))
-                    check(props[name], child, join(key, name));
-                else if (node.additionalProperties === false) {
-                    throw new json_schema_SchemaProblem(join(key, name), `no such key (allowed: ${Object.keys(props).join(', ')})`, describe(child));
-                }
-                else if (typeof node.additionalProperties === 'object')
-                    check(node.additionalProperties, child, join(key, name));
-            }
-            // What is there is checked before what is missing: a wrong value says more than a later absent key.
-            for (const name of node.required ?? []) {
-                if (!Object.hasOwn(value, name))
-                    throw new json_schema_SchemaProblem(join(key, name), expectedOf(resolve(props[name] ?? {})), MISSING_KEY);
-            }
-        }
-        if (node.anyOf !== undefined) {
-            if (!node.anyOf.some((branch) => passes(branch, value, key)))
-                fail(node.anyOf.map((b) => expectedOf(resolve(b))).join(' or '));
-        }
-        if (node.oneOf !== undefined) {
-            // Our oneOf branches are told apart by a `kind` constant: check the branch the document names.
-            const kinds = node.oneOf.map((b) => resolve(b).properties?.['kind']?.const);
-            if (!kinds.includes(undefined) && isObject(value)) {
-                const at = kinds.indexOf(value['kind']);
-                if (at < 0)
-                    throw new json_schema_SchemaProblem(join(key, 'kind'), `one of ${kinds.map((k) => JSON.stringify(k)).join(', ')}`, describe(Object.hasOwn(value, 'kind') ? value['kind'] : MISSING));
-                check(node.oneOf[at], value, key);
-            }
-            else {
-                // When the value's type leaves one branch (null or an object, say), check that one: its error is the precise one.
-                const typed = node.oneOf.filter((b) => {
-                    const t = resolve(b).type;
-                    const all = t === undefined ? [] : Array.isArray(t) ? t : [t];
-                    return all.length === 0 || all.some((x) => hasType(value, x));
-                });
-                if (typed.length === 1)
-                    check(typed[0], value, key);
-                else if (node.oneOf.filter((branch) => passes(branch, value, key)).length !== 1) {
-                    fail(node.oneOf.map((b) => expectedOf(resolve(b))).join(' or '));
-                }
-            }
-        }
-    };
-    const passes = (node, value, key) => {
-        try {
-            check(node, value, key);
-            return true;
-        }
-        catch (e) {
-            if (e instanceof json_schema_SchemaProblem)
-                return false;
-            throw e;
-        }
-    };
-    return (value) => check(root, value, '');
-}
-const MISSING = Symbol('missing');
-const MISSING_KEY = 'nothing (the key is missing)';
-function checkKeywords(node, where) {
-    for (const [k, v] of Object.entries(node)) {
-        if (!KNOWN.has(k))
-            throw new Error(`schema: keyword ${k} at ${where} is not checked by schemaValidator`);
-        if (k === 'properties' || k === '$defs')
-            for (const [name, child] of Object.entries(v))
-                checkKeywords(child, `${where}/${k}/${name}`);
-        if ((k === 'items' || k === 'additionalProperties') && typeof v === 'object')
-            checkKeywords(v, `${where}/${k}`);
-        if (k === 'anyOf' || k === 'oneOf')
-            v.forEach((child, i) => checkKeywords(child, `${where}/${k}/${i}`));
-    }
-}
-function types(node) {
-    const t = node.type === undefined ? [] : Array.isArray(node.type) ? node.type : [node.type];
-    return t.filter((x) => x !== 'null');
-}
-function hasType(value, type) {
-    switch (type) {
-        case 'object':
-            return isObject(value);
-        case 'array':
-            return Array.isArray(value);
-        case 'string':
-            return typeof value === 'string';
-        case 'number':
-            return typeof value === 'number' && Number.isFinite(value);
-        case 'integer':
-            return typeof value === 'number' && Number.isInteger(value);
-        case 'boolean':
-            return typeof value === 'boolean';
-        case 'null':
-            return value === null;
-    }
-}
-/** "an integer of at least 1", "a number", "a list", … */
-function typePhrase(node, ts) {
-    const bound = () => {
-        const parts = [];
-        if (node.minimum !== undefined && node.maximum !== undefined)
-            return ` from ${node.minimum} to ${node.maximum}`;
-        if (node.exclusiveMinimum !== undefined)
-            parts.push(` above ${node.exclusiveMinimum}`);
-        if (node.minimum !== undefined)
-            parts.push(` of at least ${node.minimum}`);
-        if (node.maximum !== undefined)
-            parts.push(` of at most ${node.maximum}`);
-        return parts.join('');
-    };
-    const one = (t) => {
-        switch (t) {
-            case 'object':
-                return 'an object';
-            case 'array':
-                return 'a list';
-            case 'string':
-                return 'a string';
-            case 'number':
-                return `a number${bound()}`;
-            case 'integer':
-                return `an integer${bound()}`;
-            case 'boolean':
-                return 'true or false';
-            case 'null':
-                return 'null';
-        }
-    };
-    return ts.length === 0 ? 'a value' : ts.map(one).join(' or ');
-}
-function expectedOf(node) {
-    if (node.title !== undefined)
-        return node.title;
-    if (node.const !== undefined)
-        return JSON.stringify(node.const);
-    if (node.enum !== undefined)
-        return `one of ${node.enum.map((v) => JSON.stringify(v)).join(', ')}`;
-    return typePhrase(node, types(node));
-}
-function join(key, child) {
-    return key === '' ? child : `${key}.${child}`;
-}
-function isObject(v) {
-    return typeof v === 'object' && v !== null && !Array.isArray(v);
-}
-/** A found value for a message: short, and never a repository string in full. */
-function describe(v) {
-    if (v === MISSING)
-        return 'nothing';
-    if (v === null)
-        return 'null';
-    if (Array.isArray(v))
-        return 'a list';
-    if (typeof v === 'object')
-        return 'an object';
-    if (typeof v === 'string')
-        return (0,common_escape/* quote */.hD)(v, 60);
-    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
-}
-
-;// CONCATENATED MODULE: ./src/common/json-position.ts
-/**
- * Finds where a JSON text first goes wrong. JSON.parse's messages differ between Node
- * versions and some carry no position at all, so a small scanner (RFC 8259 grammar)
- * gives every user the same line and column.
- */
-
-/** Returns null when `text` is valid JSON. */
-function json_position_findJsonSyntaxProblem(text) {
-    let i = 0;
-    const n = text.length;
-    const fail = (expected) => {
-        throw new ScanError(i, expected);
-    };
-    const ws = () => {
-        while (i < n) {
-            const c = text.charCodeAt(i);
-            if (c === 0x20 || c === 0x09 || c === 0x0a || c === 0x0d)
-                i++;
-            else
-                break;
-        }
-    };
-    const literal = (word) => {
-        if (text.startsWith(word, i))
-            i += word.length;
-        else
-            fail(`"${word}"`);
-    };
-    const digits = () => {
-        const start = i;
-        while (i < n && text.charCodeAt(i) >= 0x30 && text.charCodeAt(i) <= 0x39)
-            i++;
-        if (i === start)
-            fail('a digit');
-    };
-    const number = () => {
-        if (text[i] === '-')
-            i++;
-        if (text[i] === '0')
-            i++;
-        else
-            digits();
-        if (text[i] === '.') {
-            i++;
-            digits();
-        }
-        if (text[i] === 'e' || text[i] === 'E') {
-            i++;
-            if (text[i] === '+' || text[i] === '-')
-                i++;
-            digits();
-        }
-    };
-    const string = () => {
-        i++; // opening quote
-        while (i < n) {
-            const c = text.charCodeAt(i);
-            if (c === 0x22) {
-                i++;
-                return;
-            }
-            if (c < 0x20)
-                fail('a closing quote (a string cannot contain a line break or control character)');
-            if (c === 0x5c) {
-                i++;
-                const e = text[i];
-                if (e === 'u') {
-                    for (let k = 1; k <= 4; k++) {
-                        if (!/[0-9a-fA-F]/.test(text[i + k] ?? '')) {
-                            i += k;
-                            fail('four hex digits after \\u');
-                        }
-                    }
-                    i += 5;
-                }
-                else if (e !== undefined && '"\\/bfnrt'.includes(e))
-                    i++;
-                else
-                    fail('a valid escape (\\" \\\\ \\/ \\b \\f \\n \\r \\t \\uXXXX)');
-            }
-            else
-                i++;
-        }
-        fail('a closing quote');
-    };
-    const value = () => {
-        ws();
-        const c = text[i];
-        if (c === '{') {
-            i++;
-            ws();
-            if (text[i] === '}') {
-                i++;
-                return;
-            }
-            for (;;) {
-                ws();
-                if (text[i] !== '"')
-                    fail('a key in double quotes');
-                string();
-                ws();
-                if (text[i] !== ':')
-                    fail('":"');
-                i++;
-                value();
-                ws();
-                if (text[i] === ',') {
-                    i++;
-                    continue;
-                }
-                if (text[i] === '}') {
-                    i++;
-                    return;
-                }
-                fail('"," or "}"');
-            }
-        }
-        else if (c === '[') {
-            i++;
-            ws();
-            if (text[i] === ']') {
-                i++;
-                return;
-            }
-            for (;;) {
-                value();
-                ws();
-                if (text[i] === ',') {
-                    i++;
-                    continue;
-                }
-                if (text[i] === ']') {
-                    i++;
-                    return;
-                }
-                fail('"," or "]"');
-            }
-        }
-        else if (c === '"')
-            string();
-        else if (c === '-' || (c !== undefined && c >= '0' && c <= '9'))
-            number();
-        else if (c === 't')
-            literal('true');
-        else if (c === 'f')
-            literal('false');
-        else if (c === 'n')
-            literal('null');
-        else
-            fail('a value');
-    };
-    try {
-        if (text.charCodeAt(0) === 0xfeff)
-            i = 1;
-        value();
-        ws();
-        if (i < n)
-            fail('the end of the file');
-        return null;
-    }
-    catch (e) {
-        if (!(e instanceof ScanError))
-            throw e;
-        const { line, column } = lineAndColumn(text, e.offset);
-        const found = e.offset >= n ? 'the end of the file' : describeChar(text, e.offset);
-        return { line, column, detail: `expected ${e.expected}, found ${found}` };
-    }
-}
-class ScanError extends Error {
-    offset;
-    expected;
-    constructor(offset, expected) {
-        super(`expected ${expected} at offset ${offset}`);
-        this.offset = offset;
-        this.expected = expected;
-    }
-}
-/**
- * 1-based line and column as a text editor counts them: LF, CRLF and a lone CR each end a
- * line, and the column counts characters (a character outside the BMP is one, not two).
- */
-function lineAndColumn(text, offset) {
-    let line = 1;
-    let column = 1;
-    for (let k = 0; k < offset && k < text.length; k++) {
-        const c = text.charCodeAt(k);
-        if (c === 0x0a || (c === 0x0d && text.charCodeAt(k + 1) !== 0x0a)) {
-            line++;
-            column = 1;
-        }
-        else if (c !== 0x0d && (c < 0xdc00 || c > 0xdfff)) {
-            column++;
-        }
-    }
-    return { line, column };
-}
-function describeChar(text, offset) {
-    const c = text.codePointAt(offset) ?? 0;
-    if (c === 0x0a || c === 0x0d)
-        return 'a line break';
-    if (c < 0x20 || (c >= 0x7f && c < 0xa0))
-        return `control character U+${c.toString(16).toUpperCase().padStart(4, '0')}`;
-    return (0,common_escape/* quote */.hD)(String.fromCodePoint(c));
-}
-
-;// CONCATENATED MODULE: ./src/gate/types.ts
-const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
-const BASELINE_VERSION = 2;
-/** Oldest history entries are dropped beyond this many. */
-const HISTORY_CAP = 100;
-
-;// CONCATENATED MODULE: ./src/gate/baseline.ts
-/**
- * The baseline file: build it from a run, carry its history forward, read it back with
- * clear errors, and write it atomically. Everything here is pure except readBaseline
- * and writeBaseline; dates are passed in, never read from a clock.
- */
-
-
-
-
-
-
-
-
-
-/**
- * Why this run cannot become a baseline, or null when it can. A baseline only ever
- * records a width that was found: a failed or unfinished search leaves the file as it was.
- */
-function whyNotRecordable(result) {
-    if (result.outcome === 'inconclusive') {
-        return 'the search did not finish, so there is no result to record; the baseline file was left unchanged';
-    }
-    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
-        return 'no width reached the target, so there is no result to record; the baseline file was left unchanged';
-    }
-    return null;
-}
-/**
- * The baseline that accepting `current` produces: its headline and curve, with the
- * previous baseline's history carried forward and this result appended (newest last,
- * oldest dropped beyond HISTORY_CAP). Throws if the run is not recordable; check
- * whyNotRecordable first.
- */
-function nextBaseline(previous, current, meta) {
-    const { result, loaded, config } = current;
-    const problem = whyNotRecordable(result);
-    if (problem !== null || result.width === null || result.metric === null) {
-        throw new Error(`nextBaseline called with an unrecordable result: ${problem ?? 'no width'}`);
-    }
-    const width = result.width;
-    const atWidth = result.widths.find((w) => w.width === width) ?? null;
-    const settings = resultSettings(config);
-    const entry = {
-        width,
-        metric: result.metric,
-        rows: loaded.profile.rows,
-        data: loaded.fingerprint,
-        commit: commitHash(meta.commit),
-        date: meta.date.toISOString(),
-    };
-    const history = [...(previous?.history ?? []), entry].slice(-HISTORY_CAP);
-    return {
-        schema: BASELINE_SCHEMA,
-        tool: { name: 'neuron-budget', version: meta.toolVersion },
-        result: {
-            width,
-            metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
-            grownWidth: result.grownWidth,
-            met: atWidth ? atWidth.met : 0,
-            restarts: atWidth ? atWidth.restarts : 0,
-            searchSeconds: result.timing.searchSeconds,
-        },
-        widths: result.widths.map((w) => ({
-            width: w.width,
-            restarts: w.restarts,
-            met: w.met,
-            adequate: w.adequate,
-            best: w.best,
-            decisive: w.decisive,
-        })),
-        data: {
-            file: config.data.pathAsWritten.replace(/\\/g, '/'),
-            rows: loaded.profile.rows,
-            fingerprint: loaded.fingerprint,
-            profile: loaded.profile,
-        },
-        config: { fingerprint: settingsFingerprint(settings), settings },
-        history,
-    };
-}
-/** A commit id as the history stores it (lower-case hex), or null when it is not one. */
-function commitHash(commit) {
-    if (commit === null)
-        return null;
-    const c = commit.trim().toLowerCase();
-    return /^[0-9a-f]{4,64}$/.test(c) ? c : null;
-}
-function serializeBaseline(baseline) {
-    return `${JSON.stringify(baseline, null, 2)}\n`;
-}
-/**
- * Writes the baseline atomically (temp file beside it, then rename). The text is first
- * read back through the same validation a later run will use, so a value JSON cannot
- * hold (NaN becomes null) can never produce a baseline that the next run rejects.
- */
-async function writeBaseline(path, baseline) {
-    const text = serializeBaseline(baseline);
-    try {
-        parseBaseline(text, path);
-    }
-    catch (e) {
-        throw new Error(`refusing to write a baseline that would not read back: ${e.message}`, { cause: e });
-    }
-    await writeFileAtomic(path, text);
-}
-/**
- * Reads a baseline. Missing file → null (the verdict is then `new`). A file that is not
- * valid JSON, of another schema version, or of the wrong shape → UserError naming the
- * file (`shown`, the path as the user wrote it), and the line/column or key.
- */
-async function readBaseline(path, shown = path) {
-    let text;
-    try {
-        text = await (0,promises_namespaceObject.readFile)(path, 'utf8');
-    }
-    catch (e) {
-        const code = e.code;
-        if (code === 'ENOENT')
-            return null;
-        if (code === 'EISDIR')
-            throw new errors/* UserError */.yo(`${shown}: expected a baseline file, found a folder`, { file: shown });
-        throw new errors/* UserError */.yo(`${shown}: cannot read the baseline file (${code ?? 'unknown error'})`, { file: shown });
-    }
-    return parseBaseline(text, shown);
-}
-/** Parses and validates baseline text; `shown` names the file in messages. */
-function parseBaseline(text, shown) {
-    if (text.trim() === '') {
-        throw new errors/* UserError */.yo(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
-            file: shown,
-        });
-    }
-    const syntax = json_position_findJsonSyntaxProblem(text);
-    if (syntax) {
-        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the baseline is not valid JSON: ${syntax.detail}`, {
-            file: shown,
-            line: syntax.line,
-            column: syntax.column,
-        });
-    }
-    const value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-    checkSchemaVersion(value, shown);
-    validateBaselineShape(value, shown);
-    return value;
-}
-function checkSchemaVersion(value, shown) {
-    if (!baseline_isObject(value)) {
-        throw new errors/* UserError */.yo(`${shown}: expected a neuron-budget baseline (a JSON object), found ${baseline_describe(value)}`, {
-            file: shown,
-        });
-    }
-    const schema = 'schema' in value ? value['schema'] : baseline_MISSING;
-    const match = typeof schema === 'string' ? /^neuron-budget\/baseline@(\d+)$/.exec(schema) : null;
-    if (!match) {
-        throw new errors/* UserError */.yo(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
-    }
-    const version = Number(match[1]);
-    if (version > BASELINE_VERSION) {
-        throw new errors/* UserError */.yo(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
-    }
-    if (version < BASELINE_VERSION) {
-        throw new errors/* UserError */.yo(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
-    }
-    if (version !== BASELINE_VERSION) {
-        throw new errors/* UserError */.yo(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
-            file: shown,
-            key: 'schema',
-        });
-    }
-}
-// ---- shape: schema/baseline.schema.json is the one definition ----
-const checkShape = schemaValidator(baseline_schema_namespaceObject);
-function validateBaselineShape(value, shown) {
-    try {
-        checkShape(value);
-    }
-    catch (e) {
-        if (!(e instanceof json_schema_SchemaProblem))
-            throw e;
-        throw new errors/* UserError */.yo(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
-    }
-}
-const baseline_MISSING = Symbol('missing');
-function baseline_isObject(v) {
-    return typeof v === 'object' && v !== null && !Array.isArray(v);
-}
-function baseline_describe(v) {
-    if (v === baseline_MISSING)
-        return 'nothing';
-    if (v === null)
-        return 'null';
-    if (Array.isArray(v))
-        return 'a list';
-    if (typeof v === 'object')
-        return 'an object';
-    if (typeof v === 'string')
-        return (0,common_escape/* quote */.hD)(v, 60);
-    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
-}
-
-;// CONCATENATED MODULE: external "node:timers/promises"
-const external_node_timers_promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:timers/promises");
-;// CONCATENATED MODULE: ./src/files/lock.ts
-/**
- * An exclusive lock beside a file, `.NAME.neuron-budget.lock`, for a read-compare-write that
- * must not interleave with another process's. Created with O_EXCL, so exactly one process
- * holds it; it records who holds it, so a lock whose holder died can be taken over:
- *
- * - its process is gone (same machine, by PID), or
- * - it is older than STALE_LOCK_AGE_MS (any machine; the section it guards takes
- *   milliseconds), or
- * - it is unreadable and older than a few seconds (a holder killed between create and write).
- */
-
-
-
-
-
-
-const LOCK_SUFFIX = '.neuron-budget.lock';
-/** A lock this old is stale, whoever holds it. @testOnly */
-const STALE_LOCK_AGE_MS = 10 * 60 * 1000;
-/** A lock file without readable content (its holder died before writing it) is stale after this. */
-const EMPTY_LOCK_AGE_MS = 5_000;
-function lockPathFor(path) {
-    return (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}${LOCK_SUFFIX}`);
-}
-/** The lock is held by a live process and was not released in time. */
-class LockBusy extends Error {
-    lockPath;
-    owner;
-    constructor(lockPath, owner) {
-        super(`${lockPath} is held${owner ? ` by process ${owner.pid}` : ''}`);
-        this.lockPath = lockPath;
-        this.owner = owner;
-        this.name = 'LockBusy';
-    }
-}
-async function acquireLock(path, options = {}) {
-    const lockPath = lockPathFor(path);
-    const waitMs = options.waitMs ?? 10_000;
-    const pollMs = options.pollMs ?? 25;
-    const record = {
-        pid: process.pid,
-        host: (0,external_node_os_.hostname)(),
-        token: (0,external_node_crypto_.randomBytes)(8).toString('hex'),
-        since: new Date().toISOString(),
-    };
-    const text = `${JSON.stringify(record)}\n`;
-    const started = Date.now();
-    for (;;) {
-        try {
-            const handle = await (0,promises_namespaceObject.open)(lockPath, 'wx');
-            try {
-                await handle.writeFile(text, 'utf8');
-            }
-            finally {
-                await handle.close();
-            }
-            return { release: () => releaseLock(lockPath, text) };
-        }
-        catch (e) {
-            if (e.code !== 'EEXIST')
-                throw e;
-        }
-        const held = await inspect(lockPath);
-        if (held === null)
-            continue; // released between our try and the look
-        if (held.stale) {
-            // Re-read just before removing: never remove a lock someone else took over meanwhile.
-            const again = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
-            if (again === held.text)
-                await (0,promises_namespaceObject.rm)(lockPath, { force: true });
-            continue;
-        }
-        if (Date.now() - started >= waitMs)
-            throw new LockBusy(lockPath, held.owner);
-        await (0,external_node_timers_promises_namespaceObject.setTimeout)(pollMs);
-    }
-}
-/** Removes the lock only while it is still ours. */
-async function releaseLock(lockPath, text) {
-    const now = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
-    if (now === text)
-        await (0,promises_namespaceObject.rm)(lockPath, { force: true });
-}
-async function inspect(lockPath) {
-    let text;
-    let age;
-    try {
-        text = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8');
-        age = Date.now() - (await (0,promises_namespaceObject.stat)(lockPath)).mtimeMs;
-    }
-    catch (e) {
-        if (e.code === 'ENOENT')
-            return null;
-        throw e;
-    }
-    const owner = parseOwner(text);
-    if (age >= STALE_LOCK_AGE_MS)
-        return { text, stale: true, owner };
-    if (owner === null)
-        return { text, stale: age >= EMPTY_LOCK_AGE_MS, owner };
-    const here = owner.host === (0,external_node_os_.hostname)();
-    return { text, stale: here && processIsGone(owner.pid), owner };
-}
-/** The holder as the file says, or null. The file sits in a checkout: only plain values pass. */
-function parseOwner(text) {
-    let v;
-    try {
-        v = JSON.parse(text);
-    }
-    catch {
-        return null;
-    }
-    if (typeof v !== 'object' || v === null)
-        return null;
-    const r = v;
-    if (typeof r.pid !== 'number' || !Number.isSafeInteger(r.pid) || r.pid <= 0)
-        return null;
-    const host = typeof r.host === 'string' && /^[A-Za-z0-9._-]{1,255}$/.test(r.host) ? r.host : null;
-    const since = typeof r.since === 'string' && !Number.isNaN(Date.parse(r.since)) ? new Date(r.since).toISOString() : null;
-    return { pid: r.pid, host, since };
-}
-
-;// CONCATENATED MODULE: ./src/gate/baseline-update.ts
-/**
- * Records an accepted result in the baseline file without losing another run's. A run reads
- * the baseline before its search and builds the next one from it; if a second run wrote the
- * file in between, writing ours would silently drop that run's history entry. So the write
- * happens under an exclusive lock beside the file, after reading the file again: unchanged,
- * ours is written; changed, nothing is written and the user is told to run again (exit 2).
- */
-
-
-
-
-/**
- * Writes `next` to `path` if the file still holds `expected` (null: no file), else throws a
- * UserError naming the file (`shown`, as the user wrote it).
- */
-async function updateBaseline(path, shown, expected, next) {
-    const lock = await lockOrRefuse(path, shown);
-    try {
-        const now = await readBaseline(path, shown);
-        if (!sameBaseline(expected, now)) {
-            const what = now === null ? 'was removed' : expected === null ? 'was created' : 'changed';
-            throw new errors/* UserError */.yo(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
-                'so this result was not recorded, to keep that change. Run `neuron-budget baseline` again to record it on top.', { file: shown });
-        }
-        await writeBaseline(path, next);
-    }
-    finally {
-        await lock.release();
-    }
-}
-async function lockOrRefuse(path, shown) {
-    try {
-        return await acquireLock(path);
-    }
-    catch (e) {
-        if (!(e instanceof LockBusy))
-            throw e;
-        const lockShown = displayLockPath(shown, path);
-        const who = e.owner
-            ? ` by process ${e.owner.pid}${e.owner.host ? ` on ${e.owner.host}` : ''}${e.owner.since ? ` since ${e.owner.since}` : ''}`
-            : '';
-        throw new errors/* UserError */.yo(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
-            'Run `neuron-budget baseline` again when it has finished; if none is running, delete the lock file.', { file: shown });
-    }
-}
-/** The lock file's path in the same form as the baseline's as the user wrote it. */
-function displayLockPath(shown, path) {
-    return `${shown.slice(0, shown.lastIndexOf('/') + 1)}${(0,external_node_path_namespaceObject.basename)(lockPathFor(path))}`;
-}
-/** Same content; key order and formatting of the file do not matter to a reader. */
-function sameBaseline(a, b) {
-    if (a === null || b === null)
-        return a === b;
-    return canonical(a) === canonical(b);
-}
-function canonical(v) {
-    if (Array.isArray(v))
-        return `[${v.map(canonical).join(',')}]`;
-    if (v !== null && typeof v === 'object') {
-        const keys = Object.keys(v).sort();
-        return `{${keys.map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(',')}}`;
-    }
-    return JSON.stringify(v);
-}
-
-;// CONCATENATED MODULE: ./src/gate/stage.ts
-
-
-
-async function runGateStage(input) {
-    const previous = input.previous;
-    const config = input.baselinePath === input.config.gate.baseline
-        ? input.config
-        : {
-            ...input.config,
-            gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
-        };
-    const outcome = evaluateGate({
-        result: input.result,
-        loaded: input.loaded,
-        config,
-        baseline: previous,
-        cost: input.cost ?? null,
-    });
-    if (input.mode === 'check')
-        return { outcome, written: null, record: null, gate: config.gate };
-    const why = whyNotRecordable(input.result);
-    if (why !== null)
-        return { outcome, written: null, record: { notWritten: why }, gate: config.gate };
-    const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
-    // Only if the file still holds what `previous` was read from: never drop another run's entry.
-    await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
-    const record = { file: input.baselineShown, width: next.result.width, historyEntries: next.history.length };
-    return { outcome, written: input.baselinePath, record, gate: config.gate };
-}
-
-;// CONCATENATED MODULE: ./src/gate/index.ts
-/**
- * The gate: baseline file, comparison and data changes. `evaluateGate` is the one call
- * the job needs after the search; `nextBaseline`/`writeBaseline` record an accepted result.
- */
-
-
-
-
-
-
-
-
-// EXTERNAL MODULE: ./src/device/index.ts + 8 modules
-var device = __nccwpck_require__(4143);
-;// CONCATENATED MODULE: ./src/model/document.ts
-
-const document_MODEL_SCHEMA = 'neuron-budget/model@2';
-/**
- * The witness as a document. With `calibration` (the encoded training rows) it carries the
- * int8 form too.
- */
-function modelDocument(witness, encoding, target, backing, calibration = null, provenance = null) {
-    return {
-        schema: document_MODEL_SCHEMA,
-        task: encoding.target.task,
-        width: witness.network.width,
-        target: {
-            metric: target.metric,
-            threshold: target.threshold,
-            value: witness.judged,
-            on: backing.on,
-            met: witness.met,
-            adequate: backing.adequate,
-        },
-        origin: { seed: witness.seed, width: witness.source.width, restart: witness.source.restart + 1, how: witness.how },
-        encoding: structuredClone(encoding),
-        network: structuredClone(witness.network),
-        cost: (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)(witness.network, encoding)),
-        int8: calibration === null ? null : (0,device/* quantizeNetwork */.gf)(witness.network, encoding, calibration),
-        provenance,
-    };
-}
-/** Stable, human-diffable text: two-space indent, key order as built, trailing newline. */
-function serializeModel(doc) {
-    return `${JSON.stringify(doc, null, 2)}\n`;
-}
-
-;// CONCATENATED MODULE: ./schema/model.schema.json
-const model_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget model","description":"A trained network as a self-contained file: the network, how raw rows become its inputs and its outputs labels or values, what it costs on a device, and its int8 form. Written by neuron-budget for the witness of a search.","type":"object","additionalProperties":false,"required":["schema","task","width","target","origin","encoding","network","cost","int8","provenance"],"properties":{"schema":{"const":"neuron-budget/model@2","description":"Format and version of this file."},"task":{"enum":["classification","regression"],"description":"What the network predicts: a class or a number."},"width":{"type":"integer","description":"Hidden neurons of the network (the same as network.width).","minimum":1},"target":{"type":"object","description":"The target the network was judged against and what it reached.","additionalProperties":false,"required":["metric","threshold","value","on","met","adequate"],"properties":{"metric":{"enum":["accuracy","rmse","mae","max-abs-error"],"description":"The target metric of the config."},"threshold":{"type":"number","description":"The config\'s threshold: accuracy at least this, error metrics at most this (in the target\'s units)."},"value":{"type":"number","description":"The metric on the rows that judged the network (target.on)."},"on":{"enum":["judging","validation","training"],"description":"Which rows judged it: the judging rows, never seen in training; or the validation rows, or the training rows, when there were none."},"met":{"type":"boolean","description":"The network met the target on those rows."},"adequate":{"type":"boolean","description":"Its width is adequate: at least search.required networks of that width met the target."}}},"origin":{"type":"object","description":"Where the network came from: with the same config and data, enough to train it again.","additionalProperties":false,"required":["seed","width","restart","how"],"properties":{"seed":{"type":"integer","description":"The config\'s base seed."},"width":{"type":"integer","minimum":1,"description":"Width of the fresh training the network started as."},"restart":{"type":"integer","minimum":1,"description":"Restart of that width (counted from 1) whose seeded stream trained it."},"how":{"enum":["fresh","pruned"],"description":"fresh: trained at its width; pruned: pruned down to it from origin.width."}}},"encoding":{"$ref":"#/$defs/encoding","description":"How raw rows become the network\'s inputs (numeric: standardised; categorical: one-hot) and its outputs labels or values."},"network":{"$ref":"#/$defs/network","description":"The trained network\'s weights in float64, with their layout."},"cost":{"$ref":"#/$defs/cost","description":"What the network costs on a device: parameters, multiply-accumulates, flash and RAM bytes in float32 and int8."},"int8":{"description":"The int8 form of the network, calibrated on the training rows; null when the writer had no training rows to calibrate on.","oneOf":[{"type":"null"},{"$ref":"#/$defs/int8"}]},"provenance":{"description":"What produced the file, for the header of exported firmware; null in files of version 1.","oneOf":[{"type":"null"},{"type":"object","additionalProperties":false,"required":["tool","data","config"],"properties":{"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget","description":"The tool that wrote the file."},"version":{"type":"string","description":"Its version."}},"description":"The tool that wrote the file."},"data":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint of the data as used (64 hex digits)."},"config":{"type":"string","description":"The config file, relative to the workspace."}}}]}},"$defs":{"encoding":{"type":"object","description":"How raw rows become the network\'s inputs, and its outputs labels or values.","additionalProperties":false,"required":["features","target"],"properties":{"features":{"type":"array","description":"The features in input order; they encode to network.inputs inputs.","items":{"oneOf":[{"type":"object","description":"A numeric feature: one input, standardised.","additionalProperties":false,"required":["kind","name","mean","std"],"properties":{"kind":{"const":"numeric","description":"A number column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"mean":{"type":"number","description":"Mean over the training rows; the input is (x − mean) / std."},"std":{"type":"number","description":"Population standard deviation over the training rows (1 for a constant column, which is only centred)."}}},{"type":"object","description":"A categorical feature: one input per category, one-hot.","additionalProperties":false,"required":["kind","name","categories"],"properties":{"kind":{"const":"categorical","description":"A text column."},"name":{"type":"string","description":"The column\'s name in the data file (text from the repository)."},"categories":{"type":"array","description":"The categories in input order: category k sets input k of this feature\'s block to 1, the others to 0. A category not listed sets them all to 0.","items":{"type":"string"},"minItems":1}}}]}},"target":{"type":"object","description":"How the network\'s outputs become labels or values.","additionalProperties":false,"required":["name","task","classes","mean","std"],"properties":{"name":{"type":"string","description":"The target column\'s name (text from the repository)."},"task":{"enum":["classification","regression"],"description":"The same as the document\'s task."},"classes":{"type":["array","null"],"items":{"type":"string"},"description":"Classification: the class labels in index order (sorted); null for regression."},"mean":{"type":"number","description":"Regression: the network\'s output is (y − mean) / std; classification: 0."},"std":{"type":"number","description":"Regression: see mean; classification: 1."}}}}},"network":{"type":"object","description":"The one-hidden-layer network in float64: a_j = hiddenBias[j] + Σ_i hiddenWeights[j][i]·x_i, h_j = activation(a_j), z_k = outputBias[k] + Σ_j outputWeights[k][j]·h_j, then the head.","additionalProperties":false,"required":["inputs","width","outputs","activation","head","hiddenWeights","hiddenBias","outputWeights","outputBias"],"properties":{"inputs":{"type":"integer","description":"Inputs after encoding (D).","minimum":1},"width":{"type":"integer","description":"Hidden neurons (H).","minimum":1},"outputs":{"type":"integer","description":"Output units (K): the classes for three or more, 1 for two classes (logistic) and for regression.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The hidden neurons\' activation."},"head":{"enum":["softmax","logistic","linear"],"description":"softmax: class probabilities; logistic: the probability of the second class; linear: the standardised value."},"hiddenWeights":{"type":"array","description":"H rows: hiddenWeights[j][i] is the weight from input i to hidden neuron j.","items":{"type":"array","description":"Hidden neuron j\'s weight from each input i, in input order.","items":{"type":"number"}}},"hiddenBias":{"type":"array","description":"One bias per hidden neuron.","items":{"type":"number"}},"outputWeights":{"type":"array","description":"K rows: outputWeights[k][j] is the weight from hidden neuron j to output k.","items":{"type":"array","description":"Output k\'s weight from each hidden neuron j.","items":{"type":"number"}}},"outputBias":{"type":"array","description":"One bias per output.","items":{"type":"number"}}}},"bytesByForm":{"type":"object","description":"A figure for each form of the network.","additionalProperties":false,"required":["float32","int8"],"properties":{"float32":{"type":"integer","description":"The float32 form.","minimum":0},"int8":{"type":"integer","description":"The int8 form.","minimum":0}}},"cost":{"type":"object","description":"What the network costs on a device, by the definitions of src/device/cost.ts.","additionalProperties":false,"required":["parameters","macs","flashBytes","ramBytes"],"properties":{"parameters":{"type":"integer","description":"Weights and biases: D·H + H + H·K + K.","minimum":0},"macs":{"type":"integer","description":"Multiply-accumulates per inference: D·H + H·K.","minimum":0},"flashBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the constant objects the exported C stores for each form (weights, biases, scales, zero-points, multipliers, shifts, the activation table, the input encoding\'s constants); code and padding not counted."},"ramBytes":{"$ref":"#/$defs/bytesByForm","description":"Bytes of the activation buffers of one inference (the encoded input vector and the hidden vector, in the form\'s type); the caller\'s arrays, scalars and the stack frame not counted."}}},"quantParams":{"type":"object","description":"An int8 quantisation: real = scale · (code − zeroPoint).","additionalProperties":false,"required":["scale","zeroPoint"],"properties":{"scale":{"type":"number","description":"S: the real value of one code step.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z: the code of real 0 (real = S · (q − Z))."}}},"int8":{"type":"object","description":"The int8 form (integer-only inference after Jacob et al. 2018, per-channel symmetric weights after Krishnamoorthi 2018).","additionalProperties":false,"required":["inputs","width","outputs","activation","head","input","hidden","output"],"properties":{"inputs":{"type":"integer","description":"The same as network.inputs.","minimum":1},"width":{"type":"integer","description":"The same as network.width.","minimum":1},"outputs":{"type":"integer","description":"The same as network.outputs.","minimum":1},"activation":{"enum":["tanh","logistic","relu"],"description":"The same as network.activation."},"head":{"enum":["softmax","logistic","linear"],"description":"The same as network.head."},"input":{"type":"object","description":"The quantisation of the encoded inputs (asymmetric int8).","additionalProperties":false,"required":["scale","zeroPoint","one","features"],"properties":{"scale":{"type":"number","description":"S_x of the whole encoded input vector: (hi − lo) / 255 over the training rows, the range widened to hold 0.","exclusiveMinimum":0},"zeroPoint":{"type":"integer","minimum":-128,"maximum":127,"description":"Z_x: the code of an input of 0, round(−128 − lo / S_x)."},"one":{"type":"integer","minimum":-128,"maximum":127,"description":"The code of a one-hot 1: clamp(Z_x + round(1 / S_x))."},"features":{"type":"array","description":"One entry per feature of encoding.features, in the same order.","items":{"oneOf":[{"type":"object","description":"A numeric feature\'s input stage.","additionalProperties":false,"required":["kind","mean","multiplier"],"properties":{"kind":{"const":"numeric","description":"A numeric feature."},"mean":{"type":"number","description":"The feature\'s mean as float32, subtracted from the raw value in float32."},"multiplier":{"type":"number","description":"float32 1 / (std · S_x): the centred value times this, in float32, is the input in code steps before rounding."}}},{"type":"object","description":"A categorical feature\'s input stage.","additionalProperties":false,"required":["kind","categories"],"properties":{"kind":{"const":"categorical","description":"A categorical feature."},"categories":{"type":"integer","description":"Its number of categories (one-hot inputs).","minimum":1}}}]}}}},"hidden":{"type":"object","description":"The hidden layer: int32 accumulation, requantisation to an int8 pre-activation, the activation by table.","additionalProperties":false,"required":["weights","weightScales","bias","multiplier","shift","preActivation","activation","table"],"properties":{"weights":{"type":"array","description":"H rows of D int8 weight codes (symmetric: zero-point 0, range ±127).","items":{"type":"array","description":"Neuron j\'s weight codes, in input order.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per hidden neuron: max |w| / 127 (larger only when the bias would not fit in ±2^30 steps).","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per hidden neuron at scale S_x · S_w[j], zero-point 0, before the input zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"multiplier":{"type":"array","description":"M0 per hidden neuron as round(M0 · 2^31) in [2^30, 2^31), with M = S_x · S_w[j] / S_a = M0 · 2^−shift; 0 when M < 2^−32.","items":{"type":"integer","minimum":0,"maximum":2147483647}},"shift":{"type":"array","description":"n per hidden neuron: a rounding right shift when positive, a saturating left shift when negative.","items":{"type":"integer","minimum":-31,"maximum":31}},"preActivation":{"$ref":"#/$defs/quantParams","description":"The int8 pre-activation that indexes the table (S_a, Z_a)."},"activation":{"$ref":"#/$defs/quantParams","description":"The int8 hidden activation the table holds (S_h, Z_h)."},"table":{"type":"array","description":"table[q + 128]: the activation code of pre-activation code q, for q = −128..127.","items":{"type":"integer","minimum":-128,"maximum":127},"minItems":256,"maxItems":256}}},"output":{"type":"object","description":"The output layer: int32 accumulation, then dequantisation to float for the head.","additionalProperties":false,"required":["weights","weightScales","bias","scale"],"properties":{"weights":{"type":"array","description":"K rows of H int8 weight codes (symmetric, ±127).","items":{"type":"array","description":"Output k\'s weight codes, by hidden neuron.","items":{"type":"integer","minimum":-127,"maximum":127}}},"weightScales":{"type":"array","description":"S_w per output.","items":{"type":"number","exclusiveMinimum":0}},"bias":{"type":"array","description":"int32 bias per output at scale S_h · S_w[k] (regression: with the target\'s mean / std added), before the hidden zero-point is folded in.","items":{"type":"integer","minimum":-1073741824,"maximum":1073741824}},"scale":{"type":"array","description":"float32 per output: the dequantised output per accumulator step (S_h · S_w[k]; regression: times the target\'s std, giving target units).","items":{"type":"number"}}}}}}}}');
-;// CONCATENATED MODULE: ./src/model/parse.ts
-/**
- * Reading a model file: JSON syntax with line and column, then the shape by
- * schema/model.schema.json itself, then what a schema cannot say (array lengths that follow
- * the network's shape, the int8 form's consistency). Every problem is one message naming the
- * file and the key. Files of version 1 (before judging rows and the int8 form) are read too.
- */
-
-
-
-
-
-
-/** The first version: no cost, no int8 form, judged on the validation rows, a 0-based restart and the grown width. */
-const MODEL_SCHEMA_V1 = 'neuron-budget/model@1';
-const parse_checkShape = schemaValidator(model_schema_namespaceObject);
-function inputsOf(features) {
-    return features.reduce((n, f) => n + (f.kind === 'numeric' ? 1 : f.categories.length), 0);
-}
-/** A version-1 document in this version's shape (what it could not know is marked as such). */
-function upgrade(d) {
-    const v1target = d['target'];
-    const v1origin = d['origin'];
-    const net = d['network'];
-    const enc = d['encoding'];
-    const cost = net && enc && Array.isArray(enc.features)
-        ? deviceCost(costShapeOf(net, enc))
-        : undefined;
-    return {
-        ...d,
-        schema: MODEL_SCHEMA,
-        target: v1target && { ...v1target, on: 'validation', met: true, adequate: true },
-        origin: v1origin && {
-            seed: v1origin.seed,
-            width: v1origin.grownWidth,
-            restart: typeof v1origin.restart === 'number' ? v1origin.restart + 1 : v1origin.restart,
-            how: 'fresh',
-        },
-        cost,
-        int8: null,
-        provenance: null,
-    };
-}
-/** Parse and check a model file; a bad file gets a message naming the file and the key. */
-function parseModel(text, file = 'model') {
-    const syntax = findJsonSyntaxProblem(text);
-    if (syntax) {
-        throw new UserError(`${file}:${syntax.line}:${syntax.column}: the model is not valid JSON: ${syntax.detail}`, {
-            file,
-            line: syntax.line,
-            column: syntax.column,
-        });
-    }
-    let doc = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-    const bad = (key, expected, found) => {
-        throw new UserError(`${file}: ${key}: expected ${expected}, found ${found}`, { file, key });
-    };
-    if (typeof doc !== 'object' || doc === null || Array.isArray(doc))
-        return bad('(top level)', 'a neuron-budget model (a JSON object)', Array.isArray(doc) ? 'a list' : String(doc));
-    const schema = doc['schema'];
-    if (schema === MODEL_SCHEMA_V1)
-        doc = upgrade(doc);
-    else if (schema !== MODEL_SCHEMA) {
-        bad('schema', `"${MODEL_SCHEMA}"`, typeof schema === 'string' ? JSON.stringify(schema.slice(0, 60)) : 'nothing');
-    }
-    try {
-        parse_checkShape(doc);
-    }
-    catch (e) {
-        if (e instanceof SchemaProblem)
-            bad(e.key, e.expected, e.found);
-        throw e;
-    }
-    const d = doc;
-    const net = d.network;
-    const enc = d.encoding;
-    if (inputsOf(enc.features) !== net.inputs)
-        bad('encoding.features', `features that encode to ${net.inputs} inputs (network.inputs)`, `${inputsOf(enc.features)}`);
-    const rows = (key, list, count, length) => {
-        if (list.length !== count)
-            bad(key, `${count} rows`, `${list.length}`);
-        list.forEach((r, i) => {
-            if (r.length !== length)
-                bad(`${key}[${i}]`, `${length} numbers`, `${r.length}`);
-        });
-    };
-    rows('network.hiddenWeights', net.hiddenWeights, net.width, net.inputs);
-    rows('network.outputWeights', net.outputWeights, net.outputs, net.width);
-    if (net.hiddenBias.length !== net.width)
-        bad('network.hiddenBias', `${net.width} numbers`, `${net.hiddenBias.length}`);
-    if (net.outputBias.length !== net.outputs)
-        bad('network.outputBias', `${net.outputs} numbers`, `${net.outputBias.length}`);
-    if (d.width !== net.width)
-        bad('width', `network.width (${net.width})`, `${d.width}`);
-    if (d.task === 'classification' && !Array.isArray(enc.target.classes))
-        bad('encoding.target.classes', 'a list of class labels', 'null');
-    if (d.int8 !== null) {
-        const problem = checkInt8Network(d.int8, net, enc);
-        if (problem)
-            bad(problem.key, problem.expected, 'something else');
-    }
-    // The cost is derived: recompute it rather than trust the file.
-    return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
-}
-
-// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
-var nn = __nccwpck_require__(6575);
-;// CONCATENATED MODULE: ./src/model/predict.ts
-/** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
-
-
-
-/** A row's cell, by own key only: a column may be named `constructor` or `__proto__`. */
-function cellOf(row, name) {
-    return Object.hasOwn(row, name) ? row[name] : undefined;
-}
-/** (x − mean) / std, with a constant training column (std 0) only centred. */
-function standardise(x, mean, std) {
-    return std > 0 ? (x - mean) / std : x - mean;
-}
-/** Encode raw rows the way the training data was encoded. An unseen category encodes as all zeros. */
-function encodeRows(model, rows) {
-    const inputs = model.network.inputs;
-    const x = new Float64Array(rows.length * inputs);
-    rows.forEach((row, r) => {
-        let c = r * inputs;
-        for (const f of model.encoding.features) {
-            const cell = cellOf(row, f.name);
-            if (cell === undefined)
-                throw new UserError(`row ${r + 1}: column ${quote(f.name)} is missing`, { key: f.name });
-            const text = cell.trim();
-            if (f.kind === 'numeric') {
-                const v = text === '' ? Number.NaN : Number(text);
-                if (!Number.isFinite(v)) {
-                    throw new UserError(`row ${r + 1}, column ${quote(f.name)}: expected a number, found ${quote(cell)}`, {
-                        key: f.name,
-                    });
-                }
-                x[c++] = standardise(v, f.mean, f.std);
-            }
-            else {
-                const k = f.categories.indexOf(text);
-                for (let j = 0; j < f.categories.length; j++)
-                    x[c + j] = j === k ? 1 : 0;
-                c += f.categories.length;
-            }
-        }
-    });
-    return x;
-}
-/** Head outputs for each row: class probabilities, or the value in the target's units. */
-function predictRows(model, rows) {
-    const out = predict(model.network, encodeRows(model, rows), rows.length);
-    const K = model.network.outputs;
-    const t = model.encoding.target;
-    const preds = [];
-    for (let p = 0; p < rows.length; p++) {
-        if (model.task === 'regression') {
-            preds.push({ value: out[p] * t.std + t.mean });
-            continue;
-        }
-        const classes = t.classes ?? [];
-        // Keyed by class labels, which may be any string: no prototype, so no label is special.
-        const probabilities = Object.create(null);
-        let best = 0;
-        if (K === 1) {
-            // One logistic output: the probability of the second class.
-            probabilities[classes[0]] = 1 - out[p];
-            probabilities[classes[1]] = out[p];
-            best = out[p] > 0.5 ? 1 : 0;
-        }
-        else {
-            for (let k = 0; k < K; k++) {
-                probabilities[classes[k]] = out[p * K + k];
-                if (out[p * K + k] > out[p * K + best])
-                    best = k;
-            }
-        }
-        preds.push({ label: classes[best], probabilities });
-    }
-    return preds;
-}
-/** The model's target metric on rows that carry the target column. */
-function scoreRows(model, rows) {
-    const preds = predictRows(model, rows);
-    const name = model.encoding.target.name;
-    const truth = rows.map((row, r) => {
-        const cell = cellOf(row, name);
-        if (cell === undefined)
-            throw new UserError(`row ${r + 1}: target column ${quote(name)} is missing`, { key: name });
-        return cell.trim();
-    });
-    const metric = model.target.metric;
-    if (metric === 'accuracy') {
-        let correct = 0;
-        preds.forEach((p, r) => {
-            if ('label' in p && p.label === truth[r])
-                correct++;
-        });
-        return correct / rows.length;
-    }
-    let se = 0;
-    let ae = 0;
-    let maxAe = 0;
-    preds.forEach((p, r) => {
-        const d = Math.abs(('value' in p ? p.value : Number.NaN) - Number(truth[r]));
-        se += d * d;
-        ae += d;
-        if (d > maxAe || d !== d)
-            maxAe = d;
-    });
-    if (metric === 'rmse')
-        return Math.sqrt(se / rows.length);
-    return metric === 'mae' ? ae / rows.length : maxAe;
-}
-
-;// CONCATENATED MODULE: ./src/model/index.ts
-/** Witness export: the winning network as a JSON document anyone can run on raw rows. */
-
-
-
-
-;// CONCATENATED MODULE: ./package.json
-const package_namespaceObject = {"rE":"0.1.0"};
-;// CONCATENATED MODULE: ./src/version.ts
-/** The tool's version, taken from package.json when the bundle is built (ncc inlines the JSON). */
-
-const TOOL_NAME = 'neuron-budget';
-const TOOL_VERSION = package_namespaceObject.rE;
-
-;// CONCATENATED MODULE: ./src/report/assemble.ts
-
-
-
-/** The report with the data stage's facts; verdict and search come later. */
-function dataStageReport(config, data, timing) {
-    const ds = data.dataset;
-    const classes = data.profile.classes;
-    return {
-        schema: 'neuron-budget/report@2',
-        tool: { name: TOOL_NAME, version: TOOL_VERSION },
-        reasons: [],
-        width: null,
-        metric: { name: config.target.metric, value: null, threshold: config.target.threshold },
-        baseline: null,
-        data: {
-            file: displayPath(config.root, config.data.path),
-            rows: data.rows,
-            droppedRows: data.droppedRows,
-            trainRows: ds.trainRows,
-            validationRows: ds.validationRows,
-            judgingRows: ds.judgingRows,
-            inputs: ds.inputs,
-            outputs: ds.outputs,
-            task: ds.task,
-            fingerprint: data.fingerprint,
-            classes: classes === null
-                ? null
-                : Object.keys(classes)
-                    .sort()
-                    .map((label) => ({ label, count: classes[label] })),
-            targetSpread: data.targetSpread,
-        },
-        search: null,
-        device: null,
-        changes: null,
-        timing: { ...timing },
-    };
-}
-/** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-function searchStageReport(report, search, required, context) {
-    const { encoding } = context;
-    const costOf = (width) => (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)({ inputs: report.data.inputs, width, outputs: report.data.outputs }, encoding));
-    return {
-        ...report,
-        device: deviceOf(search, context, report.data.inputs, report.data.outputs),
-        reasons: [],
-        width: search.width,
-        metric: { ...report.metric, value: search.metric },
-        search: {
-            outcome: search.outcome,
-            grownWidth: search.grownWidth,
-            required,
-            widths: search.widths.map((w) => ({ ...w, cost: costOf(w.width) })),
-            pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
-            trainings: search.trainings,
-            notes: search.notes,
-            judging: search.judging,
-            witness: witnessOf(search),
-        },
-    };
-}
-/** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
-function shownSource(task) {
-    return { width: task.width, restart: task.restart + 1 };
-}
-function witnessOf(search) {
-    const w = search.witness;
-    if (w === null)
-        return null;
-    return {
-        width: w.network.width,
-        how: w.how,
-        source: shownSource(w.source),
-        judged: w.judged,
-        steering: w.steering,
-        train: w.train,
-        met: w.met,
-        adequate: search.width !== null,
-    };
-}
-function deviceOf(search, context, inputs, outputs) {
-    const w = search.witness;
-    const a = search.appraisal;
-    if (w === null || a === null)
-        return null;
-    const width = w.network.width;
-    const labels = context.encoding.target.classes;
-    const floors = context.target.recallFloors ?? null;
-    const finite = (v) => (v === undefined || !Number.isFinite(v) ? null : v);
-    return {
-        precision: context.target.precision ?? 'float32',
-        inputs,
-        width,
-        outputs,
-        cost: (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)({ inputs, width, outputs }, context.encoding)),
-        metric: { float32: a.float32, int8: a.int8 },
-        classes: labels === null || a.confusion === null
-            ? null
-            : labels.map((label, c) => ({
-                label,
-                rows: a.confusion[c].reduce((s, v) => s + v, 0),
-                recall: finite(a.recall?.[c]),
-                precision: finite(a.precision?.[c]),
-                floor: floors === null || floors[c] <= 0 ? null : floors[c],
-            })),
-        confusion: a.confusion,
-    };
-}
-
 ;// CONCATENATED MODULE: ./src/report/data-summary.ts
 
 
@@ -45092,736 +46522,28 @@ function dataSummaryText(config, data, report) {
     return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;
 }
 
-;// CONCATENATED MODULE: ./src/report/chart.ts
+;// CONCATENATED MODULE: ./src/search/start.ts
+function chooseStart(facts) {
+    const fromMin = (why) => ({ from: 'min-width', width: facts.minWidth, why });
+    if (facts.start === 'min-width')
+        return fromMin('search.start is min-width');
+    if (facts.growth === 'in-place')
+        return fromMin('in-place growth grows every network from min-width');
+    if (facts.baselineWidth === null)
+        return fromMin('there is no baseline yet');
+    if (facts.settingsChanged.length > 0)
+        return fromMin("the baseline's settings differ, so it answers another question");
+    const width = Math.min(facts.maxWidth, Math.max(facts.minWidth, facts.baselineWidth));
+    if (width === facts.minWidth)
+        return fromMin(`the baseline's width ${facts.baselineWidth} is min-width`);
+    return { from: 'baseline', width, why: `the baseline has the same settings` };
+}
+
+;// CONCATENATED MODULE: ./src/job/prepare.ts
 /**
- * Mermaid `xychart-beta` blocks. Only numbers computed by neuron-budget and fixed
- * words written here ever reach a chart, so nothing from the repository can break it;
- * `chartText` still refuses anything outside a small alphabet as a second line of defence.
- *
- * The constructs used: an init directive that sets the series colours, `xychart-beta`, `title "…"`, `x-axis "…" ["…", …]`,
- * `y-axis "…" a --> b`, `line [n, …]`, `bar [n, …]`. Every series has exactly one value
- * per x-axis category: Mermaid draws a missing value as a broken path, so a width with
- * no value is left out of the chart (the table beside it still lists it).
- */
-
-/** Letters, digits, space and . , - + (a width read from a baseline file may print as 1e+21). */
-const SAFE_TEXT = /^[A-Za-z0-9 .,+-]*$/;
-function chartText(s) {
-    if (!SAFE_TEXT.test(s))
-        throw new Error(`chart text outside the safe alphabet: ${JSON.stringify(s)}`);
-    return `"${s}"`;
-}
-function chartNumber(n) {
-    const s = (0,format/* formatMetric */.gI)(n);
-    if (!/^-?\d+(\.\d+)?$/.test(s))
-        throw new Error(`not a chart number: ${n}`);
-    return s;
-}
-/** Colours readable on GitHub's light and dark themes. */
-const CHART_COLORS = { baseline: '#8c959f', current: '#0969da', limit: '#cf222e' };
-function renderChart(spec) {
-    for (const s of spec.series) {
-        if (s.values.length !== spec.categories.length) {
-            throw new Error('every chart series needs one value per category');
-        }
-    }
-    for (const s of spec.series) {
-        if (!/^#[0-9a-f]{6}$/.test(s.color))
-            throw new Error(`not a chart colour: ${JSON.stringify(s.color)}`);
-    }
-    const palette = spec.series.map((s) => s.color).join(',');
-    const lines = [
-        '```mermaid',
-        `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
-        'xychart-beta',
-        `  title ${chartText(spec.title)}`,
-        `  x-axis ${chartText(spec.xTitle)} [${spec.categories.map(chartText).join(', ')}]`,
-        `  y-axis ${chartText(spec.yTitle)} ${chartNumber(spec.yRange[0])} --> ${chartNumber(spec.yRange[1])}`,
-        ...spec.series.map((s) => `  ${s.kind} [${s.values.map(chartNumber).join(', ')}]`),
-        '```',
-    ];
-    return lines.join('\n');
-}
-/*
- * The ranges below take values read from a baseline file, which may be any finite number:
- * every step that could overflow (a margin on top of 1.7e308) stops at the largest float, so
- * an axis end is always a finite number.
- */
-/** A y-axis range that shows every value and the threshold with a little room. */
-function metricRange(values, threshold, accuracy) {
-    const all = [...values, threshold].filter(Number.isFinite);
-    if (accuracy) {
-        const low = Math.min(...all);
-        // Keep the axis from collapsing when every value is 1.
-        return [Math.min(0.9, Math.max(0, Math.floor(low * 10) / 10)), 1];
-    }
-    const high = Math.max(...all, 0);
-    return [0, niceCeil(finite(high * 1.1))];
-}
-function countRange(values) {
-    const high = Math.max(1, ...values.filter(Number.isFinite));
-    return [0, finite(Math.ceil(finite(high * 1.15)) + 1)];
-}
-function niceCeil(x) {
-    if (x <= 0)
-        return 1;
-    const step = 10 ** Math.floor(Math.log10(x));
-    return finite(Math.ceil(x / step) * step);
-}
-/** x, or the largest float when x overflowed. */
-function finite(x) {
-    return Math.min(x, Number.MAX_VALUE);
-}
-
-;// CONCATENATED MODULE: ./src/report/view.ts
-const VERDICT_LABEL = {
-    pass: 'PASS',
-    fail: 'FAIL',
-    improved: 'IMPROVED',
-    new: 'NEW',
-    inconclusive: 'INCONCLUSIVE',
-};
-function viewOf(report) {
-    const widths = report.search?.widths ?? [];
-    const at = report.width === null ? undefined : widths.find((w) => w.width === report.width);
-    const b = report.baseline;
-    const byWidth = new Map();
-    for (const w of widths)
-        byWidth.set(w.width, { width: w.width, current: w, baseline: null });
-    for (const w of b?.widths ?? []) {
-        const row = byWidth.get(w.width) ?? { width: w.width, current: null, baseline: null };
-        row.baseline = w;
-        byWidth.set(w.width, row);
-    }
-    const grown = report.search?.grownWidth ?? null;
-    const searchSeconds = report.timing['searchSeconds'];
-    return {
-        verdict: report.verdict,
-        headline: report.reasons[0] ?? '',
-        otherReasons: report.reasons.slice(1),
-        metricName: report.metric.name,
-        threshold: report.metric.threshold,
-        current: {
-            width: report.width,
-            metric: report.metric.value,
-            met: at ? at.met : null,
-            restarts: at ? at.restarts : null,
-            rows: report.data.rows,
-            searchSeconds: typeof searchSeconds === 'number' ? searchSeconds : null,
-        },
-        baseline: b
-            ? {
-                width: b.width,
-                metric: b.metric,
-                met: b.met ?? null,
-                restarts: b.restarts ?? null,
-                rows: b.rows ?? null,
-                searchSeconds: b.searchSeconds ?? null,
-            }
-            : null,
-        prunedFrom: grown !== null && report.width !== null && grown !== report.width ? grown : null,
-        backing: at ? backingSentence(at, report) : null,
-        rows: [...byWidth.values()].sort((x, y) => x.width - y.width),
-        history: b?.history ?? [],
-        baselineFile: report.gate?.baselineFile ?? b?.file ?? null,
-    };
-}
-/**
- * "5 networks of width 7 met the target on the judging rows (2 of 10 fresh restarts, 3 pruned from
- * wider networks); 3 are required." One definition of the backing, shown by every screen.
- */
-function backingSentence(w, report) {
-    const judging = report.search?.judging.on ?? 'judging';
-    const rows = judging === 'judging' ? 'the judging rows' : `the ${judging} rows`;
-    const parts = [];
-    if (w.restarts > 0)
-        parts.push(`${w.metBy.fresh} of ${w.restarts} fresh restart${w.restarts === 1 ? '' : 's'}`);
-    if (w.metBy.pruned > 0)
-        parts.push(`${w.metBy.pruned} pruned from wider networks`);
-    const required = report.search?.required ?? null;
-    const need = required === null ? '' : `; ${required} ${required === 1 ? 'is' : 'are'} required`;
-    const networks = w.met === 1 ? '1 network' : `${w.met} networks`;
-    return `${networks} of width ${w.width} met the target on ${rows} (${parts.join(', ')})${need}.`;
-}
-/** A baseline width's decisive metric, or its best in files that lack it when one network suffices. */
-function baselineDecisive(w, required) {
-    if (w.decisive !== undefined)
-        return w.decisive;
-    return required === 1 ? w.best : null;
-}
-
-;// CONCATENATED MODULE: ./src/report/words.ts
-
-
-/** "best", "2nd best", "3rd best", "4th best". */
-function nthBest(n) {
-    if (n <= 1)
-        return 'best';
-    const tens = n % 100;
-    const suffix = tens >= 11 && tens <= 13 ? 'th' : (['th', 'st', 'nd', 'rd'][n % 10] ?? 'th');
-    return `${n}${suffix} best`;
-}
-/** "on 539 judging rows" (or validation/training rows when those judged). */
-function judgingRowsPhrase(report) {
-    const j = report.search?.judging;
-    if (!j)
-        return '';
-    return `on ${(0,format/* formatCount */.B4)(j.rows)} ${j.on} rows`;
-}
-/** The first answer: how many neurons the data need now, and what the witness scores. */
-function needsSentence(report) {
-    const base = report.baseline?.width ?? null;
-    const target = (0,format/* targetPhrase */.Lx)(report.metric.name, report.metric.threshold);
-    if (report.width === null) {
-        const why = report.search?.outcome === 'inconclusive'
-            ? 'not settled: the search stopped before it could decide'
-            : `no width in the search range is adequate (${report.search?.required ?? 1} of its networks meeting ${target})`;
-        return `${capitalise(why)}${base === null ? '' : `; the baseline needed ${(0,format/* neurons */.nO)(base)}`}.`;
-    }
-    const was = base === null
-        ? ''
-        : base === report.width
-            ? ', as the baseline did'
-            : ` (the baseline needed ${(0,format/* formatCount */.B4)(base)})`;
-    const parts = [`${(0,format/* neurons */.nO)(report.width)}${was}.`];
-    const value = report.metric.value;
-    if (value !== null) {
-        const int8 = report.device?.metric.int8 ?? null;
-        const decides = report.device?.precision ?? 'float32';
-        const forms = int8 === null
-            ? ''
-            : decides === 'int8'
-                ? ` in the int8 form that decides (float32 ${(0,format/* formatMetric */.gI)(report.device.metric.float32)})`
-                : `; int8 form ${(0,format/* formatMetric */.gI)(int8)}`;
-        const bound = `${(0,common_metric/* higherIsBetter */.i2)(report.metric.name) ? 'at least' : 'at most'} ${(0,format/* formatMetric */.gI)(report.metric.threshold)}`;
-        parts.push(`The witness scores ${report.metric.name} ${(0,format/* formatMetric */.gI)(value)} ${judgingRowsPhrase(report)} (target: ${bound})${forms}.`);
-    }
-    return parts.join(' ');
-}
-/** The spread of a regression target, so "rmse ≤ 6" can be read against its scale; null otherwise. */
-function targetSpreadSentence(report) {
-    const s = report.data.targetSpread;
-    if (!s || report.data.task !== 'regression')
-        return null;
-    return `The target column has mean ${(0,format/* formatMetric */.gI)(s.mean)}, standard deviation ${(0,format/* formatMetric */.gI)(s.std)}, range ${(0,format/* formatMetric */.gI)(s.min)} to ${(0,format/* formatMetric */.gI)(s.max)}.`;
-}
-/** Every data change, most important first within the fixed order a reader expects. */
-function changeItems(ch, esc) {
-    const items = [];
-    if (ch.file)
-        items.push({ weight: 2, text: `Data file ${esc(ch.file.before)} → ${esc(ch.file.after)}.` });
-    if (!ch.changed) {
-        items.push({ weight: 0, text: "Same data as the baseline's (same fingerprint)." });
-        return items;
-    }
-    const r = ch.rows;
-    const rowShare = r.before > 0 ? Math.abs(r.after - r.before) / r.before : 1;
-    items.push({
-        weight: rowShare >= 0.5 ? 5 : rowShare >= 0.05 ? 3 : 1,
-        text: `Rows ${(0,format/* formatCount */.B4)(r.before)} → ${(0,format/* formatCount */.B4)(r.after)} (${(0,format/* formatDelta */.CW)(r.after - r.before)}).`,
-    });
-    for (const label of ch.classesAppeared)
-        items.push({ weight: 6, text: `New class ${esc(label)}.` });
-    for (const label of ch.classesVanished)
-        items.push({ weight: 6, text: `Class ${esc(label)} no longer appears.` });
-    for (const c of ch.classes ?? []) {
-        if (c.before === c.after || c.before === 0 || c.after === 0)
-            continue;
-        // What matters is the class's share of the rows, not its count: all classes growing together is one change.
-        const moved = r.before > 0 && r.after > 0 ? Math.abs(c.after / r.after - c.before / r.before) : 1;
-        items.push({
-            weight: moved >= 0.05 ? 4 : 1,
-            text: `Class ${esc(c.label)}: ${(0,format/* formatCount */.B4)(c.before)} → ${(0,format/* formatCount */.B4)(c.after)} rows (${(0,format/* formatDelta */.CW)(c.after - c.before)}${share(c, r)}).`,
-        });
-    }
-    for (const name of ch.columnsAdded)
-        items.push({ weight: 5, text: `Column added: ${esc(name)}.` });
-    for (const name of ch.columnsRemoved)
-        items.push({ weight: 5, text: `Column removed: ${esc(name)}.` });
-    for (const f of ch.features) {
-        const parts = [];
-        if (f.meanMoved) {
-            const by = f.shiftInStd === null ? '' : ` (${f.shiftInStd.toFixed(1)} standard deviations)`;
-            parts.push(`mean ${(0,format/* formatMetric */.gI)(f.meanBefore)} → ${(0,format/* formatMetric */.gI)(f.meanAfter)}${by}`);
-        }
-        if (f.rangeWidened) {
-            const g = f.rangeGrowth;
-            const sides = [];
-            if (g.below > 0)
-                sides.push(`${(0,format/* formatMetric */.gI)(g.below)} lower${inStd(g.belowInStd)}`);
-            if (g.above > 0)
-                sides.push(`${(0,format/* formatMetric */.gI)(g.above)} higher${inStd(g.aboveInStd)}`);
-            parts.push(`range ${(0,format/* formatMetric */.gI)(f.rangeBefore[0])} to ${(0,format/* formatMetric */.gI)(f.rangeBefore[1])} widened to ${(0,format/* formatMetric */.gI)(f.rangeAfter[0])} to ${(0,format/* formatMetric */.gI)(f.rangeAfter[1])} (${sides.join(', ')})`);
-        }
-        if (parts.length === 0)
-            continue;
-        items.push({
-            weight: f.meanMoved ? 2 + Math.min(3, 1.5 * (f.shiftInStd ?? 0)) : 2,
-            text: `Feature ${esc(f.name)}: ${parts.join('; ')}.`,
-        });
-    }
-    for (const c of ch.categories) {
-        if (c.appeared.length > 0)
-            items.push({
-                weight: 4,
-                text: `Feature ${esc(c.feature)}: new categories ${c.appeared.map((s) => esc(s)).join(', ')}.`,
-            });
-        if (c.vanished.length > 0)
-            items.push({
-                weight: 3,
-                text: `Feature ${esc(c.feature)}: categories gone ${c.vanished.map((s) => esc(s)).join(', ')}.`,
-            });
-    }
-    return items;
-}
-/** "; 39% → 31% of the rows", when both row counts are known. */
-function share(c, rows) {
-    if (rows.before <= 0 || rows.after <= 0)
-        return '';
-    const pct = (n, of) => `${Math.round((100 * n) / of)}%`;
-    return `; ${pct(c.before, rows.before)} → ${pct(c.after, rows.after)} of the rows`;
-}
-/** " (1.2 standard deviations)" or nothing when the baseline's deviation was 0. */
-function inStd(v) {
-    return v === null ? '' : `, ${v.toFixed(1)} standard deviations`;
-}
-/** Most changes the "why it changed" answer names; the evidence lists them all. */
-const WHY_ITEMS = 3;
-/** The third answer: why the width changed, from the settings and the data, most important first. */
-function whySentence(report, esc) {
-    const b = report.baseline;
-    if (b === null)
-        return `No baseline to compare with: this is the first measurement of this data (${(0,format/* formatCount */.B4)(report.data.rows)} rows).`;
-    const settings = b.settingsChanged ?? [];
-    const lead = settings.length > 0 ? `Settings changed: ${settings.map((s) => esc(s)).join('; ')}. ` : '';
-    const ch = report.changes;
-    if (ch === null)
-        return `${lead}`.trim();
-    if (!ch.changed) {
-        return settings.length > 0
-            ? `${lead}The data are the same as the baseline's.`
-            : "Nothing changed: the same data and settings as the baseline's.";
-    }
-    const items = changeItems(ch, esc)
-        .map((item, order) => ({ ...item, order }))
-        .sort((x, y) => y.weight - x.weight || x.order - y.order);
-    const shown = items.slice(0, WHY_ITEMS).map((i) => i.text);
-    const more = items.length - shown.length;
-    const tail = more > 0 ? ` And ${more} more change${more === 1 ? '' : 's'} in the details.` : '';
-    const quiet = items.every((i) => i.weight <= 1) ? ' No class, column or feature moved beyond the thresholds.' : '';
-    return `${lead}${shown.join(' ')}${quiet}${tail}`;
-}
-/** "Tried 14 removals on 3 networks: 3 removed, 11 put back; the witness was pruned from 8 to 7." */
-function pruningSentence(report) {
-    const steps = report.search?.pruning ?? [];
-    if (steps.length === 0)
-        return null;
-    const networks = new Set(steps.map((s) => `${s.source.width}/${s.source.restart}`)).size;
-    const removed = steps.filter((s) => s.accepted).length;
-    const w = report.search?.witness ?? null;
-    const witness = w !== null && w.how === 'pruned' && w.source.width !== w.width
-        ? `; the witness was pruned from ${w.source.width} to ${w.width} neurons`
-        : '';
-    return `Tried ${steps.length} removal${steps.length === 1 ? '' : 's'} on ${networks} network${networks === 1 ? '' : 's'}: ${removed} removed, ${steps.length - removed} put back${witness}.`;
-}
-/** "45 trainings in 9.40 s (growth 8.10 s, pruning 1.30 s)": what the search cost this run. */
-function searchCostSentence(report) {
-    const s = report.search;
-    if (!s)
-        return null;
-    const t = report.timing;
-    const split = typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
-        ? ` (growth ${(0,format/* formatSeconds */.Xo)(t['growthSeconds'])}, pruning ${(0,format/* formatSeconds */.Xo)(t['pruneSeconds'])})`
-        : '';
-    return `The search ran ${(0,format/* formatCount */.B4)(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${(0,format/* formatSeconds */.Xo)(t['searchSeconds'])}${split}.`;
-}
-/** Whether this run's result is already the baseline (nothing to accept). */
-function baselineIsCurrent(report) {
-    const b = report.baseline;
-    return (b !== null &&
-        b.width === report.width &&
-        b.sameSettings !== false &&
-        report.changes !== null &&
-        !report.changes.changed &&
-        report.changes.file === null);
-}
-/** What to do next, fitting the run: what was written, and the command the user would type. */
-function hints(report, context, esc, code) {
-    const out = [];
-    const config = context.configShown === null ? '' : ` --config ${esc(context.configShown)}`;
-    const file = esc(context.baselineFile ?? report.gate?.baselineFile ?? report.baseline?.file ?? 'the baseline file');
-    const written = context.baseline;
-    if (written !== null && 'file' in written) {
-        out.push(`Baseline written: ${esc(written.file)}, width ${written.width}, ${written.historyEntries} history entr${written.historyEntries === 1 ? 'y' : 'ies'}. Commit it to make it the baseline.`);
-    }
-    else if (written !== null) {
-        out.push(`Baseline not written: ${esc(written.notWritten, 400)}.`);
-    }
-    else if (report.width !== null && report.verdict !== 'inconclusive' && !baselineIsCurrent(report)) {
-        const command = code(`neuron-budget baseline${config}`);
-        const action = code('update-baseline: true');
-        const lead = report.verdict === 'new'
-            ? 'To record this result as the baseline'
-            : 'If this change is intended, accept it as the new baseline';
-        out.push(context.surface === 'action'
-            ? `${lead}: run the action with ${action}, or run ${command} and commit ${file}.`
-            : `${lead}: run ${command} and commit ${file}.`);
-    }
-    const budget = report.gate?.maxWidth ?? null;
-    if (budget !== null && report.width !== null && report.width > budget) {
-        out.push(`A new baseline does not lift the device budget: this check fails until the width fits it or ${code('gate.max-width')} is raised.`);
-    }
-    return out;
-}
-const SIGN_OFF = 'A passing gate is not a safety sign-off for a device.';
-function capitalise(s) {
-    return s.length > 0 ? s[0].toUpperCase() + s.slice(1) : s;
-}
-
-;// CONCATENATED MODULE: ./src/report/charts.ts
-/**
- * The two charts, one per question, as chart specs with the sentence that reads them.
- *
- * Metric by width: one chart holds the baseline and this change, each width a pair of
- * categories ("b7" the baseline, "7" this change), because Mermaid draws two bar series at the
- * same place over each other. A side that did not decide a width has a bar of the axis minimum
- * there, i.e. none. The bar is the `required`-th best judged metric, so a bar reaches the
- * threshold line exactly when the width is adequate (recall floors aside). A category without
- * bars at each end (the widths just outside the range shown; the first is blank when that would be
- * 0) carries the threshold line past the outer bars, so it shows even with one width. Mermaid's
- * band axis merges equal labels, so every category is distinct.
- */
-
-
-
-
-
-/** Most widths the metric chart shows; longer curves keep the widest (where the answer lies). */
-const CHART_MAX_WIDTHS = 15;
-/** Most baselines the drift chart shows. */
-const DRIFT_MAX_POINTS = 30;
-function metricChart(view, report) {
-    const required = report.search?.required ?? 1;
-    const rows = view.rows.slice(-CHART_MAX_WIDTHS);
-    const pairs = view.baseline !== null;
-    const now = rows.map((r) => r.current?.decisive ?? null);
-    const base = rows.map((r) => (r.baseline ? baselineDecisive(r.baseline, required) : null));
-    const values = [...now, ...base].filter((v) => v !== null && Number.isFinite(v));
-    if (values.length === 0)
-        return null;
-    const accuracy = (0,common_metric/* higherIsBetter */.i2)(view.metricName);
-    const range = metricRange(values, view.threshold, accuracy);
-    // Mermaid draws a bar of the axis minimum as a stub a few pixels high; one below it draws nothing.
-    const floor = range[0] - (range[1] - range[0]);
-    const first = rows[0].width - 1;
-    const categories = [first > 0 ? String(first) : ' '];
-    const nowBars = [floor];
-    const baseBars = [floor];
-    rows.forEach((r, i) => {
-        if (pairs) {
-            categories.push(`b${r.width}${r.width === view.baseline?.width ? ' min' : ''}`);
-            baseBars.push(base[i] ?? floor);
-            nowBars.push(floor);
-        }
-        categories.push(`${r.width}${r.width === view.current.width ? ' min' : ''}`);
-        nowBars.push(now[i] ?? floor);
-        baseBars.push(floor);
-    });
-    categories.push(String(rows[rows.length - 1].width + 1));
-    nowBars.push(floor);
-    baseBars.push(floor);
-    const which = nthBest(required);
-    const side = accuracy ? 'at or above' : 'at or below';
-    const legend = [
-        `Bars: the ${which} ${view.metricName} of the networks at each width, so a bar ${side} the line means the width is adequate (${required} network${required === 1 ? '' : 's'} met the target).`,
-        pairs ? 'Each width has two places: grey "b" and the width is the baseline, blue the width alone this change.' : '',
-        `"min" marks the smallest adequate width${pairs ? ' of each' : ''}. Red line: the threshold ${(0,format/* formatMetric */.gI)(view.threshold)}.`,
-        `The y-axis runs from ${(0,format/* formatMetric */.gI)(range[0])} to ${(0,format/* formatMetric */.gI)(range[1])}${range[0] === 0 ? '' : ', not from 0'}; the numbers are in the table.`,
-    ]
-        .filter((s) => s !== '')
-        .join(' ');
-    return {
-        spec: {
-            title: `${view.metricName} by hidden neurons`,
-            xTitle: 'hidden neurons',
-            categories,
-            yTitle: view.metricName,
-            yRange: range,
-            series: [
-                ...(pairs ? [{ kind: 'bar', values: baseBars, color: CHART_COLORS.baseline }] : []),
-                { kind: 'bar', values: nowBars, color: CHART_COLORS.current },
-                { kind: 'line', values: categories.map(() => view.threshold), color: CHART_COLORS.limit },
-            ],
-        },
-        legend,
-        widths: rows.map((r) => r.width),
-    };
-}
-/** Capacity drift: the width of each accepted baseline, then this change, against the neuron budget. */
-function driftChart(view, budget) {
-    if (view.history.length === 0)
-        return null;
-    const history = view.history.slice(-DRIFT_MAX_POINTS);
-    const first = view.history.length - history.length;
-    // A blank first and a "later" last category carry the budget line past the outer bars.
-    const categories = [' ', ...history.map((_, i) => String(first + i + 1))];
-    const widths = [0, ...history.map((h) => h.width)];
-    if (view.current.width !== null) {
-        categories.push('now');
-        widths.push(view.current.width);
-    }
-    categories.push('later');
-    widths.push(0);
-    const legend = `Bars: the smallest adequate width of each accepted baseline, oldest first (numbered as in the history table)${view.current.width !== null ? ', then this change' : ''}.` +
-        (budget === null
-            ? ' No neuron budget is set (gate.max-width).'
-            : ` Red line: the device budget of ${budget} hidden neurons.`);
-    return {
-        spec: {
-            title: 'Smallest adequate width over time',
-            xTitle: 'accepted baseline',
-            categories,
-            yTitle: 'hidden neurons',
-            yRange: countRange(budget === null ? widths : [...widths, budget]),
-            series: [
-                { kind: 'bar', values: widths, color: CHART_COLORS.current },
-                ...(budget === null
-                    ? []
-                    : [{ kind: 'line', values: categories.map(() => budget), color: CHART_COLORS.limit }]),
-            ],
-        },
-        legend,
-        widths: [],
-    };
-}
-
-;// CONCATENATED MODULE: ./src/report/context.ts
-const DEFAULT_CONTEXT = {
-    surface: 'cli',
-    mode: 'check',
-    configShown: null,
-    baselineFile: null,
-    baseline: null,
-};
-
-;// CONCATENATED MODULE: ./src/report/evidence.ts
-/**
- * The comment's evidence, collapsed under the three answers: the per-width ladder, per-class
- * figures, the baseline history, the pruning steps and every data change (Markdown tables).
- */
-
-
-
-
-function collapsible(summary, body) {
-    // The blank line after </summary> lets GitHub render the Markdown inside.
-    return `<details><summary>${summary}</summary>\n\n${body}\n\n</details>`;
-}
-function num(v) {
-    return v === null || v === undefined || !Number.isFinite(v) ? '—' : (0,format/* formatMetric */.gI)(v);
-}
-/** "4 of 10 + 1 pruned": networks that met the target, by source. */
-function metCell(w) {
-    const fresh = `${w.metBy.fresh} of ${w.restarts}`;
-    return w.metBy.pruned > 0 ? `${fresh} + ${w.metBy.pruned} pruned` : fresh;
-}
-function ladderSection(view, report, limits, mustShow) {
-    const required = report.search?.required ?? 1;
-    const which = nthBest(required);
-    const hasBaseline = view.baseline !== null;
-    const header = [
-        'Width',
-        'Met the target',
-        `${capitalise(which)}`,
-        'Best',
-        'Adequate',
-        ...(hasBaseline ? ['Baseline: met', `Baseline: ${which}`] : []),
-    ];
-    const keep = pickRows(view.rows, limits.widthRows, (r) => mustShow.has(r.width) || r.width === view.current.width);
-    const lines = keep.kept.map((r) => {
-        const c = r.current;
-        const marked = r.width === view.current.width || r.width === view.baseline?.width;
-        const cells = [
-            marked ? `**${r.width}**` : String(r.width),
-            c ? metCell(c) : 'not decided',
-            num(c?.decisive),
-            num(c?.best),
-            c ? (c.adequate ? 'yes' : 'no') : '—',
-        ];
-        if (hasBaseline)
-            cells.push(r.baseline ? String(r.baseline.met) : '—', num(r.baseline ? baselineDecisive(r.baseline, required) : null));
-        return `| ${cells.join(' | ')} |`;
-    });
-    const align = header.map((_, i) => (i === 1 ? ':--' : '--:'));
-    const omitted = keep.omitted > 0 ? `\n\n_${keep.omitted} more widths left out for length; the JSON report lists them all._` : '';
-    const bold = view.current.width !== null || view.baseline?.width != null
-        ? ' Bold: the smallest adequate width of this change and of the baseline.'
-        : '';
-    return (`| ${header.join(' | ')} |\n|${align.join('|')}|\n${lines.join('\n')}${omitted}\n\n` +
-        `Met the target: fresh restarts at that width that met it, of those run, plus networks pruned down to it. ` +
-        `A width is adequate when ${required} network${required === 1 ? '' : 's'} of it met the target, so the ${which} figure decides.${bold}` +
-        (searchCostSentence(report) === null ? '' : ` ${searchCostSentence(report)}`));
-}
-function classSection(report) {
-    const d = report.device;
-    if (d === null || d.classes === null)
-        return null;
-    const floors = d.classes.some((c) => c.floor !== null);
-    const head = `| Class | Rows | Recall | Precision${floors ? ' | Recall floor' : ''} |\n|:--|--:|--:|--:|${floors ? '--:|' : ''}`;
-    const lines = d.classes.map((c) => `| ${(0,common_escape/* escapeMarkdown */.FV)(c.label)} | ${(0,format/* formatCount */.B4)(c.rows)} | ${num(c.recall)} | ${num(c.precision)}${floors ? ` | ${num(c.floor)}` : ''} |`);
-    const parts = [`In the ${d.precision} form that decides.`, `${head}\n${lines.join('\n')}`];
-    if (d.confusion !== null) {
-        const labels = d.classes.map((c) => (0,common_escape/* escapeMarkdown */.FV)(c.label, 40));
-        const ch = `| True class ↓ predicted → | ${labels.join(' | ')} |\n|:--|${labels.map(() => '--:').join('|')}|`;
-        const rows = d.confusion.map((row, i) => `| ${labels[i]} | ${row.map((n) => (0,format/* formatCount */.B4)(n)).join(' | ')} |`);
-        parts.push(`${ch}\n${rows.join('\n')}`);
-    }
-    return parts.join('\n\n');
-}
-function historySection(history, limits) {
-    const start = Math.max(0, history.length - limits.historyRows);
-    const lines = history.slice(start).map((h, i) => {
-        const commit = h.commit === null ? '—' : (0,common_escape/* escapeMarkdown */.FV)(h.commit.slice(0, 12));
-        return `| ${start + i + 1} | ${(0,common_escape/* escapeMarkdown */.FV)(h.date.slice(0, 10))} | ${commit} | ${(0,format/* formatCount */.B4)(h.rows)} | ${h.width} | ${num(h.metric)} |`;
-    });
-    const omitted = start > 0 ? `\n\n_The ${start} oldest entries are left out for length._` : '';
-    return `| # | Date | Commit | Rows | Width | Metric |\n|--:|:--|:--|--:|--:|--:|\n${lines.join('\n')}${omitted}`;
-}
-function pruneSection(report, limits) {
-    const steps = report.search?.pruning ?? [];
-    const summary = pruningSentence(report);
-    if (summary === null)
-        return null;
-    if (limits.pruneRows === 0)
-        return `${summary}\n\n_The steps are left out for length; the JSON report lists them._`;
-    const shown = steps.slice(0, limits.pruneRows);
-    const lines = shown.map((s) => `| ${s.source.width} | ${s.source.restart} | ${s.width} | ${s.neuron} | ${num(s.steeringBefore)} | ${num(s.steeringAfter)} | ${s.accepted ? 'removed' : 'put back'} |`);
-    const omitted = steps.length > shown.length ? `\n\n_${steps.length - shown.length} more steps left out for length._` : '';
-    return (`${summary}\n\n| Grown width | Restart | Width before | Neuron index | Steering before | Steering after | Outcome |\n|--:|--:|--:|--:|--:|--:|:--|\n${lines.join('\n')}${omitted}\n\n` +
-        'Neuron index counts from 0, as in the JSON report and the model file. A neuron is put back when the network without it no longer meets the target on the steering rows.');
-}
-function changesSection(changes, limits) {
-    const items = changeItems(changes, common_escape/* escapeMarkdown */.FV).map((i) => i.text);
-    const shown = items.slice(0, limits.changeItems);
-    const omitted = items.length > shown.length ? `\n\n_${items.length - shown.length} more changes left out for length._` : '';
-    return `${shown.map((s) => `- ${s}`).join('\n')}${omitted}\n\nA feature is listed when its mean moved by more than half a baseline standard deviation, or its range grew on a side by more than half a baseline standard deviation.`;
-}
-function pickRows(rows, max, must) {
-    if (rows.length <= max)
-        return { kept: rows, omitted: 0 };
-    let room = Math.max(0, max - rows.filter(must).length);
-    const kept = rows.filter((r) => {
-        if (must(r))
-            return true;
-        if (room > 0) {
-            room--;
-            return true;
-        }
-        return false;
-    });
-    return { kept, omitted: rows.length - kept.length };
-}
-
-;// CONCATENATED MODULE: ./src/report/ledger.ts
-
-/** The ledger, or null when there is no width to cost. */
-function ledgerOf(report) {
-    // A network's cost depends on its width alone (for these inputs and outputs): the width's entry holds it.
-    const costAt = (width) => report.search?.widths.find((w) => w.width === width)?.cost ?? null;
-    if (report.width === null)
-        return null;
-    const c = report.device?.cost ?? costAt(report.width);
-    if (c === null)
-        return null;
-    const p = report.device?.precision ?? 'float32';
-    const other = p === 'int8' ? 'float32' : 'int8';
-    const g = report.gate ?? null;
-    const baselineWidth = report.baseline?.width ?? null;
-    const base = baselineWidth === null ? null : costAt(baselineWidth);
-    return {
-        precision: p,
-        baselineWidth,
-        rows: [
-            { label: 'hidden neurons', unit: '', now: report.width, budget: g?.maxWidth ?? null, atBaseline: baselineWidth },
-            {
-                label: `flash, ${p}`,
-                unit: ' B',
-                now: c.flashBytes[p],
-                budget: g?.maxFlashBytes ?? null,
-                atBaseline: base?.flashBytes[p] ?? null,
-            },
-            {
-                label: `flash, ${other}`,
-                unit: ' B',
-                now: c.flashBytes[other],
-                budget: null,
-                atBaseline: base?.flashBytes[other] ?? null,
-            },
-            {
-                label: `RAM, ${p}`,
-                unit: ' B',
-                now: c.ramBytes[p],
-                budget: g?.maxRamBytes ?? null,
-                atBaseline: base?.ramBytes[p] ?? null,
-            },
-            {
-                label: `RAM, ${other}`,
-                unit: ' B',
-                now: c.ramBytes[other],
-                budget: null,
-                atBaseline: base?.ramBytes[other] ?? null,
-            },
-            {
-                label: 'multiply-accumulates',
-                unit: '',
-                now: c.macs,
-                budget: g?.maxMacs ?? null,
-                atBaseline: base?.macs ?? null,
-            },
-        ],
-    };
-}
-function amount(n, unit) {
-    return `${(0,format/* formatCount */.B4)(n)}${unit}`;
-}
-/** "5 (over by 2)" / "600 B (fits, 77 B spare)" / "none set". */
-function budgetCell(row) {
-    if (row.budget === null)
-        return 'none set';
-    const gap = row.now - row.budget;
-    return gap > 0
-        ? `${amount(row.budget, row.unit)} (over by ${amount(gap, row.unit)})`
-        : `${amount(row.budget, row.unit)} (fits, ${amount(-gap, row.unit)} spare)`;
-}
-/** The second answer: does the width found fit the device? */
-function fitsSentence(ledger) {
-    if (ledger === null)
-        return 'Nothing to cost: no width is adequate.';
-    const budgeted = ledger.rows.filter((r) => r.budget !== null);
-    if (budgeted.length === 0) {
-        return 'No device budget is set, so nothing is gated; the ledger shows what the network costs. Set gate.max-width, gate.max-flash-bytes, gate.max-ram-bytes or gate.max-macs to gate on it.';
-    }
-    const over = budgeted.filter((r) => r.now > r.budget);
-    if (over.length > 0)
-        return `No: ${over.map((r) => `${excess(r)} over the budget of ${amount(r.budget, r.unit)}`).join('; ')}.`;
-    return `Yes, within every budget set: ${budgeted.map((r) => `${r.label} ${amount(r.now, r.unit)} of ${amount(r.budget, r.unit)}`).join(', ')}.`;
-}
-/** "2 hidden neurons" / "123 B of flash, int8" / "12 multiply-accumulates". */
-function excess(r) {
-    const gap = r.now - r.budget;
-    if (r.label === 'hidden neurons')
-        return (0,format/* neurons */.nO)(gap);
-    return r.unit === '' ? `${(0,format/* formatCount */.B4)(gap)} ${r.label}` : `${amount(gap, r.unit)} of ${r.label}`;
-}
-
-;// CONCATENATED MODULE: ./src/report/markdown.ts
-/**
- * The pull-request comment and job summary (GitHub-flavoured Markdown), laid out around the
- * reviewer's three questions: how many neurons does the data need now, does that fit the
- * device, and why did it change. The verdict and the three answers come first; the evidence
- * (metric by width, per class, capacity drift, pruning, every data change) follows collapsed.
- * Every string from the repository passes through escapeMarkdown. When the comment would
- * exceed the limit, only the evidence is shortened.
+ * What every stage of the main job does first (check, baseline, plan, shard, merge): read the
+ * config, check the outputs can be written, read the baseline, load the data, and choose where
+ * the growth walk starts. Everything a stage decides from afterwards is in the result.
  */
 
 
@@ -45832,300 +46554,13 @@ function excess(r) {
 
 
 
-/** GitHub refuses comments longer than 65,536 characters; leave room for the shell's hidden marker. */
-const COMMENT_LIMIT = 65_000;
-const DETAIL_LEVELS = [
-    { widthRows: Infinity, historyRows: Infinity, pruneRows: Infinity, changeItems: Infinity },
-    { widthRows: 200, historyRows: 100, pruneRows: 60, changeItems: 100 },
-    { widthRows: 80, historyRows: 40, pruneRows: 20, changeItems: 40 },
-    { widthRows: 0, historyRows: 12, pruneRows: 0, changeItems: 12 },
-];
-const code = (s) => `\`${s}\``;
-function renderMarkdown(report, options = {}) {
-    const limit = options.limit ?? COMMENT_LIMIT;
-    const context = options.context ?? DEFAULT_CONTEXT;
-    const view = viewOf(report);
-    const head = [headline(view), answers(view, report)].join('\n\n');
-    const foot = footer(report, context);
-    for (const level of DETAIL_LEVELS) {
-        const body = [head, evidence(view, report, level), foot].filter((s) => s !== '').join('\n\n');
-        if (body.length + 1 <= limit)
-            return `${body}\n`;
-    }
-    const note = "_The evidence was left out to keep this comment within GitHub's size limit; the JSON report has it all._";
-    return `${[head, note, foot].join('\n\n')}\n`;
-}
-function headline(view) {
-    const lines = [`### neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${(0,common_escape/* escapeMarkdown */.FV)(view.headline, errors/* MAX_MESSAGE */.h2)}`];
-    if (view.otherReasons.length > 0) {
-        lines.push('');
-        for (const r of view.otherReasons)
-            lines.push(`- ${(0,common_escape/* escapeMarkdown */.FV)(r, errors/* MAX_MESSAGE */.h2)}`);
-    }
-    return lines.join('\n');
-}
-/** The three answers, each led by its question's word in bold. */
-function answers(view, report) {
-    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
-    const ledger = ledgerOf(report);
-    const parts = [
-        `**Needs:** ${(0,common_escape/* escapeMarkdown */.FV)(needs.join(' '), 2 * errors/* MAX_MESSAGE */.h2)}`,
-        `**Fits the device:** ${(0,common_escape/* escapeMarkdown */.FV)(fitsSentence(ledger), errors/* MAX_MESSAGE */.h2)}`,
-    ];
-    if (ledger !== null)
-        parts.push(ledgerTable(ledger));
-    parts.push(`**Why it changed:** ${whySentence(report, common_escape/* escapeMarkdown */.FV)}`);
-    return parts.join('\n\n');
-}
-function ledgerTable(ledger) {
-    const base = ledger.baselineWidth;
-    const head = base === null
-        ? '| On the device | Needs now | Budget |\n|:--|--:|--:|'
-        : `| On the device | Needs now | Budget | At the baseline's ${base} |\n|:--|--:|--:|--:|`;
-    const lines = ledger.rows.map((r) => {
-        const cells = [r.label, `**${amount(r.now, r.unit)}**`, budgetCell(r)];
-        if (base !== null)
-            cells.push(r.atBaseline === null ? '—' : amount(r.atBaseline, r.unit));
-        return `| ${cells.join(' | ')} |`;
-    });
-    return `${head}\n${lines.join('\n')}`;
-}
-function evidence(view, report, limits) {
-    const blocks = [];
-    const metric = metricChart(view, report);
-    if (view.rows.length > 0) {
-        const chart = metric === null ? '' : `${metric.legend}\n\n${renderChart(metric.spec)}\n\n`;
-        blocks.push(collapsible(`Per width: ${(0,common_escape/* escapeMarkdown */.FV)(view.metricName)} of the ${view.rows.length} width${view.rows.length === 1 ? '' : 's'} decided`, `${chart}${ladderSection(view, report, limits, new Set(metric?.widths ?? []))}`));
-    }
-    const classes = classSection(report);
-    if (classes !== null)
-        blocks.push(collapsible('Per class, on the rows that judged the witness', classes));
-    const drift = driftChart(view, report.gate?.maxWidth ?? null);
-    if (drift !== null) {
-        blocks.push(collapsible(`Capacity drift: ${view.history.length} accepted baseline${view.history.length === 1 ? '' : 's'}`, `${drift.legend}\n\n${renderChart(drift.spec)}\n\n${historySection(view.history, limits)}`));
-    }
-    const pruning = pruneSection(report, limits);
-    if (pruning !== null)
-        blocks.push(collapsible(`Pruning: ${report.search.pruning.length} removals tried`, pruning));
-    if (report.changes)
-        blocks.push(collapsible('Every data change since the baseline', changesSection(report.changes, limits)));
-    return blocks.join('\n\n');
-}
-function footer(report, context) {
-    const lines = hints(report, context, common_escape/* escapeMarkdown */.FV, code);
-    const sign = `_neuron-budget ${(0,common_escape/* escapeMarkdown */.FV)(report.tool.version)} measures how many hidden neurons this data needs. ${SIGN_OFF}_`;
-    return ['---', ...lines, sign].join('\n\n');
-}
-
-;// CONCATENATED MODULE: ./src/report/text.ts
-/**
- * The terminal report: the same answers and words as the comment, plain text, at most 80 columns
- * (a long repository name may run over; each is clipped at 200 characters).
- */
-
-
-
-
-
-
-
-const TEXT_WIDTH = 80;
-function renderText(report, context = DEFAULT_CONTEXT) {
-    const view = viewOf(report);
-    const out = [];
-    // Reasons are our sentences (their repository strings clipped where they were quoted): shown whole.
-    out.push(...wrap(`neuron-budget: ${VERDICT_LABEL[view.verdict]}. ${(0,common_escape/* escapeText */.X1)(view.headline, errors/* MAX_MESSAGE */.h2)}`, ''));
-    for (const r of view.otherReasons)
-        out.push(...wrap((0,common_escape/* escapeText */.X1)(r, errors/* MAX_MESSAGE */.h2), '  - ', '    '));
-    const needs = [needsSentence(report), view.backing, targetSpreadSentence(report)].filter((s) => s !== null);
-    out.push('', ...wrap(`Needs: ${needs.join(' ')}`, '', '  '));
-    const ledger = ledgerOf(report);
-    out.push('', ...wrap(`Fits the device: ${fitsSentence(ledger)}`, '', '  '));
-    if (ledger !== null)
-        out.push(...ledgerLines(ledger));
-    out.push('', ...wrap(`Why it changed: ${whySentence(report, common_escape/* escapeText */.X1)}`, '', '  '));
-    if (view.rows.length > 0)
-        out.push('', ...ladderLines(view, report));
-    if (view.history.length > 0) {
-        out.push('');
-        out.push(`capacity drift (accepted baselines, oldest first${view.current.width !== null ? ', then now' : ''}):`);
-        const widths = view.history.slice(-20).map((h) => String(h.width));
-        if (view.current.width !== null)
-            widths.push(`now ${view.current.width}`);
-        const budget = report.gate?.maxWidth ?? null;
-        out.push(...wrap(`width ${widths.join(' -> ')}${budget === null ? '' : ` (budget ${budget})`}`, '  ', '  '));
-    }
-    const pruning = pruningSentence(report);
-    if (pruning !== null)
-        out.push('', ...wrap(`pruning: ${pruning[0].toLowerCase()}${pruning.slice(1)}`, '', '  '));
-    if (report.changes) {
-        out.push('', 'data changes since the baseline:');
-        for (const item of changeItems(report.changes, common_escape/* escapeText */.X1))
-            out.push(...wrap(item.text, '  - ', '    '));
-    }
-    out.push('');
-    for (const line of hints(report, context, common_escape/* escapeText */.X1, (s) => s))
-        out.push(...wrap(line, ''));
-    out.push(...wrap(SIGN_OFF, ''));
-    return `${out.join('\n')}\n`;
-}
-function ledgerLines(ledger) {
-    const base = ledger.baselineWidth;
-    const head = ['on the device', 'needs now', 'budget', ...(base === null ? [] : [`at baseline's ${base}`])];
-    const rows = ledger.rows.map((r) => [
-        r.label,
-        amount(r.now, r.unit),
-        budgetCell(r),
-        ...(base === null ? [] : [r.atBaseline === null ? '-' : amount(r.atBaseline, r.unit)]),
-    ]);
-    const widths = [22, 11, 20, 18];
-    return [head, ...rows].map((cells) => `  ${cells.map((c, i) => (i === 0 ? c.padEnd(widths[0]) : c.padStart(widths[i]))).join('')}`.trimEnd());
-}
-function ladderLines(view, report) {
-    const required = report.search?.required ?? 1;
-    const b = view.baseline;
-    const out = [`${view.metricName} by width (met: networks that met the target; ${nthBest(required)} decides)`];
-    const head = ['width', 'met', nthBest(required), 'best', 'adequate', ...(b ? ['baseline met'] : [])];
-    const widths = [7, 16, 11, 10, 10, 14];
-    const line = (cells) => cells
-        .map((c, i) => c.padStart(widths[i]))
-        .join('')
-        .trimEnd();
-    out.push(line(head));
-    for (const r of view.rows) {
-        const c = r.current;
-        const marked = r.width === view.current.width ? '>' : ' ';
-        out.push(line([
-            `${marked}${r.width}`,
-            c ? `${c.metBy.fresh} of ${c.restarts}${c.metBy.pruned > 0 ? ` +${c.metBy.pruned}p` : ''}` : 'not decided',
-            fmt(c?.decisive),
-            fmt(c?.best),
-            c ? (c.adequate ? 'yes' : 'no') : '-',
-            ...(b ? [r.baseline ? String(r.baseline.met) : '-'] : []),
-        ]));
-    }
-    const notes = [`threshold ${(0,format/* formatMetric */.gI)(view.threshold)}`];
-    if (view.current.width !== null)
-        notes.unshift("> marks this change's smallest adequate width");
-    if (view.rows.some((r) => (r.current?.metBy.pruned ?? 0) > 0))
-        notes.push('+Np: N networks pruned down to it');
-    out.push(...wrap(`(${notes.join('; ')})`, '  ', '  '));
-    const cost = searchCostSentence(report);
-    if (cost !== null)
-        out.push(...wrap(cost, '  ', '  '));
-    return out;
-}
-/** Greedy word wrap at TEXT_WIDTH; a single word longer than a line stays whole. */
-function wrap(text, first, rest = first) {
-    const words = text.split(/ +/).filter((w) => w !== '');
-    const lines = [];
-    let line = first;
-    let empty = true;
-    for (const w of words) {
-        if (!empty && line.length + 1 + w.length > TEXT_WIDTH) {
-            lines.push(line);
-            line = rest + w;
-        }
-        else {
-            line += (empty ? '' : ' ') + w;
-        }
-        empty = false;
-    }
-    lines.push(line);
-    return lines;
-}
-function fmt(v) {
-    return v === null || v === undefined || !Number.isFinite(v) ? '-' : (0,format/* formatMetric */.gI)(v);
-}
-
-;// CONCATENATED MODULE: ./src/report/json.ts
-function withGate(report, outcome, gate) {
-    const b = outcome.baseline;
-    return {
-        ...report,
-        verdict: outcome.verdict,
-        reasons: [...outcome.reasons],
-        baseline: b
-            ? {
-                width: b.result.width,
-                metric: b.result.metric.value,
-                file: gate.baselineAsWritten,
-                met: b.result.met,
-                restarts: b.result.restarts,
-                rows: b.data.rows,
-                searchSeconds: b.result.searchSeconds,
-                toolVersion: b.tool.version,
-                sameSettings: outcome.settingsChanged.length === 0,
-                settingsChanged: [...outcome.settingsChanged],
-                widths: b.widths.map((w) => ({ ...w })),
-                history: b.history.map((h) => ({ ...h })),
-            }
-            : null,
-        gate: {
-            maxWidth: gate.maxWidth,
-            maxFlashBytes: gate.maxFlashBytes,
-            maxRamBytes: gate.maxRamBytes,
-            maxMacs: gate.maxMacs,
-            allowedGrowth: gate.allowedGrowth,
-            metricTolerance: gate.metricTolerance,
-            baselineFile: gate.baselineAsWritten,
-        },
-        changes: outcome.changes,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/report/baseline-record.ts
-/**
- * The one line that says what `baseline` did with the baseline file, for the command line's
- * stdout and the action's log (the record itself is in JobResult.baselineRecord).
- */
-
-
-/** "baseline written: FILE, width W, N history entries", or "baseline not written: WHY". The file is escaped. */
-function baselineRecordLine(record) {
-    if ('notWritten' in record)
-        return `baseline not written: ${record.notWritten}`;
-    const entries = record.historyEntries === 1 ? '1 history entry' : `${(0,format/* formatCount */.B4)(record.historyEntries)} history entries`;
-    return `baseline written: ${(0,common_escape/* escapeText */.X1)(record.file)}, width ${record.width}, ${entries}`;
-}
-
-;// CONCATENATED MODULE: ./src/report/index.ts
-/** Rendering a report: pull-request comment / job summary, terminal text, JSON. */
-
-
-
-
-
-
-// EXTERNAL MODULE: ./src/search/index.ts + 10 modules
-var src_search = __nccwpck_require__(6202);
-;// CONCATENATED MODULE: ./src/run.ts
-/**
- * The main job shared by the command line and the action: config → data → search → gate →
- * report. This file only orchestrates; each stage lives in its folder.
- */
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-async function runJob(options) {
+async function prepareJob(options) {
     const timing = {};
     const loaded = await loadConfig(options.configPath, options.root);
     // Fail on an unwritable output before minutes of work, not after.
-    if (options.reportPath)
-        await checkOutputFolder(options.reportPath, 'report', options.root);
-    if (options.modelPath)
-        await checkOutputFolder(options.modelPath, 'model', options.root);
+    for (const [path, what] of options.outputs ?? [])
+        if (path)
+            await checkOutputFolder(path, what, options.root);
     const baselinePath = options.baselinePath ?? loaded.gate.baseline;
     const baselineShown = options.baselinePath
         ? displayPath(loaded.root, options.baselinePath)
@@ -46135,71 +46570,28 @@ async function runJob(options) {
     const data = await timed(timing, 'loadSeconds', () => loadData(loaded));
     const config = settleTarget(loaded, data.dataset.task, data.dataset.encoding.target.classes);
     options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
-    const search = await timed(timing, 'searchSeconds', () => (0,src_search/* runSearch */._d)(data.dataset, config.search, config.target, {
-        workers: options.workers ?? null,
-        workerEntry: options.workerEntry ?? null,
-        judgingFolded: data.judgingFolded,
-        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
-    }));
-    timing.growthSeconds = search.timing.growthSeconds;
-    timing.pruneSeconds = search.timing.pruneSeconds;
-    const cost = search.witness === null ? null : (0,device/* deviceCost */.Q2)((0,device/* costShapeOf */.MF)(search.witness.network, data.dataset.encoding));
-    const gate = await runGateStage({
-        mode: options.mode,
-        result: search,
-        cost,
-        loaded: data,
+    return {
         config,
+        data,
+        previous,
         baselinePath,
         baselineShown,
-        previous,
-        commit: options.commit ?? null,
-        date: new Date(),
-        toolVersion: TOOL_VERSION,
-    });
-    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
-        encoding: data.dataset.encoding,
-        target: config.target,
-    }), gate.outcome, gate.gate);
-    let modelWritten = null;
-    if (options.modelPath) {
-        if (search.witness === null) {
-            options.log?.('model not written: no network met the target');
-        }
-        else {
-            const backing = { on: search.judging.on, adequate: search.width !== null };
-            const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
-            const provenance = {
-                tool: { name: 'neuron-budget', version: TOOL_VERSION },
-                data: data.fingerprint,
-                config: displayPath(config.root, config.file),
-            };
-            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration, provenance);
-            await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
-            modelWritten = options.modelPath;
-        }
-    }
-    if (options.reportPath) {
-        await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
-    }
-    const verdict = report.verdict;
-    const context = {
-        surface: options.surface ?? 'cli',
-        mode: options.mode,
-        configShown: options.configShown ?? null,
         baselineFile: displayPath(loaded.root, baselinePath),
-        baseline: gate.record,
+        start: startFor(config, previous),
+        timing,
     };
-    return {
-        report,
-        verdict,
-        markdown: renderMarkdown(report, { context }),
-        text: renderText(report, context),
-        baselineWritten: gate.written,
-        baselineRecord: gate.record,
-        modelWritten,
-        exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
-    };
+}
+/** Where growth starts: at a baseline that answers the same question, else at min-width. */
+function startFor(config, previous) {
+    const s = config.search;
+    return chooseStart({
+        start: s.start,
+        growth: s.growth,
+        minWidth: s.minWidth,
+        maxWidth: s.maxWidth,
+        baselineWidth: previous === null ? null : (previous.result.grownWidth ?? previous.result.width),
+        settingsChanged: previous === null ? [] : settingsDifferences(previous.config.settings, resultSettings(config)),
+    });
 }
 async function timed(timing, name, work) {
     const start = performance.now();
@@ -46209,6 +46601,223 @@ async function timed(timing, name, work) {
     finally {
         timing[name] = (0,format/* secondsFromMs */.cm)(performance.now() - start);
     }
+}
+
+;// CONCATENATED MODULE: ./src/job/stages.ts
+/**
+ * The search over a job matrix, in three stages: `plan` splits the trainings into shards,
+ * `shard` runs one shard anywhere, and `merge` checks that every part belongs to this run,
+ * completes whatever the parts did not cover, and finishes exactly as `check` would (same
+ * report outside `timing`, same verdict, same exit code).
+ */
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+/** This run's plan for `shards` shards: a pure function of the prepared job. */
+function planOf(job, shards) {
+    const { config, data } = job;
+    const d = data.dataset;
+    return makePlan((0,src_search/* growthPlan */.dw)(config.search, job.start), shards, {
+        toolVersion: TOOL_VERSION,
+        data: data.fingerprint,
+        rows: data.rows,
+        settings: settingsFingerprint(resultSettings(config)),
+    }, {
+        trainRows: d.trainRows,
+        inputs: d.inputs,
+        outputs: d.outputs,
+        maxEpochs: config.search.maxEpochs,
+        pruneEpochs: config.search.prune ? config.search.pruneEpochs : 0,
+        pruneCandidates: task/* DEFAULT_PRUNE_CANDIDATES */.Aj,
+    });
+}
+function describePlan(plan) {
+    const tasks = plan.shards.reduce((n, s) => n + s.tasks.length, 0);
+    const widths = [...new Set(plan.shards.flatMap((s) => s.tasks.map((t) => t.width)))].sort((a, b) => a - b);
+    const from = plan.start.from === 'baseline'
+        ? `from the baseline's width ${plan.start.width}`
+        : `from min-width ${plan.start.width}`;
+    const range = widths.length === 1 ? `width ${widths[0]}` : `widths ${widths[0]}–${widths[widths.length - 1]}`;
+    const lines = [`plan: ${tasks} trainings (${range}, ${from}) over ${plan.shards.length} shards`];
+    for (const s of plan.shards) {
+        const pruned = s.tasks.filter((t) => t.prune).length;
+        lines.push(`  shard ${s.index}: ${s.tasks.length} trainings${pruned > 0 ? `, prunes up to ${pruned} networks` : ''} (about ${(s.estimatedMacs / 1e9).toFixed(1)} G multiply-adds)`);
+    }
+    return lines.join('\n');
+}
+async function runPlanStage(options) {
+    if (!Number.isInteger(options.shards) || options.shards < 1 || options.shards > MAX_SHARDS)
+        throw new errors/* UserError */.yo(`shards: expected a whole number from 1 to ${MAX_SHARDS} (a matrix's job limit), found ${options.shards}`);
+    const job = await prepareJob({ ...options, outputs: [[options.planPath, 'plan']] });
+    const plan = planOf(job, options.shards);
+    await writeOutput(options.planPath, `${JSON.stringify(plan, null, 2)}\n`, 'plan', job.config.root);
+    let text = describePlan(plan);
+    if (plan.shards.length < options.shards)
+        text += `\n(${options.shards} shards were asked for, but there are only ${plan.shards.length} trainings to share)`;
+    return { plan, indexes: plan.shards.map((s) => s.index), text };
+}
+/** Reads a plan file and checks it is this run's plan (the same data, settings, baseline and tool). */
+async function readPlan(path, job) {
+    const shown = displayPath(job.config.root, path);
+    const text = await (0,promises_namespaceObject.readFile)(path, 'utf8').catch((e) => {
+        throw new errors/* UserError */.yo(e.code === 'ENOENT'
+            ? `plan file ${shown} does not exist; write it with \`neuron-budget plan\``
+            : `cannot read the plan file ${shown} (${e.code ?? 'unknown error'})`, { file: shown });
+    });
+    const syntax = json_position_findJsonSyntaxProblem(text);
+    if (syntax)
+        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the plan is not valid JSON: ${syntax.detail}`, {
+            file: shown,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    const doc = JSON.parse(text);
+    const refuse = (why) => {
+        throw new errors/* UserError */.yo(`${shown}: ${why}`, { file: shown });
+    };
+    if (typeof doc !== 'object' || doc === null || doc.schema !== PLAN_SCHEMA)
+        return refuse(`expected a neuron-budget plan (schema "${PLAN_SCHEMA}"), the output of \`neuron-budget plan\``);
+    const shards = Array.isArray(doc.shards) ? doc.shards.length : 0;
+    if (shards < 1 || shards > MAX_SHARDS)
+        return refuse(`shards: expected 1 to ${MAX_SHARDS} shards, found ${shards}`);
+    const mine = planOf(job, shards);
+    if (doc.data?.fingerprint !== mine.data.fingerprint)
+        refuse('was made for other data than this checkout holds; make the plan from the same commit as the shards');
+    if (doc.settings?.fingerprint !== mine.settings.fingerprint)
+        refuse('was made with other result-changing settings than this config has');
+    if (JSON.stringify(doc) !== JSON.stringify(mine))
+        refuse(`is not this run's plan (plan ${(0,common_escape/* quote */.hD)(String(doc.id).slice(0, 12))}, this config, data and baseline give ${mine.id.slice(0, 12)}); it may come from another tool version or another baseline`);
+    return mine;
+}
+async function runShardStage(options) {
+    const started = external_node_perf_hooks_.performance.now();
+    const job = await prepareJob({ ...options, outputs: [[options.partPath, 'part']] });
+    const plan = await readPlan(options.planPath, job);
+    const shard = plan.shards[options.index];
+    if (!Number.isInteger(options.index) || shard === undefined)
+        throw new errors/* UserError */.yo(`index: expected a shard of the plan, 0 to ${plan.shards.length - 1}, found ${options.index}`);
+    const outcome = await runShard(job.data.dataset, job.config.search, job.config.target, shard, {
+        workers: options.workers ?? null,
+        workerEntry: options.workerEntry ?? null,
+        judgingFolded: job.data.judgingFolded,
+        start: job.start,
+        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    });
+    const part = {
+        schema: PART_SCHEMA,
+        tool: { name: 'neuron-budget', version: TOOL_VERSION },
+        plan: plan.id,
+        shard: { index: shard.index, of: plan.shards.length },
+        data: { fingerprint: plan.data.fingerprint },
+        settings: { fingerprint: plan.settings.fingerprint },
+        results: outcome.results,
+        pruned: outcome.pruned,
+        seconds: (0,format/* secondsFromMs */.cm)(external_node_perf_hooks_.performance.now() - started),
+    };
+    await writeOutput(options.partPath, serializePart(part), 'part', job.config.root);
+    const left = shard.tasks.length - outcome.results.length;
+    const text = `shard ${shard.index} of ${plan.shards.length}: ${outcome.results.length} trainings, ${outcome.pruned.length} networks pruned, ` +
+        `${part.seconds.toFixed(1)} s${left > 0 ? `; ${left} trainings left for the merge (the time budget ran out)` : ''}`;
+    return { part, text };
+}
+async function readParts(paths, job) {
+    if (paths.length === 0)
+        throw new errors/* UserError */.yo('merge needs the part files the shards wrote (neuron-budget shard --out …); none were given');
+    return Promise.all(paths.map(async (path) => {
+        const shown = displayPath(job.config.root, path);
+        const text = await (0,promises_namespaceObject.readFile)(path, 'utf8').catch((e) => {
+            throw new errors/* UserError */.yo(e.code === 'ENOENT'
+                ? `part file ${shown} does not exist`
+                : `cannot read the part file ${shown} (${e.code ?? 'unknown error'})`, { file: shown });
+        });
+        return { part: parsePart(text, shown), shown };
+    }));
+}
+async function runMergeStage(options) {
+    const job = await prepareJob({
+        ...options,
+        outputs: [
+            [options.reportPath, 'report'],
+            [options.modelPath, 'model'],
+        ],
+    });
+    const parts = await readParts(options.partPaths, job);
+    const plan = planOf(job, parts[0].part.shard.of || 1);
+    const want = {
+        plan,
+        toolVersion: TOOL_VERSION,
+        inputs: job.data.dataset.inputs,
+        outputs: job.data.dataset.outputs,
+    };
+    const byIndex = new Map();
+    for (const { part, shown } of parts) {
+        checkPart(part, shown, want);
+        const other = byIndex.get(part.shard.index);
+        if (other !== undefined)
+            throw new errors/* UserError */.yo(`${shown} and ${other} are both shard ${part.shard.index}; give each shard's part once`, {
+                file: shown,
+            });
+        byIndex.set(part.shard.index, shown);
+    }
+    const missing = plan.shards.map((s) => s.index).filter((i) => !byIndex.has(i));
+    if (missing.length > 0)
+        throw new errors/* UserError */.yo(`the part of shard ${missing.join(', ')} of ${plan.shards.length} is missing (parts given: ${[...byIndex.keys()].sort((a, b) => a - b).join(', ')}); did a shard job fail or its artifact not download?`);
+    const known = {
+        results: parts.flatMap((p) => p.part.results),
+        pruned: parts.flatMap((p) => p.part.pruned),
+    };
+    options.log?.(`merge: ${parts.length} parts of plan ${plan.id.slice(0, 12)}: ${known.results.length} trainings, ${known.pruned.length} pruned networks`);
+    const search = await timed(job.timing, 'searchSeconds', () => (0,src_search/* runSearch */._d)(job.data.dataset, job.config.search, job.config.target, {
+        workers: options.workers ?? null,
+        workerEntry: options.workerEntry ?? null,
+        judgingFolded: job.data.judgingFolded,
+        start: job.start,
+        known,
+        onLocalWork: (what) => options.log?.(`merge: ran here what the parts did not hold: ${what}`),
+        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    }));
+    return finishJob(job, search, options);
+}
+
+;// CONCATENATED MODULE: ./src/run.ts
+/**
+ * The main job shared by the command line and the action: config → data → search → gate →
+ * report. This file only orchestrates; each stage lives in its folder (job/ has the steps every
+ * stage shares, and the matrix stages plan, shard and merge).
+ */
+
+
+
+async function runJob(options) {
+    const job = await prepareJob({
+        ...options,
+        outputs: [
+            [options.reportPath, 'report'],
+            [options.modelPath, 'model'],
+        ],
+    });
+    const search = await timed(job.timing, 'searchSeconds', () => (0,src_search/* runSearch */._d)(job.data.dataset, job.config.search, job.config.target, {
+        workers: options.workers ?? null,
+        workerEntry: options.workerEntry ?? null,
+        judgingFolded: job.data.judgingFolded,
+        start: job.start,
+        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    }));
+    return finishJob(job, search, options);
 }
 
 ;// CONCATENATED MODULE: ./src/github/annotations.ts
@@ -46493,6 +47102,38 @@ function parseWorkerCount(text) {
 
 
 
+const STAGES = ['check', 'plan', 'shard', 'merge'];
+/** A whole number input in a range, with a message that names the input. */
+function wholeNumberInput(name, value, min, max) {
+    const n = /^\d{1,6}$/.test(value) ? Number(value) : Number.NaN;
+    if (!(n >= min && n <= max))
+        throw new errors/* UserError */.yo(`input ${name}: expected a whole number from ${min} to ${max}, found ${(0,common_escape/* quote */.hD)(value)}`, {
+            key: name,
+        });
+    return n;
+}
+/** The stage and its inputs; a path input is confined to the workspace like config. */
+function readStage(get, workspace, workingDirectory) {
+    const kind = get('stage') || 'check';
+    if (!STAGES.includes(kind))
+        throw new errors/* UserError */.yo(`input stage: expected one of ${STAGES.join(', ')}, found ${(0,common_escape/* quote */.hD)(kind)}`, { key: 'stage' });
+    const needed = (name, v) => {
+        if (v === '')
+            throw new errors/* UserError */.yo(`input ${name}: stage ${kind} needs it`, { key: name });
+        return v;
+    };
+    if (kind === 'plan')
+        return { kind, shards: wholeNumberInput('shards', get('shards') || '4', 1, 256) };
+    if (kind === 'shard')
+        return {
+            kind,
+            planPath: resolveInput(workspace, workingDirectory, 'plan', needed('plan', get('plan'))),
+            index: wholeNumberInput('shard-index', needed('shard-index', get('shard-index')), 0, 255),
+        };
+    if (kind === 'merge')
+        return { kind, partsDir: resolveInput(workspace, workingDirectory, 'parts', needed('parts', get('parts'))) };
+    return { kind: 'check' };
+}
 const TRUE = ['true', 'True', 'TRUE'];
 const FALSE = ['false', 'False', 'FALSE'];
 /** The same spellings `core.getBooleanInput` accepts, with a message that names the input and the value. @testOnly */
@@ -46556,7 +47197,12 @@ function readInputs(get, env = process.env) {
     const configWritten = get('config') || DEFAULT_CONFIG;
     const configPath = resolveInput(workspace, workingDirectory, 'config', configWritten);
     const configKey = (0,external_node_path_namespaceObject.relative)(workspace, configPath).split(external_node_path_namespaceObject.sep).join('/');
-    return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers };
+    const stage = readStage(get, workspace, workingDirectory);
+    if (updateBaseline && (stage.kind === 'plan' || stage.kind === 'shard'))
+        throw new errors/* UserError */.yo(`input update-baseline: only the check and merge stages write a baseline, not ${stage.kind}`, {
+            key: 'update-baseline',
+        });
+    return { workspace, workingDirectory, configPath, configKey, token, comment, updateBaseline, workers, stage };
 }
 /**
  * A file-system-safe folder name for one config, so two steps with different configs never share
@@ -46867,6 +47513,7 @@ function logUntrusted(text) {
 
 
 
+
 /** Verdicts that fail the step; the rest pass it. */
 const FAILING = new Set(['fail', 'inconclusive']);
 function runUrl() {
@@ -46991,9 +47638,14 @@ async function failBadInput(e, inputs) {
     process.exitCode = EXIT.badInput;
     const md = failureMarkdown(e.message, 'input');
     await writeSummary(md);
-    // A stale "pass" must not linger on the pull request while the config is broken.
-    if (inputs)
+    // A stale "pass" must not linger on the pull request while the config is broken (plan and shard
+    // leave that to merge, which runs after them and meets the same broken config).
+    if (inputs && writesComment(inputs))
         await postComment(inputs, md);
+}
+/** The whole check and merge post the one comment; plan and shard never do. */
+function writesComment(inputs) {
+    return inputs.stage.kind === 'check' || inputs.stage.kind === 'merge';
 }
 async function failInternal(e, inputs) {
     const err = e instanceof Error ? e : new Error(String(e));
@@ -47003,8 +47655,86 @@ async function failInternal(e, inputs) {
     process.exitCode = EXIT.internal;
     const md = failureMarkdown(err.message, 'internal');
     await writeSummary(md);
-    if (inputs)
+    if (inputs && writesComment(inputs))
         await postComment(inputs, md);
+}
+/** Search progress as log lines, one group per phase. */
+function groupedProgress() {
+    let phase = null;
+    const progress = () => throttledProgress((line) => info(line));
+    let print = progress();
+    return (ev) => {
+        if (ev.phase !== phase) {
+            if (phase !== null) {
+                endGroup();
+                startGroup(`neuron-budget: ${ev.phase} phase`);
+            }
+            phase = ev.phase;
+            print = progress(); // the first line of each phase always shows
+        }
+        print(ev);
+    };
+}
+/** In a group: the data summary and search progress fold away in the log. */
+async function grouped(work) {
+    startGroup('neuron-budget: data and search');
+    try {
+        return await work();
+    }
+    finally {
+        endGroup();
+    }
+}
+/**
+ * A matrix's first two stages: plan exposes the shard list for `strategy.matrix` and the plan
+ * file; shard exposes its part file. Neither writes a summary or a comment: merge writes the one.
+ */
+async function runMatrixStage(inputs, folder) {
+    const base = {
+        configPath: inputs.configPath,
+        root: inputs.workspace,
+        baselinePath: null,
+        log: (line) => logUntrusted(line),
+    };
+    const stage = inputs.stage;
+    if (stage.kind === 'plan') {
+        const planPath = (0,external_node_path_namespaceObject.join)(folder, 'plan.json');
+        const planned = await grouped(() => runPlanStage({ ...base, shards: stage.shards, planPath }));
+        logUntrusted(planned.text);
+        setOutput('shards', JSON.stringify(planned.indexes));
+        setOutput('plan', planPath);
+        return;
+    }
+    if (stage.kind === 'shard') {
+        const partPath = (0,external_node_path_namespaceObject.join)(folder, `part-${stage.index}.json`);
+        const said = await grouped(() => runShardStage({
+            ...base,
+            planPath: stage.planPath,
+            index: stage.index,
+            partPath,
+            workers: inputs.workers,
+            workerEntry: (0,external_node_url_.fileURLToPath)(import.meta.url),
+            onProgress: groupedProgress(),
+        }));
+        logUntrusted(said.text);
+        setOutput('part', partPath);
+    }
+}
+/** The part files merge reads: every .json file in the folder, in name order. */
+function partFiles(dir) {
+    let names;
+    try {
+        names = (0,external_node_fs_namespaceObject.readdirSync)(dir);
+    }
+    catch {
+        throw new errors/* UserError */.yo(`input parts: folder ${dir} does not exist; download the shards' artifacts into it`, {
+            key: 'parts',
+        });
+    }
+    return names
+        .filter((n) => n.endsWith('.json'))
+        .sort()
+        .map((n) => (0,external_node_path_namespaceObject.join)(dir, n));
 }
 async function run() {
     let inputs = null;
@@ -47012,49 +47742,34 @@ async function run() {
         inputs = readInputs((name) => getInput(name));
         const folder = outputFolder(inputs);
         (0,external_node_fs_namespaceObject.mkdirSync)(folder, { recursive: true });
+        const stage = inputs.stage;
+        if (stage.kind === 'plan' || stage.kind === 'shard') {
+            info(`neuron-budget: ${stage.kind} stage with ${(0,common_escape/* escapeText */.X1)(inputs.configKey)}`);
+            await runMatrixStage(inputs, folder);
+            return;
+        }
         const reportPath = (0,external_node_path_namespaceObject.join)(folder, 'report.json');
         const modelPath = (0,external_node_path_namespaceObject.join)(folder, 'model.json');
         const mode = inputs.updateBaseline ? 'baseline' : 'check';
-        info(`neuron-budget: ${mode} with ${(0,common_escape/* escapeText */.X1)(inputs.configKey)} (workspace ${(0,common_escape/* escapeText */.X1)(inputs.workspace)})`);
-        let phase = null;
-        const progress = () => throttledProgress((line) => info(line));
-        let print = progress();
-        startGroup('neuron-budget: data and search');
-        let result;
-        try {
-            result = await runJob({
-                configPath: inputs.configPath,
-                root: inputs.workspace,
-                mode,
-                baselinePath: null,
-                reportPath,
-                modelPath,
-                workers: inputs.workers,
-                // The bundle this runs in is also the search's worker entry.
-                workerEntry: (0,external_node_url_.fileURLToPath)(import.meta.url),
-                commit: process.env['GITHUB_SHA'] || null,
-                surface: 'action',
-                configShown: inputs.configKey === DEFAULT_CONFIG ? null : inputs.configKey,
-                onProgress: (ev) => {
-                    if (ev.phase !== phase) {
-                        if (phase !== null) {
-                            endGroup();
-                            startGroup(`neuron-budget: ${ev.phase} phase`);
-                        }
-                        phase = ev.phase;
-                        print = progress(); // the first line of each phase always shows
-                    }
-                    print(ev);
-                },
-                log: (line) => logUntrusted(line),
-            });
-        }
-        finally {
-            endGroup();
-        }
+        info(`neuron-budget: ${stage.kind === 'merge' ? `merge (${mode})` : mode} with ${(0,common_escape/* escapeText */.X1)(inputs.configKey)} (workspace ${(0,common_escape/* escapeText */.X1)(inputs.workspace)})`);
+        const options = {
+            configPath: inputs.configPath,
+            root: inputs.workspace,
+            mode,
+            baselinePath: null,
+            reportPath,
+            modelPath,
+            workers: inputs.workers,
+            workerEntry: (0,external_node_url_.fileURLToPath)(import.meta.url),
+            commit: process.env['GITHUB_SHA'] || null,
+            surface: 'action',
+            configShown: inputs.configKey === DEFAULT_CONFIG ? null : inputs.configKey,
+            onProgress: groupedProgress(),
+            log: (line) => logUntrusted(line),
+        };
+        const result = await grouped(() => stage.kind === 'merge' ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir) }) : runJob(options));
         setOutputs(result, reportPath);
         logUntrusted(result.text);
-        // The step's result comes from the verdict alone, decided before any comment traffic.
         const verdict = result.verdict;
         if (FAILING.has(verdict)) {
             const reason = result.report.reasons[0];
@@ -47063,10 +47778,8 @@ async function run() {
         else {
             info(`neuron-budget verdict: ${verdict}`);
         }
-        // The line escapes the file name; it starts with our own word, so it is never a workflow command.
         if (result.baselineRecord)
             info(baselineRecordLine(result.baselineRecord));
-        // None of these throw: they report trouble as warnings and leave the result alone.
         await writeCommentFile((0,external_node_path_namespaceObject.join)(folder, 'comment.md'), result.markdown);
         await writeSummary(result.markdown);
         await postComment(inputs, result.markdown);
@@ -47088,8 +47801,8 @@ async function run() {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4104);
-/* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6202);
+/* harmony import */ var _github_main_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4188);
+/* harmony import */ var _search_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4516);
 /**
  * Entry of the action bundle (dist/index.js). The same bundle is also the entry of the search's
  * worker threads, since the bundler does not follow `new Worker(path)`.
@@ -49628,29 +50341,217 @@ function detSoftplus(z) {
 
 /***/ }),
 
-/***/ 6202:
+/***/ 3787:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Pe: () => (/* binding */ inThreadExecutor),
+/* harmony export */   m: () => (/* binding */ workerPoolExecutor)
+/* harmony export */ });
+/* unused harmony export shareDataset */
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var _growth_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6881);
+/* harmony import */ var _task_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8575);
+/**
+ * Where tasks run: in this thread (one worker, and the path tests take from TypeScript
+ * source) or on a pool of worker threads that share the encoded data without copies.
+ * Both run the same task code, so the choice never changes a result.
+ */
 
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  _d: () => (/* reexport */ runSearch),
-  g9: () => (/* reexport */ runSearchWorker)
-});
 
-// UNUSED EXPORTS: DEFAULT_PRUNE_CANDIDATES, DEFAULT_STALL, decideGrowth, growthPlan, leastSalientFirst, mergeOutcomes, planTasks, restartAtWidth, runPruneJob, runTask, searchContext, shareDataset, tally, taskKey, wilsonInterval, workerCount
 
-// EXTERNAL MODULE: external "node:os"
-var external_node_os_ = __nccwpck_require__(8161);
-// EXTERNAL MODULE: external "node:perf_hooks"
-var external_node_perf_hooks_ = __nccwpck_require__(643);
-// EXTERNAL MODULE: external "node:worker_threads"
-var external_node_worker_threads_ = __nccwpck_require__(5919);
-;// CONCATENATED MODULE: ./src/search/growth.ts
+/** Marks a worker thread started by the pool (the bundle checks it to act as the worker). */
+const WORKER_MARK = 'neuron-budget/search-worker';
+const yieldToEventLoop = () => new Promise((resolve) => setImmediate(resolve));
+function inThreadExecutor(data, ctx) {
+    return {
+        size: 1,
+        async train(task) {
+            await yieldToEventLoop();
+            // Never discarded here (nothing runs ahead in one thread); null only when the time ran out.
+            return (0,_task_js__WEBPACK_IMPORTED_MODULE_1__/* .runTask */ .ZZ)(data, ctx, task);
+        },
+        async prune(job) {
+            await yieldToEventLoop();
+            return (0,_task_js__WEBPACK_IMPORTED_MODULE_1__/* .runPruneJob */ .h_)(data, ctx, job);
+        },
+        discard() { },
+        async close() { },
+    };
+}
+function isShared(a) {
+    return typeof SharedArrayBuffer !== 'undefined' && a.buffer instanceof SharedArrayBuffer;
+}
+function toShared(a) {
+    if (isShared(a))
+        return a;
+    const s = new Float64Array(new SharedArrayBuffer(a.length * Float64Array.BYTES_PER_ELEMENT));
+    s.set(a);
+    return s;
+}
+/** The dataset with every array on SharedArrayBuffer (already the case for loaded data), so posting it shares memory. */
+function shareDataset(data) {
+    return {
+        ...data,
+        xTrain: toShared(data.xTrain),
+        yTrain: toShared(data.yTrain),
+        xValidation: toShared(data.xValidation),
+        xJudging: toShared(data.xJudging),
+        yJudging: toShared(data.yJudging),
+        yValidation: toShared(data.yValidation),
+    };
+}
+/**
+ * A fixed pool of worker threads. `entry` is the file of the running bundle, which acts
+ * as the worker when started with WORKER_MARK (ncc does not follow `new Worker(path)`).
+ */
+function workerPoolExecutor(data, ctx, size, entry) {
+    const shared = shareDataset(data);
+    const pending = new Map();
+    const trainIds = new Map();
+    const queue = [];
+    const slots = [];
+    let nextId = 0;
+    let closed = false;
+    const pump = () => {
+        for (const slot of slots) {
+            if (slot.busy !== null || queue.length === 0)
+                continue;
+            const next = queue.shift();
+            slot.busy = next.id;
+            const msg = next.job.type === 'train'
+                ? { type: 'train', id: next.id, task: next.job.task }
+                : { type: 'prune', id: next.id, job: next.job.job };
+            slot.worker.postMessage(msg);
+        }
+    };
+    const settle = (id) => {
+        const p = pending.get(id);
+        pending.delete(id);
+        for (const [key, tid] of trainIds)
+            if (tid === id)
+                trainIds.delete(key);
+        return p;
+    };
+    const startSlot = () => {
+        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
+        const slot = { worker: new node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.Worker(entry, { workerData: { role: WORKER_MARK } }), busy: null, cancel };
+        slot.worker.on('message', (reply) => {
+            slot.busy = null;
+            const p = settle(reply.id);
+            if (p !== undefined) {
+                if (reply.type === 'done')
+                    p.resolve(reply.result);
+                else if (reply.type === 'cancelled')
+                    p.resolve(null);
+                else
+                    p.reject(new Error(reply.message));
+            }
+            pump();
+        });
+        const fail = (error) => {
+            if (closed)
+                return;
+            if (slot.busy !== null)
+                settle(slot.busy)?.reject(error);
+            slot.busy = null;
+        };
+        slot.worker.on('error', fail);
+        slot.worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
+        // The data's SharedArrayBuffers are shared with the thread, not copied.
+        const init = { type: 'init', data: shared, ctx, cancel };
+        slot.worker.postMessage(init);
+        return slot;
+    };
+    for (let k = 0; k < size; k++)
+        slots.push(startSlot());
+    const submit = (job) => new Promise((resolve, reject) => {
+        if (closed) {
+            reject(new Error('search worker pool is closed'));
+            return;
+        }
+        const id = nextId++;
+        pending.set(id, { resolve: resolve, reject });
+        if (job.type === 'train')
+            trainIds.set((0,_growth_js__WEBPACK_IMPORTED_MODULE_2__/* .taskKey */ .Do)(job.task), id);
+        queue.push({ id, job });
+        pump();
+    });
+    return {
+        size,
+        train: (task) => submit({ type: 'train', task }),
+        prune: (job) => submit({ type: 'prune', job }),
+        discard(task) {
+            const id = trainIds.get((0,_growth_js__WEBPACK_IMPORTED_MODULE_2__/* .taskKey */ .Do)(task));
+            if (id === undefined)
+                return;
+            settle(id);
+            const q = queue.findIndex((e) => e.id === id);
+            if (q >= 0) {
+                queue.splice(q, 1);
+                return;
+            }
+            // The thread looks at its flag between slices of epochs and answers 'cancelled'.
+            const slot = slots.find((s) => s.busy === id);
+            if (slot !== undefined)
+                Atomics.store(slot.cancel, 0, id);
+        },
+        async close() {
+            closed = true;
+            queue.length = 0;
+            await Promise.all(slots.map((s) => s.worker.terminate()));
+            pending.clear();
+        },
+    };
+}
+
+
+/***/ }),
+
+/***/ 6881:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Do: () => (/* binding */ taskKey),
+/* harmony export */   Rm: () => (/* binding */ startWidth),
+/* harmony export */   Um: () => (/* binding */ decideGrowth),
+/* harmony export */   s$: () => (/* binding */ planTasks)
+/* harmony export */ });
+/* unused harmony exports walkOrder, restartAtWidth, mergeOutcomes */
 function taskKey(task) {
     return `${task.width}:${task.restart}`;
 }
-/** Every growth task in canonical order. In-place growth has one task per restart, starting at min-width. */
+/**
+ * The widths in the order a walk can visit them. From min-width: upward. From a start width S
+ * (fresh growth only): S, S−1, S+1, S−2, S+2, … within the range, so whichever way the walk
+ * turns after S, the widths it visits come in increasing position and every task before the
+ * first undecided one can no longer matter.
+ */
+function walkOrder(plan) {
+    const start = startWidth(plan);
+    if (start === null) {
+        const out = [];
+        for (let w = plan.minWidth; w <= plan.maxWidth; w++)
+            out.push(w);
+        return out;
+    }
+    const out = [start];
+    for (let d = 1; start - d >= plan.minWidth || start + d <= plan.maxWidth; d++) {
+        if (start - d >= plan.minWidth)
+            out.push(start - d);
+        if (start + d <= plan.maxWidth)
+            out.push(start + d);
+    }
+    return out;
+}
+/** The width the walk starts from when it does not start at min-width (fresh growth only), clamped to the range. */
+function startWidth(plan) {
+    if (plan.growth === 'in-place' || plan.start === undefined || plan.start === null)
+        return null;
+    return Math.min(plan.maxWidth, Math.max(plan.minWidth, plan.start));
+}
+/** Every growth task in canonical order (walkOrder). In-place growth has one task per restart, starting at min-width. */
 function planTasks(plan) {
     const tasks = [];
     if (plan.growth === 'in-place') {
@@ -49658,7 +50559,7 @@ function planTasks(plan) {
             tasks.push({ width: plan.minWidth, restart: i });
         return tasks;
     }
-    for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
+    for (const w of walkOrder(plan)) {
         for (let i = 0; i < plan.restarts; i++)
             tasks.push({ width: w, restart: i });
     }
@@ -49732,12 +50633,18 @@ function restartAtWidth(plan, result, width) {
         network: null,
     };
 }
-/** Walk the widths as the header says. Pure: the same outcomes give the same decision. */
+/**
+ * Walk the widths as the header says. Pure: the same outcomes give the same decision.
+ * From a start width S the walk decides S first; when S is adequate it steps down until a width
+ * is not (the answer is the last adequate one), otherwise it steps up until one is. It assumes
+ * that adequacy, once lost going down, does not come back at a smaller width.
+ */
 function decideGrowth(plan, lookup) {
     const tried = [];
     const used = new Set();
     const allowedFailures = plan.restarts - plan.required;
-    for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
+    const byWidth = () => [...tried].sort((a, b) => a.width - b.width);
+    const decideWidth = (w) => {
         const seen = [];
         let successes = 0;
         let failures = 0;
@@ -49749,18 +50656,14 @@ function decideGrowth(plan, lookup) {
             if (!used.has(key) && plan.maxTrainings !== null && used.size >= plan.maxTrainings) {
                 if (seen.length > 0)
                     tried.push({ width: w, restarts: seen });
-                return {
-                    kind: 'decided',
-                    grownWidth: null,
-                    tried,
-                    trainings: used.size,
-                    capHit: { width: w, restartsRun: seen.length },
-                };
+                const capHit = { width: w, restartsRun: seen.length };
+                return { stop: { kind: 'decided', grownWidth: null, tried: byWidth(), trainings: used.size, capHit } };
             }
             const result = lookup(task);
             if (result === undefined) {
-                const sofar = seen.length > 0 ? [...tried, { width: w, restarts: seen }] : tried;
-                return { kind: 'need', task, deciding: w, tried: sofar, trainings: used.size };
+                if (seen.length > 0)
+                    tried.push({ width: w, restarts: seen });
+                return { stop: { kind: 'need', task, deciding: w, tried: byWidth(), trainings: used.size } };
             }
             used.add(key);
             const at = restartAtWidth(plan, result, w);
@@ -49771,10 +50674,49 @@ function decideGrowth(plan, lookup) {
                 failures++;
         }
         tried.push({ width: w, restarts: seen });
-        if (successes >= plan.required)
-            return { kind: 'decided', grownWidth: w, tried, trainings: used.size, capHit: null };
+        return { adequate: successes >= plan.required };
+    };
+    const decided = (grownWidth) => ({
+        kind: 'decided',
+        grownWidth,
+        tried: byWidth(),
+        trainings: used.size,
+        capHit: null,
+    });
+    const start = startWidth(plan);
+    if (start !== null) {
+        const first = decideWidth(start);
+        if ('stop' in first)
+            return first.stop;
+        if (first.adequate) {
+            let lowest = start;
+            for (let w = start - 1; w >= plan.minWidth; w--) {
+                const step = decideWidth(w);
+                if ('stop' in step)
+                    return step.stop;
+                if (!step.adequate)
+                    break;
+                lowest = w;
+            }
+            return decided(lowest);
+        }
+        for (let w = start + 1; w <= plan.maxWidth; w++) {
+            const step = decideWidth(w);
+            if ('stop' in step)
+                return step.stop;
+            if (step.adequate)
+                return decided(w);
+        }
+        return decided(null);
     }
-    return { kind: 'decided', grownWidth: null, tried, trainings: used.size, capHit: null };
+    for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
+        const step = decideWidth(w);
+        if ('stop' in step)
+            return step.stop;
+        if (step.adequate)
+            return decided(w);
+    }
+    return decided(null);
 }
 /**
  * Merge growth results from anywhere (threads, processes, machines) into the decision.
@@ -49795,14 +50737,98 @@ function mergeOutcomes(plan, results) {
     return decideGrowth(plan, (t) => byKey.get(taskKey(t)));
 }
 
-// EXTERNAL MODULE: ./src/common/random.ts
-var random = __nccwpck_require__(4554);
-// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
-var nn = __nccwpck_require__(6575);
+
+/***/ }),
+
+/***/ 4516:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  dw: () => (/* reexport */ search/* growthPlan */.dw),
+  _d: () => (/* reexport */ search/* runSearch */._d),
+  g9: () => (/* reexport */ runSearchWorker)
+});
+
+// UNUSED EXPORTS: DEFAULT_PRUNE_CANDIDATES, DEFAULT_STALL, decideGrowth, leastSalientFirst, mergeOutcomes, planTasks, restartAtWidth, runPruneJob, runTask, searchContext, shareDataset, tally, taskKey, wilsonInterval, workerCount
+
+// EXTERNAL MODULE: ./src/search/search.ts + 3 modules
+var search = __nccwpck_require__(8678);
+// EXTERNAL MODULE: ./src/search/task.ts
+var task = __nccwpck_require__(8575);
+// EXTERNAL MODULE: external "node:worker_threads"
+var external_node_worker_threads_ = __nccwpck_require__(5919);
+;// CONCATENATED MODULE: ./src/search/worker.ts
+/**
+ * The worker-thread side of the pool. A bundle calls runSearchWorker() when it starts
+ * as a worker (`!isMainThread`); the thread then answers task messages until terminated.
+ */
+
+
+function runSearchWorker() {
+    const port = external_node_worker_threads_.parentPort;
+    if (port === null)
+        throw new Error('runSearchWorker() must run in a worker thread');
+    let data = null;
+    let ctx = null;
+    let cancel = new Int32Array(1).fill(-1);
+    port.on('message', (msg) => {
+        if (msg.type === 'init') {
+            data = msg.data;
+            ctx = msg.ctx;
+            cancel = msg.cancel;
+            return;
+        }
+        let reply;
+        try {
+            if (data === null || ctx === null)
+                throw new Error('search worker got a task before its data');
+            const id = msg.id;
+            const result = msg.type === 'train'
+                ? (0,task/* runTask */.ZZ)(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id)
+                : (0,task/* runPruneJob */.h_)(data, ctx, msg.job);
+            reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
+        }
+        catch (e) {
+            reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };
+        }
+        port.postMessage(reply);
+    });
+}
+
+// EXTERNAL MODULE: ./src/search/executor.ts
+var executor = __nccwpck_require__(3787);
+;// CONCATENATED MODULE: ./src/search/index.ts
+/** The growth-and-prune search: public surface. */
+
+
+
+
+
+
+
+
+
+/***/ }),
+
+/***/ 884:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  mu: () => (/* binding */ appraise),
+  S4: () => (/* binding */ judge),
+  $E: () => (/* binding */ judgingRowsOf)
+});
+
 // EXTERNAL MODULE: ./src/common/metric.ts
 var metric = __nccwpck_require__(8457);
 // EXTERNAL MODULE: ./src/device/index.ts + 8 modules
 var device = __nccwpck_require__(4143);
+// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
+var nn = __nccwpck_require__(6575);
 ;// CONCATENATED MODULE: ./src/search/classes.ts
 /** counts[t][p]: rows of true class t predicted as p. */
 function confusion(predicted, truth, classes) {
@@ -49937,303 +50963,35 @@ function judge(data, net, rec, target) {
     };
 }
 
-;// CONCATENATED MODULE: ./src/search/task.ts
-/**
- * One unit of work, runnable in any thread: a growth task (one seeded training, or one
- * network grown in place) or a prune job (shrinking one network that met the target).
- * Everything here is a pure function of (data, context, task): no shared state, and the clock is
- * read only through `cancelled`, which can only end a task early (the caller then discards it).
- */
+
+/***/ }),
+
+/***/ 8678:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  dw: () => (/* binding */ growthPlan),
+  _d: () => (/* binding */ runSearch),
+  iK: () => (/* binding */ searchContext),
+  Mo: () => (/* binding */ workerCount)
+});
 
-/**
- * Dynamic Node Creation trigger (Ash 1989): window 100 epochs, relative slope 0.05.
- * Engineering choices inside the published range (window 25 and slope 0.1 in one
- * published description; checks every 100 updates with a 1% threshold in another).
- */
-const DEFAULT_STALL = { window: 100, threshold: 0.05 };
-/** Engineering choice: try the three least salient neurons before giving up a prune step. */
-const DEFAULT_PRUNE_CANDIDATES = 3;
-const never = () => false;
-function divergedReason(width, epochs) {
-    return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
-}
-/** Gives up when the caller says so or the search's time is up. */
-function stopWhen(ctx, cancelled) {
-    const deadline = ctx.deadline;
-    return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
-}
-/**
- * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
- * null only when `cancelled` (or the time budget) said to give up.
- * In-place growth (Dynamic Node Creation) starts at the task's width and gives every width up to
- * max-epochs; a neuron is added when the error curve flattens (the stall trigger) or that budget
- * runs out, until the target is met or max-width is hit.
- */
-function runTask(data, ctx, task, cancelled = never) {
-    const { plan, train } = ctx;
-    const inPlace = plan.growth === 'in-place';
-    const rng = (0,random/* rngFor */.pU)(ctx.seed, task.width, task.restart);
-    const options = {
-        ...train,
-        stall: inPlace ? { ...ctx.stall } : null,
-        interrupted: stopWhen(ctx, cancelled),
-    };
-    const trainer = (0,nn/* createTrainer */.K$)(data, task.width, options, rng);
-    const segments = [];
-    let epochs = 0;
-    for (;;) {
-        const rec = trainer.run(train.maxEpochs);
-        if (rec.stop === 'interrupted')
-            return null;
-        epochs += rec.epochs;
-        const width = trainer.network.width;
-        const network = rec.stop === 'diverged' ? null : trainer.snapshot();
-        const judged = judge(data, network, rec, train.target);
-        segments.push({ width, epochs, stop: rec.stop, ...judged });
-        const done = judged.met || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
-        if (done) {
-            return {
-                width: task.width,
-                restart: task.restart,
-                ...judged,
-                stop: rec.stop,
-                epochs,
-                finalWidth: width,
-                segments,
-                network: judged.met ? network : null,
-                reason: rec.stop === 'diverged' ? divergedReason(width, epochs) : null,
-            };
-        }
-        // Out of patience or epochs at this width: add a neuron that leaves the function unchanged and keep training.
-        trainer.addNeuron(rng);
-    }
-}
-/**
- * Shrink one network by compensated ablation: score every hidden neuron by the loss increase of
- * removing it with its mean activation folded into the output biases, remove the least salient,
- * retrain for at most `pruneEpochs`, and keep the removal only if the steering rows still meet the
- * target; otherwise restore and try the next candidate. Each kept network is judged on the judging
- * rows (that decides whether it counts for its width), but the judging rows never decide whether a
- * removal is kept.
- */
-function runPruneJob(data, ctx, job, cancelled = never) {
-    const target = ctx.train.target;
-    const retrain = { ...ctx.train, stall: null, interrupted: stopWhen(ctx, cancelled) };
-    // Every restore starts from a snapshot with fresh optimiser state, so the result does not
-    // depend on which thread ran the growth task.
-    const fromSnapshot = (net) => (0,nn/* trainerFromNetwork */.Y$)(data, net, retrain, (0,random/* rngFor */.pU)(ctx.seed, job.source.width, job.source.restart));
-    let trainer = fromSnapshot(job.network);
-    let steering = trainer.evaluate().steeringMetric;
-    let network = job.network;
-    const chain = [];
-    const steps = [];
-    let trainings = 0;
-    while (trainer.network.width > 1) {
-        const width = trainer.network.width;
-        const order = leastSalientFirst(trainer.saliency());
-        let removed = false;
-        let dirty = false;
-        for (const j of order.slice(0, ctx.pruneCandidates)) {
-            // Restore lazily: after the last refused candidate nothing trains again, so no rebuild is needed.
-            if (dirty)
-                trainer = fromSnapshot(network);
-            trainer.removeNeuron(j);
-            const rec = trainer.run(ctx.pruneEpochs);
-            if (rec.stop === 'interrupted')
-                return { source: job.source, chain, steps, trainings, interrupted: true };
-            trainings++;
-            const smaller = rec.stop === 'diverged' ? null : trainer.snapshot();
-            const judged = judge(data, smaller, rec, target);
-            const accepted = smaller !== null && judged.reached;
-            steps.push({
-                source: job.source,
-                width,
-                neuron: j,
-                steeringBefore: steering,
-                steeringAfter: judged.steering,
-                accepted,
-                judged: accepted ? judged.judged : null,
-            });
-            if (accepted && smaller !== null) {
-                steering = judged.steering;
-                network = smaller;
-                chain.push({ width: width - 1, network: smaller, ...judged });
-                removed = true;
-                break;
-            }
-            dirty = true;
-        }
-        if (!removed)
-            break;
-    }
-    return { source: job.source, chain, steps, trainings, interrupted: false };
-}
-/** Neuron indices by ascending saliency; ties (and NaN) resolved by index so the order is total. */
-function leastSalientFirst(saliency) {
-    const idx = Array.from(saliency, (_, j) => j);
-    const key = (j) => (Number.isFinite(saliency[j]) ? saliency[j] : Number.POSITIVE_INFINITY);
-    idx.sort((a, b) => key(a) - key(b) || a - b);
-    return idx;
-}
-
-;// CONCATENATED MODULE: ./src/search/executor.ts
-/**
- * Where tasks run: in this thread (one worker, and the path tests take from TypeScript
- * source) or on a pool of worker threads that share the encoded data without copies.
- * Both run the same task code, so the choice never changes a result.
- */
-
-
-
-/** Marks a worker thread started by the pool (the bundle checks it to act as the worker). */
-const WORKER_MARK = 'neuron-budget/search-worker';
-const yieldToEventLoop = () => new Promise((resolve) => setImmediate(resolve));
-function inThreadExecutor(data, ctx) {
-    return {
-        size: 1,
-        async train(task) {
-            await yieldToEventLoop();
-            // Never discarded here (nothing runs ahead in one thread); null only when the time ran out.
-            return runTask(data, ctx, task);
-        },
-        async prune(job) {
-            await yieldToEventLoop();
-            return runPruneJob(data, ctx, job);
-        },
-        discard() { },
-        async close() { },
-    };
-}
-function isShared(a) {
-    return typeof SharedArrayBuffer !== 'undefined' && a.buffer instanceof SharedArrayBuffer;
-}
-function toShared(a) {
-    if (isShared(a))
-        return a;
-    const s = new Float64Array(new SharedArrayBuffer(a.length * Float64Array.BYTES_PER_ELEMENT));
-    s.set(a);
-    return s;
-}
-/** The dataset with every array on SharedArrayBuffer (already the case for loaded data), so posting it shares memory. */
-function shareDataset(data) {
-    return {
-        ...data,
-        xTrain: toShared(data.xTrain),
-        yTrain: toShared(data.yTrain),
-        xValidation: toShared(data.xValidation),
-        xJudging: toShared(data.xJudging),
-        yJudging: toShared(data.yJudging),
-        yValidation: toShared(data.yValidation),
-    };
-}
-/**
- * A fixed pool of worker threads. `entry` is the file of the running bundle, which acts
- * as the worker when started with WORKER_MARK (ncc does not follow `new Worker(path)`).
- */
-function workerPoolExecutor(data, ctx, size, entry) {
-    const shared = shareDataset(data);
-    const pending = new Map();
-    const trainIds = new Map();
-    const queue = [];
-    const slots = [];
-    let nextId = 0;
-    let closed = false;
-    const pump = () => {
-        for (const slot of slots) {
-            if (slot.busy !== null || queue.length === 0)
-                continue;
-            const next = queue.shift();
-            slot.busy = next.id;
-            const msg = next.job.type === 'train'
-                ? { type: 'train', id: next.id, task: next.job.task }
-                : { type: 'prune', id: next.id, job: next.job.job };
-            slot.worker.postMessage(msg);
-        }
-    };
-    const settle = (id) => {
-        const p = pending.get(id);
-        pending.delete(id);
-        for (const [key, tid] of trainIds)
-            if (tid === id)
-                trainIds.delete(key);
-        return p;
-    };
-    const startSlot = () => {
-        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
-        const slot = { worker: new external_node_worker_threads_.Worker(entry, { workerData: { role: WORKER_MARK } }), busy: null, cancel };
-        slot.worker.on('message', (reply) => {
-            slot.busy = null;
-            const p = settle(reply.id);
-            if (p !== undefined) {
-                if (reply.type === 'done')
-                    p.resolve(reply.result);
-                else if (reply.type === 'cancelled')
-                    p.resolve(null);
-                else
-                    p.reject(new Error(reply.message));
-            }
-            pump();
-        });
-        const fail = (error) => {
-            if (closed)
-                return;
-            if (slot.busy !== null)
-                settle(slot.busy)?.reject(error);
-            slot.busy = null;
-        };
-        slot.worker.on('error', fail);
-        slot.worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
-        // The data's SharedArrayBuffers are shared with the thread, not copied.
-        const init = { type: 'init', data: shared, ctx, cancel };
-        slot.worker.postMessage(init);
-        return slot;
-    };
-    for (let k = 0; k < size; k++)
-        slots.push(startSlot());
-    const submit = (job) => new Promise((resolve, reject) => {
-        if (closed) {
-            reject(new Error('search worker pool is closed'));
-            return;
-        }
-        const id = nextId++;
-        pending.set(id, { resolve: resolve, reject });
-        if (job.type === 'train')
-            trainIds.set(taskKey(job.task), id);
-        queue.push({ id, job });
-        pump();
-    });
-    return {
-        size,
-        train: (task) => submit({ type: 'train', task }),
-        prune: (job) => submit({ type: 'prune', job }),
-        discard(task) {
-            const id = trainIds.get(taskKey(task));
-            if (id === undefined)
-                return;
-            settle(id);
-            const q = queue.findIndex((e) => e.id === id);
-            if (q >= 0) {
-                queue.splice(q, 1);
-                return;
-            }
-            // The thread looks at its flag between slices of epochs and answers 'cancelled'.
-            const slot = slots.find((s) => s.busy === id);
-            if (slot !== undefined)
-                Atomics.store(slot.cancel, 0, id);
-        },
-        async close() {
-            closed = true;
-            queue.length = 0;
-            await Promise.all(slots.map((s) => s.worker.terminate()));
-            pending.clear();
-        },
-    };
-}
-
+// EXTERNAL MODULE: external "node:os"
+var external_node_os_ = __nccwpck_require__(8161);
+// EXTERNAL MODULE: external "node:perf_hooks"
+var external_node_perf_hooks_ = __nccwpck_require__(643);
+// EXTERNAL MODULE: ./src/search/executor.ts
+var search_executor = __nccwpck_require__(3787);
+// EXTERNAL MODULE: ./src/search/growth.ts
+var growth = __nccwpck_require__(6881);
+// EXTERNAL MODULE: ./src/search/judge.ts + 1 modules
+var judge = __nccwpck_require__(884);
 // EXTERNAL MODULE: ./src/common/format.ts
 var format = __nccwpck_require__(6950);
+// EXTERNAL MODULE: ./src/common/metric.ts
+var metric = __nccwpck_require__(8457);
 ;// CONCATENATED MODULE: ./src/search/notes.ts
 /**
  * Why no width is adequate, in sentences a reviewer can act on, read off the per-width curve:
@@ -50302,15 +51060,66 @@ function notFoundNotes(plan, target, widths, judgedOn) {
     return notes;
 }
 /** The growth phase stopped (time budget, training cap) before a width was adequate. */
-function stoppedGrowingNote(plan, why, atWidth, trainings) {
-    const below = atWidth > plan.minWidth
-        ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate on fresh restarts`
-        : '';
-    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
+function stoppedGrowingNote(plan, why, atWidth, trainings, tried) {
+    const before = tried.filter((t) => t.width !== atWidth && t.restarts.length > 0);
+    const adequate = before.filter((t) => t.restarts.filter((r) => r.met).length >= plan.required).map((t) => t.width);
+    const not = before.filter((t) => !adequate.includes(t.width)).map((t) => t.width);
+    const said = [
+        adequate.length > 0
+            ? `${widthList(adequate)} ${adequate.length > 1 ? 'were' : 'was'} adequate on fresh restarts`
+            : '',
+        not.length > 0 ? `${widthList(not)} ${not.length > 1 ? 'were' : 'was'} not adequate on fresh restarts` : '',
+    ].filter((x) => x !== '');
+    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${said.length > 0 ? `; ${said.join(', ')}` : ''}.`;
 }
 /** The time ran out while pruning: the grown width is proven, smaller ones are not settled. */
 function stoppedPruningNote(why, grownWidth, trainings) {
     return `${why} while pruning, after ${trainings} trainings: ${(0,format/* neurons */.nO)(grownWidth)} are enough (proven by fresh restarts), but whether fewer would do was not settled.`;
+}
+/** Ascending widths as "width 3", "widths 3–5" or "widths 3, 5–7". */
+function widthList(widths) {
+    const runs = [];
+    for (let k = 0; k < widths.length;) {
+        let e = k;
+        while (e + 1 < widths.length && widths[e + 1] === widths[e] + 1)
+            e++;
+        runs.push(widths[k] === widths[e] ? `${widths[k]}` : `${widths[k]}–${widths[e]}`);
+        k = e + 1;
+    }
+    return widths.length === 1 ? `width ${runs[0]}` : `widths ${runs.join(', ')}`;
+}
+/** Where growth began and which widths it decided, with why that was enough. */
+function walkReport(plan, start, decision) {
+    const choice = start ?? { from: 'min-width', width: plan.minWidth, why: 'the search starts there' };
+    const from = choice.from === 'baseline' && plan.start != null ? 'baseline' : 'min-width';
+    const width = from === 'baseline' ? choice.width : plan.minWidth;
+    const decided = decision.tried.filter((t) => t.restarts.length > 0).map((t) => t.width);
+    const lead = from === 'baseline'
+        ? `Growth started at the baseline's width ${width} (${choice.why})`
+        : `Growth started at min-width ${width} (${choice.why})`;
+    const grown = decision.kind === 'decided' && decision.capHit === null ? decision.grownWidth : undefined;
+    let summary;
+    if (from === 'min-width' || grown === undefined || decided.length === 0) {
+        summary = `${lead} and decided ${decided.length === 0 ? 'no width' : widthList(decided)}.`;
+    }
+    else {
+        const lowest = decided[0];
+        const untried = lowest > plan.minWidth ? span(plan.minWidth, lowest - 1) : null;
+        const belowRule = untried === null
+            ? ''
+            : `; ${untried} ${lowest - 1 > plan.minWidth ? 'were' : 'was'} not trained, since a width below one that is not adequate is taken not to be adequate either`;
+        let what;
+        if (grown === null)
+            what = `no width from ${width} to max-width ${plan.maxWidth} was adequate on fresh restarts`;
+        else if (grown > width)
+            what = `width ${width} was not adequate on fresh restarts, so growth stepped up to width ${grown}, the first that was`;
+        else if (grown === plan.minWidth)
+            what = `every width down to min-width ${grown} was adequate on fresh restarts`;
+        else
+            what = `width ${grown} was adequate on fresh restarts and width ${grown - 1} was not`;
+        summary = `${lead}: ${what}${belowRule}.`;
+    }
+    return { from, width, why: choice.why, decided, summary };
 }
 
 ;// CONCATENATED MODULE: ./src/search/wilson.ts
@@ -50448,6 +51257,8 @@ function witnessOf(c, seed) {
     };
 }
 
+// EXTERNAL MODULE: ./src/search/task.ts
+var task = __nccwpck_require__(8575);
 ;// CONCATENATED MODULE: ./src/search/search.ts
 /**
  * The growth-and-prune search: find the smallest hidden width at which enough networks meet the
@@ -50470,8 +51281,9 @@ function witnessOf(c, seed) {
 
 
 
-function growthPlan(search) {
+function growthPlan(search, start = null) {
     return {
+        start: start !== null && start.from === 'baseline' ? start.width : null,
         growth: search.growth,
         minWidth: search.minWidth,
         maxWidth: search.maxWidth,
@@ -50495,11 +51307,11 @@ function searchContext(search, target, options = {}) {
     };
     return {
         seed: search.seed,
-        plan: growthPlan(search),
+        plan: growthPlan(search, options.start ?? null),
         train,
-        stall: { ...(options.stall ?? DEFAULT_STALL) },
+        stall: { ...(options.stall ?? task/* DEFAULT_STALL */.ZJ) },
         pruneEpochs: search.pruneEpochs,
-        pruneCandidates: options.pruneCandidates ?? DEFAULT_PRUNE_CANDIDATES,
+        pruneCandidates: options.pruneCandidates ?? task/* DEFAULT_PRUNE_CANDIDATES */.Aj,
         deadline: search.timeBudget === null ? null : Date.now() + search.timeBudget * 1000,
     };
 }
@@ -50514,18 +51326,18 @@ function timeUp(deadline) {
     return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
 }
 /** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
-async function grow(ctx, executor, target, progress) {
+async function grow(ctx, executor, target, progress, known) {
     const plan = ctx.plan;
-    const canon = planTasks(plan);
-    const position = new Map(canon.map((t, k) => [taskKey(t), k]));
-    const results = new Map();
+    const canon = (0,growth/* planTasks */.s$)(plan);
+    const position = new Map(canon.map((t, k) => [(0,growth/* taskKey */.Do)(t), k]));
+    const results = new Map(known.map((r) => [(0,growth/* taskKey */.Do)(r), r]));
     const inflight = new Map();
     const clock = timeUp(ctx.deadline);
     let best = null;
     for (;;) {
-        const decision = decideGrowth(plan, (t) => results.get(taskKey(t)));
+        const decision = (0,growth/* decideGrowth */.Um)(plan, (t) => results.get((0,growth/* taskKey */.Do)(t)));
         // Tasks before the first undecided one that are still running can no longer matter.
-        const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
+        const frontier = decision.kind === 'need' ? (position.get((0,growth/* taskKey */.Do)(decision.task)) ?? 0) : canon.length;
         for (const key of [...inflight.keys()]) {
             if ((position.get(key) ?? 0) < frontier) {
                 const [w, i] = key.split(':').map(Number);
@@ -50538,7 +51350,7 @@ async function grow(ctx, executor, target, progress) {
         if (ctx.deadline !== null && Date.now() >= ctx.deadline)
             return { decision, results, outOfTime: true };
         for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
-            const key = taskKey(canon[k]);
+            const key = (0,growth/* taskKey */.Do)(canon[k]);
             if (results.has(key) || inflight.has(key))
                 continue;
             inflight.set(key, executor.train(canon[k]));
@@ -50572,7 +51384,7 @@ function pruneSources(tried, grownWidth) {
         if (grownWidth !== null && width > grownWidth)
             continue;
         for (const r of restarts) {
-            const key = taskKey(r.task);
+            const key = (0,growth/* taskKey */.Do)(r.task);
             if (!r.met || r.network === null || seen.has(key))
                 continue;
             seen.add(key);
@@ -50590,21 +51402,31 @@ async function runSearch(data, search, target, options = {}) {
     const size = workerCount(search, options);
     // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
     const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
-    const executor = size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
+    const executor = size > 1 && entry !== null ? (0,search_executor/* workerPoolExecutor */.m)(data, ctx, size, entry) : (0,search_executor/* inThreadExecutor */.Pe)(data, ctx);
     const progress = (e) => options.onProgress?.(e);
-    const judging = judgingRowsOf(data, options.judgingFolded ?? false);
+    const judging = (0,judge/* judgingRowsOf */.$E)(data, options.judgingFolded ?? false);
     const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
     const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
     try {
-        progress({ phase: 'growth', kind: 'start', width: plan.minWidth, restart: 0, epoch: 0, best: null });
-        const grown = await grow(ctx, executor, target, progress);
+        const first = (0,growth/* planTasks */.s$)(plan)[0]?.width ?? plan.minWidth;
+        progress({ phase: 'growth', kind: 'start', width: first, restart: 0, epoch: 0, best: null });
+        const grown = await grow(ctx, executor, target, progress, options.known?.results ?? []);
         const growthEnd = now();
+        if (options.known !== undefined) {
+            const planned = new Set(options.known.results.map(growth/* taskKey */.Do));
+            const here = grown.decision.tried
+                .flatMap((t) => t.restarts.map((r) => r.task))
+                .filter((t) => !planned.has((0,growth/* taskKey */.Do)(t)));
+            if (here.length > 0)
+                options.onLocalWork?.(`${here.length} growth ${here.length === 1 ? 'training' : 'trainings'} the plan did not cover (widths ${[...new Set(here.map((t) => t.width))].join(', ')})`);
+        }
         const timing = (end) => ({
             searchSeconds: (0,format/* secondsFromMs */.cm)(end - t0),
             growthSeconds: (0,format/* secondsFromMs */.cm)(growthEnd - t0),
             pruneSeconds: (0,format/* secondsFromMs */.cm)(end - growthEnd),
         });
-        const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
+        const start = walkReport(plan, options.start ?? null, grown.decision);
+        const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging, start };
         const decision = grown.decision;
         if (decision.kind === 'need') {
             return {
@@ -50613,7 +51435,7 @@ async function runSearch(data, search, target, options = {}) {
                 width: null,
                 widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
                 trainings: decision.trainings,
-                notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings)],
+                notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings, decision.tried)],
                 timing: timing(now()),
             };
         }
@@ -50625,7 +51447,7 @@ async function runSearch(data, search, target, options = {}) {
                 width: null,
                 widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
                 trainings: decision.trainings,
-                notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings)],
+                notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings, decision.tried)],
                 timing: timing(now()),
             };
         }
@@ -50635,7 +51457,13 @@ async function runSearch(data, search, target, options = {}) {
             const from = Math.max(...jobs.map((j) => j.source.width));
             progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
         }
+        const prunedElsewhere = new Map((options.known?.pruned ?? []).map((r) => [(0,growth/* taskKey */.Do)(r.source), r]));
         const pruned = await Promise.all(jobs.map(async (job) => {
+            const ready = prunedElsewhere.get((0,growth/* taskKey */.Do)(job.source));
+            if (ready !== undefined && !ready.interrupted)
+                return ready;
+            if (options.known !== undefined)
+                options.onLocalWork?.(`pruning the network of width ${job.source.width}, restart ${job.source.restart + 1}`);
             const r = await executor.prune(job);
             const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
             progress({
@@ -50658,7 +51486,7 @@ async function runSearch(data, search, target, options = {}) {
                 grownWidth: decision.grownWidth,
                 width: null,
                 witness: t.witness,
-                appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
+                appraisal: t.witness === null ? null : (0,judge/* appraise */.mu)(data, t.witness.network, target, true),
                 widths: t.widths,
                 pruning: steps,
                 trainings,
@@ -50673,12 +51501,13 @@ async function runSearch(data, search, target, options = {}) {
             grownWidth: decision.grownWidth,
             metric: found ? t.witness.judged : null,
             witness: t.witness,
-            appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
+            appraisal: t.witness === null ? null : (0,judge/* appraise */.mu)(data, t.witness.network, target, true),
             widths: t.widths,
             pruning: steps,
             trainings,
             notes: found ? [] : notFoundNotes(plan, target, t.widths, judgedOn),
             judging,
+            start,
             timing: timing(now()),
         };
     }
@@ -50687,53 +51516,161 @@ async function runSearch(data, search, target, options = {}) {
     }
 }
 
-;// CONCATENATED MODULE: ./src/search/worker.ts
+
+/***/ }),
+
+/***/ 8575:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Aj: () => (/* binding */ DEFAULT_PRUNE_CANDIDATES),
+/* harmony export */   ZJ: () => (/* binding */ DEFAULT_STALL),
+/* harmony export */   ZZ: () => (/* binding */ runTask),
+/* harmony export */   h_: () => (/* binding */ runPruneJob)
+/* harmony export */ });
+/* unused harmony export leastSalientFirst */
+/* harmony import */ var _common_random_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4554);
+/* harmony import */ var _nn_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6575);
+/* harmony import */ var _judge_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(884);
 /**
- * The worker-thread side of the pool. A bundle calls runSearchWorker() when it starts
- * as a worker (`!isMainThread`); the thread then answers task messages until terminated.
+ * One unit of work, runnable in any thread: a growth task (one seeded training, or one
+ * network grown in place) or a prune job (shrinking one network that met the target).
+ * Everything here is a pure function of (data, context, task): no shared state, and the clock is
+ * read only through `cancelled`, which can only end a task early (the caller then discards it).
  */
 
 
-function runSearchWorker() {
-    const port = external_node_worker_threads_.parentPort;
-    if (port === null)
-        throw new Error('runSearchWorker() must run in a worker thread');
-    let data = null;
-    let ctx = null;
-    let cancel = new Int32Array(1).fill(-1);
-    port.on('message', (msg) => {
-        if (msg.type === 'init') {
-            data = msg.data;
-            ctx = msg.ctx;
-            cancel = msg.cancel;
-            return;
-        }
-        let reply;
-        try {
-            if (data === null || ctx === null)
-                throw new Error('search worker got a task before its data');
-            const id = msg.id;
-            const result = msg.type === 'train'
-                ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id)
-                : runPruneJob(data, ctx, msg.job);
-            reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
-        }
-        catch (e) {
-            reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };
-        }
-        port.postMessage(reply);
-    });
+
+/**
+ * Dynamic Node Creation trigger (Ash 1989): window 100 epochs, relative slope 0.05.
+ * Engineering choices inside the published range (window 25 and slope 0.1 in one
+ * published description; checks every 100 updates with a 1% threshold in another).
+ */
+const DEFAULT_STALL = { window: 100, threshold: 0.05 };
+/** Engineering choice: try the three least salient neurons before giving up a prune step. */
+const DEFAULT_PRUNE_CANDIDATES = 3;
+const never = () => false;
+function divergedReason(width, epochs) {
+    return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
 }
-
-;// CONCATENATED MODULE: ./src/search/index.ts
-/** The growth-and-prune search: public surface. */
-
-
-
-
-
-
-
+/** Gives up when the caller says so or the search's time is up. */
+function stopWhen(ctx, cancelled) {
+    const deadline = ctx.deadline;
+    return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
+}
+/**
+ * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
+ * null only when `cancelled` (or the time budget) said to give up.
+ * In-place growth (Dynamic Node Creation) starts at the task's width and gives every width up to
+ * max-epochs; a neuron is added when the error curve flattens (the stall trigger) or that budget
+ * runs out, until the target is met or max-width is hit.
+ */
+function runTask(data, ctx, task, cancelled = never) {
+    const { plan, train } = ctx;
+    const inPlace = plan.growth === 'in-place';
+    const rng = (0,_common_random_js__WEBPACK_IMPORTED_MODULE_2__/* .rngFor */ .pU)(ctx.seed, task.width, task.restart);
+    const options = {
+        ...train,
+        stall: inPlace ? { ...ctx.stall } : null,
+        interrupted: stopWhen(ctx, cancelled),
+    };
+    const trainer = (0,_nn_index_js__WEBPACK_IMPORTED_MODULE_0__/* .createTrainer */ .K$)(data, task.width, options, rng);
+    const segments = [];
+    let epochs = 0;
+    for (;;) {
+        const rec = trainer.run(train.maxEpochs);
+        if (rec.stop === 'interrupted')
+            return null;
+        epochs += rec.epochs;
+        const width = trainer.network.width;
+        const network = rec.stop === 'diverged' ? null : trainer.snapshot();
+        const judged = (0,_judge_js__WEBPACK_IMPORTED_MODULE_1__/* .judge */ .S4)(data, network, rec, train.target);
+        segments.push({ width, epochs, stop: rec.stop, ...judged });
+        const done = judged.met || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
+        if (done) {
+            return {
+                width: task.width,
+                restart: task.restart,
+                ...judged,
+                stop: rec.stop,
+                epochs,
+                finalWidth: width,
+                segments,
+                network: judged.met ? network : null,
+                reason: rec.stop === 'diverged' ? divergedReason(width, epochs) : null,
+            };
+        }
+        // Out of patience or epochs at this width: add a neuron that leaves the function unchanged and keep training.
+        trainer.addNeuron(rng);
+    }
+}
+/**
+ * Shrink one network by compensated ablation: score every hidden neuron by the loss increase of
+ * removing it with its mean activation folded into the output biases, remove the least salient,
+ * retrain for at most `pruneEpochs`, and keep the removal only if the steering rows still meet the
+ * target; otherwise restore and try the next candidate. Each kept network is judged on the judging
+ * rows (that decides whether it counts for its width), but the judging rows never decide whether a
+ * removal is kept.
+ */
+function runPruneJob(data, ctx, job, cancelled = never) {
+    const target = ctx.train.target;
+    const retrain = { ...ctx.train, stall: null, interrupted: stopWhen(ctx, cancelled) };
+    // Every restore starts from a snapshot with fresh optimiser state, so the result does not
+    // depend on which thread ran the growth task.
+    const fromSnapshot = (net) => (0,_nn_index_js__WEBPACK_IMPORTED_MODULE_0__/* .trainerFromNetwork */ .Y$)(data, net, retrain, (0,_common_random_js__WEBPACK_IMPORTED_MODULE_2__/* .rngFor */ .pU)(ctx.seed, job.source.width, job.source.restart));
+    let trainer = fromSnapshot(job.network);
+    let steering = trainer.evaluate().steeringMetric;
+    let network = job.network;
+    const chain = [];
+    const steps = [];
+    let trainings = 0;
+    while (trainer.network.width > 1) {
+        const width = trainer.network.width;
+        const order = leastSalientFirst(trainer.saliency());
+        let removed = false;
+        let dirty = false;
+        for (const j of order.slice(0, ctx.pruneCandidates)) {
+            // Restore lazily: after the last refused candidate nothing trains again, so no rebuild is needed.
+            if (dirty)
+                trainer = fromSnapshot(network);
+            trainer.removeNeuron(j);
+            const rec = trainer.run(ctx.pruneEpochs);
+            if (rec.stop === 'interrupted')
+                return { source: job.source, chain, steps, trainings, interrupted: true };
+            trainings++;
+            const smaller = rec.stop === 'diverged' ? null : trainer.snapshot();
+            const judged = (0,_judge_js__WEBPACK_IMPORTED_MODULE_1__/* .judge */ .S4)(data, smaller, rec, target);
+            const accepted = smaller !== null && judged.reached;
+            steps.push({
+                source: job.source,
+                width,
+                neuron: j,
+                steeringBefore: steering,
+                steeringAfter: judged.steering,
+                accepted,
+                judged: accepted ? judged.judged : null,
+            });
+            if (accepted && smaller !== null) {
+                steering = judged.steering;
+                network = smaller;
+                chain.push({ width: width - 1, network: smaller, ...judged });
+                removed = true;
+                break;
+            }
+            dirty = true;
+        }
+        if (!removed)
+            break;
+    }
+    return { source: job.source, chain, steps, trainings, interrupted: false };
+}
+/** Neuron indices by ascending saliency; ties (and NaN) resolved by index so the order is total. */
+function leastSalientFirst(saliency) {
+    const idx = Array.from(saliency, (_, j) => j);
+    const key = (j) => (Number.isFinite(saliency[j]) ? saliency[j] : Number.POSITIVE_INFINITY);
+    idx.sort((a, b) => key(a) - key(b) || a - b);
+    return idx;
+}
 
 
 /***/ }),

@@ -8981,8 +8981,14 @@ const FLAGS = {
     model: { value: 'FILE', help: 'write the smallest network found (weights and encoding) to FILE' },
     baseline: { value: 'FILE', help: 'baseline file to use instead of the one named in the config' },
     workers: { value: 'N', help: `worker threads, 1 to ${MAX_WORKERS} (default: config, else one per core)` },
+    shards: { value: 'N', help: 'shards to split the trainings into, 1 to 256 (a matrix job each)' },
+    plan: { value: 'FILE', help: 'the plan written by `plan`' },
+    index: { value: 'I', help: 'which shard of the plan to run, from 0' },
     format: { value: 'FORMAT', help: 'what to write: c (C99 source, a float32 and an int8 path)' },
-    out: { value: 'PATH', help: 'where to write (export: a folder; predict: a CSV file, default stdout)' },
+    out: {
+        value: 'PATH',
+        help: 'where to write (plan: the plan; shard: the part; export: a folder; predict: a CSV file, default stdout)',
+    },
     name: { value: 'NAME', help: 'C name of the model: its files and the prefix of its functions (default nb_model)' },
 };
 const COMMANDS = {
@@ -8993,6 +8999,21 @@ const COMMANDS = {
     baseline: {
         summary: 'search the smallest adequate width and write it as the new baseline',
         flags: ['config', 'baseline', 'workers'],
+    },
+    plan: {
+        summary: 'split the search into shards for a job matrix and write the plan',
+        flags: ['config', 'baseline', 'shards', 'out'],
+        required: ['shards', 'out'],
+    },
+    shard: {
+        summary: "run one shard of a plan and write its part (the trainings' outcomes)",
+        flags: ['config', 'baseline', 'plan', 'index', 'out', 'workers'],
+        required: ['plan', 'index', 'out'],
+    },
+    merge: {
+        summary: 'merge the parts of every shard and finish as check does',
+        flags: ['config', 'report', 'model', 'baseline', 'workers'],
+        rest: 'PART.json',
     },
     export: {
         summary: 'write firmware source for a model file (written by check --model)',
@@ -9056,7 +9077,7 @@ function readFlags(command, args) {
     const flags = {};
     for (const token of tokens) {
         if (token.kind === 'positional') {
-            if (positional.length < wanted.length) {
+            if (positional.length < wanted.length || spec.rest !== undefined) {
                 positional.push(token.value);
                 continue;
             }
@@ -9082,6 +9103,8 @@ function readFlags(command, args) {
     if (positional.length < wanted.length) {
         throw new UsageError(`${command}: expected ${wanted.join(' ')}, found ${positional.length === 0 ? 'nothing' : positional.map((p) => escape_quote(p)).join(' ')}`);
     }
+    if (spec.rest !== undefined && positional.length === wanted.length)
+        throw new UsageError(`${command}: expected one or more ${spec.rest} files, found none`);
     for (const flag of spec.required ?? []) {
         if (flags[flag] === undefined)
             throw new UsageError(`${command}: --${flag} ${FLAGS[flag].value} is required`);
@@ -16348,7 +16371,7 @@ function usage(command) {
         const lines = [
             `${TOOL_NAME} ${command}: ${spec.summary}`,
             '',
-            `usage: ${TOOL_NAME} ${command}${(spec.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`,
+            `usage: ${TOOL_NAME} ${command}${argsText(spec)} [options]`,
             '',
             'options:',
             ...spec.flags.map((f) => `  --${`${f} ${FLAGS[f].value}`.padEnd(16)}${FLAGS[f].help}`),
@@ -16362,7 +16385,7 @@ function usage(command) {
         'your target, and checks it against a committed baseline and a device budget.',
         '',
         'usage:',
-        ...Object.entries(COMMANDS).map(([c, s]) => `  ${TOOL_NAME} ${c.padEnd(9)}${(s.positionals ?? []).map((a) => ` ${a}`).join('')} [options]`),
+        ...Object.entries(COMMANDS).map(([c, s]) => `  ${TOOL_NAME} ${c.padEnd(9)}${argsText(s)} [options]`),
         `  ${TOOL_NAME} COMMAND --help   options of one command`,
         `  ${TOOL_NAME} --version`,
         '',
@@ -16376,6 +16399,10 @@ function usage(command) {
         '',
         exitCodesText(),
     ].join('\n');
+}
+function argsText(spec) {
+    const rest = spec.rest === undefined ? '' : ` ${spec.rest}...`;
+    return `${(spec.positionals ?? []).map((a) => ` ${a}`).join('')}${rest}`;
 }
 function exitCodesText() {
     return 'exit codes: 0 pass, improved or new; 1 fail or inconclusive; 2 bad input';
@@ -17386,6 +17413,8 @@ function baselineRecordLine(record) {
 
 
 
+;// CONCATENATED MODULE: external "node:perf_hooks"
+const external_node_perf_hooks_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:perf_hooks");
 ;// CONCATENATED MODULE: ./src/config/spec.ts
 /**
  * Every config key the validator accepts, with its rule, default and description, as data.
@@ -17566,6 +17595,13 @@ const spec_CONFIG_SPEC = [
                 rule: { kind: 'enum', values: ['fresh', 'in-place'] },
                 default: 'fresh',
                 description: 'fresh: new seeded networks at each width; in-place: add neurons to the networks already trained.',
+            },
+            {
+                name: 'start',
+                changesResult: false,
+                rule: { kind: 'enum', values: ['baseline', 'min-width'] },
+                default: 'baseline',
+                description: 'baseline: with a baseline of the same settings, decide its width and the one below first, and move only as far as the answer needs; min-width: try every width from min-width up.',
             },
             {
                 name: 'activation',
@@ -17762,6 +17798,2624 @@ const DEFAULT_JUDGING = 0.2;
 /** data.judging when the config does not give it: 0.2, or less when the validation rows leave too little to train on. */
 function derivedJudging(validation) {
     return validation > 0 ? Math.min(DEFAULT_JUDGING, (1 - validation) / 2) : 0;
+}
+
+;// CONCATENATED MODULE: ./src/gate/settings.ts
+/**
+ * The config settings that change the search's answer, and their fingerprint. Two runs
+ * with different settings answer different questions, so the gate says so rather than
+ * comparing their widths silently. Worker count and time budget are left out: they
+ * change how long the search takes, not what it finds. The data file's path is left out
+ * too: the data are compared by content (fingerprint and profile, see data-changes.ts),
+ * so a renamed file with the same rows is the same question, and a file with other rows
+ * shows up as a data change, which is what the gate exists to measure.
+ */
+
+
+
+
+function resultSettings(config) {
+    const out = {};
+    for (const section of spec_CONFIG_SPEC) {
+        const values = config[section.name];
+        for (const key of section.keys) {
+            if (!key.changesResult)
+                continue;
+            out[`${section.name}.${key.name}`] = settingValue(values[fieldName(key.name)]);
+        }
+    }
+    // The order of ignored columns does not matter; the order of features does (input order).
+    const ignore = out['data.ignore'];
+    if (Array.isArray(ignore))
+        ignore.sort();
+    return out;
+}
+/** A setting as the baseline records it: a plain value, a list of texts, or a structured value as its canonical text. */
+function settingValue(value) {
+    if (value === undefined || value === null)
+        return null;
+    if (Array.isArray(value) && value.every((v) => typeof v === 'string'))
+        return [...value];
+    if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean')
+        return value;
+    // target.min-recall: {every} or {classes: [...]}, written the way the config states it.
+    const rule = value;
+    if (typeof rule.every === 'number')
+        return rule.every;
+    return JSON.stringify(Object.fromEntries((rule.classes ?? []).map((c) => [c.label, c.min])));
+}
+/** sha256 hex of the settings in canonical form (keys sorted). */
+function settingsFingerprint(settings) {
+    const keys = Object.keys(settings).sort();
+    const canonical = JSON.stringify(keys.map((k) => [k, settings[k]]));
+    return (0,external_node_crypto_namespaceObject.createHash)('sha256').update(canonical, 'utf8').digest('hex');
+}
+/** Settings that differ, as "key: before → after", in key order. */
+function settingsDifferences(before, after) {
+    const keys = [...new Set([...Object.keys(before), ...Object.keys(after)])].sort();
+    const out = [];
+    for (const k of keys) {
+        const a = show(before[k]);
+        const b = show(after[k]);
+        if (a !== b)
+            out.push(`${k}: ${a} → ${b}`);
+    }
+    return out;
+}
+function show(v) {
+    if (v === undefined)
+        return '(not set)';
+    if (v === null)
+        return '(default)';
+    // Column names are the repository's strings: each is clipped, and long lists would drown the
+    // sentence they appear in. Escaping is the renderer's (text, Markdown), as for every reason.
+    const s = Array.isArray(v) ? `[${v.map((name) => clip(name, 40)).join(', ')}]` : clip(String(v), 120);
+    return clip(s, 120);
+}
+
+;// CONCATENATED MODULE: ./src/gate/compare.ts
+
+
+
+function compare(input) {
+    const { result, target, search, gate, baseline } = input;
+    const settingsChanged = baseline ? settingsDifferences(baseline.config.settings, input.settings) : [];
+    const flags = [];
+    if (settingsChanged.length > 0) {
+        flags.push(`The settings that shape the result differ from the baseline's (${settingsChanged.join('; ')}), so this compares answers to different questions.`);
+    }
+    if (result.outcome === 'inconclusive') {
+        const how = result.notes.length > 0 ? ` ${result.notes.map(sentence).join(' ')}` : '';
+        return {
+            verdict: 'inconclusive',
+            reasons: [`The search ran out of budget before it could decide the smallest adequate width.${how}`, ...flags],
+            settingsChanged,
+        };
+    }
+    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
+        const best = bestSeen(result.widths, target.metric);
+        const bestText = best ? `; the best network reached ${formatMetric(best.value)} (width ${best.width})` : '';
+        const networks = search.required === 1 ? 'a network that meets' : `${search.required} networks that meet`;
+        return {
+            verdict: 'fail',
+            reasons: [
+                `No width from ${search.minWidth} to ${search.maxWidth} has ${networks} ${targetPhrase(target.metric, target.threshold)}${bestText}.`,
+                ...result.notes.map(sentence),
+                ...flags,
+            ],
+            settingsChanged,
+        };
+    }
+    const width = result.width;
+    const failures = [];
+    if (gate.maxWidth !== null && width > gate.maxWidth) {
+        failures.push(`Needs ${neurons(width)}; the device budget is ${gate.maxWidth}.`);
+    }
+    failures.push(...budgetFailures(input));
+    if (!baseline) {
+        if (failures.length > 0)
+            return { verdict: 'fail', reasons: [...failures, ...flags], settingsChanged };
+        return {
+            verdict: 'new',
+            reasons: [
+                `Needs ${neurons(width)}; there is no baseline yet to compare with, so record this result as the baseline.`,
+                ...flags,
+            ],
+            settingsChanged,
+        };
+    }
+    const before = baseline.result.width;
+    const growth = width - before;
+    const allowed = gate.allowedGrowth;
+    const allowance = allowed === 0 ? 'no growth is allowed' : `the allowed growth is ${allowed}`;
+    let comparison;
+    if (growth > allowed) {
+        failures.push(`Needs ${neurons(width)}, ${growth} more than the baseline's ${before}; ${allowance}.`);
+        comparison = '';
+    }
+    else if (growth > 0) {
+        comparison = `Needs ${neurons(width)}, ${growth} more than the baseline's ${before}, within the allowed growth of ${allowed}.`;
+    }
+    else if (growth < 0) {
+        comparison = `Needs ${neurons(width)}, ${-growth} fewer than the baseline's ${before}; refresh the baseline to keep the gain.`;
+    }
+    else {
+        comparison = `Needs ${neurons(width)}, the same as the baseline.`;
+    }
+    const tolerance = toleranceFlag(result.metric, baseline, target.metric, gate.metricTolerance);
+    if (tolerance)
+        flags.push(tolerance);
+    if (failures.length > 0) {
+        const context = comparison === '' ? [] : [comparison];
+        return { verdict: 'fail', reasons: [...failures, ...context, ...flags], settingsChanged };
+    }
+    return { verdict: growth < 0 ? 'improved' : 'pass', reasons: [comparison, ...flags], settingsChanged };
+}
+function toleranceFlag(value, baseline, metric, tolerance) {
+    const before = baseline.result.metric.value;
+    const worse = higherIsBetter(metric) ? before - value : value - before;
+    // A tiny epsilon so that a difference equal to the tolerance (up to rounding) is not flagged.
+    if (worse <= tolerance + 1e-12)
+        return null;
+    return `Flag (does not fail the gate): ${metric} at the chosen width is ${formatMetric(value)}, ${formatMetric(worse)} worse than the baseline's ${formatMetric(before)}; the tolerance is ${formatMetric(tolerance)}.`;
+}
+function bestSeen(widths, metric) {
+    let best = null;
+    for (const w of widths) {
+        if (w.best === null)
+            continue;
+        const better = best === null || (higherIsBetter(metric) ? w.best > best.value : w.best < best.value);
+        if (better)
+            best = { width: w.width, value: w.best };
+    }
+    return best;
+}
+function sentence(s) {
+    const t = s.trim();
+    const capital = t.charAt(0).toUpperCase() + t.slice(1);
+    return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}
+/** One sentence per byte or operation budget the witness exceeds, naming the figure and the budget. */
+function budgetFailures(input) {
+    const { gate, device } = input;
+    if (!device)
+        return [];
+    const { cost, precision } = device;
+    const out = [];
+    const at = `(width ${input.result.width})`;
+    if (gate.maxFlashBytes != null && cost.flashBytes[precision] > gate.maxFlashBytes) {
+        out.push(`Needs ${formatCount(cost.flashBytes[precision])} flash bytes for its ${precision} weights ${at}; the device budget is ${formatCount(gate.maxFlashBytes)} bytes.`);
+    }
+    if (gate.maxRamBytes != null && cost.ramBytes[precision] > gate.maxRamBytes) {
+        out.push(`Needs ${formatCount(cost.ramBytes[precision])} RAM bytes for one ${precision} inference ${at}; the device budget is ${formatCount(gate.maxRamBytes)} bytes.`);
+    }
+    if (gate.maxMacs != null && cost.macs > gate.maxMacs) {
+        out.push(`Needs ${formatCount(cost.macs)} multiply-accumulates per inference ${at}; the device budget is ${formatCount(gate.maxMacs)}.`);
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/gate/data-changes.ts
+/**
+ * A numeric feature counts as shifted when its mean moved by more than this many
+ * baseline standard deviations. Half a standard deviation is a common rule of thumb
+ * for a "medium" shift (common practice, no single source).
+ */
+const MEAN_SHIFT_IN_STD = 0.5;
+/**
+ * A numeric feature's range counts as widened when it grew on a side (a new minimum below the
+ * baseline's, or a new maximum above it) by more than this many baseline standard deviations.
+ * A rule of thumb (common practice, no single source): the extremes of a sample wander by chance
+ * as rows are added (for normal data and a thousand rows the sample maximum's spread is about
+ * σ/√(2 ln n) ≈ 0.27σ, from extreme-value theory; figure from memory), so a new extreme within
+ * a few hundredths of σ of the old one is no change a reviewer should read about, while one
+ * half a σ beyond it puts rows where the baseline's networks never saw any.
+ */
+const RANGE_GROWTH_IN_STD = 0.5;
+function dataChanges(before, after, fingerprints, files = { before: '', after: '' }) {
+    const columnsBefore = new Set(before.columns);
+    const columnsAfter = new Set(after.columns);
+    const columnsAdded = after.columns.filter((c) => !columnsBefore.has(c));
+    const columnsRemoved = before.columns.filter((c) => !columnsAfter.has(c));
+    let classes = null;
+    const classesAppeared = [];
+    const classesVanished = [];
+    if (before.classes !== null || after.classes !== null) {
+        const b = tableOf(before.classes);
+        const a = tableOf(after.classes);
+        const labels = [...new Set([...b.keys(), ...a.keys()])].sort(byCodeUnit);
+        classes = labels.map((label) => ({ label, before: b.get(label) ?? 0, after: a.get(label) ?? 0 }));
+        for (const label of labels) {
+            if (!b.has(label))
+                classesAppeared.push(label);
+            if (!a.has(label))
+                classesVanished.push(label);
+        }
+    }
+    const features = [];
+    const categories = [];
+    const featuresBefore = tableOf(before.features);
+    const featuresAfter = tableOf(after.features);
+    const shared = [...featuresAfter.keys()].filter((name) => featuresBefore.has(name)).sort(byCodeUnit);
+    for (const name of shared) {
+        const b = featuresBefore.get(name);
+        const a = featuresAfter.get(name);
+        if (b.kind === 'numeric' && a.kind === 'numeric') {
+            const delta = atMostMax(Math.abs(a.mean - b.mean));
+            const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
+            const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
+            const rangeGrowth = growthOf(b, a);
+            const rangeWidened = grewMeaningfully(rangeGrowth.below, b.std) || grewMeaningfully(rangeGrowth.above, b.std);
+            if (meanMoved || rangeWidened) {
+                features.push({
+                    name,
+                    meanBefore: b.mean,
+                    meanAfter: a.mean,
+                    stdBefore: b.std,
+                    shiftInStd,
+                    meanMoved,
+                    rangeBefore: [b.min, b.max],
+                    rangeAfter: [a.min, a.max],
+                    rangeWidened,
+                    rangeGrowth,
+                });
+            }
+        }
+        else if (b.kind === 'categorical' && a.kind === 'categorical') {
+            const countsBefore = tableOf(b.counts);
+            const countsAfter = tableOf(a.counts);
+            const appeared = [...countsAfter.keys()].filter((c) => !countsBefore.has(c)).sort(byCodeUnit);
+            const vanished = [...countsBefore.keys()].filter((c) => !countsAfter.has(c)).sort(byCodeUnit);
+            if (appeared.length > 0 || vanished.length > 0)
+                categories.push({ feature: name, appeared, vanished });
+        }
+    }
+    return {
+        changed: fingerprints.before !== fingerprints.after,
+        file: files.before === files.after ? null : { before: files.before, after: files.after },
+        rows: { before: before.rows, after: after.rows },
+        classes,
+        classesAppeared,
+        classesVanished,
+        features,
+        categories,
+        columnsAdded,
+        columnsRemoved,
+    };
+}
+/** How far the range reaches beyond the baseline's on each side, in the feature's units and in baseline stds. */
+function growthOf(b, a) {
+    const below = atMostMax(Math.max(0, b.min - a.min));
+    const above = atMostMax(Math.max(0, a.max - b.max));
+    const inStd = (g) => (b.std > 0 ? atMostMax(g / b.std) : null);
+    return { below, above, belowInStd: inStd(below), aboveInStd: inStd(above) };
+}
+/** A side grew meaningfully: by more than RANGE_GROWTH_IN_STD baseline stds (any growth for a constant feature). */
+function grewMeaningfully(growth, std) {
+    return std > 0 ? growth > RANGE_GROWTH_IN_STD * std : growth > 0;
+}
+/**
+ * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
+ * is read with JSON.parse, so a label may be `constructor` or `__proto__`: only own keys count.
+ */
+function tableOf(table) {
+    return new Map(table === null ? [] : Object.entries(table));
+}
+/**
+ * Two finite means read from a baseline file can differ by more than the largest float; the
+ * shift is then "at least the largest float", never Infinity (which JSON cannot hold).
+ */
+function atMostMax(x) {
+    return Math.min(x, Number.MAX_VALUE);
+}
+/** Locale-independent order, so the summary reads the same on every machine. */
+function byCodeUnit(a, b) {
+    return a < b ? -1 : a > b ? 1 : 0;
+}
+
+;// CONCATENATED MODULE: ./src/gate/evaluate.ts
+
+
+
+function evaluateGate(input) {
+    const { result, loaded, config, baseline } = input;
+    const cost = input.cost ?? null;
+    const comparison = compare({
+        result,
+        target: config.target,
+        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth, required: config.search.required },
+        gate: config.gate,
+        baseline,
+        settings: resultSettings(config),
+        device: cost === null ? null : { cost, precision: config.target.precision ?? 'float32' },
+    });
+    const changes = baseline
+        ? dataChanges(baseline.data.profile, loaded.profile, { before: baseline.data.fingerprint, after: loaded.fingerprint }, { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') })
+        : null;
+    return { ...comparison, changes, baseline };
+}
+
+;// CONCATENATED MODULE: ./schema/baseline.schema.json
+const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."},"decisive":{"type":["number","null"],"description":"The search.required-th best judged metric over the networks of this width: at or past the threshold exactly when the width is adequate (recall floors aside); null when fewer finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
+;// CONCATENATED MODULE: ./src/gate/types.ts
+const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
+const BASELINE_VERSION = 2;
+/** Oldest history entries are dropped beyond this many. */
+const HISTORY_CAP = 100;
+
+;// CONCATENATED MODULE: ./src/gate/baseline.ts
+/**
+ * The baseline file: build it from a run, carry its history forward, read it back with
+ * clear errors, and write it atomically. Everything here is pure except readBaseline
+ * and writeBaseline; dates are passed in, never read from a clock.
+ */
+
+
+
+
+
+
+
+
+
+/**
+ * Why this run cannot become a baseline, or null when it can. A baseline only ever
+ * records a width that was found: a failed or unfinished search leaves the file as it was.
+ */
+function whyNotRecordable(result) {
+    if (result.outcome === 'inconclusive') {
+        return 'the search did not finish, so there is no result to record; the baseline file was left unchanged';
+    }
+    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
+        return 'no width reached the target, so there is no result to record; the baseline file was left unchanged';
+    }
+    return null;
+}
+/**
+ * The baseline that accepting `current` produces: its headline and curve, with the
+ * previous baseline's history carried forward and this result appended (newest last,
+ * oldest dropped beyond HISTORY_CAP). Throws if the run is not recordable; check
+ * whyNotRecordable first.
+ */
+function nextBaseline(previous, current, meta) {
+    const { result, loaded, config } = current;
+    const problem = whyNotRecordable(result);
+    if (problem !== null || result.width === null || result.metric === null) {
+        throw new Error(`nextBaseline called with an unrecordable result: ${problem ?? 'no width'}`);
+    }
+    const width = result.width;
+    const atWidth = result.widths.find((w) => w.width === width) ?? null;
+    const settings = resultSettings(config);
+    const entry = {
+        width,
+        metric: result.metric,
+        rows: loaded.profile.rows,
+        data: loaded.fingerprint,
+        commit: commitHash(meta.commit),
+        date: meta.date.toISOString(),
+    };
+    const history = [...(previous?.history ?? []), entry].slice(-HISTORY_CAP);
+    return {
+        schema: BASELINE_SCHEMA,
+        tool: { name: 'neuron-budget', version: meta.toolVersion },
+        result: {
+            width,
+            metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
+            grownWidth: result.grownWidth,
+            met: atWidth ? atWidth.met : 0,
+            restarts: atWidth ? atWidth.restarts : 0,
+            searchSeconds: result.timing.searchSeconds,
+        },
+        widths: result.widths.map((w) => ({
+            width: w.width,
+            restarts: w.restarts,
+            met: w.met,
+            adequate: w.adequate,
+            best: w.best,
+            decisive: w.decisive,
+        })),
+        data: {
+            file: config.data.pathAsWritten.replace(/\\/g, '/'),
+            rows: loaded.profile.rows,
+            fingerprint: loaded.fingerprint,
+            profile: loaded.profile,
+        },
+        config: { fingerprint: settingsFingerprint(settings), settings },
+        history,
+    };
+}
+/** A commit id as the history stores it (lower-case hex), or null when it is not one. */
+function commitHash(commit) {
+    if (commit === null)
+        return null;
+    const c = commit.trim().toLowerCase();
+    return /^[0-9a-f]{4,64}$/.test(c) ? c : null;
+}
+function serializeBaseline(baseline) {
+    return `${JSON.stringify(baseline, null, 2)}\n`;
+}
+/**
+ * Writes the baseline atomically (temp file beside it, then rename). The text is first
+ * read back through the same validation a later run will use, so a value JSON cannot
+ * hold (NaN becomes null) can never produce a baseline that the next run rejects.
+ */
+async function writeBaseline(path, baseline) {
+    const text = serializeBaseline(baseline);
+    try {
+        parseBaseline(text, path);
+    }
+    catch (e) {
+        throw new Error(`refusing to write a baseline that would not read back: ${e.message}`, { cause: e });
+    }
+    await writeFileAtomic(path, text);
+}
+/**
+ * Reads a baseline. Missing file → null (the verdict is then `new`). A file that is not
+ * valid JSON, of another schema version, or of the wrong shape → UserError naming the
+ * file (`shown`, the path as the user wrote it), and the line/column or key.
+ */
+async function readBaseline(path, shown = path) {
+    let text;
+    try {
+        text = await (0,promises_namespaceObject.readFile)(path, 'utf8');
+    }
+    catch (e) {
+        const code = e.code;
+        if (code === 'ENOENT')
+            return null;
+        if (code === 'EISDIR')
+            throw new errors_UserError(`${shown}: expected a baseline file, found a folder`, { file: shown });
+        throw new errors_UserError(`${shown}: cannot read the baseline file (${code ?? 'unknown error'})`, { file: shown });
+    }
+    return parseBaseline(text, shown);
+}
+/** Parses and validates baseline text; `shown` names the file in messages. */
+function parseBaseline(text, shown) {
+    if (text.trim() === '') {
+        throw new errors_UserError(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
+            file: shown,
+        });
+    }
+    const syntax = findJsonSyntaxProblem(text);
+    if (syntax) {
+        throw new errors_UserError(`${shown}:${syntax.line}:${syntax.column}: the baseline is not valid JSON: ${syntax.detail}`, {
+            file: shown,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    }
+    const value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    checkSchemaVersion(value, shown);
+    validateBaselineShape(value, shown);
+    return value;
+}
+function checkSchemaVersion(value, shown) {
+    if (!baseline_isObject(value)) {
+        throw new errors_UserError(`${shown}: expected a neuron-budget baseline (a JSON object), found ${baseline_describe(value)}`, {
+            file: shown,
+        });
+    }
+    const schema = 'schema' in value ? value['schema'] : baseline_MISSING;
+    const match = typeof schema === 'string' ? /^neuron-budget\/baseline@(\d+)$/.exec(schema) : null;
+    if (!match) {
+        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
+    }
+    const version = Number(match[1]);
+    if (version > BASELINE_VERSION) {
+        throw new errors_UserError(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
+    }
+    if (version < BASELINE_VERSION) {
+        throw new errors_UserError(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
+    }
+    if (version !== BASELINE_VERSION) {
+        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
+            file: shown,
+            key: 'schema',
+        });
+    }
+}
+// ---- shape: schema/baseline.schema.json is the one definition ----
+const baseline_checkShape = schemaValidator(baseline_schema_namespaceObject);
+function validateBaselineShape(value, shown) {
+    try {
+        baseline_checkShape(value);
+    }
+    catch (e) {
+        if (!(e instanceof SchemaProblem))
+            throw e;
+        throw new errors_UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
+    }
+}
+const baseline_MISSING = Symbol('missing');
+function baseline_isObject(v) {
+    return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+function baseline_describe(v) {
+    if (v === baseline_MISSING)
+        return 'nothing';
+    if (v === null)
+        return 'null';
+    if (Array.isArray(v))
+        return 'a list';
+    if (typeof v === 'object')
+        return 'an object';
+    if (typeof v === 'string')
+        return escape_quote(v, 60);
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
+}
+
+;// CONCATENATED MODULE: external "node:os"
+const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
+;// CONCATENATED MODULE: external "node:timers/promises"
+const external_node_timers_promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:timers/promises");
+;// CONCATENATED MODULE: ./src/files/lock.ts
+/**
+ * An exclusive lock beside a file, `.NAME.neuron-budget.lock`, for a read-compare-write that
+ * must not interleave with another process's. Created with O_EXCL, so exactly one process
+ * holds it; it records who holds it, so a lock whose holder died can be taken over:
+ *
+ * - its process is gone (same machine, by PID), or
+ * - it is older than STALE_LOCK_AGE_MS (any machine; the section it guards takes
+ *   milliseconds), or
+ * - it is unreadable and older than a few seconds (a holder killed between create and write).
+ */
+
+
+
+
+
+
+const LOCK_SUFFIX = '.neuron-budget.lock';
+/** A lock this old is stale, whoever holds it. @testOnly */
+const STALE_LOCK_AGE_MS = 10 * 60 * 1000;
+/** A lock file without readable content (its holder died before writing it) is stale after this. */
+const EMPTY_LOCK_AGE_MS = 5_000;
+function lockPathFor(path) {
+    return (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}${LOCK_SUFFIX}`);
+}
+/** The lock is held by a live process and was not released in time. */
+class LockBusy extends Error {
+    lockPath;
+    owner;
+    constructor(lockPath, owner) {
+        super(`${lockPath} is held${owner ? ` by process ${owner.pid}` : ''}`);
+        this.lockPath = lockPath;
+        this.owner = owner;
+        this.name = 'LockBusy';
+    }
+}
+async function acquireLock(path, options = {}) {
+    const lockPath = lockPathFor(path);
+    const waitMs = options.waitMs ?? 10_000;
+    const pollMs = options.pollMs ?? 25;
+    const record = {
+        pid: process.pid,
+        host: (0,external_node_os_namespaceObject.hostname)(),
+        token: (0,external_node_crypto_namespaceObject.randomBytes)(8).toString('hex'),
+        since: new Date().toISOString(),
+    };
+    const text = `${JSON.stringify(record)}\n`;
+    const started = Date.now();
+    for (;;) {
+        try {
+            const handle = await (0,promises_namespaceObject.open)(lockPath, 'wx');
+            try {
+                await handle.writeFile(text, 'utf8');
+            }
+            finally {
+                await handle.close();
+            }
+            return { release: () => releaseLock(lockPath, text) };
+        }
+        catch (e) {
+            if (e.code !== 'EEXIST')
+                throw e;
+        }
+        const held = await inspect(lockPath);
+        if (held === null)
+            continue; // released between our try and the look
+        if (held.stale) {
+            // Re-read just before removing: never remove a lock someone else took over meanwhile.
+            const again = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+            if (again === held.text)
+                await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+            continue;
+        }
+        if (Date.now() - started >= waitMs)
+            throw new LockBusy(lockPath, held.owner);
+        await (0,external_node_timers_promises_namespaceObject.setTimeout)(pollMs);
+    }
+}
+/** Removes the lock only while it is still ours. */
+async function releaseLock(lockPath, text) {
+    const now = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
+    if (now === text)
+        await (0,promises_namespaceObject.rm)(lockPath, { force: true });
+}
+async function inspect(lockPath) {
+    let text;
+    let age;
+    try {
+        text = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8');
+        age = Date.now() - (await (0,promises_namespaceObject.stat)(lockPath)).mtimeMs;
+    }
+    catch (e) {
+        if (e.code === 'ENOENT')
+            return null;
+        throw e;
+    }
+    const owner = parseOwner(text);
+    if (age >= STALE_LOCK_AGE_MS)
+        return { text, stale: true, owner };
+    if (owner === null)
+        return { text, stale: age >= EMPTY_LOCK_AGE_MS, owner };
+    const here = owner.host === (0,external_node_os_namespaceObject.hostname)();
+    return { text, stale: here && processIsGone(owner.pid), owner };
+}
+/** The holder as the file says, or null. The file sits in a checkout: only plain values pass. */
+function parseOwner(text) {
+    let v;
+    try {
+        v = JSON.parse(text);
+    }
+    catch {
+        return null;
+    }
+    if (typeof v !== 'object' || v === null)
+        return null;
+    const r = v;
+    if (typeof r.pid !== 'number' || !Number.isSafeInteger(r.pid) || r.pid <= 0)
+        return null;
+    const host = typeof r.host === 'string' && /^[A-Za-z0-9._-]{1,255}$/.test(r.host) ? r.host : null;
+    const since = typeof r.since === 'string' && !Number.isNaN(Date.parse(r.since)) ? new Date(r.since).toISOString() : null;
+    return { pid: r.pid, host, since };
+}
+
+;// CONCATENATED MODULE: ./src/gate/baseline-update.ts
+/**
+ * Records an accepted result in the baseline file without losing another run's. A run reads
+ * the baseline before its search and builds the next one from it; if a second run wrote the
+ * file in between, writing ours would silently drop that run's history entry. So the write
+ * happens under an exclusive lock beside the file, after reading the file again: unchanged,
+ * ours is written; changed, nothing is written and the user is told to run again (exit 2).
+ */
+
+
+
+
+/**
+ * Writes `next` to `path` if the file still holds `expected` (null: no file), else throws a
+ * UserError naming the file (`shown`, as the user wrote it).
+ */
+async function updateBaseline(path, shown, expected, next) {
+    const lock = await lockOrRefuse(path, shown);
+    try {
+        const now = await readBaseline(path, shown);
+        if (!sameBaseline(expected, now)) {
+            const what = now === null ? 'was removed' : expected === null ? 'was created' : 'changed';
+            throw new errors_UserError(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
+                'so this result was not recorded, to keep that change. Run `neuron-budget baseline` again to record it on top.', { file: shown });
+        }
+        await writeBaseline(path, next);
+    }
+    finally {
+        await lock.release();
+    }
+}
+async function lockOrRefuse(path, shown) {
+    try {
+        return await acquireLock(path);
+    }
+    catch (e) {
+        if (!(e instanceof LockBusy))
+            throw e;
+        const lockShown = displayLockPath(shown, path);
+        const who = e.owner
+            ? ` by process ${e.owner.pid}${e.owner.host ? ` on ${e.owner.host}` : ''}${e.owner.since ? ` since ${e.owner.since}` : ''}`
+            : '';
+        throw new errors_UserError(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
+            'Run `neuron-budget baseline` again when it has finished; if none is running, delete the lock file.', { file: shown });
+    }
+}
+/** The lock file's path in the same form as the baseline's as the user wrote it. */
+function displayLockPath(shown, path) {
+    return `${shown.slice(0, shown.lastIndexOf('/') + 1)}${(0,external_node_path_namespaceObject.basename)(lockPathFor(path))}`;
+}
+/** Same content; key order and formatting of the file do not matter to a reader. */
+function sameBaseline(a, b) {
+    if (a === null || b === null)
+        return a === b;
+    return canonical(a) === canonical(b);
+}
+function canonical(v) {
+    if (Array.isArray(v))
+        return `[${v.map(canonical).join(',')}]`;
+    if (v !== null && typeof v === 'object') {
+        const keys = Object.keys(v).sort();
+        return `{${keys.map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(',')}}`;
+    }
+    return JSON.stringify(v);
+}
+
+;// CONCATENATED MODULE: ./src/gate/stage.ts
+
+
+
+async function runGateStage(input) {
+    const previous = input.previous;
+    const config = input.baselinePath === input.config.gate.baseline
+        ? input.config
+        : {
+            ...input.config,
+            gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
+        };
+    const outcome = evaluateGate({
+        result: input.result,
+        loaded: input.loaded,
+        config,
+        baseline: previous,
+        cost: input.cost ?? null,
+    });
+    if (input.mode === 'check')
+        return { outcome, written: null, record: null, gate: config.gate };
+    const why = whyNotRecordable(input.result);
+    if (why !== null)
+        return { outcome, written: null, record: { notWritten: why }, gate: config.gate };
+    const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
+    // Only if the file still holds what `previous` was read from: never drop another run's entry.
+    await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
+    const record = { file: input.baselineShown, width: next.result.width, historyEntries: next.history.length };
+    return { outcome, written: input.baselinePath, record, gate: config.gate };
+}
+
+;// CONCATENATED MODULE: ./src/gate/index.ts
+/**
+ * The gate: baseline file, comparison and data changes. `evaluateGate` is the one call
+ * the job needs after the search; `nextBaseline`/`writeBaseline` record an accepted result.
+ */
+
+
+
+
+
+
+
+
+;// CONCATENATED MODULE: ./src/search/growth.ts
+function taskKey(task) {
+    return `${task.width}:${task.restart}`;
+}
+/**
+ * The widths in the order a walk can visit them. From min-width: upward. From a start width S
+ * (fresh growth only): S, S−1, S+1, S−2, S+2, … within the range, so whichever way the walk
+ * turns after S, the widths it visits come in increasing position and every task before the
+ * first undecided one can no longer matter.
+ */
+function walkOrder(plan) {
+    const start = startWidth(plan);
+    if (start === null) {
+        const out = [];
+        for (let w = plan.minWidth; w <= plan.maxWidth; w++)
+            out.push(w);
+        return out;
+    }
+    const out = [start];
+    for (let d = 1; start - d >= plan.minWidth || start + d <= plan.maxWidth; d++) {
+        if (start - d >= plan.minWidth)
+            out.push(start - d);
+        if (start + d <= plan.maxWidth)
+            out.push(start + d);
+    }
+    return out;
+}
+/** The width the walk starts from when it does not start at min-width (fresh growth only), clamped to the range. */
+function startWidth(plan) {
+    if (plan.growth === 'in-place' || plan.start === undefined || plan.start === null)
+        return null;
+    return Math.min(plan.maxWidth, Math.max(plan.minWidth, plan.start));
+}
+/** Every growth task in canonical order (walkOrder). In-place growth has one task per restart, starting at min-width. */
+function planTasks(plan) {
+    const tasks = [];
+    if (plan.growth === 'in-place') {
+        for (let i = 0; i < plan.restarts; i++)
+            tasks.push({ width: plan.minWidth, restart: i });
+        return tasks;
+    }
+    for (const w of walkOrder(plan)) {
+        for (let i = 0; i < plan.restarts; i++)
+            tasks.push({ width: w, restart: i });
+    }
+    return tasks;
+}
+/** The task whose result says how restart `restart` fares at width `width`. */
+function taskFor(plan, width, restart) {
+    return plan.growth === 'in-place' ? { width: plan.minWidth, restart } : { width, restart };
+}
+/**
+ * In-place growth maps onto widths like this: restart i counts as meeting the target at width w
+ * when its network met it at a width no larger than w (a network of fewer neurons that meets the
+ * target is also a width-w network: give the extra neurons zero outgoing weights). Otherwise its
+ * figures at w are those at the end of its time at w; a restart that diverged before w counts as
+ * a diverged failure.
+ */
+function restartAtWidth(plan, result, width) {
+    const task = { width: result.width, restart: result.restart };
+    const base = { restart: result.restart, task };
+    const judged = (j) => ({
+        train: j.train,
+        steering: j.steering,
+        judged: j.judged,
+        reached: j.reached,
+        met: j.met,
+    });
+    if (plan.growth !== 'in-place') {
+        return {
+            ...base,
+            ...judged(result),
+            epochs: result.epochs,
+            stop: result.stop,
+            reason: result.reason,
+            network: result.network,
+        };
+    }
+    if (result.met && result.finalWidth <= width) {
+        return {
+            ...base,
+            ...judged(result),
+            epochs: result.epochs,
+            stop: result.stop,
+            reason: null,
+            network: result.network,
+        };
+    }
+    const seg = result.segments.find((s) => s.width === width);
+    if (seg !== undefined) {
+        const diverged = seg.stop === 'diverged';
+        return {
+            ...base,
+            ...judged(seg),
+            met: false,
+            epochs: seg.epochs,
+            stop: seg.stop,
+            reason: diverged ? result.reason : null,
+            network: null,
+        };
+    }
+    const nan = Number.NaN;
+    return {
+        ...base,
+        train: nan,
+        steering: nan,
+        judged: nan,
+        reached: false,
+        met: false,
+        epochs: result.epochs,
+        stop: 'diverged',
+        reason: result.reason,
+        network: null,
+    };
+}
+/**
+ * Walk the widths as the header says. Pure: the same outcomes give the same decision.
+ * From a start width S the walk decides S first; when S is adequate it steps down until a width
+ * is not (the answer is the last adequate one), otherwise it steps up until one is. It assumes
+ * that adequacy, once lost going down, does not come back at a smaller width.
+ */
+function decideGrowth(plan, lookup) {
+    const tried = [];
+    const used = new Set();
+    const allowedFailures = plan.restarts - plan.required;
+    const byWidth = () => [...tried].sort((a, b) => a.width - b.width);
+    const decideWidth = (w) => {
+        const seen = [];
+        let successes = 0;
+        let failures = 0;
+        for (let i = 0; i < plan.restarts; i++) {
+            if (successes >= plan.required || failures > allowedFailures)
+                break;
+            const task = taskFor(plan, w, i);
+            const key = taskKey(task);
+            if (!used.has(key) && plan.maxTrainings !== null && used.size >= plan.maxTrainings) {
+                if (seen.length > 0)
+                    tried.push({ width: w, restarts: seen });
+                const capHit = { width: w, restartsRun: seen.length };
+                return { stop: { kind: 'decided', grownWidth: null, tried: byWidth(), trainings: used.size, capHit } };
+            }
+            const result = lookup(task);
+            if (result === undefined) {
+                if (seen.length > 0)
+                    tried.push({ width: w, restarts: seen });
+                return { stop: { kind: 'need', task, deciding: w, tried: byWidth(), trainings: used.size } };
+            }
+            used.add(key);
+            const at = restartAtWidth(plan, result, w);
+            seen.push(at);
+            if (at.met)
+                successes++;
+            else
+                failures++;
+        }
+        tried.push({ width: w, restarts: seen });
+        return { adequate: successes >= plan.required };
+    };
+    const decided = (grownWidth) => ({
+        kind: 'decided',
+        grownWidth,
+        tried: byWidth(),
+        trainings: used.size,
+        capHit: null,
+    });
+    const start = startWidth(plan);
+    if (start !== null) {
+        const first = decideWidth(start);
+        if ('stop' in first)
+            return first.stop;
+        if (first.adequate) {
+            let lowest = start;
+            for (let w = start - 1; w >= plan.minWidth; w--) {
+                const step = decideWidth(w);
+                if ('stop' in step)
+                    return step.stop;
+                if (!step.adequate)
+                    break;
+                lowest = w;
+            }
+            return decided(lowest);
+        }
+        for (let w = start + 1; w <= plan.maxWidth; w++) {
+            const step = decideWidth(w);
+            if ('stop' in step)
+                return step.stop;
+            if (step.adequate)
+                return decided(w);
+        }
+        return decided(null);
+    }
+    for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
+        const step = decideWidth(w);
+        if ('stop' in step)
+            return step.stop;
+        if (step.adequate)
+            return decided(w);
+    }
+    return decided(null);
+}
+/**
+ * Merge growth results from anywhere (threads, processes, machines) into the decision.
+ * Identical duplicates are fine; two different results for one task are refused; extra results
+ * past the decision point are ignored.
+ */
+function mergeOutcomes(plan, results) {
+    const byKey = new Map();
+    for (const r of results) {
+        const key = taskKey(r);
+        const seen = byKey.get(key);
+        // Every task is a pure function of (data, settings, task): two copies that differ mean mixed inputs.
+        if (seen !== undefined && JSON.stringify(seen) !== JSON.stringify(r)) {
+            throw new Error(`two different results for the task at width ${r.width}, restart ${r.restart}`);
+        }
+        byKey.set(key, r);
+    }
+    return decideGrowth(plan, (t) => byKey.get(taskKey(t)));
+}
+
+;// CONCATENATED MODULE: ./src/matrix/exact-json.ts
+/**
+ * JSON that carries every float64 a search produces exactly: JSON writes NaN and ±Infinity as
+ * null and −0 as 0, and a merged search must see the very numbers its shards computed (a
+ * diverged training's NaN metric decides how its restart counts). Those four values travel as
+ * the strings below; every other number already round-trips through JSON unchanged.
+ */
+const SPECIAL = {
+    NaN: Number.NaN,
+    Infinity: Number.POSITIVE_INFINITY,
+    '-Infinity': Number.NEGATIVE_INFINITY,
+    '-0': -0,
+};
+function toExactJson(value) {
+    return JSON.stringify(value, (_key, v) => {
+        if (typeof v !== 'number')
+            return v;
+        if (Number.isNaN(v))
+            return 'NaN';
+        if (v === Number.POSITIVE_INFINITY)
+            return 'Infinity';
+        if (v === Number.NEGATIVE_INFINITY)
+            return '-Infinity';
+        return Object.is(v, -0) ? '-0' : v;
+    });
+}
+/** Parses text written by toExactJson (the caller has checked the syntax). */
+function fromExactJson(text) {
+    return JSON.parse(text, (_key, v) => (typeof v === 'string' && v in SPECIAL ? SPECIAL[v] : v));
+}
+
+;// CONCATENATED MODULE: ./src/matrix/part.ts
+/**
+ * A part: what one shard of a plan computed, as a small JSON file that travels as an artifact.
+ * It names the plan, the data and the settings it was computed for, so `merge` can refuse a part
+ * that belongs to another run, and it carries each training's full outcome (and the networks that
+ * met the target, pruned or not), so the merged search is the one-machine search exactly.
+ */
+
+
+
+
+
+const PART_SCHEMA = 'neuron-budget/part@1';
+function serializePart(part) {
+    return `${toExactJson(part)}\n`;
+}
+function part_describe(v) {
+    if (v === undefined)
+        return 'nothing';
+    if (v === null)
+        return 'null';
+    if (Array.isArray(v))
+        return `a list of ${v.length}`;
+    if (typeof v === 'object')
+        return 'an object';
+    if (typeof v === 'string')
+        return escape_quote(v, 40);
+    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
+}
+const part_isObject = (v) => typeof v === 'object' && v !== null && !Array.isArray(v);
+/** Syntax, then the fields that say where the part came from; the content is checked by checkPart. */
+function parsePart(text, shown) {
+    const syntax = findJsonSyntaxProblem(text);
+    if (syntax) {
+        throw new errors_UserError(`${shown}:${syntax.line}:${syntax.column}: the part is not valid JSON: ${syntax.detail}`, {
+            file: shown,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    }
+    const doc = fromExactJson(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    const bad = (key, expected, found) => {
+        throw new errors_UserError(`${shown}: ${key}: expected ${expected}, found ${part_describe(found)}`, { file: shown, key });
+    };
+    if (!part_isObject(doc))
+        return bad('(top level)', 'a neuron-budget part (a JSON object)', doc);
+    if (doc['schema'] !== PART_SCHEMA)
+        bad('schema', `"${PART_SCHEMA}"; this file is not the output of neuron-budget shard`, doc['schema']);
+    const str = (o, key, at) => {
+        const v = part_isObject(o) ? o[key] : undefined;
+        return typeof v === 'string' ? v : bad(at, 'a string', v);
+    };
+    const int = (o, key, at) => {
+        const v = part_isObject(o) ? o[key] : undefined;
+        return Number.isInteger(v) && v >= 0 ? v : bad(at, 'a whole number ≥ 0', v);
+    };
+    str(doc['tool'], 'version', 'tool.version');
+    str(doc, 'plan', 'plan');
+    int(doc['shard'], 'index', 'shard.index');
+    int(doc['shard'], 'of', 'shard.of');
+    str(doc['data'], 'fingerprint', 'data.fingerprint');
+    str(doc['settings'], 'fingerprint', 'settings.fingerprint');
+    if (!Array.isArray(doc['results']))
+        bad('results', 'a list', doc['results']);
+    if (!Array.isArray(doc['pruned']))
+        bad('pruned', 'a list', doc['pruned']);
+    return doc;
+}
+const part_short = (hash) => `${hash.slice(0, 12)}…`;
+/**
+ * Whether the part belongs to this run: the same tool version, data, settings and plan, and
+ * holds results for exactly its shard's tasks, each of the right shape.
+ */
+function checkPart(part, shown, want) {
+    const refuse = (why) => {
+        throw new errors_UserError(`${shown}: ${why}`, { file: shown });
+    };
+    const plan = want.plan;
+    if (part.tool.version !== want.toolVersion)
+        refuse(`made by neuron-budget ${escape_quote(part.tool.version, 20)}, but this is ${want.toolVersion}; run every stage with the same version`);
+    if (part.data.fingerprint !== plan.data.fingerprint)
+        refuse(`computed on other data (data fingerprint ${part_short(part.data.fingerprint)} in the part, ${part_short(plan.data.fingerprint)} here); every stage must run on the same commit`);
+    if (part.settings.fingerprint !== plan.settings.fingerprint)
+        refuse(`computed with other result-changing settings (settings fingerprint ${part_short(part.settings.fingerprint)} in the part, ${part_short(plan.settings.fingerprint)} here)`);
+    if (part.shard.of !== plan.shards.length || part.plan !== plan.id)
+        refuse(`belongs to another plan (plan ${part_short(part.plan)} of ${part.shard.of} shards; this run's plan is ${part_short(plan.id)} of ${plan.shards.length}): the plan, the shards and the merge must come from the same config, data and baseline`);
+    const shard = plan.shards[part.shard.index];
+    if (shard === undefined)
+        refuse(`shard.index ${part.shard.index} is not a shard of this plan (0 to ${plan.shards.length - 1})`);
+    const bad = (key, expected, found) => {
+        throw new errors_UserError(`${shown}: ${key}: expected ${expected}, found ${part_describe(found)}`, { file: shown, key });
+    };
+    const tasks = new Map(shard.tasks.map((t) => [taskKey(t), t]));
+    const seen = new Set();
+    part.results.forEach((r, k) => {
+        checkTaskResult(r, `results[${k}]`, want, bad);
+        const key = taskKey(r);
+        if (!tasks.has(key) || seen.has(key))
+            bad(`results[${k}]`, `a task of shard ${part.shard.index}, each once`, `width ${r.width}, restart ${r.restart + 1}`);
+        seen.add(key);
+    });
+    part.pruned.forEach((p, k) => {
+        const at = `pruned[${k}]`;
+        if (!part_isObject(p) || !part_isObject(p.source))
+            return bad(at, 'a pruned network', p);
+        const key = taskKey(p.source);
+        if (!tasks.get(key)?.prune)
+            bad(`${at}.source`, `a task shard ${part.shard.index} prunes`, `width ${p.source.width}`);
+        if (!Array.isArray(p.chain) || !Array.isArray(p.steps))
+            bad(at, 'a chain and steps', p);
+        if (!Number.isInteger(p.trainings) || typeof p.interrupted !== 'boolean')
+            bad(at, 'trainings and interrupted', p);
+        p.chain.forEach((link, j) => {
+            checkJudged(link, `${at}.chain[${j}]`, bad);
+            checkNetwork(link.network, `${at}.chain[${j}].network`, want, bad);
+        });
+    });
+}
+function checkJudged(j, at, bad) {
+    if (!part_isObject(j))
+        return bad(at, 'an object', j);
+    const o = j;
+    for (const k of ['train', 'steering', 'judged'])
+        if (typeof o[k] !== 'number')
+            bad(`${at}.${k}`, 'a number', o[k]);
+    for (const k of ['reached', 'met'])
+        if (typeof o[k] !== 'boolean')
+            bad(`${at}.${k}`, 'true or false', o[k]);
+}
+function checkTaskResult(r, at, want, bad) {
+    checkJudged(r, at, bad);
+    const o = r;
+    for (const k of ['width', 'restart', 'epochs', 'finalWidth'])
+        if (!Number.isInteger(o[k]))
+            bad(`${at}.${k}`, 'a whole number', o[k]);
+    if (typeof o['stop'] !== 'string')
+        bad(`${at}.stop`, 'a stop reason', o['stop']);
+    if (!Array.isArray(o['segments']))
+        bad(`${at}.segments`, 'a list', o['segments']);
+    o['segments'].forEach((s, k) => checkJudged(s, `${at}.segments[${k}]`, bad));
+    if (o['network'] !== null)
+        checkNetwork(o['network'], `${at}.network`, want, bad);
+    if (o['reason'] !== null && typeof o['reason'] !== 'string')
+        bad(`${at}.reason`, 'a sentence or null', o['reason']);
+}
+function checkNetwork(n, at, want, bad) {
+    if (!part_isObject(n))
+        return bad(at, 'a network', n);
+    const net = n;
+    if (net.inputs !== want.inputs)
+        bad(`${at}.inputs`, `${want.inputs}`, net.inputs);
+    if (net.outputs !== want.outputs)
+        bad(`${at}.outputs`, `${want.outputs}`, net.outputs);
+    if (!Number.isInteger(net.width) || net.width < 1)
+        bad(`${at}.width`, 'a whole number ≥ 1', net.width);
+    const numbers = (v, key, length) => {
+        if (!Array.isArray(v) || v.length !== length || !v.every((x) => typeof x === 'number'))
+            bad(key, `${length} numbers`, v);
+    };
+    const rows = (v, key, count, length) => {
+        if (!Array.isArray(v) || v.length !== count)
+            return bad(key, `${count} rows`, v);
+        v.forEach((row, i) => numbers(row, `${key}[${i}]`, length));
+    };
+    rows(net.hiddenWeights, `${at}.hiddenWeights`, net.width, net.inputs);
+    numbers(net.hiddenBias, `${at}.hiddenBias`, net.width);
+    rows(net.outputWeights, `${at}.outputWeights`, net.outputs, net.width);
+    numbers(net.outputBias, `${at}.outputBias`, net.outputs);
+    if (typeof net.activation !== 'string' || typeof net.head !== 'string')
+        bad(at, 'an activation and a head', n);
+}
+
+;// CONCATENATED MODULE: ./src/matrix/plan.ts
+/**
+ * A search as a plan of independent tasks for a job matrix: which (width, restart) trainings
+ * each shard runs, balanced by their expected cost, and which of their networks a shard prunes
+ * when they meet the target. The plan is a pure function of the data, the result-changing
+ * settings, the start (a matching baseline) and the shard count, and its id is the hash of all
+ * of them, so `merge` can rebuild it and tell whether every part belongs to it.
+ *
+ * Which tasks: from a baseline's width S, the two widths the common answer needs (S and S − 1,
+ * every restart); from min-width, every width up to max-width. Whatever the decision needs
+ * beyond the plan, `merge` runs itself, so a plan that guessed short costs time, never the answer.
+ * Which networks are pruned on the shards: those on the path a one-machine search takes when
+ * the answer has not moved (S's first `required` restarts, S − 1's first restarts − required + 1);
+ * `merge` prunes any other network the answer needs.
+ */
+
+
+const PLAN_SCHEMA = 'neuron-budget/plan@1';
+/** A matrix has at most 256 jobs per workflow run. */
+const MAX_SHARDS = 256;
+function taskMacs(m, task) {
+    const weights = (w) => w * (m.inputs + m.outputs + 1) + m.outputs;
+    const training = 3 * m.trainRows * m.maxEpochs * weights(task.width);
+    // A prune chain usually ends after one refused step: pruneCandidates retrainings one neuron smaller.
+    const pruning = task.prune && task.width > 1 ? 3 * m.trainRows * m.pruneEpochs * m.pruneCandidates * weights(task.width - 1) : 0;
+    return training + pruning;
+}
+/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. */
+function plannedTasks(plan) {
+    const start = startWidth(plan);
+    if (start === null)
+        return planTasks(plan).map((t) => ({ ...t, prune: false }));
+    const onPath = (t) => t.width === start ? t.restart < plan.required : t.restart <= plan.restarts - plan.required;
+    return planTasks(plan)
+        .filter((t) => t.width === start || t.width === start - 1)
+        .map((t) => ({ ...t, prune: onPath(t) }));
+}
+/**
+ * Split the tasks over `shards` shards (fewer when there are fewer tasks) by longest expected
+ * cost first onto the least loaded shard; ties go to the earlier task and the lower shard, so the
+ * plan is the same on every machine.
+ */
+function makePlan(plan, shards, identity, cost) {
+    const tasks = plannedTasks(plan);
+    const count = Math.max(1, Math.min(shards, tasks.length));
+    const position = new Map(tasks.map((t, k) => [taskKey(t), k]));
+    const byCost = tasks
+        .map((t) => ({ t, macs: taskMacs(cost, t) }))
+        .sort((a, b) => b.macs - a.macs || position.get(taskKey(a.t)) - position.get(taskKey(b.t)));
+    const out = Array.from({ length: count }, (_, index) => ({ index, estimatedMacs: 0, tasks: [] }));
+    for (const { t, macs } of byCost) {
+        let least = out[0];
+        for (const s of out)
+            if (s.estimatedMacs < least.estimatedMacs)
+                least = s;
+        least.tasks.push(t);
+        least.estimatedMacs += macs;
+    }
+    for (const s of out)
+        s.tasks.sort((a, b) => position.get(taskKey(a)) - position.get(taskKey(b)));
+    const start = startWidth(plan);
+    const body = {
+        schema: PLAN_SCHEMA,
+        tool: { name: 'neuron-budget', version: identity.toolVersion },
+        data: { fingerprint: identity.data, rows: identity.rows },
+        settings: { fingerprint: identity.settings },
+        start: start === null
+            ? { from: 'min-width', width: plan.minWidth }
+            : { from: 'baseline', width: start },
+        shards: out,
+    };
+    return { ...body, id: planId(body) };
+}
+function planId(body) {
+    return (0,external_node_crypto_namespaceObject.createHash)('sha256').update(JSON.stringify(body), 'utf8').digest('hex');
+}
+
+;// CONCATENATED MODULE: ./src/common/random.ts
+/**
+ * Seeded random numbers: xoshiro128** version 1.1 (Blackman & Vigna), seeded through
+ * SplitMix64 (Steele, Lea & Flood). Only 32-bit integer operations in the hot path, so every
+ * engine produces the same stream. Every random choice in neuron-budget (the data split, the
+ * initial weights) draws from here.
+ */
+const MASK64 = (1n << 64n) - 1n;
+const GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
+/** One SplitMix64 output step: advances `state` by the golden gamma and mixes it. */
+function splitMix64Mix(z) {
+    z = ((z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n) & MASK64;
+    z = ((z ^ (z >> 27n)) * 0x94d049bb133111ebn) & MASK64;
+    return z ^ (z >> 31n);
+}
+/** A SplitMix64 generator over 64-bit unsigned BigInts (used for seeding only). @testOnly */
+class SplitMix64 {
+    state;
+    constructor(seed) {
+        this.state = BigInt.asUintN(64, seed);
+    }
+    next() {
+        this.state = (this.state + GOLDEN_GAMMA) & MASK64;
+        return splitMix64Mix(this.state);
+    }
+}
+/** xoshiro128** 1.1: the scrambler reads s[1] (version 1.0 wrongly read s[0]). @testOnly */
+class Xoshiro128StarStar {
+    a;
+    b;
+    c;
+    d;
+    constructor(s0, s1, s2, s3) {
+        this.a = s0 | 0;
+        this.b = s1 | 0;
+        this.c = s2 | 0;
+        this.d = s3 | 0;
+        if ((this.a | this.b | this.c | this.d) === 0) {
+            throw new RangeError('xoshiro128** state must not be all zero');
+        }
+    }
+    /** The four state words as unsigned 32-bit integers. */
+    state() {
+        return [this.a >>> 0, this.b >>> 0, this.c >>> 0, this.d >>> 0];
+    }
+    nextUint32() {
+        const r = Math.imul(this.b, 5);
+        const result = Math.imul((r << 7) | (r >>> 25), 9) >>> 0;
+        const t = this.b << 9;
+        this.c ^= this.a;
+        this.d ^= this.b;
+        this.b ^= this.c;
+        this.a ^= this.d;
+        this.c ^= t;
+        this.d = (this.d << 11) | (this.d >>> 21);
+        return result;
+    }
+    nextDouble() {
+        const hi = this.nextUint32() >>> 5;
+        const lo = this.nextUint32() >>> 6;
+        return (hi * 67108864 + lo) / 9007199254740992;
+    }
+}
+/**
+ * Our seeding convention: a SplitMix64 generator started at `seed`; its first two outputs
+ * r0, r1 give the state words [lo(r0), hi(r0), lo(r1), hi(r1)].
+ */
+function xoshiroFromSeed(seed) {
+    const sm = new SplitMix64(seed);
+    for (;;) {
+        const r0 = sm.next();
+        const r1 = sm.next();
+        const w = [r0 & 0xffffffffn, r0 >> 32n, r1 & 0xffffffffn, r1 >> 32n].map(Number);
+        // An all-zero state is a fixed point; draw again in the (2^-128) case it happens.
+        if ((w[0] | w[1] | w[2] | w[3]) !== 0)
+            return new Xoshiro128StarStar(w[0], w[1], w[2], w[3]);
+    }
+}
+function toUint64(n, what) {
+    if (!Number.isSafeInteger(n))
+        throw new RangeError(`${what} must be a safe integer, got ${n}`);
+    return BigInt.asUintN(64, BigInt(n));
+}
+/**
+ * The stream for restart `restart` of width `width` under base seed `seed`. The three numbers
+ * are chained through the SplitMix64 mixer so that neighbouring triples give unrelated streams.
+ */
+function rngFor(seed, width, restart) {
+    let h = splitMix64Mix((toUint64(seed, 'seed') + GOLDEN_GAMMA) & MASK64);
+    h = splitMix64Mix(((h ^ toUint64(width, 'width')) + GOLDEN_GAMMA * 2n) & MASK64);
+    h = splitMix64Mix(((h ^ toUint64(restart, 'restart')) + GOLDEN_GAMMA * 3n) & MASK64);
+    return xoshiroFromSeed(h);
+}
+/** Fisher–Yates shuffle in place. */
+function shuffle(items, rng) {
+    for (let i = items.length - 1; i > 0; i--) {
+        const j = Math.floor(rng.nextDouble() * (i + 1));
+        const t = items[i];
+        items[i] = items[j];
+        items[j] = t;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/search/classes.ts
+/** counts[t][p]: rows of true class t predicted as p. */
+function confusion(predicted, truth, classes) {
+    const counts = Array.from({ length: classes }, () => new Array(classes).fill(0));
+    for (let r = 0; r < truth.length; r++)
+        counts[truth[r]][predicted[r]]++;
+    return counts;
+}
+/** Recall per class: correct / rows of that class; NaN for a class with no rows. */
+function recalls(counts) {
+    return counts.map((row, c) => {
+        const n = row.reduce((s, v) => s + v, 0);
+        return n === 0 ? Number.NaN : row[c] / n;
+    });
+}
+/** Precision per class: correct / rows predicted as that class; NaN when none was. */
+function precisions(counts) {
+    return counts.map((_, c) => {
+        const n = counts.reduce((s, row) => s + row[c], 0);
+        return n === 0 ? Number.NaN : counts[c][c] / n;
+    });
+}
+/** Every class with a floor above 0 reaches it; a class absent from the rows cannot be checked and passes. */
+function recallsHold(counts, floors) {
+    const r = recalls(counts);
+    return floors.every((min, c) => min <= 0 || Number.isNaN(r[c]) || r[c] >= min);
+}
+/** The target metric from predictions: class indices (accuracy) or values in the target's units (errors). */
+function metricOfPredictions(metric, predicted, truth) {
+    const n = truth.length;
+    if (n === 0)
+        return Number.NaN;
+    if (metric === 'accuracy') {
+        let correct = 0;
+        for (let r = 0; r < n; r++)
+            if (predicted[r] === truth[r])
+                correct++;
+        return correct / n;
+    }
+    let se = 0;
+    let ae = 0;
+    let max = 0;
+    for (let r = 0; r < n; r++) {
+        const d = Math.abs(predicted[r] - truth[r]);
+        se += d * d;
+        ae += d;
+        if (d > max || d !== d)
+            max = d;
+    }
+    return metric === 'rmse' ? Math.sqrt(se / n) : metric === 'mae' ? ae / n : max;
+}
+
+;// CONCATENATED MODULE: ./src/search/judge.ts
+/**
+ * Whether a trained network meets the target: decided on the judging rows alone, which no
+ * training ever reads (they do not stop a training, pick a restart or accept a pruning step).
+ * Without judging rows the validation rows judge, and without those the training rows.
+ *
+ * A network meets the target when, in the form target.precision names (float32, or the int8
+ * form the exported C runs, quantised as src/device/quantize.ts does), its metric meets the
+ * threshold on those rows and every class with a recall floor (target.min-recall) reaches it.
+ */
+
+
+
+
+function judgingRowsOf(data, folded) {
+    if (data.judgingRows > 0)
+        return { on: 'judging', rows: data.judgingRows, folded };
+    if (data.validationRows > 0)
+        return { on: 'validation', rows: data.validationRows, folded };
+    return { on: 'training', rows: data.trainRows, folded };
+}
+/** The encoded rows that judge, with their targets (classes, or standardised values). */
+function judgedRows(data) {
+    if (data.judgingRows > 0)
+        return { x: data.xJudging, y: data.yJudging, rows: data.judgingRows };
+    if (data.validationRows > 0)
+        return { x: data.xValidation, y: data.yValidation, rows: data.validationRows };
+    return { x: data.xTrain, y: data.yTrain, rows: data.trainRows };
+}
+/** Everything the screens show about a network on the rows that judge. `withInt8` computes the int8 form even when float32 decides. */
+function appraise(data, net, target, withInt8) {
+    const { x, y, rows } = judgedRows(data);
+    const std = data.encoding.target.std;
+    const float32 = metricOn(net, x, y, rows, target.metric, std);
+    const int8Decides = target.precision === 'int8';
+    let int8 = null;
+    let int8Classes = null;
+    if ((withInt8 || int8Decides) && data.rawJudged !== undefined) {
+        const q = quantizeNetwork(net, data.encoding, { x: data.xTrain, rows: data.trainRows });
+        const out = int8Forward(q, data.rawJudged, rows);
+        if (data.task === 'classification') {
+            int8Classes = out.classes;
+            int8 = metricOfPredictions(target.metric, out.classes, y);
+        }
+        else {
+            const t = data.encoding.target;
+            int8 = metricOfPredictions(target.metric, out.outputs, Float64Array.from(y, (v) => v * t.std + t.mean));
+        }
+    }
+    if (int8Decides && int8 === null)
+        throw new Error('target.precision is int8, but the dataset has no raw rows to run the int8 form on');
+    const deciding = int8Decides ? int8 : float32;
+    let counts = null;
+    if (data.task === 'classification') {
+        const predicted = int8Decides ? int8Classes : classesOn(net, x, rows);
+        counts = confusion(predicted, y, data.encoding.target.classes?.length ?? 2);
+    }
+    const floors = target.recallFloors ?? null;
+    const recallOk = floors === null || counts === null || recallsHold(counts, floors);
+    return {
+        float32,
+        int8,
+        confusion: counts,
+        recall: counts === null ? null : recalls(counts),
+        precision: counts === null ? null : precisions(counts),
+        deciding,
+        met: meetsThreshold(deciding, target) && recallOk,
+    };
+}
+/** The record of a finished training, with its judgement on the rows that judge added. */
+function judge(data, net, rec, target) {
+    const diverged = rec.stop === 'diverged' || net === null;
+    const a = diverged ? null : appraise(data, net, target, false);
+    return {
+        train: rec.trainMetric,
+        steering: rec.steeringMetric,
+        judged: a === null ? Number.NaN : a.deciding,
+        reached: !diverged && meetsThreshold(rec.steeringMetric, target),
+        met: a !== null && a.met,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/search/task.ts
+/**
+ * One unit of work, runnable in any thread: a growth task (one seeded training, or one
+ * network grown in place) or a prune job (shrinking one network that met the target).
+ * Everything here is a pure function of (data, context, task): no shared state, and the clock is
+ * read only through `cancelled`, which can only end a task early (the caller then discards it).
+ */
+
+
+
+/**
+ * Dynamic Node Creation trigger (Ash 1989): window 100 epochs, relative slope 0.05.
+ * Engineering choices inside the published range (window 25 and slope 0.1 in one
+ * published description; checks every 100 updates with a 1% threshold in another).
+ */
+const DEFAULT_STALL = { window: 100, threshold: 0.05 };
+/** Engineering choice: try the three least salient neurons before giving up a prune step. */
+const DEFAULT_PRUNE_CANDIDATES = 3;
+const never = () => false;
+function divergedReason(width, epochs) {
+    return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
+}
+/** Gives up when the caller says so or the search's time is up. */
+function stopWhen(ctx, cancelled) {
+    const deadline = ctx.deadline;
+    return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
+}
+/**
+ * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
+ * null only when `cancelled` (or the time budget) said to give up.
+ * In-place growth (Dynamic Node Creation) starts at the task's width and gives every width up to
+ * max-epochs; a neuron is added when the error curve flattens (the stall trigger) or that budget
+ * runs out, until the target is met or max-width is hit.
+ */
+function runTask(data, ctx, task, cancelled = never) {
+    const { plan, train } = ctx;
+    const inPlace = plan.growth === 'in-place';
+    const rng = rngFor(ctx.seed, task.width, task.restart);
+    const options = {
+        ...train,
+        stall: inPlace ? { ...ctx.stall } : null,
+        interrupted: stopWhen(ctx, cancelled),
+    };
+    const trainer = createTrainer(data, task.width, options, rng);
+    const segments = [];
+    let epochs = 0;
+    for (;;) {
+        const rec = trainer.run(train.maxEpochs);
+        if (rec.stop === 'interrupted')
+            return null;
+        epochs += rec.epochs;
+        const width = trainer.network.width;
+        const network = rec.stop === 'diverged' ? null : trainer.snapshot();
+        const judged = judge(data, network, rec, train.target);
+        segments.push({ width, epochs, stop: rec.stop, ...judged });
+        const done = judged.met || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
+        if (done) {
+            return {
+                width: task.width,
+                restart: task.restart,
+                ...judged,
+                stop: rec.stop,
+                epochs,
+                finalWidth: width,
+                segments,
+                network: judged.met ? network : null,
+                reason: rec.stop === 'diverged' ? divergedReason(width, epochs) : null,
+            };
+        }
+        // Out of patience or epochs at this width: add a neuron that leaves the function unchanged and keep training.
+        trainer.addNeuron(rng);
+    }
+}
+/**
+ * Shrink one network by compensated ablation: score every hidden neuron by the loss increase of
+ * removing it with its mean activation folded into the output biases, remove the least salient,
+ * retrain for at most `pruneEpochs`, and keep the removal only if the steering rows still meet the
+ * target; otherwise restore and try the next candidate. Each kept network is judged on the judging
+ * rows (that decides whether it counts for its width), but the judging rows never decide whether a
+ * removal is kept.
+ */
+function runPruneJob(data, ctx, job, cancelled = never) {
+    const target = ctx.train.target;
+    const retrain = { ...ctx.train, stall: null, interrupted: stopWhen(ctx, cancelled) };
+    // Every restore starts from a snapshot with fresh optimiser state, so the result does not
+    // depend on which thread ran the growth task.
+    const fromSnapshot = (net) => trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.source.width, job.source.restart));
+    let trainer = fromSnapshot(job.network);
+    let steering = trainer.evaluate().steeringMetric;
+    let network = job.network;
+    const chain = [];
+    const steps = [];
+    let trainings = 0;
+    while (trainer.network.width > 1) {
+        const width = trainer.network.width;
+        const order = leastSalientFirst(trainer.saliency());
+        let removed = false;
+        let dirty = false;
+        for (const j of order.slice(0, ctx.pruneCandidates)) {
+            // Restore lazily: after the last refused candidate nothing trains again, so no rebuild is needed.
+            if (dirty)
+                trainer = fromSnapshot(network);
+            trainer.removeNeuron(j);
+            const rec = trainer.run(ctx.pruneEpochs);
+            if (rec.stop === 'interrupted')
+                return { source: job.source, chain, steps, trainings, interrupted: true };
+            trainings++;
+            const smaller = rec.stop === 'diverged' ? null : trainer.snapshot();
+            const judged = judge(data, smaller, rec, target);
+            const accepted = smaller !== null && judged.reached;
+            steps.push({
+                source: job.source,
+                width,
+                neuron: j,
+                steeringBefore: steering,
+                steeringAfter: judged.steering,
+                accepted,
+                judged: accepted ? judged.judged : null,
+            });
+            if (accepted && smaller !== null) {
+                steering = judged.steering;
+                network = smaller;
+                chain.push({ width: width - 1, network: smaller, ...judged });
+                removed = true;
+                break;
+            }
+            dirty = true;
+        }
+        if (!removed)
+            break;
+    }
+    return { source: job.source, chain, steps, trainings, interrupted: false };
+}
+/** Neuron indices by ascending saliency; ties (and NaN) resolved by index so the order is total. */
+function leastSalientFirst(saliency) {
+    const idx = Array.from(saliency, (_, j) => j);
+    const key = (j) => (Number.isFinite(saliency[j]) ? saliency[j] : Number.POSITIVE_INFINITY);
+    idx.sort((a, b) => key(a) - key(b) || a - b);
+    return idx;
+}
+
+;// CONCATENATED MODULE: ./src/search/executor.ts
+/**
+ * Where tasks run: in this thread (one worker, and the path tests take from TypeScript
+ * source) or on a pool of worker threads that share the encoded data without copies.
+ * Both run the same task code, so the choice never changes a result.
+ */
+
+
+
+/** Marks a worker thread started by the pool (the bundle checks it to act as the worker). */
+const WORKER_MARK = 'neuron-budget/search-worker';
+const yieldToEventLoop = () => new Promise((resolve) => setImmediate(resolve));
+function inThreadExecutor(data, ctx) {
+    return {
+        size: 1,
+        async train(task) {
+            await yieldToEventLoop();
+            // Never discarded here (nothing runs ahead in one thread); null only when the time ran out.
+            return runTask(data, ctx, task);
+        },
+        async prune(job) {
+            await yieldToEventLoop();
+            return runPruneJob(data, ctx, job);
+        },
+        discard() { },
+        async close() { },
+    };
+}
+function isShared(a) {
+    return typeof SharedArrayBuffer !== 'undefined' && a.buffer instanceof SharedArrayBuffer;
+}
+function toShared(a) {
+    if (isShared(a))
+        return a;
+    const s = new Float64Array(new SharedArrayBuffer(a.length * Float64Array.BYTES_PER_ELEMENT));
+    s.set(a);
+    return s;
+}
+/** The dataset with every array on SharedArrayBuffer (already the case for loaded data), so posting it shares memory. */
+function shareDataset(data) {
+    return {
+        ...data,
+        xTrain: toShared(data.xTrain),
+        yTrain: toShared(data.yTrain),
+        xValidation: toShared(data.xValidation),
+        xJudging: toShared(data.xJudging),
+        yJudging: toShared(data.yJudging),
+        yValidation: toShared(data.yValidation),
+    };
+}
+/**
+ * A fixed pool of worker threads. `entry` is the file of the running bundle, which acts
+ * as the worker when started with WORKER_MARK (ncc does not follow `new Worker(path)`).
+ */
+function workerPoolExecutor(data, ctx, size, entry) {
+    const shared = shareDataset(data);
+    const pending = new Map();
+    const trainIds = new Map();
+    const queue = [];
+    const slots = [];
+    let nextId = 0;
+    let closed = false;
+    const pump = () => {
+        for (const slot of slots) {
+            if (slot.busy !== null || queue.length === 0)
+                continue;
+            const next = queue.shift();
+            slot.busy = next.id;
+            const msg = next.job.type === 'train'
+                ? { type: 'train', id: next.id, task: next.job.task }
+                : { type: 'prune', id: next.id, job: next.job.job };
+            slot.worker.postMessage(msg);
+        }
+    };
+    const settle = (id) => {
+        const p = pending.get(id);
+        pending.delete(id);
+        for (const [key, tid] of trainIds)
+            if (tid === id)
+                trainIds.delete(key);
+        return p;
+    };
+    const startSlot = () => {
+        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
+        const slot = { worker: new external_node_worker_threads_namespaceObject.Worker(entry, { workerData: { role: WORKER_MARK } }), busy: null, cancel };
+        slot.worker.on('message', (reply) => {
+            slot.busy = null;
+            const p = settle(reply.id);
+            if (p !== undefined) {
+                if (reply.type === 'done')
+                    p.resolve(reply.result);
+                else if (reply.type === 'cancelled')
+                    p.resolve(null);
+                else
+                    p.reject(new Error(reply.message));
+            }
+            pump();
+        });
+        const fail = (error) => {
+            if (closed)
+                return;
+            if (slot.busy !== null)
+                settle(slot.busy)?.reject(error);
+            slot.busy = null;
+        };
+        slot.worker.on('error', fail);
+        slot.worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
+        // The data's SharedArrayBuffers are shared with the thread, not copied.
+        const init = { type: 'init', data: shared, ctx, cancel };
+        slot.worker.postMessage(init);
+        return slot;
+    };
+    for (let k = 0; k < size; k++)
+        slots.push(startSlot());
+    const submit = (job) => new Promise((resolve, reject) => {
+        if (closed) {
+            reject(new Error('search worker pool is closed'));
+            return;
+        }
+        const id = nextId++;
+        pending.set(id, { resolve: resolve, reject });
+        if (job.type === 'train')
+            trainIds.set(taskKey(job.task), id);
+        queue.push({ id, job });
+        pump();
+    });
+    return {
+        size,
+        train: (task) => submit({ type: 'train', task }),
+        prune: (job) => submit({ type: 'prune', job }),
+        discard(task) {
+            const id = trainIds.get(taskKey(task));
+            if (id === undefined)
+                return;
+            settle(id);
+            const q = queue.findIndex((e) => e.id === id);
+            if (q >= 0) {
+                queue.splice(q, 1);
+                return;
+            }
+            // The thread looks at its flag between slices of epochs and answers 'cancelled'.
+            const slot = slots.find((s) => s.busy === id);
+            if (slot !== undefined)
+                Atomics.store(slot.cancel, 0, id);
+        },
+        async close() {
+            closed = true;
+            queue.length = 0;
+            await Promise.all(slots.map((s) => s.worker.terminate()));
+            pending.clear();
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./src/search/notes.ts
+/**
+ * Why no width is adequate, in sentences a reviewer can act on, read off the per-width curve:
+ * - networks met the target, but too few of one width (say how many, and how many are required);
+ * - the networks fit the training rows but not the judging rows: too few rows or too much noise;
+ * - more neurons still help: the curve still improves at max-width, which is too small;
+ * - the curve is flat and even the training rows are not fitted: the features may not carry the target.
+ * And how far a search got when its budget ran out.
+ */
+
+
+/** Widths at the top of the range whose best is compared with the rest to tell a rising curve. */
+const TOP_WIDTHS = 3;
+/**
+ * A curve still rises when its best over the top widths beats the best before them by more than
+ * this (accuracy points, or this fraction of an error metric's value); an engineering choice.
+ */
+const RISE = 0.005;
+function span(from, to) {
+    return from === to ? `width ${from}` : `widths ${from}–${to}`;
+}
+function bestAt(widths, target, pickTrain = false) {
+    let best = null;
+    for (const w of widths) {
+        const v = pickTrain ? w.bestTrain : w.best;
+        if (v !== null && (best === null || isBetter(target.metric, v, best.value)))
+            best = { width: w.width, value: v };
+    }
+    return best;
+}
+function rises(widths, target) {
+    if (widths.length <= TOP_WIDTHS)
+        return null;
+    const top = bestAt(widths.slice(-TOP_WIDTHS), target);
+    const before = bestAt(widths.slice(0, -TOP_WIDTHS), target);
+    if (top === null || before === null)
+        return null;
+    const margin = higherIsBetter(target.metric) ? RISE : RISE * Math.abs(before.value);
+    const gain = higherIsBetter(target.metric) ? top.value - before.value : before.value - top.value;
+    return gain > margin ? { from: before, to: top } : null;
+}
+function notFoundNotes(plan, target, widths, judgedOn) {
+    const notes = [];
+    const name = target.metric;
+    const withMet = widths.filter((w) => w.met > 0);
+    if (withMet.length > 0) {
+        const shown = withMet
+            .slice(0, 3)
+            .map((w) => `${w.met === 1 ? '1 network' : `${w.met} networks`} of width ${w.width}`)
+            .join(', ');
+        notes.push(`Some networks met ${targetShort(name, target.threshold)} (${shown}), but a width needs ${plan.required} to be adequate.`);
+    }
+    const train = bestAt(widths, target, true);
+    const judged = bestAt(widths, target);
+    const rising = rises(widths, target);
+    if (rising !== null) {
+        notes.push(`More neurons still help: the best ${judgedOn} ${name} improved from ${formatMetric(rising.from.value)} (width ${rising.from.width}) to ${formatMetric(rising.to.value)} (width ${rising.to.width}); search.max-width (${plan.maxWidth}) is too small for this target.`);
+    }
+    else if (train !== null && meetsThreshold(train.value, target)) {
+        notes.push(`The networks fit the training rows (${name} ${formatMetric(train.value)} at width ${train.width}) but not the ${judgedOn} rows (best ${judged === null ? 'none' : formatMetric(judged.value)}): the data hold too few rows, or too much noise, for this target.`);
+    }
+    else {
+        const best = train === null ? 'no network trained' : `the best training ${name} was ${formatMetric(train.value)}`;
+        notes.push(`Even the training rows are not fitted (${best}) and more neurons did not help from ${span(plan.minWidth, plan.maxWidth)}: the features may not carry the target.`);
+    }
+    return notes;
+}
+/** The growth phase stopped (time budget, training cap) before a width was adequate. */
+function stoppedGrowingNote(plan, why, atWidth, trainings, tried) {
+    const before = tried.filter((t) => t.width !== atWidth && t.restarts.length > 0);
+    const adequate = before.filter((t) => t.restarts.filter((r) => r.met).length >= plan.required).map((t) => t.width);
+    const not = before.filter((t) => !adequate.includes(t.width)).map((t) => t.width);
+    const said = [
+        adequate.length > 0
+            ? `${widthList(adequate)} ${adequate.length > 1 ? 'were' : 'was'} adequate on fresh restarts`
+            : '',
+        not.length > 0 ? `${widthList(not)} ${not.length > 1 ? 'were' : 'was'} not adequate on fresh restarts` : '',
+    ].filter((x) => x !== '');
+    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${said.length > 0 ? `; ${said.join(', ')}` : ''}.`;
+}
+/** The time ran out while pruning: the grown width is proven, smaller ones are not settled. */
+function stoppedPruningNote(why, grownWidth, trainings) {
+    return `${why} while pruning, after ${trainings} trainings: ${neurons(grownWidth)} are enough (proven by fresh restarts), but whether fewer would do was not settled.`;
+}
+/** Ascending widths as "width 3", "widths 3–5" or "widths 3, 5–7". */
+function widthList(widths) {
+    const runs = [];
+    for (let k = 0; k < widths.length;) {
+        let e = k;
+        while (e + 1 < widths.length && widths[e + 1] === widths[e] + 1)
+            e++;
+        runs.push(widths[k] === widths[e] ? `${widths[k]}` : `${widths[k]}–${widths[e]}`);
+        k = e + 1;
+    }
+    return widths.length === 1 ? `width ${runs[0]}` : `widths ${runs.join(', ')}`;
+}
+/** Where growth began and which widths it decided, with why that was enough. */
+function walkReport(plan, start, decision) {
+    const choice = start ?? { from: 'min-width', width: plan.minWidth, why: 'the search starts there' };
+    const from = choice.from === 'baseline' && plan.start != null ? 'baseline' : 'min-width';
+    const width = from === 'baseline' ? choice.width : plan.minWidth;
+    const decided = decision.tried.filter((t) => t.restarts.length > 0).map((t) => t.width);
+    const lead = from === 'baseline'
+        ? `Growth started at the baseline's width ${width} (${choice.why})`
+        : `Growth started at min-width ${width} (${choice.why})`;
+    const grown = decision.kind === 'decided' && decision.capHit === null ? decision.grownWidth : undefined;
+    let summary;
+    if (from === 'min-width' || grown === undefined || decided.length === 0) {
+        summary = `${lead} and decided ${decided.length === 0 ? 'no width' : widthList(decided)}.`;
+    }
+    else {
+        const lowest = decided[0];
+        const untried = lowest > plan.minWidth ? span(plan.minWidth, lowest - 1) : null;
+        const belowRule = untried === null
+            ? ''
+            : `; ${untried} ${lowest - 1 > plan.minWidth ? 'were' : 'was'} not trained, since a width below one that is not adequate is taken not to be adequate either`;
+        let what;
+        if (grown === null)
+            what = `no width from ${width} to max-width ${plan.maxWidth} was adequate on fresh restarts`;
+        else if (grown > width)
+            what = `width ${width} was not adequate on fresh restarts, so growth stepped up to width ${grown}, the first that was`;
+        else if (grown === plan.minWidth)
+            what = `every width down to min-width ${grown} was adequate on fresh restarts`;
+        else
+            what = `width ${grown} was adequate on fresh restarts and width ${grown - 1} was not`;
+        summary = `${lead}: ${what}${belowRule}.`;
+    }
+    return { from, width, why: choice.why, decided, summary };
+}
+
+;// CONCATENATED MODULE: ./src/search/wilson.ts
+/**
+ * Wilson score interval for a binomial success rate (Wilson 1927). Used to show how
+ * sure the k-of-n restart count at a width is.
+ */
+/** Two-sided 95% normal quantile. */
+const Z95 = 1.959964;
+function wilsonInterval(successes, trials, z = Z95) {
+    if (trials <= 0)
+        return [0, 1];
+    const n = trials;
+    const p = successes / n;
+    const z2 = z * z;
+    const denom = 1 + z2 / n;
+    const centre = (p + z2 / (2 * n)) / denom;
+    const half = (z * Math.sqrt((p * (1 - p)) / n + z2 / (4 * n * n))) / denom;
+    // Clamp the rounding dust at the ends so 0/n starts at exactly 0 and n/n ends at exactly 1.
+    const lo = successes === 0 ? 0 : Math.max(0, centre - half);
+    const hi = successes === n ? 1 : Math.min(1, centre + half);
+    return [lo, hi];
+}
+
+;// CONCATENATED MODULE: ./src/search/tally.ts
+/**
+ * The one definition of an adequate width, applied: a width is adequate when at least `required`
+ * distinct networks of that width met the target on the judging rows, counting fresh restarts at
+ * that width and networks pruned down to it from a larger width. The headline is the smallest
+ * adequate width; its witness is the network of that width that did best on the steering rows
+ * (the judging rows decide whether a network counts, never which one is shown).
+ */
+
+
+/** @testOnly */
+function median(values) {
+    if (values.length === 0)
+        return null;
+    const s = [...values].sort((a, b) => a - b);
+    const mid = s.length >> 1;
+    return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
+}
+/** The n-th best finite value (1 = the best), or null when fewer than n are finite. */
+function tally_nthBest(values, n, target) {
+    const finite = values
+        .filter(Number.isFinite)
+        .sort((a, b) => (isBetter(target.metric, a, b) ? -1 : isBetter(target.metric, b, a) ? 1 : 0));
+    return finite.length >= n ? finite[n - 1] : null;
+}
+function bestOf(values, target) {
+    let best = null;
+    for (const v of values)
+        if (Number.isFinite(v) && (best === null || isBetter(target.metric, v, best)))
+            best = v;
+    return best;
+}
+/** Better witness first: steering metric, then fresh before pruned, then narrower source, then lower restart. */
+function beats(a, b, target) {
+    if (isBetter(target.metric, a.steering, b.steering))
+        return true;
+    if (isBetter(target.metric, b.steering, a.steering))
+        return false;
+    if (a.how !== b.how)
+        return a.how === 'fresh';
+    if (a.source.width !== b.source.width)
+        return a.source.width < b.source.width;
+    return a.source.restart < b.source.restart;
+}
+function pick(candidates, target) {
+    let best = null;
+    for (const c of candidates)
+        if (c.met && (best === null || beats(c, best, target)))
+            best = c;
+    return best;
+}
+function tally(plan, target, tried, pruned, seed) {
+    const fresh = new Map(tried.map((t) => [t.width, t.restarts]));
+    const links = new Map();
+    for (const r of pruned) {
+        for (const link of r.chain) {
+            const list = links.get(link.width) ?? [];
+            list.push({ ...link, source: r.source, how: 'pruned' });
+            links.set(link.width, list);
+        }
+    }
+    const widthList = [...new Set([...fresh.keys(), ...links.keys()])].sort((a, b) => a - b);
+    const widths = [];
+    const candidatesAt = new Map();
+    for (const w of widthList) {
+        const runs = fresh.get(w) ?? [];
+        const prunedHere = links.get(w) ?? [];
+        const freshCandidates = runs
+            .filter((r) => r.met && r.network !== null)
+            .map((r) => ({ ...r, width: w, network: r.network, source: r.task, how: 'fresh' }));
+        candidatesAt.set(w, [...freshCandidates, ...prunedHere]);
+        const freshMet = freshCandidates.length;
+        const prunedMet = prunedHere.filter((c) => c.met).length;
+        const all = [...runs, ...prunedHere];
+        widths.push({
+            width: w,
+            restarts: runs.length,
+            reached: runs.filter((r) => r.reached).length,
+            met: freshMet + prunedMet,
+            metBy: { fresh: freshMet, pruned: prunedMet },
+            adequate: freshMet + prunedMet >= plan.required,
+            best: bestOf(all.map((r) => r.judged), target),
+            decisive: tally_nthBest(all.map((r) => r.judged), plan.required, target),
+            bestTrain: bestOf(all.map((r) => r.train), target),
+            median: median(runs.map((r) => r.judged).filter(Number.isFinite)),
+            wilson: wilsonInterval(freshMet, runs.length),
+            medianEpochs: median(runs.map((r) => r.epochs)) ?? 0,
+            diverged: runs.filter((r) => r.stop === 'diverged').length,
+        });
+    }
+    const width = widths.find((w) => w.adequate)?.width ?? null;
+    let chosen = null;
+    if (width !== null)
+        chosen = pick(candidatesAt.get(width) ?? [], target);
+    else
+        for (const w of widthList)
+            chosen ??= pick(candidatesAt.get(w) ?? [], target);
+    return { widths, width, witness: chosen === null ? null : witnessOf(chosen, seed) };
+}
+function witnessOf(c, seed) {
+    return {
+        source: c.source,
+        seed,
+        how: c.how,
+        network: c.network,
+        train: c.train,
+        steering: c.steering,
+        judged: c.judged,
+        reached: c.reached,
+        met: c.met,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/search/search.ts
+/**
+ * The growth-and-prune search: find the smallest hidden width at which enough networks meet the
+ * target (tally.ts has the one definition), and hold a trained network (the witness) that shows it.
+ *
+ * 1. Growth (growth.ts): fresh seeded restarts, width by width upward, until one width is
+ *    adequate on fresh restarts alone.
+ * 2. Prune (task.ts): every network that met the target at that width or below is shrunk one
+ *    neuron at a time while the steering rows still meet the target; each smaller network that
+ *    also meets it on the judging rows counts for its width.
+ * 3. Tally: the smallest width with `required` networks that met the target is the answer.
+ */
+
+
+
+
+
+
+
+
+
+
+function growthPlan(search, start = null) {
+    return {
+        start: start !== null && start.from === 'baseline' ? start.width : null,
+        growth: search.growth,
+        minWidth: search.minWidth,
+        maxWidth: search.maxWidth,
+        restarts: search.restarts,
+        // A width is only adequate with a network to show for it: at least one must meet the target.
+        required: Math.max(1, search.required),
+        maxTrainings: search.maxTrainings,
+    };
+}
+function searchContext(search, target, options = {}) {
+    const train = {
+        activation: search.activation,
+        init: search.init,
+        optimizer: search.optimizer,
+        maxEpochs: search.maxEpochs,
+        checkEvery: search.checkEvery,
+        patience: search.patience,
+        weightDecay: search.weightDecay,
+        target: { ...target },
+        stall: null,
+    };
+    return {
+        seed: search.seed,
+        plan: growthPlan(search, options.start ?? null),
+        train,
+        stall: { ...(options.stall ?? DEFAULT_STALL) },
+        pruneEpochs: search.pruneEpochs,
+        pruneCandidates: options.pruneCandidates ?? DEFAULT_PRUNE_CANDIDATES,
+        deadline: search.timeBudget === null ? null : Date.now() + search.timeBudget * 1000,
+    };
+}
+function workerCount(search, options) {
+    const n = options.workers ?? search.workers ?? (0,external_node_os_namespaceObject.availableParallelism)();
+    return Math.max(1, Math.floor(n));
+}
+/** Resolves when the deadline passes (never without one); the timer does not keep the process alive. */
+function timeUp(deadline) {
+    if (deadline === null)
+        return new Promise(() => undefined);
+    return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
+}
+/** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
+async function grow(ctx, executor, target, progress, known) {
+    const plan = ctx.plan;
+    const canon = planTasks(plan);
+    const position = new Map(canon.map((t, k) => [taskKey(t), k]));
+    const results = new Map(known.map((r) => [taskKey(r), r]));
+    const inflight = new Map();
+    const clock = timeUp(ctx.deadline);
+    let best = null;
+    for (;;) {
+        const decision = decideGrowth(plan, (t) => results.get(taskKey(t)));
+        // Tasks before the first undecided one that are still running can no longer matter.
+        const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
+        for (const key of [...inflight.keys()]) {
+            if ((position.get(key) ?? 0) < frontier) {
+                const [w, i] = key.split(':').map(Number);
+                executor.discard({ width: w, restart: i });
+                inflight.delete(key);
+            }
+        }
+        if (decision.kind === 'decided')
+            return { decision, results, outOfTime: false };
+        if (ctx.deadline !== null && Date.now() >= ctx.deadline)
+            return { decision, results, outOfTime: true };
+        for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
+            const key = taskKey(canon[k]);
+            if (results.has(key) || inflight.has(key))
+                continue;
+            inflight.set(key, executor.train(canon[k]));
+        }
+        const keyed = [...inflight.entries()].map(([key, p]) => p.then((r) => ({ key, r })));
+        const done = await Promise.race([...keyed, clock]);
+        if (done === 'time')
+            return { decision, results, outOfTime: true };
+        inflight.delete(done.key);
+        // A task handed back without a result gave up because the time ran out.
+        if (done.r === null)
+            return { decision, results, outOfTime: true };
+        results.set(done.key, done.r);
+        if (Number.isFinite(done.r.judged) && (best === null || isBetter(target.metric, done.r.judged, best)))
+            best = done.r.judged;
+        progress({
+            phase: 'growth',
+            kind: 'done',
+            width: done.r.finalWidth,
+            restart: done.r.restart,
+            epoch: done.r.epochs,
+            best,
+        });
+    }
+}
+/** Every network that met the target at the grown width or below, once each, in (width, restart) order. */
+function pruneSources(tried, grownWidth) {
+    const jobs = [];
+    const seen = new Set();
+    for (const { width, restarts } of tried) {
+        if (grownWidth !== null && width > grownWidth)
+            continue;
+        for (const r of restarts) {
+            const key = taskKey(r.task);
+            if (!r.met || r.network === null || seen.has(key))
+                continue;
+            seen.add(key);
+            jobs.push({ source: r.task, network: r.network });
+        }
+    }
+    return jobs;
+}
+/** Run the whole search. Outside `timing`, the result depends only on the data, the config and the code. */
+async function runSearch(data, search, target, options = {}) {
+    const now = options.now ?? (() => external_node_perf_hooks_namespaceObject.performance.now());
+    const t0 = now();
+    const ctx = searchContext(search, target, options);
+    const plan = ctx.plan;
+    const size = workerCount(search, options);
+    // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
+    const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
+    const executor = size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
+    const progress = (e) => options.onProgress?.(e);
+    const judging = judgingRowsOf(data, options.judgingFolded ?? false);
+    const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
+    const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
+    try {
+        const first = planTasks(plan)[0]?.width ?? plan.minWidth;
+        progress({ phase: 'growth', kind: 'start', width: first, restart: 0, epoch: 0, best: null });
+        const grown = await grow(ctx, executor, target, progress, options.known?.results ?? []);
+        const growthEnd = now();
+        if (options.known !== undefined) {
+            const planned = new Set(options.known.results.map(taskKey));
+            const here = grown.decision.tried
+                .flatMap((t) => t.restarts.map((r) => r.task))
+                .filter((t) => !planned.has(taskKey(t)));
+            if (here.length > 0)
+                options.onLocalWork?.(`${here.length} growth ${here.length === 1 ? 'training' : 'trainings'} the plan did not cover (widths ${[...new Set(here.map((t) => t.width))].join(', ')})`);
+        }
+        const timing = (end) => ({
+            searchSeconds: secondsFromMs(end - t0),
+            growthSeconds: secondsFromMs(growthEnd - t0),
+            pruneSeconds: secondsFromMs(end - growthEnd),
+        });
+        const start = walkReport(plan, options.start ?? null, grown.decision);
+        const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging, start };
+        const decision = grown.decision;
+        if (decision.kind === 'need') {
+            return {
+                ...base,
+                outcome: 'inconclusive',
+                width: null,
+                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
+                trainings: decision.trainings,
+                notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings, decision.tried)],
+                timing: timing(now()),
+            };
+        }
+        if (decision.capHit !== null) {
+            const why = `The cap of ${search.maxTrainings} trainings was reached`;
+            return {
+                ...base,
+                outcome: 'inconclusive',
+                width: null,
+                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
+                trainings: decision.trainings,
+                notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings, decision.tried)],
+                timing: timing(now()),
+            };
+        }
+        // Prune phase: shrink every network that met the target at the grown width or below.
+        const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
+        if (jobs.length > 0) {
+            const from = Math.max(...jobs.map((j) => j.source.width));
+            progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
+        }
+        const prunedElsewhere = new Map((options.known?.pruned ?? []).map((r) => [taskKey(r.source), r]));
+        const pruned = await Promise.all(jobs.map(async (job) => {
+            const ready = prunedElsewhere.get(taskKey(job.source));
+            if (ready !== undefined && !ready.interrupted)
+                return ready;
+            if (options.known !== undefined)
+                options.onLocalWork?.(`pruning the network of width ${job.source.width}, restart ${job.source.restart + 1}`);
+            const r = await executor.prune(job);
+            const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
+            progress({
+                phase: 'prune',
+                kind: 'done',
+                width: last,
+                restart: job.source.restart,
+                epoch: r.steps.length,
+                best: null,
+            });
+            return r;
+        }));
+        const trainings = decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0);
+        const t = tally(plan, target, decision.tried, pruned, ctx.seed);
+        const steps = pruned.flatMap((r) => r.steps);
+        if (pruned.some((r) => r.interrupted) && decision.grownWidth !== null) {
+            return {
+                ...base,
+                outcome: 'inconclusive',
+                grownWidth: decision.grownWidth,
+                width: null,
+                witness: t.witness,
+                appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
+                widths: t.widths,
+                pruning: steps,
+                trainings,
+                notes: [stoppedPruningNote(budgetWhy, decision.grownWidth, trainings)],
+                timing: timing(now()),
+            };
+        }
+        const found = t.width !== null && t.witness !== null;
+        return {
+            outcome: found ? 'found' : 'not-found',
+            width: found ? t.width : null,
+            grownWidth: decision.grownWidth,
+            metric: found ? t.witness.judged : null,
+            witness: t.witness,
+            appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
+            widths: t.widths,
+            pruning: steps,
+            trainings,
+            notes: found ? [] : notFoundNotes(plan, target, t.widths, judgedOn),
+            judging,
+            start,
+            timing: timing(now()),
+        };
+    }
+    finally {
+        await executor.close();
+    }
+}
+
+;// CONCATENATED MODULE: ./src/search/worker.ts
+/**
+ * The worker-thread side of the pool. A bundle calls runSearchWorker() when it starts
+ * as a worker (`!isMainThread`); the thread then answers task messages until terminated.
+ */
+
+
+function runSearchWorker() {
+    const port = external_node_worker_threads_namespaceObject.parentPort;
+    if (port === null)
+        throw new Error('runSearchWorker() must run in a worker thread');
+    let data = null;
+    let ctx = null;
+    let cancel = new Int32Array(1).fill(-1);
+    port.on('message', (msg) => {
+        if (msg.type === 'init') {
+            data = msg.data;
+            ctx = msg.ctx;
+            cancel = msg.cancel;
+            return;
+        }
+        let reply;
+        try {
+            if (data === null || ctx === null)
+                throw new Error('search worker got a task before its data');
+            const id = msg.id;
+            const result = msg.type === 'train'
+                ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id)
+                : runPruneJob(data, ctx, msg.job);
+            reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
+        }
+        catch (e) {
+            reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };
+        }
+        port.postMessage(reply);
+    });
+}
+
+;// CONCATENATED MODULE: ./src/search/index.ts
+/** The growth-and-prune search: public surface. */
+
+
+
+
+
+
+
+
+;// CONCATENATED MODULE: ./src/search/shard.ts
+
+
+async function runShard(data, search, target, work, options = {}) {
+    const ctx = searchContext(search, target, options);
+    const size = workerCount(search, options);
+    const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
+    const executor = size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
+    const progress = options.onProgress ?? (() => undefined);
+    try {
+        progress({ phase: 'growth', kind: 'start', width: work.tasks[0]?.width ?? 1, restart: 0, epoch: 0, best: null });
+        const outcomes = await Promise.all(work.tasks.map(async (task) => {
+            const result = await executor.train({ width: task.width, restart: task.restart });
+            if (result !== null)
+                progress({
+                    phase: 'growth',
+                    kind: 'done',
+                    width: result.finalWidth,
+                    restart: result.restart,
+                    epoch: result.epochs,
+                    best: null,
+                });
+            if (result === null || !task.prune || !result.met || result.network === null)
+                return { result, pruned: null };
+            const pruned = await executor.prune({
+                source: { width: task.width, restart: task.restart },
+                network: result.network,
+            });
+            progress({
+                phase: 'prune',
+                kind: 'done',
+                width: task.width,
+                restart: task.restart,
+                epoch: pruned.steps.length,
+                best: null,
+            });
+            return { result, pruned: pruned.interrupted ? null : pruned };
+        }));
+        return {
+            results: outcomes.flatMap((o) => (o.result === null ? [] : [o.result])),
+            pruned: outcomes.flatMap((o) => (o.pruned === null ? [] : [o.pruned])),
+        };
+    }
+    finally {
+        await executor.close();
+    }
+}
+
+;// CONCATENATED MODULE: ./src/report/assemble.ts
+
+
+
+/** The report with the data stage's facts; verdict and search come later. */
+function dataStageReport(config, data, timing) {
+    const ds = data.dataset;
+    const classes = data.profile.classes;
+    return {
+        schema: 'neuron-budget/report@2',
+        tool: { name: TOOL_NAME, version: TOOL_VERSION },
+        reasons: [],
+        width: null,
+        metric: { name: config.target.metric, value: null, threshold: config.target.threshold },
+        baseline: null,
+        data: {
+            file: displayPath(config.root, config.data.path),
+            rows: data.rows,
+            droppedRows: data.droppedRows,
+            trainRows: ds.trainRows,
+            validationRows: ds.validationRows,
+            judgingRows: ds.judgingRows,
+            inputs: ds.inputs,
+            outputs: ds.outputs,
+            task: ds.task,
+            fingerprint: data.fingerprint,
+            classes: classes === null
+                ? null
+                : Object.keys(classes)
+                    .sort()
+                    .map((label) => ({ label, count: classes[label] })),
+            targetSpread: data.targetSpread,
+        },
+        search: null,
+        device: null,
+        changes: null,
+        timing: { ...timing },
+    };
+}
+/** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
+function searchStageReport(report, search, required, context) {
+    const { encoding } = context;
+    const costOf = (width) => deviceCost(costShapeOf({ inputs: report.data.inputs, width, outputs: report.data.outputs }, encoding));
+    return {
+        ...report,
+        device: deviceOf(search, context, report.data.inputs, report.data.outputs),
+        reasons: [],
+        width: search.width,
+        metric: { ...report.metric, value: search.metric },
+        search: {
+            outcome: search.outcome,
+            grownWidth: search.grownWidth,
+            required,
+            widths: search.widths.map((w) => ({ ...w, cost: costOf(w.width) })),
+            pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
+            trainings: search.trainings,
+            notes: search.notes,
+            judging: search.judging,
+            start: search.start,
+            witness: assemble_witnessOf(search),
+        },
+    };
+}
+/** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
+function shownSource(task) {
+    return { width: task.width, restart: task.restart + 1 };
+}
+function assemble_witnessOf(search) {
+    const w = search.witness;
+    if (w === null)
+        return null;
+    return {
+        width: w.network.width,
+        how: w.how,
+        source: shownSource(w.source),
+        judged: w.judged,
+        steering: w.steering,
+        train: w.train,
+        met: w.met,
+        adequate: search.width !== null,
+    };
+}
+function deviceOf(search, context, inputs, outputs) {
+    const w = search.witness;
+    const a = search.appraisal;
+    if (w === null || a === null)
+        return null;
+    const width = w.network.width;
+    const labels = context.encoding.target.classes;
+    const floors = context.target.recallFloors ?? null;
+    const finite = (v) => (v === undefined || !Number.isFinite(v) ? null : v);
+    return {
+        precision: context.target.precision ?? 'float32',
+        inputs,
+        width,
+        outputs,
+        cost: deviceCost(costShapeOf({ inputs, width, outputs }, context.encoding)),
+        metric: { float32: a.float32, int8: a.int8 },
+        classes: labels === null || a.confusion === null
+            ? null
+            : labels.map((label, c) => ({
+                label,
+                rows: a.confusion[c].reduce((s, v) => s + v, 0),
+                recall: finite(a.recall?.[c]),
+                precision: finite(a.precision?.[c]),
+                floor: floors === null || floors[c] <= 0 ? null : floors[c],
+            })),
+        confusion: a.confusion,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/job/finish.ts
+/**
+ * What every stage that ends in a search result does last (check, baseline, merge): compare
+ * with the baseline, assemble the report, write the witness and the report, and render the screens.
+ */
+
+
+
+
+
+
+
+
+
+async function finishJob(job, search, options) {
+    const { config, data, timing } = job;
+    timing.growthSeconds = search.timing.growthSeconds;
+    timing.pruneSeconds = search.timing.pruneSeconds;
+    const cost = search.witness === null ? null : deviceCost(costShapeOf(search.witness.network, data.dataset.encoding));
+    const gate = await runGateStage({
+        mode: options.mode,
+        result: search,
+        cost,
+        loaded: data,
+        config,
+        baselinePath: job.baselinePath,
+        baselineShown: job.baselineShown,
+        previous: job.previous,
+        commit: options.commit ?? null,
+        date: new Date(),
+        toolVersion: TOOL_VERSION,
+    });
+    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
+        encoding: data.dataset.encoding,
+        target: config.target,
+    }), gate.outcome, gate.gate);
+    let modelWritten = null;
+    if (options.modelPath) {
+        if (search.witness === null) {
+            options.log?.('model not written: no network met the target');
+        }
+        else {
+            const backing = { on: search.judging.on, adequate: search.width !== null };
+            const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
+            const provenance = {
+                tool: { name: 'neuron-budget', version: TOOL_VERSION },
+                data: data.fingerprint,
+                config: displayPath(config.root, config.file),
+            };
+            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration, provenance);
+            await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
+            modelWritten = options.modelPath;
+        }
+    }
+    if (options.reportPath) {
+        await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
+    }
+    const verdict = report.verdict;
+    const context = {
+        surface: options.surface ?? 'cli',
+        mode: options.mode,
+        configShown: options.configShown ?? null,
+        baselineFile: job.baselineFile,
+        baseline: gate.record,
+    };
+    return {
+        report,
+        verdict,
+        markdown: renderMarkdown(report, { context }),
+        text: renderText(report, context),
+        baselineWritten: gate.written,
+        baselineRecord: gate.record,
+        modelWritten,
+        exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
+    };
 }
 
 ;// CONCATENATED MODULE: ./src/config/build.ts
@@ -18853,8 +21507,6 @@ function keyedTable() {
     return Object.create(null);
 }
 
-;// CONCATENATED MODULE: external "node:os"
-const external_node_os_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:os");
 ;// CONCATENATED MODULE: external "node:v8"
 const external_node_v8_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:v8");
 ;// CONCATENATED MODULE: ./src/data/memory.ts
@@ -19197,109 +21849,6 @@ recordLine, header) {
     return error;
 }
 
-;// CONCATENATED MODULE: ./src/common/random.ts
-/**
- * Seeded random numbers: xoshiro128** version 1.1 (Blackman & Vigna), seeded through
- * SplitMix64 (Steele, Lea & Flood). Only 32-bit integer operations in the hot path, so every
- * engine produces the same stream. Every random choice in neuron-budget (the data split, the
- * initial weights) draws from here.
- */
-const MASK64 = (1n << 64n) - 1n;
-const GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
-/** One SplitMix64 output step: advances `state` by the golden gamma and mixes it. */
-function splitMix64Mix(z) {
-    z = ((z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n) & MASK64;
-    z = ((z ^ (z >> 27n)) * 0x94d049bb133111ebn) & MASK64;
-    return z ^ (z >> 31n);
-}
-/** A SplitMix64 generator over 64-bit unsigned BigInts (used for seeding only). @testOnly */
-class SplitMix64 {
-    state;
-    constructor(seed) {
-        this.state = BigInt.asUintN(64, seed);
-    }
-    next() {
-        this.state = (this.state + GOLDEN_GAMMA) & MASK64;
-        return splitMix64Mix(this.state);
-    }
-}
-/** xoshiro128** 1.1: the scrambler reads s[1] (version 1.0 wrongly read s[0]). @testOnly */
-class Xoshiro128StarStar {
-    a;
-    b;
-    c;
-    d;
-    constructor(s0, s1, s2, s3) {
-        this.a = s0 | 0;
-        this.b = s1 | 0;
-        this.c = s2 | 0;
-        this.d = s3 | 0;
-        if ((this.a | this.b | this.c | this.d) === 0) {
-            throw new RangeError('xoshiro128** state must not be all zero');
-        }
-    }
-    /** The four state words as unsigned 32-bit integers. */
-    state() {
-        return [this.a >>> 0, this.b >>> 0, this.c >>> 0, this.d >>> 0];
-    }
-    nextUint32() {
-        const r = Math.imul(this.b, 5);
-        const result = Math.imul((r << 7) | (r >>> 25), 9) >>> 0;
-        const t = this.b << 9;
-        this.c ^= this.a;
-        this.d ^= this.b;
-        this.b ^= this.c;
-        this.a ^= this.d;
-        this.c ^= t;
-        this.d = (this.d << 11) | (this.d >>> 21);
-        return result;
-    }
-    nextDouble() {
-        const hi = this.nextUint32() >>> 5;
-        const lo = this.nextUint32() >>> 6;
-        return (hi * 67108864 + lo) / 9007199254740992;
-    }
-}
-/**
- * Our seeding convention: a SplitMix64 generator started at `seed`; its first two outputs
- * r0, r1 give the state words [lo(r0), hi(r0), lo(r1), hi(r1)].
- */
-function xoshiroFromSeed(seed) {
-    const sm = new SplitMix64(seed);
-    for (;;) {
-        const r0 = sm.next();
-        const r1 = sm.next();
-        const w = [r0 & 0xffffffffn, r0 >> 32n, r1 & 0xffffffffn, r1 >> 32n].map(Number);
-        // An all-zero state is a fixed point; draw again in the (2^-128) case it happens.
-        if ((w[0] | w[1] | w[2] | w[3]) !== 0)
-            return new Xoshiro128StarStar(w[0], w[1], w[2], w[3]);
-    }
-}
-function toUint64(n, what) {
-    if (!Number.isSafeInteger(n))
-        throw new RangeError(`${what} must be a safe integer, got ${n}`);
-    return BigInt.asUintN(64, BigInt(n));
-}
-/**
- * The stream for restart `restart` of width `width` under base seed `seed`. The three numbers
- * are chained through the SplitMix64 mixer so that neighbouring triples give unrelated streams.
- */
-function rngFor(seed, width, restart) {
-    let h = splitMix64Mix((toUint64(seed, 'seed') + GOLDEN_GAMMA) & MASK64);
-    h = splitMix64Mix(((h ^ toUint64(width, 'width')) + GOLDEN_GAMMA * 2n) & MASK64);
-    h = splitMix64Mix(((h ^ toUint64(restart, 'restart')) + GOLDEN_GAMMA * 3n) & MASK64);
-    return xoshiroFromSeed(h);
-}
-/** Fisher–Yates shuffle in place. */
-function shuffle(items, rng) {
-    for (let i = items.length - 1; i > 0; i--) {
-        const j = Math.floor(rng.nextDouble() * (i + 1));
-        const t = items[i];
-        items[i] = items[j];
-        items[j] = t;
-    }
-}
-
 ;// CONCATENATED MODULE: ./src/data/split.ts
 /**
  * Deterministic three-way split, stratified by class, chosen by a seeded Fisher–Yates
@@ -19550,895 +22099,6 @@ async function checkExists(file) {
         throw new ConfigKeyProblem('data.path', `expected a CSV file, found a folder at ${file.shown}`);
 }
 
-;// CONCATENATED MODULE: ./src/gate/settings.ts
-/**
- * The config settings that change the search's answer, and their fingerprint. Two runs
- * with different settings answer different questions, so the gate says so rather than
- * comparing their widths silently. Worker count and time budget are left out: they
- * change how long the search takes, not what it finds. The data file's path is left out
- * too: the data are compared by content (fingerprint and profile, see data-changes.ts),
- * so a renamed file with the same rows is the same question, and a file with other rows
- * shows up as a data change, which is what the gate exists to measure.
- */
-
-
-
-
-function resultSettings(config) {
-    const out = {};
-    for (const section of spec_CONFIG_SPEC) {
-        const values = config[section.name];
-        for (const key of section.keys) {
-            if (!key.changesResult)
-                continue;
-            out[`${section.name}.${key.name}`] = settingValue(values[fieldName(key.name)]);
-        }
-    }
-    // The order of ignored columns does not matter; the order of features does (input order).
-    const ignore = out['data.ignore'];
-    if (Array.isArray(ignore))
-        ignore.sort();
-    return out;
-}
-/** A setting as the baseline records it: a plain value, a list of texts, or a structured value as its canonical text. */
-function settingValue(value) {
-    if (value === undefined || value === null)
-        return null;
-    if (Array.isArray(value) && value.every((v) => typeof v === 'string'))
-        return [...value];
-    if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean')
-        return value;
-    // target.min-recall: {every} or {classes: [...]}, written the way the config states it.
-    const rule = value;
-    if (typeof rule.every === 'number')
-        return rule.every;
-    return JSON.stringify(Object.fromEntries((rule.classes ?? []).map((c) => [c.label, c.min])));
-}
-/** sha256 hex of the settings in canonical form (keys sorted). */
-function settingsFingerprint(settings) {
-    const keys = Object.keys(settings).sort();
-    const canonical = JSON.stringify(keys.map((k) => [k, settings[k]]));
-    return (0,external_node_crypto_namespaceObject.createHash)('sha256').update(canonical, 'utf8').digest('hex');
-}
-/** Settings that differ, as "key: before → after", in key order. */
-function settingsDifferences(before, after) {
-    const keys = [...new Set([...Object.keys(before), ...Object.keys(after)])].sort();
-    const out = [];
-    for (const k of keys) {
-        const a = show(before[k]);
-        const b = show(after[k]);
-        if (a !== b)
-            out.push(`${k}: ${a} → ${b}`);
-    }
-    return out;
-}
-function show(v) {
-    if (v === undefined)
-        return '(not set)';
-    if (v === null)
-        return '(default)';
-    // Column names are the repository's strings: each is clipped, and long lists would drown the
-    // sentence they appear in. Escaping is the renderer's (text, Markdown), as for every reason.
-    const s = Array.isArray(v) ? `[${v.map((name) => clip(name, 40)).join(', ')}]` : clip(String(v), 120);
-    return clip(s, 120);
-}
-
-;// CONCATENATED MODULE: ./src/gate/compare.ts
-
-
-
-function compare(input) {
-    const { result, target, search, gate, baseline } = input;
-    const settingsChanged = baseline ? settingsDifferences(baseline.config.settings, input.settings) : [];
-    const flags = [];
-    if (settingsChanged.length > 0) {
-        flags.push(`The settings that shape the result differ from the baseline's (${settingsChanged.join('; ')}), so this compares answers to different questions.`);
-    }
-    if (result.outcome === 'inconclusive') {
-        const how = result.notes.length > 0 ? ` ${result.notes.map(sentence).join(' ')}` : '';
-        return {
-            verdict: 'inconclusive',
-            reasons: [`The search ran out of budget before it could decide the smallest adequate width.${how}`, ...flags],
-            settingsChanged,
-        };
-    }
-    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
-        const best = bestSeen(result.widths, target.metric);
-        const bestText = best ? `; the best network reached ${formatMetric(best.value)} (width ${best.width})` : '';
-        const networks = search.required === 1 ? 'a network that meets' : `${search.required} networks that meet`;
-        return {
-            verdict: 'fail',
-            reasons: [
-                `No width from ${search.minWidth} to ${search.maxWidth} has ${networks} ${targetPhrase(target.metric, target.threshold)}${bestText}.`,
-                ...result.notes.map(sentence),
-                ...flags,
-            ],
-            settingsChanged,
-        };
-    }
-    const width = result.width;
-    const failures = [];
-    if (gate.maxWidth !== null && width > gate.maxWidth) {
-        failures.push(`Needs ${neurons(width)}; the device budget is ${gate.maxWidth}.`);
-    }
-    failures.push(...budgetFailures(input));
-    if (!baseline) {
-        if (failures.length > 0)
-            return { verdict: 'fail', reasons: [...failures, ...flags], settingsChanged };
-        return {
-            verdict: 'new',
-            reasons: [
-                `Needs ${neurons(width)}; there is no baseline yet to compare with, so record this result as the baseline.`,
-                ...flags,
-            ],
-            settingsChanged,
-        };
-    }
-    const before = baseline.result.width;
-    const growth = width - before;
-    const allowed = gate.allowedGrowth;
-    const allowance = allowed === 0 ? 'no growth is allowed' : `the allowed growth is ${allowed}`;
-    let comparison;
-    if (growth > allowed) {
-        failures.push(`Needs ${neurons(width)}, ${growth} more than the baseline's ${before}; ${allowance}.`);
-        comparison = '';
-    }
-    else if (growth > 0) {
-        comparison = `Needs ${neurons(width)}, ${growth} more than the baseline's ${before}, within the allowed growth of ${allowed}.`;
-    }
-    else if (growth < 0) {
-        comparison = `Needs ${neurons(width)}, ${-growth} fewer than the baseline's ${before}; refresh the baseline to keep the gain.`;
-    }
-    else {
-        comparison = `Needs ${neurons(width)}, the same as the baseline.`;
-    }
-    const tolerance = toleranceFlag(result.metric, baseline, target.metric, gate.metricTolerance);
-    if (tolerance)
-        flags.push(tolerance);
-    if (failures.length > 0) {
-        const context = comparison === '' ? [] : [comparison];
-        return { verdict: 'fail', reasons: [...failures, ...context, ...flags], settingsChanged };
-    }
-    return { verdict: growth < 0 ? 'improved' : 'pass', reasons: [comparison, ...flags], settingsChanged };
-}
-function toleranceFlag(value, baseline, metric, tolerance) {
-    const before = baseline.result.metric.value;
-    const worse = higherIsBetter(metric) ? before - value : value - before;
-    // A tiny epsilon so that a difference equal to the tolerance (up to rounding) is not flagged.
-    if (worse <= tolerance + 1e-12)
-        return null;
-    return `Flag (does not fail the gate): ${metric} at the chosen width is ${formatMetric(value)}, ${formatMetric(worse)} worse than the baseline's ${formatMetric(before)}; the tolerance is ${formatMetric(tolerance)}.`;
-}
-function bestSeen(widths, metric) {
-    let best = null;
-    for (const w of widths) {
-        if (w.best === null)
-            continue;
-        const better = best === null || (higherIsBetter(metric) ? w.best > best.value : w.best < best.value);
-        if (better)
-            best = { width: w.width, value: w.best };
-    }
-    return best;
-}
-function sentence(s) {
-    const t = s.trim();
-    const capital = t.charAt(0).toUpperCase() + t.slice(1);
-    return /[.!?]$/.test(capital) ? capital : `${capital}.`;
-}
-/** One sentence per byte or operation budget the witness exceeds, naming the figure and the budget. */
-function budgetFailures(input) {
-    const { gate, device } = input;
-    if (!device)
-        return [];
-    const { cost, precision } = device;
-    const out = [];
-    const at = `(width ${input.result.width})`;
-    if (gate.maxFlashBytes != null && cost.flashBytes[precision] > gate.maxFlashBytes) {
-        out.push(`Needs ${formatCount(cost.flashBytes[precision])} flash bytes for its ${precision} weights ${at}; the device budget is ${formatCount(gate.maxFlashBytes)} bytes.`);
-    }
-    if (gate.maxRamBytes != null && cost.ramBytes[precision] > gate.maxRamBytes) {
-        out.push(`Needs ${formatCount(cost.ramBytes[precision])} RAM bytes for one ${precision} inference ${at}; the device budget is ${formatCount(gate.maxRamBytes)} bytes.`);
-    }
-    if (gate.maxMacs != null && cost.macs > gate.maxMacs) {
-        out.push(`Needs ${formatCount(cost.macs)} multiply-accumulates per inference ${at}; the device budget is ${formatCount(gate.maxMacs)}.`);
-    }
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/gate/data-changes.ts
-/**
- * A numeric feature counts as shifted when its mean moved by more than this many
- * baseline standard deviations. Half a standard deviation is a common rule of thumb
- * for a "medium" shift (common practice, no single source).
- */
-const MEAN_SHIFT_IN_STD = 0.5;
-/**
- * A numeric feature's range counts as widened when it grew on a side (a new minimum below the
- * baseline's, or a new maximum above it) by more than this many baseline standard deviations.
- * A rule of thumb (common practice, no single source): the extremes of a sample wander by chance
- * as rows are added (for normal data and a thousand rows the sample maximum's spread is about
- * σ/√(2 ln n) ≈ 0.27σ, from extreme-value theory; figure from memory), so a new extreme within
- * a few hundredths of σ of the old one is no change a reviewer should read about, while one
- * half a σ beyond it puts rows where the baseline's networks never saw any.
- */
-const RANGE_GROWTH_IN_STD = 0.5;
-function dataChanges(before, after, fingerprints, files = { before: '', after: '' }) {
-    const columnsBefore = new Set(before.columns);
-    const columnsAfter = new Set(after.columns);
-    const columnsAdded = after.columns.filter((c) => !columnsBefore.has(c));
-    const columnsRemoved = before.columns.filter((c) => !columnsAfter.has(c));
-    let classes = null;
-    const classesAppeared = [];
-    const classesVanished = [];
-    if (before.classes !== null || after.classes !== null) {
-        const b = tableOf(before.classes);
-        const a = tableOf(after.classes);
-        const labels = [...new Set([...b.keys(), ...a.keys()])].sort(byCodeUnit);
-        classes = labels.map((label) => ({ label, before: b.get(label) ?? 0, after: a.get(label) ?? 0 }));
-        for (const label of labels) {
-            if (!b.has(label))
-                classesAppeared.push(label);
-            if (!a.has(label))
-                classesVanished.push(label);
-        }
-    }
-    const features = [];
-    const categories = [];
-    const featuresBefore = tableOf(before.features);
-    const featuresAfter = tableOf(after.features);
-    const shared = [...featuresAfter.keys()].filter((name) => featuresBefore.has(name)).sort(byCodeUnit);
-    for (const name of shared) {
-        const b = featuresBefore.get(name);
-        const a = featuresAfter.get(name);
-        if (b.kind === 'numeric' && a.kind === 'numeric') {
-            const delta = atMostMax(Math.abs(a.mean - b.mean));
-            const shiftInStd = b.std > 0 ? atMostMax(delta / b.std) : null;
-            const meanMoved = shiftInStd === null ? delta > 0 : shiftInStd > MEAN_SHIFT_IN_STD;
-            const rangeGrowth = growthOf(b, a);
-            const rangeWidened = grewMeaningfully(rangeGrowth.below, b.std) || grewMeaningfully(rangeGrowth.above, b.std);
-            if (meanMoved || rangeWidened) {
-                features.push({
-                    name,
-                    meanBefore: b.mean,
-                    meanAfter: a.mean,
-                    stdBefore: b.std,
-                    shiftInStd,
-                    meanMoved,
-                    rangeBefore: [b.min, b.max],
-                    rangeAfter: [a.min, a.max],
-                    rangeWidened,
-                    rangeGrowth,
-                });
-            }
-        }
-        else if (b.kind === 'categorical' && a.kind === 'categorical') {
-            const countsBefore = tableOf(b.counts);
-            const countsAfter = tableOf(a.counts);
-            const appeared = [...countsAfter.keys()].filter((c) => !countsBefore.has(c)).sort(byCodeUnit);
-            const vanished = [...countsBefore.keys()].filter((c) => !countsAfter.has(c)).sort(byCodeUnit);
-            if (appeared.length > 0 || vanished.length > 0)
-                categories.push({ feature: name, appeared, vanished });
-        }
-    }
-    return {
-        changed: fingerprints.before !== fingerprints.after,
-        file: files.before === files.after ? null : { before: files.before, after: files.after },
-        rows: { before: before.rows, after: after.rows },
-        classes,
-        classesAppeared,
-        classesVanished,
-        features,
-        categories,
-        columnsAdded,
-        columnsRemoved,
-    };
-}
-/** How far the range reaches beyond the baseline's on each side, in the feature's units and in baseline stds. */
-function growthOf(b, a) {
-    const below = atMostMax(Math.max(0, b.min - a.min));
-    const above = atMostMax(Math.max(0, a.max - b.max));
-    const inStd = (g) => (b.std > 0 ? atMostMax(g / b.std) : null);
-    return { below, above, belowInStd: inStd(below), aboveInStd: inStd(above) };
-}
-/** A side grew meaningfully: by more than RANGE_GROWTH_IN_STD baseline stds (any growth for a constant feature). */
-function grewMeaningfully(growth, std) {
-    return std > 0 ? growth > RANGE_GROWTH_IN_STD * std : growth > 0;
-}
-/**
- * A profile table as a Map. The tables are keyed by the data's own strings and a baseline file
- * is read with JSON.parse, so a label may be `constructor` or `__proto__`: only own keys count.
- */
-function tableOf(table) {
-    return new Map(table === null ? [] : Object.entries(table));
-}
-/**
- * Two finite means read from a baseline file can differ by more than the largest float; the
- * shift is then "at least the largest float", never Infinity (which JSON cannot hold).
- */
-function atMostMax(x) {
-    return Math.min(x, Number.MAX_VALUE);
-}
-/** Locale-independent order, so the summary reads the same on every machine. */
-function byCodeUnit(a, b) {
-    return a < b ? -1 : a > b ? 1 : 0;
-}
-
-;// CONCATENATED MODULE: ./src/gate/evaluate.ts
-
-
-
-function evaluateGate(input) {
-    const { result, loaded, config, baseline } = input;
-    const cost = input.cost ?? null;
-    const comparison = compare({
-        result,
-        target: config.target,
-        search: { minWidth: config.search.minWidth, maxWidth: config.search.maxWidth, required: config.search.required },
-        gate: config.gate,
-        baseline,
-        settings: resultSettings(config),
-        device: cost === null ? null : { cost, precision: config.target.precision ?? 'float32' },
-    });
-    const changes = baseline
-        ? dataChanges(baseline.data.profile, loaded.profile, { before: baseline.data.fingerprint, after: loaded.fingerprint }, { before: baseline.data.file, after: config.data.pathAsWritten.replace(/\\/g, '/') })
-        : null;
-    return { ...comparison, changes, baseline };
-}
-
-;// CONCATENATED MODULE: ./schema/baseline.schema.json
-const baseline_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","title":"neuron-budget baseline","description":"The committed record of the last accepted neuron-budget result and its history. Written by `neuron-budget baseline` (or the action\'s update-baseline input); compared against by `neuron-budget check`.","type":"object","additionalProperties":false,"required":["schema","tool","result","widths","data","config","history"],"properties":{"schema":{"description":"Format and version of this file.","const":"neuron-budget/baseline@2"},"tool":{"type":"object","additionalProperties":false,"required":["name","version"],"properties":{"name":{"const":"neuron-budget"},"version":{"type":"string","description":"Version of neuron-budget that wrote the file."}}},"result":{"description":"The accepted result: the smallest adequate width and its metric.","type":"object","additionalProperties":false,"required":["width","metric","grownWidth","met","restarts","searchSeconds"],"properties":{"width":{"type":"integer","minimum":1,"description":"Smallest adequate width (hidden neurons)."},"metric":{"type":"object","additionalProperties":false,"required":["name","value","threshold"],"properties":{"name":{"enum":["accuracy","rmse","mae","max-abs-error"]},"value":{"type":"number","description":"The witness network\'s metric on the rows that judged it."},"threshold":{"type":"number"}}},"grownWidth":{"type":["integer","null"],"minimum":1,"description":"Smallest width adequate on fresh restarts alone (where growth stopped), before pruning."},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at `width` (0 when only pruned networks back it)."},"searchSeconds":{"type":["number","null"],"minimum":0,"description":"Wall-clock seconds of the search; informative only."},"met":{"type":"integer","minimum":0,"description":"Networks of `width` that met the target on the judging rows (fresh restarts and pruned networks)."}}},"widths":{"description":"The per-width curve of the search that produced the result.","type":"array","items":{"type":"object","additionalProperties":false,"required":["width","restarts","met","adequate","best"],"properties":{"width":{"type":"integer","minimum":1},"restarts":{"type":"integer","minimum":0,"description":"Fresh restarts run at this width."},"met":{"type":"integer","minimum":0,"description":"Networks of this width that met the target (fresh and pruned)."},"adequate":{"type":"boolean","description":"At least search.required networks of this width met the target."},"best":{"type":["number","null"],"description":"Best judged metric over the networks of this width; null when none finished."},"decisive":{"type":["number","null"],"description":"The search.required-th best judged metric over the networks of this width: at or past the threshold exactly when the width is adequate (recall floors aside); null when fewer finished."}}}},"data":{"type":"object","additionalProperties":false,"required":["file","rows","fingerprint","profile"],"properties":{"file":{"type":"string","description":"Data file as written in the config."},"rows":{"type":"integer","minimum":0},"fingerprint":{"$ref":"#/$defs/sha256"},"profile":{"type":"object","additionalProperties":false,"required":["rows","classes","columns","features"],"properties":{"rows":{"type":"integer","minimum":0},"classes":{"description":"Rows per class (classification); null for regression.","type":["object","null"],"additionalProperties":{"type":"integer","minimum":0}},"columns":{"type":"array","items":{"type":"string"}},"features":{"type":"object","additionalProperties":{"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","mean","std","min","max","missing"],"properties":{"kind":{"const":"numeric"},"mean":{"type":"number"},"std":{"type":"number","minimum":0},"min":{"type":"number"},"max":{"type":"number"},"missing":{"type":"integer","minimum":0}}},{"type":"object","additionalProperties":false,"required":["kind","counts","missing"],"properties":{"kind":{"const":"categorical"},"counts":{"type":"object","additionalProperties":{"type":"integer","minimum":0}},"missing":{"type":"integer","minimum":0}}}]}}}}}},"config":{"description":"The settings that change the result (not workers or time budget), and their fingerprint.","type":"object","additionalProperties":false,"required":["fingerprint","settings"],"properties":{"fingerprint":{"$ref":"#/$defs/sha256"},"settings":{"type":"object","additionalProperties":{"anyOf":[{"type":["string","number","boolean","null"]},{"type":"array","items":{"type":"string"}}]}}}},"history":{"description":"Every accepted result, this one included as the last entry, oldest first; at most 100 entries.","type":"array","maxItems":100,"items":{"type":"object","additionalProperties":false,"required":["width","metric","rows","data","commit","date"],"properties":{"width":{"type":"integer","minimum":1},"metric":{"type":"number"},"rows":{"type":"integer","minimum":0},"data":{"$ref":"#/$defs/sha256"},"commit":{"type":["string","null"],"pattern":"^[0-9a-f]{4,64}$","title":"a commit hash (hex) or null"},"date":{"type":"string","pattern":"^\\\\d{4}-\\\\d{2}-\\\\d{2}T\\\\d{2}:\\\\d{2}:\\\\d{2}(\\\\.\\\\d+)?Z$","description":"ISO 8601 UTC date-time when the result was accepted.","title":"an ISO 8601 UTC date-time such as \\"2026-01-31T12:00:00.000Z\\""}}}}},"$defs":{"sha256":{"type":"string","pattern":"^[0-9a-f]{64}$","description":"sha256 fingerprint, 64 hex digits.","title":"a sha256 fingerprint (64 hex digits)"}}}');
-;// CONCATENATED MODULE: ./src/gate/types.ts
-const BASELINE_SCHEMA = 'neuron-budget/baseline@2';
-const BASELINE_VERSION = 2;
-/** Oldest history entries are dropped beyond this many. */
-const HISTORY_CAP = 100;
-
-;// CONCATENATED MODULE: ./src/gate/baseline.ts
-/**
- * The baseline file: build it from a run, carry its history forward, read it back with
- * clear errors, and write it atomically. Everything here is pure except readBaseline
- * and writeBaseline; dates are passed in, never read from a clock.
- */
-
-
-
-
-
-
-
-
-
-/**
- * Why this run cannot become a baseline, or null when it can. A baseline only ever
- * records a width that was found: a failed or unfinished search leaves the file as it was.
- */
-function whyNotRecordable(result) {
-    if (result.outcome === 'inconclusive') {
-        return 'the search did not finish, so there is no result to record; the baseline file was left unchanged';
-    }
-    if (result.outcome !== 'found' || result.width === null || result.metric === null) {
-        return 'no width reached the target, so there is no result to record; the baseline file was left unchanged';
-    }
-    return null;
-}
-/**
- * The baseline that accepting `current` produces: its headline and curve, with the
- * previous baseline's history carried forward and this result appended (newest last,
- * oldest dropped beyond HISTORY_CAP). Throws if the run is not recordable; check
- * whyNotRecordable first.
- */
-function nextBaseline(previous, current, meta) {
-    const { result, loaded, config } = current;
-    const problem = whyNotRecordable(result);
-    if (problem !== null || result.width === null || result.metric === null) {
-        throw new Error(`nextBaseline called with an unrecordable result: ${problem ?? 'no width'}`);
-    }
-    const width = result.width;
-    const atWidth = result.widths.find((w) => w.width === width) ?? null;
-    const settings = resultSettings(config);
-    const entry = {
-        width,
-        metric: result.metric,
-        rows: loaded.profile.rows,
-        data: loaded.fingerprint,
-        commit: commitHash(meta.commit),
-        date: meta.date.toISOString(),
-    };
-    const history = [...(previous?.history ?? []), entry].slice(-HISTORY_CAP);
-    return {
-        schema: BASELINE_SCHEMA,
-        tool: { name: 'neuron-budget', version: meta.toolVersion },
-        result: {
-            width,
-            metric: { name: config.target.metric, value: result.metric, threshold: config.target.threshold },
-            grownWidth: result.grownWidth,
-            met: atWidth ? atWidth.met : 0,
-            restarts: atWidth ? atWidth.restarts : 0,
-            searchSeconds: result.timing.searchSeconds,
-        },
-        widths: result.widths.map((w) => ({
-            width: w.width,
-            restarts: w.restarts,
-            met: w.met,
-            adequate: w.adequate,
-            best: w.best,
-            decisive: w.decisive,
-        })),
-        data: {
-            file: config.data.pathAsWritten.replace(/\\/g, '/'),
-            rows: loaded.profile.rows,
-            fingerprint: loaded.fingerprint,
-            profile: loaded.profile,
-        },
-        config: { fingerprint: settingsFingerprint(settings), settings },
-        history,
-    };
-}
-/** A commit id as the history stores it (lower-case hex), or null when it is not one. */
-function commitHash(commit) {
-    if (commit === null)
-        return null;
-    const c = commit.trim().toLowerCase();
-    return /^[0-9a-f]{4,64}$/.test(c) ? c : null;
-}
-function serializeBaseline(baseline) {
-    return `${JSON.stringify(baseline, null, 2)}\n`;
-}
-/**
- * Writes the baseline atomically (temp file beside it, then rename). The text is first
- * read back through the same validation a later run will use, so a value JSON cannot
- * hold (NaN becomes null) can never produce a baseline that the next run rejects.
- */
-async function writeBaseline(path, baseline) {
-    const text = serializeBaseline(baseline);
-    try {
-        parseBaseline(text, path);
-    }
-    catch (e) {
-        throw new Error(`refusing to write a baseline that would not read back: ${e.message}`, { cause: e });
-    }
-    await writeFileAtomic(path, text);
-}
-/**
- * Reads a baseline. Missing file → null (the verdict is then `new`). A file that is not
- * valid JSON, of another schema version, or of the wrong shape → UserError naming the
- * file (`shown`, the path as the user wrote it), and the line/column or key.
- */
-async function readBaseline(path, shown = path) {
-    let text;
-    try {
-        text = await (0,promises_namespaceObject.readFile)(path, 'utf8');
-    }
-    catch (e) {
-        const code = e.code;
-        if (code === 'ENOENT')
-            return null;
-        if (code === 'EISDIR')
-            throw new errors_UserError(`${shown}: expected a baseline file, found a folder`, { file: shown });
-        throw new errors_UserError(`${shown}: cannot read the baseline file (${code ?? 'unknown error'})`, { file: shown });
-    }
-    return parseBaseline(text, shown);
-}
-/** Parses and validates baseline text; `shown` names the file in messages. */
-function parseBaseline(text, shown) {
-    if (text.trim() === '') {
-        throw new errors_UserError(`${shown}: the baseline file is empty; delete it or run \`neuron-budget baseline\` to write it`, {
-            file: shown,
-        });
-    }
-    const syntax = findJsonSyntaxProblem(text);
-    if (syntax) {
-        throw new errors_UserError(`${shown}:${syntax.line}:${syntax.column}: the baseline is not valid JSON: ${syntax.detail}`, {
-            file: shown,
-            line: syntax.line,
-            column: syntax.column,
-        });
-    }
-    const value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-    checkSchemaVersion(value, shown);
-    validateBaselineShape(value, shown);
-    return value;
-}
-function checkSchemaVersion(value, shown) {
-    if (!baseline_isObject(value)) {
-        throw new errors_UserError(`${shown}: expected a neuron-budget baseline (a JSON object), found ${baseline_describe(value)}`, {
-            file: shown,
-        });
-    }
-    const schema = 'schema' in value ? value['schema'] : baseline_MISSING;
-    const match = typeof schema === 'string' ? /^neuron-budget\/baseline@(\d+)$/.exec(schema) : null;
-    if (!match) {
-        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}; this file is not a neuron-budget baseline`, { file: shown, key: 'schema' });
-    }
-    const version = Number(match[1]);
-    if (version > BASELINE_VERSION) {
-        throw new errors_UserError(`${shown}: schema: this baseline was written by a newer neuron-budget (baseline@${version}); this version reads baseline@${BASELINE_VERSION}. Upgrade neuron-budget to compare against it`, { file: shown, key: 'schema' });
-    }
-    if (version < BASELINE_VERSION) {
-        throw new errors_UserError(`${shown}: schema: this baseline (baseline@${version}) was written by an older neuron-budget, which judged networks on the rows that also steered their training; its widths do not compare with this version's. Delete the file and run \`neuron-budget baseline\` to record a new one`, { file: shown, key: 'schema' });
-    }
-    if (version !== BASELINE_VERSION) {
-        throw new errors_UserError(`${shown}: schema: expected "${BASELINE_SCHEMA}", found ${baseline_describe(schema)}`, {
-            file: shown,
-            key: 'schema',
-        });
-    }
-}
-// ---- shape: schema/baseline.schema.json is the one definition ----
-const baseline_checkShape = schemaValidator(baseline_schema_namespaceObject);
-function validateBaselineShape(value, shown) {
-    try {
-        baseline_checkShape(value);
-    }
-    catch (e) {
-        if (!(e instanceof SchemaProblem))
-            throw e;
-        throw new errors_UserError(`${shown}: ${e.key}: expected ${e.expected}, found ${e.found}`, { file: shown, key: e.key });
-    }
-}
-const baseline_MISSING = Symbol('missing');
-function baseline_isObject(v) {
-    return typeof v === 'object' && v !== null && !Array.isArray(v);
-}
-function baseline_describe(v) {
-    if (v === baseline_MISSING)
-        return 'nothing';
-    if (v === null)
-        return 'null';
-    if (Array.isArray(v))
-        return 'a list';
-    if (typeof v === 'object')
-        return 'an object';
-    if (typeof v === 'string')
-        return escape_quote(v, 60);
-    return typeof v === 'number' || typeof v === 'boolean' ? String(v) : typeof v;
-}
-
-;// CONCATENATED MODULE: external "node:timers/promises"
-const external_node_timers_promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:timers/promises");
-;// CONCATENATED MODULE: ./src/files/lock.ts
-/**
- * An exclusive lock beside a file, `.NAME.neuron-budget.lock`, for a read-compare-write that
- * must not interleave with another process's. Created with O_EXCL, so exactly one process
- * holds it; it records who holds it, so a lock whose holder died can be taken over:
- *
- * - its process is gone (same machine, by PID), or
- * - it is older than STALE_LOCK_AGE_MS (any machine; the section it guards takes
- *   milliseconds), or
- * - it is unreadable and older than a few seconds (a holder killed between create and write).
- */
-
-
-
-
-
-
-const LOCK_SUFFIX = '.neuron-budget.lock';
-/** A lock this old is stale, whoever holds it. @testOnly */
-const STALE_LOCK_AGE_MS = 10 * 60 * 1000;
-/** A lock file without readable content (its holder died before writing it) is stale after this. */
-const EMPTY_LOCK_AGE_MS = 5_000;
-function lockPathFor(path) {
-    return (0,external_node_path_namespaceObject.join)((0,external_node_path_namespaceObject.dirname)(path), `.${(0,external_node_path_namespaceObject.basename)(path)}${LOCK_SUFFIX}`);
-}
-/** The lock is held by a live process and was not released in time. */
-class LockBusy extends Error {
-    lockPath;
-    owner;
-    constructor(lockPath, owner) {
-        super(`${lockPath} is held${owner ? ` by process ${owner.pid}` : ''}`);
-        this.lockPath = lockPath;
-        this.owner = owner;
-        this.name = 'LockBusy';
-    }
-}
-async function acquireLock(path, options = {}) {
-    const lockPath = lockPathFor(path);
-    const waitMs = options.waitMs ?? 10_000;
-    const pollMs = options.pollMs ?? 25;
-    const record = {
-        pid: process.pid,
-        host: (0,external_node_os_namespaceObject.hostname)(),
-        token: (0,external_node_crypto_namespaceObject.randomBytes)(8).toString('hex'),
-        since: new Date().toISOString(),
-    };
-    const text = `${JSON.stringify(record)}\n`;
-    const started = Date.now();
-    for (;;) {
-        try {
-            const handle = await (0,promises_namespaceObject.open)(lockPath, 'wx');
-            try {
-                await handle.writeFile(text, 'utf8');
-            }
-            finally {
-                await handle.close();
-            }
-            return { release: () => releaseLock(lockPath, text) };
-        }
-        catch (e) {
-            if (e.code !== 'EEXIST')
-                throw e;
-        }
-        const held = await inspect(lockPath);
-        if (held === null)
-            continue; // released between our try and the look
-        if (held.stale) {
-            // Re-read just before removing: never remove a lock someone else took over meanwhile.
-            const again = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
-            if (again === held.text)
-                await (0,promises_namespaceObject.rm)(lockPath, { force: true });
-            continue;
-        }
-        if (Date.now() - started >= waitMs)
-            throw new LockBusy(lockPath, held.owner);
-        await (0,external_node_timers_promises_namespaceObject.setTimeout)(pollMs);
-    }
-}
-/** Removes the lock only while it is still ours. */
-async function releaseLock(lockPath, text) {
-    const now = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8').catch(() => null);
-    if (now === text)
-        await (0,promises_namespaceObject.rm)(lockPath, { force: true });
-}
-async function inspect(lockPath) {
-    let text;
-    let age;
-    try {
-        text = await (0,promises_namespaceObject.readFile)(lockPath, 'utf8');
-        age = Date.now() - (await (0,promises_namespaceObject.stat)(lockPath)).mtimeMs;
-    }
-    catch (e) {
-        if (e.code === 'ENOENT')
-            return null;
-        throw e;
-    }
-    const owner = parseOwner(text);
-    if (age >= STALE_LOCK_AGE_MS)
-        return { text, stale: true, owner };
-    if (owner === null)
-        return { text, stale: age >= EMPTY_LOCK_AGE_MS, owner };
-    const here = owner.host === (0,external_node_os_namespaceObject.hostname)();
-    return { text, stale: here && processIsGone(owner.pid), owner };
-}
-/** The holder as the file says, or null. The file sits in a checkout: only plain values pass. */
-function parseOwner(text) {
-    let v;
-    try {
-        v = JSON.parse(text);
-    }
-    catch {
-        return null;
-    }
-    if (typeof v !== 'object' || v === null)
-        return null;
-    const r = v;
-    if (typeof r.pid !== 'number' || !Number.isSafeInteger(r.pid) || r.pid <= 0)
-        return null;
-    const host = typeof r.host === 'string' && /^[A-Za-z0-9._-]{1,255}$/.test(r.host) ? r.host : null;
-    const since = typeof r.since === 'string' && !Number.isNaN(Date.parse(r.since)) ? new Date(r.since).toISOString() : null;
-    return { pid: r.pid, host, since };
-}
-
-;// CONCATENATED MODULE: ./src/gate/baseline-update.ts
-/**
- * Records an accepted result in the baseline file without losing another run's. A run reads
- * the baseline before its search and builds the next one from it; if a second run wrote the
- * file in between, writing ours would silently drop that run's history entry. So the write
- * happens under an exclusive lock beside the file, after reading the file again: unchanged,
- * ours is written; changed, nothing is written and the user is told to run again (exit 2).
- */
-
-
-
-
-/**
- * Writes `next` to `path` if the file still holds `expected` (null: no file), else throws a
- * UserError naming the file (`shown`, as the user wrote it).
- */
-async function updateBaseline(path, shown, expected, next) {
-    const lock = await lockOrRefuse(path, shown);
-    try {
-        const now = await readBaseline(path, shown);
-        if (!sameBaseline(expected, now)) {
-            const what = now === null ? 'was removed' : expected === null ? 'was created' : 'changed';
-            throw new errors_UserError(`${shown}: the baseline file ${what} while this run was searching (another \`neuron-budget baseline\` run?), ` +
-                'so this result was not recorded, to keep that change. Run `neuron-budget baseline` again to record it on top.', { file: shown });
-        }
-        await writeBaseline(path, next);
-    }
-    finally {
-        await lock.release();
-    }
-}
-async function lockOrRefuse(path, shown) {
-    try {
-        return await acquireLock(path);
-    }
-    catch (e) {
-        if (!(e instanceof LockBusy))
-            throw e;
-        const lockShown = displayLockPath(shown, path);
-        const who = e.owner
-            ? ` by process ${e.owner.pid}${e.owner.host ? ` on ${e.owner.host}` : ''}${e.owner.since ? ` since ${e.owner.since}` : ''}`
-            : '';
-        throw new errors_UserError(`${shown}: another neuron-budget run is writing this baseline (lock file ${lockShown}, held${who}), so this result was not recorded. ` +
-            'Run `neuron-budget baseline` again when it has finished; if none is running, delete the lock file.', { file: shown });
-    }
-}
-/** The lock file's path in the same form as the baseline's as the user wrote it. */
-function displayLockPath(shown, path) {
-    return `${shown.slice(0, shown.lastIndexOf('/') + 1)}${(0,external_node_path_namespaceObject.basename)(lockPathFor(path))}`;
-}
-/** Same content; key order and formatting of the file do not matter to a reader. */
-function sameBaseline(a, b) {
-    if (a === null || b === null)
-        return a === b;
-    return canonical(a) === canonical(b);
-}
-function canonical(v) {
-    if (Array.isArray(v))
-        return `[${v.map(canonical).join(',')}]`;
-    if (v !== null && typeof v === 'object') {
-        const keys = Object.keys(v).sort();
-        return `{${keys.map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(',')}}`;
-    }
-    return JSON.stringify(v);
-}
-
-;// CONCATENATED MODULE: ./src/gate/stage.ts
-
-
-
-async function runGateStage(input) {
-    const previous = input.previous;
-    const config = input.baselinePath === input.config.gate.baseline
-        ? input.config
-        : {
-            ...input.config,
-            gate: { ...input.config.gate, baseline: input.baselinePath, baselineAsWritten: input.baselineShown },
-        };
-    const outcome = evaluateGate({
-        result: input.result,
-        loaded: input.loaded,
-        config,
-        baseline: previous,
-        cost: input.cost ?? null,
-    });
-    if (input.mode === 'check')
-        return { outcome, written: null, record: null, gate: config.gate };
-    const why = whyNotRecordable(input.result);
-    if (why !== null)
-        return { outcome, written: null, record: { notWritten: why }, gate: config.gate };
-    const next = nextBaseline(previous, { result: input.result, loaded: input.loaded, config }, { date: input.date, commit: input.commit, toolVersion: input.toolVersion });
-    // Only if the file still holds what `previous` was read from: never drop another run's entry.
-    await updateBaseline(input.baselinePath, input.baselineShown, previous, next);
-    const record = { file: input.baselineShown, width: next.result.width, historyEntries: next.history.length };
-    return { outcome, written: input.baselinePath, record, gate: config.gate };
-}
-
-;// CONCATENATED MODULE: ./src/gate/index.ts
-/**
- * The gate: baseline file, comparison and data changes. `evaluateGate` is the one call
- * the job needs after the search; `nextBaseline`/`writeBaseline` record an accepted result.
- */
-
-
-
-
-
-
-
-
-;// CONCATENATED MODULE: ./src/report/assemble.ts
-
-
-
-/** The report with the data stage's facts; verdict and search come later. */
-function dataStageReport(config, data, timing) {
-    const ds = data.dataset;
-    const classes = data.profile.classes;
-    return {
-        schema: 'neuron-budget/report@2',
-        tool: { name: TOOL_NAME, version: TOOL_VERSION },
-        reasons: [],
-        width: null,
-        metric: { name: config.target.metric, value: null, threshold: config.target.threshold },
-        baseline: null,
-        data: {
-            file: displayPath(config.root, config.data.path),
-            rows: data.rows,
-            droppedRows: data.droppedRows,
-            trainRows: ds.trainRows,
-            validationRows: ds.validationRows,
-            judgingRows: ds.judgingRows,
-            inputs: ds.inputs,
-            outputs: ds.outputs,
-            task: ds.task,
-            fingerprint: data.fingerprint,
-            classes: classes === null
-                ? null
-                : Object.keys(classes)
-                    .sort()
-                    .map((label) => ({ label, count: classes[label] })),
-            targetSpread: data.targetSpread,
-        },
-        search: null,
-        device: null,
-        changes: null,
-        timing: { ...timing },
-    };
-}
-/** The data-stage report with the search's findings filled in (verdict and baseline come from the gate). */
-function searchStageReport(report, search, required, context) {
-    const { encoding } = context;
-    const costOf = (width) => deviceCost(costShapeOf({ inputs: report.data.inputs, width, outputs: report.data.outputs }, encoding));
-    return {
-        ...report,
-        device: deviceOf(search, context, report.data.inputs, report.data.outputs),
-        reasons: [],
-        width: search.width,
-        metric: { ...report.metric, value: search.metric },
-        search: {
-            outcome: search.outcome,
-            grownWidth: search.grownWidth,
-            required,
-            widths: search.widths.map((w) => ({ ...w, cost: costOf(w.width) })),
-            pruning: search.pruning.map((p) => ({ ...p, source: shownSource(p.source) })),
-            trainings: search.trainings,
-            notes: search.notes,
-            judging: search.judging,
-            witness: witnessOf(search),
-        },
-    };
-}
-/** Restarts are 0-based inside the search (they seed its streams) and counted from 1 on every screen and file. */
-function shownSource(task) {
-    return { width: task.width, restart: task.restart + 1 };
-}
-function witnessOf(search) {
-    const w = search.witness;
-    if (w === null)
-        return null;
-    return {
-        width: w.network.width,
-        how: w.how,
-        source: shownSource(w.source),
-        judged: w.judged,
-        steering: w.steering,
-        train: w.train,
-        met: w.met,
-        adequate: search.width !== null,
-    };
-}
-function deviceOf(search, context, inputs, outputs) {
-    const w = search.witness;
-    const a = search.appraisal;
-    if (w === null || a === null)
-        return null;
-    const width = w.network.width;
-    const labels = context.encoding.target.classes;
-    const floors = context.target.recallFloors ?? null;
-    const finite = (v) => (v === undefined || !Number.isFinite(v) ? null : v);
-    return {
-        precision: context.target.precision ?? 'float32',
-        inputs,
-        width,
-        outputs,
-        cost: deviceCost(costShapeOf({ inputs, width, outputs }, context.encoding)),
-        metric: { float32: a.float32, int8: a.int8 },
-        classes: labels === null || a.confusion === null
-            ? null
-            : labels.map((label, c) => ({
-                label,
-                rows: a.confusion[c].reduce((s, v) => s + v, 0),
-                recall: finite(a.recall?.[c]),
-                precision: finite(a.precision?.[c]),
-                floor: floors === null || floors[c] <= 0 ? null : floors[c],
-            })),
-        confusion: a.confusion,
-    };
-}
-
 ;// CONCATENATED MODULE: ./src/report/data-summary.ts
 
 
@@ -20504,811 +22164,28 @@ function dataSummaryText(config, data, report) {
     return `${TOOL_NAME} ${TOOL_VERSION} · data summary\n${body}`;
 }
 
-;// CONCATENATED MODULE: external "node:perf_hooks"
-const external_node_perf_hooks_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:perf_hooks");
-;// CONCATENATED MODULE: ./src/search/growth.ts
-function taskKey(task) {
-    return `${task.width}:${task.restart}`;
+;// CONCATENATED MODULE: ./src/search/start.ts
+function chooseStart(facts) {
+    const fromMin = (why) => ({ from: 'min-width', width: facts.minWidth, why });
+    if (facts.start === 'min-width')
+        return fromMin('search.start is min-width');
+    if (facts.growth === 'in-place')
+        return fromMin('in-place growth grows every network from min-width');
+    if (facts.baselineWidth === null)
+        return fromMin('there is no baseline yet');
+    if (facts.settingsChanged.length > 0)
+        return fromMin("the baseline's settings differ, so it answers another question");
+    const width = Math.min(facts.maxWidth, Math.max(facts.minWidth, facts.baselineWidth));
+    if (width === facts.minWidth)
+        return fromMin(`the baseline's width ${facts.baselineWidth} is min-width`);
+    return { from: 'baseline', width, why: `the baseline has the same settings` };
 }
-/** Every growth task in canonical order. In-place growth has one task per restart, starting at min-width. */
-function planTasks(plan) {
-    const tasks = [];
-    if (plan.growth === 'in-place') {
-        for (let i = 0; i < plan.restarts; i++)
-            tasks.push({ width: plan.minWidth, restart: i });
-        return tasks;
-    }
-    for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
-        for (let i = 0; i < plan.restarts; i++)
-            tasks.push({ width: w, restart: i });
-    }
-    return tasks;
-}
-/** The task whose result says how restart `restart` fares at width `width`. */
-function taskFor(plan, width, restart) {
-    return plan.growth === 'in-place' ? { width: plan.minWidth, restart } : { width, restart };
-}
+
+;// CONCATENATED MODULE: ./src/job/prepare.ts
 /**
- * In-place growth maps onto widths like this: restart i counts as meeting the target at width w
- * when its network met it at a width no larger than w (a network of fewer neurons that meets the
- * target is also a width-w network: give the extra neurons zero outgoing weights). Otherwise its
- * figures at w are those at the end of its time at w; a restart that diverged before w counts as
- * a diverged failure.
- */
-function restartAtWidth(plan, result, width) {
-    const task = { width: result.width, restart: result.restart };
-    const base = { restart: result.restart, task };
-    const judged = (j) => ({
-        train: j.train,
-        steering: j.steering,
-        judged: j.judged,
-        reached: j.reached,
-        met: j.met,
-    });
-    if (plan.growth !== 'in-place') {
-        return {
-            ...base,
-            ...judged(result),
-            epochs: result.epochs,
-            stop: result.stop,
-            reason: result.reason,
-            network: result.network,
-        };
-    }
-    if (result.met && result.finalWidth <= width) {
-        return {
-            ...base,
-            ...judged(result),
-            epochs: result.epochs,
-            stop: result.stop,
-            reason: null,
-            network: result.network,
-        };
-    }
-    const seg = result.segments.find((s) => s.width === width);
-    if (seg !== undefined) {
-        const diverged = seg.stop === 'diverged';
-        return {
-            ...base,
-            ...judged(seg),
-            met: false,
-            epochs: seg.epochs,
-            stop: seg.stop,
-            reason: diverged ? result.reason : null,
-            network: null,
-        };
-    }
-    const nan = Number.NaN;
-    return {
-        ...base,
-        train: nan,
-        steering: nan,
-        judged: nan,
-        reached: false,
-        met: false,
-        epochs: result.epochs,
-        stop: 'diverged',
-        reason: result.reason,
-        network: null,
-    };
-}
-/** Walk the widths as the header says. Pure: the same outcomes give the same decision. */
-function decideGrowth(plan, lookup) {
-    const tried = [];
-    const used = new Set();
-    const allowedFailures = plan.restarts - plan.required;
-    for (let w = plan.minWidth; w <= plan.maxWidth; w++) {
-        const seen = [];
-        let successes = 0;
-        let failures = 0;
-        for (let i = 0; i < plan.restarts; i++) {
-            if (successes >= plan.required || failures > allowedFailures)
-                break;
-            const task = taskFor(plan, w, i);
-            const key = taskKey(task);
-            if (!used.has(key) && plan.maxTrainings !== null && used.size >= plan.maxTrainings) {
-                if (seen.length > 0)
-                    tried.push({ width: w, restarts: seen });
-                return {
-                    kind: 'decided',
-                    grownWidth: null,
-                    tried,
-                    trainings: used.size,
-                    capHit: { width: w, restartsRun: seen.length },
-                };
-            }
-            const result = lookup(task);
-            if (result === undefined) {
-                const sofar = seen.length > 0 ? [...tried, { width: w, restarts: seen }] : tried;
-                return { kind: 'need', task, deciding: w, tried: sofar, trainings: used.size };
-            }
-            used.add(key);
-            const at = restartAtWidth(plan, result, w);
-            seen.push(at);
-            if (at.met)
-                successes++;
-            else
-                failures++;
-        }
-        tried.push({ width: w, restarts: seen });
-        if (successes >= plan.required)
-            return { kind: 'decided', grownWidth: w, tried, trainings: used.size, capHit: null };
-    }
-    return { kind: 'decided', grownWidth: null, tried, trainings: used.size, capHit: null };
-}
-/**
- * Merge growth results from anywhere (threads, processes, machines) into the decision.
- * Identical duplicates are fine; two different results for one task are refused; extra results
- * past the decision point are ignored.
- */
-function mergeOutcomes(plan, results) {
-    const byKey = new Map();
-    for (const r of results) {
-        const key = taskKey(r);
-        const seen = byKey.get(key);
-        // Every task is a pure function of (data, settings, task): two copies that differ mean mixed inputs.
-        if (seen !== undefined && JSON.stringify(seen) !== JSON.stringify(r)) {
-            throw new Error(`two different results for the task at width ${r.width}, restart ${r.restart}`);
-        }
-        byKey.set(key, r);
-    }
-    return decideGrowth(plan, (t) => byKey.get(taskKey(t)));
-}
-
-;// CONCATENATED MODULE: ./src/search/classes.ts
-/** counts[t][p]: rows of true class t predicted as p. */
-function confusion(predicted, truth, classes) {
-    const counts = Array.from({ length: classes }, () => new Array(classes).fill(0));
-    for (let r = 0; r < truth.length; r++)
-        counts[truth[r]][predicted[r]]++;
-    return counts;
-}
-/** Recall per class: correct / rows of that class; NaN for a class with no rows. */
-function recalls(counts) {
-    return counts.map((row, c) => {
-        const n = row.reduce((s, v) => s + v, 0);
-        return n === 0 ? Number.NaN : row[c] / n;
-    });
-}
-/** Precision per class: correct / rows predicted as that class; NaN when none was. */
-function precisions(counts) {
-    return counts.map((_, c) => {
-        const n = counts.reduce((s, row) => s + row[c], 0);
-        return n === 0 ? Number.NaN : counts[c][c] / n;
-    });
-}
-/** Every class with a floor above 0 reaches it; a class absent from the rows cannot be checked and passes. */
-function recallsHold(counts, floors) {
-    const r = recalls(counts);
-    return floors.every((min, c) => min <= 0 || Number.isNaN(r[c]) || r[c] >= min);
-}
-/** The target metric from predictions: class indices (accuracy) or values in the target's units (errors). */
-function metricOfPredictions(metric, predicted, truth) {
-    const n = truth.length;
-    if (n === 0)
-        return Number.NaN;
-    if (metric === 'accuracy') {
-        let correct = 0;
-        for (let r = 0; r < n; r++)
-            if (predicted[r] === truth[r])
-                correct++;
-        return correct / n;
-    }
-    let se = 0;
-    let ae = 0;
-    let max = 0;
-    for (let r = 0; r < n; r++) {
-        const d = Math.abs(predicted[r] - truth[r]);
-        se += d * d;
-        ae += d;
-        if (d > max || d !== d)
-            max = d;
-    }
-    return metric === 'rmse' ? Math.sqrt(se / n) : metric === 'mae' ? ae / n : max;
-}
-
-;// CONCATENATED MODULE: ./src/search/judge.ts
-/**
- * Whether a trained network meets the target: decided on the judging rows alone, which no
- * training ever reads (they do not stop a training, pick a restart or accept a pruning step).
- * Without judging rows the validation rows judge, and without those the training rows.
- *
- * A network meets the target when, in the form target.precision names (float32, or the int8
- * form the exported C runs, quantised as src/device/quantize.ts does), its metric meets the
- * threshold on those rows and every class with a recall floor (target.min-recall) reaches it.
- */
-
-
-
-
-function judgingRowsOf(data, folded) {
-    if (data.judgingRows > 0)
-        return { on: 'judging', rows: data.judgingRows, folded };
-    if (data.validationRows > 0)
-        return { on: 'validation', rows: data.validationRows, folded };
-    return { on: 'training', rows: data.trainRows, folded };
-}
-/** The encoded rows that judge, with their targets (classes, or standardised values). */
-function judgedRows(data) {
-    if (data.judgingRows > 0)
-        return { x: data.xJudging, y: data.yJudging, rows: data.judgingRows };
-    if (data.validationRows > 0)
-        return { x: data.xValidation, y: data.yValidation, rows: data.validationRows };
-    return { x: data.xTrain, y: data.yTrain, rows: data.trainRows };
-}
-/** Everything the screens show about a network on the rows that judge. `withInt8` computes the int8 form even when float32 decides. */
-function appraise(data, net, target, withInt8) {
-    const { x, y, rows } = judgedRows(data);
-    const std = data.encoding.target.std;
-    const float32 = metricOn(net, x, y, rows, target.metric, std);
-    const int8Decides = target.precision === 'int8';
-    let int8 = null;
-    let int8Classes = null;
-    if ((withInt8 || int8Decides) && data.rawJudged !== undefined) {
-        const q = quantizeNetwork(net, data.encoding, { x: data.xTrain, rows: data.trainRows });
-        const out = int8Forward(q, data.rawJudged, rows);
-        if (data.task === 'classification') {
-            int8Classes = out.classes;
-            int8 = metricOfPredictions(target.metric, out.classes, y);
-        }
-        else {
-            const t = data.encoding.target;
-            int8 = metricOfPredictions(target.metric, out.outputs, Float64Array.from(y, (v) => v * t.std + t.mean));
-        }
-    }
-    if (int8Decides && int8 === null)
-        throw new Error('target.precision is int8, but the dataset has no raw rows to run the int8 form on');
-    const deciding = int8Decides ? int8 : float32;
-    let counts = null;
-    if (data.task === 'classification') {
-        const predicted = int8Decides ? int8Classes : classesOn(net, x, rows);
-        counts = confusion(predicted, y, data.encoding.target.classes?.length ?? 2);
-    }
-    const floors = target.recallFloors ?? null;
-    const recallOk = floors === null || counts === null || recallsHold(counts, floors);
-    return {
-        float32,
-        int8,
-        confusion: counts,
-        recall: counts === null ? null : recalls(counts),
-        precision: counts === null ? null : precisions(counts),
-        deciding,
-        met: meetsThreshold(deciding, target) && recallOk,
-    };
-}
-/** The record of a finished training, with its judgement on the rows that judge added. */
-function judge(data, net, rec, target) {
-    const diverged = rec.stop === 'diverged' || net === null;
-    const a = diverged ? null : appraise(data, net, target, false);
-    return {
-        train: rec.trainMetric,
-        steering: rec.steeringMetric,
-        judged: a === null ? Number.NaN : a.deciding,
-        reached: !diverged && meetsThreshold(rec.steeringMetric, target),
-        met: a !== null && a.met,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/search/task.ts
-/**
- * One unit of work, runnable in any thread: a growth task (one seeded training, or one
- * network grown in place) or a prune job (shrinking one network that met the target).
- * Everything here is a pure function of (data, context, task): no shared state, and the clock is
- * read only through `cancelled`, which can only end a task early (the caller then discards it).
- */
-
-
-
-/**
- * Dynamic Node Creation trigger (Ash 1989): window 100 epochs, relative slope 0.05.
- * Engineering choices inside the published range (window 25 and slope 0.1 in one
- * published description; checks every 100 updates with a 1% threshold in another).
- */
-const DEFAULT_STALL = { window: 100, threshold: 0.05 };
-/** Engineering choice: try the three least salient neurons before giving up a prune step. */
-const DEFAULT_PRUNE_CANDIDATES = 3;
-const never = () => false;
-function divergedReason(width, epochs) {
-    return `training diverged (a non-finite loss or weight) at width ${width} after ${epochs} epochs`;
-}
-/** Gives up when the caller says so or the search's time is up. */
-function stopWhen(ctx, cancelled) {
-    const deadline = ctx.deadline;
-    return deadline === null ? cancelled : () => cancelled() || Date.now() >= deadline;
-}
-/**
- * Run one growth task; the result is plain JSON (it can cross threads, processes, machines).
- * null only when `cancelled` (or the time budget) said to give up.
- * In-place growth (Dynamic Node Creation) starts at the task's width and gives every width up to
- * max-epochs; a neuron is added when the error curve flattens (the stall trigger) or that budget
- * runs out, until the target is met or max-width is hit.
- */
-function runTask(data, ctx, task, cancelled = never) {
-    const { plan, train } = ctx;
-    const inPlace = plan.growth === 'in-place';
-    const rng = rngFor(ctx.seed, task.width, task.restart);
-    const options = {
-        ...train,
-        stall: inPlace ? { ...ctx.stall } : null,
-        interrupted: stopWhen(ctx, cancelled),
-    };
-    const trainer = createTrainer(data, task.width, options, rng);
-    const segments = [];
-    let epochs = 0;
-    for (;;) {
-        const rec = trainer.run(train.maxEpochs);
-        if (rec.stop === 'interrupted')
-            return null;
-        epochs += rec.epochs;
-        const width = trainer.network.width;
-        const network = rec.stop === 'diverged' ? null : trainer.snapshot();
-        const judged = judge(data, network, rec, train.target);
-        segments.push({ width, epochs, stop: rec.stop, ...judged });
-        const done = judged.met || rec.stop === 'diverged' || !inPlace || width >= plan.maxWidth;
-        if (done) {
-            return {
-                width: task.width,
-                restart: task.restart,
-                ...judged,
-                stop: rec.stop,
-                epochs,
-                finalWidth: width,
-                segments,
-                network: judged.met ? network : null,
-                reason: rec.stop === 'diverged' ? divergedReason(width, epochs) : null,
-            };
-        }
-        // Out of patience or epochs at this width: add a neuron that leaves the function unchanged and keep training.
-        trainer.addNeuron(rng);
-    }
-}
-/**
- * Shrink one network by compensated ablation: score every hidden neuron by the loss increase of
- * removing it with its mean activation folded into the output biases, remove the least salient,
- * retrain for at most `pruneEpochs`, and keep the removal only if the steering rows still meet the
- * target; otherwise restore and try the next candidate. Each kept network is judged on the judging
- * rows (that decides whether it counts for its width), but the judging rows never decide whether a
- * removal is kept.
- */
-function runPruneJob(data, ctx, job, cancelled = never) {
-    const target = ctx.train.target;
-    const retrain = { ...ctx.train, stall: null, interrupted: stopWhen(ctx, cancelled) };
-    // Every restore starts from a snapshot with fresh optimiser state, so the result does not
-    // depend on which thread ran the growth task.
-    const fromSnapshot = (net) => trainerFromNetwork(data, net, retrain, rngFor(ctx.seed, job.source.width, job.source.restart));
-    let trainer = fromSnapshot(job.network);
-    let steering = trainer.evaluate().steeringMetric;
-    let network = job.network;
-    const chain = [];
-    const steps = [];
-    let trainings = 0;
-    while (trainer.network.width > 1) {
-        const width = trainer.network.width;
-        const order = leastSalientFirst(trainer.saliency());
-        let removed = false;
-        let dirty = false;
-        for (const j of order.slice(0, ctx.pruneCandidates)) {
-            // Restore lazily: after the last refused candidate nothing trains again, so no rebuild is needed.
-            if (dirty)
-                trainer = fromSnapshot(network);
-            trainer.removeNeuron(j);
-            const rec = trainer.run(ctx.pruneEpochs);
-            if (rec.stop === 'interrupted')
-                return { source: job.source, chain, steps, trainings, interrupted: true };
-            trainings++;
-            const smaller = rec.stop === 'diverged' ? null : trainer.snapshot();
-            const judged = judge(data, smaller, rec, target);
-            const accepted = smaller !== null && judged.reached;
-            steps.push({
-                source: job.source,
-                width,
-                neuron: j,
-                steeringBefore: steering,
-                steeringAfter: judged.steering,
-                accepted,
-                judged: accepted ? judged.judged : null,
-            });
-            if (accepted && smaller !== null) {
-                steering = judged.steering;
-                network = smaller;
-                chain.push({ width: width - 1, network: smaller, ...judged });
-                removed = true;
-                break;
-            }
-            dirty = true;
-        }
-        if (!removed)
-            break;
-    }
-    return { source: job.source, chain, steps, trainings, interrupted: false };
-}
-/** Neuron indices by ascending saliency; ties (and NaN) resolved by index so the order is total. */
-function leastSalientFirst(saliency) {
-    const idx = Array.from(saliency, (_, j) => j);
-    const key = (j) => (Number.isFinite(saliency[j]) ? saliency[j] : Number.POSITIVE_INFINITY);
-    idx.sort((a, b) => key(a) - key(b) || a - b);
-    return idx;
-}
-
-;// CONCATENATED MODULE: ./src/search/executor.ts
-/**
- * Where tasks run: in this thread (one worker, and the path tests take from TypeScript
- * source) or on a pool of worker threads that share the encoded data without copies.
- * Both run the same task code, so the choice never changes a result.
- */
-
-
-
-/** Marks a worker thread started by the pool (the bundle checks it to act as the worker). */
-const WORKER_MARK = 'neuron-budget/search-worker';
-const yieldToEventLoop = () => new Promise((resolve) => setImmediate(resolve));
-function inThreadExecutor(data, ctx) {
-    return {
-        size: 1,
-        async train(task) {
-            await yieldToEventLoop();
-            // Never discarded here (nothing runs ahead in one thread); null only when the time ran out.
-            return runTask(data, ctx, task);
-        },
-        async prune(job) {
-            await yieldToEventLoop();
-            return runPruneJob(data, ctx, job);
-        },
-        discard() { },
-        async close() { },
-    };
-}
-function isShared(a) {
-    return typeof SharedArrayBuffer !== 'undefined' && a.buffer instanceof SharedArrayBuffer;
-}
-function toShared(a) {
-    if (isShared(a))
-        return a;
-    const s = new Float64Array(new SharedArrayBuffer(a.length * Float64Array.BYTES_PER_ELEMENT));
-    s.set(a);
-    return s;
-}
-/** The dataset with every array on SharedArrayBuffer (already the case for loaded data), so posting it shares memory. */
-function shareDataset(data) {
-    return {
-        ...data,
-        xTrain: toShared(data.xTrain),
-        yTrain: toShared(data.yTrain),
-        xValidation: toShared(data.xValidation),
-        xJudging: toShared(data.xJudging),
-        yJudging: toShared(data.yJudging),
-        yValidation: toShared(data.yValidation),
-    };
-}
-/**
- * A fixed pool of worker threads. `entry` is the file of the running bundle, which acts
- * as the worker when started with WORKER_MARK (ncc does not follow `new Worker(path)`).
- */
-function workerPoolExecutor(data, ctx, size, entry) {
-    const shared = shareDataset(data);
-    const pending = new Map();
-    const trainIds = new Map();
-    const queue = [];
-    const slots = [];
-    let nextId = 0;
-    let closed = false;
-    const pump = () => {
-        for (const slot of slots) {
-            if (slot.busy !== null || queue.length === 0)
-                continue;
-            const next = queue.shift();
-            slot.busy = next.id;
-            const msg = next.job.type === 'train'
-                ? { type: 'train', id: next.id, task: next.job.task }
-                : { type: 'prune', id: next.id, job: next.job.job };
-            slot.worker.postMessage(msg);
-        }
-    };
-    const settle = (id) => {
-        const p = pending.get(id);
-        pending.delete(id);
-        for (const [key, tid] of trainIds)
-            if (tid === id)
-                trainIds.delete(key);
-        return p;
-    };
-    const startSlot = () => {
-        const cancel = new Int32Array(new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT)).fill(-1);
-        const slot = { worker: new external_node_worker_threads_namespaceObject.Worker(entry, { workerData: { role: WORKER_MARK } }), busy: null, cancel };
-        slot.worker.on('message', (reply) => {
-            slot.busy = null;
-            const p = settle(reply.id);
-            if (p !== undefined) {
-                if (reply.type === 'done')
-                    p.resolve(reply.result);
-                else if (reply.type === 'cancelled')
-                    p.resolve(null);
-                else
-                    p.reject(new Error(reply.message));
-            }
-            pump();
-        });
-        const fail = (error) => {
-            if (closed)
-                return;
-            if (slot.busy !== null)
-                settle(slot.busy)?.reject(error);
-            slot.busy = null;
-        };
-        slot.worker.on('error', fail);
-        slot.worker.on('exit', (code) => fail(new Error(`search worker stopped unexpectedly (exit code ${code})`)));
-        // The data's SharedArrayBuffers are shared with the thread, not copied.
-        const init = { type: 'init', data: shared, ctx, cancel };
-        slot.worker.postMessage(init);
-        return slot;
-    };
-    for (let k = 0; k < size; k++)
-        slots.push(startSlot());
-    const submit = (job) => new Promise((resolve, reject) => {
-        if (closed) {
-            reject(new Error('search worker pool is closed'));
-            return;
-        }
-        const id = nextId++;
-        pending.set(id, { resolve: resolve, reject });
-        if (job.type === 'train')
-            trainIds.set(taskKey(job.task), id);
-        queue.push({ id, job });
-        pump();
-    });
-    return {
-        size,
-        train: (task) => submit({ type: 'train', task }),
-        prune: (job) => submit({ type: 'prune', job }),
-        discard(task) {
-            const id = trainIds.get(taskKey(task));
-            if (id === undefined)
-                return;
-            settle(id);
-            const q = queue.findIndex((e) => e.id === id);
-            if (q >= 0) {
-                queue.splice(q, 1);
-                return;
-            }
-            // The thread looks at its flag between slices of epochs and answers 'cancelled'.
-            const slot = slots.find((s) => s.busy === id);
-            if (slot !== undefined)
-                Atomics.store(slot.cancel, 0, id);
-        },
-        async close() {
-            closed = true;
-            queue.length = 0;
-            await Promise.all(slots.map((s) => s.worker.terminate()));
-            pending.clear();
-        },
-    };
-}
-
-;// CONCATENATED MODULE: ./src/search/notes.ts
-/**
- * Why no width is adequate, in sentences a reviewer can act on, read off the per-width curve:
- * - networks met the target, but too few of one width (say how many, and how many are required);
- * - the networks fit the training rows but not the judging rows: too few rows or too much noise;
- * - more neurons still help: the curve still improves at max-width, which is too small;
- * - the curve is flat and even the training rows are not fitted: the features may not carry the target.
- * And how far a search got when its budget ran out.
- */
-
-
-/** Widths at the top of the range whose best is compared with the rest to tell a rising curve. */
-const TOP_WIDTHS = 3;
-/**
- * A curve still rises when its best over the top widths beats the best before them by more than
- * this (accuracy points, or this fraction of an error metric's value); an engineering choice.
- */
-const RISE = 0.005;
-function span(from, to) {
-    return from === to ? `width ${from}` : `widths ${from}–${to}`;
-}
-function bestAt(widths, target, pickTrain = false) {
-    let best = null;
-    for (const w of widths) {
-        const v = pickTrain ? w.bestTrain : w.best;
-        if (v !== null && (best === null || isBetter(target.metric, v, best.value)))
-            best = { width: w.width, value: v };
-    }
-    return best;
-}
-function rises(widths, target) {
-    if (widths.length <= TOP_WIDTHS)
-        return null;
-    const top = bestAt(widths.slice(-TOP_WIDTHS), target);
-    const before = bestAt(widths.slice(0, -TOP_WIDTHS), target);
-    if (top === null || before === null)
-        return null;
-    const margin = higherIsBetter(target.metric) ? RISE : RISE * Math.abs(before.value);
-    const gain = higherIsBetter(target.metric) ? top.value - before.value : before.value - top.value;
-    return gain > margin ? { from: before, to: top } : null;
-}
-function notFoundNotes(plan, target, widths, judgedOn) {
-    const notes = [];
-    const name = target.metric;
-    const withMet = widths.filter((w) => w.met > 0);
-    if (withMet.length > 0) {
-        const shown = withMet
-            .slice(0, 3)
-            .map((w) => `${w.met === 1 ? '1 network' : `${w.met} networks`} of width ${w.width}`)
-            .join(', ');
-        notes.push(`Some networks met ${targetShort(name, target.threshold)} (${shown}), but a width needs ${plan.required} to be adequate.`);
-    }
-    const train = bestAt(widths, target, true);
-    const judged = bestAt(widths, target);
-    const rising = rises(widths, target);
-    if (rising !== null) {
-        notes.push(`More neurons still help: the best ${judgedOn} ${name} improved from ${formatMetric(rising.from.value)} (width ${rising.from.width}) to ${formatMetric(rising.to.value)} (width ${rising.to.width}); search.max-width (${plan.maxWidth}) is too small for this target.`);
-    }
-    else if (train !== null && meetsThreshold(train.value, target)) {
-        notes.push(`The networks fit the training rows (${name} ${formatMetric(train.value)} at width ${train.width}) but not the ${judgedOn} rows (best ${judged === null ? 'none' : formatMetric(judged.value)}): the data hold too few rows, or too much noise, for this target.`);
-    }
-    else {
-        const best = train === null ? 'no network trained' : `the best training ${name} was ${formatMetric(train.value)}`;
-        notes.push(`Even the training rows are not fitted (${best}) and more neurons did not help from ${span(plan.minWidth, plan.maxWidth)}: the features may not carry the target.`);
-    }
-    return notes;
-}
-/** The growth phase stopped (time budget, training cap) before a width was adequate. */
-function stoppedGrowingNote(plan, why, atWidth, trainings) {
-    const below = atWidth > plan.minWidth
-        ? `; ${span(plan.minWidth, atWidth - 1)} ${atWidth - 1 > plan.minWidth ? 'were' : 'was'} not adequate on fresh restarts`
-        : '';
-    return `${why} while deciding width ${atWidth}, after ${trainings} trainings${below}.`;
-}
-/** The time ran out while pruning: the grown width is proven, smaller ones are not settled. */
-function stoppedPruningNote(why, grownWidth, trainings) {
-    return `${why} while pruning, after ${trainings} trainings: ${neurons(grownWidth)} are enough (proven by fresh restarts), but whether fewer would do was not settled.`;
-}
-
-;// CONCATENATED MODULE: ./src/search/wilson.ts
-/**
- * Wilson score interval for a binomial success rate (Wilson 1927). Used to show how
- * sure the k-of-n restart count at a width is.
- */
-/** Two-sided 95% normal quantile. */
-const Z95 = 1.959964;
-function wilsonInterval(successes, trials, z = Z95) {
-    if (trials <= 0)
-        return [0, 1];
-    const n = trials;
-    const p = successes / n;
-    const z2 = z * z;
-    const denom = 1 + z2 / n;
-    const centre = (p + z2 / (2 * n)) / denom;
-    const half = (z * Math.sqrt((p * (1 - p)) / n + z2 / (4 * n * n))) / denom;
-    // Clamp the rounding dust at the ends so 0/n starts at exactly 0 and n/n ends at exactly 1.
-    const lo = successes === 0 ? 0 : Math.max(0, centre - half);
-    const hi = successes === n ? 1 : Math.min(1, centre + half);
-    return [lo, hi];
-}
-
-;// CONCATENATED MODULE: ./src/search/tally.ts
-/**
- * The one definition of an adequate width, applied: a width is adequate when at least `required`
- * distinct networks of that width met the target on the judging rows, counting fresh restarts at
- * that width and networks pruned down to it from a larger width. The headline is the smallest
- * adequate width; its witness is the network of that width that did best on the steering rows
- * (the judging rows decide whether a network counts, never which one is shown).
- */
-
-
-/** @testOnly */
-function median(values) {
-    if (values.length === 0)
-        return null;
-    const s = [...values].sort((a, b) => a - b);
-    const mid = s.length >> 1;
-    return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
-}
-/** The n-th best finite value (1 = the best), or null when fewer than n are finite. */
-function tally_nthBest(values, n, target) {
-    const finite = values
-        .filter(Number.isFinite)
-        .sort((a, b) => (isBetter(target.metric, a, b) ? -1 : isBetter(target.metric, b, a) ? 1 : 0));
-    return finite.length >= n ? finite[n - 1] : null;
-}
-function bestOf(values, target) {
-    let best = null;
-    for (const v of values)
-        if (Number.isFinite(v) && (best === null || isBetter(target.metric, v, best)))
-            best = v;
-    return best;
-}
-/** Better witness first: steering metric, then fresh before pruned, then narrower source, then lower restart. */
-function beats(a, b, target) {
-    if (isBetter(target.metric, a.steering, b.steering))
-        return true;
-    if (isBetter(target.metric, b.steering, a.steering))
-        return false;
-    if (a.how !== b.how)
-        return a.how === 'fresh';
-    if (a.source.width !== b.source.width)
-        return a.source.width < b.source.width;
-    return a.source.restart < b.source.restart;
-}
-function pick(candidates, target) {
-    let best = null;
-    for (const c of candidates)
-        if (c.met && (best === null || beats(c, best, target)))
-            best = c;
-    return best;
-}
-function tally(plan, target, tried, pruned, seed) {
-    const fresh = new Map(tried.map((t) => [t.width, t.restarts]));
-    const links = new Map();
-    for (const r of pruned) {
-        for (const link of r.chain) {
-            const list = links.get(link.width) ?? [];
-            list.push({ ...link, source: r.source, how: 'pruned' });
-            links.set(link.width, list);
-        }
-    }
-    const widthList = [...new Set([...fresh.keys(), ...links.keys()])].sort((a, b) => a - b);
-    const widths = [];
-    const candidatesAt = new Map();
-    for (const w of widthList) {
-        const runs = fresh.get(w) ?? [];
-        const prunedHere = links.get(w) ?? [];
-        const freshCandidates = runs
-            .filter((r) => r.met && r.network !== null)
-            .map((r) => ({ ...r, width: w, network: r.network, source: r.task, how: 'fresh' }));
-        candidatesAt.set(w, [...freshCandidates, ...prunedHere]);
-        const freshMet = freshCandidates.length;
-        const prunedMet = prunedHere.filter((c) => c.met).length;
-        const all = [...runs, ...prunedHere];
-        widths.push({
-            width: w,
-            restarts: runs.length,
-            reached: runs.filter((r) => r.reached).length,
-            met: freshMet + prunedMet,
-            metBy: { fresh: freshMet, pruned: prunedMet },
-            adequate: freshMet + prunedMet >= plan.required,
-            best: bestOf(all.map((r) => r.judged), target),
-            decisive: tally_nthBest(all.map((r) => r.judged), plan.required, target),
-            bestTrain: bestOf(all.map((r) => r.train), target),
-            median: median(runs.map((r) => r.judged).filter(Number.isFinite)),
-            wilson: wilsonInterval(freshMet, runs.length),
-            medianEpochs: median(runs.map((r) => r.epochs)) ?? 0,
-            diverged: runs.filter((r) => r.stop === 'diverged').length,
-        });
-    }
-    const width = widths.find((w) => w.adequate)?.width ?? null;
-    let chosen = null;
-    if (width !== null)
-        chosen = pick(candidatesAt.get(width) ?? [], target);
-    else
-        for (const w of widthList)
-            chosen ??= pick(candidatesAt.get(w) ?? [], target);
-    return { widths, width, witness: chosen === null ? null : tally_witnessOf(chosen, seed) };
-}
-function tally_witnessOf(c, seed) {
-    return {
-        source: c.source,
-        seed,
-        how: c.how,
-        network: c.network,
-        train: c.train,
-        steering: c.steering,
-        judged: c.judged,
-        reached: c.reached,
-        met: c.met,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/search/search.ts
-/**
- * The growth-and-prune search: find the smallest hidden width at which enough networks meet the
- * target (tally.ts has the one definition), and hold a trained network (the witness) that shows it.
- *
- * 1. Growth (growth.ts): fresh seeded restarts, width by width upward, until one width is
- *    adequate on fresh restarts alone.
- * 2. Prune (task.ts): every network that met the target at that width or below is shrunk one
- *    neuron at a time while the steering rows still meet the target; each smaller network that
- *    also meets it on the judging rows counts for its width.
- * 3. Tally: the smallest width with `required` networks that met the target is the answer.
+ * What every stage of the main job does first (check, baseline, plan, shard, merge): read the
+ * config, check the outputs can be written, read the baseline, load the data, and choose where
+ * the growth walk starts. Everything a stage decides from afterwards is in the result.
  */
 
 
@@ -21319,299 +22196,13 @@ function tally_witnessOf(c, seed) {
 
 
 
-
-function growthPlan(search) {
-    return {
-        growth: search.growth,
-        minWidth: search.minWidth,
-        maxWidth: search.maxWidth,
-        restarts: search.restarts,
-        // A width is only adequate with a network to show for it: at least one must meet the target.
-        required: Math.max(1, search.required),
-        maxTrainings: search.maxTrainings,
-    };
-}
-function searchContext(search, target, options = {}) {
-    const train = {
-        activation: search.activation,
-        init: search.init,
-        optimizer: search.optimizer,
-        maxEpochs: search.maxEpochs,
-        checkEvery: search.checkEvery,
-        patience: search.patience,
-        weightDecay: search.weightDecay,
-        target: { ...target },
-        stall: null,
-    };
-    return {
-        seed: search.seed,
-        plan: growthPlan(search),
-        train,
-        stall: { ...(options.stall ?? DEFAULT_STALL) },
-        pruneEpochs: search.pruneEpochs,
-        pruneCandidates: options.pruneCandidates ?? DEFAULT_PRUNE_CANDIDATES,
-        deadline: search.timeBudget === null ? null : Date.now() + search.timeBudget * 1000,
-    };
-}
-function workerCount(search, options) {
-    const n = options.workers ?? search.workers ?? (0,external_node_os_namespaceObject.availableParallelism)();
-    return Math.max(1, Math.floor(n));
-}
-/** Resolves when the deadline passes (never without one); the timer does not keep the process alive. */
-function timeUp(deadline) {
-    if (deadline === null)
-        return new Promise(() => undefined);
-    return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
-}
-/** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
-async function grow(ctx, executor, target, progress) {
-    const plan = ctx.plan;
-    const canon = planTasks(plan);
-    const position = new Map(canon.map((t, k) => [taskKey(t), k]));
-    const results = new Map();
-    const inflight = new Map();
-    const clock = timeUp(ctx.deadline);
-    let best = null;
-    for (;;) {
-        const decision = decideGrowth(plan, (t) => results.get(taskKey(t)));
-        // Tasks before the first undecided one that are still running can no longer matter.
-        const frontier = decision.kind === 'need' ? (position.get(taskKey(decision.task)) ?? 0) : canon.length;
-        for (const key of [...inflight.keys()]) {
-            if ((position.get(key) ?? 0) < frontier) {
-                const [w, i] = key.split(':').map(Number);
-                executor.discard({ width: w, restart: i });
-                inflight.delete(key);
-            }
-        }
-        if (decision.kind === 'decided')
-            return { decision, results, outOfTime: false };
-        if (ctx.deadline !== null && Date.now() >= ctx.deadline)
-            return { decision, results, outOfTime: true };
-        for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
-            const key = taskKey(canon[k]);
-            if (results.has(key) || inflight.has(key))
-                continue;
-            inflight.set(key, executor.train(canon[k]));
-        }
-        const keyed = [...inflight.entries()].map(([key, p]) => p.then((r) => ({ key, r })));
-        const done = await Promise.race([...keyed, clock]);
-        if (done === 'time')
-            return { decision, results, outOfTime: true };
-        inflight.delete(done.key);
-        // A task handed back without a result gave up because the time ran out.
-        if (done.r === null)
-            return { decision, results, outOfTime: true };
-        results.set(done.key, done.r);
-        if (Number.isFinite(done.r.judged) && (best === null || isBetter(target.metric, done.r.judged, best)))
-            best = done.r.judged;
-        progress({
-            phase: 'growth',
-            kind: 'done',
-            width: done.r.finalWidth,
-            restart: done.r.restart,
-            epoch: done.r.epochs,
-            best,
-        });
-    }
-}
-/** Every network that met the target at the grown width or below, once each, in (width, restart) order. */
-function pruneSources(tried, grownWidth) {
-    const jobs = [];
-    const seen = new Set();
-    for (const { width, restarts } of tried) {
-        if (grownWidth !== null && width > grownWidth)
-            continue;
-        for (const r of restarts) {
-            const key = taskKey(r.task);
-            if (!r.met || r.network === null || seen.has(key))
-                continue;
-            seen.add(key);
-            jobs.push({ source: r.task, network: r.network });
-        }
-    }
-    return jobs;
-}
-/** Run the whole search. Outside `timing`, the result depends only on the data, the config and the code. */
-async function runSearch(data, search, target, options = {}) {
-    const now = options.now ?? (() => external_node_perf_hooks_namespaceObject.performance.now());
-    const t0 = now();
-    const ctx = searchContext(search, target, options);
-    const plan = ctx.plan;
-    const size = workerCount(search, options);
-    // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
-    const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
-    const executor = size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
-    const progress = (e) => options.onProgress?.(e);
-    const judging = judgingRowsOf(data, options.judgingFolded ?? false);
-    const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
-    const budgetWhy = `The time budget of ${search.timeBudget} s ran out`;
-    try {
-        progress({ phase: 'growth', kind: 'start', width: plan.minWidth, restart: 0, epoch: 0, best: null });
-        const grown = await grow(ctx, executor, target, progress);
-        const growthEnd = now();
-        const timing = (end) => ({
-            searchSeconds: secondsFromMs(end - t0),
-            growthSeconds: secondsFromMs(growthEnd - t0),
-            pruneSeconds: secondsFromMs(end - growthEnd),
-        });
-        const base = { grownWidth: null, metric: null, witness: null, appraisal: null, pruning: [], judging };
-        const decision = grown.decision;
-        if (decision.kind === 'need') {
-            return {
-                ...base,
-                outcome: 'inconclusive',
-                width: null,
-                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
-                trainings: decision.trainings,
-                notes: [stoppedGrowingNote(plan, budgetWhy, decision.deciding, decision.trainings)],
-                timing: timing(now()),
-            };
-        }
-        if (decision.capHit !== null) {
-            const why = `The cap of ${search.maxTrainings} trainings was reached`;
-            return {
-                ...base,
-                outcome: 'inconclusive',
-                width: null,
-                widths: tally(plan, target, decision.tried, [], ctx.seed).widths,
-                trainings: decision.trainings,
-                notes: [stoppedGrowingNote(plan, why, decision.capHit.width, decision.trainings)],
-                timing: timing(now()),
-            };
-        }
-        // Prune phase: shrink every network that met the target at the grown width or below.
-        const jobs = search.prune ? pruneSources(decision.tried, decision.grownWidth) : [];
-        if (jobs.length > 0) {
-            const from = Math.max(...jobs.map((j) => j.source.width));
-            progress({ phase: 'prune', kind: 'start', width: from, restart: 0, epoch: 0, best: null });
-        }
-        const pruned = await Promise.all(jobs.map(async (job) => {
-            const r = await executor.prune(job);
-            const last = r.chain.length > 0 ? r.chain[r.chain.length - 1].width : job.source.width;
-            progress({
-                phase: 'prune',
-                kind: 'done',
-                width: last,
-                restart: job.source.restart,
-                epoch: r.steps.length,
-                best: null,
-            });
-            return r;
-        }));
-        const trainings = decision.trainings + pruned.reduce((s, r) => s + r.trainings, 0);
-        const t = tally(plan, target, decision.tried, pruned, ctx.seed);
-        const steps = pruned.flatMap((r) => r.steps);
-        if (pruned.some((r) => r.interrupted) && decision.grownWidth !== null) {
-            return {
-                ...base,
-                outcome: 'inconclusive',
-                grownWidth: decision.grownWidth,
-                width: null,
-                witness: t.witness,
-                appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
-                widths: t.widths,
-                pruning: steps,
-                trainings,
-                notes: [stoppedPruningNote(budgetWhy, decision.grownWidth, trainings)],
-                timing: timing(now()),
-            };
-        }
-        const found = t.width !== null && t.witness !== null;
-        return {
-            outcome: found ? 'found' : 'not-found',
-            width: found ? t.width : null,
-            grownWidth: decision.grownWidth,
-            metric: found ? t.witness.judged : null,
-            witness: t.witness,
-            appraisal: t.witness === null ? null : appraise(data, t.witness.network, target, true),
-            widths: t.widths,
-            pruning: steps,
-            trainings,
-            notes: found ? [] : notFoundNotes(plan, target, t.widths, judgedOn),
-            judging,
-            timing: timing(now()),
-        };
-    }
-    finally {
-        await executor.close();
-    }
-}
-
-;// CONCATENATED MODULE: ./src/search/worker.ts
-/**
- * The worker-thread side of the pool. A bundle calls runSearchWorker() when it starts
- * as a worker (`!isMainThread`); the thread then answers task messages until terminated.
- */
-
-
-function runSearchWorker() {
-    const port = external_node_worker_threads_namespaceObject.parentPort;
-    if (port === null)
-        throw new Error('runSearchWorker() must run in a worker thread');
-    let data = null;
-    let ctx = null;
-    let cancel = new Int32Array(1).fill(-1);
-    port.on('message', (msg) => {
-        if (msg.type === 'init') {
-            data = msg.data;
-            ctx = msg.ctx;
-            cancel = msg.cancel;
-            return;
-        }
-        let reply;
-        try {
-            if (data === null || ctx === null)
-                throw new Error('search worker got a task before its data');
-            const id = msg.id;
-            const result = msg.type === 'train'
-                ? runTask(data, ctx, msg.task, () => Atomics.load(cancel, 0) === id)
-                : runPruneJob(data, ctx, msg.job);
-            reply = result === null ? { type: 'cancelled', id } : { type: 'done', id, result };
-        }
-        catch (e) {
-            reply = { type: 'error', id: msg.id, message: e instanceof Error ? (e.stack ?? e.message) : String(e) };
-        }
-        port.postMessage(reply);
-    });
-}
-
-;// CONCATENATED MODULE: ./src/search/index.ts
-/** The growth-and-prune search: public surface. */
-
-
-
-
-
-
-
-
-;// CONCATENATED MODULE: ./src/run.ts
-/**
- * The main job shared by the command line and the action: config → data → search → gate →
- * report. This file only orchestrates; each stage lives in its folder.
- */
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-async function runJob(options) {
+async function prepareJob(options) {
     const timing = {};
     const loaded = await loadConfig(options.configPath, options.root);
     // Fail on an unwritable output before minutes of work, not after.
-    if (options.reportPath)
-        await checkOutputFolder(options.reportPath, 'report', options.root);
-    if (options.modelPath)
-        await checkOutputFolder(options.modelPath, 'model', options.root);
+    for (const [path, what] of options.outputs ?? [])
+        if (path)
+            await checkOutputFolder(path, what, options.root);
     const baselinePath = options.baselinePath ?? loaded.gate.baseline;
     const baselineShown = options.baselinePath
         ? displayPath(loaded.root, options.baselinePath)
@@ -21621,71 +22212,28 @@ async function runJob(options) {
     const data = await timed(timing, 'loadSeconds', () => loadData(loaded));
     const config = settleTarget(loaded, data.dataset.task, data.dataset.encoding.target.classes);
     options.log?.(dataSummaryText(config, data, dataStageReport(config, data, timing)));
-    const search = await timed(timing, 'searchSeconds', () => runSearch(data.dataset, config.search, config.target, {
-        workers: options.workers ?? null,
-        workerEntry: options.workerEntry ?? null,
-        judgingFolded: data.judgingFolded,
-        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
-    }));
-    timing.growthSeconds = search.timing.growthSeconds;
-    timing.pruneSeconds = search.timing.pruneSeconds;
-    const cost = search.witness === null ? null : deviceCost(costShapeOf(search.witness.network, data.dataset.encoding));
-    const gate = await runGateStage({
-        mode: options.mode,
-        result: search,
-        cost,
-        loaded: data,
+    return {
         config,
+        data,
+        previous,
         baselinePath,
         baselineShown,
-        previous,
-        commit: options.commit ?? null,
-        date: new Date(),
-        toolVersion: TOOL_VERSION,
-    });
-    const report = withGate(searchStageReport(dataStageReport(config, data, timing), search, config.search.required, {
-        encoding: data.dataset.encoding,
-        target: config.target,
-    }), gate.outcome, gate.gate);
-    let modelWritten = null;
-    if (options.modelPath) {
-        if (search.witness === null) {
-            options.log?.('model not written: no network met the target');
-        }
-        else {
-            const backing = { on: search.judging.on, adequate: search.width !== null };
-            const calibration = { x: data.dataset.xTrain, rows: data.dataset.trainRows };
-            const provenance = {
-                tool: { name: 'neuron-budget', version: TOOL_VERSION },
-                data: data.fingerprint,
-                config: displayPath(config.root, config.file),
-            };
-            const doc = modelDocument(search.witness, data.dataset.encoding, config.target, backing, calibration, provenance);
-            await writeOutput(options.modelPath, serializeModel(doc), 'model', config.root);
-            modelWritten = options.modelPath;
-        }
-    }
-    if (options.reportPath) {
-        await writeOutput(options.reportPath, `${JSON.stringify(report, null, 2)}\n`, 'report', config.root);
-    }
-    const verdict = report.verdict;
-    const context = {
-        surface: options.surface ?? 'cli',
-        mode: options.mode,
-        configShown: options.configShown ?? null,
         baselineFile: displayPath(loaded.root, baselinePath),
-        baseline: gate.record,
+        start: startFor(config, previous),
+        timing,
     };
-    return {
-        report,
-        verdict,
-        markdown: renderMarkdown(report, { context }),
-        text: renderText(report, context),
-        baselineWritten: gate.written,
-        baselineRecord: gate.record,
-        modelWritten,
-        exitCode: verdict === 'fail' || verdict === 'inconclusive' ? EXIT.gate : EXIT.ok,
-    };
+}
+/** Where growth starts: at a baseline that answers the same question, else at min-width. */
+function startFor(config, previous) {
+    const s = config.search;
+    return chooseStart({
+        start: s.start,
+        growth: s.growth,
+        minWidth: s.minWidth,
+        maxWidth: s.maxWidth,
+        baselineWidth: previous === null ? null : (previous.result.grownWidth ?? previous.result.width),
+        settingsChanged: previous === null ? [] : settingsDifferences(previous.config.settings, resultSettings(config)),
+    });
 }
 async function timed(timing, name, work) {
     const start = performance.now();
@@ -21695,6 +22243,223 @@ async function timed(timing, name, work) {
     finally {
         timing[name] = secondsFromMs(performance.now() - start);
     }
+}
+
+;// CONCATENATED MODULE: ./src/job/stages.ts
+/**
+ * The search over a job matrix, in three stages: `plan` splits the trainings into shards,
+ * `shard` runs one shard anywhere, and `merge` checks that every part belongs to this run,
+ * completes whatever the parts did not cover, and finishes exactly as `check` would (same
+ * report outside `timing`, same verdict, same exit code).
+ */
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+/** This run's plan for `shards` shards: a pure function of the prepared job. */
+function planOf(job, shards) {
+    const { config, data } = job;
+    const d = data.dataset;
+    return makePlan(growthPlan(config.search, job.start), shards, {
+        toolVersion: TOOL_VERSION,
+        data: data.fingerprint,
+        rows: data.rows,
+        settings: settingsFingerprint(resultSettings(config)),
+    }, {
+        trainRows: d.trainRows,
+        inputs: d.inputs,
+        outputs: d.outputs,
+        maxEpochs: config.search.maxEpochs,
+        pruneEpochs: config.search.prune ? config.search.pruneEpochs : 0,
+        pruneCandidates: DEFAULT_PRUNE_CANDIDATES,
+    });
+}
+function describePlan(plan) {
+    const tasks = plan.shards.reduce((n, s) => n + s.tasks.length, 0);
+    const widths = [...new Set(plan.shards.flatMap((s) => s.tasks.map((t) => t.width)))].sort((a, b) => a - b);
+    const from = plan.start.from === 'baseline'
+        ? `from the baseline's width ${plan.start.width}`
+        : `from min-width ${plan.start.width}`;
+    const range = widths.length === 1 ? `width ${widths[0]}` : `widths ${widths[0]}–${widths[widths.length - 1]}`;
+    const lines = [`plan: ${tasks} trainings (${range}, ${from}) over ${plan.shards.length} shards`];
+    for (const s of plan.shards) {
+        const pruned = s.tasks.filter((t) => t.prune).length;
+        lines.push(`  shard ${s.index}: ${s.tasks.length} trainings${pruned > 0 ? `, prunes up to ${pruned} networks` : ''} (about ${(s.estimatedMacs / 1e9).toFixed(1)} G multiply-adds)`);
+    }
+    return lines.join('\n');
+}
+async function runPlanStage(options) {
+    if (!Number.isInteger(options.shards) || options.shards < 1 || options.shards > MAX_SHARDS)
+        throw new errors_UserError(`shards: expected a whole number from 1 to ${MAX_SHARDS} (a matrix's job limit), found ${options.shards}`);
+    const job = await prepareJob({ ...options, outputs: [[options.planPath, 'plan']] });
+    const plan = planOf(job, options.shards);
+    await writeOutput(options.planPath, `${JSON.stringify(plan, null, 2)}\n`, 'plan', job.config.root);
+    let text = describePlan(plan);
+    if (plan.shards.length < options.shards)
+        text += `\n(${options.shards} shards were asked for, but there are only ${plan.shards.length} trainings to share)`;
+    return { plan, indexes: plan.shards.map((s) => s.index), text };
+}
+/** Reads a plan file and checks it is this run's plan (the same data, settings, baseline and tool). */
+async function readPlan(path, job) {
+    const shown = displayPath(job.config.root, path);
+    const text = await (0,promises_namespaceObject.readFile)(path, 'utf8').catch((e) => {
+        throw new errors_UserError(e.code === 'ENOENT'
+            ? `plan file ${shown} does not exist; write it with \`neuron-budget plan\``
+            : `cannot read the plan file ${shown} (${e.code ?? 'unknown error'})`, { file: shown });
+    });
+    const syntax = findJsonSyntaxProblem(text);
+    if (syntax)
+        throw new errors_UserError(`${shown}:${syntax.line}:${syntax.column}: the plan is not valid JSON: ${syntax.detail}`, {
+            file: shown,
+            line: syntax.line,
+            column: syntax.column,
+        });
+    const doc = JSON.parse(text);
+    const refuse = (why) => {
+        throw new errors_UserError(`${shown}: ${why}`, { file: shown });
+    };
+    if (typeof doc !== 'object' || doc === null || doc.schema !== PLAN_SCHEMA)
+        return refuse(`expected a neuron-budget plan (schema "${PLAN_SCHEMA}"), the output of \`neuron-budget plan\``);
+    const shards = Array.isArray(doc.shards) ? doc.shards.length : 0;
+    if (shards < 1 || shards > MAX_SHARDS)
+        return refuse(`shards: expected 1 to ${MAX_SHARDS} shards, found ${shards}`);
+    const mine = planOf(job, shards);
+    if (doc.data?.fingerprint !== mine.data.fingerprint)
+        refuse('was made for other data than this checkout holds; make the plan from the same commit as the shards');
+    if (doc.settings?.fingerprint !== mine.settings.fingerprint)
+        refuse('was made with other result-changing settings than this config has');
+    if (JSON.stringify(doc) !== JSON.stringify(mine))
+        refuse(`is not this run's plan (plan ${escape_quote(String(doc.id).slice(0, 12))}, this config, data and baseline give ${mine.id.slice(0, 12)}); it may come from another tool version or another baseline`);
+    return mine;
+}
+async function runShardStage(options) {
+    const started = external_node_perf_hooks_namespaceObject.performance.now();
+    const job = await prepareJob({ ...options, outputs: [[options.partPath, 'part']] });
+    const plan = await readPlan(options.planPath, job);
+    const shard = plan.shards[options.index];
+    if (!Number.isInteger(options.index) || shard === undefined)
+        throw new errors_UserError(`index: expected a shard of the plan, 0 to ${plan.shards.length - 1}, found ${options.index}`);
+    const outcome = await runShard(job.data.dataset, job.config.search, job.config.target, shard, {
+        workers: options.workers ?? null,
+        workerEntry: options.workerEntry ?? null,
+        judgingFolded: job.data.judgingFolded,
+        start: job.start,
+        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    });
+    const part = {
+        schema: PART_SCHEMA,
+        tool: { name: 'neuron-budget', version: TOOL_VERSION },
+        plan: plan.id,
+        shard: { index: shard.index, of: plan.shards.length },
+        data: { fingerprint: plan.data.fingerprint },
+        settings: { fingerprint: plan.settings.fingerprint },
+        results: outcome.results,
+        pruned: outcome.pruned,
+        seconds: secondsFromMs(external_node_perf_hooks_namespaceObject.performance.now() - started),
+    };
+    await writeOutput(options.partPath, serializePart(part), 'part', job.config.root);
+    const left = shard.tasks.length - outcome.results.length;
+    const text = `shard ${shard.index} of ${plan.shards.length}: ${outcome.results.length} trainings, ${outcome.pruned.length} networks pruned, ` +
+        `${part.seconds.toFixed(1)} s${left > 0 ? `; ${left} trainings left for the merge (the time budget ran out)` : ''}`;
+    return { part, text };
+}
+async function readParts(paths, job) {
+    if (paths.length === 0)
+        throw new errors_UserError('merge needs the part files the shards wrote (neuron-budget shard --out …); none were given');
+    return Promise.all(paths.map(async (path) => {
+        const shown = displayPath(job.config.root, path);
+        const text = await (0,promises_namespaceObject.readFile)(path, 'utf8').catch((e) => {
+            throw new errors_UserError(e.code === 'ENOENT'
+                ? `part file ${shown} does not exist`
+                : `cannot read the part file ${shown} (${e.code ?? 'unknown error'})`, { file: shown });
+        });
+        return { part: parsePart(text, shown), shown };
+    }));
+}
+async function runMergeStage(options) {
+    const job = await prepareJob({
+        ...options,
+        outputs: [
+            [options.reportPath, 'report'],
+            [options.modelPath, 'model'],
+        ],
+    });
+    const parts = await readParts(options.partPaths, job);
+    const plan = planOf(job, parts[0].part.shard.of || 1);
+    const want = {
+        plan,
+        toolVersion: TOOL_VERSION,
+        inputs: job.data.dataset.inputs,
+        outputs: job.data.dataset.outputs,
+    };
+    const byIndex = new Map();
+    for (const { part, shown } of parts) {
+        checkPart(part, shown, want);
+        const other = byIndex.get(part.shard.index);
+        if (other !== undefined)
+            throw new errors_UserError(`${shown} and ${other} are both shard ${part.shard.index}; give each shard's part once`, {
+                file: shown,
+            });
+        byIndex.set(part.shard.index, shown);
+    }
+    const missing = plan.shards.map((s) => s.index).filter((i) => !byIndex.has(i));
+    if (missing.length > 0)
+        throw new errors_UserError(`the part of shard ${missing.join(', ')} of ${plan.shards.length} is missing (parts given: ${[...byIndex.keys()].sort((a, b) => a - b).join(', ')}); did a shard job fail or its artifact not download?`);
+    const known = {
+        results: parts.flatMap((p) => p.part.results),
+        pruned: parts.flatMap((p) => p.part.pruned),
+    };
+    options.log?.(`merge: ${parts.length} parts of plan ${plan.id.slice(0, 12)}: ${known.results.length} trainings, ${known.pruned.length} pruned networks`);
+    const search = await timed(job.timing, 'searchSeconds', () => runSearch(job.data.dataset, job.config.search, job.config.target, {
+        workers: options.workers ?? null,
+        workerEntry: options.workerEntry ?? null,
+        judgingFolded: job.data.judgingFolded,
+        start: job.start,
+        known,
+        onLocalWork: (what) => options.log?.(`merge: ran here what the parts did not hold: ${what}`),
+        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    }));
+    return finishJob(job, search, options);
+}
+
+;// CONCATENATED MODULE: ./src/run.ts
+/**
+ * The main job shared by the command line and the action: config → data → search → gate →
+ * report. This file only orchestrates; each stage lives in its folder (job/ has the steps every
+ * stage shares, and the matrix stages plan, shard and merge).
+ */
+
+
+
+async function runJob(options) {
+    const job = await prepareJob({
+        ...options,
+        outputs: [
+            [options.reportPath, 'report'],
+            [options.modelPath, 'model'],
+        ],
+    });
+    const search = await timed(job.timing, 'searchSeconds', () => runSearch(job.data.dataset, job.config.search, job.config.target, {
+        workers: options.workers ?? null,
+        workerEntry: options.workerEntry ?? null,
+        judgingFolded: job.data.judgingFolded,
+        start: job.start,
+        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    }));
+    return finishJob(job, search, options);
 }
 
 ;// CONCATENATED MODULE: ./src/cli.ts
@@ -21709,6 +22474,7 @@ async function timed(timing, name, work) {
  * must stay inside it. Paths given as flags are the user's own choice and resolve
  * against the current directory.
  */
+
 
 
 
@@ -21748,26 +22514,70 @@ async function main(argv) {
         }
         const fromCwd = (p) => (p === undefined ? null : (0,external_node_path_namespaceObject.resolve)(root, p));
         const progress = progressPrinter(err);
-        const options = {
+        const log = (line) => {
+            progress.done();
+            err.write(`${escapeLines(line)}\n`);
+        };
+        const base = {
             configPath: (0,external_node_path_namespaceObject.resolve)(root, flags.config ?? DEFAULT_CONFIG),
             root,
-            mode: invocation.command === 'baseline' ? 'baseline' : 'check',
             baselinePath: fromCwd(flags.baseline),
-            reportPath: fromCwd(flags.report),
-            modelPath: fromCwd(flags.model),
+            log,
+        };
+        const running = {
             workers: invocation.workers,
             workerEntry: (0,external_node_url_namespaceObject.fileURLToPath)(import.meta.url),
+            ...(progress.onProgress ? { onProgress: progress.onProgress } : {}),
+        };
+        if (invocation.command === 'plan') {
+            const shards = wholeNumber('plan', 'shards', flags.shards);
+            const planned = await runPlanStage({ ...base, shards, planPath: (0,external_node_path_namespaceObject.resolve)(root, flags.out) });
+            err.write(`${escapeLines(planned.text)}\n`);
+            // What plan was asked for: the shard indexes, on stdout for a script to fan out.
+            process.stdout.write(`${JSON.stringify(planned.indexes)}\n`);
+            return EXIT.ok;
+        }
+        if (invocation.command === 'shard') {
+            const index = wholeNumber('shard', 'index', flags.index);
+            let said;
+            try {
+                said = await runShardStage({
+                    ...base,
+                    ...running,
+                    planPath: (0,external_node_path_namespaceObject.resolve)(root, flags.plan),
+                    index,
+                    partPath: (0,external_node_path_namespaceObject.resolve)(root, flags.out),
+                });
+            }
+            finally {
+                progress.done();
+            }
+            err.write(`${escapeLines(said.text)}\n`);
+            return EXIT.ok;
+        }
+        const finish = {
+            reportPath: fromCwd(flags.report),
+            modelPath: fromCwd(flags.model),
             surface: 'cli',
             configShown: flags.config ?? null,
-            log: (line) => {
-                progress.done();
-                err.write(`${escapeLines(line)}\n`);
-            },
-            ...(progress.onProgress ? { onProgress: progress.onProgress } : {}),
         };
         let result;
         try {
-            result = await runJob(options);
+            result =
+                invocation.command === 'merge'
+                    ? await runMergeStage({
+                        ...base,
+                        ...running,
+                        ...finish,
+                        mode: 'check',
+                        partPaths: invocation.args.map((a) => (0,external_node_path_namespaceObject.resolve)(root, a)),
+                    })
+                    : await runJob({
+                        ...base,
+                        ...running,
+                        ...finish,
+                        mode: invocation.command === 'baseline' ? 'baseline' : 'check',
+                    });
         }
         finally {
             progress.done();
@@ -21788,6 +22598,13 @@ async function main(argv) {
         err.write(`internal error in ${TOOL_NAME} ${TOOL_VERSION} (a bug, not a problem with your files; please report it):\n${escapeLines(stack)}\n`);
         return EXIT.internal;
     }
+}
+/** A flag that must be a whole number ≥ 0 (a shard count or index). */
+function wholeNumber(command, flag, value) {
+    const n = value !== undefined && /^\d{1,6}$/.test(value) ? Number(value) : Number.NaN;
+    if (!Number.isInteger(n))
+        throw new UsageError(`${command}: --${flag}: expected a whole number, found ${escape_quote(value ?? '')}`);
+    return n;
 }
 // This file is an entry point only (it runs on import); nothing should import it.
 if (!external_node_worker_threads_namespaceObject.isMainThread) {
