@@ -203,7 +203,8 @@ export function searchCostSentence(report: Report): string | null {
     typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
       ? ` (growth ${formatSeconds(t['growthSeconds'])}, pruning ${formatSeconds(t['pruneSeconds'])})`
       : '';
-  return `The search ran ${formatCount(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${formatSeconds(t['searchSeconds'])}${split}.`;
+  const walk = s.start === undefined ? '' : ` ${s.start.summary}`;
+  return `The search ran ${formatCount(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${formatSeconds(t['searchSeconds'])}${split}.${walk}`;
 }
 
 /** Whether this run's result is already the baseline (nothing to accept). */
