@@ -70,7 +70,7 @@ export async function prepareJob(options: PrepareOptions): Promise<PreparedJob> 
 }
 
 /** Where growth starts: at a baseline that answers the same question, else at min-width. */
-export function startFor(config: Config, previous: Baseline | null): StartChoice {
+function startFor(config: Config, previous: Baseline | null): StartChoice {
   const s = config.search;
   return chooseStart({
     start: s.start,

@@ -73,7 +73,7 @@ function taskMacs(m: CostModel, task: PlannedTask): number {
   return training + pruning;
 }
 
-/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. */
+/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. @testOnly */
 export function plannedTasks(plan: GrowthPlan): PlannedTask[] {
   const start = startWidth(plan);
   if (start === null) return planTasks(plan).map((t) => ({ ...t, prune: false }));

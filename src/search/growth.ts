@@ -23,7 +23,7 @@ export function taskKey(task: TrainingTask): string {
  * turns after S, the widths it visits come in increasing position and every task before the
  * first undecided one can no longer matter.
  */
-export function walkOrder(plan: GrowthPlan): number[] {
+function walkOrder(plan: GrowthPlan): number[] {
   const start = startWidth(plan);
   if (start === null) {
     const out: number[] = [];
