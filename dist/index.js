@@ -40669,7 +40669,7 @@ function taskMacs(m, task) {
     const pruning = task.prune && task.width > 1 ? 3 * m.trainRows * m.pruneEpochs * m.pruneCandidates * weights(task.width - 1) : 0;
     return training + pruning;
 }
-/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. */
+/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. @testOnly */
 function plannedTasks(plan) {
     const start = (0,growth/* startWidth */.Rm)(plan);
     if (start === null)
@@ -41494,7 +41494,8 @@ function searchCostSentence(report) {
     const split = typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
         ? ` (growth ${(0,format/* formatSeconds */.Xo)(t['growthSeconds'])}, pruning ${(0,format/* formatSeconds */.Xo)(t['pruneSeconds'])})`
         : '';
-    return `The search ran ${(0,format/* formatCount */.B4)(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${(0,format/* formatSeconds */.Xo)(t['searchSeconds'])}${split}.`;
+    const walk = s.start === undefined ? '' : ` ${s.start.summary}`;
+    return `The search ran ${(0,format/* formatCount */.B4)(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${(0,format/* formatSeconds */.Xo)(t['searchSeconds'])}${split}.${walk}`;
 }
 /** Whether this run's result is already the baseline (nothing to accept). */
 function baselineIsCurrent(report) {
@@ -50518,7 +50519,7 @@ function workerPoolExecutor(data, ctx, size, entry) {
 /* harmony export */   Um: () => (/* binding */ decideGrowth),
 /* harmony export */   s$: () => (/* binding */ planTasks)
 /* harmony export */ });
-/* unused harmony exports walkOrder, restartAtWidth, mergeOutcomes */
+/* unused harmony exports restartAtWidth, mergeOutcomes */
 function taskKey(task) {
     return `${task.width}:${task.restart}`;
 }

@@ -16749,7 +16749,8 @@ function searchCostSentence(report) {
     const split = typeof t['growthSeconds'] === 'number' && typeof t['pruneSeconds'] === 'number'
         ? ` (growth ${formatSeconds(t['growthSeconds'])}, pruning ${formatSeconds(t['pruneSeconds'])})`
         : '';
-    return `The search ran ${formatCount(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${formatSeconds(t['searchSeconds'])}${split}.`;
+    const walk = s.start === undefined ? '' : ` ${s.start.summary}`;
+    return `The search ran ${formatCount(s.trainings)} training${s.trainings === 1 ? '' : 's'} in ${formatSeconds(t['searchSeconds'])}${split}.${walk}`;
 }
 /** Whether this run's result is already the baseline (nothing to accept). */
 function baselineIsCurrent(report) {
@@ -19030,7 +19031,7 @@ function taskMacs(m, task) {
     const pruning = task.prune && task.width > 1 ? 3 * m.trainRows * m.pruneEpochs * m.pruneCandidates * weights(task.width - 1) : 0;
     return training + pruning;
 }
-/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. */
+/** The tasks the plan covers, in canonical order, with the ones pruned on the shards marked. @testOnly */
 function plannedTasks(plan) {
     const start = startWidth(plan);
     if (start === null)
