@@ -13,7 +13,9 @@ import { checkOutputFolder } from '../files/output.js';
 import { readBaseline, resultSettings, settingsDifferences, type Baseline } from '../gate/index.js';
 import { dataStageReport } from '../report/assemble.js';
 import { dataSummaryText } from '../report/data-summary.js';
+import { runSearch, type SearchOptions } from '../search/index.js';
 import { chooseStart, type StartChoice } from '../search/start.js';
+import type { ProgressEvent, SearchResult } from '../search/types.js';
 
 export interface PrepareOptions {
   /** Absolute path of the config file. */
@@ -66,6 +68,53 @@ export async function prepareJob(options: PrepareOptions): Promise<PreparedJob> 
     baselineFile: displayPath(loaded.root, baselinePath),
     start: startFor(config, previous),
     timing,
+  };
+}
+
+/** The stages that end in a report (check, baseline, merge) check its folder, and the model's, first. */
+export function prepareReportJob(
+  options: PrepareOptions & { reportPath?: string | null; modelPath?: string | null },
+): Promise<PreparedJob> {
+  return prepareJob({
+    ...options,
+    outputs: [
+      [options.reportPath, 'report'],
+      [options.modelPath, 'model'],
+    ],
+  });
+}
+
+/** How a stage runs the search here: threads, the bundle that starts them, progress. */
+export interface Running {
+  /** Worker threads; null: config, else available parallelism. */
+  workers?: number | null;
+  /** File of the running bundle, started again as the search's worker threads; null: search in this thread. */
+  workerEntry?: string | null;
+  onProgress?: (event: ProgressEvent) => void;
+}
+
+/** The whole search on the prepared job, timed; `more` adds outcomes computed elsewhere (merge). */
+export function searchJob(
+  job: PreparedJob,
+  running: Running,
+  more: Pick<SearchOptions, 'known' | 'onLocalWork'> = {},
+): Promise<SearchResult> {
+  return timed(job.timing, 'searchSeconds', () =>
+    runSearch(job.data.dataset, job.config.search, job.config.target, {
+      ...searchOptions(job, running),
+      ...more,
+    }),
+  );
+}
+
+/** The search options every stage passes (shard runs its own tasks with them). */
+export function searchOptions(job: PreparedJob, running: Running): SearchOptions {
+  return {
+    workers: running.workers ?? null,
+    workerEntry: running.workerEntry ?? null,
+    judgingFolded: job.data.judgingFolded,
+    start: job.start,
+    ...(running.onProgress ? { onProgress: running.onProgress } : {}),
   };
 }
 

@@ -15,25 +15,18 @@ import { writeOutput } from '../files/output.js';
 import { resultSettings, settingsFingerprint } from '../gate/index.js';
 import { checkPart, parsePart, serializePart, PART_SCHEMA, type PartDocument } from '../matrix/part.js';
 import { makePlan, MAX_SHARDS, PLAN_SCHEMA, type PlanDocument } from '../matrix/plan.js';
-import { growthPlan, runSearch } from '../search/index.js';
+import { growthPlan } from '../search/index.js';
 import { runShard } from '../search/shard.js';
 import { DEFAULT_PRUNE_CANDIDATES } from '../search/task.js';
-import type { ProgressEvent } from '../search/types.js';
 import { TOOL_VERSION } from '../version.js';
 import { finishJob, type FinishOptions, type JobResult } from './finish.js';
-import { prepareJob, timed, type PreparedJob } from './prepare.js';
+import { prepareJob, prepareReportJob, searchJob, searchOptions, type PreparedJob, type Running } from './prepare.js';
 
 interface StageBase {
   configPath: string;
   root: string;
   baselinePath?: string | null;
   log?: (line: string) => void;
-}
-
-interface Running {
-  workers?: number | null;
-  workerEntry?: string | null;
-  onProgress?: (event: ProgressEvent) => void;
 }
 
 /** This run's plan for `shards` shards: a pure function of the prepared job. */
@@ -157,13 +150,13 @@ export async function runShardStage(options: ShardStageOptions): Promise<{ part:
   const shard = plan.shards[options.index];
   if (!Number.isInteger(options.index) || shard === undefined)
     throw new UserError(`index: expected a shard of the plan, 0 to ${plan.shards.length - 1}, found ${options.index}`);
-  const outcome = await runShard(job.data.dataset, job.config.search, job.config.target, shard, {
-    workers: options.workers ?? null,
-    workerEntry: options.workerEntry ?? null,
-    judgingFolded: job.data.judgingFolded,
-    start: job.start,
-    ...(options.onProgress ? { onProgress: options.onProgress } : {}),
-  });
+  const outcome = await runShard(
+    job.data.dataset,
+    job.config.search,
+    job.config.target,
+    shard,
+    searchOptions(job, options),
+  );
   const part: PartDocument = {
     schema: PART_SCHEMA,
     tool: { name: 'neuron-budget', version: TOOL_VERSION },
@@ -208,13 +201,7 @@ async function readParts(paths: readonly string[], job: PreparedJob): Promise<{ 
 }
 
 export async function runMergeStage(options: MergeStageOptions): Promise<JobResult> {
-  const job = await prepareJob({
-    ...options,
-    outputs: [
-      [options.reportPath, 'report'],
-      [options.modelPath, 'model'],
-    ],
-  });
+  const job = await prepareReportJob(options);
   const parts = await readParts(options.partPaths, job);
   const plan = planOf(job, parts[0].part.shard.of || 1);
   const want = {
@@ -245,16 +232,9 @@ export async function runMergeStage(options: MergeStageOptions): Promise<JobResu
   options.log?.(
     `merge: ${parts.length} parts of plan ${plan.id.slice(0, 12)}: ${known.results.length} trainings, ${known.pruned.length} pruned networks`,
   );
-  const search = await timed(job.timing, 'searchSeconds', () =>
-    runSearch(job.data.dataset, job.config.search, job.config.target, {
-      workers: options.workers ?? null,
-      workerEntry: options.workerEntry ?? null,
-      judgingFolded: job.data.judgingFolded,
-      start: job.start,
-      known,
-      onLocalWork: (what) => options.log?.(`merge: ran here what the parts did not hold: ${what}`),
-      ...(options.onProgress ? { onProgress: options.onProgress } : {}),
-    }),
-  );
+  const search = await searchJob(job, options, {
+    known,
+    onLocalWork: (what) => options.log?.(`merge: ran here what the parts did not hold: ${what}`),
+  });
   return finishJob(job, search, options);
 }
