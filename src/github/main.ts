@@ -168,7 +168,7 @@ async function failBadInput(e: UserError, inputs: ActionInputs | null): Promise<
   }
   for (const a of logged) logUntrusted(`error: ${a.message}`);
   process.exitCode = EXIT.badInput;
-  const md = failureMarkdown(e.message, 'input');
+  const md = failureMarkdown(e.message, 'input', e.file !== undefined);
   await writeSummary(md);
   // A stale "pass" must not linger on the pull request while the config is broken (plan and shard
   // leave that to merge, which runs after them and meets the same broken config).
@@ -266,10 +266,16 @@ function partFiles(dir: string): string[] {
       key: 'parts',
     });
   }
-  return names
+  const parts = names
     .filter((n) => n.endsWith('.json'))
     .sort()
     .map((n) => join(dir, n));
+  if (parts.length === 0)
+    throw new UserError(
+      `input parts: folder ${dir} holds no part files (*.json); download every shard's artifact into it (actions/download-artifact with merge-multiple: true)`,
+      { key: 'parts' },
+    );
+  return parts;
 }
 
 export async function run(): Promise<void> {

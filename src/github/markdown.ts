@@ -6,15 +6,18 @@ import { MAX_MESSAGE } from '../common/errors.js';
 const SUMMARY_LIMIT = 1_000_000;
 
 /** Shown in the summary (and the pull-request comment) when the job could not run. */
-export function failureMarkdown(message: string, kind: 'input' | 'internal'): string {
+/** `onFile`: the error names a file it is annotated on (a config or data error); else an input of the step (a missing part). */
+export function failureMarkdown(message: string, kind: 'input' | 'internal', onFile = true): string {
   const head =
-    kind === 'input'
-      ? '### neuron-budget could not run: the config or data needs fixing'
-      : '### neuron-budget stopped with an internal error';
+    kind === 'internal'
+      ? '### neuron-budget stopped with an internal error'
+      : onFile
+        ? '### neuron-budget could not run: the config or data needs fixing'
+        : '### neuron-budget could not run: an input of the step needs fixing';
   const tail =
-    kind === 'input'
-      ? 'No verdict was reached, so this change has not been checked. The error is also annotated on the file.'
-      : 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.';
+    kind === 'internal'
+      ? 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.'
+      : `No verdict was reached, so this change has not been checked.${onFile ? ' The error is also annotated on the file.' : ' The step log has the error.'}`;
   return `${head}\n\n${codeBlock(escapeLines(clip(message, MAX_MESSAGE)))}\n\n${tail}\n`;
 }
 

@@ -3,6 +3,9 @@
  * config, check the outputs can be written, read the baseline, load the data, and choose where
  * the growth walk starts. Everything a stage decides from afterwards is in the result.
  */
+import { realpathSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { UserError } from '../common/errors.js';
 import { displayPath } from '../common/paths.js';
 import { secondsFromMs } from '../common/format.js';
 import { loadConfig, settleTarget } from '../config/index.js';
@@ -26,6 +29,8 @@ export interface PrepareOptions {
   baselinePath?: string | null;
   /** Output files the stage will write (absolute), checked before any work: [path, what]. */
   outputs?: readonly (readonly [string | null | undefined, string])[];
+  /** Files the stage reads besides the config, data and baseline (a plan, parts): [path, what]. */
+  reads?: readonly (readonly [string, string])[];
   log?: (line: string) => void;
 }
 
@@ -50,6 +55,13 @@ export async function prepareJob(options: PrepareOptions): Promise<PreparedJob> 
   // Fail on an unwritable output before minutes of work, not after.
   for (const [path, what] of options.outputs ?? []) if (path) await checkOutputFolder(path, what, options.root);
   const baselinePath = options.baselinePath ?? loaded.gate.baseline;
+  const reads: (readonly [string, string])[] = [
+    [loaded.file, 'config file'],
+    [loaded.data.path, 'data file'],
+    [baselinePath, 'baseline file'],
+    ...(options.reads ?? []),
+  ];
+  refuseOverwritingInputs(options.outputs ?? [], reads, loaded.root);
   const baselineShown = options.baselinePath
     ? displayPath(loaded.root, options.baselinePath)
     : loaded.gate.baselineAsWritten;
@@ -69,6 +81,33 @@ export async function prepareJob(options: PrepareOptions): Promise<PreparedJob> 
     start: startFor(config, previous),
     timing,
   };
+}
+
+/** Same file: the same absolute path, or (when both exist) the same file through a link. */
+function sameFile(a: string, b: string): boolean {
+  if (resolve(a) === resolve(b)) return true;
+  try {
+    return realpathSync(a) === realpathSync(b);
+  } catch {
+    return false;
+  }
+}
+
+/** An output written over a file the run reads would destroy it (`--report readings.csv`). */
+function refuseOverwritingInputs(
+  outputs: readonly (readonly [string | null | undefined, string])[],
+  reads: readonly (readonly [string, string])[],
+  root: string,
+): void {
+  for (const [out, what] of outputs) {
+    if (!out) continue;
+    const hit = reads.find(([input]) => sameFile(out, input));
+    if (hit !== undefined)
+      throw new UserError(
+        `${what} file ${displayPath(root, out)} is the ${hit[1]} this run reads; write the ${what} to another file`,
+        { file: displayPath(root, out) },
+      );
+  }
 }
 
 /** The stages that end in a report (check, baseline, merge) check its folder, and the model's, first. */

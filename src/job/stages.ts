@@ -145,7 +145,11 @@ export interface ShardStageOptions extends StageBase, Running {
 
 export async function runShardStage(options: ShardStageOptions): Promise<{ part: PartDocument; text: string }> {
   const started = performance.now();
-  const job = await prepareJob({ ...options, outputs: [[options.partPath, 'part']] });
+  const job = await prepareJob({
+    ...options,
+    outputs: [[options.partPath, 'part']],
+    reads: [[options.planPath, 'plan file']],
+  });
   const plan = await readPlan(options.planPath, job);
   const shard = plan.shards[options.index];
   if (!Number.isInteger(options.index) || shard === undefined)
@@ -200,10 +204,25 @@ async function readParts(paths: readonly string[], job: PreparedJob): Promise<{ 
   );
 }
 
+/**
+ * The plan the parts belong to, rebuilt here: of the shard counts the parts give, the one whose
+ * plan most parts name (so a stray part of another plan is the one refused, whatever its place
+ * in the list); when none names a plan of this run, the first part's count (and it is refused).
+ */
+function namedPlan(job: PreparedJob, parts: readonly { part: PartDocument }[]): PlanDocument {
+  const counts = [...new Set(parts.map((p) => p.part.shard.of))].filter((n) => n >= 1 && n <= MAX_SHARDS);
+  const candidates = counts
+    .map((n) => planOf(job, n))
+    .map((plan) => ({ plan, naming: parts.filter((p) => p.part.plan === plan.id).length }))
+    .filter((c) => c.naming > 0)
+    .sort((a, b) => b.naming - a.naming);
+  return candidates[0]?.plan ?? planOf(job, Math.min(MAX_SHARDS, Math.max(1, parts[0].part.shard.of)));
+}
+
 export async function runMergeStage(options: MergeStageOptions): Promise<JobResult> {
-  const job = await prepareReportJob(options);
+  const job = await prepareReportJob({ ...options, reads: options.partPaths.map((p) => [p, 'part file'] as const) });
   const parts = await readParts(options.partPaths, job);
-  const plan = planOf(job, parts[0].part.shard.of || 1);
+  const plan = namedPlan(job, parts);
   const want = {
     plan,
     toolVersion: TOOL_VERSION,

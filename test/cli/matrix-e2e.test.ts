@@ -415,4 +415,34 @@ describe('the search as a job matrix, through dist/cli/index.js, on the invented
     );
     expectRefusal(run, `plan.json:${at + 1}:${column}: the plan is not valid JSON`, []);
   });
+
+  it('merge names the stray part of another plan even when it comes first', async () => {
+    const three = await matrix(BASE, 3);
+    const two = await matrix(BASE, 2);
+    const run = await job(MERGE(BASE, ['two-part-1.json', 'part-0.json', 'part-1.json', 'part-2.json']), {
+      ...(await checkout()),
+      ...partFiles(three),
+      'two-part-1.json': two.parts[1],
+    });
+    expectRefusal(run, 'two-part-1.json: belongs to another plan', [`this run's plan is ${short(three.plan.id)} of 3`]);
+  });
+
+  it('no output may be written over a file the run reads (the data, the config, the baseline, the plan, a part)', async () => {
+    const files = await checkout();
+    const cases: [string[], string, string][] = [
+      [['plan', '--config', BASE, '--shards', '2', '--out', 'readings.csv'], 'readings.csv', 'data file'],
+      [['check', '--config', BASE, '--report', BASE], BASE, 'config file'],
+      [['check', '--config', BASE, '--model', BASELINE], BASELINE, 'baseline file'],
+      [['shard', '--config', BASE, '--plan', 'p.json', '--index', '0', '--out', 'p.json'], 'p.json', 'plan file'],
+      [['merge', '--config', BASE, '--report', 'part-0.json', 'part-0.json'], 'part-0.json', 'part file'],
+    ];
+    for (const [args, file, what] of cases) {
+      const before = { ...files, 'p.json': '{}', 'part-0.json': '{}' };
+      const run = await job(args, before);
+      const kind =
+        args[0] === 'plan' ? 'plan' : args[0] === 'shard' ? 'part' : args.includes('--model') ? 'model' : 'report';
+      expectRefusal(run, `${kind} file ${file} is the ${what} this run reads`, []);
+      expect(run.read(file)).toBe(before[file]);
+    }
+  });
 });
