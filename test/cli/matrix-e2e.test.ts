@@ -437,7 +437,7 @@ describe('the search as a job matrix, through dist/cli/index.js, on the invented
       [['merge', '--config', BASE, '--report', 'part-0.json', 'part-0.json'], 'part-0.json', 'part file'],
     ];
     for (const [args, file, what] of cases) {
-      const before = { ...files, 'p.json': '{}', 'part-0.json': '{}' };
+      const before: Record<string, string> = { ...files, 'p.json': '{}', 'part-0.json': '{}' };
       const run = await job(args, before);
       const kind =
         args[0] === 'plan' ? 'plan' : args[0] === 'shard' ? 'part' : args.includes('--model') ? 'model' : 'report';
