@@ -170,7 +170,7 @@ function startFor(config: Config, previous: Baseline | null): StartChoice {
   });
 }
 
-export async function timed<T>(timing: Record<string, number>, name: string, work: () => Promise<T>): Promise<T> {
+async function timed<T>(timing: Record<string, number>, name: string, work: () => Promise<T>): Promise<T> {
   const start = performance.now();
   try {
     return await work();
