@@ -40720,7 +40720,7 @@ function planId(body) {
 }
 
 // EXTERNAL MODULE: ./src/search/index.ts + 1 modules
-var src_search = __nccwpck_require__(4516);
+var search = __nccwpck_require__(4516);
 // EXTERNAL MODULE: ./src/search/executor.ts
 var search_executor = __nccwpck_require__(3787);
 // EXTERNAL MODULE: ./src/search/search.ts + 3 modules
@@ -46555,6 +46555,10 @@ function chooseStart(facts) {
 
 
 
+
+
+
+
 async function prepareJob(options) {
     const timing = {};
     const loaded = await loadConfig(options.configPath, options.root);
@@ -46563,6 +46567,13 @@ async function prepareJob(options) {
         if (path)
             await checkOutputFolder(path, what, options.root);
     const baselinePath = options.baselinePath ?? loaded.gate.baseline;
+    const reads = [
+        [loaded.file, 'config file'],
+        [loaded.data.path, 'data file'],
+        [baselinePath, 'baseline file'],
+        ...(options.reads ?? []),
+    ];
+    refuseOverwritingInputs(options.outputs ?? [], reads, loaded.root);
     const baselineShown = options.baselinePath
         ? displayPath(loaded.root, options.baselinePath)
         : loaded.gate.baselineAsWritten;
@@ -46580,6 +46591,54 @@ async function prepareJob(options) {
         baselineFile: displayPath(loaded.root, baselinePath),
         start: startFor(config, previous),
         timing,
+    };
+}
+/** Same file: the same absolute path, or (when both exist) the same file through a link. */
+function sameFile(a, b) {
+    if ((0,external_node_path_namespaceObject.resolve)(a) === (0,external_node_path_namespaceObject.resolve)(b))
+        return true;
+    try {
+        return (0,external_node_fs_namespaceObject.realpathSync)(a) === (0,external_node_fs_namespaceObject.realpathSync)(b);
+    }
+    catch {
+        return false;
+    }
+}
+/** An output written over a file the run reads would destroy it (`--report readings.csv`). */
+function refuseOverwritingInputs(outputs, reads, root) {
+    for (const [out, what] of outputs) {
+        if (!out)
+            continue;
+        const hit = reads.find(([input]) => sameFile(out, input));
+        if (hit !== undefined)
+            throw new errors/* UserError */.yo(`${what} file ${displayPath(root, out)} is the ${hit[1]} this run reads; write the ${what} to another file`, { file: displayPath(root, out) });
+    }
+}
+/** The stages that end in a report (check, baseline, merge) check its folder, and the model's, first. */
+function prepareReportJob(options) {
+    return prepareJob({
+        ...options,
+        outputs: [
+            [options.reportPath, 'report'],
+            [options.modelPath, 'model'],
+        ],
+    });
+}
+/** The whole search on the prepared job, timed; `more` adds outcomes computed elsewhere (merge). */
+function searchJob(job, running, more = {}) {
+    return timed(job.timing, 'searchSeconds', () => (0,search/* runSearch */._d)(job.data.dataset, job.config.search, job.config.target, {
+        ...searchOptions(job, running),
+        ...more,
+    }));
+}
+/** The search options every stage passes (shard runs its own tasks with them). */
+function searchOptions(job, running) {
+    return {
+        workers: running.workers ?? null,
+        workerEntry: running.workerEntry ?? null,
+        judgingFolded: job.data.judgingFolded,
+        start: job.start,
+        ...(running.onProgress ? { onProgress: running.onProgress } : {}),
     };
 }
 /** Where growth starts: at a baseline that answers the same question, else at min-width. */
@@ -46632,7 +46691,7 @@ async function timed(timing, name, work) {
 function planOf(job, shards) {
     const { config, data } = job;
     const d = data.dataset;
-    return makePlan((0,src_search/* growthPlan */.dw)(config.search, job.start), shards, {
+    return makePlan((0,search/* growthPlan */.dw)(config.search, job.start), shards, {
         toolVersion: TOOL_VERSION,
         data: data.fingerprint,
         rows: data.rows,
@@ -46706,18 +46765,16 @@ async function readPlan(path, job) {
 }
 async function runShardStage(options) {
     const started = external_node_perf_hooks_.performance.now();
-    const job = await prepareJob({ ...options, outputs: [[options.partPath, 'part']] });
+    const job = await prepareJob({
+        ...options,
+        outputs: [[options.partPath, 'part']],
+        reads: [[options.planPath, 'plan file']],
+    });
     const plan = await readPlan(options.planPath, job);
     const shard = plan.shards[options.index];
     if (!Number.isInteger(options.index) || shard === undefined)
         throw new errors/* UserError */.yo(`index: expected a shard of the plan, 0 to ${plan.shards.length - 1}, found ${options.index}`);
-    const outcome = await runShard(job.data.dataset, job.config.search, job.config.target, shard, {
-        workers: options.workers ?? null,
-        workerEntry: options.workerEntry ?? null,
-        judgingFolded: job.data.judgingFolded,
-        start: job.start,
-        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
-    });
+    const outcome = await runShard(job.data.dataset, job.config.search, job.config.target, shard, searchOptions(job, options));
     const part = {
         schema: PART_SCHEMA,
         tool: { name: 'neuron-budget', version: TOOL_VERSION },
@@ -46748,16 +46805,24 @@ async function readParts(paths, job) {
         return { part: parsePart(text, shown), shown };
     }));
 }
+/**
+ * The plan the parts belong to, rebuilt here: of the shard counts the parts give, the one whose
+ * plan most parts name (so a stray part of another plan is the one refused, whatever its place
+ * in the list); when none names a plan of this run, the first part's count (and it is refused).
+ */
+function namedPlan(job, parts) {
+    const counts = [...new Set(parts.map((p) => p.part.shard.of))].filter((n) => n >= 1 && n <= MAX_SHARDS);
+    const candidates = counts
+        .map((n) => planOf(job, n))
+        .map((plan) => ({ plan, naming: parts.filter((p) => p.part.plan === plan.id).length }))
+        .filter((c) => c.naming > 0)
+        .sort((a, b) => b.naming - a.naming);
+    return candidates[0]?.plan ?? planOf(job, Math.min(MAX_SHARDS, Math.max(1, parts[0].part.shard.of)));
+}
 async function runMergeStage(options) {
-    const job = await prepareJob({
-        ...options,
-        outputs: [
-            [options.reportPath, 'report'],
-            [options.modelPath, 'model'],
-        ],
-    });
+    const job = await prepareReportJob({ ...options, reads: options.partPaths.map((p) => [p, 'part file']) });
     const parts = await readParts(options.partPaths, job);
-    const plan = planOf(job, parts[0].part.shard.of || 1);
+    const plan = namedPlan(job, parts);
     const want = {
         plan,
         toolVersion: TOOL_VERSION,
@@ -46782,15 +46847,10 @@ async function runMergeStage(options) {
         pruned: parts.flatMap((p) => p.part.pruned),
     };
     options.log?.(`merge: ${parts.length} parts of plan ${plan.id.slice(0, 12)}: ${known.results.length} trainings, ${known.pruned.length} pruned networks`);
-    const search = await timed(job.timing, 'searchSeconds', () => (0,src_search/* runSearch */._d)(job.data.dataset, job.config.search, job.config.target, {
-        workers: options.workers ?? null,
-        workerEntry: options.workerEntry ?? null,
-        judgingFolded: job.data.judgingFolded,
-        start: job.start,
+    const search = await searchJob(job, options, {
         known,
         onLocalWork: (what) => options.log?.(`merge: ran here what the parts did not hold: ${what}`),
-        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
-    }));
+    });
     return finishJob(job, search, options);
 }
 
@@ -46802,23 +46862,9 @@ async function runMergeStage(options) {
  */
 
 
-
 async function runJob(options) {
-    const job = await prepareJob({
-        ...options,
-        outputs: [
-            [options.reportPath, 'report'],
-            [options.modelPath, 'model'],
-        ],
-    });
-    const search = await timed(job.timing, 'searchSeconds', () => (0,src_search/* runSearch */._d)(job.data.dataset, job.config.search, job.config.target, {
-        workers: options.workers ?? null,
-        workerEntry: options.workerEntry ?? null,
-        judgingFolded: job.data.judgingFolded,
-        start: job.start,
-        ...(options.onProgress ? { onProgress: options.onProgress } : {}),
-    }));
-    return finishJob(job, search, options);
+    const job = await prepareReportJob(options);
+    return finishJob(job, await searchJob(job, options), options);
 }
 
 ;// CONCATENATED MODULE: ./src/github/annotations.ts
@@ -47228,13 +47274,16 @@ function outputFolder(inputs, env = process.env) {
 /** The runner refuses a step summary over 1 MiB; leave room for the note. */
 const SUMMARY_LIMIT = 1_000_000;
 /** Shown in the summary (and the pull-request comment) when the job could not run. */
-function failureMarkdown(message, kind) {
-    const head = kind === 'input'
-        ? '### neuron-budget could not run: the config or data needs fixing'
-        : '### neuron-budget stopped with an internal error';
-    const tail = kind === 'input'
-        ? 'No verdict was reached, so this change has not been checked. The error is also annotated on the file.'
-        : 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.';
+/** `onFile`: the error names a file it is annotated on (a config or data error); else an input of the step (a missing part). */
+function failureMarkdown(message, kind, onFile = true) {
+    const head = kind === 'internal'
+        ? '### neuron-budget stopped with an internal error'
+        : onFile
+            ? '### neuron-budget could not run: the config or data needs fixing'
+            : '### neuron-budget could not run: an input of the step needs fixing';
+    const tail = kind === 'internal'
+        ? 'No verdict was reached. This is a bug in neuron-budget; the step log has the details.'
+        : `No verdict was reached, so this change has not been checked.${onFile ? ' The error is also annotated on the file.' : ' The step log has the error.'}`;
     return `${head}\n\n${codeBlock((0,common_escape/* escapeLines */.RQ)((0,common_escape/* clip */.$Q)(message, errors/* MAX_MESSAGE */.h2)))}\n\n${tail}\n`;
 }
 /**
@@ -47637,7 +47686,7 @@ async function failBadInput(e, inputs) {
     for (const a of logged)
         logUntrusted(`error: ${a.message}`);
     process.exitCode = EXIT.badInput;
-    const md = failureMarkdown(e.message, 'input');
+    const md = failureMarkdown(e.message, 'input', e.file !== undefined);
     await writeSummary(md);
     // A stale "pass" must not linger on the pull request while the config is broken (plan and shard
     // leave that to merge, which runs after them and meets the same broken config).
@@ -47732,10 +47781,13 @@ function partFiles(dir) {
             key: 'parts',
         });
     }
-    return names
+    const parts = names
         .filter((n) => n.endsWith('.json'))
         .sort()
         .map((n) => (0,external_node_path_namespaceObject.join)(dir, n));
+    if (parts.length === 0)
+        throw new errors/* UserError */.yo(`input parts: folder ${dir} holds no part files (*.json); download every shard's artifact into it (actions/download-artifact with merge-multiple: true)`, { key: 'parts' });
+    return parts;
 }
 async function run() {
     let inputs = null;
