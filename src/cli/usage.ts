@@ -32,7 +32,7 @@ export function usage(command: Command | null): string {
     'The current folder is the workspace. Paths in the config file resolve against',
     "the config file's folder and must stay inside the workspace.",
     'Messages go to stderr; stdout carries only what was asked for',
-    "(--help, --version, predict's CSV).",
+    "(--help, --version, baseline's one line, plan's shard list, predict's CSV).",
     '',
     exitCodesText(),
   ].join('\n');

@@ -8,7 +8,7 @@ import { context } from '@actions/github';
 import { mkdirSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { escapeText } from '../common/escape.js';
-import { DEFAULT_CONFIG } from '../common/paths.js';
+import { DEFAULT_CONFIG, displayPath } from '../common/paths.js';
 import { isUserError, MAX_MESSAGE, UserError } from '../common/errors.js';
 import { EXIT } from '../common/exit-codes.js';
 import { writeFileAtomic } from '../files/atomic.js';
@@ -257,12 +257,13 @@ async function runMatrixStage(inputs: ActionInputs, folder: string): Promise<voi
 }
 
 /** The part files merge reads: every .json file in the folder, in name order. */
-function partFiles(dir: string): string[] {
+function partFiles(dir: string, workspace: string): string[] {
+  const shown = displayPath(workspace, dir);
   let names: string[];
   try {
     names = readdirSync(dir);
   } catch {
-    throw new UserError(`input parts: folder ${dir} does not exist; download the shards' artifacts into it`, {
+    throw new UserError(`input parts: folder ${shown} does not exist; download the shards' artifacts into it`, {
       key: 'parts',
     });
   }
@@ -272,7 +273,7 @@ function partFiles(dir: string): string[] {
     .map((n) => join(dir, n));
   if (parts.length === 0)
     throw new UserError(
-      `input parts: folder ${dir} holds no part files (*.json); download every shard's artifact into it (actions/download-artifact with merge-multiple: true)`,
+      `input parts: folder ${shown} holds no part files (*.json); download every shard's artifact into it (actions/download-artifact with merge-multiple: true)`,
       { key: 'parts' },
     );
   return parts;
@@ -313,7 +314,7 @@ export async function run(): Promise<void> {
       log: (line: string) => logUntrusted(line),
     } as const;
     const result: JobResult = await grouped(() =>
-      stage.kind === 'merge' ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir) }) : runJob(options),
+      stage.kind === 'merge' ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir, inputs.workspace) }) : runJob(options),
     );
 
     setOutputs(result, reportPath);

@@ -15,6 +15,7 @@ import { writeOutput } from '../files/output.js';
 import { resultSettings, settingsFingerprint } from '../gate/index.js';
 import { checkPart, parsePart, serializePart, PART_SCHEMA, type PartDocument } from '../matrix/part.js';
 import { makePlan, MAX_SHARDS, PLAN_SCHEMA, type PlanDocument } from '../matrix/plan.js';
+import { headFor } from '../nn/index.js';
 import { growthPlan } from '../search/index.js';
 import { runShard } from '../search/shard.js';
 import { DEFAULT_PRUNE_CANDIDATES } from '../search/task.js';
@@ -106,19 +107,14 @@ async function readPlan(path: string, job: PreparedJob): Promise<PlanDocument> {
       e.code === 'ENOENT'
         ? `plan file ${shown} does not exist; write it with \`neuron-budget plan\``
         : `cannot read the plan file ${shown} (${e.code ?? 'unknown error'})`,
-      { file: shown },
     );
   });
   const syntax = findJsonSyntaxProblem(text);
   if (syntax)
-    throw new UserError(`${shown}:${syntax.line}:${syntax.column}: the plan is not valid JSON: ${syntax.detail}`, {
-      file: shown,
-      line: syntax.line,
-      column: syntax.column,
-    });
+    throw new UserError(`${shown}:${syntax.line}:${syntax.column}: the plan is not valid JSON: ${syntax.detail}`);
   const doc = JSON.parse(text) as Partial<PlanDocument> | null;
   const refuse = (why: string): never => {
-    throw new UserError(`${shown}: ${why}`, { file: shown });
+    throw new UserError(`${shown}: ${why}`);
   };
   if (typeof doc !== 'object' || doc === null || doc.schema !== PLAN_SCHEMA)
     return refuse(`expected a neuron-budget plan (schema "${PLAN_SCHEMA}"), the output of \`neuron-budget plan\``);
@@ -196,7 +192,6 @@ async function readParts(paths: readonly string[], job: PreparedJob): Promise<{ 
           e.code === 'ENOENT'
             ? `part file ${shown} does not exist`
             : `cannot read the part file ${shown} (${e.code ?? 'unknown error'})`,
-          { file: shown },
         );
       });
       return { part: parsePart(text, shown), shown };
@@ -228,15 +223,15 @@ export async function runMergeStage(options: MergeStageOptions): Promise<JobResu
     toolVersion: TOOL_VERSION,
     inputs: job.data.dataset.inputs,
     outputs: job.data.dataset.outputs,
+    activation: job.config.search.activation,
+    head: headFor(job.data.dataset),
   };
   const byIndex = new Map<number, string>();
   for (const { part, shown } of parts) {
     checkPart(part, shown, want);
     const other = byIndex.get(part.shard.index);
     if (other !== undefined)
-      throw new UserError(`${shown} and ${other} are both shard ${part.shard.index}; give each shard's part once`, {
-        file: shown,
-      });
+      throw new UserError(`${shown} and ${other} are both shard ${part.shard.index}; give each shard's part once`);
     byIndex.set(part.shard.index, shown);
   }
   const missing = plan.shards.map((s) => s.index).filter((i) => !byIndex.has(i));

@@ -23,5 +23,5 @@ export function toExactJson(value: unknown): string {
 
 /** Parses text written by toExactJson (the caller has checked the syntax). */
 export function fromExactJson(text: string): unknown {
-  return JSON.parse(text, (_key, v: unknown) => (typeof v === 'string' && v in SPECIAL ? SPECIAL[v] : v));
+  return JSON.parse(text, (_key, v: unknown) => (typeof v === 'string' && Object.hasOwn(SPECIAL, v) ? SPECIAL[v] : v));
 }

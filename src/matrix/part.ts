@@ -42,9 +42,9 @@ export interface PartExpectation {
   toolVersion: string;
   inputs: number;
   outputs: number;
+  activation: NetworkJson['activation'];
+  head: NetworkJson['head'];
 }
-
-type Bad = (key: string, expected: string, found: unknown) => never;
 
 function describe(v: unknown): string {
   if (v === undefined) return 'nothing';
@@ -61,16 +61,10 @@ const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'obj
 export function parsePart(text: string, shown: string): PartDocument {
   const syntax = findJsonSyntaxProblem(text);
   if (syntax) {
-    throw new UserError(`${shown}:${syntax.line}:${syntax.column}: the part is not valid JSON: ${syntax.detail}`, {
-      file: shown,
-      line: syntax.line,
-      column: syntax.column,
-    });
+    throw new UserError(`${shown}:${syntax.line}:${syntax.column}: the part is not valid JSON: ${syntax.detail}`);
   }
   const doc = fromExactJson(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-  const bad: Bad = (key, expected, found) => {
-    throw new UserError(`${shown}: ${key}: expected ${expected}, found ${describe(found)}`, { file: shown, key });
-  };
+  const bad = badIn(shown);
   if (!isObject(doc)) return bad('(top level)', 'a neuron-budget part (a JSON object)', doc);
   if (doc['schema'] !== PART_SCHEMA)
     bad('schema', `"${PART_SCHEMA}"; this file is not the output of neuron-budget shard`, doc['schema']);
@@ -101,7 +95,7 @@ const short = (hash: string): string => `${hash.slice(0, 12)}…`;
  */
 export function checkPart(part: PartDocument, shown: string, want: PartExpectation): void {
   const refuse = (why: string): never => {
-    throw new UserError(`${shown}: ${why}`, { file: shown });
+    throw new UserError(`${shown}: ${why}`);
   };
   const plan = want.plan;
   if (part.tool.version !== want.toolVersion)
@@ -123,9 +117,7 @@ export function checkPart(part: PartDocument, shown: string, want: PartExpectati
   const shard = plan.shards[part.shard.index];
   if (shard === undefined)
     refuse(`shard.index ${part.shard.index} is not a shard of this plan (0 to ${plan.shards.length - 1})`);
-  const bad: Bad = (key, expected, found) => {
-    throw new UserError(`${shown}: ${key}: expected ${expected}, found ${describe(found)}`, { file: shown, key });
-  };
+  const bad = badIn(shown);
   const tasks = new Map(shard.tasks.map((t) => [taskKey(t), t]));
   const seen = new Set<string>();
   part.results.forEach((r, k) => {
@@ -139,37 +131,88 @@ export function checkPart(part: PartDocument, shown: string, want: PartExpectati
       );
     seen.add(key);
   });
+  const prunedSeen = new Set<string>();
   part.pruned.forEach((p, k) => {
     const at = `pruned[${k}]`;
-    if (!isObject(p) || !isObject(p.source)) return bad(at, 'a pruned network', p);
+    if (!isObject(p)) return bad(at, 'a pruned network', p);
+    checkTask(p.source, `${at}.source`, bad);
     const key = taskKey(p.source);
-    if (!tasks.get(key)?.prune)
-      bad(`${at}.source`, `a task shard ${part.shard.index} prunes`, `width ${p.source.width}`);
-    if (!Array.isArray(p.chain) || !Array.isArray(p.steps)) bad(at, 'a chain and steps', p);
-    if (!Number.isInteger(p.trainings) || typeof p.interrupted !== 'boolean') bad(at, 'trainings and interrupted', p);
+    if (!tasks.get(key)?.prune || prunedSeen.has(key))
+      bad(`${at}.source`, `a task shard ${part.shard.index} prunes, each once`, `width ${p.source.width}`);
+    prunedSeen.add(key);
+    if (!Array.isArray(p.chain)) bad(`${at}.chain`, 'a list', p.chain);
+    if (!Array.isArray(p.steps)) bad(`${at}.steps`, 'a list', p.steps);
+    if (!isCount(p.trainings)) bad(`${at}.trainings`, 'a whole number ≥ 0', p.trainings);
+    if (typeof p.interrupted !== 'boolean') bad(`${at}.interrupted`, 'true or false', p.interrupted);
+    // A chain shrinks one neuron per link, from the source's width down.
     p.chain.forEach((link, j) => {
-      checkJudged(link, `${at}.chain[${j}]`, bad);
-      checkNetwork(link.network, `${at}.chain[${j}].network`, want, bad);
+      const where = `${at}.chain[${j}]`;
+      checkJudged(link, where, bad);
+      if (link.width !== p.source.width - 1 - j) bad(`${where}.width`, `${p.source.width - 1 - j}`, link.width);
+      checkNetwork(link.network, `${where}.network`, want, bad);
+      if (link.network.width !== link.width) bad(`${where}.network.width`, `${link.width}`, link.network.width);
     });
+    p.steps.forEach((step, j) => checkStep(step, `${at}.steps[${j}]`, bad));
   });
+}
+
+type Bad = (key: string, expected: string, found: unknown) => never;
+
+function badIn(shown: string): Bad {
+  return (key, expected, found) => {
+    throw new UserError(`${shown}: ${key}: expected ${expected}, found ${describe(found)}`, { key });
+  };
+}
+
+const isCount = (v: unknown): v is number => Number.isInteger(v) && (v as number) >= 0;
+const STOPS = new Set(['reached', 'stalled', 'diverged', 'max-epochs']);
+
+function checkTask(t: unknown, at: string, bad: Bad): void {
+  if (!isObject(t)) return bad(at, 'a task (width and restart)', t);
+  if (!Number.isInteger(t['width']) || (t['width'] as number) < 1) bad(`${at}.width`, 'a whole number ≥ 1', t['width']);
+  if (!isCount(t['restart'])) bad(`${at}.restart`, 'a whole number ≥ 0', t['restart']);
 }
 
 function checkJudged(j: unknown, at: string, bad: Bad): void {
   if (!isObject(j)) return bad(at, 'an object', j);
-  const o = j;
-  for (const k of ['train', 'steering', 'judged']) if (typeof o[k] !== 'number') bad(`${at}.${k}`, 'a number', o[k]);
-  for (const k of ['reached', 'met']) if (typeof o[k] !== 'boolean') bad(`${at}.${k}`, 'true or false', o[k]);
+  for (const k of ['train', 'steering', 'judged']) if (typeof j[k] !== 'number') bad(`${at}.${k}`, 'a number', j[k]);
+  for (const k of ['reached', 'met']) if (typeof j[k] !== 'boolean') bad(`${at}.${k}`, 'true or false', j[k]);
+}
+
+function checkStep(step: unknown, at: string, bad: Bad): void {
+  if (!isObject(step)) return bad(at, 'a prune step', step);
+  checkTask(step['source'], `${at}.source`, bad);
+  if (!Number.isInteger(step['width']) || (step['width'] as number) < 1)
+    bad(`${at}.width`, 'a whole number ≥ 1', step['width']);
+  if (!isCount(step['neuron'])) bad(`${at}.neuron`, 'a whole number ≥ 0', step['neuron']);
+  for (const k of ['steeringBefore', 'steeringAfter'])
+    if (typeof step[k] !== 'number') bad(`${at}.${k}`, 'a number', step[k]);
+  if (typeof step['accepted'] !== 'boolean') bad(`${at}.accepted`, 'true or false', step['accepted']);
+  if (step['judged'] !== null && typeof step['judged'] !== 'number')
+    bad(`${at}.judged`, 'a number or null', step['judged']);
 }
 
 function checkTaskResult(r: unknown, at: string, want: PartExpectation, bad: Bad): void {
   checkJudged(r, at, bad);
   const o = r as Record<string, unknown>;
-  for (const k of ['width', 'restart', 'epochs', 'finalWidth'])
-    if (!Number.isInteger(o[k])) bad(`${at}.${k}`, 'a whole number', o[k]);
-  if (typeof o['stop'] !== 'string') bad(`${at}.stop`, 'a stop reason', o['stop']);
+  checkTask(o, at, bad);
+  for (const k of ['epochs', 'finalWidth']) if (!isCount(o[k])) bad(`${at}.${k}`, 'a whole number ≥ 0', o[k]);
+  if (typeof o['stop'] !== 'string' || !STOPS.has(o['stop'])) bad(`${at}.stop`, 'a stop reason', o['stop']);
   if (!Array.isArray(o['segments'])) bad(`${at}.segments`, 'a list', o['segments']);
-  (o['segments'] as unknown[]).forEach((s, k) => checkJudged(s, `${at}.segments[${k}]`, bad));
-  if (o['network'] !== null) checkNetwork(o['network'], `${at}.network`, want, bad);
+  (o['segments'] as unknown[]).forEach((seg, k) => {
+    const where = `${at}.segments[${k}]`;
+    checkJudged(seg, where, bad);
+    const g = seg as Record<string, unknown>;
+    if (!Number.isInteger(g['width']) || (g['width'] as number) < 1)
+      bad(`${where}.width`, 'a whole number ≥ 1', g['width']);
+    if (!isCount(g['epochs'])) bad(`${where}.epochs`, 'a whole number ≥ 0', g['epochs']);
+    if (typeof g['stop'] !== 'string' || !STOPS.has(g['stop'])) bad(`${where}.stop`, 'a stop reason', g['stop']);
+  });
+  if (o['network'] !== null) {
+    checkNetwork(o['network'], `${at}.network`, want, bad);
+    if ((o['network'] as NetworkJson).width !== o['finalWidth'])
+      bad(`${at}.network.width`, `finalWidth (${String(o['finalWidth'])})`, (o['network'] as NetworkJson).width);
+  }
   if (o['reason'] !== null && typeof o['reason'] !== 'string') bad(`${at}.reason`, 'a sentence or null', o['reason']);
 }
 
@@ -179,6 +222,9 @@ function checkNetwork(n: unknown, at: string, want: PartExpectation, bad: Bad): 
   if (net.inputs !== want.inputs) bad(`${at}.inputs`, `${want.inputs}`, net.inputs);
   if (net.outputs !== want.outputs) bad(`${at}.outputs`, `${want.outputs}`, net.outputs);
   if (!Number.isInteger(net.width) || net.width < 1) bad(`${at}.width`, 'a whole number ≥ 1', net.width);
+  // The activation and head follow from the settings, which the fingerprint already matched.
+  if (net.activation !== want.activation) bad(`${at}.activation`, `"${want.activation}"`, net.activation);
+  if (net.head !== want.head) bad(`${at}.head`, `"${want.head}"`, net.head);
   const numbers = (v: unknown, key: string, length: number): void => {
     if (!Array.isArray(v) || v.length !== length || !v.every((x) => typeof x === 'number'))
       bad(key, `${length} numbers`, v);
@@ -191,5 +237,4 @@ function checkNetwork(n: unknown, at: string, want: PartExpectation, bad: Bad): 
   numbers(net.hiddenBias, `${at}.hiddenBias`, net.width);
   rows(net.outputWeights, `${at}.outputWeights`, net.outputs, net.width);
   numbers(net.outputBias, `${at}.outputBias`, net.outputs);
-  if (typeof net.activation !== 'string' || typeof net.head !== 'string') bad(at, 'an activation and a head', n);
 }

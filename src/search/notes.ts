@@ -138,7 +138,10 @@ export function walkReport(plan: GrowthPlan, start: StartChoice | null, decision
       : `Growth started at min-width ${width} (${choice.why})`;
   const grown = decision.kind === 'decided' && decision.capHit === null ? decision.grownWidth : undefined;
   let summary: string;
-  if (from === 'min-width' || grown === undefined || decided.length === 0) {
+  if (grown === undefined) {
+    // Stopped (time budget, training cap) before the answer: the last width is only partly decided.
+    summary = `${lead} and had tried ${decided.length === 0 ? 'no width' : widthList(decided)} when it stopped.`;
+  } else if (from === 'min-width' || decided.length === 0) {
     summary = `${lead} and decided ${decided.length === 0 ? 'no width' : widthList(decided)}.`;
   } else {
     const lowest = decided[0];

@@ -15,7 +15,7 @@ import type { SearchConfig, TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
 import type { TrainOptions } from '../nn/index.js';
 import { inThreadExecutor, workerPoolExecutor, type Executor } from './executor.js';
-import { decideGrowth, planTasks, taskKey, type GrowthDecision, type RestartAtWidth } from './growth.js';
+import { decideGrowth, planTasks, startWidth, taskKey, type GrowthDecision, type RestartAtWidth } from './growth.js';
 import { appraise, judgingRowsOf } from './judge.js';
 import { notFoundNotes, stoppedGrowingNote, stoppedPruningNote, walkReport } from './notes.js';
 import type { StartChoice } from './start.js';
@@ -107,6 +107,29 @@ function timeUp(deadline: number | null): Promise<'time'> {
   return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
 }
 
+/**
+ * Whether the walk from a start width can still visit `width`: once it has turned down (or up)
+ * from the start, the widths on the other side are never needed, so no thread speculates on them.
+ */
+function stillVisitable(plan: GrowthPlan, decision: GrowthDecision, width: number): boolean {
+  const start = startWidth(plan);
+  if (start === null || decision.kind !== 'need' || decision.deciding === start) return true;
+  return decision.deciding < start ? width <= start : width >= start;
+}
+
+/** The executor a search or a shard runs on: a pool of worker threads from a bundle, or this thread. */
+export function executorFor(
+  data: EncodedDataset,
+  ctx: SearchContext,
+  search: SearchConfig,
+  options: SearchOptions,
+): Executor {
+  const size = workerCount(search, options);
+  // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
+  const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
+  return size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
+}
+
 /** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
 async function grow(
   ctx: SearchContext,
@@ -137,7 +160,7 @@ async function grow(
     if (ctx.deadline !== null && Date.now() >= ctx.deadline) return { decision, results, outOfTime: true };
     for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
       const key = taskKey(canon[k]);
-      if (results.has(key) || inflight.has(key)) continue;
+      if (results.has(key) || inflight.has(key) || !stillVisitable(plan, decision, canon[k].width)) continue;
       inflight.set(key, executor.train(canon[k]));
     }
     const keyed = [...inflight.entries()].map(([key, p]) => p.then((r) => ({ key, r })));
@@ -187,11 +210,7 @@ export async function runSearch(
   const t0 = now();
   const ctx = searchContext(search, target, options);
   const plan = ctx.plan;
-  const size = workerCount(search, options);
-  // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
-  const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
-  const executor: Executor =
-    size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
+  const executor = executorFor(data, ctx, search, options);
   const progress = (e: ProgressEvent): void => options.onProgress?.(e);
   const judging = judgingRowsOf(data, options.judgingFolded ?? false);
   const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;

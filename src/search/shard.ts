@@ -6,8 +6,7 @@
  */
 import type { SearchConfig, TargetConfig } from '../config/types.js';
 import type { EncodedDataset } from '../data/types.js';
-import { inThreadExecutor, workerPoolExecutor, type Executor } from './executor.js';
-import { searchContext, workerCount, type SearchOptions } from './search.js';
+import { executorFor, searchContext, type SearchOptions } from './search.js';
 import type { PruneResult } from './task.js';
 import type { TaskResult, TrainingTask } from './types.js';
 
@@ -30,10 +29,7 @@ export async function runShard(
   options: SearchOptions = {},
 ): Promise<ShardOutcome> {
   const ctx = searchContext(search, target, options);
-  const size = workerCount(search, options);
-  const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
-  const executor: Executor =
-    size > 1 && entry !== null ? workerPoolExecutor(data, ctx, size, entry) : inThreadExecutor(data, ctx);
+  const executor = executorFor(data, ctx, search, options);
   const progress = options.onProgress ?? (() => undefined);
   try {
     progress({ phase: 'growth', kind: 'start', width: work.tasks[0]?.width ?? 1, restart: 0, epoch: 0, best: null });

@@ -12,7 +12,14 @@ const plan = makePlan(
   identity,
   cost,
 );
-const want = { plan, toolVersion: '0.1.0', inputs: 3, outputs: 1 };
+const want = {
+  plan,
+  toolVersion: '0.1.0',
+  inputs: 3,
+  outputs: 1,
+  activation: 'tanh' as const,
+  head: 'logistic' as const,
+};
 
 function result(width: number, restart: number): TaskResult {
   const j = { train: 0.9, steering: Number.NaN, judged: 0.8, reached: true, met: true };
@@ -106,5 +113,33 @@ describe('a part', () => {
     expect(refusal(() => parsePart('{"schema": "neuron-budget/plan@1"}', 'p.json'))).toMatch(
       /^p\.json: schema: expected/,
     );
+  });
+
+  it('is refused, not a crash, when a field inside is of the wrong kind', () => {
+    const prunes = plan.shards.findIndex((sh) => sh.tasks.some((t) => t.prune));
+    const task = plan.shards[prunes].tasks.find((t) => t.prune)!;
+    const withPruned = (pruned: unknown): PartDocument => part(prunes, { pruned: [pruned] as PartDocument['pruned'] });
+    const source = { width: task.width, restart: task.restart };
+    const ok = { source, chain: [], steps: [], trainings: 3, interrupted: false };
+    expect(() => checkPart(withPruned(ok), 'p.json', want)).not.toThrow();
+    expect(refusal(() => checkPart(withPruned({ ...ok, steps: [null] }), 'p.json', want))).toMatch(
+      /pruned\[0\]\.steps\[0\]: expected a prune step/,
+    );
+    expect(refusal(() => checkPart(withPruned({ ...ok, trainings: -8 }), 'p.json', want))).toMatch(
+      /trainings: expected a whole number/,
+    );
+    expect(
+      refusal(() =>
+        checkPart(withPruned({ ...ok, source: { width: String(task.width), restart: task.restart } }), 'p.json', want),
+      ),
+    ).toMatch(/source\.width/);
+    const bogus = part(0);
+    (bogus.results[0].network as { activation: string }).activation = 'bogus';
+    expect(refusal(() => checkPart(bogus, 'p.json', want))).toMatch(/network\.activation: expected "tanh"/);
+  });
+
+  it('keeps ordinary strings that name properties of every object as strings', () => {
+    const text = serializePart(part(0, { tool: { name: 'neuron-budget', version: 'constructor' } }));
+    expect(parsePart(text, 'p.json').tool.version).toBe('constructor');
   });
 });
