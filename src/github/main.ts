@@ -313,8 +313,11 @@ export async function run(): Promise<void> {
       onProgress: groupedProgress(),
       log: (line: string) => logUntrusted(line),
     } as const;
+    const workspace = inputs.workspace;
     const result: JobResult = await grouped(() =>
-      stage.kind === 'merge' ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir, inputs.workspace) }) : runJob(options),
+      stage.kind === 'merge'
+        ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir, workspace) })
+        : runJob(options),
     );
 
     setOutputs(result, reportPath);
