@@ -40467,7 +40467,7 @@ function toExactJson(value) {
 }
 /** Parses text written by toExactJson (the caller has checked the syntax). */
 function fromExactJson(text) {
-    return JSON.parse(text, (_key, v) => (typeof v === 'string' && v in SPECIAL ? SPECIAL[v] : v));
+    return JSON.parse(text, (_key, v) => (typeof v === 'string' && Object.hasOwn(SPECIAL, v) ? SPECIAL[v] : v));
 }
 
 ;// CONCATENATED MODULE: ./src/matrix/part.ts
@@ -40504,16 +40504,10 @@ const part_isObject = (v) => typeof v === 'object' && v !== null && !Array.isArr
 function parsePart(text, shown) {
     const syntax = json_position_findJsonSyntaxProblem(text);
     if (syntax) {
-        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the part is not valid JSON: ${syntax.detail}`, {
-            file: shown,
-            line: syntax.line,
-            column: syntax.column,
-        });
+        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the part is not valid JSON: ${syntax.detail}`);
     }
     const doc = fromExactJson(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-    const bad = (key, expected, found) => {
-        throw new errors/* UserError */.yo(`${shown}: ${key}: expected ${expected}, found ${part_describe(found)}`, { file: shown, key });
-    };
+    const bad = badIn(shown);
     if (!part_isObject(doc))
         return bad('(top level)', 'a neuron-budget part (a JSON object)', doc);
     if (doc['schema'] !== PART_SCHEMA)
@@ -40545,7 +40539,7 @@ const part_short = (hash) => `${hash.slice(0, 12)}…`;
  */
 function checkPart(part, shown, want) {
     const refuse = (why) => {
-        throw new errors/* UserError */.yo(`${shown}: ${why}`, { file: shown });
+        throw new errors/* UserError */.yo(`${shown}: ${why}`);
     };
     const plan = want.plan;
     if (part.tool.version !== want.toolVersion)
@@ -40559,9 +40553,7 @@ function checkPart(part, shown, want) {
     const shard = plan.shards[part.shard.index];
     if (shard === undefined)
         refuse(`shard.index ${part.shard.index} is not a shard of this plan (0 to ${plan.shards.length - 1})`);
-    const bad = (key, expected, found) => {
-        throw new errors/* UserError */.yo(`${shown}: ${key}: expected ${expected}, found ${part_describe(found)}`, { file: shown, key });
-    };
+    const bad = badIn(shown);
     const tasks = new Map(shard.tasks.map((t) => [(0,growth/* taskKey */.Do)(t), t]));
     const seen = new Set();
     part.results.forEach((r, k) => {
@@ -40571,47 +40563,105 @@ function checkPart(part, shown, want) {
             bad(`results[${k}]`, `a task of shard ${part.shard.index}, each once`, `width ${r.width}, restart ${r.restart + 1}`);
         seen.add(key);
     });
+    const prunedSeen = new Set();
     part.pruned.forEach((p, k) => {
         const at = `pruned[${k}]`;
-        if (!part_isObject(p) || !part_isObject(p.source))
+        if (!part_isObject(p))
             return bad(at, 'a pruned network', p);
+        checkTask(p.source, `${at}.source`, bad);
         const key = (0,growth/* taskKey */.Do)(p.source);
-        if (!tasks.get(key)?.prune)
-            bad(`${at}.source`, `a task shard ${part.shard.index} prunes`, `width ${p.source.width}`);
-        if (!Array.isArray(p.chain) || !Array.isArray(p.steps))
-            bad(at, 'a chain and steps', p);
-        if (!Number.isInteger(p.trainings) || typeof p.interrupted !== 'boolean')
-            bad(at, 'trainings and interrupted', p);
+        if (!tasks.get(key)?.prune || prunedSeen.has(key))
+            bad(`${at}.source`, `a task shard ${part.shard.index} prunes, each once`, `width ${p.source.width}`);
+        prunedSeen.add(key);
+        if (!Array.isArray(p.chain))
+            bad(`${at}.chain`, 'a list', p.chain);
+        if (!Array.isArray(p.steps))
+            bad(`${at}.steps`, 'a list', p.steps);
+        if (!isCount(p.trainings))
+            bad(`${at}.trainings`, 'a whole number ≥ 0', p.trainings);
+        if (typeof p.interrupted !== 'boolean')
+            bad(`${at}.interrupted`, 'true or false', p.interrupted);
+        // A chain shrinks one neuron per link, from the source's width down.
         p.chain.forEach((link, j) => {
-            checkJudged(link, `${at}.chain[${j}]`, bad);
-            checkNetwork(link.network, `${at}.chain[${j}].network`, want, bad);
+            const where = `${at}.chain[${j}]`;
+            checkJudged(link, where, bad);
+            if (link.width !== p.source.width - 1 - j)
+                bad(`${where}.width`, `${p.source.width - 1 - j}`, link.width);
+            checkNetwork(link.network, `${where}.network`, want, bad);
+            if (link.network.width !== link.width)
+                bad(`${where}.network.width`, `${link.width}`, link.network.width);
         });
+        p.steps.forEach((step, j) => checkStep(step, `${at}.steps[${j}]`, bad));
     });
+}
+function badIn(shown) {
+    return (key, expected, found) => {
+        throw new errors/* UserError */.yo(`${shown}: ${key}: expected ${expected}, found ${part_describe(found)}`, { key });
+    };
+}
+const isCount = (v) => Number.isInteger(v) && v >= 0;
+const STOPS = new Set(['reached', 'stalled', 'diverged', 'max-epochs']);
+function checkTask(t, at, bad) {
+    if (!part_isObject(t))
+        return bad(at, 'a task (width and restart)', t);
+    if (!Number.isInteger(t['width']) || t['width'] < 1)
+        bad(`${at}.width`, 'a whole number ≥ 1', t['width']);
+    if (!isCount(t['restart']))
+        bad(`${at}.restart`, 'a whole number ≥ 0', t['restart']);
 }
 function checkJudged(j, at, bad) {
     if (!part_isObject(j))
         return bad(at, 'an object', j);
-    const o = j;
     for (const k of ['train', 'steering', 'judged'])
-        if (typeof o[k] !== 'number')
-            bad(`${at}.${k}`, 'a number', o[k]);
+        if (typeof j[k] !== 'number')
+            bad(`${at}.${k}`, 'a number', j[k]);
     for (const k of ['reached', 'met'])
-        if (typeof o[k] !== 'boolean')
-            bad(`${at}.${k}`, 'true or false', o[k]);
+        if (typeof j[k] !== 'boolean')
+            bad(`${at}.${k}`, 'true or false', j[k]);
+}
+function checkStep(step, at, bad) {
+    if (!part_isObject(step))
+        return bad(at, 'a prune step', step);
+    checkTask(step['source'], `${at}.source`, bad);
+    if (!Number.isInteger(step['width']) || step['width'] < 1)
+        bad(`${at}.width`, 'a whole number ≥ 1', step['width']);
+    if (!isCount(step['neuron']))
+        bad(`${at}.neuron`, 'a whole number ≥ 0', step['neuron']);
+    for (const k of ['steeringBefore', 'steeringAfter'])
+        if (typeof step[k] !== 'number')
+            bad(`${at}.${k}`, 'a number', step[k]);
+    if (typeof step['accepted'] !== 'boolean')
+        bad(`${at}.accepted`, 'true or false', step['accepted']);
+    if (step['judged'] !== null && typeof step['judged'] !== 'number')
+        bad(`${at}.judged`, 'a number or null', step['judged']);
 }
 function checkTaskResult(r, at, want, bad) {
     checkJudged(r, at, bad);
     const o = r;
-    for (const k of ['width', 'restart', 'epochs', 'finalWidth'])
-        if (!Number.isInteger(o[k]))
-            bad(`${at}.${k}`, 'a whole number', o[k]);
-    if (typeof o['stop'] !== 'string')
+    checkTask(o, at, bad);
+    for (const k of ['epochs', 'finalWidth'])
+        if (!isCount(o[k]))
+            bad(`${at}.${k}`, 'a whole number ≥ 0', o[k]);
+    if (typeof o['stop'] !== 'string' || !STOPS.has(o['stop']))
         bad(`${at}.stop`, 'a stop reason', o['stop']);
     if (!Array.isArray(o['segments']))
         bad(`${at}.segments`, 'a list', o['segments']);
-    o['segments'].forEach((s, k) => checkJudged(s, `${at}.segments[${k}]`, bad));
-    if (o['network'] !== null)
+    o['segments'].forEach((seg, k) => {
+        const where = `${at}.segments[${k}]`;
+        checkJudged(seg, where, bad);
+        const g = seg;
+        if (!Number.isInteger(g['width']) || g['width'] < 1)
+            bad(`${where}.width`, 'a whole number ≥ 1', g['width']);
+        if (!isCount(g['epochs']))
+            bad(`${where}.epochs`, 'a whole number ≥ 0', g['epochs']);
+        if (typeof g['stop'] !== 'string' || !STOPS.has(g['stop']))
+            bad(`${where}.stop`, 'a stop reason', g['stop']);
+    });
+    if (o['network'] !== null) {
         checkNetwork(o['network'], `${at}.network`, want, bad);
+        if (o['network'].width !== o['finalWidth'])
+            bad(`${at}.network.width`, `finalWidth (${String(o['finalWidth'])})`, o['network'].width);
+    }
     if (o['reason'] !== null && typeof o['reason'] !== 'string')
         bad(`${at}.reason`, 'a sentence or null', o['reason']);
 }
@@ -40625,6 +40675,11 @@ function checkNetwork(n, at, want, bad) {
         bad(`${at}.outputs`, `${want.outputs}`, net.outputs);
     if (!Number.isInteger(net.width) || net.width < 1)
         bad(`${at}.width`, 'a whole number ≥ 1', net.width);
+    // The activation and head follow from the settings, which the fingerprint already matched.
+    if (net.activation !== want.activation)
+        bad(`${at}.activation`, `"${want.activation}"`, net.activation);
+    if (net.head !== want.head)
+        bad(`${at}.head`, `"${want.head}"`, net.head);
     const numbers = (v, key, length) => {
         if (!Array.isArray(v) || v.length !== length || !v.every((x) => typeof x === 'number'))
             bad(key, `${length} numbers`, v);
@@ -40638,8 +40693,6 @@ function checkNetwork(n, at, want, bad) {
     numbers(net.hiddenBias, `${at}.hiddenBias`, net.width);
     rows(net.outputWeights, `${at}.outputWeights`, net.outputs, net.width);
     numbers(net.outputBias, `${at}.outputBias`, net.outputs);
-    if (typeof net.activation !== 'string' || typeof net.head !== 'string')
-        bad(at, 'an activation and a head', n);
 }
 
 ;// CONCATENATED MODULE: ./src/matrix/plan.ts
@@ -40719,20 +40772,17 @@ function planId(body) {
     return (0,external_node_crypto_.createHash)('sha256').update(JSON.stringify(body), 'utf8').digest('hex');
 }
 
+// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
+var nn = __nccwpck_require__(6575);
 // EXTERNAL MODULE: ./src/search/index.ts + 1 modules
 var search = __nccwpck_require__(4516);
-// EXTERNAL MODULE: ./src/search/executor.ts
-var search_executor = __nccwpck_require__(3787);
 // EXTERNAL MODULE: ./src/search/search.ts + 3 modules
 var search_search = __nccwpck_require__(8678);
 ;// CONCATENATED MODULE: ./src/search/shard.ts
 
-
 async function runShard(data, search, target, work, options = {}) {
     const ctx = (0,search_search/* searchContext */.iK)(search, target, options);
-    const size = (0,search_search/* workerCount */.Mo)(search, options);
-    const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
-    const executor = size > 1 && entry !== null ? (0,search_executor/* workerPoolExecutor */.m)(data, ctx, size, entry) : (0,search_executor/* inThreadExecutor */.Pe)(data, ctx);
+    const executor = (0,search_search/* executorFor */.lL)(data, ctx, search, options);
     const progress = options.onProgress ?? (() => undefined);
     try {
         progress({ phase: 'growth', kind: 'start', width: work.tasks[0]?.width ?? 1, restart: 0, epoch: 0, best: null });
@@ -40925,8 +40975,6 @@ function parseModel(text, file = 'model') {
     return { ...d, cost: deviceCost(costShapeOf(net, enc)) };
 }
 
-// EXTERNAL MODULE: ./src/nn/index.ts + 16 modules
-var nn = __nccwpck_require__(6575);
 ;// CONCATENATED MODULE: ./src/model/predict.ts
 /** Run an exported model on raw rows (column name → cell text), as read from a CSV file. */
 
@@ -46687,6 +46735,7 @@ async function timed(timing, name, work) {
 
 
 
+
 /** This run's plan for `shards` shards: a pure function of the prepared job. */
 function planOf(job, shards) {
     const { config, data } = job;
@@ -46736,18 +46785,14 @@ async function readPlan(path, job) {
     const text = await (0,promises_namespaceObject.readFile)(path, 'utf8').catch((e) => {
         throw new errors/* UserError */.yo(e.code === 'ENOENT'
             ? `plan file ${shown} does not exist; write it with \`neuron-budget plan\``
-            : `cannot read the plan file ${shown} (${e.code ?? 'unknown error'})`, { file: shown });
+            : `cannot read the plan file ${shown} (${e.code ?? 'unknown error'})`);
     });
     const syntax = json_position_findJsonSyntaxProblem(text);
     if (syntax)
-        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the plan is not valid JSON: ${syntax.detail}`, {
-            file: shown,
-            line: syntax.line,
-            column: syntax.column,
-        });
+        throw new errors/* UserError */.yo(`${shown}:${syntax.line}:${syntax.column}: the plan is not valid JSON: ${syntax.detail}`);
     const doc = JSON.parse(text);
     const refuse = (why) => {
-        throw new errors/* UserError */.yo(`${shown}: ${why}`, { file: shown });
+        throw new errors/* UserError */.yo(`${shown}: ${why}`);
     };
     if (typeof doc !== 'object' || doc === null || doc.schema !== PLAN_SCHEMA)
         return refuse(`expected a neuron-budget plan (schema "${PLAN_SCHEMA}"), the output of \`neuron-budget plan\``);
@@ -46800,7 +46845,7 @@ async function readParts(paths, job) {
         const text = await (0,promises_namespaceObject.readFile)(path, 'utf8').catch((e) => {
             throw new errors/* UserError */.yo(e.code === 'ENOENT'
                 ? `part file ${shown} does not exist`
-                : `cannot read the part file ${shown} (${e.code ?? 'unknown error'})`, { file: shown });
+                : `cannot read the part file ${shown} (${e.code ?? 'unknown error'})`);
         });
         return { part: parsePart(text, shown), shown };
     }));
@@ -46828,15 +46873,15 @@ async function runMergeStage(options) {
         toolVersion: TOOL_VERSION,
         inputs: job.data.dataset.inputs,
         outputs: job.data.dataset.outputs,
+        activation: job.config.search.activation,
+        head: (0,nn/* headFor */.Gd)(job.data.dataset),
     };
     const byIndex = new Map();
     for (const { part, shown } of parts) {
         checkPart(part, shown, want);
         const other = byIndex.get(part.shard.index);
         if (other !== undefined)
-            throw new errors/* UserError */.yo(`${shown} and ${other} are both shard ${part.shard.index}; give each shard's part once`, {
-                file: shown,
-            });
+            throw new errors/* UserError */.yo(`${shown} and ${other} are both shard ${part.shard.index}; give each shard's part once`);
         byIndex.set(part.shard.index, shown);
     }
     const missing = plan.shards.map((s) => s.index).filter((i) => !byIndex.has(i));
@@ -47771,13 +47816,14 @@ async function runMatrixStage(inputs, folder) {
     }
 }
 /** The part files merge reads: every .json file in the folder, in name order. */
-function partFiles(dir) {
+function partFiles(dir, workspace) {
+    const shown = displayPath(workspace, dir);
     let names;
     try {
         names = (0,external_node_fs_namespaceObject.readdirSync)(dir);
     }
     catch {
-        throw new errors/* UserError */.yo(`input parts: folder ${dir} does not exist; download the shards' artifacts into it`, {
+        throw new errors/* UserError */.yo(`input parts: folder ${shown} does not exist; download the shards' artifacts into it`, {
             key: 'parts',
         });
     }
@@ -47786,7 +47832,7 @@ function partFiles(dir) {
         .sort()
         .map((n) => (0,external_node_path_namespaceObject.join)(dir, n));
     if (parts.length === 0)
-        throw new errors/* UserError */.yo(`input parts: folder ${dir} holds no part files (*.json); download every shard's artifact into it (actions/download-artifact with merge-multiple: true)`, { key: 'parts' });
+        throw new errors/* UserError */.yo(`input parts: folder ${shown} holds no part files (*.json); download every shard's artifact into it (actions/download-artifact with merge-multiple: true)`, { key: 'parts' });
     return parts;
 }
 async function run() {
@@ -47820,7 +47866,10 @@ async function run() {
             onProgress: groupedProgress(),
             log: (line) => logUntrusted(line),
         };
-        const result = await grouped(() => stage.kind === 'merge' ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir) }) : runJob(options));
+        const workspace = inputs.workspace;
+        const result = await grouped(() => stage.kind === 'merge'
+            ? runMergeStage({ ...options, partPaths: partFiles(stage.partsDir, workspace) })
+            : runJob(options));
         setOutputs(result, reportPath);
         logUntrusted(result.text);
         const verdict = result.verdict;
@@ -47883,11 +47932,12 @@ __webpack_async_result__();
 __nccwpck_require__.d(__webpack_exports__, {
   ar: () => (/* reexport */ classesOn),
   K$: () => (/* reexport */ createTrainer),
+  Gd: () => (/* reexport */ headFor),
   Oc: () => (/* reexport */ metricOn),
   Y$: () => (/* reexport */ trainerFromNetwork)
 });
 
-// UNUSED EXPORTS: headFor, predict
+// UNUSED EXPORTS: predict
 
 // EXTERNAL MODULE: ./src/common/metric.ts
 var common_metric = __nccwpck_require__(8457);
@@ -51025,18 +51075,20 @@ function judge(data, net, rec, target) {
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
+  lL: () => (/* binding */ executorFor),
   dw: () => (/* binding */ growthPlan),
   _d: () => (/* binding */ runSearch),
-  iK: () => (/* binding */ searchContext),
-  Mo: () => (/* binding */ workerCount)
+  iK: () => (/* binding */ searchContext)
 });
+
+// UNUSED EXPORTS: workerCount
 
 // EXTERNAL MODULE: external "node:os"
 var external_node_os_ = __nccwpck_require__(8161);
 // EXTERNAL MODULE: external "node:perf_hooks"
 var external_node_perf_hooks_ = __nccwpck_require__(643);
 // EXTERNAL MODULE: ./src/search/executor.ts
-var search_executor = __nccwpck_require__(3787);
+var executor = __nccwpck_require__(3787);
 // EXTERNAL MODULE: ./src/search/growth.ts
 var growth = __nccwpck_require__(6881);
 // EXTERNAL MODULE: ./src/search/judge.ts + 1 modules
@@ -51152,7 +51204,11 @@ function walkReport(plan, start, decision) {
         : `Growth started at min-width ${width} (${choice.why})`;
     const grown = decision.kind === 'decided' && decision.capHit === null ? decision.grownWidth : undefined;
     let summary;
-    if (from === 'min-width' || grown === undefined || decided.length === 0) {
+    if (grown === undefined) {
+        // Stopped (time budget, training cap) before the answer: the last width is only partly decided.
+        summary = `${lead} and had tried ${decided.length === 0 ? 'no width' : widthList(decided)} when it stopped.`;
+    }
+    else if (from === 'min-width' || decided.length === 0) {
         summary = `${lead} and decided ${decided.length === 0 ? 'no width' : widthList(decided)}.`;
     }
     else {
@@ -51378,6 +51434,23 @@ function timeUp(deadline) {
         return new Promise(() => undefined);
     return new Promise((resolve) => setTimeout(() => resolve('time'), Math.max(0, deadline - Date.now())).unref());
 }
+/**
+ * Whether the walk from a start width can still visit `width`: once it has turned down (or up)
+ * from the start, the widths on the other side are never needed, so no thread speculates on them.
+ */
+function stillVisitable(plan, decision, width) {
+    const start = (0,growth/* startWidth */.Rm)(plan);
+    if (start === null || decision.kind !== 'need' || decision.deciding === start)
+        return true;
+    return decision.deciding < start ? width <= start : width >= start;
+}
+/** The executor a search or a shard runs on: a pool of worker threads from a bundle, or this thread. */
+function executorFor(data, ctx, search, options) {
+    const size = workerCount(search, options);
+    // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
+    const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
+    return size > 1 && entry !== null ? (0,executor/* workerPoolExecutor */.m)(data, ctx, size, entry) : (0,executor/* inThreadExecutor */.Pe)(data, ctx);
+}
 /** The growth phase: keeps every thread busy with tasks in canonical order from the first undecided one. */
 async function grow(ctx, executor, target, progress, known) {
     const plan = ctx.plan;
@@ -51404,7 +51477,7 @@ async function grow(ctx, executor, target, progress, known) {
             return { decision, results, outOfTime: true };
         for (let k = frontier; k < canon.length && inflight.size < executor.size; k++) {
             const key = (0,growth/* taskKey */.Do)(canon[k]);
-            if (results.has(key) || inflight.has(key))
+            if (results.has(key) || inflight.has(key) || !stillVisitable(plan, decision, canon[k].width))
                 continue;
             inflight.set(key, executor.train(canon[k]));
         }
@@ -51452,10 +51525,7 @@ async function runSearch(data, search, target, options = {}) {
     const t0 = now();
     const ctx = searchContext(search, target, options);
     const plan = ctx.plan;
-    const size = workerCount(search, options);
-    // A TypeScript source file cannot start as a worker: run in this thread then (tests from source).
-    const entry = options.workerEntry != null && !/\.[cm]?ts$/.test(options.workerEntry) ? options.workerEntry : null;
-    const executor = size > 1 && entry !== null ? (0,search_executor/* workerPoolExecutor */.m)(data, ctx, size, entry) : (0,search_executor/* inThreadExecutor */.Pe)(data, ctx);
+    const executor = executorFor(data, ctx, search, options);
     const progress = (e) => options.onProgress?.(e);
     const judging = (0,judge/* judgingRowsOf */.$E)(data, options.judgingFolded ?? false);
     const judgedOn = judging.on === 'judging' ? 'judged' : judging.on;
