@@ -19785,7 +19785,7 @@ function walkReport(plan, start, decision) {
         const untried = lowest > plan.minWidth ? span(plan.minWidth, lowest - 1) : null;
         const belowRule = untried === null
             ? ''
-            : `; ${untried} ${lowest - 1 > plan.minWidth ? 'were' : 'was'} not trained, since a width below one that is not adequate is taken not to be adequate either`;
+            : `; ${untried} ${lowest - 1 > plan.minWidth ? 'were' : 'was'} not trained: the start from the baseline takes the widths below one that is not adequate to be inadequate too, with no network there meeting the target by luck`;
         let what;
         if (grown === null)
             what = `no width from ${width} to max-width ${plan.maxWidth} was adequate on fresh restarts`;

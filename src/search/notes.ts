@@ -149,7 +149,7 @@ export function walkReport(plan: GrowthPlan, start: StartChoice | null, decision
     const belowRule =
       untried === null
         ? ''
-        : `; ${untried} ${lowest - 1 > plan.minWidth ? 'were' : 'was'} not trained, since a width below one that is not adequate is taken not to be adequate either`;
+        : `; ${untried} ${lowest - 1 > plan.minWidth ? 'were' : 'was'} not trained: the start from the baseline takes the widths below one that is not adequate to be inadequate too, with no network there meeting the target by luck`;
     let what: string;
     if (grown === null) what = `no width from ${width} to max-width ${plan.maxWidth} was adequate on fresh restarts`;
     else if (grown > width)
