@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { TargetConfig } from '../../src/config/types.js';
-import { restartAtWidth } from '../../src/search/growth.js';
+import { decideGrowth, restartAtWidth } from '../../src/search/growth.js';
 import { tally } from '../../src/search/tally.js';
 import type { PruneResult } from '../../src/search/task.js';
 import type { GrowthPlan, TaskResult } from '../../src/search/types.js';
@@ -127,5 +127,35 @@ describe('the adequacy tally', () => {
     const t = tally(plan, target, tried(fresh), [], 1);
     expect(t.width).toBe(3);
     expect(t.witness?.source.restart).toBe(1);
+  });
+});
+
+describe('the start from the baseline: the limit the README states', () => {
+  // Hand-built outcomes with 3 restarts, 2 required: width 1 has one lucky network of 3, width 2
+  // none, width 3 two; pruning a width-3 network gives a width-1 network that meets the target.
+  const small: GrowthPlan = { ...plan, maxWidth: 4, restarts: 3, required: 2 };
+  const meets: Record<number, boolean[]> = { 1: [true, false, false], 2: [false, false, false], 3: [true, true, true] };
+  const outcome = (t: { width: number; restart: number }): TaskResult =>
+    run(t.width, t.restart, meets[t.width]?.[t.restart] ? 0.95 : 0.8);
+  const answer = (start: number | null): number | null => {
+    const p = { ...small, start };
+    const d = decideGrowth(p, outcome);
+    if (d.kind !== 'decided') throw new Error('undecided');
+    // Every network that met the target at the grown width or below is pruned; width 3's first to width 1.
+    const sources = d.tried.flatMap((t) => t.restarts.filter((r) => r.met).map((r) => r.task));
+    const pruned = sources.map((s) =>
+      s.width === 3 && s.restart === 0
+        ? chain(s, [
+            [2, 0.85],
+            [1, 0.92],
+          ])
+        : chain(s, []),
+    );
+    return tally(p, target, d.tried, pruned, 1).width;
+  };
+
+  it('the full scan counts the lucky width-1 network and answers 1; from the baseline width 1 is not trained and it answers 3', () => {
+    expect(answer(null)).toBe(1);
+    expect(answer(3)).toBe(3);
   });
 });
