@@ -13,15 +13,13 @@
  */
 import { copyFileSync, existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { basename, dirname, join, relative } from 'node:path';
-import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import type { PartDocument } from '../../src/matrix/part.js';
 import type { PlanDocument } from '../../src/matrix/plan.js';
 import type { Report } from '../../src/report/types.js';
 import { REPO_ROOT, runCli } from '../helpers/cli.js';
 import {
-  OWNER,
   PR_NUMBER,
-  REPO,
   listFiles,
   makeWorkspace,
   pullRequestEvent,
@@ -32,7 +30,7 @@ import {
   type RunResult,
   type Runtime,
 } from './harness.js';
-import { StandIn } from './stand-in.js';
+import { standInPerTest } from './stand-in-per-test.js';
 
 const CONFIG = 'neuron-budget.pr.yml';
 const MARKER = `<!-- neuron-budget comment; config: ${CONFIG} -->`;
@@ -92,17 +90,7 @@ function portable(r: RunResult): Record<string, string> {
 const { list, node24Problem } = runtimes();
 
 describe.each(list)('action bundle under $label: the search as a job matrix', (runtime: Runtime) => {
-  let api: StandIn;
-  beforeEach(async () => {
-    if (!runtime.bin || (runtime.label.startsWith('node 24') && node24Problem))
-      throw new Error(node24Problem ?? 'no binary');
-    api = new StandIn({ owner: OWNER, repo: REPO });
-    await api.start();
-  });
-  afterEach(async () => {
-    await api?.stop();
-    expect(api?.schemaFailures ?? []).toEqual([]);
-  });
+  const standIn = standInPerTest(runtime, node24Problem);
 
   /** One job of the workflow, on a pull_request event against the stand-in API. */
   const job = (
@@ -112,7 +100,7 @@ describe.each(list)('action bundle under $label: the search as a job matrix', (r
   ): Promise<RunResult> =>
     runAction({
       runtime,
-      apiUrl: api.url,
+      apiUrl: standIn().url,
       workspace,
       eventName: 'pull_request',
       event: pullRequestEvent(),
@@ -168,7 +156,7 @@ describe.each(list)('action bundle under $label: the search as a job matrix', (r
       const one = await job(checkout(await committedFiles()), { comment: 'false' });
       expect(one.code, explain(one)).toBe(1);
       expect(one.outputs['verdict']).toBe('fail');
-      expect(api.requests).toEqual([]);
+      expect(standIn().requests).toEqual([]);
 
       const { plan, planDoc, shards } = await planAndShards();
       expect(Object.keys(plan.outputs).sort()).toEqual(['plan', 'shards']);
@@ -192,7 +180,7 @@ describe.each(list)('action bundle under $label: the search as a job matrix', (r
         expect(r.summary, explain(r)).toBe('');
         expect(errors(r)).toEqual([]);
       }
-      expect(api.requests).toEqual([]);
+      expect(standIn().requests).toEqual([]);
 
       const merge = await job(await mergeCheckout(shards, [0, 1, 2]), { stage: 'merge', parts: 'parts' });
       expect(merge.code, explain(merge)).toBe(one.code);
@@ -217,9 +205,9 @@ describe.each(list)('action bundle under $label: the search as a job matrix', (r
       const width = merge.outputs['width'];
       expect(merge.summary).toContain(`Needs ${width} hidden neurons`);
       expect(merge.summary.split('A passing gate is not a safety sign-off').length - 1).toBe(1);
-      expect(api.requests.filter((q) => q.method === 'POST')).toHaveLength(1);
-      expect(api.requests.filter((q) => q.method === 'PATCH')).toHaveLength(0);
-      const comments = api.all(PR_NUMBER);
+      expect(standIn().requests.filter((q) => q.method === 'POST')).toHaveLength(1);
+      expect(standIn().requests.filter((q) => q.method === 'PATCH')).toHaveLength(0);
+      const comments = standIn().all(PR_NUMBER);
       expect(comments).toHaveLength(1);
       expect(comments[0].body.split('\n')[0]).toBe(MARKER);
       expect(comments[0].body.slice(MARKER.length + 1).trim()).toBe(merge.summary.trim());
@@ -244,7 +232,7 @@ describe.each(list)('action bundle under $label: the search as a job matrix', (r
       expect(merge.stderr).not.toMatch(/\n\s+at /);
       // The job summary and the pull request's comment say that nothing was checked, and why.
       expect(merge.summary).toContain('the part of shard 2 of 3 is missing');
-      const comments = api.all(PR_NUMBER);
+      const comments = standIn().all(PR_NUMBER);
       expect(comments).toHaveLength(1);
       expect(comments[0].body).toContain('the part of shard 2 of 3 is missing');
       expect(comments[0].body).toContain('No verdict was reached');

@@ -12,7 +12,7 @@
  *
  * The data are invented for the test, not measurements.
  */
-import { describe, expect, it, beforeEach, afterEach } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { escapeMarkdown, escapeText, isPrintable } from '../../src/common/escape.js';
 import { expectInertMarkdown } from '../helpers/markdown.js';
 import {
@@ -27,8 +27,6 @@ import {
 } from '../helpers/hostile.js';
 import {
   PR_NUMBER,
-  OWNER,
-  REPO,
   makeWorkspace,
   pullRequestEvent,
   pushEvent,
@@ -38,7 +36,7 @@ import {
   type RunResult,
   type Runtime,
 } from './harness.js';
-import { StandIn } from './stand-in.js';
+import { standInPerTest } from './stand-in-per-test.js';
 
 const STOP = /^::stop-commands::(neuron-budget-[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12})$/;
 const GROUP = /^::group::neuron-budget: [a-z ]+$/;
@@ -113,19 +111,9 @@ const CONFIG_PLAIN = `${HOSTILE_FILE_NAMES.find((n) => isPrintable(n) && n.inclu
 const { list, node24Problem } = runtimes();
 
 describe.each(list)('hostile strings through the action bundle under $label', (runtime: Runtime) => {
-  let api: StandIn;
-  beforeEach(async () => {
-    if (!runtime.bin || (runtime.label.startsWith('node 24') && node24Problem))
-      throw new Error(node24Problem ?? 'no binary');
-    api = new StandIn({ owner: OWNER, repo: REPO });
-    await api.start();
-  });
-  afterEach(async () => {
-    await api?.stop();
-    expect(api?.schemaFailures ?? []).toEqual([]);
-  });
+  const standIn = standInPerTest(runtime, node24Problem);
   const run = (o: Omit<RunOptions, 'runtime' | 'apiUrl'>): Promise<RunResult> =>
-    runAction({ ...o, runtime, apiUrl: api.url });
+    runAction({ ...o, runtime, apiUrl: standIn().url });
 
   it('baseline, then a pull request: the log, outputs, summary and comment hold every string inert', async () => {
     const before = hostileTable(0);
@@ -159,7 +147,7 @@ describe.each(list)('hostile strings through the action bundle under $label', (r
     expect([0, 1], explain(second)).toContain(second.code);
     checkStreams(second);
     checkMarkdown(second.summary, 'summary');
-    const comments = api.all(PR_NUMBER);
+    const comments = standIn().all(PR_NUMBER);
     expect(comments).toHaveLength(1);
     checkMarkdown(comments[0].body, 'comment');
     // The strings are there, escaped: the data changes name every new class and the new data file.
@@ -196,6 +184,6 @@ describe.each(list)('hostile strings through the action bundle under $label', (r
     else expect(errors[0].props['file']).toBeUndefined();
     checkMarkdown(r.summary, 'summary');
     expect(r.summary).toContain('could not run');
-    checkMarkdown(api.all(PR_NUMBER)[0].body, 'comment');
+    checkMarkdown(standIn().all(PR_NUMBER)[0].body, 'comment');
   });
 });
